@@ -1,0 +1,92 @@
+/* species.h - the species record and the species database shared by the
+ * thermodynamic core, the definition-file loader and the solvers.
+ *
+ * Internal units (DESIGN.md): K, bar, J/mol, J/(mol K), mol/kg.  Every unit
+ * conversion from a definition file (kJ, cal, the HKF papers' printed
+ * scaling) happens once, in the loader, before a record reaches this struct.
+ *
+ * Gibbs energies at T and P are apparent Gibbs energies of formation
+ * (Benson-Helgeson convention): dGf at 298.15 K, 1 bar plus the species' own
+ * G(T,P) - G(298.15 K, 1 bar). */
+#ifndef PX_SPECIES_H
+#define PX_SPECIES_H
+#include <stddef.h>
+
+#define PX_FORMULA_MAX_ELEM 10 /* distinct elements in one formula */
+#define PX_NAME_MAX 64         /* bytes of a formula as written, with NUL */
+#define PX_ELEMENT_MAX 118     /* highest atomic number known */
+
+typedef enum px_state {
+    PX_STATE_AQ = 0, /* aqueous (hypothetical 1 molal standard state) */
+    PX_STATE_S,      /* pure solid; px_formula.form says cr, am or a mineral */
+    PX_STATE_L,      /* pure liquid */
+    PX_STATE_G,      /* ideal gas at 1 bar */
+    PX_STATE_E       /* the electron, e- (no state symbol) */
+} px_state;
+
+typedef struct px_elem_count {
+    int z;    /* atomic number, 1..PX_ELEMENT_MAX */
+    double n; /* atoms per formula unit (hydrates may be fractional) */
+} px_elem_count;
+
+typedef struct px_formula {
+    char text[PX_NAME_MAX]; /* canonical text, e.g. "Fe(OH)3(s)", "Zn^2+" */
+    int n_elem;
+    px_elem_count elem[PX_FORMULA_MAX_ELEM]; /* sorted by z */
+    int charge;
+    px_state state;
+    char form[24]; /* "", "cr", "am" or a mineral name ("calcite") */
+} px_formula;
+
+typedef enum px_model {
+    PX_MODEL_HKF = 0, /* revised HKF (Tanger and Helgeson 1988) */
+    PX_MODEL_CP,      /* heat-capacity polynomial, integrated exactly */
+    PX_MODEL_LOGK,    /* defined by a formation reaction and its log K(T) */
+    PX_MODEL_WATER    /* H2O(l) from IAPWS-95 (built in) */
+} px_model;
+
+typedef struct px_hkf_params { /* SI: the papers' values x PX_CAL, unscaled */
+    double a1; /* J/(mol bar) */
+    double a2; /* J/mol */
+    double a3; /* J K/(mol bar) */
+    double a4; /* J K/mol */
+    double c1; /* J/(mol K) */
+    double c2; /* J K/mol */
+    double omega; /* J/mol, conventional Born coefficient at Tr, Pr */
+} px_hkf_params;
+
+/* Cp = a + b T + c / T^2 + d / sqrt(T) + e T^2  [J/(mol K)], valid to Tmax. */
+typedef struct px_cp_params {
+    double a, b, c, d, e;
+    double V; /* molar volume, J/bar (= 0.1 x cm3/mol); 0 if unknown */
+} px_cp_params;
+
+/* log K of the formation reaction (the species is the reaction's product):
+ *   analytic: log K = k[0] + k[1] T + k[2]/T + k[3] log10 T + k[4]/T^2
+ *   otherwise: van 't Hoff from logK25 and dH (J/mol), constant dH. */
+typedef struct px_logk_params {
+    char reaction[256]; /* e.g. "Zn^2+ + Cl^- = ZnCl^+" */
+    double logK25;
+    double dH; /* J/mol; NAN if unknown (then log K is held constant) */
+    int analytic;
+    double k[5];
+} px_logk_params;
+
+typedef struct px_species {
+    px_formula f;
+    px_model model;
+    double dGf; /* J/mol at Tr, Pr (NAN if the model derives it) */
+    double dHf; /* J/mol (NAN if unknown) */
+    double S;   /* J/(mol K), third-law or conventional for ions (NAN if unknown) */
+    px_hkf_params hkf;
+    px_cp_params cp;
+    px_logk_params logk;
+    double Tmin, Tmax; /* declared valid range, K */
+    int estimated;     /* HKF parameters from correlations, not regressed */
+    char quality[16];  /* "high", "medium", "low" or "" */
+    char *source;      /* owned, never NULL once loaded */
+    char *file;        /* definition file (owned), NULL for built-ins */
+    int line;          /* line in that file, 0 if unknown */
+} px_species;
+
+#endif
