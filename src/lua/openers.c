@@ -1,0 +1,6 @@
+/* openers.c - the list of binding files registered into "phlox.core". */
+#include "lua/bindings.h"
+
+const px_lua_opener px_lua_openers[] = {
+    px_lua_open_status,
+    0};
