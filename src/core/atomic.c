@@ -6,9 +6,11 @@
 #include <stdio.h>
 #include <stdlib.h>
 #include <string.h>
+#include <sys/stat.h>
 #include <unistd.h>
 
 #define PX_TMP_SUFFIX ".tmp-XXXXXX"
+#define PX_FILE_MODE 0644 /* mkstemp makes 0600; results are meant to be shared */
 
 int px_write_atomic(const char *path, const void *data, size_t n, int *errno_out)
 {
@@ -28,9 +30,10 @@ int px_write_atomic(const char *path, const void *data, size_t n, int *errno_out
         if (errno_out) *errno_out = err;
         return PX_EIO;
     }
+    if (fchmod(fd, PX_FILE_MODE) != 0) err = errno;
     const char *p = data;
     size_t left = n;
-    while (left > 0) {
+    while (!err && left > 0) {
         ssize_t w = write(fd, p, left);
         if (w < 0) {
             if (errno == EINTR) continue;

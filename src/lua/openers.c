@@ -4,4 +4,5 @@
 const px_lua_opener px_lua_openers[] = {
     px_lua_open_status,
     px_lua_open_util,
+    px_lua_open_render,
     0};
