@@ -35,6 +35,15 @@ return {
              "recalled: volume terms zero (poor at high pressure).",
     },
     {
+      formula = "Mn^3+", model = "logk",
+      reaction = "2 Mn^2+ + 2 H^+ = 2 Mn^3+ + H2(g)",
+      logK = -52.113,
+      source = "derived here from E0(Mn3+/Mn2+) = 1.5415 V, from memory of CRC Handbook of " ..
+               "Chemistry and Physics, Electrochemical Series (P. Vanysek) (log K = -2 F E0/(RT ln10))",
+      quality = "low",
+      note = "Disproportionates to Mn2+ and MnO2 except in strong acid; no dH (25 C only).",
+    },
+    {
       formula = "MnO4^-", model = "hkf",
       G = -447.2, H = -541.4, S = 191.2,
       estimate = { Cp = -82.0 },
