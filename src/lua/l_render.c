@@ -143,6 +143,48 @@ static int f_text(lua_State *L)
     return 0;
 }
 
+/* fig:hatch(panel, xs, ys, colour [, width, spacing, angle]) */
+static int f_hatch(lua_State *L)
+{
+    px_figure *f = checkfig(L);
+    lua_settop(L, 8); /* the points box goes above every argument */
+    int panel = checkpanel(L, 2);
+    double *x, *y;
+    size_t n = checkpoints(L, 3, 4, &x, &y);
+    px_rgba c = checkcolor(L, 5);
+    double width = luaL_optnumber(L, 6, 0.5), spacing = luaL_optnumber(L, 7, 5.0);
+    double angle = luaL_optnumber(L, 8, 45.0);
+    status_error(L, px_figure_hatch(f, panel, x, y, n, c, width, spacing, angle), "figure:hatch");
+    return 0;
+}
+
+/* fig:legend_patch(panel, text, fill [, stroke [, hatch]]) */
+static int f_legend_patch(lua_State *L)
+{
+    px_figure *f = checkfig(L);
+    int panel = checkpanel(L, 2);
+    const char *text = luaL_checkstring(L, 3);
+    px_rgba fill = checkcolor(L, 4);
+    px_rgba stroke = lua_isnoneornil(L, 5) ? (px_rgba){0.3, 0.3, 0.3, 1} : checkcolor(L, 5);
+    double hatch = luaL_optnumber(L, 6, 0);
+    status_error(L, px_figure_legend_patch(f, panel, text, fill, stroke, hatch),
+                 "figure:legend_patch");
+    return 0;
+}
+
+/* fig:legend(panel, where): "top right" (default), "top left", "bottom left",
+ * "bottom right" or "outside" (right of the plot). */
+static int f_legend(lua_State *L)
+{
+    static const char *const places[] = {"top right", "top left", "bottom left", "bottom right",
+                                         "outside", NULL};
+    px_figure *f = checkfig(L);
+    int panel = checkpanel(L, 2);
+    int where = luaL_checkoption(L, 3, "top right", places);
+    status_error(L, px_figure_legend_place(f, panel, (px_legend_place)where), "figure:legend");
+    return 0;
+}
+
 static int f_stamp(lua_State *L)
 {
     px_figure *f = checkfig(L);
@@ -229,6 +271,18 @@ static int l_ticks(lua_State *L)
     return 1;
 }
 
+/* core.text_width(text, size [, chem]) -> points, as figures measure it */
+static int l_text_width(lua_State *L)
+{
+    const char *text = luaL_checkstring(L, 1);
+    double size = luaL_checknumber(L, 2);
+    luaL_argcheck(L, size > 0 && size < 200, 2, "font size must be in (0, 200) points");
+    double w = px_text_width(text, lua_toboolean(L, 3), size);
+    if (w < 0) return luaL_error(L, "text_width: cannot measure text");
+    lua_pushnumber(L, w);
+    return 1;
+}
+
 static int l_polygon_pole(lua_State *L)
 {
     double *x, *y, px, py, d;
@@ -248,9 +302,11 @@ void px_lua_open_render(lua_State *L)
         {"axes", f_axes},   {"titles", f_titles}, {"polygon", f_polygon},
         {"line", f_line},   {"text", f_text},     {"stamp", f_stamp},
         {"pages", f_pages}, {"save", f_save},     {"render", f_render},
-        {"plot_rect", f_plot_rect}, {"close", f_close}, {NULL, NULL}};
+        {"plot_rect", f_plot_rect}, {"close", f_close}, {"hatch", f_hatch},
+        {"legend_patch", f_legend_patch}, {"legend", f_legend}, {NULL, NULL}};
     static const luaL_Reg funcs[] = {
-        {"figure", l_figure}, {"ticks", l_ticks}, {"polygon_pole", l_polygon_pole}, {NULL, NULL}};
+        {"figure", l_figure}, {"ticks", l_ticks}, {"polygon_pole", l_polygon_pole},
+        {"text_width", l_text_width}, {NULL, NULL}};
     luaL_newmetatable(L, FIGURE_MT);
     luaL_newlib(L, methods);
     lua_setfield(L, -2, "__index");

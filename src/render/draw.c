@@ -15,21 +15,25 @@
 #include <string.h>
 
 /* Layout in points (common practice for report figures, no source). */
-#define PX_MARGIN_LEFT 56.0
-#define PX_MARGIN_RIGHT 14.0
-#define PX_MARGIN_TOP 22.0
-#define PX_MARGIN_BOTTOM 38.0
-#define PX_STAMP_LINE 9.0     /* stamp line height */
-#define PX_STAMP_SIZE 6.5     /* stamp font size */
+#define PX_PAD 4.0            /* between the figure's edge (or cell) and text */
+#define PX_GAP 3.0            /* between tick labels, axis titles and the frame */
+#define PX_STAMP_LINE 8.5     /* stamp line height */
+#define PX_STAMP_SIZE 6.5     /* stamp font size (shrinks to fit the width) */
+#define PX_STAMP_MIN 4.0      /* smallest stamp font size */
 #define PX_TICK_SIZE 8.5      /* tick label font size */
 #define PX_AXIS_TITLE_SIZE 9.5
 #define PX_PANEL_TITLE_SIZE 10.0
+#define PX_TITLE_MIN 6.5      /* titles shrink to fit down to this size */
 #define PX_LABEL_MAX 9.5      /* field label sizes tried, largest first */
 #define PX_LABEL_MIN 5.5
 #define PX_LABEL_STEP 0.5
 #define PX_TICK_LEN 4.0
 #define PX_MAX_TICKS 9
+#define PX_TICK_SPACE 6.0     /* least space between neighbouring tick labels */
 #define PX_LEGEND_SIZE 7.5
+#define PX_LEGEND_SWATCH 18.0 /* legend sample length */
+#define PX_LEGEND_INSET 6.0   /* legend box distance from the frame */
+#define PX_ASCENT 0.8         /* baseline below a text box's top, fraction of its height */
 #define PX_PDF_FIXED_DATE "2000-01-01T00:00:00Z" /* pinned: same input, same bytes */
 
 typedef struct rect {
@@ -41,13 +45,160 @@ static double foot_height(const px_figure *f)
     return f->n_stamp ? (double)f->n_stamp * PX_STAMP_LINE + 6.0 : 0.0;
 }
 
-static rect plot_rect(const px_figure *f, int panel, int alone)
+static double text_w(cairo_t *m, const char *s, int chem, double size)
+{
+    double w, h;
+    px_text_measure(m, s, chem, size, &w, &h);
+    return w;
+}
+
+static double text_h(cairo_t *m, double size)
+{
+    double w, h;
+    px_text_measure(m, "0", 0, size, &w, &h);
+    return h;
+}
+
+/* Largest size <= size (down to min) at which s fits in avail points. */
+static double fit_size(cairo_t *m, const char *s, int chem, double size, double min, double avail)
+{
+    double w = text_w(m, s, chem, size);
+    if (w <= avail || w <= 0) return size;
+    double fs = size * avail / w;
+    return fs < min ? min : fs;
+}
+
+/* Tick label text: enough decimals for the step, a true minus sign; log
+ * axes show decades as 10 with a superscript exponent. */
+static void tick_text(char *buf, size_t n, double v, double step, int logaxis)
+{
+    static const char *const sup[] = {"\xe2\x81\xb0", "\xc2\xb9", "\xc2\xb2", "\xc2\xb3",
+                                      "\xe2\x81\xb4", "\xe2\x81\xb5", "\xe2\x81\xb6",
+                                      "\xe2\x81\xb7", "\xe2\x81\xb8", "\xe2\x81\xb9"};
+    char tmp[48];
+    if (logaxis) {
+        double e = log10(v);
+        if (fabs(e - round(e)) < 1e-9 && fabs(e) < 1000) {
+            int k = (int)round(e);
+            char digits[16];
+            snprintf(digits, sizeof digits, "%d", k < 0 ? -k : k);
+            snprintf(buf, n, "10%s", k < 0 ? "\xe2\x81\xbb" : ""); /* U+207B superscript minus */
+            for (const char *d = digits; *d; d++)
+                if (strlen(buf) + 4 < n) strcat(buf, sup[*d - '0']);
+            return;
+        }
+        snprintf(tmp, sizeof tmp, "%g", v);
+    } else {
+        int dec = 0;
+        double s = fabs(step);
+        while (dec < 6 && fabs(s * pow(10, dec) - round(s * pow(10, dec))) > 1e-6) dec++;
+        snprintf(tmp, sizeof tmp, "%.*f", dec, v);
+    }
+    if (tmp[0] == '-') snprintf(buf, n, "\xe2\x88\x92%s", tmp + 1);
+    else snprintf(buf, n, "%s", tmp);
+}
+
+static size_t raw_ticks(const px_panel *p, int yaxis, size_t max, double *t)
+{
+    if (yaxis) return p->ylog ? px_ticks_log(p->y0, p->y1, max, t) : px_ticks_linear(p->y0, p->y1, max, t);
+    return p->xlog ? px_ticks_log(p->x0, p->x1, max, t) : px_ticks_linear(p->x0, p->x1, max, t);
+}
+
+/* Ticks whose labels fit along `avail` points without touching (avail <= 0:
+ * no limit); *wmax is the widest label. */
+static size_t axis_ticks(cairo_t *m, const px_panel *p, int yaxis, double avail, double *t,
+                         double *wmax)
+{
+    char buf[64];
+    size_t n = 0;
+    double fh = text_h(m, PX_TICK_SIZE);
+    for (size_t max = PX_MAX_TICKS; max >= 2; max--) {
+        n = raw_ticks(p, yaxis, max, t);
+        double step = n > 1 ? t[1] - t[0] : 1, need = 0;
+        *wmax = 0;
+        for (size_t i = 0; i < n; i++) {
+            int lg = yaxis ? p->ylog : p->xlog;
+            tick_text(buf, sizeof buf, t[i], lg ? 0 : step, lg);
+            double w = text_w(m, buf, 0, PX_TICK_SIZE);
+            *wmax = fmax(*wmax, w);
+            need += (yaxis ? fh : w) + PX_TICK_SPACE;
+        }
+        if (avail <= 0 || need <= avail || n <= 2) return n;
+    }
+    return n;
+}
+
+/* Legend entries: lines with a legend text, and patches. */
+static int in_legend(const px_item *it)
+{
+    return (it->kind == PX_ITEM_LINE && it->text) || it->kind == PX_ITEM_PATCH;
+}
+
+static size_t legend_box(cairo_t *m, const px_panel *p, double *bw, double *bh, double *line)
+{
+    size_t count = 0;
+    double wmax = 0, h = text_h(m, PX_LEGEND_SIZE);
+    for (size_t i = 0; i < p->n_items; i++)
+        if (in_legend(&p->items[i])) {
+            wmax = fmax(wmax, text_w(m, p->items[i].text, 0, PX_LEGEND_SIZE));
+            count++;
+        }
+    *line = h + 2;
+    *bw = wmax + PX_LEGEND_SWATCH + 12;
+    *bh = (double)count * *line + 6;
+    return count;
+}
+
+typedef struct margins {
+    double left, right, top, bottom;
+} margins;
+
+/* The room a panel needs around its plot for ticks, titles and legend. */
+static margins panel_margins(cairo_t *m, const px_panel *p)
+{
+    double t[PX_MAX_TICKS + 8], ywmax = 0, xwmax = 0;
+    size_t ny = axis_ticks(m, p, 1, 0, t, &ywmax);
+    (void)ny;
+    size_t nx = axis_ticks(m, p, 0, 0, t, &xwmax);
+    char buf[64];
+    double last_half = 0;
+    if (nx > 0) { /* the last x tick label hangs over the right end */
+        double step = nx > 1 ? t[1] - t[0] : 1;
+        tick_text(buf, sizeof buf, t[nx - 1], p->xlog ? 0 : step, p->xlog);
+        double w = text_w(m, buf, 0, PX_TICK_SIZE);
+        double frac = p->xlog ? (log10(t[nx - 1]) - log10(p->x0)) / (log10(p->x1) - log10(p->x0))
+                              : (t[nx - 1] - p->x0) / (p->x1 - p->x0);
+        if (frac > 0.9) last_half = w / 2;
+    }
+    double th = text_h(m, PX_TICK_SIZE), ah = text_h(m, PX_AXIS_TITLE_SIZE);
+    margins g;
+    g.left = PX_PAD + (p->ylabel ? ah + PX_GAP : 0) + ywmax + PX_GAP;
+    g.right = fmax(2 * PX_PAD, last_half + PX_PAD);
+    g.top = p->title ? text_h(m, PX_PANEL_TITLE_SIZE) + 2 * PX_GAP : th / 2 + PX_PAD;
+    g.bottom = PX_GAP + th + (p->xlabel ? PX_GAP + ah : 0) + PX_PAD;
+    double bw, bh, line;
+    if (p->legend == PX_LEGEND_OUTSIDE && legend_box(m, p, &bw, &bh, &line) > 0)
+        g.right += bw + PX_LEGEND_INSET;
+    return g;
+}
+
+/* The plot rectangle of a panel.  In a grid every panel gets the largest
+ * margins of all, so the frames line up; `alone` is a page of its own. */
+static rect plot_rect_m(const px_figure *f, cairo_t *m, int panel, int alone)
 {
     double fw = f->width, fh = f->height - foot_height(f);
     double cw = alone ? fw : fw / f->cols, ch = alone ? fh : fh / f->rows;
     int r = alone ? 0 : panel / f->cols, c = alone ? 0 : panel % f->cols;
-    rect p = {c * cw + PX_MARGIN_LEFT, r * ch + PX_MARGIN_TOP,
-              cw - PX_MARGIN_LEFT - PX_MARGIN_RIGHT, ch - PX_MARGIN_TOP - PX_MARGIN_BOTTOM};
+    margins g = panel_margins(m, &f->panels[panel]);
+    if (!alone)
+        for (int i = 0; i < f->rows * f->cols; i++) {
+            margins o = panel_margins(m, &f->panels[i]);
+            g.left = fmax(g.left, o.left);
+            g.right = fmax(g.right, o.right);
+            g.top = fmax(g.top, o.top);
+            g.bottom = fmax(g.bottom, o.bottom);
+        }
+    rect p = {c * cw + g.left, r * ch + g.top, cw - g.left - g.right, ch - g.top - g.bottom};
     if (p.w < 10) p.w = 10;
     if (p.h < 10) p.h = 10;
     return p;
@@ -95,70 +246,75 @@ static void path_of(cairo_t *cr, const px_panel *p, rect r, const px_item *it, i
     if (close) cairo_close_path(cr);
 }
 
-/* Tick label text: enough decimals for the step, a true minus sign. */
-static void tick_text(char *buf, size_t n, double v, double step, int logaxis)
+/* Parallel lines over the box, `spacing` apart at `angle` degrees, anchored
+ * at the page origin so neighbouring hatched areas line up; the caller has
+ * set the clip. */
+static void hatch_box(cairo_t *cr, rect b, double spacing, double angle)
 {
-    char tmp[48];
-    if (logaxis) {
-        double e = log10(v);
-        if (fabs(e - round(e)) < 1e-9) snprintf(tmp, sizeof tmp, "1e%d", (int)round(e));
-        else snprintf(tmp, sizeof tmp, "%g", v);
-    } else {
-        int dec = 0;
-        double s = fabs(step);
-        while (dec < 6 && fabs(s * pow(10, dec) - round(s * pow(10, dec))) > 1e-6) dec++;
-        snprintf(tmp, sizeof tmp, "%.*f", dec, v);
+    double a = angle * 3.14159265358979323846 / 180.0;
+    double dx = cos(a), dy = -sin(a);  /* along the lines (page y points down) */
+    double nx = -dy, ny = dx;          /* across them */
+    double s0 = INFINITY, s1 = -INFINITY, l0 = INFINITY, l1 = -INFINITY;
+    double cx[4] = {b.x, b.x + b.w, b.x, b.x + b.w}, cy[4] = {b.y, b.y, b.y + b.h, b.y + b.h};
+    for (int k = 0; k < 4; k++) {
+        double s = cx[k] * nx + cy[k] * ny, l = cx[k] * dx + cy[k] * dy;
+        s0 = fmin(s0, s), s1 = fmax(s1, s), l0 = fmin(l0, l), l1 = fmax(l1, l);
     }
-    if (tmp[0] == '-') snprintf(buf, n, "\xe2\x88\x92%s", tmp + 1);
-    else snprintf(buf, n, "%s", tmp);
+    cairo_new_path(cr);
+    for (double s = floor(s0 / spacing) * spacing; s <= s1; s += spacing) {
+        cairo_move_to(cr, s * nx + l0 * dx, s * ny + l0 * dy);
+        cairo_line_to(cr, s * nx + l1 * dx, s * ny + l1 * dy);
+    }
+    cairo_stroke(cr);
 }
 
-static void draw_axes(cairo_t *cr, const px_panel *p, rect r)
+static void draw_axes(cairo_t *cr, const px_panel *p, rect r, rect cell)
 {
-    double t[PX_MAX_TICKS + 8];
+    double t[PX_MAX_TICKS + 8], wmax;
     char buf[64];
     cairo_set_source_rgb(cr, 0, 0, 0);
     cairo_set_line_width(cr, 0.8);
     set_dash(cr, PX_DASH_SOLID, 1);
     cairo_rectangle(cr, r.x, r.y, r.w, r.h);
     cairo_stroke(cr);
-    /* x ticks */
-    size_t n = p->xlog ? px_ticks_log(p->x0, p->x1, PX_MAX_TICKS, t)
-                       : px_ticks_linear(p->x0, p->x1, PX_MAX_TICKS, t);
+    double th = text_h(cr, PX_TICK_SIZE), ah = text_h(cr, PX_AXIS_TITLE_SIZE);
+    size_t n = axis_ticks(cr, p, 0, r.w, t, &wmax);
     double step = n > 1 ? t[1] - t[0] : 1;
     for (size_t i = 0; i < n; i++) {
         double x = map_x(p, r, t[i]);
         cairo_move_to(cr, x, r.y + r.h);
         cairo_line_to(cr, x, r.y + r.h - PX_TICK_LEN);
         cairo_stroke(cr);
-        tick_text(buf, sizeof buf, t[i], step, p->xlog);
-        double w, h;
-        px_text_measure(cr, buf, 0, PX_TICK_SIZE, &w, &h);
-        px_text_draw(cr, buf, 0, PX_TICK_SIZE, x - w / 2, r.y + r.h + 3 + h * 0.8);
+        tick_text(buf, sizeof buf, t[i], p->xlog ? 0 : step, p->xlog);
+        double w = text_w(cr, buf, 0, PX_TICK_SIZE);
+        px_text_draw(cr, buf, 0, PX_TICK_SIZE, x - w / 2, r.y + r.h + PX_GAP + th * PX_ASCENT);
     }
-    n = p->ylog ? px_ticks_log(p->y0, p->y1, PX_MAX_TICKS, t)
-                : px_ticks_linear(p->y0, p->y1, PX_MAX_TICKS, t);
+    n = axis_ticks(cr, p, 1, r.h, t, &wmax);
     step = n > 1 ? t[1] - t[0] : 1;
     for (size_t i = 0; i < n; i++) {
         double y = map_y(p, r, t[i]);
         cairo_move_to(cr, r.x, y);
         cairo_line_to(cr, r.x + PX_TICK_LEN, y);
         cairo_stroke(cr);
-        tick_text(buf, sizeof buf, t[i], step, p->ylog);
-        double w, h;
-        px_text_measure(cr, buf, 0, PX_TICK_SIZE, &w, &h);
-        px_text_draw(cr, buf, 0, PX_TICK_SIZE, r.x - 4 - w, y + h * 0.3);
+        tick_text(buf, sizeof buf, t[i], p->ylog ? 0 : step, p->ylog);
+        double w = text_w(cr, buf, 0, PX_TICK_SIZE);
+        px_text_draw(cr, buf, 0, PX_TICK_SIZE, r.x - PX_GAP - w, y + th * 0.3);
     }
-    double w, h;
     if (p->xlabel) {
-        px_text_measure(cr, p->xlabel, 0, PX_AXIS_TITLE_SIZE, &w, &h);
-        px_text_draw(cr, p->xlabel, 0, PX_AXIS_TITLE_SIZE, r.x + r.w / 2 - w / 2,
-                     r.y + r.h + 26);
+        double s = fit_size(cr, p->xlabel, 0, PX_AXIS_TITLE_SIZE, PX_TITLE_MIN, cell.w - 2 * PX_PAD);
+        double w = text_w(cr, p->xlabel, 0, s);
+        double x = fmin(fmax(r.x + r.w / 2 - w / 2, cell.x + PX_PAD), cell.x + cell.w - PX_PAD - w);
+        px_text_draw(cr, p->xlabel, 0, s, x, r.y + r.h + 2 * PX_GAP + th + ah * PX_ASCENT);
     }
-    if (p->ylabel) px_text_draw_vertical(cr, p->ylabel, PX_AXIS_TITLE_SIZE, r.x - 42, r.y + r.h / 2);
+    if (p->ylabel) {
+        double s = fit_size(cr, p->ylabel, 0, PX_AXIS_TITLE_SIZE, PX_TITLE_MIN, r.h);
+        px_text_draw_vertical(cr, p->ylabel, s, r.x - 2 * PX_GAP - wmax - ah / 2, r.y + r.h / 2);
+    }
     if (p->title) {
-        px_text_measure(cr, p->title, 0, PX_PANEL_TITLE_SIZE, &w, &h);
-        px_text_draw(cr, p->title, 0, PX_PANEL_TITLE_SIZE, r.x + r.w / 2 - w / 2, r.y - 7);
+        double s = fit_size(cr, p->title, 0, PX_PANEL_TITLE_SIZE, PX_TITLE_MIN, cell.w - 2 * PX_PAD);
+        double w = text_w(cr, p->title, 0, s);
+        double x = fmin(fmax(r.x + r.w / 2 - w / 2, cell.x + PX_PAD), cell.x + cell.w - PX_PAD - w);
+        px_text_draw(cr, p->title, 0, s, x, r.y - PX_GAP - text_h(cr, s) * 0.25);
     }
 }
 
@@ -240,20 +396,51 @@ static void draw_field_label(cairo_t *cr, const px_panel *p, rect r, const px_it
     free(dy);
 }
 
+static void draw_swatch(cairo_t *cr, const px_item *it, double x, double y)
+{
+    if (it->kind == PX_ITEM_LINE) {
+        set_rgba(cr, it->color);
+        cairo_set_line_width(cr, it->width);
+        set_dash(cr, it->dash, it->width);
+        cairo_move_to(cr, x, y);
+        cairo_line_to(cr, x + PX_LEGEND_SWATCH, y);
+        cairo_stroke(cr);
+        return;
+    }
+    rect b = {x, y - 3.5, PX_LEGEND_SWATCH, 7};
+    cairo_rectangle(cr, b.x, b.y, b.w, b.h);
+    set_rgba(cr, it->fill);
+    cairo_fill(cr);
+    set_dash(cr, PX_DASH_SOLID, 1);
+    set_rgba(cr, it->color);
+    if (it->spacing > 0) {
+        cairo_save(cr);
+        cairo_rectangle(cr, b.x, b.y, b.w, b.h);
+        cairo_clip(cr);
+        cairo_set_line_width(cr, 0.6);
+        hatch_box(cr, b, it->spacing, 45);
+        cairo_restore(cr);
+    }
+    cairo_set_line_width(cr, it->width);
+    cairo_rectangle(cr, b.x, b.y, b.w, b.h);
+    cairo_stroke(cr);
+}
+
 static void draw_legend(cairo_t *cr, const px_panel *p, rect r)
 {
-    size_t count = 0;
-    double wmax = 0, w, h = 0;
-    for (size_t i = 0; i < p->n_items; i++)
-        if (p->items[i].kind == PX_ITEM_LINE && p->items[i].text) {
-            px_text_measure(cr, p->items[i].text, 0, PX_LEGEND_SIZE, &w, &h);
-            wmax = fmax(wmax, w);
-            count++;
-        }
-    if (!count) return;
-    double line = h + 2, bw = wmax + 30, bh = (double)count * line + 6;
-    double bx = r.x + r.w - bw - 6, by = r.y + 6;
-    cairo_set_source_rgba(cr, 1, 1, 1, 0.85);
+    double bw, bh, line;
+    if (!legend_box(cr, p, &bw, &bh, &line)) return;
+    double h = text_h(cr, PX_LEGEND_SIZE), bx, by;
+    switch (p->legend) {
+    case PX_LEGEND_TOP_LEFT: bx = r.x + PX_LEGEND_INSET, by = r.y + PX_LEGEND_INSET; break;
+    case PX_LEGEND_BOTTOM_LEFT: bx = r.x + PX_LEGEND_INSET, by = r.y + r.h - bh - PX_LEGEND_INSET; break;
+    case PX_LEGEND_BOTTOM_RIGHT:
+        bx = r.x + r.w - bw - PX_LEGEND_INSET, by = r.y + r.h - bh - PX_LEGEND_INSET;
+        break;
+    case PX_LEGEND_OUTSIDE: bx = r.x + r.w + PX_LEGEND_INSET, by = r.y; break;
+    default: bx = r.x + r.w - bw - PX_LEGEND_INSET, by = r.y + PX_LEGEND_INSET; break;
+    }
+    cairo_set_source_rgba(cr, 1, 1, 1, 0.88);
     cairo_rectangle(cr, bx, by, bw, bh);
     cairo_fill_preserve(cr);
     cairo_set_source_rgb(cr, 0.4, 0.4, 0.4);
@@ -263,21 +450,16 @@ static void draw_legend(cairo_t *cr, const px_panel *p, rect r)
     size_t k = 0;
     for (size_t i = 0; i < p->n_items; i++) {
         const px_item *it = &p->items[i];
-        if (it->kind != PX_ITEM_LINE || !it->text) continue;
+        if (!in_legend(it)) continue;
         double y = by + 3 + line * ((double)k + 0.5);
-        set_rgba(cr, it->color);
-        cairo_set_line_width(cr, it->width);
-        set_dash(cr, it->dash, it->width);
-        cairo_move_to(cr, bx + 4, y);
-        cairo_line_to(cr, bx + 22, y);
-        cairo_stroke(cr);
+        draw_swatch(cr, it, bx + 4, y);
         cairo_set_source_rgb(cr, 0, 0, 0);
-        px_text_draw(cr, it->text, 0, PX_LEGEND_SIZE, bx + 26, y + h * 0.3);
+        px_text_draw(cr, it->text, 0, PX_LEGEND_SIZE, bx + PX_LEGEND_SWATCH + 8, y + h * 0.3);
         k++;
     }
 }
 
-static void draw_panel(cairo_t *cr, const px_panel *p, rect r)
+static void draw_panel(cairo_t *cr, const px_panel *p, rect r, rect cell)
 {
     cairo_save(cr);
     cairo_rectangle(cr, r.x, r.y, r.w, r.h);
@@ -289,6 +471,18 @@ static void draw_panel(cairo_t *cr, const px_panel *p, rect r)
         path_of(cr, p, r, it, 1);
         set_rgba(cr, it->fill);
         cairo_fill(cr);
+    }
+    for (size_t i = 0; i < p->n_items; i++) { /* hatching over the fills */
+        const px_item *it = &p->items[i];
+        if (it->kind != PX_ITEM_HATCH) continue;
+        cairo_save(cr);
+        path_of(cr, p, r, it, 1);
+        cairo_clip(cr);
+        set_rgba(cr, it->color);
+        cairo_set_line_width(cr, it->width);
+        set_dash(cr, PX_DASH_SOLID, it->width);
+        hatch_box(cr, r, it->spacing, it->angle);
+        cairo_restore(cr);
     }
     for (size_t i = 0; i < p->n_items; i++) { /* then outlines and lines */
         const px_item *it = &p->items[i];
@@ -315,29 +509,44 @@ static void draw_panel(cairo_t *cr, const px_panel *p, rect r)
             px_text_measure(cr, it->text, it->chem, it->width, &w, &h);
             double x = map_x(p, r, it->lx), y = map_y(p, r, it->ly);
             x = fmin(fmax(x, r.x + 1), r.x + r.w - w - 1); /* keep inside the plot */
+            y = fmin(fmax(y, r.y + h * PX_ASCENT + 1), r.y + r.h - h * 0.25 - 1);
             px_text_draw(cr, it->text, it->chem, it->width, x, y);
         }
     }
-    draw_legend(cr, p, r);
+    if (p->legend != PX_LEGEND_OUTSIDE) draw_legend(cr, p, r);
     cairo_restore(cr);
-    draw_axes(cr, p, r);
+    if (p->legend == PX_LEGEND_OUTSIDE) draw_legend(cr, p, r);
+    draw_axes(cr, p, r, cell);
 }
 
 static void draw_stamp(cairo_t *cr, const px_figure *f)
 {
     cairo_set_source_rgb(cr, 0.3, 0.3, 0.3);
     double y0 = f->height - foot_height(f) + 3;
-    for (size_t k = 0; k < f->n_stamp; k++)
-        px_text_draw(cr, f->stamp[k], 0, PX_STAMP_SIZE, 6, y0 + PX_STAMP_LINE * ((double)k + 1) - 2);
+    for (size_t k = 0; k < f->n_stamp; k++) {
+        double s = fit_size(cr, f->stamp[k], 0, PX_STAMP_SIZE, PX_STAMP_MIN, f->width - 2 * PX_PAD);
+        px_text_draw(cr, f->stamp[k], 0, s, PX_PAD, y0 + PX_STAMP_LINE * ((double)k + 1) - 2);
+    }
+}
+
+static rect cell_rect(const px_figure *f, int panel, int alone)
+{
+    double fw = f->width, fh = f->height - foot_height(f);
+    if (alone) return (rect){0, 0, fw, fh};
+    double cw = fw / f->cols, ch = fh / f->rows;
+    return (rect){(panel % f->cols) * cw, (panel / f->cols) * ch, cw, ch};
 }
 
 static void draw_page(cairo_t *cr, const px_figure *f, int only_panel)
 {
     cairo_set_source_rgb(cr, 1, 1, 1);
     cairo_paint(cr);
-    if (only_panel >= 0) draw_panel(cr, &f->panels[only_panel], plot_rect(f, only_panel, 1));
+    if (only_panel >= 0)
+        draw_panel(cr, &f->panels[only_panel], plot_rect_m(f, cr, only_panel, 1),
+                   cell_rect(f, only_panel, 1));
     else
-        for (int i = 0; i < f->rows * f->cols; i++) draw_panel(cr, &f->panels[i], plot_rect(f, i, 0));
+        for (int i = 0; i < f->rows * f->cols; i++)
+            draw_panel(cr, &f->panels[i], plot_rect_m(f, cr, i, 0), cell_rect(f, i, 0));
     draw_stamp(cr, f);
 }
 
@@ -431,6 +640,118 @@ static int svg_renumber(membuf *m)
     return PX_OK;
 }
 
+/* The figure's words for SVG: cairo draws glyphs as paths, so without this
+ * an SVG says nothing a search, a screen reader or a test can find.  One
+ * <title> (the first panel title) and one <desc> with a line per panel
+ * title, axis title, field label (phlox notation), legend entry, text and
+ * stamp line, XML-escaped, inserted after the root element's start tag. */
+typedef struct sbuf {
+    char *s;
+    size_t n, cap;
+    int failed;
+} sbuf;
+
+static void sb_put(sbuf *b, const char *s, size_t k)
+{
+    if (b->failed) return;
+    if (b->n + k + 1 > b->cap) {
+        size_t cap = b->cap ? b->cap : 1024;
+        while (cap < b->n + k + 1) cap *= 2;
+        char *d = realloc(b->s, cap);
+        if (!d) {
+            b->failed = 1;
+            return;
+        }
+        b->s = d;
+        b->cap = cap;
+    }
+    memcpy(b->s + b->n, s, k);
+    b->n += k;
+    b->s[b->n] = '\0';
+}
+
+static void sb_str(sbuf *b, const char *s) { sb_put(b, s, strlen(s)); }
+
+static void sb_xml(sbuf *b, const char *s)
+{
+    for (; *s; s++) {
+        switch (*s) {
+        case '&': sb_str(b, "&amp;"); break;
+        case '<': sb_str(b, "&lt;"); break;
+        case '>': sb_str(b, "&gt;"); break;
+        case '"': sb_str(b, "&quot;"); break;
+        case '{': case '}': break; /* formula markup of plain text */
+        default:
+            if ((unsigned char)*s >= 0x20 || *s == '\n' || *s == '\t') sb_put(b, s, 1);
+        }
+    }
+}
+
+static void sb_line(sbuf *b, const char *what, const char *text)
+{
+    sb_str(b, what);
+    sb_str(b, ": ");
+    sb_xml(b, text);
+    sb_str(b, "\n");
+}
+
+static int svg_describe(membuf *m, const px_figure *f)
+{
+    sbuf b = {0};
+    const char *title = NULL;
+    for (int i = 0; i < f->rows * f->cols && !title; i++) title = f->panels[i].title;
+    sb_str(&b, "\n<title>");
+    sb_xml(&b, title ? title : "phlox figure");
+    sb_str(&b, "</title>\n<desc>\n");
+    for (int i = 0; i < f->rows * f->cols; i++) {
+        const px_panel *p = &f->panels[i];
+        char head[32];
+        snprintf(head, sizeof head, "panel %d", i + 1);
+        sb_line(&b, head, p->title ? p->title : "");
+        if (p->xlabel) sb_line(&b, "x axis", p->xlabel);
+        if (p->ylabel) sb_line(&b, "y axis", p->ylabel);
+        for (size_t k = 0; k < p->n_items; k++) {
+            const px_item *it = &p->items[k];
+            if (!it->text) continue;
+            sb_line(&b, it->kind == PX_ITEM_POLYGON ? "field" : it->kind == PX_ITEM_TEXT ? "text" : "legend",
+                    it->text);
+        }
+    }
+    for (size_t k = 0; k < f->n_stamp; k++) sb_line(&b, "stamp", f->stamp[k]);
+    sb_str(&b, "</desc>");
+    if (b.failed) {
+        free(b.s);
+        return PX_ENOMEM;
+    }
+    /* after the '>' that closes "<svg ...": attribute values hold no '>' */
+    unsigned char *root = NULL;
+    for (size_t i = 0; i + 4 < m->n; i++)
+        if (memcmp(m->data + i, "<svg", 4) == 0) {
+            root = m->data + i;
+            break;
+        }
+    unsigned char *gt = root ? memchr(root, '>', m->n - (size_t)(root - m->data)) : NULL;
+    if (!gt) {
+        free(b.s);
+        return PX_EIO;
+    }
+    size_t at = (size_t)(gt - m->data) + 1;
+    unsigned char *out = malloc(m->n + b.n);
+    if (!out) {
+        free(b.s);
+        return PX_ENOMEM;
+    }
+    memcpy(out, m->data, at);
+    memcpy(out + at, b.s, b.n);
+    memcpy(out + at + b.n, m->data + at, m->n - at);
+    free(b.s);
+    free(m->data);
+    m->data = out;
+    m->n += b.n;
+    m->cap = m->n;
+    return PX_OK;
+}
+
 int px_figure_render(const px_figure *f, px_format fmt, double dpi, unsigned char **out, size_t *n)
 {
     if (!f || !out || !n || !(dpi >= 10 && dpi <= 2400)) return PX_EINVAL;
@@ -456,6 +777,7 @@ int px_figure_render(const px_figure *f, px_format fmt, double dpi, unsigned cha
     default: return PX_EINVAL;
     }
     cairo_t *cr = cairo_create(s);
+    px_text_prepare(cr);
     cairo_scale(cr, scale, scale);
     if (fmt == PX_FORMAT_PDF && f->page_per_panel) {
         for (int i = 0; i < f->rows * f->cols; i++) {
@@ -480,6 +802,7 @@ int px_figure_render(const px_figure *f, px_format fmt, double dpi, unsigned cha
     }
     if (fmt == PX_FORMAT_SVG) {
         int st = svg_renumber(&m);
+        if (st == PX_OK) st = svg_describe(&m, f);
         if (st != PX_OK) {
             free(m.data);
             return st;
@@ -507,7 +830,11 @@ int px_figure_plot_rect(const px_figure *f, int panel, double dpi, double *x, do
                         double *h)
 {
     if (!f || panel < 0 || panel >= f->rows * f->cols || !(dpi > 0)) return PX_EINVAL;
-    rect r = plot_rect(f, panel, 0);
+    cairo_t *m = px_text_scratch();
+    rect r = plot_rect_m(f, m, panel, 0);
+    int ok = cairo_status(m) == CAIRO_STATUS_SUCCESS;
+    cairo_destroy(m);
+    if (!ok) return PX_ENOMEM;
     double s = dpi / 72.0;
     *x = r.x * s;
     *y = r.y * s;

@@ -227,3 +227,49 @@ int px_figure_page_per_panel(px_figure *f, int on)
     f->page_per_panel = on != 0;
     return PX_OK;
 }
+
+int px_figure_hatch(px_figure *f, int panel, const double *x, const double *y, size_t n,
+                    px_rgba color, double width, double spacing, double angle)
+{
+    px_panel *p = panel_of(f, panel);
+    if (!p || !x || !y || n < 3 || !valid_color(color) || !(width > 0 && width < 50) ||
+        !(spacing >= 1 && spacing <= 500) || !isfinite(angle))
+        return PX_EINVAL;
+    px_item *it = new_item(p);
+    if (!it) return PX_ENOMEM;
+    int st = copy_points(it, x, y, n);
+    if (st != PX_OK) return st;
+    it->kind = PX_ITEM_HATCH;
+    it->color = color;
+    it->width = width;
+    it->spacing = spacing;
+    it->angle = angle;
+    p->n_items++;
+    return PX_OK;
+}
+
+int px_figure_legend_patch(px_figure *f, int panel, const char *text, px_rgba fill,
+                           px_rgba stroke, double hatch)
+{
+    px_panel *p = panel_of(f, panel);
+    if (!p || !text || !valid_color(fill) || !valid_color(stroke) || !(hatch >= 0 && hatch < 100))
+        return PX_EINVAL;
+    px_item *it = new_item(p);
+    if (!it) return PX_ENOMEM;
+    if (!(it->text = dupstr(text))) return PX_ENOMEM;
+    it->kind = PX_ITEM_PATCH;
+    it->fill = fill;
+    it->color = stroke;
+    it->width = 0.6;
+    it->spacing = hatch;
+    p->n_items++;
+    return PX_OK;
+}
+
+int px_figure_legend_place(px_figure *f, int panel, px_legend_place where)
+{
+    px_panel *p = panel_of(f, panel);
+    if (!p || where < PX_LEGEND_TOP_RIGHT || where > PX_LEGEND_OUTSIDE) return PX_EINVAL;
+    p->legend = where;
+    return PX_OK;
+}

@@ -4,7 +4,7 @@
 #define PX_FIGURE_PRIV_H
 #include "render/render.h"
 
-typedef enum { PX_ITEM_POLYGON, PX_ITEM_LINE, PX_ITEM_TEXT } px_item_kind;
+typedef enum { PX_ITEM_POLYGON, PX_ITEM_LINE, PX_ITEM_TEXT, PX_ITEM_HATCH, PX_ITEM_PATCH } px_item_kind;
 
 typedef struct px_item {
     px_item_kind kind;
@@ -16,11 +16,13 @@ typedef struct px_item {
     char *text;     /* polygon label, line legend, or the text */
     double lx, ly;  /* label anchor (polygon) or position (text), data units */
     int chem;
+    double spacing, angle; /* hatch: line spacing (points) and angle (degrees); patch: hatch */
 } px_item;
 
 typedef struct px_panel {
     double x0, x1, y0, y1;
     int xlog, ylog;
+    px_legend_place legend;
     char *xlabel, *ylabel, *title;
     px_item *items;
     size_t n_items, cap;

@@ -6,6 +6,11 @@
  * entries, plus stamp lines at the foot.  px_figure_save() lays it out and
  * draws it; the output format follows the file extension.  Identical figures
  * give identical SVG and PDF bytes (no timestamps; PDF dates are pinned).
+ * Margins follow the measured tick labels and titles, so no text is cut off
+ * at the figure's edges.  SVG output draws glyphs as paths, so it also
+ * carries the figure's words as an SVG <title> and <desc> (panel titles,
+ * axis titles, field labels in phlox notation, legend entries, stamp) for
+ * search, screen readers and tests.
  *
  * Units: figure sizes in points (1/72 in); PNG pixels = points x dpi / 72.
  * Coordinates of items are data coordinates of their panel. */
@@ -25,6 +30,16 @@ typedef enum px_dash {
 } px_dash;
 
 typedef enum px_format { PX_FORMAT_PNG = 0, PX_FORMAT_SVG, PX_FORMAT_PDF } px_format;
+
+/* Where a panel's legend goes: a corner inside the plot, or outside to the
+ * right of it (the plot narrows to make room). */
+typedef enum px_legend_place {
+    PX_LEGEND_TOP_RIGHT = 0,
+    PX_LEGEND_TOP_LEFT,
+    PX_LEGEND_BOTTOM_LEFT,
+    PX_LEGEND_BOTTOM_RIGHT,
+    PX_LEGEND_OUTSIDE
+} px_legend_place;
 
 typedef struct px_figure px_figure;
 
@@ -54,6 +69,16 @@ int px_figure_line(px_figure *fig, int panel, const double *x, const double *y, 
 /* Text at data coordinates; chem != 0 renders it as a chemical formula. */
 int px_figure_text(px_figure *fig, int panel, double x, double y, const char *text, int chem,
                    double size, px_rgba color);
+/* Hatching: parallel lines `spacing` points apart at `angle` degrees
+ * (counter-clockwise from the x axis), clipped to the polygon; no fill. */
+int px_figure_hatch(px_figure *fig, int panel, const double *x, const double *y, size_t n,
+                    px_rgba color, double width, double spacing, double angle);
+/* A legend entry with a filled swatch (outlined in `stroke`; hatch > 0 adds
+ * hatching in the stroke colour that many points apart). */
+int px_figure_legend_patch(px_figure *fig, int panel, const char *text, px_rgba fill,
+                           px_rgba stroke, double hatch);
+/* The panel's legend position (default PX_LEGEND_TOP_RIGHT). */
+int px_figure_legend_place(px_figure *fig, int panel, px_legend_place where);
 /* A line of the stamp at the foot of the figure (conditions, checksums). */
 int px_figure_stamp(px_figure *fig, const char *text);
 
@@ -72,6 +97,10 @@ int px_figure_render(const px_figure *fig, px_format fmt, double dpi, unsigned c
  * dpi) after layout, for tests that probe pixels. */
 int px_figure_plot_rect(const px_figure *fig, int panel, double dpi, double *x, double *y,
                         double *w, double *h);
+
+/* Advance width in points of text at `size` as figures lay it out (chem as
+ * in px_figure_text), for wrapping stamp lines; -1 on bad input. */
+double px_text_width(const char *text, int chem, double size);
 
 /* Nice tick positions for [a, b]: at most max_ticks values, steps 1, 2 or 5
  * times a power of ten; returns how many were written. */

@@ -3,7 +3,9 @@
  * "SO4^2-" as SO₄²⁻, "CuSO4*5H2O(s)" as CuSO₄·5H₂O(s), "e-" as e⁻.  Counts
  * after an element or a closing parenthesis are subscripts, a charge after
  * '^' is a superscript with a true minus sign, '*' is the hydrate dot, and a
- * trailing state such as (s), (aq) or (s,calcite) is set in normal type. */
+ * trailing state such as (s), (aq) or (s,calcite) is set in normal type.
+ * Plain text may carry formulas in braces: "{Fe^2+} at 25 °C". */
+#include "render/render.h"
 #include "render/text.h"
 #include <ctype.h>
 #include <string.h>
@@ -100,19 +102,43 @@ static void set_font(cairo_t *cr, double size)
     cairo_set_font_size(cr, size);
 }
 
+/* Runs of a text: chem text is one formula; plain text may hold formulas
+ * in braces, "{Fe^2+} at 25 °C" (braces not drawn). */
+static int split_text(const char *text, int chem, run *runs)
+{
+    if (chem) return split_chem(text, runs);
+    int nr = 0;
+    char seg[PX_RUN_MAX * 3 + 1];
+    const char *s = text;
+    while (*s && nr < PX_RUN_MAX) {
+        const char *open = strchr(s, '{');
+        const char *close = open ? strchr(open + 1, '}') : NULL;
+        size_t plain = open && close ? (size_t)(open - s) : strlen(s);
+        if (plain > 0) {
+            size_t k = plain < sizeof seg - 1 ? plain : sizeof seg - 1;
+            memcpy(seg, s, k);
+            seg[k] = '\0';
+            append(runs, &nr, RUN_NORMAL, seg);
+        }
+        if (!(open && close)) break;
+        size_t k = (size_t)(close - open - 1);
+        if (k > sizeof seg - 1) k = sizeof seg - 1;
+        memcpy(seg, open + 1, k);
+        seg[k] = '\0';
+        run sub[PX_RUN_MAX];
+        int ns = split_chem(seg, sub);
+        for (int i = 0; i < ns; i++) append(runs, &nr, sub[i].kind, sub[i].text);
+        s = close + 1;
+    }
+    return nr;
+}
+
 /* Walk the runs; draw when `draw` is set; return the advance width. */
 static double layout(cairo_t *cr, const char *text, int chem, double size, double x, double y,
                      int draw)
 {
     run runs[PX_RUN_MAX];
-    int nr;
-    if (chem) nr = split_chem(text, runs);
-    else {
-        nr = 1;
-        runs[0].kind = RUN_NORMAL;
-        strncpy(runs[0].text, text, sizeof runs[0].text - 1);
-        runs[0].text[sizeof runs[0].text - 1] = '\0';
-    }
+    int nr = split_text(text, chem, runs);
     double adv = 0.0;
     for (int i = 0; i < nr; i++) {
         double fs = runs[i].kind == RUN_NORMAL ? size : size * PX_SCRIPT_SCALE;
@@ -153,4 +179,34 @@ void px_text_draw_vertical(cairo_t *cr, const char *text, double size, double x,
     cairo_rotate(cr, -1.5707963267948966); /* -pi/2 */
     px_text_draw(cr, text, 0, size, -w / 2, h / 3);
     cairo_restore(cr);
+}
+
+void px_text_prepare(cairo_t *cr)
+{
+    /* Unhinted advances: the same widths on every surface and scale, so
+     * layout in points does not depend on the output format or dpi. */
+    cairo_font_options_t *fo = cairo_font_options_create();
+    cairo_font_options_set_hint_metrics(fo, CAIRO_HINT_METRICS_OFF);
+    cairo_set_font_options(cr, fo);
+    cairo_font_options_destroy(fo);
+}
+
+cairo_t *px_text_scratch(void)
+{
+    cairo_surface_t *s = cairo_image_surface_create(CAIRO_FORMAT_ARGB32, 1, 1);
+    cairo_t *cr = cairo_create(s); /* holds its own reference to s */
+    cairo_surface_destroy(s);
+    px_text_prepare(cr);
+    return cr; /* on failure an inert context in an error state */
+}
+
+double px_text_width(const char *text, int chem, double size)
+{
+    if (!text || !(size > 0 && size < 200)) return -1;
+    cairo_t *cr = px_text_scratch();
+    double w, h;
+    px_text_measure(cr, text, chem, size, &w, &h);
+    int ok = cairo_status(cr) == CAIRO_STATUS_SUCCESS;
+    cairo_destroy(cr);
+    return ok ? w : -1;
 }
