@@ -1,0 +1,689 @@
+--- phlox.plot: publication figures from plain Lua tables.
+--
+-- Draws predominance maps (potential-pH and other two-variable maps),
+-- corrosion-domain maps, curve plots (fractions, solubility), multi-panel
+-- grids and overlays of several maps, through the figure renderer of
+-- phlox.core (cairo; PNG, SVG or PDF by file extension).  It knows nothing
+-- of the chemistry code: everything comes in a MAP TABLE (see
+-- docs/figures.md for the format) or a list of series.
+--
+--   local plot = require "phlox.plot"
+--   plot.map(map, { file = "Fe.pdf" })
+--
+-- Every figure carries a stamp: the conditions, the program version, the
+-- checksums of the data files (phlox.provenance) and the safety caution.
+local core = require "phlox.core"
+local palette = require "phlox.palette"
+local provenance = require "phlox.provenance"
+
+local plot = {}
+
+plot.caution = "Equilibrium thermodynamics: shows what can form, not how fast."
+plot.defaults = {
+  width = 396, height = 324,     -- points: 5.5 x 4.5 in, a report column
+  dpi = 150,                     -- PNG only
+}
+
+local STAMP_SIZE = 6.5           -- must match PX_STAMP_SIZE in src/render/draw.c
+local STAMP_MARGIN = 10          -- points left free across the stamp's width
+local LINE_BOUNDARY = 0.9        -- line widths, points
+local LINE_WATER = 1.0
+local LINE_NEUTRAL = 0.8
+local SMALL_TEXT = 7.0           -- water-line and neutral-pH labels
+local KINDS = { aqueous = true, solid = true, gas = true, metal = true, liquid = true }
+local DOMAINS = { "immunity", "passivation", "corrosion" }
+
+-- Argument checking ------------------------------------------------------
+
+local function fail(where, msg) error(("%s: %s"):format(where, msg), 3) end
+
+local function is_num(v) return type(v) == "number" and v == v and v ~= math.huge and v ~= -math.huge end
+
+local function check_points(where, what, t, min_n)
+  if type(t) ~= "table" or type(t.x) ~= "table" or type(t.y) ~= "table" then
+    fail(where, what .. " needs x and y lists")
+  end
+  if #t.x ~= #t.y then fail(where, what .. ": x and y differ in length") end
+  if #t.x < min_n then fail(where, ("%s: needs at least %d points"):format(what, min_n)) end
+  for i = 1, #t.x do
+    if not (is_num(t.x[i]) and is_num(t.y[i])) then
+      fail(where, ("%s: point %d is not a pair of finite numbers"):format(what, i))
+    end
+  end
+end
+
+local function check_axis(where, name, a)
+  if type(a) ~= "table" then fail(where, "map." .. name .. " must be a table") end
+  if not (is_num(a.min) and is_num(a.max) and a.max > a.min) then
+    fail(where, ("map.%s needs finite min < max"):format(name))
+  end
+end
+
+--- Check a map table; raises an error naming the offending field.
+function plot.check_map(map, where)
+  where = where or "plot"
+  if type(map) ~= "table" then fail(where, "map must be a table") end
+  check_axis(where, "x", map.x)
+  check_axis(where, "y", map.y)
+  if type(map.fields) ~= "table" then fail(where, "map.fields must be a list") end
+  for i, f in ipairs(map.fields) do
+    local what = ("map.fields[%d]"):format(i)
+    if type(f.species) ~= "string" then fail(where, what .. ".species must be a string") end
+    if f.kind ~= nil and not KINDS[f.kind] then
+      fail(where, ("%s.kind '%s' is not aqueous, solid, gas, metal or liquid"):format(what, tostring(f.kind)))
+    end
+    check_points(where, what, f, 3)
+  end
+  for i, b in ipairs(map.boundaries or {}) do check_points(where, ("map.boundaries[%d]"):format(i), b, 2) end
+  for i, d in ipairs(map.domains or {}) do
+    local what = ("map.domains[%d]"):format(i)
+    if d.domain ~= "immunity" and d.domain ~= "passivation" and d.domain ~= "corrosion" then
+      fail(where, what .. ".domain must be immunity, passivation or corrosion")
+    end
+    check_points(where, what, d, 3)
+  end
+  if map.water ~= nil then
+    for _, k in ipairs({ "o2", "h2" }) do
+      local w = map.water[k]
+      if w ~= nil and not (is_num(w.a) and is_num(w.b)) then
+        fail(where, ("map.water.%s needs numbers a and b (E = a + b pH)"):format(k))
+      end
+    end
+  end
+  if map.neutral_pH ~= nil and not is_num(map.neutral_pH) then fail(where, "map.neutral_pH must be a number") end
+  return map
+end
+
+-- Text helpers -----------------------------------------------------------
+
+local function fmt_num(v)
+  if v == math.floor(v) and math.abs(v) < 1e6 then return ("%d"):format(v) end
+  local s = ("%.4g"):format(v)
+  return (s:gsub("e%-0*", "e-"):gsub("e%+0*", "e"))
+end
+
+local function celsius(map)
+  if map.conditions and is_num(map.conditions.T_C) then return map.conditions.T_C end
+  if is_num(map.T) then return map.T - 273.15 end
+end
+
+local function fmt_T(tc)
+  if not tc then return nil end
+  local r = math.floor(tc * 10 + 0.5) / 10
+  if r == math.floor(r) then return ("%d °C"):format(r) end
+  return ("%.1f °C"):format(r)
+end
+
+local function pressure(map)
+  if map.conditions and is_num(map.conditions.P_bar) then return map.conditions.P_bar end
+  if is_num(map.P) then return map.P end
+end
+
+-- "log a(Cl^-)" -> "log a({Cl^-})": the formula part set in chemical type.
+local function axis_name(name)
+  if type(name) ~= "string" then return "" end
+  if name:find("{", 1, true) then return name end
+  return (name:gsub("^(log%s+[amfp])%((.+)%)$", "%1({%2})"))
+end
+
+local function is_potential(axis)
+  return axis and (axis.name == "E" or axis.name == "Eh")
+end
+
+local function is_pH(axis) return axis and axis.name == "pH" end
+
+-- The displayed potential scale: E_ref = E_SHE - offset.
+local function reference(opts, map)
+  local ref = opts.reference
+  if ref == nil then return { name = "SHE", offset = 0 } end
+  if type(ref) ~= "table" or type(ref.name) ~= "string" or not is_num(ref.offset) then
+    error("plot: opts.reference must be { name = \"SCE\", offset = <E of the electrode vs SHE, V> }", 3)
+  end
+  if map and not is_potential(map.y) then
+    error("plot: opts.reference needs a potential (E) y axis", 3)
+  end
+  return ref
+end
+
+local function y_title(map, ref)
+  local y = map.y
+  if is_potential(y) then
+    return ("%s / %s vs %s"):format(y.name, y.unit or "V", ref.name)
+  end
+  local name = axis_name(y.name)
+  if y.unit and y.unit ~= "" then return name .. " / " .. y.unit end
+  return name
+end
+
+local function x_title(map)
+  local x = map.x
+  local name = axis_name(x.name)
+  if x.unit and x.unit ~= "" then return name .. " / " .. x.unit end
+  return name
+end
+
+--- The default title of a map: "Fe–H₂O at 25 °C" (and the pressure when
+-- it is not 1 bar).
+function plot.map_title(map)
+  local t = fmt_T(celsius(map))
+  local head = map.element and ("{%s}–{H2O}"):format(map.element) or "map"
+  local s = head .. (t and (" at " .. t) or "")
+  local p = pressure(map)
+  if p and math.abs(p - 1) > 1e-9 then s = s .. (", %s bar"):format(fmt_num(p)) end
+  return s
+end
+
+-- Stamp -------------------------------------------------------------------
+
+local COND_NAMES = {
+  T_C = function(v) return ("T = %s °C"):format(fmt_num(v)) end,
+  P_bar = function(v) return ("P = %s bar"):format(fmt_num(v)) end,
+  activity = function(v) return ("activity of dissolved species = %s"):format(fmt_num(v)) end,
+  ionic_strength = function(v) return ("I = %s mol/kg"):format(fmt_num(v)) end,
+}
+local COND_ORDER = { "T_C", "P_bar", "activity", "ionic_strength" }
+
+local function conditions_text(c)
+  if type(c) ~= "table" then return nil end
+  local parts, seen = {}, {}
+  for _, k in ipairs(COND_ORDER) do
+    if c[k] ~= nil then
+      parts[#parts + 1] = type(c[k]) == "number" and COND_NAMES[k](c[k]) or (k .. " = " .. tostring(c[k]))
+      seen[k] = true
+    end
+  end
+  local rest = {}
+  for k in pairs(c) do if not seen[k] then rest[#rest + 1] = k end end
+  table.sort(rest)
+  for _, k in ipairs(rest) do
+    local v = c[k]
+    parts[#parts + 1] = k .. " = " .. (type(v) == "number" and fmt_num(v) or tostring(v))
+  end
+  return #parts > 0 and ("conditions: " .. table.concat(parts, ", ")) or nil
+end
+
+-- Break a line at spaces so it fits `width` points at the stamp size.
+local function wrap(line, width)
+  if core.text_width(line, STAMP_SIZE) <= width then return { line } end
+  local out, cur = {}, ""
+  for word in line:gmatch("%S+") do
+    local try = cur == "" and word or (cur .. " " .. word)
+    if cur ~= "" and core.text_width(try, STAMP_SIZE) > width then
+      out[#out + 1] = cur
+      cur = "  " .. word
+    else
+      cur = try
+    end
+  end
+  if cur ~= "" then out[#out + 1] = cur end
+  return out
+end
+
+--- The stamp lines of a figure: conditions, program and checksums, extra
+-- lines, the caution; wrapped to the figure width.
+function plot.stamp_lines(conditions, extra, width, opts)
+  opts = opts or {}
+  local st = provenance.stamp(conditions)
+  local lines = {}
+  local c = conditions_text(conditions)
+  if c then lines[#lines + 1] = c end
+  local prog = "program: " .. st.program
+  if st.script and not opts.no_script then
+    prog = prog .. "; script: " .. st.script.file .. " sha256=" .. st.script.sha256
+  end
+  lines[#lines + 1] = prog
+  for _, d in ipairs(st.data) do lines[#lines + 1] = "data: " .. d.file .. " sha256=" .. d.sha256 end
+  for _, s in ipairs(extra or {}) do lines[#lines + 1] = tostring(s) end
+  lines[#lines + 1] = plot.caution
+  local out = {}
+  for _, l in ipairs(lines) do
+    for _, w in ipairs(wrap(l, width - STAMP_MARGIN)) do out[#out + 1] = w end
+  end
+  return out
+end
+
+local function add_stamp(fig, lines)
+  for _, l in ipairs(lines) do fig:stamp(l) end
+end
+
+-- Geometry helpers ---------------------------------------------------------
+
+local function shifted(ys, offset)
+  if offset == 0 then return ys end
+  local out = {}
+  for i, v in ipairs(ys) do out[i] = v - offset end
+  return out
+end
+
+-- Where a straight line y = f(x) runs inside the window (with a margin),
+-- the first x from the left, or nil.
+local function first_inside(f, x0, x1, y0, y1)
+  for k = 2, 60 do
+    local x = x0 + (x1 - x0) * k / 62
+    local y = f(x)
+    if y > y0 + 0.04 * (y1 - y0) and y < y1 - 0.1 * (y1 - y0) then return x, y end
+  end
+end
+
+local function window_of(map, ref)
+  return { x0 = map.x.min, x1 = map.x.max, y0 = map.y.min - ref.offset, y1 = map.y.max - ref.offset }
+end
+
+-- Union of the maps' windows (shared axis ranges).
+local function union_window(maps, ref)
+  local w
+  for _, m in ipairs(maps) do
+    local v = window_of(m, ref)
+    if not w then
+      w = v
+    else
+      w = { x0 = math.min(w.x0, v.x0), x1 = math.max(w.x1, v.x1),
+            y0 = math.min(w.y0, v.y0), y1 = math.max(w.y1, v.y1) }
+    end
+  end
+  return w
+end
+
+-- Domains: given, or derived from the kinds of the fields when absent:
+-- metal (and the element's own liquid) -> immunity; solid and other
+-- liquids -> passivation; aqueous and gas -> corrosion (the usual
+-- classification of these maps; common practice, no source).
+function plot.domains_of(map)
+  if map.domains then return map.domains, false end
+  local out = {}
+  for _, f in ipairs(map.fields) do
+    local d
+    if f.kind == "metal" or (f.kind == "liquid" and map.element and f.species == map.element .. "(l)") then
+      d = "immunity"
+    elseif f.kind == "solid" or f.kind == "liquid" then
+      d = "passivation"
+    else
+      d = "corrosion"
+    end
+    out[#out + 1] = { domain = d, x = f.x, y = f.y }
+  end
+  return out, true
+end
+
+-- Hatching of overlaid domains: corrosion dense at 45°, passivation
+-- sparse at -45°, immunity bare.
+local DOMAIN_HATCH = {
+  corrosion = { spacing = 3.5, angle = 45, width = 0.5 },
+  passivation = { spacing = 6, angle = -45, width = 0.4 },
+}
+
+-- Drawing a map into a panel -------------------------------------------------
+
+local function draw_water(fig, panel, map, win, ref, style, labelled)
+  if not (map.water and is_pH(map.x)) then return end
+  local lines = {
+    { map.water.o2, "O2/H2O" },
+    { map.water.h2, "H2O/H2" },
+  }
+  for _, l in ipairs(lines) do
+    local w = l[1]
+    if w then
+      local function E(x) return w.a + w.b * x - ref.offset end
+      fig:line(panel, { win.x0, win.x1 }, { E(win.x0), E(win.x1) }, style.color, style.width,
+               style.dash, style.legend)
+      if labelled then
+        local x, y = first_inside(E, win.x0, win.x1, win.y0, win.y1)
+        if x then
+          fig:text(panel, x, y + 0.015 * (win.y1 - win.y0), l[2], true, SMALL_TEXT, style.color)
+        end
+      end
+    end
+  end
+end
+
+local function draw_neutral(fig, panel, map, win)
+  local n = map.neutral_pH
+  if not (n and is_pH(map.x) and n > win.x0 and n < win.x1) then return end
+  fig:line(panel, { n, n }, { win.y0, win.y1 }, palette.neutral, LINE_NEUTRAL, "dotted")
+  local t = fmt_T(celsius(map))
+  local label = ("neutral pH %.2f%s"):format(n, t and (" at " .. t) or "")
+  fig:text(panel, n + 0.01 * (win.x1 - win.x0), win.y0 + 0.02 * (win.y1 - win.y0), label, false,
+           SMALL_TEXT, palette.neutral)
+end
+
+local function draw_domain_overlay(fig, panel, map, ref, mode)
+  local domains = plot.domains_of(map)
+  local present = {}
+  for _, d in ipairs(domains) do
+    local ys = shifted(d.y, ref.offset)
+    present[d.domain] = true
+    if mode == "tint" then
+      local c = palette.domain[d.domain]
+      fig:polygon(panel, d.x, ys, { c[1], c[2], c[3], 0.45 }, palette.domain_ink, 0)
+    else
+      local h = DOMAIN_HATCH[d.domain]
+      if h then fig:hatch(panel, d.x, ys, palette.domain_ink, h.width, h.spacing, h.angle) end
+    end
+  end
+  for _, name in ipairs(DOMAINS) do
+    if present[name] then
+      if mode == "tint" then
+        local c = palette.domain[name]
+        fig:legend_patch(panel, name, { c[1], c[2], c[3], 0.45 }, palette.domain_ink)
+      else
+        local h = DOMAIN_HATCH[name]
+        fig:legend_patch(panel, name, { 1, 1, 1 }, palette.domain_ink, h and h.spacing or 0)
+      end
+    end
+  end
+  fig:legend(panel, "outside")
+end
+
+-- Fields, boundaries, water, neutral pH and (optionally) domains of one map.
+local function draw_map(fig, panel, map, opts, win, ref)
+  local fills = palette.map_fills(map)
+  local outline = (map.boundaries == nil or #map.boundaries == 0) and LINE_BOUNDARY or 0
+  for i, f in ipairs(map.fields) do
+    local label = f.species
+    if opts.labels == false then label = nil end
+    fig:polygon(panel, f.x, shifted(f.y, ref.offset), fills.fills[i], palette.ink, outline, label)
+  end
+  if opts.domains then draw_domain_overlay(fig, panel, map, ref, opts.domains == true and "hatch" or opts.domains) end
+  for _, b in ipairs(map.boundaries or {}) do
+    fig:line(panel, b.x, shifted(b.y, ref.offset), palette.ink, LINE_BOUNDARY, "solid")
+  end
+  draw_water(fig, panel, map, win, ref,
+             { color = palette.water, width = LINE_WATER, dash = "dashed" }, true)
+  draw_neutral(fig, panel, map, win)
+  return fills
+end
+
+local function finish(fig, opts, d)
+  if opts.pages then fig:pages(true) end
+  if opts.file then
+    local ok, err = fig:save(opts.file, opts.dpi or d.dpi)
+    if not ok then error("plot: " .. err, 3) end
+  end
+  return fig
+end
+
+local function size(opts)
+  local w, h = opts.width or plot.defaults.width, opts.height or plot.defaults.height
+  if not (is_num(w) and is_num(h) and w >= 50 and h >= 50) then
+    error("plot: opts.width and opts.height are in points (>= 50)", 3)
+  end
+  return w, h
+end
+
+--- A predominance map as a figure.
+-- opts: file (".png", ".svg", ".pdf"), width, height (points), dpi,
+-- reference = { name = "SCE", offset = 0.241 }, title, domains = "hatch" |
+-- "tint" (overlay of corrosion domains), labels = false, stamp (extra
+-- lines).  Returns the phlox.Figure and the fill table (fills, tiers).
+function plot.map(map, opts)
+  opts = opts or {}
+  plot.check_map(map, "plot.map")
+  if opts.domains ~= nil and opts.domains ~= false and opts.domains ~= true and opts.domains ~= "hatch" and opts.domains ~= "tint" then
+    error("plot.map: opts.domains must be \"hatch\" or \"tint\"", 2)
+  end
+  local ref = reference(opts, map)
+  local w, h = size(opts)
+  local fig = core.figure(w, h, 1, 1)
+  local win = window_of(map, ref)
+  fig:axes(1, win.x0, win.x1, win.y0, win.y1)
+  fig:titles(1, x_title(map), y_title(map, ref), opts.title or plot.map_title(map))
+  local fills = draw_map(fig, 1, map, opts, win, ref)
+  local extra = {}
+  for _, s in ipairs(map.stamp or {}) do extra[#extra + 1] = s end
+  for _, s in ipairs(opts.stamp or {}) do extra[#extra + 1] = s end
+  if ref.offset ~= 0 then
+    extra[#extra + 1] = ("potential vs %s = E(SHE) - %s V"):format(ref.name, fmt_num(ref.offset))
+  end
+  if fills.conflicts > 0 then
+    extra[#extra + 1] = ("note: %d pairs of neighbouring fields share a lightness tier"):format(fills.conflicts)
+  end
+  add_stamp(fig, plot.stamp_lines(map.conditions, extra, w))
+  return finish(fig, opts, plot.defaults), fills
+end
+
+--- Corrosion domains (immunity, passivation, corrosion) as a figure of
+-- their own, with the field boundaries thin on top, water lines, neutral
+-- pH and a legend.  Uses map.domains, or derives them from the field kinds
+-- (see plot.domains_of).  opts as plot.map.
+function plot.domains(map, opts)
+  opts = opts or {}
+  plot.check_map(map, "plot.domains")
+  local ref = reference(opts, map)
+  local w, h = size(opts)
+  local fig = core.figure(w, h, 1, 1)
+  local win = window_of(map, ref)
+  fig:axes(1, win.x0, win.x1, win.y0, win.y1)
+  local t = fmt_T(celsius(map))
+  local title = opts.title or ((map.element and ("{%s}: corrosion domains"):format(map.element) or "corrosion domains")
+    .. (t and (" at " .. t) or ""))
+  fig:titles(1, x_title(map), y_title(map, ref), title)
+  local domains, derived = plot.domains_of(map)
+  local present = {}
+  for _, d in ipairs(domains) do
+    fig:polygon(1, d.x, shifted(d.y, ref.offset), palette.domain[d.domain], palette.ink, 0)
+    present[d.domain] = true
+  end
+  for _, b in ipairs(map.boundaries or {}) do
+    fig:line(1, b.x, shifted(b.y, ref.offset), palette.ink, 0.5, "solid")
+  end
+  if opts.labels ~= false then   -- species names, small, over the domains
+    for _, f in ipairs(map.fields) do
+      fig:polygon(1, f.x, shifted(f.y, ref.offset), { 1, 1, 1, 0 }, palette.ink, 0, f.species)
+    end
+  end
+  draw_water(fig, 1, map, win, ref, { color = palette.water, width = LINE_WATER, dash = "dashed" }, true)
+  draw_neutral(fig, 1, map, win)
+  for _, name in ipairs(DOMAINS) do
+    if present[name] then fig:legend_patch(1, name, palette.domain[name], palette.ink) end
+  end
+  fig:legend(1, opts.legend or "outside")
+  local extra = {}
+  for _, s in ipairs(map.stamp or {}) do extra[#extra + 1] = s end
+  if derived then
+    extra[#extra + 1] = "domains from field kinds: metal = immunity, solid = passivation, dissolved or gas = corrosion"
+  end
+  if ref.offset ~= 0 then
+    extra[#extra + 1] = ("potential vs %s = E(SHE) - %s V"):format(ref.name, fmt_num(ref.offset))
+  end
+  add_stamp(fig, plot.stamp_lines(map.conditions, extra, w))
+  return finish(fig, opts, plot.defaults)
+end
+
+-- Curves ---------------------------------------------------------------------
+
+local function range_of(series, key, log)
+  local lo, hi = math.huge, -math.huge
+  for _, s in ipairs(series) do
+    for _, v in ipairs(s[key]) do
+      if is_num(v) and (not log or v > 0) then lo, hi = math.min(lo, v), math.max(hi, v) end
+    end
+  end
+  if lo > hi then return nil end
+  if lo == hi then
+    if log then return lo / 10, hi * 10 end
+    return lo - 1, hi + 1
+  end
+  if log then   -- whole decades
+    return 10 ^ math.floor(math.log(lo, 10) + 1e-9), 10 ^ math.ceil(math.log(hi, 10) - 1e-9)
+  end
+  local pad = 0.03 * (hi - lo)
+  return lo - pad, hi + pad
+end
+
+-- Runs of consecutive drawable points (finite, and > 0 on a log axis).
+local function runs(xs, ys, xlog, ylog)
+  local out, cx, cy = {}, {}, {}
+  local function flush()
+    if #cx >= 2 then out[#out + 1] = { cx, cy } end
+    cx, cy = {}, {}
+  end
+  for i = 1, #xs do
+    local x, y = xs[i], ys[i]
+    if is_num(x) and is_num(y) and (not xlog or x > 0) and (not ylog or y > 0) then
+      cx[#cx + 1], cy[#cy + 1] = x, y
+    else
+      flush()
+    end
+  end
+  flush()
+  return out
+end
+
+local function legend_text(label, chem)
+  if chem == false or label:find("[%s{]") then return label end
+  return "{" .. label .. "}"
+end
+
+--- Curve plots (fractions, solubility, ...).
+-- series = { { x = {...}, y = {...}, label = "Fe^2+", style = "solid" |
+-- "dashed" | "dotted" | "dashdot", color = {r,g,b}, width = 1.2,
+-- chem = false }, ... }.  Labels without spaces are set as formulas.
+-- opts: x = { name, unit, min, max, log }, y = { ... }, title, legend =
+-- "outside" (default) | "top right" | ... | false, conditions, stamp, file,
+-- width, height, dpi.
+function plot.curves(series, opts)
+  opts = opts or {}
+  if type(series) ~= "table" or #series == 0 then error("plot.curves: series must be a non-empty list", 2) end
+  local ox, oy = opts.x or {}, opts.y or {}
+  for i, s in ipairs(series) do
+    if type(s.x) ~= "table" or type(s.y) ~= "table" or #s.x ~= #s.y then
+      error(("plot.curves: series[%d] needs x and y lists of equal length"):format(i), 2)
+    end
+  end
+  local x0, x1 = ox.min, ox.max
+  if not (x0 and x1) then
+    local a, b = range_of(series, "x", ox.log)
+    if not a then error("plot.curves: no drawable x values", 2) end
+    x0, x1 = x0 or a, x1 or b
+  end
+  local y0, y1 = oy.min, oy.max
+  if not (y0 and y1) then
+    local a, b = range_of(series, "y", oy.log)
+    if not a then error("plot.curves: no drawable y values (all <= 0 on a log axis?)", 2) end
+    y0, y1 = y0 or a, y1 or b
+  end
+  local w, h = size(opts)
+  local fig = core.figure(w, h, 1, 1)
+  fig:axes(1, x0, x1, y0, y1, ox.log, oy.log)
+  local function title_of(a, default)
+    local n = axis_name(a.name or default)
+    if a.unit and a.unit ~= "" then n = n .. " / " .. a.unit end
+    return n
+  end
+  fig:titles(1, title_of(ox, "x"), title_of(oy, "y"), opts.title)
+  for i, s in ipairs(series) do
+    local st = palette.series_style(i)
+    local color, dash, width = s.color or st.color, s.style or st.dash, s.width or 1.2
+    local legend = s.label and legend_text(s.label, s.chem) or nil
+    for k, r in ipairs(runs(s.x, s.y, ox.log, oy.log)) do
+      fig:line(1, r[1], r[2], color, width, dash, k == 1 and opts.legend ~= false and legend or nil)
+    end
+  end
+  if opts.legend ~= false then fig:legend(1, opts.legend or "outside") end
+  add_stamp(fig, plot.stamp_lines(opts.conditions, opts.stamp, w))
+  return finish(fig, opts, plot.defaults)
+end
+
+-- Grids and overlays ------------------------------------------------------------
+
+--- Several maps as panels of one figure (e.g. a temperature sweep), on
+-- shared axis ranges.  opts: cols (default: about square), panel_title =
+-- function(map, i) -> string (default: temperature and pressure), pages
+-- (PDF: one page per panel), and the options of plot.map (reference,
+-- domains, labels, file, width, height, dpi, stamp).
+function plot.grid(maps, opts)
+  opts = opts or {}
+  if type(maps) ~= "table" or #maps == 0 then error("plot.grid: maps must be a non-empty list", 2) end
+  for i, m in ipairs(maps) do plot.check_map(m, ("plot.grid: maps[%d]"):format(i)) end
+  local ref = reference(opts, maps[1])
+  local n = #maps
+  local cols = opts.cols or math.ceil(math.sqrt(n))
+  local rows = math.ceil(n / cols)
+  local w = opts.width or (plot.defaults.width * (cols > 1 and 0.75 * cols or 1))
+  local h = opts.height or (plot.defaults.height * (rows > 1 and 0.75 * rows or 1))
+  local fig = core.figure(w, h, rows, cols)
+  local win = opts.shared == false and nil or union_window(maps, ref)
+  local temps = {}
+  for i, m in ipairs(maps) do
+    local wi = win or window_of(m, ref)
+    fig:axes(i, wi.x0, wi.x1, wi.y0, wi.y1)
+    local title = opts.panel_title and opts.panel_title(m, i) or plot.map_title(m)
+    fig:titles(i, x_title(m), y_title(m, ref), title)
+    draw_map(fig, i, m, opts, wi, ref)
+    temps[#temps + 1] = fmt_T(celsius(m)) or "?"
+  end
+  local cond = {}
+  for k, v in pairs(maps[1].conditions or {}) do cond[k] = v end
+  cond.T_C = nil
+  local extra = { "panels at " .. table.concat(temps, ", ") }
+  for _, s in ipairs(maps[1].stamp or {}) do extra[#extra + 1] = s end
+  for _, s in ipairs(opts.stamp or {}) do extra[#extra + 1] = s end
+  if ref.offset ~= 0 then
+    extra[#extra + 1] = ("potential vs %s = E(SHE) - %s V"):format(ref.name, fmt_num(ref.offset))
+  end
+  add_stamp(fig, plot.stamp_lines(cond, extra, w))
+  return finish(fig, opts, plot.defaults)
+end
+
+--- The boundaries of several maps on one plot (temperatures, ligand
+-- levels), each map in its own colour and dash, with a legend.  The field
+-- labels of one map (opts.labels_of, default 1; false for none) are shown.
+-- opts: legend_label = function(map, i) -> string (default: map.label or
+-- the temperature), water = false to leave out water lines, title, and the
+-- options of plot.map.
+function plot.overlay(maps, opts)
+  opts = opts or {}
+  if type(maps) ~= "table" or #maps == 0 then error("plot.overlay: maps must be a non-empty list", 2) end
+  for i, m in ipairs(maps) do plot.check_map(m, ("plot.overlay: maps[%d]"):format(i)) end
+  local ref = reference(opts, maps[1])
+  local w, h = size(opts)
+  local fig = core.figure(w, h, 1, 1)
+  local win = union_window(maps, ref)
+  fig:axes(1, win.x0, win.x1, win.y0, win.y1)
+  local m1 = maps[1]
+  local title = opts.title or ((m1.element and ("{%s}–{H2O}: "):format(m1.element) or "") .. "overlaid boundaries")
+  fig:titles(1, x_title(m1), y_title(m1, ref), title)
+  local lab = opts.labels_of == nil and 1 or opts.labels_of
+  if lab and maps[lab] then
+    for _, f in ipairs(maps[lab].fields) do
+      fig:polygon(1, f.x, shifted(f.y, ref.offset), { 1, 1, 1, 0 }, palette.ink, 0, f.species)
+    end
+  end
+  local labels = {}
+  for i, m in ipairs(maps) do
+    local st = palette.series_style(i)
+    local label = opts.legend_label and opts.legend_label(m, i) or m.label or fmt_T(celsius(m)) or ("map " .. i)
+    labels[i] = label
+    local first = true
+    for _, b in ipairs(m.boundaries or {}) do
+      fig:line(1, b.x, shifted(b.y, ref.offset), st.color, 1.1, st.dash, first and label or nil)
+      first = false
+    end
+    if first then   -- no boundaries: outline the fields instead
+      for _, f in ipairs(m.fields) do
+        local xs, ys = { table.unpack(f.x) }, { table.unpack(shifted(f.y, ref.offset)) }
+        xs[#xs + 1], ys[#ys + 1] = xs[1], ys[1]
+        fig:line(1, xs, ys, st.color, 1.1, st.dash, first and label or nil)
+        first = false
+      end
+    end
+    if opts.water ~= false then
+      draw_water(fig, 1, m, win, ref, { color = st.color, width = 0.6, dash = "dashed" }, i == 1)
+    end
+  end
+  draw_neutral(fig, 1, m1, win)
+  fig:legend(1, opts.legend or "outside")
+  local extra = { "overlaid: " .. table.concat(labels, ", ") }
+  for _, s in ipairs(m1.stamp or {}) do extra[#extra + 1] = s end
+  for _, s in ipairs(opts.stamp or {}) do extra[#extra + 1] = s end
+  if ref.offset ~= 0 then
+    extra[#extra + 1] = ("potential vs %s = E(SHE) - %s V"):format(ref.name, fmt_num(ref.offset))
+  end
+  local cond = {}
+  for k, v in pairs(m1.conditions or {}) do cond[k] = v end
+  if #maps > 1 then cond.T_C = nil end
+  add_stamp(fig, plot.stamp_lines(cond, extra, w))
+  return finish(fig, opts, plot.defaults)
+end
+
+return plot
