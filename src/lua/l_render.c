@@ -158,7 +158,7 @@ static int f_hatch(lua_State *L)
     return 0;
 }
 
-/* fig:legend_patch(panel, text, fill [, stroke [, hatch]]) */
+/* fig:legend_patch(panel, text, fill [, stroke [, hatch [, angle]]]) */
 static int f_legend_patch(lua_State *L)
 {
     px_figure *f = checkfig(L);
@@ -166,8 +166,8 @@ static int f_legend_patch(lua_State *L)
     const char *text = luaL_checkstring(L, 3);
     px_rgba fill = checkcolor(L, 4);
     px_rgba stroke = lua_isnoneornil(L, 5) ? (px_rgba){0.3, 0.3, 0.3, 1} : checkcolor(L, 5);
-    double hatch = luaL_optnumber(L, 6, 0);
-    status_error(L, px_figure_legend_patch(f, panel, text, fill, stroke, hatch),
+    double hatch = luaL_optnumber(L, 6, 0), angle = luaL_optnumber(L, 7, 45.0);
+    status_error(L, px_figure_legend_patch(f, panel, text, fill, stroke, hatch, angle),
                  "figure:legend_patch");
     return 0;
 }

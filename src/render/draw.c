@@ -33,6 +33,8 @@
 #define PX_LEGEND_SIZE 7.5
 #define PX_LEGEND_SWATCH 18.0 /* legend sample length */
 #define PX_LEGEND_INSET 6.0   /* legend box distance from the frame */
+#define PX_HALO_WIDTH 2.2     /* light outline behind labels in the plot */
+#define PX_HALO_ALPHA 0.75
 #define PX_ASCENT 0.8         /* baseline below a text box's top, fraction of its height */
 #define PX_PDF_FIXED_DATE "2000-01-01T00:00:00Z" /* pinned: same input, same bytes */
 
@@ -355,7 +357,8 @@ static void draw_field_label(cairo_t *cr, const px_panel *p, rect r, const px_it
         double w, h;
         px_text_measure(cr, it->text, 1, s, &w, &h);
         if (box_inside(dx, dy, n, cx, cy, w + 2, h)) {
-            px_text_draw(cr, it->text, 1, s, cx - w / 2, cy + h * 0.3);
+            px_text_draw_halo(cr, it->text, 1, s, cx - w / 2, cy + h * 0.3, PX_HALO_WIDTH, 1, 1, 1,
+                              PX_HALO_ALPHA);
             free(dx);
             free(dy);
             return;
@@ -418,7 +421,7 @@ static void draw_swatch(cairo_t *cr, const px_item *it, double x, double y)
         cairo_rectangle(cr, b.x, b.y, b.w, b.h);
         cairo_clip(cr);
         cairo_set_line_width(cr, 0.6);
-        hatch_box(cr, b, it->spacing, 45);
+        hatch_box(cr, b, it->spacing, it->angle);
         cairo_restore(cr);
     }
     cairo_set_line_width(cr, it->width);
@@ -510,7 +513,8 @@ static void draw_panel(cairo_t *cr, const px_panel *p, rect r, rect cell)
             double x = map_x(p, r, it->lx), y = map_y(p, r, it->ly);
             x = fmin(fmax(x, r.x + 1), r.x + r.w - w - 1); /* keep inside the plot */
             y = fmin(fmax(y, r.y + h * PX_ASCENT + 1), r.y + r.h - h * 0.25 - 1);
-            px_text_draw(cr, it->text, it->chem, it->width, x, y);
+            px_text_draw_halo(cr, it->text, it->chem, it->width, x, y, PX_HALO_WIDTH, 1, 1, 1,
+                              PX_HALO_ALPHA);
         }
     }
     if (p->legend != PX_LEGEND_OUTSIDE) draw_legend(cr, p, r);

@@ -249,10 +249,11 @@ int px_figure_hatch(px_figure *f, int panel, const double *x, const double *y, s
 }
 
 int px_figure_legend_patch(px_figure *f, int panel, const char *text, px_rgba fill,
-                           px_rgba stroke, double hatch)
+                           px_rgba stroke, double hatch, double angle)
 {
     px_panel *p = panel_of(f, panel);
-    if (!p || !text || !valid_color(fill) || !valid_color(stroke) || !(hatch >= 0 && hatch < 100))
+    if (!p || !text || !valid_color(fill) || !valid_color(stroke) || !(hatch >= 0 && hatch < 100) ||
+        !isfinite(angle))
         return PX_EINVAL;
     px_item *it = new_item(p);
     if (!it) return PX_ENOMEM;
@@ -262,6 +263,7 @@ int px_figure_legend_patch(px_figure *f, int panel, const char *text, px_rgba fi
     it->color = stroke;
     it->width = 0.6;
     it->spacing = hatch;
+    it->angle = angle;
     p->n_items++;
     return PX_OK;
 }

@@ -74,9 +74,10 @@ int px_figure_text(px_figure *fig, int panel, double x, double y, const char *te
 int px_figure_hatch(px_figure *fig, int panel, const double *x, const double *y, size_t n,
                     px_rgba color, double width, double spacing, double angle);
 /* A legend entry with a filled swatch (outlined in `stroke`; hatch > 0 adds
- * hatching in the stroke colour that many points apart). */
+ * hatching in the stroke colour that many points apart at `angle` degrees,
+ * as px_figure_hatch). */
 int px_figure_legend_patch(px_figure *fig, int panel, const char *text, px_rgba fill,
-                           px_rgba stroke, double hatch);
+                           px_rgba stroke, double hatch, double angle);
 /* The panel's legend position (default PX_LEGEND_TOP_RIGHT). */
 int px_figure_legend_place(px_figure *fig, int panel, px_legend_place where);
 /* A line of the stamp at the foot of the figure (conditions, checksums). */

@@ -133,7 +133,8 @@ static int split_text(const char *text, int chem, run *runs)
     return nr;
 }
 
-/* Walk the runs; draw when `draw` is set; return the advance width. */
+/* Walk the runs; draw = 0 measures, 1 shows the text, 2 adds its outline to
+ * the path; returns the advance width. */
 static double layout(cairo_t *cr, const char *text, int chem, double size, double x, double y,
                      int draw)
 {
@@ -149,7 +150,8 @@ static double layout(cairo_t *cr, const char *text, int chem, double size, doubl
         cairo_text_extents(cr, runs[i].text, &te);
         if (draw) {
             cairo_move_to(cr, x + adv, y + dy);
-            cairo_show_text(cr, runs[i].text);
+            if (draw == 2) cairo_text_path(cr, runs[i].text);
+            else cairo_show_text(cr, runs[i].text);
         }
         adv += te.x_advance;
     }
@@ -168,6 +170,21 @@ void px_text_measure(cairo_t *cr, const char *text, int chem, double size, doubl
 void px_text_draw(cairo_t *cr, const char *text, int chem, double size, double x, double y)
 {
     layout(cr, text, chem, size, x, y, 1);
+}
+
+void px_text_draw_halo(cairo_t *cr, const char *text, int chem, double size, double x, double y,
+                       double halo_width, double r, double g, double b, double a)
+{
+    cairo_save(cr);
+    cairo_new_path(cr);
+    layout(cr, text, chem, size, x, y, 2);
+    cairo_set_source_rgba(cr, r, g, b, a);
+    cairo_set_line_width(cr, halo_width);
+    cairo_set_line_join(cr, CAIRO_LINE_JOIN_ROUND);
+    cairo_set_dash(cr, NULL, 0, 0);
+    cairo_stroke(cr);
+    cairo_restore(cr);
+    layout(cr, text, chem, size, x, y, 1); /* real text on top: stays text in PDF */
 }
 
 void px_text_draw_vertical(cairo_t *cr, const char *text, double size, double x, double y)

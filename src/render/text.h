@@ -17,6 +17,10 @@ void px_text_prepare(cairo_t *cr);
 cairo_t *px_text_scratch(void);
 /* Draw with the left end of the baseline at (x, y). */
 void px_text_draw(cairo_t *cr, const char *text, int chem, double size, double x, double y);
+/* Draw over a halo: the glyph outlines stroked `halo_width` wide in the
+ * colour (r, g, b, a) first, so text stays legible over lines and hatching. */
+void px_text_draw_halo(cairo_t *cr, const char *text, int chem, double size, double x, double y,
+                       double halo_width, double r, double g, double b, double a);
 /* Draw rotated by -90 degrees (for the y axis title), centred on (x, y). */
 void px_text_draw_vertical(cairo_t *cr, const char *text, double size, double x, double y);
 

@@ -255,14 +255,62 @@ local function shifted(ys, offset)
   return out
 end
 
--- Where a straight line y = f(x) runs inside the window (with a margin),
--- the first x from the left, or nil.
-local function first_inside(f, x0, x1, y0, y1)
-  for k = 2, 60 do
-    local x = x0 + (x1 - x0) * k / 62
-    local y = f(x)
-    if y > y0 + 0.04 * (y1 - y0) and y < y1 - 0.1 * (y1 - y0) then return x, y end
+-- Small labels (water lines, neutral pH) go where they keep clear of the
+-- field labels, which the renderer puts near each field's pole of
+-- inaccessibility.  Work in a frame where the plot is about `aspect` wide
+-- and 1 high, as the renderer sees it.
+local PLOT_MARGIN_W, PLOT_MARGIN_H = 70, 100   -- rough room for axes and stamp, points
+
+local function frame(win, fig_w, fig_h)
+  local aspect = math.max(fig_w - PLOT_MARGIN_W, 50) / math.max(fig_h - PLOT_MARGIN_H, 50)
+  local sx, sy = aspect / (win.x1 - win.x0), 1 / (win.y1 - win.y0)
+  return function(x, y) return (x - win.x0) * sx, (y - win.y0) * sy end,
+         math.max(fig_h - PLOT_MARGIN_H, 50)   -- points per frame unit
+end
+
+local function field_poles(map, win, ref, to_frame)
+  local poles = {}
+  for _, f in ipairs(map.fields) do
+    local xs, ys = {}, {}
+    for i = 1, #f.x do
+      local x = math.min(math.max(f.x[i], win.x0), win.x1)
+      local y = math.min(math.max(f.y[i] - ref.offset, win.y0), win.y1)
+      xs[i], ys[i] = to_frame(x, y)
+    end
+    local ok, px, py = pcall(core.polygon_pole, xs, ys, 1e-3)
+    if ok then poles[#poles + 1] = { px, py } end
   end
+  return poles
+end
+
+-- Of the candidate boxes {x, y, w, h} (frame units, (x, y) the lower left),
+-- the one whose centre is farthest from every pole.
+local function placement(map, win, ref, cell_w, cell_h)
+  local to_frame, unit = frame(win, cell_w, cell_h)
+  local poles = field_poles(map, win, ref, to_frame)
+  local n = map.neutral_pH
+  if n and is_pH(map.x) and n > win.x0 and n < win.x1 then   -- keep labels off the dotted line
+    for k = 0, 10 do
+      local fx, fy = to_frame(n, win.y0 + (win.y1 - win.y0) * k / 10)
+      poles[#poles + 1] = { fx, fy }
+    end
+  end
+  return { to_frame = to_frame, unit = unit, poles = poles }
+end
+
+local function clearest(cands, poles)
+  local best, bscore
+  for _, c in ipairs(cands) do
+    local cx, cy = c[1] + c[3] / 2, c[2] + c[4] / 2
+    local score = math.huge
+    for _, p in ipairs(poles) do
+      -- distance measured in label sizes, so wide labels keep wider berth
+      local dx, dy = (cx - p[1]) / (c[3] / 2 + 0.08), (cy - p[2]) / (c[4] / 2 + 0.04)
+      score = math.min(score, dx * dx + dy * dy)
+    end
+    if not bscore or score > bscore then best, bscore = c, score end
+  end
+  return best
 end
 
 local function window_of(map, ref)
@@ -314,7 +362,7 @@ local DOMAIN_HATCH = {
 
 -- Drawing a map into a panel -------------------------------------------------
 
-local function draw_water(fig, panel, map, win, ref, style, labelled)
+local function draw_water(fig, panel, map, win, ref, style, labelled, place)
   if not (map.water and is_pH(map.x)) then return end
   local lines = {
     { map.water.o2, "O2/H2O" },
@@ -326,24 +374,55 @@ local function draw_water(fig, panel, map, win, ref, style, labelled)
       local function E(x) return w.a + w.b * x - ref.offset end
       fig:line(panel, { win.x0, win.x1 }, { E(win.x0), E(win.x1) }, style.color, style.width,
                style.dash, style.legend)
-      if labelled then
-        local x, y = first_inside(E, win.x0, win.x1, win.y0, win.y1)
-        if x then
-          fig:text(panel, x, y + 0.015 * (win.y1 - win.y0), l[2], true, SMALL_TEXT, style.color)
+      if labelled and place then
+        local tw = core.text_width(l[2], SMALL_TEXT, true) / place.unit
+        local th = SMALL_TEXT * 1.2 / place.unit
+        local cands = {}
+        for k = 1, 40 do   -- along the line, just above it, inside the window
+          local x = win.x0 + (win.x1 - win.x0) * (0.02 + 0.96 * (k - 1) / 39)
+          local y = E(x) + 0.012 * (win.y1 - win.y0)
+          local fx, fy = place.to_frame(x, y)
+          local x_end = place.to_frame(win.x1, y)
+          if fx + tw < x_end - 0.01 and fy > 0.03 and fy + th < 0.97 then
+            cands[#cands + 1] = { fx, fy, tw, th, x = x, y = y }
+          end
         end
+        local c = clearest(cands, place.poles)
+        if c then fig:text(panel, c.x, c.y, l[2], true, SMALL_TEXT, style.color) end
       end
     end
   end
 end
 
-local function draw_neutral(fig, panel, map, win)
+local function draw_neutral(fig, panel, map, win, place)
   local n = map.neutral_pH
   if not (n and is_pH(map.x) and n > win.x0 and n < win.x1) then return end
   fig:line(panel, { n, n }, { win.y0, win.y1 }, palette.neutral, LINE_NEUTRAL, "dotted")
   local t = fmt_T(celsius(map))
   local label = ("neutral pH %.2f%s"):format(n, t and (" at " .. t) or "")
-  fig:text(panel, n + 0.01 * (win.x1 - win.x0), win.y0 + 0.02 * (win.y1 - win.y0), label, false,
-           SMALL_TEXT, palette.neutral)
+  local dx = 0.01 * (win.x1 - win.x0)
+  local x, y = n + dx, win.y0 + 0.02 * (win.y1 - win.y0)
+  if place then   -- right or left of the line, at the foot or the top
+    local tw = core.text_width(label, SMALL_TEXT) / place.unit
+    local th = SMALL_TEXT * 1.2 / place.unit
+    local cands = {}
+    for _, yy in ipairs({ win.y0 + 0.02 * (win.y1 - win.y0), win.y1 - 0.06 * (win.y1 - win.y0) }) do
+      local fx, fy = place.to_frame(n, yy)
+      local x_end = place.to_frame(win.x1, yy)
+      if fx + 0.01 + tw < x_end then cands[#cands + 1] = { fx + 0.01, fy, tw, th, x = n + dx, y = yy } end
+      if fx - 0.01 - tw > 0 then
+        cands[#cands + 1] = { fx - 0.01 - tw, fy, tw, th, x = n - dx - tw * (win.x1 - win.x0) / x_end, y = yy }
+      end
+    end
+    local c = clearest(cands, place.poles)
+    if c then
+      x, y = c.x, c.y
+      for k = 0, 4 do   -- later labels keep off this one
+        place.poles[#place.poles + 1] = { c[1] + c[3] * k / 4, c[2] + c[4] / 2 }
+      end
+    end
+  end
+  fig:text(panel, x, y, label, false, SMALL_TEXT, palette.neutral)
 end
 
 local function draw_domain_overlay(fig, panel, map, ref, mode)
@@ -367,7 +446,8 @@ local function draw_domain_overlay(fig, panel, map, ref, mode)
         fig:legend_patch(panel, name, { c[1], c[2], c[3], 0.45 }, palette.domain_ink)
       else
         local h = DOMAIN_HATCH[name]
-        fig:legend_patch(panel, name, { 1, 1, 1 }, palette.domain_ink, h and h.spacing or 0)
+        fig:legend_patch(panel, name, { 1, 1, 1 }, palette.domain_ink, h and h.spacing or 0,
+                         h and h.angle or 0)
       end
     end
   end
@@ -375,7 +455,7 @@ local function draw_domain_overlay(fig, panel, map, ref, mode)
 end
 
 -- Fields, boundaries, water, neutral pH and (optionally) domains of one map.
-local function draw_map(fig, panel, map, opts, win, ref)
+local function draw_map(fig, panel, map, opts, win, ref, cell_w, cell_h)
   local fills = palette.map_fills(map)
   local outline = (map.boundaries == nil or #map.boundaries == 0) and LINE_BOUNDARY or 0
   for i, f in ipairs(map.fields) do
@@ -387,9 +467,10 @@ local function draw_map(fig, panel, map, opts, win, ref)
   for _, b in ipairs(map.boundaries or {}) do
     fig:line(panel, b.x, shifted(b.y, ref.offset), palette.ink, LINE_BOUNDARY, "solid")
   end
+  local place = placement(map, win, ref, cell_w, cell_h)
+  draw_neutral(fig, panel, map, win, place)
   draw_water(fig, panel, map, win, ref,
-             { color = palette.water, width = LINE_WATER, dash = "dashed" }, true)
-  draw_neutral(fig, panel, map, win)
+             { color = palette.water, width = LINE_WATER, dash = "dashed" }, true, place)
   return fills
 end
 
@@ -427,7 +508,7 @@ function plot.map(map, opts)
   local win = window_of(map, ref)
   fig:axes(1, win.x0, win.x1, win.y0, win.y1)
   fig:titles(1, x_title(map), y_title(map, ref), opts.title or plot.map_title(map))
-  local fills = draw_map(fig, 1, map, opts, win, ref)
+  local fills = draw_map(fig, 1, map, opts, win, ref, w, h)
   local extra = {}
   for _, s in ipairs(map.stamp or {}) do extra[#extra + 1] = s end
   for _, s in ipairs(opts.stamp or {}) do extra[#extra + 1] = s end
@@ -471,8 +552,9 @@ function plot.domains(map, opts)
       fig:polygon(1, f.x, shifted(f.y, ref.offset), { 1, 1, 1, 0 }, palette.ink, 0, f.species)
     end
   end
-  draw_water(fig, 1, map, win, ref, { color = palette.water, width = LINE_WATER, dash = "dashed" }, true)
-  draw_neutral(fig, 1, map, win)
+  local place = placement(map, win, ref, w - 80, h)   -- the legend sits outside
+  draw_neutral(fig, 1, map, win, place)
+  draw_water(fig, 1, map, win, ref, { color = palette.water, width = LINE_WATER, dash = "dashed" }, true, place)
   for _, name in ipairs(DOMAINS) do
     if present[name] then fig:legend_patch(1, name, palette.domain[name], palette.ink) end
   end
@@ -491,7 +573,7 @@ end
 
 -- Curves ---------------------------------------------------------------------
 
-local function range_of(series, key, log)
+local function range_of(series, key, log, pad_frac)
   local lo, hi = math.huge, -math.huge
   for _, s in ipairs(series) do
     for _, v in ipairs(s[key]) do
@@ -506,7 +588,7 @@ local function range_of(series, key, log)
   if log then   -- whole decades
     return 10 ^ math.floor(math.log(lo, 10) + 1e-9), 10 ^ math.ceil(math.log(hi, 10) - 1e-9)
   end
-  local pad = 0.03 * (hi - lo)
+  local pad = (pad_frac or 0) * (hi - lo)
   return lo - pad, hi + pad
 end
 
@@ -558,7 +640,7 @@ function plot.curves(series, opts)
   end
   local y0, y1 = oy.min, oy.max
   if not (y0 and y1) then
-    local a, b = range_of(series, "y", oy.log)
+    local a, b = range_of(series, "y", oy.log, 0.03)
     if not a then error("plot.curves: no drawable y values (all <= 0 on a log axis?)", 2) end
     y0, y1 = y0 or a, y1 or b
   end
@@ -609,7 +691,7 @@ function plot.grid(maps, opts)
     fig:axes(i, wi.x0, wi.x1, wi.y0, wi.y1)
     local title = opts.panel_title and opts.panel_title(m, i) or plot.map_title(m)
     fig:titles(i, x_title(m), y_title(m, ref), title)
-    draw_map(fig, i, m, opts, wi, ref)
+    draw_map(fig, i, m, opts, wi, ref, w / cols, h / rows)
     temps[#temps + 1] = fmt_T(celsius(m)) or "?"
   end
   local cond = {}
@@ -649,6 +731,8 @@ function plot.overlay(maps, opts)
       fig:polygon(1, f.x, shifted(f.y, ref.offset), { 1, 1, 1, 0 }, palette.ink, 0, f.species)
     end
   end
+  local place = placement(maps[lab or 1] or m1, win, ref, w - 80, h)
+  draw_neutral(fig, 1, m1, win, place)
   local labels = {}
   for i, m in ipairs(maps) do
     local st = palette.series_style(i)
@@ -668,10 +752,9 @@ function plot.overlay(maps, opts)
       end
     end
     if opts.water ~= false then
-      draw_water(fig, 1, m, win, ref, { color = st.color, width = 0.6, dash = "dashed" }, i == 1)
+      draw_water(fig, 1, m, win, ref, { color = st.color, width = 0.6, dash = "dashed" }, i == 1, place)
     end
   end
-  draw_neutral(fig, 1, m1, win)
   fig:legend(1, opts.legend or "outside")
   local extra = { "overlaid: " .. table.concat(labels, ", ") }
   for _, s in ipairs(m1.stamp or {}) do extra[#extra + 1] = s end
