@@ -33,6 +33,7 @@
 #define PX_LEGEND_SIZE 7.5
 #define PX_LEGEND_SWATCH 18.0 /* legend sample length */
 #define PX_LEGEND_INSET 6.0   /* legend box distance from the frame */
+#define PX_LEGEND_MAX_FRAC 0.35 /* widest legend, fraction of the panel's cell */
 #define PX_HALO_WIDTH 2.2     /* light outline behind labels in the plot */
 #define PX_HALO_ALPHA 0.75
 #define PX_ASCENT 0.8         /* baseline below a text box's top, fraction of its height */
@@ -68,6 +69,26 @@ static double fit_size(cairo_t *m, const char *s, int chem, double size, double 
     if (w <= avail || w <= 0) return size;
     double fs = size * avail / w;
     return fs < min ? min : fs;
+}
+
+/* Text that fits `avail` points at `size`: s itself, or a copy in buf cut
+ * at a UTF-8 character boundary and ended with an ellipsis, so text is
+ * never cut off silently at the figure's edge. */
+#define PX_FIT_MAX 512
+static const char *fit_text(cairo_t *m, const char *s, int chem, double size, double avail,
+                            char *buf)
+{
+    if (text_w(m, s, chem, size) <= avail) return s;
+    size_t n = strlen(s);
+    if (n > PX_FIT_MAX - 4) n = PX_FIT_MAX - 4;
+    while (n > 0) {
+        n--;
+        while (n > 0 && ((unsigned char)s[n] & 0xC0) == 0x80) n--; /* continuation byte */
+        memcpy(buf, s, n);
+        memcpy(buf + n, "\xe2\x80\xa6", 4); /* U+2026 and the terminator */
+        if (text_w(m, buf, chem, size) <= avail) return buf;
+    }
+    return buf;
 }
 
 /* Tick label text: enough decimals for the step, a true minus sign; log
@@ -136,7 +157,9 @@ static int in_legend(const px_item *it)
     return (it->kind == PX_ITEM_LINE && it->text) || it->kind == PX_ITEM_PATCH;
 }
 
-static size_t legend_box(cairo_t *m, const px_panel *p, double *bw, double *bh, double *line)
+/* The legend's box; entries longer than `cap` points are cut (fit_text). */
+static size_t legend_box(cairo_t *m, const px_panel *p, double cap, double *bw, double *bh,
+                         double *line)
 {
     size_t count = 0;
     double wmax = 0, h = text_h(m, PX_LEGEND_SIZE);
@@ -145,6 +168,7 @@ static size_t legend_box(cairo_t *m, const px_panel *p, double *bw, double *bh, 
             wmax = fmax(wmax, text_w(m, p->items[i].text, 0, PX_LEGEND_SIZE));
             count++;
         }
+    wmax = fmin(wmax, cap);
     *line = h + 2;
     *bw = wmax + PX_LEGEND_SWATCH + 12;
     *bh = (double)count * *line + 6;
@@ -156,7 +180,12 @@ typedef struct margins {
 } margins;
 
 /* The room a panel needs around its plot for ticks, titles and legend. */
-static margins panel_margins(cairo_t *m, const px_panel *p)
+static double legend_cap(double cell_w)
+{
+    return PX_LEGEND_MAX_FRAC * cell_w - PX_LEGEND_SWATCH - 12;
+}
+
+static margins panel_margins(cairo_t *m, const px_panel *p, double cell_w)
 {
     double t[PX_MAX_TICKS + 8], ywmax = 0, xwmax = 0;
     size_t ny = axis_ticks(m, p, 1, 0, t, &ywmax);
@@ -179,7 +208,7 @@ static margins panel_margins(cairo_t *m, const px_panel *p)
     g.top = p->title ? text_h(m, PX_PANEL_TITLE_SIZE) + 2 * PX_GAP : th / 2 + PX_PAD;
     g.bottom = PX_GAP + th + (p->xlabel ? PX_GAP + ah : 0) + PX_PAD;
     double bw, bh, line;
-    if (p->legend == PX_LEGEND_OUTSIDE && legend_box(m, p, &bw, &bh, &line) > 0)
+    if (p->legend == PX_LEGEND_OUTSIDE && legend_box(m, p, legend_cap(cell_w), &bw, &bh, &line) > 0)
         g.right += bw + PX_LEGEND_INSET;
     return g;
 }
@@ -191,10 +220,10 @@ static rect plot_rect_m(const px_figure *f, cairo_t *m, int panel, int alone)
     double fw = f->width, fh = f->height - foot_height(f);
     double cw = alone ? fw : fw / f->cols, ch = alone ? fh : fh / f->rows;
     int r = alone ? 0 : panel / f->cols, c = alone ? 0 : panel % f->cols;
-    margins g = panel_margins(m, &f->panels[panel]);
+    margins g = panel_margins(m, &f->panels[panel], cw);
     if (!alone)
         for (int i = 0; i < f->rows * f->cols; i++) {
-            margins o = panel_margins(m, &f->panels[i]);
+            margins o = panel_margins(m, &f->panels[i], cw);
             g.left = fmax(g.left, o.left);
             g.right = fmax(g.right, o.right);
             g.top = fmax(g.top, o.top);
@@ -302,21 +331,28 @@ static void draw_axes(cairo_t *cr, const px_panel *p, rect r, rect cell)
         double w = text_w(cr, buf, 0, PX_TICK_SIZE);
         px_text_draw(cr, buf, 0, PX_TICK_SIZE, r.x - PX_GAP - w, y + th * 0.3);
     }
+    char cut[PX_FIT_MAX];
     if (p->xlabel) {
-        double s = fit_size(cr, p->xlabel, 0, PX_AXIS_TITLE_SIZE, PX_TITLE_MIN, cell.w - 2 * PX_PAD);
-        double w = text_w(cr, p->xlabel, 0, s);
+        double avail = cell.w - 2 * PX_PAD;
+        double s = fit_size(cr, p->xlabel, 0, PX_AXIS_TITLE_SIZE, PX_TITLE_MIN, avail);
+        const char *t = fit_text(cr, p->xlabel, 0, s, avail, cut);
+        double w = text_w(cr, t, 0, s);
         double x = fmin(fmax(r.x + r.w / 2 - w / 2, cell.x + PX_PAD), cell.x + cell.w - PX_PAD - w);
-        px_text_draw(cr, p->xlabel, 0, s, x, r.y + r.h + 2 * PX_GAP + th + ah * PX_ASCENT);
+        px_text_draw(cr, t, 0, s, x, r.y + r.h + 2 * PX_GAP + th + ah * PX_ASCENT);
     }
     if (p->ylabel) {
-        double s = fit_size(cr, p->ylabel, 0, PX_AXIS_TITLE_SIZE, PX_TITLE_MIN, r.h);
-        px_text_draw_vertical(cr, p->ylabel, s, r.x - 2 * PX_GAP - wmax - ah / 2, r.y + r.h / 2);
+        double avail = fmin(r.h + r.y - cell.y - PX_PAD, cell.h - 2 * PX_PAD);
+        double s = fit_size(cr, p->ylabel, 0, PX_AXIS_TITLE_SIZE, PX_TITLE_MIN, avail);
+        px_text_draw_vertical(cr, fit_text(cr, p->ylabel, 0, s, avail, cut), s,
+                              r.x - 2 * PX_GAP - wmax - ah / 2, r.y + r.h / 2);
     }
     if (p->title) {
-        double s = fit_size(cr, p->title, 0, PX_PANEL_TITLE_SIZE, PX_TITLE_MIN, cell.w - 2 * PX_PAD);
-        double w = text_w(cr, p->title, 0, s);
+        double avail = cell.w - 2 * PX_PAD;
+        double s = fit_size(cr, p->title, 0, PX_PANEL_TITLE_SIZE, PX_TITLE_MIN, avail);
+        const char *t = fit_text(cr, p->title, 0, s, avail, cut);
+        double w = text_w(cr, t, 0, s);
         double x = fmin(fmax(r.x + r.w / 2 - w / 2, cell.x + PX_PAD), cell.x + cell.w - PX_PAD - w);
-        px_text_draw(cr, p->title, 0, s, x, r.y - PX_GAP - text_h(cr, s) * 0.25);
+        px_text_draw(cr, t, 0, s, x, r.y - PX_GAP - text_h(cr, s) * 0.25);
     }
 }
 
@@ -429,10 +465,11 @@ static void draw_swatch(cairo_t *cr, const px_item *it, double x, double y)
     cairo_stroke(cr);
 }
 
-static void draw_legend(cairo_t *cr, const px_panel *p, rect r)
+static void draw_legend(cairo_t *cr, const px_panel *p, rect r, rect cell)
 {
-    double bw, bh, line;
-    if (!legend_box(cr, p, &bw, &bh, &line)) return;
+    double bw, bh, line, cap = legend_cap(cell.w);
+    char cut[PX_FIT_MAX];
+    if (!legend_box(cr, p, cap, &bw, &bh, &line)) return;
     double h = text_h(cr, PX_LEGEND_SIZE), bx, by;
     switch (p->legend) {
     case PX_LEGEND_TOP_LEFT: bx = r.x + PX_LEGEND_INSET, by = r.y + PX_LEGEND_INSET; break;
@@ -457,7 +494,8 @@ static void draw_legend(cairo_t *cr, const px_panel *p, rect r)
         double y = by + 3 + line * ((double)k + 0.5);
         draw_swatch(cr, it, bx + 4, y);
         cairo_set_source_rgb(cr, 0, 0, 0);
-        px_text_draw(cr, it->text, 0, PX_LEGEND_SIZE, bx + PX_LEGEND_SWATCH + 8, y + h * 0.3);
+        px_text_draw(cr, fit_text(cr, it->text, 0, PX_LEGEND_SIZE, cap, cut), 0, PX_LEGEND_SIZE,
+                     bx + PX_LEGEND_SWATCH + 8, y + h * 0.3);
         k++;
     }
 }
@@ -517,9 +555,9 @@ static void draw_panel(cairo_t *cr, const px_panel *p, rect r, rect cell)
                               PX_HALO_ALPHA);
         }
     }
-    if (p->legend != PX_LEGEND_OUTSIDE) draw_legend(cr, p, r);
+    if (p->legend != PX_LEGEND_OUTSIDE) draw_legend(cr, p, r, cell);
     cairo_restore(cr);
-    if (p->legend == PX_LEGEND_OUTSIDE) draw_legend(cr, p, r);
+    if (p->legend == PX_LEGEND_OUTSIDE) draw_legend(cr, p, r, cell);
     draw_axes(cr, p, r, cell);
 }
 
@@ -528,8 +566,11 @@ static void draw_stamp(cairo_t *cr, const px_figure *f)
     cairo_set_source_rgb(cr, 0.3, 0.3, 0.3);
     double y0 = f->height - foot_height(f) + 3;
     for (size_t k = 0; k < f->n_stamp; k++) {
-        double s = fit_size(cr, f->stamp[k], 0, PX_STAMP_SIZE, PX_STAMP_MIN, f->width - 2 * PX_PAD);
-        px_text_draw(cr, f->stamp[k], 0, s, PX_PAD, y0 + PX_STAMP_LINE * ((double)k + 1) - 2);
+        char cut[PX_FIT_MAX];
+        double avail = f->width - 2 * PX_PAD;
+        double s = fit_size(cr, f->stamp[k], 0, PX_STAMP_SIZE, PX_STAMP_MIN, avail);
+        px_text_draw(cr, fit_text(cr, f->stamp[k], 0, s, avail, cut), 0, s, PX_PAD,
+                     y0 + PX_STAMP_LINE * ((double)k + 1) - 2);
     }
 }
 
