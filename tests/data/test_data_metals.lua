@@ -13,7 +13,7 @@
 --     uses only species defined in the same file or built in;
 --  3. dfG = dfH - T dfS for every record that carries G, H and S, with CODATA 1989
 --     element entropies (tolerance 1.5 kJ/mol, from the data brief);
---  4. transcription: G, H, S and Cp(298.15 K) against the rows of the shared reference
+--  4. copies of reference rows: G, H, S and Cp(298.15 K) against the rows of the shared reference
 --     gibbs_25C.csv for the table each file says it uses; HKF parameters against
 --     hkf/hkf_parameters.csv, and Cp and V at 25 C recomputed from them against the
 --     published Cp and V of that table (revised HKF, Tanger and Helgeson 1988);
@@ -382,9 +382,9 @@ for _, f in ipairs(order) do
   end
 end
 
----------------------------------------------------------------------------- 4. transcription
+---------------------------------------------------------------------------- 4. copies of reference rows
 -- Which reference row each record is said to come from (source field of the file).
-local TRANSCRIBED = {
+local COPIED_FROM = {
   { "Al^3+", "Al+3", "aq", "CODATA" }, { "Al2O3(s,corundum)", "Al2O3", "cr", "CODATA" },
   { "Al(OH)3(s,gibbsite)", "Al(OH)3", "cr", "RH" }, { "Al(s)", "Al", "cr", "NBS", cp_only = true },
   { "Pb(s)", "Pb", "cr", "NBS", cp_only = true }, { "Pb^2+", "Pb+2", "aq", "NBS" },
@@ -396,9 +396,9 @@ local function cp298(sp)
   local c = sp.cp
   return c.a + (c.b or 0) * T0 + (c.c or 0) / T0 ^ 2 + (c.d or 0) / math.sqrt(T0) + (c.e or 0) * T0 ^ 2
 end
-for _, t in ipairs(TRANSCRIBED) do
+for _, t in ipairs(COPIED_FROM) do
   local sp, row = species[t[1]], gibbs_row(t[2], t[3], t[4])
-  if not sp or not row then fail("transcription " .. t[1] .. ": record or reference row missing")
+  if not sp or not row then fail("reference-row copy " .. t[1] .. ": record or reference row missing")
   else
     local tag = string.format("%s vs gibbs_25C.csv %s,%s (%s row)", t[1], t[2], t[3], t[4])
     if not t.cp_only then
