@@ -328,10 +328,11 @@ return {
       note = "recalled values close the cycle only to 0.9 kJ/mol; dehydrates at 32.4 C; Cp not recalled",
     },
     {
-      formula = "K2SO4(s,arcanite)", model = "cp",
-      G = -1321.37, H = -1437.79, S = 175.56, cp = { a = 131.46 },
-      source = NBS, quality = "medium",
-      note = "recalled values close the cycle only to 1.3 kJ/mol; Cp held at its 25 C value",
+      formula = "K2SO4(s,arcanite)", model = "logk",
+      reaction = "K2SO4(s,arcanite) = 2 K^+ + SO4^2-", logK = -1.776,
+      source = "from memory of compiled mineral solubility constants (USGS compilations after Nordstrom et al. 1990; primary paper not recalled)",
+      quality = "medium",
+      note = "written by log K: NBS 1982 arcanite (-1321.37, -1437.79, 175.56; cycle off by 1.3 kJ/mol) is consistent with NBS K^+ (-283.27) but gives -2.10 with SH88/CODATA K^+ (-282.5), which the K file is expected to carry; dH not recalled",
     },
     {
       formula = "KFe3(SO4)2(OH)6(s,jarosite)", model = "logk",
