@@ -319,10 +319,13 @@ int px_water_sat_solve(double T, double *P_pa, double *rho_l, double *rho_v)
         dl = ndl;
         dv = ndv;
         if (fabs(stepl) <= SAT_EPSREL * dl && fabs(stepv) <= SAT_EPSREL * dv) {
+            /* The pressure is taken on the vapour side: on the liquid side
+             * 1 + delta phir_d is a difference of numbers near 1 that cancel
+             * to ~1e-6 at low T, which leaves ~1e-8 relative noise in P. */
             px_water_helmholtz h;
-            px_water_phir_eval(dl, tau, &h);
+            px_water_phir_eval(dv, tau, &h);
             double rl = dl * PX_WATER_RHOC;
-            double p = rl * PX_WATER_R * T * (1.0 + dl * h.phir_d);
+            double p = dv * PX_WATER_RHOC * PX_WATER_R * T * (1.0 + dv * h.phir_d);
             if (!isfinite(p) || p <= 0) return PX_ENOCONV;
             if (P_pa) *P_pa = p;
             if (rho_l) *rho_l = rl;
@@ -377,7 +380,13 @@ int px_water_density_solve(double T, double P_pa, double guess, const px_water_o
                 if (stats) *stats = (px_water_stats){it, bis, 0.0};
                 return PX_OK;
             }
-            xn = x - f / p.dP_drho;
+            double step = -f / p.dP_drho;
+            if (fabs(step) <= o.epsrel * x) { /* converged (the step may be below 1 ulp) */
+                *rho = x + step;
+                if (stats) *stats = (px_water_stats){it, bis, res};
+                return PX_OK;
+            }
+            xn = x + step;
             newton = 1;
             if (!(xn > lo && xn < hi)) {
                 xn = 0.5 * (lo + hi);
@@ -385,13 +394,7 @@ int px_water_density_solve(double T, double P_pa, double guess, const px_water_o
             }
         }
         if (!newton) bis++;
-        double step = xn - x;
         x = xn;
-        if (newton && fabs(step) <= o.epsrel * x) {
-            *rho = x;
-            if (stats) *stats = (px_water_stats){it, bis, res};
-            return PX_OK;
-        }
         if (hi - lo <= o.epsrel * lo) { /* bracket collapsed (bisection only) */
             *rho = 0.5 * (lo + hi);
             if (stats) *stats = (px_water_stats){it, bis, res};
