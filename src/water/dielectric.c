@@ -17,12 +17,13 @@
  *
  * The constants NA, k, eps0 are the 1986 CODATA values that belong to the
  * formulation (as printed in R8-97); they are part of the fitted correlation
- * and are NOT replaced by CODATA 2018 (doing so would shift eps by ~1e-6
- * relative and break the release's check values). */
+ * and are NOT replaced by CODATA 2018 (k alone changed by 6.5e-6 relative,
+ * which would shift eps by about that much and break the release's check
+ * values). */
 #include "water/water_internal.h"
 #include <math.h>
 
-/* IAPWS R8-97 Table 2 coefficients N_h, i_h, j_h (from memory of the release;
+/* IAPWS R8-97 coefficients N_h, i_h, j_h (from memory of the release;
  * compared digit by digit with python3-iapws 1.5.3 _iapws._Dielectric). */
 static const double DE_N[12] = {0.978224486826,    -0.957771379375,  0.237511794148,
                                 0.714692244396,    -0.298217036956,  -0.108863472196,
@@ -33,7 +34,8 @@ static const double DE_J[11] = {0.25, 1, 2.5, 1.5, 1.5, 2.5, 2, 2, 5, 0.5, 10};
 static const double DE_T228 = 228.0;  /* K, R8-97 eq. 4 */
 static const double DE_EXP12 = -1.2;  /* R8-97 eq. 4 */
 
-/* R8-97 Table 1 constants (1986 values that belong to the formulation). */
+/* R8-97 constants (1986 values that belong to the formulation; from memory of
+ * the release, compared with python3-iapws _iapws._Dielectric). */
 static const double DE_NA = 6.0221367e23;     /* 1/mol */
 static const double DE_K = 1.380658e-23;      /* J/K */
 static const double DE_EPS0 = 8.854187817e-12; /* C^2/(J m) */

@@ -6,13 +6,13 @@
  * on the IAPWS Formulation 1995 for the Thermodynamic Properties of Ordinary
  * Water Substance for General and Scientific Use"; Wagner and Pruss 2002,
  * J. Phys. Chem. Ref. Data 31, 387).  Every thermodynamic property follows
- * from phi and its first and second derivatives (release Tables 3 and 4).
+ * from phi and its first and second derivatives (release Tables 3 to 5).
  *
  * This file evaluates phi0 and phir with their derivatives, solves
  * P(rho, T) = P for the liquid root (Newton safeguarded by a shrinking
  * bracket), and solves the saturation condition (equal pressure and equal
- * Gibbs energy of the two phases; Newton in the two densities as described by
- * Akasaka 2008, J. Comput. Appl. Math. / Wagner and Pruss 2002 sect. 6.3)
+ * Gibbs energy of the two phases; Newton in the two reduced densities, the
+ * formulation of Akasaka 2008, J. Therm. Sci. Technol. 3, 442 - from memory)
  * from the auxiliary equations of Wagner and Pruss 1993 (J. Phys. Chem. Ref.
  * Data 22, 783; IAPWS supplementary release on saturation properties 1992).
  *
@@ -290,8 +290,8 @@ double px_water_rhov_aux(double T)
 
 /* Saturation: equal pressure and Gibbs energy in both phases, written in the
  * reduced densities as J(dL) = J(dV), K(dL) = K(dV) with J = d(1 + d phir_d),
- * K = d phir_d + phir + ln d (Wagner and Pruss 2002, sect. 6.3; Akasaka
- * 2008), solved by Newton from the auxiliary densities. */
+ * K = d phir_d + phir + ln d (Akasaka 2008), solved by Newton from the
+ * auxiliary densities. */
 #define SAT_MAX_ITER 50     /* iteration cap; 4-6 are typical (choice, no source) */
 #define SAT_EPSREL 1e-12    /* stop when both relative steps are below this */
 int px_water_sat_solve(double T, double *P_pa, double *rho_l, double *rho_v)

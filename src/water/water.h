@@ -116,7 +116,8 @@ int px_water_saturation(double T_K, double *P_bar, double *rho_liq, double *rho_
 /* ---- added: solver options and statistics for the density root ---------- */
 
 typedef struct px_water_options {
-    double epsrel;  /* stop when |step| <= epsrel * rho (default 1e-12; a last Newton step follows) */
+    double epsrel;  /* converged when the Newton step is <= epsrel * rho; that step is
+                       applied, so the error is of the order of its square (default 1e-12) */
     int max_iter;   /* iteration cap (default 50) */
 } px_water_options;
 px_water_options px_water_options_default(void);
@@ -124,7 +125,7 @@ px_water_options px_water_options_default(void);
 typedef struct px_water_stats {
     int iter;        /* iterations used */
     int bisections;  /* safeguard steps taken instead of Newton steps */
-    double residual; /* |P(rho) - P| / P at the end */
+    double residual; /* |P(rho) - P| / P at the last evaluated point (before the final step) */
 } px_water_stats;
 
 /* px_water_density with explicit options; stats may be NULL.  Range as
