@@ -23,6 +23,7 @@ typedef struct pxd_entry {
     char raw[PXD_RAW_MAX];  /* formula as written ("#3" if missing) */
     int index;              /* 1-based position in the species list */
     int tok_open, tok_close;/* token range of the species table, -1 if unknown */
+    int line_fallback;      /* line of the formula literal when no table encloses it */
     int formula_ok;         /* px_formula_parse succeeded */
     int errors;             /* errors reported against this species */
     int has_G, has_H, has_S;

@@ -11,7 +11,9 @@
  *   - a field: the first `name =` at the right depth inside that table
  *     ("hkf.a2": `a2 =` inside the `hkf = { }` table);
  *   - if no `formula =` is found (a species built by a helper function), the
- *     k-th string literal with that text, else line 0 (unknown).
+ *     k-th string literal with that text (its enclosing table if it has one,
+ *     else the literal's own line); failing that, the k-th table of a literal
+ *     `species = { ... }` list; else line 0 (unknown).
  * Comments and strings are skipped properly, so commented-out species do not
  * confuse the count. */
 #include "data/data_internal.h"
@@ -181,11 +183,13 @@ static long nth_in_species_list(const pxd_file *f, int index)
 void pxd_locate_species(pxd_file *f, pxd_entry *e)
 {
     e->tok_open = e->tok_close = -1;
+    e->line_fallback = 0;
     long open = -1;
     if (e->raw[0] != '#') {
         int k = 0; /* how many earlier species carry the same text */
         for (pxd_entry *o = f->e; o < e; o++) k += strcmp(o->raw, e->raw) == 0;
         long t = find_formula_tok(f, e->raw, k);
+        if (t >= 0) e->line_fallback = f->tok[t].line;
         int depth = 0;
         for (long i = t - 1; t >= 0 && i >= 0; i--) {
             if (tok_ch(f, (size_t)i, '}')) depth++;
@@ -212,7 +216,7 @@ void pxd_locate_species(pxd_file *f, pxd_entry *e)
 
 int pxd_species_line(const pxd_file *f, const pxd_entry *e)
 {
-    return e->tok_open >= 0 ? f->tok[e->tok_open].line : 0;
+    return e->tok_open >= 0 ? f->tok[e->tok_open].line : e->line_fallback;
 }
 
 /* first `name =` at depth 1 inside the table opened at token OPEN */
