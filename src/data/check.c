@@ -15,8 +15,9 @@
  *     says which single slip (a flipped sign, a kJ/J or J/cal factor) would
  *     close the cycle;
  *   - a |dfG| or |dfH| per atom beyond opt->magnitude_warn (unit slip?);
- *   - logk reactions: parse, element and charge balance, the species is a
- *     product with coefficient 1, reactants known (when a database is given);
+ *   - logk reactions: parsed and balanced by thermo's px_reaction_parse and
+ *     px_reaction_balance (the parser the core uses later); the species is a
+ *     product with coefficient 1; reactants known (when a database is given);
  *   - HKF estimates are made here (px_hkf_estimate) once the formula, and so
  *     the charge, is known. */
 #include "data/data_internal.h"
@@ -33,8 +34,6 @@ static const int ligand_order[] = {17, 16, 6, 7, 15, 9};
 /* log K from logK_T at 25 C versus the given logK: warning beyond this
  * (common practice, no source: about the rounding of published fits) */
 #define LOGK_AGREE_TOL 0.05
-/* element balance of a reaction, atoms (exact arithmetic on small numbers) */
-#define BALANCE_TOL 1e-9
 
 /* species H and O are built in (FORMAT.md, "Where species go") */
 static const char *const builtin_names[] = {"H2O(l)", "H^+",   "OH^-",   "O2(g)",    "O2(aq)",
@@ -89,24 +88,22 @@ static void check_membership(pxd_file *f, pxd_entry *e)
                          px_element_symbol(ligand_order[first]));
 }
 
-/* dfG - (dfH - Tr dfS); NAN if an element has no reference entropy */
+/* dfG - (dfH - Tr dfS); NAN if an element has no reference entropy.
+ * dfS from px_formula_entropy_of_formation (thermo): S - sum n_i S_i(ref)
+ * + Z S(H2,g)/2, the conventional ionic scale. */
 static double cycle_residual(const px_formula *fm, double G, double H, double S, int *missing_z)
 {
-    double sum = 0;
-    for (int i = 0; i < fm->n_elem; i++) {
-        double s = px_element_ref_entropy_per_atom(fm->elem[i].z);
-        if (!isfinite(s)) {
+    for (int i = 0; i < fm->n_elem; i++)
+        if (!isfinite(px_element_ref_entropy_per_atom(fm->elem[i].z))) {
             *missing_z = fm->elem[i].z;
             return NAN;
         }
-        sum += fm->elem[i].n * s;
-    }
-    double se = px_element_ref_entropy_per_atom(1); /* S(e-) = S(H2)/2, conventional */
-    if (!isfinite(se)) {
+    if (fm->charge != 0 && !isfinite(px_element_ref_entropy_per_atom(1))) {
         *missing_z = 1;
         return NAN;
     }
-    double dfS = S + fm->charge * se - sum;
+    double dfS = px_formula_entropy_of_formation(fm, S);
+    if (!isfinite(dfS)) return NAN;
     return G - (H - PX_TR * dfS);
 }
 
@@ -194,94 +191,32 @@ static const pxd_entry *find_in_file(const pxd_file *f, const char *canonical)
     return NULL;
 }
 
-/* splits *S at blanks in place (strtok_r is POSIX, not C11) */
-static char *next_word(char **s)
-{
-    char *p = *s;
-    while (*p == ' ' || *p == '\t') p++;
-    if (!*p) return NULL;
-    char *w = p;
-    while (*p && *p != ' ' && *p != '\t') p++;
-    if (*p) *p++ = '\0';
-    *s = p;
-    return w;
-}
-
 static void check_reaction(pxd_file *f, pxd_entry *e, const px_db *known)
 {
     const char *rx = e->sp.logk.reaction;
     if (!rx[0]) return;
-    char buf[sizeof e->sp.logk.reaction];
-    snprintf(buf, sizeof buf, "%s", rx);
-    double net[PX_ELEMENT_MAX + 1] = {0};
-    double charge = 0, self_coef = 0;
-    int side = -1, sides = 1, expect_term = 1, self_left = 0;
-    char *save = buf;
-    for (char *t = next_word(&save); t; t = next_word(&save)) {
-        if (strcmp(t, "=") == 0) {
-            if (expect_term || sides == 2) goto bad;
-            side = 1;
-            sides = 2;
-            expect_term = 1;
-            continue;
-        }
-        if (strcmp(t, "+") == 0) {
-            if (expect_term) goto bad;
-            expect_term = 1;
-            continue;
-        }
-        if (!expect_term) goto bad;
-        double coef = 1;
-        char *fs = t;
-        if ((*t >= '0' && *t <= '9') || *t == '.') {
-            coef = strtod(t, &fs);
-            if (*fs == '\0') { /* "2 Cl^-": the formula is the next token */
-                fs = next_word(&save);
-                if (!fs) goto bad;
-            }
-            if (!(coef > 0) || !isfinite(coef)) goto bad;
-        }
-        px_formula fm;
-        if (px_formula_parse(fs, &fm) != PX_OK) {
-            pxd_report_entry(f, e, PX_DATA_ERROR, "reaction", "malformed formula '%s' in the reaction",
-                             fs);
-            return;
-        }
-        for (int i = 0; i < fm.n_elem; i++) net[fm.elem[i].z] += side * coef * fm.elem[i].n;
-        charge += side * coef * fm.charge;
-        int self = e->formula_ok && strcmp(fm.text, e->sp.f.text) == 0;
-        if (self && side < 0) self_left = 1;
-        else if (self) self_coef += coef;
-        else if (known && !find_in_file(f, fm.text) && !px_db_find(known, fm.text) && !is_builtin(fm.text))
-            pxd_report_entry(f, e, PX_DATA_WARNING, "reaction",
-                             "'%s' is defined neither in this file nor in the loaded database", fm.text);
-        expect_term = 0;
+    px_reaction r;
+    char msg[256];
+    /* the same parser the thermodynamic core uses later (thermo) */
+    if (px_reaction_parse(rx, &r, msg, sizeof msg) != PX_OK) {
+        pxd_report_entry(f, e, PX_DATA_ERROR, "reaction", "cannot parse the reaction: %s", msg);
+        return;
     }
-    if (sides != 2 || expect_term) goto bad;
-    if (self_left || self_coef != 1.0) {
+    double self = 0;
+    for (int i = 0; i < r.n; i++) {
+        const char *t = r.sp[i].text;
+        if (e->formula_ok && strcmp(t, e->sp.f.text) == 0) self = r.nu[i];
+        else if (known && !find_in_file(f, t) && !px_db_find(known, t) && !is_builtin(t))
+            pxd_report_entry(f, e, PX_DATA_WARNING, "reaction",
+                             "'%s' is defined neither in this file nor in the loaded database", t);
+    }
+    if (e->formula_ok && self != 1.0)
         pxd_report_entry(f, e, PX_DATA_ERROR, "reaction",
                          "the species must appear once, as a product with coefficient 1 "
                          "(\"... = %s\")",
                          e->raw);
-        return;
-    }
-    char what[200] = "";
-    size_t k = 0;
-    for (int z = 1; z <= PX_ELEMENT_MAX; z++)
-        if (fabs(net[z]) > BALANCE_TOL && k < sizeof what - 40) {
-            const char *sym = px_element_symbol(z);
-            k += (size_t)snprintf(what + k, sizeof what - k, "%s%s %+g", k ? ", " : "",
-                                  sym ? sym : "?", net[z]);
-        }
-    if (fabs(charge) > BALANCE_TOL)
-        k += (size_t)snprintf(what + k, sizeof what - k, "%scharge %+g", k ? ", " : "", charge);
-    if (k)
-        pxd_report_entry(f, e, PX_DATA_ERROR, "reaction",
-                         "does not balance (products minus reactants: %s)", what);
-    return;
-bad:
-    pxd_report_entry(f, e, PX_DATA_ERROR, "reaction",
-                     "cannot parse the reaction: write \"A + 2 B = C\" with spaces around + and =");
+    if (px_reaction_balance(&r, msg, sizeof msg) != PX_OK)
+        pxd_report_entry(f, e, PX_DATA_ERROR, "reaction", "does not balance (%s)", msg);
 }
 
 static void check_logk(pxd_file *f, pxd_entry *e, const px_db *known)

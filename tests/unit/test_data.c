@@ -148,6 +148,36 @@ static void test_species_units_override_kcal(void **state)
     px_db_free(db);
 }
 
+/* an HKF estimate through the loader, against a species Shock and Helgeson
+ * estimated themselves: Fe^2+ (reference/hkf/hkf_parameters.csv, "from memory
+ * of Shock et al. 1997"; its note: a1/a2/a4 and c2 obey the estimation
+ * correlations).  Published Cp -7.9 cal/(mol K), V -22.2 cm3/mol. */
+static void test_hkf_estimate_fe2(void **state)
+{
+    (void)state;
+    const char *src = "return { element = 'Fe', units = { energy = 'cal', entropy = 'cal' },\n"
+                      "species = { { formula = 'Fe^2+', model = 'hkf',\n"
+                      "G = -21870, H = -22050, S = -25.30,\n"
+                      "estimate = { Cp = -7.9 * 4.184, V = -22.2 },\n"
+                      "source = 'from memory of Shock et al. 1997' } } }\n";
+    px_db *db = px_db_new();
+    px_data_problems *p = px_data_problems_new();
+    int st = px_data_load_buffer(db, src, strlen(src), "fe.lua", NULL, p);
+    if (st != PX_OK) dump(p);
+    assert_int_equal(st, PX_OK);
+    const px_species *fe = px_db_find(db, "Fe^2+");
+    assert_non_null(fe);
+    assert_true(fe->estimated);
+    const double cal = 4.184;
+    print_message("Fe^2+ estimate (printed scaling): a1 %.4f a2 %.4f a4 %.4f c2 %.4f omega %.4f\n",
+                  fe->hkf.a1 / cal * 10, fe->hkf.a2 / cal / 100, fe->hkf.a4 / cal / 1e4,
+                  fe->hkf.c2 / cal / 1e4, fe->hkf.omega / cal / 1e5);
+    /* c2 x 1e-4 = 0.2037 Cp - 3.0346 (SH88 correlation): -4.6438 vs printed -4.6437 */
+    assert_close(fe->hkf.c2, -4.6437e4 * cal, 2e-4, 0);
+    px_data_problems_free(p);
+    px_db_free(db);
+}
+
 static void test_logk_species(void **state)
 {
     (void)state;
@@ -216,7 +246,7 @@ static void test_bad_fixtures(void **state)
         {"bad_membership.lua", PX_EDATA,
          "bad_membership.lua:5: CuO(s): formula: does not contain Zn, the element of this file", NULL},
         {"bad_balance.lua", PX_EDATA, "bad_balance.lua:8: ZnCl^+: reaction: does not balance",
-         "Cl -1"},
+         "Cl: left 2, right 1"},
         {"bad_hkf.lua", PX_EDATA, "bad_hkf.lua:8: Na^+: hkf.omega: missing HKF parameter 'omega'",
          NULL},
     };
@@ -402,6 +432,7 @@ int main(void)
         cmocka_unit_test(test_good_zn_si_conversion),
         cmocka_unit_test(test_hkf_printed_scaling_cal),
         cmocka_unit_test(test_species_units_override_kcal),
+        cmocka_unit_test(test_hkf_estimate_fe2),
         cmocka_unit_test(test_logk_species),
         cmocka_unit_test(test_element_filter),
         cmocka_unit_test(test_bad_fixtures),
