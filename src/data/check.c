@@ -13,7 +13,8 @@
  *     electron, S(e-) = S(H2, g)/2 (from H+ + e- = 1/2 H2 with S(H+) = 0);
  *     a mismatch above opt->consistency_tol is an error, and the message
  *     says which single slip (a flipped sign, a kJ/J or J/cal factor) would
- *     close the cycle;
+ *     close the cycle; a species with `known_mismatch = "why"` gets a warning
+ *     instead, up to PX_DATA_KNOWN_MISMATCH_MAX (never for gross slips);
  *   - a |dfG| or |dfH| per atom beyond opt->magnitude_warn (unit slip?);
  *   - logk reactions: parsed and balanced by thermo's px_reaction_parse and
  *     px_reaction_balance (the parser the core uses later); the species is a
@@ -143,7 +144,18 @@ static void check_cycle(pxd_file *f, pxd_entry *e)
                          sym ? sym : "an element");
         return;
     }
-    if (fabs(r) <= tol) return;
+    if (fabs(r) <= tol) {
+        if (e->known_mismatch)
+            pxd_report_entry(f, e, PX_DATA_WARNING, "known_mismatch",
+                             "the cycle closes (%.2f kJ/mol): known_mismatch can go", r / PXD_KJ);
+        return;
+    }
+    if (e->known_mismatch && fabs(r) <= PX_DATA_KNOWN_MISMATCH_MAX) {
+        pxd_report_entry(f, e, PX_DATA_WARNING, "G",
+                         "dfG - (dfH - T dfS) = %.2f kJ/mol, accepted as a known mismatch",
+                         r / PXD_KJ);
+        return;
+    }
     const char *hint = NULL;
     for (size_t i = 0; i < sizeof slips / sizeof slips[0] && !hint; i++) {
         double v[3] = {sp->dGf, sp->dHf, sp->S};
@@ -210,11 +222,12 @@ static void check_reaction(pxd_file *f, pxd_entry *e, const px_db *known)
             pxd_report_entry(f, e, PX_DATA_WARNING, "reaction",
                              "'%s' is defined neither in this file nor in the loaded database", t);
     }
-    if (e->formula_ok && self != 1.0)
+    /* thermo resolves G of the species as (dG - sum_others) / nu_self, so any
+     * non-zero coefficient on either side is valid; log K is for the reaction
+     * as written */
+    if (e->formula_ok && self == 0.0)
         pxd_report_entry(f, e, PX_DATA_ERROR, "reaction",
-                         "the species must appear once, as a product with coefficient 1 "
-                         "(\"... = %s\")",
-                         e->raw);
+                         "the species %s does not appear in its own reaction", e->raw);
     if (px_reaction_balance(&r, msg, sizeof msg) != PX_OK)
         pxd_report_entry(f, e, PX_DATA_ERROR, "reaction", "does not balance (%s)", msg);
 }

@@ -66,6 +66,10 @@ size_t px_data_problems_write(const px_data_problems *p, FILE *out);
 /* |dfG| or |dfH| per atom above which a unit slip is suspected (warning), J/mol
  * (common practice, no source: no species known to us exceeds ~1000 kJ/mol/atom) */
 #define PX_DATA_MAGNITUDE_WARN_DEFAULT 1.2e6
+/* a species may declare `known_mismatch = "<why>"` (a published table that
+ * does not close its own cycle): mismatches up to this are then warnings, J/mol
+ * (common practice, no source: larger ones are slips, not table spread) */
+#define PX_DATA_KNOWN_MISMATCH_MAX 5000.0
 
 typedef struct px_data_options {
     size_t mem_limit;          /* sandbox allocator cap, bytes */

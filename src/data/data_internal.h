@@ -32,6 +32,7 @@ typedef struct pxd_entry {
     int has_logK, has_logK_T; /* logk: which forms were given */
     double logK_given;
     int skip;               /* outside the requested element set */
+    int known_mismatch;     /* `known_mismatch = "..."` given: cycle mismatch is a warning */
 } pxd_entry;
 
 typedef struct pxd_exclude {

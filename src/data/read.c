@@ -41,7 +41,8 @@ static const char *const file_fields[] = {"element", "title", "units", "T_range"
 static const char *const species_fields[] = {
     "formula", "model",    "G",        "H",      "S",        "cp",     "V",
     "T_range", "source",   "quality",  "note",   "hkf",      "estimated", "estimate",
-    "reaction", "logK",    "dH",       "logK_T", "units",    "uncertainty", NULL};
+    "reaction", "logK",    "dH",       "logK_T", "units",    "uncertainty",
+    "known_mismatch", NULL};
 /* fields that belong to one model only */
 static const char *const cp_only[] = {"cp", "V", NULL};
 static const char *const hkf_only[] = {"hkf", "estimated", "estimate", NULL};
@@ -350,8 +351,14 @@ static void read_hkf(ctx *c, int t, pxd_entry *e, double eu, double su)
 static void read_logk(ctx *c, int t, pxd_entry *e, double eu)
 {
     px_species *sp = &e->sp;
-    forbid(c, t, cp_only, "logk");
+    static const char *const cp_table[] = {"cp", NULL};
+    forbid(c, t, cp_table, "logk");
     forbid(c, t, hkf_only, "logk");
+    double V;
+    if (get_num(c, t, "V", "V", 1.0, &V) == 1) { /* kept in cp.V for reference */
+        sp->cp.V = V * PXD_CM3_TO_J_PER_BAR;
+        REPORT(c, PX_DATA_WARNING, "V", "V is not used by model 'logk' (kept, but G(T,P) ignores it)");
+    }
     forbid(c, t, ghs, "logk");
     sp->dGf = sp->dHf = sp->S = NAN;
     sp->logk.dH = NAN;
@@ -507,6 +514,11 @@ static void read_species(ctx *c, int t, int index)
         REPORT(c, PX_DATA_ERROR, "note", "expected a string, got %s", lua_typename(L, ty));
     lua_pop(L, 1);
     read_uncertainty(c, t);
+    ty = rawfield(L, t, "known_mismatch");
+    if (ty == LUA_TSTRING && lua_rawlen(L, -1) > 0) e->known_mismatch = 1;
+    else if (ty != LUA_TNIL)
+        REPORT(c, PX_DATA_ERROR, "known_mismatch", "expected a non-empty string saying why");
+    lua_pop(L, 1);
     c->e = NULL;
 }
 

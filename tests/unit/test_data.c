@@ -200,6 +200,29 @@ static void test_logk_species(void **state)
     px_db_free(db);
 }
 
+/* thermo resolves G of a logk species as (dG - others) / nu_self: any side,
+ * any coefficient; a species absent from its own reaction is an error */
+static void test_logk_reaction_forms(void **state)
+{
+    (void)state;
+    const char *ok = "return { element = 'Zn', species = {\n"
+                     "{ formula = 'Zn^2+', model = 'logk', reaction = 'Zn(s) + 2 H^+ = Zn^2+ + H2(g)',"
+                     " logK = 25.79, source = 's' },\n"
+                     "{ formula = 'ZnO(s)', model = 'logk', reaction = '2 ZnO(s) + 4 H^+ = 2 Zn^2+ + 2 H2O(l)',"
+                     " logK = 22.4, source = 's' } } }\n";
+    px_data_problems *p = px_data_problems_new();
+    int st = px_data_check_buffer(NULL, ok, strlen(ok), "r.lua", NULL, p);
+    if (st != PX_OK) dump(p);
+    assert_int_equal(st, PX_OK);
+    const char *bad = "return { element = 'Zn', species = {\n"
+                      "{ formula = 'ZnO(s)', model = 'logk', reaction = 'Zn(s) + 2 H^+ = Zn^2+ + H2(g)',"
+                      " logK = 25.79, source = 's' } } }\n";
+    px_data_problems_clear(p);
+    assert_int_equal(px_data_check_buffer(NULL, bad, strlen(bad), "r.lua", NULL, p), PX_EDATA);
+    assert_true(has(p, "r.lua:2: ZnO(s): reaction: the species ZnO(s) does not appear in its own reaction", NULL));
+    px_data_problems_free(p);
+}
+
 static void test_element_filter(void **state)
 {
     (void)state;
@@ -310,6 +333,19 @@ static void test_consistency_slips(void **state)
     px_data_problems *p = px_data_problems_new();
     assert_int_equal(px_data_check_buffer(NULL, near, strlen(near), "n.lua", NULL, p), PX_EDATA);
     assert_true(has(p, "mismatch 2.00 kJ/mol > 1.50 kJ/mol", NULL));
+    /* a declared known mismatch is a warning up to 5 kJ/mol, never beyond */
+    const char *known = "return { element = 'Zn', species = { { formula = 'Zn^2+', model = 'hkf',\n"
+                        "G = -145.2, H = -153.39, S = -109.8, estimate = { Cp = 46, V = -25 },"
+                        " known_mismatch = 'test', source = 'test' } } }\n";
+    px_data_problems_clear(p);
+    assert_int_equal(px_data_check_buffer(NULL, known, strlen(known), "k.lua", NULL, p), PX_OK);
+    assert_true(has(p, "k.lua:2: Zn^2+: warning: G: dfG - (dfH - T dfS) = 2.00 kJ/mol, accepted", NULL));
+    const char *sign = "return { element = 'Zn', species = { { formula = 'Zn^2+', model = 'hkf',\n"
+                       "G = -147.203, H = -153.39, S = 109.8, estimate = { Cp = 46, V = -25 },"
+                       " known_mismatch = 'test', source = 'test' } } }\n";
+    px_data_problems_clear(p);
+    assert_int_equal(px_data_check_buffer(NULL, sign, strlen(sign), "s.lua", NULL, p), PX_EDATA);
+    assert_true(has(p, "S had the opposite sign", NULL));
     px_data_options o = px_data_options_default();
     o.consistency_tol = 2500;
     px_data_problems_clear(p);
@@ -434,6 +470,7 @@ int main(void)
         cmocka_unit_test(test_species_units_override_kcal),
         cmocka_unit_test(test_hkf_estimate_fe2),
         cmocka_unit_test(test_logk_species),
+        cmocka_unit_test(test_logk_reaction_forms),
         cmocka_unit_test(test_element_filter),
         cmocka_unit_test(test_bad_fixtures),
         cmocka_unit_test(test_consistency_slips),
