@@ -204,7 +204,9 @@ static int electron_G(px_thermo_ws *ws, const px_db *db, double T, double P, dou
     int st = species_G(ws, db, h2, T, P, &g);
     if (st)
         return st;
-    *G = -0.5 * g; /* G(H^+) = 0 at every T, P by convention */
+    /* H^+ + e- = 1/2 H2(g) has dG = 0 at every T, P (the SHE): G(e-) = G(H2)/2 - G(H^+),
+     * and G(H^+) = 0 by the conventional ionic standard state */
+    *G = 0.5 * g;
     return PX_OK;
 }
 
@@ -382,11 +384,11 @@ static int electron_props(px_thermo_ws *ws, const px_db *db, double T, double P,
     int st = species_props(ws, db, h2, T, P, &p);
     if (st)
         return st;
-    out->G = -0.5 * p.G;
-    out->H = -0.5 * p.H;
-    out->S = -0.5 * p.S;
-    out->Cp = -0.5 * p.Cp;
-    out->V = -0.5 * p.V;
+    out->G = 0.5 * p.G; /* as electron_G: X(e-) = X(H2,g)/2 - X(H^+), X(H^+) = 0 */
+    out->H = 0.5 * p.H;
+    out->S = 0.5 * p.S;
+    out->Cp = 0.5 * p.Cp;
+    out->V = 0.5 * p.V;
     return PX_OK;
 }
 
@@ -556,13 +558,22 @@ int px_reaction_props_eval(px_thermo_ws *ws, const px_db *db, const px_reaction 
 
 int px_thermo_default_pressure(double T, double *P)
 {
-    /* 1 bar up to 100 C, saturation pressure above (SH88/SUPCRT-style convention) */
-    const double T_switch = PX_T0C + 100.0;
+    /* 1 bar while water boils above 1 bar, the saturation pressure above:
+     * P = max(1 bar, psat(T)).  This is the usual "1 bar to 100 C, psat above"
+     * of the HKF tables, except between 99.61 C (psat = 1 bar) and 100 C,
+     * where 1 bar would be steam (psat(100 C) = 1.014 bar); continuous in T. */
     if (!P || !isfinite(T))
         return PX_EINVAL;
-    if (T <= T_switch) {
-        *P = 1.0;
+    if (T < PX_WATER_TMIN)
+        return PX_ERANGE;
+    if (T <= PX_T0C + 99.0) { /* psat(99 C) = 0.978 bar < 1 bar */
+        *P = PX_PR;
         return PX_OK;
     }
-    return px_water_psat(T, P);
+    double ps;
+    int st = px_water_psat(T, &ps);
+    if (st)
+        return st;
+    *P = ps > PX_PR ? ps : PX_PR;
+    return PX_OK;
 }
