@@ -590,14 +590,14 @@ int px_reaction_logK(px_thermo_ws *ws, const px_db *db, const px_reaction *r, do
     return isfinite(*logK) ? PX_OK : PX_ENONFINITE;
 }
 
-int px_reaction_props_eval(px_thermo_ws *ws, const px_db *db, const px_reaction *r, double T,
-                           double P, px_reaction_props *out)
+int px_reaction_props(px_thermo_ws *ws, const px_db *db, const px_reaction *r, double T,
+                           double P, px_reaction_result *out)
 {
     if (!ws || !db || !r || !out)
         return PX_EINVAL;
     ws->err[0] = '\0';
     ws->depth = 0;
-    px_reaction_props o = {0, 0, 0, 0, 0, 0, 0, NAN};
+    px_reaction_result o = {0, 0, 0, 0, 0, 0, 0, NAN};
     for (int i = 0; i < r->n; i++) {
         const px_species *sp;
         px_species tmp;

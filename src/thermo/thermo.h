@@ -185,14 +185,14 @@ int px_thermo_species_props(px_thermo_ws *ws, const px_db *db, const px_species 
 int px_thermo_eval_all(px_thermo_ws *ws, const px_db *db, double T, double P, double *G);
 
 /* Reaction properties; E is NAN when the reaction has no electrons. */
-typedef struct px_reaction_props {
+typedef struct px_reaction_result {
     double dG, dH, dS, dCp, dV; /* J/mol, J/mol, J/(mol K), J/(mol K), J/bar */
     double logK;
     double n_e; /* electrons consumed (reduction written left to right) */
     double E;   /* V vs SHE at the same T, P: -dG/(n_e F) */
-} px_reaction_props;
-int px_reaction_props_eval(px_thermo_ws *ws, const px_db *db, const px_reaction *r,
-                           double T, double P, px_reaction_props *out);
+} px_reaction_result;
+int px_reaction_props(px_thermo_ws *ws, const px_db *db, const px_reaction *r,
+                           double T, double P, px_reaction_result *out);
 /* log K only (fast path: G of each species). */
 int px_reaction_logK(px_thermo_ws *ws, const px_db *db, const px_reaction *r,
                      double T, double P, double *logK);
