@@ -28,6 +28,14 @@
 #define MAX_LOGK_DEPTH 16  /* nesting of reaction-defined species */
 #define D2RHO_STEP 0.05    /* K, central difference of drho/dT for g_TT */
 
+/* A LOGK species' reaction, parsed once, with the db index of each species
+ * (-1: the electron, or the species itself). */
+typedef struct logk_cache {
+    px_reaction r;
+    int self;
+    long idx[PX_REACTION_MAX];
+} logk_cache;
+
 struct px_thermo_ws {
     px_dielectric_model model;
     /* reference state (lazy) */
@@ -39,6 +47,13 @@ struct px_thermo_ws {
     double wT, wP;
     px_water_state w;
     px_hkf_gfun g;
+    int have_common; /* HKF terms shared by all species at (wT, wP) */
+    px__hkf_common hc;
+    /* parsed reactions of LOGK species, per db index (valid for lk_db/lk_gen) */
+    const px_db *lk_db;
+    unsigned long lk_gen;
+    struct logk_cache **lk;
+    size_t lk_n;
     /* species G cache */
     const px_db *cdb;
     unsigned long cgen;
@@ -73,6 +88,9 @@ void px_thermo_ws_free(px_thermo_ws *ws)
 {
     if (!ws)
         return;
+    for (size_t i = 0; i < ws->lk_n; i++)
+        free(ws->lk[i]);
+    free(ws->lk);
     free(ws->Gc);
     free(ws->Gok);
     free(ws);
@@ -100,6 +118,7 @@ int px_thermo_ws_water(px_thermo_ws *ws, double T, double P, const px_water_stat
         return werr(ws, PX_EINVAL, "non-finite T or P");
     if (!ws->have_w || ws->wT != T || ws->wP != P) {
         ws->have_w = 0;
+        ws->have_common = 0;
         int st = px_water_state_eval(T, P, ws->model, &ws->w);
         if (st)
             return werr(ws, st, "water at %.2f K, %.4g bar: %s", T, P, px_strerror(st));
@@ -135,7 +154,14 @@ static int water_pair(px_thermo_ws *ws, double T, double P, const px_water_state
     int st = ensure_ref(ws);
     if (st)
         return st;
-    return px_thermo_ws_water(ws, T, P, w);
+    st = px_thermo_ws_water(ws, T, P, w);
+    if (st)
+        return st;
+    if (!ws->have_common) {
+        px__hkf_common_init(&ws->w, &ws->wr, &ws->g, &ws->gr, &ws->hc);
+        ws->have_common = 1;
+    }
+    return PX_OK;
 }
 
 /* ---- log K models ---- */
@@ -204,7 +230,9 @@ static int electron_G(px_thermo_ws *ws, const px_db *db, double T, double P, dou
     int st = species_G(ws, db, h2, T, P, &g);
     if (st)
         return st;
-    *G = -0.5 * g; /* G(H^+) = 0 at every T, P by convention */
+    /* H^+ + e- = 1/2 H2(g) has dG = 0 at every T, P (the SHE): G(e-) = G(H2)/2 - G(H^+),
+     * and G(H^+) = 0 by the conventional ionic standard state */
+    *G = 0.5 * g;
     return PX_OK;
 }
 
@@ -243,41 +271,83 @@ static int push(px_thermo_ws *ws, const px_species *sp)
     return PX_OK;
 }
 
+/* the parsed reaction of a LOGK species, cached per db index when sp is in db */
+static int logk_get(px_thermo_ws *ws, const px_db *db, const px_species *sp, logk_cache *tmp,
+                    const logk_cache **out)
+{
+    long k = db ? px__db_index_of(db, sp) : -1;
+    if (k >= 0) {
+        size_t n = px_db_count(db);
+        if (ws->lk_db != db || ws->lk_gen != px__db_generation(db) || ws->lk_n < n) {
+            for (size_t i = 0; i < ws->lk_n; i++)
+                free(ws->lk[i]);
+            free(ws->lk);
+            ws->lk = calloc(n, sizeof *ws->lk);
+            ws->lk_n = ws->lk ? n : 0;
+            if (!ws->lk)
+                return werr(ws, PX_ENOMEM, "out of memory");
+            ws->lk_db = db;
+            ws->lk_gen = px__db_generation(db);
+        }
+        if (ws->lk[k]) {
+            *out = ws->lk[k];
+            return PX_OK;
+        }
+    }
+    int st = logk_find_self(ws, sp, &tmp->r, &tmp->self);
+    if (st)
+        return st;
+    for (int i = 0; i < tmp->r.n; i++)
+        tmp->idx[i] = (i == tmp->self || tmp->r.sp[i].state == PX_STATE_E || !db)
+                          ? -1
+                          : px_db_index(db, tmp->r.sp[i].text);
+    if (k >= 0) {
+        logk_cache *c = malloc(sizeof *c);
+        if (!c)
+            return werr(ws, PX_ENOMEM, "out of memory");
+        *c = *tmp;
+        ws->lk[k] = c;
+        *out = c;
+    } else {
+        *out = tmp;
+    }
+    return PX_OK;
+}
+
 static int logk_G(px_thermo_ws *ws, const px_db *db, const px_species *sp, double T, double P,
                   double *G)
 {
-    px_reaction r;
-    int self;
-    int st = logk_find_self(ws, sp, &r, &self);
+    logk_cache tmp;
+    const logk_cache *lc = NULL;
+    int st = logk_get(ws, db, sp, &tmp, &lc);
     if (st)
         return st;
     st = push(ws, sp);
     if (st)
         return st;
     double sum = 0;
-    for (int i = 0; i < r.n && !st; i++) {
-        if (i == self)
+    for (int i = 0; i < lc->r.n && !st; i++) {
+        if (i == lc->self)
             continue;
         double g;
-        if (r.sp[i].state == PX_STATE_E) {
+        if (lc->r.sp[i].state == PX_STATE_E) {
             st = electron_G(ws, db, T, P, &g);
         } else {
-            const px_species *o = px_db_find(db, r.sp[i].text);
-            if (!o) {
+            if (lc->idx[i] < 0) {
                 st = werr(ws, PX_ENOTFOUND, "%s: species %s of its reaction is not in the database",
-                          sp->f.text, r.sp[i].text);
+                          sp->f.text, lc->r.sp[i].text);
                 break;
             }
-            st = species_G(ws, db, o, T, P, &g);
+            st = species_G(ws, db, px_db_get(db, (size_t)lc->idx[i]), T, P, &g);
         }
-        sum += r.nu[i] * g;
+        sum += lc->r.nu[i] * g;
     }
     ws->depth--;
     if (st)
         return st;
     double dG, dH, dS, dCp;
     logk_reaction(&sp->logk, T, &dG, &dH, &dS, &dCp);
-    *G = (dG - sum) / r.nu[self];
+    *G = (dG - sum) / lc->r.nu[lc->self];
     return PX_OK;
 }
 
@@ -292,8 +362,7 @@ static int species_G_nocache(px_thermo_ws *ws, const px_db *db, const px_species
     case PX_MODEL_HKF:
         if ((st = water_pair(ws, T, P, &w)))
             return st;
-        st = px__hkf_G_fast(&sp->hkf, sp->f.charge, sp->dGf, sp->S, w, &ws->wr, &ws->g, &ws->gr,
-                            G);
+        st = px__hkf_G_common(&sp->hkf, sp->f.charge, sp->dGf, sp->S, &ws->hc, G);
         if (st)
             return werr(ws, st, "%s: HKF G: %s", sp->f.text, px_strerror(st));
         return PX_OK;
@@ -382,11 +451,11 @@ static int electron_props(px_thermo_ws *ws, const px_db *db, double T, double P,
     int st = species_props(ws, db, h2, T, P, &p);
     if (st)
         return st;
-    out->G = -0.5 * p.G;
-    out->H = -0.5 * p.H;
-    out->S = -0.5 * p.S;
-    out->Cp = -0.5 * p.Cp;
-    out->V = -0.5 * p.V;
+    out->G = 0.5 * p.G; /* as electron_G: X(e-) = X(H2,g)/2 - X(H^+), X(H^+) = 0 */
+    out->H = 0.5 * p.H;
+    out->S = 0.5 * p.S;
+    out->Cp = 0.5 * p.Cp;
+    out->V = 0.5 * p.V;
     return PX_OK;
 }
 
@@ -394,7 +463,7 @@ static int logk_props(px_thermo_ws *ws, const px_db *db, const px_species *sp, d
                       double P, px_thermo_props *out)
 {
     px_reaction r;
-    int self;
+    int self = -1;
     int st = logk_find_self(ws, sp, &r, &self);
     if (st)
         return st;
@@ -521,14 +590,14 @@ int px_reaction_logK(px_thermo_ws *ws, const px_db *db, const px_reaction *r, do
     return isfinite(*logK) ? PX_OK : PX_ENONFINITE;
 }
 
-int px_reaction_props_eval(px_thermo_ws *ws, const px_db *db, const px_reaction *r, double T,
-                           double P, px_reaction_props *out)
+int px_reaction_props(px_thermo_ws *ws, const px_db *db, const px_reaction *r, double T,
+                           double P, px_reaction_result *out)
 {
     if (!ws || !db || !r || !out)
         return PX_EINVAL;
     ws->err[0] = '\0';
     ws->depth = 0;
-    px_reaction_props o = {0, 0, 0, 0, 0, 0, 0, NAN};
+    px_reaction_result o = {0, 0, 0, 0, 0, 0, 0, NAN};
     for (int i = 0; i < r->n; i++) {
         const px_species *sp;
         px_species tmp;
@@ -556,13 +625,22 @@ int px_reaction_props_eval(px_thermo_ws *ws, const px_db *db, const px_reaction 
 
 int px_thermo_default_pressure(double T, double *P)
 {
-    /* 1 bar up to 100 C, saturation pressure above (SH88/SUPCRT-style convention) */
-    const double T_switch = PX_T0C + 100.0;
+    /* 1 bar while water boils above 1 bar, the saturation pressure above:
+     * P = max(1 bar, psat(T)).  This is the usual "1 bar to 100 C, psat above"
+     * of the HKF tables, except between 99.61 C (psat = 1 bar) and 100 C,
+     * where 1 bar would be steam (psat(100 C) = 1.014 bar); continuous in T. */
     if (!P || !isfinite(T))
         return PX_EINVAL;
-    if (T <= T_switch) {
-        *P = 1.0;
+    if (T < PX_WATER_TMIN)
+        return PX_ERANGE;
+    if (T <= PX_T0C + 99.0) { /* psat(99 C) = 0.978 bar < 1 bar */
+        *P = PX_PR;
         return PX_OK;
     }
-    return px_water_psat(T, P);
+    double ps;
+    int st = px_water_psat(T, &ps);
+    if (st)
+        return st;
+    *P = ps > PX_PR ? ps : PX_PR;
+    return PX_OK;
 }

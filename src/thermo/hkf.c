@@ -143,25 +143,39 @@ static double born_S_ref(const px_hkf_params *p, int charge, const px_water_stat
     return om.w * wr->Y - (1.0 / wr->eps - 1.0) * om.w_T;
 }
 
-int px__hkf_G_fast(const px_hkf_params *p, int charge, double dGf, double S,
-                   const px_water_state *w, const px_water_state *wr, const px_hkf_gfun *g,
-                   const px_hkf_gfun *gr, double *G)
+void px__hkf_common_init(const px_water_state *w, const px_water_state *wr,
+                         const px_hkf_gfun *g, const px_hkf_gfun *gr, px__hkf_common *c)
 {
     const double T = w->T, P = w->P, Tr = PX_TR, Pr = PX_PR;
-    double Tt = T - PX_HKF_THETA;
-    if (!(Tt > 0) || !(w->eps > 0) || !(wr->eps > 0) || !isfinite(dGf) || !isfinite(S))
+    c->T = T;
+    c->dT = T - Tr;
+    c->c1f = T * log(T / Tr) - T + Tr;
+    c->dP = P - Pr;
+    c->lnP = log((PX_HKF_PSI + P) / (PX_HKF_PSI + Pr));
+    c->invTt = 1.0 / (T - PX_HKF_THETA);
+    c2_terms(1.0, T, &c->c2H, &c->c2S);
+    c->inv = 1.0 / w->eps - 1.0;
+    c->invr = 1.0 / wr->eps - 1.0;
+    c->Yr = wr->Y;
+    c->g = *g;
+    c->gr = *gr;
+    c->ok = T - PX_HKF_THETA > 0 && w->eps > 0 && wr->eps > 0 && isfinite(c->lnP) &&
+            isfinite(c->c1f);
+}
+
+/* G of one species from the per-(T,P) terms: TH88 as in the file comment */
+int px__hkf_G_common(const px_hkf_params *p, int charge, double dGf, double S,
+                     const px__hkf_common *c, double *G)
+{
+    if (!c->ok || !isfinite(dGf) || !isfinite(S))
         return PX_EINVAL;
-    double lnP = log((PX_HKF_PSI + P) / (PX_HKF_PSI + Pr));
-    double dP = P - Pr;
-    double Hc, Sc;
-    c2_terms(p->c2, T, &Hc, &Sc);
-    px_hkf_omega om;
-    px_hkf_omega_eval(p->omega, charge, g, &om);
-    double Sbr = born_S_ref(p, charge, wr, gr);
-    double v = dGf - S * (T - Tr) - p->c1 * (T * log(T / Tr) - T + Tr) + p->a1 * dP +
-               p->a2 * lnP + Hc - T * Sc + (p->a3 * dP + p->a4 * lnP) / Tt +
-               om.w * (1.0 / w->eps - 1.0) - p->omega * (1.0 / wr->eps - 1.0) +
-               Sbr * (T - Tr);
+    px_hkf_omega om, omr;
+    px_hkf_omega_eval(p->omega, charge, &c->g, &om);
+    px_hkf_omega_eval(p->omega, charge, &c->gr, &omr);
+    double Sbr = omr.w * c->Yr - c->invr * omr.w_T; /* Born entropy at Tr, Pr */
+    double v = dGf - S * c->dT - p->c1 * c->c1f + p->a1 * c->dP + p->a2 * c->lnP +
+               p->c2 * (c->c2H - c->T * c->c2S) + (p->a3 * c->dP + p->a4 * c->lnP) * c->invTt +
+               om.w * c->inv - p->omega * c->invr + Sbr * c->dT;
     if (!isfinite(v))
         return PX_ENONFINITE;
     *G = v;
@@ -176,7 +190,9 @@ int px_hkf_G(const px_hkf_params *p, int charge, double dGf, double S,
     px_hkf_gfun g, gr;
     px_hkf_gfunction(w, 0, &g);
     px_hkf_gfunction(wr, 0, &gr);
-    return px__hkf_G_fast(p, charge, dGf, S, w, wr, &g, &gr, G);
+    px__hkf_common c;
+    px__hkf_common_init(w, wr, &g, &gr, &c);
+    return px__hkf_G_common(p, charge, dGf, S, &c, G);
 }
 
 int px_hkf_props(const px_hkf_params *p, int charge, double dGf, double dHf, double S,
@@ -191,7 +207,9 @@ int px_hkf_props(const px_hkf_params *p, int charge, double dGf, double dHf, dou
     px_hkf_gfunction(w, d2rho_dT2, &g);
     px_hkf_gfunction(wr, 0, &gr);
     double G;
-    int st = px__hkf_G_fast(p, charge, dGf, S, w, wr, &g, &gr, &G);
+    px__hkf_common cm;
+    px__hkf_common_init(w, wr, &g, &gr, &cm);
+    int st = px__hkf_G_common(p, charge, dGf, S, &cm, &G);
     if (st)
         return st;
     double lnP = log((PX_HKF_PSI + P) / (PX_HKF_PSI + Pr));

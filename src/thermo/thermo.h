@@ -94,7 +94,8 @@ const px_species *px_db_get(const px_db *db, size_t i); /* NULL if out of range 
 const px_species *px_db_find(const px_db *db, const char *formula); /* parses+canonicalizes */
 long px_db_index(const px_db *db, const char *formula); /* -1 if absent */
 /* Built-ins: H2O(l) (IAPWS-95 model, NBS 1982 dfG/dfH/S) and the electron
- * e- (G = G(H^+) - G(H2,g)/2 by convention).  Other H/O species come from
+ * e- (G(e-) = G(H2,g)/2 - G(H^+) so that H^+ + e- = 1/2 H2(g) has dG = 0 at
+ * every T, P).  Other H/O species come from
  * stdlib/elements/HO.lua. */
 int px_db_add_builtins(px_db *db);
 
@@ -184,20 +185,22 @@ int px_thermo_species_props(px_thermo_ws *ws, const px_db *db, const px_species 
 int px_thermo_eval_all(px_thermo_ws *ws, const px_db *db, double T, double P, double *G);
 
 /* Reaction properties; E is NAN when the reaction has no electrons. */
-typedef struct px_reaction_props {
+typedef struct px_reaction_result {
     double dG, dH, dS, dCp, dV; /* J/mol, J/mol, J/(mol K), J/(mol K), J/bar */
     double logK;
     double n_e; /* electrons consumed (reduction written left to right) */
     double E;   /* V vs SHE at the same T, P: -dG/(n_e F) */
-} px_reaction_props;
-int px_reaction_props_eval(px_thermo_ws *ws, const px_db *db, const px_reaction *r,
-                           double T, double P, px_reaction_props *out);
+} px_reaction_result;
+int px_reaction_props(px_thermo_ws *ws, const px_db *db, const px_reaction *r,
+                           double T, double P, px_reaction_result *out);
 /* log K only (fast path: G of each species). */
 int px_reaction_logK(px_thermo_ws *ws, const px_db *db, const px_reaction *r,
                      double T, double P, double *logK);
 
-/* Default pressure: 1 bar up to 100 C (373.15 K), the saturation pressure
- * above (the usual convention of the HKF data tables). */
+/* Default pressure: P = max(1 bar, psat(T)): 1 bar up to the normal boiling
+ * point (99.61 C), the saturation pressure above (the usual "1 bar to 100 C,
+ * psat above" of the HKF tables, made continuous: at 100 C and 1 bar water
+ * would be steam).  PX_ERANGE below 273.15 K or above 623.15 K. */
 int px_thermo_default_pressure(double T, double *P);
 
 /* CP model alone (solids, liquids, gases), exact integrals of

@@ -15,9 +15,15 @@ unsigned long px__db_generation(const px_db *db);
 /* Index of sp inside db's array, -1 if sp is not one of db's records. */
 long px__db_index_of(const px_db *db, const px_species *sp);
 
-/* HKF G with the g-function at T,P and at Tr,Pr precomputed (hot path). */
-int px__hkf_G_fast(const px_hkf_params *p, int charge, double dGf, double S,
-                   const px_water_state *w, const px_water_state *wr, const px_hkf_gfun *g,
-                   const px_hkf_gfun *gr, double *G);
+/* Terms of the HKF G shared by every species at one (T, P). */
+typedef struct px__hkf_common {
+    double T, dT, c1f, dP, lnP, invTt, c2H, c2S, inv, invr, Yr;
+    px_hkf_gfun g, gr;
+    int ok;
+} px__hkf_common;
+void px__hkf_common_init(const px_water_state *w, const px_water_state *wr,
+                         const px_hkf_gfun *g, const px_hkf_gfun *gr, px__hkf_common *c);
+int px__hkf_G_common(const px_hkf_params *p, int charge, double dGf, double S,
+                     const px__hkf_common *c, double *G);
 
 #endif
