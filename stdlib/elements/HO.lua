@@ -6,7 +6,7 @@
 -- shared/reference/hkf/hkf_parameters.csv with confidence high or medium
 -- (checked there against their published Cp and V at 25 C).
 return {
-  element = "H",
+  element = "HO",
   title = "Hydrogen and oxygen (built-in aqueous and gas species)",
   units = { energy = "kJ", entropy = "J" },
   species = {
