@@ -235,7 +235,9 @@ double px_diagram_polygon_distance(const double *x, const double *y, size_t n,
 /* Pole of inaccessibility: a point inside the simple polygon whose distance
  * to the outline is within `precision` of the largest (iterative cell
  * refinement).  *dist receives that distance.  PX_EINVAL for n < 3,
- * non-finite input, precision <= 0 or zero area. */
+ * non-finite input, precision <= 0 or zero area; PX_ELIMIT when a budget
+ * of 1e6 cells ran out (a ridge of equally good points, e.g. a long
+ * rectangle, with a tiny precision): the best point found is still set. */
 int px_diagram_polygon_pole(const double *x, const double *y, size_t n, double precision,
                             const px_allocator *alloc, double *px, double *py,
                             double *dist);
