@@ -126,12 +126,6 @@ static int add_seg(gctx *c, size_t p, size_t q, int la, int lb, double sx, doubl
     return PX_DG_PUSH(c->a, c->s, c->ns, c->caps, s) ? PX_ENOMEM : PX_OK;
 }
 
-static int cmp_int(const void *pa, const void *pb)
-{
-    int a = *(const int *)pa, b = *(const int *)pb;
-    return (a > b) - (a < b);
-}
-
 static size_t id_index(const px_diagram_grid_field *f, size_t n, int id)
 {
     size_t lo = 0, hi = n;
@@ -151,11 +145,22 @@ static int fields_summary(gctx *c, const double *xs, const double *ys)
     int *ids = px_alloc(c->a, N * sizeof *ids);
     double *dist = px_alloc(c->a, N * sizeof *dist);
     if (!ids || !dist) goto done;
-    for (size_t i = 0; i < N; i++) ids[i] = g->label[i];
-    qsort(ids, N, sizeof *ids, cmp_int);
+    /* distinct ids, kept sorted (few of them: insertion is cheap) */
     size_t nu = 0;
-    for (size_t i = 0; i < N; i++)
-        if (i == 0 || ids[i] != ids[i - 1]) ids[nu++] = ids[i];
+    for (size_t i = 0; i < N; i++) {
+        int id = g->label[i];
+        if (i > 0 && id == g->label[i - 1]) continue;
+        size_t lo = 0, hi = nu;
+        while (lo < hi) {
+            size_t m = lo + (hi - lo) / 2;
+            if (ids[m] < id) lo = m + 1;
+            else hi = m;
+        }
+        if (lo < nu && ids[lo] == id) continue;
+        for (size_t k = nu; k > lo; k--) ids[k] = ids[k - 1];
+        ids[lo] = id;
+        nu++;
+    }
     g->field = px_calloc(c->a, nu, sizeof *g->field);
     if (!g->field) goto done;
     g->nfield = nu;

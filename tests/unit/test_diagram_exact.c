@@ -214,6 +214,32 @@ static void test_random_tilings(void **state)
         }
 }
 
+/* Every species stable: planes tangent to the concave f = -A (x-7)^2 - B y^2
+ * at random points (a tangent plane of a concave function lies above it
+ * and touches it at its own point, so there it is the lowest plane). */
+static void test_all_stable(void **state)
+{
+    (void)state;
+    px_diagram_species sp[100];
+    rng_state = 99;
+    for (size_t j = 0; j < 100; j++) {
+        double x0 = 14 * urand(), y0 = -2 + 4 * urand(), A = 1e3, B = 1e5;
+        double f = -A * (x0 - 7) * (x0 - 7) - B * y0 * y0, fx = -2 * A * (x0 - 7), fy = -2 * B * y0;
+        sp[j].c = f - fx * x0 - fy * y0;
+        sp[j].p = fx;
+        sp[j].q = fy;
+        sp[j].id = (int)j;
+        sp[j].label = NULL;
+        /* the point of tangency itself lies in field j */
+        assert_int_equal(px_diagram_species_argmin(sp, j + 1, x0, y0), j);
+    }
+    px_diagram_map *map = NULL;
+    assert_int_equal(px_diagram_map_exact(&WIN, sp, 100, NULL, &map), PX_OK);
+    assert_int_equal(map->nfield, 100);
+    check_map(map, sp, 100, &WIN);
+    px_diagram_map_free(map);
+}
+
 /* Three lines through one point: Phi0 = x, Phi1 = y, Phi2 = -x - y meet at
  * (0, 0) where all three are 0; the three fields share that vertex. */
 static void test_triple_point(void **state)
@@ -630,7 +656,8 @@ static void test_corrosion_domains(void **state)
 int main(void)
 {
     const struct CMUnitTest tests[] = {
-        cmocka_unit_test(test_random_tilings), cmocka_unit_test(test_triple_point),
+        cmocka_unit_test(test_random_tilings), cmocka_unit_test(test_all_stable),
+        cmocka_unit_test(test_triple_point),
         cmocka_unit_test(test_nernst_zinc),    cmocka_unit_test(test_nernst_slopes),
         cmocka_unit_test(test_degenerate),     cmocka_unit_test(test_invalid),
         cmocka_unit_test(test_deterministic),  cmocka_unit_test(test_enomem),
