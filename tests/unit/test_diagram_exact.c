@@ -543,6 +543,24 @@ static void test_nested(void **state)
         assert_false(nest->boundary[b].vertical && fabs(nest->boundary[b].a - 5) < 1e-9);
     }
     assert_close(ln, lp, 1e-9, 0);
+    /* merged outlines: the union by group gives one loop per plain field,
+     * with the plain field's area */
+    int cls[16];
+    assert_true(nest->nfield <= 16);
+    for (size_t g = 0; g < nest->nfield; g++) cls[g] = nest->field[g].group;
+    px_diagram_outlines *ol = NULL;
+    assert_int_equal(px_diagram_map_union(nest, cls, &ol), PX_OK);
+    assert_int_equal(ol->nloop, plain->nfield);
+    for (size_t l = 0; l < ol->nloop; l++) {
+        int id = nest->field[ol->loop[l].cls].id, found = 0;
+        for (size_t f = 0; f < plain->nfield; f++)
+            if (plain->field[f].id == id) {
+                assert_close(ol->loop[l].area, plain->field[f].area, 1e-9, 0);
+                found = 1;
+            }
+        assert_true(found);
+    }
+    px_diagram_outlines_free(ol);
     px_diagram_map_free(nest);
 
     /* the right field has a complex ML, lowest everywhere there (the others
