@@ -237,6 +237,36 @@ static void test_all_stable(void **state)
     assert_int_equal(px_diagram_map_exact(&WIN, sp, 100, NULL, &map), PX_OK);
     assert_int_equal(map->nfield, 100);
     check_map(map, sp, 100, &WIN);
+    /* union with a hole: one interior field in class 1, all others class 0
+     * -> class 0 is the window minus that field: an outer loop and a hole */
+    int inner = -1;
+    for (size_t f = 0; f < map->nfield && inner < 0; f++) {
+        int touches = 0;
+        const px_diagram_field *F = &map->field[f];
+        for (size_t i = 0; i < F->n; i++) {
+            size_t v = map->ring[F->first + i];
+            if (map->vx[v] <= WIN.xmin || map->vx[v] >= WIN.xmax || map->vy[v] <= WIN.ymin ||
+                map->vy[v] >= WIN.ymax)
+                touches = 1;
+        }
+        if (!touches) inner = (int)f;
+    }
+    assert_true(inner >= 0);
+    int cls[100];
+    for (size_t f = 0; f < 100; f++) cls[f] = (int)f == inner ? 1 : 0;
+    px_diagram_outlines *o = NULL;
+    assert_int_equal(px_diagram_map_union(map, cls, &o), PX_OK);
+    assert_int_equal(o->nloop, 3);
+    double outer = 0, hole = 0, one = 0;
+    for (size_t l = 0; l < o->nloop; l++) {
+        if (o->loop[l].cls == 1) one = o->loop[l].area;
+        else if (o->loop[l].area > 0) outer = o->loop[l].area;
+        else hole = o->loop[l].area;
+    }
+    assert_close(outer, 14.0 * 4.0, 1e-12, 0);
+    assert_close(hole, -map->field[inner].area, 1e-9, 0);
+    assert_close(one, map->field[inner].area, 1e-9, 0);
+    px_diagram_outlines_free(o);
     px_diagram_map_free(map);
 }
 
