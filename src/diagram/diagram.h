@@ -107,7 +107,8 @@ typedef struct px_diagram_map {
 } px_diagram_map;
 
 /* Exact map of m species on a rectangular window.  PX_EINVAL for m == 0,
- * a bad window or any non-finite c, p, q; PX_ENOMEM. */
+ * a bad window or any non-finite c, p, q; PX_ERANGE when Phi on the window
+ * is so large (> DBL_MAX / 8) that differences would overflow; PX_ENOMEM. */
 int px_diagram_map_exact(const px_diagram_window *w, const px_diagram_species *sp,
                          size_t m, const px_diagram_options *opt,
                          px_diagram_map **out);

@@ -18,6 +18,7 @@
 #include "diagram/diagram.h"
 #include "diagram/diagram_impl.h"
 #include "core/status.h"
+#include <float.h>
 #include <math.h>
 #include <stdlib.h>
 
@@ -192,6 +193,10 @@ static int map_domain(builder *B, int region, const cv *dom, size_t nd,
     for (size_t j = 0; j < m; j++)
         S = fmax(S, fabs(sp[j].c) + fabs(sp[j].p) * X + fabs(sp[j].q) * Y);
     double tol = epsabs + epsrel * S;
+    if (!(S <= DBL_MAX / 8) || !isfinite(tol)) { /* differences of Phi would overflow */
+        st = PX_ERANGE;
+        goto done;
+    }
 
     /* clip first by the species lowest at the centre: fields shrink fast */
     for (size_t k = 0; k < m; k++) {

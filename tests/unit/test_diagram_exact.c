@@ -270,6 +270,35 @@ static void test_all_stable(void **state)
     px_diagram_map_free(map);
 }
 
+/* Small-integer coefficients: many exact duplicates, coincident and
+ * parallel lines and lines through common points. */
+static void test_structured_degenerate(void **state)
+{
+    (void)state;
+    px_diagram_species sp[40];
+    px_diagram_window w = {-3, 3, -3, 3};
+    for (unsigned long long seed = 1; seed <= 300; seed++) {
+        rng_state = seed * 7919;
+        size_t m = 2 + (size_t)(urand() * 38);
+        for (size_t j = 0; j < m; j++) {
+            sp[j].c = (double)((int)(urand() * 5) - 2);
+            sp[j].p = (double)((int)(urand() * 5) - 2);
+            sp[j].q = (double)((int)(urand() * 3) - 1);
+            sp[j].id = (int)j;
+            sp[j].label = NULL;
+        }
+        px_diagram_map *map = NULL;
+        assert_int_equal(px_diagram_map_exact(&w, sp, m, NULL, &map), PX_OK);
+        check_map(map, sp, m, &w);
+        px_diagram_map_free(map);
+    }
+    /* overflow guard */
+    px_diagram_species big[2] = {{1e308, 0, 0, 1, NULL}, {-1e308, 0, 0, 2, NULL}};
+    px_diagram_map *map = NULL;
+    assert_int_equal(px_diagram_map_exact(&w, big, 2, NULL, &map), PX_ERANGE);
+    assert_null(map);
+}
+
 /* Three lines through one point: Phi0 = x, Phi1 = y, Phi2 = -x - y meet at
  * (0, 0) where all three are 0; the three fields share that vertex. */
 static void test_triple_point(void **state)
@@ -705,7 +734,7 @@ int main(void)
 {
     const struct CMUnitTest tests[] = {
         cmocka_unit_test(test_random_tilings), cmocka_unit_test(test_all_stable),
-        cmocka_unit_test(test_triple_point),
+        cmocka_unit_test(test_triple_point),   cmocka_unit_test(test_structured_degenerate),
         cmocka_unit_test(test_nernst_zinc),    cmocka_unit_test(test_nernst_slopes),
         cmocka_unit_test(test_degenerate),     cmocka_unit_test(test_invalid),
         cmocka_unit_test(test_deterministic),  cmocka_unit_test(test_enomem),
