@@ -808,6 +808,49 @@ static void test_eval_all(void **state)
     px_db_free(db);
 }
 
+/* H2O(l) = H2O(g): the WATER model (IAPWS-95 anchored at NBS 1982) with the
+ * H2O(g) record of HO.lua (NBS 1982 G, H, S; Kelley 1960 Cp) gives
+ * K = f(sat) = phi psat: log K vs log10 psat (water.csv, IAPWS-95) within
+ * 0.01, which covers the fugacity coefficient of saturated steam (phi ~
+ * 0.986 at 100 C, log -0.006: common practice, no source) and the NBS data. */
+static void test_vaporization(void **state)
+{
+    (void)state;
+    px_db *db = px_db_new();
+    assert_int_equal(px_db_add_builtins(db), PX_OK);
+    px_species g = mk("H2O(g)", PX_MODEL_CP, -228572, -241818, 188.825);
+    g.cp.a = 30.543;
+    g.cp.b = 10.293e-3;
+    assert_int_equal(px_db_add(db, &g), PX_OK);
+    px_thermo_ws *ws = px_thermo_ws_new(PX_DIELECTRIC_R8_97);
+    px_reaction r;
+    char msg[128];
+    assert_int_equal(px_reaction_parse_balanced("H2O(l) = H2O(g)", &r, msg, sizeof msg), PX_OK);
+    FILE *fp = ref_open("water.csv");
+    csv_row hdr, row;
+    assert_true(csv_read(fp, &hdr));
+    int cg = col(&hdr, "group"), ct = col(&hdr, "T_K"), cq = col(&hdr, "quantity"),
+        cv = col(&hdr, "value");
+    int n = 0;
+    while (csv_read(fp, &row)) {
+        double T = atof(row.f[ct]);
+        if (row.n < hdr.n || strcmp(row.f[cg], "saturation_liquid_computed") ||
+            strcmp(row.f[cq], "p_sat") || T < 298 || T > 373.2)
+            continue;
+        double P, lk;
+        assert_int_equal(px_thermo_default_pressure(T, &P), PX_OK);
+        assert_int_equal(px_reaction_logK(ws, db, &r, T, P, &lk), PX_OK);
+        double ref = log10(atof(row.f[cv]) * PX_BAR_PER_MPA);
+        print_message("vaporization %.2f C: log K %.4f, log10 psat %.4f\n", T - 273.15, lk, ref);
+        assert_close(lk, ref, 0, 0.01);
+        n++;
+    }
+    fclose(fp);
+    assert_true(n >= 3);
+    px_thermo_ws_free(ws);
+    px_db_free(db);
+}
+
 /* bad inputs give a status, never NaN (SQLite-style walk over NaN, Inf) */
 static void test_bad_inputs(void **state)
 {
@@ -909,7 +952,7 @@ int main(void)
         cmocka_unit_test(test_electron_convention), cmocka_unit_test(test_cp_model),
         cmocka_unit_test(test_logk_model),      cmocka_unit_test(test_eval_all),
         cmocka_unit_test(test_default_pressure), cmocka_unit_test(test_bad_inputs),
-        cmocka_unit_test(test_ws_reuse),
+        cmocka_unit_test(test_ws_reuse),        cmocka_unit_test(test_vaporization),
     };
     return cmocka_run_group_tests(tests, NULL, NULL);
 }
