@@ -3,10 +3,13 @@
  *
  * The caller owns a px_thermo_ws: it caches the water state at the last
  * (T, P) (one IAPWS-95 density solve and the dielectric constant), the
- * reference state at 298.15 K, 1 bar, the g-function at both, and the G of
- * every species of the last database evaluated at that (T, P).  Evaluating
- * a whole database at a new (T, P) therefore costs one water solve plus a
- * few arithmetic operations per species.
+ * reference state at 298.15 K, 1 bar, the g-function and the HKF terms
+ * common to all species at both, and the parsed reactions of reaction-
+ * defined species (checked against the record before each use).  The G of
+ * each species is memoised within one call only (dependencies of reaction-
+ * defined species), since a database may be freed between calls.
+ * Evaluating a whole database at a new (T, P) therefore costs one water
+ * solve plus a few arithmetic operations per species.
  *
  * Models (species.h): HKF (hkf.c), CP (cpmodel.c), LOGK (a species defined by
  * its formation reaction: nu_s G_s = -sum_{j != s} nu_j G_j - RT ln10 log K,
@@ -31,6 +34,8 @@
 /* A LOGK species' reaction, parsed once, with the db index of each species
  * (-1: the electron, or the species itself). */
 typedef struct logk_cache {
+    char text[PX_NAME_MAX]; /* the species and reaction it was built from: a */
+    char reaction[256];     /* cache entry is used only if both still match */
     px_reaction r;
     int self;
     long idx[PX_REACTION_MAX];
@@ -54,7 +59,7 @@ struct px_thermo_ws {
     unsigned long lk_gen;
     struct logk_cache **lk;
     size_t lk_n;
-    /* species G cache */
+    /* species G memo, valid within one top-level call */
     const px_db *cdb;
     unsigned long cgen;
     double cT, cP;
@@ -289,14 +294,25 @@ static int logk_get(px_thermo_ws *ws, const px_db *db, const px_species *sp, log
             ws->lk_db = db;
             ws->lk_gen = px__db_generation(db);
         }
-        if (ws->lk[k]) {
-            *out = ws->lk[k];
+        const logk_cache *c = ws->lk[k];
+        int valid = c && !strcmp(c->text, sp->f.text) && !strcmp(c->reaction, sp->logk.reaction);
+        for (int i = 0; valid && i < c->r.n; i++) /* another db may sit at the same address */
+            if (c->idx[i] >= 0) {
+                const px_species *o = px_db_get(db, (size_t)c->idx[i]);
+                valid = o && !strcmp(o->f.text, c->r.sp[i].text);
+            }
+        if (valid) {
+            *out = c;
             return PX_OK;
         }
+        free(ws->lk[k]);
+        ws->lk[k] = NULL;
     }
     int st = logk_find_self(ws, sp, &tmp->r, &tmp->self);
     if (st)
         return st;
+    snprintf(tmp->text, sizeof tmp->text, "%s", sp->f.text);
+    snprintf(tmp->reaction, sizeof tmp->reaction, "%s", sp->logk.reaction);
     for (int i = 0; i < tmp->r.n; i++)
         tmp->idx[i] = (i == tmp->self || tmp->r.sp[i].state == PX_STATE_E || !db)
                           ? -1
@@ -414,6 +430,7 @@ int px_thermo_species_G(px_thermo_ws *ws, const px_db *db, const px_species *sp,
         return PX_EINVAL;
     ws->err[0] = '\0';
     ws->depth = 0;
+    ws->cdb = NULL; /* the G cache lives for one call (a db may be freed between calls) */
     if (!(T > 0) || !isfinite(P))
         return werr(ws, PX_EINVAL, "T and P must be finite and positive");
     return species_G(ws, db, sp, T, P, G);
@@ -425,6 +442,7 @@ int px_thermo_eval_all(px_thermo_ws *ws, const px_db *db, double T, double P, do
         return PX_EINVAL;
     ws->err[0] = '\0';
     ws->depth = 0;
+    ws->cdb = NULL; /* the G cache lives for one call (a db may be freed between calls) */
     if (!(T > 0) || !isfinite(P))
         return werr(ws, PX_EINVAL, "T and P must be finite and positive");
     size_t n = px_db_count(db);
@@ -546,6 +564,7 @@ int px_thermo_species_props(px_thermo_ws *ws, const px_db *db, const px_species 
         return PX_EINVAL;
     ws->err[0] = '\0';
     ws->depth = 0;
+    ws->cdb = NULL; /* the G cache lives for one call (a db may be freed between calls) */
     if (!(T > 0) || !isfinite(P))
         return werr(ws, PX_EINVAL, "T and P must be finite and positive");
     return species_props(ws, db, sp, T, P, out);
@@ -574,6 +593,7 @@ int px_reaction_logK(px_thermo_ws *ws, const px_db *db, const px_reaction *r, do
         return PX_EINVAL;
     ws->err[0] = '\0';
     ws->depth = 0;
+    ws->cdb = NULL; /* the G cache lives for one call (a db may be freed between calls) */
     double dG = 0;
     for (int i = 0; i < r->n; i++) {
         const px_species *sp;
@@ -597,6 +617,7 @@ int px_reaction_props(px_thermo_ws *ws, const px_db *db, const px_reaction *r, d
         return PX_EINVAL;
     ws->err[0] = '\0';
     ws->depth = 0;
+    ws->cdb = NULL; /* the G cache lives for one call (a db may be freed between calls) */
     px_reaction_result o = {0, 0, 0, 0, 0, 0, 0, NAN};
     for (int i = 0; i < r->n; i++) {
         const px_species *sp;

@@ -808,6 +808,110 @@ static void test_eval_all(void **state)
     px_db_free(db);
 }
 
+/* H2O(l) = H2O(g): the WATER model (IAPWS-95 anchored at NBS 1982) with the
+ * H2O(g) record of HO.lua (NBS 1982 G, H, S; Kelley 1960 Cp) gives
+ * K = f(sat) = phi psat: log K vs log10 psat (water.csv, IAPWS-95) within
+ * 0.01, which covers the fugacity coefficient of saturated steam (phi ~
+ * 0.986 at 100 C, log -0.006: common practice, no source) and the NBS data. */
+static void test_vaporization(void **state)
+{
+    (void)state;
+    px_db *db = px_db_new();
+    assert_int_equal(px_db_add_builtins(db), PX_OK);
+    px_species g = mk("H2O(g)", PX_MODEL_CP, -228572, -241818, 188.825);
+    g.cp.a = 30.543;
+    g.cp.b = 10.293e-3;
+    assert_int_equal(px_db_add(db, &g), PX_OK);
+    px_thermo_ws *ws = px_thermo_ws_new(PX_DIELECTRIC_R8_97);
+    px_reaction r;
+    char msg[128];
+    assert_int_equal(px_reaction_parse_balanced("H2O(l) = H2O(g)", &r, msg, sizeof msg), PX_OK);
+    FILE *fp = ref_open("water.csv");
+    csv_row hdr, row;
+    assert_true(csv_read(fp, &hdr));
+    int cg = col(&hdr, "group"), ct = col(&hdr, "T_K"), cq = col(&hdr, "quantity"),
+        cv = col(&hdr, "value");
+    int n = 0;
+    while (csv_read(fp, &row)) {
+        double T = atof(row.f[ct]);
+        if (row.n < hdr.n || strcmp(row.f[cg], "saturation_liquid_computed") ||
+            strcmp(row.f[cq], "p_sat") || T < 298 || T > 373.2)
+            continue;
+        double P, lk;
+        assert_int_equal(px_thermo_default_pressure(T, &P), PX_OK);
+        assert_int_equal(px_reaction_logK(ws, db, &r, T, P, &lk), PX_OK);
+        double ref = log10(atof(row.f[cv]) * PX_BAR_PER_MPA);
+        print_message("vaporization %.2f C: log K %.4f, log10 psat %.4f\n", T - 273.15, lk, ref);
+        assert_close(lk, ref, 0, 0.01);
+        n++;
+    }
+    fclose(fp);
+    assert_true(n >= 3);
+    px_thermo_ws_free(ws);
+    px_db_free(db);
+}
+
+/* bad inputs give a status, never NaN (SQLite-style walk over NaN, Inf) */
+static void test_bad_inputs(void **state)
+{
+    (void)state;
+    px_db *db = db_from_hkf();
+    px_thermo_ws *ws = px_thermo_ws_new(PX_DIELECTRIC_R8_97);
+    const px_species *oh = px_db_find(db, "OH^-");
+    double G = 12345;
+    const double bad[] = {NAN, INFINITY, -INFINITY, -1, 0};
+    for (size_t i = 0; i < sizeof bad / sizeof bad[0]; i++) {
+        assert_true(px_thermo_species_G(ws, db, oh, bad[i], 1, &G) < 0);
+        if (isfinite(bad[i]))
+            continue;
+        assert_true(px_thermo_species_G(ws, db, oh, 298.15, bad[i], &G) < 0);
+    }
+    assert_close(G, 12345, 0, 0); /* untouched on failure */
+    assert_int_equal(px_thermo_species_G(ws, db, oh, 298.15, 2000, &G), PX_ERANGE);
+    double P;
+    assert_true(px_thermo_default_pressure(NAN, &P) < 0);
+    assert_true(px_thermo_default_pressure(700, &P) < 0);
+    /* a species with no dGf */
+    px_species s = mk("Q^-", PX_MODEL_HKF, NAN, NAN, 0);
+    snprintf(s.f.text, sizeof s.f.text, "Cl^-");
+    s.f.charge = -1;
+    assert_true(px_thermo_species_G(ws, db, &s, 298.15, 1, &G) < 0);
+    /* a dielectric model the water module does not provide: a clear error */
+    px_thermo_ws *wj = px_thermo_ws_new(PX_DIELECTRIC_JN91);
+    int st = px_thermo_species_G(wj, db, oh, 298.15, 1, &G);
+    if (st == PX_OK)
+        print_message("note: JN91 dielectric now available\n");
+    else
+        assert_non_null(strstr(px_thermo_ws_error(wj), "water"));
+    px_thermo_ws_free(wj);
+    px_thermo_ws_free(ws);
+    px_db_free(db);
+}
+
+/* a workspace reused with a new database (possibly at the same address)
+ * uses the new records, never a cached reaction of the old ones */
+static void test_ws_reuse(void **state)
+{
+    (void)state;
+    px_thermo_ws *ws = px_thermo_ws_new(PX_DIELECTRIC_R8_97);
+    double G[2][8];
+    for (int round = 0; round < 2; round++) {
+        px_db *db = px_db_new();
+        px_species a = mk("Na^+", PX_MODEL_CP, -261905, NAN, 59.0);
+        px_species b = mk("Cl^-", PX_MODEL_CP, -131228, NAN, 56.5);
+        px_species c = mk("NaCl(aq)", PX_MODEL_LOGK, NAN, NAN, NAN);
+        snprintf(c.logk.reaction, sizeof c.logk.reaction, "Na^+ + Cl^- = NaCl(aq)");
+        c.logk.logK25 = round == 0 ? -0.5 : 0.5; /* test values, no source */
+        assert_int_equal(px_db_add(db, &a), PX_OK);
+        assert_int_equal(px_db_add(db, &b), PX_OK);
+        assert_int_equal(px_db_add(db, &c), PX_OK);
+        assert_int_equal(px_thermo_eval_all(ws, db, 298.15, 1, G[round]), PX_OK);
+        px_db_free(db);
+    }
+    assert_close(G[0][2] - G[1][2], PX_R * 298.15 * PX_LN10, 1e-12, 0);
+    px_thermo_ws_free(ws);
+}
+
 /* default pressure: 1 bar to 100 C, saturation above (water.csv p_sat) */
 static void test_default_pressure(void **state)
 {
@@ -847,7 +951,8 @@ int main(void)
         cmocka_unit_test(test_pkw),             cmocka_unit_test(test_standard_potentials),
         cmocka_unit_test(test_electron_convention), cmocka_unit_test(test_cp_model),
         cmocka_unit_test(test_logk_model),      cmocka_unit_test(test_eval_all),
-        cmocka_unit_test(test_default_pressure),
+        cmocka_unit_test(test_default_pressure), cmocka_unit_test(test_bad_inputs),
+        cmocka_unit_test(test_ws_reuse),        cmocka_unit_test(test_vaporization),
     };
     return cmocka_run_group_tests(tests, NULL, NULL);
 }
