@@ -1,13 +1,25 @@
 --- phlox: the module every study script starts with.
---  local phlox = require "phlox"
+--    local phlox = require "phlox"
+--    local lib = phlox.library { "Fe", "S" }
+--    local map = phlox.map { library = lib, element = "Fe", T_C = 150, ligand = "S" }
 -- It gathers the C primitives (phlox.core) and the Lua helpers of the
--- embedded library into one table.
+-- embedded library (phlox.plot, phlox.export, phlox.sweep, ...) into one
+-- table.  Temperatures in user-facing options are in degrees Celsius
+-- (T_C) or kelvin (T); pressures in bar (P, default 1 bar up to 100 C and
+-- the saturation pressure above).
 local core = require "phlox.core"
+local provenance = require "phlox.provenance"
 
 local phlox = {
   version = core.version,
   core = core,
 }
+
+local T0C = 273.15 -- K at 0 C
+
+phlox.caution = "A thermodynamic diagram says what can form, not how fast it forms: "
+  .. "passivity depends on film kinetics, alloying, flow and deposits. Use these results "
+  .. "with the applicable codes, standards and licensed engineering practice."
 
 --- The folders searched before the built-in library, in order.
 function phlox.search_paths()
@@ -33,8 +45,217 @@ function phlox.read_library_file(rel)
   return nil, "no file '" .. rel .. "' in the search path or the built-in library"
 end
 
-phlox.caution = "A thermodynamic diagram says what can form, not how fast it forms: "
-  .. "passivity depends on film kinetics, alloying, flow and deposits. Use these results "
-  .. "with the applicable codes, standards and licensed engineering practice."
+--- The elements whose definition files the library has (built-in and user).
+function phlox.available_elements()
+  local seen, list = {}, {}
+  local function add(sym) if not seen[sym] then seen[sym] = true; list[#list + 1] = sym end end
+  for _, path in ipairs(core.embedded_files()) do
+    local sym = path:match("^stdlib/elements/(%u%l?)%.lua$")
+    if sym then add(sym) end
+  end
+  for _, dir in ipairs(core.search_paths()) do
+    local p = io.popen('ls "' .. dir .. '/elements" 2>/dev/null')
+    if p then
+      for name in p:lines() do
+        local sym = name:match("^(%u%l?)%.lua$")
+        if sym then add(sym) end
+      end
+      p:close()
+    end
+  end
+  table.sort(list)
+  return list
+end
+
+-- Ligand files hold the complexes and solids they form with metals, so they
+-- load after the metals (definition-file format, "Where species go").
+local LIGAND_ORDER = { Cl = 1, S = 2, C = 3, N = 4, P = 5, F = 6 }
+
+local function temperature(opts, where)
+  if opts.T and opts.T_C then error(where .. ": give T (K) or T_C (C), not both", 3) end
+  local T = opts.T or (opts.T_C and opts.T_C + T0C) or 298.15
+  if type(T) ~= "number" or T ~= T then error(where .. ": temperature must be a number", 3) end
+  return T
+end
+
+local function pressure(opts, T, where)
+  if opts.P ~= nil then
+    if type(opts.P) ~= "number" then error(where .. ": P must be a number (bar)", 3) end
+    return opts.P
+  end
+  local P, err = core.default_pressure(T)
+  if not P then error(where .. ": " .. err, 3) end
+  return P
+end
+
+--- A species library: the built-in H/O species plus the element files named.
+--   phlox.library { "Fe", "Cl", user = { "my/Fe-extra.lua" } }
+-- The user's folders (--path, PHLOX_PATH) override built-in element files;
+-- `user` files add, replace or exclude species.  Complexes of metals that
+-- are not loaded are left out.  Errors name the file, line and field.
+function phlox.library(spec)
+  if type(spec) == "string" then spec = { spec } end
+  assert(type(spec) == "table", "phlox.library: give a list of element symbols")
+  local db = core.database(spec.dielectric)
+  local elements = {}
+  for i, sym in ipairs(spec) do
+    if type(sym) ~= "string" or not sym:match("^%u%l?$") then
+      error(("phlox.library: entry %d is not an element symbol: %s"):format(i, tostring(sym)), 2)
+    end
+    elements[#elements + 1] = sym
+  end
+  local order = {}
+  for _, e in ipairs(elements) do order[#order + 1] = e end
+  table.sort(order, function(a, b)
+    local la, lb = LIGAND_ORDER[a] or 0, LIGAND_ORDER[b] or 0
+    if la ~= lb then return la < lb end
+    return a < b
+  end)
+  local filter = { "H", "O" }
+  for _, e in ipairs(elements) do filter[#filter + 1] = e end
+  local files = {}
+  local function load(rel, opts)
+    local text, where = phlox.read_library_file(rel)
+    if not text then error("phlox.library: " .. where, 3) end
+    local ok, msg, problems = db:load(text, where, opts)
+    if not ok then
+      local lines = {}
+      for _, p in ipairs(problems or {}) do
+        if p.severity == "error" then lines[#lines + 1] = p.text end
+      end
+      error("phlox.library: " .. (#lines > 0 and table.concat(lines, "\n") or msg), 3)
+    end
+    provenance.record_file(where, text)
+    files[#files + 1] = where
+  end
+  load("elements/HO.lua", { elements = filter })
+  for _, e in ipairs(order) do load("elements/" .. e .. ".lua", { elements = filter }) end
+  for _, path in ipairs(spec.user or {}) do
+    local f, err = io.open(path, "rb")
+    if not f then error("phlox.library: " .. err, 2) end
+    local text = f:read("a")
+    f:close()
+    local ok, msg = db:load(text, path, { elements = filter, user = true })
+    if not ok then error("phlox.library: " .. msg, 2) end
+    provenance.record_file(path, text)
+    files[#files + 1] = path
+  end
+  return setmetatable({ db = db, elements = elements, files = files }, phlox.Library)
+end
+
+phlox.Library = {}
+phlox.Library.__index = phlox.Library
+
+--- Species record (a table) by formula, or nil.
+function phlox.Library:species(formula) return self.db:species(formula) end
+
+--- All species as records, optionally only those containing an element.
+function phlox.Library:list(element)
+  local out = {}
+  for i = 1, self.db:count() do
+    local s = self.db:species(i)
+    if not element or s.elements[element] then out[#out + 1] = s end
+  end
+  return out
+end
+
+--- Standard-state properties of a species at T (K) [and P (bar)]:
+-- { G, H, S, Cp, V } in J/mol, J/(mol K), J/bar.
+function phlox.Library:props(formula, opts)
+  opts = opts or {}
+  local T = temperature(opts, "props")
+  local r, err = self.db:props(formula, T, pressure(opts, T, "props"))
+  if not r then error("props: " .. err, 2) end
+  return r
+end
+
+--- Reaction properties at T: { dG, dH, dS, logK, E (V vs SHE, half
+-- reactions only), T, P, text }.
+function phlox.Library:reaction(text, opts)
+  opts = opts or {}
+  local T = temperature(opts, "reaction")
+  local r, err = self.db:reaction(text, T, pressure(opts, T, "reaction"))
+  if not r then error(err, 2) end
+  return r
+end
+
+--- Properties of water at T [and P]: density, dielectric constant,
+-- Debye-Hueckel A and B, Born functions, pKw (IAPWS R11-07).
+function phlox.water(opts)
+  opts = opts or {}
+  local T = temperature(opts, "water")
+  local w, err = core.water(T, pressure(opts, T, "water"))
+  if not w then error(err, 2) end
+  return w
+end
+
+local function window_of(opts, xname, yname)
+  local ranges = { pH = opts.pH_range or { 0, 14 }, E = opts.E_range or { -2, 2 },
+                   loga = opts.loga_range or { -8, 0 } }
+  local x, y = ranges[xname], ranges[yname]
+  return { x[1], x[2], y[1], y[2] }
+end
+
+--- An exact predominance map (fields as polygons, boundaries with their
+-- reactions, water lines, neutral pH, corrosion domains).
+--   phlox.map { library = lib, element = "Fe", T_C = 25,
+--               pH_range = {0, 14}, E_range = {-2, 2}, activity = 1e-6,
+--               ligand = "S", ligand_activity = 1e-3, ionic_strength = 0,
+--               exclude = {"Fe3O4(s)"}, axes = {"pH", "E"} }
+function phlox.map(opts)
+  assert(type(opts) == "table", "phlox.map: options table expected")
+  local lib = opts.library
+  if getmetatable(lib) ~= phlox.Library then error("phlox.map: library = phlox.library{...} expected", 2) end
+  if type(opts.element) ~= "string" then error("phlox.map: element (a symbol) expected", 2) end
+  local T = temperature(opts, "phlox.map")
+  local P = pressure(opts, T, "phlox.map")
+  local axes = opts.axes or { "pH", "E" }
+  local copt = {
+    element = opts.element, T = T, P = P, x = axes[1], y = axes[2],
+    window = window_of(opts, axes[1], axes[2]),
+    pH = opts.pH, E = opts.E, activity = opts.activity,
+    ligand = opts.ligand, ligand_activity = opts.ligand_activity,
+    gas_log_f = opts.gas_log_f, ionic_strength = opts.ionic_strength,
+    exclude = opts.exclude, only = opts.only, activities = opts.activities,
+  }
+  local m, err = core.map(lib.db, copt)
+  if not m then error(err, 2) end
+  m.conditions = {
+    T_C = T - T0C, P_bar = P, activity = opts.activity or 1e-6,
+    ionic_strength = opts.ionic_strength or 0,
+    ligand = opts.ligand, ligand_activity = opts.ligand and (opts.ligand_activity or 1e-3) or nil,
+  }
+  m.files = lib.files
+  return m
+end
+
+--- The species of the map at a point, e.g. phlox.locate(map, 7.0, -0.4).
+function phlox.locate(map, x, y)
+  for _, f in ipairs(map.fields) do
+    local inside, n = false, #f.x
+    local j = n
+    for i = 1, n do
+      local xi, yi, xj, yj = f.x[i], f.y[i], f.x[j], f.y[j]
+      if ((yi > y) ~= (yj > y)) and (x < (xj - xi) * (y - yi) / (yj - yi) + xi) then inside = not inside end
+      j = i
+    end
+    if inside then return f.species, f end
+  end
+  return nil
+end
+
+--- Reference electrodes: name -> { name, offset (V vs SHE at 25 C), source }.
+function phlox.electrodes()
+  local out = {}
+  for _, e in ipairs(core.electrodes()) do out[e.name] = e end
+  return out
+end
+
+--- A potential measured against a reference electrode, on the SHE scale.
+function phlox.to_she(E_measured, electrode)
+  local e = phlox.electrodes()[electrode]
+  if not e then error("unknown reference electrode '" .. tostring(electrode) .. "'", 2) end
+  return E_measured + e.offset
+end
 
 return phlox

@@ -2,15 +2,127 @@
 -- Each takes the argument list after the command name and returns an exit
 -- status: 0 success, 1 failure, 2 usage error.
 local cli = {}
-
 local commands = {}
+
+local function usage(msg)
+  io.stderr:write("phlox: ", msg, "\n")
+  return 2
+end
+
+local function json_number(x)
+  if x == nil or x ~= x or x == math.huge or x == -math.huge then return "null" end
+  return require("phlox.json").number(x)
+end
+
+-- Elements of a reaction's species, to know which files to load.
+local function elements_of(text)
+  local core = require "phlox.core"
+  local seen, list = {}, {}
+  local lhs, rhs = text:match("^(.-)=(.*)$")
+  if not lhs then return nil, "a reaction needs '='" end
+  for side in (lhs .. "+" .. rhs):gmatch("[^+]+") do
+    -- each term: optional coefficient, then a formula (charges like ^2+ were
+    -- split at '+'; rejoin is not needed for element detection)
+    for sym in side:gmatch("(%u%l?)") do
+      if sym ~= "H" and sym ~= "O" and not seen[sym] then
+        seen[sym] = true
+        list[#list + 1] = sym
+      end
+    end
+  end
+  for _, s in ipairs(list) do
+    if not core.embedded_source("stdlib/elements/" .. s .. ".lua") then
+      local phlox = require "phlox"
+      local t = phlox.read_library_file("elements/" .. s .. ".lua")
+      if not t then return nil, "no element definition file for '" .. s .. "'" end
+    end
+  end
+  return list
+end
+
+function commands.reaction(args)
+  local eq, T_C, P, as_json
+  local i = 1
+  while i <= #args do
+    local a = args[i]
+    if a == "--temperature" or a == "-T" then
+      T_C = tonumber(args[i + 1]); i = i + 2
+      if not T_C then return usage("--temperature needs a number (degrees C)") end
+    elseif a == "--pressure" or a == "-P" then
+      P = tonumber(args[i + 1]); i = i + 2
+      if not P then return usage("--pressure needs a number (bar)") end
+    elseif a == "--json" then
+      as_json = true; i = i + 1
+    elseif a:sub(1, 2) == "--" then
+      return usage("reaction: unknown option '" .. a .. "'")
+    elseif eq then
+      return usage("reaction: give one equation (quote it)")
+    else
+      eq = a; i = i + 1
+    end
+  end
+  if not eq then return usage('reaction: usage: phlox reaction "EQUATION" [--temperature C] [--pressure BAR] [--json]') end
+  local phlox = require "phlox"
+  local els, err = elements_of(eq)
+  if not els then io.stderr:write("phlox: reaction: ", err, "\n"); return 1 end
+  local ok, lib = pcall(phlox.library, els)
+  if not ok then io.stderr:write("phlox: ", tostring(lib), "\n"); return 1 end
+  local T = (T_C or 25) + 273.15
+  local r, rerr = lib.db:reaction(eq, T, P)
+  if not r then io.stderr:write("phlox: ", rerr, "\n"); return 1 end
+  if as_json then
+    io.write(string.format('{"T_K":%s,"P_bar":%s,"dG_kJ":%s,"logK":%s,"E0_V":%s}\n',
+      json_number(r.T), json_number(r.P), json_number(r.dG and r.dG / 1000),
+      json_number(r.logK), r.E and json_number(r.E) or "null"))
+  else
+    io.write(("%s\n"):format(r.text or eq))
+    io.write(("  T = %.2f C (%.2f K), P = %.4g bar\n"):format(r.T - 273.15, r.T, r.P))
+    io.write(("  dG = %.3f kJ/mol\n"):format(r.dG / 1000))
+    if r.dH then io.write(("  dH = %.3f kJ/mol\n"):format(r.dH / 1000)) end
+    if r.dS then io.write(("  dS = %.3f J/(mol K)\n"):format(r.dS)) end
+    io.write(("  log K = %.4f\n"):format(r.logK))
+    if r.E then io.write(("  E = %.4f V vs SHE (n = %g)\n"):format(r.E, r.n_e)) end
+  end
+  return 0
+end
+
+function commands.check(args)
+  if #args == 0 then return usage("check: usage: phlox check FILE...") end
+  local core = require "phlox.core"
+  local ok, problems = core.check_files(args)
+  local nerr, nwarn = 0, 0
+  for _, p in ipairs(problems) do
+    io.stdout:write(p.text, "\n")
+    if p.severity == "error" then nerr = nerr + 1 else nwarn = nwarn + 1 end
+  end
+  io.stderr:write(("phlox check: %d file(s), %d error(s), %d warning(s)\n"):format(#args, nerr, nwarn))
+  return ok and 0 or 1
+end
+
+function commands.list(args)
+  local phlox = require "phlox"
+  local element = args[1]
+  if #args > 1 then return usage("list: usage: phlox list [ELEMENT]") end
+  local els = phlox.available_elements()
+  if element then
+    local found = false
+    for _, e in ipairs(els) do if e == element then found = true end end
+    if not found and element ~= "H" and element ~= "O" then
+      io.stderr:write("phlox: list: no element definition file for '", element, "'\n")
+      return 1
+    end
+  end
+  local ok, lib = pcall(phlox.library, els)
+  if not ok then io.stderr:write("phlox: ", tostring(lib), "\n"); return 1 end
+  local text, n = lib.db:list_text(element)
+  io.write(text)
+  io.stderr:write(("phlox list: %d species\n"):format(n))
+  return 0
+end
 
 function cli.run(name, args)
   local cmd = commands[name]
-  if not cmd then
-    io.stderr:write("phlox: unknown command '", tostring(name), "'\n")
-    return 2
-  end
+  if not cmd then return usage("unknown command '" .. tostring(name) .. "'") end
   return cmd(args)
 end
 

@@ -14,5 +14,7 @@ extern const px_lua_opener px_lua_openers[]; /* NULL-terminated */
 void px_lua_open_status(lua_State *L);
 void px_lua_open_util(lua_State *L);
 void px_lua_open_render(lua_State *L);
+void px_lua_open_thermo(lua_State *L);
+void px_lua_open_diagram(lua_State *L);
 
 #endif

@@ -5,4 +5,6 @@ const px_lua_opener px_lua_openers[] = {
     px_lua_open_status,
     px_lua_open_util,
     px_lua_open_render,
+    px_lua_open_thermo,
+    px_lua_open_diagram,
     0};

@@ -86,6 +86,8 @@ return {
       cp = { a = 123.4, b = 0, c = 0 },
       source = NBS,
       quality = "medium",
+      known_mismatch = "dfG, dfH and S recalled from NBS 1982 miss the cycle by 1.64 kJ/mol; " ..
+                       "one of them is mis-recalled (probably S); check against the printed table",
       note = "dfG, dfH and S miss the cycle dfG = dfH - T*dfS by 1.6 kJ/mol (one of them " ..
              "is mis-recalled, probably S). cp: NBS Cp(298.15 K) only.",
     },

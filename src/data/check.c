@@ -1,0 +1,333 @@
+/* check.c - rules that need a whole element file, after its table was read.
+ *
+ *   - formula versus state, charge and model (hkf: aqueous; cp: solid, liquid
+ *     or gas; charged species are aqueous);
+ *   - membership: every species of Zn.lua contains Zn; a ligand file's
+ *     species contain the ligand; a species with a ligand that comes earlier
+ *     in the order Cl, S, C, N, P, F belongs in that ligand's file (warning);
+ *   - duplicates within the file (and against species already known);
+ *   - third-law entropies of solids, liquids and gases are positive;
+ *   - the cycle dfG = dfH - T dfS at 298.15 K, with dfS from the elements'
+ *     reference-state entropies; for ions the conventional scale (H+ = 0)
+ *     gives each unit of positive charge the entropy of one released
+ *     electron, S(e-) = S(H2, g)/2 (from H+ + e- = 1/2 H2 with S(H+) = 0);
+ *     a mismatch above opt->consistency_tol is an error, and the message
+ *     says which single slip (a flipped sign, a kJ/J or J/cal factor) would
+ *     close the cycle; a species with `known_mismatch = "why"` gets a warning
+ *     instead, up to PX_DATA_KNOWN_MISMATCH_MAX (never for gross slips);
+ *   - a |dfG| or |dfH| per atom beyond opt->magnitude_warn (unit slip?);
+ *   - logk reactions: parsed and balanced by thermo's px_reaction_parse and
+ *     px_reaction_balance (the parser the core uses later); the species is a
+ *     product with coefficient 1; reactants known (when a database is given);
+ *   - HKF estimates are made here (px_hkf_estimate) once the formula, and so
+ *     the charge, is known. */
+#include "data/data_internal.h"
+#include "core/constants.h"
+#include "core/status.h"
+#include <math.h>
+#include <stdlib.h>
+#include <string.h>
+
+/* the ligand files in the order FORMAT.md gives for mixed-ligand species:
+ * Cl, S, C, N, P, F (atomic numbers) */
+static const int ligand_order[] = {17, 16, 6, 7, 15, 9};
+#define N_LIGANDS 6
+/* log K from logK_T at 25 C versus the given logK: warning beyond this
+ * (common practice, no source: about the rounding of published fits) */
+#define LOGK_AGREE_TOL 0.05
+
+/* species H and O are built in (FORMAT.md, "Where species go") */
+static const char *const builtin_names[] = {"H2O(l)", "H^+",   "OH^-",   "O2(g)",    "O2(aq)",
+                                            "H2(g)",  "H2(aq)", "H2O2(aq)", "e-", NULL};
+
+static double count_of(const px_formula *fm, int z)
+{
+    for (int i = 0; i < fm->n_elem; i++)
+        if (fm->elem[i].z == z) return fm->elem[i].n;
+    return 0;
+}
+
+static int ligand_rank(int z)
+{
+    for (int i = 0; i < N_LIGANDS; i++)
+        if (ligand_order[i] == z) return i;
+    return -1;
+}
+
+static int only_h_o(const px_formula *fm)
+{
+    for (int i = 0; i < fm->n_elem; i++)
+        if (fm->elem[i].z != 1 && fm->elem[i].z != 8) return 0;
+    return 1;
+}
+
+static void check_membership(pxd_file *f, pxd_entry *e)
+{
+    const px_formula *fm = &e->sp.f;
+    if (f->element_ho) {
+        if (!only_h_o(fm))
+            pxd_report_entry(f, e, PX_DATA_ERROR, "formula",
+                             "the HO file holds species of H and O only");
+        return;
+    }
+    if (!f->element_z) return;
+    if (count_of(fm, f->element_z) <= 0) {
+        pxd_report_entry(f, e, PX_DATA_ERROR, "formula",
+                         "does not contain %s, the element of this file", f->element);
+        return;
+    }
+    int own = ligand_rank(f->element_z);
+    int first = -1;
+    for (int i = 0; i < fm->n_elem; i++) {
+        int r = ligand_rank(fm->elem[i].z);
+        if (r >= 0 && (first < 0 || r < first)) first = r;
+    }
+    if (first >= 0 && (own < 0 || first < own))
+        pxd_report_entry(f, e, PX_DATA_WARNING, "formula",
+                         "belongs in %s.lua (species with ligands go in the first ligand's file, "
+                         "order Cl, S, C, N, P, F)",
+                         px_element_symbol(ligand_order[first]));
+}
+
+/* dfG - (dfH - Tr dfS); NAN if an element has no reference entropy.
+ * dfS from px_formula_entropy_of_formation (thermo): S - sum n_i S_i(ref)
+ * + Z S(H2,g)/2, the conventional ionic scale. */
+static double cycle_residual(const px_formula *fm, double G, double H, double S, int *missing_z)
+{
+    for (int i = 0; i < fm->n_elem; i++)
+        if (!isfinite(px_element_ref_entropy_per_atom(fm->elem[i].z))) {
+            *missing_z = fm->elem[i].z;
+            return NAN;
+        }
+    if (fm->charge != 0 && !isfinite(px_element_ref_entropy_per_atom(1))) {
+        *missing_z = 1;
+        return NAN;
+    }
+    double dfS = px_formula_entropy_of_formation(fm, S);
+    if (!isfinite(dfS)) return NAN;
+    return G - (H - PX_TR * dfS);
+}
+
+typedef struct slip {
+    int which; /* 0 G, 1 H, 2 S */
+    double factor;
+    const char *what;
+} slip;
+
+static const slip slips[] = {
+    {2, -1.0, "S had the opposite sign"},
+    {1, -1.0, "H had the opposite sign"},
+    {0, -1.0, "G had the opposite sign"},
+    {0, PX_CAL, "G were multiplied by 4.184: a cal/J or kcal/kJ mix-up?"},
+    {0, 1.0 / PX_CAL, "G were divided by 4.184: a cal/J or kcal/kJ mix-up?"},
+    {1, PX_CAL, "H were multiplied by 4.184: a cal/J or kcal/kJ mix-up?"},
+    {1, 1.0 / PX_CAL, "H were divided by 4.184: a cal/J or kcal/kJ mix-up?"},
+    {2, PX_CAL, "S were multiplied by 4.184: a cal/J mix-up?"},
+    {2, 1.0 / PX_CAL, "S were divided by 4.184: a cal/J mix-up?"},
+    {0, 1e3, "G were multiplied by 1000: a J/kJ mix-up?"},
+    {0, 1e-3, "G were divided by 1000: a J/kJ mix-up?"},
+    {1, 1e3, "H were multiplied by 1000: a J/kJ mix-up?"},
+    {1, 1e-3, "H were divided by 1000: a J/kJ mix-up?"},
+};
+
+static void check_cycle(pxd_file *f, pxd_entry *e)
+{
+    const px_species *sp = &e->sp;
+    double tol = f->opt->consistency_tol;
+    if (!(e->has_G && e->has_H && e->has_S) || !(tol < INFINITY)) return;
+    int missing = 0;
+    double r = cycle_residual(&sp->f, sp->dGf, sp->dHf, sp->S, &missing);
+    if (isnan(r)) {
+        const char *sym = px_element_symbol(missing);
+        pxd_report_entry(f, e, PX_DATA_WARNING, "G",
+                         "dfG/dfH/S consistency not checked: no reference entropy for %s",
+                         sym ? sym : "an element");
+        return;
+    }
+    if (fabs(r) <= tol) {
+        if (e->known_mismatch)
+            pxd_report_entry(f, e, PX_DATA_WARNING, "known_mismatch",
+                             "the cycle closes (%.2f kJ/mol): known_mismatch can go", r / PXD_KJ);
+        return;
+    }
+    if (e->known_mismatch && fabs(r) <= PX_DATA_KNOWN_MISMATCH_MAX) {
+        pxd_report_entry(f, e, PX_DATA_WARNING, "G",
+                         "dfG - (dfH - T dfS) = %.2f kJ/mol, accepted as a known mismatch",
+                         r / PXD_KJ);
+        return;
+    }
+    const char *hint = NULL;
+    for (size_t i = 0; i < sizeof slips / sizeof slips[0] && !hint; i++) {
+        double v[3] = {sp->dGf, sp->dHf, sp->S};
+        v[slips[i].which] *= slips[i].factor;
+        int m2 = 0;
+        double r2 = cycle_residual(&sp->f, v[0], v[1], v[2], &m2);
+        if (fabs(r2) <= tol) hint = slips[i].what;
+    }
+    pxd_report_entry(f, e, PX_DATA_ERROR, "G",
+                     "dfG = %.3f kJ/mol but dfH - T dfS = %.3f kJ/mol at 298.15 K: mismatch %.2f "
+                     "kJ/mol > %.2f kJ/mol%s%s%s",
+                     sp->dGf / PXD_KJ, (sp->dGf - r) / PXD_KJ, r / PXD_KJ, tol / PXD_KJ,
+                     hint ? " (it closes if " : "", hint ? hint : "", hint ? ")" : "");
+}
+
+static void check_magnitude(pxd_file *f, pxd_entry *e)
+{
+    double lim = f->opt->magnitude_warn, atoms = 0;
+    if (!(lim < INFINITY)) return;
+    for (int i = 0; i < e->sp.f.n_elem; i++) atoms += e->sp.f.elem[i].n;
+    if (atoms <= 0) return;
+    const char *name[2] = {"G", "H"};
+    double v[2] = {e->has_G ? e->sp.dGf : 0, e->has_H ? e->sp.dHf : 0};
+    for (int i = 0; i < 2; i++)
+        if (fabs(v[i]) / atoms > lim)
+            pxd_report_entry(f, e, PX_DATA_WARNING, name[i],
+                             "%.4g kJ/mol is implausibly large for %g atoms: check the energy unit",
+                             v[i] / PXD_KJ, atoms);
+}
+
+static int is_builtin(const char *canonical)
+{
+    for (int i = 0; builtin_names[i]; i++) {
+        px_formula b;
+        if (px_formula_parse(builtin_names[i], &b) == PX_OK && strcmp(b.text, canonical) == 0)
+            return 1;
+    }
+    return 0;
+}
+
+static const pxd_entry *find_in_file(const pxd_file *f, const char *canonical)
+{
+    for (size_t i = 0; i < f->n; i++)
+        if (f->e[i].formula_ok && strcmp(f->e[i].sp.f.text, canonical) == 0) return &f->e[i];
+    return NULL;
+}
+
+static void check_reaction(pxd_file *f, pxd_entry *e, const px_db *known)
+{
+    const char *rx = e->sp.logk.reaction;
+    if (!rx[0]) return;
+    px_reaction r;
+    char msg[256];
+    /* the same parser the thermodynamic core uses later (thermo) */
+    if (px_reaction_parse(rx, &r, msg, sizeof msg) != PX_OK) {
+        pxd_report_entry(f, e, PX_DATA_ERROR, "reaction", "cannot parse the reaction: %s", msg);
+        return;
+    }
+    double self = 0;
+    for (int i = 0; i < r.n; i++) {
+        const char *t = r.sp[i].text;
+        if (e->formula_ok && strcmp(t, e->sp.f.text) == 0) self = r.nu[i];
+        else if (known && !find_in_file(f, t) && !px_db_find(known, t) && !is_builtin(t))
+            pxd_report_entry(f, e, PX_DATA_WARNING, "reaction",
+                             "'%s' is defined neither in this file nor in the loaded database", t);
+    }
+    /* thermo resolves G of the species as (dG - sum_others) / nu_self, so any
+     * non-zero coefficient on either side is valid; log K is for the reaction
+     * as written */
+    if (e->formula_ok && self == 0.0)
+        pxd_report_entry(f, e, PX_DATA_ERROR, "reaction",
+                         "the species %s does not appear in its own reaction", e->raw);
+    if (px_reaction_balance(&r, msg, sizeof msg) != PX_OK)
+        pxd_report_entry(f, e, PX_DATA_ERROR, "reaction", "does not balance (%s)", msg);
+}
+
+static void check_logk(pxd_file *f, pxd_entry *e, const px_db *known)
+{
+    check_reaction(f, e, known);
+    px_logk_params *lk = &e->sp.logk;
+    if (e->has_logK_T) {
+        double T = PX_TR;
+        /* log K = k0 + k1 T + k2/T + k3 log10 T + k4/T^2 (FORMAT.md) */
+        double v = lk->k[0] + lk->k[1] * T + lk->k[2] / T + lk->k[3] * log10(T) + lk->k[4] / (T * T);
+        if (e->has_logK && fabs(v - e->logK_given) > LOGK_AGREE_TOL)
+            pxd_report_entry(f, e, PX_DATA_WARNING, "logK_T",
+                             "logK_T gives %.3f at 25 C but logK is %.3f", v, e->logK_given);
+        if (!e->has_logK) lk->logK25 = v;
+    }
+}
+
+static int in_filter(const pxd_file *f, const px_formula *fm)
+{
+    if (!f->opt->elements) return 1;
+    for (int i = 0; i < fm->n_elem; i++) {
+        int z = fm->elem[i].z, ok = z == 1 || z == 8;
+        for (size_t j = 0; j < f->opt->n_elements && !ok; j++) ok = f->opt->elements[j] == z;
+        if (!ok) return 0;
+    }
+    return 1;
+}
+
+static void check_entry(pxd_file *f, pxd_entry *e, const px_db *known)
+{
+    px_species *sp = &e->sp;
+    const px_formula *fm = &sp->f;
+    if (e->formula_ok) {
+        if (fm->state == PX_STATE_E) {
+            pxd_report_entry(f, e, PX_DATA_ERROR, "formula", "the electron is built in");
+            return;
+        }
+        if (fm->charge != 0 && fm->state != PX_STATE_AQ)
+            pxd_report_entry(f, e, PX_DATA_ERROR, "formula", "only aqueous species carry a charge");
+        if (sp->model == PX_MODEL_HKF && fm->state != PX_STATE_AQ)
+            pxd_report_entry(f, e, PX_DATA_ERROR, "model", "model 'hkf' is for aqueous species");
+        if (sp->model == PX_MODEL_CP && fm->state == PX_STATE_AQ)
+            pxd_report_entry(f, e, PX_DATA_ERROR, "model",
+                             "model 'cp' is for solids, liquids and gases; use 'hkf' or 'logk' for "
+                             "aqueous species");
+        if (!f->opt->user_file && !f->element_ho && is_builtin(fm->text))
+            pxd_report_entry(f, e, PX_DATA_ERROR, "formula",
+                             "%s is built in: do not define it in an element file", fm->text);
+        else
+            check_membership(f, e);
+        for (pxd_entry *o = f->e; o < e; o++)
+            if (o->formula_ok && strcmp(o->sp.f.text, fm->text) == 0) {
+                pxd_report_entry(f, e, PX_DATA_ERROR, "formula",
+                                 "defined twice in this file (first at line %d)", o->sp.line);
+                break;
+            }
+        if (known && !f->opt->user_file) {
+            const px_species *k = px_db_find(known, fm->text);
+            if (k && k->file)
+                pxd_report_entry(f, e, PX_DATA_ERROR, "formula", "already defined in %s:%d", k->file,
+                                 k->line);
+            else if (k)
+                pxd_report_entry(f, e, PX_DATA_ERROR, "formula", "already defined (built in)");
+        }
+        e->skip = !in_filter(f, fm);
+    }
+    if (e->has_S && fm->state != PX_STATE_AQ && e->formula_ok && !(sp->S > 0))
+        pxd_report_entry(f, e, PX_DATA_ERROR, "S",
+                         "the third-law entropy of a solid, liquid or gas must be positive");
+    if (e->formula_ok) {
+        check_cycle(f, e);
+        check_magnitude(f, e);
+    }
+    if (sp->model == PX_MODEL_LOGK) check_logk(f, e, known);
+    if (e->want_estimate && e->formula_ok && e->errors == 0) {
+        int st = px_hkf_estimate(sp, e->est_Cp, e->est_V);
+        if (st != PX_OK)
+            pxd_report_entry(f, e, PX_DATA_ERROR, "estimate", "HKF estimate failed: %s",
+                             px_strerror(st));
+        sp->estimated = 1;
+    }
+}
+
+void pxd_check_file(pxd_file *f, const px_db *known)
+{
+    for (size_t i = 0; i < f->n; i++) check_entry(f, &f->e[i], known);
+    for (size_t i = 0; i < f->n_ex; i++) {
+        px_formula fm;
+        pxd_exclude *x = &f->ex[i];
+        if (px_formula_parse(x->raw, &fm) != PX_OK) {
+            pxd_report(f, PX_DATA_ERROR, x->line, x->raw, "exclude", "malformed formula");
+            continue;
+        } else if (known && !px_db_find(known, fm.text)) {
+            pxd_report(f, PX_DATA_WARNING, x->line, x->raw, "exclude",
+                       "not in the database: nothing to exclude");
+        }
+        if (find_in_file(f, fm.text))
+            pxd_report(f, PX_DATA_WARNING, x->line, x->raw, "exclude",
+                       "excluded and defined in the same file: the definition is loaded");
+    }
+}

@@ -1,0 +1,124 @@
+/* data_internal.h - private types shared by the files of src/data/.
+ *
+ * A file goes through four stages, each in its own source file:
+ *   sandbox.c  run the chunk in a fresh, capped lua_State, get its table
+ *   read.c     walk that table (inside a protected call) into pxd_entry
+ *              records, converting units once; type and field errors
+ *   lines.c    a small tokenizer of the source text, to give each species
+ *              and field a line number without the debug library
+ *   check.c    rules that need the whole file: duplicates, element
+ *              membership, dfG/dfH/S consistency, reaction balance
+ * load.c drives them and talks to the px_db; problems.c is the diagnostics
+ * list. */
+#ifndef PX_DATA_INTERNAL_H
+#define PX_DATA_INTERNAL_H
+#include "data/data.h"
+#include <stdarg.h>
+#include <stddef.h>
+
+#define PXD_RAW_MAX 96 /* bytes of a formula as written, with NUL */
+
+typedef struct pxd_entry {
+    px_species sp;          /* sp.source and sp.file owned (malloc) */
+    char raw[PXD_RAW_MAX];  /* formula as written ("#3" if missing) */
+    int index;              /* 1-based position in the species list */
+    int tok_open, tok_close;/* token range of the species table, -1 if unknown */
+    int line_fallback;      /* line of the formula literal when no table encloses it */
+    int formula_ok;         /* px_formula_parse succeeded */
+    int errors;             /* errors reported against this species */
+    int has_G, has_H, has_S;
+    int want_estimate;      /* hkf from correlations: est_Cp (J/(mol K)), est_V (cm3/mol or NAN) */
+    double est_Cp, est_V;
+    int has_logK, has_logK_T; /* logk: which forms were given */
+    double logK_given;
+    int skip;               /* outside the requested element set */
+    int known_mismatch;     /* `known_mismatch = "..."` given: cycle mismatch is a warning */
+} pxd_entry;
+
+typedef struct pxd_exclude {
+    char raw[PXD_RAW_MAX];
+    int line;
+} pxd_exclude;
+
+typedef enum { PXD_TOK_NAME, PXD_TOK_STRING, PXD_TOK_OTHER } pxd_tok_kind;
+typedef struct pxd_tok {
+    pxd_tok_kind kind;
+    int line;
+    size_t start, len; /* into the source text; for strings: the contents */
+    char ch;           /* for OTHER: the first character ('{', '}', '=', ...) */
+    int escaped;       /* string contains a backslash escape (contents not literal) */
+} pxd_tok;
+
+typedef struct pxd_file {
+    const char *name;  /* display name (borrowed) */
+    const char *text;  /* source (borrowed) */
+    size_t len;
+    const px_data_options *opt;
+    px_data_problems *probs; /* never NULL (a private list if the caller gave none) */
+    size_t n_errors;         /* errors reported for this file */
+    int oom;                 /* host allocation failed */
+    int status;              /* first failure code (PX_EPARSE, PX_ELIMIT, PX_EDATA) */
+
+    char element[8];   /* "" if none */
+    int element_z;     /* 0 if none / "HO" */
+    int element_ho;    /* element = "HO": the water file */
+    double Tmin, Tmax; /* file-level defaults */
+    double e_unit, s_unit; /* file-level unit factors to J, J/K */
+    int has_species;
+
+    pxd_entry *e;
+    size_t n, cap;
+    pxd_exclude *ex;
+    size_t n_ex, cap_ex;
+
+    pxd_tok *tok;
+    size_t ntok;
+} pxd_file;
+
+/* problems.c */
+void pxd_report(pxd_file *f, px_data_severity sev, int line, const char *species,
+                const char *field, const char *fmt, ...)
+#if defined(__GNUC__)
+    __attribute__((format(printf, 6, 7)))
+#endif
+    ;
+/* Report against an entry: the line is the field's line if FIELD is found in
+ * the species table, else the species' line. */
+void pxd_report_entry(pxd_file *f, pxd_entry *e, px_data_severity sev, const char *field,
+                      const char *fmt, ...)
+#if defined(__GNUC__)
+    __attribute__((format(printf, 5, 6)))
+#endif
+    ;
+
+/* sandbox.c: runs f->text and calls pxd_read_table on its result. */
+void pxd_sandbox_run(pxd_file *f);
+
+/* read.c: lua_CFunction; upvalue 1 = light userdata pxd_file*, arg 1 = table */
+struct lua_State;
+int pxd_read_table(struct lua_State *L);
+
+/* lines.c */
+int pxd_tokenize(pxd_file *f);                     /* PX_OK or PX_ENOMEM */
+void pxd_locate_species(pxd_file *f, pxd_entry *e); /* sets tok_open/tok_close */
+int pxd_species_line(const pxd_file *f, const pxd_entry *e);
+int pxd_field_line(const pxd_file *f, const pxd_entry *e, const char *field);
+int pxd_toplevel_line(const pxd_file *f, const char *field);
+int pxd_string_line(const pxd_file *f, const char *s, int from_tok, int to_tok);
+
+/* check.c */
+void pxd_check_file(pxd_file *f, const px_db *known);
+
+/* unit factors */
+#define PXD_KJ 1000.0      /* J per kJ */
+#define PXD_KCAL 4184.0    /* J per kcal (thermochemical) */
+#define PXD_CM3_TO_J_PER_BAR 0.1 /* 1 cm3 bar = 0.1 J */
+/* default valid range when neither the species nor the file declares one:
+ * phlox's water range (API.md, PX_WATER_TMIN/TMAX) */
+#define PXD_TMIN_DEFAULT 273.15
+#define PXD_TMAX_DEFAULT 623.15
+
+char *pxd_strdup(const char *s);
+void pxd_entry_free(pxd_entry *e);
+
+#endif

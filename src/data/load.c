@@ -1,0 +1,283 @@
+/* load.c - the public entry points: check, load, merge user overrides, list.
+ *
+ * Every entry point runs the same pipeline (tokenize for line numbers, run in
+ * the sandbox, read the table, check the file), so `phlox check` accepts a
+ * file exactly when loading it would succeed.  Loading is all or nothing: a
+ * file with any error adds nothing, and the database is only touched after
+ * every check has passed. */
+#include "data/data_internal.h"
+#include "core/status.h"
+#include "lua/embedded.h"
+#include <math.h>
+#include <stdlib.h>
+#include <string.h>
+
+px_data_options px_data_options_default(void)
+{
+    px_data_options o;
+    memset(&o, 0, sizeof o);
+    o.mem_limit = PX_DATA_MEM_LIMIT_DEFAULT;
+    o.instr_limit = PX_DATA_INSTR_LIMIT_DEFAULT;
+    o.consistency_tol = PX_DATA_CONSISTENCY_TOL_DEFAULT;
+    o.magnitude_warn = PX_DATA_MAGNITUDE_WARN_DEFAULT;
+    return o;
+}
+
+static void file_free(pxd_file *f, px_data_problems *own)
+{
+    for (size_t i = 0; i < f->n; i++) pxd_entry_free(&f->e[i]);
+    free(f->e);
+    free(f->ex);
+    free(f->tok);
+    px_data_problems_free(own);
+}
+
+/* Runs the pipeline; returns PX_OK or the failure code.  f must be freed. */
+static int run(pxd_file *f, px_data_problems **own, const char *text, size_t len,
+               const char *name, const px_data_options *opt, px_data_problems *probs,
+               const px_db *known)
+{
+    memset(f, 0, sizeof *f);
+    *own = NULL;
+    if (!probs) probs = *own = px_data_problems_new();
+    if (!probs) return PX_ENOMEM;
+    f->name = name ? name : "(buffer)";
+    f->text = text;
+    f->len = len;
+    f->opt = opt;
+    f->probs = probs;
+    f->e_unit = 1000.0; /* kJ by default (FORMAT.md, Units) */
+    f->s_unit = 1.0;    /* J/(mol K) */
+    f->Tmin = PXD_TMIN_DEFAULT;
+    f->Tmax = PXD_TMAX_DEFAULT;
+    if (!text || opt->mem_limit == 0 || opt->instr_limit == 0 ||
+        !(opt->consistency_tol > 0) || !(opt->magnitude_warn > 0))
+        return PX_EINVAL;
+    if (pxd_tokenize(f) != PX_OK) return PX_ENOMEM;
+    pxd_sandbox_run(f);
+    if (f->oom) return PX_ENOMEM;
+    if (f->status == PX_EPARSE || f->status == PX_ELIMIT) return f->status;
+    pxd_check_file(f, known);
+    if (f->oom) return PX_ENOMEM;
+    if (f->n_errors) return f->status ? f->status : PX_EDATA;
+    return PX_OK;
+}
+
+int px_data_check_buffer(const px_db *known, const char *text, size_t len, const char *name,
+                         const px_data_options *opt, px_data_problems *probs)
+{
+    px_data_options d = px_data_options_default();
+    pxd_file f;
+    px_data_problems *own;
+    int st = run(&f, &own, text, len, name, opt ? opt : &d, probs, known);
+    file_free(&f, own);
+    return st;
+}
+
+/* adds (or, for user files, replaces) the entries; undoes additions on failure */
+static int commit(px_db *db, pxd_file *f)
+{
+    if (f->opt->user_file) {
+        for (size_t i = 0; i < f->n_ex; i++) {
+            px_formula fm;
+            if (px_formula_parse(f->ex[i].raw, &fm) == PX_OK && px_db_find(db, fm.text))
+                px_db_remove(db, fm.text);
+        }
+        for (size_t i = 0; i < f->n; i++) {
+            if (f->e[i].skip) continue;
+            int st = px_db_replace(db, &f->e[i].sp);
+            if (st != PX_OK) return st; /* only PX_ENOMEM; documented as partial */
+        }
+        return PX_OK;
+    }
+    for (size_t i = 0; i < f->n; i++) {
+        if (f->e[i].skip) continue;
+        int st = px_db_add(db, &f->e[i].sp);
+        if (st != PX_OK) {
+            while (i-- > 0)
+                if (!f->e[i].skip) px_db_remove(db, f->e[i].sp.f.text);
+            return st;
+        }
+    }
+    return PX_OK;
+}
+
+static int load(px_db *db, const char *text, size_t len, const char *name,
+                const px_data_options *opt, px_data_problems *probs, int user)
+{
+    if (!db) return PX_EINVAL;
+    px_data_options o = opt ? *opt : px_data_options_default();
+    if (user) o.user_file = 1;
+    pxd_file f;
+    px_data_problems *own;
+    int st = run(&f, &own, text, len, name, &o, probs, db);
+    if (st == PX_OK) st = commit(db, &f);
+    file_free(&f, own);
+    return st;
+}
+
+int px_data_load_buffer(px_db *db, const char *text, size_t len, const char *name,
+                        const px_data_options *opt, px_data_problems *probs)
+{
+    return load(db, text, len, name, opt, probs, 0);
+}
+
+int px_data_merge_user_buffer(px_db *db, const char *text, size_t len, const char *name,
+                              const px_data_options *opt, px_data_problems *probs)
+{
+    return load(db, text, len, name, opt, probs, 1);
+}
+
+/* reads PATH into a NUL-terminated buffer; problems name the path */
+static int read_file(const char *path, char **out, size_t *len, px_data_problems *probs)
+{
+    *out = NULL;
+    if (!path) return PX_EINVAL;
+    FILE *fp = fopen(path, "rb");
+    pxd_file f; /* only for pxd_report */
+    memset(&f, 0, sizeof f);
+    f.name = path;
+    f.probs = probs;
+    if (!fp) {
+        if (probs) pxd_report(&f, PX_DATA_ERROR, 0, "", "", "cannot open the file");
+        return PX_EIO;
+    }
+    size_t cap = 4096, n = 0;
+    char *buf = malloc(cap);
+    int st = buf ? PX_OK : PX_ENOMEM;
+    while (st == PX_OK) {
+        if (n + 1 >= cap) {
+            if (cap > PX_DATA_FILE_MAX) {
+                st = PX_ELIMIT;
+                if (probs)
+                    pxd_report(&f, PX_DATA_ERROR, 0, "", "", "file larger than %zu bytes",
+                               (size_t)PX_DATA_FILE_MAX);
+                break;
+            }
+            char *nb = realloc(buf, cap * 2);
+            if (!nb) {
+                st = PX_ENOMEM;
+                break;
+            }
+            buf = nb;
+            cap *= 2;
+        }
+        size_t r = fread(buf + n, 1, cap - n - 1, fp);
+        n += r;
+        if (r == 0) {
+            if (ferror(fp)) {
+                st = PX_EIO;
+                if (probs) pxd_report(&f, PX_DATA_ERROR, 0, "", "", "read error");
+            }
+            break;
+        }
+    }
+    fclose(fp);
+    if (st != PX_OK) {
+        free(buf);
+        return st;
+    }
+    buf[n] = '\0';
+    *out = buf;
+    *len = n;
+    return PX_OK;
+}
+
+int px_data_load_file(px_db *db, const char *path, const px_data_options *opt,
+                      px_data_problems *probs)
+{
+    char *text;
+    size_t len;
+    int st = read_file(path, &text, &len, probs);
+    if (st != PX_OK) return st;
+    st = px_data_load_buffer(db, text, len, path, opt, probs);
+    free(text);
+    return st;
+}
+
+int px_data_merge_user_file(px_db *db, const char *path, const px_data_options *opt,
+                            px_data_problems *probs)
+{
+    char *text;
+    size_t len;
+    int st = read_file(path, &text, &len, probs);
+    if (st != PX_OK) return st;
+    st = px_data_merge_user_buffer(db, text, len, path, opt, probs);
+    free(text);
+    return st;
+}
+
+int px_data_check_file(const px_db *known, const char *path, const px_data_options *opt,
+                       px_data_problems *probs)
+{
+    char *text;
+    size_t len;
+    int st = read_file(path, &text, &len, probs);
+    if (st != PX_OK) return st;
+    st = px_data_check_buffer(known, text, len, path, opt, probs);
+    free(text);
+    return st;
+}
+
+int px_data_check_files(const char *const *paths, size_t n, const px_data_options *opt,
+                        px_data_problems *probs)
+{
+    px_db *db = px_db_new();
+    if (!db) return PX_ENOMEM;
+    int first = px_db_add_builtins(db);
+    for (size_t i = 0; i < n && first != PX_ENOMEM; i++) {
+        int st = px_data_load_file(db, paths[i], opt, probs);
+        if (st != PX_OK && first == PX_OK) first = st;
+    }
+    px_db_free(db);
+    return first;
+}
+
+int px_data_load_embedded(px_db *db, const char *element, const px_data_options *opt,
+                          px_data_problems *probs)
+{
+    char path[64];
+    if (!element || strlen(element) > 8) return PX_EINVAL;
+    snprintf(path, sizeof path, "stdlib/elements/%s.lua", element);
+    const px_embedded_file *ef = px_embedded_find(path);
+    if (!ef) return PX_ENOTFOUND;
+    return px_data_load_buffer(db, ef->data, ef->size, ef->path, opt, probs);
+}
+
+static const char *model_name(px_model m)
+{
+    switch (m) {
+    case PX_MODEL_HKF: return "hkf";
+    case PX_MODEL_CP: return "cp";
+    case PX_MODEL_LOGK: return "logk";
+    case PX_MODEL_WATER: return "water";
+    }
+    return "?";
+}
+
+size_t px_data_list_write(const px_db *db, const char *element, FILE *out)
+{
+    int z = 0;
+    if (element && *element && (z = px_element_z(element)) == 0) return 0;
+    size_t k = 0;
+    for (size_t i = 0; i < px_db_count(db); i++) {
+        const px_species *sp = px_db_get(db, i);
+        int has = !z;
+        for (int j = 0; j < sp->f.n_elem && !has; j++) has = sp->f.elem[j].z == z;
+        if (!has) continue;
+        char val[40];
+        if (sp->model == PX_MODEL_LOGK)
+            snprintf(val, sizeof val, "log K %.3f", sp->logk.logK25);
+        else if (isfinite(sp->dGf))
+            snprintf(val, sizeof val, "G %.3f kJ/mol", sp->dGf / 1000.0);
+        else
+            snprintf(val, sizeof val, "-");
+        char where[300];
+        if (sp->file) snprintf(where, sizeof where, "%s:%d", sp->file, sp->line);
+        else snprintf(where, sizeof where, "(built in)");
+        fprintf(out, "%-24s %-5s %-22s %s  %s%s\n", sp->f.text, model_name(sp->model), val, where,
+                sp->source ? sp->source : "", sp->estimated ? " [HKF estimated]" : "");
+        k++;
+    }
+    return k;
+}

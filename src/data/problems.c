@@ -1,0 +1,163 @@
+/* problems.c - the diagnostics list of the definition-file loader.
+ *
+ * A problem names the file, the line, the species (as written), the field and
+ * what is wrong, and renders as one line a person can click in an editor:
+ *     Zn.lua:14: ZnO(s): S: must be positive for a solid
+ *     Zn.lua:20: Zn(s): warning: cp: no heat capacity given
+ * Errors reject the file; warnings do not. */
+#include "data/data_internal.h"
+#include "core/status.h"
+#include <stdio.h>
+#include <stdlib.h>
+#include <string.h>
+
+struct px_data_problems {
+    px_data_problem *items;
+    size_t n, cap;
+};
+
+char *pxd_strdup(const char *s)
+{
+    if (!s) s = "";
+    size_t n = strlen(s) + 1;
+    char *d = malloc(n);
+    if (d) memcpy(d, s, n);
+    return d;
+}
+
+px_data_problems *px_data_problems_new(void)
+{
+    return calloc(1, sizeof(px_data_problems));
+}
+
+static void problem_free(px_data_problem *p)
+{
+    free(p->file);
+    free(p->species);
+    free(p->field);
+    free(p->message);
+}
+
+void px_data_problems_clear(px_data_problems *p)
+{
+    if (!p) return;
+    for (size_t i = 0; i < p->n; i++) problem_free(&p->items[i]);
+    p->n = 0;
+}
+
+void px_data_problems_free(px_data_problems *p)
+{
+    if (!p) return;
+    px_data_problems_clear(p);
+    free(p->items);
+    free(p);
+}
+
+size_t px_data_problems_count(const px_data_problems *p) { return p ? p->n : 0; }
+
+static size_t count_sev(const px_data_problems *p, px_data_severity s)
+{
+    size_t k = 0;
+    for (size_t i = 0; p && i < p->n; i++) k += p->items[i].severity == s;
+    return k;
+}
+
+size_t px_data_problems_errors(const px_data_problems *p) { return count_sev(p, PX_DATA_ERROR); }
+size_t px_data_problems_warnings(const px_data_problems *p) { return count_sev(p, PX_DATA_WARNING); }
+
+const px_data_problem *px_data_problems_get(const px_data_problems *p, size_t i)
+{
+    return (p && i < p->n) ? &p->items[i] : NULL;
+}
+
+int px_data_problem_format(const px_data_problem *pr, char *buf, size_t size)
+{
+    char line[32] = "";
+    if (pr->line > 0) snprintf(line, sizeof line, ":%d", pr->line);
+    const char *sp = pr->species && *pr->species ? pr->species : NULL;
+    const char *fd = pr->field && *pr->field ? pr->field : NULL;
+    return snprintf(buf, size, "%s%s: %s%s%s%s%s%s", pr->file, line, sp ? sp : "", sp ? ": " : "",
+                    pr->severity == PX_DATA_WARNING ? "warning: " : "", fd ? fd : "",
+                    fd ? ": " : "", pr->message);
+}
+
+size_t px_data_problems_write(const px_data_problems *p, FILE *out)
+{
+    size_t errors = 0;
+    for (size_t i = 0; p && i < p->n; i++) {
+        const px_data_problem *pr = &p->items[i];
+        int n = px_data_problem_format(pr, NULL, 0);
+        char *buf = n >= 0 ? malloc((size_t)n + 1) : NULL;
+        if (buf) {
+            px_data_problem_format(pr, buf, (size_t)n + 1);
+            fprintf(out, "%s\n", buf);
+            free(buf);
+        } else {
+            fprintf(out, "%s: %s\n", pr->file, pr->message);
+        }
+        errors += pr->severity == PX_DATA_ERROR;
+    }
+    return errors;
+}
+
+static void vreport(pxd_file *f, px_data_severity sev, int line, const char *species,
+                    const char *field, const char *fmt, va_list ap)
+{
+    if (sev == PX_DATA_ERROR) {
+        f->n_errors++;
+        if (f->status == PX_OK) f->status = PX_EDATA;
+    }
+    px_data_problems *p = f->probs;
+    if (p->n == p->cap) {
+        size_t cap = p->cap ? 2 * p->cap : 16;
+        px_data_problem *it = realloc(p->items, cap * sizeof *it);
+        if (!it) {
+            f->oom = 1;
+            return;
+        }
+        p->items = it;
+        p->cap = cap;
+    }
+    va_list ap2;
+    va_copy(ap2, ap);
+    int n = vsnprintf(NULL, 0, fmt, ap2);
+    va_end(ap2);
+    char *msg = n >= 0 ? malloc((size_t)n + 1) : NULL;
+    if (msg) vsnprintf(msg, (size_t)n + 1, fmt, ap);
+    px_data_problem pr = {sev, pxd_strdup(f->name), line, pxd_strdup(species), pxd_strdup(field),
+                          msg};
+    if (!pr.file || !pr.species || !pr.field || !pr.message) {
+        problem_free(&pr);
+        f->oom = 1;
+        return;
+    }
+    p->items[p->n++] = pr;
+}
+
+void pxd_report(pxd_file *f, px_data_severity sev, int line, const char *species,
+                const char *field, const char *fmt, ...)
+{
+    va_list ap;
+    va_start(ap, fmt);
+    vreport(f, sev, line, species, field, fmt, ap);
+    va_end(ap);
+}
+
+void pxd_report_entry(pxd_file *f, pxd_entry *e, px_data_severity sev, const char *field,
+                      const char *fmt, ...)
+{
+    if (sev == PX_DATA_ERROR) e->errors++;
+    int line = field && *field ? pxd_field_line(f, e, field) : 0;
+    if (line <= 0) line = pxd_species_line(f, e);
+    va_list ap;
+    va_start(ap, fmt);
+    vreport(f, sev, line, e->raw, field, fmt, ap);
+    va_end(ap);
+}
+
+void pxd_entry_free(pxd_entry *e)
+{
+    free(e->sp.source);
+    free(e->sp.file);
+    e->sp.source = e->sp.file = NULL;
+}

@@ -1,0 +1,525 @@
+/* emap.c - element maps: from species data to the affine functions of the
+ * exact predominance map, and back to species, kinds and reactions (see
+ * emap.h for the method). */
+#include "diagram/emap.h"
+#include "core/constants.h"
+#include "core/status.h"
+#include "thermo/basis.h"
+#include <math.h>
+#include <stdarg.h>
+#include <stdio.h>
+#include <stdlib.h>
+#include <string.h>
+
+#define Z_H 1
+#define Z_O 8
+#define PX_EMAP_DAVIES_B 0.3     /* Davies 1962: log g = -A z^2 (sqrt I/(1+sqrt I) - 0.3 I) */
+#define PX_EMAP_COEF_EPS 1e-9    /* a reaction coefficient this close to 0 is 0 */
+#define PX_EMAP_MAX_SCALE 60     /* largest multiplier tried to clear fractions */
+
+px_emap_options px_emap_options_default(void)
+{
+    px_emap_options o;
+    memset(&o, 0, sizeof o);
+    o.T = PX_TR;
+    o.P = PX_PR;
+    o.xaxis = PX_AXIS_PH;
+    o.yaxis = PX_AXIS_E;
+    o.window = (px_diagram_window){0.0, 14.0, -2.0, 2.0};
+    o.pH = 7.0;
+    o.E = 0.0;
+    o.activity = PX_EMAP_DEFAULT_ACTIVITY;
+    o.ligand_activity = PX_EMAP_DEFAULT_LIGAND;
+    return o;
+}
+
+double px_emap_davies(double A, int z, double I)
+{
+    if (!(I > 0)) return 0.0;
+    double s = sqrt(I);
+    /* Davies 1962, Ion Association (Butterworths), eq. for log10 gamma */
+    return -A * z * z * (s / (1.0 + s) - PX_EMAP_DAVIES_B * I);
+}
+
+static int fail(char *msg, size_t n, int st, const char *fmt, ...)
+{
+    if (msg && n) {
+        va_list ap;
+        va_start(ap, fmt);
+        vsnprintf(msg, n, fmt, ap);
+        va_end(ap);
+    }
+    return st;
+}
+
+static int in_list(const char *const *list, size_t n, const char *text)
+{
+    for (size_t i = 0; i < n; i++) {
+        px_formula f;
+        if (px_formula_parse(list[i], &f) == PX_OK && strcmp(f.text, text) == 0) return 1;
+    }
+    return 0;
+}
+
+/* Elements of f are all within {H, O, a, b}. */
+static int made_of(const px_formula *f, int a, int b)
+{
+    for (int i = 0; i < f->n_elem; i++) {
+        int z = f->elem[i].z;
+        if (z != Z_H && z != Z_O && z != a && !(b && z == b)) return 0;
+    }
+    return 1;
+}
+
+static px_emap_kind kind_of(const px_formula *f, int zM)
+{
+    switch (f->state) {
+    case PX_STATE_AQ: return PX_EMAP_AQUEOUS;
+    case PX_STATE_G: return PX_EMAP_GAS;
+    case PX_STATE_L: return PX_EMAP_LIQUID;
+    default: return f->n_elem == 1 && f->elem[0].z == zM ? PX_EMAP_METAL : PX_EMAP_SOLID;
+    }
+}
+
+/* Everything needed to turn one species into Phi on given axes. */
+typedef struct cand {
+    long db;            /* db index */
+    const px_species *sp;
+    double G;           /* J/mol at T, P */
+    double ln_a;        /* ln activity (aqueous), ln fugacity (gas), 0 (condensed) */
+    int on_axis_activity; /* aqueous ligand species: a follows the log a(L) axis */
+} cand;
+
+typedef struct ctx {
+    const px_emap_options *o;
+    double RT, T;
+    double G_h2o, G_h, G_e;
+    const px_species *h2o, *hplus, *elec;
+    char *msg;
+    size_t msglen;
+} ctx;
+
+static double axis_value(const ctx *c, px_emap_axis ax)
+{
+    return ax == PX_AXIS_PH ? c->o->pH : ax == PX_AXIS_E ? c->o->E : log10(c->o->ligand_activity);
+}
+
+/* Phi of `cd` per atom of element z over basis (H2O, H+, e-, ref[, lig]).
+ * ligand_basis_ln_a: ln activity of the ligand basis species when it is not
+ * on an axis; lig_on_axis: its activity follows the log a axis. */
+static int phi_of(const ctx *c, const cand *cd, int z, const px_species *ref, double G_ref,
+                  const cand *lig, px_diagram_species *out)
+{
+    const px_formula *basis[5] = {&c->h2o->f, &c->hplus->f, &c->elec->f, &ref->f,
+                                  lig ? &lig->sp->f : NULL};
+    size_t nb = lig ? 5 : 4;
+    double nu[5];
+    char why[160];
+    int st = px_basis_formation(basis, nb, &cd->sp->f, nu, why, sizeof why);
+    if (st != PX_OK)
+        return fail(c->msg, c->msglen, st, "%s: cannot be formed from the basis: %s",
+                    cd->sp->f.text, why);
+    double nM = px_formula_count(&cd->sp->f, z);
+    if (!(nM > 0)) return fail(c->msg, c->msglen, PX_EINVAL, "%s has no atom of the element", cd->sp->f.text);
+    double dG = cd->G - nu[0] * c->G_h2o - nu[1] * c->G_h - nu[2] * c->G_e - nu[3] * G_ref -
+                (lig ? nu[4] * lig->G : 0.0);
+    const double ln10 = PX_LN10;
+    /* Phi*nM = dG + RT ln a_j - sum_b nu_b RT ln a_b; ln a(H+) = -ln10 pH,
+     * RT ln a(e-) = -F E, ln a(L) from the axis or fixed. */
+    double kx[3] = {0, 0, 0}; /* coefficient per unit of pH, E, log a(L) */
+    double c0 = dG;
+    kx[PX_AXIS_PH] = nu[1] * c->RT * ln10;
+    kx[PX_AXIS_E] = nu[2] * PX_F;
+    if (cd->on_axis_activity) kx[PX_AXIS_LOGA] += c->RT * ln10; /* a_j itself is a(L) */
+    else c0 += c->RT * cd->ln_a;
+    if (lig) {
+        if (lig->on_axis_activity) kx[PX_AXIS_LOGA] -= nu[4] * c->RT * ln10;
+        else c0 -= nu[4] * c->RT * lig->ln_a;
+    }
+    /* axes not shown are fixed */
+    for (int a = 0; a < 3; a++)
+        if (a != (int)c->o->xaxis && a != (int)c->o->yaxis) c0 += kx[a] * axis_value(c, a);
+    out->c = c0 / nM;
+    out->p = kx[c->o->xaxis] / nM;
+    out->q = kx[c->o->yaxis] / nM;
+    out->id = (int)cd->db;
+    out->label = cd->sp->f.text;
+    if (!isfinite(out->c) || !isfinite(out->p) || !isfinite(out->q))
+        return fail(c->msg, c->msglen, PX_ENONFINITE, "%s: non-finite Gibbs energy", cd->sp->f.text);
+    return PX_OK;
+}
+
+/* Reaction between a and b per atom of z over the basis, as text with
+ * integer coefficients and the electrons on the left. */
+static void reaction_text(const ctx *c, const px_species *a, const px_species *b, int z,
+                          const px_species *ref, const px_species *lig, char *buf, size_t n)
+{
+    const px_formula *basis[5] = {&c->h2o->f, &c->hplus->f, &c->elec->f, &ref->f,
+                                  lig ? &lig->f : NULL};
+    size_t nb = lig ? 5 : 4;
+    double na[5], nbv[5];
+    buf[0] = '\0';
+    if (px_basis_formation(basis, nb, &a->f, na, NULL, 0) != PX_OK ||
+        px_basis_formation(basis, nb, &b->f, nbv, NULL, 0) != PX_OK)
+        return;
+    double ma = px_formula_count(&a->f, z), mb = px_formula_count(&b->f, z);
+    /* a/ma + sum d_i B_i = b/mb  with d = nu_b/mb - nu_a/ma */
+    double coef[7];
+    const char *name[7];
+    int side[7]; /* -1 left, +1 right */
+    int k = 0;
+    coef[k] = 1.0 / ma, name[k] = a->f.text, side[k++] = -1;
+    double d_e = 0;
+    for (size_t i = 0; i < nb; i++) {
+        double d = nbv[i] / mb - na[i] / ma;
+        if (fabs(d) < PX_EMAP_COEF_EPS) continue;
+        if (i == 3) continue; /* the element's reference cancels per atom */
+        coef[k] = fabs(d);
+        name[k] = basis[i]->text;
+        side[k++] = d > 0 ? -1 : +1;
+        if (i == 2) d_e = d;
+    }
+    coef[k] = 1.0 / mb, name[k] = b->f.text, side[k++] = +1;
+    int flip = d_e < 0; /* electrons would be on the right: write the reduction */
+    int scale = 1;
+    for (; scale <= PX_EMAP_MAX_SCALE; scale++) {
+        int ok = 1;
+        for (int i = 0; i < k; i++)
+            if (fabs(coef[i] * scale - round(coef[i] * scale)) > 1e-6) ok = 0;
+        if (ok) break;
+    }
+    if (scale > PX_EMAP_MAX_SCALE) scale = 1;
+    size_t used = 0;
+    for (int pass = 0; pass < 2; pass++) {
+        int want = (pass == 0) != flip ? -1 : +1;
+        int first = 1;
+        for (int q = 0; q < k; q++) {
+            /* the two species of the boundary first, then the basis terms */
+            int i = q == 0 ? (want < 0 ? 0 : k - 1) : q == 1 ? (want < 0 ? k - 1 : 0) : q - 1;
+            if (side[i] != want) continue;
+            double v = coef[i] * scale;
+            char num[32] = "";
+            if (fabs(v - round(v)) < 1e-6) {
+                if (lround(v) != 1) snprintf(num, sizeof num, "%ld ", lround(v));
+            } else {
+                snprintf(num, sizeof num, "%.4g ", v);
+            }
+            int w = snprintf(buf + used, n - used, "%s%s%s", first ? "" : " + ", num, name[i]);
+            if (w < 0 || (size_t)w >= n - used) return;
+            used += (size_t)w;
+            first = 0;
+        }
+        if (pass == 0) {
+            int w = snprintf(buf + used, n - used, " = ");
+            if (w < 0 || (size_t)w >= n - used) return;
+            used += (size_t)w;
+        }
+    }
+}
+
+/* Candidates of element z (and optionally with ligand element zl). */
+static int collect(const ctx *c, px_thermo_ws *ws, const px_db *db, int z, int zl, int other,
+                   int for_ligand, cand **out, size_t *nout)
+{
+    size_t n = px_db_count(db), k = 0;
+    cand *v = calloc(n ? n : 1, sizeof *v);
+    if (!v) return PX_ENOMEM;
+    const px_emap_options *o = c->o;
+    double A = 0;
+    if (o->ionic_strength > 0) {
+        const px_water_state *w;
+        int st = px_thermo_ws_water(ws, o->T, o->P, &w);
+        if (st != PX_OK) {
+            free(v);
+            return fail(c->msg, c->msglen, st, "water at %.2f K, %.3g bar: %s", o->T, o->P, px_strerror(st));
+        }
+        A = w->A_gamma;
+    }
+    for (size_t i = 0; i < n; i++) {
+        const px_species *sp = px_db_get(db, i);
+        const px_formula *f = &sp->f;
+        if (f->state == PX_STATE_E || px_formula_count(f, z) <= 0) continue;
+        if (!made_of(f, z, zl)) continue;
+        if (other && px_formula_count(f, other) > 0) continue;
+        if (in_list(o->exclude, o->n_exclude, f->text)) continue;
+        if (!for_ligand && o->n_only > 0 && !in_list(o->only, o->n_only, f->text)) continue;
+        cand *cd = &v[k];
+        cd->db = (long)i;
+        cd->sp = sp;
+        int st = px_thermo_species_G(ws, db, sp, o->T, o->P, &cd->G);
+        if (st != PX_OK) {
+            free(v);
+            return fail(c->msg, c->msglen, st, "%s at %.2f K, %.4g bar: %s", f->text, o->T, o->P,
+                        px_thermo_ws_error(ws)[0] ? px_thermo_ws_error(ws) : px_strerror(st));
+        }
+        if (f->state == PX_STATE_AQ) {
+            double a = for_ligand ? o->ligand_activity : o->activity;
+            for (size_t q = 0; q < o->n_act; q++)
+                if (in_list(&o->act_species[q], 1, f->text)) a = o->act_values[q];
+            if (!(a > 0) || !isfinite(a)) {
+                free(v);
+                return fail(c->msg, c->msglen, PX_EINVAL, "%s: activity must be positive", f->text);
+            }
+            cd->ln_a = log(a) + PX_LN10 * px_emap_davies(A, f->charge, o->ionic_strength);
+            cd->on_axis_activity = for_ligand && (o->xaxis == PX_AXIS_LOGA || o->yaxis == PX_AXIS_LOGA);
+        } else if (f->state == PX_STATE_G) {
+            cd->ln_a = PX_LN10 * o->gas_log_f;
+        }
+        k++;
+    }
+    *out = v;
+    *nout = k;
+    return PX_OK;
+}
+
+/* The element's reference form: among candidates without the ligand, the
+ * one with the fewest atoms (any works: its terms are the same per atom for
+ * every species). */
+static const cand *reference(const cand *v, size_t n, int zl)
+{
+    const cand *best = NULL;
+    double best_atoms = INFINITY;
+    for (size_t i = 0; i < n; i++) {
+        if (zl && px_formula_count(&v[i].sp->f, zl) > 0) continue;
+        double atoms = 0;
+        for (int e = 0; e < v[i].sp->f.n_elem; e++) atoms += v[i].sp->f.elem[e].n;
+        if (atoms < best_atoms) {
+            best_atoms = atoms;
+            best = &v[i];
+        }
+    }
+    return best;
+}
+
+static int basis_species(ctx *c, px_thermo_ws *ws, const px_db *db)
+{
+    c->h2o = px_db_find(db, "H2O(l)");
+    c->hplus = px_db_find(db, "H^+");
+    c->elec = px_db_find(db, "e-");
+    if (!c->h2o || !c->hplus || !c->elec)
+        return fail(c->msg, c->msglen, PX_ENOTFOUND, "the database lacks H2O(l), H^+ or e-");
+    int st = px_thermo_species_G(ws, db, c->h2o, c->o->T, c->o->P, &c->G_h2o);
+    if (st == PX_OK) st = px_thermo_species_G(ws, db, c->hplus, c->o->T, c->o->P, &c->G_h);
+    if (st == PX_OK) st = px_thermo_species_G(ws, db, c->elec, c->o->T, c->o->P, &c->G_e);
+    if (st != PX_OK)
+        return fail(c->msg, c->msglen, st, "basis species at %.2f K: %s", c->o->T, px_thermo_ws_error(ws));
+    return PX_OK;
+}
+
+static int water_lines(px_thermo_ws *ws, const px_db *db, px_emap *m, const px_emap_options *o)
+{
+    px_reaction r;
+    int st = px_reaction_parse_balanced("O2(g) + 4 H^+ + 4 e- = 2 H2O(l)", &r, NULL, 0);
+    px_reaction_result pr;
+    if (st == PX_OK && px_db_find(db, "O2(g)")) {
+        st = px_reaction_props(ws, db, &r, o->T, o->P, &pr);
+        m->E0_o2 = st == PX_OK ? pr.E : NAN;
+    } else {
+        m->E0_o2 = NAN;
+    }
+    double logK;
+    st = px_reaction_parse_balanced("H2O(l) = H^+ + OH^-", &r, NULL, 0);
+    if (st == PX_OK && px_db_find(db, "OH^-") && px_reaction_logK(ws, db, &r, o->T, o->P, &logK) == PX_OK)
+        m->pKw = -logK;
+    else
+        m->pKw = NAN;
+    m->nernst_slope = PX_R * o->T * PX_LN10 / PX_F;
+    return PX_OK;
+}
+
+void px_emap_free(px_emap *m)
+{
+    if (!m) return;
+    px_diagram_map_free(m->map);
+    px_diagram_map_free(m->ligand_map);
+    free(m->info);
+    free(m->bnd);
+    free(m->ligand_species);
+    free(m->absent);
+    free(m);
+}
+
+int px_emap_build(px_thermo_ws *ws, const px_db *db, const char *element,
+                  const px_emap_options *opt, px_emap **out, char *msg, size_t msglen)
+{
+    if (!ws || !db || !element || !opt || !out) return PX_EINVAL;
+    *out = NULL;
+    if (msg && msglen) msg[0] = '\0';
+    const px_emap_options *o = opt;
+    if (!(isfinite(o->T) && isfinite(o->P)) || o->xaxis == o->yaxis || o->xaxis > PX_AXIS_LOGA ||
+        o->yaxis > PX_AXIS_LOGA)
+        return fail(msg, msglen, PX_EINVAL, "bad temperature, pressure or axes");
+    int zM = px_element_z(element);
+    int zL = o->ligand ? px_element_z(o->ligand) : 0;
+    if (!zM || zM == Z_H || zM == Z_O) return fail(msg, msglen, PX_EINVAL, "unknown element '%s'", element);
+    if (o->ligand && (!zL || zL == zM || zL == Z_H || zL == Z_O))
+        return fail(msg, msglen, PX_EINVAL, "bad ligand element '%s'", o->ligand);
+    if ((o->xaxis == PX_AXIS_LOGA || o->yaxis == PX_AXIS_LOGA) && !zL)
+        return fail(msg, msglen, PX_EINVAL, "a log a(L) axis needs a ligand element");
+
+    ctx c = {o, PX_R * o->T, o->T, 0, 0, 0, NULL, NULL, NULL, msg, msglen};
+    int st = basis_species(&c, ws, db);
+    if (st != PX_OK) return st;
+
+    px_emap *m = calloc(1, sizeof *m);
+    if (!m) return PX_ENOMEM;
+    cand *cm = NULL, *cl = NULL;
+    size_t ncm = 0, ncl = 0;
+    px_diagram_species *phi = NULL;
+    px_diagram_region *reg = NULL;
+    const cand **lig_of_region = NULL;
+    size_t nreg = 0;
+    px_diagram_options dopt = px_diagram_options_default();
+
+    st = collect(&c, ws, db, zM, zL, 0, 0, &cm, &ncm);
+    if (st != PX_OK) goto done;
+    if (ncm == 0) {
+        st = fail(msg, msglen, PX_ENOTFOUND, "no species of %s in the loaded data", element);
+        goto done;
+    }
+    const cand *refM = reference(cm, ncm, zL);
+    if (!refM) {
+        st = fail(msg, msglen, PX_ENOTFOUND, "no species of %s without the ligand", element);
+        goto done;
+    }
+    m->n_candidates = ncm;
+
+    if (zL) { /* the ligand's own map first */
+        st = collect(&c, ws, db, zL, 0, zM, 1, &cl, &ncl);
+        if (st != PX_OK) goto done;
+        if (ncl == 0) {
+            st = fail(msg, msglen, PX_ENOTFOUND, "no species of the ligand %s", o->ligand);
+            goto done;
+        }
+        const cand *refL = reference(cl, ncl, 0);
+        px_diagram_species *lphi = calloc(ncl, sizeof *lphi);
+        if (!lphi) {
+            st = PX_ENOMEM;
+            goto done;
+        }
+        for (size_t i = 0; i < ncl && st == PX_OK; i++) {
+            st = phi_of(&c, &cl[i], zL, refL->sp, refL->G, NULL, &lphi[i]);
+            lphi[i].id = (int)i; /* index into cl */
+        }
+        if (st == PX_OK) st = px_diagram_map_exact(&o->window, lphi, ncl, &dopt, &m->ligand_map);
+        free(lphi);
+        if (st != PX_OK) goto done;
+        nreg = m->ligand_map->nfield;
+        m->ligand_species = calloc(nreg ? nreg : 1, sizeof *m->ligand_species);
+        reg = calloc(nreg ? nreg : 1, sizeof *reg);
+        lig_of_region = calloc(nreg ? nreg : 1, sizeof *lig_of_region);
+        phi = calloc(nreg * ncm + 1, sizeof *phi);
+        if (!m->ligand_species || !reg || !lig_of_region || !phi) {
+            st = PX_ENOMEM;
+            goto done;
+        }
+    } else {
+        nreg = 1;
+        reg = calloc(1, sizeof *reg);
+        lig_of_region = calloc(1, sizeof *lig_of_region);
+        phi = calloc(ncm, sizeof *phi);
+        if (!reg || !lig_of_region || !phi) {
+            st = PX_ENOMEM;
+            goto done;
+        }
+    }
+
+    /* region polygons: the ligand fields, or the window */
+    double winx[4] = {o->window.xmin, o->window.xmax, o->window.xmax, o->window.xmin};
+    double winy[4] = {o->window.ymin, o->window.ymin, o->window.ymax, o->window.ymax};
+    double *rx = NULL, *ry = NULL;
+    if (zL) {
+        size_t tot = m->ligand_map->nring;
+        rx = malloc((tot ? tot : 1) * sizeof *rx);
+        ry = malloc((tot ? tot : 1) * sizeof *ry);
+        if (!rx || !ry) {
+            free(rx);
+            free(ry);
+            st = PX_ENOMEM;
+            goto done;
+        }
+    }
+    for (size_t r = 0; r < nreg && st == PX_OK; r++) {
+        const cand *lig = NULL;
+        if (zL) {
+            const px_diagram_field *lf = &m->ligand_map->field[r];
+            lig = &cl[lf->id];
+            m->ligand_species[r] = lig->db;
+            for (size_t k = 0; k < lf->n; k++) {
+                size_t vi = m->ligand_map->ring[lf->first + k];
+                rx[lf->first + k] = m->ligand_map->vx[vi];
+                ry[lf->first + k] = m->ligand_map->vy[vi];
+            }
+            reg[r].x = rx + lf->first;
+            reg[r].y = ry + lf->first;
+            reg[r].n = lf->n;
+        } else {
+            reg[r].x = winx;
+            reg[r].y = winy;
+            reg[r].n = 4;
+        }
+        lig_of_region[r] = lig;
+        px_diagram_species *ph = phi + r * ncm;
+        for (size_t i = 0; i < ncm && st == PX_OK; i++)
+            st = phi_of(&c, &cm[i], zM, refM->sp, refM->G, lig, &ph[i]);
+        reg[r].sp = ph;
+        reg[r].m = ncm;
+        reg[r].id = (int)r;
+    }
+    if (st == PX_OK) st = px_diagram_map_nested(reg, nreg, &dopt, &m->map);
+    free(rx);
+    free(ry);
+    if (st != PX_OK) {
+        if (msg && msglen && !msg[0]) snprintf(msg, msglen, "map of %s: %s", element, px_strerror(st));
+        goto done;
+    }
+
+    /* fields: species, ligand, kind */
+    m->info = calloc(m->map->nfield ? m->map->nfield : 1, sizeof *m->info);
+    m->bnd = calloc(m->map->nboundary ? m->map->nboundary : 1, sizeof *m->bnd);
+    if (!m->info || !m->bnd) {
+        st = PX_ENOMEM;
+        goto done;
+    }
+    for (size_t f = 0; f < m->map->nfield; f++) {
+        const px_diagram_field *df = &m->map->field[f];
+        const px_species *sp = px_db_get(db, (size_t)df->id);
+        m->info[f].species = df->id;
+        m->info[f].ligand = zL ? m->ligand_species[df->region] : -1;
+        m->info[f].kind = kind_of(&sp->f, zM);
+    }
+    for (size_t b = 0; b < m->map->nboundary; b++) {
+        const px_diagram_boundary *db_ = &m->map->boundary[b];
+        m->bnd[b].a = db_->id_a;
+        m->bnd[b].b = db_->id_b;
+        const px_diagram_field *fa = &m->map->field[db_->field_a];
+        const cand *lig = lig_of_region[fa->region];
+        reaction_text(&c, px_db_get(db, (size_t)db_->id_a), px_db_get(db, (size_t)db_->id_b), zM,
+                      refM->sp, lig ? lig->sp : NULL, m->bnd[b].reaction, sizeof m->bnd[b].reaction);
+    }
+    /* candidates never shown */
+    m->absent = calloc(ncm, sizeof *m->absent);
+    if (!m->absent) {
+        st = PX_ENOMEM;
+        goto done;
+    }
+    for (size_t i = 0; i < ncm; i++) {
+        int shown = 0;
+        for (size_t f = 0; f < m->map->nfield && !shown; f++) shown = m->info[f].species == cm[i].db;
+        if (!shown) m->absent[m->n_absent++] = cm[i].db;
+    }
+    water_lines(ws, db, m, o);
+
+done:
+    free(cm);
+    free(cl);
+    free(phi);
+    free(reg);
+    free(lig_of_region);
+    if (st != PX_OK) {
+        px_emap_free(m);
+        return st;
+    }
+    *out = m;
+    return PX_OK;
+}

@@ -1,0 +1,319 @@
+/* l_diagram.c - predominance maps for Lua: core.map(db, opts) builds an
+ * exact element map (src/diagram/emap.h) and returns it as the plain map
+ * table that phlox.plot draws and phlox.export writes (docs/figures.md).
+ * Also the reference electrodes and the Nernst slope. */
+#include "core/status.h"
+#include "diagram/diagram.h"
+#include "diagram/emap.h"
+#include "lua/bindings.h"
+#include <lauxlib.h>
+#include <math.h>
+#include <stdlib.h>
+#include <string.h>
+
+int px_lua_check_database(lua_State *L, int arg, px_db **db, px_thermo_ws **ws);
+
+static const char *const axis_names[] = {"pH", "E", "loga", NULL};
+static const char *const kind_names[] = {"metal", "solid", "aqueous", "gas", "liquid"};
+static const char *const domain_names[] = {"immunity", "passivation", "corrosion"};
+
+static double optnum(lua_State *L, int t, const char *k, double dflt)
+{
+    lua_getfield(L, t, k);
+    double v = luaL_optnumber(L, -1, dflt);
+    lua_pop(L, 1);
+    return v;
+}
+
+/* A list option of strings -> array in a userdata box left on the stack. */
+static const char **optlist(lua_State *L, int t, const char *k, size_t *n)
+{
+    *n = 0;
+    if (lua_getfield(L, t, k) != LUA_TTABLE) {
+        lua_pop(L, 1);
+        return NULL;
+    }
+    size_t len = (size_t)luaL_len(L, -1);
+    const char **v = lua_newuserdatauv(L, (len ? len : 1) * sizeof *v, 1);
+    lua_pushvalue(L, -2);
+    lua_setiuservalue(L, -2, 1); /* keep the strings alive with the box */
+    for (size_t i = 0; i < len; i++) {
+        lua_rawgeti(L, -2, (lua_Integer)i + 1);
+        v[i] = lua_tostring(L, -1);
+        if (!v[i]) luaL_error(L, "map option '%s'[%d] must be a string", k, (int)i + 1);
+        lua_pop(L, 1);
+    }
+    lua_remove(L, -2);
+    *n = len;
+    return v;
+}
+
+static void push_xy(lua_State *L, const double *x, const double *y, size_t n, const size_t *idx)
+{
+    lua_createtable(L, (int)n, 0);
+    for (size_t i = 0; i < n; i++) {
+        lua_pushnumber(L, x[idx ? idx[i] : i]);
+        lua_rawseti(L, -2, (lua_Integer)i + 1);
+    }
+    lua_setfield(L, -2, "x");
+    lua_createtable(L, (int)n, 0);
+    for (size_t i = 0; i < n; i++) {
+        lua_pushnumber(L, y[idx ? idx[i] : i]);
+        lua_rawseti(L, -2, (lua_Integer)i + 1);
+    }
+    lua_setfield(L, -2, "y");
+}
+
+static void setnum(lua_State *L, const char *k, double v)
+{
+    if (isfinite(v)) {
+        lua_pushnumber(L, v);
+        lua_setfield(L, -2, k);
+    }
+}
+
+static void push_axis(lua_State *L, const char *k, int axis, double lo, double hi, const char *lig)
+{
+    lua_createtable(L, 0, 4);
+    if (axis == PX_AXIS_LOGA) lua_pushfstring(L, "log a(%s)", lig ? lig : "L");
+    else lua_pushstring(L, axis_names[axis]);
+    lua_setfield(L, -2, "name");
+    if (axis == PX_AXIS_E) {
+        lua_pushliteral(L, "V");
+        lua_setfield(L, -2, "unit");
+    }
+    lua_pushnumber(L, lo);
+    lua_setfield(L, -2, "min");
+    lua_pushnumber(L, hi);
+    lua_setfield(L, -2, "max");
+    lua_setfield(L, -2, k);
+}
+
+/* core.map(db, opts) -> map table | nil, message */
+static int l_map(lua_State *L)
+{
+    px_db *db;
+    px_thermo_ws *ws;
+    px_lua_check_database(L, 1, &db, &ws);
+    luaL_checktype(L, 2, LUA_TTABLE);
+    lua_settop(L, 2);
+    px_emap_options o = px_emap_options_default();
+    lua_getfield(L, 2, "element");
+    const char *element = luaL_checkstring(L, -1);
+    lua_pop(L, 1); /* still referenced by opts */
+    o.T = optnum(L, 2, "T", o.T);
+    o.P = optnum(L, 2, "P", o.P);
+    lua_getfield(L, 2, "x");
+    o.xaxis = (px_emap_axis)luaL_checkoption(L, -1, "pH", axis_names);
+    lua_getfield(L, 2, "y");
+    o.yaxis = (px_emap_axis)luaL_checkoption(L, -1, "E", axis_names);
+    lua_pop(L, 2);
+    if (lua_getfield(L, 2, "window") == LUA_TTABLE) {
+        double w[4];
+        for (int i = 0; i < 4; i++) {
+            lua_rawgeti(L, -1, i + 1);
+            w[i] = luaL_checknumber(L, -1);
+            lua_pop(L, 1);
+        }
+        o.window = (px_diagram_window){w[0], w[1], w[2], w[3]};
+    }
+    lua_pop(L, 1);
+    o.pH = optnum(L, 2, "pH", o.pH);
+    o.E = optnum(L, 2, "E", o.E);
+    o.activity = optnum(L, 2, "activity", o.activity);
+    o.ligand_activity = optnum(L, 2, "ligand_activity", o.ligand_activity);
+    o.gas_log_f = optnum(L, 2, "gas_log_f", o.gas_log_f);
+    o.ionic_strength = optnum(L, 2, "ionic_strength", 0);
+    lua_getfield(L, 2, "ligand");
+    o.ligand = lua_tostring(L, -1);
+    lua_pop(L, 1);
+    o.exclude = optlist(L, 2, "exclude", &o.n_exclude);
+    o.only = optlist(L, 2, "only", &o.n_only);
+    /* per-species activities: {["Fe^2+"] = 1e-5, ...} sorted for determinism */
+    if (lua_getfield(L, 2, "activities") == LUA_TTABLE) {
+        size_t n = 0;
+        lua_pushnil(L);
+        while (lua_next(L, -2)) {
+            n++;
+            lua_pop(L, 1);
+        }
+        const char **names = lua_newuserdatauv(L, (n ? n : 1) * sizeof *names, 0);
+        double *vals = lua_newuserdatauv(L, (n ? n : 1) * sizeof *vals, 0);
+        size_t k = 0;
+        lua_pushnil(L);
+        while (lua_next(L, -4)) {
+            names[k] = lua_tostring(L, -2);
+            if (!names[k] || !lua_isnumber(L, -1)) luaL_error(L, "activities: {formula = number}");
+            vals[k++] = lua_tonumber(L, -1);
+            lua_pop(L, 1);
+        }
+        o.act_species = names;
+        o.act_values = vals;
+        o.n_act = k;
+    }
+
+    px_emap *m;
+    char msg[512];
+    int st = px_emap_build(ws, db, element, &o, &m, msg, sizeof msg);
+    if (st != PX_OK) {
+        luaL_pushfail(L);
+        lua_pushfstring(L, "map of %s: %s", element, msg[0] ? msg : px_strerror(st));
+        lua_pushstring(L, px_status_name(st));
+        return 3;
+    }
+    const px_diagram_map *dm = m->map;
+    lua_createtable(L, 0, 16);
+    lua_pushstring(L, element);
+    lua_setfield(L, -2, "element");
+    setnum(L, "T", o.T);
+    setnum(L, "P", o.P);
+    push_axis(L, "x", o.xaxis, o.window.xmin, o.window.xmax, o.ligand);
+    push_axis(L, "y", o.yaxis, o.window.ymin, o.window.ymax, o.ligand);
+    /* fields */
+    lua_createtable(L, (int)dm->nfield, 0);
+    for (size_t f = 0; f < dm->nfield; f++) {
+        const px_diagram_field *df = &dm->field[f];
+        const px_species *sp = px_db_get(db, (size_t)m->info[f].species);
+        lua_createtable(L, 0, 8);
+        lua_pushstring(L, sp->f.text);
+        lua_setfield(L, -2, "species");
+        lua_pushstring(L, kind_names[m->info[f].kind]);
+        lua_setfield(L, -2, "kind");
+        if (m->info[f].ligand >= 0) {
+            lua_pushstring(L, px_db_get(db, (size_t)m->info[f].ligand)->f.text);
+            lua_setfield(L, -2, "ligand");
+        }
+        push_xy(L, dm->vx, dm->vy, df->n, dm->ring + df->first);
+        setnum(L, "area", df->area);
+        lua_pushinteger(L, df->group + 1);
+        lua_setfield(L, -2, "group");
+        lua_rawseti(L, -2, (lua_Integer)f + 1);
+    }
+    lua_setfield(L, -2, "fields");
+    /* boundaries */
+    lua_createtable(L, (int)dm->nboundary, 0);
+    for (size_t b = 0; b < dm->nboundary; b++) {
+        const px_diagram_boundary *bd = &dm->boundary[b];
+        lua_createtable(L, 0, 6);
+        lua_createtable(L, 2, 0);
+        lua_pushstring(L, px_db_get(db, (size_t)bd->id_a)->f.text);
+        lua_rawseti(L, -2, 1);
+        lua_pushstring(L, px_db_get(db, (size_t)bd->id_b)->f.text);
+        lua_rawseti(L, -2, 2);
+        lua_setfield(L, -2, "between");
+        double bx[2] = {bd->x0, bd->x1}, by[2] = {bd->y0, bd->y1};
+        push_xy(L, bx, by, 2, NULL);
+        lua_createtable(L, 0, 3);
+        setnum(L, "a", bd->a);
+        setnum(L, "b", bd->b);
+        lua_pushboolean(L, bd->vertical);
+        lua_setfield(L, -2, "vertical");
+        lua_setfield(L, -2, "line");
+        lua_pushstring(L, m->bnd[b].reaction);
+        lua_setfield(L, -2, "reaction");
+        lua_rawseti(L, -2, (lua_Integer)b + 1);
+    }
+    lua_setfield(L, -2, "boundaries");
+    /* species that never predominate */
+    lua_createtable(L, (int)m->n_absent, 0);
+    for (size_t i = 0; i < m->n_absent; i++) {
+        lua_pushstring(L, px_db_get(db, (size_t)m->absent[i])->f.text);
+        lua_rawseti(L, -2, (lua_Integer)i + 1);
+    }
+    lua_setfield(L, -2, "absent");
+    /* ligand fields */
+    if (m->ligand_map) {
+        const px_diagram_map *lm = m->ligand_map;
+        lua_createtable(L, (int)lm->nfield, 0);
+        for (size_t f = 0; f < lm->nfield; f++) {
+            lua_createtable(L, 0, 3);
+            lua_pushstring(L, px_db_get(db, (size_t)m->ligand_species[f])->f.text);
+            lua_setfield(L, -2, "species");
+            push_xy(L, lm->vx, lm->vy, lm->field[f].n, lm->ring + lm->field[f].first);
+            lua_rawseti(L, -2, (lua_Integer)f + 1);
+        }
+        lua_setfield(L, -2, "ligand_fields");
+    }
+    /* water lines (E = a + b pH) and neutral pH, on pH-E maps */
+    setnum(L, "nernst_slope", m->nernst_slope);
+    setnum(L, "pKw", m->pKw);
+    if (isfinite(m->pKw)) setnum(L, "neutral_pH", m->pKw / 2);
+    if (o.xaxis == PX_AXIS_PH && o.yaxis == PX_AXIS_E && isfinite(m->E0_o2)) {
+        lua_createtable(L, 0, 2);
+        lua_createtable(L, 0, 2);
+        setnum(L, "a", m->E0_o2);
+        setnum(L, "b", -m->nernst_slope);
+        lua_setfield(L, -2, "o2");
+        lua_createtable(L, 0, 2);
+        setnum(L, "a", 0.0);
+        setnum(L, "b", -m->nernst_slope);
+        lua_setfield(L, -2, "h2");
+        lua_setfield(L, -2, "water");
+    }
+    /* corrosion domains */
+    int *kinds = malloc((dm->nfield ? dm->nfield : 1) * sizeof *kinds);
+    px_diagram_outlines *dom = NULL;
+    if (kinds) {
+        for (size_t f = 0; f < dm->nfield; f++) {
+            px_emap_kind k = m->info[f].kind;
+            kinds[f] = k == PX_EMAP_METAL ? PX_DIAGRAM_METAL
+                       : (k == PX_EMAP_SOLID || k == PX_EMAP_LIQUID) ? PX_DIAGRAM_SOLID
+                                                                     : PX_DIAGRAM_DISSOLVED;
+        }
+        if (px_diagram_corrosion_domains(dm, kinds, &dom) != PX_OK) dom = NULL;
+        free(kinds);
+    }
+    if (dom) {
+        lua_createtable(L, (int)dom->nloop, 0);
+        for (size_t i = 0; i < dom->nloop; i++) {
+            const px_diagram_loop *lp = &dom->loop[i];
+            lua_createtable(L, 0, 5);
+            lua_pushstring(L, domain_names[lp->cls]);
+            lua_setfield(L, -2, "domain");
+            push_xy(L, dom->x + lp->first, dom->y + lp->first, lp->n, NULL);
+            setnum(L, "area", fabs(lp->area));
+            lua_pushboolean(L, lp->area < 0);
+            lua_setfield(L, -2, "hole");
+            lua_rawseti(L, -2, (lua_Integer)i + 1);
+        }
+        lua_setfield(L, -2, "domains");
+        px_diagram_outlines_free(dom);
+    }
+    lua_pushinteger(L, (lua_Integer)dm->nunmatched);
+    lua_setfield(L, -2, "unmatched_edges");
+    px_emap_free(m);
+    return 1;
+}
+
+/* core.electrodes() -> { {name, offset, dEdT, source}, ... } (index 1 = SHE) */
+static int l_electrodes(lua_State *L)
+{
+    lua_newtable(L);
+    for (int i = 0; i < PX_ELECTRODE_COUNT; i++) {
+        const px_diagram_electrode_info *e = px_diagram_electrode_get(i);
+        if (!e) continue;
+        lua_createtable(L, 0, 4);
+        lua_pushstring(L, e->name);
+        lua_setfield(L, -2, "name");
+        lua_pushnumber(L, e->offset_V);
+        lua_setfield(L, -2, "offset");
+        setnum(L, "dEdT", e->dEdT_V_K);
+        lua_pushstring(L, e->source ? e->source : "");
+        lua_setfield(L, -2, "source");
+        lua_rawseti(L, -2, i + 1);
+    }
+    return 1;
+}
+
+static int l_nernst_slope(lua_State *L)
+{
+    lua_pushnumber(L, px_diagram_nernst_slope(luaL_checknumber(L, 1)));
+    return 1;
+}
+
+void px_lua_open_diagram(lua_State *L)
+{
+    static const luaL_Reg funcs[] = {
+        {"map", l_map}, {"electrodes", l_electrodes}, {"nernst_slope", l_nernst_slope}, {NULL, NULL}};
+    luaL_setfuncs(L, funcs, 0);
+}

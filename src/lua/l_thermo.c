@@ -1,0 +1,496 @@
+/* l_thermo.c - the species database for Lua: core.database() returns a
+ * phlox.Database userdata (a px_db plus its evaluation workspace) with
+ * methods to load element definition files, look species up, and evaluate
+ * standard-state properties, reactions and water at (T, P).  Also
+ * core.formula(), core.default_pressure(), core.check_files().
+ * Thin: argument checks, one call into the core, conversion of results. */
+#include "core/status.h"
+#include "data/data.h"
+#include "lua/bindings.h"
+#include "thermo/thermo.h"
+#include "water/water.h"
+#include <lauxlib.h>
+#include <math.h>
+#include <stdio.h>
+#include <stdlib.h>
+#include <string.h>
+
+#define DB_MT "phlox.Database"
+#define PX_MSG 512
+
+typedef struct {
+    px_db *db;
+    px_thermo_ws *ws;
+} ldb;
+
+static ldb *checkdb(lua_State *L)
+{
+    ldb *u = luaL_checkudata(L, 1, DB_MT);
+    if (!u->db) luaL_error(L, "attempt to use a closed database");
+    return u;
+}
+
+static int db_gc(lua_State *L)
+{
+    ldb *u = luaL_checkudata(L, 1, DB_MT);
+    px_thermo_ws_free(u->ws);
+    px_db_free(u->db);
+    u->ws = NULL;
+    u->db = NULL;
+    return 0;
+}
+
+/* core.database([dielectric]) -> Database with the built-in species */
+static int l_database(lua_State *L)
+{
+    static const char *const models[] = {"R8-97", "JN91", NULL};
+    int model = luaL_checkoption(L, 1, "R8-97", models);
+    ldb *u = lua_newuserdatauv(L, sizeof *u, 0);
+    u->db = NULL;
+    u->ws = NULL;
+    luaL_setmetatable(L, DB_MT);
+    u->db = px_db_new();
+    u->ws = px_thermo_ws_new(model == 0 ? PX_DIELECTRIC_R8_97 : PX_DIELECTRIC_JN91);
+    if (!u->db || !u->ws) return luaL_error(L, "database: out of memory");
+    int st = px_db_add_builtins(u->db);
+    if (st != PX_OK) return luaL_error(L, "database: built-in species: %s", px_strerror(st));
+    return 1;
+}
+
+static void push_problems(lua_State *L, const px_data_problems *p)
+{
+    size_t n = px_data_problems_count(p);
+    lua_createtable(L, (int)n, 0);
+    char line[1024];
+    for (size_t i = 0; i < n; i++) {
+        const px_data_problem *pr = px_data_problems_get(p, i);
+        px_data_problem_format(pr, line, sizeof line);
+        lua_createtable(L, 0, 6);
+        lua_pushstring(L, line);
+        lua_setfield(L, -2, "text");
+        lua_pushstring(L, pr->severity == PX_DATA_ERROR ? "error" : "warning");
+        lua_setfield(L, -2, "severity");
+        lua_pushstring(L, pr->file);
+        lua_setfield(L, -2, "file");
+        lua_pushinteger(L, pr->line);
+        lua_setfield(L, -2, "line");
+        lua_pushstring(L, pr->species);
+        lua_setfield(L, -2, "species");
+        lua_pushstring(L, pr->message);
+        lua_setfield(L, -2, "message");
+        lua_rawseti(L, -2, (lua_Integer)i + 1);
+    }
+}
+
+/* Element list option {"Fe", "Cl"} -> atomic numbers (in a userdata box). */
+static int *opt_elements(lua_State *L, int idx, size_t *n)
+{
+    *n = 0;
+    if (lua_getfield(L, idx, "elements") != LUA_TTABLE) {
+        lua_pop(L, 1);
+        return NULL;
+    }
+    size_t len = (size_t)luaL_len(L, -1);
+    int *z = lua_newuserdatauv(L, (len ? len : 1) * sizeof *z, 0);
+    for (size_t i = 0; i < len; i++) {
+        lua_rawgeti(L, -2, (lua_Integer)i + 1);
+        const char *sym = lua_tostring(L, -1);
+        if (!sym || !(z[i] = px_element_z(sym)))
+            luaL_error(L, "elements[%d]: unknown element '%s'", (int)i + 1, sym ? sym : "?");
+        lua_pop(L, 1);
+    }
+    lua_remove(L, -2); /* the list; the box stays on the stack */
+    *n = len;
+    return z;
+}
+
+/* db:load(text, name [, {elements = {...}, user = bool}])
+ *   -> true, problems | nil, message, problems */
+static int db_load(lua_State *L)
+{
+    ldb *u = checkdb(L);
+    size_t len;
+    const char *text = luaL_checklstring(L, 2, &len);
+    const char *name = luaL_checkstring(L, 3);
+    lua_settop(L, 4);
+    px_data_options o = px_data_options_default();
+    int user = 0;
+    if (lua_istable(L, 4)) {
+        o.elements = opt_elements(L, 4, &o.n_elements);
+        lua_getfield(L, 4, "user");
+        user = lua_toboolean(L, -1);
+        lua_pop(L, 1);
+    }
+    px_data_problems *p = px_data_problems_new();
+    if (!p) return luaL_error(L, "load: out of memory");
+    int st = user ? px_data_merge_user_buffer(u->db, text, len, name, &o, p)
+                  : px_data_load_buffer(u->db, text, len, name, &o, p);
+    if (st != PX_OK) {
+        luaL_pushfail(L);
+        char line[1024] = "";
+        size_t n = px_data_problems_count(p);
+        for (size_t i = 0; i < n; i++) { /* the first error is the message */
+            const px_data_problem *pr = px_data_problems_get(p, i);
+            if (pr->severity == PX_DATA_ERROR) {
+                px_data_problem_format(pr, line, sizeof line);
+                break;
+            }
+        }
+        if (!line[0]) snprintf(line, sizeof line, "%s: %s", name, px_strerror(st));
+        lua_pushstring(L, line);
+        push_problems(L, p);
+        px_data_problems_free(p);
+        return 3;
+    }
+    lua_pushboolean(L, 1);
+    push_problems(L, p);
+    px_data_problems_free(p);
+    return 2;
+}
+
+static void push_formula(lua_State *L, const px_formula *f)
+{
+    static const char *const states[] = {"aq", "s", "l", "g", "e"};
+    lua_createtable(L, 0, 8);
+    lua_pushstring(L, f->text);
+    lua_setfield(L, -2, "formula");
+    lua_pushinteger(L, f->charge);
+    lua_setfield(L, -2, "charge");
+    lua_pushstring(L, states[f->state]);
+    lua_setfield(L, -2, "state");
+    lua_pushstring(L, f->form);
+    lua_setfield(L, -2, "form");
+    lua_createtable(L, 0, f->n_elem);
+    for (int i = 0; i < f->n_elem; i++) {
+        lua_pushnumber(L, f->elem[i].n);
+        lua_setfield(L, -2, px_element_symbol(f->elem[i].z));
+    }
+    lua_setfield(L, -2, "elements");
+    double mm = px_formula_molar_mass(f);
+    if (isfinite(mm)) {
+        lua_pushnumber(L, mm);
+        lua_setfield(L, -2, "molar_mass");
+    }
+}
+
+static void setnum(lua_State *L, const char *k, double v)
+{
+    if (isfinite(v)) {
+        lua_pushnumber(L, v);
+        lua_setfield(L, -2, k);
+    }
+}
+
+static void push_species(lua_State *L, const px_species *sp, long index)
+{
+    static const char *const models[] = {"hkf", "cp", "logk", "water"};
+    push_formula(L, &sp->f);
+    lua_pushinteger(L, index + 1);
+    lua_setfield(L, -2, "index");
+    lua_pushstring(L, models[sp->model]);
+    lua_setfield(L, -2, "model");
+    setnum(L, "dfG", sp->dGf);
+    setnum(L, "dfH", sp->dHf);
+    setnum(L, "S", sp->S);
+    if (sp->model == PX_MODEL_LOGK) {
+        lua_pushstring(L, sp->logk.reaction);
+        lua_setfield(L, -2, "reaction");
+        setnum(L, "logK25", sp->logk.logK25);
+    }
+    lua_pushstring(L, sp->source ? sp->source : "");
+    lua_setfield(L, -2, "source");
+    if (sp->file) {
+        lua_pushstring(L, sp->file);
+        lua_setfield(L, -2, "file");
+        lua_pushinteger(L, sp->line);
+        lua_setfield(L, -2, "line");
+    }
+    lua_pushstring(L, sp->quality);
+    lua_setfield(L, -2, "quality");
+    lua_pushboolean(L, sp->estimated);
+    lua_setfield(L, -2, "estimated");
+    setnum(L, "Tmin", sp->Tmin);
+    setnum(L, "Tmax", sp->Tmax);
+}
+
+static const px_species *checkspecies(lua_State *L, ldb *u, int arg, long *index)
+{
+    const char *name = luaL_checkstring(L, arg);
+    long i = px_db_index(u->db, name);
+    if (i < 0) luaL_error(L, "no species '%s' in the loaded data", name);
+    if (index) *index = i;
+    return px_db_get(u->db, (size_t)i);
+}
+
+/* db:species(formula | index) -> table | nil */
+static int db_species(lua_State *L)
+{
+    ldb *u = checkdb(L);
+    long i;
+    if (lua_type(L, 2) == LUA_TNUMBER) i = (long)luaL_checkinteger(L, 2) - 1;
+    else i = px_db_index(u->db, luaL_checkstring(L, 2));
+    const px_species *sp = i >= 0 ? px_db_get(u->db, (size_t)i) : NULL;
+    if (!sp) {
+        lua_pushnil(L);
+        return 1;
+    }
+    push_species(L, sp, i);
+    return 1;
+}
+
+static int db_count(lua_State *L)
+{
+    ldb *u = checkdb(L);
+    lua_pushinteger(L, (lua_Integer)px_db_count(u->db));
+    return 1;
+}
+
+static int db_remove(lua_State *L)
+{
+    ldb *u = checkdb(L);
+    int st = px_db_remove(u->db, luaL_checkstring(L, 2));
+    lua_pushboolean(L, st == PX_OK);
+    return 1;
+}
+
+/* T (K) and P (bar, default: px_thermo_default_pressure).  Returns 0, or
+ * pushes nil, message and returns 2 (an expected failure: out of range). */
+static int checkTP(lua_State *L, int iT, int iP, double *T, double *P)
+{
+    *T = luaL_checknumber(L, iT);
+    if (lua_isnoneornil(L, iP)) {
+        int st = px_thermo_default_pressure(*T, P);
+        if (st != PX_OK) {
+            luaL_pushfail(L);
+            lua_pushfstring(L, "T = %f K (%f C): %s (the water model covers %f to %f C)", *T,
+                            *T - 273.15, px_strerror(st), PX_WATER_TMIN - 273.15, PX_WATER_TMAX - 273.15);
+            return 2;
+        }
+    } else {
+        *P = luaL_checknumber(L, iP);
+    }
+    return 0;
+}
+
+/* db:props(formula, T [, P]) -> {G, H, S, Cp, V} | nil, message */
+static int db_props(lua_State *L)
+{
+    ldb *u = checkdb(L);
+    const px_species *sp = checkspecies(L, u, 2, NULL);
+    double T, P;
+    if (checkTP(L, 3, 4, &T, &P)) return 2;
+    px_thermo_props pr;
+    int st = px_thermo_species_props(u->ws, u->db, sp, T, P, &pr);
+    if (st != PX_OK) {
+        luaL_pushfail(L);
+        lua_pushfstring(L, "%s: %s", px_strerror(st), px_thermo_ws_error(u->ws));
+        return 2;
+    }
+    lua_createtable(L, 0, 7);
+    setnum(L, "G", pr.G);
+    setnum(L, "H", pr.H);
+    setnum(L, "S", pr.S);
+    setnum(L, "Cp", pr.Cp);
+    setnum(L, "V", pr.V);
+    lua_pushnumber(L, T);
+    lua_setfield(L, -2, "T");
+    lua_pushnumber(L, P);
+    lua_setfield(L, -2, "P");
+    return 1;
+}
+
+/* db:reaction(text, T [, P]) -> {dG, dH, dS, logK, E, n_e, T, P, text} | nil, message */
+static int db_reaction(lua_State *L)
+{
+    ldb *u = checkdb(L);
+    const char *text = luaL_checkstring(L, 2);
+    double T, P;
+    if (checkTP(L, 3, 4, &T, &P)) return 2;
+    px_reaction r;
+    char msg[PX_MSG];
+    int st = px_reaction_parse_balanced(text, &r, msg, sizeof msg);
+    if (st != PX_OK) {
+        luaL_pushfail(L);
+        lua_pushfstring(L, "reaction '%s': %s", text, msg);
+        return 2;
+    }
+    for (int i = 0; i < r.n; i++)
+        if (!px_db_find(u->db, r.sp[i].text)) {
+            luaL_pushfail(L);
+            lua_pushfstring(L, "reaction '%s': no species '%s' in the loaded data", text, r.sp[i].text);
+            return 2;
+        }
+    px_reaction_result pr;
+    st = px_reaction_props(u->ws, u->db, &r, T, P, &pr);
+    if (st != PX_OK) {
+        luaL_pushfail(L);
+        lua_pushfstring(L, "reaction '%s' at %f K, %f bar: %s: %s", text, T, P, px_strerror(st),
+                        px_thermo_ws_error(u->ws));
+        return 2;
+    }
+    lua_createtable(L, 0, 10);
+    setnum(L, "dG", pr.dG);
+    setnum(L, "dH", pr.dH);
+    setnum(L, "dS", pr.dS);
+    setnum(L, "dCp", pr.dCp);
+    setnum(L, "dV", pr.dV);
+    setnum(L, "logK", pr.logK);
+    lua_pushnumber(L, pr.n_e);
+    lua_setfield(L, -2, "n_e");
+    setnum(L, "E", pr.E);
+    lua_pushnumber(L, T);
+    lua_setfield(L, -2, "T");
+    lua_pushnumber(L, P);
+    lua_setfield(L, -2, "P");
+    char canon[PX_MSG];
+    if (px_reaction_format(&r, canon, sizeof canon) == PX_OK) {
+        lua_pushstring(L, canon);
+        lua_setfield(L, -2, "text");
+    }
+    return 1;
+}
+
+/* db:list_text([element]) -> the `phlox list` text */
+static int db_list_text(lua_State *L)
+{
+    ldb *u = checkdb(L);
+    const char *el = luaL_optstring(L, 2, NULL);
+    FILE *f = tmpfile();
+    if (!f) return luaL_error(L, "list: cannot create a temporary file");
+    size_t n = px_data_list_write(u->db, el, f);
+    long len = ftell(f);
+    rewind(f);
+    luaL_Buffer b;
+    char *p = luaL_buffinitsize(L, &b, len > 0 ? (size_t)len : 1);
+    size_t got = len > 0 ? fread(p, 1, (size_t)len, f) : 0;
+    fclose(f);
+    luaL_pushresultsize(&b, got);
+    lua_pushinteger(L, (lua_Integer)n);
+    return 2;
+}
+
+/* core.water(T [, P [, dielectric]]) -> table of the water state */
+static int l_water(lua_State *L)
+{
+    static const char *const models[] = {"R8-97", "JN91", NULL};
+    double T, P;
+    if (checkTP(L, 1, 2, &T, &P)) return 2;
+    int model = luaL_checkoption(L, 3, "R8-97", models);
+    px_water_state w;
+    int st = px_water_state_eval(T, P, model == 0 ? PX_DIELECTRIC_R8_97 : PX_DIELECTRIC_JN91, &w);
+    if (st != PX_OK) {
+        luaL_pushfail(L);
+        lua_pushfstring(L, "water at %f K, %f bar: %s", T, P, px_strerror(st));
+        return 2;
+    }
+    lua_createtable(L, 0, 16);
+    setnum(L, "T", w.T);
+    setnum(L, "P", w.P);
+    setnum(L, "rho", w.rho);
+    setnum(L, "eps", w.eps);
+    setnum(L, "A", w.A_gamma);
+    setnum(L, "B", w.B_gamma);
+    setnum(L, "Q", w.Q);
+    setnum(L, "Y", w.Y);
+    setnum(L, "X", w.X);
+    setnum(L, "G", w.G);
+    setnum(L, "S", w.S);
+    setnum(L, "Cp", w.Cp);
+    double pkw;
+    if (px_water_pkw(T, w.rho, &pkw) == PX_OK) setnum(L, "pKw", pkw);
+    return 1;
+}
+
+/* core.psat(T) -> bar | nil, message */
+static int l_psat(lua_State *L)
+{
+    double T = luaL_checknumber(L, 1), P;
+    int st = px_water_psat(T, &P);
+    if (st != PX_OK) {
+        luaL_pushfail(L);
+        lua_pushfstring(L, "saturation pressure at %f K: %s", T, px_strerror(st));
+        return 2;
+    }
+    lua_pushnumber(L, P);
+    return 1;
+}
+
+static int l_default_pressure(lua_State *L)
+{
+    double T = luaL_checknumber(L, 1), P;
+    int st = px_thermo_default_pressure(T, &P);
+    if (st != PX_OK) {
+        luaL_pushfail(L);
+        lua_pushfstring(L, "no default pressure at %f K: %s", T, px_strerror(st));
+        return 2;
+    }
+    lua_pushnumber(L, P);
+    return 1;
+}
+
+/* core.formula(text) -> table | nil, message */
+static int l_formula(lua_State *L)
+{
+    px_formula f;
+    char msg[PX_MSG];
+    int st = px_formula_parse_msg(luaL_checkstring(L, 1), &f, msg, sizeof msg);
+    if (st != PX_OK) {
+        luaL_pushfail(L);
+        lua_pushstring(L, msg);
+        return 2;
+    }
+    push_formula(L, &f);
+    return 1;
+}
+
+/* core.check_files({path...}) -> ok, {problem...} */
+static int l_check_files(lua_State *L)
+{
+    luaL_checktype(L, 1, LUA_TTABLE);
+    size_t n = (size_t)luaL_len(L, 1);
+    const char **paths = lua_newuserdatauv(L, (n ? n : 1) * sizeof *paths, 0);
+    for (size_t i = 0; i < n; i++) {
+        lua_rawgeti(L, 1, (lua_Integer)i + 1);
+        paths[i] = luaL_checkstring(L, -1);
+        lua_pop(L, 1); /* the string stays alive in the argument table */
+    }
+    px_data_problems *p = px_data_problems_new();
+    if (!p) return luaL_error(L, "check: out of memory");
+    int st = px_data_check_files(paths, n, NULL, p);
+    lua_pushboolean(L, st == PX_OK);
+    push_problems(L, p);
+    px_data_problems_free(p);
+    return 2;
+}
+
+void px_lua_open_thermo(lua_State *L)
+{
+    static const luaL_Reg methods[] = {
+        {"load", db_load},       {"species", db_species}, {"count", db_count},
+        {"remove", db_remove},   {"props", db_props},     {"reaction", db_reaction},
+        {"list_text", db_list_text}, {NULL, NULL}};
+    static const luaL_Reg funcs[] = {
+        {"database", l_database}, {"water", l_water},         {"psat", l_psat},
+        {"default_pressure", l_default_pressure}, {"formula", l_formula},
+        {"check_files", l_check_files}, {NULL, NULL}};
+    luaL_newmetatable(L, DB_MT);
+    luaL_newlib(L, methods);
+    lua_setfield(L, -2, "__index");
+    lua_pushcfunction(L, db_gc);
+    lua_setfield(L, -2, "__gc");
+    lua_pushcfunction(L, db_gc);
+    lua_setfield(L, -2, "__close");
+    lua_pop(L, 1);
+    luaL_setfuncs(L, funcs, 0);
+}
+
+/* For other binding files (maps, speciation): the db and workspace behind
+ * a phlox.Database argument. */
+int px_lua_check_database(lua_State *L, int arg, px_db **db, px_thermo_ws **ws)
+{
+    ldb *u = luaL_checkudata(L, arg, DB_MT);
+    if (!u->db) return luaL_error(L, "attempt to use a closed database");
+    *db = u->db;
+    *ws = u->ws;
+    return 0;
+}

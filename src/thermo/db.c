@@ -1,0 +1,272 @@
+/* db.c - px_db, the species database: an array of species records that it
+ * owns (strings included), keyed by canonical formula text.  Lookups go
+ * through a small open-addressing hash table rebuilt when the array
+ * changes.  A generation counter changes on every modification so caches
+ * held by callers (px_thermo_ws) know when to drop what they computed. */
+#include <math.h>
+#include <stdlib.h>
+#include <string.h>
+
+#include "core/constants.h"
+#include "core/status.h"
+#include "thermo/thermo.h"
+#include "thermo/thermo_internal.h"
+
+struct px_db {
+    px_species *sp;
+    size_t n, cap;
+    long *hash; /* slot -> index, -1 empty */
+    size_t hcap;
+    unsigned long gen;
+};
+
+static unsigned long fnv1a(const char *s)
+{
+    unsigned long h = 2166136261UL;
+    while (*s) {
+        h ^= (unsigned char)*s++;
+        h *= 16777619UL;
+    }
+    return h;
+}
+
+static char *dupstr(const char *s)
+{
+    if (!s)
+        return NULL;
+    size_t n = strlen(s) + 1;
+    char *d = malloc(n);
+    if (d)
+        memcpy(d, s, n);
+    return d;
+}
+
+static void species_release(px_species *sp)
+{
+    free(sp->source);
+    free(sp->file);
+    sp->source = sp->file = NULL;
+}
+
+static int rehash(px_db *db)
+{
+    size_t want = 16;
+    while (want < 2 * db->n + 1)
+        want *= 2;
+    if (want != db->hcap) {
+        long *h = malloc(want * sizeof *h);
+        if (!h)
+            return PX_ENOMEM;
+        free(db->hash);
+        db->hash = h;
+        db->hcap = want;
+    }
+    for (size_t i = 0; i < db->hcap; i++)
+        db->hash[i] = -1;
+    for (size_t i = 0; i < db->n; i++) {
+        size_t s = fnv1a(db->sp[i].f.text) & (db->hcap - 1);
+        while (db->hash[s] >= 0)
+            s = (s + 1) & (db->hcap - 1);
+        db->hash[s] = (long)i;
+    }
+    return PX_OK;
+}
+
+static long find_canon(const px_db *db, const char *canon)
+{
+    if (!db->hcap)
+        return -1;
+    size_t s = fnv1a(canon) & (db->hcap - 1);
+    while (db->hash[s] >= 0) {
+        if (!strcmp(db->sp[db->hash[s]].f.text, canon))
+            return db->hash[s];
+        s = (s + 1) & (db->hcap - 1);
+    }
+    return -1;
+}
+
+px_db *px_db_new(void)
+{
+    px_db *db = calloc(1, sizeof *db);
+    if (db && rehash(db)) {
+        free(db);
+        return NULL;
+    }
+    return db;
+}
+
+void px_db_free(px_db *db)
+{
+    if (!db)
+        return;
+    for (size_t i = 0; i < db->n; i++)
+        species_release(&db->sp[i]);
+    free(db->sp);
+    free(db->hash);
+    free(db);
+}
+
+unsigned long px__db_generation(const px_db *db) { return db ? db->gen : 0; }
+
+long px__db_index_of(const px_db *db, const px_species *sp)
+{
+    if (!db || !sp || db->n == 0)
+        return -1;
+    if (sp >= db->sp && sp < db->sp + db->n)
+        return (long)(sp - db->sp);
+    return -1;
+}
+
+/* a deep copy of src with its formula replaced by the canonical parse */
+static int make_copy(const px_species *src, px_species *dst)
+{
+    px_formula f;
+    if (px_formula_parse(src->f.text, &f))
+        return PX_EPARSE;
+    *dst = *src;
+    dst->f = f;
+    dst->source = dupstr(src->source ? src->source : "");
+    dst->file = src->file ? dupstr(src->file) : NULL;
+    if (!dst->source || (src->file && !dst->file)) {
+        species_release(dst);
+        return PX_ENOMEM;
+    }
+    return PX_OK;
+}
+
+int px_db_add(px_db *db, const px_species *sp)
+{
+    if (!db || !sp)
+        return PX_EINVAL;
+    px_species c;
+    int st = make_copy(sp, &c);
+    if (st)
+        return st;
+    if (find_canon(db, c.f.text) >= 0) {
+        species_release(&c);
+        return PX_EINVAL;
+    }
+    if (db->n == db->cap) {
+        size_t nc = db->cap ? 2 * db->cap : 32;
+        px_species *p = realloc(db->sp, nc * sizeof *p);
+        if (!p) {
+            species_release(&c);
+            return PX_ENOMEM;
+        }
+        db->sp = p;
+        db->cap = nc;
+    }
+    db->sp[db->n++] = c;
+    db->gen++;
+    st = rehash(db);
+    if (st) { /* undo */
+        db->n--;
+        species_release(&db->sp[db->n]);
+        return st;
+    }
+    return PX_OK;
+}
+
+int px_db_replace(px_db *db, const px_species *sp)
+{
+    if (!db || !sp)
+        return PX_EINVAL;
+    px_species c;
+    int st = make_copy(sp, &c);
+    if (st)
+        return st;
+    long i = find_canon(db, c.f.text);
+    if (i < 0) {
+        species_release(&c);
+        return px_db_add(db, sp);
+    }
+    species_release(&db->sp[i]);
+    db->sp[i] = c;
+    db->gen++;
+    return PX_OK;
+}
+
+int px_db_remove(px_db *db, const char *formula)
+{
+    long i = px_db_index(db, formula);
+    if (i < 0)
+        return PX_ENOTFOUND;
+    species_release(&db->sp[i]);
+    memmove(&db->sp[i], &db->sp[i + 1], (db->n - (size_t)i - 1) * sizeof *db->sp);
+    db->n--;
+    db->gen++;
+    return rehash(db);
+}
+
+size_t px_db_count(const px_db *db) { return db ? db->n : 0; }
+
+const px_species *px_db_get(const px_db *db, size_t i)
+{
+    return db && i < db->n ? &db->sp[i] : NULL;
+}
+
+long px_db_index(const px_db *db, const char *formula)
+{
+    if (!db || !formula)
+        return -1;
+    long i = find_canon(db, formula); /* fast path: already canonical */
+    if (i >= 0)
+        return i;
+    px_formula f;
+    if (px_formula_parse(formula, &f))
+        return -1;
+    return find_canon(db, f.text);
+}
+
+const px_species *px_db_find(const px_db *db, const char *formula)
+{
+    long i = px_db_index(db, formula);
+    return i >= 0 ? &db->sp[i] : NULL;
+}
+
+void px_species_init(px_species *sp)
+{
+    memset(sp, 0, sizeof *sp);
+    sp->dGf = sp->dHf = sp->S = NAN;
+    sp->logk.dH = NAN;
+    sp->Tmin = 0;
+    sp->Tmax = INFINITY;
+}
+
+/* Liquid water: NBS 1982 (Wagman et al. 1982) dfG, dfH, S at 298.15 K as in
+ * shared/reference/gibbs_25C.csv (from memory of the NBS tables). */
+#define H2O_DGF (-237129.0) /* J/mol */
+#define H2O_DHF (-285830.0) /* J/mol */
+#define H2O_S 69.91         /* J/(mol K) */
+
+int px_db_add_builtins(px_db *db)
+{
+    if (!db)
+        return PX_EINVAL;
+    px_species w;
+    px_species_init(&w);
+    strcpy(w.f.text, "H2O(l)");
+    w.model = PX_MODEL_WATER;
+    w.dGf = H2O_DGF;
+    w.dHf = H2O_DHF;
+    w.S = H2O_S;
+    w.Tmin = PX_WATER_TMIN;
+    w.Tmax = PX_WATER_TMAX;
+    strcpy(w.quality, "high");
+    w.source = "dfG, dfH, S: from memory of Wagman et al. 1982 (NBS tables, J. Phys. Chem. "
+               "Ref. Data 11 Suppl. 2); G(T,P) - G(Tr,Pr) from IAPWS-95 (Wagner and Pruss "
+               "2002)";
+    int st = px_db_replace(db, &w);
+    if (st)
+        return st;
+    px_species e;
+    px_species_init(&e);
+    strcpy(e.f.text, "e-");
+    e.model = PX_MODEL_CP; /* not used: the electron is evaluated by convention */
+    e.dGf = 0;
+    e.dHf = 0;
+    e.S = NAN;
+    e.source = "convention: e- = H^+ - 1/2 H2(g) (potentials vs SHE at every T, P)";
+    strcpy(e.quality, "high");
+    return px_db_replace(db, &e);
+}

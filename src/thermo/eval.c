@@ -1,0 +1,667 @@
+/* eval.c - standard Gibbs energies and other properties of every species at
+ * (T, P), and the properties of reactions built from them.
+ *
+ * The caller owns a px_thermo_ws: it caches the water state at the last
+ * (T, P) (one IAPWS-95 density solve and the dielectric constant), the
+ * reference state at 298.15 K, 1 bar, the g-function and the HKF terms
+ * common to all species at both, and the parsed reactions of reaction-
+ * defined species (checked against the record before each use).  The G of
+ * each species is memoised within one call only (dependencies of reaction-
+ * defined species), since a database may be freed between calls.
+ * Evaluating a whole database at a new (T, P) therefore costs one water
+ * solve plus a few arithmetic operations per species.
+ *
+ * Models (species.h): HKF (hkf.c), CP (cpmodel.c), LOGK (a species defined by
+ * its formation reaction: nu_s G_s = -sum_{j != s} nu_j G_j - RT ln10 log K,
+ * resolved recursively in the database with cycle detection), WATER (IAPWS-95
+ * anchored at the NBS 1982 values: G - G_r = [g - g_r] - (S_3rd - s_r)(T - Tr),
+ * g and s molar IAPWS-95 values).  The electron: e- = H^+ - 1/2 H2(g)
+ * (DESIGN.md), so potentials are against the SHE at the same T and P. */
+#include <math.h>
+#include <stdarg.h>
+#include <stdio.h>
+#include <stdlib.h>
+#include <string.h>
+
+#include "core/constants.h"
+#include "core/status.h"
+#include "thermo/thermo.h"
+#include "thermo/thermo_internal.h"
+
+#define MAX_LOGK_DEPTH 16  /* nesting of reaction-defined species */
+#define D2RHO_STEP 0.05    /* K, central difference of drho/dT for g_TT */
+
+/* A LOGK species' reaction, parsed once, with the db index of each species
+ * (-1: the electron, or the species itself). */
+typedef struct logk_cache {
+    char text[PX_NAME_MAX]; /* the species and reaction it was built from: a */
+    char reaction[256];     /* cache entry is used only if both still match */
+    px_reaction r;
+    int self;
+    long idx[PX_REACTION_MAX];
+} logk_cache;
+
+struct px_thermo_ws {
+    px_dielectric_model model;
+    /* reference state (lazy) */
+    int have_ref;
+    px_water_state wr;
+    px_hkf_gfun gr;
+    /* water at the cached (T, P) */
+    int have_w;
+    double wT, wP;
+    px_water_state w;
+    px_hkf_gfun g;
+    int have_common; /* HKF terms shared by all species at (wT, wP) */
+    px__hkf_common hc;
+    /* parsed reactions of LOGK species, per db index (valid for lk_db/lk_gen) */
+    const px_db *lk_db;
+    unsigned long lk_gen;
+    struct logk_cache **lk;
+    size_t lk_n;
+    /* species G memo, valid within one top-level call */
+    const px_db *cdb;
+    unsigned long cgen;
+    double cT, cP;
+    double *Gc;
+    unsigned char *Gok;
+    size_t ccap;
+    /* recursion stack for LOGK species */
+    const px_species *stack[MAX_LOGK_DEPTH];
+    int depth;
+    char err[256];
+};
+
+static int werr(px_thermo_ws *ws, int st, const char *fmt, ...)
+{
+    va_list ap;
+    va_start(ap, fmt);
+    vsnprintf(ws->err, sizeof ws->err, fmt, ap);
+    va_end(ap);
+    return st;
+}
+
+px_thermo_ws *px_thermo_ws_new(px_dielectric_model m)
+{
+    px_thermo_ws *ws = calloc(1, sizeof *ws);
+    if (ws)
+        ws->model = m;
+    return ws;
+}
+
+void px_thermo_ws_free(px_thermo_ws *ws)
+{
+    if (!ws)
+        return;
+    for (size_t i = 0; i < ws->lk_n; i++)
+        free(ws->lk[i]);
+    free(ws->lk);
+    free(ws->Gc);
+    free(ws->Gok);
+    free(ws);
+}
+
+const char *px_thermo_ws_error(const px_thermo_ws *ws) { return ws ? ws->err : ""; }
+
+static int ensure_ref(px_thermo_ws *ws)
+{
+    if (ws->have_ref)
+        return PX_OK;
+    int st = px_water_state_eval(PX_TR, PX_PR, ws->model, &ws->wr);
+    if (st)
+        return werr(ws, st, "water at 298.15 K, 1 bar: %s", px_strerror(st));
+    px_hkf_gfunction(&ws->wr, 0, &ws->gr);
+    ws->have_ref = 1;
+    return PX_OK;
+}
+
+int px_thermo_ws_water(px_thermo_ws *ws, double T, double P, const px_water_state **w)
+{
+    if (!ws || !w)
+        return PX_EINVAL;
+    if (!(isfinite(T) && isfinite(P)))
+        return werr(ws, PX_EINVAL, "non-finite T or P");
+    if (!ws->have_w || ws->wT != T || ws->wP != P) {
+        ws->have_w = 0;
+        ws->have_common = 0;
+        int st = px_water_state_eval(T, P, ws->model, &ws->w);
+        if (st)
+            return werr(ws, st, "water at %.2f K, %.4g bar: %s", T, P, px_strerror(st));
+        px_hkf_gfunction(&ws->w, 0, &ws->g);
+        ws->wT = T;
+        ws->wP = P;
+        ws->have_w = 1;
+    }
+    *w = &ws->w;
+    return PX_OK;
+}
+
+/* d2rho/dT2 at (T, P) by a central difference of drho/dT (the water API has
+ * no second derivative); needed only for Cp through g_TT. */
+static double d2rho_dT2(px_thermo_ws *ws, double T, double P)
+{
+    px_water_state a, b;
+    double h = D2RHO_STEP;
+    double lo = T - h, hi = T + h;
+    if (lo < PX_WATER_TMIN)
+        lo = T;
+    if (hi > PX_WATER_TMAX)
+        hi = T;
+    if (hi == lo)
+        return 0;
+    if (px_water_state_eval(lo, P, ws->model, &a) || px_water_state_eval(hi, P, ws->model, &b))
+        return 0;
+    return (b.drho_dT - a.drho_dT) / (hi - lo);
+}
+
+static int water_pair(px_thermo_ws *ws, double T, double P, const px_water_state **w)
+{
+    int st = ensure_ref(ws);
+    if (st)
+        return st;
+    st = px_thermo_ws_water(ws, T, P, w);
+    if (st)
+        return st;
+    if (!ws->have_common) {
+        px__hkf_common_init(&ws->w, &ws->wr, &ws->g, &ws->gr, &ws->hc);
+        ws->have_common = 1;
+    }
+    return PX_OK;
+}
+
+/* ---- log K models ---- */
+static void logk_reaction(const px_logk_params *lk, double T, double *dG, double *dH,
+                          double *dS, double *dCp)
+{
+    const double RL = PX_R * PX_LN10;
+    if (lk->analytic) {
+        const double *k = lk->k;
+        /* log K = k0 + k1 T + k2/T + k3 log10 T + k4/T^2 */
+        double lg = k[0] + k[1] * T + k[2] / T + k[3] * log10(T) + k[4] / (T * T);
+        double dlg = k[1] - k[2] / (T * T) + k[3] / (T * PX_LN10) - 2 * k[4] / (T * T * T);
+        *dG = -RL * T * lg;
+        *dH = RL * T * T * dlg; /* van 't Hoff: dH = R ln10 T^2 dlogK/dT */
+        *dS = (*dH - *dG) / T;
+        /* dCp = d(dH)/dT, dH = RL (k1 T^2 - k2 + k3 T/ln10 - 2 k4/T) */
+        *dCp = RL * (2 * k[1] * T + k[3] / PX_LN10 + 2 * k[4] / (T * T));
+    } else {
+        double h = isfinite(lk->dH) ? lk->dH : 0.0;
+        /* van 't Hoff with constant dH: log K(T) = log K(Tr) - dH/(R ln10) (1/T - 1/Tr) */
+        double lg = lk->logK25 - h / RL * (1 / T - 1 / PX_TR);
+        *dG = -RL * T * lg;
+        *dH = h;
+        *dS = (h - *dG) / T;
+        *dCp = 0;
+    }
+}
+
+/* ---- per-species evaluation ---- */
+static int species_G(px_thermo_ws *ws, const px_db *db, const px_species *sp, double T,
+                     double P, double *G);
+
+static int cache_prepare(px_thermo_ws *ws, const px_db *db, double T, double P)
+{
+    size_t n = px_db_count(db);
+    if (ws->cdb == db && ws->cgen == px__db_generation(db) && ws->cT == T && ws->cP == P &&
+        ws->ccap >= n)
+        return PX_OK;
+    if (ws->ccap < n) {
+        size_t cap = n < 64 ? 64 : n;
+        double *g = realloc(ws->Gc, cap * sizeof *g);
+        if (!g)
+            return PX_ENOMEM;
+        ws->Gc = g;
+        unsigned char *ok = realloc(ws->Gok, cap);
+        if (!ok)
+            return PX_ENOMEM;
+        ws->Gok = ok;
+        ws->ccap = cap;
+    }
+    memset(ws->Gok, 0, ws->ccap);
+    ws->cdb = db;
+    ws->cgen = px__db_generation(db);
+    ws->cT = T;
+    ws->cP = P;
+    return PX_OK;
+}
+
+static int electron_G(px_thermo_ws *ws, const px_db *db, double T, double P, double *G)
+{
+    const px_species *h2 = px_db_find(db, "H2(g)");
+    if (!h2)
+        return werr(ws, PX_ENOTFOUND,
+                    "e-: the electron convention e- = H^+ - 1/2 H2(g) needs H2(g) in the database");
+    double g;
+    int st = species_G(ws, db, h2, T, P, &g);
+    if (st)
+        return st;
+    /* H^+ + e- = 1/2 H2(g) has dG = 0 at every T, P (the SHE): G(e-) = G(H2)/2 - G(H^+),
+     * and G(H^+) = 0 by the conventional ionic standard state */
+    *G = 0.5 * g;
+    return PX_OK;
+}
+
+static int logk_find_self(px_thermo_ws *ws, const px_species *sp, px_reaction *r, int *self)
+{
+    char msg[256];
+    int st = px_reaction_parse(sp->logk.reaction, r, msg, sizeof msg);
+    if (st)
+        return werr(ws, st, "%s: reaction: %s", sp->f.text, msg);
+    *self = -1;
+    for (int i = 0; i < r->n; i++)
+        if (!strcmp(r->sp[i].text, sp->f.text))
+            *self = i;
+    if (*self < 0)
+        return werr(ws, PX_EDATA, "%s: the species is not in its reaction '%s'", sp->f.text,
+                    sp->logk.reaction);
+    return PX_OK;
+}
+
+static int push(px_thermo_ws *ws, const px_species *sp)
+{
+    for (int i = 0; i < ws->depth; i++)
+        if (ws->stack[i] == sp) {
+            char chain[200] = "";
+            size_t len = 0;
+            for (int j = i; j < ws->depth && len < sizeof chain; j++)
+                len += (size_t)snprintf(chain + len, sizeof chain - len, "%s -> ",
+                                        ws->stack[j]->f.text);
+            return werr(ws, PX_EDATA, "reaction-defined species form a cycle: %s%s", chain,
+                        sp->f.text);
+        }
+    if (ws->depth >= MAX_LOGK_DEPTH)
+        return werr(ws, PX_ELIMIT, "%s: reaction-defined species nested deeper than %d",
+                    sp->f.text, MAX_LOGK_DEPTH);
+    ws->stack[ws->depth++] = sp;
+    return PX_OK;
+}
+
+/* the parsed reaction of a LOGK species, cached per db index when sp is in db */
+static int logk_get(px_thermo_ws *ws, const px_db *db, const px_species *sp, logk_cache *tmp,
+                    const logk_cache **out)
+{
+    long k = db ? px__db_index_of(db, sp) : -1;
+    if (k >= 0) {
+        size_t n = px_db_count(db);
+        if (ws->lk_db != db || ws->lk_gen != px__db_generation(db) || ws->lk_n < n) {
+            for (size_t i = 0; i < ws->lk_n; i++)
+                free(ws->lk[i]);
+            free(ws->lk);
+            ws->lk = calloc(n, sizeof *ws->lk);
+            ws->lk_n = ws->lk ? n : 0;
+            if (!ws->lk)
+                return werr(ws, PX_ENOMEM, "out of memory");
+            ws->lk_db = db;
+            ws->lk_gen = px__db_generation(db);
+        }
+        const logk_cache *c = ws->lk[k];
+        int valid = c && !strcmp(c->text, sp->f.text) && !strcmp(c->reaction, sp->logk.reaction);
+        for (int i = 0; valid && i < c->r.n; i++) /* another db may sit at the same address */
+            if (c->idx[i] >= 0) {
+                const px_species *o = px_db_get(db, (size_t)c->idx[i]);
+                valid = o && !strcmp(o->f.text, c->r.sp[i].text);
+            }
+        if (valid) {
+            *out = c;
+            return PX_OK;
+        }
+        free(ws->lk[k]);
+        ws->lk[k] = NULL;
+    }
+    int st = logk_find_self(ws, sp, &tmp->r, &tmp->self);
+    if (st)
+        return st;
+    snprintf(tmp->text, sizeof tmp->text, "%s", sp->f.text);
+    snprintf(tmp->reaction, sizeof tmp->reaction, "%s", sp->logk.reaction);
+    for (int i = 0; i < tmp->r.n; i++)
+        tmp->idx[i] = (i == tmp->self || tmp->r.sp[i].state == PX_STATE_E || !db)
+                          ? -1
+                          : px_db_index(db, tmp->r.sp[i].text);
+    if (k >= 0) {
+        logk_cache *c = malloc(sizeof *c);
+        if (!c)
+            return werr(ws, PX_ENOMEM, "out of memory");
+        *c = *tmp;
+        ws->lk[k] = c;
+        *out = c;
+    } else {
+        *out = tmp;
+    }
+    return PX_OK;
+}
+
+static int logk_G(px_thermo_ws *ws, const px_db *db, const px_species *sp, double T, double P,
+                  double *G)
+{
+    logk_cache tmp;
+    const logk_cache *lc = NULL;
+    int st = logk_get(ws, db, sp, &tmp, &lc);
+    if (st)
+        return st;
+    st = push(ws, sp);
+    if (st)
+        return st;
+    double sum = 0;
+    for (int i = 0; i < lc->r.n && !st; i++) {
+        if (i == lc->self)
+            continue;
+        double g;
+        if (lc->r.sp[i].state == PX_STATE_E) {
+            st = electron_G(ws, db, T, P, &g);
+        } else {
+            if (lc->idx[i] < 0) {
+                st = werr(ws, PX_ENOTFOUND, "%s: species %s of its reaction is not in the database",
+                          sp->f.text, lc->r.sp[i].text);
+                break;
+            }
+            st = species_G(ws, db, px_db_get(db, (size_t)lc->idx[i]), T, P, &g);
+        }
+        sum += lc->r.nu[i] * g;
+    }
+    ws->depth--;
+    if (st)
+        return st;
+    double dG, dH, dS, dCp;
+    logk_reaction(&sp->logk, T, &dG, &dH, &dS, &dCp);
+    *G = (dG - sum) / lc->r.nu[lc->self];
+    return PX_OK;
+}
+
+static int species_G_nocache(px_thermo_ws *ws, const px_db *db, const px_species *sp,
+                             double T, double P, double *G)
+{
+    int st;
+    const px_water_state *w;
+    if (sp->f.state == PX_STATE_E)
+        return electron_G(ws, db, T, P, G);
+    switch (sp->model) {
+    case PX_MODEL_HKF:
+        if ((st = water_pair(ws, T, P, &w)))
+            return st;
+        st = px__hkf_G_common(&sp->hkf, sp->f.charge, sp->dGf, sp->S, &ws->hc, G);
+        if (st)
+            return werr(ws, st, "%s: HKF G: %s", sp->f.text, px_strerror(st));
+        return PX_OK;
+    case PX_MODEL_CP: {
+        px_thermo_props p;
+        st = px_cp_props(sp, T, P, &p);
+        if (st)
+            return werr(ws, st, "%s: %s", sp->f.text, px_strerror(st));
+        *G = p.G;
+        return PX_OK;
+    }
+    case PX_MODEL_LOGK:
+        return logk_G(ws, db, sp, T, P, G);
+    case PX_MODEL_WATER:
+        if ((st = water_pair(ws, T, P, &w)))
+            return st;
+        *G = sp->dGf + (w->G - ws->wr.G) - (sp->S - ws->wr.S) * (T - PX_TR);
+        return isfinite(*G) ? PX_OK : werr(ws, PX_ENONFINITE, "%s: non-finite G", sp->f.text);
+    }
+    return werr(ws, PX_EDATA, "%s: unknown model", sp->f.text);
+}
+
+static int species_G(px_thermo_ws *ws, const px_db *db, const px_species *sp, double T,
+                     double P, double *G)
+{
+    long i = db ? px__db_index_of(db, sp) : -1;
+    if (i >= 0) {
+        int st = cache_prepare(ws, db, T, P);
+        if (st)
+            return werr(ws, st, "out of memory");
+        if (ws->Gok[i]) {
+            *G = ws->Gc[i];
+            return PX_OK;
+        }
+        st = species_G_nocache(ws, db, sp, T, P, G);
+        if (st)
+            return st;
+        ws->Gc[i] = *G;
+        ws->Gok[i] = 1;
+        return PX_OK;
+    }
+    return species_G_nocache(ws, db, sp, T, P, G);
+}
+
+int px_thermo_species_G(px_thermo_ws *ws, const px_db *db, const px_species *sp, double T,
+                        double P, double *G)
+{
+    if (!ws || !sp || !G)
+        return PX_EINVAL;
+    ws->err[0] = '\0';
+    ws->depth = 0;
+    ws->cdb = NULL; /* the G cache lives for one call (a db may be freed between calls) */
+    if (!(T > 0) || !isfinite(P))
+        return werr(ws, PX_EINVAL, "T and P must be finite and positive");
+    return species_G(ws, db, sp, T, P, G);
+}
+
+int px_thermo_eval_all(px_thermo_ws *ws, const px_db *db, double T, double P, double *G)
+{
+    if (!ws || !db || !G)
+        return PX_EINVAL;
+    ws->err[0] = '\0';
+    ws->depth = 0;
+    ws->cdb = NULL; /* the G cache lives for one call (a db may be freed between calls) */
+    if (!(T > 0) || !isfinite(P))
+        return werr(ws, PX_EINVAL, "T and P must be finite and positive");
+    size_t n = px_db_count(db);
+    for (size_t i = 0; i < n; i++) {
+        int st = species_G(ws, db, px_db_get(db, i), T, P, &G[i]);
+        if (st)
+            return st;
+    }
+    return PX_OK;
+}
+
+/* ---- full properties (not cached) ---- */
+static int species_props(px_thermo_ws *ws, const px_db *db, const px_species *sp, double T,
+                         double P, px_thermo_props *out);
+
+static int electron_props(px_thermo_ws *ws, const px_db *db, double T, double P,
+                          px_thermo_props *out)
+{
+    const px_species *h2 = px_db_find(db, "H2(g)");
+    if (!h2)
+        return werr(ws, PX_ENOTFOUND,
+                    "e-: the electron convention e- = H^+ - 1/2 H2(g) needs H2(g) in the database");
+    px_thermo_props p;
+    int st = species_props(ws, db, h2, T, P, &p);
+    if (st)
+        return st;
+    out->G = 0.5 * p.G; /* as electron_G: X(e-) = X(H2,g)/2 - X(H^+), X(H^+) = 0 */
+    out->H = 0.5 * p.H;
+    out->S = 0.5 * p.S;
+    out->Cp = 0.5 * p.Cp;
+    out->V = 0.5 * p.V;
+    return PX_OK;
+}
+
+static int logk_props(px_thermo_ws *ws, const px_db *db, const px_species *sp, double T,
+                      double P, px_thermo_props *out)
+{
+    px_reaction r;
+    int self = -1;
+    int st = logk_find_self(ws, sp, &r, &self);
+    if (st)
+        return st;
+    st = push(ws, sp);
+    if (st)
+        return st;
+    px_thermo_props sum = {0, 0, 0, 0, 0};
+    for (int i = 0; i < r.n && !st; i++) {
+        if (i == self)
+            continue;
+        px_thermo_props p;
+        if (r.sp[i].state == PX_STATE_E) {
+            st = electron_props(ws, db, T, P, &p);
+        } else {
+            const px_species *o = px_db_find(db, r.sp[i].text);
+            if (!o) {
+                st = werr(ws, PX_ENOTFOUND, "%s: species %s of its reaction is not in the database",
+                          sp->f.text, r.sp[i].text);
+                break;
+            }
+            st = species_props(ws, db, o, T, P, &p);
+        }
+        sum.G += r.nu[i] * p.G;
+        sum.H += r.nu[i] * p.H;
+        sum.S += r.nu[i] * p.S;
+        sum.Cp += r.nu[i] * p.Cp;
+        sum.V += r.nu[i] * p.V;
+    }
+    ws->depth--;
+    if (st)
+        return st;
+    double dG, dH, dS, dCp;
+    logk_reaction(&sp->logk, T, &dG, &dH, &dS, &dCp);
+    double nu = r.nu[self];
+    out->G = (dG - sum.G) / nu;
+    out->H = (dH - sum.H) / nu;
+    out->S = (dS - sum.S) / nu;
+    out->Cp = (dCp - sum.Cp) / nu;
+    out->V = (0.0 - sum.V) / nu; /* log K taken independent of P: dV of reaction = 0 */
+    return PX_OK;
+}
+
+static int species_props(px_thermo_ws *ws, const px_db *db, const px_species *sp, double T,
+                         double P, px_thermo_props *out)
+{
+    int st;
+    const px_water_state *w;
+    if (sp->f.state == PX_STATE_E)
+        return electron_props(ws, db, T, P, out);
+    switch (sp->model) {
+    case PX_MODEL_HKF: {
+        if ((st = water_pair(ws, T, P, &w)))
+            return st;
+        double d2 = ws->g.g != 0 ? d2rho_dT2(ws, T, P) : 0.0;
+        st = px_hkf_props(&sp->hkf, sp->f.charge, sp->dGf, sp->dHf, sp->S, w, &ws->wr, d2, out);
+        return st ? werr(ws, st, "%s: HKF: %s", sp->f.text, px_strerror(st)) : PX_OK;
+    }
+    case PX_MODEL_CP:
+        st = px_cp_props(sp, T, P, out);
+        return st ? werr(ws, st, "%s: %s", sp->f.text, px_strerror(st)) : PX_OK;
+    case PX_MODEL_LOGK:
+        return logk_props(ws, db, sp, T, P, out);
+    case PX_MODEL_WATER:
+        if ((st = water_pair(ws, T, P, &w)))
+            return st;
+        out->G = sp->dGf + (w->G - ws->wr.G) - (sp->S - ws->wr.S) * (T - PX_TR);
+        out->S = w->S + (sp->S - ws->wr.S);
+        out->H = sp->dHf + (w->H - ws->wr.H);
+        out->Cp = w->Cp;
+        out->V = w->V;
+        return PX_OK;
+    }
+    return werr(ws, PX_EDATA, "%s: unknown model", sp->f.text);
+}
+
+int px_thermo_species_props(px_thermo_ws *ws, const px_db *db, const px_species *sp, double T,
+                            double P, px_thermo_props *out)
+{
+    if (!ws || !sp || !out)
+        return PX_EINVAL;
+    ws->err[0] = '\0';
+    ws->depth = 0;
+    ws->cdb = NULL; /* the G cache lives for one call (a db may be freed between calls) */
+    if (!(T > 0) || !isfinite(P))
+        return werr(ws, PX_EINVAL, "T and P must be finite and positive");
+    return species_props(ws, db, sp, T, P, out);
+}
+
+/* ---- reactions ---- */
+static int reaction_species(px_thermo_ws *ws, const px_db *db, const px_formula *f,
+                            const px_species **sp, px_species *tmp)
+{
+    if (f->state == PX_STATE_E) {
+        px_species_init(tmp);
+        tmp->f = *f;
+        *sp = tmp;
+        return PX_OK;
+    }
+    *sp = px_db_find(db, f->text);
+    if (!*sp)
+        return werr(ws, PX_ENOTFOUND, "species %s is not in the database", f->text);
+    return PX_OK;
+}
+
+int px_reaction_logK(px_thermo_ws *ws, const px_db *db, const px_reaction *r, double T,
+                     double P, double *logK)
+{
+    if (!ws || !db || !r || !logK)
+        return PX_EINVAL;
+    ws->err[0] = '\0';
+    ws->depth = 0;
+    ws->cdb = NULL; /* the G cache lives for one call (a db may be freed between calls) */
+    double dG = 0;
+    for (int i = 0; i < r->n; i++) {
+        const px_species *sp;
+        px_species tmp;
+        int st = reaction_species(ws, db, &r->sp[i], &sp, &tmp);
+        double g;
+        if (!st)
+            st = species_G(ws, db, sp, T, P, &g);
+        if (st)
+            return st;
+        dG += r->nu[i] * g;
+    }
+    *logK = -dG / (PX_R * T * PX_LN10);
+    return isfinite(*logK) ? PX_OK : PX_ENONFINITE;
+}
+
+int px_reaction_props(px_thermo_ws *ws, const px_db *db, const px_reaction *r, double T,
+                           double P, px_reaction_result *out)
+{
+    if (!ws || !db || !r || !out)
+        return PX_EINVAL;
+    ws->err[0] = '\0';
+    ws->depth = 0;
+    ws->cdb = NULL; /* the G cache lives for one call (a db may be freed between calls) */
+    px_reaction_result o = {0, 0, 0, 0, 0, 0, 0, NAN};
+    for (int i = 0; i < r->n; i++) {
+        const px_species *sp;
+        px_species tmp;
+        int st = reaction_species(ws, db, &r->sp[i], &sp, &tmp);
+        px_thermo_props p;
+        if (!st)
+            st = species_props(ws, db, sp, T, P, &p);
+        if (st)
+            return st;
+        o.dG += r->nu[i] * p.G;
+        o.dH += r->nu[i] * p.H;
+        o.dS += r->nu[i] * p.S;
+        o.dCp += r->nu[i] * p.Cp;
+        o.dV += r->nu[i] * p.V;
+    }
+    o.logK = -o.dG / (PX_R * T * PX_LN10);
+    o.n_e = px_reaction_electrons(r);
+    if (o.n_e != 0)
+        o.E = -o.dG / (o.n_e * PX_F);
+    if (!isfinite(o.dG) || !isfinite(o.logK))
+        return werr(ws, PX_ENONFINITE, "non-finite reaction Gibbs energy");
+    *out = o;
+    return PX_OK;
+}
+
+int px_thermo_default_pressure(double T, double *P)
+{
+    /* 1 bar while water boils above 1 bar, the saturation pressure above:
+     * P = max(1 bar, psat(T)).  This is the usual "1 bar to 100 C, psat above"
+     * of the HKF tables, except between 99.61 C (psat = 1 bar) and 100 C,
+     * where 1 bar would be steam (psat(100 C) = 1.014 bar); continuous in T. */
+    if (!P || !isfinite(T))
+        return PX_EINVAL;
+    if (T < PX_WATER_TMIN)
+        return PX_ERANGE;
+    if (T <= PX_T0C + 99.0) { /* psat(99 C) = 0.978 bar < 1 bar */
+        *P = PX_PR;
+        return PX_OK;
+    }
+    double ps;
+    int st = px_water_psat(T, &ps);
+    if (st)
+        return st;
+    *P = ps > PX_PR ? ps : PX_PR;
+    return PX_OK;
+}

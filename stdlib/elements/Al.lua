@@ -1,0 +1,129 @@
+-- stdlib/elements/Al.lua: aluminium, its ion, hydrolysis species, oxide and hydroxides.
+-- Data set choice (see docs/data/other-metals.md): Al3+ and corundum from the CODATA key
+-- values (Cox, Wagman and Medvedev 1989); gibbsite and boehmite from Robie and Hemingway
+-- 1995; hydrolysis constants from Baes and Mesmer 1976 written against Al3+, so they keep
+-- their published log K whatever dfG of Al3+ is chosen. All values are recalled, not read,
+-- unless the source says "(read)".
+local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
+local CODATA = "CODATA Key Values for Thermodynamics (Cox, Wagman and Medvedev 1989)"
+local RH95 = "from memory of Robie and Hemingway 1995, Thermodynamic properties of minerals ... at 298.15 K and 1 bar (USGS Bulletin 2131)"
+local K60 = "from memory of Kelley 1960, High-temperature heat-content, heat-capacity and entropy data for the elements and inorganic compounds (US Bureau of Mines Bulletin 584)"
+local BM76 = "from memory of Baes and Mesmer 1976, The Hydrolysis of Cations (I = 0, 25 C)"
+local N90 = "from memory of Nordstrom et al. 1990, Revised chemical equilibrium data for major water-mineral reactions (ACS Symp. Ser. 416)"
+
+return {
+  element = "Al",
+  title = "Aluminium",
+  units = { energy = "kJ", entropy = "J" },
+  species = {
+    {
+      formula = "Al(s)", model = "cp",
+      G = 0, H = 0, S = 28.30,
+      cp = { a = 20.67, b = 12.38e-3, c = 0 },
+      V = 9.999,
+      T_range = { 273.15, 933.47 },
+      source = "S: from memory of " .. CODATA .. "; cp: " .. K60,
+      quality = "high",
+      note = "cp = Kelley's 4.94 + 2.96e-3 T cal/(mol K) times 4.184; gives 24.36 at 298.15 K (NBS Cp 24.35). V from the density 2.699 g/cm3.",
+    },
+    {
+      formula = "Al^3+", model = "hkf",
+      G = -491.507, H = -538.4, S = -325.0,
+      hkf = { a1 = -3.3802, a2 = -17.0104, a3 = 14.5797, a4 = -2.0758,
+              c1 = 10.7, c2 = -8.06, omega = 2.8711 },
+      source = "G, H, S: " .. CODATA .. " (dfH and S read in a CODATA-table reprint; dfG = dfH - T dfS, as in phlox's reference gibbs_25C.csv). HKF parameters: from memory of Shock and Helgeson 1988 (Geochim. Cosmochim. Acta 52, 2009), as in phlox's reference hkf/hkf_parameters.csv",
+      quality = "medium",
+      note = "G/H/S high (key value). HKF parameters LOW: they reproduce the published Cp (-32.5 cal/(mol K)) but give V = -44.66 vs the weakly recalled -45.3 cm3/mol; Shock et al. 1997 may have revised them. NBS 1982 gives dfG -485.0, dfH -531, S -321.7; the 6.5 kJ/mol spread matters for Al solubility (see docs/data/other-metals.md).",
+    },
+    {
+      formula = "AlOH^2+", model = "logk",
+      reaction = "Al^3+ + H2O(l) = AlOH^2+ + H^+",
+      logK = -4.97, dH = 48.07,
+      source = "logK: " .. BM76 .. " (also in the Wikipedia table 'Hydrolysis constant', read); dH: " .. N90 .. " (11.49 kcal/mol)",
+      quality = "high",
+      note = "Brown and Ekberg 2016 give -4.98 +- 0.02. Nordstrom et al. list log K -5.00 with this dH.",
+    },
+    {
+      formula = "Al(OH)2^+", model = "logk",
+      reaction = "Al^3+ + 2 H2O(l) = Al(OH)2^+ + 2 H^+",
+      logK = -9.3,
+      source = BM76,
+      quality = "medium",
+      note = "no reaction enthalpy recalled; Nordstrom et al. 1990 use -10.1 (spread reflects the difficulty of measuring the intermediate species).",
+    },
+    {
+      formula = "Al(OH)3(aq)", model = "logk",
+      reaction = "Al^3+ + 3 H2O(l) = Al(OH)3(aq) + 3 H^+",
+      logK = -15.0,
+      source = BM76,
+      quality = "low",
+      note = "B&M give this constant with a large uncertainty; Nordstrom et al. 1990 use -16.9. No reaction enthalpy recalled.",
+    },
+    {
+      formula = "Al(OH)4^-", model = "logk",
+      reaction = "Al^3+ + 4 H2O(l) = Al(OH)4^- + 4 H^+",
+      logK = -23.0, dH = 176.98,
+      source = "logK: " .. BM76 .. "; dH: " .. N90 .. " (42.30 kcal/mol)",
+      quality = "high",
+      note = "Brown and Ekberg 2016: -22.91 +- 0.10 (read, Wikipedia 'Hydrolysis constant'); Nordstrom et al. 1990: -22.7. NBS 1982 dfG(Al(OH)4-) = -1305.3 kJ/mol is consistent with NBS Al3+ (-485.0), not with the CODATA Al3+ used here.",
+    },
+    {
+      formula = "Al2(OH)2^4+", model = "logk",
+      reaction = "2 Al^3+ + 2 H2O(l) = Al2(OH)2^4+ + 2 H^+",
+      logK = -7.7,
+      source = BM76,
+      quality = "medium",
+    },
+    {
+      formula = "Al3(OH)4^5+", model = "logk",
+      reaction = "3 Al^3+ + 4 H2O(l) = Al3(OH)4^5+ + 4 H^+",
+      logK = -13.94,
+      source = BM76,
+      quality = "medium",
+    },
+    {
+      formula = "Al13O4(OH)24^7+", model = "logk",
+      reaction = "13 Al^3+ + 28 H2O(l) = Al13O4(OH)24^7+ + 32 H^+",
+      logK = -98.73,
+      source = BM76,
+      quality = "medium",
+      note = "the Keggin-type tridecamer; forms slowly on partial neutralisation of concentrated Al solutions.",
+    },
+    {
+      formula = "Al2O3(s,corundum)", model = "cp",
+      G = -1582.257, H = -1675.7, S = 50.92,
+      cp = { a = 114.77, b = 12.80e-3, c = -3.5438e6 },
+      V = 25.575,
+      T_range = { 298.15, 1800 },
+      source = "G, H, S: " .. CODATA .. " (dfH and S read in a CODATA-table reprint; NBS 1982 has the same values); cp: " .. K60 .. "; V: " .. RH95,
+      quality = "high",
+      note = "cp = Kelley's 27.43 + 3.06e-3 T - 8.47e5/T^2 cal/(mol K) times 4.184; gives 78.72 at 298.15 K (NBS Cp 79.04).",
+    },
+    {
+      formula = "Al(OH)3(s,gibbsite)", model = "cp",
+      G = -1154.9, H = -1293.1, S = 68.44,
+      cp = { a = 91.7, b = 0, c = 0 },
+      V = 31.956,
+      source = RH95,
+      quality = "medium",
+      note = "cp is Cp at 298.15 K taken as constant (R&H give a polynomial that is not recalled). Gibbsite solubility: this G with CODATA Al3+ gives log K(Al(OH)3 + 3 H+ = Al3+ + 3 H2O) = 8.41; Nordstrom et al. 1990 use 8.11 and Palmer and Wesolowski 1992 7.74 (both recalled).",
+    },
+    {
+      formula = "AlO(OH)(s,boehmite)", model = "cp",
+      G = -918.4, H = -996.4, S = 37.19,
+      cp = { a = 65.6, b = 0, c = 0 },
+      V = 19.535,
+      source = RH95 .. " (values of Hemingway, Robie and Apps 1991)",
+      quality = "low",
+      note = "Cp at 298.15 K recalled weakly, taken as constant. With these values boehmite + water is 0.6 kJ/mol below gibbsite at 25 C, inside the combined uncertainty (about 2 kJ/mol); in nature gibbsite is the stable phase at 25 C. Exclude boehmite for 25 C diagrams if gibbsite is wanted.",
+    },
+    {
+      formula = "Al(OH)3(am)", model = "logk",
+      reaction = "Al^3+ + 3 H2O(l) = Al(OH)3(am) + 3 H^+",
+      logK = -10.8, dH = 110.88,
+      source = N90 .. " (dissolution log K 10.8, dH -26.5 kcal/mol, reversed here)",
+      quality = "low",
+      note = "amorphous, freshly precipitated hydroxide; solubility depends on age and particle size.",
+    },
+  },
+}

@@ -1,0 +1,183 @@
+-- stdlib/elements/C.lua: carbon. Inorganic carbon (CO2, HCO3^-, CO3^2-),
+-- methane, carbon monoxide and graphite; carbonate and bicarbonate complexes of
+-- the metals; carbonate minerals.
+--
+-- Data sets: CO2(aq), HCO3^- and CO3^2- carry the revised-HKF parameters of
+-- Shock and Helgeson 1988 / Shock, Helgeson and Sverjensky 1989 (as recalled in
+-- the project reference table shared/reference/hkf). Gases: CODATA 1989 key
+-- values where there is one, NBS 1982 otherwise. Calcite, aragonite and the
+-- Ca-carbonate ion pairs use the analytic log K(T) of Plummer and Busenberg 1982
+-- (valid 0-90 C). Other minerals: NBS 1982 or Robie and Hemingway 1995.
+-- Complexes: I = 0, 25 C. Nearly every number was recalled, not read.
+
+local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
+local NBS_DERIVED = "derived here from dfG and dfH of " .. NBS
+local CODATA = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values for Thermodynamics (dfH, S; dfG derived here as dfH - T dfS)"
+local SH88 = "from memory of Shock and Helgeson 1988 (Geochim. Cosmochim. Acta 52:2009), ion tables (table no. not recalled); as in the project reference table shared/reference/hkf/hkf_parameters.csv"
+local SHS89 = "from memory of Shock, Helgeson and Sverjensky 1989 (Geochim. Cosmochim. Acta 53:2157), neutral species (table no. not recalled); as in the project reference table shared/reference/hkf/hkf_parameters.csv"
+local KELLEY = "Cp: from memory of Kelley 1960 (U.S. Bur. Mines Bull. 584), Maier-Kelley coefficients in cal converted x 4.184"
+local HDNB = "Cp: from memory of Helgeson, Delany, Nesbitt and Bird 1978 (Am. J. Sci. 278-A), Maier-Kelley coefficients in cal converted x 4.184"
+local RH95 = "from memory of Robie and Hemingway 1995 (U.S. Geol. Surv. Bull. 2131)"
+local PB82 = "Plummer and Busenberg 1982 (Geochim. Cosmochim. Acta 46:1011), analytic log K(T), 0-90 C; coefficients from memory (they reproduce the published 25 C values)"
+local N90 = "from memory of Nordstrom, Plummer, Langmuir, Busenberg, May, Jones and Parkhurst 1990 (ACS Symp. Ser. 416, 398-413)"
+local SIEBERT = "from memory of Siebert and Hostetler 1977 (Am. J. Sci. 277:697) as adopted by Nordstrom et al. 1990 (ACS Symp. Ser. 416)"
+local COMPILED = "from memory of the I = 0 constants compiled from Smith and Martell (Critical Stability Constants) in Nordstrom et al. 1990-era aqueous data sets; attribution to the primary paper not recalled"
+local SM = "from memory of Smith and Martell, Critical Stability Constants (I = 0, 25 C)"
+local CAL = { energy = "cal", entropy = "cal" }
+local KCAL = { energy = "kcal" }
+
+return {
+  element = "C",
+  title = "Carbon",
+  units = { energy = "kJ", entropy = "J" },
+  species = {
+    -- ---------------------------------------------------------------- inorganic carbon
+    {
+      formula = "CO2(aq)", model = "hkf", units = CAL,
+      G = -92250, H = -98900, S = 28.1,
+      hkf = { a1 = 6.2466, a2 = 7.4698, a3 = 2.8, a4 = -3.0879, c1 = 40.0, c2 = 8.8, omega = -0.02 },
+      source = SHS89, quality = "high",
+      note = "published Cp 58.1 cal/(mol K), V 32.8 cm3/mol; a3 printed to one decimal in the source as recalled",
+    },
+    {
+      formula = "HCO3^-", model = "hkf", units = CAL,
+      G = -140282, H = -164898, S = 23.53,
+      hkf = { a1 = 7.5621, a2 = 1.1505, a3 = 1.2346, a4 = -2.8266, c1 = 12.9395, c2 = -4.7579, omega = 1.2733 },
+      source = SH88, quality = "high",
+      note = "log K(CO2(aq) + H2O = HCO3^- + H^+) from these dfG: -6.34 (Plummer and Busenberg 1982: -6.352)",
+    },
+    {
+      formula = "CO3^2-", model = "hkf", units = CAL,
+      G = -126191, H = -161385, S = -11.95,
+      hkf = { a1 = 2.8524, a2 = -3.9844, a3 = 6.4142, a4 = -2.6143, c1 = -3.3206, c2 = -17.1917, omega = 3.3914 },
+      source = SH88, quality = "high",
+      note = "published V not checked (recall offered -6.06 and -5.02 cm3/mol); log K2 from these dfG -10.33 (Plummer and Busenberg 1982: -10.329)",
+    },
+    {
+      formula = "CO2(g)", model = "cp",
+      G = -394.373, H = -393.51, S = 213.785,
+      cp = { a = 44.225, b = 8.786e-3, c = -8.619e5 },
+      source = CODATA .. "; " .. KELLEY .. " (10.57 + 2.10e-3 T - 2.06e5/T^2 cal)",
+      quality = "high",
+      note = "Henry constant with CO2(aq) above: log K = -1.471 (Plummer and Busenberg 1982: -1.468)",
+    },
+    {
+      formula = "CO(g)", model = "cp",
+      G = -137.168, H = -110.53, S = 197.660,
+      cp = { a = 28.409, b = 4.100e-3, c = -0.460e5 },
+      source = CODATA .. "; " .. KELLEY .. " (6.79 + 0.98e-3 T - 0.11e5/T^2 cal)",
+      quality = "high",
+    },
+    {
+      formula = "CH4(g)", model = "cp",
+      G = -50.72, H = -74.81, S = 186.264,
+      cp = { a = 23.640, b = 47.865e-3, c = -1.925e5 },
+      source = NBS .. "; " .. KELLEY .. " (5.65 + 11.44e-3 T - 0.46e5/T^2 cal)",
+      quality = "high",
+      note = "the Cp fit gives 35.75 J/(mol K) at 298.15 K vs NBS 35.31 (1.2 % high; fit made for 298-1500 K)",
+    },
+    {
+      formula = "CH4(aq)", model = "logk",
+      reaction = "CH4(g) = CH4(aq)", logK = -2.871, dH = -14.23,
+      source = NBS_DERIVED .. " CH4(aq) (-34.33, -89.04; S 83.7) and CH4(g)",
+      quality = "medium",
+      note = "Henry constant about 1.35e-3 mol/(kg bar); methane is reduced far below its equilibrium with CO2 only by microbes: a diagram shows CH4 fields that abiotic water rarely reaches",
+    },
+    {
+      formula = "C(s,graphite)", model = "cp",
+      G = 0, H = 0, S = 5.74,
+      cp = { a = 16.862, b = 4.770e-3, c = -8.535e5 },
+      source = "S from memory of Cox, Wagman and Medvedev 1989 (CODATA); " .. KELLEY .. " (4.03 + 1.14e-3 T - 2.04e5/T^2 cal)",
+      quality = "high",
+      note = "the Cp fit gives 8.68 J/(mol K) at 298.15 K vs NBS 8.517 (2 % high)",
+    },
+
+    -- ---------------------------------------------------------------- carbonate and bicarbonate complexes
+    { formula = "CaHCO3^+", model = "logk", reaction = "Ca^2+ + HCO3^- = CaHCO3^+",
+      logK = 1.106, logK_T = { 1209.120, 0.31294, -34765.05, -478.782, 0 }, T_range = { 273.15, 363.15 },
+      source = PB82, quality = "high" },
+    { formula = "CaCO3(aq)", model = "logk", reaction = "Ca^2+ + CO3^2- = CaCO3(aq)",
+      logK = 3.224, logK_T = { -1228.732, -0.299440, 35512.75, 485.818, 0 }, T_range = { 273.15, 363.15 },
+      source = PB82, quality = "high", note = "stated 3.22 +- 0.14" },
+    { formula = "MgHCO3^+", model = "logk", reaction = "Mg^2+ + HCO3^- = MgHCO3^+",
+      logK = 1.07, logK_T = { -59.215, 0, 2537.455, 20.92298, 0 }, T_range = { 273.15, 363.15 },
+      source = SIEBERT, quality = "medium", note = "dH 0.79 kcal/mol at 25 C" },
+    { formula = "MgCO3(aq)", model = "logk", reaction = "Mg^2+ + CO3^2- = MgCO3(aq)",
+      logK = 2.98, logK_T = { 0.9910, 0.00667, 0, 0, 0 }, T_range = { 273.15, 363.15 },
+      source = SIEBERT, quality = "medium", note = "dH 2.713 kcal/mol at 25 C" },
+    { formula = "NaCO3^-", model = "logk", reaction = "Na^+ + CO3^2- = NaCO3^-", logK = 1.27, dH = 8.91, units = KCAL,
+      source = N90, quality = "medium" },
+    { formula = "NaHCO3(aq)", model = "logk", reaction = "Na^+ + HCO3^- = NaHCO3(aq)", logK = -0.25,
+      source = N90, quality = "medium", note = "dH not recalled" },
+    { formula = "FeHCO3^+", model = "logk", reaction = "Fe^2+ + HCO3^- = FeHCO3^+", logK = 2.0,
+      source = COMPILED, quality = "low", note = "dH not recalled" },
+    { formula = "MnHCO3^+", model = "logk", reaction = "Mn^2+ + HCO3^- = MnHCO3^+", logK = 1.95,
+      source = COMPILED, quality = "low", note = "dH not recalled" },
+    { formula = "ZnCO3(aq)", model = "logk", reaction = "Zn^2+ + CO3^2- = ZnCO3(aq)", logK = 5.3,
+      source = COMPILED, quality = "low", note = "dH not recalled" },
+    { formula = "ZnHCO3^+", model = "logk", reaction = "Zn^2+ + HCO3^- = ZnHCO3^+", logK = 2.1,
+      source = COMPILED, quality = "low", note = "dH not recalled" },
+    { formula = "CuCO3(aq)", model = "logk", reaction = "Cu^2+ + CO3^2- = CuCO3(aq)", logK = 6.73,
+      source = SM, quality = "medium", note = "dH not recalled" },
+    { formula = "Cu(CO3)2^2-", model = "logk", reaction = "Cu^2+ + 2 CO3^2- = Cu(CO3)2^2-", logK = 9.83,
+      source = SM, quality = "medium", note = "dH not recalled" },
+    { formula = "PbCO3(aq)", model = "logk", reaction = "Pb^2+ + CO3^2- = PbCO3(aq)", logK = 7.24,
+      source = COMPILED, quality = "low", note = "dH not recalled" },
+    { formula = "Pb(CO3)2^2-", model = "logk", reaction = "Pb^2+ + 2 CO3^2- = Pb(CO3)2^2-", logK = 10.64,
+      source = COMPILED, quality = "low", note = "dH not recalled" },
+
+    -- ---------------------------------------------------------------- carbonate minerals
+    { formula = "CaCO3(s,calcite)", model = "logk", reaction = "CaCO3(s,calcite) = Ca^2+ + CO3^2-",
+      logK = -8.480, logK_T = { -171.9065, -0.077993, 2839.319, 71.595, 0 }, T_range = { 273.15, 363.15 }, V = 36.934,
+      source = PB82 .. "; V " .. RH95, quality = "high",
+      note = "stated -8.480 +- 0.020; defined by log K so that it is consistent with whichever Ca^2+ data the Ca file carries. Beyond 90 C the equation is an extrapolation" },
+    { formula = "CaCO3(s,aragonite)", model = "logk", reaction = "CaCO3(s,aragonite) = Ca^2+ + CO3^2-",
+      logK = -8.336, logK_T = { -171.9773, -0.077993, 2903.293, 71.595, 0 }, T_range = { 273.15, 363.15 }, V = 34.15,
+      source = PB82 .. "; V " .. RH95, quality = "high" },
+    { formula = "CaMg(CO3)2(s,dolomite)", model = "logk", reaction = "CaMg(CO3)2(s,dolomite) = Ca^2+ + Mg^2+ + 2 CO3^2-",
+      logK = -17.09, dH = -9.436, units = KCAL, V = 64.34,
+      source = N90 .. " (ordered dolomite); V " .. RH95, quality = "medium",
+      note = "disordered dolomite about -16.54; dolomite does not precipitate at 25 C on human time scales" },
+    {
+      formula = "MgCO3(s,magnesite)", model = "cp",
+      G = -1029.48, H = -1113.28, S = 65.09,
+      cp = { a = 82.554, b = 52.463e-3, c = -19.866e5 }, V = 28.018,
+      source = RH95 .. "; " .. HDNB .. " (19.731 + 12.539e-3 T - 4.748e5/T^2 cal)", quality = "medium",
+      note = "NBS 1982 magnesite (-1012.1 kJ/mol) is known to be too positive and is not used; log Ksp with NBS ions -8.21, with CODATA ions -8.10 (literature -8.0 to -8.1)",
+    },
+    { formula = "FeCO3(s,siderite)", model = "logk", reaction = "FeCO3(s,siderite) = Fe^2+ + CO3^2-",
+      logK = -10.89, dH = -2.48, units = KCAL, V = 29.378,
+      source = N90 .. " (after Bruno et al. 1992); V " .. RH95, quality = "medium",
+      note = "Smith and Martell give -10.68 (Harris App. F); precipitated siderite about -10.45. Defined by log K because dfG(Fe^2+) differs between data sets by 12 kJ/mol (docs/data/ligands.md)" },
+    {
+      formula = "MnCO3(s,rhodochrosite)", model = "cp",
+      G = -816.7, H = -894.1, S = 85.8, cp = { a = 81.5 }, V = 31.075,
+      source = NBS .. "; V " .. RH95, quality = "medium",
+      note = "log Ksp with NBS ions -10.65; literature -10.4 to -11.13 (Nordstrom et al. 1990 list -11.13): uncertain by about 0.5; Cp held at its 25 C value",
+    },
+    {
+      formula = "ZnCO3(s,smithsonite)", model = "cp",
+      G = -731.52, H = -812.78, S = 82.4, cp = { a = 79.71 }, V = 28.275,
+      source = NBS .. "; V " .. RH95, quality = "medium",
+      note = "log Ksp with NBS ions -9.93 (Smith and Martell -10.00); Cp held at its 25 C value",
+    },
+    {
+      formula = "CdCO3(s,otavite)", model = "cp",
+      G = -669.4, H = -750.6, S = 92.5, V = 34.30,
+      source = NBS .. "; V " .. RH95, quality = "low",
+      note = "log Ksp with NBS ions -11.21; Stipp et al. 1992 measured about -12.1 (recalled): NBS value probably too positive. Cp not recalled",
+    },
+    {
+      formula = "PbCO3(s,cerussite)", model = "cp",
+      G = -625.5, H = -699.1, S = 131.0, cp = { a = 87.4 }, V = 40.59,
+      source = NBS .. "; V " .. RH95, quality = "medium",
+      note = "log Ksp with NBS ions -12.83; literature about -13.13 (recalled); Cp held at its 25 C value",
+    },
+    {
+      formula = "Cu2CO3(OH)2(s,malachite)", model = "cp",
+      G = -893.6, H = -1051.4, S = 186.2, V = 54.86,
+      source = NBS .. "; V " .. RH95, quality = "medium",
+      note = "Cp not recalled (loader takes 0; use near 25 C only); azurite left out (values not recalled consistently)",
+    },
+  },
+}

@@ -1,0 +1,85 @@
+-- stdlib/elements/Cd.lua: cadmium, Cd2+, its hydrolysis species, CdO and Cd(OH)2.
+-- Data set choice (see docs/data/other-metals.md): Cd2+ and CdO from the CODATA key
+-- values (Cox, Wagman and Medvedev 1989); Cd(OH)2 from the NBS tables (NBS and CODATA
+-- agree on Cd2+ and CdO within 0.12 kJ/mol). Hydrolysis from Baes and Mesmer 1976.
+-- No complete HKF set is recalled for Cd2+, so it is defined by its conventional
+-- formation reaction (log K = -dfG/(RT ln 10), dH = dfH).
+local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
+local CODATA = "CODATA Key Values for Thermodynamics (Cox, Wagman and Medvedev 1989)"
+local BM76 = "from memory of Baes and Mesmer 1976, The Hydrolysis of Cations (I = 0, 25 C)"
+
+return {
+  element = "Cd",
+  title = "Cadmium",
+  units = { energy = "kJ", entropy = "J" },
+  species = {
+    {
+      formula = "Cd(s)", model = "cp",
+      G = 0, H = 0, S = 51.80,
+      cp = { a = 25.98, b = 0, c = 0 },
+      V = 13.00,
+      T_range = { 273.15, 594.22 },
+      source = "S: from memory of " .. CODATA .. " (NBS 51.76); Cp: " .. NBS,
+      quality = "high",
+      note = "cp is NBS Cp at 298.15 K taken as constant. Melts at 594.22 K. V from the density 8.65 g/cm3.",
+    },
+    {
+      formula = "Cd^2+", model = "logk",
+      reaction = "Cd(s) + 2 H^+ = Cd^2+ + H2(g)",
+      logK = 13.618, dH = -75.92,
+      source = "derived here from " .. CODATA .. ": dfH -75.92 kJ/mol and S -72.8 J/(mol K) read in a CODATA-table reprint, dfG -77.733 derived (phlox's reference gibbs_25C.csv)",
+      quality = "high",
+      note = "conventional formation reaction, log K = 77.733/5.70801. Van 't Hoff with constant dH approximates Cp(Cd2+) by Cp(Cd) - Cp(H2): fair near 25 C only. NBS 1982: dfG -77.612, dfH -75.90, S -73.2.",
+    },
+    {
+      formula = "CdOH^+", model = "logk",
+      reaction = "Cd^2+ + H2O(l) = CdOH^+ + H^+",
+      logK = -10.08,
+      source = BM76, quality = "medium",
+    },
+    {
+      formula = "Cd(OH)2(aq)", model = "logk",
+      reaction = "Cd^2+ + 2 H2O(l) = Cd(OH)2(aq) + 2 H^+",
+      logK = -20.35,
+      source = BM76, quality = "medium",
+    },
+    {
+      formula = "Cd(OH)3^-", model = "logk",
+      reaction = "Cd^2+ + 3 H2O(l) = Cd(OH)3^- + 3 H^+",
+      logK = -33.3,
+      source = BM76, quality = "medium",
+    },
+    {
+      formula = "Cd(OH)4^2-", model = "logk",
+      reaction = "Cd^2+ + 4 H2O(l) = Cd(OH)4^2- + 4 H^+",
+      logK = -47.35,
+      source = BM76, quality = "medium",
+    },
+    {
+      formula = "Cd2OH^3+", model = "logk",
+      reaction = "2 Cd^2+ + H2O(l) = Cd2OH^3+ + H^+",
+      logK = -9.39,
+      source = BM76, quality = "medium",
+    },
+    {
+      formula = "Cd4(OH)4^4+", model = "logk",
+      reaction = "4 Cd^2+ + 4 H2O(l) = Cd4(OH)4^4+ + 4 H^+",
+      logK = -32.85,
+      source = BM76, quality = "medium",
+    },
+    {
+      formula = "CdO(s,monteponite)", model = "cp",
+      G = -228.66, H = -258.35, S = 54.8,
+      cp = { a = 43.43, b = 0, c = 0 },
+      source = "dfH and S from memory of " .. CODATA .. ", dfG derived here (dfH - T dfS, CODATA element entropies); Cp: " .. NBS,
+      quality = "high",
+      note = "cp is NBS Cp at 298.15 K taken as constant. NBS 1982: dfG -228.7, dfH -258.2, S 54.8.",
+    },
+    {
+      formula = "Cd(OH)2(s)", model = "cp",
+      G = -473.6, H = -560.7, S = 96,
+      source = NBS, quality = "medium",
+      note = "precipitated (beta) Cd(OH)2. No heat capacity recalled: cp omitted, the loader takes Cp = 0 and warns, so use near 25 C only. Gives log K(Cd(OH)2 + 2 H+ = Cd2+ + 2 H2O) = 13.73 with CODATA Cd2+ (Baes and Mesmer: 13.65, recalled).",
+    },
+  },
+}

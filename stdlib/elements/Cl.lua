@@ -1,0 +1,192 @@
+-- stdlib/elements/Cl.lua: chlorine. Chloride and the chlorine oxidation states
+-- (Cl2, hypochlorite, chlorite, chlorate, perchlorate), chloro complexes of the
+-- metals and the common chloride salts.
+--
+-- Data sets: Cl^- carries the revised-HKF parameters of Shock and Helgeson 1988
+-- (as recalled in the project's reference table shared/reference/hkf). The
+-- oxychlorine species are written as reactions whose log K and dH are derived
+-- here from NBS 1982 dfG/dfH (the arithmetic is in docs/data/ligands.md).
+-- Chloro complexes: stability constants at I = 0, 25 C. Almost every value was
+-- recalled, not read: "from memory of" says so. docs/data/ligands.md lists what
+-- was left out and the known disagreements.
+
+local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
+local NBS_DERIVED = "derived here from dfG and dfH of " .. NBS
+local CODATA = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values for Thermodynamics"
+local SH88 = "from memory of Shock and Helgeson 1988 (Geochim. Cosmochim. Acta 52:2009), ion tables (table no. not recalled); as in the project reference table shared/reference/hkf/hkf_parameters.csv"
+local KELLEY = "Cp: from memory of Kelley 1960 (U.S. Bur. Mines Bull. 584), Maier-Kelley coefficients in cal converted x 4.184"
+local N90 = "from memory of Nordstrom, Plummer, Langmuir, Busenberg, May, Jones and Parkhurst 1990 (ACS Symp. Ser. 416, 398-413)"
+local COMPILED = "from memory of the I = 0 constants compiled from Smith and Martell (Critical Stability Constants) in Nordstrom et al. 1990-era aqueous data sets; attribution to the primary paper not recalled"
+local SM = "from memory of Smith and Martell, Critical Stability Constants (I = 0, 25 C)"
+local CAL = { energy = "cal", entropy = "cal" }
+local KCAL = { energy = "kcal" }
+
+return {
+  element = "Cl",
+  title = "Chlorine",
+  units = { energy = "kJ", entropy = "J" },
+  species = {
+    -- ---------------------------------------------------------------- own species
+    {
+      formula = "Cl^-", model = "hkf", units = CAL,
+      G = -31379, H = -39933, S = 13.56,
+      hkf = { a1 = 4.032, a2 = 4.801, a3 = 5.563, a4 = -2.847, c1 = -4.40, c2 = -5.714, omega = 1.456 },
+      source = SH88, quality = "high",
+      note = "regressed on experimental data in SH88; published Cp 25 C -29.44 cal/(mol K), V 17.79 cm3/mol",
+    },
+    {
+      formula = "Cl2(g)", model = "cp",
+      G = 0, H = 0, S = 223.081,
+      cp = { a = 37.028, b = 0.669e-3, c = -2.845e5 },
+      T_range = { 273.15, 1500 },
+      source = CODATA .. " (S); " .. KELLEY .. " (8.85 + 0.16e-3 T - 0.68e5/T^2 cal)",
+      quality = "high",
+      note = "Cp(298.15) from the fit 34.03 J/(mol K) vs NBS 33.907",
+    },
+    {
+      formula = "Cl2(aq)", model = "logk",
+      reaction = "Cl2(g) = Cl2(aq)", logK = -1.216, dH = -23.4,
+      source = NBS_DERIVED .. " Cl2(aq) (6.94, -23.4 kJ/mol; S 121 J/(mol K))",
+      quality = "medium",
+      note = "Henry constant about 0.061 mol/(kg bar); Cl2(aq) hydrolyses to HClO + Cl^- + H^+ (log K about -3.4)",
+    },
+    {
+      formula = "ClO^-", model = "logk",
+      reaction = "Cl^- + 0.5 O2(g) = ClO^-", logK = -16.543, dH = 60.06,
+      source = NBS_DERIVED .. " ClO^- (-36.8, -107.1) and Cl^- (-131.228, -167.159)",
+      quality = "medium",
+    },
+    {
+      formula = "HClO(aq)", model = "logk",
+      reaction = "ClO^- + H^+ = HClO(aq)", logK = 7.537, dH = -13.8,
+      source = "log K from memory of Morris 1966 (J. Phys. Chem. 70:3798), pKa 7.537 at 25 C; dH " .. NBS_DERIVED .. " HClO(aq) (-120.9) and ClO^- (-107.1)",
+      quality = "high",
+      note = "NBS dfG values give log K 7.551",
+    },
+    {
+      formula = "ClO2^-", model = "logk",
+      reaction = "Cl^- + O2(g) = ClO2^-", logK = -26.003, dH = 100.66,
+      source = NBS_DERIVED .. " ClO2^- (17.2, -66.5; S 101.3) and Cl^-",
+      quality = "medium",
+    },
+    {
+      formula = "HClO2(aq)", model = "logk",
+      reaction = "ClO2^- + H^+ = HClO2(aq)", logK = 1.980, dH = 14.6,
+      source = NBS_DERIVED .. " HClO2(aq) (5.9, -51.9; S 188.3) and ClO2^-",
+      quality = "medium",
+      note = "pKa of chlorous acid in the literature about 1.96",
+    },
+    {
+      formula = "ClO3^-", model = "logk",
+      reaction = "Cl^- + 1.5 O2(g) = ClO3^-", logK = -21.597, dH = 63.19,
+      source = NBS_DERIVED .. " ClO3^- (-7.95, -103.97; S 162.3) and Cl^-",
+      quality = "medium",
+    },
+    {
+      formula = "ClO4^-", model = "logk",
+      reaction = "Cl^- + 2 O2(g) = ClO4^-", logK = -21.498, dH = 37.83,
+      source = NBS_DERIVED .. " ClO4^- (-8.52, -129.33; S 182.0) and Cl^-",
+      quality = "medium",
+      note = "perchlorate is kinetically inert: its field on a diagram is reached only electrochemically",
+    },
+
+    -- ---------------------------------------------------------------- chloro complexes (log K of the formation reaction, I = 0, 25 C)
+    { formula = "FeCl^+", model = "logk", reaction = "Fe^2+ + Cl^- = FeCl^+", logK = 0.14,
+      source = N90, quality = "low", note = "weak ion pair; dH not recalled" },
+    { formula = "FeCl^2+", model = "logk", reaction = "Fe^3+ + Cl^- = FeCl^2+", logK = 1.48, dH = 5.6, units = KCAL,
+      source = N90, quality = "medium" },
+    { formula = "FeCl2^+", model = "logk", reaction = "Fe^3+ + 2 Cl^- = FeCl2^+", logK = 2.13,
+      source = N90, quality = "low", note = "dH not recalled" },
+    { formula = "FeCl3(aq)", model = "logk", reaction = "Fe^3+ + 3 Cl^- = FeCl3(aq)", logK = 1.13,
+      source = N90, quality = "low", note = "dH not recalled" },
+
+    { formula = "CuCl^+", model = "logk", reaction = "Cu^2+ + Cl^- = CuCl^+", logK = 0.43, dH = 8.65, units = KCAL,
+      source = COMPILED, quality = "low" },
+    { formula = "CuCl2(aq)", model = "logk", reaction = "Cu^2+ + 2 Cl^- = CuCl2(aq)", logK = 0.16, dH = 10.56, units = KCAL,
+      source = COMPILED, quality = "low" },
+    { formula = "CuCl3^-", model = "logk", reaction = "Cu^2+ + 3 Cl^- = CuCl3^-", logK = -2.29, dH = 13.69, units = KCAL,
+      source = COMPILED, quality = "low" },
+    { formula = "CuCl4^2-", model = "logk", reaction = "Cu^2+ + 4 Cl^- = CuCl4^2-", logK = -4.59, dH = 17.78, units = KCAL,
+      source = COMPILED, quality = "low" },
+    { formula = "CuCl2^-", model = "logk", reaction = "Cu^+ + 2 Cl^- = CuCl2^-", logK = 5.50, dH = -0.42, units = KCAL,
+      source = SM .. "; dH " .. COMPILED, quality = "medium",
+      note = "the dominant Cu(I) species in chloride brines; CuCl(aq) left out (beta1 not recalled with confidence)" },
+    { formula = "CuCl3^2-", model = "logk", reaction = "Cu^+ + 3 Cl^- = CuCl3^2-", logK = 5.70, dH = 0.26, units = KCAL,
+      source = SM .. "; dH " .. COMPILED, quality = "medium" },
+
+    { formula = "ZnCl^+", model = "logk", reaction = "Zn^2+ + Cl^- = ZnCl^+", logK = 0.43, dH = 7.79, units = KCAL,
+      source = COMPILED, quality = "low", note = "Zn-Cl constants are poorly agreed in the literature" },
+    { formula = "ZnCl2(aq)", model = "logk", reaction = "Zn^2+ + 2 Cl^- = ZnCl2(aq)", logK = 0.45, dH = 8.5, units = KCAL,
+      source = COMPILED, quality = "low" },
+    { formula = "ZnCl3^-", model = "logk", reaction = "Zn^2+ + 3 Cl^- = ZnCl3^-", logK = 0.5, dH = 9.56, units = KCAL,
+      source = COMPILED, quality = "low" },
+    { formula = "ZnCl4^2-", model = "logk", reaction = "Zn^2+ + 4 Cl^- = ZnCl4^2-", logK = 0.2, dH = 10.96, units = KCAL,
+      source = COMPILED, quality = "low" },
+
+    { formula = "AgCl(aq)", model = "logk", reaction = "Ag^+ + Cl^- = AgCl(aq)", logK = 3.27, dH = -2.68, units = KCAL,
+      source = COMPILED, quality = "medium" },
+    { formula = "AgCl2^-", model = "logk", reaction = "Ag^+ + 2 Cl^- = AgCl2^-", logK = 5.27, dH = -3.93, units = KCAL,
+      source = COMPILED, quality = "medium", note = "OpenStax App. K gives 1.8e5 (5.26)" },
+    { formula = "AgCl3^2-", model = "logk", reaction = "Ag^+ + 3 Cl^- = AgCl3^2-", logK = 5.29,
+      source = COMPILED, quality = "low", note = "dH not recalled" },
+    { formula = "AgCl4^3-", model = "logk", reaction = "Ag^+ + 4 Cl^- = AgCl4^3-", logK = 5.51,
+      source = COMPILED, quality = "low", note = "dH not recalled" },
+
+    { formula = "CdCl^+", model = "logk", reaction = "Cd^2+ + Cl^- = CdCl^+", logK = 1.98, dH = 0.59, units = KCAL,
+      source = COMPILED, quality = "medium" },
+    { formula = "CdCl2(aq)", model = "logk", reaction = "Cd^2+ + 2 Cl^- = CdCl2(aq)", logK = 2.6, dH = 1.24, units = KCAL,
+      source = COMPILED, quality = "medium" },
+    { formula = "CdCl3^-", model = "logk", reaction = "Cd^2+ + 3 Cl^- = CdCl3^-", logK = 2.4, dH = 3.9, units = KCAL,
+      source = COMPILED, quality = "low" },
+
+    { formula = "PbCl^+", model = "logk", reaction = "Pb^2+ + Cl^- = PbCl^+", logK = 1.6, dH = 4.38, units = KCAL,
+      source = COMPILED, quality = "medium" },
+    { formula = "PbCl2(aq)", model = "logk", reaction = "Pb^2+ + 2 Cl^- = PbCl2(aq)", logK = 1.8, dH = 1.08, units = KCAL,
+      source = COMPILED, quality = "medium" },
+    { formula = "PbCl3^-", model = "logk", reaction = "Pb^2+ + 3 Cl^- = PbCl3^-", logK = 1.7, dH = 2.17, units = KCAL,
+      source = COMPILED, quality = "low" },
+    { formula = "PbCl4^2-", model = "logk", reaction = "Pb^2+ + 4 Cl^- = PbCl4^2-", logK = 1.38, dH = 3.53, units = KCAL,
+      source = COMPILED, quality = "low" },
+
+    { formula = "MnCl^+", model = "logk", reaction = "Mn^2+ + Cl^- = MnCl^+", logK = 0.61,
+      source = COMPILED, quality = "low", note = "dH not recalled" },
+    { formula = "NiCl^+", model = "logk", reaction = "Ni^2+ + Cl^- = NiCl^+", logK = 0.40,
+      source = COMPILED, quality = "low", note = "dH not recalled; outer-sphere pair, literature 0.1-0.6" },
+
+    -- ---------------------------------------------------------------- chloride salts
+    {
+      formula = "AgCl(s,chlorargyrite)", model = "cp",
+      G = -109.765, H = -127.01, S = 96.25,
+      cp = { a = 50.79 }, V = 25.73,
+      source = CODATA .. " (dfH, S; dfG derived dfH - T dfS); Cp 298 constant from " .. NBS,
+      quality = "high",
+      note = "Cp held at its 25 C value (temperature coefficients not recalled); V from memory of Robie and Hemingway 1995",
+    },
+    {
+      formula = "CuCl(s,nantokite)", model = "cp",
+      G = -119.86, H = -137.2, S = 86.2, cp = { a = 48.5 },
+      source = NBS, quality = "medium",
+      note = "Cp held at its 25 C value (recalled, medium); corrosion product of copper in chloride water",
+    },
+    {
+      formula = "PbCl2(s,cotunnite)", model = "cp",
+      G = -314.10, H = -359.41, S = 136.0,
+      source = NBS, quality = "medium",
+      note = "Cp not recalled (loader takes 0; use near 25 C only)",
+    },
+    {
+      formula = "NaCl(s,halite)", model = "cp",
+      G = -384.138, H = -411.153, S = 72.13,
+      cp = { a = 50.50 }, V = 27.015,
+      source = NBS .. "; V from memory of Robie and Hemingway 1995", quality = "high",
+      note = "Cp held at its 25 C value",
+    },
+    {
+      formula = "KCl(s,sylvite)", model = "cp",
+      G = -409.14, H = -436.747, S = 82.59,
+      cp = { a = 51.30 }, V = 37.524,
+      source = NBS .. "; V from memory of Robie and Hemingway 1995", quality = "high",
+      note = "Cp held at its 25 C value",
+    },
+  },
+}

@@ -1,0 +1,134 @@
+-- stdlib/elements/N.lua: nitrogen. Ammonia/ammonium, dinitrogen, nitrite,
+-- nitrous acid, nitrate, nitric oxide; ammine complexes of the metals.
+--
+-- Data sets: NH3(aq), NH4^+ and NO3^- carry the revised-HKF parameters of Shock
+-- and Helgeson 1988 / Shock, Helgeson and Sverjensky 1989 (as recalled in the
+-- project reference table shared/reference/hkf). NO2^- is an HKF estimate from
+-- NBS 1982 values. Gases: CODATA 1989 where there is a key value, NBS otherwise.
+-- Ammine complexes: J. Bjerrum's constants (2 mol/L NH4NO3, 30 C), the classic
+-- complete sets; they are NOT infinite-dilution 25 C constants (see notes).
+-- Nearly every number was recalled, not read ("from memory of").
+--
+-- Caution: nitrogen redox (N2 / NO3^- / NH4^+) is very slow without microbes;
+-- N2 is the thermodynamically stable form over most of the water field, which a
+-- diagram shows but water rarely reaches.
+
+local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
+local NBS_DERIVED = "derived here from dfG and dfH of " .. NBS
+local CODATA = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values for Thermodynamics (dfH, S; dfG derived here as dfH - T dfS)"
+local SH88 = "from memory of Shock and Helgeson 1988 (Geochim. Cosmochim. Acta 52:2009), ion tables (table no. not recalled); as in the project reference table shared/reference/hkf/hkf_parameters.csv"
+local SHS89 = "from memory of Shock, Helgeson and Sverjensky 1989 (Geochim. Cosmochim. Acta 53:2157), neutral species (table no. not recalled); as in the project reference table shared/reference/hkf/hkf_parameters.csv"
+local KELLEY = "Cp: from memory of Kelley 1960 (U.S. Bur. Mines Bull. 584), Maier-Kelley coefficients in cal converted x 4.184"
+local BJERRUM = "from memory of J. Bjerrum 1941, Metal Ammine Formation in Aqueous Solution (2 mol/L NH4NO3, 30 C), as reproduced in Smith and Martell"
+local SM = "from memory of Smith and Martell, Critical Stability Constants (I = 0, 25 C)"
+local BJ_NOTE = "Bjerrum's medium is 2 mol/L NH4NO3 at 30 C, not I = 0 and 25 C; for a neutral ligand the medium effect is modest but real (a few tenths per step); dH not recalled (log K held constant)"
+local CAL = { energy = "cal", entropy = "cal" }
+
+local function ammine(metal, charge, n, logbeta, quality, src, note)
+  local ion = metal .. "^" .. charge
+  local f
+  if n == 1 then f = metal .. "NH3^" .. charge else f = metal .. "(NH3)" .. n .. "^" .. charge end
+  local lhs = ion .. " + " .. (n == 1 and "" or (n .. " ")) .. "NH3(aq)"
+  return { formula = f, model = "logk", reaction = lhs .. " = " .. f, logK = logbeta,
+           source = src or BJERRUM, quality = quality or "medium", note = note or BJ_NOTE }
+end
+
+local species = {
+  -- ---------------------------------------------------------------- own species
+  {
+    formula = "NH3(aq)", model = "hkf", units = CAL,
+    G = -6383, H = -19440, S = 25.77,
+    hkf = { a1 = 5.0911, a2 = 2.797, a3 = 8.6248, a4 = -2.8946, c1 = 20.3, c2 = -1.17, omega = -0.05 },
+    source = SHS89, quality = "medium",
+    note = "published Cp (17.9 cal/(mol K)) and V (24.4 cm3/mol) recalled weakly; cycle closes to 55 cal/mol",
+  },
+  {
+    formula = "NH4^+", model = "hkf", units = CAL,
+    G = -18990, H = -31850, S = 26.57,
+    hkf = { a1 = 3.8763, a2 = 2.3448, a3 = 8.5605, a4 = -2.8759, c1 = 17.45, c2 = -0.21, omega = 0.1502 },
+    source = SH88, quality = "high",
+    note = "pKa(NH4^+) from these dfG 9.24 (Bates and Pinching 1949: 9.245)",
+  },
+  {
+    formula = "NH3(g)", model = "cp",
+    G = -16.407, H = -45.94, S = 192.77,
+    cp = { a = 29.748, b = 25.104e-3, c = -1.548e5 },
+    source = CODATA .. "; " .. KELLEY .. " (7.11 + 6.00e-3 T - 0.37e5/T^2 cal)",
+    quality = "high",
+    note = "the Cp fit gives 35.49 J/(mol K) at 298.15 K vs NBS 35.06 (1.2 % high)",
+  },
+  {
+    formula = "N2(g)", model = "cp",
+    G = 0, H = 0, S = 191.61,
+    cp = { a = 28.577, b = 3.766e-3, c = -0.502e5 },
+    source = "S from memory of Cox, Wagman and Medvedev 1989 (CODATA); " .. KELLEY .. " (6.83 + 0.90e-3 T - 0.12e5/T^2 cal)",
+    quality = "high",
+  },
+  {
+    formula = "N2(aq)", model = "logk",
+    reaction = "N2(g) = N2(aq)", logK = -3.276, dH = -10.54,
+    source = NBS_DERIVED .. " N2(aq) (18.7, -10.54; S 95.8)",
+    quality = "medium",
+    note = "Henry constant about 6.3e-4 mol/(kg bar)",
+  },
+  {
+    formula = "NO3^-", model = "hkf", units = CAL,
+    G = -26507, H = -49429, S = 35.12,
+    hkf = { a1 = 7.3161, a2 = 6.7824, a3 = -4.6838, a4 = -3.0594, c1 = 7.70, c2 = -6.725, omega = 1.0977 },
+    source = SH88, quality = "high",
+    note = "dfG -110.91 kJ/mol (CODATA -110.79; NBS -108.74: the NBS value is 2 kJ/mol more positive)",
+  },
+  {
+    formula = "NO2^-", model = "hkf",
+    G = -32.2, H = -104.6, S = 123.0,
+    estimate = { Cp = -97.5 },
+    source = NBS .. " (dfG, dfH, S and Cp 25 C); HKF parameters estimated by the loader (Shock and Helgeson 1988 correlations)",
+    quality = "medium",
+    note = "V not recalled, so the volume terms are zero: poor at high pressure. NBS dfG is consistent with NBS NO3^- (-108.74); with the SH88 NO3^- above the NO3^-/NO2^- couple moves by 11 mV",
+  },
+  {
+    formula = "HNO2(aq)", model = "logk",
+    reaction = "NO2^- + H^+ = HNO2(aq)", logK = 3.224, dH = -14.6,
+    source = NBS_DERIVED .. " HNO2(aq) (-50.6, -119.2; S 135.6) and NO2^-",
+    quality = "medium",
+    note = "literature pKa 3.15 (Smith and Martell) to 3.35",
+  },
+  {
+    formula = "NO(g)", model = "cp",
+    G = 86.55, H = 90.25, S = 210.761,
+    cp = { a = 29.414, b = 3.849e-3, c = -0.586e5 },
+    source = NBS .. "; " .. KELLEY .. " (7.03 + 0.92e-3 T - 0.14e5/T^2 cal)",
+    quality = "high",
+  },
+}
+
+-- ---------------------------------------------------------------- ammine complexes: cumulative log beta_n
+local sets = {
+  { "Cu", "2+", { 4.31, 7.98, 11.02, 13.32 } },
+  { "Ni", "2+", { 2.80, 5.04, 6.77, 7.96, 8.71, 8.74 } },
+  { "Zn", "2+", { 2.37, 4.81, 7.31, 9.46 } },
+  { "Co", "2+", { 2.11, 3.74, 4.79, 5.55, 5.73, 5.11 } },
+  { "Cd", "2+", { 2.65, 4.75, 6.19, 7.12 } },
+}
+for _, s in ipairs(sets) do
+  for n, lb in ipairs(s[3]) do
+    local q = "medium"
+    if s[1] == "Co" and n >= 5 then q = "low" end
+    local note = nil
+    if s[1] == "Cu" and n == 4 then
+      note = BJ_NOTE .. ". Recalled I = 0 values (Smith and Martell) are lower: log beta4 about 11.75; textbooks quote 13.0-13.3"
+    end
+    table.insert(species, ammine(s[1], s[2], n, lb, q, nil, note))
+  end
+end
+table.insert(species, ammine("Cu", "+", 1, 5.93, "low", SM, "dH not recalled"))
+table.insert(species, ammine("Cu", "+", 2, 10.86, "medium", SM, "dominant Cu(I) species in ammoniacal leach liquors; dH not recalled"))
+table.insert(species, ammine("Ag", "+", 1, 3.31, "medium", SM, "dH not recalled"))
+table.insert(species, ammine("Ag", "+", 2, 7.23, "medium", SM, "OpenStax App. K gives 1.7e7 (7.23); dH not recalled"))
+
+return {
+  element = "N",
+  title = "Nitrogen",
+  units = { energy = "kJ", entropy = "J" },
+  species = species,
+}

@@ -1,0 +1,88 @@
+-- stdlib/elements/P.lua: phosphorus. Orthophosphoric acid and its anions,
+-- calcium and magnesium phosphate complexes, and the common phosphate minerals
+-- (apatite, brushite, strengite, vivianite).
+--
+-- Data sets: H2PO4^- carries revised-HKF parameters of Shock and Helgeson 1988
+-- as recalled in the project reference table shared/reference/hkf (its c2 was
+-- reconstructed there from the published Cp, see the note). HPO4^2- uses the
+-- same table's dfG/dfH/S with loader-estimated HKF parameters, because the
+-- recalled c1/c2 fail the Cp check. H3PO4 and PO4^3- are written as acid-base
+-- reactions (Smith and Martell constants, NBS 1982 enthalpies). Nearly every
+-- number was recalled, not read.
+
+local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
+local SH88 = "from memory of Shock and Helgeson 1988 (Geochim. Cosmochim. Acta 52:2009), ion tables (table no. not recalled); as in the project reference table shared/reference/hkf/hkf_parameters.csv"
+local SM = "from memory of Smith and Martell, Critical Stability Constants (I = 0, 25 C)"
+local CAP = "from memory of Chughtai, Marshall and Nancollas 1968 (J. Phys. Chem. 72:208) as compiled with I = 0 constants in Nordstrom et al. 1990-era aqueous data sets"
+local MGP = "from memory of I = 0 constants compiled in Nordstrom et al. 1990-era aqueous data sets; primary paper not recalled"
+local NRIAGU = "from memory of Nriagu 1972 (Geochim. Cosmochim. Acta 36:459), solubility of strengite and vivianite"
+local CAL = { energy = "cal", entropy = "cal" }
+local KCAL = { energy = "kcal" }
+
+return {
+  element = "P",
+  title = "Phosphorus",
+  units = { energy = "kJ", entropy = "J" },
+  species = {
+    {
+      formula = "H2PO4^-", model = "hkf", units = CAL,
+      G = -270140, H = -309820, S = 21.6,
+      hkf = { a1 = 6.4875, a2 = 8.0594, a3 = 2.5823, a4 = -3.1122, c1 = 14.0435, c2 = -4.4605, omega = 1.3003 },
+      source = SH88 .. "; c2 RECONSTRUCTED in that table from the SH88 c2-Cp correlation and the recalled published Cp (-7.0 cal/(mol K))",
+      quality = "medium",
+      note = "check c2 against the paper before high-temperature use",
+    },
+    {
+      formula = "HPO4^2-", model = "hkf", units = CAL,
+      G = -260310, H = -308815, S = -8.0,
+      estimate = { Cp = -243.9, V = 5.4 },  -- J/(mol K) and cm3/mol (estimate is always in J)
+      source = SH88 .. " (dfG, dfH, S); estimate Cp = -58.3 cal/(mol K) = -243.9 J/(mol K) and V = 5.4 cm3/mol are the published 25 C values as recalled in that table's README (weak)",
+      quality = "low",
+      note = "the recalled HKF set fails the Cp check (c1 repeats the omega digits), so the loader estimates the parameters from Cp, V, S and charge. log K(H2PO4^- = HPO4^2- + H^+) from these dfG -7.21 (Smith and Martell 7.20)",
+    },
+    {
+      formula = "PO4^3-", model = "logk",
+      reaction = "HPO4^2- = PO4^3- + H^+", logK = -12.35, dH = 14.74,
+      source = SM .. " (log K); dH derived here from dfH of HPO4^2- (-1292.14) and PO4^3- (-1277.4), " .. NBS,
+      quality = "medium",
+      note = "NBS dfG values give -12.34",
+    },
+    {
+      formula = "H3PO4(aq)", model = "logk",
+      reaction = "H2PO4^- + H^+ = H3PO4(aq)", logK = 2.148, dH = 7.95,
+      source = SM .. " (log K); dH derived here from dfH of H2PO4^- (-1296.29) and H3PO4(aq) (-1288.34), " .. NBS,
+      quality = "high",
+    },
+
+    -- ---------------------------------------------------------------- complexes
+    { formula = "CaHPO4(aq)", model = "logk", reaction = "Ca^2+ + HPO4^2- = CaHPO4(aq)", logK = 2.739, dH = 3.3, units = KCAL,
+      source = CAP, quality = "medium" },
+    { formula = "CaPO4^-", model = "logk", reaction = "Ca^2+ + PO4^3- = CaPO4^-", logK = 6.459, dH = 3.1, units = KCAL,
+      source = CAP, quality = "medium" },
+    { formula = "CaH2PO4^+", model = "logk", reaction = "Ca^2+ + H2PO4^- = CaH2PO4^+", logK = 1.408, dH = 3.4, units = KCAL,
+      source = CAP, quality = "medium" },
+    { formula = "MgHPO4(aq)", model = "logk", reaction = "Mg^2+ + HPO4^2- = MgHPO4(aq)", logK = 2.87, dH = 3.3, units = KCAL,
+      source = MGP, quality = "medium" },
+    { formula = "MgPO4^-", model = "logk", reaction = "Mg^2+ + PO4^3- = MgPO4^-", logK = 6.589, dH = 3.1, units = KCAL,
+      source = MGP, quality = "medium" },
+    { formula = "MgH2PO4^+", model = "logk", reaction = "Mg^2+ + H2PO4^- = MgH2PO4^+", logK = 1.513, dH = 3.4, units = KCAL,
+      source = MGP, quality = "medium" },
+
+    -- ---------------------------------------------------------------- minerals
+    { formula = "Ca5(PO4)3OH(s,hydroxyapatite)", model = "logk",
+      reaction = "Ca5(PO4)3OH(s,hydroxyapatite) = 5 Ca^2+ + 3 PO4^3- + OH^-", logK = -58.5,
+      source = "from memory of McDowell, Gregory and Brown 1977 (J. Res. Natl. Bur. Stand. 81A:273); the abstract of 'Studies on the incongruent solubility of hydroxyapatite' (scilit.com, read) brackets the product between 1e-57 and 1e-60",
+      quality = "low",
+      note = "apatite dissolves incongruently and its solubility depends on surface phases; dH not recalled" },
+    { formula = "CaHPO4*2H2O(s,brushite)", model = "logk",
+      reaction = "CaHPO4*2H2O(s,brushite) = Ca^2+ + HPO4^2- + 2 H2O(l)", logK = -6.59,
+      source = "from memory of Gregory, Moreno and Brown 1970 (J. Res. Natl. Bur. Stand. 74A:461)",
+      quality = "medium", note = "metastable with respect to apatite but nucleates first at pH below about 6; dH not recalled" },
+    { formula = "FePO4*2H2O(s,strengite)", model = "logk",
+      reaction = "FePO4*2H2O(s,strengite) = Fe^3+ + PO4^3- + 2 H2O(l)", logK = -26.4,
+      source = NRIAGU, quality = "medium", note = "dH not recalled" },
+    { formula = "Fe3(PO4)2*8H2O(s,vivianite)", model = "logk",
+      reaction = "Fe3(PO4)2*8H2O(s,vivianite) = 3 Fe^2+ + 2 PO4^3- + 8 H2O(l)", logK = -36.0,
+      source = NRIAGU, quality = "medium", note = "dH not recalled" },
+  },
+}

@@ -1,0 +1,348 @@
+-- stdlib/elements/S.lua: sulfur. Sulfide (H2S, HS^-, S^2-), elemental sulfur,
+-- sulfite, thiosulfate, sulfate; metal sulfides, sulfate complexes and sulfate
+-- salts.
+--
+-- Data sets: HS^-, H2S(aq), SO4^2- and HSO4^- carry the revised-HKF parameters
+-- of Shock and Helgeson 1988 / Shock, Helgeson and Sverjensky 1989 (as recalled
+-- in the project's reference table shared/reference/hkf, with its caveats).
+-- Gases: CODATA 1989 key values. Sulfite species: reactions with log K and dH
+-- derived here from NBS 1982. Solids: NBS 1982 dfG/dfH/S unless noted; they are
+-- consistent with NBS/CODATA metal ions (see docs/data/ligands.md about Fe^2+).
+-- Complexes: stability constants at I = 0, 25 C. Nearly every number was
+-- recalled, not read ("from memory of").
+
+local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
+local NBS_DERIVED = "derived here from dfG and dfH of " .. NBS
+local CODATA = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values for Thermodynamics (dfH, S; dfG derived here as dfH - T dfS)"
+local SH88 = "from memory of Shock and Helgeson 1988 (Geochim. Cosmochim. Acta 52:2009), ion tables (table no. not recalled); as in the project reference table shared/reference/hkf/hkf_parameters.csv"
+local SHS89 = "from memory of Shock, Helgeson and Sverjensky 1989 (Geochim. Cosmochim. Acta 53:2157), neutral species (table no. not recalled); as in the project reference table shared/reference/hkf/hkf_parameters.csv"
+local KELLEY = "Cp: from memory of Kelley 1960 (U.S. Bur. Mines Bull. 584), Maier-Kelley coefficients in cal converted x 4.184"
+local HDNB = "Cp: from memory of Helgeson, Delany, Nesbitt and Bird 1978 (Am. J. Sci. 278-A), Maier-Kelley coefficients in cal converted x 4.184"
+local RH95 = "from memory of Robie and Hemingway 1995 (U.S. Geol. Surv. Bull. 2131)"
+local N90 = "from memory of Nordstrom, Plummer, Langmuir, Busenberg, May, Jones and Parkhurst 1990 (ACS Symp. Ser. 416, 398-413)"
+local COMPILED = "from memory of the I = 0 constants compiled from Smith and Martell (Critical Stability Constants) in Nordstrom et al. 1990-era aqueous data sets; attribution to the primary paper not recalled"
+local CAL = { energy = "cal", entropy = "cal" }
+local KCAL = { energy = "kcal" }
+
+return {
+  element = "S",
+  title = "Sulfur",
+  units = { energy = "kJ", entropy = "J" },
+  species = {
+    -- ---------------------------------------------------------------- reduced sulfur
+    {
+      formula = "H2S(aq)", model = "hkf", units = CAL,
+      G = -6673, H = -9001, S = 30.0,
+      hkf = { a1 = 6.5097, a2 = 6.7724, a3 = 5.9646, a4 = -3.056, c1 = 32.3, c2 = 4.73, omega = -0.1 },
+      source = SHS89, quality = "medium",
+      note = "CAVEAT (reference README): dfG, dfH and S do not close the cycle (dfH - T dfS gives about -6350 cal/mol, 324 cal off); dfH or S mis-recalled (S near 31.1 would close it); treat dfH and S as low. dfG supported by pK1 = 6.99. Parameters pass the Cp/V check.",
+    },
+    {
+      formula = "HS^-", model = "hkf", units = CAL,
+      G = 2860, H = -3850, S = 16.3,
+      hkf = { a1 = 5.0119, a2 = 4.9799, a3 = 3.4765, a4 = -2.9849, c1 = 3.42, c2 = -6.27, omega = 1.441 },
+      source = SH88, quality = "medium",
+      note = "published Cp recalled weakly (-22.2 cal/(mol K)); V 20.65 cm3/mol",
+    },
+    {
+      formula = "S^2-", model = "logk",
+      reaction = "HS^- = S^2- + H^+", logK = -17.4,
+      source = "from memory of Migdisov, Williams-Jones, Lakshtanov and Alekhin 2002 (Geochim. Cosmochim. Acta 66:1713), pK2 of H2S about 17.4 at 25 C",
+      quality = "low",
+      note = "CONTROVERSY: the second dissociation constant of H2S is poorly known. Older tables (NBS 1982 dfG(S^2-) = 85.8 kJ/mol; Nordstrom et al. 1990) give pK2 about 12.9; spectroscopic work since the 1980s gives 17 to 19 (Schoonen and Barnes 1988 about 18.5; Meyer et al. 1983 about 19). S^2- is never a major species below pH 14 with any of the modern values. dH not recalled (log K held constant). Do not use S^2- based solubility products with this value: sulfide minerals here are defined by dfG.",
+    },
+    {
+      formula = "S(s,rhombic)", model = "cp",
+      G = 0, H = 0, S = 32.054,
+      cp = { a = 14.979, b = 26.108e-3 },
+      T_range = { 273.15, 368.3 },
+      source = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values (S); " .. KELLEY .. " (3.58 + 6.24e-3 T cal)",
+      quality = "high",
+      note = "rhombic sulfur turns monoclinic at 368.3 K and melts near 388 K; no data above that here. Cp(298.15) from the fit 22.76 vs NBS 22.64",
+    },
+    {
+      formula = "H2S(g)", model = "cp",
+      G = -33.443, H = -20.6, S = 205.81,
+      cp = { a = 32.677, b = 12.385e-3, c = -1.925e5 },
+      source = CODATA .. "; " .. KELLEY .. " (7.81 + 2.96e-3 T - 0.46e5/T^2 cal)",
+      quality = "high",
+      note = "Henry constant with H2S(aq) above: log K = -0.97 (literature about -0.99)",
+    },
+
+    -- ---------------------------------------------------------------- sulfite, thiosulfate
+    {
+      formula = "SO2(g)", model = "cp",
+      G = -300.095, H = -296.81, S = 248.223,
+      cp = { a = 46.191, b = 7.866e-3, c = -7.699e5 },
+      source = CODATA .. "; " .. KELLEY .. " (11.04 + 1.88e-3 T - 1.84e5/T^2 cal)",
+      quality = "high",
+    },
+    {
+      formula = "SO2(aq)", model = "logk",
+      reaction = "SO2(g) = SO2(aq)", logK = 0.084, dH = -26.15,
+      source = NBS_DERIVED .. " SO2(aq) (-300.676, -322.980) and SO2(g) (-300.194, -296.830)",
+      quality = "medium",
+      note = "Henry constant about 1.2 mol/(kg bar)",
+    },
+    {
+      formula = "HSO3^-", model = "logk",
+      reaction = "SO2(aq) + H2O(l) = HSO3^- + H^+", logK = -1.765, dH = -17.41,
+      source = NBS_DERIVED .. " HSO3^- (-527.73, -626.22), SO2(aq) and H2O(l)",
+      quality = "medium",
+      note = "Goldberg and Parker 1985 (J. Res. NBS 90:341) give pK1 about 1.86 (recalled)",
+    },
+    {
+      formula = "SO3^2-", model = "logk",
+      reaction = "HSO3^- = SO3^2- + H^+", logK = -7.223, dH = -9.28,
+      source = NBS_DERIVED .. " SO3^2- (-486.5, -635.5) and HSO3^-",
+      quality = "medium",
+      note = "literature pK2 7.17-7.22",
+    },
+    {
+      formula = "S2O3^2-", model = "logk",
+      reaction = "SO3^2- + S(s,rhombic) = S2O3^2-", logK = 6.307, dH = -16.8,
+      source = NBS_DERIVED .. " S2O3^2- (-522.5, -652.3) and SO3^2-",
+      quality = "medium",
+      note = "metastable intermediate; its field matters only when kinetics keep it (e.g. pitting of stainless steel)",
+    },
+
+    -- ---------------------------------------------------------------- sulfate
+    {
+      formula = "SO4^2-", model = "hkf", units = CAL,
+      G = -177930, H = -217400, S = 4.50,
+      hkf = { a1 = 8.3014, a2 = -1.9846, a3 = -6.2122, a4 = -2.697, c1 = 1.64, c2 = -17.998, omega = 3.1463 },
+      source = SH88, quality = "medium",
+      note = "published Cp -64.38 cal/(mol K); V recall wavered between 12.92 and 13.88 cm3/mol (reference README)",
+    },
+    {
+      formula = "HSO4^-", model = "hkf", units = CAL,
+      G = -180630, H = -212500, S = 30.0,
+      hkf = { a1 = 6.9788, a2 = 9.259, a3 = 2.1108, a4 = -3.1618, c1 = 20.0961, c2 = -1.955, omega = 1.1748 },
+      source = SH88, quality = "medium",
+      note = "log K(HSO4^- = SO4^2- + H^+) from these dfG: -1.98 (Nordstrom et al. 1990: -1.988)",
+    },
+
+    -- ---------------------------------------------------------------- metal sulfides
+    {
+      formula = "FeS(s,troilite)", model = "cp",
+      G = -100.4, H = -100.0, S = 60.29, cp = { a = 50.54 }, V = 18.20,
+      T_range = { 273.15, 411 },
+      source = NBS .. " (FeS cr); V " .. RH95, quality = "medium",
+      note = "stoichiometric pyrrhotite; lambda transition at 411 K; Cp held at its 25 C value",
+    },
+    {
+      formula = "FeS(s,mackinawite)", model = "logk",
+      reaction = "FeS(s,mackinawite) + H^+ = Fe^2+ + HS^-", logK = -3.5,
+      source = "from memory of Rickard 2006 (Geochim. Cosmochim. Acta 70:5779), log K*sp = -3.5 +- 0.25",
+      quality = "medium",
+      note = "first iron sulfide to form in sour corrosion; literature -2.95 (Davison 1991) to -3.6; dH not recalled",
+    },
+    {
+      formula = "FeS2(s,pyrite)", model = "cp",
+      G = -166.9, H = -178.2, S = 52.93,
+      cp = { a = 74.810, b = 5.523e-3, c = -12.761e5 }, V = 23.94,
+      source = NBS .. "; " .. HDNB .. " (17.88 + 1.32e-3 T - 3.05e5/T^2 cal); V " .. RH95,
+      quality = "medium",
+      note = "Robie and Hemingway 1995 (after Toulmin) give dfH about -171.5 kJ/mol, dfG about -160.2 (recalled): pyrite's dfG is uncertain by about 6 kJ/mol",
+    },
+    {
+      formula = "CuS(s,covellite)", model = "cp",
+      G = -53.6, H = -53.1, S = 66.5,
+      cp = { a = 44.350, b = 11.046e-3 }, V = 20.42,
+      source = NBS .. "; " .. HDNB .. " (10.6 + 2.64e-3 T cal); V " .. RH95, quality = "medium",
+    },
+    {
+      formula = "Cu2S(s,chalcocite)", model = "cp",
+      G = -86.2, H = -79.5, S = 120.9, cp = { a = 76.32 }, V = 27.475,
+      T_range = { 273.15, 376 },
+      source = NBS .. "; V " .. RH95, quality = "medium",
+      note = "low chalcocite; transition at 376 K; Cp held at its 25 C value",
+    },
+    {
+      formula = "ZnS(s,sphalerite)", model = "cp",
+      G = -201.29, H = -205.98, S = 57.7,
+      cp = { a = 50.877, b = 5.188e-3, c = -5.690e5 }, V = 23.83,
+      source = NBS .. "; " .. HDNB .. " (12.16 + 1.24e-3 T - 1.36e5/T^2 cal); V " .. RH95, quality = "high",
+    },
+    {
+      formula = "NiS(s,millerite)", model = "cp",
+      G = -79.5, H = -82.0, S = 52.97, cp = { a = 47.11 },
+      source = NBS .. " (NiS cr)", quality = "medium",
+      note = "Cp held at its 25 C value",
+    },
+    {
+      formula = "MnS(s,alabandite)", model = "cp",
+      G = -218.4, H = -214.2, S = 78.2, cp = { a = 49.96 }, V = 21.46,
+      source = NBS .. " (MnS green); V " .. RH95, quality = "medium",
+      note = "Cp held at its 25 C value",
+    },
+    {
+      formula = "PbS(s,galena)", model = "cp",
+      G = -98.7, H = -100.4, S = 91.2,
+      cp = { a = 44.476, b = 16.778e-3 }, V = 31.49,
+      source = NBS .. "; " .. HDNB .. " (10.63 + 4.01e-3 T cal, recall medium); V " .. RH95, quality = "high",
+    },
+    {
+      formula = "Ag2S(s,acanthite)", model = "cp",
+      G = -40.67, H = -32.59, S = 144.01, cp = { a = 76.53 }, V = 34.19,
+      T_range = { 273.15, 450 },
+      source = NBS .. " (Ag2S alpha); V " .. RH95, quality = "high",
+      note = "acanthite turns to argentite at about 450 K; Cp held at its 25 C value",
+    },
+    {
+      formula = "CdS(s,greenockite)", model = "cp",
+      G = -156.5, H = -161.9, S = 64.9, V = 29.93,
+      source = NBS .. "; V " .. RH95, quality = "medium",
+      note = "Cp not recalled (loader takes 0; use near 25 C only)",
+    },
+    {
+      formula = "MoS2(s,molybdenite)", model = "cp",
+      G = -225.9, H = -235.1, S = 62.59, cp = { a = 63.55 }, V = 32.02,
+      source = NBS .. "; V " .. RH95, quality = "medium",
+      note = "Cp held at its 25 C value; cycle closes to 0.35 kJ/mol",
+    },
+    {
+      formula = "SnS(s,herzenbergite)", model = "cp",
+      G = -98.3, H = -100.0, S = 77.0,
+      source = NBS, quality = "low",
+      note = "Cp not recalled (loader takes 0; use near 25 C only)",
+    },
+
+    -- ---------------------------------------------------------------- sulfate complexes (formation reactions, I = 0, 25 C)
+    { formula = "NaSO4^-", model = "logk", reaction = "Na^+ + SO4^2- = NaSO4^-", logK = 0.70, dH = 1.12, units = KCAL,
+      source = N90, quality = "medium" },
+    { formula = "KSO4^-", model = "logk", reaction = "K^+ + SO4^2- = KSO4^-", logK = 0.85, dH = 2.25, units = KCAL,
+      source = N90, quality = "medium" },
+    { formula = "MgSO4(aq)", model = "logk", reaction = "Mg^2+ + SO4^2- = MgSO4(aq)", logK = 2.37, dH = 4.55, units = KCAL,
+      source = N90, quality = "medium" },
+    { formula = "CaSO4(aq)", model = "logk", reaction = "Ca^2+ + SO4^2- = CaSO4(aq)", logK = 2.30, dH = 1.65, units = KCAL,
+      source = N90, quality = "medium" },
+    { formula = "FeSO4(aq)", model = "logk", reaction = "Fe^2+ + SO4^2- = FeSO4(aq)", logK = 2.25, dH = 3.23, units = KCAL,
+      source = N90, quality = "medium" },
+    { formula = "FeSO4^+", model = "logk", reaction = "Fe^3+ + SO4^2- = FeSO4^+", logK = 4.04, dH = 3.91, units = KCAL,
+      source = N90, quality = "medium" },
+    { formula = "Fe(SO4)2^-", model = "logk", reaction = "Fe^3+ + 2 SO4^2- = Fe(SO4)2^-", logK = 5.38, dH = 4.60, units = KCAL,
+      source = N90, quality = "medium" },
+    { formula = "AlSO4^+", model = "logk", reaction = "Al^3+ + SO4^2- = AlSO4^+", logK = 3.5, dH = 2.29, units = KCAL,
+      source = N90, quality = "medium" },
+    { formula = "Al(SO4)2^-", model = "logk", reaction = "Al^3+ + 2 SO4^2- = Al(SO4)2^-", logK = 5.0, dH = 3.11, units = KCAL,
+      source = N90, quality = "medium" },
+    { formula = "MnSO4(aq)", model = "logk", reaction = "Mn^2+ + SO4^2- = MnSO4(aq)", logK = 2.25, dH = 3.37, units = KCAL,
+      source = N90, quality = "medium" },
+    { formula = "ZnSO4(aq)", model = "logk", reaction = "Zn^2+ + SO4^2- = ZnSO4(aq)", logK = 2.37, dH = 1.36, units = KCAL,
+      source = COMPILED, quality = "medium" },
+    { formula = "Zn(SO4)2^2-", model = "logk", reaction = "Zn^2+ + 2 SO4^2- = Zn(SO4)2^2-", logK = 3.28,
+      source = COMPILED, quality = "low", note = "dH not recalled" },
+    { formula = "CuSO4(aq)", model = "logk", reaction = "Cu^2+ + SO4^2- = CuSO4(aq)", logK = 2.31, dH = 1.22, units = KCAL,
+      source = COMPILED, quality = "medium" },
+    { formula = "CdSO4(aq)", model = "logk", reaction = "Cd^2+ + SO4^2- = CdSO4(aq)", logK = 2.46, dH = 1.08, units = KCAL,
+      source = COMPILED, quality = "medium" },
+    { formula = "PbSO4(aq)", model = "logk", reaction = "Pb^2+ + SO4^2- = PbSO4(aq)", logK = 2.75,
+      source = COMPILED, quality = "low", note = "dH not recalled" },
+    { formula = "NiSO4(aq)", model = "logk", reaction = "Ni^2+ + SO4^2- = NiSO4(aq)", logK = 2.29,
+      source = COMPILED, quality = "low", note = "dH not recalled; Smith and Martell list about 2.3" },
+    { formula = "AgSO4^-", model = "logk", reaction = "Ag^+ + SO4^2- = AgSO4^-", logK = 1.29, dH = 1.49, units = KCAL,
+      source = COMPILED, quality = "low" },
+
+    -- ---------------------------------------------------------------- sulfate salts
+    {
+      formula = "CaSO4(s,anhydrite)", model = "cp",
+      G = -1321.79, H = -1434.11, S = 106.7,
+      cp = { a = 70.208, b = 98.742e-3 }, V = 45.94,
+      source = NBS .. "; " .. KELLEY .. " (16.78 + 23.6e-3 T cal); V " .. RH95, quality = "high",
+    },
+    {
+      formula = "CaSO4*2H2O(s,gypsum)", model = "cp",
+      G = -1797.28, H = -2022.63, S = 194.1,
+      cp = { a = 91.379, b = 317.98e-3 }, V = 74.69,
+      T_range = { 273.15, 373.15 },
+      source = NBS .. "; " .. KELLEY .. " (21.84 + 76.0e-3 T cal, recall medium); V " .. RH95, quality = "high",
+      note = "log Ksp with NBS ions -4.36, with CODATA ions -4.59 (Nordstrom et al. 1990: -4.58); the gap is NBS dfG(Ca^2+)",
+    },
+    {
+      formula = "MgSO4*7H2O(s,epsomite)", model = "cp",
+      G = -2871.5, H = -3388.71, S = 372,
+      source = NBS, quality = "medium",
+      note = "Cp not recalled (loader takes 0; use near 25 C only)",
+    },
+    {
+      formula = "CuSO4(s,chalcocyanite)", model = "cp",
+      G = -661.8, H = -771.36, S = 109, cp = { a = 100.0 },
+      source = NBS, quality = "medium", note = "Cp held at its 25 C value",
+    },
+    {
+      formula = "CuSO4*5H2O(s,chalcanthite)", model = "cp",
+      G = -1879.745, H = -2279.65, S = 300.4, cp = { a = 280 },
+      source = NBS, quality = "high", note = "Cp held at its 25 C value",
+    },
+    {
+      formula = "Cu4(SO4)(OH)6(s,brochantite)", model = "logk",
+      reaction = "Cu4(SO4)(OH)6(s,brochantite) + 6 H^+ = 4 Cu^2+ + SO4^2- + 6 H2O(l)", logK = 15.34,
+      source = "from memory of compiled mineral solubility constants (attribution not recalled)",
+      quality = "low",
+      note = "independently recalled dfG of brochantite about -1818 kJ/mol reproduces this log K with NBS ions; the common green patina of copper in sulfate-bearing air; dH not recalled",
+    },
+    {
+      formula = "ZnSO4(s,zincosite)", model = "cp",
+      G = -871.5, H = -982.8, S = 110.5, cp = { a = 99.2 },
+      source = NBS, quality = "medium", note = "Cp held at its 25 C value",
+    },
+    {
+      formula = "ZnSO4*7H2O(s,goslarite)", model = "cp",
+      G = -2562.67, H = -3077.75, S = 388.7, cp = { a = 380 },
+      source = NBS, quality = "medium", note = "Cp held at its 25 C value",
+    },
+    {
+      formula = "FeSO4*7H2O(s,melanterite)", model = "logk",
+      reaction = "FeSO4*7H2O(s,melanterite) = Fe^2+ + SO4^2- + 7 H2O(l)", logK = -2.209, dH = 4.91, units = KCAL,
+      source = N90, quality = "medium",
+      note = "written by log K because NBS dfG(melanterite) -2509.87 with NBS dfG(Fe^2+) -78.90 gives -4.65, far from the measured solubility (see docs/data/ligands.md on Fe^2+)",
+    },
+    {
+      formula = "PbSO4(s,anglesite)", model = "cp",
+      G = -813.14, H = -919.94, S = 148.57, cp = { a = 103.207 }, V = 47.95,
+      source = NBS .. "; V " .. RH95, quality = "high", note = "Cp held at its 25 C value",
+    },
+    {
+      formula = "Ag2SO4(s)", model = "cp",
+      G = -618.41, H = -715.88, S = 200.4, cp = { a = 131.38 },
+      source = NBS, quality = "high", note = "Cp held at its 25 C value",
+    },
+    {
+      formula = "NiSO4*6H2O(s,retgersite)", model = "cp",
+      G = -2224.95, H = -2682.8, S = 334.35,
+      source = NBS .. " (alpha, tetragonal)", quality = "low",
+      note = "S recalled weakly; Cp not recalled (loader takes 0; use near 25 C only)",
+    },
+    {
+      formula = "Na2SO4(s,thenardite)", model = "cp",
+      G = -1270.16, H = -1387.08, S = 149.58, cp = { a = 128.2 },
+      source = NBS, quality = "medium",
+      note = "recalled dfG/dfH/S close the cycle only to 0.8 kJ/mol; Cp held at its 25 C value",
+    },
+    {
+      formula = "Na2SO4*10H2O(s,mirabilite)", model = "cp",
+      G = -3646.85, H = -4327.26, S = 592.0,
+      T_range = { 273.15, 305.5 },
+      source = NBS, quality = "medium",
+      note = "recalled values close the cycle only to 0.9 kJ/mol; dehydrates at 32.4 C; Cp not recalled",
+    },
+    {
+      formula = "K2SO4(s,arcanite)", model = "logk",
+      reaction = "K2SO4(s,arcanite) = 2 K^+ + SO4^2-", logK = -1.776,
+      source = "from memory of compiled mineral solubility constants (USGS compilations after Nordstrom et al. 1990; primary paper not recalled)",
+      quality = "medium",
+      note = "written by log K: NBS 1982 arcanite (-1321.37, -1437.79, 175.56; cycle off by 1.3 kJ/mol) is consistent with NBS K^+ (-283.27) but gives -2.10 with SH88/CODATA K^+ (-282.5), which the K file is expected to carry; dH not recalled",
+    },
+    {
+      formula = "KFe3(SO4)2(OH)6(s,jarosite)", model = "logk",
+      reaction = "KFe3(SO4)2(OH)6(s,jarosite) + 6 H^+ = K^+ + 3 Fe^3+ + 2 SO4^2- + 6 H2O(l)", logK = -9.21, dH = -31.28, units = KCAL,
+      source = N90, quality = "medium",
+    },
+    {
+      formula = "KAl3(SO4)2(OH)6(s,alunite)", model = "logk",
+      reaction = "KAl3(SO4)2(OH)6(s,alunite) + 6 H^+ = K^+ + 3 Al^3+ + 2 SO4^2- + 6 H2O(l)", logK = -1.4, dH = -50.25, units = KCAL,
+      source = N90, quality = "medium",
+    },
+  },
+}

@@ -1,0 +1,484 @@
+/* test_data.c - element definition files: loading with unit conversion,
+ * checks (each bad fixture gives its file:line message), consistency check
+ * catching a mistyped sign and a kJ/cal mix-up, user overrides, listing.
+ *
+ * Expected numbers are the fixtures' printed values times exact factors:
+ * 1 kJ = 1000 J, 1 cal = 4.184 J (thermochemical calorie, exact), the HKF
+ * printed scaling of Shock and Helgeson 1988 as tabulated in
+ * ../shared/reference/hkf/README.md (a2 printed -2.285 -> -228.5 cal/mol),
+ * 1 cm3 bar = 0.1 J. */
+#include "px_test.h"
+#include "core/status.h"
+#include "data/data.h"
+#include <stdlib.h>
+#include <string.h>
+
+#define FIX(name) PHLOX_SOURCE_DIR "/tests/fixtures/elements/" name
+
+static void dump(const px_data_problems *p)
+{
+    for (size_t i = 0; i < px_data_problems_count(p); i++) {
+        char buf[512];
+        px_data_problem_format(px_data_problems_get(p, i), buf, sizeof buf);
+        print_message("  %s\n", buf);
+    }
+}
+
+/* true if some rendered problem contains every one of the NULL-ended needles */
+static int has(const px_data_problems *p, ...)
+{
+    for (size_t i = 0; i < px_data_problems_count(p); i++) {
+        char buf[512];
+        px_data_problem_format(px_data_problems_get(p, i), buf, sizeof buf);
+        va_list ap;
+        va_start(ap, p);
+        int all = 1;
+        for (const char *n = va_arg(ap, const char *); n; n = va_arg(ap, const char *))
+            if (!strstr(buf, n)) all = 0;
+        va_end(ap);
+        if (all) return 1;
+    }
+    dump(p);
+    return 0;
+}
+
+static void test_good_zn_si_conversion(void **state)
+{
+    (void)state;
+    px_db *db = px_db_new();
+    px_data_problems *p = px_data_problems_new();
+    int st = px_data_load_file(db, FIX("good_Zn.lua"), NULL, p);
+    if (st != PX_OK) dump(p);
+    assert_int_equal(st, PX_OK);
+    assert_int_equal(px_data_problems_errors(p), 0);
+    assert_int_equal(px_db_count(db), 3);
+
+    const px_species *zn2 = px_db_find(db, "Zn^2+");
+    assert_non_null(zn2);
+    assert_close(zn2->dGf, -147203.0, 0, 1e-6); /* -147.203 kJ x 1000 */
+    assert_close(zn2->dHf, -153390.0, 0, 1e-6);
+    assert_close(zn2->S, -109.8, 0, 1e-12);
+    assert_int_equal(zn2->model, PX_MODEL_HKF);
+    assert_int_equal(zn2->f.charge, 2);
+    assert_true(zn2->estimated);
+    assert_int_equal(zn2->line, 22); /* the `{` of its species table */
+    assert_non_null(strstr(zn2->file, "good_Zn.lua"));
+    assert_non_null(strstr(zn2->source, "CODATA"));
+
+    const px_species *zn = px_db_find(db, "Zn(s)");
+    assert_non_null(zn);
+    assert_int_equal(zn->model, PX_MODEL_CP);
+    assert_close(zn->cp.a, 25.40, 0, 1e-12);
+    assert_close(zn->cp.V, 0.916, 1e-12, 0); /* 9.16 cm3/mol x 0.1 J/(bar cm3) */
+    assert_close(zn->Tmin, 273.15, 0, 0);
+    assert_close(zn->Tmax, 692.68, 0, 0);
+    assert_string_equal(zn->quality, "high");
+    assert_int_equal(zn->line, 14);
+
+    const px_species *zno = px_db_find(db, "ZnO(s)");
+    assert_non_null(zno);
+    /* no T_range: the default is phlox's water range */
+    assert_close(zno->Tmin, 273.15, 0, 0);
+    assert_close(zno->Tmax, 623.15, 0, 0);
+    assert_int_equal(zno->line, 28);
+
+    /* warning: Zn^2+ estimate without a volume */
+    assert_true(px_data_problems_warnings(p) >= 1);
+    assert_true(has(p, "good_Zn.lua:25: Zn^2+: warning: estimate.V: no volume", NULL));
+
+    /* loading the same file again: every species is a duplicate, nothing changes */
+    px_data_problems_clear(p);
+    assert_int_equal(px_data_load_file(db, FIX("good_Zn.lua"), NULL, p), PX_EDATA);
+    assert_true(has(p, "good_Zn.lua:15: Zn(s): formula: already defined in ", NULL));
+    assert_int_equal(px_db_count(db), 3);
+    px_data_problems_free(p);
+    px_db_free(db);
+}
+
+static void test_hkf_printed_scaling_cal(void **state)
+{
+    (void)state;
+    px_db *db = px_db_new();
+    px_data_problems *p = px_data_problems_new();
+    int st = px_data_load_file(db, FIX("good_Na.lua"), NULL, p);
+    if (st != PX_OK) dump(p);
+    assert_int_equal(st, PX_OK);
+    const px_species *na = px_db_find(db, "Na^+");
+    assert_non_null(na);
+    const double cal = 4.184; /* J, thermochemical calorie (exact) */
+    assert_close(na->dGf, -62591 * cal, 1e-12, 0);
+    assert_close(na->dHf, -57433 * cal, 1e-12, 0);
+    assert_close(na->S, 13.96 * cal, 1e-12, 0);
+    /* SH88 printed scaling (reference/hkf/README.md): a1 x 10, a2 x 1e-2,
+     * a3, a4 x 1e-4, c1, c2 x 1e-4, omega x 1e-5 */
+    assert_close(na->hkf.a1, 0.1839 * cal, 1e-12, 0);
+    assert_close(na->hkf.a2, -228.5 * cal, 1e-12, 0); /* = -956.044 J/mol */
+    assert_close(na->hkf.a2, -956.044, 1e-12, 0);
+    assert_close(na->hkf.a3, 3.256 * cal, 1e-12, 0);
+    assert_close(na->hkf.a4, -27260 * cal, 1e-12, 0);
+    assert_close(na->hkf.c1, 18.18 * cal, 1e-12, 0);
+    assert_close(na->hkf.c2, -29810 * cal, 1e-12, 0);
+    assert_close(na->hkf.omega, 33060 * cal, 1e-12, 0);
+    assert_false(na->estimated);
+    px_data_problems_free(p);
+    px_db_free(db);
+}
+
+static void test_species_units_override_kcal(void **state)
+{
+    (void)state;
+    /* SH88 prints Zn^2+ as -35200 cal/mol, -36660 cal/mol, -26.2 cal/(mol K)
+     * (reference/hkf/hkf_parameters.csv, from memory of SH88) */
+    const char *src = "return { element = 'Zn', units = { energy = 'kJ' }, species = {\n"
+                      "  { formula = 'Zn^2+', model = 'hkf',\n"
+                      "    units = { energy = 'kcal', entropy = 'cal' },\n"
+                      "    G = -35.2, H = -36.66, S = -26.2, estimate = { Cp = 46, V = -25 },\n"
+                      "    source = 'from memory of Shock and Helgeson 1988' } } }\n";
+    px_db *db = px_db_new();
+    px_data_problems *p = px_data_problems_new();
+    int st = px_data_load_buffer(db, src, strlen(src), "inline.lua", NULL, p);
+    if (st != PX_OK) dump(p);
+    assert_int_equal(st, PX_OK);
+    const px_species *z = px_db_find(db, "Zn^2+");
+    assert_close(z->dGf, -35200 * 4.184, 1e-12, 0);
+    assert_close(z->dHf, -36660 * 4.184, 1e-12, 0);
+    assert_close(z->S, -26.2 * 4.184, 1e-12, 0);
+    assert_int_equal(px_data_problems_count(p), 0);
+    px_data_problems_free(p);
+    px_db_free(db);
+}
+
+/* an HKF estimate through the loader, against a species Shock and Helgeson
+ * estimated themselves: Fe^2+ (reference/hkf/hkf_parameters.csv, "from memory
+ * of Shock et al. 1997"; its note: a1/a2/a4 and c2 obey the estimation
+ * correlations).  Published Cp -7.9 cal/(mol K), V -22.2 cm3/mol. */
+static void test_hkf_estimate_fe2(void **state)
+{
+    (void)state;
+    const char *src = "return { element = 'Fe', units = { energy = 'cal', entropy = 'cal' },\n"
+                      "species = { { formula = 'Fe^2+', model = 'hkf',\n"
+                      "G = -21870, H = -22050, S = -25.30,\n"
+                      "estimate = { Cp = -7.9 * 4.184, V = -22.2 },\n"
+                      "source = 'from memory of Shock et al. 1997' } } }\n";
+    px_db *db = px_db_new();
+    px_data_problems *p = px_data_problems_new();
+    int st = px_data_load_buffer(db, src, strlen(src), "fe.lua", NULL, p);
+    if (st != PX_OK) dump(p);
+    assert_int_equal(st, PX_OK);
+    const px_species *fe = px_db_find(db, "Fe^2+");
+    assert_non_null(fe);
+    assert_true(fe->estimated);
+    const double cal = 4.184;
+    print_message("Fe^2+ estimate (printed scaling): a1 %.4f a2 %.4f a4 %.4f c2 %.4f omega %.4f\n",
+                  fe->hkf.a1 / cal * 10, fe->hkf.a2 / cal / 100, fe->hkf.a4 / cal / 1e4,
+                  fe->hkf.c2 / cal / 1e4, fe->hkf.omega / cal / 1e5);
+    /* c2 x 1e-4 = 0.2037 Cp - 3.0346 (SH88 correlation): -4.6438 vs printed -4.6437 */
+    assert_close(fe->hkf.c2, -4.6437e4 * cal, 2e-4, 0);
+    px_data_problems_free(p);
+    px_db_free(db);
+}
+
+static void test_logk_species(void **state)
+{
+    (void)state;
+    px_db *db = px_db_new();
+    px_data_problems *p = px_data_problems_new();
+    assert_int_equal(px_data_load_file(db, FIX("good_Zn.lua"), NULL, p), PX_OK);
+    px_data_problems_clear(p);
+    int st = px_data_load_file(db, FIX("good_Cl.lua"), NULL, p);
+    if (st != PX_OK) dump(p);
+    assert_int_equal(st, PX_OK);
+    const px_species *c = px_db_find(db, "ZnCl^+");
+    assert_non_null(c);
+    assert_int_equal(c->model, PX_MODEL_LOGK);
+    assert_close(c->logk.logK25, 0.43, 0, 0);
+    assert_true(isnan(c->logk.dH));
+    assert_true(isnan(c->dGf));
+    assert_string_equal(c->logk.reaction, "Zn^2+ + Cl^- = ZnCl^+");
+    assert_int_equal(px_data_problems_count(p), 0); /* Zn^2+ is known: no warning */
+    px_data_problems_free(p);
+    px_db_free(db);
+}
+
+/* thermo resolves G of a logk species as (dG - others) / nu_self: any side,
+ * any coefficient; a species absent from its own reaction is an error */
+static void test_logk_reaction_forms(void **state)
+{
+    (void)state;
+    const char *ok = "return { element = 'Zn', species = {\n"
+                     "{ formula = 'Zn^2+', model = 'logk', reaction = 'Zn(s) + 2 H^+ = Zn^2+ + H2(g)',"
+                     " logK = 25.79, source = 's' },\n"
+                     "{ formula = 'ZnO(s)', model = 'logk', reaction = '2 ZnO(s) + 4 H^+ = 2 Zn^2+ + 2 H2O(l)',"
+                     " logK = 22.4, source = 's' } } }\n";
+    px_data_problems *p = px_data_problems_new();
+    int st = px_data_check_buffer(NULL, ok, strlen(ok), "r.lua", NULL, p);
+    if (st != PX_OK) dump(p);
+    assert_int_equal(st, PX_OK);
+    const char *bad = "return { element = 'Zn', species = {\n"
+                      "{ formula = 'ZnO(s)', model = 'logk', reaction = 'Zn(s) + 2 H^+ = Zn^2+ + H2(g)',"
+                      " logK = 25.79, source = 's' } } }\n";
+    px_data_problems_clear(p);
+    assert_int_equal(px_data_check_buffer(NULL, bad, strlen(bad), "r.lua", NULL, p), PX_EDATA);
+    assert_true(has(p, "r.lua:2: ZnO(s): reaction: the species ZnO(s) does not appear in its own reaction", NULL));
+    px_data_problems_free(p);
+}
+
+static void test_element_filter(void **state)
+{
+    (void)state;
+    px_db *db = px_db_new();
+    px_data_options o = px_data_options_default();
+    int only_cl[] = {17};
+    o.elements = only_cl;
+    o.n_elements = 1;
+    assert_int_equal(px_data_load_file(db, FIX("good_Cl.lua"), &o, NULL), PX_OK);
+    assert_int_equal(px_db_count(db), 1); /* ZnCl^+ skipped: zinc not loaded */
+    assert_null(px_db_find(db, "ZnCl^+"));
+    px_db_free(db);
+}
+
+typedef struct bad_case {
+    const char *file;
+    int status;
+    const char *needle1, *needle2;
+} bad_case;
+
+static void test_bad_fixtures(void **state)
+{
+    (void)state;
+    static const bad_case cases[] = {
+        {"bad_syntax.lua", PX_EPARSE, "bad_syntax.lua:8: syntax error: ", "'}' expected"},
+        {"bad_unknown_field.lua", PX_EDATA,
+         "bad_unknown_field.lua:9: ZnCl^+: logk: unknown field 'logk' (did you mean 'logK'?)", NULL},
+        {"bad_unknown_field.lua", PX_EDATA, "bad_unknown_field.lua:5: ZnCl^+: logK: missing", NULL},
+        {"bad_missing.lua", PX_EDATA, "bad_missing.lua:5: ZnO(s): source: missing required field", NULL},
+        {"bad_missing.lua", PX_EDATA, "bad_missing.lua:5: ZnO(s): S: missing required field 'S'", NULL},
+        {"bad_type.lua", PX_EDATA, "bad_type.lua:7: ZnO(s): G: expected a number, got string", NULL},
+        {"bad_unit.lua", PX_EDATA, "bad_unit.lua:4: units.energy: unknown energy unit 'kj'", NULL},
+        {"bad_formula.lua", PX_EDATA, "bad_formula.lua:6: Zn^2: formula: malformed formula", NULL},
+        {"bad_model.lua", PX_EDATA, "bad_model.lua:7: ZnO(s): model: unknown model 'polynomial'", NULL},
+        {"bad_duplicate.lua", PX_EDATA,
+         "bad_duplicate.lua:10: Zn(s): formula: defined twice in this file (first at line 5)", NULL},
+        {"bad_global.lua", PX_EDATA, "bad_global.lua:2: undefined global 'os'", NULL},
+        {"bad_loop.lua", PX_ELIMIT, "bad_loop.lua:", "instruction budget exceeded"},
+        {"bad_memory.lua", PX_ELIMIT, "bad_memory.lua:", "memory limit exceeded"},
+        {"bad_sign.lua", PX_EDATA, "bad_sign.lua:8: Zn^2+: G: dfG = -147.203 kJ/mol",
+         "(it closes if S had the opposite sign)"},
+        {"bad_kjcal.lua", PX_EDATA, "bad_kjcal.lua:8: ZnO(s): G: dfG = -320.479 kJ/mol",
+         "(it closes if H were multiplied by 4.184: a cal/J or kcal/kJ mix-up?)"},
+        {"bad_membership.lua", PX_EDATA,
+         "bad_membership.lua:5: CuO(s): formula: does not contain Zn, the element of this file", NULL},
+        {"bad_balance.lua", PX_EDATA, "bad_balance.lua:8: ZnCl^+: reaction: does not balance",
+         "Cl: left 2, right 1"},
+        {"bad_hkf.lua", PX_EDATA, "bad_hkf.lua:8: Na^+: hkf.omega: missing HKF parameter 'omega'",
+         NULL},
+    };
+    for (size_t i = 0; i < sizeof cases / sizeof cases[0]; i++) {
+        const bad_case *c = &cases[i];
+        char path[512];
+        snprintf(path, sizeof path, "%s/tests/fixtures/elements/%s", PHLOX_SOURCE_DIR, c->file);
+        px_db *db = px_db_new();
+        px_data_problems *p = px_data_problems_new();
+        int st = px_data_load_file(db, path, NULL, p);
+        print_message("%s -> %s\n", c->file, px_status_name(st));
+        assert_int_equal(st, c->status);
+        assert_true(px_data_problems_errors(p) >= 1);
+        assert_true(has(p, c->needle1, c->needle2, NULL));
+        assert_int_equal(px_db_count(db), 0); /* all or nothing */
+        /* check gives the same verdict without a database */
+        px_data_problems_clear(p);
+        assert_int_equal(px_data_check_file(NULL, path, NULL, p), c->status);
+        assert_true(has(p, c->needle1, c->needle2, NULL));
+        px_data_problems_free(p);
+        px_db_free(db);
+    }
+}
+
+/* the consistency check alone, on the CODATA Zn^2+ row with one slip each */
+static void test_consistency_slips(void **state)
+{
+    (void)state;
+    static const struct {
+        const char *GHS, *hint;
+    } cases[] = {
+        {"G = -147.203, H = -153.39, S = -109.8", NULL},                  /* CODATA: closes */
+        {"G = 147.203, H = -153.39, S = -109.8", "G had the opposite sign"},
+        {"G = -147.203, H = 153.39, S = -109.8", "H had the opposite sign"},
+        {"G = -147203, H = -153.39, S = -109.8", "G were divided by 1000"}, /* J in a kJ file */
+        {"G = -35.182, H = -153.39, S = -109.8", "G were multiplied by 4.184"}, /* kcal */
+        {"G = -147.203, H = -153.39, S = -26.243", "S were multiplied by 4.184"}, /* cal/K */
+    };
+    for (size_t i = 0; i < sizeof cases / sizeof cases[0]; i++) {
+        char src[512];
+        snprintf(src, sizeof src,
+                 "return { element = 'Zn', species = { { formula = 'Zn^2+', model = 'hkf',\n"
+                 "%s, estimate = { Cp = 46, V = -25 }, source = 'test' } } }\n",
+                 cases[i].GHS);
+        px_data_problems *p = px_data_problems_new();
+        int st = px_data_check_buffer(NULL, src, strlen(src), "slip.lua", NULL, p);
+        if (!cases[i].hint) {
+            if (st != PX_OK) dump(p);
+            assert_int_equal(st, PX_OK);
+        } else {
+            assert_int_equal(st, PX_EDATA);
+            assert_true(has(p, "slip.lua:2: Zn^2+: G: dfG = ", cases[i].hint, NULL));
+        }
+        px_data_problems_free(p);
+    }
+     /* the tolerance is an option: 1.5 kJ/mol by default, a 2 kJ/mol slip fails
+     */
+    const char *near = "return { element = 'Zn', species = { { formula = 'Zn^2+', model = 'hkf',\n"
+                       "G = -145.2, H = -153.39, S = -109.8, estimate = { Cp = 46, V = -25 },"
+                       " source = 'test' } } }\n";
+    px_data_problems *p = px_data_problems_new();
+    assert_int_equal(px_data_check_buffer(NULL, near, strlen(near), "n.lua", NULL, p), PX_EDATA);
+    assert_true(has(p, "mismatch 2.00 kJ/mol > 1.50 kJ/mol", NULL));
+    /* a declared known mismatch is a warning up to 5 kJ/mol, never beyond */
+    const char *known = "return { element = 'Zn', species = { { formula = 'Zn^2+', model = 'hkf',\n"
+                        "G = -145.2, H = -153.39, S = -109.8, estimate = { Cp = 46, V = -25 },"
+                        " known_mismatch = 'test', source = 'test' } } }\n";
+    px_data_problems_clear(p);
+    assert_int_equal(px_data_check_buffer(NULL, known, strlen(known), "k.lua", NULL, p), PX_OK);
+    assert_true(has(p, "k.lua:2: Zn^2+: warning: G: dfG - (dfH - T dfS) = 2.00 kJ/mol, accepted", NULL));
+    const char *sign = "return { element = 'Zn', species = { { formula = 'Zn^2+', model = 'hkf',\n"
+                       "G = -147.203, H = -153.39, S = 109.8, estimate = { Cp = 46, V = -25 },"
+                       " known_mismatch = 'test', source = 'test' } } }\n";
+    px_data_problems_clear(p);
+    assert_int_equal(px_data_check_buffer(NULL, sign, strlen(sign), "s.lua", NULL, p), PX_EDATA);
+    assert_true(has(p, "S had the opposite sign", NULL));
+    px_data_options o = px_data_options_default();
+    o.consistency_tol = 2500;
+    px_data_problems_clear(p);
+    assert_int_equal(px_data_check_buffer(NULL, near, strlen(near), "n.lua", &o, p), PX_OK);
+    px_data_problems_free(p);
+}
+
+static void test_user_override(void **state)
+{
+    (void)state;
+    px_db *db = px_db_new();
+    px_data_problems *p = px_data_problems_new();
+    assert_int_equal(px_data_load_file(db, FIX("good_Zn.lua"), NULL, p), PX_OK);
+    assert_int_equal(px_db_count(db), 3);
+    /* a plain load refuses the override file (no element, exclude) */
+    px_data_problems_clear(p);
+    assert_int_equal(px_data_load_file(db, FIX("user_override.lua"), NULL, p), PX_EDATA);
+    assert_true(has(p, "user_override.lua:4: exclude: 'exclude' is only allowed in a user override file", NULL));
+    assert_true(has(p, "element: missing required field 'element'", NULL));
+    px_data_problems_clear(p);
+    int st = px_data_merge_user_file(db, FIX("user_override.lua"), NULL, p);
+    if (st != PX_OK) dump(p);
+    assert_int_equal(st, PX_OK);
+    assert_int_equal(px_db_count(db), 2);
+    assert_null(px_db_find(db, "ZnO(s)"));
+    const px_species *z = px_db_find(db, "Zn^2+");
+    assert_close(z->dGf, -147060.0, 0, 1e-6); /* replaced by the NBS value */
+    assert_non_null(strstr(z->file, "user_override.lua"));
+    assert_int_equal(z->line, 6);
+    /* excluding something absent is a warning, not an error */
+    const char *src = "return { exclude = { 'ZnO(s)' } }";
+    px_data_problems_clear(p);
+    assert_int_equal(px_data_merge_user_buffer(db, src, strlen(src), "u2.lua", NULL, p), PX_OK);
+    assert_true(has(p, "u2.lua:1: ZnO(s): warning: exclude: not in the database", NULL));
+    px_data_problems_free(p);
+    px_db_free(db);
+}
+
+static void test_check_files(void **state)
+{
+    (void)state;
+    px_data_problems *p = px_data_problems_new();
+    const char *both[] = {FIX("good_Zn.lua"), FIX("good_Cl.lua")};
+    assert_int_equal(px_data_check_files(both, 2, NULL, p), PX_OK);
+    assert_int_equal(px_data_problems_errors(p), 0);
+    /* Cl.lua alone: Zn^2+ is unknown, a warning */
+    px_data_problems_clear(p);
+    const char *cl[] = {FIX("good_Cl.lua")};
+    assert_int_equal(px_data_check_files(cl, 1, NULL, p), PX_OK);
+    assert_true(has(p, "good_Cl.lua:16: ZnCl^+: warning: reaction: 'Zn^2+' is defined neither", NULL));
+    /* a bad file among good ones */
+    px_data_problems_clear(p);
+    const char *mix[] = {FIX("good_Zn.lua"), FIX("bad_sign.lua"), FIX("nonexistent.lua")};
+    assert_int_equal(px_data_check_files(mix, 3, NULL, p), PX_EDATA);
+    assert_true(has(p, "bad_sign.lua:8: Zn^2+: G: ", NULL));
+    assert_true(has(p, "nonexistent.lua: cannot open the file", NULL));
+    px_data_problems_free(p);
+}
+
+static void test_list(void **state)
+{
+    (void)state;
+    px_db *db = px_db_new();
+    assert_int_equal(px_data_load_file(db, FIX("good_Zn.lua"), NULL, NULL), PX_OK);
+    assert_int_equal(px_data_load_file(db, FIX("good_Cl.lua"), NULL, NULL), PX_OK);
+    FILE *out = tmpfile();
+    assert_non_null(out);
+    assert_int_equal(px_data_list_write(db, "Zn", out), 4);
+    assert_int_equal(px_data_list_write(db, "Cl", out), 2);
+    assert_int_equal(px_data_list_write(db, NULL, out), 5);
+    rewind(out);
+    char line[512];
+    assert_non_null(fgets(line, sizeof line, out));
+    assert_non_null(strstr(line, "Zn(s)"));
+    assert_non_null(strstr(line, "good_Zn.lua:14"));
+    fclose(out);
+    px_db_free(db);
+}
+
+/* line numbers when species are built by a helper function */
+static void test_lines_helper_function(void **state)
+{
+    (void)state;
+    const char *src = "-- species made by a helper\n"                      /* 1 */
+                      "local function solid(f, G, H, S, a)\n"              /* 2 */
+                      "  return { formula = f, model = 'cp', G = G, H = H, S = S,\n"
+                      "           cp = { a = a }, source = 'from memory of Wagman et al. 1982' }\n"
+                      "end\n"                                               /* 5 */
+                      "local list = {}\n"                                   /* 6 */
+                      "table.insert(list, solid('Zn(s)', 0, 0, 41.63, 25.40))\n" /* 7 */
+                      "table.insert(list, solid('ZnO(s)', -320.479, -350.46, -43.65, 40.25))\n"
+                      "return { element = 'Zn', species = list }\n";
+    px_data_problems *p = px_data_problems_new();
+    assert_int_equal(px_data_check_buffer(NULL, src, strlen(src), "h.lua", NULL, p), PX_EDATA);
+    /* the string literal's line is used */
+    assert_true(has(p, "h.lua:8: ZnO(s): S: the third-law entropy of a solid", NULL));
+    px_data_problems_free(p);
+}
+
+static void test_problem_format(void **state)
+{
+    (void)state;
+    px_data_problem pr = {PX_DATA_WARNING, "Zn.lua", 12, "ZnO(s)", "cp", "no heat capacity"};
+    char buf[128];
+    int n = px_data_problem_format(&pr, buf, sizeof buf);
+    assert_string_equal(buf, "Zn.lua:12: ZnO(s): warning: cp: no heat capacity");
+    assert_int_equal(n, (int)strlen(buf));
+    px_data_problem pr2 = {PX_DATA_ERROR, "x.lua", 0, "", "", "cannot open the file"};
+    px_data_problem_format(&pr2, buf, sizeof buf);
+    assert_string_equal(buf, "x.lua: cannot open the file");
+    /* truncation is snprintf-like */
+    char small[8];
+    assert_int_equal(px_data_problem_format(&pr, small, sizeof small), n);
+    assert_string_equal(small, "Zn.lua:");
+}
+
+int main(void)
+{
+    const struct CMUnitTest tests[] = {
+        cmocka_unit_test(test_good_zn_si_conversion),
+        cmocka_unit_test(test_hkf_printed_scaling_cal),
+        cmocka_unit_test(test_species_units_override_kcal),
+        cmocka_unit_test(test_hkf_estimate_fe2),
+        cmocka_unit_test(test_logk_species),
+        cmocka_unit_test(test_logk_reaction_forms),
+        cmocka_unit_test(test_element_filter),
+        cmocka_unit_test(test_bad_fixtures),
+        cmocka_unit_test(test_consistency_slips),
+        cmocka_unit_test(test_user_override),
+        cmocka_unit_test(test_check_files),
+        cmocka_unit_test(test_list),
+        cmocka_unit_test(test_lines_helper_function),
+        cmocka_unit_test(test_problem_format),
+    };
+    return cmocka_run_group_tests(tests, NULL, NULL);
+}
