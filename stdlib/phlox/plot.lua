@@ -400,7 +400,7 @@ local function draw_neutral(fig, panel, map, win, place)
   fig:line(panel, { n, n }, { win.y0, win.y1 }, palette.neutral, LINE_NEUTRAL, "dotted")
   local t = fmt_T(celsius(map))
   local label = ("neutral pH %.2f%s"):format(n, t and (" at " .. t) or "")
-  local dx = 0.01 * (win.x1 - win.x0)
+  local dx = 0.018 * (win.x1 - win.x0)
   local x, y = n + dx, win.y0 + 0.02 * (win.y1 - win.y0)
   if place then   -- right or left of the line, at the foot or the top
     local tw = core.text_width(label, SMALL_TEXT) / place.unit
@@ -409,9 +409,9 @@ local function draw_neutral(fig, panel, map, win, place)
     for _, yy in ipairs({ win.y0 + 0.02 * (win.y1 - win.y0), win.y1 - 0.06 * (win.y1 - win.y0) }) do
       local fx, fy = place.to_frame(n, yy)
       local x_end = place.to_frame(win.x1, yy)
-      if fx + 0.01 + tw < x_end then cands[#cands + 1] = { fx + 0.01, fy, tw, th, x = n + dx, y = yy } end
-      if fx - 0.01 - tw > 0 then
-        cands[#cands + 1] = { fx - 0.01 - tw, fy, tw, th, x = n - dx - tw * (win.x1 - win.x0) / x_end, y = yy }
+      if fx + 0.02 + tw < x_end then cands[#cands + 1] = { fx + 0.02, fy, tw, th, x = n + dx, y = yy } end
+      if fx - 0.02 - tw > 0 then
+        cands[#cands + 1] = { fx - 0.02 - tw, fy, tw, th, x = n - dx - tw * (win.x1 - win.x0) / x_end, y = yy }
       end
     end
     local c = clearest(cands, place.poles)
