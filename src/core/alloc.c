@@ -13,8 +13,9 @@ void *px_alloc(const px_allocator *a, size_t size)
 void *px_calloc(const px_allocator *a, size_t n, size_t size)
 {
     if (size != 0 && n > SIZE_MAX / size) return NULL;
-    void *p = px_alloc(a, n * size);
-    if (p) memset(p, 0, n * size ? n * size : 1);
+    size_t total = n * size;
+    void *p = px_alloc(a, total);
+    if (p && total > 0) memset(p, 0, total);
     return p;
 }
 

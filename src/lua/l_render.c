@@ -1,0 +1,263 @@
+/* l_render.c - figures for Lua: core.figure(w, h, rows, cols) returns a
+ * phlox.Figure userdata whose methods add panels' content and save it.
+ * Panels are 1-based here, as Lua users expect. */
+#include "core/status.h"
+#include "lua/bindings.h"
+#include "render/render.h"
+#include <lauxlib.h>
+#include <math.h>
+#include <stdlib.h>
+#include <string.h>
+
+#define FIGURE_MT "phlox.Figure"
+
+typedef struct {
+    px_figure *fig; /* NULL once closed */
+} lfigure;
+
+static px_figure *checkfig(lua_State *L)
+{
+    lfigure *u = luaL_checkudata(L, 1, FIGURE_MT);
+    if (!u->fig) luaL_error(L, "attempt to use a closed figure");
+    return u->fig;
+}
+
+static int checkpanel(lua_State *L, int arg)
+{
+    return (int)luaL_checkinteger(L, arg) - 1;
+}
+
+static int status_error(lua_State *L, int st, const char *what)
+{
+    if (st == PX_OK) return 0;
+    return luaL_error(L, "%s: %s", what, px_strerror(st));
+}
+
+static px_rgba checkcolor(lua_State *L, int arg)
+{
+    px_rgba c = {0, 0, 0, 1};
+    luaL_checktype(L, arg, LUA_TTABLE);
+    double *v[4] = {&c.r, &c.g, &c.b, &c.a};
+    for (int i = 0; i < 4; i++) {
+        int t = lua_rawgeti(L, arg, i + 1);
+        if (t == LUA_TNUMBER) *v[i] = lua_tonumber(L, -1);
+        else if (!(t == LUA_TNIL && i == 3)) luaL_argerror(L, arg, "colour must be {r, g, b [, a]} in 0..1");
+        lua_pop(L, 1);
+    }
+    return c;
+}
+
+/* Two equal-length number arrays -> malloc'd copies (in a userdata box so
+ * an error in between leaks nothing). */
+static size_t checkpoints(lua_State *L, int ax, int ay, double **x, double **y)
+{
+    luaL_checktype(L, ax, LUA_TTABLE);
+    luaL_checktype(L, ay, LUA_TTABLE);
+    lua_Integer n = luaL_len(L, ax);
+    luaL_argcheck(L, luaL_len(L, ay) == n, ay, "x and y must have the same length");
+    /* the caller lua_settop()s first so this box sits above all arguments */
+    double *buf = lua_newuserdatauv(L, 2 * (size_t)(n > 0 ? n : 1) * sizeof(double), 0);
+    for (lua_Integer i = 1; i <= n; i++) {
+        lua_rawgeti(L, ax, i);
+        lua_rawgeti(L, ay, i);
+        if (!lua_isnumber(L, -2) || !lua_isnumber(L, -1)) luaL_argerror(L, ax, "points must be numbers");
+        buf[i - 1] = lua_tonumber(L, -2);
+        buf[n + i - 1] = lua_tonumber(L, -1);
+        lua_pop(L, 2);
+    }
+    *x = buf;
+    *y = buf + n;
+    return (size_t)n; /* the box stays on the stack until the call returns */
+}
+
+static int l_figure(lua_State *L)
+{
+    double w = luaL_checknumber(L, 1), h = luaL_checknumber(L, 2);
+    int rows = (int)luaL_optinteger(L, 3, 1), cols = (int)luaL_optinteger(L, 4, 1);
+    lfigure *u = lua_newuserdatauv(L, sizeof *u, 0);
+    u->fig = NULL; /* closed until the figure exists */
+    luaL_setmetatable(L, FIGURE_MT);
+    u->fig = px_figure_new(w, h, rows, cols);
+    if (!u->fig) return luaL_error(L, "figure: bad size or panel grid (%f x %f, %d x %d)", w, h, rows, cols);
+    return 1;
+}
+
+static int f_axes(lua_State *L)
+{
+    px_figure *f = checkfig(L);
+    int st = px_figure_axes(f, checkpanel(L, 2), luaL_checknumber(L, 3), luaL_checknumber(L, 4),
+                            luaL_checknumber(L, 5), luaL_checknumber(L, 6), lua_toboolean(L, 7),
+                            lua_toboolean(L, 8));
+    status_error(L, st, "figure:axes");
+    return 0;
+}
+
+static int f_titles(lua_State *L)
+{
+    px_figure *f = checkfig(L);
+    int st = px_figure_titles(f, checkpanel(L, 2), luaL_optstring(L, 3, NULL),
+                              luaL_optstring(L, 4, NULL), luaL_optstring(L, 5, NULL));
+    status_error(L, st, "figure:titles");
+    return 0;
+}
+
+static int f_polygon(lua_State *L)
+{
+    px_figure *f = checkfig(L);
+    lua_settop(L, 10); /* the points box goes above every argument */
+    int panel = checkpanel(L, 2);
+    double *x, *y;
+    size_t n = checkpoints(L, 3, 4, &x, &y);
+    px_rgba fill = checkcolor(L, 5), stroke = checkcolor(L, 6);
+    double width = luaL_optnumber(L, 7, 0.6);
+    const char *label = luaL_optstring(L, 8, NULL);
+    double lx = luaL_optnumber(L, 9, NAN), ly = luaL_optnumber(L, 10, NAN);
+    status_error(L, px_figure_polygon(f, panel, x, y, n, fill, stroke, width, label, lx, ly),
+                 "figure:polygon");
+    return 0;
+}
+
+static int f_line(lua_State *L)
+{
+    static const char *const dashes[] = {"solid", "dashed", "dotted", "dashdot", NULL};
+    px_figure *f = checkfig(L);
+    lua_settop(L, 8); /* the points box goes above every argument */
+    int panel = checkpanel(L, 2);
+    double *x, *y;
+    size_t n = checkpoints(L, 3, 4, &x, &y);
+    px_rgba c = checkcolor(L, 5);
+    double width = luaL_optnumber(L, 6, 1.0);
+    int dash = luaL_checkoption(L, 7, "solid", dashes);
+    const char *legend = luaL_optstring(L, 8, NULL);
+    status_error(L, px_figure_line(f, panel, x, y, n, c, width, (px_dash)dash, legend), "figure:line");
+    return 0;
+}
+
+static int f_text(lua_State *L)
+{
+    px_figure *f = checkfig(L);
+    int st = px_figure_text(f, checkpanel(L, 2), luaL_checknumber(L, 3), luaL_checknumber(L, 4),
+                            luaL_checkstring(L, 5), lua_toboolean(L, 6), luaL_optnumber(L, 7, 8.0),
+                            lua_isnoneornil(L, 8) ? (px_rgba){0, 0, 0, 1} : checkcolor(L, 8));
+    status_error(L, st, "figure:text");
+    return 0;
+}
+
+static int f_stamp(lua_State *L)
+{
+    px_figure *f = checkfig(L);
+    status_error(L, px_figure_stamp(f, luaL_checkstring(L, 2)), "figure:stamp");
+    return 0;
+}
+
+static int f_pages(lua_State *L)
+{
+    px_figure *f = checkfig(L);
+    status_error(L, px_figure_page_per_panel(f, lua_toboolean(L, 2)), "figure:pages");
+    return 0;
+}
+
+/* fig:save(path [, dpi]) -> true | nil, message */
+static int f_save(lua_State *L)
+{
+    px_figure *f = checkfig(L);
+    const char *path = luaL_checkstring(L, 2);
+    double dpi = luaL_optnumber(L, 3, 150);
+    luaL_argcheck(L, px_format_from_path(path) >= 0, 2, "file name must end in .png, .svg or .pdf");
+    int st = px_figure_save(f, path, dpi);
+    if (st != PX_OK) {
+        luaL_pushfail(L);
+        lua_pushfstring(L, "%s: %s", path, px_strerror(st));
+        return 2;
+    }
+    lua_pushboolean(L, 1);
+    return 1;
+}
+
+/* fig:render(format [, dpi]) -> bytes (for tests and pipelines) */
+static int f_render(lua_State *L)
+{
+    static const char *const fmts[] = {"png", "svg", "pdf", NULL};
+    px_figure *f = checkfig(L);
+    int fmt = luaL_checkoption(L, 2, NULL, fmts);
+    unsigned char *data;
+    size_t n;
+    int st = px_figure_render(f, (px_format)fmt, luaL_optnumber(L, 3, 72), &data, &n);
+    if (st != PX_OK) {
+        luaL_pushfail(L);
+        lua_pushstring(L, px_strerror(st));
+        return 2;
+    }
+    lua_pushlstring(L, (const char *)data, n);
+    free(data);
+    return 1;
+}
+
+static int f_plot_rect(lua_State *L)
+{
+    px_figure *f = checkfig(L);
+    double x, y, w, h;
+    status_error(L, px_figure_plot_rect(f, checkpanel(L, 2), luaL_optnumber(L, 3, 72), &x, &y, &w, &h),
+                 "figure:plot_rect");
+    lua_pushnumber(L, x);
+    lua_pushnumber(L, y);
+    lua_pushnumber(L, w);
+    lua_pushnumber(L, h);
+    return 4;
+}
+
+static int f_close(lua_State *L)
+{
+    lfigure *u = luaL_checkudata(L, 1, FIGURE_MT);
+    px_figure_free(u->fig);
+    u->fig = NULL;
+    return 0;
+}
+
+static int l_ticks(lua_State *L)
+{
+    double t[64];
+    double a = luaL_checknumber(L, 1), b = luaL_checknumber(L, 2);
+    size_t max = (size_t)luaL_optinteger(L, 3, 8);
+    luaL_argcheck(L, max >= 2 && max <= 64, 3, "between 2 and 64 ticks");
+    size_t n = lua_toboolean(L, 4) ? px_ticks_log(a, b, max, t) : px_ticks_linear(a, b, max, t);
+    lua_createtable(L, (int)n, 0);
+    for (size_t i = 0; i < n; i++) {
+        lua_pushnumber(L, t[i]);
+        lua_rawseti(L, -2, (lua_Integer)i + 1);
+    }
+    return 1;
+}
+
+static int l_polygon_pole(lua_State *L)
+{
+    double *x, *y, px, py, d;
+    lua_settop(L, 3);
+    size_t n = checkpoints(L, 1, 2, &x, &y);
+    int st = px_polygon_pole(x, y, n, luaL_optnumber(L, 3, 1e-3), &px, &py, &d);
+    status_error(L, st, "polygon_pole");
+    lua_pushnumber(L, px);
+    lua_pushnumber(L, py);
+    lua_pushnumber(L, d);
+    return 3;
+}
+
+void px_lua_open_render(lua_State *L)
+{
+    static const luaL_Reg methods[] = {
+        {"axes", f_axes},   {"titles", f_titles}, {"polygon", f_polygon},
+        {"line", f_line},   {"text", f_text},     {"stamp", f_stamp},
+        {"pages", f_pages}, {"save", f_save},     {"render", f_render},
+        {"plot_rect", f_plot_rect}, {"close", f_close}, {NULL, NULL}};
+    static const luaL_Reg funcs[] = {
+        {"figure", l_figure}, {"ticks", l_ticks}, {"polygon_pole", l_polygon_pole}, {NULL, NULL}};
+    luaL_newmetatable(L, FIGURE_MT);
+    luaL_newlib(L, methods);
+    lua_setfield(L, -2, "__index");
+    lua_pushcfunction(L, f_close);
+    lua_setfield(L, -2, "__gc");
+    lua_pushcfunction(L, f_close);
+    lua_setfield(L, -2, "__close");
+    lua_pop(L, 1);
+    luaL_setfuncs(L, funcs, 0);
+}

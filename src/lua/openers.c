@@ -1,0 +1,8 @@
+/* openers.c - the list of binding files registered into "phlox.core". */
+#include "lua/bindings.h"
+
+const px_lua_opener px_lua_openers[] = {
+    px_lua_open_status,
+    px_lua_open_util,
+    px_lua_open_render,
+    0};

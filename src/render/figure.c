@@ -1,0 +1,229 @@
+/* figure.c - the figure model: panels and the items drawn in them, kept as
+ * plain data until px_figure_save() lays them out (draw.c). */
+#include "render/figure_priv.h"
+#include "core/status.h"
+#include <math.h>
+#include <stdlib.h>
+#include <string.h>
+
+#define PX_FIG_MAX_PANELS 64
+
+static char *dupstr(const char *s)
+{
+    if (!s) return NULL;
+    size_t n = strlen(s) + 1;
+    char *d = malloc(n);
+    if (d) memcpy(d, s, n);
+    return d;
+}
+
+px_figure *px_figure_new(double width, double height, int rows, int cols)
+{
+    if (!(width >= 50 && height >= 50 && width <= 20000 && height <= 20000) || rows < 1 ||
+        cols < 1 || rows * cols > PX_FIG_MAX_PANELS)
+        return NULL;
+    px_figure *f = calloc(1, sizeof *f);
+    if (!f) return NULL;
+    f->panels = calloc((size_t)(rows * cols), sizeof *f->panels);
+    if (!f->panels) {
+        free(f);
+        return NULL;
+    }
+    f->width = width;
+    f->height = height;
+    f->rows = rows;
+    f->cols = cols;
+    for (int i = 0; i < rows * cols; i++) {
+        px_panel *p = &f->panels[i];
+        p->x0 = 0, p->x1 = 1, p->y0 = 0, p->y1 = 1;
+    }
+    return f;
+}
+
+static void free_item(px_item *it)
+{
+    free(it->x);
+    free(it->y);
+    free(it->text);
+}
+
+void px_figure_free(px_figure *f)
+{
+    if (!f) return;
+    for (int i = 0; i < f->rows * f->cols; i++) {
+        px_panel *p = &f->panels[i];
+        for (size_t k = 0; k < p->n_items; k++) free_item(&p->items[k]);
+        free(p->items);
+        free(p->xlabel);
+        free(p->ylabel);
+        free(p->title);
+    }
+    for (size_t k = 0; k < f->n_stamp; k++) free(f->stamp[k]);
+    free(f->stamp);
+    free(f->panels);
+    free(f);
+}
+
+static px_panel *panel_of(px_figure *f, int panel)
+{
+    if (!f || panel < 0 || panel >= f->rows * f->cols) return NULL;
+    return &f->panels[panel];
+}
+
+int px_figure_axes(px_figure *f, int panel, double x0, double x1, double y0, double y1, int xlog,
+                   int ylog)
+{
+    px_panel *p = panel_of(f, panel);
+    if (!p) return PX_EINVAL;
+    if (!(isfinite(x0) && isfinite(x1) && isfinite(y0) && isfinite(y1)) || x0 == x1 || y0 == y1)
+        return PX_EINVAL;
+    if ((xlog && (x0 <= 0 || x1 <= 0)) || (ylog && (y0 <= 0 || y1 <= 0))) return PX_EINVAL;
+    p->x0 = x0, p->x1 = x1, p->y0 = y0, p->y1 = y1;
+    p->xlog = xlog != 0, p->ylog = ylog != 0;
+    return PX_OK;
+}
+
+static int replace(char **slot, const char *s)
+{
+    char *d = NULL;
+    if (s && !(d = dupstr(s))) return PX_ENOMEM;
+    free(*slot);
+    *slot = d;
+    return PX_OK;
+}
+
+int px_figure_titles(px_figure *f, int panel, const char *xlabel, const char *ylabel,
+                     const char *title)
+{
+    px_panel *p = panel_of(f, panel);
+    if (!p) return PX_EINVAL;
+    int st = replace(&p->xlabel, xlabel);
+    if (st == PX_OK) st = replace(&p->ylabel, ylabel);
+    if (st == PX_OK) st = replace(&p->title, title);
+    return st;
+}
+
+static px_item *new_item(px_panel *p)
+{
+    if (p->n_items == p->cap) {
+        size_t cap = p->cap ? 2 * p->cap : 16;
+        px_item *it = realloc(p->items, cap * sizeof *it);
+        if (!it) return NULL;
+        p->items = it;
+        p->cap = cap;
+    }
+    px_item *it = &p->items[p->n_items];
+    memset(it, 0, sizeof *it);
+    return it;
+}
+
+static int valid_color(px_rgba c)
+{
+    return c.r >= 0 && c.r <= 1 && c.g >= 0 && c.g <= 1 && c.b >= 0 && c.b <= 1 && c.a >= 0 &&
+           c.a <= 1;
+}
+
+static int copy_points(px_item *it, const double *x, const double *y, size_t n)
+{
+    for (size_t i = 0; i < n; i++)
+        if (!isfinite(x[i]) || !isfinite(y[i])) return PX_EINVAL;
+    it->x = malloc(n * sizeof *x);
+    it->y = malloc(n * sizeof *y);
+    if (!it->x || !it->y) {
+        free(it->x);
+        free(it->y);
+        it->x = it->y = NULL;
+        return PX_ENOMEM;
+    }
+    memcpy(it->x, x, n * sizeof *x);
+    memcpy(it->y, y, n * sizeof *y);
+    it->n = n;
+    return PX_OK;
+}
+
+int px_figure_polygon(px_figure *f, int panel, const double *x, const double *y, size_t n,
+                      px_rgba fill, px_rgba stroke, double stroke_width, const char *label,
+                      double lx, double ly)
+{
+    px_panel *p = panel_of(f, panel);
+    if (!p || !x || !y || n < 3 || !valid_color(fill) || !valid_color(stroke) ||
+        !(stroke_width >= 0))
+        return PX_EINVAL;
+    px_item *it = new_item(p);
+    if (!it) return PX_ENOMEM;
+    int st = copy_points(it, x, y, n);
+    if (st != PX_OK) return st;
+    if (label && !(it->text = dupstr(label))) {
+        free_item(it);
+        return PX_ENOMEM;
+    }
+    it->kind = PX_ITEM_POLYGON;
+    it->fill = fill;
+    it->color = stroke;
+    it->width = stroke_width;
+    it->lx = lx;
+    it->ly = ly;
+    p->n_items++;
+    return PX_OK;
+}
+
+int px_figure_line(px_figure *f, int panel, const double *x, const double *y, size_t n,
+                   px_rgba color, double width, px_dash dash, const char *legend)
+{
+    px_panel *p = panel_of(f, panel);
+    if (!p || !x || !y || n < 2 || !valid_color(color) || !(width > 0) || dash < PX_DASH_SOLID ||
+        dash > PX_DASH_DASHDOT)
+        return PX_EINVAL;
+    px_item *it = new_item(p);
+    if (!it) return PX_ENOMEM;
+    int st = copy_points(it, x, y, n);
+    if (st != PX_OK) return st;
+    if (legend && !(it->text = dupstr(legend))) {
+        free_item(it);
+        return PX_ENOMEM;
+    }
+    it->kind = PX_ITEM_LINE;
+    it->color = color;
+    it->width = width;
+    it->dash = dash;
+    p->n_items++;
+    return PX_OK;
+}
+
+int px_figure_text(px_figure *f, int panel, double x, double y, const char *text, int chem,
+                   double size, px_rgba color)
+{
+    px_panel *p = panel_of(f, panel);
+    if (!p || !text || !isfinite(x) || !isfinite(y) || !(size > 0 && size < 200) ||
+        !valid_color(color))
+        return PX_EINVAL;
+    px_item *it = new_item(p);
+    if (!it) return PX_ENOMEM;
+    if (!(it->text = dupstr(text))) return PX_ENOMEM;
+    it->kind = PX_ITEM_TEXT;
+    it->lx = x;
+    it->ly = y;
+    it->chem = chem != 0;
+    it->width = size;
+    it->color = color;
+    p->n_items++;
+    return PX_OK;
+}
+
+int px_figure_stamp(px_figure *f, const char *text)
+{
+    if (!f || !text) return PX_EINVAL;
+    char **s = realloc(f->stamp, (f->n_stamp + 1) * sizeof *s);
+    if (!s) return PX_ENOMEM;
+    f->stamp = s;
+    if (!(s[f->n_stamp] = dupstr(text))) return PX_ENOMEM;
+    f->n_stamp++;
+    return PX_OK;
+}
+
+int px_figure_page_per_panel(px_figure *f, int on)
+{
+    if (!f) return PX_EINVAL;
+    f->page_per_panel = on != 0;
+    return PX_OK;
+}

@@ -1,0 +1,39 @@
+/* figure_priv.h - private: the figure model shared by figure.c (building)
+ * and draw.c (layout and cairo drawing). */
+#ifndef PX_FIGURE_PRIV_H
+#define PX_FIGURE_PRIV_H
+#include "render/render.h"
+
+typedef enum { PX_ITEM_POLYGON, PX_ITEM_LINE, PX_ITEM_TEXT } px_item_kind;
+
+typedef struct px_item {
+    px_item_kind kind;
+    double *x, *y;
+    size_t n;
+    px_rgba fill, color;
+    double width; /* stroke width, or font size for text */
+    px_dash dash;
+    char *text;     /* polygon label, line legend, or the text */
+    double lx, ly;  /* label anchor (polygon) or position (text), data units */
+    int chem;
+} px_item;
+
+typedef struct px_panel {
+    double x0, x1, y0, y1;
+    int xlog, ylog;
+    char *xlabel, *ylabel, *title;
+    px_item *items;
+    size_t n_items, cap;
+} px_panel;
+
+struct px_figure {
+    double width, height;
+    int rows, cols;
+    px_panel *panels;
+    char **stamp;
+    size_t n_stamp;
+    int page_per_panel;
+};
+
+
+#endif

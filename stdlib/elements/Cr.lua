@@ -1,0 +1,123 @@
+-- stdlib/elements/Cr.lua: chromium, its ions, chromate species, hydrolysis species, oxide.
+--
+-- Data choice (see docs/data/transition-metals.md): Cr^3+ and Cr^2+ from the CRC
+-- electrochemical series (their dfG agree with Shock et al. 1997 Cr3+ to 0.2 kJ/mol);
+-- Cr(VI) species and Cr2O3 from the NBS tables (Wagman et al. 1982); Cr(III)
+-- hydrolysis from Baes and Mesmer 1976. No Cp is recalled for any aqueous Cr species,
+-- so all are defined by reactions. Every number below was recalled, not read.
+
+local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic " ..
+            "Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
+local KELLEY = "cp from memory of Kelley 1960 (U.S. Bureau of Mines Bulletin 584), " ..
+               "converted from cal with 4.184"
+local CRC = "from memory of CRC Handbook of Chemistry and Physics, Electrochemical Series " ..
+            "(P. Vanysek)"
+local BM = "from memory of Baes and Mesmer 1976, The Hydrolysis of Cations (I = 0, 25 C)"
+
+return {
+  element = "Cr",
+  title = "Chromium",
+  units = { energy = "kJ", entropy = "J" },
+  species = {
+    {
+      formula = "Cr(s)", model = "cp",
+      G = 0, H = 0, S = 23.77,
+      cp = { a = 24.43, b = 9.874e-3, c = -3.682e5 },
+      T_range = { 298.15, 1800 },
+      source = NBS .. " (S); " .. KELLEY .. " (5.84 + 2.36e-3 T - 0.88e5/T^2 cal/(mol K))",
+      quality = "high",
+      note = "Polynomial gives Cp(298.15 K) = 23.24 J/(mol K) against NBS 23.35.",
+    },
+    {
+      formula = "Cr^3+", model = "logk",
+      reaction = "2 Cr(s) + 6 H^+ = 2 Cr^3+ + 3 H2(g)",
+      logK = 75.457,
+      source = "derived here from E0(Cr3+/Cr) = -0.744 V " .. CRC ..
+               " (log K = 6 F E0/(RT ln10))",
+      quality = "medium",
+      note = "dfG = -215.35 kJ/mol; Shock et al. 1997 give -51500 cal/mol = -215.48 kJ/mol " ..
+             "(as recalled). dfH not recalled: no dH, so the constant holds at 25 C only.",
+    },
+    {
+      formula = "Cr^2+", model = "logk",
+      reaction = "2 Cr^3+ + H2(g) = 2 Cr^2+ + 2 H^+",
+      logK = -13.759,
+      source = "derived here from E0(Cr3+/Cr2+) = -0.407 V " .. CRC,
+      quality = "medium",
+      note = "Gives E0(Cr2+/Cr) = -0.913 V, as the CRC series lists. No dH: 25 C only.",
+    },
+    -- Cr(III) hydrolysis -----------------------------------------------------
+    {
+      formula = "CrOH^2+", model = "logk",
+      reaction = "Cr^3+ + H2O(l) = CrOH^2+ + H^+",
+      logK = -4.0,
+      source = BM, quality = "medium",
+    },
+    {
+      formula = "Cr(OH)2^+", model = "logk",
+      reaction = "Cr^3+ + 2 H2O(l) = Cr(OH)2^+ + 2 H^+",
+      logK = -9.7,
+      source = BM, quality = "low",
+    },
+    {
+      formula = "Cr(OH)3(aq)", model = "logk",
+      reaction = "Cr^3+ + 3 H2O(l) = Cr(OH)3(aq) + 3 H^+",
+      logK = -18.0,
+      source = BM, quality = "low",
+    },
+    {
+      formula = "Cr(OH)4^-", model = "logk",
+      reaction = "Cr^3+ + 4 H2O(l) = Cr(OH)4^- + 4 H^+",
+      logK = -27.4,
+      source = BM, quality = "low",
+      note = "The CrO2^- of older diagrams (same species less two H2O).",
+    },
+    {
+      formula = "Cr2(OH)2^4+", model = "logk",
+      reaction = "2 Cr^3+ + 2 H2O(l) = Cr2(OH)2^4+ + 2 H^+",
+      logK = -5.06,
+      source = BM, quality = "low",
+    },
+    {
+      formula = "Cr3(OH)4^5+", model = "logk",
+      reaction = "3 Cr^3+ + 4 H2O(l) = Cr3(OH)4^5+ + 4 H^+",
+      logK = -8.15,
+      source = BM, quality = "low",
+    },
+    -- Cr(VI) -----------------------------------------------------------------
+    {
+      formula = "CrO4^2-", model = "logk",
+      reaction = "Cr(s) + 4 H2O(l) = CrO4^2- + 2 H^+ + 3 H2(g)",
+      logK = -38.677, dH = 262.17,
+      source = "derived here from " .. NBS .. ": CrO4^2- dfG -727.75, dfH -881.15 kJ/mol, S 50.21 J/(mol K)",
+      quality = "high",
+      note = "No Cp recalled; defined by its formation reaction. Van 't Hoff only above 25 C.",
+    },
+    {
+      formula = "HCrO4^-", model = "logk",
+      reaction = "CrO4^2- + H^+ = HCrO4^-",
+      logK = 6.473, dH = 2.95,
+      source = "derived here from " .. NBS .. ": HCrO4^- dfG -764.7, dfH -878.2 kJ/mol, S 184.1 J/(mol K)",
+      quality = "medium",
+      note = "Measured pKa of HCrO4- is about 6.5 (6.51 as recalled), within 0.04.",
+    },
+    {
+      formula = "Cr2O7^2-", model = "logk",
+      reaction = "2 HCrO4^- = Cr2O7^2- + H2O(l)",
+      logK = 1.547, dH = -19.73,
+      source = "derived here from " .. NBS .. ": Cr2O7^2- dfG -1301.1, dfH -1490.3 kJ/mol, S 261.9 J/(mol K)",
+      quality = "high",
+      note = "Measured dimerisation constants are about 1.5 (recalled), within 0.05.",
+    },
+    -- oxide ------------------------------------------------------------------
+    {
+      formula = "Cr2O3(s,eskolaite)", model = "cp",
+      G = -1058.1, H = -1139.7, S = 81.2,
+      cp = { a = 118.74, b = 0, c = 0 },
+      source = NBS,
+      quality = "high",
+      note = "cp: NBS Cp(298.15 K) only (a = Cp, b = c = 0). Stands in for the hydrated " ..
+             "Cr(III) oxide of older diagrams (Cr(OH)3 left out, see docs).",
+    },
+  },
+}

@@ -1,0 +1,184 @@
+-- stdlib/elements/Fe.lua: iron, its ions, hydrolysis species, oxides and hydroxides.
+--
+-- Data choice (see docs/data/transition-metals.md):
+--   * Fe^2+ and Fe^3+ follow Shock et al. 1997 (revised-HKF ion data, Fe^2+ with its
+--     full parameter set). The NBS-1982 ion values (dfG Fe^2+ = -78.90 kJ/mol) are
+--     about 12.6 kJ/mol less negative and are not used: they put Fe^2+/Fe at -0.409 V.
+--   * Solids follow the NBS tables (Wagman et al. 1982).
+--   * Hydrolysis species are defined by Baes and Mesmer 1976 constants (I = 0, 25 C).
+-- Every number below was recalled, not read; "from memory of" says so.
+
+local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic " ..
+            "Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
+local KELLEY = "cp from memory of Kelley 1960 (U.S. Bureau of Mines Bulletin 584), " ..
+               "converted from cal with 4.184"
+local SHOCK97 = "from memory of Shock, Sassani, Willis and Sverjensky 1997 (Geochim. Cosmochim. " ..
+                "Acta 61, 907), cation table; table no. not recalled"
+local BM = "from memory of Baes and Mesmer 1976, The Hydrolysis of Cations (I = 0, 25 C)"
+local NORD = "from memory of Nordstrom et al. 1990 (ACS Symp. Ser. 416, revised equilibrium " ..
+             "data for major water-mineral reactions)"
+
+return {
+  element = "Fe",
+  title = "Iron",
+  units = { energy = "kJ", entropy = "J" },
+  species = {
+    -- metal ---------------------------------------------------------------
+    {
+      formula = "Fe(s)", model = "cp",
+      G = 0, H = 0, S = 27.28,
+      cp = { a = 14.10, b = 29.71e-3, c = 1.799e5 },
+      T_range = { 298.15, 1033 },
+      source = NBS .. " (S); " .. KELLEY .. " (alpha-Fe: 3.37 + 7.10e-3 T + 0.43e5/T^2 cal/(mol K))",
+      quality = "high",
+      note = "alpha-Fe. The polynomial gives Cp(298.15 K) = 24.98 J/(mol K) against NBS 25.10; " ..
+             "it does not follow the magnetic Cp anomaly near the Curie point (1043 K).",
+    },
+    -- ions ----------------------------------------------------------------
+    {
+      formula = "Fe^2+", model = "hkf",
+      units = { energy = "cal", entropy = "cal" },
+      G = -21870, H = -22050, S = -25.30,
+      hkf = { a1 = -0.7867, a2 = -9.6962, a3 = 9.5202, a4 = -2.3786,
+              c1 = 14.786, c2 = -4.6437, omega = 1.4382 },
+      estimated = true,
+      source = SHOCK97,
+      quality = "high",
+      note = "Revised Fe2+ (published Cp 25 C = -7.9 cal/(mol K), V = -22.2 cm3/mol; the set " ..
+             "reproduces both). Parameters were estimated by the paper with the Shock and " ..
+             "Helgeson 1988 correlations. Gives E0(Fe2+/Fe) = -0.474 V; CRC lists -0.447 V and " ..
+             "NBS-1982 data give -0.409 V (documented spread).",
+    },
+    {
+      formula = "Fe^3+", model = "logk",
+      reaction = "2 Fe^2+ + 2 H^+ = 2 Fe^3+ + H2(g)",
+      logK = -26.022, dH = 85.354,
+      source = "derived here from dfG/dfH " .. SHOCK97 ..
+               ": Fe3+ dfG -4120 cal/mol, dfH -11850 cal/mol, S -66.30 cal/(mol K); " ..
+               "Fe2+ as above",
+      quality = "medium",
+      note = "HKF parameters of Fe3+ not recalled and no Cp known, so the ion is defined " ..
+             "against Fe2+ (logK = -2*dG/(RT ln10), dH from dfH). E0(Fe3+/Fe2+) = 0.770 V " ..
+             "(CRC 0.771). Temperature dependence above ~100 C is only van 't Hoff.",
+    },
+    -- Fe(II) hydrolysis ------------------------------------------------------
+    {
+      formula = "FeOH^+", model = "logk",
+      reaction = "Fe^2+ + H2O(l) = FeOH^+ + H^+",
+      logK = -9.5, dH = 55.23,
+      source = BM .. "; dH 13.2 kcal/mol " .. NORD,
+      quality = "medium",
+      note = "NBS-1982 dfG(FeOH+) = -277.4 kJ/mol is not used: with NBS Fe2+ it implies " ..
+             "log K = -6.8, far from the hydrolysis measurements.",
+    },
+    {
+      formula = "Fe(OH)2(aq)", model = "logk",
+      reaction = "Fe^2+ + 2 H2O(l) = Fe(OH)2(aq) + 2 H^+",
+      logK = -20.6,
+      source = BM, quality = "low",
+    },
+    {
+      formula = "Fe(OH)3^-", model = "logk",
+      reaction = "Fe^2+ + 3 H2O(l) = Fe(OH)3^- + 3 H^+",
+      logK = -31.0,
+      source = BM, quality = "low",
+      note = "The HFeO2^- of older diagrams (same species less one H2O).",
+    },
+    -- Fe(III) hydrolysis -----------------------------------------------------
+    {
+      formula = "FeOH^2+", model = "logk",
+      reaction = "Fe^3+ + H2O(l) = FeOH^2+ + H^+",
+      logK = -2.19, dH = 43.51,
+      source = BM .. "; dH 10.4 kcal/mol " .. NORD,
+      quality = "high",
+    },
+    {
+      formula = "Fe(OH)2^+", model = "logk",
+      reaction = "Fe^3+ + 2 H2O(l) = Fe(OH)2^+ + 2 H^+",
+      logK = -5.67, dH = 71.55,
+      source = BM .. "; dH 17.1 kcal/mol " .. NORD,
+      quality = "medium",
+    },
+    {
+      formula = "Fe(OH)3(aq)", model = "logk",
+      reaction = "Fe^3+ + 3 H2O(l) = Fe(OH)3(aq) + 3 H^+",
+      logK = -13.6,
+      source = NORD,
+      quality = "low",
+      note = "Baes and Mesmer 1976 give only an upper bound (about -12).",
+    },
+    {
+      formula = "Fe(OH)4^-", model = "logk",
+      reaction = "Fe^3+ + 4 H2O(l) = Fe(OH)4^- + 4 H^+",
+      logK = -21.6,
+      source = BM .. " (same value in Nordstrom et al. 1990)",
+      quality = "medium",
+    },
+    {
+      formula = "Fe2(OH)2^4+", model = "logk",
+      reaction = "2 Fe^3+ + 2 H2O(l) = Fe2(OH)2^4+ + 2 H^+",
+      logK = -2.95, dH = 56.48,
+      source = BM .. "; dH 13.5 kcal/mol " .. NORD,
+      quality = "medium",
+    },
+    {
+      formula = "Fe3(OH)4^5+", model = "logk",
+      reaction = "3 Fe^3+ + 4 H2O(l) = Fe3(OH)4^5+ + 4 H^+",
+      logK = -6.3,
+      source = BM,
+      quality = "low",
+    },
+    -- oxides and hydroxides --------------------------------------------------
+    {
+      formula = "Fe3O4(s,magnetite)", model = "cp",
+      G = -1015.4, H = -1118.4, S = 146.4,
+      cp = { a = 143.43, b = 0, c = 0 },
+      source = NBS,
+      quality = "high",
+      note = "cp: NBS Cp(298.15 K) only (a = Cp, b = c = 0); magnetite Cp rises steeply " ..
+             "with T, so this underestimates Cp at high temperature.",
+    },
+    {
+      formula = "Fe2O3(s,hematite)", model = "cp",
+      G = -742.2, H = -824.2, S = 87.40,
+      cp = { a = 98.28, b = 77.82e-3, c = -14.85e5 },
+      T_range = { 298.15, 950 },
+      source = NBS .. "; " .. KELLEY .. " (23.49 + 18.6e-3 T - 3.55e5/T^2 cal/(mol K))",
+      quality = "high",
+      note = "Polynomial gives Cp(298.15 K) = 104.8 J/(mol K) against NBS 103.85.",
+    },
+    {
+      formula = "FeO(OH)(s,goethite)", model = "cp",
+      G = -488.55, H = -559.3, S = 60.38,
+      source = "dfH and S from memory of Robie and Hemingway 1995 (USGS Bulletin 2131); " ..
+               "dfG derived here as dfH - T*dfS",
+      quality = "low",
+      note = "A dfG of -489.8 kJ/mol also comes to mind (it would fail the dfG/dfH/S " ..
+             "cycle by 1.3 kJ/mol). Cp not recalled: the loader will take Cp = 0.",
+    },
+    {
+      formula = "Fe(OH)2(s)", model = "cp",
+      G = -486.5, H = -569.0, S = 88,
+      source = NBS,
+      quality = "medium",
+      note = "Cp not recalled: the loader will take Cp = 0.",
+    },
+    {
+      formula = "Fe(OH)3(s)", model = "cp",
+      G = -696.5, H = -823.0, S = 106.7,
+      source = NBS,
+      quality = "medium",
+      note = "Precipitated hydroxide of the NBS tables. With the Fe3+ above it gives " ..
+             "log K(Fe(OH)3 + 3H+ = Fe3+ + 3H2O) = 5.63; compare Fe(OH)3(am) below. " ..
+             "Cp not recalled: the loader will take Cp = 0.",
+    },
+    {
+      formula = "Fe(OH)3(am)", model = "logk",
+      reaction = "Fe^3+ + 3 H2O(l) = Fe(OH)3(am) + 3 H^+",
+      logK = -4.891,
+      source = NORD .. " (ferrihydrite, Fe(OH)3 + 3H+ = Fe3+ + 3H2O, log K = 4.891)",
+      quality = "medium",
+      note = "Ferrihydrite; published values span about 3 to 5 with ageing and particle size.",
+    },
+  },
+}

@@ -1,0 +1,86 @@
+-- stdlib/elements/Ni.lua: nickel, its ion, hydrolysis species, oxide and hydroxide.
+--
+-- Data choice (see docs/data/transition-metals.md): ion and solids from the NBS tables
+-- (Wagman et al. 1982); hydrolysis from Baes and Mesmer 1976. No Cp is recalled for
+-- Ni^2+, so it is defined by its formation reaction from the metal.
+-- Every number below was recalled, not read; "from memory of" says so.
+
+local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic " ..
+            "Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
+local KELLEY = "cp from memory of Kelley 1960 (U.S. Bureau of Mines Bulletin 584), " ..
+               "converted from cal with 4.184"
+local BM = "from memory of Baes and Mesmer 1976, The Hydrolysis of Cations (I = 0, 25 C)"
+
+return {
+  element = "Ni",
+  title = "Nickel",
+  units = { energy = "kJ", entropy = "J" },
+  species = {
+    {
+      formula = "Ni(s)", model = "cp",
+      G = 0, H = 0, S = 29.87,
+      cp = { a = 16.99, b = 29.46e-3, c = 0 },
+      T_range = { 298.15, 631 },
+      source = NBS .. " (S); " .. KELLEY .. " (4.06 + 7.04e-3 T cal/(mol K), below the Curie point)",
+      quality = "high",
+      note = "Polynomial gives Cp(298.15 K) = 25.77 J/(mol K) against NBS 26.07.",
+    },
+    {
+      formula = "Ni^2+", model = "logk",
+      reaction = "Ni(s) + 2 H^+ = Ni^2+ + H2(g)",
+      logK = 7.989, dH = -54.0,
+      source = "derived here from " .. NBS .. ": Ni2+ dfG -45.6, dfH -54.0 kJ/mol, S -128.9 J/(mol K)",
+      quality = "medium",
+      note = "E0(Ni2+/Ni) = -0.236 V; the CRC series lists -0.257 V (not in the shared " ..
+             "reference table). No Cp recalled; van 't Hoff only above 25 C.",
+    },
+    {
+      formula = "NiOH^+", model = "logk",
+      reaction = "Ni^2+ + H2O(l) = NiOH^+ + H^+",
+      logK = -9.86,
+      source = BM, quality = "medium",
+    },
+    {
+      formula = "Ni(OH)2(aq)", model = "logk",
+      reaction = "Ni^2+ + 2 H2O(l) = Ni(OH)2(aq) + 2 H^+",
+      logK = -19.0,
+      source = BM, quality = "low",
+    },
+    {
+      formula = "Ni(OH)3^-", model = "logk",
+      reaction = "Ni^2+ + 3 H2O(l) = Ni(OH)3^- + 3 H^+",
+      logK = -30.0,
+      source = BM, quality = "low",
+    },
+    {
+      formula = "Ni2OH^3+", model = "logk",
+      reaction = "2 Ni^2+ + H2O(l) = Ni2OH^3+ + H^+",
+      logK = -10.7,
+      source = BM, quality = "low",
+    },
+    {
+      formula = "Ni4(OH)4^4+", model = "logk",
+      reaction = "4 Ni^2+ + 4 H2O(l) = Ni4(OH)4^4+ + 4 H^+",
+      logK = -27.74,
+      source = BM, quality = "medium",
+    },
+    {
+      formula = "NiO(s,bunsenite)", model = "cp",
+      G = -211.7, H = -239.7, S = 37.99,
+      cp = { a = 44.31, b = 0, c = 0 },
+      source = NBS,
+      quality = "medium",
+      note = "cp: NBS Cp(298.15 K) only (a = Cp, b = c = 0); NiO has a magnetic Cp " ..
+             "anomaly near 525 K that this ignores.",
+    },
+    {
+      formula = "Ni(OH)2(s)", model = "cp",
+      G = -447.2, H = -529.7, S = 88,
+      source = NBS,
+      quality = "medium",
+      note = "Other compilations: dfH -538, S 79. Gives log K(Ni(OH)2 + 2H+ = Ni2+ + 2H2O) " ..
+             "= 12.73; crystalline beta-Ni(OH)2 measured 11.67 +- 0.20 (ORNL; see " ..
+             "docs). Cp not recalled: the loader will take Cp = 0.",
+    },
+  },
+}

@@ -1,0 +1,96 @@
+--- phlox.sweep: ranges of conditions as plain arrays and iterators, their
+-- products, and deterministic shards so a batch scheduler (a job array, GNU
+-- parallel) can split one sweep over many processes or machines:
+--   PHLOX_SHARD=3/8 phlox study.lua   runs the 3rd of 8 shards (1-based)
+local sweep = {}
+
+--- n evenly spaced values from a to b inclusive.
+function sweep.linear(a, b, n)
+  assert(type(a) == "number" and type(b) == "number", "sweep.linear: a and b must be numbers")
+  assert(math.type(n) == "integer" and n >= 1, "sweep.linear: n must be an integer >= 1")
+  local t = {}
+  if n == 1 then return { a } end
+  for i = 0, n - 1 do t[i + 1] = a + (b - a) * i / (n - 1) end
+  t[n] = b
+  return t
+end
+
+--- n values from a to b (both > 0) evenly spaced in log10.
+function sweep.log(a, b, n)
+  assert(type(a) == "number" and a > 0 and type(b) == "number" and b > 0,
+         "sweep.log: a and b must be positive numbers")
+  local la, lb = math.log(a, 10), math.log(b, 10)
+  local t = sweep.linear(la, lb, n)
+  for i = 1, #t do t[i] = 10 ^ t[i] end
+  t[1], t[#t] = a, b
+  return t
+end
+
+--- Cartesian product of named ranges, in the order given; the last name
+-- varies fastest.  sweep.product({"T", {25, 100}}, {"pH", {4, 7}})
+-- -> { {T=25,pH=4}, {T=25,pH=7}, {T=100,pH=4}, {T=100,pH=7} }
+function sweep.product(...)
+  local axes = { ... }
+  for i, ax in ipairs(axes) do
+    assert(type(ax) == "table" and type(ax[1]) == "string" and type(ax[2]) == "table",
+           ("sweep.product: argument %d must be {name, values}"):format(i))
+  end
+  local points = {}
+  local function rec(k, cur)
+    if k > #axes then
+      local p = {}
+      for name, v in pairs(cur) do p[name] = v end
+      points[#points + 1] = p
+      return
+    end
+    for _, v in ipairs(axes[k][2]) do
+      cur[axes[k][1]] = v
+      rec(k + 1, cur)
+    end
+    cur[axes[k][1]] = nil
+  end
+  rec(1, {})
+  return points
+end
+
+--- The points of shard i of n (1-based, round-robin, so every shard gets a
+-- similar mix).  Without arguments, reads PHLOX_SHARD=i/n (all points if
+-- unset).
+function sweep.shard(points, i, n)
+  if i == nil then
+    local spec = os.getenv("PHLOX_SHARD")
+    if not spec or spec == "" then return points end
+    i, n = spec:match("^(%d+)/(%d+)$")
+    i, n = tonumber(i), tonumber(n)
+    assert(i and n and i >= 1 and i <= n, "PHLOX_SHARD must look like 3/8 (shard 3 of 8)")
+  end
+  assert(math.type(i) == "integer" and math.type(n) == "integer" and i >= 1 and i <= n,
+         "sweep.shard: need 1 <= i <= n")
+  local out = {}
+  for k = i, #points, n do out[#out + 1] = points[k] end
+  return out
+end
+
+--- Run fn(point) over the points; returns the results in point order.
+-- Shows progress on a terminal (stderr), stays quiet in CI (CI set) or when
+-- opts.quiet.  fn may return nil, message to record a failure; failures are
+-- collected in the second result rather than stopping the sweep.
+function sweep.run(points, fn, opts)
+  opts = opts or {}
+  local core = require "phlox.core"
+  local show = not opts.quiet and not os.getenv("CI") and core.isatty and core.isatty(2)
+  local results, failures = {}, {}
+  local n = #points
+  for k, p in ipairs(points) do
+    local r, msg = fn(p)
+    if r == nil then failures[#failures + 1] = { index = k, point = p, message = msg } end
+    results[k] = r
+    if show and (k == n or k % math.max(1, n // 100) == 0) then
+      io.stderr:write(("\r%s %d/%d"):format(opts.label or "sweep", k, n))
+      if k == n then io.stderr:write("\n") end
+    end
+  end
+  return results, failures
+end
+
+return sweep

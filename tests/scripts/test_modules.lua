@@ -1,0 +1,58 @@
+-- test_modules.lua: module resolution.  `require "phlox"` works from any
+-- folder; every embedded Lua file compiles; a user folder given by --path or
+-- PHLOX_PATH overrides an embedded module; LUA_PATH is ignored; C modules
+-- cannot be loaded.
+local bin = assert(os.getenv("PHLOX_BIN"), "PHLOX_BIN not set")
+local function check(cond, msg) if not cond then error(msg, 2) end end
+
+local phlox = require "phlox"
+local core = require "phlox.core"
+check(type(phlox.version) == "string" and phlox.version == core.version, "phlox.version")
+
+-- every embedded file compiles as text
+local files = core.embedded_files()
+check(#files >= 2, "embedded files: " .. #files)
+for _, path in ipairs(files) do
+  local src = assert(core.embedded_source(path), path)
+  local fn, err = load(src, "@" .. path, "t", {})
+  check(fn, "embedded file does not compile: " .. tostring(err))
+end
+check(core.embedded_source("no/such/file.lua") == nil, "missing embedded file is nil")
+
+-- C modules are not searchable and LUA_PATH did not leak in
+check(package.cpath == "", "package.cpath is empty")
+check(not package.path:find("%./%?%.lua"), "no ./?.lua in package.path: " .. package.path)
+
+local function run(cmd)
+  local p = assert(io.popen(cmd .. " 2>&1"))
+  local out = p:read("a")
+  local ok, how, code = p:close()
+  return code, out
+end
+
+-- a user folder overrides an embedded module (phlox.cli is embedded)
+local dir = os.tmpname()
+os.remove(dir)
+assert(os.execute("mkdir -p " .. dir .. "/phlox " .. dir .. "/elements"))
+local f = assert(io.open(dir .. "/phlox/cli.lua", "w"))
+f:write("return { marker = 'user copy' }\n"); f:close()
+local code, out = run(string.format("%q --path %q -e \"io.write(require('phlox.cli').marker)\"", bin, dir))
+check(code == 0 and out == "user copy", "--path override: " .. out)
+code, out = run(string.format("PHLOX_PATH=%q %q -e \"io.write(require('phlox.cli').marker)\"", dir, bin))
+check(code == 0 and out == "user copy", "PHLOX_PATH override: " .. out)
+-- without the folder, the embedded module is used
+code, out = run(string.format("%q -e \"io.write(tostring(require('phlox.cli').marker))\"", bin))
+check(code == 0 and out == "nil", "embedded module without override: " .. out)
+
+-- LUA_PATH is ignored: a module only reachable through it is not found
+f = assert(io.open(dir .. "/onlyvialuapath.lua", "w")); f:write("return 1\n"); f:close()
+code, out = run(string.format("LUA_PATH=%q %q -e \"require('onlyvialuapath')\"", dir .. "/?.lua", bin))
+check(code == 1 and out:find("module 'onlyvialuapath' not found"), "LUA_PATH must be ignored: " .. out)
+
+-- library files (element definitions) are read from the user folder first
+f = assert(io.open(dir .. "/elements/Xx.lua", "w")); f:write("return { element = 'Xx' }\n"); f:close()
+code, out = run(string.format("%q --path %q -e \"local t, w = require('phlox').read_library_file('elements/Xx.lua'); io.write(w)\"", bin, dir))
+check(code == 0 and out == dir .. "/elements/Xx.lua", "user element file found: " .. out)
+
+os.execute("rm -rf " .. dir)
+print("test_modules: all checks passed")

@@ -1,0 +1,196 @@
+/* test_render.c - the figure module: tick choice, label geometry, the three
+ * output formats, pixel probes away from text, deterministic vector bytes. */
+#include "px_test.h"
+#include "core/status.h"
+#include "render/render.h"
+#include <cairo.h>
+#include <stdlib.h>
+#include <string.h>
+
+static void test_ticks(void **state)
+{
+    (void)state;
+    double t[16];
+    /* 0..14 in at most 9 ticks: steps of 2 (1-2-5 rule, Heckbert 1990) */
+    size_t n = px_ticks_linear(0, 14, 9, t);
+    assert_int_equal(n, 8);
+    assert_close(t[0], 0, 0, 1e-12);
+    assert_close(t[7], 14, 0, 1e-12);
+    /* -2..2 V: 0.5 steps, 0 is exactly zero (no -0 or 1e-17) */
+    n = px_ticks_linear(-2, 2, 9, t);
+    assert_int_equal(n, 9);
+    assert_true(t[4] == 0.0);
+    assert_close(t[1], -1.5, 0, 1e-12);
+    /* reversed and degenerate ranges */
+    n = px_ticks_linear(2, -2, 9, t);
+    assert_true(n >= 2 && t[0] < t[n - 1]);
+    assert_int_equal(px_ticks_linear(NAN, 1, 9, t), 0);
+    /* log axis 1e-12..1: decades, thinned to fit */
+    n = px_ticks_log(1e-12, 1, 7, t);
+    assert_true(n >= 4 && n <= 7);
+    assert_close(t[0], 1e-12, 1e-9, 0);
+    /* a short log range gets 1-2-5 ticks */
+    n = px_ticks_log(1, 100, 9, t);
+    assert_int_equal(n, 7); /* 1 2 5 10 20 50 100 */
+    assert_int_equal(px_ticks_log(-1, 10, 9, t), 0);
+}
+
+static void test_polygon_geometry(void **state)
+{
+    (void)state;
+    double x[] = {0, 4, 4, 0}, y[] = {0, 0, 2, 2};
+    assert_true(px_polygon_contains(x, y, 4, 1, 1));
+    assert_false(px_polygon_contains(x, y, 4, 5, 1));
+    double px, py, d;
+    assert_int_equal(px_polygon_pole(x, y, 4, 1e-4, &px, &py, &d), PX_OK);
+    assert_close(py, 1.0, 0, 1e-3); /* a 4 x 2 rectangle: 1 from the long sides */
+    assert_close(d, 1.0, 0, 1e-3);
+    assert_true(px > 1 - 1e-3 && px < 3 + 1e-3);
+    /* an L of arms 2 wide: the largest inscribed circle sits in the corner,
+     * centre (r, r) with r = sqrt(2) (2 - r), so r = 2 sqrt(2) / (1 + sqrt(2)) */
+    double lx[] = {0, 10, 10, 2, 2, 0}, ly[] = {0, 0, 2, 2, 10, 10};
+    assert_int_equal(px_polygon_pole(lx, ly, 6, 1e-5, &px, &py, &d), PX_OK);
+    assert_true(px_polygon_contains(lx, ly, 6, px, py));
+    assert_close(d, 2 * sqrt(2) / (1 + sqrt(2)), 0, 1e-4);
+    assert_close(px, d, 0, 1e-3);
+    assert_close(py, d, 0, 1e-3);
+    double bad[] = {0, NAN, 1};
+    assert_int_equal(px_polygon_pole(bad, bad, 3, 1e-3, &px, &py, &d), PX_EINVAL);
+}
+
+static px_figure *two_fields(void)
+{
+    px_figure *f = px_figure_new(400, 300, 1, 1);
+    assert_non_null(f);
+    assert_int_equal(px_figure_axes(f, 0, 0, 14, -1, 1, 0, 0), PX_OK);
+    assert_int_equal(px_figure_titles(f, 0, "pH", "E / V vs SHE", "test"), PX_OK);
+    double x1[] = {0, 7, 7, 0}, y1[] = {-1, -1, 1, 1};
+    double x2[] = {7, 14, 14, 7}, y2[] = {-1, -1, 1, 1};
+    px_rgba blue = {0.2, 0.4, 0.8, 1}, sand = {0.9, 0.8, 0.6, 1}, black = {0, 0, 0, 1};
+    assert_int_equal(px_figure_polygon(f, 0, x1, y1, 4, blue, black, 0.5, "Fe^2+", 1, 0.8), PX_OK);
+    assert_int_equal(px_figure_polygon(f, 0, x2, y2, 4, sand, black, 0.5, "Fe(OH)3(s)", 13, 0.8), PX_OK);
+    double lx[] = {0, 14}, ly[] = {-0.5, -0.5};
+    px_rgba red = {1, 0, 0, 1};
+    assert_int_equal(px_figure_line(f, 0, lx, ly, 2, red, 3, PX_DASH_SOLID, NULL), PX_OK);
+    assert_int_equal(px_figure_stamp(f, "stamp line"), PX_OK);
+    return f;
+}
+
+typedef struct {
+    const unsigned char *p;
+    size_t n, at;
+} reader;
+
+static cairo_status_t read_mem(void *closure, unsigned char *data, unsigned int len)
+{
+    reader *r = closure;
+    if (r->at + len > r->n) return CAIRO_STATUS_READ_ERROR;
+    memcpy(data, r->p + r->at, len);
+    r->at += len;
+    return CAIRO_STATUS_SUCCESS;
+}
+
+static void probe(cairo_surface_t *s, double x, double y, int *r, int *g, int *b)
+{
+    unsigned char *d = cairo_image_surface_get_data(s);
+    int stride = cairo_image_surface_get_stride(s);
+    uint32_t px = *(uint32_t *)(d + (int)y * stride + (int)x * 4);
+    *r = (px >> 16) & 255;
+    *g = (px >> 8) & 255;
+    *b = px & 255;
+}
+
+static void test_png_pixels(void **state)
+{
+    (void)state;
+    px_figure *f = two_fields();
+    unsigned char *png;
+    size_t n;
+    const double dpi = 144; /* 2 pixels per point */
+    assert_int_equal(px_figure_render(f, PX_FORMAT_PNG, dpi, &png, &n), PX_OK);
+    assert_memory_equal(png, "\x89PNG\r\n\x1a\n", 8);
+    reader rd = {png, n, 0};
+    cairo_surface_t *s = cairo_image_surface_create_from_png_stream(read_mem, &rd);
+    assert_int_equal(cairo_surface_status(s), CAIRO_STATUS_SUCCESS);
+    assert_int_equal(cairo_image_surface_get_width(s), 800);
+    assert_int_equal(cairo_image_surface_get_height(s), 600);
+    double x, y, w, h;
+    assert_int_equal(px_figure_plot_rect(f, 0, dpi, &x, &y, &w, &h), PX_OK);
+    int r, g, b;
+    /* well inside the first field (pH 3, E 0.3): its fill (0.2, 0.4, 0.8) */
+    probe(s, x + w * 3 / 14, y + h * (1 - 1.3 / 2), &r, &g, &b);
+    assert_true(abs(r - 51) <= 1 && abs(g - 102) <= 1 && abs(b - 204) <= 1);
+    /* inside the second field (pH 10, E 0.3) */
+    probe(s, x + w * 10 / 14, y + h * (1 - 1.3 / 2), &r, &g, &b);
+    assert_true(abs(r - 230) <= 1 && abs(g - 204) <= 1 && abs(b - 153) <= 1);
+    /* on the red line at E = -0.5 (pH 5) */
+    probe(s, x + w * 5 / 14, y + h * (1 - 0.5 / 2), &r, &g, &b);
+    assert_true(r >= 250 && g <= 5 && b <= 5);
+    cairo_surface_destroy(s);
+    free(png);
+    px_figure_free(f);
+}
+
+static void test_vector_outputs(void **state)
+{
+    (void)state;
+    px_figure *f = two_fields();
+    unsigned char *a, *b;
+    size_t na, nb;
+    assert_int_equal(px_figure_render(f, PX_FORMAT_SVG, 72, &a, &na), PX_OK);
+    assert_int_equal(px_figure_render(f, PX_FORMAT_SVG, 72, &b, &nb), PX_OK);
+    assert_int_equal(na, nb);
+    assert_memory_equal(a, b, na); /* identical inputs, identical bytes */
+    assert_non_null(strstr((const char *)a, "<svg"));
+    free(a);
+    free(b);
+    assert_int_equal(px_figure_render(f, PX_FORMAT_PDF, 72, &a, &na), PX_OK);
+    assert_int_equal(px_figure_render(f, PX_FORMAT_PDF, 72, &b, &nb), PX_OK);
+    assert_memory_equal(a, "%PDF-", 5);
+    assert_int_equal(na, nb);
+    assert_memory_equal(a, b, na);
+    free(a);
+    free(b);
+    px_figure_free(f);
+
+    /* one page per panel */
+    f = px_figure_new(600, 300, 1, 3);
+    assert_int_equal(px_figure_page_per_panel(f, 1), PX_OK);
+    assert_int_equal(px_figure_render(f, PX_FORMAT_PDF, 72, &a, &na), PX_OK);
+    int pages = 0;
+    for (size_t i = 0; i + 11 < na; i++)
+        if (memcmp(a + i, "/Type /Page", 11) == 0 && a[i + 11] != 's') pages++;
+    assert_int_equal(pages, 3);
+    free(a);
+    px_figure_free(f);
+}
+
+static void test_bad_input(void **state)
+{
+    (void)state;
+    assert_null(px_figure_new(0, 100, 1, 1));
+    assert_null(px_figure_new(100, 100, 0, 1));
+    px_figure *f = px_figure_new(200, 200, 1, 2);
+    double x[] = {0, 1, NAN}, y[] = {0, 1, 1};
+    px_rgba c = {0, 0, 0, 1}, bad = {2, 0, 0, 1};
+    assert_int_equal(px_figure_axes(f, 2, 0, 1, 0, 1, 0, 0), PX_EINVAL);
+    assert_int_equal(px_figure_axes(f, 0, 0, 0, 0, 1, 0, 0), PX_EINVAL);
+    assert_int_equal(px_figure_axes(f, 0, -1, 1, 0, 1, 1, 0), PX_EINVAL);
+    assert_int_equal(px_figure_polygon(f, 0, x, y, 3, c, c, 1, NULL, 0, 0), PX_EINVAL);
+    assert_int_equal(px_figure_line(f, 0, y, y, 3, bad, 1, PX_DASH_SOLID, NULL), PX_EINVAL);
+    assert_int_equal(px_format_from_path("a.jpg"), -1);
+    assert_int_equal(px_figure_save(f, "a.jpg", 72), PX_EINVAL);
+    assert_int_equal(px_figure_save(f, "/nonexistent-dir/a.svg", 72), PX_EIO);
+    px_figure_free(f);
+    px_figure_free(NULL);
+}
+
+int main(void)
+{
+    const struct CMUnitTest tests[] = {
+        cmocka_unit_test(test_ticks),         cmocka_unit_test(test_polygon_geometry),
+        cmocka_unit_test(test_png_pixels),    cmocka_unit_test(test_vector_outputs),
+        cmocka_unit_test(test_bad_input),
+    };
+    return cmocka_run_group_tests(tests, NULL, NULL);
+}
