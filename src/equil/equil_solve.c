@@ -26,6 +26,9 @@
 #include <math.h>
 #include <stdint.h>
 #include <string.h>
+#ifdef PX_EQUIL_TRACE
+#include <stdio.h>
+#endif
 
 #define LN10 PX_LN10
 /* Molar mass of water, kg/mol (IUPAC standard atomic weights:
@@ -40,6 +43,11 @@
 #define CF_PASSES 60
 /* Stop those passes when every balance is within this log10 factor. */
 #define CF_DONE 0.2
+/* Bounds of the lagged terms while iterating: a transient molality far off
+ * the answer must not feed back through them (log a_w >= -1 is 56 mol/kg of
+ * ideal solute; |sum eps m| <= 5).  Numerical choice, no source. */
+#define LOG_AW_MIN (-1.0)
+#define LAG_MAX 5.0
 /* Pivot smaller than this times its column's largest entry = singular. */
 #define PIVOT_TOL 1e-13
 /* Cold-start log10 molality of H+ (pH 7) and of other free basis species
@@ -393,6 +401,7 @@ static void evaluate(const px_equil_system *s, px_equil_work *w, int jac)
     if (s->act.model == PX_EQUIL_SIT && s->n_sit) {
         px_equil_sit_sum(s, m, w->lag_next);
         for (size_t j = 0; j < ns; j++) {
+            w->lag_next[j] = clampd(w->lag_next[j], -LAG_MAX, LAG_MAX);
             double d = fabs(w->lag_next[j] - w->lag[j]);
             if (d > change) change = d;
         }
@@ -403,7 +412,7 @@ static void evaluate(const px_equil_system *s, px_equil_work *w, int jac)
             if (s->phase[j] == PX_EQUIL_AQ) sum += m[j];
         /* ln a_w = -phi M_w sum m, osmotic coefficient phi = 1 (Robinson and
          * Stokes 1959, Electrolyte Solutions, ch. 2 definition) */
-        w->log_aw_next = -PX_EQUIL_MW * sum / LN10;
+        w->log_aw_next = fmax(-PX_EQUIL_MW * sum / LN10, LOG_AW_MIN);
         double d = fabs(w->log_aw_next - w->log_aw);
         if (d > change) change = d;
     } else {
@@ -545,6 +554,11 @@ static int newton(const px_equil_system *s, px_equil_work *w, const px_equil_opt
             w->st.residual_norm = resid_norm(w, o, &worst, &ok);
             if (ok) return PX_OK;
         }
+#ifdef PX_EQUIL_TRACE
+        fprintf(stderr, "it %zu phi %.3e norm %.3e worst row %zu kind %zu lagchg %.2e xI %.3f y:", it, w->phi, w->st.residual_norm, worst, w->row_kind[worst], w->lag_change, w->xI);
+        for (size_t i = 0; i < s->nb; i++) fprintf(stderr, " %.4f", w->y[i]);
+        fprintf(stderr, "\n");
+#endif
         int st = newton_direction(w);
         if (st != PX_OK) {
             fail_at(w, (int)w->row_kind[worst], w->row_index[worst]);
@@ -553,6 +567,11 @@ static int newton(const px_equil_system *s, px_equil_work *w, const px_equil_opt
         double mx = 0.0;
         for (size_t k = 0; k <= w->ncol; k++) mx = fmax(mx, fabs(w->dx[k]));
         double lam = mx > max_step ? max_step / mx : 1.0;
+#ifdef PX_EQUIL_TRACE
+        fprintf(stderr, "   lam %.3e dx:", lam);
+        for (size_t k = 0; k < w->nrow; k++) fprintf(stderr, " %.3e", w->dx[k]);
+        fprintf(stderr, "\n");
+#endif
         double phi0 = w->phi, best_phi = DBL_MAX, best_lam = lam, last_lam = 0.0;
         int accepted = 0;
         save_state(w);
@@ -614,7 +633,8 @@ static void cold_start(const px_equil_system *s, px_equil_work *w)
         /* I = 1/2 sum z^2 m: R_I = I - floor - 1/2 sum, so the sum is I - R_I */
         double Inew = exp(LN10 * w->xI) - w->R[w->ncol];
         w->xI = clampd(log10(fmax(Inew, PX_EQUIL_I_FLOOR)), PX_EQUIL_XI_MIN, PX_EQUIL_XI_MAX);
-        take_lag(s, w);
+        /* the lagged terms stay at 0 here: far from the answer they would
+         * feed back (a low a_w raises species that release water) */
         double worst = 0.0;
         for (size_t i = 0; i < nb; i++) {
             size_t r = w->row[i];
