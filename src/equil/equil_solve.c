@@ -26,9 +26,6 @@
 #include <math.h>
 #include <stdint.h>
 #include <string.h>
-#ifdef PX_EQUIL_TRACE
-#include <stdio.h>
-#endif
 
 #define LN10 PX_LN10
 /* Molar mass of water, kg/mol (IUPAC standard atomic weights:
@@ -40,9 +37,17 @@
 #define LS_MAX 12
 /* Passes of the mass-balance scaling that builds a cold-start guess.
  * Numerical choice, no source. */
-#define CF_PASSES 60
-/* Stop those passes when every balance is within this log10 factor. */
-#define CF_DONE 0.2
+#define CF_PASSES 30
+/* Stop those passes when every balance is within this relative error. */
+#define CF_DONE 1e-2
+/* 1-D root finding in the cold start: relative tolerance, reach of the
+ * bracket search (log10 units), iterations, smallest bracket.  Numerical
+ * choices, no source. */
+#define ONE_D_TOL 1e-3
+#define LIN_SWEEPS 4
+#define ONE_D_REACH 64.0
+#define ONE_D_ITER 60
+#define ONE_D_DY 1e-9
 /* Bounds of the lagged terms while iterating: a transient molality far off
  * the answer must not feed back through them (log a_w >= -1 is 56 mol/kg of
  * ideal solute; |sum eps m| <= 5).  Numerical choice, no source. */
@@ -554,11 +559,6 @@ static int newton(const px_equil_system *s, px_equil_work *w, const px_equil_opt
             w->st.residual_norm = resid_norm(w, o, &worst, &ok);
             if (ok) return PX_OK;
         }
-#ifdef PX_EQUIL_TRACE
-        fprintf(stderr, "it %zu phi %.3e norm %.3e worst row %zu kind %zu lagchg %.2e xI %.3f y:", it, w->phi, w->st.residual_norm, worst, w->row_kind[worst], w->lag_change, w->xI);
-        for (size_t i = 0; i < s->nb; i++) fprintf(stderr, " %.4f", w->y[i]);
-        fprintf(stderr, "\n");
-#endif
         int st = newton_direction(w);
         if (st != PX_OK) {
             fail_at(w, (int)w->row_kind[worst], w->row_index[worst]);
@@ -567,11 +567,6 @@ static int newton(const px_equil_system *s, px_equil_work *w, const px_equil_opt
         double mx = 0.0;
         for (size_t k = 0; k <= w->ncol; k++) mx = fmax(mx, fabs(w->dx[k]));
         double lam = mx > max_step ? max_step / mx : 1.0;
-#ifdef PX_EQUIL_TRACE
-        fprintf(stderr, "   lam %.3e dx:", lam);
-        for (size_t k = 0; k < w->nrow; k++) fprintf(stderr, " %.3e", w->dx[k]);
-        fprintf(stderr, "\n");
-#endif
         double phi0 = w->phi, best_phi = DBL_MAX, best_lam = lam, last_lam = 0.0;
         int accepted = 0;
         save_state(w);
@@ -607,6 +602,135 @@ static int posonly_component(const px_equil_system *s, const px_equil_work *w, s
     return 1;
 }
 
+/* Solves the activity and fugacity equations (linear in y) for their own
+ * components given the others, in place: Gauss-Seidel sweeps, exact after
+ * one sweep unless fugacities share components. */
+static void solve_linear(const px_equil_system *s, px_equil_work *w, size_t skip)
+{
+    size_t nb = s->nb;
+    for (int sweep = 0; sweep < LIN_SWEEPS; sweep++) {
+        int any = 0;
+        for (size_t i = 0; i < nb; i++) {
+            if (i == skip || w->row[i] == SIZE_MAX) continue;
+            int kind = s->ckind[i];
+            if (kind == PX_EQUIL_C_ACTIVITY) {
+                double g = s->phase[i] == PX_EQUIL_AQ ? w->g[i] : 0.0;
+                w->y[i] = s->cval[i] - g;
+            } else if (kind == PX_EQUIL_C_FUGACITY) {
+                size_t gj = s->cgas[i];
+                double v = s->logk[gj], nii = 0.0;
+                for (size_t q = w->nz_start[gj]; q < w->nz_start[gj + 1]; q++) {
+                    size_t k = w->nz_idx[q];
+                    if (k == i) {
+                        nii = w->nz_val[q];
+                        if (s->phase[k] == PX_EQUIL_AQ) v += nii * w->g[k];
+                        continue;
+                    }
+                    double lak = s->phase[k] == PX_EQUIL_AQ      ? w->y[k] + w->g[k]
+                                 : s->phase[k] == PX_EQUIL_WATER ? w->log_aw
+                                                                 : w->y[k];
+                    v += w->nz_val[q] * lak;
+                }
+                double yn = clampd((s->cval[i] - v) / nii, -PX_EQUIL_LM_MAX, PX_EQUIL_LM_MAX);
+                if (yn != w->y[i]) any = 1;
+                w->y[i] = yn;
+            }
+        }
+        if (!any) break;
+    }
+}
+
+/* Charge balance as the cold start sees it.  Formation reactions conserve
+ * charge (z_j = sum_i nu_ji z_i), so sum_j z_j m_j = sum_i z_i S_i with
+ * S_i = sum_j nu_ji m_j; where S_i is fixed by a total, the total stands in
+ * for it.  What is left is monotone in y_c in the usual cases, unlike the
+ * raw sum while the other balances are still off (a fixed Ca^2+ molality
+ * makes CaOH+ outgrow OH- at high pH). */
+static double charge_proxy(const px_equil_system *s, px_equil_work *w, size_t c)
+{
+    size_t nb = s->nb;
+    double *S = w->dx; /* scratch, nb <= nmax */
+    for (size_t i = 0; i < nb; i++) S[i] = 0.0;
+    for (size_t j = 0; j < s->ns; j++) {
+        if (w->sabsent[j] || s->phase[j] != PX_EQUIL_AQ) continue;
+        for (size_t q = w->nz_start[j]; q < w->nz_start[j + 1]; q++)
+            S[w->nz_idx[q]] += w->nz_val[q] * w->m[j];
+    }
+    double f = 0.0;
+    for (size_t i = 0; i < nb; i++) {
+        if (w->cabsent[i]) continue;
+        double si = (i != c && s->ckind[i] == PX_EQUIL_C_TOTAL) ? s->cval[i] : S[i];
+        f += s->z[i] * si;
+    }
+    return f;
+}
+
+/* Sets y_i, re-solves the linear equations, evaluates; returns the
+ * residual of component i's equation (the charge proxy for charge balance). */
+static double eval_at(const px_equil_system *s, px_equil_work *w, size_t i, double y)
+{
+    w->y[i] = y;
+    solve_linear(s, w, i);
+    evaluate(s, w, 0);
+    if (s->ckind[i] == PX_EQUIL_C_CHARGE && s->z[i] != 0.0) return charge_proxy(s, w, i);
+    return w->R[w->row[i]];
+}
+
+/* Solves component i's own equation for y_i with the other unknowns held
+ * (Illinois variant of regula falsi, Dowell and Jarratt 1971, BIT 11:168)
+ * to a loose relative tolerance.  A mass balance is monotone in its own
+ * basis species (d/dy_i = ln10 sum nu_ji^2 m_j > 0); charge balance usually
+ * is.  Leaves y_i unchanged when no sign change is found. */
+static void solve_1d(const px_equil_system *s, px_equil_work *w, size_t i)
+{
+    size_t r = w->row[i];
+    double y0 = w->y[i];
+    double a = y0, fa = eval_at(s, w, i, y0);
+    if (fabs(fa) <= ONE_D_TOL * w->scale[r]) return;
+    double b = y0, fb = fa;
+    int found = 0;
+    for (double step = 0.5; step <= ONE_D_REACH && !found; step *= 2.0) {
+        for (int sgn = -1; sgn <= 1 && !found; sgn += 2) {
+            double yt = clampd(y0 + sgn * step, -PX_EQUIL_LM_MAX, PX_EQUIL_LM_MAX);
+            double ft = eval_at(s, w, i, yt);
+            if ((ft < 0.0) != (fa < 0.0)) {
+                b = yt;
+                fb = ft;
+                found = 1;
+            } else if (fabs(ft) < fabs(fa)) {
+                /* keep the better end as the anchor */
+                a = yt;
+                fa = ft;
+            }
+        }
+    }
+    if (!found) {
+        eval_at(s, w, i, a);
+        return;
+    }
+    double c = b;
+    for (int it = 0; it < ONE_D_ITER; it++) {
+        c = b - fb * (b - a) / (fb - fa);
+        if (!(c > fmin(a, b) && c < fmax(a, b))) c = 0.5 * (a + b);
+        double fc = eval_at(s, w, i, c);
+        if (fabs(fc) <= ONE_D_TOL * w->scale[r] || fabs(b - a) < ONE_D_DY) break;
+        if ((fc < 0.0) != (fb < 0.0)) {
+            a = b;
+            fa = fb;
+        } else {
+            fa *= 0.5;
+        }
+        b = c;
+        fb = fc;
+    }
+}
+
+/* A starting point without a previous solution: ideal activity
+ * coefficients (I held at its floor), then Gauss-Seidel passes: the
+ * activity and fugacity equations solved directly (linear in y), mass
+ * balances of components with only positive coefficients rescaled
+ * (continued-fraction-like), the others and charge balance by 1-D root
+ * finding.  Newton takes it from there. */
 static void cold_start(const px_equil_system *s, px_equil_work *w)
 {
     size_t nb = s->nb;
@@ -627,32 +751,19 @@ static void cold_start(const px_equil_system *s, px_equil_work *w)
         }
         w->y[i] = w->cabsent[i] ? PX_EQUIL_LOG_ABSENT : y;
     }
-    w->xI = -7.0;
+    w->xI = PX_EQUIL_XI_MIN; /* ideal: the lagged terms stay 0 too */
     for (int pass = 0; pass < CF_PASSES; pass++) {
+        solve_linear(s, w, SIZE_MAX);
         evaluate(s, w, 0);
-        /* I = 1/2 sum z^2 m: R_I = I - floor - 1/2 sum, so the sum is I - R_I */
-        double Inew = exp(LN10 * w->xI) - w->R[w->ncol];
-        w->xI = clampd(log10(fmax(Inew, PX_EQUIL_I_FLOOR)), PX_EQUIL_XI_MIN, PX_EQUIL_XI_MAX);
-        /* the lagged terms stay at 0 here: far from the answer they would
-         * feed back (a low a_w raises species that release water) */
-        double worst = 0.0;
         for (size_t i = 0; i < nb; i++) {
             size_t r = w->row[i];
             if (r == SIZE_MAX) continue;
             int kind = s->ckind[i];
-            if (kind == PX_EQUIL_C_ACTIVITY || kind == PX_EQUIL_C_FUGACITY) {
-                /* linear in y_i: move y_i to satisfy it given the others */
-                double nu_ii = kind == PX_EQUIL_C_ACTIVITY ? 1.0
-                                                           : s->nu[s->cgas[i] * nb + i];
-                w->y[i] = clampd(w->y[i] - w->R[r] / nu_ii, -PX_EQUIL_LM_MAX, PX_EQUIL_LM_MAX);
-                continue;
-            }
             if (kind != PX_EQUIL_C_TOTAL || s->phase[i] != PX_EQUIL_AQ || s->cval[i] <= 0.0 ||
                 !posonly_component(s, w, i))
                 continue;
-            /* scale the basis molality so the positive sum matches the total
-             * (continued-fraction-like correction, damped by the mean
-             * coefficient sum nu^2 m / sum nu m) */
+            /* rescale the basis molality so the sum matches the total, damped
+             * by the mean coefficient sum nu^2 m / sum nu m */
             double sum = 0.0, sum2 = 0.0;
             for (size_t j = 0; j < s->ns; j++) {
                 if (w->sabsent[j] || s->phase[j] != PX_EQUIL_AQ) continue;
@@ -662,11 +773,29 @@ static void cold_start(const px_equil_system *s, px_equil_work *w)
             }
             if (!(sum > 0.0) || !(sum2 > 0.0)) continue;
             double d = log10(s->cval[i] / sum);
-            if (fabs(d) > worst) worst = fabs(d);
             w->y[i] = clampd(w->y[i] + d * sum / sum2, -PX_EQUIL_LM_MAX, PX_EQUIL_LM_MAX);
         }
-        if (worst < CF_DONE && pass > 0) break;
+        for (size_t i = 0; i < nb; i++) {
+            if (w->row[i] == SIZE_MAX) continue;
+            int kind = s->ckind[i];
+            if (kind == PX_EQUIL_C_CHARGE ||
+                (kind == PX_EQUIL_C_TOTAL && (s->phase[i] != PX_EQUIL_AQ || s->cval[i] <= 0.0 ||
+                                              !posonly_component(s, w, i))))
+                solve_1d(s, w, i);
+        }
+        evaluate(s, w, 0);
+        double worst = 0.0;
+        for (size_t r = 0; r < w->ncol; r++) {
+            size_t k = w->row_kind[r];
+            double e = (k == PX_EQUIL_C_TOTAL || k == PX_EQUIL_C_CHARGE)
+                           ? fabs(w->R[r]) / w->scale[r] : fabs(w->R[r]);
+            worst = fmax(worst, e);
+        }
+        if (worst < CF_DONE) break;
     }
+    /* I from the ideal molalities: R_I = I - floor - 1/2 sum z^2 m */
+    double Inew = exp(LN10 * w->xI) - w->R[w->ncol];
+    w->xI = clampd(log10(fmax(Inew, PX_EQUIL_I_FLOOR)), PX_EQUIL_XI_MIN, PX_EQUIL_XI_MAX);
 }
 
 /* ---------------------------------------------------------------------- */

@@ -7,7 +7,7 @@
  * come from /work/shared/reference/log_k_25C.csv (read at run time) or carry
  * their source beside them.  Every solve is followed by tb_check(): species
  * add up to each total to 1e-10 relative. */
-#include "equil_test_util.h"
+#include "test_equil_util.h"
 #include "core/constants.h"
 
 /* K2 of carbonic acid, HCO3- = CO3^2- + H+: log K = -10.329 at 25 C, from

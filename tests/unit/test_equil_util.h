@@ -1,10 +1,10 @@
-/* equil_test_util.h - helpers shared by the speciation-solver tests: a
+/* test_equil_util.h - helpers shared by the speciation-solver tests: a
  * small system builder that remembers the stoichiometry (so a test can
  * add species up to each component's total on its own), readers for the
  * reference CSV files in PHLOX_REFERENCE_DIR, and the totals check run
  * after every solve. */
-#ifndef EQUIL_TEST_UTIL_H
-#define EQUIL_TEST_UTIL_H
+#ifndef TEST_EQUIL_UTIL_H
+#define TEST_EQUIL_UTIL_H
 #include "px_test.h"
 #include "equil/equil.h"
 #include <stdarg.h>
