@@ -1,0 +1,223 @@
+/* test_equil_util.h - helpers shared by the speciation-solver tests: a
+ * small system builder that remembers the stoichiometry (so a test can
+ * add species up to each component's total on its own), readers for the
+ * reference CSV files in PHLOX_REFERENCE_DIR, and the totals check run
+ * after every solve. */
+#ifndef TEST_EQUIL_UTIL_H
+#define TEST_EQUIL_UTIL_H
+#include "px_test.h"
+#include "equil/equil.h"
+#include <stdarg.h>
+#include <stdlib.h>
+#include <string.h>
+
+#define TB_MAXB 12
+#define TB_MAXS 64
+#define END (-1)
+
+typedef struct tb {
+    px_equil_system *s;
+    px_equil_work *w;
+    size_t nb, ns, n;
+    double nu[TB_MAXS][TB_MAXB];
+    double z[TB_MAXS];
+    int phase[TB_MAXS];
+} tb;
+
+static inline void tb_init(tb *t, size_t nb, size_t ns)
+{
+    memset(t, 0, sizeof *t);
+    assert_true(nb <= TB_MAXB && ns <= TB_MAXS);
+    t->nb = nb;
+    t->ns = ns;
+    assert_int_equal(px_equil_system_create(&t->s, nb, ns, NULL), PX_OK);
+}
+
+static inline void tb_done(tb *t)
+{
+    px_equil_work_free(t->w);
+    px_equil_system_free(t->s);
+    t->w = NULL;
+    t->s = NULL;
+}
+
+/* Adds the next species: log K of formation, charge, phase, ion size, then
+ * (basis index, coefficient) pairs ending with END.  Basis species (the
+ * first nb) take no pairs. */
+static inline size_t tb_add(tb *t, double logk, double z, px_equil_phase ph, double size, ...)
+{
+    size_t j = t->n++;
+    assert_true(j < t->ns);
+    double *nu = t->nu[j];
+    va_list ap;
+    va_start(ap, size);
+    for (;;) {
+        int i = va_arg(ap, int);
+        if (i < 0) break;
+        double v = va_arg(ap, double);
+        assert_true((size_t)i < t->nb);
+        nu[i] += v;
+    }
+    va_end(ap);
+    if (j < t->nb) nu[j] = 1.0;
+    t->z[j] = z;
+    t->phase[j] = (int)ph;
+    px_equil_species d = {j < t->nb ? NULL : nu, logk, z, ph, size, 0};
+    assert_int_equal(px_equil_system_set_species(t->s, j, &d), PX_OK);
+    return j;
+}
+
+static inline int tb_solve(tb *t, const px_equil_options *o)
+{
+    if (!t->w) assert_int_equal(px_equil_work_create(&t->w, t->s, NULL), PX_OK);
+    return px_equil_solve(t->s, t->w, o);
+}
+
+static inline px_equil_species_result tb_sp(const tb *t, size_t j)
+{
+    px_equil_species_result r;
+    assert_int_equal(px_equil_work_get_species(t->w, j, &r), PX_OK);
+    return r;
+}
+
+static inline double tb_ph(const tb *t, size_t h)
+{
+    return -tb_sp(t, h).log_activity;
+}
+
+/* Sum of nu * m (+ nu * n for solids) over species for component i, as the
+ * test computes it itself, with the sum of absolute terms for scale. */
+static inline double tb_sum(const tb *t, size_t i, double *scale)
+{
+    double sum = 0.0, sc = 0.0;
+    for (size_t j = 0; j < t->n; j++) {
+        px_equil_species_result r = tb_sp(t, j);
+        double q = t->phase[j] == PX_EQUIL_AQ ? r.molality
+                   : t->phase[j] == PX_EQUIL_SOLID ? r.amount : 0.0;
+        sum += t->nu[j][i] * q;
+        sc += fabs(t->nu[j][i] * q);
+    }
+    if (scale) *scale = sc;
+    return sum;
+}
+
+/* Species add up to each component's total to 1e-10 relative (the brief's
+ * requirement; the solver's own tolerance is 1e-12); every output finite;
+ * charge balance closes where it was asked for. */
+static inline void tb_check(const tb *t)
+{
+    for (size_t i = 0; i < t->nb; i++) {
+        px_equil_component_result c;
+        assert_int_equal(px_equil_work_get_component(t->w, i, &c), PX_OK);
+        if (c.kind == PX_EQUIL_C_TOTAL) {
+            double sc, sum = tb_sum(t, i, &sc);
+            double ref = fmax(fabs(c.total_given), sc);
+            if (!(fabs(sum - c.total_given) <= 1e-10 * ref)) {
+                print_error("component %zu: species add up to %.15g, total %.15g\n", i, sum,
+                            c.total_given);
+                fail();
+            }
+            assert_close(c.total_aq + c.total_solid, c.total_given, 1e-10, 1e-10 * ref);
+        }
+        if (c.kind == PX_EQUIL_C_CHARGE) {
+            double q = 0.0, qs = 0.0;
+            for (size_t j = 0; j < t->n; j++) {
+                if (t->phase[j] != PX_EQUIL_AQ) continue;
+                double m = tb_sp(t, j).molality;
+                q += t->z[j] * m;
+                qs += fabs(t->z[j] * m);
+            }
+            assert_true(fabs(q) <= 1e-10 * qs);
+        }
+    }
+    for (size_t j = 0; j < t->n; j++) {
+        px_equil_species_result r = tb_sp(t, j);
+        assert_true(isfinite(r.molality) && isfinite(r.log_molality) && isfinite(r.log_gamma) &&
+                    isfinite(r.log_activity) && isfinite(r.si) && isfinite(r.amount));
+    }
+}
+
+/* --- reference CSV readers --------------------------------------------- */
+
+/* Splits one CSV line into fields (quotes honoured, no escaped quotes). */
+static inline int csv_fields(char *line, char **f, int maxf)
+{
+    int n = 0;
+    char *p = line;
+    while (*p && n < maxf) {
+        if (*p == '"') {
+            f[n++] = ++p;
+            while (*p && *p != '"') p++;
+            if (*p) *p++ = '\0';
+            if (*p == ',') p++;
+        } else {
+            f[n++] = p;
+            while (*p && *p != ',' && *p != '\n' && *p != '\r') p++;
+            if (*p) *p++ = '\0';
+        }
+    }
+    return n;
+}
+
+/* log10 K of the first row of log_k_25C.csv whose reaction matches. */
+static inline double ref_logk(const char *reaction)
+{
+    FILE *fp = fopen(PHLOX_REFERENCE_DIR "/log_k_25C.csv", "r");
+    assert_non_null(fp);
+    char line[4096];
+    double v = NAN;
+    while (fgets(line, sizeof line, fp)) {
+        char *f[8];
+        if (csv_fields(line, f, 8) >= 2 && strcmp(f[0], reaction) == 0) {
+            v = strtod(f[1], NULL);
+            break;
+        }
+    }
+    fclose(fp);
+    if (!isfinite(v)) print_error("no row for '%s' in log_k_25C.csv\n", reaction);
+    assert_true(isfinite(v));
+    return v;
+}
+
+/* A value of water.csv: group, t_C and quantity select the row. */
+static inline double ref_water(const char *group, double t_c, const char *quantity)
+{
+    FILE *fp = fopen(PHLOX_REFERENCE_DIR "/water.csv", "r");
+    assert_non_null(fp);
+    char line[4096];
+    double v = NAN;
+    while (fgets(line, sizeof line, fp)) {
+        char *f[12];
+        if (csv_fields(line, f, 12) >= 7 && strcmp(f[0], group) == 0 &&
+            fabs(strtod(f[1], NULL) - t_c) < 1e-9 && strcmp(f[5], quantity) == 0) {
+            v = strtod(f[6], NULL);
+            break;
+        }
+    }
+    fclose(fp);
+    assert_true(isfinite(v));
+    return v;
+}
+
+/* Debye-Hueckel A (log10, kg^0.5 mol^-0.5) of debye_huckel.csv, the row
+ * computed from IAPWS at saturation ("computed here: A, B ..."). */
+static inline double ref_dh_a(double t_c)
+{
+    FILE *fp = fopen(PHLOX_REFERENCE_DIR "/debye_huckel.csv", "r");
+    assert_non_null(fp);
+    char line[4096];
+    double v = NAN;
+    while (fgets(line, sizeof line, fp)) {
+        char *f[12];
+        if (csv_fields(line, f, 12) >= 8 && fabs(strtod(f[0], NULL) - t_c) < 1e-9 &&
+            strncmp(f[7], "computed here: A, B", 19) == 0) {
+            v = strtod(f[5], NULL);
+            break;
+        }
+    }
+    fclose(fp);
+    assert_true(isfinite(v));
+    return v;
+}
+
+#endif
