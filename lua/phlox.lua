@@ -229,6 +229,34 @@ function phlox.map(opts)
   return m
 end
 
+--- Full speciation of a water.
+--   phlox.speciate { library = lib, T_C = 25,
+--     totals = { Ca = 1e-3, C = 2e-3 },        -- mol/kg of each element
+--     pH = 8.3,                                -- fixed; omit for charge balance
+--     E = 0.2 | pe = 3 | redox_gas = "O2(g)", redox_log_f = -0.68,
+--     fugacities = { ["CO2(g)"] = -3.4 },      -- log10 bar, replaces that element's total
+--     fixed = { ["Cl^-"] = -2 },               -- log10 activity of a basis species
+--     solids = true, suppress = {...}, exclude = {...},
+--     activity = "davies" | "bdot" | "ideal" | "sit" }
+-- Returns a table (pH, pe, E, ionic_strength, species, elements with each
+-- species' share, solids' saturation index and amount), or nil, message,
+-- info when the solver does not converge.
+function phlox.speciate(opts)
+  assert(type(opts) == "table", "phlox.speciate: options table expected")
+  local lib = opts.library
+  if getmetatable(lib) ~= phlox.Library then error("phlox.speciate: library = phlox.library{...} expected", 2) end
+  local T = temperature(opts, "phlox.speciate")
+  local P = pressure(opts, T, "phlox.speciate")
+  local copt = {}
+  for k, v in pairs(opts) do copt[k] = v end
+  copt.library, copt.T_C = nil, nil
+  copt.T, copt.P = T, P
+  local r, err, info = core.speciate(lib.db, copt)
+  if not r then return nil, err, info end
+  r.T_C = T - T0C
+  return r
+end
+
 --- The species of the map at a point, e.g. phlox.locate(map, 7.0, -0.4).
 function phlox.locate(map, x, y)
   for _, f in ipairs(map.fields) do

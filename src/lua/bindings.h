@@ -16,5 +16,6 @@ void px_lua_open_util(lua_State *L);
 void px_lua_open_render(lua_State *L);
 void px_lua_open_thermo(lua_State *L);
 void px_lua_open_diagram(lua_State *L);
+void px_lua_open_equil(lua_State *L);
 
 #endif

@@ -5,6 +5,7 @@
 #include "core/status.h"
 #include "diagram/diagram.h"
 #include "diagram/emap.h"
+#include "diagram/rmap.h"
 #include "lua/bindings.h"
 #include <lauxlib.h>
 #include <math.h>
@@ -285,6 +286,140 @@ static int l_map(lua_State *L)
     return 1;
 }
 
+/* core.grid_map(db, opts) -> rigorous map table | nil, message
+ * opts: element, T, P, window {pHmin, pHmax, Emin, Emax}, nx, ny, total,
+ * ligand, ligand_total, activity ("ideal"|"davies"|"bdot"), background_nacl,
+ * exclude {...}.  The table has fields (species, count, area, label_x,
+ * label_y), boundaries (between, x, y polylines), the node labels (labels:
+ * nx*ny indices into `species`, row by row from the lowest E; 0 where the
+ * solver failed) and statistics. */
+static int l_grid_map(lua_State *L)
+{
+    static const char *const models[] = {"ideal", "davies", "bdot", NULL};
+    px_db *db;
+    px_thermo_ws *ws;
+    px_lua_check_database(L, 1, &db, &ws);
+    luaL_checktype(L, 2, LUA_TTABLE);
+    lua_settop(L, 2);
+    px_rmap_options o = px_rmap_options_default();
+    lua_getfield(L, 2, "element");
+    const char *element = luaL_checkstring(L, -1);
+    lua_pop(L, 1);
+    o.T = optnum(L, 2, "T", o.T);
+    o.P = optnum(L, 2, "P", o.P);
+    if (lua_getfield(L, 2, "window") == LUA_TTABLE) {
+        double w[4];
+        for (int i = 0; i < 4; i++) {
+            lua_rawgeti(L, -1, i + 1);
+            w[i] = luaL_checknumber(L, -1);
+            lua_pop(L, 1);
+        }
+        o.window = (px_diagram_window){w[0], w[1], w[2], w[3]};
+    }
+    lua_pop(L, 1);
+    o.grid.nx = (size_t)optnum(L, 2, "nx", (double)o.grid.nx);
+    o.grid.ny = (size_t)optnum(L, 2, "ny", (double)o.grid.ny);
+    o.total = optnum(L, 2, "total", o.total);
+    o.ligand_total = optnum(L, 2, "ligand_total", o.ligand_total);
+    o.background_na_cl = optnum(L, 2, "background_nacl", 0);
+    lua_getfield(L, 2, "ligand");
+    o.ligand = lua_tostring(L, -1);
+    lua_pop(L, 1);
+    lua_getfield(L, 2, "activity");
+    int model = luaL_checkoption(L, -1, "davies", models);
+    lua_pop(L, 1);
+    o.model = model == 0 ? PX_EQUIL_IDEAL : model == 1 ? PX_EQUIL_DAVIES : PX_EQUIL_BDOT;
+    o.exclude = optlist(L, 2, "exclude", &o.n_exclude);
+
+    px_diagram_grid *g;
+    px_rmap_stats stats;
+    char msg[512] = "";
+    int st = px_rmap_build(ws, db, element, &o, &g, &stats, msg, sizeof msg);
+    if (st != PX_OK) {
+        luaL_pushfail(L);
+        lua_pushfstring(L, "grid map of %s: %s", element, msg[0] ? msg : px_strerror(st));
+        return 2;
+    }
+    lua_createtable(L, 0, 12);
+    lua_pushstring(L, element);
+    lua_setfield(L, -2, "element");
+    setnum(L, "T", o.T);
+    setnum(L, "P", o.P);
+    push_axis(L, "x", PX_AXIS_PH, o.window.xmin, o.window.xmax, NULL);
+    push_axis(L, "y", PX_AXIS_E, o.window.ymin, o.window.ymax, NULL);
+    lua_pushinteger(L, (lua_Integer)g->nx);
+    lua_setfield(L, -2, "nx");
+    lua_pushinteger(L, (lua_Integer)g->ny);
+    lua_setfield(L, -2, "ny");
+    lua_pushinteger(L, (lua_Integer)stats.solves);
+    lua_setfield(L, -2, "solves");
+    lua_pushinteger(L, (lua_Integer)stats.failures);
+    lua_setfield(L, -2, "failures");
+    /* species list (field order) and fields */
+    lua_createtable(L, (int)g->nfield, 0); /* species */
+    lua_createtable(L, (int)g->nfield, 0); /* fields */
+    int nf = 0;
+    for (size_t f = 0; f < g->nfield; f++) {
+        const px_diagram_grid_field *gf = &g->field[f];
+        if (gf->id < 0) continue;
+        const char *name = px_db_get(db, (size_t)gf->id)->f.text;
+        nf++;
+        lua_pushstring(L, name);
+        lua_rawseti(L, -3, nf);
+        lua_createtable(L, 0, 8);
+        lua_pushstring(L, name);
+        lua_setfield(L, -2, "species");
+        lua_pushinteger(L, (lua_Integer)gf->count);
+        lua_setfield(L, -2, "count");
+        setnum(L, "area", gf->area);
+        setnum(L, "label_x", gf->label_x);
+        setnum(L, "label_y", gf->label_y);
+        setnum(L, "cx", gf->cx);
+        setnum(L, "cy", gf->cy);
+        lua_rawseti(L, -2, nf);
+    }
+    lua_setfield(L, -3, "fields");
+    lua_setfield(L, -2, "species");
+    /* node labels as indices into `species` (0 = no convergence) */
+    lua_getfield(L, -1, "species");
+    int sidx = lua_gettop(L);
+    lua_createtable(L, (int)(g->nx * g->ny), 0);
+    for (size_t k = 0; k < g->nx * g->ny; k++) {
+        int id = g->label[k], v = 0;
+        if (id >= 0) {
+            const char *name = px_db_get(db, (size_t)id)->f.text;
+            for (int q = 1; q <= nf && !v; q++) {
+                lua_rawgeti(L, sidx, q);
+                if (strcmp(lua_tostring(L, -1), name) == 0) v = q;
+                lua_pop(L, 1);
+            }
+        }
+        lua_pushinteger(L, v);
+        lua_rawseti(L, -2, (lua_Integer)k + 1);
+    }
+    lua_setfield(L, -3, "labels");
+    lua_pop(L, 1); /* species */
+    /* boundaries */
+    lua_createtable(L, (int)g->npoly, 0);
+    for (size_t b = 0; b < g->npoly; b++) {
+        const px_diagram_polyline *pl = &g->poly[b];
+        lua_createtable(L, 0, 3);
+        lua_createtable(L, 2, 0);
+        lua_pushstring(L, pl->id_a >= 0 ? px_db_get(db, (size_t)pl->id_a)->f.text : "?");
+        lua_rawseti(L, -2, 1);
+        lua_pushstring(L, pl->id_b >= 0 ? px_db_get(db, (size_t)pl->id_b)->f.text : "?");
+        lua_rawseti(L, -2, 2);
+        lua_setfield(L, -2, "between");
+        push_xy(L, g->px + pl->first, g->py + pl->first, pl->n, NULL);
+        lua_rawseti(L, -2, (lua_Integer)b + 1);
+    }
+    lua_setfield(L, -2, "boundaries");
+    lua_pushinteger(L, (lua_Integer)g->ncalls);
+    lua_setfield(L, -2, "calls");
+    px_diagram_grid_free(g);
+    return 1;
+}
+
 /* core.electrodes() -> { {name, offset, dEdT, source}, ... } (index 1 = SHE) */
 static int l_electrodes(lua_State *L)
 {
@@ -314,6 +449,6 @@ static int l_nernst_slope(lua_State *L)
 void px_lua_open_diagram(lua_State *L)
 {
     static const luaL_Reg funcs[] = {
-        {"map", l_map}, {"electrodes", l_electrodes}, {"nernst_slope", l_nernst_slope}, {NULL, NULL}};
+        {"map", l_map}, {"grid_map", l_grid_map}, {"electrodes", l_electrodes}, {"nernst_slope", l_nernst_slope}, {NULL, NULL}};
     luaL_setfuncs(L, funcs, 0);
 }

@@ -7,4 +7,5 @@ const px_lua_opener px_lua_openers[] = {
     px_lua_open_render,
     px_lua_open_thermo,
     px_lua_open_diagram,
+    px_lua_open_equil,
     0};

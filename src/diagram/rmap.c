@@ -1,0 +1,117 @@
+/* rmap.c - rigorous maps: the speciation solver as the labelling callback
+ * of the grid tracer (see rmap.h).  Each solve starts warm from the last
+ * one; a failed warm start is retried cold before the node is given up. */
+#include "diagram/rmap.h"
+#include "core/constants.h"
+#include "core/status.h"
+#include <math.h>
+#include <stdio.h>
+#include <string.h>
+
+#define PX_RMAP_DEFAULT_TOTAL 1e-6 /* mol/kg: the corrosion convention, common practice */
+
+px_rmap_options px_rmap_options_default(void)
+{
+    px_rmap_options o;
+    memset(&o, 0, sizeof o);
+    o.T = PX_TR;
+    o.P = PX_PR;
+    o.window = (px_diagram_window){0.0, 14.0, -2.0, 2.0};
+    o.grid = px_diagram_grid_options_default();
+    o.total = PX_RMAP_DEFAULT_TOTAL;
+    o.ligand_total = 1e-3;
+    o.model = PX_EQUIL_DAVIES;
+    return o;
+}
+
+typedef struct rctx {
+    px_spec *s;
+    const px_db *db;
+    int zM;
+    double T;
+    size_t comp; /* component of the element */
+    px_equil_options sopt;
+    px_rmap_stats *stats;
+} rctx;
+
+static int label_node(double x, double y, void *user, int *id)
+{
+    rctx *c = user;
+    int st = px_equil_system_set_ph(c->s->sys, 1, x);
+    if (st == PX_OK) st = px_equil_system_set_eh(c->s->sys, 2, y, c->T);
+    if (st != PX_OK) return st; /* misuse: abort the map */
+    c->stats->solves++;
+    st = px_equil_solve(c->s->sys, c->s->work, &c->sopt);
+    if (st != PX_OK) {
+        px_equil_work_reset(c->s->work);
+        st = px_equil_solve(c->s->sys, c->s->work, &c->sopt);
+    }
+    if (st != PX_OK) {
+        c->stats->failures++;
+        px_equil_work_reset(c->s->work);
+        *id = -1;
+        return 0;
+    }
+    size_t nb = c->s->n_basis;
+    long best_solid = -1, best_aq = -1;
+    double amt_solid = 0, amt_aq = 0;
+    for (size_t j = 0; j < c->s->n_species; j++) {
+        double nu = c->s->nu[j * nb + c->comp];
+        if (!(nu > 0)) continue;
+        px_equil_species_result r;
+        px_equil_work_get_species(c->s->work, j, &r);
+        const px_species *sp = px_db_get(c->db, (size_t)c->s->db_index[j]);
+        if (sp->f.state == PX_STATE_S) {
+            if (r.amount * nu > amt_solid) {
+                amt_solid = r.amount * nu;
+                best_solid = c->s->db_index[j];
+            }
+        } else if (sp->f.state == PX_STATE_AQ && r.molality * nu > amt_aq) {
+            amt_aq = r.molality * nu;
+            best_aq = c->s->db_index[j];
+        }
+    }
+    *id = (int)(best_solid >= 0 ? best_solid : best_aq);
+    return 0;
+}
+
+int px_rmap_build(px_thermo_ws *ws, const px_db *db, const char *element, const px_rmap_options *o,
+                  px_diagram_grid **out, px_rmap_stats *stats, char *msg, size_t msglen)
+{
+    if (!ws || !db || !element || !o || !out || !stats) return PX_EINVAL;
+    memset(stats, 0, sizeof *stats);
+    px_spec_options so = px_spec_options_default();
+    so.T = o->T;
+    so.P = o->P;
+    so.n_totals = 0;
+    so.element[so.n_totals] = element;
+    so.total[so.n_totals++] = o->total;
+    if (o->ligand) {
+        so.element[so.n_totals] = o->ligand;
+        so.total[so.n_totals++] = o->ligand_total;
+    }
+    if (o->background_na_cl > 0) {
+        if (!o->ligand || strcmp(o->ligand, "Cl") != 0) {
+            so.element[so.n_totals] = "Cl";
+            so.total[so.n_totals++] = o->background_na_cl;
+        }
+        so.element[so.n_totals] = "Na";
+        so.total[so.n_totals++] = o->background_na_cl;
+    }
+    so.ph_mode = PX_SPEC_PH_FIXED;
+    so.pH = 0.5 * (o->window.xmin + o->window.xmax);
+    so.redox_mode = PX_SPEC_REDOX_E;
+    so.E = 0.5 * (o->window.ymin + o->window.ymax);
+    so.model = o->model;
+    for (size_t i = 0; i < o->n_exclude && i < PX_SPEC_MAX_ITEMS; i++) so.exclude[so.n_exclude++] = o->exclude[i];
+    px_spec *s;
+    int st = px_spec_build(ws, db, &so, &s, msg, msglen);
+    if (st != PX_OK) return st;
+    rctx c = {s, db, px_element_z(element), o->T, 3, px_equil_options_default(), stats};
+    c.sopt.warm = 1;
+    st = px_diagram_grid_map(&o->window, label_node, &c, &o->grid, out);
+    if (st != PX_OK && msg && msglen && !msg[0])
+        snprintf(msg, msglen, "grid map of %s: %s", element, px_strerror(st));
+    px_spec_free(s);
+    return st;
+}

@@ -1,0 +1,36 @@
+/* rmap.h - rigorous predominance maps: the full speciation solver at every
+ * node of a pH-E grid (mass balance of the element and of a ligand,
+ * activity coefficients, solids), boundaries traced between nodes and
+ * refined by bisection (px_diagram_grid_map).  A node is marked by the
+ * stable solid of the element where one precipitates (the one holding most
+ * of the element), else by the aqueous species with the largest share of
+ * the element. */
+#ifndef PX_RMAP_H
+#define PX_RMAP_H
+#include "diagram/diagram.h"
+#include "equil/speciate.h"
+
+typedef struct px_rmap_options {
+    double T, P;
+    px_diagram_window window; /* pH, E (V vs SHE) */
+    px_diagram_grid_options grid;
+    double total;             /* mol/kg of the element */
+    const char *ligand;       /* or NULL */
+    double ligand_total;      /* mol/kg */
+    px_equil_model model;     /* activity model (Davies by default) */
+    double background_na_cl;  /* mol/kg of NaCl background electrolyte (0: none) */
+    const char *const *exclude;
+    size_t n_exclude;
+} px_rmap_options;
+
+px_rmap_options px_rmap_options_default(void);
+
+typedef struct px_rmap_stats {
+    size_t solves, failures; /* nodes where the solver did not converge: id -1 */
+} px_rmap_stats;
+
+/* Field ids of the grid are database indices (-1: no convergence). */
+int px_rmap_build(px_thermo_ws *ws, const px_db *db, const char *element, const px_rmap_options *o,
+                  px_diagram_grid **out, px_rmap_stats *stats, char *msg, size_t msglen);
+
+#endif

@@ -1,0 +1,376 @@
+/* speciate.c - from the species database to the generic solver (see
+ * speciate.h). */
+#include "equil/speciate.h"
+#include "core/constants.h"
+#include "core/status.h"
+#include "thermo/basis.h"
+#include "water/water.h"
+#include <math.h>
+#include <stdarg.h>
+#include <stdio.h>
+#include <stdlib.h>
+#include <string.h>
+
+#define Z_H 1
+#define Z_O 8
+#define PX_SPEC_NU_EPS 1e-9
+
+/* B-dot of Helgeson 1969 (Am. J. Sci. 267, 729), table for NaCl solutions,
+ * from memory: 0.041 kg/mol at 25 C, rising to about 0.047 at 150-200 C and
+ * falling to 0.035 at 300 C. */
+static const double bdot_T[] = {273.15, 298.15, 323.15, 373.15, 423.15, 473.15, 523.15, 573.15};
+static const double bdot_v[] = {0.0374, 0.0410, 0.0430, 0.0460, 0.0470, 0.0470, 0.0440, 0.0350};
+
+double px_spec_bdot(double T)
+{
+    size_t n = sizeof bdot_T / sizeof bdot_T[0];
+    if (!(T >= bdot_T[0] && T <= bdot_T[n - 1])) return NAN;
+    for (size_t i = 1; i < n; i++)
+        if (T <= bdot_T[i]) {
+            double t = (T - bdot_T[i - 1]) / (bdot_T[i] - bdot_T[i - 1]);
+            return bdot_v[i - 1] + t * (bdot_v[i] - bdot_v[i - 1]);
+        }
+    return bdot_v[n - 1];
+}
+
+double px_spec_ion_size(int charge)
+{
+    int a = charge < 0 ? -charge : charge;
+    return a == 0 ? 0.0 : a == 1 ? 4.0 : a == 2 ? 5.0 : a == 3 ? 6.0 : 7.0;
+}
+
+px_spec_options px_spec_options_default(void)
+{
+    px_spec_options o;
+    memset(&o, 0, sizeof o);
+    o.T = PX_TR;
+    o.P = PX_PR;
+    o.ph_mode = PX_SPEC_PH_CHARGE;
+    o.pH = 7.0;
+    o.solids = 1;
+    o.model = PX_EQUIL_DAVIES;
+    o.solver = px_equil_options_default();
+    return o;
+}
+
+static int fail(char *msg, size_t n, int st, const char *fmt, ...)
+{
+    if (msg && n) {
+        va_list ap;
+        va_start(ap, fmt);
+        vsnprintf(msg, n, fmt, ap);
+        va_end(ap);
+    }
+    return st;
+}
+
+static int listed(const char *const *list, size_t n, const char *text)
+{
+    for (size_t i = 0; i < n; i++) {
+        px_formula f;
+        if (list[i] && px_formula_parse(list[i], &f) == PX_OK && strcmp(f.text, text) == 0) return 1;
+    }
+    return 0;
+}
+
+void px_spec_free(px_spec *s)
+{
+    if (!s) return;
+    px_equil_work_free(s->work);
+    px_equil_system_free(s->sys);
+    free(s->db_index);
+    free(s->nu);
+    free(s->elem_z);
+    free(s);
+}
+
+/* Conventional basis species: the form in which water analyses and
+ * hydrometallurgical recipes usually state an element's total (common
+ * practice, no source).  Without a redox constraint each element stays in
+ * the oxidation state of its basis species, so the choice matters: sulfur
+ * as sulfate, nitrogen as ammonium (ammine complexes), iron as Fe(II). */
+static const char *const conventional_basis[][2] = {
+    {"C", "HCO3^-"}, {"S", "SO4^2-"}, {"N", "NH4^+"},   {"P", "H2PO4^-"}, {"F", "F^-"},
+    {"Cl", "Cl^-"},  {"Fe", "Fe^2+"}, {"Mn", "Mn^2+"},  {"Cr", "Cr^3+"},  {"Cu", "Cu^2+"},
+    {"Co", "Co^2+"}, {"Sn", "Sn^2+"}, {"Mo", "MoO4^2-"}, {"Pb", "Pb^2+"}, {"Al", "Al^3+"},
+};
+
+/* The basis species of element z: the conventional one if the database has
+ * it, else the aqueous species with one atom of z,
+ * otherwise only H and O, fewest atoms, then smallest |charge|, then the
+ * first in the database (deterministic). */
+static long choose_basis(const px_db *db, int z)
+{
+    for (size_t k = 0; k < sizeof conventional_basis / sizeof conventional_basis[0]; k++)
+        if (px_element_z(conventional_basis[k][0]) == z) {
+            long i = px_db_index(db, conventional_basis[k][1]);
+            if (i >= 0) return i;
+        }
+    long best = -1;
+    double best_atoms = INFINITY;
+    int best_q = 1000;
+    for (size_t i = 0; i < px_db_count(db); i++) {
+        const px_formula *f = &px_db_get(db, i)->f;
+        if (f->state != PX_STATE_AQ || px_formula_count(f, z) != 1.0) continue;
+        int ok = 1;
+        double atoms = 0;
+        for (int e = 0; e < f->n_elem; e++) {
+            if (f->elem[e].z != z && f->elem[e].z != Z_H && f->elem[e].z != Z_O) ok = 0;
+            atoms += f->elem[e].n;
+        }
+        int q = abs(f->charge);
+        if (ok && (atoms < best_atoms || (atoms == best_atoms && q < best_q))) {
+            best = (long)i;
+            best_atoms = atoms;
+            best_q = q;
+        }
+    }
+    return best;
+}
+
+static int set_activity_model(px_spec *s, const px_water_state *w, double T, px_equil_model model)
+{
+    px_equil_activity act = px_equil_activity_default();
+    act.model = model;
+    act.A = w->A_gamma;
+    act.B = w->B_gamma;
+    act.bdot = px_spec_bdot(T);
+    if (!isfinite(act.bdot)) act.bdot = 0.0;
+    act.water = model == PX_EQUIL_IDEAL ? PX_EQUIL_WATER_UNITY : PX_EQUIL_WATER_IDEAL;
+    return px_equil_system_set_activity(s->sys, &act);
+}
+
+static int eval_logk(px_spec *s, px_thermo_ws *ws, const px_db *db, double T, double P, char *msg,
+                     size_t msglen)
+{
+    size_t nb = s->n_basis;
+    double *Gb = malloc(nb * sizeof *Gb);
+    if (!Gb) return PX_ENOMEM;
+    int st = PX_OK;
+    for (size_t i = 0; i < nb && st == PX_OK; i++)
+        st = px_thermo_species_G(ws, db, px_db_get(db, (size_t)s->db_index[i]), T, P, &Gb[i]);
+    for (size_t j = nb; j < s->n_species && st == PX_OK; j++) {
+        const px_species *sp = px_db_get(db, (size_t)s->db_index[j]);
+        double G;
+        st = px_thermo_species_G(ws, db, sp, T, P, &G);
+        if (st != PX_OK) {
+            fail(msg, msglen, st, "%s at %.2f K: %s", sp->f.text, T, px_thermo_ws_error(ws));
+            break;
+        }
+        /* formation from the basis: dG = G_j - sum nu G_b; log K = -dG/(RT ln10) */
+        double dG = G;
+        for (size_t i = 0; i < nb; i++) dG -= s->nu[j * nb + i] * Gb[i];
+        double logk = -dG / (PX_R * T * PX_LN10);
+        st = px_equil_system_set_log_k(s->sys, j, logk);
+    }
+    free(Gb);
+    if (st != PX_OK && msg && !msg[0]) fail(msg, msglen, st, "log K at %.2f K: %s", T, px_strerror(st));
+    return st;
+}
+
+int px_spec_set_TP(px_spec *s, px_thermo_ws *ws, const px_db *db, double T, double P,
+                   px_equil_model model, char *msg, size_t msglen)
+{
+    const px_water_state *w;
+    int st = px_thermo_ws_water(ws, T, P, &w);
+    if (st != PX_OK) return fail(msg, msglen, st, "water at %.2f K, %.4g bar: %s", T, P, px_strerror(st));
+    st = eval_logk(s, ws, db, T, P, msg, msglen);
+    if (st == PX_OK) st = set_activity_model(s, w, T, model);
+    return st;
+}
+
+int px_spec_build(px_thermo_ws *ws, const px_db *db, const px_spec_options *o, px_spec **out,
+                  char *msg, size_t msglen)
+{
+    if (!ws || !db || !o || !out) return PX_EINVAL;
+    *out = NULL;
+    if (msg && msglen) msg[0] = '\0';
+    if (o->n_totals == 0 || o->n_totals > PX_SPEC_MAX_ITEMS - 3)
+        return fail(msg, msglen, PX_EINVAL, "give between 1 and %d element totals", PX_SPEC_MAX_ITEMS - 3);
+    px_spec *s = calloc(1, sizeof *s);
+    if (!s) return PX_ENOMEM;
+    size_t nb = o->n_totals + 3;
+    s->n_basis = nb;
+    long bidx[PX_SPEC_MAX_ITEMS];
+    int st = PX_OK;
+    bidx[0] = px_db_index(db, "H2O(l)");
+    bidx[1] = px_db_index(db, "H^+");
+    bidx[2] = px_db_index(db, "e-");
+    if (bidx[0] < 0 || bidx[1] < 0 || bidx[2] < 0) {
+        st = fail(msg, msglen, PX_ENOTFOUND, "the database lacks H2O(l), H^+ or e-");
+        goto fail;
+    }
+    s->elem_z = calloc(nb, sizeof *s->elem_z);
+    if (!s->elem_z) {
+        st = PX_ENOMEM;
+        goto fail;
+    }
+    for (size_t k = 0; k < o->n_totals; k++) {
+        int z = px_element_z(o->element[k]);
+        if (!z || z == Z_H || z == Z_O) {
+            st = fail(msg, msglen, PX_EINVAL, "totals: unknown or unsupported element '%s'",
+                      o->element[k] ? o->element[k] : "?");
+            goto fail;
+        }
+        for (size_t q = 0; q < k; q++)
+            if (s->elem_z[q + 3] == z) {
+                st = fail(msg, msglen, PX_EINVAL, "totals: %s given twice", o->element[k]);
+                goto fail;
+            }
+        if (!(o->total[k] >= 0) || !isfinite(o->total[k])) {
+            st = fail(msg, msglen, PX_EINVAL, "totals: %s must be a finite number >= 0 mol/kg", o->element[k]);
+            goto fail;
+        }
+        s->elem_z[k + 3] = z;
+        bidx[k + 3] = o->basis[k] ? px_db_index(db, o->basis[k]) : choose_basis(db, z);
+        if (bidx[k + 3] < 0) {
+            st = fail(msg, msglen, PX_ENOTFOUND, "no aqueous basis species for %s%s%s", o->element[k],
+                      o->basis[k] ? ": " : "", o->basis[k] ? o->basis[k] : "");
+            goto fail;
+        }
+    }
+    int redox = o->redox_mode != PX_SPEC_REDOX_NONE;
+    s->redox = redox;
+    /* species: basis first, then every other species made of the elements */
+    size_t ndb = px_db_count(db);
+    s->db_index = malloc((ndb + nb) * sizeof *s->db_index);
+    s->nu = calloc((ndb + nb) * nb, sizeof *s->nu);
+    if (!s->db_index || !s->nu) {
+        st = PX_ENOMEM;
+        goto fail;
+    }
+    const px_formula *bf[PX_SPEC_MAX_ITEMS];
+    for (size_t i = 0; i < nb; i++) {
+        s->db_index[i] = bidx[i];
+        bf[i] = &px_db_get(db, (size_t)bidx[i])->f;
+        s->nu[i * nb + i] = 1.0;
+    }
+    size_t m = nb;
+    for (size_t d = 0; d < ndb; d++) {
+        const px_species *sp = px_db_get(db, d);
+        int is_basis = 0;
+        for (size_t i = 0; i < nb; i++) is_basis |= bidx[i] == (long)d;
+        if (is_basis || sp->f.state == PX_STATE_E) continue;
+        int ok = 1;
+        for (int e = 0; e < sp->f.n_elem && ok; e++) {
+            int z = sp->f.elem[e].z, in = z == Z_H || z == Z_O;
+            for (size_t i = 3; i < nb; i++) in |= s->elem_z[i] == z;
+            ok = in;
+        }
+        if (!ok || listed(o->exclude, o->n_exclude, sp->f.text)) continue;
+        if (sp->f.state == PX_STATE_L) continue; /* other liquids than water: not modelled */
+        double *nu = s->nu + m * nb;
+        if (px_basis_formation(bf, nb, &sp->f, nu, NULL, 0) != PX_OK) continue;
+        if (!redox && fabs(nu[2]) > PX_SPEC_NU_EPS) continue; /* needs electrons */
+        s->db_index[m++] = (long)d;
+    }
+    s->n_species = m;
+    st = px_equil_system_create(&s->sys, nb, m, NULL);
+    if (st != PX_OK) goto fail;
+    for (size_t j = 0; j < m && st == PX_OK; j++) {
+        const px_species *sp = px_db_get(db, (size_t)s->db_index[j]);
+        px_equil_species es = {j < nb ? NULL : s->nu + j * nb, 0.0, (double)sp->f.charge,
+                               PX_EQUIL_AQ, px_spec_ion_size(sp->f.charge), 0u};
+        switch (sp->f.state) {
+        case PX_STATE_S: es.phase = PX_EQUIL_SOLID; break;
+        case PX_STATE_G: es.phase = PX_EQUIL_GAS; break;
+        case PX_STATE_E: es.phase = PX_EQUIL_ELECTRON; break;
+        case PX_STATE_L: es.phase = PX_EQUIL_WATER; break;
+        default: es.phase = PX_EQUIL_AQ; break;
+        }
+        if (es.phase == PX_EQUIL_SOLID && (!o->solids || listed(o->suppress, o->n_suppress, sp->f.text)))
+            es.flags |= PX_EQUIL_SUPPRESSED;
+        st = px_equil_system_set_species(s->sys, j, &es);
+        if (st != PX_OK) fail(msg, msglen, st, "species %s: %s", sp->f.text, px_strerror(st));
+    }
+    if (st != PX_OK) goto fail;
+    st = px_spec_set_TP(s, ws, db, o->T, o->P, o->model, msg, msglen);
+    if (st != PX_OK) goto fail;
+
+    /* constraints: water has none; totals per element; pH; redox */
+    for (size_t k = 0; k < o->n_totals && st == PX_OK; k++)
+        st = px_equil_system_set_total(s->sys, k + 3, o->total[k]);
+    if (st == PX_OK)
+        st = o->ph_mode == PX_SPEC_PH_FIXED ? px_equil_system_set_ph(s->sys, 1, o->pH)
+                                            : px_equil_system_set_charge_balance(s->sys, 1);
+    if (st != PX_OK) {
+        fail(msg, msglen, st, "pH constraint: %s", px_strerror(st));
+        goto fail;
+    }
+    switch (o->redox_mode) {
+    case PX_SPEC_REDOX_E: st = px_equil_system_set_eh(s->sys, 2, o->E, o->T); break;
+    case PX_SPEC_REDOX_PE: st = px_equil_system_set_pe(s->sys, 2, o->pe); break;
+    case PX_SPEC_REDOX_GAS: {
+        long g = -1;
+        for (size_t j = nb; j < m; j++)
+            if (listed(&o->redox_gas, 1, px_db_get(db, (size_t)s->db_index[j])->f.text)) g = (long)j;
+        if (g < 0) {
+            st = fail(msg, msglen, PX_ENOTFOUND, "redox gas '%s' is not among the species",
+                      o->redox_gas ? o->redox_gas : "?");
+            goto fail;
+        }
+        st = px_equil_system_set_fugacity(s->sys, 2, (size_t)g, o->redox_log_f);
+        break;
+    }
+    default: st = px_equil_system_set_pe(s->sys, 2, 0.0); break; /* no species depends on it */
+    }
+    if (st != PX_OK) {
+        fail(msg, msglen, st, "redox constraint: %s", px_strerror(st));
+        goto fail;
+    }
+    /* fixed gas fugacities replace the balance of the element they carry */
+    for (size_t q = 0; q < o->n_gases; q++) {
+        long g = -1;
+        for (size_t j = nb; j < m; j++)
+            if (listed(&o->gas[q], 1, px_db_get(db, (size_t)s->db_index[j])->f.text)) g = (long)j;
+        if (g < 0) {
+            st = fail(msg, msglen, PX_ENOTFOUND, "gas '%s' is not among the species", o->gas[q]);
+            goto fail;
+        }
+        size_t comp = 0;
+        for (size_t i = 3; i < nb && !comp; i++)
+            if (fabs(s->nu[(size_t)g * nb + i]) > PX_SPEC_NU_EPS) comp = i;
+        if (!comp) {
+            st = fail(msg, msglen, PX_EINVAL, "gas '%s' carries none of the elements with totals", o->gas[q]);
+            goto fail;
+        }
+        st = px_equil_system_set_fugacity(s->sys, comp, (size_t)g, o->gas_log_f[q]);
+        if (st != PX_OK) {
+            fail(msg, msglen, st, "fugacity of %s: %s", o->gas[q], px_strerror(st));
+            goto fail;
+        }
+    }
+    for (size_t q = 0; q < o->n_fixed; q++) {
+        size_t comp = 0;
+        for (size_t i = 3; i < nb; i++)
+            if (listed(&o->fixed[q], 1, bf[i]->text)) comp = i;
+        if (!comp) {
+            st = fail(msg, msglen, PX_EINVAL, "fixed activity: %s is not a basis species", o->fixed[q]);
+            goto fail;
+        }
+        st = px_equil_system_set_log_activity(s->sys, comp, o->fixed_log_a[q]);
+        if (st != PX_OK) goto fail;
+    }
+    st = px_equil_work_create(&s->work, s->sys, NULL);
+    if (st != PX_OK) goto fail;
+    *out = s;
+    return PX_OK;
+fail:
+    px_spec_free(s);
+    return st;
+}
+
+int px_spec_solve(px_spec *s, const px_equil_options *opt, char *msg, size_t msglen)
+{
+    int st = px_equil_solve(s->sys, s->work, opt);
+    if (st != PX_OK && msg && msglen) {
+        px_equil_stats stats;
+        px_equil_work_get_stats(s->work, &stats);
+        static const char *const kinds[] = {"none", "mass balance", "activity", "fugacity", "charge balance",
+                                            "water", "ionic strength", "solid saturation", "solid active set"};
+        const char *k = stats.fail_kind >= 0 && stats.fail_kind <= PX_EQUIL_C_ACTIVE_SET ? kinds[stats.fail_kind] : "?";
+        snprintf(msg, msglen, "%s after %zu iterations: %s (equation %zu) did not close, residual %.3g",
+                 px_strerror(st), stats.iterations, k, stats.fail_index, stats.residual_norm);
+    }
+    return st;
+}

@@ -1,0 +1,79 @@
+/* speciate.h - speciation of a water from the species database: builds the
+ * generic equilibrium system of equil.h (basis H2O(l), H^+, e- and one
+ * aqueous basis species per element), evaluates every log K at (T, P),
+ * applies the user's constraints and solves.
+ *
+ * Redox: with a fixed E, pe or redox-gas fugacity every species takes part;
+ * without one, species whose formation from the basis needs electrons are
+ * left out, so each element stays in the oxidation state of its basis
+ * species (documented in docs/solver.md). */
+#ifndef PX_SPECIATE_H
+#define PX_SPECIATE_H
+#include "equil/equil.h"
+#include "thermo/thermo.h"
+
+typedef enum { PX_SPEC_PH_CHARGE = 0, PX_SPEC_PH_FIXED } px_spec_ph;
+typedef enum { PX_SPEC_REDOX_NONE = 0, PX_SPEC_REDOX_E, PX_SPEC_REDOX_PE, PX_SPEC_REDOX_GAS } px_spec_redox;
+
+#define PX_SPEC_MAX_ITEMS 32
+
+typedef struct px_spec_options {
+    double T, P;                    /* K, bar */
+    size_t n_totals;
+    const char *element[PX_SPEC_MAX_ITEMS]; /* element symbols */
+    double total[PX_SPEC_MAX_ITEMS];        /* mol/kg */
+    const char *basis[PX_SPEC_MAX_ITEMS];    /* optional basis species per element (NULL: chosen) */
+    px_spec_ph ph_mode;
+    double pH;
+    px_spec_redox redox_mode;
+    double E, pe;                   /* V vs SHE; pe */
+    const char *redox_gas;          /* "O2(g)" or "H2(g)" with redox_log_f */
+    double redox_log_f;
+    size_t n_gases;                 /* fixed gas fugacities replacing an element's balance */
+    const char *gas[PX_SPEC_MAX_ITEMS];
+    double gas_log_f[PX_SPEC_MAX_ITEMS];
+    size_t n_fixed;                 /* fixed activities of basis species (replacing a balance) */
+    const char *fixed[PX_SPEC_MAX_ITEMS];
+    double fixed_log_a[PX_SPEC_MAX_ITEMS];
+    int solids;                     /* 1: solids may precipitate; 0: all suppressed */
+    size_t n_suppress, n_exclude;
+    const char *suppress[PX_SPEC_MAX_ITEMS]; /* solids never precipitated (metastable) */
+    const char *exclude[PX_SPEC_MAX_ITEMS];  /* species left out entirely */
+    px_equil_model model;           /* activity model (A, B, B-dot from T) */
+    px_equil_options solver;
+} px_spec_options;
+
+px_spec_options px_spec_options_default(void);
+
+/* One speciation problem: the system, its workspace and the db index of
+ * every system species (caller frees with px_spec_free). */
+typedef struct px_spec {
+    px_equil_system *sys;
+    px_equil_work *work;
+    size_t n_species, n_basis;
+    long *db_index;   /* system species -> db index */
+    double *nu;       /* n_species x n_basis formation coefficients */
+    int *elem_z;      /* component i -> element (0 for H2O, H+, e-) */
+    int redox;        /* electrons take part */
+    char error[512];
+} px_spec;
+
+/* Build the system at (T, P).  Errors (PX_ENOTFOUND, PX_EINVAL, ...) leave a
+ * message naming the element, species or constraint in msg. */
+int px_spec_build(px_thermo_ws *ws, const px_db *db, const px_spec_options *o, px_spec **out,
+                  char *msg, size_t msglen);
+/* Re-evaluate every log K and the activity parameters at a new (T, P),
+ * keeping the last solution as a warm start. */
+int px_spec_set_TP(px_spec *s, px_thermo_ws *ws, const px_db *db, double T, double P, px_equil_model model,
+                   char *msg, size_t msglen);
+int px_spec_solve(px_spec *s, const px_equil_options *opt, char *msg, size_t msglen);
+void px_spec_free(px_spec *s); /* NULL ok */
+
+/* Helgeson 1969 B-dot (kg/mol) for NaCl-dominated solutions at T (K),
+ * interpolated in his table; NAN outside 0-300 C. */
+double px_spec_bdot(double T);
+/* Ion-size parameter (Angstrom) used for B-dot by charge (common practice,
+ * no source: 4 A for |z| = 1, 5 for 2, 6 for 3, 7 beyond; 0 for neutral). */
+double px_spec_ion_size(int charge);
+
+#endif

@@ -1,0 +1,234 @@
+/* l_equil.c - speciation for Lua: core.speciate(db, opts) builds the
+ * equilibrium system from the species database (src/equil/speciate.h),
+ * solves it and returns every species' molality, activity coefficient and
+ * activity, the saturation index and amount of every solid, each element's
+ * distribution, pH, pe, E, ionic strength and the solver statistics.  A solve
+ * that does not converge returns nil, message, info (which equation did not
+ * close); misuse raises. */
+#include "core/constants.h"
+#include "core/status.h"
+#include "equil/speciate.h"
+#include "lua/bindings.h"
+#include <lauxlib.h>
+#include <math.h>
+#include <string.h>
+
+int px_lua_check_database(lua_State *L, int arg, px_db **db, px_thermo_ws **ws);
+
+static double optnum(lua_State *L, int t, const char *k, double dflt, int *given)
+{
+    int ty = lua_getfield(L, t, k);
+    double v = dflt;
+    if (ty != LUA_TNIL) {
+        if (!lua_isnumber(L, -1)) luaL_error(L, "speciate: option '%s' must be a number", k);
+        v = lua_tonumber(L, -1);
+        if (given) *given = 1;
+    }
+    lua_pop(L, 1);
+    return v;
+}
+
+/* {key = number} option, sorted by key for determinism, into names/values. */
+static size_t optmap(lua_State *L, int t, const char *k, const char **names, double *vals, size_t max)
+{
+    if (lua_getfield(L, t, k) != LUA_TTABLE) {
+        lua_pop(L, 1);
+        return 0;
+    }
+    size_t n = 0;
+    lua_pushnil(L);
+    while (lua_next(L, -2)) {
+        if (lua_type(L, -2) != LUA_TSTRING || !lua_isnumber(L, -1))
+            luaL_error(L, "speciate: option '%s' must map names to numbers", k);
+        if (n >= max) luaL_error(L, "speciate: option '%s' has more than %d entries", k, (int)max);
+        names[n] = lua_tostring(L, -2); /* anchored in the option table */
+        vals[n++] = lua_tonumber(L, -1);
+        lua_pop(L, 1);
+    }
+    lua_pop(L, 1);
+    for (size_t i = 1; i < n; i++) /* insertion sort by name */
+        for (size_t j = i; j > 0 && strcmp(names[j - 1], names[j]) > 0; j--) {
+            const char *tn = names[j];
+            names[j] = names[j - 1];
+            names[j - 1] = tn;
+            double tv = vals[j];
+            vals[j] = vals[j - 1];
+            vals[j - 1] = tv;
+        }
+    return n;
+}
+
+static size_t optlist(lua_State *L, int t, const char *k, const char **out, size_t max)
+{
+    if (lua_getfield(L, t, k) != LUA_TTABLE) {
+        lua_pop(L, 1);
+        return 0;
+    }
+    size_t n = (size_t)luaL_len(L, -1);
+    if (n > max) luaL_error(L, "speciate: option '%s' has more than %d entries", k, (int)max);
+    for (size_t i = 0; i < n; i++) {
+        lua_rawgeti(L, -1, (lua_Integer)i + 1);
+        out[i] = lua_tostring(L, -1);
+        if (!out[i]) luaL_error(L, "speciate: option '%s'[%d] must be a string", k, (int)i + 1);
+        lua_pop(L, 1);
+    }
+    lua_pop(L, 1);
+    return n;
+}
+
+static void setnum(lua_State *L, const char *k, double v)
+{
+    lua_pushnumber(L, v);
+    lua_setfield(L, -2, k);
+}
+
+static int l_speciate(lua_State *L)
+{
+    static const char *const models[] = {"ideal", "davies", "bdot", "sit", NULL};
+    static const char *const phases[] = {"aqueous", "solid", "gas", "water", "electron"};
+    px_db *db;
+    px_thermo_ws *ws;
+    px_lua_check_database(L, 1, &db, &ws);
+    luaL_checktype(L, 2, LUA_TTABLE);
+    lua_settop(L, 2);
+    px_spec_options o = px_spec_options_default();
+    o.T = optnum(L, 2, "T", o.T, NULL);
+    o.P = optnum(L, 2, "P", o.P, NULL);
+    o.n_totals = optmap(L, 2, "totals", o.element, o.total, PX_SPEC_MAX_ITEMS - 3);
+    if (o.n_totals == 0) return luaL_error(L, "speciate: totals = {Element = mol/kg, ...} is required");
+    if (lua_getfield(L, 2, "basis") == LUA_TTABLE)
+        for (size_t k = 0; k < o.n_totals; k++) {
+            lua_getfield(L, -1, o.element[k]);
+            o.basis[k] = lua_tostring(L, -1);
+            lua_pop(L, 1);
+        }
+    lua_pop(L, 1);
+    int given = 0;
+    o.pH = optnum(L, 2, "pH", o.pH, &given);
+    o.ph_mode = given ? PX_SPEC_PH_FIXED : PX_SPEC_PH_CHARGE;
+    given = 0;
+    o.E = optnum(L, 2, "E", 0, &given);
+    if (given) o.redox_mode = PX_SPEC_REDOX_E;
+    given = 0;
+    o.pe = optnum(L, 2, "pe", 0, &given);
+    if (given) {
+        if (o.redox_mode != PX_SPEC_REDOX_NONE) return luaL_error(L, "speciate: give E or pe, not both");
+        o.redox_mode = PX_SPEC_REDOX_PE;
+    }
+    lua_getfield(L, 2, "redox_gas");
+    if (!lua_isnil(L, -1)) {
+        if (o.redox_mode != PX_SPEC_REDOX_NONE) return luaL_error(L, "speciate: give one redox constraint");
+        o.redox_gas = luaL_checkstring(L, -1);
+        o.redox_mode = PX_SPEC_REDOX_GAS;
+        o.redox_log_f = optnum(L, 2, "redox_log_f", 0, NULL);
+    }
+    lua_pop(L, 1);
+    o.n_gases = optmap(L, 2, "fugacities", o.gas, o.gas_log_f, PX_SPEC_MAX_ITEMS);
+    o.n_fixed = optmap(L, 2, "fixed", o.fixed, o.fixed_log_a, PX_SPEC_MAX_ITEMS);
+    lua_getfield(L, 2, "solids");
+    o.solids = lua_isnil(L, -1) ? 1 : lua_toboolean(L, -1);
+    lua_pop(L, 1);
+    o.n_suppress = optlist(L, 2, "suppress", o.suppress, PX_SPEC_MAX_ITEMS);
+    o.n_exclude = optlist(L, 2, "exclude", o.exclude, PX_SPEC_MAX_ITEMS);
+    lua_getfield(L, 2, "activity");
+    o.model = (px_equil_model)luaL_checkoption(L, -1, "davies", models);
+    lua_pop(L, 1);
+    o.solver.max_iter = (size_t)optnum(L, 2, "max_iter", (double)o.solver.max_iter, NULL);
+
+    px_spec *s;
+    char msg[512];
+    int st = px_spec_build(ws, db, &o, &s, msg, sizeof msg);
+    if (st != PX_OK) return luaL_error(L, "speciate: %s", msg[0] ? msg : px_strerror(st));
+    st = px_spec_solve(s, &o.solver, msg, sizeof msg);
+    px_equil_stats stats;
+    px_equil_work_get_stats(s->work, &stats);
+    if (st != PX_OK) {
+        luaL_pushfail(L);
+        lua_pushfstring(L, "speciate: %s", msg);
+        lua_createtable(L, 0, 4);
+        lua_pushstring(L, px_status_name(st));
+        lua_setfield(L, -2, "status");
+        setnum(L, "iterations", (double)stats.iterations);
+        setnum(L, "residual", stats.residual_norm);
+        lua_pushinteger(L, stats.fail_kind);
+        lua_setfield(L, -2, "fail_kind");
+        px_spec_free(s);
+        return 3;
+    }
+    size_t nb = s->n_basis, m = s->n_species;
+    lua_createtable(L, 0, 16);
+    setnum(L, "T", o.T);
+    setnum(L, "P", o.P);
+    px_equil_species_result r;
+    px_equil_work_get_species(s->work, 1, &r);
+    setnum(L, "pH", -r.log_activity);
+    if (s->redox) {
+        px_equil_work_get_species(s->work, 2, &r);
+        setnum(L, "pe", -r.log_activity);
+        setnum(L, "E", -r.log_activity * PX_R * o.T * PX_LN10 / PX_F);
+    }
+    setnum(L, "ionic_strength", stats.ionic_strength);
+    setnum(L, "charge_imbalance", stats.charge_imbalance);
+    setnum(L, "log_aw", stats.log_aw);
+    setnum(L, "iterations", (double)stats.iterations);
+    setnum(L, "residual", stats.residual_norm);
+    /* species and solids */
+    lua_createtable(L, (int)m, 0);
+    int ns = 0;
+    for (size_t j = 0; j < m; j++) {
+        const px_species *sp = px_db_get(db, (size_t)s->db_index[j]);
+        px_equil_work_get_species(s->work, j, &r);
+        if (sp->f.state == PX_STATE_E || sp->f.state == PX_STATE_L) continue;
+        lua_createtable(L, 0, 8);
+        lua_pushstring(L, sp->f.text);
+        lua_setfield(L, -2, "formula");
+        int ph = sp->f.state == PX_STATE_S ? 1 : sp->f.state == PX_STATE_G ? 2 : 0;
+        lua_pushstring(L, phases[ph]);
+        lua_setfield(L, -2, "phase");
+        if (ph == 0) {
+            setnum(L, "molality", r.molality);
+            setnum(L, "log_molality", r.log_molality);
+            setnum(L, "log_gamma", r.log_gamma);
+            setnum(L, "log_activity", r.log_activity);
+        } else if (ph == 1) {
+            setnum(L, "si", r.si);
+            setnum(L, "amount", r.amount);
+        } else {
+            setnum(L, "log_fugacity", r.log_activity);
+        }
+        lua_rawseti(L, -2, ++ns);
+    }
+    lua_setfield(L, -2, "species");
+    /* each element's distribution: share of its total per species */
+    lua_createtable(L, 0, (int)o.n_totals);
+    for (size_t i = 3; i < nb; i++) {
+        px_equil_component_result c;
+        px_equil_work_get_component(s->work, i, &c);
+        double total = c.total_aq + c.total_solid;
+        lua_createtable(L, 0, 3);
+        setnum(L, "total", total);
+        setnum(L, "dissolved", c.total_aq);
+        setnum(L, "solid", c.total_solid);
+        lua_newtable(L);
+        for (size_t j = 0; j < m; j++) {
+            double nu = s->nu[j * nb + i];
+            if (nu == 0.0) continue;
+            px_equil_work_get_species(s->work, j, &r);
+            double amount = r.molality > 0 ? r.molality : r.amount;
+            if (!(amount > 0) || !(total > 0)) continue;
+            lua_pushnumber(L, nu * amount / total);
+            lua_setfield(L, -2, px_db_get(db, (size_t)s->db_index[j])->f.text);
+        }
+        lua_setfield(L, -2, "share");
+        lua_setfield(L, -2, px_element_symbol(s->elem_z[i]));
+    }
+    lua_setfield(L, -2, "elements");
+    px_spec_free(s);
+    return 1;
+}
+
+void px_lua_open_equil(lua_State *L)
+{
+    lua_pushcfunction(L, l_speciate);
+    lua_setfield(L, -2, "speciate");
+}
