@@ -170,11 +170,38 @@ static int l_map(lua_State *L)
     setnum(L, "P", o.P);
     push_axis(L, "x", o.xaxis, o.window.xmin, o.window.xmax, o.ligand);
     push_axis(L, "y", o.yaxis, o.window.ymin, o.window.ymax, o.ligand);
-    /* fields */
-    lua_createtable(L, (int)dm->nfield, 0);
-    for (size_t f = 0; f < dm->nfield; f++) {
-        const px_diagram_field *df = &dm->field[f];
+    /* fields: the pieces of one species that share edges (across ligand
+     * fields) are joined into one outline, so a species shows once */
+    int *cls = malloc((dm->nfield ? dm->nfield : 1) * sizeof *cls);
+    px_diagram_outlines *un = NULL;
+    if (!cls) {
+        px_emap_free(m);
+        return luaL_error(L, "map: out of memory");
+    }
+    for (size_t f = 0; f < dm->nfield; f++) cls[f] = dm->field[f].group;
+    st = px_diagram_map_union(dm, cls, &un);
+    free(cls);
+    if (st != PX_OK) {
+        px_emap_free(m);
+        luaL_pushfail(L);
+        lua_pushfstring(L, "map of %s: joining fields: %s", element, px_strerror(st));
+        return 2;
+    }
+    lua_createtable(L, (int)un->nloop, 0);
+    int nf = 0;
+    for (size_t i = 0; i < un->nloop; i++) {
+        const px_diagram_loop *lp = &un->loop[i];
+        if (!(lp->area > 0)) continue; /* holes are subtracted below */
+        int f = lp->cls;
         const px_species *sp = px_db_get(db, (size_t)m->info[f].species);
+        double area = lp->area;
+        for (size_t h = 0; h < un->nloop; h++) { /* holes of the same class inside this loop */
+            const px_diagram_loop *hl = &un->loop[h];
+            if (hl->area < 0 && hl->cls == f &&
+                px_diagram_polygon_contains(un->x + lp->first, un->y + lp->first, lp->n,
+                                            un->x[hl->first], un->y[hl->first]))
+                area += hl->area;
+        }
         lua_createtable(L, 0, 8);
         lua_pushstring(L, sp->f.text);
         lua_setfield(L, -2, "species");
@@ -184,13 +211,12 @@ static int l_map(lua_State *L)
             lua_pushstring(L, px_db_get(db, (size_t)m->info[f].ligand)->f.text);
             lua_setfield(L, -2, "ligand");
         }
-        push_xy(L, dm->vx, dm->vy, df->n, dm->ring + df->first);
-        setnum(L, "area", df->area);
-        lua_pushinteger(L, df->group + 1);
-        lua_setfield(L, -2, "group");
-        lua_rawseti(L, -2, (lua_Integer)f + 1);
+        push_xy(L, un->x + lp->first, un->y + lp->first, lp->n, NULL);
+        setnum(L, "area", area);
+        lua_rawseti(L, -2, ++nf);
     }
     lua_setfield(L, -2, "fields");
+    px_diagram_outlines_free(un);
     /* boundaries */
     lua_createtable(L, (int)dm->nboundary, 0);
     for (size_t b = 0; b < dm->nboundary; b++) {

@@ -166,7 +166,9 @@ end
 -- it is not 1 bar).
 function plot.map_title(map)
   local t = fmt_T(celsius(map))
-  local head = map.element and ("{%s}–{H2O}"):format(map.element) or "map"
+  local lig = map.conditions and map.conditions.ligand
+  local head = map.element and (lig and ("{%s}–{%s}–{H2O}"):format(map.element, lig)
+                                or ("{%s}–{H2O}"):format(map.element)) or "map"
   local s = head .. (t and (" at " .. t) or "")
   local p = pressure(map)
   if p and math.abs(p - 1) > 1e-9 then s = s .. (", %s bar"):format(fmt_num(p)) end
