@@ -34,6 +34,20 @@ typedef struct rctx {
     px_rmap_stats *stats;
 } rctx;
 
+#define PX_RMAP_SI_TOL 1e-6 /* a solid above this saturation index is over-saturated */
+
+/* Is any solid that is allowed to precipitate over-saturated? */
+static int supersaturated(const rctx *c)
+{
+    for (size_t j = c->s->n_basis; j < c->s->n_species; j++) {
+        const px_species *sp = px_db_get(c->db, (size_t)c->s->db_index[j]);
+        if (sp->f.state != PX_STATE_S) continue;
+        px_equil_species_result r;
+        if (px_equil_work_get_species(c->s->work, j, &r) == PX_OK && r.si > PX_RMAP_SI_TOL) return 1;
+    }
+    return 0;
+}
+
 static int label_node(double x, double y, void *user, int *id)
 {
     rctx *c = user;
@@ -42,6 +56,13 @@ static int label_node(double x, double y, void *user, int *id)
     if (st != PX_OK) return st; /* misuse: abort the map */
     c->stats->solves++;
     st = px_equil_solve(c->s->sys, c->s->work, &c->sopt);
+    if (st == PX_OK && supersaturated(c)) {
+        /* a warm start can keep a solid that the new node no longer
+         * favours while another is over-saturated: solve again cold */
+        c->stats->cold_retries++;
+        px_equil_work_reset(c->s->work);
+        st = px_equil_solve(c->s->sys, c->s->work, &c->sopt);
+    }
     if (st != PX_OK) {
         px_equil_work_reset(c->s->work);
         st = px_equil_solve(c->s->sys, c->s->work, &c->sopt);

@@ -27,6 +27,7 @@ px_rmap_options px_rmap_options_default(void);
 
 typedef struct px_rmap_stats {
     size_t solves, failures; /* nodes where the solver did not converge: id -1 */
+    size_t cold_retries;     /* warm starts that ended over-saturated, solved again cold */
 } px_rmap_stats;
 
 /* Field ids of the grid are database indices (-1: no convergence). */

@@ -381,6 +381,8 @@ static int l_grid_map(lua_State *L)
     lua_setfield(L, -2, "solves");
     lua_pushinteger(L, (lua_Integer)stats.failures);
     lua_setfield(L, -2, "failures");
+    lua_pushinteger(L, (lua_Integer)stats.cold_retries);
+    lua_setfield(L, -2, "cold_retries");
     /* species list (field order) and fields */
     lua_createtable(L, (int)g->nfield, 0); /* species */
     lua_createtable(L, (int)g->nfield, 0); /* fields */

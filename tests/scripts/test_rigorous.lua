@@ -1,0 +1,60 @@
+-- test_rigorous.lua: rigorous maps (the speciation solver at every grid
+-- node) agree with exact maps where their assumptions coincide: one
+-- element, no ligand, ideal activities, the element's total equal to the
+-- exact map's activity of dissolved species.  "Agree" means every node's
+-- label is the exact map's species at that node or at a neighbouring node
+-- (within one grid cell), since the rigorous map sums all dissolved species
+-- while the exact one compares them one at a time (DESIGN.md: "The two
+-- methods must agree where their assumptions coincide").
+local phlox = require "phlox"
+local function check(cond, msg) if not cond then error(msg, 2) end end
+
+local function compare(elements, element, T_C, nx, ny)
+  local lib = phlox.library(elements)
+  local T = T_C + 273.15
+  local P = phlox.core.default_pressure(T)
+  local g, err = phlox.core.grid_map(lib.db, { element = element, T = T, P = P, nx = nx, ny = ny,
+                                               total = 1e-6, activity = "ideal", window = { 0, 14, -2, 2 } })
+  check(g, "grid map failed: " .. tostring(err))
+  check(g.failures == 0, g.failures .. " nodes did not converge")
+  local m = phlox.map { library = lib, element = element, T_C = T_C, activity = 1e-6 }
+  local dx, dy = 14 / (nx - 1), 4 / (ny - 1)
+  local agree, near, n = 0, 0, 0
+  for j = 0, ny - 1 do
+    for i = 0, nx - 1 do
+      local x, y = i * dx, -2 + j * dy
+      local lab = g.species[g.labels[j * nx + i + 1]]
+      n = n + 1
+      if lab == phlox.locate(m, x, y) then
+        agree = agree + 1
+      else
+        local found = false
+        for a = -1, 1 do
+          for b = -1, 1 do
+            local px, py = math.min(14, math.max(0, x + a * dx)), math.min(2, math.max(-2, y + b * dy))
+            if phlox.locate(m, px, py) == lab then found = true end
+          end
+        end
+        check(found, ("%s at %d C: node pH %.2f E %.3f is %s, exact map has %s, not within one cell")
+              :format(element, T_C, x, y, tostring(lab), tostring(phlox.locate(m, x, y))))
+        near = near + 1
+      end
+    end
+  end
+  -- every species with a sizeable exact field shows in the rigorous map
+  for _, f in ipairs(m.fields) do
+    if f.area > 4 * dx * dy then
+      local seen = false
+      for _, s in ipairs(g.species) do seen = seen or s == f.species end
+      check(seen, element .. ": " .. f.species .. " missing from the rigorous map")
+    end
+  end
+  io.write(("%s %d C: %d nodes, %d identical, %d within one cell, %d solver calls\n")
+           :format(element, T_C, n, agree, near, g.calls))
+  check(agree / n > 0.9, "labels mostly identical")
+end
+
+compare({ "Zn" }, "Zn", 25, 57, 41)
+compare({ "Cu" }, "Cu", 25, 57, 41)
+compare({ "Zn" }, "Zn", 200, 43, 31)
+print("test_rigorous: all checks passed")
