@@ -27,6 +27,11 @@ void px_equil_gamma(const px_equil_system *sys, const unsigned char *absent,
 {
     const px_equil_activity *a = &sys->act;
     double s = sqrt(I);
+    /* the I-dependent factors shared by all ions of a model */
+    double fd = s / (1.0 + s) - PX_DAVIES_LINEAR * I;
+    double dfd = LN10 * (s / (2.0 * (1.0 + s) * (1.0 + s)) - PX_DAVIES_LINEAR * I);
+    double ds = 1.0 + PX_SIT_BA * s;
+    double fs = a->A * s / ds, dfs = a->A * LN10 * s * 0.5 / (ds * ds);
     for (size_t j = 0; j < sys->ns; j++) {
         g[j] = 0.0;
         dg[j] = 0.0;
@@ -39,26 +44,21 @@ void px_equil_gamma(const px_equil_system *sys, const unsigned char *absent,
             }
         } else {
             switch (a->model) {
-            case PX_EQUIL_DAVIES: {
-                double t = s / (1.0 + s);
-                g[j] = -a->A * z2 * (t - PX_DAVIES_LINEAR * I);
+            case PX_EQUIL_DAVIES:
                 /* d/dlog10 I of sqrt(I)/(1+sqrt(I)) = ln10 sqrt(I) / (2 (1+sqrt(I))^2) */
-                dg[j] = -a->A * z2 * LN10 *
-                        (s / (2.0 * (1.0 + s) * (1.0 + s)) - PX_DAVIES_LINEAR * I);
+                g[j] = -a->A * z2 * fd;
+                dg[j] = -a->A * z2 * dfd;
                 break;
-            }
             case PX_EQUIL_BDOT: {
                 double d = 1.0 + sys->size[j] * a->B * s;
                 g[j] = -a->A * z2 * s / d + a->bdot * I;
                 dg[j] = LN10 * (-a->A * z2 * s * 0.5 / (d * d) + a->bdot * I);
                 break;
             }
-            case PX_EQUIL_SIT: {
-                double d = 1.0 + PX_SIT_BA * s;
-                g[j] = -z2 * a->A * s / d;
-                dg[j] = -z2 * a->A * LN10 * s * 0.5 / (d * d);
+            case PX_EQUIL_SIT:
+                g[j] = -z2 * fs;
+                dg[j] = -z2 * dfs;
                 break;
-            }
             default: break;
             }
         }

@@ -31,6 +31,7 @@ struct px_equil_system {
     double *cval;      /* nb: total, log a or log f */
     size_t *cgas;      /* nb: gas species for PX_EQUIL_C_FUGACITY */
     px_equil_activity act;
+    unsigned long rev;  /* bumped by every structural change */
     size_t n_sit, cap_sit;
     size_t *sit_j, *sit_k;
     double *sit_eps;
@@ -47,10 +48,17 @@ struct px_equil_work {
     double *amt;           /* ns: solid amounts, mol/kg water */
     unsigned char *active; /* ns: solid in the active set */
     double *lag;           /* ns: lagged SIT sum eps m */
-    double log_aw;         /* lagged log10 water activity */
     unsigned char *absent_prev; /* nb: absent pattern of the stored state */
+    /* the last two solutions and their constraints (sweep predictor) */
+    int hist;
+    double *y_p1, *y_p2, *par_p1, *par_p2;
+    double xI_p1, xI_p2;
+    size_t sig_p1, sig_p2;
     /* per solve */
     unsigned char *cabsent; /* nb: component with zero total, species drop out */
+    unsigned char *posonly; /* nb: aqueous basis with no negative coefficient */
+    const px_equil_system *prep_sys; /* structure prepared for (sys, rev) */
+    unsigned long prep_rev;
     unsigned char *sabsent; /* ns */
     unsigned char *blocked; /* ns: solid refused (singular) during this solve */
     size_t *col;           /* nb: Newton column of basis i, or SIZE_MAX */
@@ -60,10 +68,13 @@ struct px_equil_work {
     size_t ncol;           /* basis columns; then I; then solids */
     size_t *nz_start, *nz_idx; /* sparse nu: ns + 1, ns x nb */
     double *nz_val;
+    size_t *jz_start, *jz_col; /* the same restricted to Newton columns */
+    double *jz_val;
+    size_t *rz_start, *rz_row; /* ... restricted to mass-balance rows */
+    double *rz_val;
     /* evaluation */
     double *g, *dg, *la, *lm, *m, *c;  /* ns each */
     double *lag_next;      /* ns */
-    double log_aw_next;
     double lag_change;
     double *R, *scale, *J, *dx;  /* nmax, nmax, nmax^2, nmax */
     size_t *perm;          /* nmax */

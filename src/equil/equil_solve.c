@@ -45,12 +45,18 @@
  * choices, no source. */
 #define ONE_D_TOL 1e-3
 #define LIN_SWEEPS 4
+/* Sweep predictor: least cosine between successive parameter steps, and
+ * the longest extrapolation relative to the last step.  Numerical choices,
+ * no source. */
+#define PRED_COS 0.999
+#define PRED_MAX 2.0
 #define ONE_D_REACH 64.0
 #define ONE_D_ITER 60
 #define ONE_D_DY 1e-9
-/* Bounds of the lagged terms while iterating: a transient molality far off
- * the answer must not feed back through them (log a_w >= -1 is 56 mol/kg of
- * ideal solute; |sum eps m| <= 5).  Numerical choice, no source. */
+/* Bounds while iterating: a transient molality far off the answer must not
+ * feed back through the water activity or the lagged SIT sums (log a_w >= -1
+ * is 56 mol/kg of ideal solute; |sum eps m| <= 5).  Numerical choice, no
+ * source. */
 #define LOG_AW_MIN (-1.0)
 #define LAG_MAX 5.0
 /* Pivot smaller than this times its column's largest entry = singular. */
@@ -84,9 +90,10 @@ void px_equil_work_free(px_equil_work *w)
 {
     if (!w) return;
     const px_allocator *a = work_alloc(w);
-    void *arrs[] = {w->y, w->amt, w->active, w->lag, w->absent_prev, w->cabsent,
+    void *arrs[] = {w->y, w->amt, w->active, w->lag, w->absent_prev, w->cabsent, w->posonly,
                     w->sabsent, w->blocked, w->col, w->row, w->solids, w->nz_start,
-                    w->nz_idx, w->nz_val, w->g, w->dg, w->la, w->lm, w->m, w->c,
+                    w->nz_idx, w->nz_val, w->jz_start, w->jz_col, w->jz_val,
+                    w->rz_start, w->rz_row, w->rz_val, w->y_p1, w->y_p2, w->par_p1, w->par_p2, w->g, w->dg, w->la, w->lm, w->m, w->c,
                     w->lag_next, w->R, w->scale, w->J, w->dx, w->perm, w->row_kind,
                     w->row_index, w->y_save, w->amt_save, w->resid_comp,
                     w->tot_given, w->tot_aq, w->tot_solid, w->ckind, w->phase};
@@ -114,11 +121,15 @@ int px_equil_work_create(px_equil_work **out, const px_equil_system *s,
 #define ALLOC(p, n, t) (w->p = px_calloc(alloc, (n), sizeof(t)))
     int ok = ALLOC(y, nb, double) && ALLOC(amt, ns, double) && ALLOC(active, ns, unsigned char) &&
              ALLOC(lag, ns, double) && ALLOC(absent_prev, nb, unsigned char) &&
-             ALLOC(cabsent, nb, unsigned char) && ALLOC(sabsent, ns, unsigned char) &&
+             ALLOC(cabsent, nb, unsigned char) && ALLOC(posonly, nb, unsigned char) && ALLOC(sabsent, ns, unsigned char) &&
              ALLOC(blocked, ns, unsigned char) && ALLOC(col, nb, size_t) &&
              ALLOC(row, nb, size_t) && ALLOC(solids, nb + 1, size_t) &&
              ALLOC(nz_start, ns + 1, size_t) && ALLOC(nz_idx, ns * nb, size_t) &&
-             ALLOC(nz_val, ns * nb, double) && ALLOC(g, ns, double) && ALLOC(dg, ns, double) &&
+             ALLOC(nz_val, ns * nb, double) && ALLOC(jz_start, ns + 1, size_t) &&
+             ALLOC(jz_col, ns * nb, size_t) && ALLOC(jz_val, ns * nb, double) &&
+             ALLOC(rz_start, ns + 1, size_t) && ALLOC(rz_row, ns * nb, size_t) &&
+             ALLOC(rz_val, ns * nb, double) && ALLOC(y_p1, nb, double) &&
+             ALLOC(y_p2, nb, double) && ALLOC(par_p1, nb, double) && ALLOC(par_p2, nb, double) && ALLOC(g, ns, double) && ALLOC(dg, ns, double) &&
              ALLOC(la, ns, double) && ALLOC(lm, ns, double) && ALLOC(m, ns, double) &&
              ALLOC(c, ns, double) && ALLOC(lag_next, ns, double) && ALLOC(R, nmax, double) &&
              ALLOC(scale, nmax, double) && ALLOC(J, nmax * nmax, double) &&
@@ -140,7 +151,11 @@ int px_equil_work_create(px_equil_work **out, const px_equil_system *s,
 
 void px_equil_work_reset(px_equil_work *w)
 {
-    if (w) w->have = 0;
+    if (w) {
+        w->have = 0;
+        w->hist = 0;
+        w->prep_sys = NULL;
+    }
 }
 
 /* ---------------------------------------------------------------------- */
@@ -157,6 +172,20 @@ static void fail_at(px_equil_work *w, int kind, size_t index)
 static int prepare(const px_equil_system *s, px_equil_work *w)
 {
     size_t nb = s->nb, ns = s->ns;
+    if (w->prep_sys == s && w->prep_rev == s->rev) {
+        /* same structure as last time: only the zero totals may differ */
+        int same = 1;
+        for (size_t i = 0; i < nb; i++) {
+            int pos = w->posonly[i] && s->ckind[i] == PX_EQUIL_C_TOTAL;
+            if (pos && s->cval[i] < 0.0) {
+                fail_at(w, PX_EQUIL_C_TOTAL, i);
+                return PX_EINVAL;
+            }
+            if ((pos && s->cval[i] == 0.0) != (w->cabsent[i] != 0)) same = 0;
+        }
+        if (same) return PX_OK;
+    }
+    w->prep_sys = NULL;
     for (size_t j = 0; j < ns; j++)
         if (!s->is_set[j]) {
             fail_at(w, PX_EQUIL_C_NONE, j);
@@ -169,12 +198,15 @@ static int prepare(const px_equil_system *s, px_equil_work *w)
             fail_at(w, PX_EQUIL_C_NONE, i);
             return PX_EINVAL;
         }
-        if (k == PX_EQUIL_C_TOTAL && s->phase[i] == PX_EQUIL_AQ) {
+        w->posonly[i] = 0;
+        if (s->phase[i] == PX_EQUIL_AQ) {
             int posonly = 1;
             for (size_t j = 0; j < ns; j++) {
                 if (s->flags[j] & PX_EQUIL_EXCLUDED) continue;
                 if (s->nu[j * nb + i] < 0.0) posonly = 0;
             }
+            w->posonly[i] = (unsigned char)posonly;
+            if (k != PX_EQUIL_C_TOTAL) continue;
             if (posonly && s->cval[i] < 0.0) {
                 fail_at(w, PX_EQUIL_C_TOTAL, i);
                 return PX_EINVAL; /* no positive molalities can add up */
@@ -207,7 +239,9 @@ static int prepare(const px_equil_system *s, px_equil_work *w)
     }
     size_t nc = 0;
     for (size_t i = 0; i < nb; i++) {
-        if (w->cabsent[i] || s->ckind[i] == PX_EQUIL_C_WATER) {
+        /* a fixed activity is substituted, not solved for: no column, no row */
+        if (w->cabsent[i] || s->ckind[i] == PX_EQUIL_C_ACTIVITY ||
+            (s->ckind[i] == PX_EQUIL_C_WATER && s->act.water != PX_EQUIL_WATER_IDEAL)) {
             w->col[i] = w->row[i] = SIZE_MAX;
             continue;
         }
@@ -217,8 +251,36 @@ static int prepare(const px_equil_system *s, px_equil_work *w)
         nc++;
     }
     w->ncol = nc;
+    /* the nonzero coefficients of each species that have a Newton column */
+    size_t nj = 0;
+    for (size_t j = 0; j < ns; j++) {
+        w->jz_start[j] = nj;
+        for (size_t q = w->nz_start[j]; q < w->nz_start[j + 1]; q++) {
+            size_t cc = w->col[w->nz_idx[q]];
+            if (cc == SIZE_MAX) continue;
+            w->jz_col[nj] = cc;
+            w->jz_val[nj] = w->nz_val[q];
+            nj++;
+        }
+    }
+    w->jz_start[ns] = nj;
+    /* and those that enter a mass-balance row */
+    size_t nr = 0;
+    for (size_t j = 0; j < ns; j++) {
+        w->rz_start[j] = nr;
+        for (size_t q = w->nz_start[j]; q < w->nz_start[j + 1]; q++) {
+            size_t i = w->nz_idx[q];
+            if (w->row[i] == SIZE_MAX || s->ckind[i] != PX_EQUIL_C_TOTAL) continue;
+            w->rz_row[nr] = w->row[i];
+            w->rz_val[nr] = w->nz_val[q];
+            nr++;
+        }
+    }
+    w->rz_start[ns] = nr;
     w->row_kind[nc] = PX_EQUIL_C_IONIC;
     w->row_index[nc] = 0;
+    w->prep_sys = s;
+    w->prep_rev = s->rev;
     return PX_OK;
 }
 
@@ -239,13 +301,10 @@ static double clampd(double x, double lo, double hi)
 }
 
 /* Adds t * (d log m_j / d u) to Jacobian row r (u: the Newton unknowns). */
-static void jac_add(const px_equil_work *w, size_t N, size_t r, size_t j, double t)
+static inline void jac_add(const px_equil_work *w, size_t N, size_t r, size_t j, double t)
 {
     double *Jr = w->J + r * N;
-    for (size_t q = w->nz_start[j]; q < w->nz_start[j + 1]; q++) {
-        size_t cc = w->col[w->nz_idx[q]];
-        if (cc != SIZE_MAX) Jr[cc] += t * w->nz_val[q];
-    }
+    for (size_t q = w->jz_start[j]; q < w->jz_start[j + 1]; q++) Jr[w->jz_col[q]] += t * w->jz_val[q];
     Jr[w->ncol] += t * w->c[j];
 }
 
@@ -257,12 +316,13 @@ static void jac_add_log(const px_equil_system *s, const px_equil_work *w, size_t
     for (size_t q = w->nz_start[j]; q < w->nz_start[j + 1]; q++) {
         size_t i = w->nz_idx[q];
         size_t cc = w->col[i];
-        if (cc != SIZE_MAX) Jr[cc] += w->nz_val[q];
+        if (cc == SIZE_MAX) continue; /* fixed activity or absent: a constant */
+        Jr[cc] += w->nz_val[q];
         if (s->phase[i] == PX_EQUIL_AQ) Jr[w->ncol] += w->nz_val[q] * w->dg[i];
     }
 }
 
-static void evaluate(const px_equil_system *s, px_equil_work *w, int jac)
+static void evaluate(const px_equil_system *s, px_equil_work *w)
 {
     size_t nb = s->nb, ns = s->ns, nc = w->ncol;
     size_t N = nc + 1 + w->n_active;
@@ -276,9 +336,14 @@ static void evaluate(const px_equil_system *s, px_equil_work *w, int jac)
             la[i] = PX_EQUIL_LOG_ABSENT;
             continue;
         }
+        if (s->ckind[i] == PX_EQUIL_C_ACTIVITY) {
+            la[i] = s->cval[i];
+            w->y[i] = s->phase[i] == PX_EQUIL_AQ ? s->cval[i] - g[i] : s->cval[i];
+            continue;
+        }
         switch (s->phase[i]) {
         case PX_EQUIL_AQ: la[i] = w->y[i] + g[i]; break;
-        case PX_EQUIL_WATER: la[i] = w->log_aw; break;
+        case PX_EQUIL_WATER: la[i] = w->col[i] != SIZE_MAX ? w->y[i] : 0.0; break;
         default: la[i] = w->y[i]; break;
         }
     }
@@ -301,25 +366,29 @@ static void evaluate(const px_equil_system *s, px_equil_work *w, int jac)
             if (l > PX_EQUIL_LM_MAX) l = PX_EQUIL_LM_MAX;
             lm[j] = l;
             m[j] = exp(LN10 * l);
+            /* c_j = d log m_j / d log10 I: through the activity coefficients
+             * of the basis species solved for, and its own */
             if (j >= nb) {
                 double cj = -dg[j];
                 for (size_t q = w->nz_start[j]; q < w->nz_start[j + 1]; q++) {
                     size_t i = w->nz_idx[q];
-                    if (s->phase[i] == PX_EQUIL_AQ) cj += w->nz_val[q] * dg[i];
+                    if (s->phase[i] == PX_EQUIL_AQ && w->col[i] != SIZE_MAX)
+                        cj += w->nz_val[q] * dg[i];
                 }
                 w->c[j] = cj;
+            } else if (w->col[j] == SIZE_MAX) {
+                w->c[j] = -dg[j]; /* fixed activity: log m = log a - log g */
             }
         } else {
             lm[j] = PX_EQUIL_LOG_ABSENT;
         }
     }
     /* residuals */
-    double *R = w->R, *sc = w->scale, *J = w->J;
+    double *R = w->R, *sc = w->scale;
     for (size_t r = 0; r < N; r++) {
         R[r] = 0.0;
         sc[r] = 0.0;
     }
-    if (jac) memset(J, 0, N * N * sizeof(double));
     size_t rc = SIZE_MAX, rI = nc;
     for (size_t i = 0; i < nb; i++) {
         size_t r = w->row[i];
@@ -333,33 +402,39 @@ static void evaluate(const px_equil_system *s, px_equil_work *w, int jac)
     }
     R[rI] = I - PX_EQUIL_I_FLOOR;
     sc[rI] = I;
+    size_t rw = SIZE_MAX;
+    for (size_t i = 0; i < nb; i++)
+        if (s->ckind[i] == PX_EQUIL_C_WATER && w->row[i] != SIZE_MAX) {
+            rw = w->row[i];
+            /* log a_w = -M_w sum m / ln 10: osmotic coefficient 1 (Robinson
+             * and Stokes 1959, Electrolyte Solutions, ch. 2 definition) */
+            R[rw] = w->y[i];
+            sc[rw] = 1.0;
+        }
     for (size_t j = 0; j < ns; j++) {
         if (w->sabsent[j] || s->phase[j] != PX_EQUIL_AQ) continue;
         double mj = m[j];
-        for (size_t q = w->nz_start[j]; q < w->nz_start[j + 1]; q++) {
-            size_t i = w->nz_idx[q];
-            size_t r = w->row[i];
-            if (r == SIZE_MAX || s->ckind[i] != PX_EQUIL_C_TOTAL) continue;
-            double v = w->nz_val[q];
-            R[r] += v * mj;
-            sc[r] += fabs(v) * mj;
-            if (jac) jac_add(w, N, r, j, LN10 * mj * v);
+        for (size_t q = w->rz_start[j]; q < w->rz_start[j + 1]; q++) {
+            size_t r = w->rz_row[q];
+            double v = w->rz_val[q] * mj;
+            R[r] += v;
+            sc[r] += fabs(v);
+        }
+        if (rw != SIZE_MAX) {
+            R[rw] += PX_EQUIL_MW / LN10 * mj;
         }
         double z = s->z[j];
         if (z != 0.0) {
             if (rc != SIZE_MAX) {
                 R[rc] += z * mj;
                 sc[rc] += fabs(z) * mj;
-                if (jac) jac_add(w, N, rc, j, LN10 * mj * z);
             }
             R[rI] -= 0.5 * z * z * mj;
             sc[rI] += 0.5 * z * z * mj;
-            if (jac) jac_add(w, N, rI, j, -0.5 * LN10 * mj * z * z);
         }
     }
-    if (jac) J[rI * N + nc] += LN10 * I;
     for (size_t p = 0; p < w->n_active; p++) {
-        size_t sj = w->solids[p], cs = nc + 1 + p;
+        size_t sj = w->solids[p];
         double n = w->amt[sj];
         for (size_t q = w->nz_start[sj]; q < w->nz_start[sj + 1]; q++) {
             size_t i = w->nz_idx[q];
@@ -368,30 +443,20 @@ static void evaluate(const px_equil_system *s, px_equil_work *w, int jac)
             double v = w->nz_val[q];
             R[r] += v * n;
             sc[r] += fabs(v * n);
-            if (jac) J[r * N + cs] += v;
         }
         size_t r = nc + 1 + p;
         R[r] = la[sj];
         sc[r] = 1.0;
         w->row_kind[r] = PX_EQUIL_C_SOLID;
         w->row_index[r] = sj;
-        if (jac) jac_add_log(s, w, N, r, sj);
     }
     for (size_t i = 0; i < nb; i++) {
         size_t r = w->row[i];
         if (r == SIZE_MAX) continue;
-        if (s->ckind[i] == PX_EQUIL_C_ACTIVITY) {
-            R[r] = la[i] - s->cval[i];
-            sc[r] = 1.0;
-            if (jac) {
-                J[r * N + w->col[i]] += 1.0;
-                if (s->phase[i] == PX_EQUIL_AQ) J[r * N + nc] += dg[i];
-            }
-        } else if (s->ckind[i] == PX_EQUIL_C_FUGACITY) {
+        if (s->ckind[i] == PX_EQUIL_C_FUGACITY) {
             size_t gj = s->cgas[i];
             R[r] = la[gj] - s->cval[i];
             sc[r] = 1.0;
-            if (jac) jac_add_log(s, w, N, r, gj);
         }
     }
     double phi = 0.0;
@@ -411,19 +476,51 @@ static void evaluate(const px_equil_system *s, px_equil_work *w, int jac)
             if (d > change) change = d;
         }
     }
-    if (s->act.water == PX_EQUIL_WATER_IDEAL) {
-        double sum = 0.0;
-        for (size_t j = 0; j < ns; j++)
-            if (s->phase[j] == PX_EQUIL_AQ) sum += m[j];
-        /* ln a_w = -phi M_w sum m, osmotic coefficient phi = 1 (Robinson and
-         * Stokes 1959, Electrolyte Solutions, ch. 2 definition) */
-        w->log_aw_next = fmax(-PX_EQUIL_MW * sum / LN10, LOG_AW_MIN);
-        double d = fabs(w->log_aw_next - w->log_aw);
-        if (d > change) change = d;
-    } else {
-        w->log_aw_next = 0.0;
-    }
     w->lag_change = isfinite(change) ? change : DBL_MAX;
+}
+
+/* The analytic Jacobian at the last evaluation (uses its m, c, dg). */
+static void jacobian(const px_equil_system *s, px_equil_work *w)
+{
+    size_t nb = s->nb, ns = s->ns, nc = w->ncol, N = w->nrow;
+    double *J = w->J;
+    memset(J, 0, N * N * sizeof(double));
+    size_t rc = SIZE_MAX, rI = nc, rw = SIZE_MAX;
+    for (size_t i = 0; i < nb; i++) {
+        size_t r = w->row[i];
+        if (r == SIZE_MAX) continue;
+        switch (s->ckind[i]) {
+        case PX_EQUIL_C_CHARGE: rc = r; break;
+        case PX_EQUIL_C_WATER:
+            rw = r;
+            J[r * N + w->col[i]] += 1.0;
+            break;
+        case PX_EQUIL_C_FUGACITY: jac_add_log(s, w, N, r, s->cgas[i]); break;
+        default: break;
+        }
+    }
+    for (size_t j = 0; j < ns; j++) {
+        if (w->sabsent[j] || s->phase[j] != PX_EQUIL_AQ) continue;
+        double t = LN10 * w->m[j];
+        for (size_t q = w->rz_start[j]; q < w->rz_start[j + 1]; q++)
+            jac_add(w, N, w->rz_row[q], j, t * w->rz_val[q]);
+        if (rw != SIZE_MAX) jac_add(w, N, rw, j, PX_EQUIL_MW * w->m[j]);
+        double z = s->z[j];
+        if (z != 0.0) {
+            if (rc != SIZE_MAX) jac_add(w, N, rc, j, t * z);
+            jac_add(w, N, rI, j, -0.5 * t * z * z);
+        }
+    }
+    J[rI * N + nc] += LN10 * exp(LN10 * w->xI);
+    for (size_t p = 0; p < w->n_active; p++) {
+        size_t sj = w->solids[p], cs = nc + 1 + p;
+        for (size_t q = w->nz_start[sj]; q < w->nz_start[sj + 1]; q++) {
+            size_t r = w->row[w->nz_idx[q]];
+            if (r == SIZE_MAX || s->ckind[w->nz_idx[q]] != PX_EQUIL_C_TOTAL) continue;
+            J[r * N + cs] += w->nz_val[q];
+        }
+        jac_add_log(s, w, N, nc + 1 + p, sj);
+    }
 }
 
 /* max scaled residual; index of the worst row */
@@ -469,7 +566,10 @@ static int newton_direction(px_equil_work *w)
     }
     for (size_t k = 0; k < N; k++) {
         double cmax = 0.0;
-        for (size_t r = 0; r < N; r++) cmax = fmax(cmax, fabs(A[r * N + k]));
+        for (size_t r = 0; r < N; r++) {
+            double a = fabs(A[r * N + k]);
+            if (a > cmax) cmax = a;
+        }
         size_t piv = k;
         double best = fabs(A[k * N + k]);
         for (size_t r = k + 1; r < N; r++)
@@ -524,7 +624,10 @@ static void apply_step(const px_equil_system *s, px_equil_work *w, double lam)
     for (size_t i = 0; i < s->nb; i++) {
         size_t cc = w->col[i];
         if (cc == SIZE_MAX) continue;
-        w->y[i] = clampd(w->y_save[i] + lam * w->dx[cc], -PX_EQUIL_LM_MAX, PX_EQUIL_LM_MAX);
+        if (s->phase[i] == PX_EQUIL_WATER)
+            w->y[i] = clampd(w->y_save[i] + lam * w->dx[cc], LOG_AW_MIN, 0.0);
+        else
+            w->y[i] = clampd(w->y_save[i] + lam * w->dx[cc], -PX_EQUIL_LM_MAX, PX_EQUIL_LM_MAX);
     }
     w->xI = clampd(w->xI_save + lam * w->dx[w->ncol], PX_EQUIL_XI_MIN, PX_EQUIL_XI_MAX);
     for (size_t p = 0; p < w->n_active; p++) {
@@ -537,7 +640,6 @@ static void take_lag(const px_equil_system *s, px_equil_work *w)
 {
     if (s->act.model == PX_EQUIL_SIT && s->n_sit)
         memcpy(w->lag, w->lag_next, s->ns * sizeof(double));
-    w->log_aw = w->log_aw_next;
 }
 
 static int newton(const px_equil_system *s, px_equil_work *w, const px_equil_options *o,
@@ -545,7 +647,7 @@ static int newton(const px_equil_system *s, px_equil_work *w, const px_equil_opt
 {
     size_t worst;
     int ok;
-    evaluate(s, w, 1);
+    evaluate(s, w);
     for (size_t it = 0;; it++) {
         w->st.residual_norm = resid_norm(w, o, &worst, &ok);
         if (ok) return PX_OK;
@@ -555,24 +657,26 @@ static int newton(const px_equil_system *s, px_equil_work *w, const px_equil_opt
         }
         if (w->lag_change > o->epsrel) {
             take_lag(s, w);
-            evaluate(s, w, 1);
+            evaluate(s, w);
             w->st.residual_norm = resid_norm(w, o, &worst, &ok);
             if (ok) return PX_OK;
         }
+        jacobian(s, w);
         int st = newton_direction(w);
         if (st != PX_OK) {
             fail_at(w, (int)w->row_kind[worst], w->row_index[worst]);
             return st;
         }
         double mx = 0.0;
-        for (size_t k = 0; k <= w->ncol; k++) mx = fmax(mx, fabs(w->dx[k]));
+        for (size_t k = 0; k <= w->ncol; k++)
+            if (fabs(w->dx[k]) > mx) mx = fabs(w->dx[k]);
         double lam = mx > max_step ? max_step / mx : 1.0;
         double phi0 = w->phi, best_phi = DBL_MAX, best_lam = lam, last_lam = 0.0;
         int accepted = 0;
         save_state(w);
         for (int ls = 0; ls <= LS_MAX; ls++) {
             apply_step(s, w, lam);
-            evaluate(s, w, 1);
+            evaluate(s, w);
             last_lam = lam;
             if (w->phi <= (1.0 - ARMIJO * lam) * phi0) {
                 accepted = 1;
@@ -586,7 +690,7 @@ static int newton(const px_equil_system *s, px_equil_work *w, const px_equil_opt
         }
         if (!accepted && best_lam != last_lam) {
             apply_step(s, w, best_lam);
-            evaluate(s, w, 1);
+            evaluate(s, w);
         }
         w->st.iterations++;
     }
@@ -627,7 +731,8 @@ static void solve_linear(const px_equil_system *s, px_equil_work *w, size_t skip
                         continue;
                     }
                     double lak = s->phase[k] == PX_EQUIL_AQ      ? w->y[k] + w->g[k]
-                                 : s->phase[k] == PX_EQUIL_WATER ? w->log_aw
+                                 : s->phase[k] == PX_EQUIL_WATER
+                                     ? (w->col[k] != SIZE_MAX ? w->y[k] : 0.0)
                                                                  : w->y[k];
                     v += w->nz_val[q] * lak;
                 }
@@ -671,7 +776,7 @@ static double eval_at(const px_equil_system *s, px_equil_work *w, size_t i, doub
 {
     w->y[i] = y;
     solve_linear(s, w, i);
-    evaluate(s, w, 0);
+    evaluate(s, w);
     if (s->ckind[i] == PX_EQUIL_C_CHARGE && s->z[i] != 0.0) return charge_proxy(s, w, i);
     return w->R[w->row[i]];
 }
@@ -738,7 +843,6 @@ static void cold_start(const px_equil_system *s, px_equil_work *w)
     memset(w->active, 0, s->ns);
     memset(w->amt, 0, s->ns * sizeof(double));
     w->n_active = 0;
-    w->log_aw = 0.0;
     for (size_t i = 0; i < nb; i++) {
         double y;
         int aq = s->phase[i] == PX_EQUIL_AQ;
@@ -754,7 +858,7 @@ static void cold_start(const px_equil_system *s, px_equil_work *w)
     w->xI = PX_EQUIL_XI_MIN; /* ideal: the lagged terms stay 0 too */
     for (int pass = 0; pass < CF_PASSES; pass++) {
         solve_linear(s, w, SIZE_MAX);
-        evaluate(s, w, 0);
+        evaluate(s, w);
         for (size_t i = 0; i < nb; i++) {
             size_t r = w->row[i];
             if (r == SIZE_MAX) continue;
@@ -783,18 +887,23 @@ static void cold_start(const px_equil_system *s, px_equil_work *w)
                                               !posonly_component(s, w, i))))
                 solve_1d(s, w, i);
         }
-        evaluate(s, w, 0);
+        evaluate(s, w);
         double worst = 0.0;
         for (size_t r = 0; r < w->ncol; r++) {
             size_t k = w->row_kind[r];
+            if (k == PX_EQUIL_C_WATER) continue;
             double e = (k == PX_EQUIL_C_TOTAL || k == PX_EQUIL_C_CHARGE)
                            ? fabs(w->R[r]) / w->scale[r] : fabs(w->R[r]);
             worst = fmax(worst, e);
         }
         if (worst < CF_DONE) break;
     }
-    /* I from the ideal molalities: R_I = I - floor - 1/2 sum z^2 m */
+    /* I from the ideal molalities: R_I = I - floor - 1/2 sum z^2 m; a_w
+     * from its own equation R_w = log a_w + M_w sum m / ln 10 */
     double Inew = exp(LN10 * w->xI) - w->R[w->ncol];
+    for (size_t i = 0; i < nb; i++)
+        if (s->ckind[i] == PX_EQUIL_C_WATER && w->row[i] != SIZE_MAX)
+            w->y[i] = clampd(w->y[i] - w->R[w->row[i]], LOG_AW_MIN, 0.0);
     w->xI = clampd(log10(fmax(Inew, PX_EQUIL_I_FLOOR)), PX_EQUIL_XI_MIN, PX_EQUIL_XI_MAX);
 }
 
@@ -887,7 +996,7 @@ static int solve_active(const px_equil_system *s, px_equil_work *w, const px_equ
 
 static int state_finite(const px_equil_work *w)
 {
-    if (!isfinite(w->xI) || !isfinite(w->log_aw)) return 0;
+    if (!isfinite(w->xI)) return 0;
     for (size_t i = 0; i < w->nb; i++)
         if (!isfinite(w->y[i])) return 0;
     for (size_t j = 0; j < w->ns; j++)
@@ -900,6 +1009,50 @@ static int valid_options(const px_equil_options *o)
     return isfinite(o->epsabs) && o->epsabs >= 0.0 && isfinite(o->epsrel) && o->epsrel >= 0.0 &&
            (o->epsabs > 0.0 || o->epsrel > 0.0) && o->max_iter > 0 && isfinite(o->max_step) &&
            o->max_step > 0.0 && isfinite(o->si_tol) && o->si_tol >= 0.0;
+}
+
+/* The constraint values as a point in parameter space (log totals, log
+ * activities, log fugacities), for the sweep predictor. */
+static void sweep_params(const px_equil_system *s, double *par)
+{
+    for (size_t i = 0; i < s->nb; i++) {
+        double v = s->cval[i];
+        switch (s->ckind[i]) {
+        case PX_EQUIL_C_TOTAL: par[i] = v > 0.0 ? log10(v) : v; break;
+        case PX_EQUIL_C_ACTIVITY:
+        case PX_EQUIL_C_FUGACITY: par[i] = v; break;
+        default: par[i] = 0.0; break;
+        }
+    }
+}
+
+/* Sweep predictor: when the constraints moved on along the line of the last
+ * step (cosine > PRED_COS) and the solids stayed the same, start from the
+ * linear extrapolation of the last two solutions instead of the last one
+ * (first-order continuation, e.g. Allgower and Georg 1990, Numerical
+ * Continuation Methods, ch. 2).  Returns 1 if it moved the start. */
+static int predict(const px_equil_system *s, px_equil_work *w)
+{
+    if (w->hist < 2 || w->sig_p1 != w->sig_p2) return 0;
+    double *par = w->dx; /* scratch */
+    sweep_params(s, par);
+    double dd = 0.0, pp = 0.0, dp = 0.0;
+    for (size_t i = 0; i < s->nb; i++) {
+        double d = par[i] - w->par_p1[i], q = w->par_p1[i] - w->par_p2[i];
+        dd += d * d;
+        pp += q * q;
+        dp += d * q;
+    }
+    if (!(pp > 0.0) || !(dd > 0.0) || dp <= PRED_COS * sqrt(dd * pp)) return 0;
+    double a = dp / pp;
+    if (!(a > 0.0 && a <= PRED_MAX)) return 0;
+    for (size_t i = 0; i < s->nb; i++)
+        if (w->col[i] != SIZE_MAX)
+            w->y[i] = clampd(w->y_p1[i] + a * (w->y_p1[i] - w->y_p2[i]),
+                             s->phase[i] == PX_EQUIL_WATER ? LOG_AW_MIN : -PX_EQUIL_LM_MAX,
+                             s->phase[i] == PX_EQUIL_WATER ? 0.0 : PX_EQUIL_LM_MAX);
+    w->xI = clampd(w->xI_p1 + a * (w->xI_p1 - w->xI_p2), PX_EQUIL_XI_MIN, PX_EQUIL_XI_MAX);
+    return 1;
 }
 
 /* Fills the reported quantities from the last evaluation; checks every
@@ -917,7 +1070,9 @@ static int finish(const px_equil_system *s, px_equil_work *w, int status)
     w->st.ionic_strength = I;
     w->st.charge_imbalance = q;
     w->st.charge_scale = qs;
-    w->st.log_aw = w->log_aw;
+    w->st.log_aw = 0.0;
+    for (size_t i = 0; i < nb; i++)
+        if (s->phase[i] == PX_EQUIL_WATER) w->st.log_aw = w->la[i];
     w->st.n_solids = w->n_active;
     for (size_t i = 0; i < nb; i++) {
         size_t r = w->row[i];
@@ -943,7 +1098,7 @@ static int finish(const px_equil_system *s, px_equil_work *w, int status)
         }
     }
     int finite = isfinite(I) && isfinite(q) && isfinite(qs) && isfinite(w->st.residual_norm) &&
-                 isfinite(w->log_aw);
+                 isfinite(w->st.log_aw);
     for (size_t j = 0; j < ns && finite; j++)
         finite = isfinite(w->m[j]) && isfinite(w->lm[j]) && isfinite(w->g[j]) &&
                  isfinite(w->la[j]) && isfinite(w->amt[j]);
@@ -963,7 +1118,23 @@ static int finish(const px_equil_system *s, px_equil_work *w, int status)
     }
     w->st.status = status;
     w->have = status == PX_OK;
-    if (w->have) memcpy(w->absent_prev, w->cabsent, nb);
+    if (w->have) {
+        memcpy(w->absent_prev, w->cabsent, nb);
+        /* history for the sweep predictor: this solution becomes p1 */
+        size_t sig = w->n_active;
+        for (size_t p = 0; p < w->n_active; p++) sig = sig * 31u + w->solids[p] + 1u;
+        memcpy(w->y_p2, w->y_p1, nb * sizeof(double));
+        memcpy(w->par_p2, w->par_p1, nb * sizeof(double));
+        w->xI_p2 = w->xI_p1;
+        w->sig_p2 = w->sig_p1;
+        memcpy(w->y_p1, w->y, nb * sizeof(double));
+        sweep_params(s, w->par_p1);
+        w->xI_p1 = w->xI;
+        w->sig_p1 = sig;
+        if (w->hist < 2) w->hist++;
+    } else {
+        w->hist = 0;
+    }
     return status;
 }
 
@@ -999,7 +1170,9 @@ int px_equil_solve(const px_equil_system *s, px_equil_work *w, const px_equil_op
             w->solids[w->n_active++] = j;
         }
         if (s->act.model != PX_EQUIL_SIT) memset(w->lag, 0, s->ns * sizeof(double));
-        if (s->act.water != PX_EQUIL_WATER_IDEAL) w->log_aw = 0.0;
+        for (size_t i = 0; i < s->nb; i++)
+            if (s->phase[i] == PX_EQUIL_WATER && s->act.water != PX_EQUIL_WATER_IDEAL) w->y[i] = 0.0;
+        (void)predict(s, w); /* a misled start falls back to a cold one below */
         st = solve_active(s, w, &o, o.max_step);
     }
     if (!warm || st != PX_OK) {

@@ -116,6 +116,7 @@ int px_equil_system_set_species(px_equil_system *s, size_t j, const px_equil_spe
     s->phase[j] = (int)sp->phase;
     s->flags[j] = sp->flags;
     s->is_set[j] = 1;
+    s->rev++;
     return PX_OK;
 }
 
@@ -132,6 +133,7 @@ int px_equil_system_set_flags(px_equil_system *s, size_t j, unsigned flags)
     if (!s || j >= s->ns) return PX_EINVAL;
     if (j < s->nb && (flags & PX_EQUIL_EXCLUDED)) return PX_EINVAL;
     s->flags[j] = flags;
+    s->rev++;
     return PX_OK;
 }
 
@@ -140,10 +142,17 @@ static int settable(const px_equil_system *s, size_t i)
     return s && i < s->nb && s->ckind[i] != PX_EQUIL_C_WATER;
 }
 
+/* a change of constraint kind changes the structure the solver prepares */
+static void set_kind(px_equil_system *s, size_t i, int kind)
+{
+    if (s->ckind[i] != kind) s->rev++;
+    s->ckind[i] = kind;
+}
+
 int px_equil_system_set_total(px_equil_system *s, size_t i, double total)
 {
     if (!settable(s, i) || !isfinite(total)) return PX_EINVAL;
-    s->ckind[i] = PX_EQUIL_C_TOTAL;
+    set_kind(s, i, PX_EQUIL_C_TOTAL);
     s->cval[i] = total;
     return PX_OK;
 }
@@ -151,7 +160,7 @@ int px_equil_system_set_total(px_equil_system *s, size_t i, double total)
 int px_equil_system_set_log_activity(px_equil_system *s, size_t i, double log_a)
 {
     if (!settable(s, i) || !isfinite(log_a)) return PX_EINVAL;
-    s->ckind[i] = PX_EQUIL_C_ACTIVITY;
+    set_kind(s, i, PX_EQUIL_C_ACTIVITY);
     s->cval[i] = log_a;
     return PX_OK;
 }
@@ -178,7 +187,8 @@ int px_equil_system_set_fugacity(px_equil_system *s, size_t i, size_t g, double 
 {
     if (!settable(s, i) || g >= s->ns || g < s->nb || !isfinite(log_f)) return PX_EINVAL;
     if (s->is_set[g] && s->phase[g] != PX_EQUIL_GAS) return PX_EINVAL;
-    s->ckind[i] = PX_EQUIL_C_FUGACITY;
+    set_kind(s, i, PX_EQUIL_C_FUGACITY);
+    if (s->cgas[i] != g) s->rev++;
     s->cval[i] = log_f;
     s->cgas[i] = g;
     return PX_OK;
@@ -187,7 +197,7 @@ int px_equil_system_set_fugacity(px_equil_system *s, size_t i, size_t g, double 
 int px_equil_system_set_charge_balance(px_equil_system *s, size_t i)
 {
     if (!settable(s, i)) return PX_EINVAL;
-    s->ckind[i] = PX_EQUIL_C_CHARGE;
+    set_kind(s, i, PX_EQUIL_C_CHARGE);
     s->cval[i] = 0.0;
     return PX_OK;
 }
@@ -204,6 +214,7 @@ int px_equil_system_set_activity(px_equil_system *s, const px_equil_activity *ac
         !isfinite(act->b_neutral) || act->A < 0.0 || act->B < 0.0)
         return PX_EINVAL;
     s->act = *act;
+    s->rev++;
     return PX_OK;
 }
 

@@ -110,7 +110,7 @@ static void test_random_cases(void **state)
             px_equil_system_set_fugacity(t.s, C, g, -5.0 + 5.0 * uni(&r));
         }
         if (uni(&r) < 0.5 && t.w) px_equil_work_reset(t.w);
-#ifdef SWEEP_ONLY
+#ifdef SWEEP_ONLY /* debugging aid: -DSWEEP_ONLY=k solves case k alone, cold */
         if (k != SWEEP_ONLY) continue;
         if (t.w) px_equil_work_reset(t.w);
         fprintf(stderr, "model %d water %d neutral %d u %.3f\n", a.model, a.water, a.neutral, u);
