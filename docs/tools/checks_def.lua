@@ -549,6 +549,8 @@ local SHORT = {
   { "definition of the standard hydrogen electrode", "SHE (definition)" },
 }
 local function short_source(s)
+  -- a row that names the column it took its value from
+  if s:find("Brown & Ekberg column", 1, true) then return "Brown & Ekberg 2016" end
   local best, at
   for _, p in ipairs(SHORT) do
     local i = s:find(p[1], 1, true)
@@ -625,6 +627,28 @@ function M.render(results, summary)
   for _, g in ipairs(M.GROUPS) do
     local s = summary.by_group[g.id]
     if s then w(("| %s | %d | %d | %d | %d |"):format(g.title, s.total, s.pass, s.known, s.fail)) end
+  end
+  w("")
+  w("## Disagreements kept (known differences)")
+  w("")
+  w("Each was investigated; the element file keeps its value for the reason given,")
+  w("and both sources are named. Row numbers refer to the tables below.")
+  w("")
+  do
+    local k = 0
+    for _, g in ipairs(M.GROUPS) do
+      for _, r in ipairs(results) do
+        if r.group == g.id then
+          k = k + 1
+          if r.known then
+            w(("- #%d `%s`%s: phlox %s, published %s (%s), difference %s. %s."):format(k, r.reaction,
+              r.T_C ~= 25 and (" at " .. ("%g"):format(r.T_C) .. " C") or "",
+              fmt(r.kind, r.computed), fmt(r.kind, r.published), short_source(r.source),
+              fmt_diff(r.kind, r.diff), r.known.why))
+          end
+        end
+      end
+    end
   end
   w("")
   w("## Tolerances")

@@ -6,8 +6,8 @@
 -- Both are regenerated here in memory and compared with the committed files.
 -- If this test fails after a change to stdlib/elements, the checks or the
 -- source list, run
---     phlox docs/tools/data_sources.lua && phlox docs/tools/data_checks.lua
--- and commit the two documents.
+--     phlox docs/tools/data_checks.lua
+-- (it writes both) and commit the two documents.
 local src = assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR not set")
 local phlox = require "phlox"
 
@@ -38,7 +38,7 @@ assert(#data.unmatched == 0, #data.unmatched .. " species cite no publication li
 assert(data.species > 300, "too few species loaded: " .. data.species)
 local want = sdefs.render(data)
 local have = read(src .. "/docs/data-sources.md")
-assert(have == want, "docs/data-sources.md is stale (run phlox docs/tools/data_sources.lua): " .. first_difference(have, want))
+assert(have == want, "docs/data-sources.md is stale (run phlox docs/tools/data_checks.lua): " .. first_difference(have, want))
 print(("docs/data-sources.md current: %d species, %d publications"):format(data.species, #sdefs.SOURCES))
 
 local cdefs = dofile(src .. "/docs/tools/checks_def.lua")
