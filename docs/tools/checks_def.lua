@@ -473,7 +473,10 @@ function M.run(phlox, refdir, opts)
       local row = find_row(csv[c.ref.file], keycol, c.ref.key, c.ref.source_has)
       if not row then error("reference row not found in " .. c.ref.file .. ": " .. c.ref.key) end
       published = tonumber(row[c.ref.file == SP and "E0_V_SHE_25C" or "log10_K_25C"])
-      source = row.source .. " [" .. c.ref.file .. "]"
+      -- one reference row names a course handout by its numbering; keep
+      -- the institution and course number only
+      source = row.source:gsub("NPTEL course (%d+) %a+ %d+ %(IIT Kanpur%) corrosion notes",
+                               "IIT Kanpur corrosion course notes (NPTEL %1)") .. " [" .. c.ref.file .. "]"
       confidence = row.confidence
       r.ref_key = c.ref.key ~= c.reaction and c.ref.key or nil
     elseif c.water_row then
@@ -698,6 +701,16 @@ function M.render(results, summary)
     end
     w("")
   end
+  w("## Not checked")
+  w("")
+  w("- High-temperature hydrolysis constants (Baes and Mesmer 1976 give some to")
+  w("  300 C): not recalled with enough confidence to serve as a check. Most")
+  w("  hydrolysis and complex records carry no dH and hold their 25 C constant at")
+  w("  every temperature, so such a check would test the absence of data.")
+  w("- Reference rows whose species are not in the library: NiO2, Cr(OH)3,")
+  w("  Co(OH)3, Hg, Au, Ti2+ and Mo3+ couples.")
+  w("- S^2- based couples other than the one row above (pK2 of H2S is disputed).")
+  w("")
   w("## Notes and sources, row by row")
   w("")
   for _, n in ipairs(notes) do w(n) end
