@@ -1,0 +1,721 @@
+-- docs/tools/checks_def.lua: the checks of the standard library against
+-- published values, shared by the test (tests/scripts/test_stdlib_values.lua)
+-- and the generator of docs/data-checks.md (docs/tools/data_checks.lua).
+--
+-- Every computed value goes through phlox's own pipeline: the sandboxed
+-- loader reads stdlib/elements/*.lua (phlox.library), and the thermo models
+-- (cp, hkf, logk) give the reaction's log K or E at T (lib:reaction).  The
+-- published values come from /work/shared/reference (read at run time:
+-- standard_potentials.csv, log_k_25C.csv, water.csv), from equations printed
+-- in the note column of log_k_25C.csv (Plummer and Busenberg 1982), or from
+-- handbook values recalled here and marked "from memory of <source>".
+--
+-- A check passes when |computed - published| <= tol.  A disagreement that
+-- was investigated and kept (both sources named in `known.why`) is a
+-- "known difference": it passes only while the difference stays within
+-- `known.margin` of the difference recorded at the time (`known.diff`), so a
+-- change in the data or the code that moves it still fails.
+--
+-- Load with dofile(PATH).  API:
+--   defs.checks                      list of check definitions (fields below)
+--   defs.TOL                         tolerance classes and their reasons
+--   defs.reference_dir(root)         root .. "/../shared/reference"
+--   defs.run(phlox, refdir [, opts]) -> results (list), summary
+--                                    opts.user: override files for every library
+--                                    opts.filter(check) -> bool: run a subset
+--   defs.render(results, summary)    -> markdown text of docs/data-checks.md
+--   defs.read_csv(path)              -> list of rows keyed by the header
+
+local M = {}
+
+local T0C = 273.15
+
+-- ---------------------------------------------------------------- tolerances
+-- Chosen before comparing, from the source's stated confidence.  The
+-- reference README suggests (common practice, no source) E +-2 mV for
+-- high-confidence rows when one table gives both numbers, +-20-50 mV for
+-- medium ones, log K +-0.02 high and +-0.1-0.3 medium, and warns that mixing
+-- the NBS and CODATA tables shifts a log K by 0.1-0.4.  The element files
+-- mix tables by design (docs/data/*.md), so the "high" bounds are widened
+-- to the spread that the reference notes show between the tables for the
+-- same couple.
+M.TOL = {
+  E_same = { tol = 0.001, why = "same source as the element file's data (the file value was derived from the published number): only rounding of the printed value and the unit/model chain may differ; 1 mV" },
+  E_high = { tol = 0.010, why = "high-confidence handbook E: the CRC series, NBS 1982 and CODATA 1989 differ among themselves by up to 5 mV for such couples (reference notes: Zn2+/Zn -0.7618/-0.7621/-0.7628, Cu2+/Cu 0.3419/0.3394/0.3370); 10 mV is twice that spread" },
+  E_medium = { tol = 0.020, why = "medium-confidence E: lower end of the 20-50 mV the reference README suggests for medium rows" },
+  E_low = { tol = 0.050, why = "low-confidence E: upper end of the 20-50 mV the reference README suggests" },
+  K_same = { tol = 0.01, why = "same source as the element file's data: constants are printed to 0.01 (or 0.001); only rounding and the unit/model chain may differ" },
+  K_high = { tol = 0.05, why = "high-confidence log K: about 0.3 kJ/mol in dG at 25 C, the rounding and table spread of the two or three species in the reaction (reference README: +-0.02 within one table)" },
+  K_medium = { tol = 0.2, why = "medium-confidence log K: reference README suggests +-0.1-0.3; 0.2 is about 1.1 kJ/mol" },
+  K_low = { tol = 0.3, why = "low-confidence log K: upper end of the +-0.1-0.3 of the reference README" },
+  pKw_T = { tol = 0.03, why = "HKF OH- (Shock and Helgeson 1988) with IAPWS water reproduces R11-07 within 0.02 to 300 C (shared/reference/hkf/README.md, water ionisation table); phlox's built-in dfG(H2O) is NBS 1982 (-237.129 kJ/mol) while SH88 used -56687 cal (-237.178 kJ/mol), a further 0.009 at 25 C; 0.03 covers both" },
+  water_same = { tol = 0.0005, why = "the same formulation (IAPWS R11-07 at IAPWS-95 density) as python3-iapws; water.csv prints 4 decimals" },
+  PB82_T = { tol = 0.10, why = "the Plummer and Busenberg 1982 equations fit measured constants to 250 C; phlox's HKF sets (SH88, SHS89) rest on 25 C data and the SH88 correlations: 0.1 is about the scatter of the measured constants above 100 C (common practice, no source)" },
+  BB54_T = { tol = 0.003, why = "AgCl/Ag E at 0-50 C is known to 0.1 mV; the 25 C value here differs by 0.8 mV and the temperature slope follows dS of the reaction (CODATA entropies, +-1 J/(mol K) = +-0.3 mV over 25 K): 3 mV" },
+  BP49_T = { tol = 0.05, why = "Bates and Pinching 1949 fit 0-50 C to 0.002; the 25 C value here differs by 0.03 (NH3(aq) and NH4+ HKF sets, medium/high): 0.05" },
+}
+
+local function class_of(kind, confidence)
+  local prefix = kind == "E0" and "E_" or "K_"
+  local c = (confidence or "medium"):lower()
+  if c ~= "high" and c ~= "medium" and c ~= "low" then c = "medium" end
+  return prefix .. c
+end
+
+-- ---------------------------------------------------------------- sources
+local CRC = "from memory of CRC Handbook of Chemistry and Physics, Electrochemical Series (P. Vanysek)"
+local N90 = "from memory of Nordstrom et al. 1990 (ACS Symp. Ser. 416)"
+local N90C = "from memory of the mineral constants compiled after Nordstrom et al. 1990 (ACS Symp. Ser. 416)"
+local BM76 = "from memory of Baes and Mesmer 1976, The Hydrolysis of Cations"
+local SM = "from memory of Smith and Martell, Critical Stability Constants (I = 0, 25 C)"
+local PB82 = "Plummer and Busenberg 1982, Geochim. Cosmochim. Acta 46, 1011 (equation as printed in the note of log_k_25C.csv)"
+local PB82_K2 = "from memory of Plummer and Busenberg 1982, Geochim. Cosmochim. Acta 46, 1011: log K2 = -107.8871 - 0.03252849 T + 5151.79/T + 38.92561 log T - 563713.9/T^2 (gives -10.329 at 25 C)"
+
+-- Plummer and Busenberg 1982 analytic forms, T in K.  K1 and KH as printed
+-- in the note column of log_k_25C.csv; K2 recalled (PB82_K2).  Fitted
+-- 0-250 C (from memory of the paper).
+local function log10(x) return math.log(x, 10) end
+local PB = {
+  K1 = function(T) return -356.3094 - 0.06091964 * T + 21834.37 / T + 126.8339 * log10(T) - 1684915 / T ^ 2 end,
+  K2 = function(T) return -107.8871 - 0.03252849 * T + 5151.79 / T + 38.92561 * log10(T) - 563713.9 / T ^ 2 end,
+  -- KH refers to CO2(g) at 1 atm; phlox's gas standard state is 1 bar:
+  -- log K(bar) = log K(atm) - log10(1.01325).
+  KH = function(T) return 108.3865 + 0.01985076 * T - 6919.53 / T - 40.45154 * log10(T) + 669365 / T ^ 2 - log10(1.01325) end,
+}
+M.PB = PB
+
+-- Bates and Pinching 1949 (J. Res. NBS 42, 419): pKa(NH4+) = 2835.76/T -
+-- 0.6322 + 0.001225 T, 0-50 C (from memory; gives 9.244 at 25 C).
+local function bp49_logK(T) return -(2835.76 / T - 0.6322 + 0.001225 * T) end
+
+-- ---------------------------------------------------------------- the checks
+-- Fields:
+--   kind      "E0" (volts) or "logK"
+--   reaction  phlox text
+--   T_C       temperature, C (default 25)
+--   ref       { file, key [, source_has] }: the published value is read from
+--             the reference CSV row whose reaction/couple column equals key
+--   value     published value given here (with `source`)
+--   value_fn  function(T_K, refdir) -> published value (with `source`)
+--   source    citation (for `value`/`value_fn`; the CSV's own otherwise)
+--   confidence  high/medium/low (for `value`; the CSV's own otherwise)
+--   same      true when the file's data came from the same source
+--   tolclass  key of M.TOL (default: from kind and confidence, or *_same)
+--   known     { diff, margin, why } for an investigated, kept disagreement
+--   note      free text
+local SP = "standard_potentials.csv"
+local LK = "log_k_25C.csv"
+
+local C = {}
+local function add(t) C[#C + 1] = t end
+
+-- 1. E at 25 C, standard_potentials.csv ------------------------------------
+local function sp(reaction, key, extra)
+  local t = { kind = "E0", reaction = reaction, ref = { file = SP, key = key or reaction }, group = "E25_ref" }
+  for k, v in pairs(extra or {}) do t[k] = v end
+  add(t)
+end
+
+sp("O2(g) + 4 H^+ + 4 e- = 2 H2O(l)")
+sp("O2(g) + 2 H2O(l) + 4 e- = 4 OH^-")
+sp("O2(g) + 2 H^+ + 2 e- = H2O2(aq)")
+sp("H2O2(aq) + 2 H^+ + 2 e- = 2 H2O(l)", nil, { known = { diff = -0.0129, margin = 0.003,
+  why = "CRC 1.776 V; the file's H2O2(aq) (NBS 1982 dfG -134.03 kJ/mol) gives 1.763 V. The three CRC oxygen couples do not close: (0.695 + 1.776)/2 = 1.2355 V against 1.229 V for O2/H2O, so 1.776 V is 13 mV above the value the other two imply; the O2/H2O2 row (0.695 V) passes" } })
+sp("HClO(aq) + H^+ + 2 e- = Cl^- + H2O(l)", nil, { known = { diff = 0.0132, margin = 0.003,
+  why = "CRC 1.482 V; the NBS 1982 dfG of HClO(aq) and Cl^- give 1.495 V, as does the file (Morris 1966 pKa with NBS ClO^-); Pourbaix 1966 prints 1.494 V (recalled). Same finding as docs/data/ligands.md" } })
+sp("ClO^- + H2O(l) + 2 e- = Cl^- + 2 OH^-", nil, { note = "file: NBS-derived ClO^- (docs/data/ligands.md); the row's note gives NBS 0.890" })
+sp("S(s,rhombic) + 2 e- = S^2-", "S(s) + 2 e- = S^2-", { known = { diff = -0.1004, margin = 0.003,
+  why = "the row (low confidence) rests on pK2(H2S) near 13-14 (NBS dfG(S^2-) 85.8 kJ/mol); the file uses pK2 = 17.4 (from memory of Migdisov et al. 2002), as later measurements give 17-19. Same finding as docs/data/ligands.md" } })
+sp("SO4^2- + 4 H^+ + 2 e- = SO2(aq) + 2 H2O(l)", "SO4^2- + 4 H^+ + 2 e- = H2SO3(aq) + H2O(l)", {
+  note = "H2SO3(aq) is written SO2(aq) + H2O(l), the same species. CRC 0.172 V; NBS-derived sulfite data with SH88 SO4^2- give 0.157 V; the CRC pair (0.172, 0.449) sums to 0.357 V against 0.352 V for SO4^2-/S, so CRC is itself off by 5 mV. Same finding as docs/data/ligands.md" })
+sp("SO2(aq) + 4 H^+ + 4 e- = S(s,rhombic) + 2 H2O(l)", "H2SO3(aq) + 4 H^+ + 4 e- = S(s) + 3 H2O(l)", { note = "H2SO3(aq) written SO2(aq) + H2O(l)" })
+sp("SO4^2- + 8 H^+ + 6 e- = S(s,rhombic) + 4 H2O(l)", "SO4^2- + 8 H^+ + 6 e- = S(s) + 4 H2O(l)", { note = "SO4^2- from SH88 (HKF), the row from NBS 1982" })
+sp("NO3^- + 4 H^+ + 3 e- = NO(g) + 2 H2O(l)")
+sp("NO3^- + H2O(l) + 2 e- = NO2^- + 2 OH^-", nil, { note = "CRC 0.01 V (medium); SH88 NO3^- with NBS NO2^- gives -0.007 V; NBS alone gives 0.004 V (NBS dfG(NO3^-) is 2.1 kJ/mol above CODATA/SH88). Same finding as docs/data/ligands.md" })
+sp("Fe^2+ + 2 e- = Fe(s)", nil, { known = { diff = -0.0272, margin = 0.003,
+  why = "file: dfG(Fe^2+) = -91.50 kJ/mol of Shock et al. 1997 gives -0.474 V; CRC -0.447 V, NBS 1982 (-78.90 kJ/mol) -0.409 V, older tables -0.440 V: a known 12 kJ/mol spread in dfG(Fe^2+). Same finding as docs/data/transition-metals.md" } })
+sp("Fe^3+ + 3 e- = Fe(s)", nil, { known = { diff = -0.0226, margin = 0.003,
+  why = "follows the Fe^2+ choice above (Fe^3+ is defined against Fe^2+ with Shock et al. 1997 data); CRC -0.037 V, NBS -0.016 V" } })
+sp("Fe(OH)2(s) + 2 e- = Fe(s) + 2 OH^-", nil, { note = "CRC -0.877 V; the NBS 1982 dfG of Fe(OH)2 (used by the file) gives -0.891 V, as the reference row's note says" })
+sp("Fe3O4(s,magnetite) + 8 H^+ + 8 e- = 3 Fe(s) + 4 H2O(l)", "Fe3O4(s) + 8 H^+ + 8 e- = 3 Fe(s) + 4 H2O(l)", { note = "Pourbaix 1966 against NBS 1982 magnetite" })
+sp("Fe3O4(s,magnetite) + 8 H^+ + 2 e- = 3 Fe^2+ + 4 H2O(l)", "Fe3O4(s) + 8 H^+ + 2 e- = 3 Fe^2+ + 4 H2O(l)", { known = { diff = 0.096, margin = 0.003,
+  why = "set by dfG(Fe^2+): Pourbaix 1966 used about -84.9 kJ/mol (row note), NBS -78.90 gives 0.880 V, Shock et al. 1997 (file) -91.50 gives 1.076 V" } })
+sp("Fe2O3(s,hematite) + 6 H^+ + 6 e- = 2 Fe(s) + 3 H2O(l)", "Fe2O3(s) + 6 H^+ + 6 e- = 2 Fe(s) + 3 H2O(l)", { same = true })
+sp("Cu^2+ + 2 e- = Cu(s)")
+sp("Cu^2+ + e- = Cu^+")
+sp("Cu2O(s,cuprite) + 2 H^+ + 2 e- = 2 Cu(s) + H2O(l)", "Cu2O(s) + 2 H^+ + 2 e- = 2 Cu(s) + H2O(l)")
+sp("2 CuO(s,tenorite) + 2 H^+ + 2 e- = Cu2O(s,cuprite) + H2O(l)", "2 CuO(s) + 2 H^+ + 2 e- = Cu2O(s) + H2O(l)", { same = true })
+sp("Zn^2+ + 2 e- = Zn(s)")
+sp("Zn(OH)4^2- + 2 e- = Zn(s) + 4 OH^-", nil, { note = "tests the Baes and Mesmer beta4 with CODATA Zn^2+" })
+sp("ZnO(s,zincite) + 2 H^+ + 2 e- = Zn(s) + H2O(l)", "ZnO(s) + 2 H^+ + 2 e- = Zn(s) + H2O(l)", { same = true })
+sp("Ni(OH)2(s) + 2 e- = Ni(s) + 2 OH^-", nil, { known = { diff = 0.0328, margin = 0.003,
+  why = "CRC -0.72 V; the NBS 1982 dfG of Ni(OH)2 (used by the file) gives -0.688 V, as the reference row's note says; spread reflects the Ni(OH)2 solubility uncertainty" } })
+sp("Ni(OH)2(s) + 2 H^+ + 2 e- = Ni(s) + 2 H2O(l)", nil, { same = true })
+sp("Cr^3+ + 3 e- = Cr(s)", nil, { same = true, note = "Cr^3+ is defined from this CRC value" })
+sp("Cr^3+ + e- = Cr^2+", nil, { same = true, note = "Cr^2+ is defined from this CRC value" })
+sp("Cr2O7^2- + 14 H^+ + 6 e- = 2 Cr^3+ + 7 H2O(l)", nil, { known = { diff = 0.1318, margin = 0.003,
+  why = "CRC 1.232 V; NBS 1982 Cr2O7^2- with the CRC Cr^3+ gives 1.364 V; the reference note records 1.33 (Latimer/Pourbaix-era tables) and 1.36 in other compilations; the CRC value is the outlier of the three" } })
+sp("Cr2O3(s,eskolaite) + 6 H^+ + 6 e- = 2 Cr(s) + 3 H2O(l)", "Cr2O3(s) + 6 H^+ + 6 e- = 2 Cr(s) + 3 H2O(l)", { same = true })
+sp("Mn^2+ + 2 e- = Mn(s)")
+sp("MnO4^- + 8 H^+ + 5 e- = Mn^2+ + 4 H2O(l)")
+sp("MnO4^- + 2 H2O(l) + 3 e- = MnO2(s,pyrolusite) + 4 OH^-", "MnO4^- + 2 H2O(l) + 3 e- = MnO2(s) + 4 OH^-")
+sp("MnO4^- + e- = MnO4^2-")
+sp("Mn(OH)2(am) + 2 e- = Mn(s) + 2 OH^-", "Mn(OH)2(s) + 2 e- = Mn(s) + 2 OH^-", { note = "amorphous Mn(OH)2 of NBS 1982, as the row's note" })
+sp("Co^2+ + 2 e- = Co(s)")
+sp("Co(OH)2(s) + 2 e- = Co(s) + 2 OH^-")
+sp("PbO2(s) + 4 H^+ + 2 e- = Pb^2+ + 2 H2O(l)")
+sp("PbO2(s) + SO4^2- + 4 H^+ + 2 e- = PbSO4(s,anglesite) + 2 H2O(l)", "PbO2(s) + SO4^2- + 4 H^+ + 2 e- = PbSO4(s) + 2 H2O(l)")
+sp("PbO(s,litharge) + H2O(l) + 2 e- = Pb(s) + 2 OH^-", "PbO(s,red) + H2O(l) + 2 e- = Pb(s) + 2 OH^-", { note = "red PbO is litharge" })
+sp("Sn^2+ + 2 e- = Sn(s)")
+sp("Ag^+ + e- = Ag(s)")
+sp("AgCl(s,chlorargyrite) + e- = Ag(s) + Cl^-", "AgCl(s) + e- = Ag(s) + Cl^-")
+sp("Cd^2+ + 2 e- = Cd(s)")
+sp("Mg^2+ + 2 e- = Mg(s)", nil, { known = { diff = 0.0194, margin = 0.003,
+  why = "file: SH88 dfG(Mg^2+) = -108505 cal/mol = -453.985 kJ/mol gives -2.3526 V; NBS (-454.8) gives -2.357 V, CODATA (-455.375) -2.360 V; CRC -2.372 V fits none of these tables. Same finding as docs/data/other-metals.md" } })
+sp("TiO2(s,rutile) + 4 H^+ + 4 e- = Ti(s) + 2 H2O(l)", nil, { same = true })
+sp("MoO4^2- + 4 H2O(l) + 6 e- = Mo(s) + 8 OH^-", nil, { known = { diff = 0.1406, margin = 0.003,
+  why = "CRC -1.05 V (low); NBS dfG(MoO4^2-) = -836.3 kJ/mol (closes its dfH/S cycle; Shock et al. 1997 agree, recalled) gives -0.910 V; -1.05 V needs dfG near -915 kJ/mol, which fits no plausible S. Same finding as docs/data/other-metals.md" } })
+
+-- 2. E at 25 C, further handbook couples (recalled) -----------------------
+local function crc(reaction, value, confidence, extra)
+  local t = { kind = "E0", reaction = reaction, value = value, source = CRC, confidence = confidence, group = "E25_rec" }
+  for k, v in pairs(extra or {}) do t[k] = v end
+  add(t)
+end
+
+crc("Cl2(g) + 2 e- = 2 Cl^-", 1.35827, "high")
+crc("Fe^3+ + e- = Fe^2+", 0.771, "high")
+crc("Cu^+ + e- = Cu(s)", 0.521, "high", { note = "the CRC Cu couples are mutually inconsistent by 5 mV (reference note)" })
+crc("Pb^2+ + 2 e- = Pb(s)", -0.1262, "high")
+crc("PbSO4(s,anglesite) + 2 e- = Pb(s) + SO4^2-", -0.3588, "high")
+crc("Ni^2+ + 2 e- = Ni(s)", -0.257, "high", { known = { diff = 0.0207, margin = 0.003,
+  why = "file: NBS 1982 dfG(Ni^2+) = -45.6 kJ/mol gives -0.236 V; NEA-TDB (Gamsjaeger et al. 2005) selects about -45.8 kJ/mol (recalled), also -0.237 V; the CRC -0.257 V follows an older, more negative dfG (about -49.6 kJ/mol)" } })
+crc("Sn^4+ + 2 e- = Sn^2+", 0.151, "medium")
+crc("Ca^2+ + 2 e- = Ca(s)", -2.868, "high")
+crc("Na^+ + e- = Na(s)", -2.71, "high")
+crc("K^+ + e- = K(s)", -2.931, "high")
+crc("Al^3+ + 3 e- = Al(s)", -1.662, "medium", { known = { diff = -0.0360, margin = 0.003,
+  why = "file: CODATA dfG(Al^3+) = -491.5 kJ/mol gives -1.698 V; NBS (-485.0) gives -1.676 V; CRC -1.662 V needs about -481 kJ/mol; dfG(Al^3+) spreads 10 kJ/mol across tables (SH88 -483.7). Same finding as docs/data/other-metals.md" } })
+crc("MnO2(s,pyrolusite) + 4 H^+ + 2 e- = Mn^2+ + 2 H2O(l)", 1.224, "high")
+crc("Ag2O(s) + H2O(l) + 2 e- = 2 Ag(s) + 2 OH^-", 0.342, "high")
+crc("S(s,rhombic) + 2 H^+ + 2 e- = H2S(aq)", 0.142, "high")
+crc("ClO3^- + 6 H^+ + 6 e- = Cl^- + 3 H2O(l)", 1.451, "medium")
+crc("ClO4^- + 2 H^+ + 2 e- = ClO3^- + H2O(l)", 1.189, "medium", { known = { diff = 0.0369, margin = 0.003,
+  why = "file: NBS 1982 dfG of ClO4^- (-8.52) and ClO3^- (-7.95 kJ/mol) give 1.226 V; CRC lists 1.189 V (recalled); the couple is kinetically inert and rests on old thermal data" } })
+crc("HClO2(aq) + 2 H^+ + 2 e- = HClO(aq) + H2O(l)", 1.645, "medium", { known = { diff = 0.0280, margin = 0.003,
+  why = "file: NBS 1982 dfG of HClO2(aq) and HClO(aq) give 1.673 V; CRC 1.645 V (recalled); HClO2 data are old and sparse" } })
+crc("NO3^- + 3 H^+ + 2 e- = HNO2(aq) + H2O(l)", 0.934, "medium", { note = "file: SH88 NO3^- with NBS 1982 HNO2(aq) (dfG -50.6 kJ/mol) gives 0.916 V; CRC 0.934 V implies dfG(HNO2) about -54.3 kJ/mol. With the next row, CRC puts NO3^-/NO at 0.950 V against its own 0.957 V; phlox gives 0.956 V, so the spread sits in dfG(HNO2)" })
+crc("HNO2(aq) + H^+ + e- = NO(g) + H2O(l)", 0.983, "medium", { known = { diff = 0.0532, margin = 0.003,
+  why = "file: NBS 1982 NO(g) 86.55 and HNO2(aq) -50.6 kJ/mol give 1.036 V; CRC 0.983 V implies dfG(HNO2) about -55.7 kJ/mol (see the row above)" } })
+crc("Cd(OH)2(s) + 2 e- = Cd(s) + 2 OH^-", -0.809, "medium")
+crc("Cu2O(s,cuprite) + H2O(l) + 2 e- = 2 Cu(s) + 2 OH^-", -0.360, "high")
+crc("Mg(OH)2(s,brucite) + 2 e- = Mg(s) + 2 OH^-", -2.690, "medium")
+crc("Ca(OH)2(s,portlandite) + 2 e- = Ca(s) + 2 OH^-", -3.02, "medium")
+crc("Fe(OH)3(s) + e- = Fe(OH)2(s) + OH^-", -0.56, "medium")
+crc("SO4^2- + H2O(l) + 2 e- = SO3^2- + 2 OH^-", -0.93, "medium")
+crc("2 SO3^2- + 3 H2O(l) + 4 e- = S2O3^2- + 6 OH^-", -0.571, "medium")
+
+-- 3. log K at 25 C, log_k_25C.csv ------------------------------------------
+local function lk(reaction, key, extra)
+  local t = { kind = "logK", reaction = reaction, ref = { file = LK, key = key or reaction }, group = "K25_ref" }
+  for k, v in pairs(extra or {}) do t[k] = v end
+  add(t)
+end
+
+lk("H2O(l) = H^+ + OH^-", nil, { note = "HKF OH^- (SH88) with the built-in NBS dfG(H2O) (-237.129 kJ/mol); SH88's own -56687 cal/mol gives 13.995" })
+lk("CO2(aq) + H2O(l) = HCO3^- + H^+")
+lk("CO2(g) = CO2(aq)", nil, { tolclass = "K_high", value_adjust = -log10(1.01325),
+  note = "the published value refers to 1 atm CO2(g); converted to phlox's 1 bar gas standard state (-0.0057)" })
+lk("H2S(aq) = HS^- + H^+")
+lk("NH4^+ = NH3(aq) + H^+")
+lk("H3PO4(aq) = H2PO4^- + H^+", nil, { same = true })
+lk("HPO4^2- = PO4^3- + H^+", nil, { same = true })
+lk("HClO(aq) = ClO^- + H^+", nil, { note = "file: Morris 1966 pKa 7.537" })
+lk("HNO2(aq) = NO2^- + H^+", nil, { note = "file: NBS-derived 3.224; literature spread 3.15-3.35 (row note)" })
+lk("Fe^3+ + H2O(l) = FeOH^2+ + H^+", nil, { same = true })
+lk("Fe^3+ + 2 H2O(l) = Fe(OH)2^+ + 2 H^+", nil, { same = true })
+lk("2 Fe^3+ + 2 H2O(l) = Fe2(OH)2^4+ + 2 H^+", nil, { same = true })
+lk("Fe^2+ + H2O(l) = FeOH^+ + H^+", nil, { same = true })
+lk("Cu^2+ + H2O(l) = CuOH^+ + H^+", nil, { same = true })
+lk("2 Cu^2+ + 2 H2O(l) = Cu2(OH)2^2+ + 2 H^+", nil, { same = true })
+lk("Al^3+ + H2O(l) = AlOH^2+ + H^+", nil, { same = true })
+lk("Al^3+ + 4 H2O(l) = Al(OH)4^- + 4 H^+", nil, { known = { diff = -0.09, margin = 0.02,
+  why = "file: Baes and Mesmer 1976 -23.0 (recalled; the row's note gives the same), kept with the other Baes and Mesmer Al constants; the row is Brown and Ekberg 2016, -22.91 +- 0.10. The difference lies inside the row's stated uncertainty" } })
+lk("Pb^2+ + H2O(l) = PbOH^+ + H^+", nil, { same = true })
+lk("Co^2+ + H2O(l) = CoOH^+ + H^+", nil, { same = true })
+lk("Mg^2+ + H2O(l) = MgOH^+ + H^+", nil, { same = true })
+lk("Ca^2+ + H2O(l) = CaOH^+ + H^+", nil, { same = true })
+lk("Fe(OH)3(am) + 3 H^+ = Fe^3+ + 3 H2O(l)", "Fe(OH)3(s,amorphous/ferrihydrite) + 3 H^+ = Fe^3+ + 3 H2O(l)", { same = true })
+lk("Fe(OH)2(s) = Fe^2+ + 2 OH^-", nil, { known = { diff = 1.014, margin = 0.02,
+  why = "Harris/Smith and Martell -15.1; the file pairs Shock et al. 1997 Fe^2+ with NBS 1982 Fe(OH)2 and gives -14.11; NBS alone gives -16.31: the two tables bracket the measured value (12.6 kJ/mol spread in dfG(Fe^2+)). Same finding as docs/data/transition-metals.md" } })
+lk("CuO(s,tenorite) + 2 H^+ = Cu^2+ + H2O(l)", nil, { same = true })
+lk("Ni(OH)2(s) = Ni^2+ + 2 OH^-")
+lk("Ni(OH)2(s) + 2 H^+ = Ni^2+ + 2 H2O(l)", "beta-Ni(OH)2(cr) + 2 H^+ = Ni^2+ + 2 H2O(l)", { known = { diff = 1.059, margin = 0.02,
+  why = "ORNL solubility study of crystalline beta-Ni(OH)2: 11.67; the file's NBS 1982 Ni(OH)2 (not the well-crystallised beta phase) gives 12.73; NEA-TDB selects about 11.0 (recalled). Not resolved; see docs/data/transition-metals.md" } })
+lk("Mg(OH)2(s,brucite) = Mg^2+ + 2 OH^-", nil, { known = { diff = -0.225, margin = 0.02,
+  why = "Harris/Smith and Martell -11.15; SH88 dfG(Mg^2+) (file) is 0.8 kJ/mol above NBS and 1.4 kJ/mol above CODATA: CODATA Mg^2+ with NBS brucite gives -11.15 exactly. Same finding as docs/data/other-metals.md" } })
+lk("Mn(OH)2(am) = Mn^2+ + 2 OH^-", "Mn(OH)2(s) = Mn^2+ + 2 OH^-")
+lk("CaCO3(s,calcite) = Ca^2+ + CO3^2-", nil, { ref = { file = LK, key = "CaCO3(s,calcite) = Ca^2+ + CO3^2-", source_has = "Plummer" }, same = true })
+lk("CaCO3(s,calcite) = Ca^2+ + CO3^2-", nil, { ref = { file = LK, key = "CaCO3(s,calcite) = Ca^2+ + CO3^2-", source_has = "Harris" },
+  note = "older Smith and Martell value; the row itself says prefer Plummer and Busenberg" })
+lk("CaSO4*2H2O(s,gypsum) = Ca^2+ + SO4^2- + 2 H2O(l)", "CaSO4.2H2O(s,gypsum) = Ca^2+ + SO4^2- + 2 H2O(l)", { note = "NBS gypsum with SH88 Ca^2+ and SO4^2-" })
+lk("AgCl(s,chlorargyrite) = Ag^+ + Cl^-", "AgCl(s) = Ag^+ + Cl^-")
+lk("FeCO3(s,siderite) = Fe^2+ + CO3^2-", nil, { known = { diff = -0.21, margin = 0.02,
+  why = "file: -10.89 of Nordstrom et al. 1990 after Bruno et al. 1992; the row is the Smith and Martell value -10.68 (Harris App. F); precipitated siderite gives about -10.45. Same finding as docs/data/ligands.md" } })
+lk("ZnCO3(s,smithsonite) = Zn^2+ + CO3^2-")
+lk("Ca^2+ + CO3^2- = CaCO3(aq)", nil, { same = true })
+lk("Fe^3+ + Cl^- = FeCl^2+", nil, { same = true })
+lk("Zn^2+ + Cl^- = ZnCl^+", nil, { same = true })
+lk("Cu^+ + 2 Cl^- = CuCl2^-", nil, { same = true })
+lk("Cu^+ + 3 Cl^- = CuCl3^2-", nil, { same = true })
+lk("Ag^+ + 2 Cl^- = AgCl2^-", nil, { note = "file: the compiled Smith and Martell value 5.27" })
+lk("Zn^2+ + 4 NH3(aq) = Zn(NH3)4^2+", nil, { same = true, note = "Bjerrum's constants are for 2 mol/L NH4NO3 and 30 C, not I = 0 and 25 C" })
+lk("Ni^2+ + 6 NH3(aq) = Ni(NH3)6^2+", nil, { same = true, note = "Bjerrum 1941 conditions, as above" })
+lk("Ag^+ + 2 NH3(aq) = Ag(NH3)2^+", nil, { note = "file: Bjerrum 1941 (2 mol/L NH4NO3, 30 C); row: OpenStax App. K, 2 significant figures" })
+
+-- 4. log K at 25 C, further published values (recalled) -------------------
+local function rk(reaction, value, source, confidence, extra)
+  local t = { kind = "logK", reaction = reaction, value = value, source = source, confidence = confidence, group = "K25_rec" }
+  for k, v in pairs(extra or {}) do t[k] = v end
+  add(t)
+end
+
+rk("HCO3^- = CO3^2- + H^+", -10.329, PB82_K2, "high")
+rk("HSO4^- = SO4^2- + H^+", -1.988, N90, "high")
+rk("H2PO4^- = HPO4^2- + H^+", -7.198, SM, "high", { note = "HKF H2PO4^- and HPO4^2- (estimate path) of the file" })
+rk("O2(g) = O2(aq)", -2.898, "from memory of the oxygen solubility literature (Henry constant 1.26e-3 mol/(kg atm) at 25 C), converted to 1 bar", "medium")
+rk("H2S(g) = H2S(aq)", -0.99, "from memory of the H2S solubility literature (Henry constant about 0.10 mol/(kg bar) at 25 C)", "medium")
+rk("NH3(g) = NH3(aq)", 1.77, "from memory of the ammonia solubility literature (Henry constant about 59 mol/(kg bar) at 25 C)", "medium")
+rk("CaSO4(s,anhydrite) = Ca^2+ + SO4^2-", -4.36, N90, "medium")
+rk("PbSO4(s,anglesite) = Pb^2+ + SO4^2-", -7.79, N90C, "medium")
+rk("NaCl(s,halite) = Na^+ + Cl^-", 1.570, N90C, "medium")
+rk("KCl(s,sylvite) = K^+ + Cl^-", 0.900, N90C, "medium")
+rk("Na2SO4(s,thenardite) = 2 Na^+ + SO4^2-", -0.179, N90C, "medium")
+rk("Na2SO4*10H2O(s,mirabilite) = 2 Na^+ + SO4^2- + 10 H2O(l)", -1.114, N90C, "medium")
+rk("MgSO4*7H2O(s,epsomite) = Mg^2+ + SO4^2- + 7 H2O(l)", -2.14, N90C, "medium")
+rk("CuSO4*5H2O(s,chalcanthite) = Cu^2+ + SO4^2- + 5 H2O(l)", -2.64, N90C, "medium")
+rk("ZnSO4*7H2O(s,goslarite) = Zn^2+ + SO4^2- + 7 H2O(l)", -1.96, N90C, "medium")
+rk("Ag2SO4(s) = 2 Ag^+ + SO4^2-", -4.92, N90C, "medium")
+rk("MgCO3(s,magnesite) = Mg^2+ + CO3^2-", -8.03, N90C, "medium", { known = { diff = -0.294, margin = 0.02,
+  why = "file: Robie and Hemingway 1995 magnesite (-1029.48 kJ/mol) with SH88 Mg^2+ gives -8.32; with NBS ions -8.21, with CODATA ions -8.10 (file note); the literature -8.0 to -8.1. The shift is the SH88 dfG(Mg^2+), as for brucite and Mg^2+/Mg" } })
+rk("MnCO3(s,rhodochrosite) = Mn^2+ + CO3^2-", -11.13, N90, "medium", { known = { diff = 0.51, margin = 0.02,
+  why = "file: NBS 1982 rhodochrosite and Mn^2+ give -10.62; Nordstrom et al. 1990 list -11.13; the literature spreads -10.4 to -11.13 (file note). Same finding as docs/data/ligands.md" } })
+rk("PbCO3(s,cerussite) = Pb^2+ + CO3^2-", -13.13, "from memory of the solubility literature on cerussite (about -13.13)", "medium", { known = { diff = 0.326, margin = 0.02,
+  why = "file: NBS 1982 cerussite and Pb^2+ give -12.80 (-12.83 with NBS CO3^2-); measured about -13.13 (recalled). Same finding as docs/data/ligands.md" } })
+rk("CuCl(s,nantokite) = Cu^+ + Cl^-", -6.76, "from memory of CRC Handbook of Chemistry and Physics, solubility products (Ksp 1.72e-7)", "medium")
+rk("PbCl2(s,cotunnite) = Pb^2+ + 2 Cl^-", -4.78, N90C, "medium")
+rk("Ag2O(s) + 2 H^+ = 2 Ag^+ + H2O(l)", 12.58, BM76, "medium")
+rk("Cd(OH)2(s) + 2 H^+ = Cd^2+ + 2 H2O(l)", 13.65, BM76, "medium")
+rk("Mg(OH)2(s,brucite) + 2 H^+ = Mg^2+ + 2 H2O(l)", 16.84, BM76 .. " (as quoted in the note of log_k_25C.csv)", "medium", { known = { diff = -0.244, margin = 0.02,
+  why = "the SH88 dfG(Mg^2+) again (see the brucite Ksp row); NBS dfG give 16.74 (reference note)" } })
+rk("Ca(OH)2(s,portlandite) + 2 H^+ = Ca^2+ + 2 H2O(l)", 22.8, BM76, "medium", { known = { diff = -0.278, margin = 0.02,
+  why = "file: SH88 Ca^2+ (close to CODATA) with NBS portlandite gives 22.52; NBS Ca^2+ would give 22.66; Baes and Mesmer 22.8 (recalled). Same finding as docs/data/other-metals.md" } })
+rk("Al(OH)3(s,gibbsite) + 3 H^+ = Al^3+ + 3 H2O(l)", 8.11, N90, "medium", { known = { diff = 0.298, margin = 0.02,
+  why = "file: CODATA Al^3+ with Robie and Hemingway gibbsite gives 8.41; Nordstrom et al. 1990 8.11, Palmer and Wesolowski 1992 7.74 (recalled); NBS Al^3+ would give 7.27. Same finding as docs/data/other-metals.md" } })
+
+-- 5. temperatures other than 25 C ------------------------------------------
+-- pKw along saturation: phlox's HKF OH^- against IAPWS R11-07 (water.csv,
+-- computed there with python3-iapws).
+for _, t in ipairs({ 0.01, 50, 100, 150, 200, 250, 300 }) do
+  add({ kind = "logK", reaction = "H2O(l) = H^+ + OH^-", T_C = t, group = "T_water", tolclass = "pKw_T",
+        water_row = { t_C = t, group = "saturation_liquid_computed" },
+        note = "P = 1 bar to 100 C, saturation pressure above" })
+end
+-- phlox.water's own R11-07 against the same rows (the reference the row
+-- above is held against must itself be right).
+for _, t in ipairs({ 100, 200, 300 }) do
+  add({ kind = "pKw", reaction = "pKw from phlox.water (IAPWS R11-07)", T_C = t, group = "T_water", tolclass = "water_same",
+        water_row = { t_C = t, group = "saturation_liquid_computed" } })
+end
+-- Carbonate constants: Plummer and Busenberg 1982 equations at 100-250 C.
+-- K2 above 100 C: the SH88 HKF sets of HCO3^- and CO3^2- (C.lua) give
+-- dCp = -247 J/(mol K) at 25 C (with IAPWS water) against -290 from the
+-- Plummer and Busenberg equation, and the gap in log K grows with T.  An
+-- independent evaluation of the same HKF equations (Python, python3-iapws
+-- density and dielectric constant, no g-function) gives -10.203, -10.484
+-- and -10.941 at 150, 200 and 250 C: phlox's code reproduces the
+-- parameters (the rest is the g-function), so the difference lies in the
+-- recalled CO3^2- set (c2 follows the SH88 estimation correlation, so its
+-- Cp(T) is an estimate) or in the dielectric model the parameters were
+-- regressed with.  Not resolved; documented in docs/data-checks.md.
+local K2_WHY = "Plummer and Busenberg 1982 fit measured K2 to 250 C; phlox's SH88 HKF HCO3^-/CO3^2- sets (checked against an independent evaluation of the HKF equations) drift above it: dCp at 25 C -247 against -290 J/(mol K). Unresolved: recalled CO3^2- c1/c2 (estimated by SH88 from Cp at 25 C) or the dielectric model (IAPWS R8-97 instead of the one the parameters were regressed with)"
+local K2_KNOWN = {
+  [150] = { diff = 0.185, margin = 0.02, why = K2_WHY },
+  [200] = { diff = 0.307, margin = 0.02, why = K2_WHY },
+  [250] = { diff = 0.399, margin = 0.02, why = K2_WHY },
+}
+for _, t in ipairs({ 100, 150, 200, 250 }) do
+  add({ kind = "logK", reaction = "CO2(aq) + H2O(l) = HCO3^- + H^+", T_C = t, group = "T_carb", tolclass = "PB82_T",
+        value_fn = function(T) return PB.K1(T) end, source = PB82, confidence = "high" })
+  add({ kind = "logK", reaction = "HCO3^- = CO3^2- + H^+", T_C = t, group = "T_carb", tolclass = "PB82_T",
+        value_fn = function(T) return PB.K2(T) end, source = PB82_K2, confidence = "high",
+        known = K2_KNOWN[t] })
+  add({ kind = "logK", reaction = "CO2(g) = CO2(aq)", T_C = t, group = "T_carb", tolclass = "PB82_T",
+        value_fn = function(T) return PB.KH(T) end, source = PB82 .. "; 1 atm converted to 1 bar",
+        confidence = "high", note = "phlox: CO2(aq) at the saturation pressure, CO2(g) ideal at 1 bar" })
+end
+-- Silver chloride electrode and ammonium ion away from 25 C.
+add({ kind = "E0", reaction = "AgCl(s,chlorargyrite) + e- = Ag(s) + Cl^-", T_C = 0, group = "T_other", tolclass = "BB54_T",
+      value = 0.23655, source = "from memory of Bates and Bower 1954 (J. Res. NBS 53, 283)", confidence = "high" })
+add({ kind = "E0", reaction = "AgCl(s,chlorargyrite) + e- = Ag(s) + Cl^-", T_C = 50, group = "T_other", tolclass = "BB54_T",
+      value = 0.20449, source = "from memory of Bates and Bower 1954 (J. Res. NBS 53, 283)", confidence = "high" })
+for _, t in ipairs({ 0.01, 50 }) do
+  add({ kind = "logK", reaction = "NH4^+ = NH3(aq) + H^+", T_C = t, group = "T_other", tolclass = "BP49_T",
+        value_fn = bp49_logK, confidence = "high",
+        source = "from memory of Bates and Pinching 1949 (J. Res. NBS 42, 419): pKa = 2835.76/T - 0.6322 + 0.001225 T, 0-50 C" })
+end
+
+M.checks = C
+
+M.GROUPS = {
+  { id = "E25_ref", title = "Standard potentials at 25 C: reference table rows (standard_potentials.csv)" },
+  { id = "E25_rec", title = "Standard potentials at 25 C: further handbook couples (recalled)" },
+  { id = "K25_ref", title = "log K at 25 C: reference table rows (log_k_25C.csv)" },
+  { id = "K25_rec", title = "log K at 25 C: further published constants (recalled)" },
+  { id = "T_water", title = "Water ionisation along saturation, 0-300 C (IAPWS R11-07)" },
+  { id = "T_carb", title = "Carbonate constants at 100-250 C (Plummer and Busenberg 1982)" },
+  { id = "T_other", title = "Other temperatures: AgCl/Ag electrode and NH4+ (0-50 C)" },
+}
+
+-- ---------------------------------------------------------------- helpers
+--- Parse a CSV file (RFC 4180 quoting) into a list of rows keyed by header.
+function M.read_csv(path)
+  local f = assert(io.open(path, "rb"))
+  local text = f:read("a")
+  f:close()
+  local rows, header, fields, field = {}, nil, {}, {}
+  local i, n, inq = 1, #text, false
+  local function end_field() fields[#fields + 1] = table.concat(field); field = {} end
+  local function end_row()
+    end_field()
+    if not header then header = fields
+    elseif #fields > 1 or fields[1] ~= "" then
+      local r = {}
+      for k, h in ipairs(header) do r[h] = fields[k] end
+      rows[#rows + 1] = r
+    end
+    fields = {}
+  end
+  while i <= n do
+    local c = text:sub(i, i)
+    if inq then
+      if c == '"' then
+        if text:sub(i + 1, i + 1) == '"' then field[#field + 1] = '"'; i = i + 1 else inq = false end
+      else field[#field + 1] = c end
+    elseif c == '"' then inq = true
+    elseif c == "," then end_field()
+    elseif c == "\n" then end_row()
+    elseif c ~= "\r" then field[#field + 1] = c end
+    i = i + 1
+  end
+  if #field > 0 or #fields > 0 then end_row() end
+  return rows
+end
+
+function M.reference_dir(root)
+  return root .. "/../shared/reference"
+end
+
+-- Elements a reaction needs: every element symbol in the text except H, O
+-- (state markers such as "(s,rutile)" are lower case and never match).
+local function elements_of(text)
+  local seen, list = {}, {}
+  for sym in text:gmatch("%u%l?") do
+    if sym ~= "H" and sym ~= "O" and not seen[sym] then seen[sym] = true; list[#list + 1] = sym end
+  end
+  table.sort(list)
+  return list
+end
+M.elements_of = elements_of
+
+local function find_row(rows, keycol, key, source_has)
+  local found
+  for _, r in ipairs(rows) do
+    if r[keycol] == key and (not source_has or (r.source or ""):find(source_has, 1, true)) then
+      if found then error("reference: more than one row for " .. key .. (source_has and (" / " .. source_has) or "")) end
+      found = r
+    end
+  end
+  return found
+end
+
+--- Evaluate every check.  Returns the results list and a summary table
+-- { total, pass, known, fail, by_group = {id = {total, pass, known, fail}} }.
+function M.run(phlox, refdir, opts)
+  opts = opts or {}
+  local csv = {
+    [SP] = M.read_csv(refdir .. "/" .. SP),
+    [LK] = M.read_csv(refdir .. "/" .. LK),
+  }
+  local water = M.read_csv(refdir .. "/water.csv")
+  local libs = {}
+  local function library(els)
+    local key = table.concat(els, ",")
+    if not libs[key] then
+      local spec = { user = opts.user }
+      for i, e in ipairs(els) do spec[i] = e end
+      libs[key] = phlox.library(spec)
+    end
+    return libs[key]
+  end
+  local results = {}
+  local summary = { total = 0, pass = 0, known = 0, fail = 0, by_group = {} }
+  for _, c in ipairs(M.checks) do
+   if not opts.filter or opts.filter(c) then
+    local T_C = c.T_C or 25
+    local T = T_C + T0C
+    local r = { check = c, reaction = c.reaction, kind = c.kind, T_C = T_C, group = c.group,
+                same = c.same or false, note = c.note, known = c.known }
+    -- the published value
+    local published, source, confidence
+    if c.ref then
+      local keycol = c.ref.file == SP and "couple" or "reaction"
+      local row = find_row(csv[c.ref.file], keycol, c.ref.key, c.ref.source_has)
+      if not row then error("reference row not found in " .. c.ref.file .. ": " .. c.ref.key) end
+      published = tonumber(row[c.ref.file == SP and "E0_V_SHE_25C" or "log10_K_25C"])
+      -- one reference row names a course handout by its numbering; keep
+      -- the institution and course number only
+      source = row.source:gsub("NPTEL course (%d+) %a+ %d+ %(IIT Kanpur%) corrosion notes",
+                               "IIT Kanpur corrosion course notes (NPTEL %1)") .. " [" .. c.ref.file .. "]"
+      confidence = row.confidence
+      r.ref_key = c.ref.key ~= c.reaction and c.ref.key or nil
+    elseif c.water_row then
+      for _, w in ipairs(water) do
+        if w.group == c.water_row.group and w.quantity == "pKw" and math.abs(tonumber(w.t_C) - c.water_row.t_C) < 1e-9 then
+          published = -tonumber(w.value)
+          source = "IAPWS R11-07 (Bandura and Lvov 2006) at IAPWS-95 density, computed with python3-iapws [water.csv]"
+          confidence = w.confidence
+        end
+      end
+      if not published then error("water.csv: no pKw row at " .. c.water_row.t_C .. " C") end
+      if c.kind == "pKw" then published = -published end
+    elseif c.value_fn then
+      published = c.value_fn(T)
+      source, confidence = c.source, c.confidence
+    else
+      published, source, confidence = c.value, c.source, c.confidence
+    end
+    if c.value_adjust then published = published + c.value_adjust end
+    r.published, r.source, r.confidence = published, source, confidence
+    local tolclass = c.tolclass or (c.same and (c.kind == "E0" and "E_same" or "K_same")) or class_of(c.kind, confidence)
+    r.tolclass = tolclass
+    r.tol = assert(M.TOL[tolclass], tolclass).tol
+    -- the computed value, through phlox's loader and thermo models
+    local ok, val = pcall(function()
+      if c.kind == "pKw" then return phlox.water({ T_C = T_C }).pKw end
+      local lib = library(elements_of(c.reaction))
+      local rx = lib:reaction(c.reaction, { T_C = T_C })
+      if c.kind == "E0" then
+        if not rx.E then error("no potential for " .. c.reaction) end
+        return rx.E
+      end
+      return rx.logK
+    end)
+    if not ok or type(val) ~= "number" or val ~= val then
+      r.verdict = "ERROR"
+      r.error = tostring(val)
+    else
+      r.computed = val
+      r.diff = val - published
+      if c.known then
+        r.verdict = math.abs(r.diff - c.known.diff) <= c.known.margin and "known difference" or "FAIL (known difference changed)"
+      else
+        r.verdict = math.abs(r.diff) <= r.tol and "pass" or "FAIL"
+      end
+    end
+    results[#results + 1] = r
+    local g = summary.by_group[c.group] or { total = 0, pass = 0, known = 0, fail = 0 }
+    summary.by_group[c.group] = g
+    summary.total, g.total = summary.total + 1, g.total + 1
+    if r.verdict == "pass" then summary.pass, g.pass = summary.pass + 1, g.pass + 1
+    elseif r.verdict == "known difference" then summary.known, g.known = summary.known + 1, g.known + 1
+    else summary.fail, g.fail = summary.fail + 1, g.fail + 1 end
+   end
+  end
+  return results, summary
+end
+
+-- ---------------------------------------------------------------- document
+-- Short labels for the table's source column (full text in the notes).
+local SHORT = {
+  { "IAPWS R11-07", "IAPWS R11-07 (python3-iapws)" },
+  { "CRC Handbook", "CRC (Vanysek)" }, { "OpenStax", "OpenStax (CRC)" },
+  { "Pourbaix 1966", "Pourbaix 1966" }, { "Baes & Mesmer", "Baes & Mesmer 1976" },
+  { "Baes and Mesmer", "Baes & Mesmer 1976" }, { "Brown & Ekberg", "Brown & Ekberg 2016" },
+  { "Harris", "Harris (Smith & Martell)" }, { "Plummer", "Plummer & Busenberg 1982" },
+  { "Nordstrom", "Nordstrom et al. 1990" }, { "Smith & Martell", "Smith & Martell" },
+  { "Smith and Martell", "Smith & Martell" }, { "Bjerrum", "Bjerrum 1941" },
+  { "ORNL", "ORNL (beta-Ni(OH)2)" }, { "Morris", "Morris 1966" }, { "Bates & Pinching", "Bates & Pinching 1949" },
+  { "Bates and Pinching", "Bates & Pinching 1949" }, { "Bates and Bower", "Bates & Bower 1954" },
+  { "Wagman", "NBS 1982 (derived)" }, { "CODATA", "CODATA 1989 (derived)" },
+  { "IUPAC convention", "SHE (definition)" }, { "solubility literature", "solubility literature" },
+  { "definition of the standard hydrogen electrode", "SHE (definition)" },
+}
+local function short_source(s)
+  -- a row that names the column it took its value from
+  if s:find("Brown & Ekberg column", 1, true) then return "Brown & Ekberg 2016" end
+  local best, at
+  for _, p in ipairs(SHORT) do
+    local i = s:find(p[1], 1, true)
+    if i and (not at or i < at) then best, at = p[2], i end
+  end
+  best = best or s:sub(1, 30)
+  if s:find("from memory", 1, true) and not best:find("derived") then best = best .. ", recalled" end
+  return best
+end
+M.short_source = short_source
+
+local function fmt(kind, x)
+  if x == nil then return "-" end
+  if kind == "E0" then return ("%.4f"):format(x) end
+  return ("%.3f"):format(x)
+end
+local function fmt_diff(kind, x)
+  if x == nil then return "-" end
+  if kind == "E0" then return ("%+.4f"):format(x) end
+  return ("%+.3f"):format(x)
+end
+local function esc(s) return (tostring(s):gsub("|", "\\|")) end
+
+--- The markdown text of docs/data-checks.md from run()'s results.
+function M.render(results, summary)
+  local out = {}
+  local function w(...) out[#out + 1] = table.concat({ ... }) end
+  w("# Checks of the standard library against published values")
+  w("")
+  w("<!-- Generated by `phlox docs/tools/data_checks.lua` (check definitions:")
+  w("     docs/tools/checks_def.lua); do not edit by hand. The test")
+  w("     tests/scripts/test_stdlib_values.lua runs the same checks. -->")
+  w("")
+  w("Each row computes a standard potential E (V vs SHE) or a log K with phlox's own")
+  w("pipeline: `phlox.library{...}` loads the element files through the sandboxed")
+  w("loader, and `lib:reaction(text, {T_C = ...})` evaluates the species' models")
+  w("(cp, hkf, logk) at the temperature (1 bar to 100 C, the saturation pressure")
+  w("above). The published value is read at run time from the project's reference")
+  w("tables (`shared/reference/*.csv`), evaluated from a published equation, or")
+  w("recalled from a handbook (the source then says \"from memory of\"; such values")
+  w("can be wrong, and the notes say so where it matters).")
+  w("")
+  w("Verdicts:")
+  w("")
+  w("- **pass**: |computed - published| <= tolerance.")
+  w("- **known difference**: the check fails its tolerance; the disagreement was")
+  w("  investigated and both sources are named in the notes. The row still fails if")
+  w("  the difference moves by more than its margin from the value recorded when it")
+  w("  was investigated (so a change in the data or the code shows up).")
+  w("- **FAIL** / **ERROR**: a regression to investigate.")
+  w("")
+  w("A \"same source\" row compares with the very publication the element file took")
+  w("its number from. It cannot test the number, only the chain from the file to the")
+  w("result (units, reaction parsing, the model at 25 C); its tolerance is the")
+  w("printed precision. All other rows are independent of the file's source.")
+  w("")
+  w("A thermodynamic diagram says what can form, not how fast. These checks test")
+  w("equilibrium constants, not corrosion rates.")
+  w("")
+  w("## Summary")
+  w("")
+  local n_same, n25E, n25K = 0, 0, 0
+  for _, r in ipairs(results) do
+    if r.same then n_same = n_same + 1 end
+    if r.T_C == 25 and r.kind == "E0" then n25E = n25E + 1 end
+    if r.T_C == 25 and r.kind == "logK" then n25K = n25K + 1 end
+  end
+  w(("%d checks: %d pass, %d known differences, %d fail. %d standard potentials and %d log K at 25 C; %d rows at other temperatures; %d same-source rows."):format(
+    summary.total, summary.pass, summary.known, summary.fail, n25E, n25K,
+    summary.total - n25E - n25K, n_same))
+  w("")
+  w("| group | checks | pass | known difference | fail |")
+  w("|---|---|---|---|---|")
+  for _, g in ipairs(M.GROUPS) do
+    local s = summary.by_group[g.id]
+    if s then w(("| %s | %d | %d | %d | %d |"):format(g.title, s.total, s.pass, s.known, s.fail)) end
+  end
+  w("")
+  w("## Disagreements kept (known differences)")
+  w("")
+  w("Each was investigated; the element file keeps its value for the reason given,")
+  w("and both sources are named. Row numbers refer to the tables below.")
+  w("")
+  do
+    local k = 0
+    for _, g in ipairs(M.GROUPS) do
+      for _, r in ipairs(results) do
+        if r.group == g.id then
+          k = k + 1
+          if r.known then
+            w(("- #%d `%s`%s: phlox %s, published %s (%s), difference %s. %s."):format(k, r.reaction,
+              r.T_C ~= 25 and (" at " .. ("%g"):format(r.T_C) .. " C") or "",
+              fmt(r.kind, r.computed), fmt(r.kind, r.published), short_source(r.source),
+              fmt_diff(r.kind, r.diff), r.known.why))
+          end
+        end
+      end
+    end
+  end
+  w("")
+  w("## Tolerances")
+  w("")
+  w("Chosen from the confidence the source states (the reference tables' confidence")
+  w("column, or the confidence given with a recalled value), before comparing.")
+  w("")
+  w("| class | tolerance | reason |")
+  w("|---|---|---|")
+  local classes = {}
+  for k in pairs(M.TOL) do classes[#classes + 1] = k end
+  table.sort(classes)
+  for _, k in ipairs(classes) do
+    local unit = (k:sub(1, 2) == "E_" or k == "BB54_T") and " V" or ""
+    w(("| %s | %s%s | %s |"):format(k, tostring(M.TOL[k].tol), unit, esc(M.TOL[k].why)))
+  end
+  w("")
+  local notes = {}
+  local num = 0
+  for _, g in ipairs(M.GROUPS) do
+    w("## ", g.title)
+    w("")
+    w("| # | reaction | T (C) | computed | published | difference | tolerance | source | verdict |")
+    w("|---|---|---|---|---|---|---|---|---|")
+    for _, r in ipairs(results) do
+      if r.group == g.id then
+        num = num + 1
+        local tol = r.known and ("known %s +- %s"):format(fmt_diff(r.kind, r.known.diff), tostring(r.known.margin))
+                    or ("%s (%s)"):format(tostring(r.tol), r.tolclass)
+        local src = short_source(r.source) .. (r.same and "; same source" or "")
+        local verdict = r.verdict
+        if verdict ~= "pass" then verdict = "**" .. verdict .. "**" end
+        local rx = "`" .. r.reaction .. "`"
+        if r.kind == "pKw" then rx = "pKw, `phlox.water` (R11-07)" end
+        local unit = r.kind == "E0" and " V" or ""
+        w(("| %d | %s | %g | %s%s | %s | %s | %s | %s | %s |"):format(num, rx, r.T_C,
+          fmt(r.kind, r.computed), unit, fmt(r.kind, r.published), fmt_diff(r.kind, r.diff), tol, esc(src), verdict))
+        local parts = {}
+        if r.ref_key then parts[#parts + 1] = "reference row: `" .. r.ref_key .. "`." end
+        if r.note then parts[#parts + 1] = r.note .. "." end
+        if r.known then parts[#parts + 1] = "**Known difference:** " .. r.known.why .. "." end
+        if r.error then parts[#parts + 1] = "**Error:** " .. r.error end
+        parts[#parts + 1] = "Source: " .. r.source .. (r.confidence and (" (confidence " .. r.confidence .. ")") or "") .. "."
+        notes[#notes + 1] = ("%d. `%s`%s: %s"):format(num, r.kind == "pKw" and "pKw" or r.reaction,
+          r.T_C ~= 25 and (" at " .. ("%g"):format(r.T_C) .. " C") or "", (table.concat(parts, " "):gsub("%.%.", ".")))
+      end
+    end
+    w("")
+  end
+  w("## Not checked")
+  w("")
+  w("- High-temperature hydrolysis constants (Baes and Mesmer 1976 give some to")
+  w("  300 C): not recalled with enough confidence to serve as a check. Most")
+  w("  hydrolysis and complex records carry no dH and hold their 25 C constant at")
+  w("  every temperature, so such a check would test the absence of data.")
+  w("- Reference rows whose species are not in the library: NiO2, Cr(OH)3,")
+  w("  Co(OH)3, Hg, Au, Ti2+ and Mo3+ couples.")
+  w("- S^2- based couples other than the one row above (pK2 of H2S is disputed).")
+  w("")
+  w("## Notes and sources, row by row")
+  w("")
+  for _, n in ipairs(notes) do w(n) end
+  w("")
+  return table.concat(out, "\n")
+end
+
+return M

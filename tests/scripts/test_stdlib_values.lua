@@ -1,0 +1,87 @@
+-- test_stdlib_values.lua: the standard library against published values,
+-- through phlox's own pipeline (phlox.library -> sandboxed loader;
+-- lib:reaction -> thermo models).  The checks (standard potentials and
+-- log K at 25 C against ../shared/reference/standard_potentials.csv and
+-- log_k_25C.csv and recalled handbook values; pKw along saturation against
+-- IAPWS R11-07; carbonate constants at 100-250 C against Plummer and
+-- Busenberg 1982; AgCl/Ag and NH4+ at 0-50 C) are defined once, with their
+-- sources, tolerances and documented disagreements, in
+-- docs/tools/checks_def.lua; docs/data-checks.md is generated from the same
+-- definitions (phlox docs/tools/data_checks.lua).
+local src = assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR not set")
+local phlox = require "phlox"
+local defs = dofile(src .. "/docs/tools/checks_def.lua")
+local refdir = defs.reference_dir(src)
+
+local results, summary = defs.run(phlox, refdir)
+
+local fails = {}
+local nE, nK, nE_ind, nK_ind, nhot = 0, 0, 0, 0, 0
+for i, r in ipairs(results) do
+  print(("%3d %-4s %6g C  %-64s %10s %10s %9s  %s"):format(i, r.kind, r.T_C, r.reaction:sub(1, 64),
+    r.computed and ("%.4f"):format(r.computed) or "-", ("%.4f"):format(r.published),
+    r.diff and ("%+.4f"):format(r.diff) or "-", r.verdict))
+  if r.verdict ~= "pass" and r.verdict ~= "known difference" then fails[#fails + 1] = r end
+  if r.T_C == 25 and r.kind == "E0" then
+    nE = nE + 1
+    if not r.same then nE_ind = nE_ind + 1 end
+  elseif r.T_C == 25 and r.kind == "logK" then
+    nK = nK + 1
+    if not r.same then nK_ind = nK_ind + 1 end
+  elseif r.T_C >= 100 then
+    nhot = nhot + 1
+  end
+end
+print(("%d checks: %d pass, %d known differences, %d fail"):format(summary.total, summary.pass, summary.known, summary.fail))
+print(("25 C: %d E (%d independent of the file's source), %d log K (%d independent); %d rows at 100-300 C"):format(nE, nE_ind, nK, nK_ind, nhot))
+
+for _, r in ipairs(fails) do
+  print(("FAILED: %s at %g C: computed %s, published %.4f (%s), tolerance %s; %s"):format(r.reaction, r.T_C,
+    tostring(r.computed), r.published, r.source, tostring(r.tol), r.error or r.verdict))
+end
+assert(#fails == 0, #fails .. " check(s) failed; see docs/data-checks.md for the documented differences")
+-- the brief: at least 30 couples and 30 reactions at 25 C, and high-temperature rows
+assert(nE_ind >= 30, "fewer than 30 independent E checks at 25 C: " .. nE_ind)
+assert(nK_ind >= 30, "fewer than 30 independent log K checks at 25 C: " .. nK_ind)
+assert(nhot >= 10, "fewer than 10 checks at 100-300 C: " .. nhot)
+
+-- The checks can fail.  A user override shifts log K of Cu^2+ formation by
+-- +0.5 (E(Cu2+/Cu) by -14.8 mV): the Cu2+/Cu row (tolerance 10 mV) must fail.
+local tmp = os.tmpname() .. "-cu.lua"
+local f = assert(io.open(tmp, "wb"))
+f:write([[
+return { species = {
+  { formula = "Cu^2+", model = "logk", reaction = "Cu(s) + 2 H^+ = Cu^2+ + H2(g)",
+    logK = -11.473 + 0.5, dH = 64.77, source = "test mutation (not data)" },
+} }
+]])
+f:close()
+local mres = defs.run(phlox, refdir, {
+  user = { tmp },
+  filter = function(c) return c.reaction == "Cu^2+ + 2 e- = Cu(s)" and (c.T_C or 25) == 25 end,
+})
+os.remove(tmp)
+assert(#mres == 1, "mutation: expected one Cu2+/Cu row, got " .. #mres)
+assert(mres[1].verdict == "FAIL", ("mutation: Cu2+/Cu with log K + 0.5 gave %s (diff %+.4f)"):format(mres[1].verdict, mres[1].diff or 0))
+print(("mutation: Cu2+/Cu with log K + 0.5 -> %s (diff %+.4f V), as expected"):format(mres[1].verdict, mres[1].diff))
+
+-- A known difference that moves beyond its margin fails too: siderite's
+-- log Ksp shifted by +0.1 moves the documented -0.21 to -0.11.
+tmp = os.tmpname() .. "-sid.lua"
+f = assert(io.open(tmp, "wb"))
+f:write([[
+return { species = {
+  { formula = "FeCO3(s,siderite)", model = "logk", reaction = "FeCO3(s,siderite) = Fe^2+ + CO3^2-",
+    logK = -10.89 + 0.1, source = "test mutation (not data)" },
+} }
+]])
+f:close()
+mres = defs.run(phlox, refdir, {
+  user = { tmp },
+  filter = function(c) return c.reaction == "FeCO3(s,siderite) = Fe^2+ + CO3^2-" end,
+})
+os.remove(tmp)
+assert(#mres == 1 and mres[1].verdict == "FAIL (known difference changed)",
+  "mutation: siderite log K + 0.1 gave " .. tostring(mres[1] and mres[1].verdict))
+print(("mutation: siderite log Ksp + 0.1 -> %s (diff %+.3f), as expected"):format(mres[1].verdict, mres[1].diff))
+print("test_stdlib_values: all checks pass")
