@@ -280,7 +280,8 @@ local function rk(reaction, value, source, confidence, extra)
   add(t)
 end
 
-rk("HCO3^- = CO3^2- + H^+", -10.329, PB82_K2, "high")
+rk("HCO3^- = CO3^2- + H^+", -10.329, PB82_K2, "high",
+   { same = true, note = "C.lua defines CO3^2- by this very equation (it replaced the SH88 HKF set, which drifted above it at 150-250 C)" })
 rk("HSO4^- = SO4^2- + H^+", -1.988, N90, "high")
 rk("H2PO4^- = HPO4^2- + H^+", -7.198, SM, "high", { note = "HKF H2PO4^- and HPO4^2- (estimate path) of the file" })
 rk("O2(g) = O2(aq)", -2.898, "from memory of the oxygen solubility literature (Henry constant 1.26e-3 mol/(kg atm) at 25 C), converted to 1 bar", "medium")
@@ -328,28 +329,21 @@ for _, t in ipairs({ 100, 200, 300 }) do
         water_row = { t_C = t, group = "saturation_liquid_computed" } })
 end
 -- Carbonate constants: Plummer and Busenberg 1982 equations at 100-250 C.
--- K2 above 100 C: the SH88 HKF sets of HCO3^- and CO3^2- (C.lua) give
--- dCp = -247 J/(mol K) at 25 C (with IAPWS water) against -290 from the
--- Plummer and Busenberg equation, and the gap in log K grows with T.  An
--- independent evaluation of the same HKF equations (Python, python3-iapws
--- density and dielectric constant, no g-function) gives -10.203, -10.484
--- and -10.941 at 150, 200 and 250 C: phlox's code reproduces the
--- parameters (the rest is the g-function), so the difference lies in the
--- recalled CO3^2- set (c2 follows the SH88 estimation correlation, so its
--- Cp(T) is an estimate) or in the dielectric model the parameters were
--- regressed with.  Not resolved; documented in docs/data-checks.md.
-local K2_WHY = "Plummer and Busenberg 1982 fit measured K2 to 250 C; phlox's SH88 HKF HCO3^-/CO3^2- sets (checked against an independent evaluation of the HKF equations) drift above it: dCp at 25 C -247 against -290 J/(mol K). Unresolved: recalled CO3^2- c1/c2 (estimated by SH88 from Cp at 25 C) or the dielectric model (IAPWS R8-97 instead of the one the parameters were regressed with)"
-local K2_KNOWN = {
-  [150] = { diff = 0.185, margin = 0.02, why = K2_WHY },
-  [200] = { diff = 0.307, margin = 0.02, why = K2_WHY },
-  [250] = { diff = 0.399, margin = 0.02, why = K2_WHY },
-}
+-- K2 above 100 C: the SH88 HKF sets of HCO3^- and CO3^2- gave dCp = -247
+-- J/(mol K) at 25 C (with IAPWS water) against -290 from the Plummer and
+-- Busenberg equation; an independent evaluation of the same HKF equations
+-- (Python, python3-iapws) reproduced phlox's numbers, so the gap was in the
+-- recalled CO3^2- parameters or the dielectric model, not in the code.
+-- CO3^2- is now defined in C.lua by the Plummer and Busenberg K2 equation
+-- itself (the SH88 HKF set drifted 0.19/0.31/0.40 above it at 150/200/250 C:
+-- dCp at 25 C -247 against -290 J/(mol K)), so these rows check the chain
+-- from file to result only ("same source").
 for _, t in ipairs({ 100, 150, 200, 250 }) do
   add({ kind = "logK", reaction = "CO2(aq) + H2O(l) = HCO3^- + H^+", T_C = t, group = "T_carb", tolclass = "PB82_T",
         value_fn = function(T) return PB.K1(T) end, source = PB82, confidence = "high" })
   add({ kind = "logK", reaction = "HCO3^- = CO3^2- + H^+", T_C = t, group = "T_carb", tolclass = "PB82_T",
         value_fn = function(T) return PB.K2(T) end, source = PB82_K2, confidence = "high",
-        known = K2_KNOWN[t] })
+        same = true })
   add({ kind = "logK", reaction = "CO2(g) = CO2(aq)", T_C = t, group = "T_carb", tolclass = "PB82_T",
         value_fn = function(T) return PB.KH(T) end, source = PB82 .. "; 1 atm converted to 1 bar",
         confidence = "high", note = "phlox: CO2(aq) at the saturation pressure, CO2(g) ideal at 1 bar" })
