@@ -129,6 +129,15 @@ function diagrams.fractions(opts)
   if xkind == "log_a" and type(opts.ligand_species) ~= "string" then
     fail(where, "x = \"log_a\" needs ligand_species = \"Cl^-\" (a basis species)")
   end
+  local lig_el = opts.ligand
+  if xkind == "log_a" and not lig_el then
+    local rec = lib:species(opts.ligand_species)
+    if not rec then fail(where, "no species " .. opts.ligand_species .. " in the library") end
+    for e in pairs(rec.elements) do
+      if e ~= "H" and e ~= "O" then lig_el = e end
+    end
+    if not lig_el then fail(where, "ligand_species has no element other than H and O") end
+  end
   local total = opts.total or 1e-6
   if type(total) ~= "number" or not (total > 0) then fail(where, "total must be a positive number (mol/kg)") end
   local xs = range_points(opts, where, xkind == "pH" and { 0, 14 } or { -6, 0 })
@@ -150,8 +159,12 @@ function diagrams.fractions(opts)
       if xkind == "log_total" then
         s.totals[opts.ligand] = 10 ^ x
       else
+        -- the ligand element joins with its species as basis; the fixed
+        -- activity replaces its balance (the total given is a placeholder)
         s.fixed[opts.ligand_species] = x
-        if opts.ligand then s.totals[opts.ligand] = nil end
+        s.totals[lig_el] = s.totals[lig_el] or 1e-3
+        s.basis = copy(opts.basis)
+        s.basis[lig_el] = opts.ligand_species
       end
     end
     local r, err = phlox.speciate(s)
