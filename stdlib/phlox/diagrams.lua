@@ -352,6 +352,10 @@ function diagrams.series(opts)
   return maps
 end
 
+-- Default log a(ligand) window of the ligand maps: dilute to about the
+-- activity of a saturated salt solution (common practice, no source).
+local LOGA_RANGE = { -4, 1 }
+
 --- Predominance map on E (y) against log a(ligand) (x) at a fixed pH.
 --   diagrams.ligand_E { library = lib, element = "Zn", ligand = "Cl", pH = 5,
 --                       loga_range = {-4, 1}, E_range = {-1.5, 1.5}, ... }
@@ -360,6 +364,7 @@ function diagrams.ligand_E(opts)
   if type(opts.ligand) ~= "string" then fail("diagrams.ligand_E", "ligand (an element symbol) expected") end
   if type(opts.pH) ~= "number" then fail("diagrams.ligand_E", "a fixed pH is needed") end
   local o = copy(opts)
+  o.loga_range = o.loga_range or LOGA_RANGE
   o.axes = { "loga", "E" }
   local m = phlox.map(o)
   m.conditions.pH = opts.pH
@@ -374,6 +379,7 @@ function diagrams.pH_ligand(opts)
   if type(opts.ligand) ~= "string" then fail("diagrams.pH_ligand", "ligand (an element symbol) expected") end
   if type(opts.E) ~= "number" then fail("diagrams.pH_ligand", "a fixed E (V vs SHE) is needed") end
   local o = copy(opts)
+  o.loga_range = o.loga_range or LOGA_RANGE
   o.axes = { "pH", "loga" }
   local m = phlox.map(o)
   m.conditions.E_V = opts.E
