@@ -321,9 +321,10 @@ end
 -- and plot.overlay.
 --   diagrams.series { library = lib, element = "Zn", T_C = {25, 150, 300},
 --                     ... any other phlox.map option }
--- Each map gets label "150 °C"; at T other than 25 °C, a map whose species
--- keep their 25 °C log K (records without dH or logK_T) lists them in
--- map.constant_logk and in a stamp line.
+-- Each map gets label "150 °C".  At T other than 25 °C, a map lists the
+-- species that keep their 25 °C log K (records without dH or logK_T) in
+-- map.constant_logk; every map of the series names them in a stamp line
+-- (plot.grid and plot.overlay stamp the first map's lines).
 function diagrams.series(opts)
   local where = "diagrams.series"
   local lib = library_of(opts, where)
@@ -338,16 +339,22 @@ function diagrams.series(opts)
     local ok, m = pcall(phlox.map, o)
     if not ok then fail(where, ("at %g °C: %s"):format(tc, tostring(m))) end
     m.label = ("%g °C"):format(tc)
-    local stamp = held_stamp(lib, { opts.element, opts.ligand }, { tc })
-    if stamp then
+    if held_stamp(lib, { opts.element, opts.ligand }, { tc }) then
       m.constant_logk = diagrams.constant_logk(lib, opts.element, tc)
       if opts.ligand then
         for _, f in ipairs(diagrams.constant_logk(lib, opts.ligand, tc)) do m.constant_logk[#m.constant_logk + 1] = f end
       end
+    end
+    maps[i] = m
+  end
+  -- plot.grid and plot.overlay stamp the first map's lines: every map
+  -- carries the note for the whole series
+  local stamp = held_stamp(lib, { opts.element, opts.ligand }, temps)
+  if stamp then
+    for _, m in ipairs(maps) do
       m.stamp = m.stamp or {}
       m.stamp[#m.stamp + 1] = stamp[1]
     end
-    maps[i] = m
   end
   return maps
 end

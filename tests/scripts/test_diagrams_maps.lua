@@ -143,13 +143,14 @@ for i, m in ipairs(maps) do
   -- so 0.03 in pKw, 0.015 in neutral pH.
   close(m.neutral_pH, pKw_ref(tc) / 2, 0.015, ("neutral pH at %d C vs IAPWS pKw/2"):format(tc))
   if tc ~= 25 then
-    check(m.constant_logk and m.stamp, "species with log K held at 25 C are named at " .. tc .. " C")
+    check(m.constant_logk, "species with log K held at 25 C are listed at " .. tc .. " C")
     local named = table.concat(m.constant_logk, " ")
     check(named:find("Zn(OH)4^2-", 1, true), "Zn(OH)4^2- has no temperature data in Zn.lua: " .. named)
     check(not named:find("ZnOH^+", 1, true), "ZnOH+ has dH (van 't Hoff): " .. named)
   else
-    check(m.constant_logk == nil, "no note at 25 C")
+    check(m.constant_logk == nil, "nothing held at 25 C")
   end
+  check(m.stamp and m.stamp[1]:find("Zn(OH)4^2-", 1, true), "every map of the series carries the note (plot.grid stamps map 1)")
 end
 -- boundaries move with T: the Zn2+/Zn line follows E0(T) + (s(T)/2) log 1e-6
 for i, m in ipairs(maps) do
@@ -167,6 +168,7 @@ for _, f in ipairs { tmp .. "-grid.svg", tmp .. "-over.svg" } do
   local svg = h:read("a")
   h:close()
   check(svg:find("300 °C", 1, true), f .. " names 300 °C")
+  check(svg:find("log K held at 25 °C", 1, true), f .. " stamps the species without temperature data")
   os.remove(f)
 end
 os.remove(tmp)
