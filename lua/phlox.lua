@@ -286,4 +286,13 @@ function phlox.to_she(E_measured, electrode)
   return E_measured + e.offset
 end
 
+--- Diagrams on top of speciate and map (stdlib/phlox/diagrams.lua): which
+-- field a potential measured against a reference electrode falls in, and
+-- fraction and solubility curves and temperature series of maps.
+--   phlox.where { map = m, pH = 5, E = -0.80, reference = "SCE" }
+function phlox.where(opts) return require("phlox.diagrams").where(opts) end
+function phlox.fractions(opts) return require("phlox.diagrams").fractions(opts) end
+function phlox.solubility(opts) return require("phlox.diagrams").solubility(opts) end
+function phlox.series(opts) return require("phlox.diagrams").series(opts) end
+
 return phlox

@@ -1,0 +1,486 @@
+--- phlox.diagrams: the other diagrams practitioners draw, on top of
+-- phlox.speciate and phlox.map:
+--   fractions   share of an element among its species against pH, log total
+--               ligand or log a(ligand) (distribution curves)
+--   solubility  total dissolved element in equilibrium with its stable solid
+--               against pH, one curve per temperature
+--   series      exact E-pH maps at several temperatures (plot.grid, plot.overlay)
+--   ligand_E, pH_ligand
+--               predominance maps on E vs log a(ligand) and log a(ligand) vs pH
+--   where       which field a potential measured against a reference
+--               electrode falls in
+-- Curve results carry `series` ready for phlox.plot.curves and `axes` for its
+-- opts; diagrams.plot(result, opts) draws them.
+--
+-- A thermodynamic diagram says what can form, not how fast it forms (see
+-- phlox.caution).
+local phlox = require "phlox"
+local sweep = require "phlox.sweep"
+
+local diagrams = {}
+
+local T0C = 273.15 -- K at 0 C
+
+local function fail(where, msg) error(where .. ": " .. msg, 3) end
+
+local function library_of(opts, where)
+  if type(opts) ~= "table" then fail(where, "options table expected") end
+  if getmetatable(opts.library) ~= phlox.Library then fail(where, "library = phlox.library{...} expected") end
+  if type(opts.element) ~= "string" then fail(where, "element (a symbol) expected") end
+  return opts.library
+end
+
+local function range_points(opts, where, default)
+  local r = opts.range or default
+  if type(r) ~= "table" or type(r[1]) ~= "number" or type(r[2]) ~= "number" or not (r[1] < r[2]) then
+    fail(where, "range = {from, to} with from < to expected")
+  end
+  local n = opts.n or 121
+  if math.type(n) ~= "integer" or n < 2 then fail(where, "n must be an integer >= 2") end
+  return sweep.linear(r[1], r[2], n)
+end
+
+-- The options of phlox.speciate that pass through unchanged.
+local PASS = { "T", "T_C", "P", "E", "pe", "redox_gas", "redox_log_f", "fugacities", "basis",
+               "suppress", "exclude", "max_iter" }
+
+local function base_speciate(opts)
+  local s = { library = opts.library }
+  for _, k in ipairs(PASS) do s[k] = opts[k] end
+  -- Textbook distribution and solubility diagrams are drawn at infinite
+  -- dilution; a fixed pH imposes no charge balance, so an ionic strength
+  -- would only count the ions given (add counter-ions to `totals` and set
+  -- activity = "davies" or "bdot" when it matters).
+  s.activity = opts.activity or "ideal"
+  return s
+end
+
+local function copy(t)
+  local o = {}
+  for k, v in pairs(t or {}) do o[k] = v end
+  return o
+end
+
+local function T_C_of(opts)
+  if opts.T then return opts.T - T0C end
+  return opts.T_C or 25
+end
+
+-- Species of `element` whose record is a log K without temperature
+-- dependence (no dH, no logK_T): their log K stays at its 25 C value at T.
+function diagrams.constant_logk(lib, element, T_C)
+  local out = {}
+  for _, s in ipairs(lib:list(element)) do
+    if s.model == "logk" and s.reaction then
+      local ok1, a = pcall(lib.reaction, lib, s.reaction, { T_C = 25 })
+      local ok2, b = pcall(lib.reaction, lib, s.reaction, { T_C = T_C })
+      if ok1 and ok2 and math.abs(a.logK - b.logK) < 1e-12 then out[#out + 1] = s.formula end
+    end
+  end
+  table.sort(out)
+  return out
+end
+
+-- Stamp lines naming, for temperatures other than 25 C, the species whose
+-- log K stays at its 25 C value.
+local function held_stamp(lib, elements, temps)
+  local seen, list = {}, {}
+  for _, tc in ipairs(temps) do
+    if math.abs(tc - 25) > 1e-9 then
+      for _, e in ipairs(elements) do
+        for _, f in ipairs(diagrams.constant_logk(lib, e, tc)) do
+          if not seen[f] then seen[f] = true; list[#list + 1] = f end
+        end
+      end
+    end
+  end
+  if #list == 0 then return nil end
+  return { "log K held at 25 °C (no temperature data): " .. table.concat(list, ", ") }
+end
+
+--- Fraction (distribution) curves: the share of `element` among its
+-- species.
+--   diagrams.fractions { library = lib, element = "Zn", T_C = 25,
+--     x = "pH",            -- or "log_total" (of `ligand`) or "log_a" (of `ligand_species`)
+--     range = {2, 14}, n = 121,
+--     total = 1e-6,        -- mol/kg of the element
+--     pH = 6,              -- fixed pH when x is not pH
+--     ligand = "Cl", ligand_species = "Cl^-",
+--     totals = { Na = 0.1 },                  -- other elements, mol/kg
+--     solids = false,      -- true lets solids precipitate (their share counts)
+--     min_share = 0.01,    -- species never reaching this share are left out
+--     activity = "ideal",  -- or "davies", "bdot", "sit"
+--     E = ..., pe = ..., fixed = {...}, exclude = {...}, ... (as phlox.speciate) }
+-- Returns { x = {...}, series = { { species, label, x, y }, ... }, axes =
+-- { x = {...}, y = {...} }, omitted = { {species, max_share} }, failures =
+-- { {x, message} }, conditions, stats = { solves, seconds } }.  y is false
+-- at a point where the solver did not converge (plot.curves breaks the line
+-- there).
+function diagrams.fractions(opts)
+  local where = "diagrams.fractions"
+  local lib = library_of(opts, where)
+  local el = opts.element
+  local xkind = opts.x or "pH"
+  if xkind ~= "pH" and xkind ~= "log_total" and xkind ~= "log_a" then
+    fail(where, "x must be \"pH\", \"log_total\" or \"log_a\"")
+  end
+  if xkind ~= "pH" and type(opts.pH) ~= "number" then fail(where, "a fixed pH is needed when x is " .. xkind) end
+  if xkind == "log_total" and type(opts.ligand) ~= "string" then fail(where, "x = \"log_total\" needs ligand = \"Cl\" (an element)") end
+  if xkind == "log_a" and type(opts.ligand_species) ~= "string" then
+    fail(where, "x = \"log_a\" needs ligand_species = \"Cl^-\" (a basis species)")
+  end
+  local lig_el = opts.ligand
+  if xkind == "log_a" and not lig_el then
+    local rec = lib:species(opts.ligand_species)
+    if not rec then fail(where, "no species " .. opts.ligand_species .. " in the library") end
+    for e in pairs(rec.elements) do
+      if e ~= "H" and e ~= "O" then lig_el = e end
+    end
+    if not lig_el then fail(where, "ligand_species has no element other than H and O") end
+  end
+  local total = opts.total or 1e-6
+  if type(total) ~= "number" or not (total > 0) then fail(where, "total must be a positive number (mol/kg)") end
+  local xs = range_points(opts, where, xkind == "pH" and { 0, 14 } or { -6, 0 })
+  local min_share = opts.min_share or 0.01
+
+  local base = base_speciate(opts)
+  base.solids = opts.solids == true
+  local shares, failures = {}, {}
+  local t0 = os.clock()
+  for i, x in ipairs(xs) do
+    local s = copy(base)
+    s.totals = copy(opts.totals)
+    s.totals[el] = total
+    s.fixed = copy(opts.fixed)
+    if xkind == "pH" then
+      s.pH = x
+    else
+      s.pH = opts.pH
+      if xkind == "log_total" then
+        s.totals[opts.ligand] = 10 ^ x
+      else
+        -- the ligand element joins with its species as basis; the fixed
+        -- activity replaces its balance (the total given is a placeholder)
+        s.fixed[opts.ligand_species] = x
+        s.totals[lig_el] = s.totals[lig_el] or 1e-3
+        s.basis = copy(opts.basis)
+        s.basis[lig_el] = opts.ligand_species
+      end
+    end
+    local r, err = phlox.speciate(s)
+    if r and r.elements[el] then
+      shares[i] = r.elements[el].share
+    else
+      failures[#failures + 1] = { x = x, message = err or ("no " .. el .. " in the result") }
+    end
+  end
+  local seconds = os.clock() - t0
+
+  -- species in order of the x where they first reach their largest share
+  local maxes, at = {}, {}
+  for i = 1, #xs do
+    for sp, v in pairs(shares[i] or {}) do
+      if not maxes[sp] or v > maxes[sp] then maxes[sp], at[sp] = v, i end
+    end
+  end
+  local names, omitted = {}, {}
+  for sp, v in pairs(maxes) do
+    if v >= min_share then names[#names + 1] = sp else omitted[#omitted + 1] = { species = sp, max_share = v } end
+  end
+  table.sort(names, function(a, b) if at[a] ~= at[b] then return at[a] < at[b] end return a < b end)
+  table.sort(omitted, function(a, b) return a.species < b.species end)
+  local series = {}
+  for _, sp in ipairs(names) do
+    local y = {}
+    for i = 1, #xs do y[i] = shares[i] and (shares[i][sp] or 0) or false end
+    series[#series + 1] = { species = sp, label = sp, x = xs, y = y }
+  end
+
+  local xname = xkind == "pH" and "pH"
+    or xkind == "log_total" and ("log total " .. opts.ligand .. " / (mol/kg)")
+    or ("log a(" .. opts.ligand_species .. ")")
+  return {
+    element = el, x = xs, series = series, omitted = omitted, failures = failures,
+    axes = { x = { name = xname, min = xs[1], max = xs[#xs] },
+             y = { name = "fraction of " .. el, min = 0, max = 1 } },
+    conditions = { T_C = T_C_of(opts), [el .. " total (mol/kg)"] = total, pH = xkind ~= "pH" and opts.pH or nil,
+                   activity_model = base.activity },
+    stamp = held_stamp(lib, { el, opts.ligand }, { T_C_of(opts) }),
+    stats = { solves = #xs, seconds = seconds },
+  }
+end
+
+local RETRIES = 3        -- smaller totals tried when a solve fails
+local RETRY_FACTOR = 0.1
+
+--- Solubility curves: total dissolved element in equilibrium with its
+-- stable solid against pH, one series per temperature.
+--   diagrams.solubility { library = lib, element = "Zn", T_C = {25, 150, 300},
+--     range = {4, 14}, n = 121,
+--     total = 1,           -- mol/kg put in: large, so a solid is stable
+--     totals = {...}, E = ..., activity = "ideal", suppress = {...}, ... }
+-- Returns { x, series = { { label = "25 °C", T_C, x, y, solids }, ... },
+-- axes (y logarithmic), failures, conditions, stats }.  y[i] is the
+-- dissolved total (mol/kg of the element); it is false where no solid is
+-- stable (all of `total` dissolves: raise total) or the solver failed.
+-- solids[i] names the solid(s) present.  A point where the solver fails is
+-- retried with a tenth, a hundredth and a thousandth of `total` (the
+-- dissolved total over a solid does not depend on the solid's amount);
+-- stats.retries counts them.
+function diagrams.solubility(opts)
+  local where = "diagrams.solubility"
+  local lib = library_of(opts, where)
+  local el = opts.element
+  if opts.T then fail(where, "give temperatures as T_C = {25, 150, ...}") end
+  local temps = opts.T_C or { 25 }
+  if type(temps) == "number" then temps = { temps } end
+  local total = opts.total or 1
+  if type(total) ~= "number" or not (total > 0) then fail(where, "total must be a positive number (mol/kg)") end
+  local xs = range_points(opts, where, { 0, 14 })
+  local base = base_speciate(opts)
+  base.T_C = nil
+  base.solids = true
+  local series, failures, retried = {}, {}, 0
+  local t0 = os.clock()
+  for _, tc in ipairs(temps) do
+    if type(tc) ~= "number" then fail(where, "T_C must list numbers") end
+    local y, solids = {}, {}
+    for i, pH in ipairs(xs) do
+      local s = copy(base)
+      s.T_C, s.pH = tc, pH
+      s.totals = copy(opts.totals)
+      s.fixed = copy(opts.fixed)
+      -- The dissolved total in equilibrium with a solid does not depend on
+      -- how much solid there is, so when the solver fails with a large
+      -- excess of solid the point is retried with less of it.
+      local r, err, e
+      local put = total
+      for _ = 0, RETRIES do
+        s.totals[el] = put
+        r, err = phlox.speciate(s)
+        e = r and r.elements[el]
+        if e then break end
+        put = put * RETRY_FACTOR
+        retried = retried + 1
+      end
+      y[i], solids[i] = false, false
+      if not e then
+        failures[#failures + 1] = { T_C = tc, x = pH, message = err or ("no " .. el .. " in the result") }
+      elseif not (e.solid > 0) then
+        if put < total then
+          failures[#failures + 1] = { T_C = tc, x = pH, message = ("the solver failed with %g mol/kg and no solid "
+            .. "is stable with %g mol/kg"):format(total, put) }
+        end
+      else
+        y[i] = e.dissolved
+        local present = {}
+        for _, sp in ipairs(r.species) do
+          if sp.phase == "solid" and (sp.amount or 0) > 0 then present[#present + 1] = sp.formula end
+        end
+        table.sort(present)
+        solids[i] = table.concat(present, " + ")
+      end
+    end
+    series[#series + 1] = { label = ("%g °C"):format(tc), T_C = tc, x = xs, y = y, solids = solids, chem = false }
+  end
+  return {
+    element = el, x = xs, series = series, failures = failures,
+    axes = { x = { name = "pH", min = xs[1], max = xs[#xs] },
+             y = { name = "dissolved " .. el, unit = "mol/kg", log = true } },
+    conditions = { [el .. " put in (mol/kg)"] = total, activity_model = base.activity },
+    stamp = held_stamp(lib, { el }, temps),
+    stats = { points = #xs * #temps, retries = retried, seconds = os.clock() - t0 },
+  }
+end
+
+--- Draw a fractions or solubility result with phlox.plot.curves; opts are
+-- plot.curves' (file, title, legend, ...), merged over the result's axes.
+function diagrams.plot(result, opts)
+  local plot = require "phlox.plot"
+  opts = copy(opts)
+  opts.x = opts.x or result.axes.x
+  opts.y = opts.y or result.axes.y
+  if not opts.conditions then
+    local c = {}
+    for k, v in pairs(result.conditions or {}) do
+      if k ~= "activity_model" then c[k] = v end
+    end
+    opts.conditions = c
+  end
+  local title = opts.title
+  if not title and result.element then
+    title = (#result.series > 0 and result.series[1].solids) and ("{%s} solubility"):format(result.element)
+      or ("{%s} species fractions"):format(result.element)
+  end
+  opts.title = title
+  if not opts.stamp and result.stamp and #result.stamp > 0 then opts.stamp = result.stamp end
+  return plot.curves(result.series, opts)
+end
+
+--- Exact E-pH maps of one element at several temperatures, for plot.grid
+-- and plot.overlay.
+--   diagrams.series { library = lib, element = "Zn", T_C = {25, 150, 300},
+--                     ... any other phlox.map option }
+-- Each map gets label "150 °C".  At T other than 25 °C, a map lists the
+-- species that keep their 25 °C log K (records without dH or logK_T) in
+-- map.constant_logk; every map of the series names them in a stamp line
+-- (plot.grid and plot.overlay stamp the first map's lines).
+function diagrams.series(opts)
+  local where = "diagrams.series"
+  local lib = library_of(opts, where)
+  if opts.T then fail(where, "give temperatures as T_C = {25, 150, ...}") end
+  local temps = opts.T_C
+  if type(temps) ~= "table" or #temps == 0 then fail(where, "T_C = {25, 150, ...} expected") end
+  local maps = {}
+  for i, tc in ipairs(temps) do
+    if type(tc) ~= "number" then fail(where, "T_C must list numbers") end
+    local o = copy(opts)
+    o.T_C = tc
+    local ok, m = pcall(phlox.map, o)
+    if not ok then fail(where, ("at %g °C: %s"):format(tc, tostring(m))) end
+    m.label = ("%g °C"):format(tc)
+    if held_stamp(lib, { opts.element, opts.ligand }, { tc }) then
+      m.constant_logk = diagrams.constant_logk(lib, opts.element, tc)
+      if opts.ligand then
+        for _, f in ipairs(diagrams.constant_logk(lib, opts.ligand, tc)) do m.constant_logk[#m.constant_logk + 1] = f end
+      end
+    end
+    maps[i] = m
+  end
+  -- plot.grid and plot.overlay stamp the first map's lines: every map
+  -- carries the note for the whole series
+  local stamp = held_stamp(lib, { opts.element, opts.ligand }, temps)
+  if stamp then
+    for _, m in ipairs(maps) do
+      m.stamp = m.stamp or {}
+      m.stamp[#m.stamp + 1] = stamp[1]
+    end
+  end
+  return maps
+end
+
+-- Default log a(ligand) window of the ligand maps: dilute to about the
+-- activity of a saturated salt solution (common practice, no source).
+local LOGA_RANGE = { -4, 1 }
+
+--- Predominance map on E (y) against log a(ligand) (x) at a fixed pH.
+--   diagrams.ligand_E { library = lib, element = "Zn", ligand = "Cl", pH = 5,
+--                       loga_range = {-4, 1}, E_range = {-1.5, 1.5}, ... }
+function diagrams.ligand_E(opts)
+  library_of(opts, "diagrams.ligand_E")
+  if type(opts.ligand) ~= "string" then fail("diagrams.ligand_E", "ligand (an element symbol) expected") end
+  if type(opts.pH) ~= "number" then fail("diagrams.ligand_E", "a fixed pH is needed") end
+  local o = copy(opts)
+  o.loga_range = o.loga_range or LOGA_RANGE
+  o.axes = { "loga", "E" }
+  local m = phlox.map(o)
+  m.conditions.pH = opts.pH
+  m.conditions.ligand_activity = nil -- it is the x axis
+  return m
+end
+
+--- Predominance map on log a(ligand) (y) against pH (x) at a fixed E (V vs SHE).
+--   diagrams.pH_ligand { library = lib, element = "Zn", ligand = "Cl", E = -0.5, ... }
+function diagrams.pH_ligand(opts)
+  library_of(opts, "diagrams.pH_ligand")
+  if type(opts.ligand) ~= "string" then fail("diagrams.pH_ligand", "ligand (an element symbol) expected") end
+  if type(opts.E) ~= "number" then fail("diagrams.pH_ligand", "a fixed E (V vs SHE) is needed") end
+  local o = copy(opts)
+  o.loga_range = o.loga_range or LOGA_RANGE
+  o.axes = { "pH", "loga" }
+  local m = phlox.map(o)
+  m.conditions.E_V = opts.E
+  m.conditions.ligand_activity = nil -- it is the y axis
+  return m
+end
+
+-- Short names used on site for the electrodes of phlox.electrodes().
+diagrams.electrode_names = {
+  SHE = "standard hydrogen electrode",
+  SCE = "saturated calomel (Hg/Hg2Cl2, saturated KCl)",
+  ["Ag/AgCl"] = "Ag/AgCl, saturated KCl",
+  ["Ag/AgCl sat"] = "Ag/AgCl, saturated KCl",
+  ["Ag/AgCl 3.5M"] = "Ag/AgCl, 3.5 mol/L KCl",
+  CSE = "Cu/CuSO4, saturated",
+  ["Cu/CuSO4"] = "Cu/CuSO4, saturated",
+}
+
+--- The reference electrode record for a short or full name.
+function diagrams.electrode(name)
+  local all = phlox.electrodes()
+  local e = all[name] or all[diagrams.electrode_names[name] or ""]
+  if not e then
+    local known = {}
+    for k in pairs(diagrams.electrode_names) do known[#known + 1] = k end
+    table.sort(known)
+    error(("unknown reference electrode '%s' (known: %s, or the full names of phlox.electrodes())")
+          :format(tostring(name), table.concat(known, ", ")), 3)
+  end
+  return e
+end
+
+-- The E interval of a field polygon on the vertical line at x that holds E
+-- (crossings by the half-open rule of ray casting, paired bottom-up, so a
+-- field that is not convex gives the right piece).
+local function span_at(field, x, E)
+  local ys = {}
+  local n = #field.x
+  for i = 1, n do
+    local j = i % n + 1
+    local x1, y1, x2, y2 = field.x[i], field.y[i], field.x[j], field.y[j]
+    if (x1 <= x) ~= (x2 <= x) then ys[#ys + 1] = y1 + (y2 - y1) * (x - x1) / (x2 - x1) end
+  end
+  table.sort(ys)
+  for k = 1, #ys - 1, 2 do
+    if ys[k] <= E and E <= ys[k + 1] then return ys[k], ys[k + 1] end
+  end
+  return nil
+end
+
+--- Which field of a map a measured potential falls in.
+--   diagrams.where { map = m, pH = 5, E = -0.80, reference = "SCE" }
+-- `map` has E on its y axis and pH (give pH) or log a(ligand) (give loga)
+-- on x.  `reference` is a short name (SHE, SCE, Ag/AgCl, Ag/AgCl 3.5M,
+-- CSE) or a full name of phlox.electrodes(); default SHE.  The offsets are
+-- for electrodes at 25 °C; on a map at another temperature the call needs
+-- reference_at_25C = true (an external electrode kept at room temperature;
+-- the thermal junction potential is not included).
+-- Returns { species, kind, E_SHE, E_measured, reference = {name, offset,
+-- source}, field, E_range = {lo, hi} (the field's extent in E at that
+-- x), margin = {below, above} in V } or nil, message outside the window.
+function diagrams.where(opts)
+  local where = "phlox.where"
+  if type(opts) ~= "table" or type(opts.map) ~= "table" then fail(where, "map = phlox.map{...} expected") end
+  local m = opts.map
+  if not (m.y and m.y.name == "E") then fail(where, "the map needs E on its y axis") end
+  local x
+  if m.x.name == "pH" then
+    x = opts.pH
+    if type(x) ~= "number" then fail(where, "pH (a number) expected") end
+  else
+    x = opts.loga or opts.x
+    if type(x) ~= "number" then fail(where, "loga (the x value, a number) expected") end
+  end
+  if type(opts.E) ~= "number" then fail(where, "E (the measured potential, V) expected") end
+  local e = diagrams.electrode(opts.reference or "SHE")
+  if e.offset ~= 0 and m.T and math.abs(m.T - 298.15) > 0.5 and not opts.reference_at_25C then
+    fail(where, ("the %s offset is for 25 °C and the map is at %.1f °C: set reference_at_25C = true if the "
+      .. "electrode is kept at room temperature (its thermal junction potential is not included)")
+      :format(e.name, m.T - T0C))
+  end
+  local E = opts.E + e.offset -- E_SHE = E_ref + offset
+  if x < m.x.min or x > m.x.max or E < m.y.min or E > m.y.max then
+    return nil, ("(%g, %.4f V vs SHE) is outside the map's window"):format(x, E)
+  end
+  local sp, field = phlox.locate(m, x, E)
+  if not sp then return nil, ("no field at (%g, %.4f V vs SHE)"):format(x, E) end
+  local lo, hi = span_at(field, x, E)
+  return {
+    species = sp, kind = field.kind, field = field, E_SHE = E, E_measured = opts.E,
+    reference = { name = e.name, offset = e.offset, source = e.source },
+    E_range = lo and { lo, hi } or nil,
+    margin = lo and { E - lo, hi - E } or nil,
+  }
+end
+
+return diagrams
