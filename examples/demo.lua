@@ -214,7 +214,7 @@ local function panel_title(m)
 end
 plot.grid(maps, { file = path("Cu-Cl-panels.png"), cols = 3, panel_title = panel_title, stamp = STAMP })
 wrote("Cu-Cl-panels.png")
-plot.grid(maps, { file = path("Cu-Cl-pages.pdf"), pages = true, cols = 3, panel_title = panel_title, stamp = STAMP })
+plot.grid(maps, { file = path("Cu-Cl-pages.pdf"), pages = true, panel_title = panel_title, stamp = STAMP })
 wrote("Cu-Cl-pages.pdf")
 
 -- Corrosion domains at the supply temperature, with the operating points.
