@@ -277,7 +277,7 @@ for s, redox in ipairs(REDOX) do
     for _, r in ipairs(results) do
       if r.state == redox.key and r.Cl == cl then xs[#xs + 1], ys[#ys + 1] = r.T_C, r.dissolved_Cu end
     end
-    series[#series + 1] = { x = xs, y = ys, label = ("%s, Cl %g mol/kg"):format(redox.label, cl),
+    series[#series + 1] = { x = xs, y = ys, label = ("%s, Cl %g"):format(redox.key, cl),
                             style = ({ "solid", "dashed" })[s] }
   end
 end
@@ -288,7 +288,8 @@ for _, ext in ipairs({ "png", "svg" }) do
     x = { name = "T", unit = "°C", min = 25, max = 150 },
     y = { name = "dissolved Cu", unit = "mol/kg", log = true },
     conditions = { NaOH_mol_kg = NAOH, Cu_offered_mol_kg = CU_TOTAL, activity_model = "Davies" },
-    stamp = { STAMP[1], "aerated: " .. REDOX[1].why .. "; deaerated: " .. REDOX[2].why },
+    stamp = { STAMP[1], "Cl: total chloride, mol/kg (NaCl)",
+              "aerated: " .. REDOX[1].why .. "; deaerated: " .. REDOX[2].why },
   })
   wrote(name)
 end
