@@ -182,15 +182,18 @@ local COND_NAMES = {
   P_bar = function(v) return ("P = %s bar"):format(fmt_num(v)) end,
   activity = function(v) return ("activity of dissolved species = %s"):format(fmt_num(v)) end,
   ionic_strength = function(v) return ("I = %s mol/kg"):format(fmt_num(v)) end,
+  ligand = function(v) return ("ligand %s"):format(v) end,
+  ligand_activity = function(v) return ("ligand activity = %s"):format(fmt_num(v)) end,
 }
-local COND_ORDER = { "T_C", "P_bar", "activity", "ionic_strength" }
+local COND_ORDER = { "T_C", "P_bar", "activity", "ionic_strength", "ligand", "ligand_activity" }
 
 local function conditions_text(c)
   if type(c) ~= "table" then return nil end
   local parts, seen = {}, {}
   for _, k in ipairs(COND_ORDER) do
     if c[k] ~= nil then
-      parts[#parts + 1] = type(c[k]) == "number" and COND_NAMES[k](c[k]) or (k .. " = " .. tostring(c[k]))
+      local named = type(c[k]) == "number" or (k == "ligand" and type(c[k]) == "string")
+      parts[#parts + 1] = named and COND_NAMES[k](c[k]) or (k .. " = " .. tostring(c[k]))
       seen[k] = true
     end
   end
@@ -267,29 +270,136 @@ local function frame(win, fig_w, fig_h)
   local aspect = math.max(fig_w - PLOT_MARGIN_W, 50) / math.max(fig_h - PLOT_MARGIN_H, 50)
   local sx, sy = aspect / (win.x1 - win.x0), 1 / (win.y1 - win.y0)
   return function(x, y) return (x - win.x0) * sx, (y - win.y0) * sy end,
-         math.max(fig_h - PLOT_MARGIN_H, 50)   -- points per frame unit
+         math.max(fig_h - PLOT_MARGIN_H, 50),   -- points per frame unit
+         function(fx, fy) return win.x0 + fx / sx, win.y0 + fy / sy end,
+         aspect
 end
 
-local function field_poles(map, win, ref, to_frame)
-  local poles = {}
-  for _, f in ipairs(map.fields) do
+-- Field labels: the renderer (src/render/draw.c) sets a label at the given
+-- point if it fits at 9.5 down to 5.5 pt, and otherwise leads it out with a
+-- line from the field's centroid to a box 16 pt right or left and 16 pt
+-- below or 10 pt above.  These must match its constants.
+local LABEL_MIN, LEADER_SIZE = 5.5, 6.5
+local LEADER_DX, LEADER_DY_DOWN, LEADER_DY_UP = 16, 16, 10
+
+local function seg_dist(px, py, ax, ay, bx, by)
+  local dx, dy = bx - ax, by - ay
+  local l2 = dx * dx + dy * dy
+  local t = l2 > 0 and math.max(0, math.min(1, ((px - ax) * dx + (py - ay) * dy) / l2)) or 0
+  local ex, ey = ax + t * dx - px, ay + t * dy - py
+  return math.sqrt(ex * ex + ey * ey)
+end
+
+local function inside(xs, ys, x, y)   -- even-odd rule
+  local c, n = false, #xs
+  local j = n
+  for i = 1, n do
+    if ((ys[i] > y) ~= (ys[j] > y)) and (x < (xs[j] - xs[i]) * (y - ys[i]) / (ys[j] - ys[i]) + xs[i]) then
+      c = not c
+    end
+    j = i
+  end
+  return c
+end
+
+local function edge_dist(xs, ys, x, y)
+  local d, n = math.huge, #xs
+  for i = 1, n do
+    local j = i % n + 1
+    d = math.min(d, seg_dist(x, y, xs[i], ys[i], xs[j], ys[j]))
+  end
+  return d
+end
+
+local function centroid(xs, ys)
+  local a, gx, gy, n = 0, 0, 0, #xs
+  for i = 1, n do
+    local j = i % n + 1
+    local c = xs[i] * ys[j] - xs[j] * ys[i]
+    a, gx, gy = a + c, gx + (xs[i] + xs[j]) * c, gy + (ys[i] + ys[j]) * c
+  end
+  if a == 0 then return nil end
+  return gx / (3 * a), gy / (3 * a)
+end
+
+-- The label point of a field (frame units): among the points nearly as
+-- deep inside as the pole of inaccessibility (80 % of its depth), the one
+-- nearest the centroid.  A long strip has a ridge of equally deep points,
+-- and the pole alone may sit at one end of it; this picks the middle.
+local function label_point(xs, ys)
+  local ok, px, py, depth = pcall(core.polygon_pole, xs, ys, 1e-3)
+  if not ok then return nil end
+  local gx, gy = centroid(xs, ys)
+  if not gx then return px, py end
+  local x0, x1, y0, y1 = math.huge, -math.huge, math.huge, -math.huge
+  for i = 1, #xs do
+    x0, x1 = math.min(x0, xs[i]), math.max(x1, xs[i])
+    y0, y1 = math.min(y0, ys[i]), math.max(y1, ys[i])
+  end
+  local bx, by = px, py
+  local best = (px - gx) ^ 2 + (py - gy) ^ 2
+  local N = 24
+  for i = 0, N do
+    for j = 0, N do
+      local x, y = x0 + (x1 - x0) * i / N, y0 + (y1 - y0) * j / N
+      local d2 = (x - gx) ^ 2 + (y - gy) ^ 2
+      if d2 < best and inside(xs, ys, x, y) and edge_dist(xs, ys, x, y) >= 0.8 * depth then
+        bx, by, best = x, y, d2
+      end
+    end
+  end
+  return bx, by
+end
+
+-- Does a w x h box centred at (x, y) fit in the polygon (the renderer's
+-- nine-point test)?
+local function box_fits(xs, ys, x, y, w, h)
+  for i = -1, 1 do
+    for j = -1, 1 do
+      if not inside(xs, ys, x + i * w / 2, y + j * h / 2) then return false end
+    end
+  end
+  return true
+end
+
+-- Label points (data units, for fig:polygon) and the spots other labels
+-- must keep clear of (frame units): each placed label, and the box of each
+-- led-out label.
+local function field_labels(map, win, ref, to_frame, from_frame, unit, aspect)
+  local poles, points = {}, {}
+  for k, f in ipairs(map.fields) do
     local xs, ys = {}, {}
     for i = 1, #f.x do
       local x = math.min(math.max(f.x[i], win.x0), win.x1)
       local y = math.min(math.max(f.y[i] - ref.offset, win.y0), win.y1)
       xs[i], ys[i] = to_frame(x, y)
     end
-    local ok, px, py = pcall(core.polygon_pole, xs, ys, 1e-3)
-    if ok then poles[#poles + 1] = { px, py } end
+    local lx, ly = label_point(xs, ys)
+    if lx then
+      local dx, dy = from_frame(lx, ly)
+      points[k] = { dx, dy + ref.offset }
+      local w = (core.text_width(f.species, LABEL_MIN, true) + 2) / unit
+      local h = LABEL_MIN * 1.2 / unit
+      if box_fits(xs, ys, lx, ly, w, h) then
+        poles[#poles + 1] = { lx, ly }
+      else   -- led out from the centroid (or the label point), as the renderer does
+        local cx, cy = centroid(xs, ys)
+        if not (cx and inside(xs, ys, cx, cy)) then cx, cy = lx, ly end
+        local lw, lh = core.text_width(f.species, LEADER_SIZE, true) / unit, LEADER_SIZE * 1.2 / unit
+        local ox = cx < aspect / 2 and cx + LEADER_DX / unit or cx - LEADER_DX / unit - lw
+        local base = cy > 0.5 and cy - LEADER_DY_DOWN / unit or cy + LEADER_DY_UP / unit
+        for q = 0, 4 do poles[#poles + 1] = { ox + lw * q / 4, base + 0.35 * lh } end
+      end
+    end
   end
-  return poles
+  return poles, points
 end
 
--- Of the candidate boxes {x, y, w, h} (frame units, (x, y) the lower left),
--- the one whose centre is farthest from every pole.
+-- What small labels (water lines, neutral pH) must keep clear of, and the
+-- field label points.
 local function placement(map, win, ref, cell_w, cell_h)
-  local to_frame, unit = frame(win, cell_w, cell_h)
-  local poles = field_poles(map, win, ref, to_frame)
+  local to_frame, unit, from_frame, aspect = frame(win, cell_w, cell_h)
+  local poles, points = field_labels(map, win, ref, to_frame, from_frame, unit, aspect)
   local n = map.neutral_pH
   if n and is_pH(map.x) and n > win.x0 and n < win.x1 then   -- keep labels off the dotted line
     for k = 0, 10 do
@@ -297,9 +407,11 @@ local function placement(map, win, ref, cell_w, cell_h)
       poles[#poles + 1] = { fx, fy }
     end
   end
-  return { to_frame = to_frame, unit = unit, poles = poles }
+  return { to_frame = to_frame, unit = unit, poles = poles, label_points = points }
 end
 
+-- Of the candidate boxes {x, y, w, h} (frame units, (x, y) the lower left),
+-- the one whose centre is farthest from every pole.
 local function clearest(cands, poles)
   local best, bscore
   for _, c in ipairs(cands) do
@@ -457,19 +569,21 @@ local function draw_domain_overlay(fig, panel, map, ref, mode)
 end
 
 -- Fields, boundaries, water, neutral pH and (optionally) domains of one map.
-local function draw_map(fig, panel, map, opts, win, ref, cell_w, cell_h)
-  local fills = palette.map_fills(map)
+local function draw_map(fig, panel, map, opts, win, ref, cell_w, cell_h, fills)
+  fills = fills or palette.map_fills(map)
   local outline = (map.boundaries == nil or #map.boundaries == 0) and LINE_BOUNDARY or 0
+  local place = placement(map, win, ref, cell_w, cell_h)
   for i, f in ipairs(map.fields) do
     local label = f.species
     if opts.labels == false then label = nil end
-    fig:polygon(panel, f.x, shifted(f.y, ref.offset), fills.fills[i], palette.ink, outline, label)
+    local lp = place.label_points[i] or {}
+    fig:polygon(panel, f.x, shifted(f.y, ref.offset), fills.fills[i], palette.ink, outline, label,
+                lp[1], lp[2] and lp[2] - ref.offset)
   end
   if opts.domains then draw_domain_overlay(fig, panel, map, ref, opts.domains == true and "hatch" or opts.domains) end
   for _, b in ipairs(map.boundaries or {}) do
     fig:line(panel, b.x, shifted(b.y, ref.offset), palette.ink, LINE_BOUNDARY, "solid")
   end
-  local place = placement(map, win, ref, cell_w, cell_h)
   draw_neutral(fig, panel, map, win, place)
   draw_water(fig, panel, map, win, ref,
              { color = palette.water, width = LINE_WATER, dash = "dashed" }, true, place)
@@ -549,12 +663,14 @@ function plot.domains(map, opts)
   for _, b in ipairs(map.boundaries or {}) do
     fig:line(1, b.x, shifted(b.y, ref.offset), palette.ink, 0.5, "solid")
   end
+  local place = placement(map, win, ref, w - 80, h)   -- the legend sits outside
   if opts.labels ~= false then   -- species names, small, over the domains
-    for _, f in ipairs(map.fields) do
-      fig:polygon(1, f.x, shifted(f.y, ref.offset), { 1, 1, 1, 0 }, palette.ink, 0, f.species)
+    for i, f in ipairs(map.fields) do
+      local lp = place.label_points[i] or {}
+      fig:polygon(1, f.x, shifted(f.y, ref.offset), { 1, 1, 1, 0 }, palette.ink, 0, f.species,
+                  lp[1], lp[2] and lp[2] - ref.offset)
     end
   end
-  local place = placement(map, win, ref, w - 80, h)   -- the legend sits outside
   draw_neutral(fig, 1, map, win, place)
   draw_water(fig, 1, map, win, ref, { color = palette.water, width = LINE_WATER, dash = "dashed" }, true, place)
   for _, name in ipairs(DOMAINS) do
@@ -563,6 +679,7 @@ function plot.domains(map, opts)
   fig:legend(1, opts.legend or "outside")
   local extra = {}
   for _, s in ipairs(map.stamp or {}) do extra[#extra + 1] = s end
+  for _, s in ipairs(opts.stamp or {}) do extra[#extra + 1] = s end
   if derived then
     extra[#extra + 1] = "domains from field kinds: metal = immunity, solid = passivation, dissolved or gas = corrosion"
   end
@@ -670,6 +787,47 @@ end
 
 -- Grids and overlays ------------------------------------------------------------
 
+--- Fills shared by several maps: one lightness tier per species across all
+-- of them, so a species keeps its colour from panel to panel.  The
+-- neighbour graph is the union of the maps' graphs (species by name).
+-- Returns a list of fill tables (as palette.map_fills gives), one per map.
+function plot.shared_fills(maps)
+  local all, index, adj = {}, {}, {}
+  for _, m in ipairs(maps) do
+    for _, f in ipairs(m.fields) do
+      local k = index[f.species]
+      if not k then
+        all[#all + 1] = { species = f.species, kind = f.kind, area = 0 }
+        k = #all
+        index[f.species], adj[k] = k, {}
+      end
+      all[k].area = all[k].area + (f.area or 0)
+    end
+  end
+  local per_map = {}
+  for mi, m in ipairs(maps) do
+    local fills = palette.map_fills(m)
+    for i, nb in pairs(fills.neighbours) do
+      for j in pairs(nb) do
+        local a, b = index[m.fields[i].species], index[m.fields[j].species]
+        if a ~= b then adj[a][b], adj[b][a] = true, true end
+      end
+    end
+    per_map[mi] = fills
+  end
+  local tiers, conflicts = palette.assign_tiers(all, adj)
+  for mi, m in ipairs(maps) do
+    local fills = per_map[mi]
+    for i, f in ipairs(m.fields) do
+      local t = tiers[index[f.species]]
+      fills.tiers[i] = t
+      fills.fills[i] = palette.field(f.kind or "aqueous", t)
+    end
+    fills.conflicts = conflicts
+  end
+  return per_map
+end
+
 --- Several maps as panels of one figure (e.g. a temperature sweep), on
 -- shared axis ranges.  opts: cols (default: about square), panel_title =
 -- function(map, i) -> string (default: temperature and pressure), pages
@@ -681,25 +839,34 @@ function plot.grid(maps, opts)
   for i, m in ipairs(maps) do plot.check_map(m, ("plot.grid: maps[%d]"):format(i)) end
   local ref = reference(opts, maps[1])
   local n = #maps
-  local cols = opts.cols or math.ceil(math.sqrt(n))
+  -- pages: one row, so the PDF has one page per map and no empty page
+  local cols = opts.cols or (opts.pages and n) or math.ceil(math.sqrt(n))
   local rows = math.ceil(n / cols)
-  local w = opts.width or (plot.defaults.width * (cols > 1 and 0.75 * cols or 1))
-  local h = opts.height or (plot.defaults.height * (rows > 1 and 0.75 * rows or 1))
+  local w = opts.width or (plot.defaults.width * (cols > 1 and not opts.pages and 0.75 * cols or 1))
+  local h = opts.height or (plot.defaults.height * (rows > 1 and not opts.pages and 0.75 * rows or 1))
   local fig = core.figure(w, h, rows, cols)
   local win = opts.shared == false and nil or union_window(maps, ref)
   local temps = {}
+  local shared = opts.shared_fills ~= false and plot.shared_fills(maps) or {}
   for i, m in ipairs(maps) do
     local wi = win or window_of(m, ref)
     fig:axes(i, wi.x0, wi.x1, wi.y0, wi.y1)
     local title = opts.panel_title and opts.panel_title(m, i) or plot.map_title(m)
     fig:titles(i, x_title(m), y_title(m, ref), title)
-    draw_map(fig, i, m, opts, wi, ref, w / cols, h / rows)
+    if opts.pages then   -- each page shows one panel at the full page size
+      draw_map(fig, i, m, opts, wi, ref, w, h, shared[i])
+    else
+      draw_map(fig, i, m, opts, wi, ref, w / cols, h / rows, shared[i])
+    end
     temps[#temps + 1] = fmt_T(celsius(m)) or "?"
   end
   local cond = {}
   for k, v in pairs(maps[1].conditions or {}) do cond[k] = v end
   cond.T_C = nil
   local extra = { "panels at " .. table.concat(temps, ", ") }
+  if shared[1] and shared[1].conflicts > 0 then
+    extra[#extra + 1] = ("note: %d pairs of neighbouring fields share a lightness tier"):format(shared[1].conflicts)
+  end
   for _, s in ipairs(maps[1].stamp or {}) do extra[#extra + 1] = s end
   for _, s in ipairs(opts.stamp or {}) do extra[#extra + 1] = s end
   if ref.offset ~= 0 then
@@ -728,12 +895,14 @@ function plot.overlay(maps, opts)
   local title = opts.title or ((m1.element and ("{%s}–{H2O}: "):format(m1.element) or "") .. "overlaid boundaries")
   fig:titles(1, x_title(m1), y_title(m1, ref), title)
   local lab = opts.labels_of == nil and 1 or opts.labels_of
+  local place = placement(maps[lab or 1] or m1, win, ref, w - 80, h)
   if lab and maps[lab] then
-    for _, f in ipairs(maps[lab].fields) do
-      fig:polygon(1, f.x, shifted(f.y, ref.offset), { 1, 1, 1, 0 }, palette.ink, 0, f.species)
+    for i, f in ipairs(maps[lab].fields) do
+      local lp = place.label_points[i] or {}
+      fig:polygon(1, f.x, shifted(f.y, ref.offset), { 1, 1, 1, 0 }, palette.ink, 0, f.species,
+                  lp[1], lp[2] and lp[2] - ref.offset)
     end
   end
-  local place = placement(maps[lab or 1] or m1, win, ref, w - 80, h)
   draw_neutral(fig, 1, m1, win, place)
   local labels = {}
   for i, m in ipairs(maps) do
@@ -764,9 +933,12 @@ function plot.overlay(maps, opts)
   if ref.offset ~= 0 then
     extra[#extra + 1] = ("potential vs %s = E(SHE) - %s V"):format(ref.name, fmt_num(ref.offset))
   end
-  local cond = {}
-  for k, v in pairs(m1.conditions or {}) do cond[k] = v end
-  if #maps > 1 then cond.T_C = nil end
+  local cond = {}   -- only the conditions all maps share; the legend tells the rest
+  for k, v in pairs(m1.conditions or {}) do
+    local same = true
+    for i = 2, #maps do same = same and (maps[i].conditions or {})[k] == v end
+    if same then cond[k] = v end
+  end
   add_stamp(fig, plot.stamp_lines(cond, extra, w))
   return finish(fig, opts, plot.defaults)
 end
