@@ -21,6 +21,7 @@ typedef struct px_rmap_options {
     double background_na_cl;  /* mol/kg of NaCl background electrolyte (0: none) */
     const char *const *exclude;
     size_t n_exclude;
+    int threads;              /* worker threads for the grid nodes (default 1) */
 } px_rmap_options;
 
 px_rmap_options px_rmap_options_default(void);
@@ -30,7 +31,14 @@ typedef struct px_rmap_stats {
     size_t cold_retries;     /* warm starts that ended over-saturated, solved again cold */
 } px_rmap_stats;
 
-/* Field ids of the grid are database indices (-1: no convergence). */
+#define PX_RMAP_MAX_THREADS 64
+
+/* Field ids of the grid are database indices (-1: no convergence).  With
+ * threads > 1 the grid nodes are solved in bands of rows, one equilibrium
+ * system per thread (the core is reentrant); boundary refinement then runs
+ * on the calling thread.  The result does not depend on the thread count
+ * except through warm-start paths (same labels; crossing points agree to
+ * the bisection tolerance). */
 int px_rmap_build(px_thermo_ws *ws, const px_db *db, const char *element, const px_rmap_options *o,
                   px_diagram_grid **out, px_rmap_stats *stats, char *msg, size_t msglen);
 

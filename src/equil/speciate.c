@@ -360,9 +360,40 @@ fail:
     return st;
 }
 
+/* Continuation in the totals: solve with every element total scaled down
+ * (where cold starts are easy), then raise them in steps, each solve warm
+ * from the last.  A standard homotopy for stiff equilibrium problems (e.g.
+ * Smith and Missen 1982, ch. 6); used only when a plain solve fails. */
+#define PX_SPEC_CONT_STEPS 6
+static int solve_by_continuation(px_spec *s, const px_equil_options *opt)
+{
+    static const double scale[PX_SPEC_CONT_STEPS] = {1e-5, 1e-4, 1e-3, 1e-2, 1e-1, 1.0};
+    size_t nb = s->n_basis;
+    px_equil_component_result c;
+    double given[PX_SPEC_MAX_ITEMS];
+    int is_total[PX_SPEC_MAX_ITEMS];
+    for (size_t i = 0; i < nb; i++) {
+        is_total[i] = px_equil_work_get_component(s->work, i, &c) == PX_OK && c.kind == PX_EQUIL_C_TOTAL;
+        given[i] = is_total[i] ? c.total_given : 0.0;
+    }
+    px_equil_options o = opt ? *opt : px_equil_options_default();
+    o.warm = 1;
+    px_equil_work_reset(s->work);
+    int st = PX_OK;
+    for (int k = 0; k < PX_SPEC_CONT_STEPS && st == PX_OK; k++) {
+        for (size_t i = 0; i < nb; i++)
+            if (is_total[i]) px_equil_system_set_total(s->sys, i, given[i] * scale[k]);
+        st = px_equil_solve(s->sys, s->work, &o);
+    }
+    for (size_t i = 0; i < nb; i++) /* the given totals, whatever happened */
+        if (is_total[i]) px_equil_system_set_total(s->sys, i, given[i]);
+    return st;
+}
+
 int px_spec_solve(px_spec *s, const px_equil_options *opt, char *msg, size_t msglen)
 {
     int st = px_equil_solve(s->sys, s->work, opt);
+    if (st == PX_ENOCONV || st == PX_ESINGULAR) st = solve_by_continuation(s, opt);
     if (st != PX_OK && msg && msglen) {
         px_equil_stats stats;
         px_equil_work_get_stats(s->work, &stats);

@@ -348,6 +348,7 @@ static int l_grid_map(lua_State *L)
     o.total = optnum(L, 2, "total", o.total);
     o.ligand_total = optnum(L, 2, "ligand_total", o.ligand_total);
     o.background_na_cl = optnum(L, 2, "background_nacl", 0);
+    o.threads = (int)optnum(L, 2, "threads", 1);
     lua_getfield(L, 2, "ligand");
     o.ligand = lua_tostring(L, -1);
     lua_pop(L, 1);

@@ -55,6 +55,21 @@ local function compare(elements, element, T_C, nx, ny)
 end
 
 compare({ "Zn" }, "Zn", 25, 57, 41)
+
+-- the same map on two threads: the node labels do not depend on the thread
+-- count, and a ligand map (Cu with chloride) converges at every node
+local cl = phlox.library { "Cu", "Cl" }
+local o = { element = "Cu", T = 298.15, P = 1, nx = 61, ny = 41, total = 1e-6, ligand = "Cl", ligand_total = 1e-2 }
+local g1 = assert(phlox.core.grid_map(cl.db, o))
+o.threads = 2
+local g2 = assert(phlox.core.grid_map(cl.db, o))
+check(g1.failures == 0 and g2.failures == 0, "Cu-Cl rigorous map converges everywhere")
+for k = 1, #g1.labels do
+  check(g1.species[g1.labels[k]] == g2.species[g2.labels[k]], "node " .. k .. " differs between 1 and 2 threads")
+end
+local cucl = false
+for _, s in ipairs(g1.species) do cucl = cucl or s:find("^CuCl") ~= nil end
+check(cucl, "a copper chloro complex predominates somewhere at 1e-2 mol/kg chloride")
 compare({ "Cu" }, "Cu", 25, 57, 41)
 compare({ "Zn" }, "Zn", 200, 43, 31)
 print("test_rigorous: all checks passed")
