@@ -1,5 +1,7 @@
 /* status.c - messages for the status table in status.h. */
 #include "status.h"
+#include <stdarg.h>
+#include <stdio.h>
 
 const char *px_strerror(int status)
 {
@@ -19,4 +21,15 @@ const char *px_status_name(int status)
 #undef PX_STATUS_NAME
     default: return "PX_UNKNOWN";
     }
+}
+
+int px_fail(char *msg, size_t n, int status, const char *fmt, ...)
+{
+    if (msg && n) {
+        va_list ap;
+        va_start(ap, fmt);
+        vsnprintf(msg, n, fmt, ap);
+        va_end(ap);
+    }
+    return status;
 }

@@ -7,6 +7,7 @@
  * px_strerror() plus the detail the failing object kept. */
 #ifndef PX_STATUS_H
 #define PX_STATUS_H
+#include <stddef.h>
 
 #define PX_STATUS_LIST(X)                                                     \
     X(PX_OK, 0, "success")                                                    \
@@ -35,5 +36,12 @@ const char *px_strerror(int status);
 
 /* The enumerator's name ("PX_ENOCONV"), for logs and tests. */
 const char *px_status_name(int status);
+
+/* Write a printf-style reason into msg (if msg and n are non-zero) and
+ * return status: `return px_fail(msg, n, PX_EINVAL, "bad %s", what);` */
+#if defined(__GNUC__)
+__attribute__((format(printf, 4, 5)))
+#endif
+int px_fail(char *msg, size_t n, int status, const char *fmt, ...);
 
 #endif

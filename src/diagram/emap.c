@@ -41,26 +41,6 @@ double px_emap_davies(double A, int z, double I)
     return -A * z * z * (s / (1.0 + s) - PX_EMAP_DAVIES_B * I);
 }
 
-static int fail(char *msg, size_t n, int st, const char *fmt, ...)
-{
-    if (msg && n) {
-        va_list ap;
-        va_start(ap, fmt);
-        vsnprintf(msg, n, fmt, ap);
-        va_end(ap);
-    }
-    return st;
-}
-
-static int in_list(const char *const *list, size_t n, const char *text)
-{
-    for (size_t i = 0; i < n; i++) {
-        px_formula f;
-        if (px_formula_parse(list[i], &f) == PX_OK && strcmp(f.text, text) == 0) return 1;
-    }
-    return 0;
-}
-
 /* Elements of f are all within {H, O, a, b}. */
 static int made_of(const px_formula *f, int a, int b)
 {
@@ -117,10 +97,10 @@ static int phi_of(const ctx *c, const cand *cd, int z, const px_species *ref, do
     char why[160];
     int st = px_basis_formation(basis, nb, &cd->sp->f, nu, why, sizeof why);
     if (st != PX_OK)
-        return fail(c->msg, c->msglen, st, "%s: cannot be formed from the basis: %s",
+        return px_fail(c->msg, c->msglen, st, "%s: cannot be formed from the basis: %s",
                     cd->sp->f.text, why);
     double nM = px_formula_count(&cd->sp->f, z);
-    if (!(nM > 0)) return fail(c->msg, c->msglen, PX_EINVAL, "%s has no atom of the element", cd->sp->f.text);
+    if (!(nM > 0)) return px_fail(c->msg, c->msglen, PX_EINVAL, "%s has no atom of the element", cd->sp->f.text);
     double dG = cd->G - nu[0] * c->G_h2o - nu[1] * c->G_h - nu[2] * c->G_e - nu[3] * G_ref -
                 (lig ? nu[4] * lig->G : 0.0);
     const double ln10 = PX_LN10;
@@ -145,7 +125,7 @@ static int phi_of(const ctx *c, const cand *cd, int z, const px_species *ref, do
     out->id = (int)cd->db;
     out->label = cd->sp->f.text;
     if (!isfinite(out->c) || !isfinite(out->p) || !isfinite(out->q))
-        return fail(c->msg, c->msglen, PX_ENONFINITE, "%s: non-finite Gibbs energy", cd->sp->f.text);
+        return px_fail(c->msg, c->msglen, PX_ENONFINITE, "%s: non-finite Gibbs energy", cd->sp->f.text);
     return PX_OK;
 }
 
@@ -231,7 +211,7 @@ static int collect(const ctx *c, px_thermo_ws *ws, const px_db *db, int z, int z
         int st = px_thermo_ws_water(ws, o->T, o->P, &w);
         if (st != PX_OK) {
             free(v);
-            return fail(c->msg, c->msglen, st, "water at %.2f K, %.3g bar: %s", o->T, o->P, px_strerror(st));
+            return px_fail(c->msg, c->msglen, st, "water at %.2f K, %.3g bar: %s", o->T, o->P, px_strerror(st));
         }
         A = w->A_gamma;
     }
@@ -241,24 +221,24 @@ static int collect(const ctx *c, px_thermo_ws *ws, const px_db *db, int z, int z
         if (f->state == PX_STATE_E || px_formula_count(f, z) <= 0) continue;
         if (!made_of(f, z, zl)) continue;
         if (other && px_formula_count(f, other) > 0) continue;
-        if (in_list(o->exclude, o->n_exclude, f->text)) continue;
-        if (!for_ligand && o->n_only > 0 && !in_list(o->only, o->n_only, f->text)) continue;
+        if (px_formula_listed(o->exclude, o->n_exclude, f->text)) continue;
+        if (!for_ligand && o->n_only > 0 && !px_formula_listed(o->only, o->n_only, f->text)) continue;
         cand *cd = &v[k];
         cd->db = (long)i;
         cd->sp = sp;
         int st = px_thermo_species_G(ws, db, sp, o->T, o->P, &cd->G);
         if (st != PX_OK) {
             free(v);
-            return fail(c->msg, c->msglen, st, "%s at %.2f K, %.4g bar: %s", f->text, o->T, o->P,
+            return px_fail(c->msg, c->msglen, st, "%s at %.2f K, %.4g bar: %s", f->text, o->T, o->P,
                         px_thermo_ws_error(ws)[0] ? px_thermo_ws_error(ws) : px_strerror(st));
         }
         if (f->state == PX_STATE_AQ) {
             double a = for_ligand ? o->ligand_activity : o->activity;
             for (size_t q = 0; q < o->n_act; q++)
-                if (in_list(&o->act_species[q], 1, f->text)) a = o->act_values[q];
+                if (px_formula_listed(&o->act_species[q], 1, f->text)) a = o->act_values[q];
             if (!(a > 0) || !isfinite(a)) {
                 free(v);
-                return fail(c->msg, c->msglen, PX_EINVAL, "%s: activity must be positive", f->text);
+                return px_fail(c->msg, c->msglen, PX_EINVAL, "%s: activity must be positive", f->text);
             }
             cd->ln_a = log(a) + PX_LN10 * px_emap_davies(A, f->charge, o->ionic_strength);
             cd->on_axis_activity = for_ligand && (o->xaxis == PX_AXIS_LOGA || o->yaxis == PX_AXIS_LOGA);
@@ -297,12 +277,12 @@ static int basis_species(ctx *c, px_thermo_ws *ws, const px_db *db)
     c->hplus = px_db_find(db, "H^+");
     c->elec = px_db_find(db, "e-");
     if (!c->h2o || !c->hplus || !c->elec)
-        return fail(c->msg, c->msglen, PX_ENOTFOUND, "the database lacks H2O(l), H^+ or e-");
+        return px_fail(c->msg, c->msglen, PX_ENOTFOUND, "the database lacks H2O(l), H^+ or e-");
     int st = px_thermo_species_G(ws, db, c->h2o, c->o->T, c->o->P, &c->G_h2o);
     if (st == PX_OK) st = px_thermo_species_G(ws, db, c->hplus, c->o->T, c->o->P, &c->G_h);
     if (st == PX_OK) st = px_thermo_species_G(ws, db, c->elec, c->o->T, c->o->P, &c->G_e);
     if (st != PX_OK)
-        return fail(c->msg, c->msglen, st, "basis species at %.2f K: %s", c->o->T, px_thermo_ws_error(ws));
+        return px_fail(c->msg, c->msglen, st, "basis species at %.2f K: %s", c->o->T, px_thermo_ws_error(ws));
     return PX_OK;
 }
 
@@ -348,14 +328,14 @@ int px_emap_build(px_thermo_ws *ws, const px_db *db, const char *element,
     const px_emap_options *o = opt;
     if (!(isfinite(o->T) && isfinite(o->P)) || o->xaxis == o->yaxis || o->xaxis > PX_AXIS_LOGA ||
         o->yaxis > PX_AXIS_LOGA)
-        return fail(msg, msglen, PX_EINVAL, "bad temperature, pressure or axes");
+        return px_fail(msg, msglen, PX_EINVAL, "bad temperature, pressure or axes");
     int zM = px_element_z(element);
     int zL = o->ligand ? px_element_z(o->ligand) : 0;
-    if (!zM || zM == Z_H || zM == Z_O) return fail(msg, msglen, PX_EINVAL, "unknown element '%s'", element);
+    if (!zM || zM == Z_H || zM == Z_O) return px_fail(msg, msglen, PX_EINVAL, "unknown element '%s'", element);
     if (o->ligand && (!zL || zL == zM || zL == Z_H || zL == Z_O))
-        return fail(msg, msglen, PX_EINVAL, "bad ligand element '%s'", o->ligand);
+        return px_fail(msg, msglen, PX_EINVAL, "bad ligand element '%s'", o->ligand);
     if ((o->xaxis == PX_AXIS_LOGA || o->yaxis == PX_AXIS_LOGA) && !zL)
-        return fail(msg, msglen, PX_EINVAL, "a log a(L) axis needs a ligand element");
+        return px_fail(msg, msglen, PX_EINVAL, "a log a(L) axis needs a ligand element");
 
     ctx c = {o, PX_R * o->T, o->T, 0, 0, 0, NULL, NULL, NULL, msg, msglen};
     int st = basis_species(&c, ws, db);
@@ -374,12 +354,12 @@ int px_emap_build(px_thermo_ws *ws, const px_db *db, const char *element,
     st = collect(&c, ws, db, zM, zL, 0, 0, &cm, &ncm);
     if (st != PX_OK) goto done;
     if (ncm == 0) {
-        st = fail(msg, msglen, PX_ENOTFOUND, "no species of %s in the loaded data", element);
+        st = px_fail(msg, msglen, PX_ENOTFOUND, "no species of %s in the loaded data", element);
         goto done;
     }
     const cand *refM = reference(cm, ncm, zL);
     if (!refM) {
-        st = fail(msg, msglen, PX_ENOTFOUND, "no species of %s without the ligand", element);
+        st = px_fail(msg, msglen, PX_ENOTFOUND, "no species of %s without the ligand", element);
         goto done;
     }
     m->n_candidates = ncm;
@@ -388,7 +368,7 @@ int px_emap_build(px_thermo_ws *ws, const px_db *db, const char *element,
         st = collect(&c, ws, db, zL, 0, zM, 1, &cl, &ncl);
         if (st != PX_OK) goto done;
         if (ncl == 0) {
-            st = fail(msg, msglen, PX_ENOTFOUND, "no species of the ligand %s", o->ligand);
+            st = px_fail(msg, msglen, PX_ENOTFOUND, "no species of the ligand %s", o->ligand);
             goto done;
         }
         const cand *refL = reference(cl, ncl, 0);

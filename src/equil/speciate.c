@@ -53,26 +53,6 @@ px_spec_options px_spec_options_default(void)
     return o;
 }
 
-static int fail(char *msg, size_t n, int st, const char *fmt, ...)
-{
-    if (msg && n) {
-        va_list ap;
-        va_start(ap, fmt);
-        vsnprintf(msg, n, fmt, ap);
-        va_end(ap);
-    }
-    return st;
-}
-
-static int listed(const char *const *list, size_t n, const char *text)
-{
-    for (size_t i = 0; i < n; i++) {
-        px_formula f;
-        if (list[i] && px_formula_parse(list[i], &f) == PX_OK && strcmp(f.text, text) == 0) return 1;
-    }
-    return 0;
-}
-
 void px_spec_free(px_spec *s)
 {
     if (!s) return;
@@ -154,7 +134,7 @@ static int eval_logk(px_spec *s, px_thermo_ws *ws, const px_db *db, double T, do
         double G;
         st = px_thermo_species_G(ws, db, sp, T, P, &G);
         if (st != PX_OK) {
-            fail(msg, msglen, st, "%s at %.2f K: %s", sp->f.text, T, px_thermo_ws_error(ws));
+            px_fail(msg, msglen, st, "%s at %.2f K: %s", sp->f.text, T, px_thermo_ws_error(ws));
             break;
         }
         /* formation from the basis: dG = G_j - sum nu G_b; log K = -dG/(RT ln10) */
@@ -164,7 +144,7 @@ static int eval_logk(px_spec *s, px_thermo_ws *ws, const px_db *db, double T, do
         st = px_equil_system_set_log_k(s->sys, j, logk);
     }
     free(Gb);
-    if (st != PX_OK && msg && !msg[0]) fail(msg, msglen, st, "log K at %.2f K: %s", T, px_strerror(st));
+    if (st != PX_OK && msg && !msg[0]) px_fail(msg, msglen, st, "log K at %.2f K: %s", T, px_strerror(st));
     return st;
 }
 
@@ -173,7 +153,7 @@ int px_spec_set_TP(px_spec *s, px_thermo_ws *ws, const px_db *db, double T, doub
 {
     const px_water_state *w;
     int st = px_thermo_ws_water(ws, T, P, &w);
-    if (st != PX_OK) return fail(msg, msglen, st, "water at %.2f K, %.4g bar: %s", T, P, px_strerror(st));
+    if (st != PX_OK) return px_fail(msg, msglen, st, "water at %.2f K, %.4g bar: %s", T, P, px_strerror(st));
     st = eval_logk(s, ws, db, T, P, msg, msglen);
     if (st == PX_OK) st = set_activity_model(s, w, T, model);
     return st;
@@ -186,7 +166,7 @@ int px_spec_build(px_thermo_ws *ws, const px_db *db, const px_spec_options *o, p
     *out = NULL;
     if (msg && msglen) msg[0] = '\0';
     if (o->n_totals == 0 || o->n_totals > PX_SPEC_MAX_ITEMS - 3)
-        return fail(msg, msglen, PX_EINVAL, "give between 1 and %d element totals", PX_SPEC_MAX_ITEMS - 3);
+        return px_fail(msg, msglen, PX_EINVAL, "give between 1 and %d element totals", PX_SPEC_MAX_ITEMS - 3);
     px_spec *s = calloc(1, sizeof *s);
     if (!s) return PX_ENOMEM;
     size_t nb = o->n_totals + 3;
@@ -197,7 +177,7 @@ int px_spec_build(px_thermo_ws *ws, const px_db *db, const px_spec_options *o, p
     bidx[1] = px_db_index(db, "H^+");
     bidx[2] = px_db_index(db, "e-");
     if (bidx[0] < 0 || bidx[1] < 0 || bidx[2] < 0) {
-        st = fail(msg, msglen, PX_ENOTFOUND, "the database lacks H2O(l), H^+ or e-");
+        st = px_fail(msg, msglen, PX_ENOTFOUND, "the database lacks H2O(l), H^+ or e-");
         goto fail;
     }
     s->elem_z = calloc(nb, sizeof *s->elem_z);
@@ -208,23 +188,23 @@ int px_spec_build(px_thermo_ws *ws, const px_db *db, const px_spec_options *o, p
     for (size_t k = 0; k < o->n_totals; k++) {
         int z = px_element_z(o->element[k]);
         if (!z || z == Z_H || z == Z_O) {
-            st = fail(msg, msglen, PX_EINVAL, "totals: unknown or unsupported element '%s'",
+            st = px_fail(msg, msglen, PX_EINVAL, "totals: unknown or unsupported element '%s'",
                       o->element[k] ? o->element[k] : "?");
             goto fail;
         }
         for (size_t q = 0; q < k; q++)
             if (s->elem_z[q + 3] == z) {
-                st = fail(msg, msglen, PX_EINVAL, "totals: %s given twice", o->element[k]);
+                st = px_fail(msg, msglen, PX_EINVAL, "totals: %s given twice", o->element[k]);
                 goto fail;
             }
         if (!(o->total[k] >= 0) || !isfinite(o->total[k])) {
-            st = fail(msg, msglen, PX_EINVAL, "totals: %s must be a finite number >= 0 mol/kg", o->element[k]);
+            st = px_fail(msg, msglen, PX_EINVAL, "totals: %s must be a finite number >= 0 mol/kg", o->element[k]);
             goto fail;
         }
         s->elem_z[k + 3] = z;
         bidx[k + 3] = o->basis[k] ? px_db_index(db, o->basis[k]) : choose_basis(db, z);
         if (bidx[k + 3] < 0) {
-            st = fail(msg, msglen, PX_ENOTFOUND, "no aqueous basis species for %s%s%s", o->element[k],
+            st = px_fail(msg, msglen, PX_ENOTFOUND, "no aqueous basis species for %s%s%s", o->element[k],
                       o->basis[k] ? ": " : "", o->basis[k] ? o->basis[k] : "");
             goto fail;
         }
@@ -257,7 +237,7 @@ int px_spec_build(px_thermo_ws *ws, const px_db *db, const px_spec_options *o, p
             for (size_t i = 3; i < nb; i++) in |= s->elem_z[i] == z;
             ok = in;
         }
-        if (!ok || listed(o->exclude, o->n_exclude, sp->f.text)) continue;
+        if (!ok || px_formula_listed(o->exclude, o->n_exclude, sp->f.text)) continue;
         if (sp->f.state == PX_STATE_L) continue; /* other liquids than water: not modelled */
         double *nu = s->nu + m * nb;
         if (px_basis_formation(bf, nb, &sp->f, nu, NULL, 0) != PX_OK) continue;
@@ -278,10 +258,10 @@ int px_spec_build(px_thermo_ws *ws, const px_db *db, const px_spec_options *o, p
         case PX_STATE_L: es.phase = PX_EQUIL_WATER; break;
         default: es.phase = PX_EQUIL_AQ; break;
         }
-        if (es.phase == PX_EQUIL_SOLID && (!o->solids || listed(o->suppress, o->n_suppress, sp->f.text)))
+        if (es.phase == PX_EQUIL_SOLID && (!o->solids || px_formula_listed(o->suppress, o->n_suppress, sp->f.text)))
             es.flags |= PX_EQUIL_SUPPRESSED;
         st = px_equil_system_set_species(s->sys, j, &es);
-        if (st != PX_OK) fail(msg, msglen, st, "species %s: %s", sp->f.text, px_strerror(st));
+        if (st != PX_OK) px_fail(msg, msglen, st, "species %s: %s", sp->f.text, px_strerror(st));
     }
     if (st != PX_OK) goto fail;
     st = px_spec_set_TP(s, ws, db, o->T, o->P, o->model, msg, msglen);
@@ -294,7 +274,7 @@ int px_spec_build(px_thermo_ws *ws, const px_db *db, const px_spec_options *o, p
         st = o->ph_mode == PX_SPEC_PH_FIXED ? px_equil_system_set_ph(s->sys, 1, o->pH)
                                             : px_equil_system_set_charge_balance(s->sys, 1);
     if (st != PX_OK) {
-        fail(msg, msglen, st, "pH constraint: %s", px_strerror(st));
+        px_fail(msg, msglen, st, "pH constraint: %s", px_strerror(st));
         goto fail;
     }
     switch (o->redox_mode) {
@@ -303,9 +283,9 @@ int px_spec_build(px_thermo_ws *ws, const px_db *db, const px_spec_options *o, p
     case PX_SPEC_REDOX_GAS: {
         long g = -1;
         for (size_t j = nb; j < m; j++)
-            if (listed(&o->redox_gas, 1, px_db_get(db, (size_t)s->db_index[j])->f.text)) g = (long)j;
+            if (px_formula_listed(&o->redox_gas, 1, px_db_get(db, (size_t)s->db_index[j])->f.text)) g = (long)j;
         if (g < 0) {
-            st = fail(msg, msglen, PX_ENOTFOUND, "redox gas '%s' is not among the species",
+            st = px_fail(msg, msglen, PX_ENOTFOUND, "redox gas '%s' is not among the species",
                       o->redox_gas ? o->redox_gas : "?");
             goto fail;
         }
@@ -315,37 +295,37 @@ int px_spec_build(px_thermo_ws *ws, const px_db *db, const px_spec_options *o, p
     default: st = px_equil_system_set_pe(s->sys, 2, 0.0); break; /* no species depends on it */
     }
     if (st != PX_OK) {
-        fail(msg, msglen, st, "redox constraint: %s", px_strerror(st));
+        px_fail(msg, msglen, st, "redox constraint: %s", px_strerror(st));
         goto fail;
     }
     /* fixed gas fugacities replace the balance of the element they carry */
     for (size_t q = 0; q < o->n_gases; q++) {
         long g = -1;
         for (size_t j = nb; j < m; j++)
-            if (listed(&o->gas[q], 1, px_db_get(db, (size_t)s->db_index[j])->f.text)) g = (long)j;
+            if (px_formula_listed(&o->gas[q], 1, px_db_get(db, (size_t)s->db_index[j])->f.text)) g = (long)j;
         if (g < 0) {
-            st = fail(msg, msglen, PX_ENOTFOUND, "gas '%s' is not among the species", o->gas[q]);
+            st = px_fail(msg, msglen, PX_ENOTFOUND, "gas '%s' is not among the species", o->gas[q]);
             goto fail;
         }
         size_t comp = 0;
         for (size_t i = 3; i < nb && !comp; i++)
             if (fabs(s->nu[(size_t)g * nb + i]) > PX_SPEC_NU_EPS) comp = i;
         if (!comp) {
-            st = fail(msg, msglen, PX_EINVAL, "gas '%s' carries none of the elements with totals", o->gas[q]);
+            st = px_fail(msg, msglen, PX_EINVAL, "gas '%s' carries none of the elements with totals", o->gas[q]);
             goto fail;
         }
         st = px_equil_system_set_fugacity(s->sys, comp, (size_t)g, o->gas_log_f[q]);
         if (st != PX_OK) {
-            fail(msg, msglen, st, "fugacity of %s: %s", o->gas[q], px_strerror(st));
+            px_fail(msg, msglen, st, "fugacity of %s: %s", o->gas[q], px_strerror(st));
             goto fail;
         }
     }
     for (size_t q = 0; q < o->n_fixed; q++) {
         size_t comp = 0;
         for (size_t i = 3; i < nb; i++)
-            if (listed(&o->fixed[q], 1, bf[i]->text)) comp = i;
+            if (px_formula_listed(&o->fixed[q], 1, bf[i]->text)) comp = i;
         if (!comp) {
-            st = fail(msg, msglen, PX_EINVAL, "fixed activity: %s is not a basis species", o->fixed[q]);
+            st = px_fail(msg, msglen, PX_EINVAL, "fixed activity: %s is not a basis species", o->fixed[q]);
             goto fail;
         }
         st = px_equil_system_set_log_activity(s->sys, comp, o->fixed_log_a[q]);

@@ -401,31 +401,30 @@ static int l_water(lua_State *L)
     return 1;
 }
 
-/* core.psat(T) -> bar | nil, message */
-static int l_psat(lua_State *L)
+/* A function of T (K) giving a pressure (bar), as (P) or (nil, message). */
+static int push_pressure_of_T(lua_State *L, int (*fn)(double, double *), const char *what)
 {
     double T = luaL_checknumber(L, 1), P;
-    int st = px_water_psat(T, &P);
+    int st = fn(T, &P);
     if (st != PX_OK) {
         luaL_pushfail(L);
-        lua_pushfstring(L, "saturation pressure at %f K: %s", T, px_strerror(st));
+        lua_pushfstring(L, "%s at %f K: %s", what, T, px_strerror(st));
         return 2;
     }
     lua_pushnumber(L, P);
     return 1;
 }
 
+/* core.psat(T) -> bar | nil, message */
+static int l_psat(lua_State *L)
+{
+    return push_pressure_of_T(L, px_water_psat, "saturation pressure");
+}
+
+/* core.default_pressure(T) -> bar (1 bar, or psat above the boiling point) */
 static int l_default_pressure(lua_State *L)
 {
-    double T = luaL_checknumber(L, 1), P;
-    int st = px_thermo_default_pressure(T, &P);
-    if (st != PX_OK) {
-        luaL_pushfail(L);
-        lua_pushfstring(L, "no default pressure at %f K: %s", T, px_strerror(st));
-        return 2;
-    }
-    lua_pushnumber(L, P);
-    return 1;
+    return push_pressure_of_T(L, px_thermo_default_pressure, "default pressure");
 }
 
 /* core.formula(text) -> table | nil, message */

@@ -373,3 +373,13 @@ int px_formula_parse(const char *text, px_formula *out)
 {
     return px_formula_parse_msg(text, out, NULL, 0);
 }
+
+int px_formula_listed(const char *const *list, size_t n, const char *canonical)
+{
+    for (size_t i = 0; i < n; i++) {
+        px_formula f;
+        if (list && list[i] && px_formula_parse(list[i], &f) == PX_OK && strcmp(f.text, canonical) == 0)
+            return 1;
+    }
+    return 0;
+}

@@ -35,6 +35,9 @@ int px_formula_parse_msg(const char *text, px_formula *out, char *msg, size_t ms
 /* g/mol with IUPAC 2021 standard atomic weights; NAN if an element has no
  * standard atomic weight (e.g. Tc, Pm, Po..Ac, Np and beyond). */
 double px_formula_molar_mass(const px_formula *f);
+/* 1 if any entry of list[0..n-1] (formulas as a user writes them, NULL
+ * entries skipped) parses to the canonical text `canonical`. */
+int px_formula_listed(const char *const *list, size_t n, const char *canonical);
 /* Atoms of element z in f (0 if absent). */
 double px_formula_count(const px_formula *f, int z);
 
