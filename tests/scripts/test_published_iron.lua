@@ -1,0 +1,47 @@
+-- test_published_iron.lua: iron maps against the published revised
+-- potential-pH diagrams for iron at 25-300 C (Beverskog and Puigdomenech
+-- 1996, Corrosion Science 38, 2121-2135; abstract read): "A corrosion
+-- region between iron and magnetite exists at all temperatures in high
+-- purity water (10^-8 m), due to the hydrolysis products of iron(II)."
+--
+-- Asserted here: 25 C, where phlox's data carry the Fe(II) hydrolysis
+-- constants of Baes and Mesmer 1976.  Above 25 C phlox does NOT yet
+-- reproduce the published feature: Fe(OH)2(aq) and Fe(OH)3^- have no
+-- reaction enthalpy in stdlib/elements/Fe.lua, so their log K stays at the
+-- 25 C value while the published diagrams extrapolate them with the revised
+-- HKF model; from 60 C on phlox shows iron touching magnetite.  The test
+-- prints that status for every temperature so the gap stays visible, and
+-- docs/other-diagrams.md records it as an open finding.
+local phlox = require "phlox"
+local function check(cond, msg) if not cond then error(msg, 2) end end
+
+local lib = phlox.library { "Fe" }
+local function gap(T_C)
+  local m = phlox.map { library = lib, element = "Fe", T_C = T_C, activity = 1e-8 }
+  for _, b in ipairs(m.boundaries) do
+    local x, y = b.between[1], b.between[2]
+    if (x == "Fe(s)" and y:find("^Fe3O4")) or (y == "Fe(s)" and x:find("^Fe3O4")) then
+      return false, m
+    end
+  end
+  return true, m
+end
+
+local ok25, m25 = gap(25)
+check(ok25, "at 25 C and 1e-8 m a dissolved Fe(II) field must separate Fe(s) from magnetite")
+-- the separating field is a dissolved iron(II) species (a hydrolysis product)
+local between = {}
+for _, b in ipairs(m25.boundaries) do
+  if b.between[1] == "Fe(s)" then between[b.between[2]] = true end
+  if b.between[2] == "Fe(s)" then between[b.between[1]] = true end
+end
+local hydrolysis = false
+for s in pairs(between) do hydrolysis = hydrolysis or s:match("^Fe%(OH%)") ~= nil or s == "FeOH^+" end
+check(hydrolysis, "an Fe(II) hydrolysis species borders iron at 25 C")
+
+for _, T in ipairs { 60, 100, 150, 200, 250, 300 } do
+  local ok = gap(T)
+  io.write(("%3d C: corrosion region between Fe and Fe3O4 at 1e-8 m: %s%s\n"):format(
+    T, ok and "yes" or "no", ok and "" or "  (published: yes; open finding, see docs/other-diagrams.md)"))
+end
+print("test_published_iron: all asserted checks passed")
