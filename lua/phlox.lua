@@ -257,6 +257,39 @@ function phlox.speciate(opts)
   return r
 end
 
+--- A rigorous map: the speciation solver at every node of a pH-E grid
+-- (mass balance of the element and of a ligand, activity coefficients,
+-- solids), boundaries traced between nodes and refined by bisection.  A
+-- node is marked by the element's precipitated solid, else by the
+-- dissolved species holding most of it.
+--   phlox.grid_map { library = lib, element = "Cu", T_C = 25, total = 1e-6,
+--                    ligand = "Cl", ligand_total = 1e-2, n = 201,
+--                    pH_range = {0, 14}, E_range = {-2, 2},
+--                    activity = "davies", threads = 2 }
+-- Returns a map table with `boundaries` (polylines between named species),
+-- `fields` = {} (no polygons: draw it with phlox.plot.overlay next to an
+-- exact map), `labels` (node labels), `species` and solver statistics.
+function phlox.grid_map(opts)
+  assert(type(opts) == "table", "phlox.grid_map: options table expected")
+  local lib = opts.library
+  if getmetatable(lib) ~= phlox.Library then error("phlox.grid_map: library = phlox.library{...} expected", 2) end
+  local T = temperature(opts, "phlox.grid_map")
+  local P = pressure(opts, T, "phlox.grid_map")
+  local pr, er = opts.pH_range or { 0, 14 }, opts.E_range or { -2, 2 }
+  local g, err = core.grid_map(lib.db, {
+    element = opts.element, T = T, P = P, window = { pr[1], pr[2], er[1], er[2] },
+    nx = opts.nx or opts.n or 101, ny = opts.ny or opts.n or 101,
+    total = opts.total, ligand = opts.ligand, ligand_total = opts.ligand_total,
+    activity = opts.activity, background_nacl = opts.background_nacl,
+    exclude = opts.exclude, threads = opts.threads })
+  if not g then error(err, 2) end
+  g.fields = {}
+  g.conditions = { T_C = T - T0C, P_bar = P, total = opts.total or 1e-6,
+                   ligand = opts.ligand, ligand_total = opts.ligand and (opts.ligand_total or 1e-3) or nil }
+  g.label = "rigorous"
+  return g
+end
+
 --- The species of the map at a point, e.g. phlox.locate(map, 7.0, -0.4).
 function phlox.locate(map, x, y)
   for _, f in ipairs(map.fields) do

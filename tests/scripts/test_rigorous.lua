@@ -72,4 +72,12 @@ for _, s in ipairs(g1.species) do cucl = cucl or s:find("^CuCl") ~= nil end
 check(cucl, "a copper chloro complex predominates somewhere at 1e-2 mol/kg chloride")
 compare({ "Cu" }, "Cu", 25, 57, 41)
 compare({ "Zn" }, "Zn", 200, 43, 31)
+-- the Lua wrapper: a map table that phlox.plot can overlay on the exact map
+local gm = phlox.grid_map { library = cl, element = "Cu", T_C = 25, total = 1e-6, ligand = "Cl",
+                            ligand_total = 1e-2, n = 41, threads = 2 }
+check(#gm.boundaries > 0 and gm.failures == 0 and #gm.fields == 0, "phlox.grid_map result")
+for _, b in ipairs(gm.boundaries) do check(#b.x == #b.y and #b.x >= 2, "boundary polyline") end
+local exact = phlox.map { library = cl, element = "Cu", T_C = 25, ligand = "Cl", ligand_activity = 1e-2 }
+local svg = require("phlox.plot").overlay({ exact, gm }):render("svg")
+check(svg:find("<svg", 1, true) and svg:find("rigorous", 1, true), "overlay of exact and rigorous maps")
 print("test_rigorous: all checks passed")
