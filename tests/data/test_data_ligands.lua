@@ -6,7 +6,8 @@
 --     lua5.4 tests/data/test_data_ligands.lua [reference_dir]
 -- reference_dir defaults to ../shared/reference. Exits non-zero when a check
 -- fails. Plain Lua 5.4; loads the files in a small sandbox of its own (the
--- pure helpers FORMAT.md promises), so it runs without the phlox binary.
+-- pure helpers FORMAT.md promises; tests/data/common.lua, shared with the other
+-- data checks), so it runs without the phlox binary.
 --
 -- What is checked (each check prints its source and tolerance):
 --   1. structure: required fields, models, units, unique formulas, formula
@@ -31,152 +32,34 @@
 
 local refdir = arg[1] or "../shared/reference"
 
+local C = dofile((arg[0]:match("^(.*)[/\\]") or ".") .. "/common.lua")
+
 -- Constants: CODATA 2018 (R, F); 298.15 K reference temperature.
-local R = 8.314462618      -- J/(mol K)
-local FARADAY = 96485.33212 -- C/mol
-local T0 = 298.15
-local LN10 = math.log(10)
+local R = C.R              -- J/(mol K)
+local FARADAY = C.F         -- C/mol
+local T0 = C.T0
+local LN10 = C.LN10
 local RTLN10 = R * T0 * LN10 / 1000 -- kJ/mol per log unit
-local CAL = 4.184                   -- J per thermochemical calorie
+local CAL = C.CAL                   -- J per thermochemical calorie
 
-local n_pass, n_fail, n_skip = 0, 0, 0
-local failures = {}
-local function pass(msg) n_pass = n_pass + 1; print("  ok    " .. msg) end
-local function fail(msg) n_fail = n_fail + 1; failures[#failures + 1] = msg; print("  FAIL  " .. msg) end
-local function check(cond, msg) if cond then pass(msg) else fail(msg) end end
+local rep = C.reporter({ PASS = "  ok    ", FAIL = "  FAIL  ", SKIP = "  skip  " })
+local pass, fail, check = rep.pass, rep.fail, rep.check
+local function skip(msg) rep.emit("SKIP", msg) end
 
--- ---------------------------------------------------------------- sandboxed loading
-local function sandbox_env()
-  return {
-    math = math,
-    string = { format = string.format, sub = string.sub, upper = string.upper,
-               lower = string.lower, rep = string.rep },
-    table = { insert = table.insert, concat = table.concat },
-    pairs = pairs, ipairs = ipairs, tonumber = tonumber, tostring = tostring,
-    type = type, error = error,
-  }
-end
-
-local function load_def(path)
-  local fh = io.open(path, "r")
-  if not fh then return nil, "cannot open " .. path end
-  local text = fh:read("a"); fh:close()
-  local chunk, err = load(text, "@" .. path, "t", sandbox_env())
-  if not chunk then return nil, err end
-  local ok, res = pcall(chunk)
-  if not ok then return nil, res end
-  return res
-end
-
--- ---------------------------------------------------------------- formulas
-local function parse_group(s, i, mult, out)
-  while i <= #s do
-    local c = s:sub(i, i)
-    if c == "(" then
-      local inner = {}
-      i = parse_group(s, i + 1, 1, inner)
-      assert(s:sub(i, i) == ")", "unbalanced parenthesis in " .. s)
-      i = i + 1
-      local num = s:match("^%d+", i)
-      local n = 1
-      if num then n = tonumber(num); i = i + #num end
-      for el, k in pairs(inner) do out[el] = (out[el] or 0) + k * n * mult end
-    elseif c == ")" then
-      return i
-    else
-      local el = s:match("^%u%l?", i)
-      assert(el, "bad formula text '" .. s .. "' at " .. i)
-      i = i + #el
-      local num = s:match("^%d+", i)
-      local n = 1
-      if num then n = tonumber(num); i = i + #num end
-      out[el] = (out[el] or 0) + n * mult
-    end
-  end
-  return i
-end
-
-local STATES = { aq = true, s = true, cr = true, am = true, l = true, g = true }
-
--- returns elements table, charge, state
+-- Sandboxed loading, formula parsing (state "aq" unless a state is written) and CSV
+-- reading: tests/data/common.lua.
+local load_def, read_csv = C.load_definition, C.read_csv
 local function parse_formula(f)
-  if f == "e-" then return {}, -1, "e" end
-  local s, charge = f, 0
-  local num, sign = s:match("%^(%d*)([%+%-])$")
-  if sign then
-    charge = (num == "" and 1 or tonumber(num)) * (sign == "+" and 1 or -1)
-    s = s:gsub("%^%d*[%+%-]$", "")
-  end
-  local state = "aq"
-  local st = s:match("%((%a[^()]*)%)$")
-  if st and STATES[st:match("^(%a+)")] then
-    state = st:match("^(%a+)")
-    s = s:sub(1, #s - #st - 2)
-  end
-  local counts = {}
-  for part in (s .. "*"):gmatch("([^*]*)%*") do
-    local m, rest = part:match("^(%d+)(%u.*)$")
-    local mult = 1
-    if m then mult = tonumber(m); part = rest end
-    local i = parse_group(part, 1, mult, counts)
-    assert(i > #part, "trailing text in " .. f)
-  end
-  return counts, charge, state
+  local counts, charge, state = C.parse_formula(f)
+  return counts, charge, state or "aq"
 end
 
--- ---------------------------------------------------------------- reactions
-local function parse_side(side)
-  local terms = {}
-  for term in (side .. " + "):gmatch("(.-) %+ ") do
-    term = term:match("^%s*(.-)%s*$")
-    local c, sp = term:match("^(%d+%.?%d*)%s+(%S+)$")
-    if c then terms[#terms + 1] = { tonumber(c), sp } else terms[#terms + 1] = { 1, term } end
-  end
-  return terms
-end
-
+-- Reaction text -> terms { f = formula, nu = signed coefficient }, or nil when the
+-- text does not read as a reaction.
 local function parse_reaction(text)
-  local l, r = text:match("^(.-)%s+=%s+(.-)$")
-  if not l then return nil end
-  return parse_side(l), parse_side(r)
-end
-
--- ---------------------------------------------------------------- CSV
-local function csv_split(line)
-  local out, field, inq = {}, {}, false
-  local i = 1
-  while i <= #line do
-    local c = line:sub(i, i)
-    if inq then
-      if c == '"' then
-        if line:sub(i + 1, i + 1) == '"' then field[#field + 1] = '"'; i = i + 1 else inq = false end
-      else field[#field + 1] = c end
-    elseif c == '"' then inq = true
-    elseif c == "," then out[#out + 1] = table.concat(field); field = {}
-    else field[#field + 1] = c end
-    i = i + 1
-  end
-  out[#out + 1] = table.concat(field)
-  return out
-end
-
-local function read_csv(path)
-  local fh = assert(io.open(path, "r"), "cannot open " .. path)
-  local header, rows = nil, {}
-  for line in fh:lines() do
-    line = line:gsub("\r$", "")
-    if line ~= "" then
-      local f = csv_split(line)
-      if not header then header = f
-      else
-        local row = {}
-        for k, name in ipairs(header) do row[name] = f[k] end
-        rows[#rows + 1] = row
-      end
-    end
-  end
-  fh:close()
-  return rows
+  local ok, terms = pcall(C.parse_reaction, text)
+  if ok then return terms end
+  return nil
 end
 
 -- gibbs_25C.csv names ("Zn+2", "SO4-2", "CaSO4.2H2O", state "cr") to phlox formulas
@@ -215,10 +98,8 @@ local S_NBS = {
 -- ---------------------------------------------------------------- load the six files
 local FILES = { "Cl", "S", "C", "N", "P", "F" }
 local species, order, count = {}, {}, {}
-local ENERGY = { kJ = 1, J = 1e-3, kcal = CAL, cal = CAL * 1e-3 } -- to kJ
-local ENTROPY = { J = 1, cal = CAL }                              -- to J/(mol K)
-local MODELS = { hkf = true, cp = true, logk = true }
-local QUALITY = { high = true, medium = true, low = true }
+local ENERGY, ENTROPY = C.ENERGY, C.ENTROPY -- to kJ, to J/(mol K)
+local MODELS, QUALITY = C.MODELS, C.QUALITY
 local WATER = { ["H2O(l)"] = true, ["H^+"] = true, ["OH^-"] = true, ["O2(g)"] = true,
                 ["H2(g)"] = true, ["O2(aq)"] = true, ["H2(aq)"] = true, ["H2O2(aq)"] = true }
 
@@ -258,7 +139,7 @@ for _, el in ipairs(FILES) do
       if sp.model == "hkf" then
         if state ~= "aq" then problems[#problems + 1] = "hkf for a non-aqueous species" end
         if sp.hkf then
-          for _, k in ipairs({ "a1", "a2", "a3", "a4", "c1", "c2", "omega" }) do
+          for _, k in ipairs(C.HKF_KEYS) do
             if type(sp.hkf[k]) ~= "number" then problems[#problems + 1] = "hkf." .. k .. " missing" end
           end
         elseif not (sp.estimate and type(sp.estimate.Cp) == "number") then
@@ -269,27 +150,17 @@ for _, el in ipairs(FILES) do
       if type(sp.reaction) ~= "string" then problems[#problems + 1] = "reaction missing"
       elseif type(sp.logK) ~= "number" and type(sp.logK_T) ~= "table" then problems[#problems + 1] = "logK missing"
       else
-        local lhs, rhs = parse_reaction(sp.reaction)
-        if not lhs then problems[#problems + 1] = "reaction does not parse"
+        local terms = parse_reaction(sp.reaction)
+        if not terms then problems[#problems + 1] = "reaction does not parse"
         else
-          local n_self, bal, q = 0, {}, 0
-          for sgn, side in pairs({ [-1] = lhs, [1] = rhs }) do
-            for _, t in ipairs(side) do
-              if t[2] == sp.formula then n_self = n_self + 1 end
-              local ok2, e2, c2 = pcall(parse_formula, t[2])
-              if not ok2 then problems[#problems + 1] = "term " .. t[2] .. " does not parse"
-              else
-                for k, v in pairs(e2) do bal[k] = (bal[k] or 0) + sgn * t[1] * v end
-                q = q + sgn * t[1] * c2
-              end
-            end
-          end
+          local bal, q, n_self, unparsed = C.balance(terms, sp.formula)
+          for _, t in ipairs(unparsed) do problems[#problems + 1] = "term " .. t.f .. " does not parse" end
           if n_self ~= 1 then problems[#problems + 1] = "species appears " .. n_self .. " times in its reaction" end
           for k, v in pairs(bal) do
             if math.abs(v) > 1e-9 then problems[#problems + 1] = "reaction unbalanced in " .. k end
           end
           if math.abs(q) > 1e-9 then problems[#problems + 1] = "reaction unbalanced in charge" end
-          rec.lhs, rec.rhs = lhs, rhs
+          rec.terms = terms
           rec.dH = sp.dH and sp.dH * eu or nil
         end
       end
@@ -374,20 +245,18 @@ local function resolve(setname)
     progress = false
     for _, f in ipairs(order) do
       local r = species[f]
-      if G[f] == nil and r.model == "logk" and r.lhs then
+      if G[f] == nil and r.model == "logk" and r.terms then
         local logK = r.raw.logK
         if logK == nil then
           local k = r.raw.logK_T
           logK = k[1] + k[2] * T0 + k[3] / T0 + k[4] * math.log(T0, 10) + k[5] / T0^2
         end
         local sum, coef, ok = 0, 0, true
-        for sgn, side in pairs({ [-1] = r.lhs, [1] = r.rhs }) do
-          for _, t in ipairs(side) do
-            if t[2] == f then coef = sgn * t[1]
-            else
-              local g = lookup(t[2])
-              if g == nil then ok = false else sum = sum + sgn * t[1] * g end
-            end
+        for _, t in ipairs(r.terms) do
+          if t.f == f then coef = t.nu
+          else
+            local g = lookup(t.f)
+            if g == nil then ok = false else sum = sum + t.nu * g end
           end
         end
         if ok then
@@ -415,18 +284,16 @@ end
 
 -- dGr and log K of a reaction text under an ion set
 local function reaction_dG(text, setname)
-  local lhs, rhs = parse_reaction(text)
-  if not lhs then return nil end
+  local terms = parse_reaction(text)
+  if not terms then return nil end
   local lookup = lookup_sets[setname]
   local sum, ne = 0, 0
-  for sgn, side in pairs({ [-1] = lhs, [1] = rhs }) do
-    for _, t in ipairs(side) do
-      if t[2] == "e-" then ne = ne - sgn * t[1]
-      else
-        local g = lookup(t[2])
-        if g == nil then return nil, t[2] end
-        sum = sum + sgn * t[1] * g
-      end
+  for _, t in ipairs(terms) do
+    if t.f == "e-" then ne = ne - t.nu
+    else
+      local g = lookup(t.f)
+      if g == nil then return nil, t.f end
+      sum = sum + t.nu * g
     end
   end
   return sum, ne
@@ -434,13 +301,11 @@ end
 
 -- which reference rows involve the ligand files at all
 local function involves_file_species(text)
-  local lhs, rhs = parse_reaction(text)
-  if not lhs then return false end
-  for _, side in ipairs({ lhs, rhs }) do
-    for _, t in ipairs(side) do
-      local f = ALIAS[t[2]] or t[2]
-      if species[f] or COMPOSITE[f] then return true end
-    end
+  local terms = parse_reaction(text)
+  if not terms then return false end
+  for _, t in ipairs(terms) do
+    local f = ALIAS[t.f] or t.f
+    if species[f] or COMPOSITE[f] then return true end
   end
   return false
 end
@@ -501,8 +366,6 @@ end
 -- ---------------------------------------------------------------- 3. HKF records
 print("\n3. HKF records vs shared/reference/hkf/hkf_parameters.csv (identical numbers); Cp/V at 25 C with the papers' Born functions (Q = 5.903e-7 /bar, X = -3.09e-7 /K^2, from the reference README) vs published Cp/V: tolerance 1 cal/(mol K), 0.5 cm3/mol (reference README)")
 do
-  local THETA, PSI = 228, 2600
-  local Q, X = 5.903e-7, -3.09e-7
   for _, f in ipairs(order) do
     local r = species[f]
     if r.model == "hkf" then
@@ -514,17 +377,13 @@ do
         local same = math.abs(sp.G - tonumber(row.dGf_cal_mol)) < 1e-9 and math.abs(sp.H - tonumber(row.dHf_cal_mol)) < 1e-9
                      and math.abs(sp.S - tonumber(row.S_cal_molK)) < 1e-9
         if sp.hkf then
-          for _, k in ipairs({ "a1", "a2", "a3", "a4", "c1", "c2", "omega" }) do
+          for _, k in ipairs(C.HKF_KEYS) do
             if math.abs(sp.hkf[k] - tonumber(row[k])) > 1e-9 then same = false end
           end
         end
         check(same, f .. ": G, H, S" .. (sp.hkf and " and a1..omega" or "") .. " identical to the reference table row (" .. row.confidence .. ")")
         if sp.hkf then
-          local a1, a2, a3, a4 = sp.hkf.a1 / 10, sp.hkf.a2 * 100, sp.hkf.a3, sp.hkf.a4 * 1e4
-          local c1, c2, w = sp.hkf.c1, sp.hkf.c2 * 1e4, sp.hkf.omega * 1e5
-          local P = 1
-          local V = (a1 + a2 / (PSI + P) + (a3 + a4 / (PSI + P)) / (T0 - THETA) - w * Q) * 41.84
-          local Cp = c1 + c2 / (T0 - THETA)^2 + w * T0 * X
+          local Cp, V = C.hkf_cp_v_25C(sp.hkf) -- theta = 228 K, psi = 2600 bar, Q and X as printed above
           local Cp_pub, V_pub = tonumber(row.Cp_25C_cal_molK), tonumber(row.V_25C_cm3_mol)
           if Cp_pub then
             check(math.abs(Cp - Cp_pub) <= 1.0, string.format("%-10s Cp 25 C %8.2f vs published %8.2f cal/(mol K)", f, Cp, Cp_pub))
@@ -559,8 +418,7 @@ for _, row in ipairs(read_csv(refdir .. "/log_k_25C.csv")) do
   if involves_file_species(rx) then
     local dG, missing = reaction_dG(rx, "NBS")
     if dG == nil then
-      n_skip = n_skip + 1
-      print("  skip  " .. rx .. " (no value for " .. tostring(missing) .. ")")
+      skip(rx .. " (no value for " .. tostring(missing) .. ")")
     else
       local logK = -dG / RTLN10
       local ref = tonumber(row.log10_K_25C)
@@ -587,8 +445,7 @@ for _, row in ipairs(read_csv(refdir .. "/standard_potentials.csv")) do
   if involves_file_species(rx) then
     local dG, ne = reaction_dG(rx, "NBS")
     if dG == nil then
-      n_skip = n_skip + 1
-      print("  skip  " .. rx .. " (no value for " .. tostring(ne) .. ")")
+      skip(rx .. " (no value for " .. tostring(ne) .. ")")
     else
       local E = -dG * 1000 / (ne * FARADAY)
       local ref = tonumber(row.E0_V_SHE_25C)
@@ -664,7 +521,7 @@ do
     local r = species[f]
     local cp = r.raw.cp
     if r.model == "cp" and cp then
-      local v = cp.a + (cp.b or 0) * T0 + (cp.c or 0) / T0^2 + (cp.d or 0) / math.sqrt(T0) + (cp.e or 0) * T0^2
+      local v = C.cp_poly(cp, T0)
       local ref, src = csv_cp[f], "gibbs_25C.csv"
       if not ref then ref, src = NBS_CP[f], "recalled NBS" end
       local is_fit = (cp.b or 0) ~= 0 or (cp.c or 0) ~= 0
@@ -673,8 +530,7 @@ do
           check(math.abs(v - ref) <= 0.025 * ref, string.format("%-28s Cp %7.2f vs %7.2f (%s)", f, v, ref, src))
         end
       elseif is_fit then
-        n_skip = n_skip + 1
-        print(string.format("  skip  %-28s Cp fit %7.2f: no NBS Cp to compare", f, v))
+        skip(string.format("%-28s Cp fit %7.2f: no NBS Cp to compare", f, v))
       end
     end
   end
@@ -696,10 +552,5 @@ print("\nspecies per file:")
 local total = 0
 for _, el in ipairs(FILES) do print(string.format("  %-3s %3d", el, count[el] or 0)); total = total + (count[el] or 0) end
 print(string.format("  all %3d", total))
-print(string.format("\nchecks: %d passed, %d failed, %d skipped", n_pass, n_fail, n_skip))
-if n_fail > 0 then
-  print("failed:")
-  for _, m in ipairs(failures) do print("  " .. m) end
-  os.exit(1)
-end
-os.exit(0)
+print(string.format("\nchecks: %d passed, %d failed, %d skipped", rep.count.PASS, rep.count.FAIL, rep.count.SKIP))
+rep.finish("failed:")

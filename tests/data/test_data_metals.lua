@@ -24,10 +24,12 @@
 -- show and why (docs/data/other-metals.md); such a check still fails if the deviation
 -- moves by more than its tolerance.
 
-local R = 8.314462618e-3        -- kJ/(mol K), CODATA 2018
+local C = dofile((arg[0]:match("^(.*)[/\\]") or ".") .. "/common.lua")
+
+local R = C.R / 1000            -- kJ/(mol K), CODATA 2018
 local F = 96.48533212           -- kJ/(V mol), CODATA 2018
-local T0 = 298.15
-local LN10 = math.log(10)
+local T0 = C.T0
+local LN10 = C.LN10
 local RTLN10 = R * T0 * LN10    -- 5.70801 kJ/mol
 
 local TOL_E = 0.010             -- V, data brief
@@ -36,12 +38,6 @@ local TOL_CYCLE = 1.5           -- kJ/mol, data brief
 local TOL_CP = 1.0              -- J/(mol K), common practice, no source
 local TOL_HKF_CP = 1.0          -- cal/(mol K), hkf/README.md
 local TOL_HKF_V = 0.5           -- cm3/mol, hkf/README.md
-
--- Born functions at 25 C, 1 bar as quoted in the HKF papers (hkf/README.md): the c1, c2
--- of the papers were regressed with these.
-local BORN_Q = 5.903e-7         -- 1/bar
-local BORN_X = -3.09e-7         -- 1/K^2
-local THETA, PSI = 228.0, 2600.0 -- K, bar (Tanger and Helgeson 1988)
 
 -- Element entropies of the reference states per atom, J/(mol K): from memory of CODATA
 -- 1989 (Cox, Wagman and Medvedev); Mo (not a CODATA key element) from the NBS tables.
@@ -60,153 +56,14 @@ local root = script_dir .. "/../.."
 local refdir = arg and arg[1] or (root .. "/../shared/reference")
 
 ---------------------------------------------------------------------------- report
-local n_pass, n_fail, n_doc, n_skip = 0, 0, 0, 0
-local failures = {}
-local function pass(msg) n_pass = n_pass + 1; print("PASS  " .. msg) end
-local function fail(msg) n_fail = n_fail + 1; failures[#failures + 1] = msg; print("FAIL  " .. msg) end
-local function doc(msg) n_doc = n_doc + 1; print("DOC   " .. msg) end
-local function skip(msg) n_skip = n_skip + 1; print("SKIP  " .. msg) end
+local rep = C.reporter({ PASS = "PASS  ", FAIL = "FAIL  ", DOC = "DOC   ", SKIP = "SKIP  " })
+local pass, fail, doc, skip = rep.pass, rep.fail, function(msg) rep.emit("DOC", msg) end,
+  function(msg) rep.emit("SKIP", msg) end
 
----------------------------------------------------------------------------- sandbox
--- The files are data, so they run with pure helpers only (FORMAT.md) and a bounded
--- instruction count.
-local function sandbox_env()
-  return {
-    math = math,
-    string = { format = string.format, sub = string.sub, upper = string.upper,
-               lower = string.lower, rep = string.rep },
-    table = { insert = table.insert, concat = table.concat },
-    pairs = pairs, ipairs = ipairs, tonumber = tonumber, tostring = tostring,
-    type = type, error = error,
-  }
-end
-
-local function load_definition(path)
-  local fh = io.open(path, "r")
-  if not fh then return nil, "cannot open " .. path end
-  local text = fh:read("a"); fh:close()
-  local chunk, err = load(text, "@" .. path, "t", sandbox_env())
-  if not chunk then return nil, err end
-  local co = coroutine.create(chunk)
-  debug.sethook(co, function() error("instruction budget exceeded") end, "", 1000000)
-  local ok, res = coroutine.resume(co)
-  if not ok then return nil, res end
-  if type(res) ~= "table" then return nil, "file does not return a table" end
-  return res
-end
-
----------------------------------------------------------------------------- formulas
--- Parse phlox notation into element counts and charge ("Al13O4(OH)24^7+",
--- "AlO(OH)(s,boehmite)", "CaSO4.2H2O(s,gypsum)", "e-").
-local STATES = { aq = true, s = true, cr = true, am = true, l = true, g = true }
-
-local function parse_formula(f)
-  if f == "e-" then return { }, -1, "e" end
-  local body, charge, state = f, 0, nil
-  local last = body:match("%(([^()]*)%)$")
-  if last then
-    local st = last:match("^(%a+)")
-    if st and STATES[st] and (last == st or last:sub(#st + 1, #st + 1) == ",") then
-      state = st
-      body = body:sub(1, #body - #last - 2)
-    end
-  end
-  local core, q, sign = body:match("^(.-)%^(%d*)([%+%-])$")
-  if core then
-    charge = (tonumber(q) or 1) * (sign == "+" and 1 or -1)
-    body = core
-    state = state or "aq"
-  end
-  local counts = {}
-  local function add(into, el, n) into[el] = (into[el] or 0) + n end
-  local function parse_group(s, pos)
-    local grp = {}
-    while pos <= #s do
-      local c = s:sub(pos, pos)
-      if c == "(" then
-        local inner; inner, pos = parse_group(s, pos + 1)
-        local d = s:match("^%d+", pos); local m = tonumber(d) or 1
-        pos = pos + (d and #d or 0)
-        for el, n in pairs(inner) do add(grp, el, n * m) end
-      elseif c == ")" then
-        return grp, pos + 1
-      else
-        local el = s:match("^%u%l?", pos)
-        if not el then error("bad formula '" .. f .. "' at '" .. s:sub(pos) .. "'") end
-        pos = pos + #el
-        local d = s:match("^%d+", pos); local m = tonumber(d) or 1
-        pos = pos + (d and #d or 0)
-        add(grp, el, m)
-      end
-    end
-    return grp, pos
-  end
-  for part in body:gmatch("[^%*%.]+") do
-    local mult, rest = part:match("^(%d+)(.*)$")
-    mult = tonumber(mult) or 1; rest = rest or part
-    local grp = parse_group(rest, 1)
-    for el, n in pairs(grp) do add(counts, el, n * mult) end
-  end
-  return counts, charge, state
-end
-
--- "a A + b B = c C + d D" -> list of { formula, nu } with products positive.
-local function parse_reaction(text)
-  local lhs, rhs = text:match("^(.-)%s+=%s+(.-)$")
-  if not lhs then error("reaction without ' = ': " .. text) end
-  local terms = {}
-  local function side(s, sign)
-    for term in (s .. " + "):gmatch("(.-)%s+%+%s+") do
-      term = term:gsub("^%s+", ""):gsub("%s+$", "")
-      local coef, sp = term:match("^([%d%.]+)%s+(.+)$")
-      if not coef then coef, sp = "1", term end
-      terms[#terms + 1] = { sp, sign * tonumber(coef) }
-    end
-  end
-  side(lhs, -1); side(rhs, 1)
-  return terms
-end
-
----------------------------------------------------------------------------- CSV
-local function parse_csv_line(line)
-  local out, field, i, inq = {}, {}, 1, false
-  while i <= #line do
-    local c = line:sub(i, i)
-    if inq then
-      if c == '"' then
-        if line:sub(i + 1, i + 1) == '"' then field[#field + 1] = '"'; i = i + 1
-        else inq = false end
-      else field[#field + 1] = c end
-    else
-      if c == '"' then inq = true
-      elseif c == "," then out[#out + 1] = table.concat(field); field = {}
-      else field[#field + 1] = c end
-    end
-    i = i + 1
-  end
-  out[#out + 1] = table.concat(field)
-  return out
-end
-
-local function read_csv(path)
-  local fh = io.open(path, "r")
-  if not fh then error("cannot open reference file " .. path) end
-  local header, rows = nil, {}
-  for line in fh:lines() do
-    line = line:gsub("\r$", "")
-    if line ~= "" then
-      local f = parse_csv_line(line)
-      if not header then header = f
-      else
-        local row = {}
-        for k, name in ipairs(header) do row[name] = f[k] end
-        rows[#rows + 1] = row
-      end
-    end
-  end
-  fh:close()
-  return rows
-end
+-- Sandboxed loading with an instruction budget, formula and reaction parsing and CSV
+-- reading: tests/data/common.lua.
+local load_definition, parse_formula, parse_reaction, read_csv =
+  C.load_definition, C.parse_formula, C.parse_reaction, C.read_csv
 
 local gibbs = read_csv(refdir .. "/gibbs_25C.csv")
 local potentials = read_csv(refdir .. "/standard_potentials.csv")
@@ -224,10 +81,7 @@ local function gibbs_row(sp, state, tab)
 end
 
 ---------------------------------------------------------------------------- load files
-local ENERGY = { kJ = 1, J = 1e-3, kcal = 4.184, cal = 4.184e-3 }
-local ENTROPY = { J = 1, cal = 4.184 }
-local QUALITY = { high = true, medium = true, low = true }
-local MODELS = { cp = true, hkf = true, logk = true }
+local ENERGY, ENTROPY, QUALITY, MODELS = C.ENERGY, C.ENTROPY, C.QUALITY, C.MODELS
 
 -- Species built into phlox (FORMAT.md); G at 25 C in kJ/mol used by these checks:
 -- H2O(l) from the NBS tables (data brief), OH- from the NBS row of gibbs_25C.csv.
@@ -315,11 +169,11 @@ local function G25(f)
       resolving[f] = true
       local sum, nu_self = -sp.logK * RTLN10, 0
       for _, term in ipairs(parse_reaction(sp.reaction)) do
-        if term[1] == f then nu_self = nu_self + term[2]
+        if term.f == f then nu_self = nu_self + term.nu
         else
-          local g = G25(term[1])
+          local g = G25(term.f)
           if not g then resolving[f] = nil; return nil end
-          sum = sum - term[2] * g
+          sum = sum - term.nu * g
         end
       end
       resolving[f] = nil
@@ -340,13 +194,11 @@ for _, f in ipairs(order) do
   local sp = species[f]
   if sp.model == "logk" then
     local terms = parse_reaction(sp.reaction)
-    local bal, q, self, problems = {}, 0, 0, {}
+    local bal, q, self, unparsed = C.balance(terms, f)
+    if unparsed[1] then error(unparsed[1].err, 0) end
+    local problems = {}
     for _, term in ipairs(terms) do
-      local name, nu = term[1], term[2]
-      if name == f then self = self + 1 end
-      local c, z = parse_formula(name)
-      for el, n in pairs(c) do bal[el] = (bal[el] or 0) + nu * n end
-      q = q + nu * z
+      local name = term.f
       local def = BUILTIN[name] or (species[name] and species[name].file == sp.file)
       if not def then problems[#problems + 1] = name .. " not defined in " .. sp.file .. ".lua or built in" end
     end
@@ -392,10 +244,7 @@ local COPIED_FROM = {
   { "Ag^+", "Ag+", "aq", "CODATA" }, { "Cd^2+", "Cd+2", "aq", "CODATA" },
   { "Mg(OH)2(s,brucite)", "Mg(OH)2", "cr", "NBS" }, { "TiO2(s,rutile)", "TiO2", "cr", "NBS" },
 }
-local function cp298(sp)
-  local c = sp.cp
-  return c.a + (c.b or 0) * T0 + (c.c or 0) / T0 ^ 2 + (c.d or 0) / math.sqrt(T0) + (c.e or 0) * T0 ^ 2
-end
+local function cp298(sp) return C.cp_poly(sp.cp, T0) end
 for _, t in ipairs(COPIED_FROM) do
   local sp, row = species[t[1]], gibbs_row(t[2], t[3], t[4])
   if not sp or not row then fail("reference-row copy " .. t[1] .. ": record or reference row missing")
@@ -437,7 +286,7 @@ for _, t in ipairs({ { "CaO(s,lime)", 42.80 } }) do
 end
 
 -- HKF: parameters and G/H/S as in hkf_parameters.csv; Cp and V at 25 C recomputed.
-local HKF_KEYS = { "a1", "a2", "a3", "a4", "c1", "c2", "omega" }
+local HKF_KEYS = C.HKF_KEYS
 local HKF_GHS_FROM_TABLE = { ["Na^+"] = true, ["K^+"] = true, ["Mg^2+"] = true, ["Ca^2+"] = true }
 for _, f in ipairs(order) do
   local sp = species[f]
@@ -458,11 +307,9 @@ for _, f in ipairs(order) do
       local msg = f .. ": HKF parameters" .. (HKF_GHS_FROM_TABLE[f] and " and G/H/S" or "") ..
         " equal the hkf_parameters.csv row (Shock and Helgeson 1988, from memory)"
       if #bad == 0 then pass(msg) else fail(msg .. ": differ in " .. table.concat(bad, ", ")) end
-      -- Tanger and Helgeson 1988 at T = 298.15 K, P = Pr = 1 bar (the a3/a4 Cp term vanishes)
-      local a1, a2, a3, a4 = sp.hkf.a1 * 0.1, sp.hkf.a2 * 1e2, sp.hkf.a3, sp.hkf.a4 * 1e4
-      local c1, c2, w = sp.hkf.c1, sp.hkf.c2 * 1e4, sp.hkf.omega * 1e5
-      local cp = c1 + c2 / (T0 - THETA) ^ 2 + w * T0 * BORN_X
-      local v = (a1 + a2 / (PSI + 1) + (a3 + a4 / (PSI + 1)) / (T0 - THETA) - w * BORN_Q) * 41.84
+      -- Tanger and Helgeson 1988 at T = 298.15 K, P = Pr = 1 bar (the a3/a4 Cp term vanishes);
+      -- Born functions of the HKF papers (hkf/README.md): C.hkf_cp_v_25C
+      local cp, v = C.hkf_cp_v_25C(sp.hkf)
       local cpp, vp = tonumber(row.Cp_25C_cal_molK), tonumber(row.V_25C_cm3_mol)
       local m1 = string.format("%s: HKF Cp(25 C) %.2f vs published %.2f cal/(mol K) (hkf_parameters.csv; tol %.1f)", f, cp, cpp, TOL_HKF_CP)
       if math.abs(cp - cpp) <= TOL_HKF_CP then pass(m1) else fail(m1) end
@@ -496,11 +343,11 @@ local function reaction_value(text, kind)
   local terms = parse_reaction(text)
   local dG, ne, mine_nonzero, missing = 0, 0, false, nil
   for _, term in ipairs(terms) do
-    local g, how = G25(term[1])
-    if g == nil then missing = term[1]; break end
-    if term[1] == "e-" then ne = ne - term[2] end
+    local g, how = G25(term.f)
+    if g == nil then missing = term.f; break end
+    if term.f == "e-" then ne = ne - term.nu end
     if how == "mine" and g ~= 0 then mine_nonzero = true end
-    dG = dG + term[2] * g
+    dG = dG + term.nu * g
   end
   if missing then return nil, "species " .. missing .. " not defined here" end
   if not mine_nonzero then return nil, "no species of these files" end
@@ -531,7 +378,7 @@ local MY_ELEMENTS = {}
 for _, el in ipairs(FILES) do MY_ELEMENTS[el] = true end
 local function touches_mine(text)
   for _, term in ipairs(parse_reaction(text)) do
-    local okp, c = pcall(parse_formula, term[1])
+    local okp, c = pcall(parse_formula, term.f)
     if okp then for el in pairs(c) do if MY_ELEMENTS[el] and el ~= "H" and el ~= "O" then return true end end end
   end
   return false
@@ -571,10 +418,5 @@ end
 
 ---------------------------------------------------------------------------- summary
 print(string.format("\n%d species in %d files; %d passed, %d failed, %d documented disagreements, %d skipped (species of other files)",
-  #order, #FILES, n_pass, n_fail, n_doc, n_skip))
-if n_fail > 0 then
-  print("failed checks:")
-  for _, m in ipairs(failures) do print("  " .. m) end
-  os.exit(1)
-end
-os.exit(0)
+  #order, #FILES, rep.count.PASS, rep.count.FAIL, rep.count.DOC, rep.count.SKIP))
+rep.finish("failed checks:")

@@ -24,12 +24,15 @@
 --      docs/data/transition-metals.md is listed in KNOWN below with its cause and the
 --      largest difference the explanation covers; it is reported, and it fails if the
 --      difference grows past that bound.
--- The test uses its own tiny sandbox loader; it does not depend on phlox's C code.
+-- The test uses its own tiny sandbox loader (tests/data/common.lua, shared with the
+-- other data checks); it does not depend on phlox's C code.
 
-local T0 = 298.15
-local R = 8.314462618          -- J/(mol K), CODATA 2018
-local F = 96485.33212          -- C/mol, CODATA 2018
-local LN10 = math.log(10)
+local C = dofile((arg[0]:match("^(.*)[/\\]") or ".") .. "/common.lua")
+
+local T0 = C.T0
+local R = C.R                  -- J/(mol K), CODATA 2018
+local F = C.F                  -- C/mol, CODATA 2018
+local LN10 = C.LN10
 local RTLN10 = R * T0 * LN10 / 1000   -- kJ/mol
 
 -- Element entropies at 298.15 K, J/(mol K) per atom (from memory of CODATA key values /
@@ -82,13 +85,9 @@ local refdir = (arg and arg[1]) or (root .. "../shared/reference")
 
 ---------------------------------------------------------------------------------------
 -- results
-local n_pass, n_fail, n_known, n_skip = 0, 0, 0, 0
+local rep = C.reporter({ PASS = "PASS  ", FAIL = "FAIL  ", KNOWN = "KNOWN ", SKIP = "SKIP  " })
 local function report(status, what, detail)
-  if status == "PASS" then n_pass = n_pass + 1
-  elseif status == "FAIL" then n_fail = n_fail + 1
-  elseif status == "KNOWN" then n_known = n_known + 1
-  else n_skip = n_skip + 1 end
-  print(string.format("%-5s %s%s", status, what, detail and ("  [" .. detail .. "]") or ""))
+  rep.emit(status, what .. (detail and ("  [" .. detail .. "]") or ""))
 end
 local function check(what, got, want, tol, src)
   local ok = got ~= nil and want ~= nil and math.abs(got - want) <= tol
@@ -102,148 +101,17 @@ local function truthy(what, ok, detail)
   report(ok and "PASS" or "FAIL", what, detail)
 end
 
----------------------------------------------------------------------------------------
--- CSV reader (quoted fields, no embedded newlines)
-local function read_csv(path)
-  local fh = assert(io.open(path, "r"), "cannot open " .. path)
-  local rows, header = {}, nil
-  for line in fh:lines() do
-    if line ~= "" then
-      local fields, i, n = {}, 1, #line
-      while i <= n + 1 do
-        if line:sub(i, i) == '"' then
-          local j, buf = i + 1, {}
-          while true do
-            local c = line:sub(j, j)
-            if c == '"' then
-              if line:sub(j + 1, j + 1) == '"' then buf[#buf + 1] = '"'; j = j + 2
-              else j = j + 1; break end
-            elseif c == "" then break
-            else buf[#buf + 1] = c; j = j + 1 end
-          end
-          fields[#fields + 1] = table.concat(buf)
-          i = j + 1
-        else
-          local j = line:find(",", i, true) or (n + 1)
-          fields[#fields + 1] = line:sub(i, j - 1)
-          i = j + 1
-        end
-      end
-      if not header then header = fields
-      else
-        local r = {}
-        for k, h in ipairs(header) do r[h] = fields[k] or "" end
-        rows[#rows + 1] = r
-      end
-    end
-  end
-  fh:close()
-  return rows
+local read_csv, load_element_file = C.read_csv, C.load_definition
+local strip_state = function(f) return (C.split_state(f)) end
+local composition = function(f)
+  local counts, charge = C.parse_formula(f)
+  return counts, charge
 end
-
----------------------------------------------------------------------------------------
--- sandbox loader (pure helpers only, as FORMAT.md describes)
-local function sandbox_env()
-  return {
-    math = math,
-    string = { format = string.format, sub = string.sub, upper = string.upper,
-               lower = string.lower, rep = string.rep },
-    table = { insert = table.insert, concat = table.concat },
-    pairs = pairs, ipairs = ipairs, tonumber = tonumber, tostring = tostring,
-    type = type, error = error,
-  }
-end
-local function load_element_file(path)
-  local fh = io.open(path, "r")
-  if not fh then return nil, "cannot open " .. path end
-  local text = fh:read("a"); fh:close()
-  local chunk, err = load(text, "@" .. path, "t", sandbox_env())
-  if not chunk then return nil, err end
-  local ok, res = pcall(chunk)
-  if not ok then return nil, res end
-  return res
-end
-
----------------------------------------------------------------------------------------
--- formula parser: elements and charge
-local STATES = { aq = true, s = true, cr = true, am = true, l = true, g = true }
-local function strip_state(f)
-  local body, inner = f:match("^(.-)%(([^()]*)%)$")
-  if body and body ~= "" then
-    local word = inner:match("^(%a+)")
-    if word and STATES[word] then return body end
-  end
-  return f
-end
-local function parse_elements(s, acc, mult)
-  local i, n = 1, #s
-  while i <= n do
-    local c = s:sub(i, i)
-    if c:match("%u") then
-      local sym = s:match("^%u%l?", i)
-      i = i + #sym
-      local num = s:match("^%d+", i)
-      if num then i = i + #num end
-      acc[sym] = (acc[sym] or 0) + (tonumber(num) or 1) * mult
-    elseif c == "(" then
-      local depth, j = 1, i + 1
-      while depth > 0 do
-        local d = s:sub(j, j)
-        if d == "" then error("unbalanced parenthesis in " .. s) end
-        if d == "(" then depth = depth + 1 elseif d == ")" then depth = depth - 1 end
-        j = j + 1
-      end
-      local inner = s:sub(i + 1, j - 2)
-      local num = s:match("^%d+", j)
-      local k = tonumber(num) or 1
-      parse_elements(inner, acc, mult * k)
-      i = j + (num and #num or 0)
-    else
-      error("unexpected '" .. c .. "' in formula " .. s)
-    end
-  end
-  return acc
-end
-local function composition(formula)
-  if formula == "e-" then return {}, -1 end
-  local body, chg = formula, 0
-  local b, c = formula:match("^(.-)%^(%d*[%+%-])$")
-  if b then
-    body = b
-    local num = tonumber(c:match("^%d+")) or 1
-    chg = (c:sub(-1) == "+") and num or -num
-  end
-  body = strip_state(body)
-  local acc = {}
-  for part in body:gmatch("[^%*]+") do
-    local k, rest = part:match("^(%d+)(.*)$")
-    parse_elements(rest or part, acc, tonumber(k) or 1)
-  end
-  return acc, chg
-end
-
----------------------------------------------------------------------------------------
--- reaction parser: list of { nu = signed coefficient, f = formula } (products > 0)
-local function parse_reaction(text)
-  local lhs, rhs = text:match("^(.-)%s+=%s+(.-)$")
-  if not lhs then error("no ' = ' in reaction " .. text) end
-  local terms = {}
-  local function side(s, sign)
-    for term in (s .. " + "):gmatch("(.-)%s+%+%s+") do
-      local k, f = term:match("^(%d*%.?%d+)%s+(%S+)$")
-      if not k then k, f = "1", term:match("^(%S+)$") end
-      if not f then error("cannot read term '" .. term .. "' in " .. text) end
-      terms[#terms + 1] = { nu = sign * tonumber(k), f = f }
-    end
-  end
-  side(lhs, -1); side(rhs, 1)
-  return terms
-end
+local parse_reaction = C.parse_reaction
 
 ---------------------------------------------------------------------------------------
 -- unit handling
-local EUNIT = { kJ = 1, J = 1e-3, kcal = 4.184, cal = 4.184e-3 }
-local SUNIT = { J = 1, cal = 4.184 }
+local EUNIT, SUNIT = C.ENERGY, C.ENTROPY
 local function to_si(file, sp)
   local u = sp.units or file.units or {}
   local fu = file.units or {}
@@ -307,7 +175,7 @@ for _, m in ipairs(METALS) do
       if sp.model == "hkf" then
         local h, e = sp.hkf, sp.estimate
         if h then
-          for _, k in ipairs({ "a1", "a2", "a3", "a4", "c1", "c2", "omega" }) do
+          for _, k in ipairs(C.HKF_KEYS) do
             if type(h[k]) ~= "number" then problems[#problems + 1] = "hkf." .. k end
           end
         elseif not (e and type(e.Cp) == "number") then
@@ -348,13 +216,9 @@ for f, rec in pairs(species) do
     local ok, terms = pcall(parse_reaction, sp.reaction)
     if not ok then truthy(f .. " reaction parses", false, terms)
     else
-      local bal, appear = { ["charge"] = 0 }, 0
-      for _, t in ipairs(terms) do
-        if t.f == f then appear = appear + 1 end
-        local comp, chg = composition(t.f)
-        for el, n in pairs(comp) do bal[el] = (bal[el] or 0) + t.nu * n end
-        bal.charge = bal.charge + t.nu * chg
-      end
+      local bal, q, appear, unparsed = C.balance(terms, f)
+      if unparsed[1] then error(unparsed[1].err, 0) end
+      bal.charge = q
       local bad = {}
       for el, n in pairs(bal) do if math.abs(n) > 1e-12 then bad[#bad + 1] = el .. "=" .. n end end
       truthy(f .. ": reaction balances and names the species once",
@@ -505,7 +369,7 @@ for _, r in ipairs(gibbs) do
     if cpref and tab == "Wagman" then
       if sp.cp then
         local c = sp.cp
-        local cp = (c.a or 0) + (c.b or 0) * T0 + (c.c or 0) / T0 ^ 2 + (c.d or 0) / math.sqrt(T0) + (c.e or 0) * T0 ^ 2
+        local cp = C.cp_poly(c, T0)
         check("Cp(298.15) " .. mine .. " polynomial vs NBS Cp", cp, cpref, 0.02 * math.abs(cpref),
           "gibbs_25C.csv; 2 % rule of thumb, no source")
       end
@@ -526,21 +390,15 @@ do
   local r = hkfrow("Fe^2+")
   local sp = species["Fe^2+"] and species["Fe^2+"].sp
   if r and sp and sp.hkf then
-    for _, k in ipairs({ "a1", "a2", "a3", "a4", "c1", "c2", "omega" }) do
+    for _, k in ipairs(C.HKF_KEYS) do
       check("Fe^2+ hkf." .. k, sp.hkf[k], tonumber(r[k]), 1e-9, "hkf_parameters.csv")
     end
     check("Fe^2+ G (cal)", sp.G, tonumber(r.dGf_cal_mol), 1e-9, "hkf_parameters.csv")
     check("Fe^2+ H (cal)", sp.H, tonumber(r.dHf_cal_mol), 1e-9, "hkf_parameters.csv")
     check("Fe^2+ S (cal)", sp.S, tonumber(r.S_cal_molK), 1e-9, "hkf_parameters.csv")
     -- Cp and V at 25 C, 1 bar (Tanger and Helgeson 1988 equations; Born functions Q, X
-    -- as quoted in the HKF papers, see hkf/README.md)
-    local h = sp.hkf
-    local a1, a2, a3, a4 = h.a1 / 10, h.a2 * 100, h.a3, h.a4 * 1e4
-    local c1, c2, w = h.c1, h.c2 * 1e4, h.omega * 1e5
-    local theta, psi, P = 228, 2600, 1
-    local Q, X = 5.903e-7, -3.09e-7
-    local V = (a1 + a2 / (psi + P) + (a3 + a4 / (psi + P)) / (T0 - theta) - w * Q) * 41.84
-    local Cp = c1 + c2 / (T0 - theta) ^ 2 + w * T0 * X
+    -- as quoted in the HKF papers, see hkf/README.md and C.hkf_cp_v_25C)
+    local Cp, V = C.hkf_cp_v_25C(sp.hkf)
     check("Fe^2+ V(25 C) from HKF parameters", V, tonumber(r.V_25C_cm3_mol), 0.5,
       "published V in hkf_parameters.csv; tol 0.5 cm3/mol as hkf/README.md")
     check("Fe^2+ Cp(25 C) from HKF parameters (cal)", Cp, tonumber(r.Cp_25C_cal_molK), 1.0,
@@ -648,5 +506,5 @@ end
 
 ---------------------------------------------------------------------------------------
 print(string.format("\n== summary: %d passed, %d failed, %d documented disagreements, %d skipped",
-  n_pass, n_fail, n_known, n_skip))
-os.exit(n_fail == 0 and 0 or 1)
+  rep.count.PASS, rep.count.FAIL, rep.count.KNOWN, rep.count.SKIP))
+rep.finish()
