@@ -11,7 +11,7 @@
 --      logk reaction balances in elements and charge and names its species once;
 --   2. dfG = dfH - T*dfS with the elements' entropies for every cp and hkf record
 --      (tolerance 1.5 kJ/mol; rule of thumb from the data brief, no source);
---   3. transcription: dfG/dfH/S of each record against the row of the table it cites
+--   3. copy check: dfG/dfH/S of each record against the row of the table it cites
 --      (gibbs_25C.csv; hkf/hkf_parameters.csv for the Shock et al. 1997 values);
 --   4. Cp(298.15 K) of each Maier-Kelley polynomial against the NBS Cp in
 --      gibbs_25C.csv (2 %, rule of thumb, no source);
@@ -319,7 +319,7 @@ for f, rec in pairs(species) do
 end
 
 ---------------------------------------------------------------------------------------
--- 3. transcription against gibbs_25C.csv (same table as the record cites)
+-- 3. copy check against gibbs_25C.csv (same table as the record cites)
 print("== records against the gibbs_25C.csv row of the table they cite (tol 0.02 kJ/mol, 0.02 J/(mol K))")
 local function find_mine(name)
   if species[name] then return name end
@@ -446,7 +446,7 @@ local function reaction_dG(text)
   return sum, ne
 end
 -- A reference row whose source is also the source of one of the records involved is
--- a transcription check, not an independent one: say so in the output.
+-- a copy check, not an independent one: say so in the output.
 local SOURCE_KEYS = { "Baes", "Nordstrom", "CRC", "Wagman", "CODATA", "Harris", "Pourbaix", "OpenStax", "ORNL" }
 local function same_source(text, refsrc)
   local key
@@ -463,7 +463,7 @@ local function same_source(text, refsrc)
   return false
 end
 local function compare(kind, text, got, want, tol, src, refsrc)
-  if refsrc and same_source(text, refsrc) then src = src .. " (same source as a record: transcription check)" end
+  if refsrc and same_source(text, refsrc) then src = src .. " (same source as a record: copy check)" end
   local kn = KNOWN[text]
   local diff = got - want
   if math.abs(diff) <= tol then
