@@ -860,9 +860,12 @@ function plot.grid(maps, opts)
     end
     temps[#temps + 1] = fmt_T(celsius(m)) or "?"
   end
-  local cond = {}
-  for k, v in pairs(maps[1].conditions or {}) do cond[k] = v end
-  cond.T_C = nil
+  local cond = {}   -- only the conditions every panel shares; titles tell the rest
+  for k, v in pairs(maps[1].conditions or {}) do
+    local same = true
+    for i = 2, #maps do same = same and (maps[i].conditions or {})[k] == v end
+    if same then cond[k] = v end
+  end
   local extra = { "panels at " .. table.concat(temps, ", ") }
   if shared[1] and shared[1].conflicts > 0 then
     extra[#extra + 1] = ("note: %d pairs of neighbouring fields share a lightness tier"):format(shared[1].conflicts)
