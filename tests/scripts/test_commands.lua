@@ -1,0 +1,72 @@
+-- test_commands.lua: the reaction, check and list commands as a user runs
+-- them.  Published values: E0(Zn2+/Zn) = -0.7618 V and E0(Fe3+/Fe2+) =
+-- 0.771 V (CRC Handbook electrochemical series, shared/reference); the
+-- Nernst slope of a one-electron couple changes with T as RT ln10/F.
+local bin = assert(os.getenv("PHLOX_BIN"), "PHLOX_BIN not set")
+local fixtures = assert(os.getenv("PHLOX_TEST_FIXTURES"), "PHLOX_TEST_FIXTURES not set")
+local function check(cond, msg) if not cond then error(msg, 2) end end
+
+local function run(args)
+  local err = os.tmpname()
+  local p = assert(io.popen(("%q %s 2>%q"):format(bin, args, err)))
+  local out = p:read("a")
+  local _, _, code = p:close()
+  local f = io.open(err); local e = f:read("a"); f:close(); os.remove(err)
+  return code, out, e
+end
+
+local function num(json, key)
+  return tonumber(json:match('"' .. key .. '":([-%d.eE+]+)'))
+end
+
+-- --json: the documented keys, E0 against the handbook
+local code, out = run([[reaction "Zn^2+ + 2 e- = Zn(s)" --json]])
+check(code == 0, "reaction --json exit " .. tostring(code))
+for _, k in ipairs { "T_K", "P_bar", "dG_kJ", "logK", "E0_V" } do
+  check(out:find('"' .. k .. '":', 1, true), "key " .. k .. " in " .. out)
+end
+check(math.abs(num(out, "E0_V") - (-0.7618)) < 0.005, "E0 Zn2+/Zn: " .. out)
+check(num(out, "T_K") == 298.15 and num(out, "P_bar") == 1, "default T and P: " .. out)
+-- dG = -n F E0 (definition)
+check(math.abs(num(out, "dG_kJ") + 2 * 96485.33212 * num(out, "E0_V") / 1000) < 1e-6, "dG = -nFE")
+
+-- no electrons: E0 is null
+code, out = run([[reaction "H2O(l) = H^+ + OH^-" --json]])
+check(code == 0 and out:find('"E0_V":null', 1, true), "E0 null without electrons: " .. out)
+check(math.abs(num(out, "logK") + 13.995) < 0.03, "log Kw at 25 C vs IAPWS R11-07: " .. out)
+
+-- temperature and the saturation pressure above 100 C
+code, out = run([[reaction "Fe^3+ + e- = Fe^2+" --temperature 200 --json]])
+check(code == 0 and num(out, "T_K") == 473.15, "T option: " .. out)
+check(math.abs(num(out, "P_bar") - 15.55) < 0.05, "psat at 200 C (IAPWS-95: 1.5549 MPa): " .. out)
+code, out = run([[reaction "Fe^3+ + e- = Fe^2+" --temperature 150 --pressure 50 --json]])
+check(code == 0 and num(out, "P_bar") == 50, "pressure option: " .. out)
+
+-- the plain text form names the quantities and units
+code, out = run([[reaction "Fe^3+ + e- = Fe^2+"]])
+check(code == 0 and out:find("log K =") and out:find("V vs SHE"), "text output: " .. out)
+check(math.abs(tonumber(out:match("E = ([-%d.]+) V")) - 0.771) < 0.005, "E0 Fe3+/Fe2+ (CRC): " .. out)
+
+-- errors: not balanced, unknown species, out of range, usage
+local err
+code, out, err = run([[reaction "Zn^2+ + e- = Zn(s)"]])
+check(code == 1 and err:find("does not balance") and err:find("charge"), "unbalanced: " .. err)
+code, out, err = run([[reaction "Zn^2+ + 2 e- = Zn(s)" --temperature 400]])
+check(code == 1 and err:find("range"), "out of range: " .. err)
+code, out, err = run([[--no-such]])
+check(code == 2, "usage error")
+code, out, err = run([[reaction]])
+check(code == 2 and err:find("usage"), "reaction without an equation: " .. err)
+
+-- check: a good fixture passes, a fixture with a sign slip fails with file:line
+code, out, err = run(("check %q"):format(fixtures .. "/elements/good_Zn.lua"))
+check(code == 0, "check good fixture: " .. out .. err)
+code, out, err = run(("check %q"):format(fixtures .. "/elements/bad_sign.lua"))
+check(code == 1 and out:find("bad_sign.lua:%d+:"), "check bad fixture: " .. out .. err)
+
+-- list: species with model and source
+code, out = run("list Zn")
+check(code == 0 and out:find("Zn^2+", 1, true) and out:find("from memory of", 1, true), "list Zn: " .. out)
+code, out, err = run("list Xx")
+check(code == 1 and err:find("Xx"), "list unknown element: " .. err)
+print("test_commands: all checks passed")
