@@ -93,4 +93,99 @@ function sweep.run(points, fn, opts)
   return results, failures
 end
 
+-- Serialise plain results (numbers, strings, booleans, nested tables of
+-- them) as a Lua chunk; %.17g round-trips every double exactly.
+local function serialise(v, out)
+  local t = type(v)
+  if t == "number" then
+    if math.type(v) == "integer" then out[#out + 1] = string.format("%d", v)
+    elseif v ~= v then out[#out + 1] = "0/0"
+    elseif v == math.huge then out[#out + 1] = "1/0"
+    elseif v == -math.huge then out[#out + 1] = "-1/0"
+    else out[#out + 1] = string.format("%.17g", v) end
+  elseif t == "string" then out[#out + 1] = string.format("%q", v)
+  elseif t == "boolean" or t == "nil" then out[#out + 1] = tostring(v)
+  elseif t == "table" then
+    local keys = {}
+    for k in pairs(v) do keys[#keys + 1] = k end
+    table.sort(keys, function(a, b)
+      if type(a) == type(b) then return a < b end
+      return type(a) == "number"
+    end)
+    out[#out + 1] = "{"
+    for _, k in ipairs(keys) do
+      out[#out + 1] = "["
+      serialise(k, out)
+      out[#out + 1] = "]="
+      serialise(v[k], out)
+      out[#out + 1] = ","
+    end
+    out[#out + 1] = "}"
+  else
+    error("sweep.parallel: results must be numbers, strings, booleans or tables, not " .. t, 0)
+  end
+end
+
+local function shell_quote(s) return "'" .. tostring(s):gsub("'", "'\\''") .. "'" end
+
+--- Run fn over the points on several worker processes (the study script is
+-- started again once per worker with PHLOX_SHARD=i/n; each worker runs its
+-- shard, writes its results and exits), then return the results in point
+-- order, exactly as sweep.run would.  opts.workers (default 1: no workers),
+-- opts.quiet.  One parallel sweep per script; the script must reach the
+-- sweep.parallel call deterministically (the workers rerun it from the top).
+function sweep.parallel(points, fn, opts)
+  opts = opts or {}
+  local spec, dir = os.getenv("PHLOX_SHARD"), os.getenv("PHLOX_SHARD_DIR")
+  if spec and dir then -- worker
+    local i, n = spec:match("^(%d+)/(%d+)$")
+    i, n = tonumber(i), tonumber(n)
+    local mine = sweep.shard(points, i, n)
+    local res, fails = sweep.run(mine, fn, { quiet = true })
+    local out = { "return " }
+    serialise({ results = res, n = #mine, failures = fails }, out)
+    local core = require "phlox.core"
+    local ok, err = core.write_atomic(("%s/part-%d"):format(dir, i), table.concat(out))
+    if not ok then io.stderr:write("phlox: sweep.parallel worker: ", err, "\n"); os.exit(1) end
+    os.exit(0)
+  end
+  local n = opts.workers or 1
+  assert(math.type(n) == "integer" and n >= 1, "sweep.parallel: workers must be an integer >= 1")
+  if n == 1 or #points < 2 then return sweep.run(points, fn, opts) end
+  local script = rawget(_G, "arg") and arg[0]
+  assert(script and script ~= "-", "sweep.parallel: workers need a study script file (not -e or stdin)")
+  local dir = os.tmpname()
+  os.remove(dir)
+  assert(os.execute("mkdir -p " .. shell_quote(dir)), "sweep.parallel: cannot make " .. dir)
+  -- the same program, options, script and arguments
+  local lo = 0
+  while arg[lo - 1] do lo = lo - 1 end
+  local words = {}
+  for k = lo, #arg do words[#words + 1] = shell_quote(arg[k]) end
+  local cmd = table.concat(words, " ")
+  local jobs = {}
+  for i = 1, n do
+    jobs[#jobs + 1] = ("PHLOX_SHARD=%d/%d PHLOX_SHARD_DIR=%s %s >/dev/null &"):format(i, n, shell_quote(dir), cmd)
+  end
+  local ok = os.execute(table.concat(jobs, " ") .. " wait")
+  local results, failures = {}, {}
+  for i = 1, n do
+    local f = io.open(("%s/part-%d"):format(dir, i), "rb")
+    if not f then
+      os.execute("rm -rf " .. shell_quote(dir))
+      error(("sweep.parallel: worker %d of %d wrote nothing (exit %s)"):format(i, n, tostring(ok)), 2)
+    end
+    local part = assert(load(f:read("a"), "=part", "t", {}))()
+    f:close()
+    for k = 1, part.n do results[i + (k - 1) * n] = part.results[k] end
+    for _, fl in ipairs(part.failures) do
+      fl.index = i + (fl.index - 1) * n
+      failures[#failures + 1] = fl
+    end
+  end
+  table.sort(failures, function(a, b) return a.index < b.index end)
+  os.execute("rm -rf " .. shell_quote(dir))
+  return results, failures
+end
+
 return sweep
