@@ -226,6 +226,28 @@ function phlox.map(opts)
     ligand = opts.ligand, ligand_activity = opts.ligand and (opts.ligand_activity or 1e-3) or nil,
   }
   m.files = lib.files
+  -- Away from 25 C, name the species of the element (and ligand) whose log K
+  -- has no temperature data (held at its 25 C value): a reader must know
+  -- which fields, present or missing, rest on 25 C constants.
+  if math.abs(T - 298.15) > 0.5 then
+    local held, seen = {}, {}
+    for _, el in ipairs { opts.element, opts.ligand } do
+      for _, s in ipairs(lib:list(el)) do
+        if s.model == "logk" and s.reaction and not seen[s.formula] then
+          seen[s.formula] = true
+          local a = lib.db:reaction(s.reaction, 298.15, 1.0)
+          local b = lib.db:reaction(s.reaction, T, P)
+          if a and b and math.abs(a.logK - b.logK) < 1e-12 then held[#held + 1] = s.formula end
+        end
+      end
+    end
+    table.sort(held)
+    if #held > 0 then
+      m.constant_logk = held
+      m.stamp = m.stamp or {}
+      m.stamp[#m.stamp + 1] = "log K held at 25 °C (no temperature data): " .. table.concat(held, ", ")
+    end
+  end
   return m
 end
 

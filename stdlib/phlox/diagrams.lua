@@ -353,6 +353,9 @@ function diagrams.series(opts)
   if stamp then
     for _, m in ipairs(maps) do
       m.stamp = m.stamp or {}
+      for k = #m.stamp, 1, -1 do -- the single-map note is replaced by the series one
+        if m.stamp[k]:find("^log K held at 25") then table.remove(m.stamp, k) end
+      end
       m.stamp[#m.stamp + 1] = stamp[1]
     end
   end
