@@ -70,7 +70,15 @@ static int label_node(double x, double y, void *user, int *id)
         px_equil_work_reset(c->s->work);
         st = px_equil_solve(c->s->sys, c->s->work, &c->sopt);
     }
+    if (st != PX_OK) { /* last resort: continuation in the totals */
+        c->stats->cold_retries++;
+        st = px_spec_solve(c->s, &c->sopt, NULL, 0);
+    }
     if (st != PX_OK) {
+        if (c->stats->failures < PX_RMAP_FAIL_KEEP) {
+            c->stats->fail_x[c->stats->failures] = x;
+            c->stats->fail_y[c->stats->failures] = y;
+        }
         c->stats->failures++;
         px_equil_work_reset(c->s->work);
         *id = -1;
@@ -222,6 +230,10 @@ int px_rmap_build(px_thermo_ws *ws, const px_db *db, const char *element, const 
         for (int t = 0; t < nt; t++) {
             if (st == PX_OK && bands[t].st != 0) st = bands[t].st;
             stats->solves += bands[t].stats.solves;
+            for (size_t k = 0; k < bands[t].stats.failures && stats->failures + k < PX_RMAP_FAIL_KEEP; k++) {
+                stats->fail_x[stats->failures + k] = bands[t].stats.fail_x[k];
+                stats->fail_y[stats->failures + k] = bands[t].stats.fail_y[k];
+            }
             stats->failures += bands[t].stats.failures;
             stats->cold_retries += bands[t].stats.cold_retries;
             if (t > 0) px_spec_free(bands[t].c.s);

@@ -29,6 +29,8 @@ px_rmap_options px_rmap_options_default(void);
 typedef struct px_rmap_stats {
     size_t solves, failures; /* nodes where the solver did not converge: id -1 */
     size_t cold_retries;     /* warm starts that ended over-saturated, solved again cold */
+#define PX_RMAP_FAIL_KEEP 8
+    double fail_x[PX_RMAP_FAIL_KEEP], fail_y[PX_RMAP_FAIL_KEEP]; /* first failing points */
 } px_rmap_stats;
 
 #define PX_RMAP_MAX_THREADS 64

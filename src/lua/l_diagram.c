@@ -384,6 +384,16 @@ static int l_grid_map(lua_State *L)
     lua_setfield(L, -2, "failures");
     lua_pushinteger(L, (lua_Integer)stats.cold_retries);
     lua_setfield(L, -2, "cold_retries");
+    lua_newtable(L); /* where the solver failed (first few), for diagnosis */
+    for (size_t k = 0; k < stats.failures && k < PX_RMAP_FAIL_KEEP; k++) {
+        lua_createtable(L, 2, 0);
+        lua_pushnumber(L, stats.fail_x[k]);
+        lua_rawseti(L, -2, 1);
+        lua_pushnumber(L, stats.fail_y[k]);
+        lua_rawseti(L, -2, 2);
+        lua_rawseti(L, -2, (lua_Integer)k + 1);
+    }
+    lua_setfield(L, -2, "failed_at");
     /* species list (field order) and fields */
     lua_createtable(L, (int)g->nfield, 0); /* species */
     lua_createtable(L, (int)g->nfield, 0); /* fields */
