@@ -307,11 +307,58 @@ static int water_lines(px_thermo_ws *ws, const px_db *db, px_emap *m, const px_e
     return PX_OK;
 }
 
+/* Join the pieces of each species (same group) into outlines, and classify
+ * the fields into corrosion domains: metal -> immunity, solid or liquid ->
+ * passivation, dissolved or gas -> corrosion. */
+static int join_and_classify(px_emap *m)
+{
+    const px_diagram_map *dm = m->map;
+    size_t nf = dm->nfield;
+    int *cls = malloc((nf ? nf : 1) * sizeof *cls);
+    if (!cls) return PX_ENOMEM;
+    for (size_t f = 0; f < nf; f++) cls[f] = dm->field[f].group;
+    int st = px_diagram_map_union(dm, cls, &m->joined);
+    if (st == PX_OK) {
+        for (size_t f = 0; f < nf; f++) {
+            px_emap_kind k = m->info[f].kind;
+            cls[f] = k == PX_EMAP_METAL ? PX_DIAGRAM_METAL
+                     : (k == PX_EMAP_SOLID || k == PX_EMAP_LIQUID) ? PX_DIAGRAM_SOLID
+                                                                   : PX_DIAGRAM_DISSOLVED;
+        }
+        st = px_diagram_corrosion_domains(dm, cls, &m->domains);
+    }
+    free(cls);
+    if (st != PX_OK) return st;
+    const px_diagram_outlines *u = m->joined;
+    m->outline = calloc(u->nloop ? u->nloop : 1, sizeof *m->outline);
+    if (!m->outline) return PX_ENOMEM;
+    for (size_t i = 0; i < u->nloop; i++) {
+        const px_diagram_loop *lp = &u->loop[i];
+        if (!(lp->area > 0)) continue; /* holes are subtracted from their outline */
+        px_emap_outline *o = &m->outline[m->n_outline++];
+        o->piece = lp->cls;
+        o->first = lp->first;
+        o->n = lp->n;
+        o->area = lp->area;
+        for (size_t h = 0; h < u->nloop; h++) {
+            const px_diagram_loop *hl = &u->loop[h];
+            if (hl->area < 0 && hl->cls == lp->cls &&
+                px_diagram_polygon_contains(u->x + lp->first, u->y + lp->first, lp->n,
+                                            u->x[hl->first], u->y[hl->first]))
+                o->area += hl->area;
+        }
+    }
+    return PX_OK;
+}
+
 void px_emap_free(px_emap *m)
 {
     if (!m) return;
     px_diagram_map_free(m->map);
     px_diagram_map_free(m->ligand_map);
+    px_diagram_outlines_free(m->joined);
+    px_diagram_outlines_free(m->domains);
+    free(m->outline);
     free(m->info);
     free(m->bnd);
     free(m->ligand_species);
@@ -489,6 +536,8 @@ int px_emap_build(px_thermo_ws *ws, const px_db *db, const char *element,
         if (!shown) m->absent[m->n_absent++] = cm[i].db;
     }
     water_lines(ws, db, m, o);
+    st = join_and_classify(m);
+    if (st != PX_OK) px_fail(msg, msglen, st, "map of %s: joining fields: %s", element, px_strerror(st));
 
 done:
     free(cm);

@@ -60,8 +60,21 @@ typedef struct px_emap_boundary {
     char reaction[256]; /* balanced, integer coefficients, electrons on the left */
 } px_emap_boundary;
 
+/* A species' field as drawn: the pieces of one species that share edges
+ * across ligand fields joined into one outline (map->field pieces keep the
+ * per-ligand-field detail). */
+typedef struct px_emap_outline {
+    int piece;         /* a representative piece: map->field[piece], info[piece] */
+    size_t first, n;   /* vertices joined->x[first..], joined->y[first..] */
+    double area;       /* outline area minus its holes */
+} px_emap_outline;
+
 typedef struct px_emap {
     px_diagram_map *map;      /* geometry; field[i] <-> info[i], boundary[i] <-> bnd[i] */
+    px_diagram_outlines *joined; /* loops of the joined fields (holes included) */
+    px_emap_outline *outline;    /* the outer loops, one per drawn field */
+    size_t n_outline;
+    px_diagram_outlines *domains; /* immunity, passivation, corrosion (loop cls) */
     px_emap_field *info;
     px_emap_boundary *bnd;
     px_diagram_map *ligand_map; /* L's own map (NULL without ligand) */

@@ -170,53 +170,26 @@ static int l_map(lua_State *L)
     setnum(L, "P", o.P);
     push_axis(L, "x", o.xaxis, o.window.xmin, o.window.xmax, o.ligand);
     push_axis(L, "y", o.yaxis, o.window.ymin, o.window.ymax, o.ligand);
-    /* fields: the pieces of one species that share edges (across ligand
-     * fields) are joined into one outline, so a species shows once */
-    int *cls = malloc((dm->nfield ? dm->nfield : 1) * sizeof *cls);
-    px_diagram_outlines *un = NULL;
-    if (!cls) {
-        px_emap_free(m);
-        return luaL_error(L, "map: out of memory");
-    }
-    for (size_t f = 0; f < dm->nfield; f++) cls[f] = dm->field[f].group;
-    st = px_diagram_map_union(dm, cls, &un);
-    free(cls);
-    if (st != PX_OK) {
-        px_emap_free(m);
-        luaL_pushfail(L);
-        lua_pushfstring(L, "map of %s: joining fields: %s", element, px_strerror(st));
-        return 2;
-    }
-    lua_createtable(L, (int)un->nloop, 0);
-    int nf = 0;
-    for (size_t i = 0; i < un->nloop; i++) {
-        const px_diagram_loop *lp = &un->loop[i];
-        if (!(lp->area > 0)) continue; /* holes are subtracted below */
-        int f = lp->cls;
-        const px_species *sp = px_db_get(db, (size_t)m->info[f].species);
-        double area = lp->area;
-        for (size_t h = 0; h < un->nloop; h++) { /* holes of the same class inside this loop */
-            const px_diagram_loop *hl = &un->loop[h];
-            if (hl->area < 0 && hl->cls == f &&
-                px_diagram_polygon_contains(un->x + lp->first, un->y + lp->first, lp->n,
-                                            un->x[hl->first], un->y[hl->first]))
-                area += hl->area;
-        }
-        lua_createtable(L, 0, 8);
-        lua_pushstring(L, sp->f.text);
+    /* fields: one per joined outline (pieces of a species across ligand
+     * fields are joined in the core, src/diagram/emap.c) */
+    lua_createtable(L, (int)m->n_outline, 0);
+    for (size_t i = 0; i < m->n_outline; i++) {
+        const px_emap_outline *ol = &m->outline[i];
+        const px_emap_field *info = &m->info[ol->piece];
+        lua_createtable(L, 0, 6);
+        lua_pushstring(L, px_db_get(db, (size_t)info->species)->f.text);
         lua_setfield(L, -2, "species");
-        lua_pushstring(L, kind_names[m->info[f].kind]);
+        lua_pushstring(L, kind_names[info->kind]);
         lua_setfield(L, -2, "kind");
-        if (m->info[f].ligand >= 0) {
-            lua_pushstring(L, px_db_get(db, (size_t)m->info[f].ligand)->f.text);
+        if (info->ligand >= 0) {
+            lua_pushstring(L, px_db_get(db, (size_t)info->ligand)->f.text);
             lua_setfield(L, -2, "ligand");
         }
-        push_xy(L, un->x + lp->first, un->y + lp->first, lp->n, NULL);
-        setnum(L, "area", area);
-        lua_rawseti(L, -2, ++nf);
+        push_xy(L, m->joined->x + ol->first, m->joined->y + ol->first, ol->n, NULL);
+        setnum(L, "area", ol->area);
+        lua_rawseti(L, -2, (lua_Integer)i + 1);
     }
     lua_setfield(L, -2, "fields");
-    px_diagram_outlines_free(un);
     /* boundaries */
     lua_createtable(L, (int)dm->nboundary, 0);
     for (size_t b = 0; b < dm->nboundary; b++) {
@@ -278,34 +251,20 @@ static int l_map(lua_State *L)
         lua_setfield(L, -2, "water");
     }
     /* corrosion domains */
-    int *kinds = malloc((dm->nfield ? dm->nfield : 1) * sizeof *kinds);
-    px_diagram_outlines *dom = NULL;
-    if (kinds) {
-        for (size_t f = 0; f < dm->nfield; f++) {
-            px_emap_kind k = m->info[f].kind;
-            kinds[f] = k == PX_EMAP_METAL ? PX_DIAGRAM_METAL
-                       : (k == PX_EMAP_SOLID || k == PX_EMAP_LIQUID) ? PX_DIAGRAM_SOLID
-                                                                     : PX_DIAGRAM_DISSOLVED;
-        }
-        if (px_diagram_corrosion_domains(dm, kinds, &dom) != PX_OK) dom = NULL;
-        free(kinds);
+    const px_diagram_outlines *dom = m->domains;
+    lua_createtable(L, (int)dom->nloop, 0);
+    for (size_t i = 0; i < dom->nloop; i++) {
+        const px_diagram_loop *lp = &dom->loop[i];
+        lua_createtable(L, 0, 5);
+        lua_pushstring(L, domain_names[lp->cls]);
+        lua_setfield(L, -2, "domain");
+        push_xy(L, dom->x + lp->first, dom->y + lp->first, lp->n, NULL);
+        setnum(L, "area", fabs(lp->area));
+        lua_pushboolean(L, lp->area < 0);
+        lua_setfield(L, -2, "hole");
+        lua_rawseti(L, -2, (lua_Integer)i + 1);
     }
-    if (dom) {
-        lua_createtable(L, (int)dom->nloop, 0);
-        for (size_t i = 0; i < dom->nloop; i++) {
-            const px_diagram_loop *lp = &dom->loop[i];
-            lua_createtable(L, 0, 5);
-            lua_pushstring(L, domain_names[lp->cls]);
-            lua_setfield(L, -2, "domain");
-            push_xy(L, dom->x + lp->first, dom->y + lp->first, lp->n, NULL);
-            setnum(L, "area", fabs(lp->area));
-            lua_pushboolean(L, lp->area < 0);
-            lua_setfield(L, -2, "hole");
-            lua_rawseti(L, -2, (lua_Integer)i + 1);
-        }
-        lua_setfield(L, -2, "domains");
-        px_diagram_outlines_free(dom);
-    }
+    lua_setfield(L, -2, "domains");
     lua_pushinteger(L, (lua_Integer)dm->nunmatched);
     lua_setfield(L, -2, "unmatched_edges");
     px_emap_free(m);
