@@ -146,8 +146,8 @@ function sweep.parallel(points, fn, opts)
     serialise({ results = res, n = #mine, failures = fails }, out)
     local core = require "phlox.core"
     local ok, err = core.write_atomic(("%s/part-%d"):format(dir, i), table.concat(out))
-    if not ok then io.stderr:write("phlox: sweep.parallel worker: ", err, "\n"); os.exit(1) end
-    os.exit(0)
+    if not ok then io.stderr:write("phlox: sweep.parallel worker: ", err, "\n"); os.exit(1, true) end
+    os.exit(0, true) -- close the Lua state first (frees everything)
   end
   local n = opts.workers or 1
   assert(math.type(n) == "integer" and n >= 1, "sweep.parallel: workers must be an integer >= 1")
