@@ -27,6 +27,8 @@
 #define PX_LABEL_MAX 9.5      /* field label sizes tried, largest first */
 #define PX_LABEL_MIN 5.5
 #define PX_LABEL_STEP 0.5
+#define PX_LEAD_DX 16.0       /* lead-out label offset steps, points */
+#define PX_LEAD_DY 12.0
 #define PX_TICK_LEN 4.0
 #define PX_MAX_TICKS 9
 #define PX_TICK_SPACE 6.0     /* least space between neighbouring tick labels */
@@ -366,7 +368,19 @@ static int box_inside(const double *x, const double *y, size_t n, double cx, dou
     return 1;
 }
 
-static void draw_field_label(cairo_t *cr, const px_panel *p, rect r, const px_item *it)
+#define PX_PLACED_MAX 64 /* lead-out label boxes remembered per panel */
+typedef struct placed_boxes {
+    rect box[PX_PLACED_MAX];
+    int n;
+} placed_boxes;
+
+static int overlaps(rect a, rect b)
+{
+    return a.x < b.x + b.w && b.x < a.x + a.w && a.y < b.y + b.h && b.y < a.y + a.h;
+}
+
+static void draw_field_label(cairo_t *cr, const px_panel *p, rect r, const px_item *it,
+                             placed_boxes *placed)
 {
     size_t n = it->n;
     double *dx = malloc(n * sizeof *dx), *dy = malloc(n * sizeof *dy);
@@ -400,6 +414,22 @@ static void draw_field_label(cairo_t *cr, const px_panel *p, rect r, const px_it
             return;
         }
     }
+    /* Tall and narrow: set the label vertically (reads bottom to top). */
+    for (double s = PX_LABEL_MAX; s >= PX_LABEL_MIN; s -= PX_LABEL_STEP) {
+        double w, h;
+        px_text_measure(cr, it->text, 1, s, &w, &h);
+        if (box_inside(dx, dy, n, cx, cy, h, w + 2)) {
+            cairo_save(cr);
+            cairo_translate(cr, cx, cy);
+            cairo_rotate(cr, -1.5707963267948966); /* -pi/2 */
+            px_text_draw_halo(cr, it->text, 1, s, -w / 2, h * 0.3, PX_HALO_WIDTH, 1, 1, 1,
+                              PX_HALO_ALPHA);
+            cairo_restore(cr);
+            free(dx);
+            free(dy);
+            return;
+        }
+    }
     /* Too thin: lead the label out with a line from the field's centroid
      * (the pole of a thin strip sits at an arbitrary end of it). */
     double a = 0, gx = 0, gy = 0;
@@ -415,10 +445,27 @@ static void draw_field_label(cairo_t *cr, const px_panel *p, rect r, const px_it
     }
     double w, h;
     px_text_measure(cr, it->text, 1, PX_LABEL_MIN + 1, &w, &h);
-    double ox = cx + (cx < r.x + r.w / 2 ? 16 : -16 - w);
-    double oy = cy + (cy < r.y + r.h / 2 ? 16 : -10);
-    ox = fmin(fmax(ox, r.x + 2), r.x + r.w - w - 2);
-    oy = fmin(fmax(oy, r.y + h), r.y + r.h - 2);
+    /* Candidate spots around the anchor, towards the roomier side first;
+     * the first that clears the labels already led out wins. */
+    double sx = cx < r.x + r.w / 2 ? 1 : -1, sy = cy < r.y + r.h / 2 ? 1 : -1;
+    static const double step[][2] = {{1, 1}, {1, 2.4}, {1, -1}, {2.2, 1}, {1, 3.8}, {2.2, -1},
+                                     {1, -2.4}, {2.2, 2.4}, {3.4, 1}, {2.2, -2.4}, {3.4, -1}, {1, 5.2}};
+    double ox = 0, oy = 0;
+    for (size_t k = 0; k < sizeof step / sizeof step[0]; k++) {
+        double tx = cx + sx * PX_LEAD_DX * step[k][0] - (sx < 0 ? w : 0);
+        double ty = cy + sy * PX_LEAD_DY * step[k][1];
+        tx = fmin(fmax(tx, r.x + 2), r.x + r.w - w - 2);
+        ty = fmin(fmax(ty, r.y + h), r.y + r.h - 2);
+        rect b = {tx - 1, ty - h * 0.85, w + 2, h};
+        int clear = 1;
+        for (int q = 0; q < placed->n && clear; q++) clear = !overlaps(b, placed->box[q]);
+        if (k == 0 || clear) {
+            ox = tx;
+            oy = ty;
+        }
+        if (clear) break;
+    }
+    if (placed->n < PX_PLACED_MAX) placed->box[placed->n++] = (rect){ox - 1, oy - h * 0.85, w + 2, h};
     cairo_set_line_width(cr, 0.5);
     set_dash(cr, PX_DASH_SOLID, 1);
     cairo_move_to(cr, cx, cy);
@@ -541,9 +588,11 @@ static void draw_panel(cairo_t *cr, const px_panel *p, rect r, rect cell)
             cairo_stroke(cr);
         }
     }
+    placed_boxes placed;
+    placed.n = 0;
     for (size_t i = 0; i < p->n_items; i++) { /* labels and text on top */
         const px_item *it = &p->items[i];
-        if (it->kind == PX_ITEM_POLYGON && it->text) draw_field_label(cr, p, r, it);
+        if (it->kind == PX_ITEM_POLYGON && it->text) draw_field_label(cr, p, r, it, &placed);
         else if (it->kind == PX_ITEM_TEXT) {
             set_rgba(cr, it->color);
             double w, h;
