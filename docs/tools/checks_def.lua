@@ -29,6 +29,8 @@
 local M = {}
 
 local T0C = 273.15
+local R_GAS = 8.314462618   -- J/(mol K), CODATA 2018
+local LN10 = math.log(10)
 
 -- ---------------------------------------------------------------- tolerances
 -- Chosen before comparing, from the source's stated confidence.  The
@@ -52,6 +54,7 @@ M.TOL = {
   water_same = { tol = 0.0005, why = "the same formulation (IAPWS R11-07 at IAPWS-95 density) as python3-iapws; water.csv prints 4 decimals" },
   PB82_T = { tol = 0.10, why = "the Plummer and Busenberg 1982 equations fit measured constants to 250 C; phlox's HKF sets (SH88, SHS89) rest on 25 C data and the SH88 correlations: 0.1 is about the scatter of the measured constants above 100 C (common practice, no source)" },
   BB54_T = { tol = 0.003, why = "AgCl/Ag E at 0-50 C is known to 0.1 mV; the 25 C value here differs by 0.8 mV and the temperature slope follows dS of the reaction (CODATA entropies, +-1 J/(mol K) = +-0.3 mV over 25 K): 3 mV" },
+  ORNL_T = { tol = 0.2, why = "beta-Ni(OH)2 solubility measured to 200 C with +-0.20 (2 sigma) at 25 C: 0.2" },
   BP49_T = { tol = 0.05, why = "Bates and Pinching 1949 fit 0-50 C to 0.002; the 25 C value here differs by 0.03 (NH3(aq) and NH4+ HKF sets, medium/high): 0.05" },
 }
 
@@ -359,6 +362,24 @@ for _, t in ipairs({ 0.01, 50 }) do
         source = "from memory of Bates and Pinching 1949 (J. Res. NBS 42, 419): pKa = 2835.76/T - 0.6322 + 0.001225 T, 0-50 C" })
 end
 
+-- Crystalline beta-Ni(OH)2 solubility measured at 0-200 C (ORNL, J. Coord.
+-- Chem.; OSTI 1055155, abstract read): log *Ks(25 C) = 11.67 +- 0.20,
+-- mean dH = -82.1 +- 0.8 kJ/mol, mean dS = -52 +- 5 J/(mol K), dCp = 0 over
+-- 5-200 C (the abstract's dG(25 C) = -66.6 kJ/mol checks: -82100 + 298.15*52
+-- = -66596 J/mol, i.e. log K 11.67).  These rows hold the file's Ni(OH)2
+-- (NBS 1982) and Ni^2+ (NBS, van 't Hoff) against a measurement away from
+-- 25 C, where the Ni^2+/Ni(OH)2 line of a map is a vertical boundary at
+-- pH = (log *Ks - log a)/2.
+local ORNL_NIOH2 = "ORNL solubility study of crystalline beta-Ni(OH)2, J. Coord. Chem. (OSTI 1055155; abstract read): dH -82.1 kJ/mol, dS -52 J/(mol K), dCp 0 (5-200 C)"
+local ORNL_KNOWN = { [100] = 0.766, [150] = 0.785, [200] = 0.898 }
+local function ornl_nioh2_logK(T) return (82100 / T - 52) / (R_GAS * LN10) end
+for _, t in ipairs({ 100, 150, 200 }) do
+  add({ kind = "logK", reaction = "Ni(OH)2(s) + 2 H^+ = Ni^2+ + 2 H2O(l)", T_C = t, group = "T_other",
+        tolclass = "ORNL_T", value_fn = ornl_nioh2_logK, source = ORNL_NIOH2, confidence = "medium",
+        known = { diff = ORNL_KNOWN[t], margin = 0.02,
+          why = "the 25 C offset of the file's NBS 1982 Ni(OH)2 (+1.059, row #100) carried up: less that offset, phlox's change of log K from 25 C differs from the measured one by " .. ("%+.2f"):format(ORNL_KNOWN[t] - 1.059) .. " (NBS dH -96.0 against -82.1 kJ/mol measured; no Cp for Ni^2+ and Ni(OH)2 in the file). The file keeps NBS: its Ni(OH)2 matches the CRC E and the Harris Ksp rows; the beta phase is a documented alternative (docs/data/transition-metals.md)" } })
+end
+
 M.checks = C
 
 M.GROUPS = {
@@ -368,7 +389,7 @@ M.GROUPS = {
   { id = "K25_rec", title = "log K at 25 C: further published constants (recalled)" },
   { id = "T_water", title = "Water ionisation along saturation, 0-300 C (IAPWS R11-07)" },
   { id = "T_carb", title = "Carbonate constants at 100-250 C (Plummer and Busenberg 1982)" },
-  { id = "T_other", title = "Other temperatures: AgCl/Ag electrode and NH4+ (0-50 C)" },
+  { id = "T_other", title = "Other temperatures: AgCl/Ag electrode and NH4+ (0-50 C), beta-Ni(OH)2 (100-200 C)" },
 }
 
 -- ---------------------------------------------------------------- helpers
