@@ -831,7 +831,7 @@ end
 --- Several maps as panels of one figure (e.g. a temperature sweep), on
 -- shared axis ranges.  opts: cols (default: about square), panel_title =
 -- function(map, i) -> string (default: temperature and pressure), pages
--- (PDF: one page per panel), and the options of plot.map (reference,
+-- (PDF: one page per panel; cols is then ignored), and the options of plot.map (reference,
 -- domains, labels, file, width, height, dpi, stamp).
 function plot.grid(maps, opts)
   opts = opts or {}
@@ -839,8 +839,9 @@ function plot.grid(maps, opts)
   for i, m in ipairs(maps) do plot.check_map(m, ("plot.grid: maps[%d]"):format(i)) end
   local ref = reference(opts, maps[1])
   local n = #maps
-  -- pages: one row, so the PDF has one page per map and no empty page
-  local cols = opts.cols or (opts.pages and n) or math.ceil(math.sqrt(n))
+  -- pages: one row whatever cols says, so the PDF has one page per map and
+  -- no empty page (a cols that leaves cells empty would add blank pages)
+  local cols = (opts.pages and n) or opts.cols or math.ceil(math.sqrt(n))
   local rows = math.ceil(n / cols)
   local w = opts.width or (plot.defaults.width * (cols > 1 and not opts.pages and 0.75 * cols or 1))
   local h = opts.height or (plot.defaults.height * (rows > 1 and not opts.pages and 0.75 * rows or 1))

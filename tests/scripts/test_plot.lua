@@ -170,6 +170,12 @@ local pdf = slurp(dir .. "/g.pdf")
 local pages = 0
 for tail in pdf:gmatch("/Type%s*/Page(.)") do if tail ~= "s" then pages = pages + 1 end end
 check(pages == 4, "one page per panel, got " .. pages)
+-- cols that would leave an empty cell (3 maps, 2 columns) must not add a
+-- blank page
+plot.grid({ maps[1], maps[2], maps[3] }, { file = dir .. "/g3.pdf", pages = true, cols = 2 })
+local pages3 = 0
+for tail in slurp(dir .. "/g3.pdf"):gmatch("/Type%s*/Page(.)") do if tail ~= "s" then pages3 = pages3 + 1 end end
+check(pages3 == 3, "three panels with cols = 2: three pages, got " .. pages3)
 local gs = plot.grid(maps):render("svg")
 check(gs:find("panel 4: {M}–{H2O} at 300 °C", 1, true) == nil and gs:find("panel 4: M–H2O at 300 °C", 1, true),
       "per-panel titles")
