@@ -127,9 +127,15 @@ end
 --- Load every element file and gather species per source.
 -- Returns { species = n, files = {name = count}, by_source = {id = {file = {formulas}}},
 --           counts = {id = n}, unmatched = {"formula (file)"} }
+-- where a record's log K is compared with its 25 C value: 200 C at 20 bar
+-- (liquid water; saturation is 15.5 bar)
+local T_REF_K, P_REF_BAR = 298.15, 1.0
+local T_PROBE_K, P_PROBE_BAR = 473.15, 20.0
+
 function M.collect(phlox)
   local lib = phlox.library(phlox.available_elements())
-  local data = { species = 0, files = {}, by_source = {}, counts = {}, unmatched = {}, read = {} }
+  local data = { species = 0, files = {}, by_source = {}, counts = {}, unmatched = {}, read = {},
+                 held = {}, nheld = 0 }
   for _, s in ipairs(lib:list()) do
     data.species = data.species + 1
     local file = file_of(s)
@@ -145,6 +151,17 @@ function M.collect(phlox)
     end
     if (s.source or ""):find("%f[%a]read%f[%A]") then
       data.read[#data.read + 1] = { formula = s.formula, file = file }
+    end
+    -- a log K record with no temperature data (no dH, no logK_T) keeps its
+    -- 25 C value at every temperature: found numerically, as maps do
+    if s.model == "logk" and s.reaction then
+      local a = lib.db:reaction(s.reaction, T_REF_K, P_REF_BAR)
+      local b = lib.db:reaction(s.reaction, T_PROBE_K, P_PROBE_BAR)
+      if a and b and math.abs(a.logK - b.logK) < 1e-12 then
+        data.held[file] = data.held[file] or {}
+        table.insert(data.held[file], s.formula)
+        data.nheld = data.nheld + 1
+      end
     end
   end
   return data
@@ -230,6 +247,28 @@ function M.render(data)
   w("")
   if #data.read == 0 then w("none") else
     for _, s in ipairs(data.read) do w("- `", s.formula, "` (", s.file, ")") end
+  end
+  w("")
+  w("## Temperature coverage: log K held at 25 C")
+  w("")
+  w("These species are defined by a log K at 25 C with no reaction enthalpy and no")
+  w("temperature function, so phlox uses their 25 C constant at every temperature.")
+  w("A map away from 25 C names those of its element (and ligand) in a stamp line and")
+  w("in `map.constant_logk`. Most are hydrolysis and complex species: their log K")
+  w("usually changes by several units between 25 and 300 C, so high-temperature maps")
+  w("that depend on them are not reliable until temperature data from a primary")
+  w("source are added (docs/other-diagrams.md, \"High-temperature diagrams from the")
+  w("literature\").")
+  w("")
+  w(("%d of %d species:"):format(data.nheld, data.species))
+  w("")
+  local hf = {}
+  for f in pairs(data.held) do hf[#hf + 1] = f end
+  table.sort(hf)
+  for _, f in ipairs(hf) do
+    local list = {}
+    for _, formula in ipairs(data.held[f]) do list[#list + 1] = "`" .. formula .. "`" end
+    w("- ", f, " (", tostring(#data.held[f]), "): ", table.concat(list, ", "))
   end
   w("")
   if #data.unmatched > 0 then
