@@ -189,6 +189,49 @@ function phlox.water(opts)
   return w
 end
 
+--- The species of `elements` (a list of symbols) whose log K has no
+-- temperature data (a log K record without dH or logK_T): phlox keeps their
+-- 25 C value at T.  Found numerically, by comparing log K at (T, P) with log K
+-- at 25 C and 1 bar.  P defaults to max(1 bar, saturation).  Sorted formulas.
+function phlox.constant_logk(lib, elements, T, P)
+  if getmetatable(lib) ~= phlox.Library then error("phlox.constant_logk: library expected", 2) end
+  P = P or pressure({}, T, "phlox.constant_logk")
+  local held, seen = {}, {}
+  if math.abs(T - 298.15) <= 0.5 then return held end
+  for _, el in ipairs(elements) do
+    for _, s in ipairs(lib:list(el)) do
+      if s.model == "logk" and s.reaction and not seen[s.formula] then
+        seen[s.formula] = true
+        local a = lib.db:reaction(s.reaction, 298.15, 1.0)
+        local b = lib.db:reaction(s.reaction, T, P)
+        if a and b and math.abs(a.logK - b.logK) < 1e-12 then held[#held + 1] = s.formula end
+      end
+    end
+  end
+  table.sort(held)
+  return held
+end
+
+-- Away from 25 C a reader must know which fields, present or missing, rest
+-- on 25 C constants.  held_logk lists them, or refuses the map when
+-- opts.require_temperature_data is set (before any work is done);
+-- stamp_held names them in map.constant_logk and a stamp line.
+local function held_logk(lib, elements, T, P, opts, where)
+  local held = phlox.constant_logk(lib, elements, T, P)
+  if #held > 0 and opts.require_temperature_data then
+    error(("%s: require_temperature_data: no temperature data (log K held at 25 °C) for %s"):format(
+      where, table.concat(held, ", ")), 3)
+  end
+  return held
+end
+
+local function stamp_held(m, held)
+  if #held == 0 then return end
+  m.constant_logk = held
+  m.stamp = m.stamp or {}
+  m.stamp[#m.stamp + 1] = "log K held at 25 °C (no temperature data): " .. table.concat(held, ", ")
+end
+
 local function window_of(opts, xname, yname)
   local ranges = { pH = opts.pH_range or { 0, 14 }, E = opts.E_range or { -2, 2 },
                    loga = opts.loga_range or { -8, 0 } }
@@ -209,6 +252,7 @@ function phlox.map(opts)
   if type(opts.element) ~= "string" then error("phlox.map: element (a symbol) expected", 2) end
   local T = temperature(opts, "phlox.map")
   local P = pressure(opts, T, "phlox.map")
+  local held = held_logk(lib, { opts.element, opts.ligand }, T, P, opts, "phlox.map")
   local axes = opts.axes or { "pH", "E" }
   local copt = {
     element = opts.element, T = T, P = P, x = axes[1], y = axes[2],
@@ -226,28 +270,7 @@ function phlox.map(opts)
     ligand = opts.ligand, ligand_activity = opts.ligand and (opts.ligand_activity or 1e-3) or nil,
   }
   m.files = lib.files
-  -- Away from 25 C, name the species of the element (and ligand) whose log K
-  -- has no temperature data (held at its 25 C value): a reader must know
-  -- which fields, present or missing, rest on 25 C constants.
-  if math.abs(T - 298.15) > 0.5 then
-    local held, seen = {}, {}
-    for _, el in ipairs { opts.element, opts.ligand } do
-      for _, s in ipairs(lib:list(el)) do
-        if s.model == "logk" and s.reaction and not seen[s.formula] then
-          seen[s.formula] = true
-          local a = lib.db:reaction(s.reaction, 298.15, 1.0)
-          local b = lib.db:reaction(s.reaction, T, P)
-          if a and b and math.abs(a.logK - b.logK) < 1e-12 then held[#held + 1] = s.formula end
-        end
-      end
-    end
-    table.sort(held)
-    if #held > 0 then
-      m.constant_logk = held
-      m.stamp = m.stamp or {}
-      m.stamp[#m.stamp + 1] = "log K held at 25 °C (no temperature data): " .. table.concat(held, ", ")
-    end
-  end
+  stamp_held(m, held)
   return m
 end
 
@@ -297,6 +320,7 @@ function phlox.grid_map(opts)
   if getmetatable(lib) ~= phlox.Library then error("phlox.grid_map: library = phlox.library{...} expected", 2) end
   local T = temperature(opts, "phlox.grid_map")
   local P = pressure(opts, T, "phlox.grid_map")
+  local held = held_logk(lib, { opts.element, opts.ligand }, T, P, opts, "phlox.grid_map")
   local pr, er = opts.pH_range or { 0, 14 }, opts.E_range or { -2, 2 }
   local g, err = core.grid_map(lib.db, {
     element = opts.element, T = T, P = P, window = { pr[1], pr[2], er[1], er[2] },
@@ -309,6 +333,7 @@ function phlox.grid_map(opts)
   g.conditions = { T_C = T - T0C, P_bar = P, total = opts.total or 1e-6,
                    ligand = opts.ligand, ligand_total = opts.ligand and (opts.ligand_total or 1e-3) or nil }
   g.label = "rigorous"
+  stamp_held(g, held)
   return g
 end
 

@@ -69,21 +69,13 @@ end
 -- Species of `element` whose record is a log K without temperature
 -- dependence (no dH, no logK_T): their log K stays at its 25 C value at T.
 function diagrams.constant_logk(lib, element, T_C)
-  local out = {}
-  for _, s in ipairs(lib:list(element)) do
-    if s.model == "logk" and s.reaction then
-      local ok1, a = pcall(lib.reaction, lib, s.reaction, { T_C = 25 })
-      local ok2, b = pcall(lib.reaction, lib, s.reaction, { T_C = T_C })
-      if ok1 and ok2 and math.abs(a.logK - b.logK) < 1e-12 then out[#out + 1] = s.formula end
-    end
-  end
-  table.sort(out)
-  return out
+  return phlox.constant_logk(lib, { element }, T_C + T0C)
 end
 
 -- Stamp lines naming, for temperatures other than 25 C, the species whose
--- log K stays at its 25 C value.
-local function held_stamp(lib, elements, temps)
+-- log K stays at its 25 C value.  With opts.require_temperature_data set,
+-- such species are an error instead (call it before the work is done).
+local function held_stamp(lib, elements, temps, opts, where)
   local seen, list = {}, {}
   for _, tc in ipairs(temps) do
     if math.abs(tc - 25) > 1e-9 then
@@ -95,6 +87,9 @@ local function held_stamp(lib, elements, temps)
     end
   end
   if #list == 0 then return nil end
+  if opts and opts.require_temperature_data then
+    fail(where, "require_temperature_data: no temperature data (log K held at 25 °C) for " .. table.concat(list, ", "))
+  end
   return { "log K held at 25 °C (no temperature data): " .. table.concat(list, ", ") }
 end
 
@@ -129,6 +124,7 @@ function diagrams.fractions(opts)
   if xkind == "log_a" and type(opts.ligand_species) ~= "string" then
     fail(where, "x = \"log_a\" needs ligand_species = \"Cl^-\" (a basis species)")
   end
+  local held = held_stamp(lib, { el, opts.ligand }, { T_C_of(opts) }, opts, where)
   local lig_el = opts.ligand
   if xkind == "log_a" and not lig_el then
     local rec = lib:species(opts.ligand_species)
@@ -205,7 +201,7 @@ function diagrams.fractions(opts)
              y = { name = "fraction of " .. el, min = 0, max = 1 } },
     conditions = { T_C = T_C_of(opts), [el .. " total (mol/kg)"] = total, pH = xkind ~= "pH" and opts.pH or nil,
                    activity_model = base.activity },
-    stamp = held_stamp(lib, { el, opts.ligand }, { T_C_of(opts) }),
+    stamp = held,
     stats = { solves = #xs, seconds = seconds },
   }
 end
@@ -234,6 +230,10 @@ function diagrams.solubility(opts)
   if opts.T then fail(where, "give temperatures as T_C = {25, 150, ...}") end
   local temps = opts.T_C or { 25 }
   if type(temps) == "number" then temps = { temps } end
+  for _, tc in ipairs(temps) do
+    if type(tc) ~= "number" then fail(where, "T_C must list numbers") end
+  end
+  local held = held_stamp(lib, { el }, temps, opts, where)
   local total = opts.total or 1
   if type(total) ~= "number" or not (total > 0) then fail(where, "total must be a positive number (mol/kg)") end
   local xs = range_points(opts, where, { 0, 14 })
@@ -243,7 +243,6 @@ function diagrams.solubility(opts)
   local series, failures, retried = {}, {}, 0
   local t0 = os.clock()
   for _, tc in ipairs(temps) do
-    if type(tc) ~= "number" then fail(where, "T_C must list numbers") end
     local y, solids = {}, {}
     for i, pH in ipairs(xs) do
       local s = copy(base)
@@ -288,7 +287,7 @@ function diagrams.solubility(opts)
     axes = { x = { name = "pH", min = xs[1], max = xs[#xs] },
              y = { name = "dissolved " .. el, unit = "mol/kg", log = true } },
     conditions = { [el .. " put in (mol/kg)"] = total, activity_model = base.activity },
-    stamp = held_stamp(lib, { el }, temps),
+    stamp = held,
     stats = { points = #xs * #temps, retries = retried, seconds = os.clock() - t0 },
   }
 end
@@ -338,13 +337,7 @@ function diagrams.series(opts)
     o.T_C = tc
     local ok, m = pcall(phlox.map, o)
     if not ok then fail(where, ("at %g °C: %s"):format(tc, tostring(m))) end
-    m.label = ("%g °C"):format(tc)
-    if held_stamp(lib, { opts.element, opts.ligand }, { tc }) then
-      m.constant_logk = diagrams.constant_logk(lib, opts.element, tc)
-      if opts.ligand then
-        for _, f in ipairs(diagrams.constant_logk(lib, opts.ligand, tc)) do m.constant_logk[#m.constant_logk + 1] = f end
-      end
-    end
+    m.label = ("%g °C"):format(tc)   -- phlox.map set m.constant_logk
     maps[i] = m
   end
   -- plot.grid and plot.overlay stamp the first map's lines: every map
