@@ -193,18 +193,21 @@ end
 -- temperature data (a log K record without dH or logK_T): phlox keeps their
 -- 25 C value at T.  Found numerically, by comparing log K at (T, P) with log K
 -- at 25 C and 1 bar.  P defaults to max(1 bar, saturation).  Sorted formulas.
+local T_REF, P_REF = 298.15, 1.0   -- K, bar: where log K records are given
+local NEAR_T_REF = 0.5             -- K: closer than this to 25 C, nothing is held
+local SAME_LOGK = 1e-12            -- log K this close to its 25 C value is held
 function phlox.constant_logk(lib, elements, T, P)
   if getmetatable(lib) ~= phlox.Library then error("phlox.constant_logk: library expected", 2) end
   P = P or pressure({}, T, "phlox.constant_logk")
   local held, seen = {}, {}
-  if math.abs(T - 298.15) <= 0.5 then return held end
+  if math.abs(T - T_REF) <= NEAR_T_REF then return held end
   for _, el in ipairs(elements) do
     for _, s in ipairs(lib:list(el)) do
       if s.model == "logk" and s.reaction and not seen[s.formula] then
         seen[s.formula] = true
-        local a = lib.db:reaction(s.reaction, 298.15, 1.0)
+        local a = lib.db:reaction(s.reaction, T_REF, P_REF)
         local b = lib.db:reaction(s.reaction, T, P)
-        if a and b and math.abs(a.logK - b.logK) < 1e-12 then held[#held + 1] = s.formula end
+        if a and b and math.abs(a.logK - b.logK) < SAME_LOGK then held[#held + 1] = s.formula end
       end
     end
   end

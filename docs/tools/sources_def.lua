@@ -129,13 +129,14 @@ end
 --           counts = {id = n}, unmatched = {"formula (file)"} }
 -- where a record's log K is compared with its 25 C value: 200 C at 20 bar
 -- (liquid water; saturation is 15.5 bar)
-local T_REF_K, P_REF_BAR = 298.15, 1.0
 local T_PROBE_K, P_PROBE_BAR = 473.15, 20.0
 
 function M.collect(phlox)
   local lib = phlox.library(phlox.available_elements())
   local data = { species = 0, files = {}, by_source = {}, counts = {}, unmatched = {}, read = {},
                  held = {}, nheld = 0 }
+  local held = {}
+  for _, f in ipairs(phlox.constant_logk(lib, phlox.available_elements(), T_PROBE_K, P_PROBE_BAR)) do held[f] = true end
   for _, s in ipairs(lib:list()) do
     data.species = data.species + 1
     local file = file_of(s)
@@ -153,15 +154,11 @@ function M.collect(phlox)
       data.read[#data.read + 1] = { formula = s.formula, file = file }
     end
     -- a log K record with no temperature data (no dH, no logK_T) keeps its
-    -- 25 C value at every temperature: found numerically, as maps do
-    if s.model == "logk" and s.reaction then
-      local a = lib.db:reaction(s.reaction, T_REF_K, P_REF_BAR)
-      local b = lib.db:reaction(s.reaction, T_PROBE_K, P_PROBE_BAR)
-      if a and b and math.abs(a.logK - b.logK) < 1e-12 then
-        data.held[file] = data.held[file] or {}
-        table.insert(data.held[file], s.formula)
-        data.nheld = data.nheld + 1
-      end
+    -- 25 C value at every temperature (phlox.constant_logk, as maps use)
+    if held[s.formula] then
+      data.held[file] = data.held[file] or {}
+      table.insert(data.held[file], s.formula)
+      data.nheld = data.nheld + 1
     end
   end
   return data
