@@ -7,7 +7,7 @@
  * on a subset of the points; the report gives the speed ratio and the
  * largest difference between the two answers.
  *
- * DATA: values marked CSV come from /work/shared/reference/log_k_25C.csv
+ * DATA: values marked CSV come from tests/reference/log_k_25C.csv
  * (its source beside each); "memory" values are recalled with the source
  * named; values marked DEMO are INVENTED FOR THE BENCHMARK, NOT DATA: they
  * only give the system a realistic shape and must never be used for chemistry. */

@@ -9,7 +9,7 @@
  * 2. log K of H2O(l) = H^+ + OH^- at 10,000 temperatures (0-350 C, default
  *    pressure), with the workspace and with the plain reference.
  * The HKF parameters are the OH^-, Na^+, Cl^-, ... sets of SH88 (as in
- * shared/reference/hkf), repeated under made-up formula texts: only the
+ * tests/reference/hkf), repeated under made-up formula texts: only the
  * arithmetic matters here.  Both methods must give the same numbers. */
 #include <math.h>
 #include <stdio.h>

@@ -27,4 +27,22 @@ static inline void px_assert_close_impl(double a, double b, double rel, double a
 #define assert_close(a, b, rel, abs_tol) \
     px_assert_close_impl((a), (b), (rel), (abs_tol), #a, #b, __FILE__, __LINE__)
 
+/* Open a check-value file of tests/reference (PHLOX_REFERENCE_DIR, set by
+ * tests/CMakeLists.txt) for reading; a missing or unreadable file fails the
+ * test with the file's full name, never a bare assertion. */
+#ifdef PHLOX_REFERENCE_DIR
+static inline FILE *px_ref_open_impl(const char *rel, const char *file, int line)
+{
+    char path[1024];
+    snprintf(path, sizeof path, "%s/%s", PHLOX_REFERENCE_DIR, rel);
+    FILE *fp = fopen(path, "r");
+    if (!fp) {
+        print_error("cannot open reference file %s\n", path);
+        _fail(file, line);
+    }
+    return fp;
+}
+#define px_ref_open(rel) px_ref_open_impl((rel), __FILE__, __LINE__)
+#endif
+
 #endif

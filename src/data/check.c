@@ -28,7 +28,7 @@
 #include <stdlib.h>
 #include <string.h>
 
-/* the ligand files in the order FORMAT.md gives for mixed-ligand species:
+/* the ligand files in the order docs/element-files.md gives for mixed-ligand species:
  * Cl, S, C, N, P, F (atomic numbers) */
 static const int ligand_order[] = {17, 16, 6, 7, 15, 9};
 #define N_LIGANDS 6
@@ -36,7 +36,7 @@ static const int ligand_order[] = {17, 16, 6, 7, 15, 9};
  * (common practice, no source: about the rounding of published fits) */
 #define LOGK_AGREE_TOL 0.05
 
-/* species H and O are built in (FORMAT.md, "Where species go") */
+/* species H and O are built in (docs/element-files.md, "Where species go") */
 static const char *const builtin_names[] = {"H2O(l)", "H^+",   "OH^-",   "O2(g)",    "O2(aq)",
                                             "H2(g)",  "H2(aq)", "H2O2(aq)", "e-", NULL};
 
@@ -238,7 +238,7 @@ static void check_logk(pxd_file *f, pxd_entry *e, const px_db *known)
     px_logk_params *lk = &e->sp.logk;
     if (e->has_logK_T) {
         double T = PX_TR;
-        /* log K = k0 + k1 T + k2/T + k3 log10 T + k4/T^2 (FORMAT.md) */
+        /* log K = k0 + k1 T + k2/T + k3 log10 T + k4/T^2 (docs/element-files.md) */
         double v = lk->k[0] + lk->k[1] * T + lk->k[2] / T + lk->k[3] * log10(T) + lk->k[4] / (T * T);
         if (e->has_logK && fabs(v - e->logK_given) > LOGK_AGREE_TOL)
             pxd_report_entry(f, e, PX_DATA_WARNING, "logK_T",

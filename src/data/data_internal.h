@@ -114,7 +114,7 @@ void pxd_check_file(pxd_file *f, const px_db *known);
 #define PXD_KCAL 4184.0    /* J per kcal (thermochemical) */
 #define PXD_CM3_TO_J_PER_BAR 0.1 /* 1 cm3 bar = 0.1 J */
 /* default valid range when neither the species nor the file declares one:
- * phlox's water range (API.md, PX_WATER_TMIN/TMAX) */
+ * phlox's water range (water.h, PX_WATER_TMIN/TMAX) */
 #define PXD_TMIN_DEFAULT 273.15
 #define PXD_TMAX_DEFAULT 623.15
 

@@ -46,7 +46,7 @@ static int run(pxd_file *f, px_data_problems **own, const char *text, size_t len
     f->len = len;
     f->opt = opt;
     f->probs = probs;
-    f->e_unit = 1000.0; /* kJ by default (FORMAT.md, Units) */
+    f->e_unit = 1000.0; /* kJ by default (docs/element-files.md, Units) */
     f->s_unit = 1.0;    /* J/(mol K) */
     f->Tmin = PXD_TMIN_DEFAULT;
     f->Tmax = PXD_TMAX_DEFAULT;

@@ -8,7 +8,7 @@
  *   energies (G, H, dH): kJ x 1000, J x 1, kcal x 4184, cal x 4.184 -> J/mol
  *   entropies (S): J x 1, cal x 4.184 -> J/(mol K)
  *   HKF parameters, printed scaling in calories (Shock and Helgeson 1988
- *     tables; /work/shared/reference/hkf/README.md): a1 x 0.1, a2 x 1e2,
+ *     tables; tests/reference/hkf/README.md): a1 x 0.1, a2 x 1e2,
  *     a3 x 1, a4 x 1e4, c1 x 1, c2 x 1e4, omega x 1e5, then x 4.184 J/cal
  *   molar volume V: cm3/mol x 0.1 -> J/bar
  * Host memory failures set f->oom and raise, so the sandbox can tell them
@@ -24,7 +24,7 @@
 #include <ctype.h>
 
 /* HKF printed-scaling factors (raw = printed x factor), Shock and Helgeson
- * 1988 table headers, as listed in /work/shared/reference/hkf/README.md */
+ * 1988 table headers, as listed in tests/reference/hkf/README.md */
 #define HKF_A1_SCALE 1e-1
 #define HKF_A2_SCALE 1e2
 #define HKF_A3_SCALE 1.0

@@ -234,7 +234,7 @@ void px_species_init(px_species *sp)
 }
 
 /* Liquid water: NBS 1982 (Wagman et al. 1982) dfG, dfH, S at 298.15 K as in
- * shared/reference/gibbs_25C.csv (from memory of the NBS tables). */
+ * tests/reference/gibbs_25C.csv (from memory of the NBS tables). */
 #define H2O_DGF (-237129.0) /* J/mol */
 #define H2O_DHF (-285830.0) /* J/mol */
 #define H2O_S 69.91         /* J/(mol K) */

@@ -1,4 +1,4 @@
-/* formula.c - the parser of phlox's chemical formula notation (FORMAT.md).
+/* formula.c - the parser of phlox's chemical formula notation (docs/element-files.md).
  *
  *   formula := "e-" | body [charge] [state]
  *   body    := part { "*" [number] part }          hydrate water: CuSO4*5H2O

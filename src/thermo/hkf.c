@@ -41,7 +41,7 @@
 #define GF_PMAX 1000.0   /* ... and P < 1000 bar (S92) */
 
 /* Born constants at 25 C, 1 bar quoted in the HKF papers (from memory of
- * SH88 / TH88, as listed in shared/reference/hkf/README.md). */
+ * SH88 / TH88, as listed in tests/reference/hkf/README.md). */
 #define PAPERS_EPS 78.47
 #define PAPERS_Y (-5.802e-5)  /* 1/K */
 #define PAPERS_Q 5.903e-7     /* 1/bar */
@@ -250,9 +250,9 @@ double px_hkf_omega_born(int charge, double r_x)
 /* omega = -1514.4 S + beta_Z (cal/mol, S in cal/(mol K)).  The slope is from
  * memory of the SH88 / Shock et al. 1997 omega-S correlation; it reproduces
  * omega of O2(aq), H2(aq) (beta_0 = 0) and of the estimated oxyanions in
- * shared/reference/hkf to 4-5 digits.  The intercepts beta_Z are DERIVED
+ * tests/reference/hkf to 4-5 digits.  The intercepts beta_Z are DERIVED
  * HERE from species that the papers estimated (or, for Z = +1, NH4^+), using
- * the parameters in shared/reference/hkf/hkf_parameters.csv (from memory of
+ * the parameters in tests/reference/hkf/hkf_parameters.csv (from memory of
  * SH88, SHS89, Shock et al. 1997): */
 #define OMEGA_S_SLOPE (-1514.4)
 #define BETA_0 0.0          /* O2(aq) and H2(aq), SHS89: residuals 5 and 1 cal/mol */
@@ -261,7 +261,7 @@ double px_hkf_omega_born(int charge, double r_x)
 #define BETA_P1 55257.6     /* NH4^+, SH88 */
 #define BETA_P2 105505.7    /* Fe^2+, Shock et al. 1997 (an estimated species) */
 
-/* SH88 correlations (from memory, as recalled in shared/reference/hkf/README.md):
+/* SH88 correlations (from memory, as recalled in tests/reference/hkf/README.md):
  *   a1 [cal/mol/bar] = 1.3684e-2 dVn [cm3/mol] + 0.1765
  *   sigma [cm3/mol]  = 1.11 dVn + 1.8          (sigma = a1 + a2/(Psi+P))
  *   a4 [cal K/mol]   = -4.134 a2 - 27790

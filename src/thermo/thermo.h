@@ -1,7 +1,7 @@
 /* thermo.h - species and reactions: the public interface of src/thermo/.
  *
  * What this module offers (DESIGN.md layer 2):
- *   - formulas in phlox notation (FORMAT.md): element composition, charge,
+ *   - formulas in phlox notation (docs/element-files.md): element composition, charge,
  *     state, canonical text, molar mass (IUPAC CIAAW 2021 standard atomic
  *     weights) and the reference-state entropies of the elements;
  *   - reactions: "2 H^+ + 2 e- = H2(g)" parsed into signed coefficients,
@@ -26,7 +26,7 @@
 
 /* ---------------------------------------------------------------- formulas */
 
-/* Parse a formula (FORMAT.md notation) into out; canonical text in out->text.
+/* Parse a formula (docs/element-files.md notation) into out; canonical text in out->text.
  * PX_EPARSE for malformed text, PX_ERANGE if a limit is exceeded. */
 int px_formula_parse(const char *text, px_formula *out);
 /* The same, with a human-readable reason in msg (may be NULL) on failure,

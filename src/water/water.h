@@ -17,7 +17,7 @@
  * Every function is reentrant, never prints, and writes its outputs only on
  * success.
  *
- * The agreed API (API.md) is the first block; the blocks marked "added" are
+ * The core API is the first block; the blocks marked "added" are
  * additions of the water module (Helmholtz derivatives, properties at (T, rho),
  * the full saturation state, solver options), used by the tests and useful for
  * checks. */
@@ -25,7 +25,7 @@
 #define PX_WATER_H
 #include "core/status.h" /* PX_OK, PX_EINVAL, PX_ERANGE, ... */
 
-/* ---- agreed API (API.md) ------------------------------------------------ */
+/* ---- core API ------------------------------------------------ */
 
 typedef enum { PX_DIELECTRIC_R8_97 = 0, PX_DIELECTRIC_JN91 = 1 } px_dielectric_model;
 /* PX_DIELECTRIC_JN91 (Johnson and Norton 1991) is NOT implemented: the

@@ -4,7 +4,7 @@
 --
 -- Data sets: CO2(aq), HCO3^- and CO3^2- carry the revised-HKF parameters of
 -- Shock and Helgeson 1988 / Shock, Helgeson and Sverjensky 1989 (as recalled in
--- the project reference table shared/reference/hkf). Gases: CODATA 1989 key
+-- the project reference table tests/reference/hkf). Gases: CODATA 1989 key
 -- values where there is one, NBS 1982 otherwise. Calcite, aragonite and the
 -- Ca-carbonate ion pairs use the analytic log K(T) of Plummer and Busenberg 1982
 -- (valid 0-90 C). Other minerals: NBS 1982 or Robie and Hemingway 1995.
@@ -13,8 +13,8 @@
 local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
 local NBS_DERIVED = "derived here from dfG and dfH of " .. NBS
 local CODATA = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values for Thermodynamics (dfH, S; dfG derived here as dfH - T dfS)"
-local SH88 = "from memory of Shock and Helgeson 1988 (Geochim. Cosmochim. Acta 52:2009), ion tables (table no. not recalled); as in the project reference table shared/reference/hkf/hkf_parameters.csv"
-local SHS89 = "from memory of Shock, Helgeson and Sverjensky 1989 (Geochim. Cosmochim. Acta 53:2157), neutral species (table no. not recalled); as in the project reference table shared/reference/hkf/hkf_parameters.csv"
+local SH88 = "from memory of Shock and Helgeson 1988 (Geochim. Cosmochim. Acta 52:2009), ion tables (table no. not recalled)"
+local SHS89 = "from memory of Shock, Helgeson and Sverjensky 1989 (Geochim. Cosmochim. Acta 53:2157), neutral species (table no. not recalled)"
 local KELLEY = "Cp: from memory of Kelley 1960 (U.S. Bur. Mines Bull. 584), Maier-Kelley coefficients in cal converted x 4.184"
 local HDNB = "Cp: from memory of Helgeson, Delany, Nesbitt and Bird 1978 (Am. J. Sci. 278-A), Maier-Kelley coefficients in cal converted x 4.184"
 local RH95 = "from memory of Robie and Hemingway 1995 (U.S. Geol. Surv. Bull. 2131)"

@@ -3,7 +3,7 @@
 -- metals and the common chloride salts.
 --
 -- Data sets: Cl^- carries the revised-HKF parameters of Shock and Helgeson 1988
--- (as recalled in the project's reference table shared/reference/hkf). The
+-- (recalled from the paper). The
 -- oxychlorine species are written as reactions whose log K and dH are derived
 -- here from NBS 1982 dfG/dfH (the arithmetic is in docs/data/ligands.md).
 -- Chloro complexes: stability constants at I = 0, 25 C. Almost every value was
@@ -13,7 +13,7 @@
 local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
 local NBS_DERIVED = "derived here from dfG and dfH of " .. NBS
 local CODATA = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values for Thermodynamics"
-local SH88 = "from memory of Shock and Helgeson 1988 (Geochim. Cosmochim. Acta 52:2009), ion tables (table no. not recalled); as in the project reference table shared/reference/hkf/hkf_parameters.csv"
+local SH88 = "from memory of Shock and Helgeson 1988 (Geochim. Cosmochim. Acta 52:2009), ion tables (table no. not recalled)"
 local KELLEY = "Cp: from memory of Kelley 1960 (U.S. Bur. Mines Bull. 584), Maier-Kelley coefficients in cal converted x 4.184"
 local N90 = "from memory of Nordstrom, Plummer, Langmuir, Busenberg, May, Jones and Parkhurst 1990 (ACS Symp. Ser. 416, 398-413)"
 local COMPILED = "from memory of the I = 0 constants compiled from Smith and Martell (Critical Stability Constants) in Nordstrom et al. 1990-era aqueous data sets; attribution to the primary paper not recalled"

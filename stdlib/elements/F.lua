@@ -2,12 +2,12 @@
 -- fluoro complexes (Al, Fe, Mg, Ca, Na, Mn) and fluorite.
 --
 -- Data sets: F^- carries the revised-HKF parameters of Shock and Helgeson 1988
--- (as recalled in the project reference table shared/reference/hkf). Everything
+-- (recalled from the paper). Everything
 -- else is a formation constant at I = 0, 25 C, mostly from Nordstrom et al.
 -- 1990. Nearly every number was recalled, not read ("from memory of").
 -- F2(g) is left out on purpose: it cannot exist in contact with water.
 
-local SH88 = "from memory of Shock and Helgeson 1988 (Geochim. Cosmochim. Acta 52:2009), ion tables (table no. not recalled); as in the project reference table shared/reference/hkf/hkf_parameters.csv"
+local SH88 = "from memory of Shock and Helgeson 1988 (Geochim. Cosmochim. Acta 52:2009), ion tables (table no. not recalled)"
 local N90 = "from memory of Nordstrom, Plummer, Langmuir, Busenberg, May, Jones and Parkhurst 1990 (ACS Symp. Ser. 416, 398-413)"
 local COMPILED = "from memory of the I = 0 constants compiled from Smith and Martell (Critical Stability Constants) in Nordstrom et al. 1990-era aqueous data sets; attribution to the primary paper not recalled"
 local CAL = { energy = "cal", entropy = "cal" }

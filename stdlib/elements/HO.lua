@@ -3,7 +3,7 @@
 -- the electron e- is a convention (e- = H^+ - 1/2 H2(g)).  Everything else
 -- about H and O is here.  Values carry their sources; "from memory of" means
 -- recalled, not read.  Aqueous HKF rows are those of
--- shared/reference/hkf/hkf_parameters.csv with confidence high or medium
+-- tests/reference/hkf/hkf_parameters.csv with confidence high or medium
 -- (checked there against their published Cp and V at 25 C).
 return {
   element = "HO",
@@ -24,7 +24,7 @@ return {
       G = -37595, H = -54977, S = -2.56,
       hkf = { a1 = 1.2527, a2 = 0.0738, a3 = 1.8423, a4 = -2.7821,
               c1 = 4.15, c2 = -10.346, omega = 1.7246 },
-      source = "from memory of Shock and Helgeson 1988 (GCA 52, 2009), via shared/reference/hkf/hkf_parameters.csv",
+      source = "from memory of Shock and Helgeson 1988 (GCA 52, 2009)",
       quality = "high",
       note = "reproduces its published Cp (-32.79 cal/mol/K) and V (-4.18 cm3/mol) at 25 C; pKw(T) with IAPWS-95 water within 0.03 of IAPWS R11-07 to 300 C",
     },
@@ -34,9 +34,9 @@ return {
       G = 3954, H = -2900, S = 26.04,
       hkf = { a1 = 5.7889, a2 = 6.3536, a3 = 3.2528, a4 = -3.0417,
               c1 = 35.353, c2 = 8.3726, omega = -0.3943 },
-      source = "from memory of Shock, Helgeson and Sverjensky 1989 (GCA 53, 2157), via shared/reference/hkf/hkf_parameters.csv; c2 reconstructed there from the SH88 c2-Cp correlation",
+      source = "from memory of Shock, Helgeson and Sverjensky 1989 (GCA 53, 2157); c2 reconstructed from the Shock and Helgeson 1988 c2-Cp correlation",
       quality = "medium",
-      note = "c2 is derived, not recalled (see shared/reference/hkf/README.md); published Cp and V recalled weakly",
+      note = "c2 is derived, not recalled (Shock and Helgeson 1988 c2-Cp correlation); published Cp and V recalled weakly",
     },
     {
       formula = "H2(aq)", model = "hkf",
@@ -44,7 +44,7 @@ return {
       G = 4236, H = -1000, S = 13.8,
       hkf = { a1 = 5.1427, a2 = 4.7758, a3 = 3.8729, a4 = -2.9764,
               c1 = 27.6251, c2 = 5.093, omega = -0.209 },
-      source = "from memory of Shock, Helgeson and Sverjensky 1989 (GCA 53, 2157), via shared/reference/hkf/hkf_parameters.csv",
+      source = "from memory of Shock, Helgeson and Sverjensky 1989 (GCA 53, 2157)",
       quality = "medium",
     },
     {

@@ -3,7 +3,7 @@
 --
 -- Data sets: NH3(aq), NH4^+ and NO3^- carry the revised-HKF parameters of Shock
 -- and Helgeson 1988 / Shock, Helgeson and Sverjensky 1989 (as recalled in the
--- project reference table shared/reference/hkf). NO2^- is an HKF estimate from
+-- project reference table tests/reference/hkf). NO2^- is an HKF estimate from
 -- NBS 1982 values. Gases: CODATA 1989 where there is a key value, NBS otherwise.
 -- Ammine complexes: J. Bjerrum's constants (2 mol/L NH4NO3, 30 C), the classic
 -- complete sets; they are NOT infinite-dilution 25 C constants (see notes).
@@ -16,8 +16,8 @@
 local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
 local NBS_DERIVED = "derived here from dfG and dfH of " .. NBS
 local CODATA = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values for Thermodynamics (dfH, S; dfG derived here as dfH - T dfS)"
-local SH88 = "from memory of Shock and Helgeson 1988 (Geochim. Cosmochim. Acta 52:2009), ion tables (table no. not recalled); as in the project reference table shared/reference/hkf/hkf_parameters.csv"
-local SHS89 = "from memory of Shock, Helgeson and Sverjensky 1989 (Geochim. Cosmochim. Acta 53:2157), neutral species (table no. not recalled); as in the project reference table shared/reference/hkf/hkf_parameters.csv"
+local SH88 = "from memory of Shock and Helgeson 1988 (Geochim. Cosmochim. Acta 52:2009), ion tables (table no. not recalled)"
+local SHS89 = "from memory of Shock, Helgeson and Sverjensky 1989 (Geochim. Cosmochim. Acta 53:2157), neutral species (table no. not recalled)"
 local KELLEY = "Cp: from memory of Kelley 1960 (U.S. Bur. Mines Bull. 584), Maier-Kelley coefficients in cal converted x 4.184"
 local BJERRUM = "from memory of J. Bjerrum 1941, Metal Ammine Formation in Aqueous Solution (2 mol/L NH4NO3, 30 C), as reproduced in Smith and Martell"
 local SM = "from memory of Smith and Martell, Critical Stability Constants (I = 0, 25 C)"

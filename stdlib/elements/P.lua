@@ -3,7 +3,7 @@
 -- (apatite, brushite, strengite, vivianite).
 --
 -- Data sets: H2PO4^- carries revised-HKF parameters of Shock and Helgeson 1988
--- as recalled in the project reference table shared/reference/hkf (its c2 was
+-- as recalled in the project reference table tests/reference/hkf (its c2 was
 -- reconstructed there from the published Cp, see the note). HPO4^2- uses the
 -- same table's dfG/dfH/S with loader-estimated HKF parameters, because the
 -- recalled c1/c2 fail the Cp check. H3PO4 and PO4^3- are written as acid-base
@@ -11,7 +11,7 @@
 -- number was recalled, not read.
 
 local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
-local SH88 = "from memory of Shock and Helgeson 1988 (Geochim. Cosmochim. Acta 52:2009), ion tables (table no. not recalled); as in the project reference table shared/reference/hkf/hkf_parameters.csv"
+local SH88 = "from memory of Shock and Helgeson 1988 (Geochim. Cosmochim. Acta 52:2009), ion tables (table no. not recalled)"
 local SM = "from memory of Smith and Martell, Critical Stability Constants (I = 0, 25 C)"
 local CAP = "from memory of Chughtai, Marshall and Nancollas 1968 (J. Phys. Chem. 72:208) as compiled with I = 0 constants in Nordstrom et al. 1990-era aqueous data sets"
 local MGP = "from memory of I = 0 constants compiled in Nordstrom et al. 1990-era aqueous data sets; primary paper not recalled"

@@ -13,7 +13,7 @@ M.T0 = 298.15             -- K, reference temperature
 M.LN10 = math.log(10)
 M.CAL = 4.184             -- J per thermochemical calorie
 
--- Unit words of FORMAT.md to kJ (energy) and J/(mol K) (entropy).
+-- Unit words of docs/element-files.md to kJ (energy) and J/(mol K) (entropy).
 M.ENERGY = { kJ = 1, J = 1e-3, kcal = 4.184, cal = 4.184e-3 }
 M.ENTROPY = { J = 1, cal = 4.184 }
 M.MODELS = { cp = true, hkf = true, logk = true }
@@ -51,7 +51,7 @@ function M.reporter(labels)
 end
 
 ---------------------------------------------------------------------------- sandbox
--- Element files are data: they run with the pure helpers FORMAT.md promises and a
+-- Element files are data: they run with the pure helpers docs/element-files.md promises and a
 -- bounded instruction count, and must return a table.
 function M.sandbox_env()
   return {
@@ -222,7 +222,7 @@ function M.balance(terms, self)
 end
 
 ---------------------------------------------------------------------------- heat capacity
--- Maier-Kelley style polynomial of FORMAT.md (a + b T + c/T^2 + d/sqrt(T) + e T^2).
+-- Maier-Kelley style polynomial of docs/element-files.md (a + b T + c/T^2 + d/sqrt(T) + e T^2).
 function M.cp_poly(c, T)
   return c.a + (c.b or 0) * T + (c.c or 0) / T ^ 2 + (c.d or 0) / math.sqrt(T) + (c.e or 0) * T ^ 2
 end
@@ -230,7 +230,7 @@ end
 -- Revised HKF (Tanger and Helgeson 1988) Cp in cal/(mol K) and V in cm3/mol at 25 C,
 -- 1 bar, from a record's hkf parameters in the papers' units, with the Born functions
 -- Q = 5.903e-7 /bar and X = -3.09e-7 /K^2 as quoted in the HKF papers (the c1, c2 were
--- regressed with these; shared/reference/hkf/README.md). theta = 228 K, psi = 2600 bar
+-- regressed with these; tests/reference/hkf/README.md). theta = 228 K, psi = 2600 bar
 -- (Tanger and Helgeson 1988). At P = Pr the a3/a4 Cp term vanishes.
 M.HKF_THETA, M.HKF_PSI = 228, 2600
 M.BORN_Q, M.BORN_X = 5.903e-7, -3.09e-7

@@ -4,9 +4,9 @@
 --
 -- Run from the repository root:
 --     lua5.4 tests/data/test_data_ligands.lua [reference_dir]
--- reference_dir defaults to ../shared/reference. Exits non-zero when a check
+-- reference_dir defaults to tests/reference. Exits non-zero when a check
 -- fails. Plain Lua 5.4; loads the files in a small sandbox of its own (the
--- pure helpers FORMAT.md promises; tests/data/common.lua, shared with the other
+-- pure helpers docs/element-files.md promises; tests/data/common.lua, shared with the other
 -- data checks), so it runs without the phlox binary.
 --
 -- What is checked (each check prints its source and tolerance):
@@ -14,13 +14,13 @@
 --      parse, a logk reaction names its species exactly once and balances in
 --      elements and charge;
 --   2. thermochemical cycle dfG = dfH - T dfS with element entropies, for every
---      species carrying G, H and S (tolerance 1.5 kJ/mol, from the data brief);
---   3. HKF records against shared/reference/hkf/hkf_parameters.csv: same
+--      species carrying G, H and S (tolerance 1.5 kJ/mol; common practice, no source);
+--   3. HKF records against tests/reference/hkf/hkf_parameters.csv: same
 --      numbers, and Cp/V at 25 C recomputed with the papers' Born functions
 --      against the published Cp/V (tolerance 1 cal/(mol K), 0.5 cm3/mol, as in
 --      the reference README);
 --   4. every row of log_k_25C.csv and standard_potentials.csv whose species are
---      all known (tolerance 0.2 log units / 10 mV, from the data brief); metal
+--      all known (tolerance 0.2 log units / 10 mV, rule of thumb, common practice, no source); metal
 --      ions and other non-ligand species are taken from gibbs_25C.csv (NBS rows
 --      by default) or hkf_parameters.csv;
 --   5. mineral and gas log K recalled from the literature (named per row);
@@ -30,7 +30,7 @@
 -- DOCUMENTED below with the difference they showed; such a row still fails if
 -- the difference moves by more than 0.05 log units / 5 mV.
 
-local refdir = arg[1] or "../shared/reference"
+local refdir = arg[1] or "tests/reference"
 
 local C = dofile((arg[0]:match("^(.*)[/\\]") or ".") .. "/common.lua")
 
@@ -77,7 +77,7 @@ local function gibbs_name(name, state)
 end
 
 -- ---------------------------------------------------------------- element entropies (per atom, J/(mol K))
--- CODATA: from memory of Cox, Wagman and Medvedev 1989 (values in the data brief
+-- CODATA: from memory of Cox, Wagman and Medvedev 1989 (values
 -- for H2, O2, N2, Cl2, F2, S, C, P; metals as recalled).
 local S_CODATA = {
   H = 130.68 / 2, O = 205.152 / 2, N = 191.61 / 2, Cl = 223.081 / 2, F = 202.791 / 2,
@@ -103,7 +103,7 @@ local MODELS, QUALITY = C.MODELS, C.QUALITY
 local WATER = { ["H2O(l)"] = true, ["H^+"] = true, ["OH^-"] = true, ["O2(g)"] = true,
                 ["H2(g)"] = true, ["O2(aq)"] = true, ["H2(aq)"] = true, ["H2O2(aq)"] = true }
 
-print("1. structure (FORMAT.md v1)")
+print("1. structure (docs/element-files.md v1)")
 for _, el in ipairs(FILES) do
   local path = "stdlib/elements/" .. el .. ".lua"
   local def, err = load_def(path)
@@ -311,7 +311,7 @@ local function involves_file_species(text)
 end
 
 -- ---------------------------------------------------------------- 2. cycle check
-print("\n2. thermochemical cycle: dfG vs dfH - T dfS (element entropies: CODATA 1989 / NBS 1982 per the record's source, from memory); tolerance 1.5 kJ/mol (data brief)")
+print("\n2. thermochemical cycle: dfG vs dfH - T dfS (element entropies: CODATA 1989 / NBS 1982 per the record's source, from memory); tolerance 1.5 kJ/mol (common practice, no source)")
 do
   local worst = {}
   for _, f in ipairs(order) do
@@ -335,7 +335,7 @@ do
 end
 
 -- ---------------------------------------------------------------- 2b. dfG vs gibbs_25C.csv
-print("\n2b. dfG of file species vs gibbs_25C.csv rows (NBS 1982 and CODATA 1989, both recalled there): nearest row within 1.5 kJ/mol (data brief tolerance)")
+print("\n2b. dfG of file species vs gibbs_25C.csv rows (NBS 1982 and CODATA 1989, both recalled there): nearest row within 1.5 kJ/mol (common practice, no source)")
 do
   local rows_by = {}
   for _, r in ipairs(gibbs_rows) do
@@ -364,7 +364,7 @@ do
 end
 
 -- ---------------------------------------------------------------- 3. HKF records
-print("\n3. HKF records vs shared/reference/hkf/hkf_parameters.csv (identical numbers); Cp/V at 25 C with the papers' Born functions (Q = 5.903e-7 /bar, X = -3.09e-7 /K^2, from the reference README) vs published Cp/V: tolerance 1 cal/(mol K), 0.5 cm3/mol (reference README)")
+print("\n3. HKF records vs tests/reference/hkf/hkf_parameters.csv (identical numbers); Cp/V at 25 C with the papers' Born functions (Q = 5.903e-7 /bar, X = -3.09e-7 /K^2, from the reference README) vs published Cp/V: tolerance 1 cal/(mol K), 0.5 cm3/mol (reference README)")
 do
   for _, f in ipairs(order) do
     local r = species[f]
@@ -412,7 +412,7 @@ local DOCUMENTED = {
   ["HClO(aq) + H^+ + 2 e- = Cl^- + H2O(l)"] = { 0.0132, "CRC 1.482 V; NBS dfG of HClO(aq) and Cl^- alone give 1.495 V, as does the file (Morris 1966 pKa with NBS ClO^-); Pourbaix 1966 prints 1.494 (recalled)" },
 }
 
-print("\n4a. log_k_25C.csv rows that involve ligand-file species (ion set NBS = gibbs_25C.csv NBS rows; CODATA and SH88 sets shown); tolerance 0.2 (data brief)")
+print("\n4a. log_k_25C.csv rows that involve ligand-file species (ion set NBS = gibbs_25C.csv NBS rows; CODATA and SH88 sets shown); tolerance 0.2 (common practice, no source)")
 for _, row in ipairs(read_csv(refdir .. "/log_k_25C.csv")) do
   local rx = row.reaction
   if involves_file_species(rx) then
@@ -439,7 +439,7 @@ for _, row in ipairs(read_csv(refdir .. "/log_k_25C.csv")) do
   end
 end
 
-print("\n4b. standard_potentials.csv couples that involve ligand-file species (E = -dGr/(nF), ion set NBS); tolerance 10 mV (data brief)")
+print("\n4b. standard_potentials.csv couples that involve ligand-file species (E = -dGr/(nF), ion set NBS); tolerance 10 mV (common practice, no source)")
 for _, row in ipairs(read_csv(refdir .. "/standard_potentials.csv")) do
   local rx = row.couple
   if involves_file_species(rx) then

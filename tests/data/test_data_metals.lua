@@ -3,22 +3,22 @@
 -- outside the files.
 --
 -- Run from anywhere:  lua5.4 tests/data/test_data_metals.lua [reference_dir]
--- (default reference dir: ../shared/reference relative to the repository root).
+-- (default reference dir: tests/reference relative to the repository root).
 -- Exits non-zero when a check fails.
 --
 -- What is checked, and against what:
 --  1. structure: required fields per model, one record per formula, element and charge
---     parse, quality word, a source on every record (FORMAT.md);
+--     parse, quality word, a source on every record (docs/element-files.md);
 --  2. every "logk" reaction balances in elements and charge, names its species once and
 --     uses only species defined in the same file or built in;
 --  3. dfG = dfH - T dfS for every record that carries G, H and S, with CODATA 1989
---     element entropies (tolerance 1.5 kJ/mol, from the data brief);
---  4. copies of reference rows: G, H, S and Cp(298.15 K) against the rows of the shared reference
+--     element entropies (tolerance 1.5 kJ/mol; common practice, no source);
+--  4. copies of reference rows: G, H, S and Cp(298.15 K) against the rows of the reference tables (tests/reference)
 --     gibbs_25C.csv for the table each file says it uses; HKF parameters against
 --     hkf/hkf_parameters.csv, and Cp and V at 25 C recomputed from them against the
 --     published Cp and V of that table (revised HKF, Tanger and Helgeson 1988);
 --  5. E of couples in standard_potentials.csv and log K of rows in log_k_25C.csv that
---     involve these metals (tolerances 10 mV and 0.2 log units, from the data brief), and
+--     involve these metals (tolerances 10 mV and 0.2 log units; common practice, no source), and
 --     a few couples and constants recalled from the CRC series and Baes and Mesmer.
 -- Disagreements that are understood are listed in DOCUMENTED with the deviation they
 -- show and why (docs/data/other-metals.md); such a check still fails if the deviation
@@ -32,9 +32,9 @@ local T0 = C.T0
 local LN10 = C.LN10
 local RTLN10 = R * T0 * LN10    -- 5.70801 kJ/mol
 
-local TOL_E = 0.010             -- V, data brief
-local TOL_LOGK = 0.2            -- data brief
-local TOL_CYCLE = 1.5           -- kJ/mol, data brief
+local TOL_E = 0.010             -- V; common practice, no source
+local TOL_LOGK = 0.2            -- common practice, no source
+local TOL_CYCLE = 1.5           -- kJ/mol; common practice, no source
 local TOL_CP = 1.0              -- J/(mol K), common practice, no source
 local TOL_HKF_CP = 1.0          -- cal/(mol K), hkf/README.md
 local TOL_HKF_V = 0.5           -- cm3/mol, hkf/README.md
@@ -53,7 +53,7 @@ local FILES = { "Al", "Pb", "Sn", "Ag", "Cd", "Mg", "Ca", "Ti", "Mo", "Na", "K" 
 local script = arg and arg[0] or "tests/data/test_data_metals.lua"
 local script_dir = script:match("^(.*)/[^/]*$") or "."
 local root = script_dir .. "/../.."
-local refdir = arg and arg[1] or (root .. "/../shared/reference")
+local refdir = arg and arg[1] or (root .. "/tests/reference")
 
 ---------------------------------------------------------------------------- report
 local rep = C.reporter({ PASS = "PASS  ", FAIL = "FAIL  ", DOC = "DOC   ", SKIP = "SKIP  " })
@@ -83,8 +83,8 @@ end
 ---------------------------------------------------------------------------- load files
 local ENERGY, ENTROPY, QUALITY, MODELS = C.ENERGY, C.ENTROPY, C.QUALITY, C.MODELS
 
--- Species built into phlox (FORMAT.md); G at 25 C in kJ/mol used by these checks:
--- H2O(l) from the NBS tables (data brief), OH- from the NBS row of gibbs_25C.csv.
+-- Species built into phlox (docs/element-files.md); G at 25 C in kJ/mol used by these checks:
+-- H2O(l) from the NBS tables, OH- from the NBS row of gibbs_25C.csv.
 local BUILTIN = {
   ["H2O(l)"] = -237.129, ["H^+"] = 0, ["O2(g)"] = 0, ["H2(g)"] = 0, ["e-"] = 0,
   ["OH^-"] = tonumber(gibbs_row("OH-", "aq", "NBS").dGf_kJ_mol),
@@ -141,7 +141,7 @@ for _, el in ipairs(FILES) do
         order[#order + 1] = sp.formula
       end
     end
-    if ok then pass(string.format("%s.lua: %d records load in the sandbox, fields and formulas valid (FORMAT.md)", el, #t.species)) end
+    if ok then pass(string.format("%s.lua: %d records load in the sandbox, fields and formulas valid (docs/element-files.md)", el, #t.species)) end
   end
 end
 
@@ -330,7 +330,7 @@ local DOCUMENTED = {
   ["MoO4^2- + 4 H2O(l) + 6 e- = Mo(s) + 8 OH^-"] = { dev = 0.140, why =
     "CRC -1.05 V follows an old dfG(MoO4^2-) near -915 kJ/mol (Latimer era); NBS 1982 -836.3 (used, and Shock et al. 1997) gives -0.910 V" },
   ["Mg(OH)2(s,brucite) = Mg^2+ + 2 OH^-"] = { dev = -0.244, why =
-    "SH88 dfG(Mg2+) (used, as the brief asks) is 0.8 kJ/mol above NBS and 1.4 above CODATA; CODATA Mg2+ with NBS brucite gives -11.15 exactly" },
+    "SH88 dfG(Mg2+) (used, as the project asks) is 0.8 kJ/mol above NBS and 1.4 above CODATA; CODATA Mg2+ with NBS brucite gives -11.15 exactly" },
   ["Ca(OH)2(s,portlandite) + 2 H^+ = Ca^2+ + 2 H2O(l)"] = { dev = -0.279, why =
     "SH88 Ca2+ (about CODATA) with NBS portlandite gives 22.52; NBS Ca2+ would give 22.66; R&H/CODATA-consistent portlandite not recalled" },
   ["Al(OH)3(s,gibbsite) + 3 H^+ = Al^3+ + 3 H2O(l)"] = { dev = 0.298, why =
@@ -397,7 +397,7 @@ for _, r in ipairs(logks) do
   end
 end
 
--- Couples and constants recalled (not in the shared reference tables).
+-- Couples and constants recalled (not in the project's reference tables (tests/reference)).
 local CRC = "from memory of the CRC Handbook electrochemical series (Vanysek)"
 local RECALLED = {
   { "Pb^2+ + 2 e- = Pb(s)", -0.1262, "E", CRC },

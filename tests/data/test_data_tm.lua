@@ -1,16 +1,16 @@
 -- tests/data/test_data_tm.lua: checks of the transition-metal element files
 -- (stdlib/elements/Fe, Cu, Zn, Ni, Co, Mn, Cr) against published values held outside
--- the project in the shared reference tables.
+-- the project in the project's reference tables (tests/reference).
 --
 -- Run from the repository root:   lua5.4 tests/data/test_data_tm.lua [reference_dir]
--- reference_dir defaults to ../shared/reference relative to the repository root.
+-- reference_dir defaults to tests/reference relative to the repository root.
 -- Exits 1 when a check fails.
 --
 -- What is checked, per file:
 --   1. structure: required fields, models, quality words, duplicates, and that every
 --      logk reaction balances in elements and charge and names its species once;
 --   2. dfG = dfH - T*dfS with the elements' entropies for every cp and hkf record
---      (tolerance 1.5 kJ/mol; rule of thumb from the data brief, no source);
+--      (tolerance 1.5 kJ/mol; common practice, no source);
 --   3. copy check: dfG/dfH/S of each record against the row of the table it cites
 --      (gibbs_25C.csv; hkf/hkf_parameters.csv for the Shock et al. 1997 values);
 --   4. Cp(298.15 K) of each Maier-Kelley polynomial against the NBS Cp in
@@ -20,7 +20,7 @@
 --      hkf/README.md);
 --   6. E0 of every couple in standard_potentials.csv and log K of every row in
 --      log_k_25C.csv that can be formed from these files (10 mV, 0.2 log units, the
---      data brief's tolerances). A disagreement that is explained in
+--      tolerances of common practice, no source). A disagreement that is explained in
 --      docs/data/transition-metals.md is listed in KNOWN below with its cause and the
 --      largest difference the explanation covers; it is reported, and it fails if the
 --      difference grows past that bound.
@@ -73,7 +73,7 @@ local ALIAS = {
   ["Mn(OH)2(s)"] = "Mn(OH)2(am)",
 }
 
--- Built-in water species (not in element files). H2O(l): NBS 1982 as the brief gives;
+-- Built-in water species (not in element files). H2O(l): NBS 1982 as chosen for the project;
 -- OH^- is read from gibbs_25C.csv below.
 local BUILTIN = { ["H2O(l)"] = -237.129, ["H^+"] = 0, ["H2(g)"] = 0, ["O2(g)"] = 0, ["e-"] = 0 }
 
@@ -81,7 +81,7 @@ local BUILTIN = { ["H2O(l)"] = -237.129, ["H^+"] = 0, ["H2(g)"] = 0, ["O2(g)"] =
 -- paths
 local root = (arg and arg[0] and arg[0]:match("^(.*)tests[/\\]data[/\\]")) or "./"
 if root == "" then root = "./" end
-local refdir = (arg and arg[1]) or (root .. "../shared/reference")
+local refdir = (arg and arg[1]) or (root .. "tests/reference")
 
 ---------------------------------------------------------------------------------------
 -- results
@@ -294,7 +294,7 @@ end
 
 ---------------------------------------------------------------------------------------
 -- 2. dfG = dfH - T dfS cycle
-print("== dfG vs dfH - T*dfS with element entropies (tol 1.5 kJ/mol; data brief, no source)")
+print("== dfG vs dfH - T*dfS with element entropies (tol 1.5 kJ/mol; common practice, no source)")
 local CYCLE_KNOWN = {
   ["Co3O4(s)"] = { max = 1.7, why = "one of dfG/dfH/S of Co3O4 mis-recalled (documented in Co.lua)" },
 }
@@ -478,7 +478,7 @@ local function compare(kind, text, got, want, tol, src, refsrc)
   end
 end
 
-print("== E0 of couples in standard_potentials.csv (tol 0.010 V, data brief)")
+print("== E0 of couples in standard_potentials.csv (tol 0.010 V; common practice, no source)")
 for _, r in ipairs(potentials) do
   if mentions_metal(r.couple) then
     local drg, ne = reaction_dG(r.couple)
@@ -491,7 +491,7 @@ for _, r in ipairs(potentials) do
   end
 end
 
-print("== log K rows in log_k_25C.csv (tol 0.2, data brief)")
+print("== log K rows in log_k_25C.csv (tol 0.2; common practice, no source)")
 for _, r in ipairs(logks) do
   if mentions_metal(r.reaction) then
     local drg, ne = reaction_dG(r.reaction)

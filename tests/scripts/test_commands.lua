@@ -1,6 +1,6 @@
 -- test_commands.lua: the reaction, check and list commands as a user runs
 -- them.  Published values: E0(Zn2+/Zn) = -0.7618 V and E0(Fe3+/Fe2+) =
--- 0.771 V (CRC Handbook electrochemical series, shared/reference); the
+-- 0.771 V (CRC Handbook electrochemical series, from memory; tests/reference); the
 -- Nernst slope of a one-electron couple changes with T as RT ln10/F.
 local bin = assert(os.getenv("PHLOX_BIN"), "PHLOX_BIN not set")
 local fixtures = assert(os.getenv("PHLOX_TEST_FIXTURES"), "PHLOX_TEST_FIXTURES not set")

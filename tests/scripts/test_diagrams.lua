@@ -1,6 +1,6 @@
 -- test_diagrams.lua: fraction curves, solubility curves and the field of a
 -- potential measured against a reference electrode (phlox.diagrams),
--- checked against the project's reference rows (../shared/reference: log K
+-- checked against the project's reference rows (tests/reference: log K
 -- and E° with their published sources) by hand calculation:
 --   * the shares of two species that differ by one H+ (or one Cl-) are equal
 --     where pH = -log K (or log a(Cl-) = -log K), whatever else is present
@@ -22,7 +22,7 @@ local R, F = 8.314462618, 96485.33212 -- CODATA 2018
 local s25 = R * 298.15 * math.log(10) / F
 
 -- reference rows (tiny CSV reader: quoted fields, no embedded newlines) ---------
-local refdir = (os.getenv("PHLOX_SOURCE_DIR") or ".") .. "/../shared/reference/"
+local refdir = (os.getenv("PHLOX_SOURCE_DIR") or ".") .. "/tests/reference/"
 local function csv_rows(name)
   local f = assert(io.open(refdir .. name, "r"), "reference file " .. refdir .. name)
   local rows, header = {}, nil

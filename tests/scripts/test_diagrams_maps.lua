@@ -2,7 +2,7 @@
 -- maps on log a(ligand) axes (phlox.diagrams), checked by hand calculation:
 --   * between two species that differ by n Cl- the boundary sits at
 --     log a(Cl-) = -(log beta_b - log beta_a) / n (mass action); with the
---     reference rows of ../shared/reference/log_k_25C.csv;
+--     reference rows of tests/reference/log_k_25C.csv;
 --   * metal / complex lines have the Nernst slope -(nCl / ne) RT ln10 / F
 --     per unit log a(Cl-); hydroxo / chloro lines on a pH-log a map have
 --     slope nH / nCl (mass action);
@@ -20,7 +20,7 @@ local function slope(T) return R * T * math.log(10) / F end
 local s25 = slope(298.15)
 
 -- one value from a reference CSV whose rows have no quoted commas before the value
-local refdir = (os.getenv("PHLOX_SOURCE_DIR") or ".") .. "/../shared/reference/"
+local refdir = (os.getenv("PHLOX_SOURCE_DIR") or ".") .. "/tests/reference/"
 local function ref_line(file, prefix)
   local f = assert(io.open(refdir .. file, "r"), "reference file " .. refdir .. file)
   for line in f:lines() do

@@ -32,7 +32,7 @@ end
 
 -- Zn2+/Zn at a(Zn2+) = 1e-6: E = E0 - 6 x 0.029580 V = E0 - 0.1775 V (Nernst)
 local E0 = lib:reaction("Zn^2+ + 2 e- = Zn(s)", { T_C = 25 }).E
-close(E0, -0.7618, 0.005, "E0 Zn2+/Zn vs CRC Handbook electrochemical series (shared/reference)")
+close(E0, -0.7618, 0.005, "E0 Zn2+/Zn vs CRC Handbook electrochemical series (from memory; tests/reference/standard_potentials.csv)")
 local bd = boundary("Zn^2+", "Zn(s)")
 check(not bd.line.vertical and bd.line.b == 0, "Zn2+/Zn is horizontal")
 close(bd.line.a, E0 - 3 * slope(298.15), 1e-9, "Zn2+/Zn line at E0 - 0.1775 V")

@@ -87,7 +87,7 @@ rel(r.elements.Ca.dissolved, total, 0.01, "gypsum solubility vs hand iteration w
 --        common handbook value).  The library's gypsum gives log Ksp -4.515
 --        (printed below) against -4.58 of Nordstrom et al. 1990 (+8 % in
 --        solubility, which goes as Ksp^0.5); the CaSO4(aq) ion-pair constant
---        (+-0.1 in log K, shared/reference) and the Davies equation at
+--        (+-0.1 in log K, tests/reference) and the Davies equation at
 --        I = 0.05 account for the rest.  Tolerance 25 % (data-limited;
 --        the solver itself is held to 1 % by (a)).
 io.write(("gypsum: log Ksp %.3f, solubility %.2f mmol/kg\n"):format(logKsp, 1000 * r.elements.Ca.dissolved))

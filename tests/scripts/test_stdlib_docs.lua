@@ -1,12 +1,12 @@
 -- test_stdlib_docs.lua: the generated documents are current.
 --  * docs/data-sources.md lists every publication the element files cite and
 --    the species that use each; every loaded species must match at least one
---    entry of docs/tools/sources_def.lua.
---  * docs/data-checks.md is the table of docs/tools/checks_def.lua's checks.
+--    entry of tests/tools/sources_def.lua.
+--  * docs/data-checks.md is the table of tests/tools/checks_def.lua's checks.
 -- Both are regenerated here in memory and compared with the committed files.
 -- If this test fails after a change to stdlib/elements, the checks or the
 -- source list, run
---     phlox docs/tools/data_checks.lua
+--     phlox tests/tools/data_checks.lua
 -- (it writes both) and commit the two documents.
 local src = assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR not set")
 local phlox = require "phlox"
@@ -31,20 +31,20 @@ local function first_difference(a, b)
   return "no difference"
 end
 
-local sdefs = dofile(src .. "/docs/tools/sources_def.lua")
+local sdefs = dofile(src .. "/tests/tools/sources_def.lua")
 local data = sdefs.collect(phlox)
 for _, s in ipairs(data.unmatched) do print("no source entry for: " .. s) end
-assert(#data.unmatched == 0, #data.unmatched .. " species cite no publication listed in docs/tools/sources_def.lua")
+assert(#data.unmatched == 0, #data.unmatched .. " species cite no publication listed in tests/tools/sources_def.lua")
 assert(data.species > 300, "too few species loaded: " .. data.species)
 local want = sdefs.render(data)
 local have = read(src .. "/docs/data-sources.md")
-assert(have == want, "docs/data-sources.md is stale (run phlox docs/tools/data_checks.lua): " .. first_difference(have, want))
+assert(have == want, "docs/data-sources.md is stale (run phlox tests/tools/data_checks.lua): " .. first_difference(have, want))
 print(("docs/data-sources.md current: %d species, %d publications"):format(data.species, #sdefs.SOURCES))
 
-local cdefs = dofile(src .. "/docs/tools/checks_def.lua")
+local cdefs = dofile(src .. "/tests/tools/checks_def.lua")
 local results, summary = cdefs.run(phlox, cdefs.reference_dir(src))
 want = cdefs.render(results, summary)
 have = read(src .. "/docs/data-checks.md")
-assert(have == want, "docs/data-checks.md is stale (run phlox docs/tools/data_checks.lua): " .. first_difference(have, want))
+assert(have == want, "docs/data-checks.md is stale (run phlox tests/tools/data_checks.lua): " .. first_difference(have, want))
 print(("docs/data-checks.md current: %d checks"):format(summary.total))
 print("test_stdlib_docs: documents current")

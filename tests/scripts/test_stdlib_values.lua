@@ -1,16 +1,16 @@
 -- test_stdlib_values.lua: the standard library against published values,
 -- through phlox's own pipeline (phlox.library -> sandboxed loader;
 -- lib:reaction -> thermo models).  The checks (standard potentials and
--- log K at 25 C against ../shared/reference/standard_potentials.csv and
+-- log K at 25 C against tests/reference/standard_potentials.csv and
 -- log_k_25C.csv and recalled handbook values; pKw along saturation against
 -- IAPWS R11-07; carbonate constants at 100-250 C against Plummer and
 -- Busenberg 1982; AgCl/Ag and NH4+ at 0-50 C) are defined once, with their
 -- sources, tolerances and documented disagreements, in
--- docs/tools/checks_def.lua; docs/data-checks.md is generated from the same
--- definitions (phlox docs/tools/data_checks.lua).
+-- tests/tools/checks_def.lua; docs/data-checks.md is generated from the same
+-- definitions (phlox tests/tools/data_checks.lua).
 local src = assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR not set")
 local phlox = require "phlox"
-local defs = dofile(src .. "/docs/tools/checks_def.lua")
+local defs = dofile(src .. "/tests/tools/checks_def.lua")
 local refdir = defs.reference_dir(src)
 
 local results, summary = defs.run(phlox, refdir)
@@ -40,7 +40,7 @@ for _, r in ipairs(fails) do
     tostring(r.computed), r.published, r.source, tostring(r.tol), r.error or r.verdict))
 end
 assert(#fails == 0, #fails .. " check(s) failed; see docs/data-checks.md for the documented differences")
--- the brief: at least 30 couples and 30 reactions at 25 C, and high-temperature rows
+-- the project's requirement: at least 30 couples and 30 reactions at 25 C, and high-temperature rows
 assert(nE_ind >= 30, "fewer than 30 independent E checks at 25 C: " .. nE_ind)
 assert(nK_ind >= 30, "fewer than 30 independent log K checks at 25 C: " .. nK_ind)
 assert(nhot >= 10, "fewer than 10 checks at 100-300 C: " .. nhot)

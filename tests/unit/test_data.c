@@ -5,7 +5,7 @@
  * Expected numbers are the fixtures' printed values times exact factors:
  * 1 kJ = 1000 J, 1 cal = 4.184 J (thermochemical calorie, exact), the HKF
  * printed scaling of Shock and Helgeson 1988 as tabulated in
- * ../shared/reference/hkf/README.md (a2 printed -2.285 -> -228.5 cal/mol),
+ * tests/reference/hkf/README.md (a2 printed -2.285 -> -228.5 cal/mol),
  * 1 cm3 bar = 0.1 J. */
 #include "px_test.h"
 #include "core/status.h"

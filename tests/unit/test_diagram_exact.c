@@ -5,7 +5,7 @@
  * the lowest Phi there (checked against a plain argmin), triple points must
  * be shared by every field that touches them, and every boundary must
  * separate exactly the two fields it names.  Chemistry: Nernst boundaries
- * for Zn and Fe couples from ../shared/reference/standard_potentials.csv,
+ * for Zn and Fe couples from tests/reference/standard_potentials.csv,
  * checked against the textbook Nernst arithmetic and slopes.  Degenerate
  * inputs: duplicates, species never stable, coincident and parallel
  * boundaries, NaN/Inf, failing allocations. */
@@ -20,10 +20,7 @@
 
 static double ref_potential(const char *couple)
 {
-    char path[1024];
-    snprintf(path, sizeof path, "%s/standard_potentials.csv", PHLOX_REFERENCE_DIR);
-    FILE *f = fopen(path, "r");
-    assert_non_null(f);
+    FILE *f = px_ref_open("standard_potentials.csv");
     char line[4096];
     double v = NAN;
     size_t n = strlen(couple);

@@ -3,7 +3,7 @@
  *
  * Checks: the textbook 25 C lines E = 1.229 - 0.05916 pH (O2/H2O) and
  * E = -0.05916 pH (H+/H2) at unit fugacity, with E0 read from
- * ../shared/reference/standard_potentials.csv; the fugacity terms (Nernst);
+ * tests/reference/standard_potentials.csv; the fugacity terms (Nernst);
  * neutral pH from pKw in water.csv (IAPWS R11-07); reference-electrode
  * offsets against the values in the task's cited sources and the ordering
  * the Nernst equation demands for Ag/AgCl. */
@@ -16,10 +16,7 @@
 
 static double ref_potential(const char *couple)
 {
-    char path[1024];
-    snprintf(path, sizeof path, "%s/standard_potentials.csv", PHLOX_REFERENCE_DIR);
-    FILE *f = fopen(path, "r");
-    assert_non_null(f);
+    FILE *f = px_ref_open("standard_potentials.csv");
     char line[4096];
     double v = NAN;
     size_t n = strlen(couple);

@@ -4,7 +4,7 @@
  * activity coefficients, a Nernst check with a fixed E, plus independent
  * closed-form solutions, failure reporting, warm starts and an
  * allocation-failure sweep.  Systems are built by hand here; log K values
- * come from /work/shared/reference/log_k_25C.csv (read at run time) or carry
+ * come from tests/reference/log_k_25C.csv (read at run time) or carry
  * their source beside them.  Every solve is followed by tb_check(): species
  * add up to each total to 1e-10 relative. */
 #include "test_equil_util.h"
@@ -144,7 +144,7 @@ static double co2_ph_ideal(double logf)
 static void test_co2_water(void **state)
 {
     (void)state;
-    const double logf = -3.4; /* atmospheric pCO2 = 10^-3.4 bar (brief) */
+    const double logf = -3.4; /* atmospheric pCO2 = 10^-3.4 bar (common practice for the present atmosphere, no source) */
     tb t;
     size_t g, dummy;
     carbonate_system(&t, 0, &g, &dummy);

@@ -101,7 +101,7 @@ static inline double tb_sum(const tb *t, size_t i, double *scale)
     return sum;
 }
 
-/* Species add up to each component's total to 1e-10 relative (the brief's
+/* Species add up to each component's total to 1e-10 relative (the project's
  * requirement; the solver's own tolerance is 1e-12); every output finite;
  * charge balance closes where it was asked for. */
 static inline void tb_check(const tb *t)
@@ -162,8 +162,7 @@ static inline int csv_fields(char *line, char **f, int maxf)
 /* log10 K of the first row of log_k_25C.csv whose reaction matches. */
 static inline double ref_logk(const char *reaction)
 {
-    FILE *fp = fopen(PHLOX_REFERENCE_DIR "/log_k_25C.csv", "r");
-    assert_non_null(fp);
+    FILE *fp = px_ref_open("log_k_25C.csv");
     char line[4096];
     double v = NAN;
     while (fgets(line, sizeof line, fp)) {
@@ -182,8 +181,7 @@ static inline double ref_logk(const char *reaction)
 /* A value of water.csv: group, t_C and quantity select the row. */
 static inline double ref_water(const char *group, double t_c, const char *quantity)
 {
-    FILE *fp = fopen(PHLOX_REFERENCE_DIR "/water.csv", "r");
-    assert_non_null(fp);
+    FILE *fp = px_ref_open("water.csv");
     char line[4096];
     double v = NAN;
     while (fgets(line, sizeof line, fp)) {
@@ -203,8 +201,7 @@ static inline double ref_water(const char *group, double t_c, const char *quanti
  * computed from IAPWS at saturation ("computed here: A, B ..."). */
 static inline double ref_dh_a(double t_c)
 {
-    FILE *fp = fopen(PHLOX_REFERENCE_DIR "/debye_huckel.csv", "r");
-    assert_non_null(fp);
+    FILE *fp = px_ref_open("debye_huckel.csv");
     char line[4096];
     double v = NAN;
     while (fgets(line, sizeof line, fp)) {

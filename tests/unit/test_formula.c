@@ -199,7 +199,7 @@ static void test_elements(void **state)
 }
 
 /* dfG = dfH - T dfS for H2O(l), OH^-, Fe2O3(s) and Zn^2+ of the NBS tables
- * (Wagman et al. 1982, from memory; shared/reference/gibbs_25C.csv), with
+ * (Wagman et al. 1982, from memory; tests/reference/gibbs_25C.csv), with
  * the element entropies of elements.c: closes within 0.1 kJ/mol. */
 static void test_entropy_of_formation(void **state)
 {

@@ -1,13 +1,13 @@
 /* test_thermo.c - reactions, the species database and the standard-state
  * models of src/thermo, checked against outside references:
- *   - shared/reference/hkf/hkf_parameters.csv: published Cp and V at 25 C
+ *   - tests/reference/hkf/hkf_parameters.csv: published Cp and V at 25 C
  *     of every HKF row with a complete parameter set (from memory of SH88,
  *     SHS89, Shock et al. 1997), with the papers' Born constants;
- *   - shared/reference/water.csv: pKw along saturation (IAPWS R11-07 via
+ *   - tests/reference/water.csv: pKw along saturation (IAPWS R11-07 via
  *     python3-iapws) against H2O(l), H^+ and OH^- of this module;
- *   - shared/reference/standard_potentials.csv: E at 25 C of couples, with
- *     species from shared/reference/gibbs_25C.csv (NBS 1982 rows);
- *   - shared/reference/log_k_25C.csv: Plummer and Busenberg 1982 analytic
+ *   - tests/reference/standard_potentials.csv: E at 25 C of couples, with
+ *     species from tests/reference/gibbs_25C.csv (NBS 1982 rows);
+ *   - tests/reference/log_k_25C.csv: Plummer and Busenberg 1982 analytic
  *     log K of CO2(aq) + H2O = HCO3^- + H^+ at 25 C;
  *   - finite differences: -dG/dT = S, dG/dP = V, -T d2G/dT2 = Cp (exact
  *     thermodynamic identities). */
@@ -74,13 +74,7 @@ static int csv_read(FILE *fp, csv_row *r)
 
 static FILE *ref_open(const char *rel)
 {
-    char path[512];
-    snprintf(path, sizeof path, "%s/%s", PHLOX_REFERENCE_DIR, rel);
-    FILE *fp = fopen(path, "r");
-    if (!fp)
-        print_error("cannot open %s\n", path);
-    assert_non_null(fp);
-    return fp;
+    return px_ref_open(rel);
 }
 
 static int col(const csv_row *hdr, const char *name)
@@ -132,7 +126,7 @@ static void test_reaction_errors(void **state)
     (void)state;
     px_reaction r;
     char msg[256];
-    /* element imbalance named with both sides (the message format of the brief) */
+    /* element imbalance named with both sides (the project's message format) */
     assert_int_equal(px_reaction_parse_balanced("Fe2O3(s) + 6 H^+ = 2 Fe^3+ + 2 H2O(l)", &r, msg, sizeof msg), PX_EBALANCE);
     assert_non_null(strstr(msg, "H: left 6, right 4"));
     assert_non_null(strstr(msg, "O: left 3, right 2"));
@@ -475,7 +469,7 @@ static void test_pkw(void **state)
             continue;
         double T = atof(row.f[ct]);
         if (T > 573.16)
-            continue; /* brief: 0-300 C */
+            continue; /* phlox's range: 0-300 C */
         double P, logK;
         assert_int_equal(px_thermo_default_pressure(T, &P), PX_OK);
         int st = px_reaction_logK(ws, db, &r, T, P, &logK);

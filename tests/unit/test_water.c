@@ -4,12 +4,12 @@
  *  - IAPWS R6-95(2018) Table 6 (ideal and residual Helmholtz derivatives at
  *    500 K, 838.025 kg/m3), Table 7 (single-phase p, cv, w, s) and Table 8
  *    (saturation at 275, 450, 625 K); Tables 7 and 8 read from
- *    ../shared/reference/water.csv, Table 6 from memory of the release (the
+ *    tests/reference/water.csv, Table 6 from memory of the release (the
  *    python test repeats it against python3-iapws).
  *  - IAPWS R8-97 check values and IAPWS R11-07 Table 3 (water.csv).
  *  - python3-iapws saturation rows 0-350 C and the 25 C, 0.1 MPa point
  *    (water.csv, "computed").
- *  - Born functions at 25 C, 1 bar, IAPWS-based (shared/reference/hkf/README.md).
+ *  - Born functions at 25 C, 1 bar, IAPWS-based (tests/reference/hkf/README.md).
  *  - Debye-Hueckel A, B: debye_huckel.csv (computed rows and Helgeson and
  *    Kirkham 1974) and the textbook 25 C value A = 0.5091.
  * "To the printed digits" means |ours - printed| <= half a unit in the last
@@ -79,8 +79,7 @@ typedef struct ref_row {
 
 static int load_water_csv(ref_row *rows, int nmax)
 {
-    FILE *fp = fopen(PHLOX_REFERENCE_DIR "/water.csv", "r");
-    assert_non_null(fp);
+    FILE *fp = px_ref_open("water.csv");
     char line[2048];
     int n = 0;
     assert_non_null(fgets(line, sizeof line, fp)); /* header */
@@ -124,7 +123,7 @@ static void test_iapws95_table6(void **state)
 }
 
 /* IAPWS R6-95(2018) Table 7 (single phase) and Table 8 (saturation), read
- * from shared/reference/water.csv. */
+ * from tests/reference/water.csv. */
 static void test_iapws95_tables7_8(void **state)
 {
     (void)state;
@@ -221,7 +220,7 @@ static void test_computed_rows(void **state)
 /* ---- Born functions and dielectric derivatives --------------------------- */
 
 /* 25 C, 1 bar: IAPWS-95 density + R8-97, central differences, as tabulated
- * in shared/reference/hkf/README.md ("Born functions at 25 C, 1 bar"). */
+ * in tests/reference/hkf/README.md ("Born functions at 25 C, 1 bar"). */
 static void test_born_25C(void **state)
 {
     (void)state;
@@ -299,8 +298,8 @@ static void test_derivatives_consistent(void **state)
 /* ---- Debye-Hueckel ----------------------------------------------------- */
 
 /* A = 0.5091 (kg/mol)^1/2 at 25 C: the common textbook value, e.g. Robinson
- * and Stokes 1959 "Electrolyte Solutions" (as given in the project brief; not
- * read here).  Tolerance 0.001 as set by the brief. */
+ * and Stokes 1959 "Electrolyte Solutions" (as recalled; not
+ * read here).  Tolerance 0.001 (project requirement). */
 static void test_dh_textbook(void **state)
 {
     (void)state;
@@ -309,14 +308,13 @@ static void test_dh_textbook(void **state)
     assert_close(s.A_gamma, 0.5091, 0, 0.001);
 }
 
-/* shared/reference/debye_huckel.csv: "computed here" rows to their printed
+/* tests/reference/debye_huckel.csv: "computed here" rows to their printed
  * digits; Helgeson and Kirkham 1974 rows within 1.5 % (their eps data predate
  * IAPWS R8-97; the csv note gives 0.1-1 %, the 300 C A differs by 1.1 %). */
 static void test_dh_table(void **state)
 {
     (void)state;
-    FILE *fp = fopen(PHLOX_REFERENCE_DIR "/debye_huckel.csv", "r");
-    assert_non_null(fp);
+    FILE *fp = px_ref_open("debye_huckel.csv");
     char line[2048];
     int ncomp = 0, nhk = 0;
     assert_non_null(fgets(line, sizeof line, fp));

@@ -1,12 +1,12 @@
--- docs/tools/data_checks.lua: regenerate the two generated documents of the
+-- tests/tools/data_checks.lua: regenerate the two generated documents of the
 -- standard library:
 --   docs/data-checks.md   every check against published values (definitions:
---                         docs/tools/checks_def.lua, shared with the test
+--                         tests/tools/checks_def.lua, shared with the test
 --                         tests/scripts/test_stdlib_values.lua)
 --   docs/data-sources.md  the publications cited by stdlib/elements/*.lua and
---                         the species that use each (docs/tools/sources_def.lua)
--- Run from anywhere:   phlox docs/tools/data_checks.lua
--- Reference values are read from <repo>/../shared/reference.  Files are
+--                         the species that use each (tests/tools/sources_def.lua)
+-- Run from anywhere:   phlox tests/tools/data_checks.lua
+-- Reference values are read from <repo>/tests/reference.  Files are
 -- written atomically (core.write_atomic).  Exits 1 if a check fails or a
 -- species cites no listed publication (the documents are written anyway).
 local phlox = require "phlox"
@@ -14,8 +14,8 @@ local core = require "phlox.core"
 
 local root = os.getenv("PHLOX_SOURCE_DIR")
 if not root then
-  local script = arg and arg[0] or "docs/tools/data_checks.lua"
-  root = script:match("^(.*)/docs/tools/[^/]+$") or "."
+  local script = arg and arg[0] or "tests/tools/data_checks.lua"
+  root = script:match("^(.*)/tests/tools/[^/]+$") or "."
 end
 
 local function write(rel, text)
@@ -23,13 +23,13 @@ local function write(rel, text)
   if not ok then error("data_checks: " .. rel .. ": " .. tostring(err)) end
 end
 
-local checks = dofile(root .. "/docs/tools/checks_def.lua")
+local checks = dofile(root .. "/tests/tools/checks_def.lua")
 local results, summary = checks.run(phlox, checks.reference_dir(root))
 write("docs/data-checks.md", checks.render(results, summary))
 io.stderr:write(("docs/data-checks.md: %d checks, %d pass, %d known differences, %d fail\n"):format(
   summary.total, summary.pass, summary.known, summary.fail))
 
-local sources = dofile(root .. "/docs/tools/sources_def.lua")
+local sources = dofile(root .. "/tests/tools/sources_def.lua")
 local data = sources.collect(phlox)
 write("docs/data-sources.md", sources.render(data))
 io.stderr:write(("docs/data-sources.md: %d species, %d without a listed publication\n"):format(data.species, #data.unmatched))
