@@ -47,6 +47,11 @@ static const char *const species_fields[] = {
 static const char *const cp_only[] = {"cp", "V", NULL};
 static const char *const hkf_only[] = {"hkf", "estimated", "estimate", NULL};
 static const char *const logk_only[] = {"reaction", "logK", "dH", "logK_T", NULL};
+/* HKF fields a logk species may not carry (logk has its own 'estimate') */
+static const char *const hkf_not_logk[] = {"hkf", "estimated", NULL};
+/* temperature-estimation methods of a logk species (docs/thermo.md) */
+#define LOGK_METHOD_ISOCOULOMBIC "isocoulombic"
+#define LOGK_METHOD_MAX 32
 static const char *const ghs[] = {"G", "H", "S", NULL};
 
 static int in_list(const char *const *list, const char *s)
@@ -353,7 +358,7 @@ static void read_logk(ctx *c, int t, pxd_entry *e, double eu)
     px_species *sp = &e->sp;
     static const char *const cp_table[] = {"cp", NULL};
     forbid(c, t, cp_table, "logk");
-    forbid(c, t, hkf_only, "logk");
+    forbid(c, t, hkf_not_logk, "logk");
     double V;
     if (get_num(c, t, "V", "V", 1.0, &V) == 1) { /* kept in cp.V for reference */
         sp->cp.V = V * PXD_CM3_TO_J_PER_BAR;
@@ -400,6 +405,27 @@ static void read_logk(ctx *c, int t, pxd_entry *e, double eu)
         REPORT(c, PX_DATA_ERROR, "logK", "missing 'logK' (log K at 25 C) or 'logK_T'");
     if (rt == 1 && !isnan(sp->logk.dH))
         REPORT(c, PX_DATA_WARNING, "dH", "dH is not used when logK_T is given");
+    char method[LOGK_METHOD_MAX];
+    int ty = rawfield(c->L, t, "estimate");
+    lua_pop(c->L, 1);
+    if (ty == LUA_TTABLE) {
+        REPORT(c, PX_DATA_ERROR, "estimate",
+               "a logk species names its estimation method: estimate = \"%s\" "
+               "(estimate = { Cp = ..., V = ... } is for model 'hkf')",
+               LOGK_METHOD_ISOCOULOMBIC);
+    } else if (get_str(c, t, "estimate", "estimate", method, sizeof method) == 1) {
+        if (strcmp(method, LOGK_METHOD_ISOCOULOMBIC) != 0)
+            REPORT(c, PX_DATA_ERROR, "estimate",
+                   "unknown estimation method '%s' (model 'logk' knows \"%s\")", method,
+                   LOGK_METHOD_ISOCOULOMBIC);
+        else if (rt == 1 || !isnan(sp->logk.dH))
+            REPORT(c, PX_DATA_ERROR, "estimate",
+                   "an estimate stands in for missing temperature data: this species has %s; "
+                   "drop the estimate",
+                   rt == 1 ? "logK_T" : "dH");
+        else
+            sp->logk.estimate = PX_LOGK_EST_ISOCOULOMBIC;
+    }
 }
 
 static void read_uncertainty(ctx *c, int t)

@@ -102,6 +102,18 @@ long px_db_index(const px_db *db, const char *formula); /* -1 if absent */
  * stdlib/elements/HO.lua. */
 int px_db_add_builtins(px_db *db);
 
+/* Where sp's temperature dependence comes from, derived from its fields:
+ * LOGK with dH or logK_T: measured; LOGK with an isocoulombic estimate:
+ * estimated; other LOGK: held at 25 C; HKF with estimated = 1: estimated (SH88
+ * correlations); CP with every Cp coefficient 0: no Cp; else measured.
+ * *method (may be NULL) receives the method's name ("" unless estimated).
+ * px_db_add stores the result in the copy's tbasis and tmethod. */
+#define PX_METHOD_ISOCOULOMBIC "isocoulombic (Gu et al. 1994)"
+#define PX_METHOD_HKF_SH88 "HKF correlations (Shock and Helgeson 1988)"
+px_tbasis px_species_tbasis(const px_species *sp, const char **method);
+/* "measured", "estimated", "held", "no Cp". */
+const char *px_tbasis_name(px_tbasis b);
+
 /* Initialise a record: zeros, NAN for dGf/dHf/S, logk.dH NAN, Tmin/Tmax
  * 0..INFINITY, source NULL.  For code that builds records by hand. */
 void px_species_init(px_species *sp);
@@ -199,6 +211,25 @@ int px_reaction_props(px_thermo_ws *ws, const px_db *db, const px_reaction *r,
 /* log K only (fast path: G of each species). */
 int px_reaction_logK(px_thermo_ws *ws, const px_db *db, const px_reaction *r,
                      double T, double P, double *logK);
+
+/* ------------------------------------------- isocoulombic estimate */
+
+/* The one-term isocoulombic extrapolation (Lindsay 1980; Gu, Gammons and
+ * Bloom 1994, GCA 58, 3545; from memory, docs/thermo.md).  The reaction R is
+ * combined with n times the water ionisation W: H2O(l) = H^+ + OH^- so that
+ * R' = R + n W carries the same total positive (and so negative) ionic charge
+ * on both sides; for R' dCp ~ 0 and dS ~ 0, so dG(R') is constant (log K(R')
+ * T = const, the "one-term" equation), hence
+ *   dG_R(T,P) = dG_R(Tr) + n [dG_W(Tr,Pr) - dG_W(T,P)], with dG_W from
+ * phlox's own H2O(l), H^+ and OH^-.  n = -sum over charged species with z > 0
+ * of nu z (products positive); an electron counts as -1 H^+ (e- = 1/2 H2(g) -
+ * H^+).  PX_OK always (n is an integer for integer coefficients). */
+int px_reaction_isocoulombic_n(const px_reaction *r, double *n);
+/* log K at (T, P) of reaction r from its log K at 25 C by that method; needs
+ * H^+, OH^- and H2O(l) in db (PX_ENOTFOUND otherwise, message in ws).  Also
+ * dG_W at Tr, Pr is taken from their dfG (PX_EDATA if one is not finite). */
+int px_isocoulombic_logK(px_thermo_ws *ws, const px_db *db, const px_reaction *r, double logK25,
+                         double T, double P, double *logK);
 
 /* Default pressure: P = max(1 bar, psat(T)): 1 bar up to the normal boiling
  * point (99.61 C), the saturation pressure above (the usual "1 bar to 100 C,

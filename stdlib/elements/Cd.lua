@@ -34,37 +34,37 @@ return {
     {
       formula = "CdOH^+", model = "logk",
       reaction = "Cd^2+ + H2O(l) = CdOH^+ + H^+",
-      logK = -10.08,
+      logK = -10.08, estimate = "isocoulombic",
       source = BM76, quality = "medium",
     },
     {
       formula = "Cd(OH)2(aq)", model = "logk",
       reaction = "Cd^2+ + 2 H2O(l) = Cd(OH)2(aq) + 2 H^+",
-      logK = -20.35,
+      logK = -20.35, estimate = "isocoulombic",
       source = BM76, quality = "medium",
     },
     {
       formula = "Cd(OH)3^-", model = "logk",
       reaction = "Cd^2+ + 3 H2O(l) = Cd(OH)3^- + 3 H^+",
-      logK = -33.3,
+      logK = -33.3, estimate = "isocoulombic",
       source = BM76, quality = "medium",
     },
     {
       formula = "Cd(OH)4^2-", model = "logk",
       reaction = "Cd^2+ + 4 H2O(l) = Cd(OH)4^2- + 4 H^+",
-      logK = -47.35,
+      logK = -47.35, estimate = "isocoulombic",
       source = BM76, quality = "medium",
     },
     {
       formula = "Cd2OH^3+", model = "logk",
       reaction = "2 Cd^2+ + H2O(l) = Cd2OH^3+ + H^+",
-      logK = -9.39,
+      logK = -9.39, estimate = "isocoulombic",
       source = BM76, quality = "medium",
     },
     {
       formula = "Cd4(OH)4^4+", model = "logk",
       reaction = "4 Cd^2+ + 4 H2O(l) = Cd4(OH)4^4+ + 4 H^+",
-      logK = -32.85,
+      logK = -32.85, estimate = "isocoulombic",
       source = BM76, quality = "medium",
     },
     {

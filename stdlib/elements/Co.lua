@@ -44,25 +44,25 @@ return {
     {
       formula = "CoOH^+", model = "logk",
       reaction = "Co^2+ + H2O(l) = CoOH^+ + H^+",
-      logK = -9.65,
+      logK = -9.65, estimate = "isocoulombic",
       source = BM, quality = "medium",
     },
     {
       formula = "Co(OH)2(aq)", model = "logk",
       reaction = "Co^2+ + 2 H2O(l) = Co(OH)2(aq) + 2 H^+",
-      logK = -18.8,
+      logK = -18.8, estimate = "isocoulombic",
       source = BM, quality = "low",
     },
     {
       formula = "Co(OH)3^-", model = "logk",
       reaction = "Co^2+ + 3 H2O(l) = Co(OH)3^- + 3 H^+",
-      logK = -31.5,
+      logK = -31.5, estimate = "isocoulombic",
       source = BM, quality = "low",
     },
     {
       formula = "Co(OH)4^2-", model = "logk",
       reaction = "Co^2+ + 4 H2O(l) = Co(OH)4^2- + 4 H^+",
-      logK = -46.3,
+      logK = -46.3, estimate = "isocoulombic",
       source = BM, quality = "low",
     },
     {

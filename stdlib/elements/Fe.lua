@@ -74,13 +74,13 @@ return {
     {
       formula = "Fe(OH)2(aq)", model = "logk",
       reaction = "Fe^2+ + 2 H2O(l) = Fe(OH)2(aq) + 2 H^+",
-      logK = -20.6,
+      logK = -20.6, estimate = "isocoulombic",
       source = BM, quality = "low",
     },
     {
       formula = "Fe(OH)3^-", model = "logk",
       reaction = "Fe^2+ + 3 H2O(l) = Fe(OH)3^- + 3 H^+",
-      logK = -31.0,
+      logK = -31.0, estimate = "isocoulombic",
       source = BM, quality = "low",
       note = "The HFeO2^- of older diagrams (same species less one H2O).",
     },
@@ -102,7 +102,7 @@ return {
     {
       formula = "Fe(OH)3(aq)", model = "logk",
       reaction = "Fe^3+ + 3 H2O(l) = Fe(OH)3(aq) + 3 H^+",
-      logK = -13.6,
+      logK = -13.6, estimate = "isocoulombic",
       source = NORD,
       quality = "low",
       note = "Baes and Mesmer 1976 give only an upper bound (about -12).",
@@ -110,7 +110,7 @@ return {
     {
       formula = "Fe(OH)4^-", model = "logk",
       reaction = "Fe^3+ + 4 H2O(l) = Fe(OH)4^- + 4 H^+",
-      logK = -21.6,
+      logK = -21.6, estimate = "isocoulombic",
       source = BM .. " (same value in Nordstrom et al. 1990)",
       quality = "medium",
     },
@@ -124,7 +124,7 @@ return {
     {
       formula = "Fe3(OH)4^5+", model = "logk",
       reaction = "3 Fe^3+ + 4 H2O(l) = Fe3(OH)4^5+ + 4 H^+",
-      logK = -6.3,
+      logK = -6.3, estimate = "isocoulombic",
       source = BM,
       quality = "low",
     },
@@ -175,7 +175,7 @@ return {
     {
       formula = "Fe(OH)3(am)", model = "logk",
       reaction = "Fe^3+ + 3 H2O(l) = Fe(OH)3(am) + 3 H^+",
-      logK = -4.891,
+      logK = -4.891, estimate = "isocoulombic",
       source = NORD .. " (ferrihydrite, Fe(OH)3 + 3H+ = Fe3+ + 3H2O, log K = 4.891)",
       quality = "medium",
       note = "Ferrihydrite; published values span about 3 to 5 with ageing and particle size.",

@@ -45,7 +45,7 @@ return {
     {
       formula = "HMoO4^-", model = "logk",
       reaction = "MoO4^2- + H^+ = HMoO4^-",
-      logK = 4.24,
+      logK = 4.24, estimate = "isocoulombic",
       source = "from memory of Smith and Martell, Critical Stability Constants (I = 0, 25 C)",
       quality = "low",
       note = "published values at various ionic strengths spread from about 3.5 to 4.3; at millimolar Mo and low pH polymolybdates (not included) dominate.",

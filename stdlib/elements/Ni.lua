@@ -37,31 +37,31 @@ return {
     {
       formula = "NiOH^+", model = "logk",
       reaction = "Ni^2+ + H2O(l) = NiOH^+ + H^+",
-      logK = -9.86,
+      logK = -9.86, estimate = "isocoulombic",
       source = BM, quality = "medium",
     },
     {
       formula = "Ni(OH)2(aq)", model = "logk",
       reaction = "Ni^2+ + 2 H2O(l) = Ni(OH)2(aq) + 2 H^+",
-      logK = -19.0,
+      logK = -19.0, estimate = "isocoulombic",
       source = BM, quality = "low",
     },
     {
       formula = "Ni(OH)3^-", model = "logk",
       reaction = "Ni^2+ + 3 H2O(l) = Ni(OH)3^- + 3 H^+",
-      logK = -30.0,
+      logK = -30.0, estimate = "isocoulombic",
       source = BM, quality = "low",
     },
     {
       formula = "Ni2OH^3+", model = "logk",
       reaction = "2 Ni^2+ + H2O(l) = Ni2OH^3+ + H^+",
-      logK = -10.7,
+      logK = -10.7, estimate = "isocoulombic",
       source = BM, quality = "low",
     },
     {
       formula = "Ni4(OH)4^4+", model = "logk",
       reaction = "4 Ni^2+ + 4 H2O(l) = Ni4(OH)4^4+ + 4 H^+",
-      logK = -27.74,
+      logK = -27.74, estimate = "isocoulombic",
       source = BM, quality = "medium",
     },
     {

@@ -1,0 +1,209 @@
+-- tests/tools/estimates_def.lua: validation of the temperature-estimation
+-- methods (docs/thermo.md, "Temperature estimates") against the species of
+-- the standard library that DO have measured temperature data.  Shared by
+-- the generator of docs/data-checks.md (tests/tools/data_checks.lua), the
+-- staleness test (tests/scripts/test_stdlib_docs.lua) and the test of the
+-- documented errors (tests/scripts/test_temperature_estimates.lua).
+--
+-- For each reaction, the "measured" log K at 100, 200 and 300 C is what the
+-- library computes from its measured data (an HKF set, an analytic log K(T)
+-- or a reaction enthalpy with van 't Hoff); each method then starts from the
+-- same log K at 25 C and its error is estimate - measured:
+--   held          log K kept at its 25 C value (what phlox did before)
+--   one-term      log K(T) = log K(25 C) 298.15/T on the reaction as written
+--   isocoulombic  the same on the reaction made isocoulombic with the water
+--                 ionisation (px_isocoulombic_logK; Gu, Gammons and Bloom 1994)
+--   HKF (SH88)    only for reactions whose product is an HKF species with
+--                 published parameters: the product's parameters re-derived by
+--                 the Shock and Helgeson 1988 correlations from its S, Cp and V
+--                 at 25 C (px_hkf_estimate), the other species unchanged.
+-- API: M.run(phlox) -> rows, summary;  M.render(rows, summary) -> markdown;
+--      M.DOCUMENTED: the summary as documented (docs/thermo.md), checked by
+--      tests/scripts/test_temperature_estimates.lua.
+local M = {}
+
+local T0C = 273.15
+local TR = 298.15
+local R_GAS = 8.314462618   -- J/(mol K), CODATA 2018
+local LN10 = math.log(10)
+M.TEMPS = { 100, 200, 300 }  -- C (1 bar at 100 C... psat above: phlox's default pressure)
+M.METHODS = { "held", "one-term", "isocoulombic", "HKF (SH88)" }
+
+-- Reactions of HKF species (no logk record of their own) with measured
+-- temperature dependence through their published HKF sets; the product is
+-- the species the HKF re-estimate replaces.
+M.HKF_REACTIONS = {
+  { "CO2(aq) + H2O(l) = HCO3^- + H^+", "HCO3^-", "carbonate, first dissociation" },
+  { "H2S(aq) = HS^- + H^+", "HS^-", "sulfide, first dissociation" },
+  { "NH4^+ = NH3(aq) + H^+", "NH3(aq)", "ammonium" },
+  { "HSO4^- = SO4^2- + H^+", "SO4^2-", "bisulfate" },
+  { "HCO3^- + H^+ = CO2(aq) + H2O(l)", "CO2(aq)", "carbonate, first association" },
+}
+
+local function kind_of(rec)
+  if rec.logK_T then return "logK_T" end
+  return "dH"
+end
+
+local function class_of(rx)
+  local left, right = rx:match("^(.-) = (.*)$")
+  if right:find("%(s") or left:find("%(s") then return "solid" end
+  if right:find("H^+", 1, true) and left:find("H2O(l)", 1, true) then return "hydrolysis" end
+  if right:find("H^+", 1, true) or left:find("H^+", 1, true) then return "acid-base" end
+  return "complex"
+end
+
+-- every library reaction with measured temperature data, no electrons or gases
+local function collect(phlox, lib)
+  local out = {}
+  for _, s in ipairs(lib:list()) do
+    if s.model == "logk" and s.basis == "measured" and s.reaction
+       and not s.reaction:find("e-", 1, true) and not s.reaction:find("(g)", 1, true) then
+      out[#out + 1] = { reaction = s.reaction, species = s.formula, basis = s.logK_T and "logK_T" or "dH",
+                        file = s.file }
+    end
+  end
+  table.sort(out, function(a, b) return a.reaction < b.reaction end)
+  for _, h in ipairs(M.HKF_REACTIONS) do
+    out[#out + 1] = { reaction = h[1], species = h[2], basis = "HKF", hkf = true, label = h[3] }
+  end
+  return out
+end
+
+function M.run(phlox)
+  local lib = phlox.library(phlox.available_elements())
+  local rows = collect(phlox, lib)
+  local sum = {}
+  for _, m in ipairs(M.METHODS) do
+    sum[m] = {}
+    for _, tc in ipairs(M.TEMPS) do sum[m][tc] = { n = 0, abs = 0, max = 0 } end
+  end
+  for _, r in ipairs(rows) do
+    local k25 = lib.db:reaction(r.reaction, TR, 1.0)
+    if not k25 then error("estimates: " .. r.reaction .. " does not evaluate at 25 C") end
+    r.logK25 = k25.logK
+    r.class = class_of(r.reaction)
+    r.meas, r.err = {}, {}
+    for _, m in ipairs(M.METHODS) do r.err[m] = {} end
+    for _, tc in ipairs(M.TEMPS) do
+      local T = tc + T0C
+      local meas = assert(lib.db:reaction(r.reaction, T)).logK
+      r.meas[tc] = meas
+      local iso, n = lib.db:isocoulombic(r.reaction, r.logK25, T)
+      if not iso then error("estimates: " .. r.reaction .. ": " .. tostring(n)) end
+      r.n = n
+      r.err["held"][tc] = r.logK25 - meas
+      r.err["one-term"][tc] = r.logK25 * TR / T - meas
+      r.err["isocoulombic"][tc] = iso - meas
+      if r.hkf then
+        local rec = lib:species(r.species)
+        local nu = 1
+        if r.reaction:match("^(.-) = "):find(r.species, 1, true) then nu = -1 end
+        local Ge, Gr = lib.db:hkf_reestimate(r.species, T)
+        if Ge and not rec.estimated then
+          -- log K changes by -nu dG/(RT ln10) when the product's G changes by dG
+          r.err["HKF (SH88)"][tc] = -nu * (Ge - Gr) / (R_GAS * T * LN10)
+        end
+      end
+      for _, m in ipairs(M.METHODS) do
+        local e = r.err[m][tc]
+        if e then
+          local s = sum[m][tc]
+          s.n, s.abs, s.max = s.n + 1, s.abs + math.abs(e), math.max(s.max, math.abs(e))
+          -- by reaction class and whether water ionisations were added
+          local key = r.class .. (r.n == 0 and ", n = 0" or ", n != 0")
+          sum.by = sum.by or {}
+          sum.by[key] = sum.by[key] or {}
+          sum.by[key][m] = sum.by[key][m] or { n = 0, abs = 0 }
+          if tc == 300 then
+            local c = sum.by[key][m]
+            c.n, c.abs = c.n + 1, c.abs + math.abs(e)
+          end
+        end
+      end
+    end
+  end
+  for _, m in ipairs(M.METHODS) do
+    for _, tc in ipairs(M.TEMPS) do
+      local s = sum[m][tc]
+      s.mean = s.n > 0 and s.abs / s.n or 0
+    end
+  end
+  return rows, sum
+end
+
+-- The summary as documented in docs/thermo.md ("Temperature estimates"):
+-- mean and maximum |estimate - measured| in log K, per method and
+-- temperature.  tests/scripts/test_temperature_estimates.lua recomputes
+-- them; a change in the data or the code that moves one by more than
+-- M.DOC_MARGIN fails and the documentation has to be revisited.
+M.DOC_MARGIN = 0.01
+M.DOCUMENTED = {
+  ["held"] = { [100] = { mean = 0.96, max = 7.40 }, [200] = { mean = 1.83, max = 13.62 }, [300] = { mean = 2.52, max = 17.67 } },
+  ["one-term"] = { [100] = { mean = 1.37, max = 7.68 }, [200] = { mean = 2.61, max = 14.14 }, [300] = { mean = 3.50, max = 18.34 } },
+  ["isocoulombic"] = { [100] = { mean = 0.75, max = 3.40 }, [200] = { mean = 1.70, max = 5.46 }, [300] = { mean = 3.15, max = 8.78 } },
+  ["HKF (SH88)"] = { [100] = { mean = 0.00, max = 0.01 }, [200] = { mean = 0.03, max = 0.05 }, [300] = { mean = 0.08, max = 0.18 } },
+}
+
+local function f2(x) return x and ("%+.2f"):format(x) or "" end
+
+function M.render(rows, sum)
+  local out = {}
+  local function w(...) out[#out + 1] = table.concat({ ... }) end
+  w("## Temperature estimates against measured data")
+  w("")
+  w("<!-- Generated from tests/tools/estimates_def.lua. -->")
+  w("")
+  w("Every reaction of the standard library with measured temperature data (a")
+  w("reaction enthalpy or an analytic log K(T); no electrons or gases), and five")
+  w("reactions of HKF species with published parameters, evaluated at 100, 200 and")
+  w("300 °C from their measured data and by each estimation method from the same")
+  w("log K at 25 °C. Entries are estimate − measured in log K. *held*: the 25 °C")
+  w("constant; *one-term*: log K·298.15/T on the reaction as written;")
+  w("*isocoulombic*: the same on the reaction balanced with n water ionisations")
+  w("(column n; docs/thermo.md); *HKF*: the product's HKF parameters re-derived by")
+  w("the Shock and Helgeson 1988 correlations (HKF rows only). \"dH\" rows are")
+  w("themselves a constant-enthalpy van 't Hoff extrapolation of a measured 25 °C")
+  w("enthalpy, so above about 150 °C they are a weaker reference than the HKF and")
+  w("logK_T rows.")
+  w("")
+  w("| method | T (°C) | reactions | mean abs. error | max abs. error |")
+  w("|---|---|---|---|---|")
+  for _, m in ipairs(M.METHODS) do
+    for _, tc in ipairs(M.TEMPS) do
+      local s = sum[m][tc]
+      w(("| %s | %d | %d | %.2f | %.2f |"):format(m, tc, s.n, s.mean, s.max))
+    end
+  end
+  w("")
+  w("Mean abs. error at 300 °C by reaction class (n = water ionisations the")
+  w("isocoulombic form adds; with n = 0 it equals the one-term column):")
+  w("")
+  w("| class | reactions | held | one-term | isocoulombic |")
+  w("|---|---|---|---|---|")
+  local keys = {}
+  for k in pairs(sum.by) do keys[#keys + 1] = k end
+  table.sort(keys)
+  for _, k in ipairs(keys) do
+    local b = sum.by[k]
+    w(("| %s | %d | %.2f | %.2f | %.2f |"):format(k, b.held.n, b.held.abs / b.held.n,
+      b["one-term"].abs / b["one-term"].n, b.isocoulombic.abs / b.isocoulombic.n))
+  end
+  w("")
+  w("| reaction | data | class | n | log K 25 °C | measured 100/200/300 | held | one-term | isocoulombic | HKF |")
+  w("|---|---|---|---|---|---|---|---|---|---|")
+  for _, r in ipairs(rows) do
+    local function three(m)
+      local e = r.err[m]
+      if not e[100] then return "" end
+      return ("%s %s %s"):format(f2(e[100]), f2(e[200]), f2(e[300]))
+    end
+    w(("| `%s` | %s | %s | %d | %.2f | %.2f %.2f %.2f | %s | %s | %s | %s |"):format(r.reaction, r.basis, r.class,
+      r.n, r.logK25, r.meas[100], r.meas[200], r.meas[300], three("held"), three("one-term"),
+      three("isocoulombic"), three("HKF (SH88)")))
+  end
+  w("")
+  return table.concat(out, "\n")
+end
+
+return M
