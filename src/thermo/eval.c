@@ -306,8 +306,9 @@ static int water_ionisation(px_thermo_ws *ws, const px_db *db, const char *who, 
 /* reaction dG, dH, dS, dCp by the isocoulombic estimate (px_isocoulombic_logK) */
 static int iso_reaction(px_thermo_ws *ws, const px_db *db, const char *who,
                         const px_reaction *r, double logK25, double T, double P, int full,
-                        double *dG, double *dH, double *dS, double *dCp)
+                        double *dG, double *dH, double *dS, double *dCp, double *dV)
 {
+    *dV = 0;
     double n;
     px_reaction_isocoulombic_n(r, &n);
     double dG0 = -PX_R * PX_TR * PX_LN10 * logK25;
@@ -327,6 +328,7 @@ static int iso_reaction(px_thermo_ws *ws, const px_db *db, const char *who,
     *dH = iso - n * w.H;
     *dS = -n * w.S;
     *dCp = -n * w.Cp;
+    *dV = -n * w.V; /* dG(R') is taken independent of P too: R follows W's volume */
     return PX_OK;
 }
 
@@ -340,8 +342,8 @@ int px_isocoulombic_logK(px_thermo_ws *ws, const px_db *db, const px_reaction *r
     ws->cdb = NULL;
     if (!(T > 0) || !isfinite(P) || !isfinite(logK25))
         return werr(ws, PX_EINVAL, "T, P and log K must be finite, T positive");
-    double dG, dH, dS, dCp;
-    int st = iso_reaction(ws, db, "isocoulombic", r, logK25, T, P, 0, &dG, &dH, &dS, &dCp);
+    double dG, dH, dS, dCp, dV;
+    int st = iso_reaction(ws, db, "isocoulombic", r, logK25, T, P, 0, &dG, &dH, &dS, &dCp, &dV);
     if (st)
         return st;
     *logK = -dG / (PX_R * T * PX_LN10);
@@ -475,9 +477,10 @@ static int logk_G(px_thermo_ws *ws, const px_db *db, const px_species *sp, doubl
         ws->depth--;
         return st;
     }
-    double dG, dH, dS, dCp;
+    double dG, dH, dS, dCp, dV;
     if (is_iso(sp))
-        st = iso_reaction(ws, db, sp->f.text, &lc->r, sp->logk.logK25, T, P, 0, &dG, &dH, &dS, &dCp);
+        st = iso_reaction(ws, db, sp->f.text, &lc->r, sp->logk.logK25, T, P, 0, &dG, &dH, &dS, &dCp,
+                          &dV);
     else
         logk_reaction(&sp->logk, T, &dG, &dH, &dS, &dCp);
     ws->depth--;
@@ -632,9 +635,9 @@ static int logk_props(px_thermo_ws *ws, const px_db *db, const px_species *sp, d
         ws->depth--;
         return st;
     }
-    double dG, dH, dS, dCp;
+    double dG, dH, dS, dCp, dV = 0.0; /* other log K models: independent of P, dV = 0 */
     if (is_iso(sp))
-        st = iso_reaction(ws, db, sp->f.text, &r, sp->logk.logK25, T, P, 1, &dG, &dH, &dS, &dCp);
+        st = iso_reaction(ws, db, sp->f.text, &r, sp->logk.logK25, T, P, 1, &dG, &dH, &dS, &dCp, &dV);
     else
         logk_reaction(&sp->logk, T, &dG, &dH, &dS, &dCp);
     ws->depth--;
@@ -645,7 +648,7 @@ static int logk_props(px_thermo_ws *ws, const px_db *db, const px_species *sp, d
     out->H = (dH - sum.H) / nu;
     out->S = (dS - sum.S) / nu;
     out->Cp = (dCp - sum.Cp) / nu;
-    out->V = (0.0 - sum.V) / nu; /* log K taken independent of P: dV of reaction = 0 */
+    out->V = (dV - sum.V) / nu;
     return PX_OK;
 }
 

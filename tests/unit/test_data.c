@@ -223,6 +223,68 @@ static void test_logk_reaction_forms(void **state)
     px_data_problems_free(p);
 }
 
+
+/* the temperature basis of logk records and the 'estimate' field
+ * (docs/element-files.md): held without data, estimated with an
+ * isocoulombic estimate, measured with dH; errors name the field */
+static void test_logk_estimate_basis(void **state)
+{
+    (void)state;
+    const char *ok = "return { element = 'Zn', species = {\n"
+                     "{ formula = 'Zn^2+', model = 'logk', reaction = 'Zn(s) + 2 H^+ = Zn^2+ + H2(g)',"
+                     " logK = 25.79, dH = -153.9, source = 's' },\n"
+                     "{ formula = 'ZnOH^+', model = 'logk', reaction = 'Zn^2+ + H2O(l) = ZnOH^+ + H^+',"
+                     " logK = -8.96, estimate = 'isocoulombic', source = 's' },\n"
+                     "{ formula = 'Zn(OH)2(aq)', model = 'logk', reaction = 'Zn^2+ + 2 H2O(l) = Zn(OH)2(aq) + 2 H^+',"
+                     " logK = -17.8, source = 's' } } }\n";
+    px_db *db = px_db_new();
+    px_data_problems *p = px_data_problems_new();
+    int st = px_data_load_buffer(db, ok, strlen(ok), "e.lua", NULL, p);
+    if (st != PX_OK) dump(p);
+    assert_int_equal(st, PX_OK);
+    const px_species *a = px_db_find(db, "Zn^2+");
+    const px_species *b = px_db_find(db, "ZnOH^+");
+    const px_species *c = px_db_find(db, "Zn(OH)2(aq)");
+    assert_int_equal(a->tbasis, PX_TBASIS_MEASURED);
+    assert_int_equal(b->tbasis, PX_TBASIS_ESTIMATED);
+    assert_int_equal(b->logk.estimate, PX_LOGK_EST_ISOCOULOMBIC);
+    assert_string_equal(b->tmethod, PX_METHOD_ISOCOULOMBIC);
+    assert_int_equal(c->tbasis, PX_TBASIS_HELD);
+    assert_string_equal(c->tmethod, "");
+    /* phlox list tags the estimated and the held record */
+    FILE *out = tmpfile();
+    assert_non_null(out);
+    assert_int_equal(px_data_list_write(db, "Zn", out), 3);
+    rewind(out);
+    char line[512];
+    int est = 0, held = 0;
+    while (fgets(line, sizeof line, out)) {
+        if (strstr(line, "ZnOH^+") && strstr(line, "[estimated: isocoulombic (Gu et al. 1994)]")) est = 1;
+        if (strstr(line, "Zn(OH)2(aq)") && strstr(line, "[held at 25 C]")) held = 1;
+    }
+    fclose(out);
+    assert_true(est && held);
+    px_db_free(db);
+
+    static const char *const bad[][2] = {
+        {"estimate = 'vant-hoff'", "estimate: unknown estimation method 'vant-hoff'"},
+        {"estimate = 'isocoulombic', dH = 13.4", "estimate: an estimate stands in for missing temperature data: this species has dH"},
+        {"estimate = { Cp = 1 }", "estimate: a logk species names its estimation method"},
+    };
+    for (size_t i = 0; i < sizeof bad / sizeof bad[0]; i++) {
+        char src[512];
+        snprintf(src, sizeof src,
+                 "return { element = 'Zn', species = {\n"
+                 "{ formula = 'ZnOH^+', model = 'logk', reaction = 'Zn^2+ + H2O(l) = ZnOH^+ + H^+',"
+                 " logK = -8.96, %s, source = 's' } } }\n",
+                 bad[i][0]);
+        px_data_problems_clear(p);
+        assert_int_equal(px_data_check_buffer(NULL, src, strlen(src), "e.lua", NULL, p), PX_EDATA);
+        assert_true(has(p, "e.lua:2: ZnOH^+: ", bad[i][1], NULL));
+    }
+    px_data_problems_free(p);
+}
+
 static void test_element_filter(void **state)
 {
     (void)state;
@@ -471,6 +533,7 @@ int main(void)
         cmocka_unit_test(test_hkf_estimate_fe2),
         cmocka_unit_test(test_logk_species),
         cmocka_unit_test(test_logk_reaction_forms),
+        cmocka_unit_test(test_logk_estimate_basis),
         cmocka_unit_test(test_element_filter),
         cmocka_unit_test(test_bad_fixtures),
         cmocka_unit_test(test_consistency_slips),
