@@ -42,8 +42,8 @@ return {
       quality = "medium",
       note = "dfG = -215.35 kJ/mol; Shock et al. 1997 give -51500 cal/mol = -215.48 kJ/mol " ..
              "(as recalled). dfS = S - S(Cr,s) + 1.5 S(H2,g) = -135.27 J/(mol K), so dfH = " ..
-             "dfG + T dfS = -255.69 kJ/mol (-61.11 kcal/mol; a dfH near -61.2 kcal/mol is also " ..
-             "recalled from the same table, within 0.4 kJ). Reaction entropy of the record " ..
+             "dfG + T dfS = -255.69 kJ/mol (-61.11 kcal/mol; a dfH near -61.2 kcal/mol also comes " ..
+             "to mind for that table, a weak recall, within 0.4 kJ). Reaction entropy of the record " ..
              "-270.5 J/K. No Cp recalled for Cr3+ (and the HKF estimate path needs |Z| <= 2), so " ..
              "dCp = 0 (van 't Hoff): the error this leaves is small beside the 25 C hold it " ..
              "replaces (that hold implied a reaction entropy of +1445 J/K).",
