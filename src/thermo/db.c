@@ -250,7 +250,10 @@ px_tbasis px_species_tbasis(const px_species *sp, const char **method)
         }
         break;
     case PX_MODEL_CP:
-        if (sp->f.state != PX_STATE_E && sp->cp.a == 0 && sp->cp.b == 0 && sp->cp.c == 0 &&
+        if (sp->cp.estimate == PX_CP_EST_KOPP) {
+            b = PX_TBASIS_ESTIMATED;
+            m = PX_METHOD_KOPP;
+        } else if (sp->f.state != PX_STATE_E && sp->cp.a == 0 && sp->cp.b == 0 && sp->cp.c == 0 &&
             sp->cp.d == 0 && sp->cp.e == 0)
             b = PX_TBASIS_NO_CP;
         break;

@@ -55,10 +55,17 @@ typedef struct px_hkf_params { /* SI: the papers' values x PX_CAL, unscaled */
     double omega; /* J/mol, conventional Born coefficient at Tr, Pr */
 } px_hkf_params;
 
+/* Where a Cp polynomial comes from when it is not a published fit. */
+typedef enum px_cp_estimate {
+    PX_CP_EST_NONE = 0, /* a published Cp function (or none: Cp = 0) */
+    PX_CP_EST_KOPP      /* Kopp-Neumann additivity (px_cp_kopp) */
+} px_cp_estimate;
+
 /* Cp = a + b T + c / T^2 + d / sqrt(T) + e T^2  [J/(mol K)], valid to Tmax. */
 typedef struct px_cp_params {
     double a, b, c, d, e;
     double V; /* molar volume, J/bar (= 0.1 x cm3/mol); 0 if unknown */
+    px_cp_estimate estimate;
 } px_cp_params;
 
 /* How log K of a formation reaction depends on T when no measured function

@@ -110,6 +110,7 @@ int px_db_add_builtins(px_db *db);
  * px_db_add stores the result in the copy's tbasis and tmethod. */
 #define PX_METHOD_ISOCOULOMBIC "isocoulombic (Gu et al. 1994)"
 #define PX_METHOD_HKF_SH88 "HKF correlations (Shock and Helgeson 1988)"
+#define PX_METHOD_KOPP "Kopp-Neumann additivity (Kopp 1865)"
 px_tbasis px_species_tbasis(const px_species *sp, const char **method);
 /* "measured", "estimated", "held", "no Cp". */
 const char *px_tbasis_name(px_tbasis b);
@@ -236,6 +237,20 @@ int px_isocoulombic_logK(px_thermo_ws *ws, const px_db *db, const px_reaction *r
  * psat above" of the HKF tables, made continuous: at 100 C and 1 bar water
  * would be steam).  PX_ERANGE below 273.15 K or above 623.15 K. */
 int px_thermo_default_pressure(double T, double *P);
+
+/* Kopp's atomic heat capacity of element z in a solid, J/(mol K) (Kopp 1865,
+ * Kopp's rule; docs/thermo.md): C 7.53, H 9.62, B 11.30, Si 15.90, O 16.74,
+ * F 20.92, P and S 22.59, every other element 25.94 (the Dulong-Petit value
+ * Kopp used); NAN for z outside 1..118. */
+double px_kopp_atomic_cp(int z);
+/* Kopp-Neumann additivity: the Cp polynomial of solid f as the sum of n
+ * components (formulas comp[i] with amounts nu[i] > 0 and published Cp
+ * polynomials comp_cp[i]) plus Kopp's atomic heat capacities for the atoms
+ * f holds beyond them.  out->a..e are set (V and the estimate flag are left
+ * to the caller).  PX_EDATA with a reason in msg (may be NULL) if the
+ * components hold more of an element than f, or f is charged. */
+int px_cp_kopp(const px_formula *f, int n, const px_formula *comp, const double *nu,
+               const px_cp_params *comp_cp, px_cp_params *out, char *msg, size_t msgsize);
 
 /* CP model alone (solids, liquids, gases), exact integrals of
  * Cp = a + bT + c/T^2 + d/sqrt(T) + eT^2 from Tr; gases have no pressure

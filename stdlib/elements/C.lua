@@ -171,6 +171,7 @@ return {
     {
       formula = "CdCO3(s,otavite)", model = "cp",
       G = -669.4, H = -750.6, S = 92.5, V = 34.30,
+      estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
       source = NBS .. "; V " .. RH95, quality = "low",
       note = "log Ksp with NBS ions -11.21; Stipp et al. 1992 measured about -12.1 (recalled): NBS value probably too positive. Cp not recalled",
     },
@@ -183,8 +184,9 @@ return {
     {
       formula = "Cu2CO3(OH)2(s,malachite)", model = "cp",
       G = -893.6, H = -1051.4, S = 186.2, V = 54.86,
+      estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
       source = NBS .. "; V " .. RH95, quality = "medium",
-      note = "Cp not recalled (loader takes 0; use near 25 C only); azurite left out (values not recalled consistently)",
+      note = "Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats); azurite left out (values not recalled consistently)",
     },
   },
 }

@@ -78,8 +78,9 @@ return {
     {
       formula = "Cd(OH)2(s)", model = "cp",
       G = -473.6, H = -560.7, S = 96,
+      estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
       source = NBS, quality = "medium",
-      note = "precipitated (beta) Cd(OH)2. No heat capacity recalled: cp omitted, the loader takes Cp = 0 and warns, so use near 25 C only. Gives log K(Cd(OH)2 + 2 H+ = Cd2+ + 2 H2O) = 13.73 with CODATA Cd2+ (Baes and Mesmer: 13.65, recalled).",
+      note = "precipitated (beta) Cd(OH)2. No heat capacity recalled: Cp by Kopp-Neumann additivity (Kopp's atomic heats, an estimate). Gives log K(Cd(OH)2 + 2 H+ = Cd2+ + 2 H2O) = 13.73 with CODATA Cd2+ (Baes and Mesmer: 13.65, recalled).",
     },
   },
 }

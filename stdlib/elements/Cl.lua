@@ -171,8 +171,9 @@ return {
     {
       formula = "PbCl2(s,cotunnite)", model = "cp",
       G = -314.10, H = -359.41, S = 136.0,
+      estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
       source = NBS, quality = "medium",
-      note = "Cp not recalled (loader takes 0; use near 25 C only)",
+      note = "Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats)",
     },
     {
       formula = "NaCl(s,halite)", model = "cp",

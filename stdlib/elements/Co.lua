@@ -76,9 +76,10 @@ return {
     {
       formula = "Co(OH)2(s)", model = "cp",
       G = -454.3, H = -539.7, S = 79,
+      estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
       source = NBS,
       quality = "low",
-      note = "Pink form. Cp not recalled: the loader will take Cp = 0.",
+      note = "Pink form. Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats).",
     },
     {
       formula = "Co3O4(s)", model = "cp",

@@ -170,27 +170,30 @@ return {
     {
       formula = "FeO(OH)(s,goethite)", model = "cp",
       G = -488.55, H = -559.3, S = 60.38,
+      estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
       source = "dfH and S from memory of Robie and Hemingway 1995 (USGS Bulletin 2131); " ..
                "dfG derived here as dfH - T*dfS",
       quality = "low",
       note = "A dfG of -489.8 kJ/mol also comes to mind (it would fail the dfG/dfH/S " ..
-             "cycle by 1.3 kJ/mol). Cp not recalled: the loader will take Cp = 0.",
+             "cycle by 1.3 kJ/mol). Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats).",
     },
     {
       formula = "Fe(OH)2(s)", model = "cp",
       G = -486.5, H = -569.0, S = 88,
+      estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
       source = NBS,
       quality = "medium",
-      note = "Cp not recalled: the loader will take Cp = 0.",
+      note = "Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats).",
     },
     {
       formula = "Fe(OH)3(s)", model = "cp",
       G = -696.5, H = -823.0, S = 106.7,
+      estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
       source = NBS,
       quality = "medium",
       note = "Precipitated hydroxide of the NBS tables. With the Fe3+ above it gives " ..
              "log K(Fe(OH)3 + 3H+ = Fe3+ + 3H2O) = 5.63; compare Fe(OH)3(am) below. " ..
-             "Cp not recalled: the loader will take Cp = 0.",
+             "Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats).",
     },
     {
       formula = "Fe(OH)3(am)", model = "logk",

@@ -136,10 +136,11 @@ return {
     {
       formula = "Mn(OH)2(am)", model = "cp",
       G = -615.0, H = -695.4, S = 99.2,
+      estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
       source = NBS,
       quality = "medium",
       note = "Amorphous precipitate as listed in the source (not crystalline pyrochroite). " ..
-             "Cp not recalled: the loader will take Cp = 0.",
+             "Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats).",
     },
   },
 }

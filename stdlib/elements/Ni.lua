@@ -76,11 +76,12 @@ return {
     {
       formula = "Ni(OH)2(s)", model = "cp",
       G = -447.2, H = -529.7, S = 88,
+      estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
       source = NBS,
       quality = "medium",
       note = "Other compilations: dfH -538, S 79. Gives log K(Ni(OH)2 + 2H+ = Ni2+ + 2H2O) " ..
              "= 12.73; crystalline beta-Ni(OH)2 measured 11.67 +- 0.20 (ORNL; see " ..
-             "docs). Cp not recalled: the loader will take Cp = 0.",
+             "docs). Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats).",
     },
   },
 }

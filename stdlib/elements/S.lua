@@ -192,8 +192,9 @@ return {
     {
       formula = "CdS(s,greenockite)", model = "cp",
       G = -156.5, H = -161.9, S = 64.9, V = 29.93,
+      estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
       source = NBS .. "; V " .. RH95, quality = "medium",
-      note = "Cp not recalled (loader takes 0; use near 25 C only)",
+      note = "Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats)",
     },
     {
       formula = "MoS2(s,molybdenite)", model = "cp",
@@ -204,8 +205,9 @@ return {
     {
       formula = "SnS(s,herzenbergite)", model = "cp",
       G = -98.3, H = -100.0, S = 77.0,
+      estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
       source = NBS, quality = "low",
-      note = "Cp not recalled (loader takes 0; use near 25 C only)",
+      note = "Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats)",
     },
 
     -- ---------------------------------------------------------------- sulfate complexes (formation reactions, I = 0, 25 C)
@@ -262,8 +264,9 @@ return {
     {
       formula = "MgSO4*7H2O(s,epsomite)", model = "cp",
       G = -2871.5, H = -3388.71, S = 372,
+      estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
       source = NBS, quality = "medium",
-      note = "Cp not recalled (loader takes 0; use near 25 C only)",
+      note = "Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats)",
     },
     {
       formula = "CuSO4(s,chalcocyanite)", model = "cp",
@@ -311,8 +314,9 @@ return {
     {
       formula = "NiSO4*6H2O(s,retgersite)", model = "cp",
       G = -2224.95, H = -2682.8, S = 334.35,
+      estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
       source = NBS .. " (alpha, tetragonal)", quality = "low",
-      note = "S recalled weakly; Cp not recalled (loader takes 0; use near 25 C only)",
+      note = "S recalled weakly; Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats)",
     },
     {
       formula = "Na2SO4(s,thenardite)", model = "cp",
@@ -323,6 +327,7 @@ return {
     {
       formula = "Na2SO4*10H2O(s,mirabilite)", model = "cp",
       G = -3646.85, H = -4327.26, S = 592.0,
+      estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
       T_range = { 273.15, 305.5 },
       source = NBS, quality = "medium",
       note = "recalled values close the cycle only to 0.9 kJ/mol; dehydrates at 32.4 C; Cp not recalled",

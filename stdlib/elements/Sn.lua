@@ -99,8 +99,9 @@ return {
     {
       formula = "Sn(OH)2(s)", model = "cp",
       G = -491.6, H = -561.1, S = 155,
+      estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
       source = NBS, quality = "low",
-      note = "precipitated Sn(OH)2 (hydrous SnO). No heat capacity recalled: cp omitted, the loader takes Cp = 0 and warns, so use near 25 C only. SnO + H2O(l) is 2.4 kJ/mol more stable.",
+      note = "precipitated Sn(OH)2 (hydrous SnO). No heat capacity recalled: Cp by Kopp-Neumann additivity (Kopp's atomic heats, an estimate). SnO + H2O(l) is 2.4 kJ/mol more stable.",
     },
   },
 }

@@ -9,7 +9,12 @@
 --        within 0.03 (docs/thermo.md), so the tolerance is 0.03 + 0.03.
 --  2. The validation table of docs/data-checks.md (tests/tools/estimates_def.lua)
 --     recomputed: each method's mean and maximum error at 100, 200 and 300 C
---     must stay within 0.01 of the values documented in docs/thermo.md.
+--     (isocoulombic, HKF correlations, Kopp-Neumann and the baselines) must
+--     stay within estimates_def.DOC_MARGIN of the values documented in
+--     docs/thermo.md.
+--  3. Kopp-Neumann by hand: Kopp's atomic heats (Kopp 1865, as tabulated in
+--     Perry's handbook, from memory: H 2.3, O 4.0, others 6.2 cal/(g-atom K))
+--     give Ni(OH)2(s) 6.2 + 2 x 4.0 + 2 x 2.3 = 18.8 cal/(mol K).
 local phlox = require "phlox"
 local function check(cond, msg) if not cond then error(msg, 2) end end
 local src = assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR not set")
@@ -75,5 +80,14 @@ for m, byT in pairs(defs.DOCUMENTED) do
   end
 end
 check(next(defs.DOCUMENTED), "documented errors missing")
+for m in pairs(defs.DOCUMENTED) do check(sum[m], "no recomputed summary for " .. m) end
 check(#bad == 0, "validation table moved from docs/thermo.md (update the docs):\n  " .. table.concat(bad, "\n  "))
-print(("test_temperature_estimates: all checks passed (%d reactions)"):format(#rows))
+-- 3
+local ni = phlox.library { "Ni" }
+local rec = ni:species("Ni(OH)2(s)")
+check(rec.basis == "estimated" and rec.basis_method:find("Kopp", 1, true), "Ni(OH)2(s): Kopp-Neumann estimate")
+for _, T in ipairs { 298.15, 573.15 } do
+  local cp = ni:props("Ni(OH)2(s)", { T = T }).Cp
+  check(math.abs(cp - 18.8 * 4.184) < 1e-9, ("Ni(OH)2(s) Cp at %g K: %.6f"):format(T, cp))
+end
+print(("test_temperature_estimates: all checks passed (%d reactions, %d solids)"):format(#rows, #sum.kopp_rows))

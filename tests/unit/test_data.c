@@ -285,6 +285,63 @@ static void test_logk_estimate_basis(void **state)
     px_data_problems_free(p);
 }
 
+
+/* cp estimate = { Cp = "kopp", from = {...} }: resolved from a component of
+ * the same file (Kopp 1865 atomic heats for the rest, by hand: NiO a = 45
+ * (a test value) + H2O 2 x 2.3 + 4.0 cal), basis estimated; errors named */
+static void test_cp_kopp_estimate(void **state)
+{
+    (void)state;
+    const char *ok = "return { element = 'Ni', species = {\n"
+                     "{ formula = 'NiO(s)', model = 'cp', G = -211.7, H = -239.7, S = 37.99, cp = { a = 45, b = 0.01 },"
+                     " source = 's' },\n"
+                     "{ formula = 'Ni(OH)2(s)', model = 'cp', G = -447.2, H = -529.7, S = 88,"
+                     " estimate = { Cp = 'kopp', from = { ['NiO(s)'] = 1 } }, source = 's' },\n"
+                     "{ formula = 'Ni(OH)2(am)', model = 'cp', G = -447.2, H = -529.7, S = 88,"
+                     " estimate = { Cp = 'kopp' }, source = 's' } } }\n";
+    px_db *db = px_db_new();
+    px_data_problems *p = px_data_problems_new();
+    int st = px_data_load_buffer(db, ok, strlen(ok), "k.lua", NULL, p);
+    if (st != PX_OK) dump(p);
+    assert_int_equal(st, PX_OK);
+    assert_int_equal(px_data_problems_count(p), 0); /* no "Cp taken as 0" warning */
+    const px_species *a = px_db_find(db, "Ni(OH)2(s)");
+    assert_close(a->cp.a, 45 + (2 * 2.3 + 4.0) * 4.184, 1e-12, 0);
+    assert_close(a->cp.b, 0.01, 1e-12, 0);
+    assert_int_equal(a->tbasis, PX_TBASIS_ESTIMATED);
+    const px_species *b = px_db_find(db, "Ni(OH)2(am)");
+    assert_close(b->cp.a, (6.2 + 2 * 4.0 + 2 * 2.3) * 4.184, 1e-12, 0);
+    px_db_free(db);
+
+    static const char *const bad[][2] = {
+        {"estimate = { Cp = 'dulong' }", "estimate.Cp: unknown estimation method 'dulong'"},
+        {"estimate = { Cp = 'kopp' }, cp = { a = 80 }", "estimate: give either a published 'cp' or an estimate"},
+        {"estimate = { Cp = 'kopp', from = { ['NiO(s)'] = 2 } }", "the components hold 1 more Ni than the species"},
+        {"estimate = { Cp = 'kopp', from = { ['NiO(s)'] = -1 } }", "estimate.from: expected"},
+        {"estimate = { from = { ['NiO(s)'] = 1 } }", "estimate.Cp: name the method"},
+    };
+    for (size_t i = 0; i < sizeof bad / sizeof bad[0]; i++) {
+        char src[768];
+        snprintf(src, sizeof src,
+                 "return { element = 'Ni', species = {\n"
+                 "{ formula = 'NiO(s)', model = 'cp', G = -211.7, H = -239.7, S = 37.99, cp = { a = 45 },"
+                 " source = 's' },\n"
+                 "{ formula = 'Ni(OH)2(s)', model = 'cp', G = -447.2, H = -529.7, S = 88, %s, source = 's' } } }\n",
+                 bad[i][0]);
+        px_data_problems_clear(p);
+        assert_int_equal(px_data_check_buffer(NULL, src, strlen(src), "k.lua", NULL, p), PX_EDATA);
+        assert_true(has(p, "k.lua:3: Ni(OH)2(s): ", bad[i][1], NULL));
+    }
+    /* a component that is not loaded: a warning, Cp stays 0 */
+    const char *lone = "return { element = 'Ni', species = {\n"
+                       "{ formula = 'Ni(OH)2(s)', model = 'cp', G = -447.2, H = -529.7, S = 88,"
+                       " estimate = { Cp = 'kopp', from = { ['NiO(s)'] = 1 } }, source = 's' } } }\n";
+    px_data_problems_clear(p);
+    assert_int_equal(px_data_check_buffer(NULL, lone, strlen(lone), "k.lua", NULL, p), PX_OK);
+    assert_true(has(p, "warning", "NiO(s) is not loaded", NULL));
+    px_data_problems_free(p);
+}
+
 static void test_element_filter(void **state)
 {
     (void)state;
@@ -534,6 +591,7 @@ int main(void)
         cmocka_unit_test(test_logk_species),
         cmocka_unit_test(test_logk_reaction_forms),
         cmocka_unit_test(test_logk_estimate_basis),
+        cmocka_unit_test(test_cp_kopp_estimate),
         cmocka_unit_test(test_element_filter),
         cmocka_unit_test(test_bad_fixtures),
         cmocka_unit_test(test_consistency_slips),

@@ -781,6 +781,52 @@ static void test_isocoulombic(void **state)
     px_db_free(db);
 }
 
+
+/* Kopp-Neumann additivity (Kopp 1865, atomic heats from memory of Perry's
+ * handbook table, docs/thermo.md), worked by hand: Ni(OH)2 from atoms =
+ * 6.2 + 2 x 4.0 + 2 x 2.3 = 18.8 cal/(mol K); gypsum from anhydrite (a Cp
+ * polynomial) + 2 H2O = anhydrite + 2 x (2 x 2.3 + 4.0) cal; components
+ * holding more of an element than the species are refused. */
+static void test_kopp(void **state)
+{
+    (void)state;
+    px_formula f, comp[2];
+    assert_int_equal(px_formula_parse("Ni(OH)2(s)", &f), PX_OK);
+    px_cp_params out;
+    memset(&out, 0, sizeof out);
+    assert_int_equal(px_cp_kopp(&f, 0, NULL, NULL, NULL, &out, NULL, 0), PX_OK);
+    assert_close(out.a, 18.8 * CAL, 1e-12, 0);
+    assert_true(out.b == 0 && out.c == 0 && out.d == 0 && out.e == 0);
+    assert_close(px_kopp_atomic_cp(6), 1.8 * CAL, 1e-12, 0);
+    assert_close(px_kopp_atomic_cp(16), 5.4 * CAL, 1e-12, 0);
+    assert_close(px_kopp_atomic_cp(26), 6.2 * CAL, 1e-12, 0);
+    assert_true(isnan(px_kopp_atomic_cp(0)));
+
+    assert_int_equal(px_formula_parse("CaSO4*2H2O(s,gypsum)", &f), PX_OK);
+    assert_int_equal(px_formula_parse("CaSO4(s,anhydrite)", &comp[0]), PX_OK);
+    px_cp_params anh = {.a = 70.21, .b = 98.74e-3, .c = 0, .d = 0, .e = 0}; /* coefficients only */
+    double one = 1;
+    assert_int_equal(px_cp_kopp(&f, 1, comp, &one, &anh, &out, NULL, 0), PX_OK);
+    assert_close(out.a, 70.21 + 2 * (2 * 2.3 + 4.0) * CAL, 1e-12, 0);
+    assert_close(out.b, 98.74e-3, 1e-12, 0);
+
+    char msg[128];
+    assert_int_equal(px_formula_parse("Fe3O4(s)", &f), PX_OK);
+    assert_int_equal(px_formula_parse("Fe2O3(s)", &comp[0]), PX_OK);
+    double onehalf = 1.5;
+    assert_int_equal(px_cp_kopp(&f, 1, comp, &onehalf, &anh, &out, msg, sizeof msg), PX_EDATA);
+    assert_non_null(strstr(msg, "0.5 more O"));
+    assert_int_equal(px_formula_parse("Zn^2+", &f), PX_OK);
+    assert_int_equal(px_cp_kopp(&f, 0, NULL, NULL, NULL, &out, msg, sizeof msg), PX_EDATA);
+    /* basis */
+    px_species k = mk("Ni(OH)2(s)", PX_MODEL_CP, -447.2e3, -529.7e3, 88);
+    k.cp.a = 18.8 * CAL;
+    k.cp.estimate = PX_CP_EST_KOPP;
+    const char *m = NULL;
+    assert_int_equal(px_species_tbasis(&k, &m), PX_TBASIS_ESTIMATED);
+    assert_string_equal(m, PX_METHOD_KOPP);
+}
+
 static void test_logk_model(void **state)
 {
     (void)state;
@@ -1018,7 +1064,7 @@ int main(void)
         cmocka_unit_test(test_hkf_estimate),    cmocka_unit_test(test_finite_differences),
         cmocka_unit_test(test_pkw),             cmocka_unit_test(test_standard_potentials),
         cmocka_unit_test(test_electron_convention), cmocka_unit_test(test_cp_model),
-        cmocka_unit_test(test_isocoulombic),  cmocka_unit_test(test_logk_model),      cmocka_unit_test(test_eval_all),
+        cmocka_unit_test(test_isocoulombic),  cmocka_unit_test(test_kopp),  cmocka_unit_test(test_logk_model),      cmocka_unit_test(test_eval_all),
         cmocka_unit_test(test_default_pressure), cmocka_unit_test(test_bad_inputs),
         cmocka_unit_test(test_ws_reuse),        cmocka_unit_test(test_vaporization),
     };
