@@ -255,6 +255,20 @@ M.DOCUMENTED = {
 
 local function f2(x) return x and ("%+.2f"):format(x) or "" end
 
+-- mean and max abs. error per method and temperature, one table
+local function summary_table(w, sum, methods, what, numfmt)
+  w("| method | T (°C) | " .. what .. " | mean abs. error | max abs. error |")
+  w("|---|---|---|---|---|")
+  local row = "| %s | %d | %d | " .. numfmt .. " | " .. numfmt .. " |"
+  for _, m in ipairs(methods) do
+    for _, tc in ipairs(M.TEMPS) do
+      local s = sum[m][tc]
+      w(row:format(m, tc, s.n, s.mean, s.max))
+    end
+  end
+  w("")
+end
+
 function M.render(rows, sum)
   local out = {}
   local function w(...) out[#out + 1] = table.concat({ ... }) end
@@ -275,15 +289,7 @@ function M.render(rows, sum)
   w("enthalpy, so above about 150 °C they are a weaker reference than the HKF and")
   w("logK_T rows.")
   w("")
-  w("| method | T (°C) | reactions | mean abs. error | max abs. error |")
-  w("|---|---|---|---|---|")
-  for _, m in ipairs(M.METHODS) do
-    for _, tc in ipairs(M.TEMPS) do
-      local s = sum[m][tc]
-      w(("| %s | %d | %d | %.2f | %.2f |"):format(m, tc, s.n, s.mean, s.max))
-    end
-  end
-  w("")
+  summary_table(w, sum, M.METHODS, "reactions", "%.2f")
   w("Mean abs. error at 300 °C by reaction class (n = water ionisations the")
   w("isocoulombic form adds; with n = 0 it equals the one-term column):")
   w("")
@@ -320,15 +326,7 @@ function M.render(rows, sum)
   w("error is G(estimate) − G(published) at T in log K units per formula unit,")
   w("ΔG/(RT ln 10). *Cp = 0* is what phlox took before for solids without Cp.")
   w("")
-  w("| method | T (°C) | solids | mean abs. error | max abs. error |")
-  w("|---|---|---|---|---|")
-  for _, m in ipairs(M.KOPP_METHODS) do
-    for _, tc in ipairs(M.TEMPS) do
-      local s = sum[m][tc]
-      w(("| %s | %d | %d | %.3f | %.3f |"):format(m, tc, s.n, s.mean, s.max))
-    end
-  end
-  w("")
+  summary_table(w, sum, M.KOPP_METHODS, "solids", "%.3f")
   w("| solid | component | Cp 25 °C published | Kopp atoms | Kopp + component | error Kopp atoms 100/200/300 | error Kopp + component 100/200/300 | error Cp = 0 100/200/300 |")
   w("|---|---|---|---|---|---|---|---|")
   for _, r in ipairs(sum.kopp_rows) do

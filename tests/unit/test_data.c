@@ -42,6 +42,20 @@ static int has(const px_data_problems *p, ...)
     return 0;
 }
 
+/* each bad[i][0] inserted into template (one %s) must fail the check with a
+ * problem containing prefix and bad[i][1] */
+static void expect_errors(px_data_problems *p, const char *template, const char *const (*bad)[2],
+                          size_t n, const char *name, const char *prefix)
+{
+    for (size_t i = 0; i < n; i++) {
+        char src[768];
+        snprintf(src, sizeof src, template, bad[i][0]);
+        px_data_problems_clear(p);
+        assert_int_equal(px_data_check_buffer(NULL, src, strlen(src), name, NULL, p), PX_EDATA);
+        assert_true(has(p, prefix, bad[i][1], NULL));
+    }
+}
+
 static void test_good_zn_si_conversion(void **state)
 {
     (void)state;
@@ -271,17 +285,11 @@ static void test_logk_estimate_basis(void **state)
         {"estimate = 'isocoulombic', dH = 13.4", "estimate: an estimate stands in for missing temperature data: this species has dH"},
         {"estimate = { Cp = 1 }", "estimate: a logk species names its estimation method"},
     };
-    for (size_t i = 0; i < sizeof bad / sizeof bad[0]; i++) {
-        char src[512];
-        snprintf(src, sizeof src,
-                 "return { element = 'Zn', species = {\n"
-                 "{ formula = 'ZnOH^+', model = 'logk', reaction = 'Zn^2+ + H2O(l) = ZnOH^+ + H^+',"
-                 " logK = -8.96, %s, source = 's' } } }\n",
-                 bad[i][0]);
-        px_data_problems_clear(p);
-        assert_int_equal(px_data_check_buffer(NULL, src, strlen(src), "e.lua", NULL, p), PX_EDATA);
-        assert_true(has(p, "e.lua:2: ZnOH^+: ", bad[i][1], NULL));
-    }
+    expect_errors(p,
+                  "return { element = 'Zn', species = {\n"
+                  "{ formula = 'ZnOH^+', model = 'logk', reaction = 'Zn^2+ + H2O(l) = ZnOH^+ + H^+',"
+                  " logK = -8.96, %s, source = 's' } } }\n",
+                  bad, sizeof bad / sizeof bad[0], "e.lua", "e.lua:2: ZnOH^+: ");
     px_data_problems_free(p);
 }
 
@@ -320,18 +328,12 @@ static void test_cp_kopp_estimate(void **state)
         {"estimate = { Cp = 'kopp', from = { ['NiO(s)'] = -1 } }", "estimate.from: expected"},
         {"estimate = { from = { ['NiO(s)'] = 1 } }", "estimate.Cp: name the method"},
     };
-    for (size_t i = 0; i < sizeof bad / sizeof bad[0]; i++) {
-        char src[768];
-        snprintf(src, sizeof src,
-                 "return { element = 'Ni', species = {\n"
-                 "{ formula = 'NiO(s)', model = 'cp', G = -211.7, H = -239.7, S = 37.99, cp = { a = 45 },"
-                 " source = 's' },\n"
-                 "{ formula = 'Ni(OH)2(s)', model = 'cp', G = -447.2, H = -529.7, S = 88, %s, source = 's' } } }\n",
-                 bad[i][0]);
-        px_data_problems_clear(p);
-        assert_int_equal(px_data_check_buffer(NULL, src, strlen(src), "k.lua", NULL, p), PX_EDATA);
-        assert_true(has(p, "k.lua:3: Ni(OH)2(s): ", bad[i][1], NULL));
-    }
+    expect_errors(p,
+                  "return { element = 'Ni', species = {\n"
+                  "{ formula = 'NiO(s)', model = 'cp', G = -211.7, H = -239.7, S = 37.99, cp = { a = 45 },"
+                  " source = 's' },\n"
+                  "{ formula = 'Ni(OH)2(s)', model = 'cp', G = -447.2, H = -529.7, S = 88, %s, source = 's' } } }\n",
+                  bad, sizeof bad / sizeof bad[0], "k.lua", "k.lua:3: Ni(OH)2(s): ");
     /* a component that is not loaded: a warning, Cp stays 0 */
     const char *lone = "return { element = 'Ni', species = {\n"
                        "{ formula = 'Ni(OH)2(s)', model = 'cp', G = -447.2, H = -529.7, S = 88,"
