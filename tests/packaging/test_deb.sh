@@ -51,4 +51,4 @@ echo "$want" | grep -q "\"logK\":$(printf '%.4f' "$out")" ||
     awk -v a="$out" -v w="$want" 'BEGIN { sub(/.*"logK":/, "", w); sub(/[,}].*/, "", w); d = a - w; if (d < 0) d = -d; exit !(d < 1e-9) }' ||
     fail "packaged module gives log K $out, phlox $want"
 note "packaged module under lua5.4: log K(150 C) = $out"
-MANWIDTH=80 man -l "$R/usr/share/man/man1/phlox.1" 2>&1 | grep -q "^CAUTION" || fail "the packaged man page does not render"
+groff -man -Tutf8 -P-cbu "$R/usr/share/man/man1/phlox.1" 2>&1 | grep -q "^CAUTION" || fail "the packaged man page does not render"
