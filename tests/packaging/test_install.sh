@@ -3,7 +3,8 @@
 #  - the layout (program, libraries, headers, pkg-config, CMake package, Lua
 #    module, element library, man page, completion, editor stubs);
 #  - every installed header compiles on its own (self-contained, C11,
-#    -Wall -Wextra -Wpedantic -Werror) and none includes a private one;
+#    -Wall -Wextra -Wpedantic -Werror) and none includes a private one; the
+#    umbrella header works from C++ (C linkage);
 #  - examples/libphlox.c built with `pkg-config --cflags --libs phlox`
 #    (shared), against the static archives, and through find_package(phlox)
 #    gives the same output three times;
@@ -45,6 +46,16 @@ for h in "$P"/include/phlox/*.h; do
     n=$((n + 1))
 done
 note "$n installed headers compile on their own (and twice: include guards)"
+
+# C++ callers: the umbrella header compiles as C++ and its functions have C
+# linkage (the call below links against the C library).
+if command -v "${PHLOX_CXX:-c++}" >/dev/null 2>&1; then
+    printf '#include <phlox/phlox.h>\n#include <cstdio>\nint main() { std::puts(px_strerror(PX_ENOCONV)); return 0; }\n' >"$S/cxx.cpp"
+    "${PHLOX_CXX:-c++}" -std=c++17 -Wall -Wextra -Werror $SAN_FLAGS -I"$P/include" "$S/cxx.cpp" \
+        -L"$L" -lphlox-core -o "$S/cxx" || fail "<phlox/phlox.h> is not usable from C++"
+    [ "$(LD_LIBRARY_PATH=$L "$S/cxx")" = "did not converge" ] || fail "the C++ caller got a wrong message"
+    note "<phlox/phlox.h> from C++: compiles, links (C linkage), runs"
+fi
 
 # The C example, shared, through pkg-config only.
 export PKG_CONFIG_PATH="$L/pkgconfig"

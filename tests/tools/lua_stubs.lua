@@ -317,6 +317,8 @@ for rel in pairs(files) do
       stubbed[full] = true
     end
     if text ~= files[rel] then problems[#problems + 1] = "stale: " .. rel end
+    local ok, err = load(text, "=" .. rel, "t", {})
+    if not ok then problems[#problems + 1] = "not valid Lua: " .. err end
   end
 end
 for _, name in ipairs(sorted_keys(listed)) do
