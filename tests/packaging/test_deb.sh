@@ -24,9 +24,11 @@ done
     fail "package version differs from phlox --version"
 
 dpkg-deb -c "$deb" | awk '{print $6}' | sed 's|^\./|/|' >"$S/contents"
-for f in /usr/bin/phlox /usr/lib/libphlox-core.so.0 /usr/lib/libphlox-data.so.0 \
-    /usr/lib/libphlox-render.so.0 /usr/lib/libphlox-core.a /usr/include/phlox/phlox.h \
-    /usr/lib/pkgconfig/phlox.pc /usr/lib/cmake/phlox/phloxConfig.cmake /usr/lib/lua/5.4/phlox.so \
+lib=/usr/$PHLOX_LIBDIR
+mod=/usr/$PHLOX_LUA_CMOD_DIR
+for f in /usr/bin/phlox $lib/libphlox-core.so.0 $lib/libphlox-data.so.0 \
+    $lib/libphlox-render.so.0 $lib/libphlox-core.a /usr/include/phlox/phlox.h \
+    $lib/pkgconfig/phlox.pc $lib/cmake/phlox/phloxConfig.cmake $mod/phlox.so \
     /usr/share/phlox/elements/Fe.lua /usr/share/man/man1/phlox.1 \
     /usr/share/bash-completion/completions/phlox /usr/share/phlox/lua-stubs/phlox.lua \
     /usr/share/doc/phlox/README.md; do
@@ -43,8 +45,13 @@ got=$("$R/usr/bin/phlox" reaction "$eq" --temperature 150 --json) ||
 want=$("$PHLOX_BIN" reaction "$eq" --temperature 150 --json)
 [ "$got" = "$want" ] || fail "packaged phlox prints $got, the build's $want"
 note "packaged phlox: $got"
-# Debian's lua5.4 looks in /usr/lib/lua/5.4 for C modules; here, in the root.
-out=$(LUA_CPATH="$R/usr/lib/lua/5.4/?.so" stock_lua -e \
+# Debian's lua5.4 looks in /usr/lib/lua/5.4 (and the multiarch folder) for
+# C modules; here, in the root.
+case $mod in
+    /usr/lib/lua/5.4 | /usr/lib/*-linux-gnu/lua/5.4) ;;
+    *) fail "the module goes to $mod, not on Debian's lua5.4 cpath" ;;
+esac
+out=$(LUA_CPATH="$R$mod/?.so" stock_lua -e \
     'local phlox = require "phlox"; print(phlox.library{"Zn"}:reaction("Zn^2+ + 2 e- = Zn(s)", {T_C = 150}).logK)') ||
     fail "lua5.4 cannot load the packaged module"
 echo "$want" | grep -q "\"logK\":$(printf '%.4f' "$out")" ||
