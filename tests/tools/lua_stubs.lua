@@ -11,7 +11,7 @@
 -- (debug.getlocal), the "---" comment above it, and the option keys its body
 -- reads from an options table (`opts.key`) or its comment shows
 -- (`{ key = ...`).  For a C function: the signature comment in src/lua/*.c
--- ("/* core.water(T [, P]) -> table */").  Types are guessed from names
+-- ("/* core.water(T [, P]) -> table */"), else the manual's (docs/lua-api.md).  Types are guessed from names
 -- (T_C: number, file: string, library: phlox.Library) and are `any`
 -- otherwise.  docs/lua-stubs is installed as share/phlox/lua-stubs: add it to
 -- the language server's workspace.library.
@@ -67,6 +67,15 @@ do
     end
   end
   p:close()
+  -- then the manual's signatures (docs/lua-api.md: `fig:axes(panel, ...)`,
+  -- `core.ticks(a, b [, n, log])`, `plot.grid(maps, opts) → fig`)
+  local manual = read(src_root .. "/docs/lua-api.md") or ""
+  for recv, sep, name, params, ret in manual:gmatch("`(%a+)([%.:])([%a_][%w_]*)(%b())([^`]*)`") do
+    local key = (sep == "." and recv == "core" and "core." or sep == ":" and "method:" or nil)
+    if key and not c_sigs[key .. name] then
+      c_sigs[key .. name] = { params = params:sub(2, -2), ret = ret:match("^%s*→%s*(.-)%s*$") }
+    end
+  end
 end
 
 local TYPES = {
@@ -158,6 +167,10 @@ local function optional_param(info, pname)
   return false
 end
 
+local KEYWORDS = {}
+for w in ("and break do else elseif end false for function goto if in local nil not or repeat "
+          .. "return then true until while"):gmatch("%a+") do KEYWORDS[w] = true end
+
 local OPTION_PARAMS = { opts = true, spec = true, options = true, o = true, style = true }
 
 -- Stub of one function; `owner` is "phlox.plot" or "phlox.Library" (method).
@@ -166,16 +179,24 @@ local function function_stub(out, owner, name, f, method, classes)
   if info.what == "C" then
     local sig = c_sigs[(method and "method:" or "core.") .. name]
     out[#out + 1] = "--- " .. (sig and ("(C) %s%s%s(%s)%s"):format(owner, method and ":" or ".", name,
-      sig.params, sig.ret and (" -> " .. sig.ret) or "") or "(C function; no signature comment in src/lua)")
+      sig.params, sig.ret and (" -> " .. sig.ret) or "") or "(C function; no signature in src/lua or docs/lua-api.md)")
     local params = {}
     if sig then
       local optional = false
+      local function param(pname, opt)
+        if KEYWORDS[pname] then pname = "on" end -- fig:pages(true): a literal, not a name
+        params[#params + 1] = pname
+        out[#out + 1] = ("---@param %s%s %s"):format(pname, opt and "?" or "", type_of(pname))
+      end
+      -- "a, b [, c, d]": a bracket makes what follows it optional
       for piece in (sig.params .. ","):gmatch("([^,]*),") do
-        if piece:find("%[") then optional = true end
-        local pname = piece:match("([%a_][%w_]*)")
-        if pname then
-          params[#params + 1] = pname
-          out[#out + 1] = ("---@param %s%s %s"):format(pname, optional and "?" or "", type_of(pname))
+        local pre, post = piece:match("^([^%[]*)%[?(.*)$")
+        local pname = pre:match("([%a_][%w_]*)")
+        if pname then param(pname, optional) end
+        if piece:find("[", 1, true) then optional = true end
+        if not pname then
+          pname = post:match("([%a_][%w_]*)")
+          if pname then param(pname, true) end
         end
       end
       if sig.ret then out[#out + 1] = "---@return any # " .. sig.ret end

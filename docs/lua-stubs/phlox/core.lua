@@ -34,10 +34,12 @@ function phlox_core.embedded_files() end
 ---@return any # source text, or nil.
 function phlox_core.embedded_source(path) end
 
---- (C function; no signature comment in src/lua)
----@param ... any
----@return any
-function phlox_core.figure(...) end
+--- (C) phlox_core.figure(width, height [, rows, cols])
+---@param width number
+---@param height number
+---@param rows? any
+---@param cols? any
+function phlox_core.figure(width, height, rows, cols) end
 
 --- (C) phlox_core.formula(text) -> table | nil, message
 ---@param text string
@@ -61,15 +63,15 @@ function phlox_core.isatty(fd) end
 ---@return any # map table | nil, message
 function phlox_core.map(db, opts) end
 
---- (C function; no signature comment in src/lua)
----@param ... any
----@return any
-function phlox_core.nernst_slope(...) end
+--- (C) phlox_core.nernst_slope(T)
+---@param T number
+function phlox_core.nernst_slope(T) end
 
---- (C function; no signature comment in src/lua)
----@param ... any
----@return any
-function phlox_core.polygon_pole(...) end
+--- (C) phlox_core.polygon_pole(xs, ys [, tol])
+---@param xs any
+---@param ys any
+---@param tol? any
+function phlox_core.polygon_pole(xs, ys, tol) end
 
 --- (C) phlox_core.psat(T) -> bar | nil, message
 ---@param T number
@@ -80,35 +82,36 @@ function phlox_core.psat(T) end
 ---@return any # copy of the user folders, in search order.
 function phlox_core.search_paths() end
 
---- (C function; no signature comment in src/lua)
----@param ... any
----@return any
-function phlox_core.sha256(...) end
+--- (C) phlox_core.sha256(text)
+---@param text string
+function phlox_core.sha256(text) end
 
---- (C function; no signature comment in src/lua)
----@param ... any
----@return any
-function phlox_core.speciate(...) end
+--- (C) phlox_core.speciate(db, opts)
+---@param db phlox.Database
+---@param opts table
+function phlox_core.speciate(db, opts) end
 
---- (C function; no signature comment in src/lua)
+--- (C function; no signature in src/lua or docs/lua-api.md)
 ---@param ... any
 ---@return any
 function phlox_core.strerror(...) end
 
 --- (C) phlox_core.text_width(text, size [, chem]) -> points, as figures measure it
 ---@param text string
----@param size? number
+---@param size number
 ---@param chem? any
 ---@return any # points, as figures measure it
 function phlox_core.text_width(text, size, chem) end
 
---- (C function; no signature comment in src/lua)
----@param ... any
----@return any
-function phlox_core.ticks(...) end
+--- (C) phlox_core.ticks(a, b [, n, log])
+---@param a any
+---@param b any
+---@param n? integer
+---@param log? any
+function phlox_core.ticks(a, b, n, log) end
 
 --- (C) phlox_core.water(T [, P [, dielectric]]) -> table of the water state
----@param T? number
+---@param T number
 ---@param P? number
 ---@param dielectric? any
 ---@return any # table of the water state
@@ -123,10 +126,8 @@ function phlox_core.write_atomic(path, text) end
 ---@class phlox.Database
 phlox.Database = {}
 
---- (C function; no signature comment in src/lua)
----@param ... any
----@return any
-function phlox.Database:count(...) end
+--- (C) phlox.Database:count()
+function phlox.Database:count() end
 
 --- (C) phlox.Database:list_text([element]) -> the `phlox list` text
 ---@param element? string
@@ -135,29 +136,28 @@ function phlox.Database:list_text(element) end
 
 --- (C) phlox.Database:load(text, name [, {elements = {...}, user = bool}])
 ---@param text string
----@param name? string
+---@param name string
 ---@param elements? any
 ---@param user? string[]
 function phlox.Database:load(text, name, elements, user) end
 
 --- (C) phlox.Database:props(formula, T [, P]) -> {G, H, S, Cp, V} | nil, message
 ---@param formula string
----@param T? number
+---@param T number
 ---@param P? number
 ---@return any # {G, H, S, Cp, V} | nil, message
 function phlox.Database:props(formula, T, P) end
 
 --- (C) phlox.Database:reaction(text, T [, P]) -> {dG, dH, dS, logK, E, n_e, T, P, text} | nil, message
 ---@param text string
----@param T? number
+---@param T number
 ---@param P? number
 ---@return any # {dG, dH, dS, logK, E, n_e, T, P, text} | nil, message
 function phlox.Database:reaction(text, T, P) end
 
---- (C function; no signature comment in src/lua)
----@param ... any
----@return any
-function phlox.Database:remove(...) end
+--- (C) phlox.Database:remove(formula)
+---@param formula string
+function phlox.Database:remove(formula) end
 
 --- (C) phlox.Database:species(formula | index) -> table | nil
 ---@param formula string
@@ -167,21 +167,24 @@ function phlox.Database:species(formula) end
 ---@class phlox.Figure
 phlox.Figure = {}
 
---- (C function; no signature comment in src/lua)
----@param ... any
----@return any
-function phlox.Figure:axes(...) end
+--- (C) phlox.Figure:axes(panel, x0, x1, y0, y1 [, xlog, ylog])
+---@param panel integer
+---@param x0 any
+---@param x1 any
+---@param y0 any
+---@param y1 any
+---@param xlog? any
+---@param ylog? any
+function phlox.Figure:axes(panel, x0, x1, y0, y1, xlog, ylog) end
 
---- (C function; no signature comment in src/lua)
----@param ... any
----@return any
-function phlox.Figure:close(...) end
+--- (C) phlox.Figure:close()
+function phlox.Figure:close() end
 
 --- (C) phlox.Figure:hatch(panel, xs, ys, colour [, width, spacing, angle])
 ---@param panel integer
 ---@param xs any
 ---@param ys any
----@param colour? any
+---@param colour any
 ---@param width? number
 ---@param spacing? any
 ---@param angle? any
@@ -195,57 +198,74 @@ function phlox.Figure:legend(panel, where) end
 --- (C) phlox.Figure:legend_patch(panel, text, fill [, stroke [, hatch [, angle]]])
 ---@param panel integer
 ---@param text string
----@param fill? any
+---@param fill any
 ---@param stroke? any
 ---@param hatch? any
 ---@param angle? any
 function phlox.Figure:legend_patch(panel, text, fill, stroke, hatch, angle) end
 
---- (C function; no signature comment in src/lua)
----@param ... any
----@return any
-function phlox.Figure:line(...) end
+--- (C) phlox.Figure:line(panel, xs, ys, color [, width, dash, legend])
+---@param panel integer
+---@param xs any
+---@param ys any
+---@param color any
+---@param width? number
+---@param dash? any
+---@param legend? any
+function phlox.Figure:line(panel, xs, ys, color, width, dash, legend) end
 
---- (C function; no signature comment in src/lua)
----@param ... any
----@return any
-function phlox.Figure:pages(...) end
+--- (C) phlox.Figure:pages(true)
+---@param on any
+function phlox.Figure:pages(on) end
 
---- (C function; no signature comment in src/lua)
----@param ... any
----@return any
-function phlox.Figure:plot_rect(...) end
+--- (C) phlox.Figure:plot_rect(panel [, dpi])
+---@param panel integer
+---@param dpi? number
+function phlox.Figure:plot_rect(panel, dpi) end
 
---- (C function; no signature comment in src/lua)
----@param ... any
----@return any
-function phlox.Figure:polygon(...) end
+--- (C) phlox.Figure:polygon(panel, xs, ys, fill, stroke [, width, label, lx, ly])
+---@param panel integer
+---@param xs any
+---@param ys any
+---@param fill any
+---@param stroke any
+---@param width? number
+---@param label? any
+---@param lx? any
+---@param ly? any
+function phlox.Figure:polygon(panel, xs, ys, fill, stroke, width, label, lx, ly) end
 
 --- (C) phlox.Figure:render(format [, dpi]) -> bytes (for tests and pipelines)
----@param format? string
+---@param format string
 ---@param dpi? number
 ---@return any # bytes (for tests and pipelines)
 function phlox.Figure:render(format, dpi) end
 
 --- (C) phlox.Figure:save(path [, dpi]) -> true | nil, message
----@param path? string
+---@param path string
 ---@param dpi? number
 ---@return any # true | nil, message
 function phlox.Figure:save(path, dpi) end
 
---- (C function; no signature comment in src/lua)
----@param ... any
----@return any
-function phlox.Figure:stamp(...) end
+--- (C) phlox.Figure:stamp(line)
+---@param line any
+function phlox.Figure:stamp(line) end
 
---- (C function; no signature comment in src/lua)
----@param ... any
----@return any
-function phlox.Figure:text(...) end
+--- (C) phlox.Figure:text(panel, x, y, text [, chem, size, color])
+---@param panel integer
+---@param x number
+---@param y number
+---@param text string
+---@param chem? any
+---@param size? number
+---@param color? any
+function phlox.Figure:text(panel, x, y, text, chem, size, color) end
 
---- (C function; no signature comment in src/lua)
----@param ... any
----@return any
-function phlox.Figure:titles(...) end
+--- (C) phlox.Figure:titles(panel, xtitle, ytitle, title)
+---@param panel integer
+---@param xtitle any
+---@param ytitle any
+---@param title string
+function phlox.Figure:titles(panel, xtitle, ytitle, title) end
 
 return phlox_core
