@@ -243,15 +243,15 @@ function phlox.estimated_species(lib, elements, T, only)
   return out
 end
 
--- Away from 25 C a reader must know which fields rest on 25 C constants or
+local STOP_HINT = "pass accept_held_logk = true to use the 25 °C constants anyway (the stamp names them), " ..
+  "or give temperature data (dH, logK_T, or estimate = \"isocoulombic\") for them in a user data file " ..
+  "(phlox --path DIR; docs/element-files.md)"
+--- Away from 25 C a reader must know which fields rest on 25 C constants or
 -- on estimated temperature functions.  phlox.temperature_notes checks the
 -- species of `elements` at every temperature of `temps` (K): a species held
 -- at its 25 C log K stops the work (before any is done) unless
 -- opts.accept_held_logk is true; it returns the held formulas, the estimated
 -- { formula, method } and the stamp lines naming both.
-local STOP_HINT = "pass accept_held_logk = true to use the 25 °C constants anyway (the stamp names them), " ..
-  "or give temperature data (dH, logK_T, or estimate = \"isocoulombic\") for them in a user data file " ..
-  "(phlox --path DIR; docs/element-files.md)"
 function phlox.temperature_notes(lib, elements, temps, opts, where, only)
   local held, est, hseen, eseen, at = {}, {}, {}, {}, {}
   for _, T in ipairs(temps) do

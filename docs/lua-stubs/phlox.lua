@@ -70,6 +70,9 @@ local phlox = {}
 ---@field suppress? string[]
 ---@field totals? table<string, number>
 
+---@class phlox.temperature_notes.opts
+---@field accept_held_logk? any
+
 ---@class phlox.water.opts
 ---@field P? number
 ---@field T? number
@@ -98,13 +101,26 @@ function phlox.available_elements() end
 ---@param lib phlox.Library
 ---@param elements any
 ---@param T number
----@param P? number
+---@param P number
+---@param only string[]
 ---@return any
-function phlox.constant_logk(lib, elements, T, P) end
+function phlox.constant_logk(lib, elements, T, P, only) end
 
 --- Reference electrodes: name -> { name, offset (V vs SHE at 25 C), source }.
 ---@return any
 function phlox.electrodes() end
+
+--- The species of `elements` whose temperature dependence is estimated by a
+--- named method (species.basis == "estimated"): { { formula, method }, ... }
+--- sorted by formula; empty within 0.5 K of 25 C.  `only` (optional, both
+--- here and in constant_logk): a set of element symbols; species with any
+--- other element (besides H and O) are left out.
+---@param lib phlox.Library
+---@param elements any
+---@param T number
+---@param only string[]
+---@return any
+function phlox.estimated_species(lib, elements, T, only) end
 
 ---@param opts table
 ---@return any
@@ -186,6 +202,21 @@ function phlox.solubility(opts) end
 ---@param opts phlox.speciate.opts
 ---@return any
 function phlox.speciate(opts) end
+
+--- Away from 25 C a reader must know which fields rest on 25 C constants or
+--- on estimated temperature functions.  phlox.temperature_notes checks the
+--- species of `elements` at every temperature of `temps` (K): a species held
+--- at its 25 C log K stops the work (before any is done) unless
+--- opts.accept_held_logk is true; it returns the held formulas, the estimated
+--- { formula, method } and the stamp lines naming both.
+---@param lib phlox.Library
+---@param elements any
+---@param temps any
+---@param opts phlox.temperature_notes.opts
+---@param where any
+---@param only string[]
+---@return any
+function phlox.temperature_notes(lib, elements, temps, opts, where, only) end
 
 --- A potential measured against a reference electrode, on the SHE scale.
 ---@param E_measured any

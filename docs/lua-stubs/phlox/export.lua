@@ -17,7 +17,8 @@ local phlox_export = {}
 ---@field provenance? any
 
 --- Write rows (a sequence of tables keyed by column name) as CSV.
---- opts.columns: the column order (required); opts.conditions: stamped.
+--- opts.columns: the column order (required); opts.conditions: stamped;
+--- opts.notes: caveat lines (see notes_of).
 ---@param path string
 ---@param rows any
 ---@param opts phlox_export.csv.opts
