@@ -253,6 +253,10 @@ local STOP_HINT = "pass accept_held_logk = true to use the 25 °C constants anyw
 -- opts.accept_held_logk is true; it returns the held formulas, the estimated
 -- { formula, method } and the stamp lines naming both.
 function phlox.temperature_notes(lib, elements, temps, opts, where, only)
+  if opts and opts.require_temperature_data ~= nil then
+    error(("%s: require_temperature_data is gone: stopping on a log K held at 25 °C is now the default; " ..
+      "pass accept_held_logk = true to accept such constants"):format(where), 0)
+  end
   local held, est, hseen, eseen, at = {}, {}, {}, {}, {}
   for _, T in ipairs(temps) do
     for _, f in ipairs(phlox.constant_logk(lib, elements, T, nil, only)) do

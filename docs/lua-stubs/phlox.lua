@@ -72,6 +72,7 @@ local phlox = {}
 
 ---@class phlox.temperature_notes.opts
 ---@field accept_held_logk? any
+---@field require_temperature_data? any
 
 ---@class phlox.water.opts
 ---@field P? number

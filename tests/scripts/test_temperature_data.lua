@@ -53,6 +53,9 @@ stops(phlox.speciate, { library = zn, T_C = 200, totals = { Zn = 1e-6 }, pH = 8 
 stops(phlox.fractions, { library = zn, element = "Zn", T_C = 150, range = { 6, 12 }, n = 7 }, "phlox.fractions")
 stops(phlox.solubility, { library = zn, element = "Zn", T_C = { 25, 200 }, range = { 6, 12 }, n = 7 }, "phlox.solubility")
 stops(phlox.series, { library = zn, element = "Zn", T_C = { 25, 200 } }, "phlox.series")
+-- the option this policy replaced is refused with a pointer to the new one
+local okr, errr = pcall(phlox.map, { library = zn, element = "Zn", T_C = 200, require_temperature_data = true })
+check(not okr and tostring(errr):find("accept_held_logk", 1, true), "require_temperature_data is refused: " .. tostring(errr))
 -- at 25 C nothing stops
 check(pcall(phlox.map, { library = zn, element = "Zn", T_C = 25 }), "at 25 C every log K is at its own temperature")
 check(phlox.speciate { library = zn, T_C = 25, totals = { Zn = 1e-6 }, pH = 8 }, "speciation at 25 C")
