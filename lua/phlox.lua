@@ -189,12 +189,6 @@ function phlox.water(opts)
   return w
 end
 
---- The species of `elements` (a list of symbols) whose log K has no
--- temperature data (a log K record without dH, logK_T or an estimate): phlox
--- keeps their 25 C value at T.  Read from each record's temperature basis
--- (species.basis == "held", set by the core from the record's fields).
--- Empty within 0.5 K of 25 C.  Sorted formulas.  P is accepted for
--- compatibility and not used (the basis does not depend on P).
 local T_REF = 298.15               -- K: where log K records are given
 local NEAR_T_REF = 0.5             -- K: closer than this to 25 C, nothing is held
 local function made_of(s, only)
@@ -205,21 +199,45 @@ local function made_of(s, only)
   return true
 end
 
+-- The records of a library whose basis is not "measured", gathered once per
+-- library (sweeps call speciate many times); rebuilt if the species count
+-- changes (db:remove, db:load).
+local basis_cache = setmetatable({}, { __mode = "k" })
+local function unmeasured(lib)
+  local n = lib.db:count()
+  local c = basis_cache[lib]
+  if c and c.n == n then return c.recs end
+  local recs = {}
+  for i = 1, n do
+    local s = lib.db:species(i)
+    if s.basis ~= "measured" then recs[#recs + 1] = s end
+  end
+  basis_cache[lib] = { n = n, recs = recs }
+  return recs
+end
+
 local function basis_list(lib, elements, T, basis, only)
-  local out, seen = {}, {}
+  local out = {}
   if math.abs(T - T_REF) <= NEAR_T_REF then return out end
-  for _, el in ipairs(elements) do
-    for _, s in ipairs(lib:list(el)) do
-      if s.basis == basis and not seen[s.formula] and made_of(s, only) then
-        seen[s.formula] = true
-        out[#out + 1] = s
-      end
-    end
+  local wanted = {}
+  for _, el in ipairs(elements) do wanted[el] = true end
+  for _, s in ipairs(unmeasured(lib)) do
+    local has = false
+    for el in pairs(s.elements) do has = has or wanted[el] == true end
+    if has and s.basis == basis and made_of(s, only) then out[#out + 1] = s end
   end
   table.sort(out, function(a, b) return a.formula < b.formula end)
   return out
 end
 
+--- The species of `elements` (a list of symbols) whose log K has no
+-- temperature data (a log K record without dH, logK_T or an estimate): phlox
+-- keeps their 25 C value at T.  Read from each record's temperature basis
+-- (species.basis == "held", set by the core from the record's fields).
+-- Empty within 0.5 K of 25 C.  Sorted formulas.  P is accepted for
+-- compatibility and not used (the basis does not depend on P).  `only`
+-- (optional): a set of element symbols; species with any other element
+-- (besides H and O) are left out.
 function phlox.constant_logk(lib, elements, T, P, only)
   if getmetatable(lib) ~= phlox.Library then error("phlox.constant_logk: library expected", 2) end
   if type(T) ~= "number" then error("phlox.constant_logk: T (K) expected", 2) end
@@ -230,9 +248,8 @@ end
 
 --- The species of `elements` whose temperature dependence is estimated by a
 -- named method (species.basis == "estimated"): { { formula, method }, ... }
--- sorted by formula; empty within 0.5 K of 25 C.  `only` (optional, both
--- here and in constant_logk): a set of element symbols; species with any
--- other element (besides H and O) are left out.
+-- sorted by formula; empty within 0.5 K of 25 C; `only` as for
+-- constant_logk.
 function phlox.estimated_species(lib, elements, T, only)
   if getmetatable(lib) ~= phlox.Library then error("phlox.estimated_species: library expected", 2) end
   if type(T) ~= "number" then error("phlox.estimated_species: T (K) expected", 2) end

@@ -99,6 +99,14 @@ local phlox = {}
 ---@return any
 function phlox.available_elements() end
 
+--- The species of `elements` (a list of symbols) whose log K has no
+--- temperature data (a log K record without dH, logK_T or an estimate): phlox
+--- keeps their 25 C value at T.  Read from each record's temperature basis
+--- (species.basis == "held", set by the core from the record's fields).
+--- Empty within 0.5 K of 25 C.  Sorted formulas.  P is accepted for
+--- compatibility and not used (the basis does not depend on P).  `only`
+--- (optional): a set of element symbols; species with any other element
+--- (besides H and O) are left out.
 ---@param lib phlox.Library
 ---@param elements any
 ---@param T number
@@ -113,9 +121,8 @@ function phlox.electrodes() end
 
 --- The species of `elements` whose temperature dependence is estimated by a
 --- named method (species.basis == "estimated"): { { formula, method }, ... }
---- sorted by formula; empty within 0.5 K of 25 C.  `only` (optional, both
---- here and in constant_logk): a set of element symbols; species with any
---- other element (besides H and O) are left out.
+--- sorted by formula; empty within 0.5 K of 25 C; `only` as for
+--- constant_logk.
 ---@param lib phlox.Library
 ---@param elements any
 ---@param T number
