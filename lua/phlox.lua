@@ -228,11 +228,89 @@ local function held_logk(lib, elements, T, P, opts, where)
   return held
 end
 
+local add_note -- defined below
 local function stamp_held(m, held)
   if #held == 0 then return end
   m.constant_logk = held
-  m.stamp = m.stamp or {}
-  m.stamp[#m.stamp + 1] = "log K held at 25 °C (no temperature data): " .. table.concat(held, ", ")
+  add_note(m, "held", "log K held at 25 °C (no temperature data): " .. table.concat(held, ", "))
+end
+
+-- What practice keeps out, and every caveat that changes a result, as
+-- stamp lines.  A result carries them in `stamp` (plot stamps, curve
+-- stamps) and `notes` ({key, text}); provenance records them for CSV and
+-- JSON files (phlox.export).  Warnings also go to stderr, once per text.
+
+--- Ranges of ionic strength (mol/kg) where each activity model is used.
+phlox.activity_ranges = {
+  ideal = { max = 10 ^ -2.3, source = "from memory of Stumm and Morgan, Aquatic Chemistry, 3rd ed. (1996), "
+    .. "table 3.3: the Debye-Hückel limiting law to I = 10^-2.3; unit activity coefficients are no better" },
+  davies = { max = 0.5, source = "from memory of Stumm and Morgan, Aquatic Chemistry, 3rd ed. (1996), table 3.3 "
+    .. "(Davies equation, I < 0.5)" },
+  bdot = { max = 1.0, source = "common practice, no source" },
+  sit = { max = 3.5, source = "from memory of Grenthe, Plyasunov and Spahiu 1997, NEA-TDB guidelines "
+    .. "(specific ion interaction theory to about I = 3.5 mol/kg)" },
+}
+
+local warned = {}
+local function warn_once(text)
+  if warned[text] then return end
+  warned[text] = true
+  io.stderr:write("phlox: warning: ", text, "\n")
+end
+
+function add_note(t, key, text)
+  t.notes = t.notes or {}
+  t.stamp = t.stamp or {}
+  for _, n in ipairs(t.notes) do if n.text == text then return end end
+  t.notes[#t.notes + 1] = { key = key, text = text }
+  t.stamp[#t.stamp + 1] = text
+  provenance.record_note(text)
+end
+
+--- The activity model at ionic strength I (mol/kg): { model, ionic_strength,
+-- max, in_range, source, text }; a model used beyond its range is warned
+-- about once on stderr.
+function phlox.activity_range(model, I)
+  local r = phlox.activity_ranges[model]
+  if not r then error("phlox.activity_range: unknown activity model '" .. tostring(model) .. "'", 2) end
+  local info = { model = model, ionic_strength = I, max = r.max, in_range = I <= r.max, source = r.source }
+  info.text = ("activity model %s, ionic strength %.3g mol/kg (used to %g mol/kg: %s)"):format(model, I, r.max, r.source)
+  if not info.in_range then
+    info.warning = ("%s activity coefficients at ionic strength %.3g mol/kg, beyond the model's range "
+      .. "(%g mol/kg: %s): results are indicative"):format(model, I, r.max, r.source)
+    warn_once(info.warning)
+  end
+  return info
+end
+
+local function note_activity(t, model, I)
+  local a = phlox.activity_range(model, I)
+  t.activity = a
+  add_note(t, "activity", a.warning and ("WARNING: " .. a.warning) or a.text)
+end
+
+--- The sour-service caution, on every output where H2S or HS^- is part of
+-- a map or a speciation.
+phlox.sour_caution = "sour service: H2S/HS- present; this diagram does not show hydrogen uptake, "
+  .. "sulfide stress cracking or hydrogen-induced cracking: defer to the applicable sour-service standards"
+local SULFIDE = { ["H2S(aq)"] = true, ["HS^-"] = true, ["S^2-"] = true, ["H2S(g)"] = true }
+
+local function note_sour(t, names)
+  for _, n in ipairs(names) do
+    if SULFIDE[n] then
+      add_note(t, "sour", phlox.sour_caution)
+      warn_once(phlox.sour_caution)
+      return
+    end
+  end
+end
+
+local function note_list(t, key, what, list)
+  if list and #list > 0 then add_note(t, key, what .. ": " .. table.concat(list, ", ")) end
+end
+
+local function note_ligands(t, text)
+  if text then add_note(t, "ligands", "ligand oxidation states: " .. text) end
 end
 
 local function window_of(opts, xname, yname)
@@ -264,9 +342,18 @@ function phlox.map(opts)
     ligand = opts.ligand, ligand_activity = opts.ligand_activity,
     gas_log_f = opts.gas_log_f, ionic_strength = opts.ionic_strength,
     exclude = opts.exclude, only = opts.only, activities = opts.activities,
+    ligand_redox = opts.ligand_redox,
   }
   local m, err = core.map(lib.db, copt)
   if not m then error(err, 2) end
+  note_ligands(m, m.ligand_states)
+  note_list(m, "exclude", "left out by the user (exclude)", opts.exclude)
+  note_list(m, "only", "only these species of " .. opts.element .. " (only)", opts.only)
+  if (opts.ionic_strength or 0) > 0 then note_activity(m, "davies", opts.ionic_strength) end
+  local names = {}
+  for _, f in ipairs(m.ligand_fields or {}) do names[#names + 1] = f.species end
+  for _, f in ipairs(m.fields) do names[#names + 1] = f.species end
+  note_sour(m, names)
   m.conditions = {
     T_C = T - T0C, P_bar = P, activity = opts.activity or 1e-6,
     ionic_strength = opts.ionic_strength or 0,
@@ -302,6 +389,29 @@ function phlox.speciate(opts)
   local r, err, info = core.speciate(lib.db, copt)
   if not r then return nil, err, info end
   r.T_C = T - T0C
+  note_activity(r, r.activity_model, r.ionic_strength)
+  if r.activity_model == "sit" then
+    add_note(r, "sit", ("SIT interaction coefficients at 25 °C (NEA-TDB table, src/equil/equil_sit_data.c): "
+      .. "%d ion pairs with one, %d without (taken as 0)"):format(r.sit_pairs, r.sit_missing))
+  end
+  if r.pe then note_ligands(r, r.ligand_states)
+  else add_note(r, "ligands", "no redox constraint: every element stays in the oxidation state of its basis species") end
+  if #r.inhibited > 0 then
+    add_note(r, "inhibited", "kept from precipitating as kinetically inhibited (docs/solver.md; allow_inhibited = true "
+      .. "lets them in; saturation indices still given): " .. table.concat(r.inhibited, ", "))
+  end
+  if opts.solids == false then add_note(r, "solids", "no solid may precipitate (solids = false)") end
+  note_list(r, "suppress", "kept from precipitating by the user (suppress)", opts.suppress)
+  note_list(r, "exclude", "left out by the user (exclude)", opts.exclude)
+  local elements = {}
+  for el in pairs(opts.totals or {}) do elements[#elements + 1] = el end
+  table.sort(elements)
+  stamp_held(r, held_logk(lib, elements, T, P, opts, "phlox.speciate"))
+  local names = {}
+  for _, sp in ipairs(r.species) do
+    if (sp.molality or 0) > 0 then names[#names + 1] = sp.formula end
+  end
+  note_sour(r, names)
   return r
 end
 
@@ -330,9 +440,29 @@ function phlox.grid_map(opts)
     nx = opts.nx or opts.n or 101, ny = opts.ny or opts.n or 101,
     total = opts.total, ligand = opts.ligand, ligand_total = opts.ligand_total,
     activity = opts.activity, background_nacl = opts.background_nacl,
-    exclude = opts.exclude, threads = opts.threads })
+    exclude = opts.exclude, threads = opts.threads,
+    ligand_redox = opts.ligand_redox, allow_inhibited = opts.allow_inhibited })
   if not g then error(err, 2) end
   g.fields = {}
+  note_ligands(g, g.ligand_states)
+  note_list(g, "exclude", "left out by the user (exclude)", opts.exclude)
+  note_activity(g, opts.activity or "davies", g.ionic_strength_max or 0)
+  if g.failures > 0 then
+    -- a boundary next to a node without a solution is a guess: left out
+    -- unless the user asks for it
+    local kept, dropped = {}, 0
+    for _, b in ipairs(g.boundaries) do
+      if (b.between[1] == "?" or b.between[2] == "?") and not opts.failed_boundaries then dropped = dropped + 1
+      else kept[#kept + 1] = b end
+    end
+    g.boundaries = kept
+    add_note(g, "failed", ("the solver failed at %d of %d solves; %s"):format(g.failures, g.solves,
+      opts.failed_boundaries and "boundaries next to them drawn on request (failed_boundaries = true)"
+      or ("%d boundary pieces next to them not drawn (failed_boundaries = true draws them)"):format(dropped)))
+  end
+  if opts.ligand == "S" and not (opts.ligand_redox and opts.ligand_redox.S == "sulfate") then
+    note_sour(g, { "HS^-" })
+  end
   g.conditions = { T_C = T - T0C, P_bar = P, total = opts.total or 1e-6,
                    ligand = opts.ligand, ligand_total = opts.ligand and (opts.ligand_total or 1e-3) or nil }
   g.label = "rigorous"
