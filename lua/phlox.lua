@@ -252,9 +252,10 @@ phlox.activity_ranges = {
 }
 
 local warned = {}
-local function warn_once(text)
-  if warned[text] then return end
-  warned[text] = true
+local function warn_once(text, key)
+  key = key or text
+  if warned[key] then return end
+  warned[key] = true
   io.stderr:write("phlox: warning: ", text, "\n")
 end
 
@@ -278,7 +279,7 @@ function phlox.activity_range(model, I)
   if not info.in_range then
     info.warning = ("%s activity coefficients at ionic strength %.3g mol/kg, beyond the model's range "
       .. "(%g mol/kg: %s): results are indicative"):format(model, I, r.max, r.source)
-    warn_once(info.warning)
+    warn_once(info.warning, "range " .. model)
   end
   return info
 end
@@ -303,6 +304,27 @@ local function note_sour(t, names)
       return
     end
   end
+end
+
+--- The stamp lines of several results (the solves of a curve or a sweep):
+-- each caveat once, skipping the keys in `skip`; the activity line of the
+-- largest ionic strength first.
+function phlox.merge_notes(results, skip)
+  local out, seen, worst = {}, {}, nil
+  for _, r in ipairs(results) do
+    for _, n in ipairs(r.notes or {}) do
+      if n.key == "activity" then
+        if r.activity and (not worst or r.activity.ionic_strength > worst.ionic_strength) then worst = r.activity end
+      elseif not (skip and skip[n.key]) and not seen[n.text] then
+        seen[n.text] = true
+        out[#out + 1] = n.text
+      end
+    end
+  end
+  if worst then
+    table.insert(out, 1, (worst.warning and ("WARNING: " .. worst.warning) or worst.text) .. " (the largest of these results)")
+  end
+  return out
 end
 
 local function note_list(t, key, what, list)
@@ -406,7 +428,16 @@ function phlox.speciate(opts)
   local elements = {}
   for el in pairs(opts.totals or {}) do elements[#elements + 1] = el end
   table.sort(elements)
-  stamp_held(r, held_logk(lib, elements, T, P, opts, "phlox.speciate"))
+  -- sweeps speciate the same water at one T many times: the held list is
+  -- kept per library, T, P and elements
+  local key = ("%.6f %.6f %s"):format(T, P, table.concat(elements, " "))
+  lib.held_cache = lib.held_cache or {}
+  lib.held_cache[key] = lib.held_cache[key] or phlox.constant_logk(lib, elements, T, P)
+  if #lib.held_cache[key] > 0 and opts.require_temperature_data then
+    error("phlox.speciate: require_temperature_data: no temperature data (log K held at 25 °C) for "
+      .. table.concat(lib.held_cache[key], ", "), 2)
+  end
+  stamp_held(r, lib.held_cache[key])
   local names = {}
   for _, sp in ipairs(r.species) do
     if (sp.molality or 0) > 0 then names[#names + 1] = sp.formula end

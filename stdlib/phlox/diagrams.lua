@@ -42,7 +42,16 @@ end
 
 -- The options of phlox.speciate that pass through unchanged.
 local PASS = { "T", "T_C", "P", "E", "pe", "redox_gas", "redox_log_f", "fugacities", "basis",
-               "suppress", "exclude", "max_iter" }
+               "suppress", "exclude", "max_iter", "ligand_redox", "allow_inhibited" }
+
+-- A curve's stamp: its own held-constant line, then the caveats of its
+-- solves (phlox.merge_notes).
+local function curve_stamp(notes, held)
+  local out = {}
+  for _, l in ipairs(held or {}) do out[#out + 1] = l end
+  for _, l in ipairs(phlox.merge_notes(notes, { held = true })) do out[#out + 1] = l end
+  return out
+end
 
 local function base_speciate(opts)
   local s = { library = opts.library }
@@ -141,7 +150,7 @@ function diagrams.fractions(opts)
 
   local base = base_speciate(opts)
   base.solids = opts.solids == true
-  local shares, failures = {}, {}
+  local shares, failures, notes = {}, {}, {}
   local t0 = os.clock()
   for i, x in ipairs(xs) do
     local s = copy(base)
@@ -164,6 +173,7 @@ function diagrams.fractions(opts)
       end
     end
     local r, err = phlox.speciate(s)
+    if r then notes[#notes + 1] = { notes = r.notes, activity = r.activity } end
     if r and r.elements[el] then
       shares[i] = r.elements[el].share
     else
@@ -201,7 +211,7 @@ function diagrams.fractions(opts)
              y = { name = "fraction of " .. el, min = 0, max = 1 } },
     conditions = { T_C = T_C_of(opts), [el .. " total (mol/kg)"] = total, pH = xkind ~= "pH" and opts.pH or nil,
                    activity_model = base.activity },
-    stamp = held,
+    stamp = curve_stamp(notes, held),
     stats = { solves = #xs, seconds = seconds },
   }
 end
@@ -240,7 +250,7 @@ function diagrams.solubility(opts)
   local base = base_speciate(opts)
   base.T_C = nil
   base.solids = true
-  local series, failures, retried = {}, {}, 0
+  local series, failures, retried, notes = {}, {}, 0, {}
   local t0 = os.clock()
   for _, tc in ipairs(temps) do
     local y, solids = {}, {}
@@ -257,6 +267,7 @@ function diagrams.solubility(opts)
       for _ = 0, RETRIES do
         s.totals[el] = put
         r, err = phlox.speciate(s)
+        if r then notes[#notes + 1] = { notes = r.notes, activity = r.activity } end
         e = r and r.elements[el]
         if e then break end
         put = put * RETRY_FACTOR
@@ -287,7 +298,7 @@ function diagrams.solubility(opts)
     axes = { x = { name = "pH", min = xs[1], max = xs[#xs] },
              y = { name = "dissolved " .. el, unit = "mol/kg", log = true } },
     conditions = { [el .. " put in (mol/kg)"] = total, activity_model = base.activity },
-    stamp = held,
+    stamp = curve_stamp(notes, held),
     stats = { points = #xs * #temps, retries = retried, seconds = os.clock() - t0 },
   }
 end
