@@ -422,6 +422,9 @@ function phlox.speciate(opts)
     add_note(r, "inhibited", "kept from precipitating as kinetically inhibited (docs/solver.md; allow_inhibited = true "
       .. "lets them in; saturation indices still given): " .. table.concat(r.inhibited, ", "))
   end
+  if opts.allow_inhibited then
+    add_note(r, "inhibited", "kinetically inhibited solids allowed to precipitate (allow_inhibited = true)")
+  end
   if opts.solids == false then add_note(r, "solids", "no solid may precipitate (solids = false)") end
   note_list(r, "suppress", "kept from precipitating by the user (suppress)", opts.suppress)
   note_list(r, "exclude", "left out by the user (exclude)", opts.exclude)
