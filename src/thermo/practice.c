@@ -94,6 +94,15 @@ static size_t states_of(const px_db *db, int z, double *st, size_t max)
     return n;
 }
 
+/* The rule pinning element z (not the map's own element skip_z), or NULL. */
+static const px_ligand_rule *pinned_rule(const px_ligand_states *ls, int z, int skip_z)
+{
+    if (z == skip_z) return NULL;
+    for (size_t i = 0; i < ls->n; i++)
+        if (ls->rule[i].z == z && !ls->rule[i].full) return &ls->rule[i];
+    return NULL;
+}
+
 #define STATES_MAX 32
 int px_ligand_allows(const px_ligand_states *ls, const px_db *db, const px_formula *f, int skip_z)
 {
@@ -104,10 +113,8 @@ int px_ligand_allows(const px_ligand_states *ls, const px_db *db, const px_formu
     for (int e = 0; e < f->n_elem; e++) {
         int z = f->elem[e].z;
         if (z == Z_H || z == Z_O) continue;
-        const px_ligand_rule *r = NULL;
-        for (size_t i = 0; i < ls->n; i++)
-            if (ls->rule[i].z == z) r = &ls->rule[i];
-        if (r && !r->full && z != skip_z) {
+        const px_ligand_rule *r = pinned_rule(ls, z, skip_z);
+        if (r) {
             rest -= f->elem[e].n * r->ox;
             pinned = 1;
         } else {
@@ -130,11 +137,7 @@ int px_ligand_allows(const px_ligand_states *ls, const px_db *db, const px_formu
     double lo = 0, hi = 0;
     for (int e = 0; e < f->n_elem; e++) {
         int z = f->elem[e].z;
-        if (z == Z_H || z == Z_O) continue;
-        const px_ligand_rule *r = NULL;
-        for (size_t i = 0; i < ls->n; i++)
-            if (ls->rule[i].z == z) r = &ls->rule[i];
-        if (r && !r->full && z != skip_z) continue;
+        if (z == Z_H || z == Z_O || pinned_rule(ls, z, skip_z)) continue;
         size_t n = states_of(db, z, st, STATES_MAX);
         if (n == 0) return 1;
         double mn = st[0], mx = st[0];
