@@ -347,7 +347,11 @@ end
 --   phlox.map { library = lib, element = "Fe", T_C = 25,
 --               pH_range = {0, 14}, E_range = {-2, 2}, activity = 1e-6,
 --               ligand = "S", ligand_activity = 1e-3, ionic_strength = 0,
---               exclude = {"Fe3O4(s)"}, axes = {"pH", "E"} }
+--               exclude = {"Fe3O4(s)"}, axes = {"pH", "E"},
+--               ligand_redox = { N = "full", S = "sulfate" } }
+-- ligand_redox: per ligand "full" (true), "kept" (false) or a form name
+-- (docs/solver.md "What practice keeps out"; N and C kept, S full by
+-- default).  The map's `stamp` and `notes` carry every caveat.
 function phlox.map(opts)
   assert(type(opts) == "table", "phlox.map: options table expected")
   local lib = opts.library
@@ -394,7 +398,9 @@ end
 --     fugacities = { ["CO2(g)"] = -3.4 },      -- log10 bar, replaces that element's total
 --     fixed = { ["Cl^-"] = -2 },               -- log10 activity of a basis species
 --     solids = true, suppress = {...}, exclude = {...},
---     activity = "davies" | "bdot" | "ideal" | "sit" }
+--     activity = "davies" | "bdot" | "ideal" | "sit",
+--     ligand_redox = { N = "full" },           -- as phlox.map
+--     allow_inhibited = true }                 -- let dolomite, magnesite, quartz in
 -- Returns a table (pH, pe, E, ionic_strength, species, elements with each
 -- species' share, solids' saturation index and amount), or nil, message,
 -- info when the solver does not converge.
@@ -457,7 +463,9 @@ end
 --   phlox.grid_map { library = lib, element = "Cu", T_C = 25, total = 1e-6,
 --                    ligand = "Cl", ligand_total = 1e-2, n = 201,
 --                    pH_range = {0, 14}, E_range = {-2, 2},
---                    activity = "davies", threads = 2 }
+--                    activity = "davies", threads = 2,
+--                    ligand_redox = {...}, allow_inhibited = false,
+--                    failed_boundaries = false }  -- draw boundaries next to failed solves
 -- Returns a map table with `boundaries` (polylines between named species),
 -- `fields` = {} (no polygons: draw it with phlox.plot.overlay next to an
 -- exact map), `labels` (node labels), `species` and solver statistics.
@@ -482,17 +490,29 @@ function phlox.grid_map(opts)
   note_list(g, "exclude", "left out by the user (exclude)", opts.exclude)
   note_activity(g, opts.activity or "davies", g.ionic_strength_max or 0)
   if g.failures > 0 then
-    -- a boundary next to a node without a solution is a guess: left out
-    -- unless the user asks for it
+    -- a boundary placed next to a point without a solution (a failed node,
+    -- or a bisection point) is a guess: left out unless the user asks for it
     local kept, dropped = {}, 0
     for _, b in ipairs(g.boundaries) do
-      if (b.between[1] == "?" or b.between[2] == "?") and not opts.failed_boundaries then dropped = dropped + 1
-      else kept[#kept + 1] = b end
+      if not b.through_failed or opts.failed_boundaries then kept[#kept + 1] = b
+      else -- keep the runs of points away from the failures
+        local run = { between = b.between, x = {}, y = {} }
+        for k = 1, #b.x do
+          if b.failed_points[k] then
+            dropped = dropped + 1
+            if #run.x >= 2 then kept[#kept + 1] = run end
+            run = { between = b.between, x = {}, y = {} }
+          else
+            run.x[#run.x + 1], run.y[#run.y + 1] = b.x[k], b.y[k]
+          end
+        end
+        if #run.x >= 2 then kept[#kept + 1] = run end
+      end
     end
     g.boundaries = kept
     add_note(g, "failed", ("the solver failed at %d of %d solves; %s"):format(g.failures, g.solves,
       opts.failed_boundaries and "boundaries next to them drawn on request (failed_boundaries = true)"
-      or ("%d boundary pieces next to them not drawn (failed_boundaries = true draws them)"):format(dropped)))
+      or ("%d boundary points next to them left out (failed_boundaries = true draws them)"):format(dropped)))
   end
   if opts.ligand == "S" and not (opts.ligand_redox and opts.ligand_redox.S == "sulfate") then
     note_sour(g, { "HS^-" })
@@ -582,6 +602,7 @@ function phlox.electrode_at(name, T, at_25C, where)
     info.text = ("potentials vs %s at %.1f °C: offset %.4f V = %.4f V at 25 °C %+.3g mV/K (%s)"):format(
       e.name, T - T0C, off, e.offset, e.dEdT * 1e3, e.dEdT_source)
   end
+  if e.offset ~= 0 then provenance.record_note(info.text) end
   return info
 end
 

@@ -206,6 +206,9 @@ typedef struct px_diagram_grid {
     px_diagram_polyline *poly;
     size_t npt;
     double *px, *py;
+    unsigned char *pfail; /* per point: 1 if placed next to a negative label
+                             (a node or bisection point the callback could not
+                             label: a solver failure) */
     size_t nfield;     /* sorted by id */
     px_diagram_grid_field *field;
     /* statistics */
@@ -213,6 +216,7 @@ typedef struct px_diagram_grid {
     size_t ncross;     /* refined edge crossings */
     size_t nthird;     /* bisections that met a third id (a field thinner than a step) */
     size_t nmaxiter;   /* bisections stopped by max_iter */
+    size_t nfailcross; /* crossings placed next to a negative label */
     const px_allocator *alloc;
 } px_diagram_grid;
 

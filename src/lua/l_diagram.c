@@ -426,6 +426,18 @@ static int l_grid_map(lua_State *L)
         lua_rawseti(L, -2, 2);
         lua_setfield(L, -2, "between");
         push_xy(L, g->px + pl->first, g->py + pl->first, pl->n, NULL);
+        int through = pl->id_a < 0 || pl->id_b < 0;
+        for (size_t k = 0; k < pl->n; k++) through |= g->pfail[pl->first + k];
+        lua_pushboolean(L, through);
+        lua_setfield(L, -2, "through_failed");
+        if (through) { /* which points sit next to a failed solve */
+            lua_createtable(L, (int)pl->n, 0);
+            for (size_t k = 0; k < pl->n; k++) {
+                lua_pushboolean(L, pl->id_a < 0 || pl->id_b < 0 || g->pfail[pl->first + k]);
+                lua_rawseti(L, -2, (lua_Integer)k + 1);
+            }
+            lua_setfield(L, -2, "failed_points");
+        }
         lua_rawseti(L, -2, (lua_Integer)b + 1);
     }
     lua_setfield(L, -2, "boundaries");

@@ -213,6 +213,23 @@ check(js:find('"notes"', 1, true) and js:find("sour service", 1, true) and js:fi
 local hot = phlox.map { library = fes, element = "Fe", ligand = "S", T_C = 150 }
 check(has_line(hot.stamp, "log K held at 25 °C"), "held constants in the stamp")
 
+-- rigorous map with failed solves (Ni at 300 C, pH 0-14: the solver fails
+-- at some alkaline points): counted in the stamp, and no drawn boundary
+-- point sits next to a failure unless asked for
+local nil300 = phlox.library { "Ni" }
+local gn = phlox.grid_map { library = nil300, element = "Ni", T_C = 300, n = 21 }
+if gn.failures > 0 then
+  check(has_line(gn.stamp, ("the solver failed at %d of %d solves"):format(gn.failures, gn.solves)), "failures stamped")
+  local gy = phlox.grid_map { library = nil300, element = "Ni", T_C = 300, n = 21, failed_boundaries = true }
+  local function npts(b) local n = 0 for _, x in ipairs(b) do n = n + #x.x end return n end
+  local through = 0
+  for _, b in ipairs(gy.boundaries) do if b.through_failed then through = through + 1 end end
+  check(through > 0 and npts(gy.boundaries) > npts(gn.boundaries), "boundaries through failures drawn only on request")
+  for _, b in ipairs(gn.boundaries) do check(not b.failed_points, "a boundary through a failed point was drawn") end
+else
+  print("test_practice: the Ni 300 C grid had no failed solve; the failed-boundary case is covered in C only")
+end
+
 -- 7. Reference electrodes at temperature ----------------------------------------
 for _, row in ipairs(rows("electrodes.csv", 4)) do
   local off25 = phlox.to_she(0, row.electrode)
@@ -227,6 +244,12 @@ end
 check(phlox.to_she(0.1, "SHE", { T_C = 250 }) == 0.1, "SHE is zero at every temperature")
 local hotmap = phlox.map { library = fes, element = "Fe", T_C = 250 }
 check(not pcall(plot.map, hotmap, { reference = "SCE" }), "plot refuses an SCE offset at 250 C")
+export.csv(tmp, { { a = 1 } }, { columns = { "a" } })   -- every note of the run
+f = io.open(tmp, "r")
+local all = f:read("a")
+f:close()
+os.remove(tmp)
+check(all:find("# note: potentials vs saturated calomel", 1, true), "reference electrode use reaches the CSV notes")
 local w = phlox.where { map = phlox.map { library = fes, element = "Fe", T_C = 50 }, pH = 7, E = -0.9, reference = "SCE" }
 check(math.abs(w.E_SHE - phlox.to_she(-0.9, "SCE", { T_C = 50 })) < 1e-12, "where uses the same correction")
 
