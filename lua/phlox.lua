@@ -514,7 +514,10 @@ function phlox.grid_map(opts)
       opts.failed_boundaries and "boundaries next to them drawn on request (failed_boundaries = true)"
       or ("%d boundary points next to them left out (failed_boundaries = true draws them)"):format(dropped)))
   end
-  if opts.ligand == "S" and not (opts.ligand_redox and opts.ligand_redox.S == "sulfate") then
+  -- the grid keeps no ligand species: sulfide takes part unless sulfur
+  -- is pinned to sulfate (the C rule's own description says which)
+  local st = g.ligand_states or ""
+  if opts.ligand == "S" and (st:find("S full redox", 1, true) or st:find("S as sulfide", 1, true)) then
     note_sour(g, { "HS^-" })
   end
   g.conditions = { T_C = T - T0C, P_bar = P, total = opts.total or 1e-6,

@@ -135,6 +135,10 @@ for _, map in ipairs { ms, m, mz } do
 end
 local svg = plot.domains(ms):render("svg")
 check(svg:find("legend: sulfide film", 1, true) and svg:find("sour service", 1, true), "legend entry and caution in the figure")
+local gsour = phlox.grid_map { library = fes, element = "Fe", ligand = "S", n = 11 }
+local gsulf = phlox.grid_map { library = fes, element = "Fe", ligand = "S", n = 11, ligand_redox = { S = "sulfate" } }
+check(has_line(gsour.stamp, "sour service") and not has_line(gsulf.stamp, "sour service"),
+  "rigorous Fe-S map: caution with sulfide, none with sulfur pinned to sulfate")
 local rsour = assert(phlox.speciate { library = fes, totals = { Fe = 1e-5, S = 1e-3 }, pH = 6, E = -0.3 })
 check(has_line(rsour.stamp, "sour service"), "speciation with H2S/HS- carries the caution")
 
