@@ -447,8 +447,7 @@ static int l_grid_map(lua_State *L)
     return 1;
 }
 
-/* core.electrodes() -> { {name, offset, dEdT, T_min, T_max, source,
- * dEdT_source}, ... } (index 1 = SHE; T_max absent when unbounded) */
+/* core.electrodes() -> { {name, offset, dEdT, T_min, T_max, source, dEdT_source}, ... } (index 1 = SHE) */
 static int l_electrodes(lua_State *L)
 {
     lua_newtable(L);

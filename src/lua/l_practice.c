@@ -55,8 +55,7 @@ void px_lua_push_ligand_text(lua_State *L, const px_ligand_states *ls, const int
     }
 }
 
-/* core.domain_of(formula, element) -> "immunity" | "passivation" |
- * "corrosion" | "sulfide film" */
+/* core.domain_of(formula, element) -> domain ("immunity", "passivation", "corrosion" or "sulfide film") */
 static int l_domain_of(lua_State *L)
 {
     px_formula f;

@@ -21,10 +21,10 @@ function phlox_core.database(dielectric) end
 ---@return any # bar (1 bar, or psat above the boiling point)
 function phlox_core.default_pressure(T) end
 
---- (C) phlox_core.domain_of(formula, element) -> "immunity" | "passivation" |
+--- (C) phlox_core.domain_of(formula, element) -> domain ("immunity", "passivation", "corrosion" or "sulfide film")
 ---@param formula string
 ---@param element string
----@return any # "immunity" | "passivation" |
+---@return any # domain ("immunity", "passivation", "corrosion" or "sulfide film")
 function phlox_core.domain_of(formula, element) end
 
 --- (C) phlox_core.electrode_offset(index, T) -> offset (V vs SHE at T) | nil, message
@@ -33,8 +33,8 @@ function phlox_core.domain_of(formula, element) end
 ---@return any # offset (V vs SHE at T) | nil, message
 function phlox_core.electrode_offset(index, T) end
 
---- (C) phlox_core.electrodes() -> { {name, offset, dEdT, T_min, T_max, source,
----@return any # { {name, offset, dEdT, T_min, T_max, source,
+--- (C) phlox_core.electrodes() -> { {name, offset, dEdT, T_min, T_max, source, dEdT_source}, ... } (index 1 = SHE)
+---@return any # { {name, offset, dEdT, T_min, T_max, source, dEdT_source}, ... } (index 1 = SHE)
 function phlox_core.electrodes() end
 
 --- (C) phlox_core.embedded_files() -> sequence of embedded paths, sorted.
