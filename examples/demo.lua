@@ -325,22 +325,15 @@ for _, m in ipairs(maps) do
 end
 
 local conditions = { activity_Cu = CU_ACTIVITY, a_Cl = CL, ionic_strength = 0 }
--- the maps' caveats (estimated temperature functions, by method) travel with the tables
-local map_notes, seen_note = {}, {}
-for _, m in ipairs(maps) do
-  for _, l in ipairs(m.stamp or {}) do
-    if not seen_note[l] then seen_note[l] = true; map_notes[#map_notes + 1] = l end
-  end
-end
 export.csv(path("boundaries.csv"), boundary_rows, {
   columns = { "T_C", "species_a", "species_b", "reaction", "line", "intercept", "slope_V_per_pH",
               "pH_1", "E_1", "pH_2", "E_2" },
-  conditions = conditions, notes = map_notes,
+  conditions = conditions,
 })
 wrote("boundaries.csv")
 export.csv(path("fields.csv"), field_rows, {
   columns = { "T_C", "species", "kind", "domain", "area_pH_V", "share_percent", "quality" },
-  conditions = conditions, notes = map_notes,
+  conditions = conditions,
 })
 wrote("fields.csv")
 export.csv(path("operating-points.csv"), points, {
@@ -377,7 +370,7 @@ export.json(path("study.json"), {
   maps = per_T,
   operating_points = points,
   temperature_estimated = estimated_list,
-}, { conditions = conditions, notes = map_notes })
+}, { conditions = conditions })
 wrote("study.json")
 
 -- 6. Summary ---------------------------------------------------------------------

@@ -21,28 +21,15 @@ local function cell(v, col)
   return s
 end
 
--- opts.notes: caveats that change the result (a list of strings, e.g. a
--- map's or curve's `stamp`: log K held at 25 C, estimated temperature
--- functions with their method); written as "# note:" lines / "notes".
-local function notes_of(opts, where)
-  local n = opts and opts.notes
-  if n == nil then return nil end
-  if type(n) ~= "table" then error(where .. ": opts.notes must be a list of strings", 3) end
-  for i, v in ipairs(n) do
-    if type(v) ~= "string" then error(("%s: opts.notes[%d] must be a string"):format(where, i), 3) end
-  end
-  return n
-end
-
 --- Write rows (a sequence of tables keyed by column name) as CSV.
 -- opts.columns: the column order (required); opts.conditions: stamped;
--- opts.notes: caveat lines (see notes_of).
+-- opts.from: the result(s) the rows come from, whose caveats (stamp lines)
+-- become "# note:" lines (default: every caveat of this run).
 function export.csv(path, rows, opts)
   assert(type(path) == "string", "export.csv: path must be a string")
   assert(type(rows) == "table", "export.csv: rows must be a table")
   local columns = assert(opts and opts.columns, "export.csv: opts.columns is required")
-  local lines = provenance.comment_lines(provenance.stamp(opts.conditions))
-  for _, n in ipairs(notes_of(opts, "export.csv") or {}) do lines[#lines + 1] = "# note: " .. n end
+  local lines = provenance.comment_lines(provenance.stamp(opts.conditions, opts.from))
   lines[#lines + 1] = "# " .. CAUTION
   local head = {}
   for i, c in ipairs(columns) do head[i] = cell(c, c) end
@@ -58,11 +45,11 @@ function export.csv(path, rows, opts)
 end
 
 --- Write a value as JSON: { provenance = ..., caution = ..., data = value }.
+-- opts.conditions and opts.from as export.csv (notes in provenance.notes).
 function export.json(path, value, opts)
   assert(type(path) == "string", "export.json: path must be a string")
   local doc = {
-    provenance = provenance.stamp(opts and opts.conditions),
-    notes = notes_of(opts, "export.json"),
+    provenance = provenance.stamp(opts and opts.conditions, opts and opts.from),
     caution = CAUTION,
     data = value,
   }
