@@ -9,6 +9,7 @@
 #include "core/status.h"
 #include "lua/embedded.h"
 #include <math.h>
+#include <stdio.h>
 #include <stdlib.h>
 #include <string.h>
 
@@ -79,9 +80,12 @@ static int commit(px_db *db, pxd_file *f)
 {
     if (f->opt->user_file) {
         for (size_t i = 0; i < f->n_ex; i++) {
-            px_formula fm;
-            if (px_formula_parse(f->ex[i].raw, &fm) == PX_OK && px_db_find(db, fm.text))
-                px_db_remove(db, fm.text);
+            long k;
+            if (px_db_resolve(db, f->ex[i].raw, &k, NULL, 0) == PX_OK) {
+                char text[PX_NAME_MAX];
+                snprintf(text, sizeof text, "%s", px_db_get(db, (size_t)k)->f.text);
+                px_db_remove(db, text);
+            }
         }
         for (size_t i = 0; i < f->n; i++) {
             if (f->e[i].skip) continue;

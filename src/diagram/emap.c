@@ -221,8 +221,8 @@ static int collect(const ctx *c, px_thermo_ws *ws, const px_db *db, int z, int z
         if (f->state == PX_STATE_E || px_formula_count(f, z) <= 0) continue;
         if (!made_of(f, z, zl)) continue;
         if (other && px_formula_count(f, other) > 0) continue;
-        if (px_formula_listed(o->exclude, o->n_exclude, f->text)) continue;
-        if (!for_ligand && o->n_only > 0 && !px_formula_listed(o->only, o->n_only, f->text)) continue;
+        if (px_db_listed(db, o->exclude, o->n_exclude, (long)i)) continue;
+        if (!for_ligand && o->n_only > 0 && !px_db_listed(db, o->only, o->n_only, (long)i)) continue;
         cand *cd = &v[k];
         cd->db = (long)i;
         cd->sp = sp;
@@ -235,7 +235,7 @@ static int collect(const ctx *c, px_thermo_ws *ws, const px_db *db, int z, int z
         if (f->state == PX_STATE_AQ) {
             double a = for_ligand ? o->ligand_activity : o->activity;
             for (size_t q = 0; q < o->n_act; q++)
-                if (px_formula_listed(&o->act_species[q], 1, f->text)) a = o->act_values[q];
+                if (px_db_listed(db, &o->act_species[q], 1, (long)i)) a = o->act_values[q];
             if (!(a > 0) || !isfinite(a)) {
                 free(v);
                 return px_fail(c->msg, c->msglen, PX_EINVAL, "%s: activity must be positive", f->text);
@@ -384,8 +384,13 @@ int px_emap_build(px_thermo_ws *ws, const px_db *db, const char *element,
     if ((o->xaxis == PX_AXIS_LOGA || o->yaxis == PX_AXIS_LOGA) && !zL)
         return px_fail(msg, msglen, PX_EINVAL, "a log a(L) axis needs a ligand element");
 
+    /* every named species must exist: a misspelt exclude is an error, not a no-op */
+    int st = px_db_check_list(db, "exclude", o->exclude, o->n_exclude, msg, msglen);
+    if (st == PX_OK) st = px_db_check_list(db, "only", o->only, o->n_only, msg, msglen);
+    if (st == PX_OK) st = px_db_check_list(db, "activities", o->act_species, o->n_act, msg, msglen);
+    if (st != PX_OK) return st;
     ctx c = {o, PX_R * o->T, o->T, 0, 0, 0, NULL, NULL, NULL, msg, msglen};
-    int st = basis_species(&c, ws, db);
+    st = basis_species(&c, ws, db);
     if (st != PX_OK) return st;
 
     px_emap *m = calloc(1, sizeof *m);

@@ -375,11 +375,26 @@ static void test_user_override(void **state)
     assert_close(z->dGf, -147060.0, 0, 1e-6); /* replaced by the NBS value */
     assert_non_null(strstr(z->file, "user_override.lua"));
     assert_int_equal(z->line, 6);
-    /* excluding something absent is a warning, not an error */
+    /* excluding something absent is an error with a hint (issue 13: a
+     * misspelt exclude must not pass silently), and the merge adds nothing */
     const char *src = "return { exclude = { 'ZnO(s)' } }";
     px_data_problems_clear(p);
-    assert_int_equal(px_data_merge_user_buffer(db, src, strlen(src), "u2.lua", NULL, p), PX_OK);
-    assert_true(has(p, "u2.lua:1: ZnO(s): warning: exclude: not in the database", NULL));
+    assert_int_equal(px_data_merge_user_buffer(db, src, strlen(src), "u2.lua", NULL, p), PX_EDATA);
+    assert_true(has(p, "u2.lua:1: ZnO(s): exclude: ZnO(s): not in the loaded data", NULL));
+    assert_int_equal(px_db_count(db), 2);
+    /* a solid named without its mineral name resolves to the only solid of
+     * that formula: add ZnO(s,zincite), then exclude "ZnO(s)" */
+    const char *add = "return { species = { { formula = 'ZnO(s,zincite)', model = 'cp', G = -320.479,"
+                      " H = -350.46, S = 43.65, cp = { a = 40.3 }, source = 'test: stdlib Zn.lua values' } } }";
+    px_data_problems_clear(p);
+    st = px_data_merge_user_buffer(db, add, strlen(add), "u3.lua", NULL, p);
+    if (st != PX_OK) dump(p);
+    assert_int_equal(st, PX_OK);
+    assert_int_equal(px_db_count(db), 3);
+    px_data_problems_clear(p);
+    assert_int_equal(px_data_merge_user_buffer(db, src, strlen(src), "u4.lua", NULL, p), PX_OK);
+    assert_null(px_db_find(db, "ZnO(s,zincite)"));
+    assert_int_equal(px_db_count(db), 2);
     px_data_problems_free(p);
     px_db_free(db);
 }
