@@ -211,6 +211,13 @@ static void push_species(lua_State *L, const px_species *sp, long index)
     lua_setfield(L, -2, "estimated");
     setnum(L, "Tmin", sp->Tmin);
     setnum(L, "Tmax", sp->Tmax);
+    /* the source's +- (internal units), only the ones given */
+    lua_createtable(L, 0, 4);
+    setnum(L, "G", sp->unc.G); /* setnum skips NAN */
+    setnum(L, "H", sp->unc.H);
+    setnum(L, "S", sp->unc.S);
+    setnum(L, "logK", sp->unc.logK);
+    lua_setfield(L, -2, "uncertainty");
 }
 
 static const px_species *checkspecies(lua_State *L, ldb *u, int arg, long *index)

@@ -231,6 +231,7 @@ void px_species_init(px_species *sp)
     memset(sp, 0, sizeof *sp);
     sp->dGf = sp->dHf = sp->S = NAN;
     sp->logk.dH = NAN;
+    sp->unc.G = sp->unc.H = sp->unc.S = sp->unc.logK = NAN;
     sp->Tmin = 0;
     sp->Tmax = INFINITY;
 }

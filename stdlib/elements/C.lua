@@ -63,6 +63,7 @@ return {
     {
       formula = "CO2(g)", model = "cp",
       G = -394.373, H = -393.51, S = 213.785,
+      uncertainty = { H = 0.13, S = 0.010 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
       cp = { a = 44.225, b = 8.786e-3, c = -8.619e5 },
       source = CODATA .. "; " .. KELLEY .. " (10.57 + 2.10e-3 T - 2.06e5/T^2 cal)",
       quality = "high",

@@ -157,6 +157,7 @@ return {
     {
       formula = "AgCl(s,chlorargyrite)", model = "cp",
       G = -109.765, H = -127.01, S = 96.25,
+      uncertainty = { H = 0.05, S = 0.20 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
       cp = { a = 50.79 }, V = 25.73,
       source = CODATA .. " (dfH, S; dfG derived dfH - T dfS); Cp 298 constant from " .. NBS,
       quality = "high",
