@@ -70,6 +70,22 @@ end
 -- Ligand files hold the complexes and solids they form with metals, so they
 -- load after the metals (definition-file format, "Where species go").
 local LIGAND_ORDER = { Cl = 1, S = 2, C = 3, N = 4, P = 5, F = 6 }
+-- Polyatomic ligands (docs/element-files.md): a group file
+-- stdlib/elements/<group>.lua, loaded after the element files of its
+-- elements, which a library naming the group loads too.
+local LIGAND_GROUPS = { CN = { "C", "N" } }
+local GROUP_NAMES = {}
+for g in pairs(LIGAND_GROUPS) do GROUP_NAMES[#GROUP_NAMES + 1] = g end
+table.sort(GROUP_NAMES)
+
+-- The element symbols of a ligand ("Cl" -> {"Cl"}, "CN" -> {"C", "N"}).
+local function ligand_elements(ligand)
+  local out = {}
+  if type(ligand) == "string" then
+    for sym in ligand:gmatch("%u%l?") do out[#out + 1] = sym end
+  end
+  return out
+end
 
 local function temperature(opts, where)
   if opts.T and opts.T_C then error(where .. ": give T (K) or T_C (C), not both", 3) end
@@ -97,12 +113,20 @@ function phlox.library(spec)
   if type(spec) == "string" then spec = { spec } end
   assert(type(spec) == "table", "phlox.library: give a list of element symbols")
   local db = core.database(spec.dielectric)
-  local elements = {}
+  local elements, groups, listed = {}, {}, {}
+  local function add_element(sym)
+    if not listed[sym] then listed[sym] = true; elements[#elements + 1] = sym end
+  end
   for i, sym in ipairs(spec) do
-    if type(sym) ~= "string" or not sym:match("^%u%l?$") then
-      error(("phlox.library: entry %d is not an element symbol: %s"):format(i, tostring(sym)), 2)
+    if type(sym) == "string" and LIGAND_GROUPS[sym] then
+      groups[#groups + 1] = sym
+      for _, e in ipairs(LIGAND_GROUPS[sym]) do add_element(e) end
+    elseif type(sym) ~= "string" or not sym:match("^%u%l?$") then
+      error(("phlox.library: entry %d is not an element symbol or a ligand group (%s): %s"):format(
+        i, table.concat(GROUP_NAMES, ", "), tostring(sym)), 2)
+    else
+      add_element(sym)
     end
-    elements[#elements + 1] = sym
   end
   local order = {}
   for _, e in ipairs(elements) do order[#order + 1] = e end
@@ -130,6 +154,7 @@ function phlox.library(spec)
   end
   load("elements/HO.lua", { elements = filter })
   for _, e in ipairs(order) do load("elements/" .. e .. ".lua", { elements = filter }) end
+  for _, g in ipairs(groups) do load("elements/" .. g .. ".lua", { elements = filter }) end
   for _, path in ipairs(spec.user or {}) do
     local f, err = io.open(path, "rb")
     if not f then error("phlox.library: " .. err, 2) end
@@ -255,7 +280,9 @@ function phlox.map(opts)
   if type(opts.element) ~= "string" then error("phlox.map: element (a symbol) expected", 2) end
   local T = temperature(opts, "phlox.map")
   local P = pressure(opts, T, "phlox.map")
-  local held = held_logk(lib, { opts.element, opts.ligand }, T, P, opts, "phlox.map")
+  local held_of = { opts.element }
+  for _, e in ipairs(ligand_elements(opts.ligand)) do held_of[#held_of + 1] = e end
+  local held = held_logk(lib, held_of, T, P, opts, "phlox.map")
   local axes = opts.axes or { "pH", "E" }
   local copt = {
     element = opts.element, T = T, P = P, x = axes[1], y = axes[2],

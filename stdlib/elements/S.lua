@@ -344,5 +344,55 @@ return {
       reaction = "KAl3(SO4)2(OH)6(s,alunite) + 6 H^+ = K^+ + 3 Al^3+ + 2 SO4^2- + 6 H2O(l)", logK = -1.4, dH = -50.25, units = KCAL,
       source = N90, quality = "medium",
     },
+    -- ---------------------------------------------------------------- mercury (issue 13: CODATA, as Hg.lua)
+    {
+      formula = "Hg2SO4(s)", model = "cp",
+      G = -625.780, H = -743.09, S = 200.70,
+      cp = { a = 131.96 },
+      uncertainty = { H = 0.40, S = 0.20 },
+      source = CODATA .. " (+- from the same); Cp at 298.15 K from " .. NBS .. ", held constant",
+      quality = "high",
+      note = "Mercurous sulfate electrode: E0(Hg2SO4 + 2 e- = 2 Hg + SO4^2-) = 0.6127 V with " ..
+             "CODATA SO4^2-, 0.6150 V with the file's SH88 SO4^2-; measured 0.6125 V (recalled).",
+    },
+    {
+      formula = "HgS(s,cinnabar)", model = "cp",
+      G = -50.6, H = -58.2, S = 82.4,
+      cp = { a = 48.41 },
+      source = NBS .. " (Cp at 298.15 K held constant)",
+      quality = "medium",
+      note = "NBS solid with the CODATA Hg^2+ of Hg.lua: NBS dfG(Hg^2+) is 0.27 kJ/mol lower " ..
+             "(0.05 in log K), inside the spread of cinnabar solubility data.",
+    },
+    -- ---------------------------------------------------------------- strontium and barium sulfates (scaling)
+    {
+      formula = "SrSO4(s,celestite)", model = "logk",
+      reaction = "SrSO4(s,celestite) = Sr^2+ + SO4^2-",
+      logK = -6.63,
+      logK_T = { -14805.9622, -2.4660924, 756968.533, 5436.3588, -40553604.0 },
+      T_range = { 273.15, 373.15 },
+      source = "from memory of Reardon and Armstrong 1987 (Geochim. Cosmochim. Acta 51, 63), " ..
+               "analytic log K(T) as adopted by " .. N90,
+      quality = "high",
+      note = "Measured solubility product (the equation gives -6.632 at 25 C); range 0-100 C " ..
+             "taken conservatively.",
+    },
+    {
+      formula = "SrSO4(aq)", model = "logk",
+      reaction = "Sr^2+ + SO4^2- = SrSO4(aq)",
+      logK = 2.29, dH = 2.08, units = KCAL,
+      source = N90, quality = "medium",
+    },
+    {
+      formula = "BaSO4(s,barite)", model = "logk",
+      reaction = "BaSO4(s,barite) = Ba^2+ + SO4^2-",
+      logK = -9.97,
+      logK_T = { 136.035, 0, -7680.41, -48.595 },
+      T_range = { 273.15, 373.15 },
+      source = N90 .. ", analytic log K(T) after Blount 1977 (Am. Mineral. 62, 942)",
+      quality = "high",
+      note = "Gives -9.970 at 25 C; NBS barite with NBS Ba^2+ and SH88 SO4^2- gives -9.97 too. " ..
+             "Range 0-100 C taken conservatively (Blount measured to higher T).",
+    },
   },
 }
