@@ -147,11 +147,14 @@ return {
       source = N90 .. " (ordered dolomite); V " .. RH95, quality = "medium",
       note = "disordered dolomite about -16.54; dolomite does not precipitate at 25 C on human time scales" },
     {
-      formula = "MgCO3(s,magnesite)", model = "cp",
-      G = -1029.48, H = -1113.28, S = 65.09,
-      cp = { a = 82.554, b = 52.463e-3, c = -19.866e5 }, V = 28.018,
-      source = RH95 .. "; " .. HDNB .. " (19.731 + 12.539e-3 T - 4.748e5/T^2 cal)", quality = "medium",
-      note = "NBS 1982 magnesite (-1012.1 kJ/mol) is known to be too positive and is not used; log Ksp with NBS ions -8.21, with CODATA ions -8.10 (literature -8.0 to -8.1)",
+      formula = "MgCO3(s,magnesite)", model = "logk",
+      reaction = "MgCO3(s,magnesite) = Mg^2+ + CO3^2-",
+      logK = -8.029, dH = -6.169, units = KCAL,
+      source = N90, quality = "medium",
+      note = "Issue 13: was Robie and Hemingway 1995 magnesite with the SH88 Mg^2+ (log Ksp -8.32), " ..
+             "which made ordered dolomite metastable against calcite + magnesite above about 70 C; " ..
+             "defined now, like dolomite, by the Nordstrom et al. 1990 constant (dolomite = calcite + " ..
+             "magnesite: log K -0.58 at 25 C, falling with T)",
     },
     { formula = "FeCO3(s,siderite)", model = "logk", reaction = "FeCO3(s,siderite) = Fe^2+ + CO3^2-",
       logK = -10.89, dH = -2.48, units = KCAL, V = 29.378,

@@ -246,18 +246,23 @@ return {
 
     -- ---------------------------------------------------------------- sulfate salts
     {
-      formula = "CaSO4(s,anhydrite)", model = "cp",
-      G = -1321.79, H = -1434.11, S = 106.7,
-      cp = { a = 70.208, b = 98.742e-3 }, V = 45.94,
-      source = NBS .. "; " .. KELLEY .. " (16.78 + 23.6e-3 T cal); V " .. RH95, quality = "high",
+      formula = "CaSO4(s,anhydrite)", model = "logk",
+      reaction = "CaSO4(s,anhydrite) = Ca^2+ + SO4^2-",
+      logK = -4.36, logK_T = { 197.52, 0, -8669.8, -69.835 },
+      T_range = { 273.15, 373.15 },
+      source = N90 .. ", analytic log K(T) of the measured solubility", quality = "high",
+      note = "Issue 13: was NBS 1982 dfG with the SH88 ions (log Ksp -4.31). Defined by the measured " ..
+             "solubility product so that ions and solid cannot come from different tables. " ..
+             "With the gypsum equation below the gypsum-anhydrite transition in water falls at 58 C.",
     },
     {
-      formula = "CaSO4*2H2O(s,gypsum)", model = "cp",
-      G = -1797.28, H = -2022.63, S = 194.1,
-      cp = { a = 91.379, b = 317.98e-3 }, V = 74.69,
+      formula = "CaSO4*2H2O(s,gypsum)", model = "logk",
+      reaction = "CaSO4*2H2O(s,gypsum) = Ca^2+ + SO4^2- + 2 H2O(l)",
+      logK = -4.58, logK_T = { 68.2401, 0, -3221.51, -25.0627 },
       T_range = { 273.15, 373.15 },
-      source = NBS .. "; " .. KELLEY .. " (21.84 + 76.0e-3 T cal, recall medium); V " .. RH95, quality = "high",
-      note = "log Ksp with NBS ions -4.36, with CODATA ions -4.59 (Nordstrom et al. 1990: -4.58); the gap is NBS dfG(Ca^2+)",
+      source = N90 .. ", analytic log K(T) of the measured solubility", quality = "high",
+      note = "Issue 13: was NBS 1982 gypsum with the SH88 ions (log Ksp -4.515, solubility 18 mmol/kg " ..
+             "against 15.1-15.4 measured). The equation gives -4.581 at 25 C.",
     },
     {
       formula = "MgSO4*7H2O(s,epsomite)", model = "cp",

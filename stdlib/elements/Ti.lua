@@ -63,5 +63,14 @@ return {
       source = NBS, quality = "medium",
       note = "alpha TiO, a non-stoichiometric phase in reality. cp is NBS Cp at 298.15 K taken as constant.",
     },
+    { -- issue 13
+      formula = "Ti^2+", model = "logk",
+      reaction = "Ti(s) + 2 H^+ = Ti^2+ + H2(g)",
+      logK = 55.105,
+      source = "derived here from E0(Ti^2+/Ti) = -1.630 V, from memory of the CRC Handbook electrochemical series (P. Vanysek)",
+      quality = "low",
+      note = "Ti^2+ reduces water; it exists only in strongly reducing acid and matters for " ..
+             "the active dissolution of titanium. No dH recalled: held at 25 C.",
+    },
   },
 }

@@ -85,4 +85,34 @@ local r = assert(phlox.speciate { library = ba, totals = { Ba = 1e-3, S = 1e-3 }
 local dissolved = r.elements.Ba.total
 for _, s in ipairs(r.species) do if s.phase == "solid" then dissolved = dissolved - (s.amount or 0) end end
 close(math.log(dissolved, 10), math.log(1.05e-5, 10), 0.05, "barite solubility in water, log mol/kg")
+-- 5. Calcium sulfate and carbonate phase relations (issue 13).
+local cs = phlox.library { "Ca", "Mg", "S", "C" }
+-- gypsum solubility in pure water at 25 C: 15.1-15.4 mmol/kg (from memory of
+-- the gypsum solubility literature, e.g. Marshall and Slusher 1966, J. Phys.
+-- Chem. 70, 4015); B-dot activity coefficients and the CaSO4(aq) pair;
+-- tolerance 4 %: the activity model at I = 0.04 is good to a few per cent
+-- (common practice, no source).  Before issue 13: 18.1 mmol/kg.
+local g = assert(phlox.speciate { library = cs, totals = { Ca = 0.05, S = 0.05 }, pH = 7, activity = "bdot" })
+local sol = 0.05
+for _, sp in ipairs(g.species) do if sp.phase == "solid" then sol = sol - (sp.amount or 0) end end
+close(sol * 1000, 15.25, 0.04 * 15.25, "gypsum solubility at 25 C, mmol/kg")
+-- gypsum -> anhydrite + water in contact with water near 58 C (from memory of
+-- Hardie 1967, Am. Mineral. 52, 171: 58 +- 2 C); tolerance 5 C (the
+-- literature spreads 42-60 C)
+local function dG(T_C)
+  return cs:reaction("CaSO4*2H2O(s,gypsum) = CaSO4(s,anhydrite) + 2 H2O(l)", { T_C = T_C }).logK
+end
+local lo, hi = 30, 90
+for _ = 1, 40 do
+  local mid = 0.5 * (lo + hi)
+  if dG(mid) < 0 then lo = mid else hi = mid end
+end
+close(lo, 58, 5, "gypsum-anhydrite transition in water, C")
+-- ordered dolomite is stable against calcite + magnesite from 25 to 90 C
+-- (from memory of Goldsmith and Heard 1961, J. Geol. 69, 45: dolomite is the
+-- stable phase in the CaCO3-MgCO3 system at low temperature)
+for _, T_C in ipairs { 25, 60, 90 } do
+  local k = cs:reaction("CaMg(CO3)2(s,dolomite) = CaCO3(s,calcite) + MgCO3(s,magnesite)", { T_C = T_C }).logK
+  check(k < 0, ("dolomite stable against calcite + magnesite at %d C (log K %.3f)"):format(T_C, k))
+end
 print("test_library13: all checks passed")
