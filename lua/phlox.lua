@@ -78,6 +78,19 @@ local GROUP_NAMES = {}
 for g in pairs(LIGAND_GROUPS) do GROUP_NAMES[#GROUP_NAMES + 1] = g end
 table.sort(GROUP_NAMES)
 
+--- The ligand groups whose formula appears in a text, in name order:
+-- phlox.groups_in("Au(CN)2^- + e- = Au(s) + 2 CN^-") -> { "CN" }.  A group
+-- name followed by a lower-case letter is another symbol ("CNo" is not CN).
+function phlox.groups_in(text)
+  local out = {}
+  for _, g in ipairs(GROUP_NAMES) do
+    for rest in text:gmatch(g .. "(.?)") do
+      if not rest:match("%l") then out[#out + 1] = g; break end
+    end
+  end
+  return out
+end
+
 -- The element symbols of a ligand ("Cl" -> {"Cl"}, "CN" -> {"C", "N"}).
 local function ligand_elements(ligand)
   local out = {}

@@ -126,6 +126,13 @@ function phlox.fractions(opts) end
 ---@return any
 function phlox.grid_map(opts) end
 
+--- The ligand groups whose formula appears in a text, in name order:
+--- phlox.groups_in("Au(CN)2^- + e- = Au(s) + 2 CN^-") -> { "CN" }.  A group
+--- name followed by a lower-case letter is another symbol ("CNo" is not CN).
+---@param text string
+---@return any
+function phlox.groups_in(text) end
+
 --- A species library: the built-in H/O species plus the element files named.
 ---   phlox.library { "Fe", "Cl", user = { "my/Fe-extra.lua" } }
 --- The user's folders (--path, PHLOX_PATH) override built-in element files;

@@ -28,11 +28,17 @@ local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Therm
 local NBSD = "derived here from dfG and dfH of " .. NBS
 local SM = "from memory of Smith and Martell, Critical Stability Constants (I = 0, 25 C)"
 
-return {
-  element = "C",
-  title = "Cyanide (C-N group ligand)",
-  units = { energy = "kJ", entropy = "J" },
-  species = {
+-- A cyano complex of a monovalent ion with a Smith and Martell cumulative
+-- constant and no recalled enthalpy (held at 25 C).
+local function cyano(ion, n, charge, logbeta, note)
+  local metal = ion:sub(1, -3)
+  local f = metal .. "(CN)" .. n .. "^" .. charge
+  return { formula = f, model = "logk", reaction = ion .. " + " .. n .. " CN^- = " .. f,
+           logK = logbeta, source = SM, quality = "medium",
+           note = "No dH recalled: held at 25 C." .. (note and (" " .. note) or "") }
+end
+
+local species = {
     -- ---------------------------------------------------------------- the ligand
     {
       formula = "CN^-", model = "logk",
@@ -70,37 +76,8 @@ return {
       note = "E0(Au(CN)2^-/Au) = -0.611 V (CRC -0.60).  With Au^+ of Au.lua (1.692 V) log " ..
              "beta2 = 38.94; Smith and Martell give 38.3 (recalled), the literature 36.6-39.3.",
     },
-    -- ---------------------------------------------------------------- silver
-    {
-      formula = "Ag(CN)2^-", model = "logk",
-      reaction = "Ag^+ + 2 CN^- = Ag(CN)2^-",
-      logK = 20.48,
-      source = SM,
-      quality = "medium",
-      note = "No dH recalled: held at 25 C.  Lange's Handbook lists 21.1 (recalled).",
-    },
-    -- ---------------------------------------------------------------- copper(I)
-    {
-      formula = "Cu(CN)2^-", model = "logk",
-      reaction = "Cu^+ + 2 CN^- = Cu(CN)2^-",
-      logK = 24.0,
-      source = SM, quality = "medium",
-      note = "No dH recalled: held at 25 C.",
-    },
-    {
-      formula = "Cu(CN)3^2-", model = "logk",
-      reaction = "Cu^+ + 3 CN^- = Cu(CN)3^2-",
-      logK = 28.59,
-      source = SM, quality = "medium",
-      note = "No dH recalled: held at 25 C.",
-    },
-    {
-      formula = "Cu(CN)4^3-", model = "logk",
-      reaction = "Cu^+ + 4 CN^- = Cu(CN)4^3-",
-      logK = 30.30,
-      source = SM, quality = "medium",
-      note = "No dH recalled: held at 25 C.",
-    },
+    -- ---------------------------------------------------------------- silver, copper(I)
+    -- Smith and Martell cumulative constants; see cyano() below
     -- ---------------------------------------------------------------- zinc, nickel
     {
       formula = "Zn(CN)4^2-", model = "logk",
@@ -139,5 +116,15 @@ return {
       quality = "high",
       note = "Ferricyanide, defined on ferrocyanide: E0 = 0.358 V, the CRC value.",
     },
-  },
+}
+table.insert(species, cyano("Ag^+", 2, "-", 20.48, "Lange's Handbook lists 21.1 (recalled)."))
+table.insert(species, cyano("Cu^+", 2, "-", 24.0))
+table.insert(species, cyano("Cu^+", 3, "2-", 28.59))
+table.insert(species, cyano("Cu^+", 4, "3-", 30.30))
+
+return {
+  element = "C",
+  title = "Cyanide (C-N group ligand)",
+  units = { energy = "kJ", entropy = "J" },
+  species = species,
 }

@@ -116,3 +116,12 @@ for _, T_C in ipairs { 25, 60, 90 } do
   check(k < 0, ("dolomite stable against calcite + magnesite at %d C (log K %.3f)"):format(T_C, k))
 end
 print("test_library13: all checks passed")
+
+-- 6. the command line loads the cyanide group for an equation that names it
+--    (E0 -0.60 V, from memory of the CRC electrochemical series; 0.02 V)
+local bin = assert(os.getenv("PHLOX_BIN"), "PHLOX_BIN not set")
+local h = assert(io.popen(('%q reaction "Au(CN)2^- + e- = Au(s) + 2 CN^-" --json 2>&1'):format(bin)))
+local out = h:read("a")
+h:close()
+close(tonumber(out:match('"E0_V":([%-%d%.eE]+)')), -0.60, 0.02, "phlox reaction with cyanide: " .. out)
+print("test_library13: command line checks passed")
