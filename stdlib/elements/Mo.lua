@@ -3,7 +3,8 @@
 -- for the metal, MoO2, MoO3 and MoO4^2-. No HKF set is recalled for MoO4^2-, so it is
 -- defined by its conventional formation reaction (log K = -dfG/(RT ln 10), dH = dfH).
 -- Left out: H2MoO4(aq) (second protonation constant not recalled with confidence),
--- polymolybdates (Mo7O24^6-, Mo8O26^4-), Mo(III) and Mo(V) species.
+-- polymolybdates (Mo7O24^6-, Mo8O26^4-), Mo(V) species and Mo(III) hydrolysis; Mo^3+
+-- itself is defined from the CRC standard potential (issue 13).
 local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
 
 return {

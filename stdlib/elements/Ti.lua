@@ -1,9 +1,10 @@
 -- stdlib/elements/Ti.lua: titanium and its oxides.
 -- Data set choice (see docs/data/other-metals.md): the NBS tables (Wagman et al. 1982);
--- rutile is also a CODATA key value with the same numbers. No aqueous titanium species
--- is included: Ti3+, TiO^2+ and Ti(OH)4(aq) values were not recalled with confidence,
--- so a diagram from this file shows only the metal and its oxides (titanium's passivity
--- in water is a property of the TiO2 film; the dissolved fields are missing).
+-- rutile is also a CODATA key value with the same numbers. The only aqueous titanium
+-- species is Ti^2+ (issue 13, from the CRC standard potential): Ti3+, TiO^2+ and
+-- Ti(OH)4(aq) values were not recalled with confidence, so a diagram from this file
+-- shows the metal, its oxides and Ti^2+ only (titanium's passivity in water is a
+-- property of the TiO2 film; the other dissolved fields are missing).
 local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
 local CODATA = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values for Thermodynamics"
 local RH95 = "from memory of Robie and Hemingway 1995 (USGS Bulletin 2131)"
