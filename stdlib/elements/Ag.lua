@@ -15,6 +15,7 @@ return {
     {
       formula = "Ag(s)", model = "cp",
       G = 0, H = 0, S = 42.55,
+      uncertainty = { S = 0.20 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
       cp = { a = 25.35, b = 0, c = 0 },
       V = 10.27,
       source = "S: from memory of " .. CODATA .. " (NBS 42.55); Cp: " .. NBS,

@@ -72,6 +72,7 @@ return {
     {
       formula = "CO(g)", model = "cp",
       G = -137.168, H = -110.53, S = 197.660,
+      uncertainty = { H = 0.17, S = 0.004 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
       cp = { a = 28.409, b = 4.100e-3, c = -0.460e5 },
       source = CODATA .. "; " .. KELLEY .. " (6.79 + 0.98e-3 T - 0.11e5/T^2 cal)",
       quality = "high",
@@ -94,6 +95,7 @@ return {
     {
       formula = "C(s,graphite)", model = "cp",
       G = 0, H = 0, S = 5.74,
+      uncertainty = { S = 0.10 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
       cp = { a = 16.862, b = 4.770e-3, c = -8.535e5 },
       source = "S from memory of Cox, Wagman and Medvedev 1989 (CODATA); " .. KELLEY .. " (4.03 + 1.14e-3 T - 2.04e5/T^2 cal)",
       quality = "high",

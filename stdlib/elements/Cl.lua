@@ -37,6 +37,7 @@ return {
     {
       formula = "Cl2(g)", model = "cp",
       G = 0, H = 0, S = 223.081,
+      uncertainty = { S = 0.010 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
       cp = { a = 37.028, b = 0.669e-3, c = -2.845e5 },
       T_range = { 273.15, 1500 },
       source = CODATA .. " (S); " .. KELLEY .. " (8.85 + 0.16e-3 T - 0.68e5/T^2 cal)",

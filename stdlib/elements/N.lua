@@ -52,6 +52,7 @@ local species = {
   {
     formula = "NH3(g)", model = "cp",
     G = -16.407, H = -45.94, S = 192.77,
+    uncertainty = { H = 0.35, S = 0.05 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
     cp = { a = 29.748, b = 25.104e-3, c = -1.548e5 },
     source = CODATA .. "; " .. KELLEY .. " (7.11 + 6.00e-3 T - 0.37e5/T^2 cal)",
     quality = "high",

@@ -54,6 +54,7 @@ return {
     {
       formula = "S(s,rhombic)", model = "cp",
       G = 0, H = 0, S = 32.054,
+      uncertainty = { S = 0.050 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
       cp = { a = 14.979, b = 26.108e-3 },
       T_range = { 273.15, 368.3 },
       source = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values (S); " .. KELLEY .. " (3.58 + 6.24e-3 T cal)",
@@ -63,6 +64,7 @@ return {
     {
       formula = "H2S(g)", model = "cp",
       G = -33.443, H = -20.6, S = 205.81,
+      uncertainty = { H = 0.5, S = 0.05 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
       cp = { a = 32.677, b = 12.385e-3, c = -1.925e5 },
       source = CODATA .. "; " .. KELLEY .. " (7.81 + 2.96e-3 T - 0.46e5/T^2 cal)",
       quality = "high",
@@ -73,6 +75,7 @@ return {
     {
       formula = "SO2(g)", model = "cp",
       G = -300.095, H = -296.81, S = 248.223,
+      uncertainty = { H = 0.20, S = 0.050 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
       cp = { a = 46.191, b = 7.866e-3, c = -7.699e5 },
       source = CODATA .. "; " .. KELLEY .. " (11.04 + 1.88e-3 T - 1.84e5/T^2 cal)",
       quality = "high",

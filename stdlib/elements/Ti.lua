@@ -18,6 +18,7 @@ return {
     {
       formula = "Ti(s)", model = "cp",
       G = 0, H = 0, S = 30.72,
+      uncertainty = { S = 0.10 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
       cp = { a = 25.02, b = 0, c = 0 },
       V = 10.63,
       source = "S: " .. CODATA .. " (NBS 30.63); Cp: " .. NBS,
