@@ -361,6 +361,9 @@ function phlox.grid_map(opts)
   assert(type(opts) == "table", "phlox.grid_map: options table expected")
   local lib = opts.library
   if getmetatable(lib) ~= phlox.Library then error("phlox.grid_map: library = phlox.library{...} expected", 2) end
+  if LIGAND_GROUPS[opts.ligand] then
+    error(("phlox.grid_map: ligand = %q is a ligand group: the rigorous solver balances elements, not groups; draw it with phlox.map"):format(opts.ligand), 2)
+  end
   local T = temperature(opts, "phlox.grid_map")
   local P = pressure(opts, T, "phlox.grid_map")
   local held = held_logk(lib, { opts.element, opts.ligand }, T, P, opts, "phlox.grid_map")

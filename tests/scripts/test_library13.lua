@@ -125,3 +125,7 @@ local out = h:read("a")
 h:close()
 close(tonumber(out:match('"E0_V":([%-%d%.eE]+)')), -0.60, 0.02, "phlox reaction with cyanide: " .. out)
 print("test_library13: command line checks passed")
+
+-- 7. rigorous maps balance elements, not groups: a clear refusal
+local okg, errg = pcall(phlox.grid_map, { library = lib, element = "Au", ligand = "CN", n = 5 })
+check(not okg and tostring(errg):find("ligand group", 1, true), "grid_map with a group: " .. tostring(errg))
