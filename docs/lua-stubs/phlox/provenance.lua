@@ -11,15 +11,29 @@ local phlox_provenance = {}
 ---@return any
 function phlox_provenance.comment_lines(stamp, prefix) end
 
+--- The caveats of `from` (a result or a list of results with `stamp`
+--- lines), or every caveat recorded in this run.
+---@param from? any
+---@return any
+function phlox_provenance.notes(from) end
+
 --- Record a definition file (or any input) that a result depends on.
 ---@param path string
 ---@param text string
 ---@return any
 function phlox_provenance.record_file(path, text) end
 
+--- Record a caveat that changes a result (stamp line of a map, a grid map
+--- or a speciation): exported files of the run carry it unless they name
+--- the results they come from.
+---@param text string
+---@return any
+function phlox_provenance.record_note(text) end
+
 --- The current stamp: a plain table (stable key order when JSON-encoded).
 ---@param conditions any
+---@param from any
 ---@return any
-function phlox_provenance.stamp(conditions) end
+function phlox_provenance.stamp(conditions, from) end
 
 return phlox_provenance
