@@ -126,6 +126,7 @@ typedef struct ctx {
     double G_h2o, G_h, G_e;
     const px_species *h2o, *hplus, *elec;
     ligand_group lig;
+    px_ligand_states ls; /* o->ligands, less the rules of a ligand group's elements */
     char *msg;
     size_t msglen;
 } ctx;
@@ -291,7 +292,7 @@ static int collect(const ctx *c, px_thermo_ws *ws, const px_db *db, int z, int z
         if (!made_of(f, z, zl, &c->lig)) continue;
         if (other && px_formula_count(f, other) > 0) continue;
         if (px_db_listed(db, o->exclude, o->n_exclude, (long)i)) continue;
-        if (!px_ligand_allows(&o->ligands, db, f, for_ligand ? other : z)) continue;
+        if (!px_ligand_allows(&c->ls, db, f, for_ligand ? other : z)) continue;
         if (!for_ligand && o->n_only > 0 && !px_db_listed(db, o->only, o->n_only, (long)i)) continue;
         cand *cd = &v[k];
         cd->db = (long)i;
@@ -471,7 +472,20 @@ int px_emap_build(px_thermo_ws *ws, const px_db *db, const char *element,
     if (st == PX_OK) st = px_db_check_list(db, "only", o->only, o->n_only, msg, msglen);
     if (st == PX_OK) st = px_db_check_list(db, "activities", o->act_species, o->n_act, msg, msglen);
     if (st != PX_OK) return st;
-    ctx c = {o, PX_R * o->T, o->T, 0, 0, 0, NULL, NULL, NULL, lg, msg, msglen};
+    /* a ligand group keeps its own form (cyanide stays cyanide): it replaces
+     * the oxidation-state rules of its elements (C as carbonate, N as
+     * ammonia), which would otherwise exclude every species of the group */
+    px_ligand_states ls = o->ligands;
+    if (lg.n_extra > 0) {
+        size_t kept = 0;
+        for (size_t i = 0; i < ls.n; i++) {
+            int in_group = ls.rule[i].z == lg.z;
+            for (int k = 0; k < lg.n_extra; k++) in_group |= ls.rule[i].z == lg.extra[k];
+            if (!in_group) ls.rule[kept++] = ls.rule[i];
+        }
+        ls.n = kept;
+    }
+    ctx c = {o, PX_R * o->T, o->T, 0, 0, 0, NULL, NULL, NULL, lg, ls, msg, msglen};
     st = basis_species(&c, ws, db);
     if (st != PX_OK) return st;
 
