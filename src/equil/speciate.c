@@ -240,6 +240,17 @@ int px_spec_build(px_thermo_ws *ws, const px_db *db, const px_spec_options *o, p
                 st = px_fail(msg, msglen, PX_ENOTFOUND, "basis of %s: %s", o->element[k], why);
                 goto fail;
             }
+            /* each element's total is carried by its basis species alone: one
+             * that holds another element (CN^- for C) would hide that
+             * element's atoms from its own balance */
+            const px_formula *bfk = &px_db_get(db, (size_t)bidx[k + 3])->f;
+            for (int e = 0; e < bfk->n_elem; e++)
+                if (bfk->elem[e].z != z && bfk->elem[e].z != Z_H && bfk->elem[e].z != Z_O) {
+                    st = px_fail(msg, msglen, PX_EINVAL,
+                                 "basis of %s: %s holds %s too; a basis species may hold one element besides "
+                                 "H and O", o->element[k], bfk->text, px_element_symbol(bfk->elem[e].z));
+                    goto fail;
+                }
         } else {
             bidx[k + 3] = choose_basis(db, z, &o->ligands);
         }

@@ -129,3 +129,9 @@ print("test_library13: command line checks passed")
 -- 7. rigorous maps balance elements, not groups: a clear refusal
 local okg, errg = pcall(phlox.grid_map, { library = lib, element = "Au", ligand = "CN", n = 5 })
 check(not okg and tostring(errg):find("ligand group", 1, true), "grid_map with a group: " .. tostring(errg))
+
+-- 8. speciation balances elements: a basis species holding a second element
+--    (CN^- for C) would hide that element's atoms from its balance
+local okb, errb = pcall(phlox.speciate, { library = lib, totals = { Au = 1e-5, C = 1e-3, N = 1e-3 }, pH = 10.5,
+                                           basis = { C = "CN^-" } })
+check(not okb and tostring(errb):find("holds N too", 1, true), "basis CN^- refused: " .. tostring(errb))
