@@ -228,11 +228,21 @@ local function held_logk(lib, elements, T, P, opts, where)
   return held
 end
 
+--- The stamp line naming species whose log K is held at 25 C: full (each
+-- formula typeset) and short forms (see phlox.plot, extra stamp lines).
+function phlox.held_stamp_line(held)
+  local f = {}
+  for i, s in ipairs(held) do f[i] = "{" .. s .. "}" end
+  return { full = "log K held at 25 °C (no temperature data): " .. table.concat(f, ", "),
+           short = ("log K of %d species held at 25 °C (no temperature data)"):format(#held),
+           held = held }
+end
+
 local function stamp_held(m, held)
   if #held == 0 then return end
   m.constant_logk = held
   m.stamp = m.stamp or {}
-  m.stamp[#m.stamp + 1] = "log K held at 25 °C (no temperature data): " .. table.concat(held, ", ")
+  m.stamp[#m.stamp + 1] = phlox.held_stamp_line(held)
 end
 
 local function window_of(opts, xname, yname)
@@ -315,8 +325,10 @@ end
 --                    pH_range = {0, 14}, E_range = {-2, 2},
 --                    activity = "davies", threads = 2 }
 -- Returns a map table with `boundaries` (polylines between named species),
--- `fields` = {} (no polygons: draw it with phlox.plot.overlay next to an
--- exact map), `labels` (node labels), `species` and solver statistics.
+-- `fields` (the nodes' cells joined per species: outlines on the grid's
+-- cell edges, so phlox.plot.map fills them like an exact map; the
+-- boundaries refined between nodes are drawn over them), `labels` (node
+-- labels), `species` and solver statistics.
 function phlox.grid_map(opts)
   assert(type(opts) == "table", "phlox.grid_map: options table expected")
   local lib = opts.library
@@ -332,12 +344,98 @@ function phlox.grid_map(opts)
     activity = opts.activity, background_nacl = opts.background_nacl,
     exclude = opts.exclude, threads = opts.threads })
   if not g then error(err, 2) end
-  g.fields = {}
+  g.fields = phlox.grid_fields(g)
+  for _, f in ipairs(g.fields) do   -- the kind, as exact maps name it
+    local rec = lib:species(f.species)
+    local st, only = rec and rec.state, true
+    for e in pairs(rec and rec.elements or {}) do only = only and e == opts.element end
+    f.kind = st == "s" and (only and "metal" or "solid") or st == "g" and "gas" or st == "l" and "liquid" or "aqueous"
+  end
   g.conditions = { T_C = T - T0C, P_bar = P, total = opts.total or 1e-6,
                    ligand = opts.ligand, ligand_total = opts.ligand and (opts.ligand_total or 1e-3) or nil }
   g.label = "rigorous"
   stamp_held(g, held)
   return g
+end
+
+--- Field polygons of a rigorous map: each node stands for the cell of the
+-- grid around it (half a step each way, clipped to the window); cells with
+-- one label are joined and their outline traced counter-clockwise.  A
+-- species in several separate pieces gives several fields; an enclosed
+-- hole is left to the field drawn inside it.  Nodes where the solver
+-- failed (label 0) belong to no field.
+function phlox.grid_fields(g)
+  local nx, ny, lab = g.nx, g.ny, g.labels
+  local x0, x1, y0, y1 = g.x.min, g.x.max, g.y.min, g.y.max
+  local function X(i) return math.min(math.max(x0 + (i - 0.5) * (x1 - x0) / (nx - 1), x0), x1) end
+  local function Y(j) return math.min(math.max(y0 + (j - 0.5) * (y1 - y0) / (ny - 1), y0), y1) end
+  local function L(i, j)   -- node label, 0-based indices; -1 outside
+    if i < 0 or j < 0 or i >= nx or j >= ny then return -1 end
+    return lab[j * nx + i + 1]
+  end
+  -- directed cell edges with the species on their left, keyed by start vertex
+  -- (vertex (i, j) is the corner below and left of node (i, j))
+  local fields = {}
+  for sp = 1, #g.species do
+    local out, count = {}, 0
+    local function add(a, b, c, d)
+      local k = a * (ny + 1) + b
+      out[k] = out[k] or {}
+      out[k][#out[k] + 1] = { c, d }
+      count = count + 1
+    end
+    for j = 0, ny - 1 do
+      for i = 0, nx - 1 do
+        if L(i, j) == sp then
+          if L(i, j - 1) ~= sp then add(i, j, i + 1, j) end          -- bottom, left to right
+          if L(i + 1, j) ~= sp then add(i + 1, j, i + 1, j + 1) end  -- right, upwards
+          if L(i, j + 1) ~= sp then add(i + 1, j + 1, i, j + 1) end  -- top, right to left
+          if L(i - 1, j) ~= sp then add(i, j + 1, i, j) end          -- left, downwards
+        end
+      end
+    end
+    while count > 0 do
+      local start
+      for j = 0, ny do
+        for i = 0, nx do
+          local e = out[i * (ny + 1) + j]
+          if e and #e > 0 then start = { i, j }; break end
+        end
+        if start then break end
+      end
+      local xs, ys = {}, {}
+      local ci, cj, pdx, pdy = start[1], start[2], nil, nil
+      repeat
+        local e = out[ci * (ny + 1) + cj]
+        local pick = 1
+        if #e > 1 and pdx then   -- a corner shared diagonally: turn left first
+          for q, t in ipairs(e) do
+            local dx, dy = t[1] - ci, t[2] - cj
+            if pdx * dy - pdy * dx > 0 then pick = q end
+          end
+        end
+        local t = table.remove(e, pick)
+        count = count - 1
+        local dx, dy = t[1] - ci, t[2] - cj
+        if not (pdx == dx and pdy == dy) then xs[#xs + 1], ys[#ys + 1] = X(ci), Y(cj) end
+        ci, cj, pdx, pdy = t[1], t[2], dx, dy
+      until ci == start[1] and cj == start[2]
+      local a = 0
+      for k = 1, #xs do
+        local k2 = k % #xs + 1
+        a = a + xs[k] * ys[k2] - xs[k2] * ys[k]
+      end
+      if a > 0 and #xs >= 3 then   -- outer outlines run counter-clockwise
+        fields[#fields + 1] = { species = g.species[sp], kind = "aqueous", x = xs, y = ys, area = a / 2 }
+      end
+    end
+  end
+  table.sort(fields, function(p, q) return p.area > q.area end)
+  local labelled = {}   -- one label per species, on its largest piece
+  for _, f in ipairs(fields) do
+    if labelled[f.species] then f.label = false else labelled[f.species] = true end
+  end
+  return fields
 end
 
 --- The species of the map at a point, e.g. phlox.locate(map, 7.0, -0.4).

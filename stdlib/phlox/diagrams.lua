@@ -90,7 +90,7 @@ local function held_stamp(lib, elements, temps, opts, where)
   if opts and opts.require_temperature_data then
     fail(where, "require_temperature_data: no temperature data (log K held at 25 °C) for " .. table.concat(list, ", "))
   end
-  return { "log K held at 25 °C (no temperature data): " .. table.concat(list, ", ") }
+  return { phlox.held_stamp_line(list) }
 end
 
 --- Fraction (distribution) curves: the share of `element` among its
@@ -193,12 +193,16 @@ function diagrams.fractions(opts)
   end
 
   local xname = xkind == "pH" and "pH"
-    or xkind == "log_total" and ("log total " .. opts.ligand .. " / (mol/kg)")
-    or ("log a(" .. opts.ligand_species .. ")")
+    or xkind == "log_total" and ("log total {" .. opts.ligand .. "} / (mol/kg)")
+    or ("log a({" .. opts.ligand_species .. "})")
+  local ligand_text
+  if opts.ligand and xkind ~= "log_total" and opts.totals and type(opts.totals[opts.ligand]) == "number" then
+    ligand_text = ("{%s} %s mol/kg"):format(opts.ligand, require("phlox.plot").number(opts.totals[opts.ligand]))
+  end
   return {
-    element = el, x = xs, series = series, omitted = omitted, failures = failures,
+    element = el, x = xs, series = series, omitted = omitted, failures = failures, ligand_text = ligand_text,
     axes = { x = { name = xname, min = xs[1], max = xs[#xs] },
-             y = { name = "fraction of " .. el, min = 0, max = 1 } },
+             y = { name = "fraction of {" .. el .. "}", min = 0, max = 1 } },
     conditions = { T_C = T_C_of(opts), [el .. " total (mol/kg)"] = total, pH = xkind ~= "pH" and opts.pH or nil,
                    activity_model = base.activity },
     stamp = held,
@@ -285,7 +289,7 @@ function diagrams.solubility(opts)
   return {
     element = el, x = xs, series = series, failures = failures,
     axes = { x = { name = "pH", min = xs[1], max = xs[#xs] },
-             y = { name = "dissolved " .. el, unit = "mol/kg", log = true } },
+             y = { name = "dissolved {" .. el .. "}", unit = "mol/kg", log = true } },
     conditions = { [el .. " put in (mol/kg)"] = total, activity_model = base.activity },
     stamp = held,
     stats = { points = #xs * #temps, retries = retried, seconds = os.clock() - t0 },
@@ -308,8 +312,22 @@ function diagrams.plot(result, opts)
   end
   local title = opts.title
   if not title and result.element then
-    title = (#result.series > 0 and result.series[1].solids) and ("{%s} solubility"):format(result.element)
-      or ("{%s} species fractions"):format(result.element)
+    local temps, seen = {}, {}
+    for _, s in ipairs(result.series) do
+      if s.T_C and not seen[s.T_C] then seen[s.T_C] = true; temps[#temps + 1] = ("%g"):format(s.T_C) end
+    end
+    if #temps == 0 and result.conditions and result.conditions.T_C then
+      temps[1] = ("%g"):format(result.conditions.T_C)
+    end
+    local at = #temps == 0 and "" or #temps == 1 and (" at " .. temps[1] .. " °C")
+      or (" at " .. table.concat(temps, ", ", 1, #temps - 1) .. " and " .. temps[#temps] .. " °C")
+    local c = result.conditions or {}
+    local fixed = {}
+    if c.pH then fixed[#fixed + 1] = ("pH %g"):format(c.pH) end
+    if result.ligand_text then fixed[#fixed + 1] = result.ligand_text end
+    title = ((#result.series > 0 and result.series[1].solids) and ("{%s} solubility"):format(result.element)
+      or ("{%s} species fractions"):format(result.element)) .. at
+      .. (#fixed > 0 and (", " .. table.concat(fixed, ", ")) or "")
   end
   opts.title = title
   if not opts.stamp and result.stamp and #result.stamp > 0 then opts.stamp = result.stamp end
@@ -347,7 +365,7 @@ function diagrams.series(opts)
     for _, m in ipairs(maps) do
       m.stamp = m.stamp or {}
       for k = #m.stamp, 1, -1 do -- the single-map note is replaced by the series one
-        if m.stamp[k]:find("^log K held at 25") then table.remove(m.stamp, k) end
+        if type(m.stamp[k]) == "table" and m.stamp[k].held then table.remove(m.stamp, k) end
       end
       m.stamp[#m.stamp + 1] = stamp[1]
     end

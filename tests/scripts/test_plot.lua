@@ -151,7 +151,7 @@ check(plot.map(map):render("pdf") == plot.map(map):render("pdf"), "PDF bytes dif
 local ref = { name = "SCE", offset = 0.241 }   -- offset given by the user; any number works here
 local s2 = plot.map(map, { reference = ref }):render("svg")
 check(s2:find("y axis: E / V vs SCE", 1, true), "axis names the reference electrode")
-check(s2:find("potential vs SCE = E(SHE) - 0.241 V", 1, true), "stamp states the shift")
+check(s2:find("potential vs SCE = E(SHE) − 0.241 V", 1, true), "stamp states the shift")
 check(not pcall(plot.map, map, { reference = { name = "SCE" } }), "reference without offset")
 
 -- domains: own figure and overlays
