@@ -212,6 +212,20 @@ bad = test_map(); bad.y.max = bad.y.min
 ok, err = pcall(plot.map, bad)
 check(not ok and err:find("map.y", 1, true), "empty y range: " .. tostring(err))
 check(not pcall(plot.curves, {}), "no series")
+ok, err = pcall(plot.map, map, { stamp = "tiny" })
+check(not ok and err:find("opts.stamp must be", 1, true), "bad stamp mode: " .. tostring(err))
+ok, err = pcall(plot.map, map, { preset = "poster" })
+check(not ok and err:find("column, double, page, slide", 1, true), "unknown preset names the presets: " .. tostring(err))
+-- presets: size and scaled text (the stamp's first line at the preset's size)
+for name, p in pairs(plot.presets) do
+  local f = plot.map(map, { preset = name })
+  local W, H = f:render("svg"):match('width="([%d.]+)p?t?" height="([%d.]+)p?t?"')
+  check(tonumber(W) == p.width and tonumber(H) == p.height, name .. " preset size " .. tostring(W) .. " x " .. tostring(H))
+  for _, b in ipairs(f:layout()) do
+    if b.kind == "title" then check(math.abs(b.size - 10 * p.text) < 1e-9 or b.size < 10 * p.text, name .. " title size") end
+    if b.kind == "tick" then check(math.abs(b.size - 8.5 * p.text) < 1e-9, name .. " tick label size " .. b.size) end
+  end
+end
 check(not pcall(plot.map, map, { file = dir .. "/m.jpg" }), "unknown extension")
 
 os.execute("rm -rf " .. dir)
