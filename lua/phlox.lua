@@ -476,4 +476,12 @@ function phlox.fractions(opts) return require("phlox.diagrams").fractions(opts) 
 function phlox.solubility(opts) return require("phlox.diagrams").solubility(opts) end
 function phlox.series(opts) return require("phlox.diagrams").series(opts) end
 
+--- A study report: one self-contained HTML page (figures as inline SVG,
+-- tables, data notes, provenance, the caution) and optionally a PDF of the
+-- same.  Options (see stdlib/phlox/report.lua and docs/figures.md): file
+-- (".html"), pdf (".pdf"), title, summary, sections = { { heading, text,
+-- figures = { { figure, caption } }, tables = { { caption, columns, rows } } } },
+-- notes, conditions.
+function phlox.report(opts) return require("phlox.report").write(opts) end
+
 return phlox

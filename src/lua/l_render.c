@@ -342,6 +342,63 @@ static int f_layout(lua_State *L)
     return 1;
 }
 
+/* fig:bare(panel [, on]): no frame, ticks or titles */
+static int f_bare(lua_State *L)
+{
+    px_figure *f = checkfig(L);
+    status_error(L, px_figure_bare(f, checkpanel(L, 2), lua_isnone(L, 3) || lua_toboolean(L, 3)),
+                 "figure:bare");
+    return 0;
+}
+
+/* core.pdf_pages(path, {fig, ...}) -> true | nil, message: one PDF, a page per figure */
+static int l_pdf_pages(lua_State *L)
+{
+    const char *path = luaL_checkstring(L, 1);
+    luaL_checktype(L, 2, LUA_TTABLE);
+    lua_Integer n = luaL_len(L, 2);
+    luaL_argcheck(L, n >= 1 && n <= 10000, 2, "one figure at least");
+    const px_figure **figs = lua_newuserdatauv(L, (size_t)n * sizeof *figs, 0);
+    for (lua_Integer i = 1; i <= n; i++) {
+        lua_rawgeti(L, 2, i);
+        lfigure *u = luaL_testudata(L, -1, FIGURE_MT);
+        if (!u || !u->fig) luaL_argerror(L, 2, "a list of open figures expected");
+        figs[i - 1] = u->fig;
+        lua_pop(L, 1);
+    }
+    int st = px_figures_save_pdf(figs, (size_t)n, path);
+    if (st != PX_OK) {
+        luaL_pushfail(L);
+        lua_pushfstring(L, "%s: %s", path, px_strerror(st));
+        return 2;
+    }
+    lua_pushboolean(L, 1);
+    return 1;
+}
+
+static void emit_run(void *user, int kind, const char *s)
+{
+    static const char *const kinds[] = {"normal", "sub", "sup"};
+    lua_State *L = user;
+    lua_createtable(L, 0, 2);
+    lua_pushstring(L, kinds[kind]);
+    lua_setfield(L, -2, "kind");
+    lua_pushstring(L, s);
+    lua_setfield(L, -2, "text");
+    lua_rawseti(L, -2, (lua_Integer)luaL_len(L, -2) + 1);
+}
+
+/* core.text_runs(text [, chem]) -> { {kind = "normal"|"sub"|"sup", text}, ... }
+ * as figures typeset it (formulas in braces, or all of it when chem) */
+static int l_text_runs(lua_State *L)
+{
+    const char *text = luaL_checkstring(L, 1);
+    int chem = lua_toboolean(L, 2);
+    lua_newtable(L);
+    px_text_runs(text, chem, emit_run, L);
+    return 1;
+}
+
 static int f_close(lua_State *L)
 {
     lfigure *u = luaL_checkudata(L, 1, FIGURE_MT);
@@ -399,10 +456,11 @@ void px_lua_open_render(lua_State *L)
         {"plot_rect", f_plot_rect}, {"close", f_close}, {"hatch", f_hatch},
         {"legend_patch", f_legend_patch}, {"legend", f_legend}, {"scale", f_scale},
         {"used", f_used}, {"line_label", f_line_label}, {"meta", f_meta},
-        {"layout", f_layout}, {NULL, NULL}};
+        {"layout", f_layout}, {"bare", f_bare}, {NULL, NULL}};
     static const luaL_Reg funcs[] = {
         {"figure", l_figure}, {"ticks", l_ticks}, {"polygon_pole", l_polygon_pole},
-        {"text_width", l_text_width}, {NULL, NULL}};
+        {"text_width", l_text_width}, {"pdf_pages", l_pdf_pages}, {"text_runs", l_text_runs},
+        {NULL, NULL}};
     luaL_newmetatable(L, FIGURE_MT);
     luaL_newlib(L, methods);
     lua_setfield(L, -2, "__index");

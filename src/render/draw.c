@@ -361,6 +361,7 @@ static double legend_cap(double cell_w, double ts)
 
 static margins panel_margins(cairo_t *m, const px_panel *p, double ts, double cell_w)
 {
+    if (p->bare) return (margins){0, 0, 0, 0};
     double t[PX_MAX_TICKS + 8], ywmax = 0, xwmax = 0;
     size_t ny = axis_ticks(m, p, ts, 1, 0, t, &ywmax);
     (void)ny;
@@ -1108,7 +1109,7 @@ static void draw_panel(cairo_t *cr, const px_figure *f, int panel, rect r, rect 
     if (has_legend && p->legend != PX_LEGEND_OUTSIDE) draw_legend(cr, p, ts, lb, cell);
     cairo_restore(cr);
     if (has_legend && p->legend == PX_LEGEND_OUTSIDE) draw_legend(cr, p, ts, lb, cell);
-    draw_axes(cr, f, panel, r, cell, lr);
+    if (!p->bare) draw_axes(cr, f, panel, r, cell, lr);
     if (!rec) rec_free(&local);
 }
 
@@ -1569,6 +1570,39 @@ int px_figure_save(const px_figure *f, const char *path, double dpi)
     if (st != PX_OK) return st;
     st = px_write_atomic(path, data, n, NULL);
     free(data);
+    return st;
+}
+
+int px_figures_save_pdf(const px_figure *const *figs, size_t n, const char *path)
+{
+    if (!figs || n == 0 || !path) return PX_EINVAL;
+    for (size_t i = 0; i < n; i++)
+        if (!figs[i]) return PX_EINVAL;
+    membuf m = {0};
+    cairo_surface_t *s = cairo_pdf_surface_create_for_stream(mem_write, &m, figs[0]->width,
+                                                             figs[0]->height);
+    cairo_pdf_surface_set_metadata(s, CAIRO_PDF_METADATA_CREATE_DATE, PX_PDF_FIXED_DATE);
+    cairo_pdf_surface_set_metadata(s, CAIRO_PDF_METADATA_MOD_DATE, PX_PDF_FIXED_DATE);
+    cairo_pdf_surface_set_metadata(s, CAIRO_PDF_METADATA_CREATOR, "phlox");
+    pdf_metadata(s, figs[0]);
+    cairo_t *cr = cairo_create(s);
+    px_text_prepare(cr);
+    for (size_t i = 0; i < n; i++) {
+        cairo_pdf_surface_set_size(s, figs[i]->width, figs[i]->height);
+        draw_page(cr, figs[i], -1, NULL);
+        cairo_show_page(cr);
+    }
+    cairo_status_t cst = cairo_status(cr);
+    cairo_destroy(cr);
+    cairo_surface_finish(s);
+    if (cst == CAIRO_STATUS_SUCCESS) cst = cairo_surface_status(s);
+    cairo_surface_destroy(s);
+    if (cst != CAIRO_STATUS_SUCCESS || m.failed) {
+        free(m.data);
+        return m.failed || cst == CAIRO_STATUS_NO_MEMORY ? PX_ENOMEM : PX_EIO;
+    }
+    int st = px_write_atomic(path, m.data, m.n, NULL);
+    free(m.data);
     return st;
 }
 

@@ -362,3 +362,11 @@ int px_figure_meta(px_figure *f, const char *key, const char *text)
     f->n_meta++;
     return PX_OK;
 }
+
+int px_figure_bare(px_figure *f, int panel, int on)
+{
+    px_panel *p = panel_of(f, panel);
+    if (!p) return PX_EINVAL;
+    p->bare = on != 0;
+    return PX_OK;
+}

@@ -32,6 +32,7 @@ typedef struct px_panel {
     double x0, x1, y0, y1;
     int xlog, ylog;
     px_legend_place legend;
+    int bare; /* no frame, ticks or titles */
     char *xlabel, *ylabel, *title;
     px_item *items;
     size_t n_items, cap;

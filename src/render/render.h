@@ -136,6 +136,20 @@ typedef struct px_label_box {
 int px_figure_layout(const px_figure *fig, px_label_box **out, size_t *n);
 void px_figure_layout_free(px_label_box *boxes, size_t n);
 
+/* A panel without frame, ticks or titles: its items only, on the whole
+ * cell (pages of text, e.g. a report's; give it axes 0..width, height..0
+ * so data units are points from the top left). */
+int px_figure_bare(px_figure *fig, int panel, int on);
+/* Several figures as the pages of one PDF, each page the size of its
+ * figure; document information from the first figure's metadata.  Written
+ * atomically. */
+int px_figures_save_pdf(const px_figure *const *figs, size_t n, const char *path);
+/* The runs of a text as figures typeset it (see text.h): kind 0 normal,
+ * 1 subscript, 2 superscript, each run's UTF-8 text to `emit`.  Returns
+ * the number of runs. */
+int px_text_runs(const char *text, int chem, void (*emit)(void *user, int kind, const char *s),
+                 void *user);
+
 /* PDF only: put each panel on a page of its own (full page size). */
 int px_figure_page_per_panel(px_figure *fig, int on);
 
