@@ -351,6 +351,12 @@ function phlox.grid_map(opts)
     for e in pairs(rec and rec.elements or {}) do only = only and e == opts.element end
     f.kind = st == "s" and (only and "metal" or "solid") or st == "g" and "gas" or st == "l" and "liquid" or "aqueous"
   end
+  -- water lines and neutral pH at T, as exact maps carry them
+  local o2 = lib.db:reaction("O2(g) + 4 H^+ + 4 e- = 2 H2O(l)", T, P)
+  local kw = lib.db:reaction("H2O(l) = H^+ + OH^-", T, P)
+  local slope = core.nernst_slope(T)
+  if o2 and o2.E then g.water = { o2 = { a = o2.E, b = -slope }, h2 = { a = 0, b = -slope } } end
+  if kw and kw.logK then g.neutral_pH = -kw.logK / 2 end
   g.conditions = { T_C = T - T0C, P_bar = P, total = opts.total or 1e-6,
                    ligand = opts.ligand, ligand_total = opts.ligand and (opts.ligand_total or 1e-3) or nil }
   g.label = "rigorous"
