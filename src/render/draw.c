@@ -702,14 +702,27 @@ static int place_inside(cairo_t *cr, const pgeom *g, long item, const double *x,
     return 0;
 }
 
+/* Is a led-out label's box inside the frame and clear of the placed labels,
+ * and does its leader from (ax, ay) run through none of them? */
+static int leader_clear(const pgeom *g, const lrec *rec, px_label_box *b, double ax, double ay)
+{
+    if (!box_in_rect(b, g->inner) || !box_clear(rec, g->first, b)) return 0;
+    b->ax = ax, b->ay = ay;
+    double ex, ey;
+    leader_end(b, &ex, &ey);
+    for (size_t q = g->first; rec && q < rec->n; q++)
+        if (rec->b[q].placed && seg_hits_box(&rec->b[q], ax, ay, ex, ey)) return 0;
+    return 1;
+}
+
 /* Lead a label out of a field too small for it: spots around the anchor at
  * growing distances, towards the roomier side first; the first clear one
- * inside the frame wins, else the one overlapping least. */
+ * inside the frame wins, else the clear spot nearest the anchor anywhere in
+ * the plot (at the leader size, then the smallest), else one beside it. */
 static void place_leader(cairo_t *cr, const pgeom *g, long item, double ax, double ay, lrec *rec)
 {
     const px_item *it = &g->p->items[item];
     double ts = g->f->ts, s = (PX_LABEL_MIN + 1) * ts, w, h;
-    /* (the rings below are tried first; then the whole plot) */
     px_text_measure(cr, it->text, 1, s, &w, &h);
     double bw = w + 2 * ts, bh = h;
     rect in = g->inner;
@@ -725,15 +738,7 @@ static void place_leader(cairo_t *cr, const pgeom *g, long item, double ax, doub
             double cx = ax + ox + (ox > 0 ? bw / 2 : ox < 0 ? -bw / 2 : 0);
             double cy = ay + oy + (oy > 0 ? bh / 2 : oy < 0 ? -bh / 2 : 0);
             px_label_box b = make_box(PX_LABEL_LEADER, g->panel, item, s, 0, cx, cy, bw, bh);
-            if (!box_in_rect(&b, in) || !box_clear(rec, g->first, &b)) continue;
-            /* the leader must not run through a placed label */
-            b.ax = ax, b.ay = ay;
-            double ex, ey;
-            leader_end(&b, &ex, &ey);
-            int hits = 0;
-            for (size_t q = g->first; rec && q < rec->n && !hits; q++)
-                hits = rec->b[q].placed && seg_hits_box(&rec->b[q], ax, ay, ex, ey);
-            if (hits) continue;
+            if (!leader_clear(g, rec, &b, ax, ay)) continue;
             best = b, have = 1;
         }
     for (int shrink = 0; shrink < 2 && !have; shrink++) { /* anywhere in the plot, nearest first */
@@ -750,14 +755,7 @@ static void place_leader(cairo_t *cr, const pgeom *g, long item, double ax, doub
                 double d = hypot(cx - ax, cy - ay);
                 if (d >= bestd) continue;
                 px_label_box b = make_box(PX_LABEL_LEADER, g->panel, item, s, 0, cx, cy, bw, bh);
-                if (!box_in_rect(&b, in) || !box_clear(rec, g->first, &b)) continue;
-                b.ax = ax, b.ay = ay;
-                double ex, ey;
-                leader_end(&b, &ex, &ey);
-                int hits = 0;
-                for (size_t q = g->first; rec && q < rec->n && !hits; q++)
-                    hits = rec->b[q].placed && seg_hits_box(&rec->b[q], ax, ay, ex, ey);
-                if (hits) continue;
+                if (!leader_clear(g, rec, &b, ax, ay)) continue;
                 best = b, have = 1, bestd = d;
             }
     }

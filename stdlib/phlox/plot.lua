@@ -756,8 +756,9 @@ end
 -- "dashed" | "dotted" | "dashdot", color = {r,g,b}, width = 1.2,
 -- chem = false }, ... }.  Labels without spaces are set as formulas.
 -- opts: x = { name, unit, min, max, log }, y = { ... }, title, legend =
--- "outside" (default) | "top right" | ... | false, conditions, stamp, file,
--- width, height, dpi.
+-- "outside" (default) | "top right" | ... | false, conditions, file,
+-- preset, width, height, dpi, stamp = "full" | "short" | false (or a list
+-- of extra lines), notes (extra stamp lines).
 function plot.curves(series, opts)
   opts = opts or {}
   if type(series) ~= "table" or #series == 0 then error("plot.curves: series must be a non-empty list", 2) end
