@@ -1299,7 +1299,9 @@ static void sb_put(sbuf *b, const char *s, size_t k)
 
 static void sb_str(sbuf *b, const char *s) { sb_put(b, s, strlen(s)); }
 
-static void sb_xml(sbuf *b, const char *s)
+/* XML-escaped text; the braces of formula markup are dropped unless `raw`
+ * (metadata holds the text as given). */
+static void sb_xml_text(sbuf *b, const char *s, int raw)
 {
     for (; *s; s++) {
         switch (*s) {
@@ -1307,27 +1309,17 @@ static void sb_xml(sbuf *b, const char *s)
         case '<': sb_str(b, "&lt;"); break;
         case '>': sb_str(b, "&gt;"); break;
         case '"': sb_str(b, "&quot;"); break;
-        case '{': case '}': break; /* formula markup of plain text */
+        case '{': case '}':
+            if (raw) sb_put(b, s, 1);
+            break;
         default:
             if ((unsigned char)*s >= 0x20 || *s == '\n' || *s == '\t') sb_put(b, s, 1);
         }
     }
 }
 
-/* XML-escaped text, braces kept (metadata holds the text as given). */
-static void sb_xml_raw(sbuf *b, const char *s)
-{
-    for (; *s; s++) {
-        switch (*s) {
-        case '&': sb_str(b, "&amp;"); break;
-        case '<': sb_str(b, "&lt;"); break;
-        case '>': sb_str(b, "&gt;"); break;
-        case '"': sb_str(b, "&quot;"); break;
-        default:
-            if ((unsigned char)*s >= 0x20 || *s == '\n' || *s == '\t') sb_put(b, s, 1);
-        }
-    }
-}
+static void sb_xml(sbuf *b, const char *s) { sb_xml_text(b, s, 0); }
+static void sb_xml_raw(sbuf *b, const char *s) { sb_xml_text(b, s, 1); }
 
 static void sb_line(sbuf *b, const char *what, const char *text)
 {
@@ -1430,6 +1422,33 @@ static void pdf_metadata(cairo_surface_t *s, const px_figure *f)
     }
 }
 
+/* A PDF surface writing to m, first page the figure's size: pinned dates
+ * (same input, same bytes), creator, the figure's metadata. */
+static cairo_surface_t *pdf_surface(membuf *m, const px_figure *f)
+{
+    cairo_surface_t *s = cairo_pdf_surface_create_for_stream(mem_write, m, f->width, f->height);
+    cairo_pdf_surface_set_metadata(s, CAIRO_PDF_METADATA_CREATE_DATE, PX_PDF_FIXED_DATE);
+    cairo_pdf_surface_set_metadata(s, CAIRO_PDF_METADATA_MOD_DATE, PX_PDF_FIXED_DATE);
+    cairo_pdf_surface_set_metadata(s, CAIRO_PDF_METADATA_CREATOR, "phlox");
+    pdf_metadata(s, f);
+    return s;
+}
+
+/* Finish and destroy the surface; on any failure (cst, the surface's own
+ * sticky status, or m running out of memory) free m's bytes. */
+static int finish_surface(cairo_surface_t *s, cairo_status_t cst, membuf *m)
+{
+    cairo_surface_finish(s);
+    if (cst == CAIRO_STATUS_SUCCESS) cst = cairo_surface_status(s);
+    cairo_surface_destroy(s);
+    if (cst != CAIRO_STATUS_SUCCESS || m->failed) {
+        free(m->data);
+        m->data = NULL;
+        return m->failed || cst == CAIRO_STATUS_NO_MEMORY ? PX_ENOMEM : PX_EIO;
+    }
+    return PX_OK;
+}
+
 /* CRC-32 of PNG chunks (ISO 3309 polynomial; PNG spec, Annex D). */
 static unsigned long png_crc(const unsigned char *buf, size_t n, unsigned long c)
 {
@@ -1505,13 +1524,7 @@ int px_figure_render(const px_figure *f, px_format fmt, double dpi, unsigned cha
     case PX_FORMAT_SVG:
         s = cairo_svg_surface_create_for_stream(mem_write, &m, f->width, f->height);
         break;
-    case PX_FORMAT_PDF:
-        s = cairo_pdf_surface_create_for_stream(mem_write, &m, f->width, f->height);
-        cairo_pdf_surface_set_metadata(s, CAIRO_PDF_METADATA_CREATE_DATE, PX_PDF_FIXED_DATE);
-        cairo_pdf_surface_set_metadata(s, CAIRO_PDF_METADATA_MOD_DATE, PX_PDF_FIXED_DATE);
-        cairo_pdf_surface_set_metadata(s, CAIRO_PDF_METADATA_CREATOR, "phlox");
-        pdf_metadata(s, f);
-        break;
+    case PX_FORMAT_PDF: s = pdf_surface(&m, f); break;
     default: return PX_EINVAL;
     }
     cairo_t *cr = cairo_create(s);
@@ -1531,13 +1544,8 @@ int px_figure_render(const px_figure *f, px_format fmt, double dpi, unsigned cha
         cairo_surface_flush(s);
         cst = cairo_surface_write_to_png_stream(s, mem_write, &m);
     }
-    cairo_surface_finish(s);
-    if (cst == CAIRO_STATUS_SUCCESS) cst = cairo_surface_status(s);
-    cairo_surface_destroy(s);
-    if (cst != CAIRO_STATUS_SUCCESS || m.failed) {
-        free(m.data);
-        return m.failed || cst == CAIRO_STATUS_NO_MEMORY ? PX_ENOMEM : PX_EIO;
-    }
+    int fst = finish_surface(s, cst, &m);
+    if (fst != PX_OK) return fst;
     if (fmt == PX_FORMAT_PNG) {
         int st = png_text_chunks(&m, f);
         if (st != PX_OK) {
@@ -1577,12 +1585,7 @@ int px_figures_save_pdf(const px_figure *const *figs, size_t n, const char *path
     for (size_t i = 0; i < n; i++)
         if (!figs[i]) return PX_EINVAL;
     membuf m = {0};
-    cairo_surface_t *s = cairo_pdf_surface_create_for_stream(mem_write, &m, figs[0]->width,
-                                                             figs[0]->height);
-    cairo_pdf_surface_set_metadata(s, CAIRO_PDF_METADATA_CREATE_DATE, PX_PDF_FIXED_DATE);
-    cairo_pdf_surface_set_metadata(s, CAIRO_PDF_METADATA_MOD_DATE, PX_PDF_FIXED_DATE);
-    cairo_pdf_surface_set_metadata(s, CAIRO_PDF_METADATA_CREATOR, "phlox");
-    pdf_metadata(s, figs[0]);
+    cairo_surface_t *s = pdf_surface(&m, figs[0]);
     cairo_t *cr = cairo_create(s);
     px_text_prepare(cr);
     for (size_t i = 0; i < n; i++) {
@@ -1592,14 +1595,9 @@ int px_figures_save_pdf(const px_figure *const *figs, size_t n, const char *path
     }
     cairo_status_t cst = cairo_status(cr);
     cairo_destroy(cr);
-    cairo_surface_finish(s);
-    if (cst == CAIRO_STATUS_SUCCESS) cst = cairo_surface_status(s);
-    cairo_surface_destroy(s);
-    if (cst != CAIRO_STATUS_SUCCESS || m.failed) {
-        free(m.data);
-        return m.failed || cst == CAIRO_STATUS_NO_MEMORY ? PX_ENOMEM : PX_EIO;
-    }
-    int st = px_write_atomic(path, m.data, m.n, NULL);
+    int st = finish_surface(s, cst, &m);
+    if (st != PX_OK) return st;
+    st = px_write_atomic(path, m.data, m.n, NULL);
     free(m.data);
     return st;
 }
