@@ -257,6 +257,14 @@ static int f_scale(lua_State *L)
     return 0;
 }
 
+/* fig:stamp_below([on]): the stamp adds to the height */
+static int f_stamp_below(lua_State *L)
+{
+    px_figure *f = checkfig(L);
+    status_error(L, px_figure_stamp_below(f, lua_isnone(L, 2) || lua_toboolean(L, 2)), "figure:stamp_below");
+    return 0;
+}
+
 /* fig:used(n): only the first n panels are drawn */
 static int f_used(lua_State *L)
 {
@@ -456,7 +464,8 @@ void px_lua_open_render(lua_State *L)
         {"plot_rect", f_plot_rect}, {"close", f_close}, {"hatch", f_hatch},
         {"legend_patch", f_legend_patch}, {"legend", f_legend}, {"scale", f_scale},
         {"used", f_used}, {"line_label", f_line_label}, {"meta", f_meta},
-        {"layout", f_layout}, {"bare", f_bare}, {NULL, NULL}};
+        {"layout", f_layout}, {"bare", f_bare},
+        {"stamp_below", f_stamp_below}, {NULL, NULL}};
     static const luaL_Reg funcs[] = {
         {"figure", l_figure}, {"ticks", l_ticks}, {"polygon_pole", l_polygon_pole},
         {"text_width", l_text_width}, {"pdf_pages", l_pdf_pages}, {"text_runs", l_text_runs},

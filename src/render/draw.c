@@ -215,6 +215,12 @@ static double foot_height(const px_figure *f)
     return f->n_stamp ? (double)f->n_stamp * PX_STAMP_LINE * f->ts + 6.0 * f->ts : 0.0;
 }
 
+/* The page: the figure's height, plus the stamp when it goes below. */
+static double page_height(const px_figure *f)
+{
+    return f->height + (f->stamp_below ? foot_height(f) : 0.0);
+}
+
 static double text_w(cairo_t *m, const char *s, int chem, double size)
 {
     double w, h;
@@ -394,7 +400,7 @@ static margins panel_margins(cairo_t *m, const px_panel *p, double ts, double ce
  * margins of all, so the frames line up; `alone` is a page of its own. */
 static rect plot_rect_m(const px_figure *f, cairo_t *m, int panel, int alone)
 {
-    double fw = f->width, fh = f->height - foot_height(f);
+    double fw = f->width, fh = page_height(f) - foot_height(f);
     double cw = alone ? fw : fw / f->cols, ch = alone ? fh : fh / f->rows;
     int r = alone ? 0 : panel / f->cols, c = alone ? 0 : panel % f->cols;
     margins g = panel_margins(m, &f->panels[panel], f->ts, cw);
@@ -1114,7 +1120,7 @@ static void draw_panel(cairo_t *cr, const px_figure *f, int panel, rect r, rect 
 static void draw_stamp(cairo_t *cr, const px_figure *f, lrec *rec)
 {
     cairo_set_source_rgb(cr, 0.3, 0.3, 0.3);
-    double ts = f->ts, y0 = f->height - foot_height(f) + 3 * ts;
+    double ts = f->ts, y0 = page_height(f) - foot_height(f) + 3 * ts;
     for (size_t k = 0; k < f->n_stamp; k++) {
         char cut[PX_FIT_MAX];
         double avail = f->width - 2 * PX_PAD * ts;
@@ -1133,7 +1139,7 @@ static void draw_stamp(cairo_t *cr, const px_figure *f, lrec *rec)
 
 static rect cell_rect(const px_figure *f, int panel, int alone)
 {
-    double fw = f->width, fh = f->height - foot_height(f);
+    double fw = f->width, fh = page_height(f) - foot_height(f);
     if (alone) return (rect){0, 0, fw, fh};
     double cw = fw / f->cols, ch = fh / f->rows;
     return (rect){(panel % f->cols) * cw, (panel / f->cols) * ch, cw, ch};
@@ -1426,7 +1432,7 @@ static void pdf_metadata(cairo_surface_t *s, const px_figure *f)
  * (same input, same bytes), creator, the figure's metadata. */
 static cairo_surface_t *pdf_surface(membuf *m, const px_figure *f)
 {
-    cairo_surface_t *s = cairo_pdf_surface_create_for_stream(mem_write, m, f->width, f->height);
+    cairo_surface_t *s = cairo_pdf_surface_create_for_stream(mem_write, m, f->width, page_height(f));
     cairo_pdf_surface_set_metadata(s, CAIRO_PDF_METADATA_CREATE_DATE, PX_PDF_FIXED_DATE);
     cairo_pdf_surface_set_metadata(s, CAIRO_PDF_METADATA_MOD_DATE, PX_PDF_FIXED_DATE);
     cairo_pdf_surface_set_metadata(s, CAIRO_PDF_METADATA_CREATOR, "phlox");
@@ -1519,10 +1525,10 @@ int px_figure_render(const px_figure *f, px_format fmt, double dpi, unsigned cha
     switch (fmt) {
     case PX_FORMAT_PNG:
         s = cairo_image_surface_create(CAIRO_FORMAT_ARGB32, (int)lround(f->width * scale),
-                                       (int)lround(f->height * scale));
+                                       (int)lround(page_height(f) * scale));
         break;
     case PX_FORMAT_SVG:
-        s = cairo_svg_surface_create_for_stream(mem_write, &m, f->width, f->height);
+        s = cairo_svg_surface_create_for_stream(mem_write, &m, f->width, page_height(f));
         break;
     case PX_FORMAT_PDF: s = pdf_surface(&m, f); break;
     default: return PX_EINVAL;
@@ -1589,7 +1595,7 @@ int px_figures_save_pdf(const px_figure *const *figs, size_t n, const char *path
     cairo_t *cr = cairo_create(s);
     px_text_prepare(cr);
     for (size_t i = 0; i < n; i++) {
-        cairo_pdf_surface_set_size(s, figs[i]->width, figs[i]->height);
+        cairo_pdf_surface_set_size(s, figs[i]->width, page_height(figs[i]));
         draw_page(cr, figs[i], -1, NULL);
         cairo_show_page(cr);
     }

@@ -370,3 +370,10 @@ int px_figure_bare(px_figure *f, int panel, int on)
     p->bare = on != 0;
     return PX_OK;
 }
+
+int px_figure_stamp_below(px_figure *f, int on)
+{
+    if (!f) return PX_EINVAL;
+    f->stamp_below = on != 0;
+    return PX_OK;
+}

@@ -46,6 +46,7 @@ struct px_figure {
     size_t n_stamp;
     int page_per_panel;
     int used;              /* panels drawn: the first `used` */
+    int stamp_below;       /* the stamp adds to the height instead of taking from it */
     double ts, ls;         /* text and line scale */
     char **meta_key, **meta_val;
     size_t n_meta;

@@ -82,6 +82,9 @@ int px_figure_legend_patch(px_figure *fig, int panel, const char *text, px_rgba 
 int px_figure_legend_place(px_figure *fig, int panel, px_legend_place where);
 /* A line of the stamp at the foot of the figure (conditions, checksums). */
 int px_figure_stamp(px_figure *fig, const char *text);
+/* The stamp goes below the figure's height (the page grows by it) instead
+ * of taking room from the panels; off by default. */
+int px_figure_stamp_below(px_figure *fig, int on);
 
 /* Scale every font size (tick labels, titles, field labels, legend, stamp)
  * by `text` and the frame and tick strokes by `line` (presets for a journal

@@ -330,12 +330,29 @@ local function conditions_short(c)
   return #parts > 0 and table.concat(parts, ", ") or nil
 end
 
+-- Pieces of a word too long for a line (a checksum on a narrow figure),
+-- cut at character boundaries, so nothing is cut off with an ellipsis.
+local function split_long(word, width, size)
+  if core.text_width(word, size) <= width then return { word } end
+  local out, cur = {}, ""
+  for ch in word:gmatch(utf8.charpattern) do
+    if cur ~= "" and core.text_width(cur .. ch, size) > width then out[#out + 1] = cur; cur = "" end
+    cur = cur .. ch
+  end
+  if cur ~= "" then out[#out + 1] = cur end
+  return out
+end
+
 -- Break a line at spaces so it fits `width` points at the stamp size.
 local function wrap(line, width, size)
   size = size or STAMP_SIZE
   if core.text_width(line, size) <= width then return { line } end
   local out, cur = {}, ""
+  local words = {}
   for word in line:gmatch("%S+") do
+    for _, piece in ipairs(split_long(word, width - core.text_width("  ", size), size)) do words[#words + 1] = piece end
+  end
+  for _, word in ipairs(words) do
     local try = cur == "" and word or (cur .. " " .. word)
     if cur ~= "" and core.text_width(try, size) > width then
       out[#out + 1] = cur
@@ -433,6 +450,8 @@ local function apply_stamp(fig, opts, conditions, extra, title, w, look)
   local out = {}
   if mode == "full" then
     out = plot.stamp_lines(conditions, lines, w, { text = look.text, no_script = opts.no_script })
+    -- a preset promises its panels' size: the full stamp goes below them
+    if look.name then fig:stamp_below(true) end
   elseif mode == "short" then
     out = plot.stamp_short(conditions, lines, w, { text = look.text })
   end

@@ -1,4 +1,5 @@
--- test_figure_layout.lua: every diagram kind at every figure preset, checked
+-- test_figure_layout.lua: every diagram kind at every figure preset (and a
+-- map with the full stamp at each), checked
 -- from the layout the renderer computed (fig:layout(), the boxes it drew):
 --   * no two labels overlap (field labels, led-out labels, labels along
 --     lines, texts, legends, ticks, axis titles, titles, stamp lines);
@@ -72,10 +73,13 @@ local function area(xs, ys)
   return math.abs(a) / 2
 end
 
--- what: a name for messages; fig: the figure; look: plot.look's table;
+-- what: a name for messages; fig: the figure; look: plot.look's table (text scale);
 -- panels: { { map = m, win = {x0, x1, y0, y1} }, ... } for map figures
 local function check_figure(what, fig, look, panels)
   local boxes = fig:layout()
+  -- the page's size as written (a full stamp below a preset adds height)
+  local W, H = fig:render("svg"):match('<svg[^>]-width="([%d.]+)p?t?"[^>]-height="([%d.]+)p?t?"')
+  W, H = tonumber(W), tonumber(H)
   local rects = {}
   for p = 1, #(panels or { 1 }) do rects[p] = { fig:plot_rect(p) } end
   local drawn = {}
@@ -84,7 +88,7 @@ local function check_figure(what, fig, look, panels)
     else check(b.kind ~= "line", ("%s: line label '%s' found no place"):format(what, b.text)) end
   end
   for _, b in ipairs(drawn) do
-    check(inside_rect(b, 0, 0, look.width, look.height),
+    check(inside_rect(b, 0, 0, W, H),
           ("%s: %s '%s' leaves the figure"):format(what, b.kind, b.text))
     local r = rects[b.panel]
     if IN_PLOT[b.kind] and r then
@@ -153,24 +157,26 @@ check(#names >= 4, "four presets at least")
 local total, with_room = 0, 0
 for _, preset in ipairs(names) do
   local o = { preset = preset }
-  local function one(what, fig, panels, look)
-    local n, r = check_figure(preset .. " " .. what, fig, look or plot.look(o), panels)
+  local function one(what, fig, panels)
+    local n, r = check_figure(preset .. " " .. what, fig, plot.look(o), panels)
     total, with_room = total + n, with_room + r
   end
   one("exact map", plot.map(fe, o), { { map = fe, win = win_of(fe) } })
   one("exact map with ligand", plot.map(fes, o), { { map = fes, win = win_of(fes) } })
   one("rigorous map", plot.map(rig, o), { { map = rig, win = win_of(rig) } })
+  local full = plot.map(fe, { preset = preset, stamp = "full" })
+  one("exact map with the full stamp", full, { { map = fe, win = win_of(fe) } })
+  for _, b in ipairs(full:layout()) do   -- long checksums are wrapped, not cut off
+    check(not (b.kind == "stamp" and b.text:find("…", 1, true)), preset .. ": stamp line cut: " .. b.text)
+  end
   one("ligand-axis map", plot.map(zncl, o), { { map = zncl, win = win_of(zncl) } })
   one("fraction curves", diagrams.plot(fr, o))
   one("solubility curves", diagrams.plot(so, o))
   one("domains", plot.domains(fe, o), { { map = fe, win = win_of(fe) } })
   local g = plot.grid(series, o)
-  local W, H = g:render("svg"):match('<svg[^>]-width="([%d.]+)p?t?"[^>]-height="([%d.]+)p?t?"')
-  local look = plot.look(o)
-  look.width, look.height = tonumber(W), tonumber(H)
   local panels = {}
   for i, m in ipairs(series) do panels[i] = { map = m, win = union } end
-  one("grid", g, panels, look)
+  one("grid", g, panels)
   -- the grid of three draws three panels, no empty fourth one
   local desc = g:render("svg"):match("<desc>(.-)</desc>")
   check(not desc:find("panel 4", 1, true), preset .. " grid: a fourth panel is drawn")
@@ -182,7 +188,7 @@ fig:axes(1, 0, 1, 0, 1)
 fig:text(1, 0.5, 0.5, "first", false, 9)
 fig:text(1, 0.5, 0.5, "second", false, 9)
 local before = #failures
-check_figure("self-test", fig, { width = 200, height = 150, text = 1 })
+check_figure("self-test", fig, { text = 1 })
 check(#failures > before, "the overlap check finds two texts at one spot")
 if #failures > before then for k = #failures, before + 1, -1 do table.remove(failures, k) end end
 
@@ -190,5 +196,5 @@ if #failures > 0 then
   for _, f in ipairs(failures) do io.stderr:write(f, "\n") end
   error(("%d layout problems"):format(#failures))
 end
-print(("test_figure_layout: %d presets x 8 diagram kinds, %d text boxes, %d fields with room, no overlaps")
+print(("test_figure_layout: %d presets x 9 figures, %d text boxes, %d fields with room, no overlaps")
   :format(#names, total, with_room))
