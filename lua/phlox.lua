@@ -366,7 +366,8 @@ end
 
 --- Field polygons of a rigorous map: each node stands for the cell of the
 -- grid around it (half a step each way, clipped to the window); cells with
--- one label are joined and their outline traced counter-clockwise.  A
+-- one label are joined and their outline traced counter-clockwise, its
+-- steps smoothed (below).  A
 -- species in several separate pieces gives several fields; an enclosed
 -- hole is left to the field drawn inside it.  Nodes where the solver
 -- failed (label 0) belong to no field.
@@ -378,6 +379,40 @@ function phlox.grid_fields(g)
   local function L(i, j)   -- node label, 0-based indices; -1 outside
     if i < 0 or j < 0 or i >= nx or j >= ny then return -1 end
     return lab[j * nx + i + 1]
+  end
+  -- Corner positions, smoothed: a corner where exactly two labels meet
+  -- along a line of cell edges (not on the window's edge, not diagonal)
+  -- moves halfway towards the mean of its two neighbours on that line, twice
+  -- (Laplacian smoothing, Taubin 1995 names it), so the cells' steps become
+  -- slopes.  Every field uses the same corner positions, so the fields still
+  -- tile the window without gaps.
+  local SMOOTH_STEPS, SMOOTH_FACTOR = 2, 0.5
+  local PX, PY = {}, {}
+  local function key(i, j) return i * (ny + 1) + j end
+  for i = 0, nx do for j = 0, ny do PX[key(i, j)], PY[key(i, j)] = X(i), Y(j) end end
+  local links = {}
+  for i = 1, nx - 1 do
+    for j = 1, ny - 1 do
+      local a, b, c, d = L(i - 1, j - 1), L(i, j - 1), L(i - 1, j), L(i, j)   -- below left, below right, above left, above right
+      local nb = {}
+      if b ~= d then nb[#nb + 1] = key(i + 1, j) end   -- edge to the right
+      if a ~= c then nb[#nb + 1] = key(i - 1, j) end   -- to the left
+      if c ~= d then nb[#nb + 1] = key(i, j + 1) end   -- upwards
+      if a ~= b then nb[#nb + 1] = key(i, j - 1) end   -- downwards
+      local labels = {}
+      for _, v in ipairs({ a, b, c, d }) do labels[v] = true end
+      local count = 0
+      for _ in pairs(labels) do count = count + 1 end
+      if #nb == 2 and count == 2 then links[key(i, j)] = nb end
+    end
+  end
+  for _ = 1, SMOOTH_STEPS do
+    local nxp, nyp = {}, {}
+    for k, nb in pairs(links) do
+      local mx, my = (PX[nb[1]] + PX[nb[2]]) / 2, (PY[nb[1]] + PY[nb[2]]) / 2
+      nxp[k], nyp[k] = PX[k] + SMOOTH_FACTOR * (mx - PX[k]), PY[k] + SMOOTH_FACTOR * (my - PY[k])
+    end
+    for k in pairs(nxp) do PX[k], PY[k] = nxp[k], nyp[k] end
   end
   -- directed cell edges with the species on their left, keyed by start vertex
   -- (vertex (i, j) is the corner below and left of node (i, j))
@@ -423,7 +458,9 @@ function phlox.grid_fields(g)
         local t = table.remove(e, pick)
         count = count - 1
         local dx, dy = t[1] - ci, t[2] - cj
-        if not (pdx == dx and pdy == dy) then xs[#xs + 1], ys[#ys + 1] = X(ci), Y(cj) end
+        if not (pdx == dx and pdy == dy) or links[key(ci, cj)] then
+          xs[#xs + 1], ys[#ys + 1] = PX[key(ci, cj)], PY[key(ci, cj)]
+        end
         ci, cj, pdx, pdy = t[1], t[2], dx, dy
       until ci == start[1] and cj == start[2]
       local a = 0
