@@ -383,10 +383,11 @@ function phlox.grid_fields(g)
   -- Corner positions, smoothed: a corner where exactly two labels meet
   -- along a line of cell edges (not on the window's edge, not diagonal)
   -- moves halfway towards the mean of its two neighbours on that line, twice
-  -- (Laplacian smoothing, Taubin 1995 names it), so the cells' steps become
-  -- slopes.  Every field uses the same corner positions, so the fields still
-  -- tile the window without gaps.
-  local SMOOTH_STEPS, SMOOTH_FACTOR = 2, 0.5
+  -- (Laplacian smoothing, as discussed by Taubin 1995, "A signal processing
+  -- approach to fair surface design", SIGGRAPH '95), so the cells' steps
+  -- become slopes.  Every field uses the same corner positions, so the
+  -- fields still tile the window without gaps.
+  local SMOOTH_STEPS, SMOOTH_FACTOR = 2, 0.5   -- our choice (common practice, no source)
   local PX, PY = {}, {}
   local function key(i, j) return i * (ny + 1) + j end
   for i = 0, nx do for j = 0, ny do PX[key(i, j)], PY[key(i, j)] = X(i), Y(j) end end
