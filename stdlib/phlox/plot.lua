@@ -242,6 +242,9 @@ local function fixed_text(c, map)
   elseif c.ligand and is_num(c.ligand_total) then
     parts[#parts + 1] = ("{%s} %s mol/kg"):format(c.ligand, plot.number(c.ligand_total))
   end
+  if is_num(c.total) and map and map.element then   -- a rigorous map's total of the element
+    parts[#parts + 1] = ("{%s} %s mol/kg"):format(map.element, plot.number(c.total))
+  end
   if is_num(c.pH) then parts[#parts + 1] = "pH " .. fmt_num(c.pH) end
   if is_num(c.E_V) then parts[#parts + 1] = ("E = %s V vs SHE"):format(plot.number(c.E_V)) end
   return #parts > 0 and table.concat(parts, ", ") or nil

@@ -212,6 +212,15 @@ bad = test_map(); bad.y.max = bad.y.min
 ok, err = pcall(plot.map, bad)
 check(not ok and err:find("map.y", 1, true), "empty y range: " .. tostring(err))
 check(not pcall(plot.curves, {}), "no series")
+-- titles say what the figure is: ligand and its total, fixed pH or E, temperature
+local lm = test_map(90)
+lm.conditions.ligand, lm.conditions.ligand_activity, lm.conditions.pH = "S", 1e-3, 5
+check(plot.map_title(lm) == "{M}–{S}–{H2O} at 90 °C, a(Σ{S}) = 10⁻³, pH 5", plot.map_title(lm))
+lm.ligand_fields = { { species = "HS^-" } }
+lm.conditions.pH, lm.conditions.E_V = nil, -0.5
+check(plot.map_title(lm) == "{M}–{S}–{H2O} at 90 °C, a({HS^-}) = 10⁻³, E = −0.5 V vs SHE", plot.map_title(lm))
+check(plot.number(2.5e-3) == "2.5 × 10⁻³" and plot.number(-0.25) == "−0.25" and plot.number(1e-6) == "10⁻⁶",
+      "typeset numbers")
 ok, err = pcall(plot.map, map, { stamp = "tiny" })
 check(not ok and err:find("opts.stamp must be", 1, true), "bad stamp mode: " .. tostring(err))
 ok, err = pcall(plot.map, map, { preset = "poster" })
