@@ -33,7 +33,7 @@ check(#phlox.constant_logk(zn, { "Zn" }, 298.15) == 0, "at 25 C nothing is held"
 local m = phlox.map { library = zn, element = "Zn", T_C = 200, activity = 1e-6 }
 check(m.constant_logk and table.concat(m.constant_logk, "|") == table.concat(expected, "|"), "map.constant_logk")
 local stamped = false
-for _, line in ipairs(m.stamp or {}) do stamped = stamped or (type(line) == "table" and line.full or line):find("log K held at 25", 1, true) ~= nil end
+for _, line in ipairs(m.stamp or {}) do stamped = stamped or line:find("log K held at 25", 1, true) ~= nil end
 check(stamped, "the map's stamp names the held species")
 
 -- 3. require_temperature_data refuses the map and names the species
@@ -65,7 +65,7 @@ for _, f in ipairs(mf.constant_logk or {}) do has = has or f == "FeCl^+" end
 check(has, "FeCl^+ (Cl.lua, no temperature data) is named in an Fe-Cl map at 150 C")
 -- 6. fraction and solubility curves: stamped, and refused on request
 local fr = phlox.fractions { library = zn, element = "Zn", T_C = 150, range = { 6, 12 }, n = 7 }
-check(fr.stamp and fr.stamp[1].full:find("{Zn(OH)2(aq)}", 1, true), "fraction curves at 150 C name the held species")
+check(fr.stamp and fr.stamp[1]:find("Zn(OH)2(aq)", 1, true), "fraction curves at 150 C name the held species")
 local ok3, err3 = pcall(phlox.fractions, { library = zn, element = "Zn", T_C = 150, range = { 6, 12 }, n = 7,
                                            require_temperature_data = true })
 check(not ok3 and tostring(err3):find("require_temperature_data", 1, true), "fractions refuse: " .. tostring(err3))
