@@ -96,6 +96,14 @@ typedef enum px_tbasis {
     PX_TBASIS_NO_CP         /* solid/liquid/gas without Cp: Cp taken as 0 */
 } px_tbasis;
 
+/* Published uncertainties (the source's +-), internal units; NAN where the
+ * file gives none.  Kept for propagating boundary uncertainties. */
+typedef struct px_uncertainty {
+    double G, H; /* J/mol */
+    double S;    /* J/(mol K) */
+    double logK; /* log10 units, of the logk reaction as written */
+} px_uncertainty;
+
 typedef struct px_species {
     px_formula f;
     px_model model;
@@ -105,6 +113,7 @@ typedef struct px_species {
     px_hkf_params hkf;
     px_cp_params cp;
     px_logk_params logk;
+    px_uncertainty unc; /* +- of G, H, S, log K; NAN if not given */
     double Tmin, Tmax; /* declared valid range, K */
     int estimated;     /* HKF parameters from correlations, not regressed */
     px_tbasis tbasis;  /* set by px_db_add from the fields above (px_species_tbasis) */
