@@ -113,7 +113,7 @@ function phlox.library(spec)
   end)
   local filter = { "H", "O" }
   for _, e in ipairs(elements) do filter[#filter + 1] = e end
-  local files = {}
+  local files, sources = {}, {}
   local function load(rel, opts)
     local text, where = phlox.read_library_file(rel)
     if not text then error("phlox.library: " .. where, 3) end
@@ -125,7 +125,7 @@ function phlox.library(spec)
       end
       error("phlox.library: " .. (#lines > 0 and table.concat(lines, "\n") or msg), 3)
     end
-    provenance.record_file(where, text)
+    sources[where] = provenance.record_file(where, text).sha256
     files[#files + 1] = where
   end
   load("elements/HO.lua", { elements = filter })
@@ -137,10 +137,10 @@ function phlox.library(spec)
     f:close()
     local ok, msg = db:load(text, path, { elements = filter, user = true })
     if not ok then error("phlox.library: " .. msg, 2) end
-    provenance.record_file(path, text)
+    sources[path] = provenance.record_file(path, text).sha256
     files[#files + 1] = path
   end
-  return setmetatable({ db = db, elements = elements, files = files }, phlox.Library)
+  return setmetatable({ db = db, elements = elements, files = files, sources = sources }, phlox.Library)
 end
 
 phlox.Library = {}
@@ -273,6 +273,7 @@ function phlox.map(opts)
     ligand = opts.ligand, ligand_activity = opts.ligand and (opts.ligand_activity or 1e-3) or nil,
   }
   m.files = lib.files
+  m.provenance = provenance.of_result(lib, { opts.element, opts.ligand }, m.conditions, opts)
   stamp_held(m, held)
   return m
 end
@@ -302,6 +303,15 @@ function phlox.speciate(opts)
   local r, err, info = core.speciate(lib.db, copt)
   if not r then return nil, err, info end
   r.T_C = T - T0C
+  local els = {}
+  for e in pairs(opts.totals or {}) do els[#els + 1] = e end
+  for _, f in ipairs({ opts.fugacities or {}, opts.fixed or {} }) do
+    for formula in pairs(f) do
+      for e in tostring(formula):gmatch("%u%l?") do els[#els + 1] = e end
+    end
+  end
+  table.sort(els)
+  r.provenance = provenance.of_result(lib, els, { T_C = r.T_C, P_bar = P }, opts)
   return r
 end
 
@@ -336,6 +346,9 @@ function phlox.grid_map(opts)
   g.conditions = { T_C = T - T0C, P_bar = P, total = opts.total or 1e-6,
                    ligand = opts.ligand, ligand_total = opts.ligand and (opts.ligand_total or 1e-3) or nil }
   g.label = "rigorous"
+  local els = { opts.element, opts.ligand or "H" }
+  if opts.background_nacl then els[#els + 1] = "Na"; els[#els + 1] = "Cl" end
+  g.provenance = provenance.of_result(lib, els, g.conditions, opts)
   stamp_held(g, held)
   return g
 end

@@ -16,6 +16,7 @@
 -- phlox.caution).
 local phlox = require "phlox"
 local sweep = require "phlox.sweep"
+local provenance = require "phlox.provenance"
 
 local diagrams = {}
 
@@ -59,6 +60,15 @@ local function copy(t)
   local o = {}
   for k, v in pairs(t or {}) do o[k] = v end
   return o
+end
+
+-- A curve's own provenance: the files defining species of its element,
+-- ligand and the other totals, with its conditions and options.
+local function curve_provenance(lib, opts, ligand, conditions)
+  local els = { opts.element }
+  if ligand then els[#els + 1] = ligand end
+  for e in pairs(opts.totals or {}) do els[#els + 1] = e end
+  return provenance.of_result(lib, els, conditions, opts)
 end
 
 local function T_C_of(opts)
@@ -192,6 +202,8 @@ function diagrams.fractions(opts)
     series[#series + 1] = { species = sp, label = sp, x = xs, y = y }
   end
 
+  local conditions = { T_C = T_C_of(opts), [el .. " total (mol/kg)"] = total, pH = xkind ~= "pH" and opts.pH or nil,
+                       activity_model = base.activity }
   local xname = xkind == "pH" and "pH"
     or xkind == "log_total" and ("log total " .. opts.ligand .. " / (mol/kg)")
     or ("log a(" .. opts.ligand_species .. ")")
@@ -199,8 +211,8 @@ function diagrams.fractions(opts)
     element = el, x = xs, series = series, omitted = omitted, failures = failures,
     axes = { x = { name = xname, min = xs[1], max = xs[#xs] },
              y = { name = "fraction of " .. el, min = 0, max = 1 } },
-    conditions = { T_C = T_C_of(opts), [el .. " total (mol/kg)"] = total, pH = xkind ~= "pH" and opts.pH or nil,
-                   activity_model = base.activity },
+    conditions = conditions,
+    provenance = curve_provenance(lib, opts, lig_el, conditions),
     stamp = held,
     stats = { solves = #xs, seconds = seconds },
   }
@@ -287,6 +299,7 @@ function diagrams.solubility(opts)
     axes = { x = { name = "pH", min = xs[1], max = xs[#xs] },
              y = { name = "dissolved " .. el, unit = "mol/kg", log = true } },
     conditions = { [el .. " put in (mol/kg)"] = total, activity_model = base.activity },
+    provenance = curve_provenance(lib, opts, nil, { [el .. " put in (mol/kg)"] = total, T_C = temps }),
     stamp = held,
     stats = { points = #xs * #temps, retries = retried, seconds = os.clock() - t0 },
   }
@@ -313,6 +326,7 @@ function diagrams.plot(result, opts)
   end
   opts.title = title
   if not opts.stamp and result.stamp and #result.stamp > 0 then opts.stamp = result.stamp end
+  opts.from = opts.from or result
   return plot.curves(result.series, opts)
 end
 

@@ -22,12 +22,15 @@ local function cell(v, col)
 end
 
 --- Write rows (a sequence of tables keyed by column name) as CSV.
--- opts.columns: the column order (required); opts.conditions: stamped.
+-- opts.columns: the column order (required); opts.conditions: stamped;
+-- opts.from: the results the rows come from (a result or a list): their
+-- own data files, conditions and options are stamped (without it, every
+-- input the run read, marked as such).
 function export.csv(path, rows, opts)
   assert(type(path) == "string", "export.csv: path must be a string")
   assert(type(rows) == "table", "export.csv: rows must be a table")
   local columns = assert(opts and opts.columns, "export.csv: opts.columns is required")
-  local lines = provenance.comment_lines(provenance.stamp(opts.conditions))
+  local lines = provenance.comment_lines(provenance.stamp(opts.conditions, opts.from))
   lines[#lines + 1] = "# " .. CAUTION
   local head = {}
   for i, c in ipairs(columns) do head[i] = cell(c, c) end
@@ -43,10 +46,11 @@ function export.csv(path, rows, opts)
 end
 
 --- Write a value as JSON: { provenance = ..., caution = ..., data = value }.
+-- opts.conditions, opts.from as export.csv.
 function export.json(path, value, opts)
   assert(type(path) == "string", "export.json: path must be a string")
   local doc = {
-    provenance = provenance.stamp(opts and opts.conditions),
+    provenance = provenance.stamp(opts and opts.conditions, opts and opts.from),
     caution = CAUTION,
     data = value,
   }

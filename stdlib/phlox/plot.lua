@@ -224,19 +224,21 @@ local function wrap(line, width)
   return out
 end
 
---- The stamp lines of a figure: conditions, program and checksums, extra
--- lines, the caution; wrapped to the figure width.
+--- The stamp lines of a figure: conditions, program, revision and
+-- checksums, extra lines, the caution; wrapped to the figure width.
+-- opts.from: the results drawn (their own data files are stamped).
 function plot.stamp_lines(conditions, extra, width, opts)
   opts = opts or {}
-  local st = provenance.stamp(conditions)
+  local st = provenance.stamp(conditions, opts.from)
   local lines = {}
   local c = conditions_text(conditions)
   if c then lines[#lines + 1] = c end
-  local prog = "program: " .. st.program
+  local prog = "program: " .. st.program .. " (" .. st.revision .. ")"
   if st.script and not opts.no_script then
     prog = prog .. "; script: " .. st.script.file .. " sha256=" .. st.script.sha256
   end
   lines[#lines + 1] = prog
+  if st.data_scope then lines[#lines + 1] = "data files: " .. st.data_scope end
   for _, d in ipairs(st.data) do lines[#lines + 1] = "data: " .. d.file .. " sha256=" .. d.sha256 end
   for _, s in ipairs(extra or {}) do lines[#lines + 1] = tostring(s) end
   lines[#lines + 1] = plot.caution
@@ -634,7 +636,7 @@ function plot.map(map, opts)
   if fills.conflicts > 0 then
     extra[#extra + 1] = ("note: %d pairs of neighbouring fields share a lightness tier"):format(fills.conflicts)
   end
-  add_stamp(fig, plot.stamp_lines(map.conditions, extra, w))
+  add_stamp(fig, plot.stamp_lines(map.conditions, extra, w, { from = map }))
   return finish(fig, opts, plot.defaults), fills
 end
 
@@ -686,7 +688,7 @@ function plot.domains(map, opts)
   if ref.offset ~= 0 then
     extra[#extra + 1] = ("potential vs %s = E(SHE) - %s V"):format(ref.name, fmt_num(ref.offset))
   end
-  add_stamp(fig, plot.stamp_lines(map.conditions, extra, w))
+  add_stamp(fig, plot.stamp_lines(map.conditions, extra, w, { from = map }))
   return finish(fig, opts, plot.defaults)
 end
 
@@ -741,7 +743,7 @@ end
 -- chem = false }, ... }.  Labels without spaces are set as formulas.
 -- opts: x = { name, unit, min, max, log }, y = { ... }, title, legend =
 -- "outside" (default) | "top right" | ... | false, conditions, stamp, file,
--- width, height, dpi.
+-- width, height, dpi, from (the results drawn: their data files are stamped).
 function plot.curves(series, opts)
   opts = opts or {}
   if type(series) ~= "table" or #series == 0 then error("plot.curves: series must be a non-empty list", 2) end
@@ -781,7 +783,7 @@ function plot.curves(series, opts)
     end
   end
   if opts.legend ~= false then fig:legend(1, opts.legend or "outside") end
-  add_stamp(fig, plot.stamp_lines(opts.conditions, opts.stamp, w))
+  add_stamp(fig, plot.stamp_lines(opts.conditions, opts.stamp, w, { from = opts.from }))
   return finish(fig, opts, plot.defaults)
 end
 
@@ -876,7 +878,7 @@ function plot.grid(maps, opts)
   if ref.offset ~= 0 then
     extra[#extra + 1] = ("potential vs %s = E(SHE) - %s V"):format(ref.name, fmt_num(ref.offset))
   end
-  add_stamp(fig, plot.stamp_lines(cond, extra, w))
+  add_stamp(fig, plot.stamp_lines(cond, extra, w, { from = maps }))
   return finish(fig, opts, plot.defaults)
 end
 
@@ -943,7 +945,7 @@ function plot.overlay(maps, opts)
     for i = 2, #maps do same = same and (maps[i].conditions or {})[k] == v end
     if same then cond[k] = v end
   end
-  add_stamp(fig, plot.stamp_lines(cond, extra, w))
+  add_stamp(fig, plot.stamp_lines(cond, extra, w, { from = maps }))
   return finish(fig, opts, plot.defaults)
 end
 
