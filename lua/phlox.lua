@@ -196,9 +196,14 @@ end
 local T_REF, P_REF = 298.15, 1.0   -- K, bar: where log K records are given
 local NEAR_T_REF = 0.5             -- K: closer than this to 25 C, nothing is held
 local SAME_LOGK = 1e-12            -- log K this close to its 25 C value is held
-function phlox.constant_logk(lib, elements, T, P)
+-- The answer is kept per library, elements, T and P (a sweep asks the same
+-- question for every ligand level); opts.cache = false recomputes it.
+function phlox.constant_logk(lib, elements, T, P, opts)
   if getmetatable(lib) ~= phlox.Library then error("phlox.constant_logk: library expected", 2) end
   P = P or pressure({}, T, "phlox.constant_logk")
+  local key = ("%s|%.17g|%.17g|%d"):format(table.concat(elements, ","), T, P, lib.db:count())
+  local cached = lib._held and lib._held[key]
+  if cached and not (opts and opts.cache == false) then return table.move(cached, 1, #cached, 1, {}) end
   local held, seen = {}, {}
   if math.abs(T - T_REF) <= NEAR_T_REF then return held end
   for _, el in ipairs(elements) do
@@ -212,6 +217,8 @@ function phlox.constant_logk(lib, elements, T, P)
     end
   end
   table.sort(held)
+  lib._held = lib._held or {}
+  lib._held[key] = table.move(held, 1, #held, 1, {})
   return held
 end
 

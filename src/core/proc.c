@@ -19,8 +19,7 @@
 #endif
 
 #define PX_FILE_MODE 0644
-#define PX_CHILD_EXEC_FAILED 127 /* shell convention for "could not run" */
-#define PX_FD_ENV_LEN 64
+#define PX_WORKER_ORPHANED 1
 
 static int fail_errno(int *errno_out, int e, int status)
 {
@@ -36,8 +35,7 @@ static int set_cloexec(int fd, int on)
     return fcntl(fd, F_SETFD, flags);
 }
 
-int px_proc_spawn(const char *exe, char *const argv[], char *const env[], pid_t *pid,
-                  int *to_fd, int *from_fd, int *errno_out)
+int px_proc_fork(pid_t *pid, int *to_fd, int *from_fd, int *errno_out)
 {
     int down[2], up[2]; /* parent -> worker, worker -> parent */
     if (pipe(down) != 0) return fail_errno(errno_out, errno, PX_EIO);
@@ -51,8 +49,6 @@ int px_proc_spawn(const char *exe, char *const argv[], char *const env[], pid_t 
         set_cloexec(down[i], 1);
         set_cloexec(up[i], 1);
     }
-    char fds[PX_FD_ENV_LEN];
-    snprintf(fds, sizeof fds, "%d,%d", down[0], up[1]);
     pid_t parent = getpid();
     /* A worker that dies must not kill us through SIGPIPE when we hand it
      * its next point: the write fails with EPIPE and the sweep reports it. */
@@ -71,37 +67,19 @@ int px_proc_spawn(const char *exe, char *const argv[], char *const env[], pid_t 
 #ifdef __linux__
         prctl(PR_SET_PDEATHSIG, SIGKILL);
 #endif
-        if (getppid() != parent) _exit(PX_CHILD_EXEC_FAILED); /* parent already gone */
-        signal(SIGPIPE, SIG_DFL); /* ignored dispositions survive exec */
+        if (getppid() != parent) _exit(PX_WORKER_ORPHANED); /* parent already gone */
+        signal(SIGPIPE, SIG_DFL);
         close(down[1]);
         close(up[0]);
-        set_cloexec(down[0], 0);
-        set_cloexec(up[1], 0);
         int devnull = open("/dev/null", O_WRONLY);
         if (devnull >= 0) {
             dup2(devnull, STDOUT_FILENO);
             close(devnull);
         }
-        setenv("PHLOX_SWEEP_FDS", fds, 1);
-        for (size_t i = 0; env && env[i]; i++) {
-            const char *eq = strchr(env[i], '=');
-            if (!eq) continue;
-            char name[256];
-            size_t len = (size_t)(eq - env[i]);
-            if (len >= sizeof name) continue;
-            memcpy(name, env[i], len);
-            name[len] = '\0';
-            setenv(name, eq + 1, 1);
-        }
-        if (exe) {
-            execv(exe, argv);
-        } else {
-#ifdef __linux__
-            execv("/proc/self/exe", argv);
-#endif
-            execvp(argv[0], argv);
-        }
-        _exit(PX_CHILD_EXEC_FAILED);
+        *pid = 0;
+        *to_fd = up[1];
+        *from_fd = down[0];
+        return PX_OK;
     }
     close(down[0]);
     close(up[1]);
@@ -109,6 +87,12 @@ int px_proc_spawn(const char *exe, char *const argv[], char *const env[], pid_t 
     *to_fd = down[1];
     *from_fd = up[0];
     return PX_OK;
+}
+
+void px_proc_exit(int code)
+{
+    fflush(NULL);
+    _exit(code);
 }
 
 int px_proc_wait(pid_t pid, int *code, int *errno_out)

@@ -1,5 +1,5 @@
-/* proc.h - the operating-system helpers that sweeps need: worker processes
- * that die with their parent and talk through pipes, a durable append for
+/* proc.h - the operating-system helpers that sweeps need: forked worker
+ * processes that die with their parent and talk through pipes, a durable append for
  * journals, and a directory listing.  POSIX; the parent-death signal is
  * Linux's prctl(PR_SET_PDEATHSIG) where available, and workers also check
  * their parent between points (px_proc_parent) everywhere else.
@@ -11,14 +11,18 @@
 #include <stddef.h>
 #include <sys/types.h>
 
-/* Start `exe` (NULL: this program, /proc/self/exe, falling back to argv[0]
- * through PATH) with argv and the extra environment entries env[] ("K=V",
- * NULL-terminated).  Two pipes connect it: the parent writes to *to_fd and
- * reads from *from_fd; the worker finds its ends in PHLOX_SWEEP_FDS="r,w".
- * The worker's standard output goes to /dev/null; it is killed when the
- * parent dies (Linux). */
-int px_proc_spawn(const char *exe, char *const argv[], char *const env[], pid_t *pid,
-                  int *to_fd, int *from_fd, int *errno_out);
+/* Fork a worker connected by two pipes.  In the parent *pid is the
+ * worker's id, the parent writes to *to_fd and reads from *from_fd.  In the
+ * worker *pid is 0, *to_fd writes to the parent and *from_fd reads from it;
+ * its standard output goes to /dev/null (the parent's prints stay single)
+ * and it is killed when the parent dies (Linux).  The worker shares
+ * everything the parent had loaded (libraries, the sweep's function) and
+ * must leave with px_proc_exit. */
+int px_proc_fork(pid_t *pid, int *to_fd, int *from_fd, int *errno_out);
+
+/* Leave a forked worker at once: flush stdio, _exit (no atexit handlers,
+ * no second flush of the parent's buffers). */
+void px_proc_exit(int code);
 
 /* Wait for pid; *code gets the exit status, or 128 + signal number. */
 int px_proc_wait(pid_t pid, int *code, int *errno_out);

@@ -1,5 +1,6 @@
 /* l_proc.c - process and file helpers for sweeps (src/core/proc.h):
- *   core.spawn(argv [, env]) -> pid, to_fd, from_fd    worker, dies with us
+ *   core.fork() -> pid, to_fd, from_fd     a worker (pid 0 in the worker), dies with us
+ *   core.exit_now(code)                    leave a forked worker at once
  *   core.wait(pid) -> exit code (128 + signal when killed)
  *   core.kill(pid)                                     SIGKILL a worker we started
  *   core.fd_write(fd, text) -> true | nil, message
@@ -8,7 +9,8 @@
  *   core.getpid(), core.getppid()
  *   core.append_sync(path, text) -> true | nil, message   durable append
  *   core.truncate(path, size) -> true | nil, message
- *   core.list_dir(path) -> sorted names | nil, message */
+ *   core.list_dir(path) -> sorted names | nil, message
+ *   core.monotonic() -> seconds of a monotonic clock (benchmarks, progress) */
 #define _POSIX_C_SOURCE 200809L
 #include "core/proc.h"
 #include "core/status.h"
@@ -17,10 +19,11 @@
 #include <signal.h>
 #include <stdlib.h>
 #include <string.h>
+#include <time.h>
 #include <unistd.h>
 
 #define PX_READ_CHUNK 65536
-#define PX_MAX_ARGS 4096
+#define PX_MAX_FDS 4096
 
 static int push_fail(lua_State *L, const char *what, int st, int err)
 {
@@ -29,37 +32,22 @@ static int push_fail(lua_State *L, const char *what, int st, int err)
     return 2;
 }
 
-/* A NULL-terminated char* array of the strings of table `idx`, kept alive by
- * the table; the array itself is a userdata left on the stack. */
-static char **string_array(lua_State *L, int idx, const char *what)
+static int l_fork(lua_State *L)
 {
-    luaL_checktype(L, idx, LUA_TTABLE);
-    lua_Integer n = luaL_len(L, idx);
-    luaL_argcheck(L, n >= 0 && n < PX_MAX_ARGS, idx, "too many entries");
-    char **a = lua_newuserdatauv(L, (size_t)(n + 1) * sizeof *a, 0);
-    for (lua_Integer i = 1; i <= n; i++) {
-        lua_rawgeti(L, idx, i);
-        if (lua_type(L, -1) != LUA_TSTRING) luaL_error(L, "%s: entry %d is not a string", what, (int)i);
-        a[i - 1] = (char *)lua_tostring(L, -1);
-        lua_pop(L, 1); /* the table keeps the string alive */
-    }
-    a[n] = NULL;
-    return a;
-}
-
-static int l_spawn(lua_State *L)
-{
-    char **argv = string_array(L, 1, "core.spawn argv");
-    luaL_argcheck(L, argv[0] != NULL, 1, "empty argv");
-    char **env = lua_isnoneornil(L, 2) ? NULL : string_array(L, 2, "core.spawn env");
     pid_t pid;
     int to, from, err = 0;
-    int st = px_proc_spawn(NULL, argv, env, &pid, &to, &from, &err);
-    if (st != PX_OK) return push_fail(L, "core.spawn", st, err);
+    int st = px_proc_fork(&pid, &to, &from, &err);
+    if (st != PX_OK) return push_fail(L, "core.fork", st, err);
     lua_pushinteger(L, (lua_Integer)pid);
     lua_pushinteger(L, to);
     lua_pushinteger(L, from);
     return 3;
+}
+
+static int l_exit_now(lua_State *L)
+{
+    px_proc_exit((int)luaL_optinteger(L, 1, 0));
+    return 0;
 }
 
 static int l_wait(lua_State *L)
@@ -95,7 +83,7 @@ static int l_fd_read(lua_State *L)
 {
     luaL_checktype(L, 1, LUA_TTABLE);
     lua_Integer n = luaL_len(L, 1);
-    luaL_argcheck(L, n >= 1 && n < PX_MAX_ARGS, 1, "need 1 or more file descriptors");
+    luaL_argcheck(L, n >= 1 && n < PX_MAX_FDS, 1, "need 1 or more file descriptors");
     int *fds = lua_newuserdatauv(L, (size_t)n * sizeof *fds, 0);
     for (lua_Integer i = 1; i <= n; i++) {
         lua_rawgeti(L, 1, i);
@@ -173,12 +161,21 @@ static int l_list_dir(lua_State *L)
     return 1;
 }
 
+static int l_monotonic(lua_State *L)
+{
+    struct timespec t;
+    clock_gettime(CLOCK_MONOTONIC, &t);
+    lua_pushnumber(L, (lua_Number)t.tv_sec + 1e-9 * (lua_Number)t.tv_nsec);
+    return 1;
+}
+
 void px_lua_open_proc(lua_State *L)
 {
     static const luaL_Reg funcs[] = {
-        {"spawn", l_spawn},         {"wait", l_wait},       {"kill", l_kill},
+        {"fork", l_fork},           {"exit_now", l_exit_now}, {"wait", l_wait}, {"kill", l_kill},
         {"fd_write", l_fd_write},   {"fd_read", l_fd_read}, {"fd_close", l_fd_close},
         {"getpid", l_getpid},       {"getppid", l_getppid}, {"append_sync", l_append_sync},
-        {"truncate", l_truncate},   {"list_dir", l_list_dir}, {NULL, NULL}};
+        {"truncate", l_truncate},   {"list_dir", l_list_dir}, {"monotonic", l_monotonic},
+        {NULL, NULL}};
     luaL_setfuncs(L, funcs, 0);
 }

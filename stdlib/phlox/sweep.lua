@@ -270,26 +270,12 @@ local function open_journal(path, expected, done, where, readonly)
 end
 
 -- Worker processes ------------------------------------------------------------
--- The study script is started again per worker with PHLOX_SWEEP_FDS (its
--- pipe ends), PHLOX_SWEEP_ORDINAL (which sweep call of the script is the
--- parallel one) and PHLOX_SWEEP_PARENT.  The parent hands out one point
--- index at a time (dynamic work sharing); the worker answers with the
--- point's record.  Workers die with the parent (Linux parent-death signal,
--- and a parent check between points) and write no files of their own.
-
-local ordinal = 0   -- sweep calls so far in this process
-
-local function program_argv(where)
-  local script = rawget(_G, "arg") and arg[0]
-  if not script or script == "-" then
-    error(where .. ": workers need a study script file (not -e or stdin)", 3)
-  end
-  local lo = 0
-  while arg[lo - 1] do lo = lo - 1 end
-  local argv = {}
-  for k = lo, #arg do argv[#argv + 1] = arg[k] end
-  return argv
-end
+-- Workers are forked at the sweep call: each shares everything this process
+-- has loaded (element files parsed once, the libraries, fn itself).  The
+-- parent hands out one point index at a time over a pipe (dynamic work
+-- sharing); the worker answers with the point's record.  Workers die with
+-- the parent (Linux parent-death signal, and a parent check between
+-- points) and write no files of their own.
 
 local function worker_loop(points, fn, rfd, wfd, parent, where)
   local buf = ""
@@ -302,26 +288,29 @@ local function worker_loop(points, fn, rfd, wfd, parent, where)
       buf = buf .. chunk
     end
   end
-  while true do
-    local line = next_line()
-    if not line or line == "end" then break end
-    local k = math.tointeger(tonumber(line))
-    if not k or not points[k] then error(where .. ": worker got a bad point index " .. line, 0) end
-    local r, msg = fn(points[k])
-    local payload = encode({ r = r, m = r == nil and (msg ~= nil and tostring(msg) or false) or nil },
-                           ("%s point %d"):format(where, k))
-    if core.getppid() ~= parent then os.exit(1, true) end -- orphaned: stop
-    local ok = core.fd_write(wfd, record_text(k, payload))
-    if not ok then os.exit(1, true) end
+  local ok, err = pcall(function()
+    while true do
+      local line = next_line()
+      if not line or line == "end" then break end
+      local k = math.tointeger(tonumber(line))
+      if not k or not points[k] then error(where .. ": worker got a bad point index " .. line, 0) end
+      local r, msg = fn(points[k])
+      local payload = encode({ r = r, m = r == nil and (msg ~= nil and tostring(msg) or false) or nil },
+                             ("%s point %d"):format(where, k))
+      if core.getppid() ~= parent then core.exit_now(1) end -- orphaned: stop
+      if not core.fd_write(wfd, record_text(k, payload)) then core.exit_now(1) end
+    end
+  end)
+  if not ok then
+    io.stderr:write("phlox: ", tostring(err), "\n")
+    core.exit_now(1)
   end
-  os.exit(0, true) -- close the Lua state first (frees everything)
+  core.exit_now(0)
 end
 
 -- Run the points of `todo` (indices) on n workers; on_record(k, payload)
 -- for each finished point, in the order they finish.
-local function run_workers(points, todo, n, on_record, where, show, label)
-  local argv = program_argv(where)
-  local env = { "PHLOX_SWEEP_ORDINAL=" .. ordinal, "PHLOX_SWEEP_PARENT=" .. core.getpid() }
+local function run_workers(points, fn, todo, n, on_record, where, show, label)
   local workers = {}
   local function stop_all()
     for _, w in ipairs(workers) do
@@ -331,9 +320,14 @@ local function run_workers(points, todo, n, on_record, where, show, label)
     end
   end
   n = math.min(n, #todo)
+  local parent = core.getpid()
   for i = 1, n do
-    local pid, to, from = core.spawn(argv, env)
+    local pid, to, from = core.fork()
     if not pid then stop_all(); error(where .. ": cannot start worker " .. i .. ": " .. tostring(to), 0) end
+    if pid == 0 then -- the worker: drop the earlier workers' pipes, serve points
+      for _, w in ipairs(workers) do core.fd_close(w.to); core.fd_close(w.from) end
+      worker_loop(points, fn, from, to, parent, where)
+    end
     workers[i] = { pid = pid, to = to, from = from, buf = "", id = i }
   end
   local nxt, done, total = 1, 0, #todo
@@ -441,18 +435,9 @@ end
 
 -- opts: journal, workers, quiet, label.  Returns results, failures.
 local function execute(points, fn, opts, where)
-  ordinal = ordinal + 1
   local label = opts.label or "sweep"
-  local fds = os.getenv("PHLOX_SWEEP_FDS")
-  local worker = fds and tonumber(os.getenv("PHLOX_SWEEP_ORDINAL")) == ordinal
-  local in_worker = fds ~= nil
-  if worker then
-    local r, w = fds:match("^(%d+),(%d+)$")
-    worker_loop(points, fn, tonumber(r), tonumber(w), tonumber(os.getenv("PHLOX_SWEEP_PARENT")), where)
-  end
   local nworkers = opts.workers or 1
   if math.type(nworkers) ~= "integer" or nworkers < 1 then error(where .. ": workers must be an integer >= 1", 3) end
-  if in_worker then nworkers = 1 end -- an earlier sweep, rerun inside a worker
   local journal = opts.journal
   if journal == nil and (nworkers == 1 or #points < 2) then return run_plain(points, fn, opts) end
   if journal ~= nil and type(journal) ~= "string" then error(where .. ": journal must be a file path", 3) end
@@ -463,7 +448,7 @@ local function execute(points, fn, opts, where)
   if journal then
     local expected = header_lines(points, where)
     path = journal
-    if os.getenv("PHLOX_MERGE") and not in_worker then
+    if os.getenv("PHLOX_MERGE") then
       local n = fold_shards(journal, expected, done, where)
       read_journal(journal, expected, done, where)
       local missing
@@ -483,12 +468,11 @@ local function execute(points, fn, opts, where)
       local complete = true
       for k = 1, #points do if not done[k] then complete = false; break end end
       shard_i, shard_n = shard_spec()
-      if shard_i and not complete and not in_worker then
+      if shard_i and not complete then
         path = shard_path(journal, shard_i, shard_n)
         done = {}
         open_journal(path, expected, done, where, false)
       elseif not complete then
-        if in_worker then error(where .. ": a worker reached a sweep its parent did not finish (" .. journal .. ")", 0) end
         open_journal(path, expected, done, where, false)
       end
     end
@@ -507,7 +491,7 @@ local function execute(points, fn, opts, where)
   end
   if #todo > 0 then
     if nworkers > 1 and #todo > 1 then
-      run_workers(points, todo, nworkers, on_record, where, show, label)
+      run_workers(points, fn, todo, nworkers, on_record, where, show, label)
     else
       for i, k in ipairs(todo) do
         local r, msg = fn(points[k])
@@ -548,11 +532,10 @@ function sweep.run(points, fn, opts)
   return execute(points, fn, opts, "sweep.run")
 end
 
---- sweep.run on opts.workers worker processes (default 1): the study
--- script is started again once per worker and reaches this call, where the
--- worker takes points one at a time from this process.  Results and
--- failures come back in point order, bit for bit as sweep.run returns them.
--- The script must reach the call deterministically.
+--- sweep.run on opts.workers worker processes (default 1), forked here:
+-- they share what this process has loaded and take points one at a time.
+-- Results and failures come back in point order, bit for bit as sweep.run
+-- returns them.
 function sweep.parallel(points, fn, opts)
   opts = opts or {}
   assert(type(points) == "table", "sweep.parallel: points must be a list")
