@@ -6,7 +6,8 @@
 --   * every CSV starts with the provenance of its own results (program,
 --     source revision, script, each data file with a SHA-256 equal to that
 --     of coreutils' `sha256sum`) and the caution, then rectangular rows;
---   * every SVG carries the caution in its <desc>, PNG files the PNG
+--   * every SVG carries the caution in its <desc> and writes its coordinates
+--     with at most three decimals (compact; 0.001 pt), PNG files the PNG
 --     signature (ISO/IEC 15948:2004, 5.2);
 --   * every map boundary has the Nernst slope dE/dpH = -(RT ln10/F) nH/ne of
 --     the reaction printed beside it (CODATA 2018 R and F), and each map's
@@ -141,6 +142,8 @@ local function checks()
       if name:match("%.svg$") then
         local desc = s:match("<desc>(.-)</desc>") or ""
         check(desc:find("what can form, not how fast", 1, true), name .. ": the caution in the SVG <desc>")
+        local drawing = s:gsub("<desc>.-</desc>", ""):gsub("<title>.-</title>", "")
+        check(not drawing:find("%d%.%d%d%d%d"), name .. ": coordinates carry at most three decimals (0.001 pt)")
       elseif name:match("%.png$") then
         check(s:sub(1, 8) == "\137PNG\r\n\26\n", name .. ": PNG signature")
       elseif name:match("%.csv$") then
