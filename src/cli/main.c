@@ -38,6 +38,7 @@ static void usage(FILE *out)
           "                       run SCRIPT with its sweeps taken from the shard\n"
           "                       journals of earlier --shard runs: writes what a\n"
           "                       serial run writes\n"
+          "  (phlox COMMAND --help describes a command)\n"
           "\n"
           "options:\n"
           "  -e CODE              run CODE (may be given more than once)\n"
@@ -49,6 +50,11 @@ static void usage(FILE *out)
           "                       also PHLOX_SHARD=I/N), then stop; see merge\n"
           "  -v, --version        print the version and source revision\n"
           "  -h, --help           print this help\n"
+          "  --                   end of options (the next argument is the script)\n"
+          "\n"
+          "environment:\n"
+          "  PHLOX_PATH           ':'-separated folders searched after the --path ones\n"
+          "  PHLOX_SHARD          I/N: as --shard\n"
           "\n"
           "A thermodynamic diagram says what can form, not how fast it forms.\n",
           out);
