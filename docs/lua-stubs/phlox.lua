@@ -9,6 +9,9 @@
 ---@field version string
 local phlox = {}
 
+---@class phlox.constant_logk.opts
+---@field cache? any
+
 ---@class phlox.grid_map.opts
 ---@field E_range? number[]
 ---@field P? number
@@ -95,12 +98,15 @@ local phlox = {}
 ---@return any
 function phlox.available_elements() end
 
+--- The answer is kept per library, elements, T and P (a sweep asks the same
+--- question for every ligand level); opts.cache = false recomputes it.
 ---@param lib phlox.Library
 ---@param elements any
 ---@param T number
 ---@param P? number
+---@param opts phlox.constant_logk.opts
 ---@return any
-function phlox.constant_logk(lib, elements, T, P) end
+function phlox.constant_logk(lib, elements, T, P, opts) end
 
 --- Reference electrodes: name -> { name, offset (V vs SHE at 25 C), source }.
 ---@return any

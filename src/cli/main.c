@@ -294,7 +294,19 @@ int main(int argc, char **argv)
     if (code == PX_EXIT_OK && script && strcmp(argv[script], "merge") == 0) {
         /* phlox merge SCRIPT args: the script runs with its sweeps read from
          * the shard journals (phlox.sweep, PHLOX_MERGE) */
-        if (script + 1 >= argc) {
+        if (script + 1 < argc && (strcmp(argv[script + 1], "--help") == 0 ||
+                                  strcmp(argv[script + 1], "-h") == 0)) {
+            fputs("usage: phlox merge SCRIPT.lua [args...]\n"
+                  "\n"
+                  "Runs SCRIPT with its journaled sweeps taken from the shard journals that\n"
+                  "earlier runs with --shard I/N (or PHLOX_SHARD=I/N) wrote: nothing is\n"
+                  "computed again, and the script writes exactly what a serial run writes.\n"
+                  "A shard missing or unfinished stops the merge and is named.\n"
+                  "\n"
+                  "  SCRIPT.lua [args...]  the study and its arguments, as the shards ran it\n"
+                  "  -h, --help            print this help\n",
+                  stdout);
+        } else if (script + 1 >= argc) {
             fputs("phlox: merge needs the study script: phlox merge SCRIPT.lua [args...]\n", stderr);
             code = PX_EXIT_USAGE;
         } else {

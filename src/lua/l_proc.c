@@ -32,6 +32,7 @@ static int push_fail(lua_State *L, const char *what, int st, int err)
     return 2;
 }
 
+/* core.fork() -> pid, to_fd, from_fd (pid 0 in the worker) | nil, message */
 static int l_fork(lua_State *L)
 {
     pid_t pid;
@@ -44,12 +45,14 @@ static int l_fork(lua_State *L)
     return 3;
 }
 
+/* core.exit_now([code]) leaves a forked worker at once */
 static int l_exit_now(lua_State *L)
 {
     px_proc_exit((int)luaL_optinteger(L, 1, 0));
     return 0;
 }
 
+/* core.wait(pid) -> exit code (128 + signal when killed) | nil, message */
 static int l_wait(lua_State *L)
 {
     int code = 0, err = 0;
@@ -59,6 +62,7 @@ static int l_wait(lua_State *L)
     return 1;
 }
 
+/* core.kill(pid) -> boolean (SIGKILL to a worker this process started) */
 static int l_kill(lua_State *L)
 {
     lua_Integer pid = luaL_checkinteger(L, 1);
@@ -67,6 +71,7 @@ static int l_kill(lua_State *L)
     return 1;
 }
 
+/* core.fd_write(fd, text) -> true | nil, message */
 static int l_fd_write(lua_State *L)
 {
     int fd = (int)luaL_checkinteger(L, 1);
@@ -79,6 +84,7 @@ static int l_fd_write(lua_State *L)
     return 1;
 }
 
+/* core.fd_read({fd...}) -> k, bytes ("" at end of file) | nil, message */
 static int l_fd_read(lua_State *L)
 {
     luaL_checktype(L, 1, LUA_TTABLE);
@@ -102,24 +108,28 @@ static int l_fd_read(lua_State *L)
     return 2;
 }
 
+/* core.fd_close(fd) */
 static int l_fd_close(lua_State *L)
 {
     close((int)luaL_checkinteger(L, 1));
     return 0;
 }
 
+/* core.getpid() -> process id */
 static int l_getpid(lua_State *L)
 {
     lua_pushinteger(L, (lua_Integer)getpid());
     return 1;
 }
 
+/* core.getppid() -> parent process id */
 static int l_getppid(lua_State *L)
 {
     lua_pushinteger(L, (lua_Integer)getppid());
     return 1;
 }
 
+/* core.append_sync(path, text) -> true | nil, message (appended and synced) */
 static int l_append_sync(lua_State *L)
 {
     const char *path = luaL_checkstring(L, 1);
@@ -132,6 +142,7 @@ static int l_append_sync(lua_State *L)
     return 1;
 }
 
+/* core.truncate(path, size) -> true | nil, message */
 static int l_truncate(lua_State *L)
 {
     const char *path = luaL_checkstring(L, 1);
@@ -144,6 +155,7 @@ static int l_truncate(lua_State *L)
     return 1;
 }
 
+/* core.list_dir(path) -> {name...} sorted | nil, message */
 static int l_list_dir(lua_State *L)
 {
     const char *path = luaL_checkstring(L, 1);
@@ -161,6 +173,7 @@ static int l_list_dir(lua_State *L)
     return 1;
 }
 
+/* core.monotonic() -> seconds of a monotonic clock */
 static int l_monotonic(lua_State *L)
 {
     struct timespec t;

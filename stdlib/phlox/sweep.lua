@@ -543,7 +543,5 @@ function sweep.parallel(points, fn, opts)
   return execute(points, fn, opts, "sweep.parallel")
 end
 
--- for tests: the journal record format
-sweep._encode, sweep._decode = encode, decode
 
 return sweep

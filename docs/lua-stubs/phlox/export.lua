@@ -9,15 +9,20 @@ local phlox_export = {}
 ---@class phlox_export.csv.opts
 ---@field columns? any
 ---@field conditions? any
+---@field from? any
 
 ---@class phlox_export.json.opts
 ---@field caution? any
 ---@field conditions? any
 ---@field data? any
+---@field from? any
 ---@field provenance? any
 
 --- Write rows (a sequence of tables keyed by column name) as CSV.
---- opts.columns: the column order (required); opts.conditions: stamped.
+--- opts.columns: the column order (required); opts.conditions: stamped;
+--- opts.from: the results the rows come from (a result or a list): their
+--- own data files, conditions and options are stamped (without it, every
+--- input the run read, marked as such).
 ---@param path string
 ---@param rows any
 ---@param opts phlox_export.csv.opts
@@ -25,6 +30,7 @@ local phlox_export = {}
 function phlox_export.csv(path, rows, opts) end
 
 --- Write a value as JSON: { provenance = ..., caution = ..., data = value }.
+--- opts.conditions, opts.from as export.csv.
 ---@param path string
 ---@param value any
 ---@param opts phlox_export.json.opts

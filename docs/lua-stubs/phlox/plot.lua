@@ -9,6 +9,7 @@ local phlox_plot = {}
 
 ---@class phlox_plot.curves.opts
 ---@field conditions? any
+---@field from? any
 ---@field legend? any
 ---@field stamp? any
 ---@field title? string
@@ -47,6 +48,7 @@ local phlox_plot = {}
 ---@field water? any
 
 ---@class phlox_plot.stamp_lines.opts
+---@field from? any
 ---@field no_script? any
 
 --- Check a map table; raises an error naming the offending field.
@@ -61,7 +63,7 @@ function phlox_plot.check_map(map, where) end
 --- chem = false }, ... }.  Labels without spaces are set as formulas.
 --- opts: x = { name, unit, min, max, log }, y = { ... }, title, legend =
 --- "outside" (default) | "top right" | ... | false, conditions, stamp, file,
---- width, height, dpi.
+--- width, height, dpi, from (the results drawn: their data files are stamped).
 ---@param series any
 ---@param opts? phlox_plot.curves.opts
 ---@return any
@@ -129,8 +131,9 @@ function phlox_plot.overlay(maps, opts) end
 ---@return any
 function phlox_plot.shared_fills(maps) end
 
---- The stamp lines of a figure: conditions, program and checksums, extra
---- lines, the caution; wrapped to the figure width.
+--- The stamp lines of a figure: conditions, program, revision and
+--- checksums, extra lines, the caution; wrapped to the figure width.
+--- opts.from: the results drawn (their own data files are stamped).
 ---@param conditions any
 ---@param extra? any
 ---@param width number
