@@ -136,14 +136,18 @@ function provenance.stamp(conditions, from)
   }
 end
 
+--- The order of table keys in stamps and journals: numbers first, then
+-- strings, each ascending.
+function provenance.key_order(a, b)
+  if type(a) == type(b) then return a < b end
+  return type(a) == "number"
+end
+
 local function compact(v)
   if type(v) ~= "table" then return tostring(v) end
   local keys = {}
   for k in pairs(v) do keys[#keys + 1] = k end
-  table.sort(keys, function(a, b)
-    if type(a) == type(b) then return a < b end
-    return type(a) == "number"
-  end)
+  table.sort(keys, provenance.key_order)
   local parts = {}
   for _, k in ipairs(keys) do
     parts[#parts + 1] = (math.type(k) == "integer" and "" or (tostring(k) .. "=")) .. compact(v[k])

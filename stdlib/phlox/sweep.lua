@@ -78,10 +78,9 @@ function sweep.shard(points, i, n)
   return out
 end
 
---- Run fn(point) over the points; returns the results in point order.
+-- sweep.run without journal or workers: fn's results as they are.
 -- Shows progress on a terminal (stderr), stays quiet in CI (CI set) or when
--- opts.quiet.  fn may return nil, message to record a failure; failures are
--- collected in the second result rather than stopping the sweep.
+-- opts.quiet.
 local function run_plain(points, fn, opts)
   local show = not opts.quiet and not os.getenv("CI") and core.isatty and core.isatty(2)
   local results, failures = {}, {}
@@ -123,10 +122,7 @@ local function serialise(v, out, where)
   elseif t == "table" then
     local keys = {}
     for k in pairs(v) do keys[#keys + 1] = k end
-    table.sort(keys, function(a, b)
-      if type(a) == type(b) then return a < b end
-      return type(a) == "number"
-    end)
+    table.sort(keys, provenance.key_order)
     out[#out + 1] = "{"
     for _, k in ipairs(keys) do
       out[#out + 1] = "["
@@ -517,6 +513,13 @@ local function execute(points, fn, opts, where)
   return results, failures
 end
 
+local function checked(points, fn, opts, where)
+  if type(points) ~= "table" then error(where .. ": points must be a list", 3) end
+  if type(fn) ~= "function" then error(where .. ": fn must be a function", 3) end
+  if opts ~= nil and type(opts) ~= "table" then error(where .. ": opts must be a table", 3) end
+  return opts or {}
+end
+
 --- Run fn(point) over the points; returns the results in point order and
 -- the failures ({ index, point, message }: fn returned nil, message).
 -- opts.quiet, opts.label (progress on a terminal), opts.workers (several
@@ -526,10 +529,7 @@ end
 -- them).  With a journal or workers, results must be plain data (numbers,
 -- strings, booleans, tables of them).
 function sweep.run(points, fn, opts)
-  opts = opts or {}
-  assert(type(points) == "table", "sweep.run: points must be a list")
-  assert(type(fn) == "function", "sweep.run: fn must be a function")
-  return execute(points, fn, opts, "sweep.run")
+  return execute(points, fn, checked(points, fn, opts, "sweep.run"), "sweep.run")
 end
 
 --- sweep.run on opts.workers worker processes (default 1), forked here:
@@ -537,11 +537,7 @@ end
 -- Results and failures come back in point order, bit for bit as sweep.run
 -- returns them.
 function sweep.parallel(points, fn, opts)
-  opts = opts or {}
-  assert(type(points) == "table", "sweep.parallel: points must be a list")
-  assert(type(fn) == "function", "sweep.parallel: fn must be a function")
-  return execute(points, fn, opts, "sweep.parallel")
+  return execute(points, fn, checked(points, fn, opts, "sweep.parallel"), "sweep.parallel")
 end
-
 
 return sweep

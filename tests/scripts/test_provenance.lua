@@ -11,23 +11,9 @@ local plot = require "phlox.plot"
 local export = require "phlox.export"
 local core = require "phlox.core"
 
-local BIN = assert(os.getenv("PHLOX_BIN"), "PHLOX_BIN is not set (run through ctest)")
-local SRC = assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
-
-local function check(cond, msg) if not cond then error(msg, 2) end end
-local function q(s) return "'" .. tostring(s):gsub("'", "'\\''") .. "'" end
-local function read(p)
-  local f = assert(io.open(p, "rb"))
-  local s = f:read("a")
-  f:close()
-  return s
-end
-local function sha256sum(p)
-  local h = io.popen("sha256sum " .. q(p))
-  local s = h:read("a")
-  h:close()
-  return s:match("^(%x+)")
-end
+local t = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
+                 .. "/tests/scripts/lib/common.lua")
+local BIN, SRC, check, q, read, sha256sum = t.BIN, t.SRC, t.check, t.quote, t.read, t.sha256sum
 local function names(files)
   local t = {}
   for _, d in ipairs(files) do t[#t + 1] = d.file end
@@ -72,9 +58,7 @@ check(names(fr.provenance.files) == "stdlib/elements/HO.lua stdlib/elements/Zn.l
       "Zn fractions: " .. names(fr.provenance.files))
 
 -- Outputs: the zinc figure and table name Zn.lua, not Cu.lua or Cl.lua.
-local dir = os.tmpname()
-os.remove(dir)
-assert(os.execute("mkdir -p " .. q(dir)))
+local dir = t.tmpdir()
 local ok, err = pcall(function()
   plot.map(zn, { file = dir .. "/zn.svg" })
   local svg = read(dir .. "/zn.svg")

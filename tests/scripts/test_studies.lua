@@ -15,25 +15,9 @@
 --   * the leach study, a resumable sweep on two worker processes, rerun in
 --     the same folder on one process, rewrites the same bytes.
 -- Environment (tests/CMakeLists.txt): PHLOX_BIN, PHLOX_SOURCE_DIR.
-local BIN = assert(os.getenv("PHLOX_BIN"), "PHLOX_BIN is not set (run through ctest)")
-local SRC = assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
-local R, F = 8.314462618, 96485.33212 -- CODATA 2018
-
-local function check(cond, msg) if not cond then error(msg, 2) end end
-local function q(s) return "'" .. tostring(s):gsub("'", "'\\''") .. "'" end
-local function read(p)
-  local f = io.open(p, "rb")
-  if not f then return nil end
-  local s = f:read("a")
-  f:close()
-  return s
-end
-local function sha256sum(p)
-  local h = io.popen("sha256sum " .. q(p))
-  local s = h:read("a")
-  h:close()
-  return s:match("^(%x+)")
-end
+local t = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
+                 .. "/tests/scripts/lib/common.lua")
+local BIN, SRC, check, q, read, sha256sum = t.BIN, t.SRC, t.check, t.quote, t.read, t.sha256sum
 
 local STUDIES = {
   { script = "geothermal_steel.lua", min_files = 9, maps = true },
@@ -42,28 +26,7 @@ local STUDIES = {
   { script = "lead_water_main.lua", min_files = 8, maps = true },
 }
 
-local function parse_csv_line(line)
-  local cells, i, n = {}, 1, #line
-  while i <= n + 1 do
-    if line:sub(i, i) == '"' then
-      local buf, j = {}, i + 1
-      while true do
-        local c = line:sub(j, j)
-        check(c ~= "", "unterminated quote in: " .. line)
-        if c == '"' then
-          if line:sub(j + 1, j + 1) == '"' then buf[#buf + 1] = '"'; j = j + 2 else j = j + 1; break end
-        else buf[#buf + 1] = c; j = j + 1 end
-      end
-      cells[#cells + 1] = table.concat(buf)
-      i = j + 1
-    else
-      local j = line:find(",", i, true) or (n + 1)
-      cells[#cells + 1] = line:sub(i, j - 1)
-      i = j + 1
-    end
-  end
-  return cells
-end
+local parse_csv_line = t.parse_csv_line
 
 local function read_csv(text, name)
   local lines = {}
@@ -93,20 +56,6 @@ local function read_csv(text, name)
   end
   check(#rows > 0, name .. ": has rows")
   return rows
-end
-
--- Coefficient of a species in "a A + b B = c C": positive on the left.
-local function coefficient(reaction, species)
-  local lhs, rhs = reaction:match("^(.-) = (.*)$")
-  local total = 0
-  for side, sign in pairs({ [lhs] = 1, [rhs] = -1 }) do
-    for term in (side .. " + "):gmatch("(.-) %+ ") do
-      local n, f = term:match("^(%d+) (.+)$")
-      if not n then n, f = 1, term end
-      if f == species then total = total + sign * tonumber(n) end
-    end
-  end
-  return total
 end
 
 local dirs = {}
@@ -150,9 +99,8 @@ local function checks()
         local rows = read_csv(s, name)
         if name:match("^boundaries%-") then
           for i, b in ipairs(rows) do
-            local nH, ne = coefficient(b.reaction, "H^+"), coefficient(b.reaction, "e-")
-            if ne ~= 0 then
-              local want = -R * (tonumber(b.T_C) + 273.15) * math.log(10) / F * nH / ne
+            local want = t.nernst_slope(b.reaction, tonumber(b.T_C))
+            if want then
               check(math.abs(tonumber(b.slope_V_per_pH) - want) < 1e-9,
                     ("%s row %d (%s): slope %s, Nernst %.9g"):format(name, i, b.reaction, b.slope_V_per_pH, want))
               nernst = nernst + 1

@@ -17,8 +17,9 @@
 -- PHLOX_SOURCE_DIR.
 local core = require "phlox.core"
 
-local BIN = assert(os.getenv("PHLOX_BIN"), "PHLOX_BIN is not set (run through ctest)")
-local SRC = assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
+local t = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
+                 .. "/tests/scripts/lib/common.lua")
+local BIN, SRC, check, q, read, write = t.BIN, t.SRC, t.check, t.quote, t.read, t.write
 local STUDY = SRC .. "/tests/fixtures/sweep_study.lua"
 local POINTS = 24
 
@@ -26,29 +27,8 @@ local seed = tonumber(os.getenv("PHLOX_TEST_SEED") or "") or os.time()
 math.randomseed(seed)
 print("test_sweep_resume: seed " .. seed)
 
-local function check(cond, msg) if not cond then error(msg, 2) end end
-local function q(s) return "'" .. tostring(s):gsub("'", "'\\''") .. "'" end
-local function read(p)
-  local f = io.open(p, "rb")
-  if not f then return nil end
-  local s = f:read("a")
-  f:close()
-  return s
-end
-local function write(p, s)
-  local f = assert(io.open(p, "wb"))
-  f:write(s)
-  f:close()
-end
-
 local dirs = {}
-local function tmpdir()
-  local name = os.tmpname()
-  os.remove(name)
-  check(os.execute("mkdir -p " .. q(name)), "cannot create " .. name)
-  dirs[#dirs + 1] = name
-  return name
-end
+local function tmpdir() return t.tmpdir(dirs) end
 
 -- Run the study to the end; returns ok, output.
 local function run(dir, workers, extra, script)

@@ -10,29 +10,14 @@
 -- Environment (tests/CMakeLists.txt): PHLOX_BIN, PHLOX_SOURCE_DIR.
 local core = require "phlox.core"
 
-local BIN = assert(os.getenv("PHLOX_BIN"), "PHLOX_BIN is not set (run through ctest)")
-local SRC = assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
+local t = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
+                 .. "/tests/scripts/lib/common.lua")
+local BIN, SRC, check, q, read = t.BIN, t.SRC, t.check, t.quote, t.read
 local STUDY = SRC .. "/tests/fixtures/sweep_study.lua"
 local POINTS = 24
 
-local function check(cond, msg) if not cond then error(msg, 2) end end
-local function q(s) return "'" .. tostring(s):gsub("'", "'\\''") .. "'" end
-local function read(p)
-  local f = io.open(p, "rb")
-  if not f then return nil end
-  local s = f:read("a")
-  f:close()
-  return s
-end
-
 local dirs = {}
-local function tmpdir()
-  local name = os.tmpname()
-  os.remove(name)
-  check(os.execute("mkdir -p " .. q(name)), "cannot create " .. name)
-  dirs[#dirs + 1] = name
-  return name
-end
+local function tmpdir() return t.tmpdir(dirs) end
 
 local function sh(cmd, log)
   local ok = os.execute(cmd .. " > " .. q(log) .. " 2>&1")

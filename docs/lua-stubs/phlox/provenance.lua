@@ -15,6 +15,13 @@ function phlox_provenance.comment_lines(stamp, prefix) end
 ---@return any
 function phlox_provenance.inputs() end
 
+--- The order of table keys in stamps and journals: numbers first, then
+--- strings, each ascending.
+---@param a any
+---@param b any
+---@return any
+function phlox_provenance.key_order(a, b) end
+
 --- The provenance of a result built from `lib` (a phlox.Library) for the
 --- elements named (H and O always count): the files that define a species
 --- made only of those elements, with their checksums, plus the conditions

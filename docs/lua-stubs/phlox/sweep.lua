@@ -25,7 +25,7 @@ function phlox_sweep.log(a, b, n) end
 --- returns them.
 ---@param points any
 ---@param fn any
----@param opts? table
+---@param opts table
 ---@return any
 function phlox_sweep.parallel(points, fn, opts) end
 
@@ -46,7 +46,7 @@ function phlox_sweep.product(...) end
 --- strings, booleans, tables of them).
 ---@param points any
 ---@param fn any
----@param opts? table
+---@param opts table
 ---@return any
 function phlox_sweep.run(points, fn, opts) end
 
