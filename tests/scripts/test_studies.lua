@@ -17,7 +17,7 @@
 -- Environment (tests/CMakeLists.txt): PHLOX_BIN, PHLOX_SOURCE_DIR.
 local t = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
                  .. "/tests/scripts/lib/common.lua")
-local BIN, SRC, check, q, read, sha256sum = t.BIN, t.SRC, t.check, t.quote, t.read, t.sha256sum
+local BIN, SRC, check, q, read = t.BIN, t.SRC, t.check, t.quote, t.read
 
 local STUDIES = {
   { script = "geothermal_steel.lua", min_files = 9, maps = true },
@@ -26,35 +26,14 @@ local STUDIES = {
   { script = "lead_water_main.lua", min_files = 8, maps = true },
 }
 
-local parse_csv_line = t.parse_csv_line
-
 local function read_csv(text, name)
-  local lines = {}
-  for l in text:gmatch("([^\n]*)\n") do lines[#lines + 1] = l end
-  local k, header = 1, {}
-  while lines[k] and lines[k]:sub(1, 1) == "#" do header[#header + 1] = lines[k]; k = k + 1 end
-  local h = table.concat(header, "\n")
+  local h, _, rows, nfiles = t.read_csv(text, name)
   check(h:find("^# program: phlox "), name .. ": provenance starts with the program")
   check(h:find("\n# revision: ", 1, true), name .. ": the source revision")
   check(h:find("\n# script: [^\n]*%.lua sha256=%x+"), name .. ": script and its checksum")
   check(h:find("what can form, not how fast", 1, true), name .. ": caution")
   check(not h:find("every input read by this run", 1, true), name .. ": stamps its own results' files")
-  local nfiles = 0
-  for file, sum in h:gmatch("# data: (%S+) sha256=(%x+)") do
-    nfiles = nfiles + 1
-    check(sha256sum(SRC .. "/" .. file) == sum, name .. ": checksum of " .. file .. " differs from sha256sum")
-  end
   check(nfiles >= 2, name .. ": at least HO.lua and the metal's file")
-  local cols = parse_csv_line(lines[k])
-  local rows = {}
-  for i = k + 1, #lines do
-    local cells = parse_csv_line(lines[i])
-    check(#cells == #cols, ("%s line %d: %d cells, not %d"):format(name, i, #cells, #cols))
-    local row = {}
-    for c, v in ipairs(cells) do row[cols[c]] = v end
-    rows[#rows + 1] = row
-  end
-  check(#rows > 0, name .. ": has rows")
   return rows
 end
 

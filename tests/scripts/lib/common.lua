@@ -69,6 +69,38 @@ function t.parse_csv_line(line)
   return cells
 end
 
+--- A stamped CSV file's text -> its "#" header (one string), column
+-- names and rows (tables by column name); checks that the rows are
+-- rectangular and that every data file's SHA-256 in the header equals
+-- sha256sum's of the file under PHLOX_SOURCE_DIR.  Returns also the
+-- number of data files stamped.
+function t.read_csv(text, name)
+  local lines = {}
+  for l in text:gmatch("([^\n]*)\n") do lines[#lines + 1] = l end
+  local k, header = 1, {}
+  while lines[k] and lines[k]:sub(1, 1) == "#" do header[#header + 1] = lines[k]; k = k + 1 end
+  local htext = table.concat(header, "\n")
+  local nfiles = 0
+  for file, sum in htext:gmatch("# data: (%S+) sha256=(%x+)") do
+    nfiles = nfiles + 1
+    t.check(#sum == 64, name .. ": sha256 of " .. file .. " has 64 hex digits")
+    local real = t.SRC .. "/" .. file   -- embedded copies are recorded as stdlib/...
+    t.check(t.sha256sum(real) == sum, name .. ": checksum of " .. file .. " differs from sha256sum")
+  end
+  t.check(lines[k], name .. ": no column line after the header")
+  local cols = t.parse_csv_line(lines[k])
+  local rows = {}
+  for i = k + 1, #lines do
+    local cells = t.parse_csv_line(lines[i])
+    t.check(#cells == #cols, ("%s line %d has %d cells, not %d"):format(name, i, #cells, #cols))
+    local row = {}
+    for c, v in ipairs(cells) do row[cols[c]] = v end
+    rows[#rows + 1] = row
+  end
+  t.check(#rows > 0, name .. ": has rows")
+  return htext, cols, rows, nfiles
+end
+
 --- Coefficient of a species in "a A + b B = c C": positive on the left.
 function t.coefficient(reaction, species)
   local lhs, rhs = reaction:match("^(.-) = (.*)$")
