@@ -29,6 +29,7 @@ set(PHLOX_PUBLIC_HEADERS_core
     core/atomic.h=atomic core/sha256.h=sha256
     water/water.h=water
     thermo/species.h=species thermo/thermo.h=thermo thermo/basis.h=basis
+    thermo/practice.h=practice
     equil/equil.h=equil equil/speciate.h=speciate
     diagram/diagram.h=diagram diagram/emap.h=emap diagram/rmap.h=rmap)
 set(PHLOX_PUBLIC_HEADERS_data data/data.h=data)

@@ -4,8 +4,11 @@
 
 ---@class phlox
 ---@field Library phlox.Library
+---@field activity_ranges table
 ---@field caution string
 ---@field core phlox.core
+---@field electrode_names table
+---@field sour_caution string
 ---@field version string
 local phlox = {}
 
@@ -18,11 +21,14 @@ local phlox = {}
 ---@field T? number
 ---@field T_C? number
 ---@field activity? any
+---@field allow_inhibited? any
 ---@field background_nacl? any
 ---@field element? string
 ---@field exclude? string[]
+---@field failed_boundaries? any
 ---@field library? phlox.Library
 ---@field ligand? string
+---@field ligand_redox? any
 ---@field ligand_total? number
 ---@field n? integer
 ---@field nx? any
@@ -51,6 +57,7 @@ local phlox = {}
 ---@field library? phlox.Library
 ---@field ligand? string
 ---@field ligand_activity? number
+---@field ligand_redox? any
 ---@field only? string[]
 ---@field pH? number
 ---@field pH_range? number[]
@@ -61,17 +68,25 @@ local phlox = {}
 ---@field T? number
 ---@field T_C? number
 ---@field activity? any
+---@field allow_inhibited? any
 ---@field exclude? string[]
 ---@field fixed? table<string, number>
 ---@field fugacities? table<string, number>
 ---@field library? phlox.Library
+---@field ligand_redox? any
 ---@field pH? number
 ---@field pe? number
 ---@field redox_gas? any
 ---@field redox_log_f? any
+---@field require_temperature_data? any
 ---@field solids? boolean
 ---@field suppress? string[]
 ---@field totals? table<string, number>
+
+---@class phlox.to_she.opts
+---@field T? number
+---@field T_C? number
+---@field reference_at_25C? any
 
 ---@class phlox.water.opts
 ---@field P? number
@@ -94,6 +109,14 @@ local phlox = {}
 ---@field T? number
 ---@field T_C? number
 
+--- The activity model at ionic strength I (mol/kg): { model, ionic_strength,
+--- max, in_range, source, text }; a model used beyond its range is warned
+--- about once on stderr.
+---@param model any
+---@param I any
+---@return any
+function phlox.activity_range(model, I) end
+
 --- The elements whose definition files the library has (built-in and user).
 ---@return any
 function phlox.available_elements() end
@@ -108,7 +131,28 @@ function phlox.available_elements() end
 ---@return any
 function phlox.constant_logk(lib, elements, T, P, opts) end
 
---- Reference electrodes: name -> { name, offset (V vs SHE at 25 C), source }.
+--- The reference electrode record for a short or full name (errors name
+--- the known ones).
+---@param name string
+---@return any
+function phlox.electrode(name) end
+
+--- The offset (V vs SHE) of an electrode at temperature T (K) and a record
+--- of how it was found: { name, offset, T, corrected, valid, text }.
+--- Between T_min and T_max the 25 °C offset is corrected with the
+--- electrode's temperature coefficient (its source in the text); elsewhere
+--- it refuses, unless at_25C is set (the electrode kept at room temperature
+--- outside the hot test, thermal junction potential not included).
+---@param name string
+---@param T? number
+---@param at_25C? any
+---@param where? any
+---@return any
+function phlox.electrode_at(name, T, at_25C, where) end
+
+--- Reference electrodes: name -> { name, offset (V vs SHE at 25 C), dEdT
+--- (V/K, the electrode at the test temperature), T_min, T_max (K, where
+--- dEdT is used), source, dEdT_source }.
 ---@return any
 function phlox.electrodes() end
 
@@ -124,7 +168,9 @@ function phlox.fractions(opts) end
 ---   phlox.grid_map { library = lib, element = "Cu", T_C = 25, total = 1e-6,
 ---                    ligand = "Cl", ligand_total = 1e-2, n = 201,
 ---                    pH_range = {0, 14}, E_range = {-2, 2},
----                    activity = "davies", threads = 2 }
+---                    activity = "davies", threads = 2,
+---                    ligand_redox = {...}, allow_inhibited = false,
+---                    failed_boundaries = false }  -- draw boundaries next to failed solves
 --- Returns a map table with `boundaries` (polylines between named species),
 --- `fields` = {} (no polygons: draw it with phlox.plot.overlay next to an
 --- exact map), `labels` (node labels), `species` and solver statistics.
@@ -153,10 +199,22 @@ function phlox.locate(map, x, y) end
 ---   phlox.map { library = lib, element = "Fe", T_C = 25,
 ---               pH_range = {0, 14}, E_range = {-2, 2}, activity = 1e-6,
 ---               ligand = "S", ligand_activity = 1e-3, ionic_strength = 0,
----               exclude = {"Fe3O4(s)"}, axes = {"pH", "E"} }
+---               exclude = {"Fe3O4(s)"}, axes = {"pH", "E"},
+---               ligand_redox = { N = "full", S = "sulfate" } }
+--- ligand_redox: per ligand "full" (true), "kept" (false) or a form name
+--- (docs/solver.md "What practice keeps out"; N and C kept, S full by
+--- default).  The map's `stamp` and `notes` carry every caveat.
 ---@param opts phlox.map.opts
 ---@return any
 function phlox.map(opts) end
+
+--- The stamp lines of several results (the solves of a curve or a sweep):
+--- each caveat once, skipping the keys in `skip`; the activity line of the
+--- largest ionic strength first.
+---@param results any
+---@param skip any
+---@return any
+function phlox.merge_notes(results, skip) end
 
 --- Read a library file: the user's folders first, then the embedded copy.
 --- `rel` is a path relative to a library root, e.g. "elements/Zn.lua".
@@ -185,7 +243,9 @@ function phlox.solubility(opts) end
 ---     fugacities = { ["CO2(g)"] = -3.4 },      -- log10 bar, replaces that element's total
 ---     fixed = { ["Cl^-"] = -2 },               -- log10 activity of a basis species
 ---     solids = true, suppress = {...}, exclude = {...},
----     activity = "davies" | "bdot" | "ideal" | "sit" }
+---     activity = "davies" | "bdot" | "ideal" | "sit",
+---     ligand_redox = { N = "full" },           -- as phlox.map
+---     allow_inhibited = true }                 -- let dolomite, magnesite, quartz in
 --- Returns a table (pH, pe, E, ionic_strength, species, elements with each
 --- species' share, solids' saturation index and amount), or nil, message,
 --- info when the solver does not converge.
@@ -194,10 +254,15 @@ function phlox.solubility(opts) end
 function phlox.speciate(opts) end
 
 --- A potential measured against a reference electrode, on the SHE scale.
+---   phlox.to_she(-0.45, "SCE")                  -- 25 °C
+---   phlox.to_she(-0.45, "SCE", { T_C = 50 })    -- corrected with dE/dT
+---   phlox.to_she(-0.45, "SCE", { T_C = 200, reference_at_25C = true })
+--- Returns E_SHE and the record of phlox.electrode_at.
 ---@param E_measured any
 ---@param electrode any
+---@param opts? phlox.to_she.opts
 ---@return any
-function phlox.to_she(E_measured, electrode) end
+function phlox.to_she(E_measured, electrode, opts) end
 
 --- Properties of water at T [and P]: density, dielectric constant,
 --- Debye-Hueckel A and B, Born functions, pKw (IAPWS R11-07).

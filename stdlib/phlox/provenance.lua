@@ -8,6 +8,7 @@ local core = require "phlox.core"
 
 local provenance = {}
 local inputs = {}   -- path -> sha256: every input this process has read
+local notes, noted = {}, {} -- caveats of this run's results, in order
 
 --- Record an input file (the library loader calls this for each element
 -- file); returns { file = path, sha256 = ... }.  Every input read feeds the
@@ -27,6 +28,15 @@ end
 
 --- Every input this process has read, sorted by path.
 function provenance.inputs() return sorted_files(inputs) end
+
+--- Record a caveat that changes a result (stamp line of a map, a grid map
+-- or a speciation): exported files of the run carry it unless they name
+-- the results they come from.
+function provenance.record_note(text)
+  if noted[text] then return end
+  noted[text] = true
+  notes[#notes + 1] = text
+end
 
 -- Plain copy of user options (numbers, strings, booleans and tables of
 -- them); the library and functions are left out.
@@ -76,17 +86,44 @@ function provenance.of_result(lib, elements, conditions, options)
   return { files = files, conditions = conditions, options = opts }
 end
 
--- The provenance records of `from`: a result (with .provenance), a
--- provenance record (with .files) or a list of either.
-local function records(from, out)
-  out = out or {}
-  if type(from) ~= "table" then return out end
-  if from.provenance then out[#out + 1] = from.provenance
+-- The results named by `from`: a result (a map, curve or speciation, with
+-- .provenance or .stamp), a provenance record (with .files) or a list of
+-- them, nested lists flattened.  Returns the results and the provenance
+-- records.
+local function flatten(from, results, recs)
+  results, recs = results or {}, recs or {}
+  if type(from) ~= "table" then return results, recs end
+  if from.provenance or from.stamp or from.notes or from.fields or from.species then
+    results[#results + 1] = from
+    if from.provenance then recs[#recs + 1] = from.provenance end
   elseif from[1] == nil and type(from.files) == "table" and type(from.files[1] or {}) == "table" then
-    out[#out + 1] = from
+    recs[#recs + 1] = from
   else
-    for _, x in ipairs(from) do records(x, out) end
+    for _, x in ipairs(from) do flatten(x, results, recs) end
   end
+  return results, recs
+end
+
+local function records(from) return select(2, flatten(from)) end
+
+--- The caveats of `from` (a result or a list of results with `stamp`
+-- lines, or provenance records with `notes`), or every caveat recorded in
+-- this run.
+function provenance.notes(from)
+  if from == nil then
+    local out = {}
+    for i, n in ipairs(notes) do out[i] = n end
+    return out
+  end
+  local results, recs = flatten(from)
+  local out, seen = {}, {}
+  local function add(list)
+    for _, line in ipairs(list or {}) do
+      if not seen[line] then seen[line] = true; out[#out + 1] = line end
+    end
+  end
+  for _, r in ipairs(results) do add(r.stamp) end
+  for _, r in ipairs(recs) do add(r.notes) end
   return out
 end
 
@@ -133,6 +170,7 @@ function provenance.stamp(conditions, from)
     data_scope = scope,
     conditions = conditions or (#recs == 1 and recs[1].conditions) or nil,
     options = options,
+    notes = provenance.notes(from),
   }
 end
 
@@ -179,6 +217,7 @@ function provenance.comment_lines(stamp, prefix)
   end
   sorted_pairs_lines(stamp.conditions, prefix, "condition", lines)
   sorted_pairs_lines(stamp.options, prefix, "option", lines)
+  for _, n in ipairs(stamp.notes or {}) do lines[#lines + 1] = prefix .. "note: " .. n end
   return lines
 end
 

@@ -28,8 +28,20 @@ function phlox_core.database(dielectric) end
 ---@return any # bar (1 bar, or psat above the boiling point)
 function phlox_core.default_pressure(T) end
 
---- (C) phlox_core.electrodes() -> { {name, offset, dEdT, source}, ... } (index 1 = SHE)
----@return any # { {name, offset, dEdT, source}, ... } (index 1 = SHE)
+--- (C) phlox_core.domain_of(formula, element) -> domain ("immunity", "passivation", "corrosion" or "sulfide film")
+---@param formula string
+---@param element string
+---@return any # domain ("immunity", "passivation", "corrosion" or "sulfide film")
+function phlox_core.domain_of(formula, element) end
+
+--- (C) phlox_core.electrode_offset(index, T) -> offset (V vs SHE at T) | nil, message
+---@param index any
+---@param T number
+---@return any # offset (V vs SHE at T) | nil, message
+function phlox_core.electrode_offset(index, T) end
+
+--- (C) phlox_core.electrodes() -> { {name, offset, dEdT, T_min, T_max, source, dEdT_source}, ... } (index 1 = SHE)
+---@return any # { {name, offset, dEdT, T_min, T_max, source, dEdT_source}, ... } (index 1 = SHE)
 function phlox_core.electrodes() end
 
 --- (C) phlox_core.embedded_files() -> sequence of embedded paths, sorted.
@@ -89,6 +101,10 @@ function phlox_core.getppid() end
 ---@param opts table
 ---@return any # rigorous map table | nil, message
 function phlox_core.grid_map(db, opts) end
+
+--- (C) phlox_core.inhibited_solids() -> { {mineral, T_max (K), source}, ... }
+---@return any # { {mineral, T_max (K), source}, ... }
+function phlox_core.inhibited_solids() end
 
 --- (C) phlox_core.isatty(fd) -> boolean (for progress display)
 ---@param fd any

@@ -176,14 +176,15 @@ function phlox_diagrams.solubility(opts) end
 ---   diagrams.where { map = m, pH = 5, E = -0.80, reference = "SCE" }
 --- `map` has E on its y axis and pH (give pH) or log a(ligand) (give loga)
 --- on x.  `reference` is a short name (SHE, SCE, Ag/AgCl, Ag/AgCl 3.5M,
---- CSE) or a full name of phlox.electrodes(); default SHE.  The offsets are
---- for electrodes at 25 °C; on a map at another temperature the call needs
---- reference_at_25C = true (an external electrode kept at room temperature;
---- the thermal junction potential is not included).
+--- CSE) or a full name of phlox.electrodes(); default SHE.  On a map at
+--- another temperature the offset is corrected with the electrode's
+--- temperature coefficient where it is known (phlox.electrode_at), else the
+--- call needs reference_at_25C = true (an external electrode kept at room
+--- temperature; the thermal junction potential is not included).
 --- Returns { species, kind, E_SHE, E_measured, reference = {name, offset,
 --- source}, field, E_range = {lo, hi} (the field's extent in E at that
 --- x), margin = {below, above} in V } or nil, message outside the window.
----@param opts? phlox_diagrams.where.opts
+---@param opts phlox_diagrams.where.opts
 ---@return any
 function phlox_diagrams.where(opts) end
 

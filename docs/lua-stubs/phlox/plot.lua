@@ -78,10 +78,6 @@ function phlox_plot.curves(series, opts) end
 ---@return any
 function phlox_plot.domains(map, opts) end
 
---- Domains: given, or derived from the kinds of the fields when absent:
---- metal (and the element's own liquid) -> immunity; solid and other
---- liquids -> passivation; aqueous and gas -> corrosion (the usual
---- classification of these maps; common practice, no source).
 ---@param map table
 ---@return any
 function phlox_plot.domains_of(map) end

@@ -22,6 +22,13 @@ function phlox_provenance.inputs() end
 ---@return any
 function phlox_provenance.key_order(a, b) end
 
+--- The caveats of `from` (a result or a list of results with `stamp`
+--- lines, or provenance records with `notes`), or every caveat recorded in
+--- this run.
+---@param from? any
+---@return any
+function phlox_provenance.notes(from) end
+
 --- The provenance of a result built from `lib` (a phlox.Library) for the
 --- elements named (H and O always count): the files that define a species
 --- made only of those elements, with their checksums, plus the conditions
@@ -40,6 +47,13 @@ function phlox_provenance.of_result(lib, elements, conditions, options) end
 ---@param text string
 ---@return any
 function phlox_provenance.record_file(path, text) end
+
+--- Record a caveat that changes a result (stamp line of a map, a grid map
+--- or a speciation): exported files of the run carry it unless they name
+--- the results they come from.
+---@param text string
+---@return any
+function phlox_provenance.record_note(text) end
 
 --- A stamp: a plain table (stable key order when JSON-encoded).
 ---   provenance.stamp(conditions, from)
