@@ -93,11 +93,12 @@ end
 local function flatten(from, results, recs)
   results, recs = results or {}, recs or {}
   if type(from) ~= "table" then return results, recs end
-  if from.provenance or from.stamp or from.notes or from.fields or from.species then
+  if from.provenance == nil and from[1] == nil and type(from.files) == "table"
+     and type(from.files[1] or {}) == "table" then
+    recs[#recs + 1] = from
+  elseif from.provenance or from.stamp or from.notes or from.fields or from.species then
     results[#results + 1] = from
     if from.provenance then recs[#recs + 1] = from.provenance end
-  elseif from[1] == nil and type(from.files) == "table" and type(from.files[1] or {}) == "table" then
-    recs[#recs + 1] = from
   else
     for _, x in ipairs(from) do flatten(x, results, recs) end
   end

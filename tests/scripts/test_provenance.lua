@@ -86,6 +86,15 @@ local ok, err = pcall(function()
   end
   check(js:find('"revision"', 1, true), "JSON carries the revision")
 
+  -- a result's caveats travel with its provenance (e.g. through a sweep's
+  -- journal): a table citing only the provenance still carries the notes
+  local hot = phlox.map { library = zinc, element = "Zn", T_C = 150 }
+  check(#(hot.provenance.notes or {}) > 0, "a 150 C zinc map has caveats (log K held at 25 C)")
+  export.csv(dir .. "/hot.csv", { { a = 1 } }, { columns = { "a" }, from = { hot.provenance } })
+  local hot_csv = read(dir .. "/hot.csv")
+  check(hot_csv:find("# note: " .. hot.provenance.notes[1], 1, true), "the note reaches the CSV:\n" .. hot_csv)
+  check(not hot_csv:find("Cu.lua", 1, true), "and only the zinc files")
+
   -- no result named: every input of the run, and the stamp says so
   export.csv(dir .. "/all.csv", { { a = 1 } }, { columns = { "a" } })
   local all = read(dir .. "/all.csv")
