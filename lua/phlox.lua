@@ -150,7 +150,7 @@ function phlox.library(spec)
   end)
   local filter = { "H", "O" }
   for _, e in ipairs(elements) do filter[#filter + 1] = e end
-  local files = {}
+  local files, sources = {}, {}
   local function load(rel, opts)
     local text, where = phlox.read_library_file(rel)
     if not text then error("phlox.library: " .. where, 3) end
@@ -162,7 +162,7 @@ function phlox.library(spec)
       end
       error("phlox.library: " .. (#lines > 0 and table.concat(lines, "\n") or msg), 3)
     end
-    provenance.record_file(where, text)
+    sources[where] = provenance.record_file(where, text).sha256
     files[#files + 1] = where
   end
   load("elements/HO.lua", { elements = filter })
@@ -175,10 +175,10 @@ function phlox.library(spec)
     f:close()
     local ok, msg = db:load(text, path, { elements = filter, user = true })
     if not ok then error("phlox.library: " .. msg, 2) end
-    provenance.record_file(path, text)
+    sources[path] = provenance.record_file(path, text).sha256
     files[#files + 1] = path
   end
-  return setmetatable({ db = db, elements = elements, files = files }, phlox.Library)
+  return setmetatable({ db = db, elements = elements, files = files, sources = sources }, phlox.Library)
 end
 
 phlox.Library = {}
@@ -238,13 +238,13 @@ local function made_of(s, only)
 end
 
 -- The records of a library whose basis is not "measured", gathered once per
--- library (sweeps call speciate many times); rebuilt if the species count
--- changes (db:remove, db:load).
+-- library (a sweep asks the same question for every point); rebuilt if the
+-- species count changes (db:remove, db:load) or when fresh is true.
 local basis_cache = setmetatable({}, { __mode = "k" })
-local function unmeasured(lib)
+local function unmeasured(lib, fresh)
   local n = lib.db:count()
   local c = basis_cache[lib]
-  if c and c.n == n then return c.recs end
+  if c and c.n == n and not fresh then return c.recs end
   local recs = {}
   for i = 1, n do
     local s = lib.db:species(i)
@@ -254,12 +254,13 @@ local function unmeasured(lib)
   return recs
 end
 
-local function basis_list(lib, elements, T, basis, only)
+local function basis_list(lib, elements, T, basis, opts)
   local out = {}
   if math.abs(T - T_REF) <= NEAR_T_REF then return out end
+  local only = opts and opts.only
   local wanted = {}
   for _, el in ipairs(elements) do wanted[el] = true end
-  for _, s in ipairs(unmeasured(lib)) do
+  for _, s in ipairs(unmeasured(lib, opts and opts.cache == false)) do
     local has = false
     for el in pairs(s.elements) do has = has or wanted[el] == true end
     if has and s.basis == basis and made_of(s, only) then out[#out + 1] = s end
@@ -273,26 +274,26 @@ end
 -- keeps their 25 C value at T.  Read from each record's temperature basis
 -- (species.basis == "held", set by the core from the record's fields).
 -- Empty within 0.5 K of 25 C.  Sorted formulas.  P is accepted for
--- compatibility and not used (the basis does not depend on P).  `only`
--- (optional): a set of element symbols; species with any other element
--- (besides H and O) are left out.
-function phlox.constant_logk(lib, elements, T, P, only)
+-- compatibility and not used (the basis does not depend on P).  opts
+-- (optional): only = a set of element symbols (species with any other
+-- element besides H and O are left out); cache = false re-reads the records
+-- (otherwise they are gathered once per library).
+function phlox.constant_logk(lib, elements, T, P, opts)
   if getmetatable(lib) ~= phlox.Library then error("phlox.constant_logk: library expected", 2) end
   if type(T) ~= "number" then error("phlox.constant_logk: T (K) expected", 2) end
   local held = {}
-  for _, s in ipairs(basis_list(lib, elements, T, "held", only)) do held[#held + 1] = s.formula end
+  for _, s in ipairs(basis_list(lib, elements, T, "held", opts)) do held[#held + 1] = s.formula end
   return held
 end
 
 --- The species of `elements` whose temperature dependence is estimated by a
 -- named method (species.basis == "estimated"): { { formula, method }, ... }
--- sorted by formula; empty within 0.5 K of 25 C; `only` as for
--- constant_logk.
-function phlox.estimated_species(lib, elements, T, only)
+-- sorted by formula; empty within 0.5 K of 25 C; opts as for constant_logk.
+function phlox.estimated_species(lib, elements, T, opts)
   if getmetatable(lib) ~= phlox.Library then error("phlox.estimated_species: library expected", 2) end
   if type(T) ~= "number" then error("phlox.estimated_species: T (K) expected", 2) end
   local out = {}
-  for _, s in ipairs(basis_list(lib, elements, T, "estimated", only)) do
+  for _, s in ipairs(basis_list(lib, elements, T, "estimated", opts)) do
     out[#out + 1] = { formula = s.formula, method = s.basis_method or "?" }
   end
   return out
@@ -314,11 +315,11 @@ function phlox.temperature_notes(lib, elements, temps, opts, where, only)
   end
   local held, est, hseen, eseen, at = {}, {}, {}, {}, {}
   for _, T in ipairs(temps) do
-    for _, f in ipairs(phlox.constant_logk(lib, elements, T, nil, only)) do
+    for _, f in ipairs(phlox.constant_logk(lib, elements, T, nil, { only = only })) do
       if not hseen[f] then hseen[f] = true; held[#held + 1] = f end
       at[#at + 1] = T
     end
-    for _, e in ipairs(phlox.estimated_species(lib, elements, T, only)) do
+    for _, e in ipairs(phlox.estimated_species(lib, elements, T, { only = only })) do
       if not eseen[e.formula] then eseen[e.formula] = true; est[#est + 1] = e end
     end
   end
@@ -537,7 +538,9 @@ function phlox.map(opts)
     ligand = opts.ligand, ligand_activity = opts.ligand and (opts.ligand_activity or 1e-3) or nil,
   }
   m.files = lib.files
+  m.provenance = provenance.of_result(lib, { opts.element, opts.ligand }, m.conditions, opts)
   stamp_held(m, held)
+  m.provenance.notes = m.stamp   -- the caveats travel with the provenance (into sweep results)
   return m
 end
 
@@ -612,6 +615,16 @@ function phlox.speciate(opts)
     if (sp.molality or 0) > 0 then names[#names + 1] = sp.formula end
   end
   note_sour(r, names)
+  local els = {}
+  for e in pairs(opts.totals or {}) do els[#els + 1] = e end
+  for _, f in ipairs({ opts.fugacities or {}, opts.fixed or {} }) do
+    for formula in pairs(f) do
+      for e in tostring(formula):gmatch("%u%l?") do els[#els + 1] = e end
+    end
+  end
+  table.sort(els)
+  r.provenance = provenance.of_result(lib, els, { T_C = r.T_C, P_bar = P }, opts)
+  r.provenance.notes = r.stamp
   return r
 end
 
@@ -700,7 +713,11 @@ function phlox.grid_map(opts)
   g.conditions = { T_C = T - T0C, P_bar = P, total = opts.total or 1e-6,
                    ligand = opts.ligand, ligand_total = opts.ligand and (opts.ligand_total or 1e-3) or nil }
   g.label = "rigorous"
+  local els = { opts.element, opts.ligand or "H" }
+  if opts.background_nacl then els[#els + 1] = "Na"; els[#els + 1] = "Cl" end
+  g.provenance = provenance.of_result(lib, els, g.conditions, opts)
   stamp_held(g, held)
+  g.provenance.notes = g.stamp
   return g
 end
 

@@ -126,16 +126,17 @@ function phlox.available_elements() end
 --- keeps their 25 C value at T.  Read from each record's temperature basis
 --- (species.basis == "held", set by the core from the record's fields).
 --- Empty within 0.5 K of 25 C.  Sorted formulas.  P is accepted for
---- compatibility and not used (the basis does not depend on P).  `only`
---- (optional): a set of element symbols; species with any other element
---- (besides H and O) are left out.
+--- compatibility and not used (the basis does not depend on P).  opts
+--- (optional): only = a set of element symbols (species with any other
+--- element besides H and O are left out); cache = false re-reads the records
+--- (otherwise they are gathered once per library).
 ---@param lib phlox.Library
 ---@param elements any
 ---@param T number
 ---@param P number
----@param only string[]
+---@param opts table
 ---@return any
-function phlox.constant_logk(lib, elements, T, P, only) end
+function phlox.constant_logk(lib, elements, T, P, opts) end
 
 --- The reference electrode record for a short or full name (errors name
 --- the known ones).
@@ -164,14 +165,13 @@ function phlox.electrodes() end
 
 --- The species of `elements` whose temperature dependence is estimated by a
 --- named method (species.basis == "estimated"): { { formula, method }, ... }
---- sorted by formula; empty within 0.5 K of 25 C; `only` as for
---- constant_logk.
+--- sorted by formula; empty within 0.5 K of 25 C; opts as for constant_logk.
 ---@param lib phlox.Library
 ---@param elements any
 ---@param T number
----@param only string[]
+---@param opts table
 ---@return any
-function phlox.estimated_species(lib, elements, T, only) end
+function phlox.estimated_species(lib, elements, T, opts) end
 
 ---@param opts table
 ---@return any
