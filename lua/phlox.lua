@@ -143,13 +143,16 @@ function phlox.library(spec)
   end
   local order = {}
   for _, e in ipairs(elements) do order[#order + 1] = e end
+  for _, e in ipairs(spec.model_elements or {}) do -- loaded for model reactions only
+    if not listed[e] then order[#order + 1] = e end
+  end
   table.sort(order, function(a, b)
     local la, lb = LIGAND_ORDER[a] or 0, LIGAND_ORDER[b] or 0
     if la ~= lb then return la < lb end
     return a < b
   end)
   local filter = { "H", "O" }
-  for _, e in ipairs(elements) do filter[#filter + 1] = e end
+  for _, e in ipairs(order) do filter[#filter + 1] = e end
   local files, sources = {}, {}
   local function load(rel, opts)
     local text, where = phlox.read_library_file(rel)
@@ -178,7 +181,40 @@ function phlox.library(spec)
     sources[path] = provenance.record_file(path, text).sha256
     files[#files + 1] = path
   end
-  return setmetatable({ db = db, elements = elements, files = files, sources = sources }, phlox.Library)
+  local lib = setmetatable({ db = db, elements = elements, files = files, sources = sources }, phlox.Library)
+  -- an isocoulombic model reaction (docs/element-files.md) may name another
+  -- metal's complex: its element files are loaded too (spec.model_elements)
+  local extra = phlox.model_elements(lib, filter)
+  if #extra > 0 then
+    local again = { dielectric = spec.dielectric, user = spec.user, model_elements = {} }
+    for _, e in ipairs(spec) do again[#again + 1] = e end
+    for _, e in ipairs(spec.model_elements or {}) do again.model_elements[#again.model_elements + 1] = e end
+    for _, e in ipairs(extra) do again.model_elements[#again.model_elements + 1] = e end
+    return phlox.library(again)
+  end
+  lib.model_elements = spec.model_elements
+  return lib
+end
+
+--- Elements (not in `loaded`) of species that the isocoulombic model
+--  reactions of lib's species name but lib lacks; sorted, {} if none.
+function phlox.model_elements(lib, loaded)
+  local have, want, out = {}, {}, {}
+  for _, e in ipairs(loaded) do have[e] = true end
+  for _, s in ipairs(lib:list()) do
+    if s.estimate_model then
+      for term in (s.estimate_model:gsub(" = ", " + ") .. " + "):gmatch("(.-) %+ ") do
+        local f = term:match("^[%d/.]+ (.+)$") or term
+        if f ~= "e-" and not lib:species(f) then
+          for sym in f:gsub("%^.*$", ""):gsub("%(.-%)", ""):gmatch("%u%l?") do
+            if not have[sym] and not want[sym] then want[sym] = true; out[#out + 1] = sym end
+          end
+        end
+      end
+    end
+  end
+  table.sort(out)
+  return out
 end
 
 phlox.Library = {}

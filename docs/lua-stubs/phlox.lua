@@ -36,6 +36,7 @@ local phlox = {}
 
 ---@class phlox.library.spec
 ---@field dielectric? any
+---@field model_elements? any
 ---@field user? string[]
 
 ---@class phlox.map.opts
@@ -258,6 +259,13 @@ function phlox.map(opts) end
 ---@param skip any
 ---@return any
 function phlox.merge_notes(results, skip) end
+
+--- Elements (not in `loaded`) of species that the isocoulombic model
+---  reactions of lib's species name but lib lacks; sorted, {} if none.
+---@param lib? phlox.Library
+---@param loaded any
+---@return any
+function phlox.model_elements(lib, loaded) end
 
 --- Read a library file: the user's folders first, then the embedded copy.
 --- `rel` is a path relative to a library root, e.g. "elements/Zn.lua".
