@@ -389,6 +389,34 @@ local function run_models(phlox, lib, rows)
   return measured, sum
 end
 
+-- Higher hydrolysis steps (a second or later OH^-, or an OH^- added to a
+-- neutral species or solid): the rows of the table above of that kind, and
+-- one reference read for this purpose, gibbsite + OH^- = Al(OH)4^- at 50
+-- and 100 C (Wesolowski 1992, abstract read: tests/tools/checks_def.lua,
+-- wes92_logK), each method started from the paper's own 25 C value.
+M.NIO_REACTION = "NiO(s,bunsenite) + H2O(l) = Ni(OH)2(aq)"
+M.HIGHER_EXTERNAL = { reaction = "Al(OH)3(s,gibbsite) + OH^- = Al(OH)4^-", temps = { 50, 100 } }
+function M.higher_hydrolysis(lib, rows)
+  local out = { rows = {}, external = {} }
+  for _, r in ipairs(rows) do
+    local nw = tonumber(r.reaction:match("(%d+) H2O%(l%) = ")) or 1
+    if (r.class == "hydrolysis" and nw >= 2 and not r.reaction:find("^2 ")) or r.reaction:find("+ OH^- =", 1, true) then
+      out.rows[#out.rows + 1] = r
+    end
+  end
+  local checks = dofile((debug.getinfo(1, "S").source:match("^@(.*)[/\\]") or ".") .. "/checks_def.lua")
+  local k25 = checks.wes92_logK(TR)
+  for _, tc in ipairs(M.HIGHER_EXTERNAL.temps) do
+    local T = tc + T0C
+    local meas = checks.wes92_logK(T)
+    local iso, n = lib.db:isocoulombic(M.HIGHER_EXTERNAL.reaction, k25, T)
+    out.external[#out.external + 1] = { tc = tc, meas = meas, n = n, held = k25 - meas, iso = iso - meas,
+      source = checks.WES92 }
+  end
+  out.logK25 = k25
+  return out
+end
+
 function M.run(phlox)
   local lib = phlox.library(phlox.available_elements())
   local rows = collect(phlox, lib)
@@ -456,6 +484,11 @@ function M.run(phlox)
   sum.hkf_rows, sum[M.HKF_SPECIES_METHOD] = run_hkf_species(lib)
   sum.model_rows, sum.model = run_models(phlox, lib, rows)
   sum.library_models = M.library_models(lib, sum.model_rows)
+  sum.higher = M.higher_hydrolysis(lib, rows)
+  sum.nio = {}
+  for _, tc in ipairs({ 150, 200, 250, 300 }) do
+    sum.nio[#sum.nio + 1] = { tc = tc, logK = assert(lib:reaction(M.NIO_REACTION, { T_C = tc })).logK }
+  end
   for _, m in ipairs(M.MODEL_METHODS) do sum[m] = sum.model[m] end
   for _, m in ipairs(M.KOPP_METHODS) do sum[m] = sum.kopp[m] end
   return rows, sum
@@ -596,6 +629,48 @@ function M.render(rows, sum)
   for _, x in ipairs(sum.library_models) do
     w(("| `%s` | `%s` | %s |"):format(x.species, x.reaction, x.model and ("`" .. x.model .. "`") or "none (water ionisation only)"))
   end
+  w("")
+  w("### Higher hydrolysis steps")
+  w("")
+  w("The rows above that add a second or later OH⁻ (or an OH⁻ to a neutral species")
+  w("or a solid), errors in log K at 100/200/300 °C:")
+  w("")
+  w("| reaction | data | n | held | isocoulombic |")
+  w("|---|---|---|---|---|")
+  for _, r in ipairs(sum.higher.rows) do
+    local function three(m)
+      local e = r.err[m]
+      if not e[100] then return "– – –" end
+      return ("%s %s %s"):format(f2(e[100]), e[200] and f2(e[200]) or "–", e[300] and f2(e[300]) or "–")
+    end
+    w(("| `%s` | %s | %d | %s | %s |"):format(r.reaction, r.basis, r.n, three("held"), three("isocoulombic")))
+  end
+  w("")
+  w(("and a measured reference read for this purpose, `%s` (log K %.3f at 25 °C; %s),"):format(
+    M.HIGHER_EXTERNAL.reaction, sum.higher.logK25, sum.higher.external[1].source))
+  w("each method started from the paper's 25 °C value:")
+  w("")
+  w("| T (°C) | measured log K | n | held | isocoulombic |")
+  w("|---|---|---|---|---|")
+  for _, x in ipairs(sum.higher.external) do
+    w(("| %d | %.3f | %d | %s | %s |"):format(x.tc, x.meas, x.n, f2(x.held), f2(x.iso)))
+  end
+  w("")
+  w("**Known disagreement: NiO at 200–300 °C.** With the estimated Ni(OH)2(aq)")
+  w("(isocoulombic, n = 0: log K·T constant from its 25 °C value) the neutral")
+  w("species alone holds log m(Ni) = log K of")
+  local t = {}
+  for _, x in ipairs(sum.nio) do t[#t + 1] = ("%.2f at %d °C"):format(x.logK, x.tc) end
+  w(("`%s`: %s;"):format(M.NIO_REACTION, table.concat(t, ", ")))
+  w("above −6 NiO loses its field on 10⁻⁶ maps. Published NiO solubility work")
+  w("(Tremaine and Leblanc 1980, J. Solution Chem. 9, 415 as cited in the issue;")
+  w("a reference list read here cites them in J. Chem. Thermodyn., p. 521; the")
+  w("ORNL solubility studies of Palmer, Bénézeth, Wesolowski et al.) reports much")
+  w("lower solubilities at high temperature, but no published value could be")
+  w("read for this work (the abstracts found give no numbers), so the size of")
+  w("the disagreement is not stated and no check was added. The higher-hydrolysis")
+  w("rows above show the estimate is not reliable for these steps either way: it")
+  w("falls short of the measured rise of aluminate and Fe(OH)2⁺.")
   w("")
   w("### HKF correlations, species by species")
   w("")
