@@ -17,6 +17,33 @@ local phlox = {
 
 local T0C = 273.15 -- K at 0 C
 
+-- The one option reader (src/lua/l_opts.c): each public function lists its
+-- keys next to it, one line per key: name = "type" or {"type", lo, hi}.
+-- Unknown keys, wrong types and values out of range are errors at the
+-- caller's line.  See DEVELOPERS.md, "Options".
+local options = core.options
+local LIM = core.limits
+local T_OPTS = {
+  T = { "number", LIM.T_min, LIM.T_max },                 -- K
+  T_C = { "number", LIM.T_min - T0C, LIM.T_max - T0C },   -- degrees C
+  P = { "number", 1e-6, LIM.P_max },                      -- bar
+}
+-- Ranges in the user's units (the C bindings check the same):
+local ACT = { 1e-300, 10 }   -- an activity: positive; above 10 no model holds (common practice, no source)
+local I_MAX = 0.5            -- mol/kg: Davies equation, stated range (Davies 1962, from memory of Stumm and Morgan)
+local COORD = 1e3            -- |pH|, |E| (V), |log a| of a window: a guard
+local TOTAL_MAX = 20         -- mol/kg: common practice, no source
+phlox.option_specs = {}      -- function name -> spec (phlox.help lists them)
+local function spec(fname, t, with_T)
+  if with_T then for k, v in pairs(T_OPTS) do t[k] = v end end
+  phlox.option_specs[fname] = t
+  return t
+end
+phlox.options = function(fname, sp, opts)
+  if opts == nil then opts = {} end
+  return options(fname, sp, opts)
+end
+
 phlox.caution = "A thermodynamic diagram says what can form, not how fast it forms: "
   .. "passivity depends on film kinetics, alloying, flow and deposits. Use these results "
   .. "with the applicable codes, standards and licensed engineering practice."
@@ -32,10 +59,10 @@ end
 function phlox.read_library_file(rel)
   for _, dir in ipairs(core.search_paths()) do
     local path = dir .. "/" .. rel
-    local f = io.open(path, "rb")
-    if f then
-      local text = f:read("a")
-      f:close()
+    if core.file_kind(path) then
+      -- regular files only, at most the element-file size cap (src/data/load.c)
+      local text, err = core.read_file(path)
+      if not text then return nil, err end
       return text, path
     end
   end
@@ -54,17 +81,29 @@ function phlox.available_elements()
     if sym then add(sym) end
   end
   for _, dir in ipairs(core.search_paths()) do
-    local p = io.popen('ls "' .. dir .. '/elements" 2>/dev/null')
-    if p then
-      for name in p:lines() do
-        local sym = name:match("^(%u%l?)%.lua$")
-        if sym then add(sym) end
-      end
-      p:close()
+    for _, name in ipairs(core.list_dir(dir .. "/elements") or {}) do -- opendir, no shell
+      local sym = name:match("^(%u%l?)%.lua$")
+      if sym then add(sym) end
     end
   end
   table.sort(list)
   return list
+end
+
+--- Folders without a shell (opendir and mkdir in C, src/lua/l_fs.c): names
+-- with quotes, spaces or "$(...)" are only names.
+--   phlox.make_dir("out/figures")   -- with its parents; mode 0777 less the umask
+--   phlox.list_dir("out")           -- sorted names, or nil, message
+function phlox.make_dir(path)
+  core.check_value("phlox.make_dir", "path", path, "string")
+  local ok, err = core.make_dir(path, true)
+  if not ok then core.user_error("phlox.make_dir: " .. err) end
+  return path
+end
+
+function phlox.list_dir(path)
+  core.check_value("phlox.list_dir", "path", path, "string")
+  return core.list_dir(path)
 end
 
 -- Ligand files hold the complexes and solids they form with metals, so they
@@ -72,20 +111,30 @@ end
 local LIGAND_ORDER = { Cl = 1, S = 2, C = 3, N = 4, P = 5, F = 6 }
 
 local function temperature(opts, where)
-  if opts.T and opts.T_C then error(where .. ": give T (K) or T_C (C), not both", 3) end
-  local T = opts.T or (opts.T_C and opts.T_C + T0C) or 298.15
-  if type(T) ~= "number" or T ~= T then error(where .. ": temperature must be a number", 3) end
-  return T
+  if opts.T and opts.T_C then core.user_error(where .. ": give T (K) or T_C (C), not both") end
+  return opts.T or (opts.T_C and opts.T_C + T0C) or 298.15
 end
 
 local function pressure(opts, T, where)
-  if opts.P ~= nil then
-    if type(opts.P) ~= "number" then error(where .. ": P must be a number (bar)", 3) end
-    return opts.P
-  end
+  if opts.P ~= nil then return opts.P end
   local P, err = core.default_pressure(T)
-  if not P then error(where .. ": " .. err, 3) end
+  if not P then core.user_error(where .. ": " .. err) end
   return P
+end
+
+local function check_library(where, lib)
+  if getmetatable(lib) ~= phlox.Library then
+    core.user_error(where .. ": library = phlox.library{...} expected, got " .. type(lib))
+  end
+end
+
+-- every formula of opts[key] (a list) must name a species of the library
+local function check_species(where, lib, list, key)
+  for i, f in ipairs(list or {}) do
+    if not lib.db:species(f) then
+      core.user_error(("%s: option '%s'[%d]: no species '%s' in the library"):format(where, key, i, f))
+    end
+  end
 end
 
 --- A species library: the built-in H/O species plus the element files named.
@@ -93,14 +142,21 @@ end
 -- The user's folders (--path, PHLOX_PATH) override built-in element files;
 -- `user` files add, replace or exclude species.  Complexes of metals that
 -- are not loaded are left out.  Errors name the file, line and field.
-function phlox.library(spec)
+local LIBRARY_OPTS = spec("phlox.library", {
+  ["*"] = "string",                     -- element symbols, {"Fe", "S"}
+  user = "strings",                     -- user files that add, replace or exclude species
+  dielectric = "R8-97|JN91",            -- dielectric constant of water
+})
+function phlox.library(spec_)
+  local spec = spec_
   if type(spec) == "string" then spec = { spec } end
-  assert(type(spec) == "table", "phlox.library: give a list of element symbols")
+  if type(spec) ~= "table" then core.user_error("phlox.library: give a list of element symbols, got " .. type(spec)) end
+  options("phlox.library", LIBRARY_OPTS, spec)
   local db = core.database(spec.dielectric)
   local elements = {}
   for i, sym in ipairs(spec) do
-    if type(sym) ~= "string" or not sym:match("^%u%l?$") then
-      error(("phlox.library: entry %d is not an element symbol: %s"):format(i, tostring(sym)), 2)
+    if not sym:match("^%u%l?$") then
+      core.user_error(("phlox.library: entry %d is not an element symbol: '%s'"):format(i, sym))
     end
     elements[#elements + 1] = sym
   end
@@ -116,14 +172,14 @@ function phlox.library(spec)
   local files = {}
   local function load(rel, opts)
     local text, where = phlox.read_library_file(rel)
-    if not text then error("phlox.library: " .. where, 3) end
+    if not text then core.user_error("phlox.library: " .. where) end
     local ok, msg, problems = db:load(text, where, opts)
     if not ok then
       local lines = {}
       for _, p in ipairs(problems or {}) do
         if p.severity == "error" then lines[#lines + 1] = p.text end
       end
-      error("phlox.library: " .. (#lines > 0 and table.concat(lines, "\n") or msg), 3)
+      core.user_error("phlox.library: " .. (#lines > 0 and table.concat(lines, "\n") or msg))
     end
     provenance.record_file(where, text)
     files[#files + 1] = where
@@ -131,12 +187,10 @@ function phlox.library(spec)
   load("elements/HO.lua", { elements = filter })
   for _, e in ipairs(order) do load("elements/" .. e .. ".lua", { elements = filter }) end
   for _, path in ipairs(spec.user or {}) do
-    local f, err = io.open(path, "rb")
-    if not f then error("phlox.library: " .. err, 2) end
-    local text = f:read("a")
-    f:close()
+    local text, err = core.read_file(path) -- regular files only, size cap
+    if not text then core.user_error("phlox.library: " .. err) end
     local ok, msg = db:load(text, path, { elements = filter, user = true })
-    if not ok then error("phlox.library: " .. msg, 2) end
+    if not ok then core.user_error("phlox.library: " .. msg) end
     provenance.record_file(path, text)
     files[#files + 1] = path
   end
@@ -161,31 +215,38 @@ end
 
 --- Standard-state properties of a species at T (K) [and P (bar)]:
 -- { G, H, S, Cp, V } in J/mol, J/(mol K), J/bar.
+local PROPS_OPTS = spec("Library:props", {}, true)
 function phlox.Library:props(formula, opts)
-  opts = opts or {}
-  local T = temperature(opts, "props")
-  local r, err = self.db:props(formula, T, pressure(opts, T, "props"))
-  if not r then error("props: " .. err, 2) end
+  check_library("Library:props", self)
+  core.check_value("Library:props", "formula", formula, "string")
+  opts = phlox.options("Library:props", PROPS_OPTS, opts)
+  local T = temperature(opts, "Library:props")
+  local r, err = self.db:props(formula, T, pressure(opts, T, "Library:props"))
+  if not r then core.user_error("Library:props: " .. err) end
   return r
 end
 
 --- Reaction properties at T: { dG, dH, dS, logK, E (V vs SHE, half
 -- reactions only), T, P, text }.
+local REACTION_OPTS = spec("Library:reaction", {}, true)
 function phlox.Library:reaction(text, opts)
-  opts = opts or {}
-  local T = temperature(opts, "reaction")
-  local r, err = self.db:reaction(text, T, pressure(opts, T, "reaction"))
-  if not r then error(err, 2) end
+  check_library("Library:reaction", self)
+  core.check_value("Library:reaction", "equation", text, "string")
+  opts = phlox.options("Library:reaction", REACTION_OPTS, opts)
+  local T = temperature(opts, "Library:reaction")
+  local r, err = self.db:reaction(text, T, pressure(opts, T, "Library:reaction"))
+  if not r then core.user_error("Library:reaction: " .. err) end
   return r
 end
 
 --- Properties of water at T [and P]: density, dielectric constant,
 -- Debye-Hueckel A and B, Born functions, pKw (IAPWS R11-07).
+local WATER_OPTS = spec("phlox.water", {}, true)
 function phlox.water(opts)
-  opts = opts or {}
-  local T = temperature(opts, "water")
-  local w, err = core.water(T, pressure(opts, T, "water"))
-  if not w then error(err, 2) end
+  opts = phlox.options("phlox.water", WATER_OPTS, opts)
+  local T = temperature(opts, "phlox.water")
+  local w, err = core.water(T, pressure(opts, T, "phlox.water"))
+  if not w then core.user_error("phlox.water: " .. err) end
   return w
 end
 
@@ -197,7 +258,10 @@ local T_REF, P_REF = 298.15, 1.0   -- K, bar: where log K records are given
 local NEAR_T_REF = 0.5             -- K: closer than this to 25 C, nothing is held
 local SAME_LOGK = 1e-12            -- log K this close to its 25 C value is held
 function phlox.constant_logk(lib, elements, T, P)
-  if getmetatable(lib) ~= phlox.Library then error("phlox.constant_logk: library expected", 2) end
+  check_library("phlox.constant_logk", lib)
+  core.check_value("phlox.constant_logk", "elements", elements, "strings")
+  core.check_value("phlox.constant_logk", "T (K)", T, "number", LIM.T_min, LIM.T_max)
+  if P ~= nil then core.check_value("phlox.constant_logk", "P (bar)", P, "number", 1e-6, LIM.P_max) end
   P = P or pressure({}, T, "phlox.constant_logk")
   local held, seen = {}, {}
   if math.abs(T - T_REF) <= NEAR_T_REF then return held end
@@ -222,8 +286,8 @@ end
 local function held_logk(lib, elements, T, P, opts, where)
   local held = phlox.constant_logk(lib, elements, T, P)
   if #held > 0 and opts.require_temperature_data then
-    error(("%s: require_temperature_data: no temperature data (log K held at 25 °C) for %s"):format(
-      where, table.concat(held, ", ")), 3)
+    core.user_error(("%s: require_temperature_data: no temperature data (log K held at 25 °C) for %s"):format(
+      where, table.concat(held, ", ")))
   end
   return held
 end
@@ -248,11 +312,42 @@ end
 --               pH_range = {0, 14}, E_range = {-2, 2}, activity = 1e-6,
 --               ligand = "S", ligand_activity = 1e-3, ionic_strength = 0,
 --               exclude = {"Fe3O4(s)"}, axes = {"pH", "E"} }
+local MAP_OPTS = spec("phlox.map", {
+  library = "table",                          -- phlox.library{...}
+  element = "string",                         -- the element mapped, "Fe"
+  axes = "strings",                           -- {"pH", "E"} (default), {"loga", "E"}, {"pH", "loga"}
+  pH_range = { "numbers", -COORD, COORD },    -- {0, 14}
+  E_range = { "numbers", -COORD, COORD },     -- V vs SHE, {-2, 2}
+  loga_range = { "numbers", -COORD, COORD },  -- log a(ligand), {-8, 0}
+  pH = { "number", -COORD, COORD },           -- fixed pH (when pH is not an axis)
+  E = { "number", -COORD, COORD },            -- fixed E (when E is not an axis)
+  activity = { "number", ACT[1], ACT[2] },    -- activity of each dissolved species of the element (1e-6)
+  ligand = "string",                          -- a ligand element, "S"
+  ligand_activity = { "number", ACT[1], ACT[2] }, -- total ligand activity (1e-3)
+  gas_log_f = { "number", -300, 3 },          -- log10 fugacity (bar) of gases
+  ionic_strength = { "number", 0, I_MAX },    -- mol/kg, Davies correction
+  exclude = "strings",                        -- species left out
+  only = "strings",                           -- only these species
+  activities = { "map", ACT[1], ACT[2] },     -- per species activity, {["Fe^2+"] = 1e-5}
+  require_temperature_data = "boolean",       -- refuse log K held at 25 C
+}, true)
+local function check_window(where, opts, key)
+  local r = opts[key]
+  if r ~= nil and not (#r == 2 and r[1] < r[2]) then
+    core.user_error(("%s: option '%s' must be {from, to} with from < to"):format(where, key))
+  end
+end
 function phlox.map(opts)
-  assert(type(opts) == "table", "phlox.map: options table expected")
+  options("phlox.map", MAP_OPTS, opts)
   local lib = opts.library
-  if getmetatable(lib) ~= phlox.Library then error("phlox.map: library = phlox.library{...} expected", 2) end
-  if type(opts.element) ~= "string" then error("phlox.map: element (a symbol) expected", 2) end
+  check_library("phlox.map", lib)
+  if type(opts.element) ~= "string" then core.user_error("phlox.map: element (a symbol) is required") end
+  for _, k in ipairs { "pH_range", "E_range", "loga_range" } do check_window("phlox.map", opts, k) end
+  check_species("phlox.map", lib, opts.exclude, "exclude")
+  check_species("phlox.map", lib, opts.only, "only")
+  for f in pairs(opts.activities or {}) do
+    if not lib.db:species(f) then core.user_error(("phlox.map: option 'activities': no species '%s' in the library"):format(f)) end
+  end
   local T = temperature(opts, "phlox.map")
   local P = pressure(opts, T, "phlox.map")
   local held = held_logk(lib, { opts.element, opts.ligand }, T, P, opts, "phlox.map")
@@ -266,7 +361,7 @@ function phlox.map(opts)
     exclude = opts.exclude, only = opts.only, activities = opts.activities,
   }
   local m, err = core.map(lib.db, copt)
-  if not m then error(err, 2) end
+  if not m then core.user_error(err) end
   m.conditions = {
     T_C = T - T0C, P_bar = P, activity = opts.activity or 1e-6,
     ionic_strength = opts.ionic_strength or 0,
@@ -285,14 +380,33 @@ end
 --     fugacities = { ["CO2(g)"] = -3.4 },      -- log10 bar, replaces that element's total
 --     fixed = { ["Cl^-"] = -2 },               -- log10 activity of a basis species
 --     solids = true, suppress = {...}, exclude = {...},
---     activity = "davies" | "bdot" | "ideal" | "sit" }
+--     activity_model = "davies" | "bdot" | "ideal" | "sit" }
 -- Returns a table (pH, pe, E, ionic_strength, species, elements with each
 -- species' share, solids' saturation index and amount), or nil, message,
 -- info when the solver does not converge.
+local SPECIATE_OPTS = spec("phlox.speciate", {
+  library = "table",                          -- phlox.library{...}
+  totals = { "map", 0, TOTAL_MAX },           -- mol/kg of each element, {Ca = 1e-3}
+  basis = "table",                            -- basis species per element, {C = "HCO3^-"}
+  pH = { "number", -3, 17 },                  -- fixed pH; omit for charge balance (common practice, no source)
+  E = { "number", -5, 5 },                    -- V vs SHE
+  pe = { "number", -100, 100 },               -- pe = E F / (RT ln 10)
+  redox_gas = "string",                       -- "O2(g)": redox set by a gas fugacity
+  redox_log_f = { "number", -300, 3 },        -- its log10 fugacity (bar)
+  fugacities = { "map", -300, 3 },            -- log10 bar, {["CO2(g)"] = -3.4}
+  fixed = { "map", -300, 1 },                 -- log10 activity of a basis species
+  solids = "boolean",                         -- let solids precipitate (default true)
+  suppress = "strings",                       -- solids never precipitated (metastable)
+  exclude = "strings",                        -- species left out
+  activity_model = "ideal|davies|bdot|sit",   -- activity coefficients (davies)
+  max_iter = { "integer", 1, 100000 },        -- solver iterations
+}, true)
 function phlox.speciate(opts)
-  assert(type(opts) == "table", "phlox.speciate: options table expected")
+  options("phlox.speciate", SPECIATE_OPTS, opts)
   local lib = opts.library
-  if getmetatable(lib) ~= phlox.Library then error("phlox.speciate: library = phlox.library{...} expected", 2) end
+  check_library("phlox.speciate", lib)
+  check_species("phlox.speciate", lib, opts.exclude, "exclude")
+  check_species("phlox.speciate", lib, opts.suppress, "suppress")
   local T = temperature(opts, "phlox.speciate")
   local P = pressure(opts, T, "phlox.speciate")
   local copt = {}
@@ -313,14 +427,34 @@ end
 --   phlox.grid_map { library = lib, element = "Cu", T_C = 25, total = 1e-6,
 --                    ligand = "Cl", ligand_total = 1e-2, n = 201,
 --                    pH_range = {0, 14}, E_range = {-2, 2},
---                    activity = "davies", threads = 2 }
+--                    activity_model = "davies", threads = 2 }
 -- Returns a map table with `boundaries` (polylines between named species),
 -- `fields` = {} (no polygons: draw it with phlox.plot.overlay next to an
 -- exact map), `labels` (node labels), `species` and solver statistics.
+local GRID_MAP_OPTS = spec("phlox.grid_map", {
+  library = "table",                          -- phlox.library{...}
+  element = "string",                         -- the element mapped
+  total = { "number", ACT[1], TOTAL_MAX },    -- mol/kg of the element (1e-6)
+  ligand = "string",                          -- a ligand element
+  ligand_total = { "number", ACT[1], TOTAL_MAX }, -- mol/kg of the ligand (1e-3)
+  n = { "integer", 2, 4001 },                 -- nodes per axis (101)
+  nx = { "integer", 2, 4001 },                -- nodes along pH
+  ny = { "integer", 2, 4001 },                -- nodes along E
+  pH_range = { "numbers", -COORD, COORD },    -- {0, 14}
+  E_range = { "numbers", -COORD, COORD },     -- {-2, 2}
+  activity_model = "ideal|davies|bdot",       -- activity coefficients (davies)
+  background_nacl = { "number", 0, 6.1 },     -- mol/kg NaCl (halite saturation, from memory of the CRC Handbook)
+  exclude = "strings",                        -- species left out
+  threads = { "integer", 1, 64 },             -- worker threads
+  require_temperature_data = "boolean",       -- refuse log K held at 25 C
+}, true)
 function phlox.grid_map(opts)
-  assert(type(opts) == "table", "phlox.grid_map: options table expected")
+  options("phlox.grid_map", GRID_MAP_OPTS, opts)
   local lib = opts.library
-  if getmetatable(lib) ~= phlox.Library then error("phlox.grid_map: library = phlox.library{...} expected", 2) end
+  check_library("phlox.grid_map", lib)
+  if type(opts.element) ~= "string" then core.user_error("phlox.grid_map: element (a symbol) is required") end
+  for _, k in ipairs { "pH_range", "E_range" } do check_window("phlox.grid_map", opts, k) end
+  check_species("phlox.grid_map", lib, opts.exclude, "exclude")
   local T = temperature(opts, "phlox.grid_map")
   local P = pressure(opts, T, "phlox.grid_map")
   local held = held_logk(lib, { opts.element, opts.ligand }, T, P, opts, "phlox.grid_map")
@@ -329,9 +463,9 @@ function phlox.grid_map(opts)
     element = opts.element, T = T, P = P, window = { pr[1], pr[2], er[1], er[2] },
     nx = opts.nx or opts.n or 101, ny = opts.ny or opts.n or 101,
     total = opts.total, ligand = opts.ligand, ligand_total = opts.ligand_total,
-    activity = opts.activity, background_nacl = opts.background_nacl,
+    activity_model = opts.activity_model, background_nacl = opts.background_nacl,
     exclude = opts.exclude, threads = opts.threads })
-  if not g then error(err, 2) end
+  if not g then core.user_error(err) end
   g.fields = {}
   g.conditions = { T_C = T - T0C, P_bar = P, total = opts.total or 1e-6,
                    ligand = opts.ligand, ligand_total = opts.ligand and (opts.ligand_total or 1e-3) or nil }
@@ -342,6 +476,10 @@ end
 
 --- The species of the map at a point, e.g. phlox.locate(map, 7.0, -0.4).
 function phlox.locate(map, x, y)
+  core.check_value("phlox.locate", "map", map, "table")
+  if type(map.fields) ~= "table" then core.user_error("phlox.locate: a map (phlox.map{...}) expected") end
+  core.check_value("phlox.locate", "x", x, "number", -COORD, COORD)
+  core.check_value("phlox.locate", "y", y, "number", -COORD, COORD)
   for _, f in ipairs(map.fields) do
     local inside, n = false, #f.x
     local j = n
@@ -364,8 +502,10 @@ end
 
 --- A potential measured against a reference electrode, on the SHE scale.
 function phlox.to_she(E_measured, electrode)
-  local e = phlox.electrodes()[electrode]
-  if not e then error("unknown reference electrode '" .. tostring(electrode) .. "'", 2) end
+  core.check_value("phlox.to_she", "E_measured", E_measured, "number", -COORD, COORD)
+  core.check_value("phlox.to_she", "electrode", electrode, "string")
+  -- the same names as phlox.where{reference = ...}: short (SCE, Ag/AgCl, CSE) or full
+  local e = require("phlox.diagrams").electrode(electrode)
   return E_measured + e.offset
 end
 

@@ -101,6 +101,10 @@ int px_data_load_buffer(px_db *db, const char *text, size_t len, const char *nam
 /* Same for a file on disk (PX_EIO if it cannot be read; PX_ELIMIT if larger
  * than PX_DATA_FILE_MAX). */
 #define PX_DATA_FILE_MAX ((size_t)4 << 20)
+/* Reads a whole file for loading: regular files only, at most
+ * PX_DATA_FILE_MAX bytes, NUL-terminated (free() it).  PX_EIO (cannot open,
+ * not a regular file, read error) or PX_ELIMIT (too large), with MSG set. */
+int px_data_read_file(const char *path, char **text, size_t *len, char *msg, size_t msgsize);
 int px_data_load_file(px_db *db, const char *path, const px_data_options *opt,
                       px_data_problems *probs);
 /* Loads the embedded standard-library file stdlib/elements/<ELEMENT>.lua

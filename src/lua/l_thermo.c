@@ -11,6 +11,7 @@
 #include "water/water.h"
 #include <lauxlib.h>
 #include <math.h>
+#include <limits.h>
 #include <stdio.h>
 #include <stdlib.h>
 #include <string.h>
@@ -90,13 +91,18 @@ static int *opt_elements(lua_State *L, int idx, size_t *n)
         lua_pop(L, 1);
         return NULL;
     }
-    size_t len = (size_t)luaL_len(L, -1);
+    /* the raw length: a __len metamethod could claim any size (a negative
+     * one wrapped to a huge size_t) */
+    size_t len = lua_rawlen(L, -1);
+    if (len > PX_ELEMENT_MAX)
+        px_lua_user_error(L, "load: option 'elements' lists %d entries (at most %d elements exist)",
+                          (int)(len > INT_MAX ? INT_MAX : len), PX_ELEMENT_MAX);
     int *z = lua_newuserdatauv(L, (len ? len : 1) * sizeof *z, 0);
     for (size_t i = 0; i < len; i++) {
-        lua_rawgeti(L, -2, (lua_Integer)i + 1);
-        const char *sym = lua_tostring(L, -1);
+        const char *sym = lua_rawgeti(L, -2, (lua_Integer)i + 1) == LUA_TSTRING ? lua_tostring(L, -1) : NULL;
         if (!sym || !(z[i] = px_element_z(sym)))
-            luaL_error(L, "elements[%d]: unknown element '%s'", (int)i + 1, sym ? sym : "?");
+            px_lua_user_error(L, "load: option 'elements'[%d]: unknown element '%s'", (int)i + 1,
+                              sym ? sym : luaL_typename(L, -1));
         lua_pop(L, 1);
     }
     lua_remove(L, -2); /* the list; the box stays on the stack */
@@ -115,6 +121,9 @@ static int db_load(lua_State *L)
     lua_settop(L, 4);
     px_data_options o = px_data_options_default();
     int user = 0;
+    static const px_lua_opt load_opts[] = {{"elements", "strings", 0, 0}, {"user", "boolean", 0, 0},
+                                           {NULL, NULL, 0, 0}};
+    if (!lua_isnil(L, 4)) px_lua_opts_check(L, 4, "Database:load", load_opts);
     if (lua_istable(L, 4)) {
         o.elements = opt_elements(L, 4, &o.n_elements);
         lua_getfield(L, 4, "user");
@@ -258,6 +267,12 @@ static int db_remove(lua_State *L)
 static int checkTP(lua_State *L, int iT, int iP, double *T, double *P)
 {
     *T = luaL_checknumber(L, iT);
+    if (!isfinite(*T) || *T <= 0) return px_lua_user_error(L, "temperature must be a finite number of kelvin, got %f", *T);
+    if (!lua_isnoneornil(L, iP)) {
+        double p = luaL_checknumber(L, iP);
+        if (!(p > 0 && p <= PX_WATER_PMAX))
+            return px_lua_user_error(L, "pressure %f bar is out of range (0, %f]", p, PX_WATER_PMAX);
+    }
     if (lua_isnoneornil(L, iP)) {
         int st = px_thermo_default_pressure(*T, P);
         if (st != PX_OK) {
@@ -462,6 +477,21 @@ static int l_check_files(lua_State *L)
     return 2;
 }
 
+/* core.limits: the ranges the entry points accept (lua/phlox.lua reads them) */
+static void push_limits(lua_State *L)
+{
+    lua_createtable(L, 0, 4);
+    lua_pushnumber(L, PX_WATER_TMIN);
+    lua_setfield(L, -2, "T_min");
+    lua_pushnumber(L, PX_WATER_TMAX);
+    lua_setfield(L, -2, "T_max");
+    lua_pushnumber(L, PX_WATER_PMAX);
+    lua_setfield(L, -2, "P_max");
+    lua_pushinteger(L, (lua_Integer)PX_DATA_FILE_MAX);
+    lua_setfield(L, -2, "file_max");
+    lua_setfield(L, -2, "limits");
+}
+
 void px_lua_open_thermo(lua_State *L)
 {
     static const luaL_Reg methods[] = {
@@ -481,6 +511,7 @@ void px_lua_open_thermo(lua_State *L)
     lua_setfield(L, -2, "__close");
     lua_pop(L, 1);
     luaL_setfuncs(L, funcs, 0);
+    push_limits(L);
 }
 
 /* For other binding files (maps, speciation): the db and workspace behind

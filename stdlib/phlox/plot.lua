@@ -136,6 +136,7 @@ local function is_pH(axis) return axis and axis.name == "pH" end
 local function reference(opts, map)
   local ref = opts.reference
   if ref == nil then return { name = "SHE", offset = 0 } end
+  if type(ref) == "string" then ref = require("phlox.diagrams").electrode(ref) end
   if type(ref) ~= "table" or type(ref.name) ~= "string" or not is_num(ref.offset) then
     error("plot: opts.reference must be { name = \"SCE\", offset = <E of the electrode vs SHE, V> }", 3)
   end
@@ -612,8 +613,54 @@ end
 -- reference = { name = "SCE", offset = 0.241 }, title, domains = "hatch" |
 -- "tint" (overlay of corrosion domains), labels = false, stamp (extra
 -- lines).  Returns the phlox.Figure and the fill table (fills, tiers).
+-- Options of the drawing functions (the one reader, src/lua/l_opts.c):
+-- one line per key; plot.map's keys are shared by domains, grid and overlay.
+local FIG_OPTS = {
+  file = "string",                        -- .png, .svg or .pdf
+  title = "string",
+  width = { "number", 50, 20000 },        -- points (figure.c limits)
+  height = { "number", 50, 20000 },
+  dpi = { "number", 10, 2400 },           -- PNG only
+  conditions = "table",                   -- stamped under the figure
+  stamp = "strings",                      -- extra stamp lines
+  no_script = "boolean",                  -- leave the script's name off the stamp
+  legend = "boolean",
+}
+local MAP_OPTS = {
+  labels = "boolean",                     -- field labels
+  water = "boolean",                      -- water stability lines
+  domains = "boolean/hatch|tint",         -- corrosion domains overlay
+  reference = "table/string",             -- E axis against this electrode: a name (as phlox.to_she) or {name, offset}
+}
+local MULTI_OPTS = {
+  cols = { "integer", 1, 64 },
+  pages = "boolean",                      -- one page per map (PDF)
+  shared = "boolean",                     -- one window for all maps
+  shared_fills = "boolean",               -- one colour per species across maps
+  labels_of = "integer/boolean",          -- overlay: whose labels are shown
+  legend_label = "function",              -- function(map, i) -> legend text
+  panel_title = "function",               -- function(map, i) -> panel title
+  x = "table", y = "table",               -- axis overrides
+}
+local function opts_spec(fname, ...)
+  local t = {}
+  for _, part in ipairs { FIG_OPTS, ... } do for k, v in pairs(part) do t[k] = v end end
+  plot.option_specs = plot.option_specs or {}
+  plot.option_specs[fname] = t
+  return t
+end
+local PLOT_MAP_OPTS = opts_spec("plot.map", MAP_OPTS)
+local PLOT_DOMAINS_OPTS = opts_spec("plot.domains", MAP_OPTS)
+local PLOT_GRID_OPTS = opts_spec("plot.grid", MAP_OPTS, MULTI_OPTS)
+local PLOT_OVERLAY_OPTS = opts_spec("plot.overlay", MAP_OPTS, MULTI_OPTS)
+local PLOT_CURVES_OPTS = opts_spec("plot.curves", { x = "table", y = "table" })
+local function read_opts(fname, spec, opts)
+  if opts == nil then return {} end
+  return core.options(fname, spec, opts)
+end
+
 function plot.map(map, opts)
-  opts = opts or {}
+  opts = read_opts("plot.map", PLOT_MAP_OPTS, opts)
   plot.check_map(map, "plot.map")
   if opts.domains ~= nil and opts.domains ~= false and opts.domains ~= true and opts.domains ~= "hatch" and opts.domains ~= "tint" then
     error("plot.map: opts.domains must be \"hatch\" or \"tint\"", 2)
@@ -643,7 +690,7 @@ end
 -- pH and a legend.  Uses map.domains, or derives them from the field kinds
 -- (see plot.domains_of).  opts as plot.map.
 function plot.domains(map, opts)
-  opts = opts or {}
+  opts = read_opts("plot.domains", PLOT_DOMAINS_OPTS, opts)
   plot.check_map(map, "plot.domains")
   local ref = reference(opts, map)
   local w, h = size(opts)
@@ -743,7 +790,7 @@ end
 -- "outside" (default) | "top right" | ... | false, conditions, stamp, file,
 -- width, height, dpi.
 function plot.curves(series, opts)
-  opts = opts or {}
+  opts = read_opts("plot.curves", PLOT_CURVES_OPTS, opts)
   if type(series) ~= "table" or #series == 0 then error("plot.curves: series must be a non-empty list", 2) end
   local ox, oy = opts.x or {}, opts.y or {}
   for i, s in ipairs(series) do
@@ -834,7 +881,7 @@ end
 -- (PDF: one page per panel; cols is then ignored), and the options of plot.map (reference,
 -- domains, labels, file, width, height, dpi, stamp).
 function plot.grid(maps, opts)
-  opts = opts or {}
+  opts = read_opts("plot.grid", PLOT_GRID_OPTS, opts)
   if type(maps) ~= "table" or #maps == 0 then error("plot.grid: maps must be a non-empty list", 2) end
   for i, m in ipairs(maps) do plot.check_map(m, ("plot.grid: maps[%d]"):format(i)) end
   local ref = reference(opts, maps[1])
@@ -887,7 +934,7 @@ end
 -- the temperature), water = false to leave out water lines, title, and the
 -- options of plot.map.
 function plot.overlay(maps, opts)
-  opts = opts or {}
+  opts = read_opts("plot.overlay", PLOT_OVERLAY_OPTS, opts)
   if type(maps) ~= "table" or #maps == 0 then error("plot.overlay: maps must be a non-empty list", 2) end
   for i, m in ipairs(maps) do plot.check_map(m, ("plot.overlay: maps[%d]"):format(i)) end
   local ref = reference(opts, maps[1])

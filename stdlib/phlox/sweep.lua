@@ -75,9 +75,19 @@ end
 -- Shows progress on a terminal (stderr), stays quiet in CI (CI set) or when
 -- opts.quiet.  fn may return nil, message to record a failure; failures are
 -- collected in the second result rather than stopping the sweep.
+local RUN_OPTS = {
+  quiet = "boolean",                      -- no progress display
+  label = "string",                       -- progress label
+}
+local PARALLEL_OPTS = {
+  quiet = "boolean", label = "string",
+  workers = { "integer", 1, 256 },        -- worker processes (1: none)
+}
 function sweep.run(points, fn, opts)
-  opts = opts or {}
   local core = require "phlox.core"
+  core.check_value("sweep.run", "points", points, "table")
+  core.check_value("sweep.run", "fn", fn, "function")
+  opts = core.options("sweep.run", RUN_OPTS, opts or {})
   local show = not opts.quiet and not os.getenv("CI") and core.isatty and core.isatty(2)
   local results, failures = {}, {}
   local n = #points
@@ -126,7 +136,11 @@ local function serialise(v, out)
   end
 end
 
-local function shell_quote(s) return "'" .. tostring(s):gsub("'", "'\\''") .. "'" end
+-- the worker's temporary folder and its part files, without a shell
+local function remove_tree(core, dir)
+  for _, name in ipairs(core.list_dir(dir) or {}) do core.remove(dir .. "/" .. name) end
+  core.remove(dir)
+end
 
 --- Run fn over the points on several worker processes (the study script is
 -- started again once per worker with PHLOX_SHARD=i/n; each worker runs its
@@ -135,7 +149,10 @@ local function shell_quote(s) return "'" .. tostring(s):gsub("'", "'\\''") .. "'
 -- opts.quiet.  One parallel sweep per script; the script must reach the
 -- sweep.parallel call deterministically (the workers rerun it from the top).
 function sweep.parallel(points, fn, opts)
-  opts = opts or {}
+  local core = require "phlox.core"
+  core.check_value("sweep.parallel", "points", points, "table")
+  core.check_value("sweep.parallel", "fn", fn, "function")
+  opts = core.options("sweep.parallel", PARALLEL_OPTS, opts or {})
   local spec, dir = os.getenv("PHLOX_SHARD"), os.getenv("PHLOX_SHARD_DIR")
   if spec and dir then -- worker
     local i, n = spec:match("^(%d+)/(%d+)$")
@@ -144,36 +161,44 @@ function sweep.parallel(points, fn, opts)
     local res, fails = sweep.run(mine, fn, { quiet = true })
     local out = { "return " }
     serialise({ results = res, n = #mine, failures = fails }, out)
-    local core = require "phlox.core"
     local ok, err = core.write_atomic(("%s/part-%d"):format(dir, i), table.concat(out))
     if not ok then io.stderr:write("phlox: sweep.parallel worker: ", err, "\n"); os.exit(1, true) end
     os.exit(0, true) -- close the Lua state first (frees everything)
   end
   local n = opts.workers or 1
-  assert(math.type(n) == "integer" and n >= 1, "sweep.parallel: workers must be an integer >= 1")
   if n == 1 or #points < 2 then return sweep.run(points, fn, opts) end
   local script = rawget(_G, "arg") and arg[0]
   assert(script and script ~= "-", "sweep.parallel: workers need a study script file (not -e or stdin)")
   local dir = os.tmpname()
   os.remove(dir)
-  assert(os.execute("mkdir -p " .. shell_quote(dir)), "sweep.parallel: cannot make " .. dir)
-  -- the same program, options, script and arguments
+  local made, merr = core.make_dir(dir)
+  if not made then core.user_error("sweep.parallel: " .. merr) end
+  -- the same program, options, script and arguments, started directly
+  -- (posix_spawn: no shell sees the folder or script names)
   local lo = 0
   while arg[lo - 1] do lo = lo - 1 end
   local words = {}
-  for k = lo, #arg do words[#words + 1] = shell_quote(arg[k]) end
-  local cmd = table.concat(words, " ")
-  local jobs = {}
+  for k = lo, #arg do words[#words + 1] = arg[k] end
+  local pids, codes = {}, {}
   for i = 1, n do
-    jobs[#jobs + 1] = ("PHLOX_SHARD=%d/%d PHLOX_SHARD_DIR=%s %s >/dev/null &"):format(i, n, shell_quote(dir), cmd)
+    local pid, err = core.spawn(words, { PHLOX_SHARD = ("%d/%d"):format(i, n), PHLOX_SHARD_DIR = dir }, true)
+    if not pid then
+      for _, p in ipairs(pids) do core.wait(p) end
+      remove_tree(core, dir)
+      core.user_error("sweep.parallel: " .. err)
+    end
+    pids[i] = pid
   end
-  local ok = os.execute(table.concat(jobs, " ") .. " wait")
+  for i = 1, n do
+    local exited, code = core.wait(pids[i])
+    codes[i] = exited and code or ("signal " .. tostring(code))
+  end
   local results, failures = {}, {}
   for i = 1, n do
     local f = io.open(("%s/part-%d"):format(dir, i), "rb")
     if not f then
-      os.execute("rm -rf " .. shell_quote(dir))
-      error(("sweep.parallel: worker %d of %d wrote nothing (exit %s)"):format(i, n, tostring(ok)), 2)
+      remove_tree(core, dir)
+      core.user_error(("sweep.parallel: worker %d of %d wrote nothing (exit %s)"):format(i, n, tostring(codes[i])))
     end
     local part = assert(load(f:read("a"), "=part", "t", {}))()
     f:close()
@@ -184,7 +209,7 @@ function sweep.parallel(points, fn, opts)
     end
   end
   table.sort(failures, function(a, b) return a.index < b.index end)
-  os.execute("rm -rf " .. shell_quote(dir))
+  remove_tree(core, dir)
   return results, failures
 end
 
