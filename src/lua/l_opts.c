@@ -82,6 +82,35 @@ static int distance(const char *a, const char *b)
 }
 
 /* Is TYPE (one alternative, length N) the name T? */
+/* Tie-break between keys at the same distance: the longer common
+ * subsequence ("TC" is nearer "T_C" than "T"). */
+static int common(const char *a, const char *b)
+{
+    size_t la = strlen(a), lb = strlen(b);
+    if (la > OPT_NAME_MAX || lb > OPT_NAME_MAX) return 0;
+    int row[OPT_NAME_MAX + 1] = {0};
+    for (size_t i = 1; i <= la; i++) {
+        int diag = 0;
+        for (size_t j = 1; j <= lb; j++) {
+            int up = row[j];
+            int ca = a[i - 1] | 0x20, cb = b[j - 1] | 0x20; /* ASCII letters, any case */
+            row[j] = ca == cb ? diag + 1 : (row[j] > row[j - 1] ? row[j] : row[j - 1]);
+            diag = up;
+        }
+    }
+    return row[lb];
+}
+
+/* is CAND (at distance D) a better suggestion for KEY than BEST (at BD)? */
+static int better(const char *key, const char *cand, int d, const char *best, int bd)
+{
+    if (d != bd) return d < bd;
+    if (!best) return 1;
+    int cc = common(key, cand), cb = common(key, best);
+    if (cc != cb) return cc > cb;
+    return strcmp(cand, best) < 0;
+}
+
 static int is(const char *type, size_t n, const char *t)
 {
     return strlen(t) == n && memcmp(type, t, n) == 0;
@@ -224,9 +253,10 @@ static const char *type_words(lua_State *L, const char *type)
     return s;
 }
 
-/* Checks the value at IDX against TYPE; raises naming FNAME and KEY. */
-void px_lua_opt_check_value(lua_State *L, int idx, const char *fname, const char *key,
-                            const char *type, double lo, double hi)
+/* Checks the value at IDX against TYPE; raises naming FNAME, WHAT
+ * ("option" or "argument") and KEY. */
+static void check_value_as(lua_State *L, int idx, const char *fname, const char *what,
+                           const char *key, const char *type, double lo, double hi)
 {
     idx = lua_absindex(L, idx);
     if (lua_isnil(L, idx)) return;
@@ -241,7 +271,7 @@ void px_lua_opt_check_value(lua_State *L, int idx, const char *fname, const char
         }
         if (r == 2) {
             const char *why = lua_tostring(L, -1);
-            px_lua_user_error(L, "%s: option '%s'%s%s", fname, key, why[0] == '[' ? "" : " ", why);
+            px_lua_user_error(L, "%s: %s '%s'%s%s", fname, what, key, why[0] == '[' ? "" : " ", why);
         }
         lua_settop(L, top);
         p += n + (slash != NULL);
@@ -249,12 +279,18 @@ void px_lua_opt_check_value(lua_State *L, int idx, const char *fname, const char
     const char *want = type_words(L, type);
     char vb[32];
     if (lua_type(L, idx) == LUA_TSTRING)
-        px_lua_user_error(L, "%s: option '%s' must be %s, got string '%s'", fname, key, want,
+        px_lua_user_error(L, "%s: %s '%s' must be %s, got string '%s'", fname, what, key, want,
                           lua_tostring(L, idx));
     if (lua_type(L, idx) == LUA_TNUMBER)
-        px_lua_user_error(L, "%s: option '%s' must be %s, got number %s", fname, key, want,
+        px_lua_user_error(L, "%s: %s '%s' must be %s, got number %s", fname, what, key, want,
                           num_text(vb, sizeof vb, lua_tonumber(L, idx)));
-    px_lua_user_error(L, "%s: option '%s' must be %s, got %s", fname, key, want, luaL_typename(L, idx));
+    px_lua_user_error(L, "%s: %s '%s' must be %s, got %s", fname, what, key, want, luaL_typename(L, idx));
+}
+
+void px_lua_opt_check_value(lua_State *L, int idx, const char *fname, const char *key,
+                            const char *type, double lo, double hi)
+{
+    check_value_as(L, idx, fname, "option", key, type, lo, hi);
 }
 
 static void unknown_key(lua_State *L, const char *fname, const char *key, const char *best)
@@ -287,7 +323,7 @@ void px_lua_opts_check(lua_State *L, int idx, const char *fname, const px_lua_op
             int bd = OPT_NEAR_MAX + 1;
             for (o = spec; o->name; o++) {
                 int d = distance(key, o->name);
-                if (d < bd) bd = d, best = o->name;
+                if (d <= OPT_NEAR_MAX && better(key, o->name, d, best, bd)) bd = d, best = o->name;
             }
             unknown_key(L, fname, key, best);
         }
@@ -339,7 +375,7 @@ static int l_options(lua_State *L)
                     lua_pop(L, 1);
                     if (lua_type(L, -1) != LUA_TSTRING || strcmp(lua_tostring(L, -1), "*") == 0) continue;
                     int d = distance(key, lua_tostring(L, -1));
-                    if (d < bd || (d == bd && best && strcmp(lua_tostring(L, -1), best) < 0))
+                    if (d <= OPT_NEAR_MAX && better(key, lua_tostring(L, -1), d, best, bd))
                         bd = d, best = lua_tostring(L, -1);
                 }
                 unknown_key(L, fname, key, best);
@@ -350,10 +386,10 @@ static int l_options(lua_State *L)
         } else if (lua_isinteger(L, -2) && lua_getfield(L, 2, "*") != LUA_TNIL) {
             const char *type = spec_entry(L, &lo, &hi);
             const char *key = lua_pushfstring(L, "[%I]", lua_tointeger(L, -3));
-            px_lua_opt_check_value(L, -3, fname, key, type, lo, hi);
+            check_value_as(L, -3, fname, "entry", key, type, lo, hi);
             lua_pop(L, 2);
         } else {
-            if (lua_isinteger(L, -2)) lua_pop(L, 1); /* the missing "*" entry */
+            if (lua_type(L, -1) == LUA_TNIL && lua_isinteger(L, -3)) lua_pop(L, 1); /* the missing "*" */
             if (lua_type(L, -2) == LUA_TNUMBER)
                 px_lua_user_error(L, "%s: unexpected positional entry %s (options are name = value)",
                                   fname, luaL_tolstring(L, -2, NULL));
@@ -378,8 +414,8 @@ static int l_check_value(lua_State *L)
     const char *fname = luaL_checkstring(L, 1), *key = luaL_checkstring(L, 2);
     const char *type = luaL_checkstring(L, 4);
     double lo = luaL_optnumber(L, 5, -HUGE_VAL), hi = luaL_optnumber(L, 6, HUGE_VAL);
-    if (lua_isnil(L, 3)) px_lua_user_error(L, "%s: %s is required (%s)", fname, key, type_words(L, type));
-    px_lua_opt_check_value(L, 3, fname, key, type, lo, hi);
+    if (lua_isnil(L, 3)) px_lua_user_error(L, "%s: argument '%s' is required (%s)", fname, key, type_words(L, type));
+    check_value_as(L, 3, fname, "argument", key, type, lo, hi);
     lua_settop(L, 3);
     return 1;
 }
