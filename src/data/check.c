@@ -196,10 +196,37 @@ static int is_builtin(const char *canonical)
     return 0;
 }
 
+static int cmp_name(const void *a, const void *b)
+{
+    const pxd_name *x = a, *y = b;
+    int c = strcmp(x->text, y->text);
+    return c ? c : (x->index > y->index) - (x->index < y->index);
+}
+
+/* the formula-ok entries sorted by (formula, position): lookups and the
+ * duplicate check in O(log n) instead of a scan of the file */
+static void build_names(pxd_file *f)
+{
+    f->names = malloc((f->n ? f->n : 1) * sizeof *f->names);
+    if (!f->names) {
+        f->oom = 1;
+        return;
+    }
+    for (size_t i = 0; i < f->n; i++)
+        if (f->e[i].formula_ok) f->names[f->n_names++] = (pxd_name){f->e[i].sp.f.text, i};
+    qsort(f->names, f->n_names, sizeof *f->names, cmp_name);
+}
+
+/* the first entry (lowest position) with this canonical formula, or NULL */
 static const pxd_entry *find_in_file(const pxd_file *f, const char *canonical)
 {
-    for (size_t i = 0; i < f->n; i++)
-        if (f->e[i].formula_ok && strcmp(f->e[i].sp.f.text, canonical) == 0) return &f->e[i];
+    size_t lo = 0, hi = f->n_names;
+    while (lo < hi) {
+        size_t mid = lo + (hi - lo) / 2;
+        if (strcmp(f->names[mid].text, canonical) < 0) lo = mid + 1;
+        else hi = mid;
+    }
+    if (lo < f->n_names && strcmp(f->names[lo].text, canonical) == 0) return &f->e[f->names[lo].index];
     return NULL;
 }
 
@@ -280,12 +307,10 @@ static void check_entry(pxd_file *f, pxd_entry *e, const px_db *known)
                              "%s is built in: do not define it in an element file", fm->text);
         else
             check_membership(f, e);
-        for (pxd_entry *o = f->e; o < e; o++)
-            if (o->formula_ok && strcmp(o->sp.f.text, fm->text) == 0) {
-                pxd_report_entry(f, e, PX_DATA_ERROR, "formula",
-                                 "defined twice in this file (first at line %d)", o->sp.line);
-                break;
-            }
+        const pxd_entry *o = find_in_file(f, fm->text);
+        if (o && o < e)
+            pxd_report_entry(f, e, PX_DATA_ERROR, "formula",
+                             "defined twice in this file (first at line %d)", o->sp.line);
         if (known && !f->opt->user_file) {
             const px_species *k = px_db_find(known, fm->text);
             if (k && k->file)
@@ -315,6 +340,8 @@ static void check_entry(pxd_file *f, pxd_entry *e, const px_db *known)
 
 void pxd_check_file(pxd_file *f, const px_db *known)
 {
+    build_names(f);
+    if (f->oom) return;
     for (size_t i = 0; i < f->n; i++) check_entry(f, &f->e[i], known);
     for (size_t i = 0; i < f->n_ex; i++) {
         px_formula fm;

@@ -24,6 +24,7 @@ px_data_options px_data_options_default(void)
     memset(&o, 0, sizeof o);
     o.mem_limit = PX_DATA_MEM_LIMIT_DEFAULT;
     o.instr_limit = PX_DATA_INSTR_LIMIT_DEFAULT;
+    o.wall_limit = PX_DATA_WALL_LIMIT_DEFAULT;
     o.consistency_tol = PX_DATA_CONSISTENCY_TOL_DEFAULT;
     o.magnitude_warn = PX_DATA_MAGNITUDE_WARN_DEFAULT;
     return o;
@@ -35,6 +36,7 @@ static void file_free(pxd_file *f, px_data_problems *own)
     free(f->e);
     free(f->ex);
     free(f->tok);
+    pxd_index_free(f);
     px_data_problems_free(own);
 }
 
@@ -56,7 +58,7 @@ static int run(pxd_file *f, px_data_problems **own, const char *text, size_t len
     f->s_unit = 1.0;    /* J/(mol K) */
     f->Tmin = PXD_TMIN_DEFAULT;
     f->Tmax = PXD_TMAX_DEFAULT;
-    if (!text || opt->mem_limit == 0 || opt->instr_limit == 0 ||
+    if (!text || opt->mem_limit == 0 || opt->instr_limit == 0 || !(opt->wall_limit > 0) ||
         !(opt->consistency_tol > 0) || !(opt->magnitude_warn > 0))
         return PX_EINVAL;
     if (pxd_tokenize(f) != PX_OK) return PX_ENOMEM;

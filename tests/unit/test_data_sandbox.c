@@ -160,6 +160,51 @@ static void test_budget_loops(void **state)
     assert_int_equal(px_data_check_buffer(NULL, work, strlen(work), "w.lua", &o, NULL), PX_OK);
 }
 
+/* Work inside C functions is charged to the same budget: each of these ran
+ * for hours before the helpers were bounded (one C call, no instructions). */
+static void test_budget_inside_c(void **state)
+{
+    (void)state;
+    static const char *work[] = {
+        "local s = string.rep('', math.maxinteger)" OK_TAIL,
+        "local s = ('') : rep(math.maxinteger)" OK_TAIL,
+        "local s = string.rep('', 1 << 40, '')" OK_TAIL,
+        "local t = {} for i = 1, 1000 do t[i] = i end\nfor k = 1, 1e6 do table.sort(t) end" OK_TAIL,
+        "local t = {} for i = 1, 1000 do t[i] = 'x' end\nfor k = 1, 1e6 do local s = table.concat(t) end" OK_TAIL,
+        "local t = {} for i = 1, 1000 do t[i] = i end\nfor k = 1, 1e6 do table.insert(t, 1, k); table.remove(t, 1) end" OK_TAIL,
+        "local s = string.rep('x', 4096)\nfor k = 1, 1e7 do local u = s:upper() end" OK_TAIL,
+        "local s = string.rep('x', 4096)\nfor k = 1, 1e7 do local u = string.format('%s%s', s, s) end" OK_TAIL,
+        "pcall(string.rep, '', math.maxinteger)\nlocal n = 0" OK_TAIL, /* caught: stays tripped */
+    };
+    for (size_t i = 0; i < sizeof work / sizeof work[0]; i++) {
+        double t0 = seconds();
+        expect(work[i], PX_ELIMIT, "instruction budget exceeded");
+        double dt = seconds() - t0;
+        print_message("C-work case %zu stopped after %.3f s\n", i, dt);
+    }
+    /* honest use of the helpers still works */
+    const char *ok = "local s = string.rep('ab', 1000, ',')\nlocal t = {3, 1, 2}\ntable.sort(t)\n"
+                     "local c = table.concat(t, '-')\nassert(c == '1-2-3' and #s == 2999)" OK_TAIL;
+    assert_int_equal(px_data_check_buffer(NULL, ok, strlen(ok), "ok.lua", NULL, NULL), PX_OK);
+}
+
+/* A wall-clock limit per file stops what the budget does not see. */
+static void test_wall_clock(void **state)
+{
+    (void)state;
+    px_data_options o = px_data_options_default();
+    o.instr_limit = (unsigned long)-1 / 2; /* practically no instruction budget */
+    o.wall_limit = 0.2;
+    const char *spin = "while true do end" OK_TAIL;
+    px_data_problems *p = px_data_problems_new();
+    double t0 = seconds();
+    assert_int_equal(px_data_check_buffer(NULL, spin, strlen(spin), "w.lua", &o, p), PX_ELIMIT);
+    double dt = seconds() - t0;
+    assert_true(problem_has(p, "wall-clock limit exceeded"));
+    assert_true(dt >= 0.2 && dt < 20.0);
+    px_data_problems_free(p);
+}
+
 static void test_memory_cap(void **state)
 {
     (void)state;
@@ -250,6 +295,7 @@ int main(void)
         cmocka_unit_test(test_allowed_helpers),   cmocka_unit_test(test_budget_loops),
         cmocka_unit_test(test_memory_cap),        cmocka_unit_test(test_binary_chunk_refused),
         cmocka_unit_test(test_runtime_errors),    cmocka_unit_test(test_non_finite),
+        cmocka_unit_test(test_budget_inside_c),   cmocka_unit_test(test_wall_clock),
     };
     return cmocka_run_group_tests(tests, NULL, NULL);
 }
