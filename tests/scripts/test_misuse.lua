@@ -46,6 +46,14 @@ local line = debug.getinfo(1, "l").currentline - 1
 local ok, err = pcall(helper)
 check(not ok and err:find(("%s:%d: phlox.map"):format(me, line), 1, true) == 1, "helper line: " .. tostring(err))
 
+-- a __len metamethod cannot make the element list claim a huge or negative
+-- size (it wrapped to a huge size_t in opt_elements): the raw length counts
+local liar = setmetatable({ "Zn" }, { __len = function() return -1 end })
+local db = core.database()
+check(db:load("return { element = 'Zn', species = {} }", "len.lua", { elements = liar }), "__len is ignored")
+liar = setmetatable({}, { __len = function() return math.maxinteger end })
+check(db:load("return { element = 'Zn', species = {} }", "len.lua", { elements = liar }), "__len is ignored")
+
 -- no shell: folder names with quotes and $(...) are only names
 local odd = dir .. "/a'b \"c\" $(touch phlox-pwned-marker)`touch phlox-pwned-marker`"
 check(phlox.make_dir(odd .. "/sub") and core.file_kind(odd .. "/sub") == "dir", "make_dir with an odd name")
