@@ -5,6 +5,8 @@
  *   core.list_dir(path)            -> sorted names | nil, message
  *   core.make_dir(path [, parents])-> true | nil, message   (mode 0777 & ~umask)
  *   core.remove(path)              -> true | nil, message   (a file or an empty folder)
+ *   core.remove_tree(path)         -> true | nil, message   (temporary folders; symlinks
+ *                                     are removed, never followed)
  *   core.read_file(path)           -> text | nil, message   (regular files only,
  *                                     the element-file size cap; src/data/load.c)
  *   core.file_kind(path)           -> "file"|"dir"|"link"|"other" | nil
@@ -16,6 +18,7 @@
 #include <dirent.h>
 #include <errno.h>
 #include <fcntl.h>
+#include <stdio.h>
 #include <lauxlib.h>
 #include <spawn.h>
 #include <stdlib.h>
@@ -28,6 +31,7 @@ extern char **environ;
 
 #define FS_DIR_MODE 0777 /* the umask narrows it, as mkdir(1) does */
 #define FS_ARGV_MAX 4096 /* words of a spawned command line */
+#define FS_TREE_DEPTH_MAX 64 /* folders removed below a temporary folder */
 
 static int fail_errno(lua_State *L, const char *what, const char *path, int err)
 {
@@ -102,6 +106,44 @@ static int l_remove(lua_State *L)
     if (lstat(path, &st) != 0) return fail_errno(L, "cannot remove", path, errno);
     if ((S_ISDIR(st.st_mode) ? rmdir(path) : unlink(path)) != 0)
         return fail_errno(L, "cannot remove", path, errno);
+    lua_pushboolean(L, 1);
+    return 1;
+}
+
+/* removes PATH and, for a folder, everything under it; symlinks are removed,
+ * never followed.  0 or an errno. */
+static int remove_tree(const char *path, int depth)
+{
+    struct stat st;
+    if (lstat(path, &st) != 0) return errno;
+    if (!S_ISDIR(st.st_mode)) return unlink(path) == 0 ? 0 : errno;
+    if (depth > FS_TREE_DEPTH_MAX) return ELOOP;
+    DIR *d = opendir(path);
+    if (!d) return errno;
+    int err = 0;
+    struct dirent *e;
+    while (!err && (e = readdir(d)) != NULL) {
+        if (strcmp(e->d_name, ".") == 0 || strcmp(e->d_name, "..") == 0) continue;
+        size_t n = strlen(path) + strlen(e->d_name) + 2;
+        char *sub = malloc(n);
+        if (!sub) {
+            err = ENOMEM;
+            break;
+        }
+        snprintf(sub, n, "%s/%s", path, e->d_name);
+        err = remove_tree(sub, depth + 1);
+        free(sub);
+    }
+    closedir(d);
+    if (!err && rmdir(path) != 0) err = errno;
+    return err;
+}
+
+static int l_remove_tree(lua_State *L)
+{
+    const char *path = luaL_checkstring(L, 1);
+    int err = remove_tree(path, 0);
+    if (err) return fail_errno(L, "cannot remove", path, err);
     lua_pushboolean(L, 1);
     return 1;
 }
@@ -227,7 +269,7 @@ static int l_wait(lua_State *L)
 void px_lua_open_fs(lua_State *L)
 {
     static const luaL_Reg funcs[] = {{"list_dir", l_list_dir}, {"make_dir", l_make_dir},
-                                     {"remove", l_remove},     {"file_kind", l_file_kind},
+                                     {"remove", l_remove},     {"remove_tree", l_remove_tree}, {"file_kind", l_file_kind},
                                      {"read_file", l_read_file}, {"spawn", l_spawn},
                                      {"wait", l_wait},         {NULL, NULL}};
     luaL_setfuncs(L, funcs, 0);

@@ -42,7 +42,7 @@ end
 local function tmpdir()
   local name = os.tmpname()   -- creates an empty file; use its unique name for a folder
   os.remove(name)
-  check(os.execute("mkdir -p " .. quote(name)), "cannot create " .. name)
+  check(require("phlox.core").make_dir(name), "cannot create " .. name)
   return name
 end
 
@@ -278,6 +278,6 @@ end
 
 -- The folders are removed whether the checks pass or not.
 local ok, err = xpcall(checks, debug.traceback)
-os.execute("rm -rf " .. quote(dir1) .. " " .. quote(dir2))
+require("phlox.core").remove_tree(dir1); require("phlox.core").remove_tree(dir2)
 if not ok then error(err, 0) end
 print("test_examples: all checks passed")

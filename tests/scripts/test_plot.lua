@@ -50,7 +50,7 @@ local function test_map(T_C)
 end
 -- END TEST MAP
 
-local dir = os.tmpname(); os.remove(dir); os.execute("mkdir -p " .. dir)
+local dir = os.tmpname(); os.remove(dir); assert(require("phlox.core").make_dir(dir))
 local function slurp(p) local f = assert(io.open(p, "rb")); local s = f:read("a"); f:close(); return s end
 
 -- palette: CIE L* of sRGB primaries and white (sRGB red L* = 53.24,
@@ -214,5 +214,5 @@ check(not ok and err:find("map.y", 1, true), "empty y range: " .. tostring(err))
 check(not pcall(plot.curves, {}), "no series")
 check(not pcall(plot.map, map, { file = dir .. "/m.jpg" }), "unknown extension")
 
-os.execute("rm -rf " .. dir)
+require("phlox.core").remove_tree(dir)
 print("test_plot: ok")
