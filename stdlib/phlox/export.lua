@@ -30,9 +30,11 @@ end
 local CSV_OPTS = {
   columns = "strings",                    -- the column order (required)
   conditions = "table",                   -- stamped in the header
+  replace = "boolean",                    -- also replace a symbolic link or a read-only file
 }
 local JSON_OPTS = {
   conditions = "table",                   -- stamped in the provenance
+  replace = "boolean",
 }
 function export.csv(path, rows, opts)
   core.check_value("export.csv", "path", path, "string")
@@ -51,7 +53,7 @@ function export.csv(path, rows, opts)
     for i, c in ipairs(columns) do out[i] = cell(row[c], c .. " row " .. r) end
     lines[#lines + 1] = table.concat(out, ",")
   end
-  local ok, err = core.write_atomic(path, table.concat(lines, "\n") .. "\n")
+  local ok, err = core.write_atomic(path, table.concat(lines, "\n") .. "\n", opts.replace)
   if not ok then core.user_error("export.csv: " .. err) end
   return path
 end
@@ -67,7 +69,7 @@ function export.json(path, value, opts)
   }
   local okj, text = pcall(json.encode, doc, { indent = "  " })
   if not okj then core.user_error("export.json: " .. tostring(text)) end
-  local ok, err = core.write_atomic(path, text .. "\n")
+  local ok, err = core.write_atomic(path, text .. "\n", opts and opts.replace)
   if not ok then core.user_error("export.json: " .. err) end
   return path
 end

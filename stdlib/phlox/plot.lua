@@ -594,7 +594,7 @@ end
 local function finish(fig, opts, d)
   if opts.pages then fig:pages(true) end
   if opts.file then
-    local ok, err = fig:save(opts.file, opts.dpi or d.dpi)
+    local ok, err = fig:save(opts.file, opts.dpi or d.dpi, opts.replace)
     if not ok then error("plot: " .. err, 3) end
   end
   return fig
@@ -625,6 +625,7 @@ local FIG_OPTS = {
   stamp = "strings",                      -- extra stamp lines
   no_script = "boolean",                  -- leave the script's name off the stamp
   legend = "boolean",
+  replace = "boolean",                    -- also replace a symbolic link or a read-only file
 }
 local MAP_OPTS = {
   labels = "boolean",                     -- field labels

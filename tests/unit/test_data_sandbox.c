@@ -271,6 +271,10 @@ static void test_runtime_errors(void **state)
     expect("return { element = 'Zn', species = {}, extra = 1 }", PX_EDATA,
            "t.lua:1: extra: unknown field 'extra'");
     expect("return { element = 'Zn', species = {}, [1] = 2 }", PX_EDATA, "unexpected entry [1]");
+    /* control characters from a file never reach the terminal raw */
+    expect("error('clear\\27[2J\\7 bell')" OK_TAIL, PX_EDATA, "t.lua:1: clear\\x1b[2J\\x07 bell");
+    expect("return { element = 'Zn', species = { { formula = 'Zn\\27[31m' } } }", PX_EDATA,
+           "Zn\\x1b[31m");
 }
 
 /* NaN and infinities never reach a record */
