@@ -188,6 +188,34 @@ static void test_budget_inside_c(void **state)
     assert_int_equal(px_data_check_buffer(NULL, ok, strlen(ok), "ok.lua", NULL, NULL), PX_OK);
 }
 
+/* Absurd but finite values are errors, each naming the field (they passed
+ * `phlox check` before: logK = 1e300, Cp coefficients of 1e308, element
+ * counts of 1e22). */
+static void test_physical_ranges(void **state)
+{
+    (void)state;
+#define CP_SP(extra) "return { element = 'Zn', species = { { formula = 'ZnO(s)', model = 'cp', " \
+                     "G = -320.479, H = -350.46, S = 43.65, source = 'x', " extra " } } }"
+    expect(CP_SP("cp = { a = 1e308 }"), PX_EDATA, "Cp(298.15 K) = 1e+308 J/(mol K) is outside the physical range");
+    expect(CP_SP("cp = { a = 40, e = 1e300 }"), PX_EDATA, "is outside the physical range");
+    expect(CP_SP("cp = { a = 40 }, V = 1e30"), PX_EDATA, "V = 1e+29 J/bar is outside");
+    expect("return { element = 'Zn', species = { { formula = 'ZnO(s)', model = 'cp', G = -1e300, H = -350.46, "
+           "S = 43.65, cp = { a = 40 }, source = 'x' } } }", PX_EDATA, "G = -1e+303 J/mol is outside the physical range");
+#define LK_SP(extra) "return { element = 'Cl', species = { { formula = 'ZnCl^+', model = 'logk', " \
+                     "reaction = 'Zn^2+ + Cl^- = ZnCl^+', source = 'x', " extra " } } }"
+    expect(LK_SP("logK = 1e300"), PX_EDATA, "logK = 1e+300  is outside the physical range");
+    expect(LK_SP("logK = 0.43, dH = 1e12"), PX_EDATA, "dH = 1e+15 J/mol is outside");
+    expect(LK_SP("logK_T = { 0, 0, 0, 0, 1e30 }"), PX_EDATA, "logK_T(298.15 K)");
+    expect("return { element = 'Zn', species = { { formula = 'Zn10000000000000000000000(s)', model = 'cp', "
+           "G = 0, H = 0, S = 41.63, cp = { a = 25.4 }, source = 'x' } } }", PX_EDATA,
+           "1e+22 atoms of Zn per formula unit (at most 1000)");
+    /* a real record passes */
+    const char *ok = CP_SP("cp = { a = 40.25 }");
+    assert_int_equal(px_data_check_buffer(NULL, ok, strlen(ok), "ok.lua", NULL, NULL), PX_OK);
+#undef CP_SP
+#undef LK_SP
+}
+
 /* A wall-clock limit per file stops what the budget does not see. */
 static void test_wall_clock(void **state)
 {
@@ -300,6 +328,7 @@ int main(void)
         cmocka_unit_test(test_memory_cap),        cmocka_unit_test(test_binary_chunk_refused),
         cmocka_unit_test(test_runtime_errors),    cmocka_unit_test(test_non_finite),
         cmocka_unit_test(test_budget_inside_c),   cmocka_unit_test(test_wall_clock),
+        cmocka_unit_test(test_physical_ranges),
     };
     return cmocka_run_group_tests(tests, NULL, NULL);
 }
