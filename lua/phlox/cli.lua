@@ -9,6 +9,37 @@ local function usage(msg)
   return 2
 end
 
+-- `phlox COMMAND --help`: the usage of each command, on standard output
+local HELP = {
+  reaction = [[
+usage: phlox reaction "EQUATION" [--temperature C] [--pressure BAR] [--json]
+  Thermodynamics of a reaction written in phlox notation, e.g.
+    phlox reaction "Fe^2+ + 2 e- = Fe(s)" --temperature 150
+  prints dG, dH, dS, log K and, for a half reaction, E vs SHE.
+  --temperature C, -T C   temperature in degrees C (default 25)
+  --pressure BAR, -P BAR  pressure in bar (default 1 bar, or saturation above 100 C)
+  --json                  one JSON object instead of text
+]],
+  check = [[
+usage: phlox check FILE...
+  Validates element definition files (docs/element-files.md): runs each in
+  the sandbox and checks types, units, formulas, physical ranges, balance
+  and the G = H - T S cycle.  Prints one line per problem; exits 1 if any
+  file has an error.
+]],
+  list = [[
+usage: phlox list [ELEMENT]
+  Without an argument: the elements the library has definition files for
+  (built in, or in a --path folder).
+  With an element: its species (state, model, value, file:line, source).
+]],
+}
+
+local function wants_help(args)
+  for _, a in ipairs(args) do if a == "--help" or a == "-h" then return true end end
+  return false
+end
+
 local function json_number(x)
   if x == nil or x ~= x or x == math.huge or x == -math.huge then return "null" end
   return require("phlox.json").number(x)
@@ -104,6 +135,14 @@ function commands.list(args)
   local element = args[1]
   if #args > 1 then return usage("list: usage: phlox list [ELEMENT]") end
   local els = phlox.available_elements()
+  if not element then -- the elements, with where each file comes from
+    for _, e in ipairs(els) do
+      local _, where = phlox.read_library_file("elements/" .. e .. ".lua")
+      io.write(("%-3s %s\n"):format(e, where or "?"))
+    end
+    io.stderr:write(("phlox list: %d elements (phlox list ELEMENT lists its species)\n"):format(#els))
+    return 0
+  end
   if element then
     local found = false
     for _, e in ipairs(els) do if e == element then found = true end end
@@ -123,7 +162,60 @@ end
 function cli.run(name, args)
   local cmd = commands[name]
   if not cmd then return usage("unknown command '" .. tostring(name) .. "'") end
+  if wants_help(args) then io.write(HELP[name]); return 0 end
   return cmd(args)
+end
+
+-- The interactive prompt shows values with cli.show: records (tables) as
+-- sorted, indented fields instead of `table: 0x...`; long lists shortened.
+local SHOW_ITEMS = 12 -- entries shown per table
+local SHOW_DEPTH = 2  -- nested tables shown
+
+local function pretty(v, depth, seen, out, indent)
+  local t = type(v)
+  if t == "string" then out[#out + 1] = string.format("%q", v)
+  elseif t == "function" then
+    local name = require("phlox").help_name(v)
+    out[#out + 1] = name and ("function " .. name .. " (phlox.help(" .. name .. "))") or tostring(v)
+  elseif t ~= "table" then out[#out + 1] = tostring(v)
+  elseif seen[v] then out[#out + 1] = "{ ... (cycle) }"
+  elseif depth > SHOW_DEPTH then out[#out + 1] = "{ ... }"
+  else
+    seen[v] = true
+    local keys = {}
+    for k in pairs(v) do keys[#keys + 1] = k end
+    table.sort(keys, function(a, b)
+      if type(a) == type(b) and (type(a) == "number" or type(a) == "string") then return a < b end
+      return type(a) == "number"
+    end)
+    if #keys == 0 then out[#out + 1] = "{}"; seen[v] = nil; return end
+    out[#out + 1] = "{"
+    local pad = indent .. "  "
+    for i, k in ipairs(keys) do
+      if i > SHOW_ITEMS then
+        out[#out + 1] = "\n" .. pad .. ("... (%d more)"):format(#keys - SHOW_ITEMS)
+        break
+      end
+      local key = type(k) == "string" and k:match("^[%a_][%w_]*$") and k or ("[" .. (type(k) == "string" and string.format("%q", k) or tostring(k)) .. "]")
+      out[#out + 1] = "\n" .. pad .. key .. " = "
+      pretty(v[k], depth + 1, seen, out, pad)
+      out[#out + 1] = ","
+    end
+    out[#out + 1] = "\n" .. indent .. "}"
+    seen[v] = nil
+  end
+end
+
+function cli.pretty(v)
+  local out = {}
+  pretty(v, 1, {}, out, "")
+  return table.concat(out)
+end
+
+function cli.show(...)
+  local parts = {}
+  for i = 1, select("#", ...) do parts[i] = cli.pretty((select(i, ...))) end
+  io.write(table.concat(parts, "\t"), "\n")
 end
 
 cli.commands = commands

@@ -44,8 +44,8 @@ static int db_gc(lua_State *L)
 /* core.database([dielectric]) -> Database with the built-in species */
 static int l_database(lua_State *L)
 {
-    static const char *const models[] = {"R8-97", "JN91", NULL};
-    int model = luaL_checkoption(L, 1, "R8-97", models);
+    static const char *const models[] = {"fernandez", "johnson-norton", NULL};
+    int model = luaL_checkoption(L, 1, "fernandez", models);
     ldb *u = lua_newuserdatauv(L, sizeof *u, 0);
     u->db = NULL;
     u->ws = NULL;
@@ -387,10 +387,10 @@ static int db_list_text(lua_State *L)
 /* core.water(T [, P [, dielectric]]) -> table of the water state */
 static int l_water(lua_State *L)
 {
-    static const char *const models[] = {"R8-97", "JN91", NULL};
+    static const char *const models[] = {"fernandez", "johnson-norton", NULL};
     double T, P;
     if (checkTP(L, 1, 2, &T, &P)) return 2;
-    int model = luaL_checkoption(L, 3, "R8-97", models);
+    int model = luaL_checkoption(L, 3, "fernandez", models);
     px_water_state w;
     int st = px_water_state_eval(T, P, model == 0 ? PX_DIELECTRIC_R8_97 : PX_DIELECTRIC_JN91, &w);
     if (st != PX_OK) {

@@ -14,8 +14,10 @@
 #include "thermo/thermo.h"
 #include "thermo/thermo_internal.h"
 
-/* a coefficient larger than this is a slip, not chemistry (common practice,
- * no source: balanced reactions of the trade need tens at most) */
+/* a coefficient larger than this, or smaller than its inverse, is a slip,
+ * not chemistry (common practice, no source: balanced reactions of the trade
+ * need tens at most, and fractions like 1/2 or 1/6); in this range the
+ * formatter's "%.6g" never writes an exponent */
 #define PX_REACTION_COEF_MAX 1e4
 /* longest coefficient text: "%.0f" of DBL_MAX is 309 digits */
 #define PX_REACTION_NUM_MAX 320
@@ -136,6 +138,12 @@ int px_reaction_parse(const char *text, px_reaction *out, char *msg, size_t msgs
                 return rfail(msg, msgsize, PX_ERANGE,
                              "coefficient %g at position %d in '%s' is larger than %g",
                              coef, (int)(p - text) + 1, text, PX_REACTION_COEF_MAX);
+            /* and smaller than 1/COEF_MAX is a slip too (found by fuzz_reaction:
+             * "1/8888220 O^+" formatted as 1.12508e-07, which the grammar cannot read) */
+            if (!(coef >= 1.0 / PX_REACTION_COEF_MAX))
+                return rfail(msg, msgsize, PX_ERANGE,
+                             "coefficient %g at position %d in '%s' is smaller than %g",
+                             coef, (int)(p - text) + 1, text, 1.0 / PX_REACTION_COEF_MAX);
             p = skip_ws(p + k);
         }
         px_formula f;
@@ -168,6 +176,16 @@ int px_reaction_parse(const char *text, px_reaction *out, char *msg, size_t msgs
     r.n = m;
     if (r.n == 0)
         return rfail(msg, msgsize, PX_EPARSE, "reaction '%s' cancels to nothing", text);
+    /* a species on both sides nets out: a side may end up empty (found by
+     * fuzz/fuzz_reaction.c: "0.5 H3(g) = H3(g) + 0.5 e-") */
+    int has_left = 0, has_right = 0;
+    for (int i = 0; i < r.n; i++) {
+        has_left |= r.nu[i] < 0;
+        has_right |= r.nu[i] > 0;
+    }
+    if (!has_left || !has_right)
+        return rfail(msg, msgsize, PX_EPARSE, "reaction '%s' has no species left on one side once "
+                                              "species on both sides cancel", text);
     *out = r;
     return PX_OK;
 }

@@ -95,7 +95,8 @@ end
 
 -- Species of `element` whose record is a log K without temperature
 -- dependence (no dH, no logK_T): their log K stays at its 25 C value at T.
-function diagrams.constant_logk(lib, element, T_C)
+-- (One public name per thing: phlox.constant_logk(lib, elements, T in K).)
+local function held_at(lib, element, T_C)
   return phlox.constant_logk(lib, { element }, T_C + T0C)
 end
 
@@ -107,7 +108,7 @@ local function held_stamp(lib, elements, temps, opts, where)
   for _, tc in ipairs(temps) do
     if math.abs(tc - 25) > 1e-9 then
       for _, e in ipairs(elements) do
-        for _, f in ipairs(diagrams.constant_logk(lib, e, tc)) do
+        for _, f in ipairs(held_at(lib, e, tc)) do
           if not seen[f] then seen[f] = true; list[#list + 1] = f end
         end
       end

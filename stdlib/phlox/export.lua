@@ -36,6 +36,7 @@ local JSON_OPTS = {
   conditions = "table",                   -- stamped in the provenance
   replace = "boolean",
 }
+export.option_specs = { ["export.csv"] = CSV_OPTS, ["export.json"] = JSON_OPTS }
 function export.csv(path, rows, opts)
   core.check_value("export.csv", "path", path, "string")
   core.check_value("export.csv", "rows", rows, "table")

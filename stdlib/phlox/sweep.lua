@@ -83,6 +83,7 @@ local PARALLEL_OPTS = {
   quiet = "boolean", label = "string",
   workers = { "integer", 1, 256 },        -- worker processes (1: none)
 }
+sweep.option_specs = { ["sweep.run"] = RUN_OPTS, ["sweep.parallel"] = PARALLEL_OPTS }
 function sweep.run(points, fn, opts)
   local core = require "phlox.core"
   core.check_value("sweep.run", "points", points, "table")

@@ -962,6 +962,11 @@ static void test_reaction_format_huge(void **state)
     assert_non_null(strstr(msg, "larger than"));
     assert_int_equal(px_reaction_parse("20000.5 H2O(l) = O2(g)", &r, msg, sizeof msg), PX_ERANGE);
     assert_non_null(strstr(msg, "larger than"));
+    /* found by fuzz_reaction: netting can empty a side; the formatted text
+     * would not parse again */
+    assert_int_equal(px_reaction_parse("0.5 H3(g) = H3(g)+ 0.5 e-", &r, msg, sizeof msg), PX_EPARSE);
+    assert_non_null(strstr(msg, "no species left on one side"));
+    assert_int_equal(px_reaction_parse("1/8888220 O^+ = HO(l)", &r, msg, sizeof msg), PX_ERANGE);
     /* the balance message never writes past a small buffer */
     assert_int_equal(px_reaction_parse("Fe(s) = Fe^2+ + Cl^- + Na^+ + e-", &r, msg, sizeof msg), PX_OK);
     char tiny[8];
