@@ -5,6 +5,7 @@
 #include "core/status.h"
 #include "thermo/thermo.h"
 #include <stdint.h>
+#include <stdio.h>
 #include <stdlib.h>
 #include <string.h>
 
@@ -32,8 +33,10 @@ int LLVMFuzzerTestOneInput(const uint8_t *data, size_t size)
         }
         char *full = malloc(FMT_MAX);
         if (full && px_reaction_format(&r, full, FMT_MAX) == PX_OK &&
-            px_reaction_parse(full, &q, msg, sizeof msg) != PX_OK)
+            px_reaction_parse(full, &q, msg, sizeof msg) != PX_OK) {
+            fprintf(stderr, "formatted '%s' does not parse again: %s\n", full, msg);
             abort(); /* the formatted text must parse again */
+        }
         free(full);
     }
     free(s);

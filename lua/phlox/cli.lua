@@ -4,40 +4,50 @@
 local cli = {}
 local commands = {}
 
-local function usage(msg)
-  io.stderr:write("phlox: ", msg, "\n")
-  return 2
-end
-
--- `phlox COMMAND --help`: the usage of each command, on standard output
-local HELP = {
+-- `phlox COMMAND --help`: one text per command (the manual page, docs/phlox.1,
+-- is checked against these by tests/packaging/check_manpage.lua).
+cli.help = {
   reaction = [[
-usage: phlox reaction "EQUATION" [--temperature C] [--pressure BAR] [--json]
-  Thermodynamics of a reaction written in phlox notation, e.g.
-    phlox reaction "Fe^2+ + 2 e- = Fe(s)" --temperature 150
-  prints dG, dH, dS, log K and, for a half reaction, E vs SHE.
-  --temperature C, -T C   temperature in degrees C (default 25)
-  --pressure BAR, -P BAR  pressure in bar (default 1 bar, or saturation above 100 C)
-  --json                  one JSON object instead of text
+usage: phlox reaction EQUATION [--temperature C] [--pressure BAR] [--json]
+
+Thermodynamics of one balanced reaction from the species of the library:
+dG, dH, dS, log K and, when electrons take part, E (V vs SHE).  The element
+files of the elements named in the equation are loaded.
+
+  EQUATION              e.g. "Zn^2+ + 2 e- = Zn(s)" (quote it)
+  -T, --temperature C   temperature in degrees C (default 25)
+  -P, --pressure BAR    pressure in bar (default 1 bar up to 100 C, the
+                        saturation pressure above)
+  --json                one JSON object: T_K, P_bar, dG_kJ, logK, E0_V
+  -h, --help            print this help
 ]],
   check = [[
 usage: phlox check FILE...
-  Validates element definition files (docs/element-files.md): runs each in
-  the sandbox and checks types, units, formulas, physical ranges, balance
-  and the G = H - T S cycle.  Prints one line per problem; exits 1 if any
-  file has an error.
+
+Validates element definition files: sandbox errors, fields, units, formulas,
+charges, duplicates, physical ranges, dfG/dfH/S consistency, reaction balance.  Each file
+sees the built-in species and those of the files before it.  Problems go to
+standard output as FILE:LINE: severity: message; exit status 1 on an error.
+
+  FILE                  an element definition file (.lua)
+  -h, --help            print this help
 ]],
   list = [[
 usage: phlox list [ELEMENT]
-  Without an argument: the elements the library has definition files for
-  (built in, or in a --path folder).
-  With an element: its species (state, model, value, file:line, source).
+
+Without ELEMENT, lists the elements the library has definition files for and
+where each file comes from (built in, or a --path folder).  With ELEMENT,
+lists the species containing it: formula, model, dfG in kJ/mol (or log K),
+file:line and source.
+
+  ELEMENT               an element symbol such as Fe (H and O allowed)
+  -h, --help            print this help
 ]],
 }
 
-local function wants_help(args)
-  for _, a in ipairs(args) do if a == "--help" or a == "-h" then return true end end
-  return false
+local function usage(msg)
+  io.stderr:write("phlox: ", msg, "\n")
+  return 2
 end
 
 local function json_number(x)
@@ -162,7 +172,10 @@ end
 function cli.run(name, args)
   local cmd = commands[name]
   if not cmd then return usage("unknown command '" .. tostring(name) .. "'") end
-  if wants_help(args) then io.write(HELP[name]); return 0 end
+  if args[1] == "--help" or args[1] == "-h" then
+    io.write(cli.help[name])
+    return 0
+  end
   return cmd(args)
 end
 

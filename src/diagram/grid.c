@@ -46,6 +46,7 @@ void px_diagram_grid_free(px_diagram_grid *g)
     px_free(a, g->poly);
     px_free(a, g->px);
     px_free(a, g->py);
+    px_free(a, g->pfail);
     px_free(a, g->field);
     px_free(a, g);
 }
@@ -62,7 +63,8 @@ typedef struct gctx {
     void *user;
     px_diagram_grid *g;
     double *x, *y; /* points: crossings and cell centres */
-    size_t np, capx, capy;
+    unsigned char *bad; /* per point: placed next to a negative (failed) label */
+    size_t np, capx, capy, capb;
     seg *s;
     size_t ns, caps;
 } gctx;
@@ -70,8 +72,10 @@ typedef struct gctx {
 static int add_point(gctx *c, double x, double y, size_t *idx)
 {
     if (px_dg_reserve(c->a, (void **)&c->x, &c->capx, c->np + 1, sizeof *c->x) ||
-        px_dg_reserve(c->a, (void **)&c->y, &c->capy, c->np + 1, sizeof *c->y))
+        px_dg_reserve(c->a, (void **)&c->y, &c->capy, c->np + 1, sizeof *c->y) ||
+        px_dg_reserve(c->a, (void **)&c->bad, &c->capb, c->np + 1, sizeof *c->bad))
         return PX_ENOMEM;
+    c->bad[c->np] = 0;
     c->x[c->np] = x;
     c->y[c->np] = y;
     *idx = c->np++;
@@ -90,7 +94,7 @@ static int refine(gctx *c, double x0, double y0, int la, double x1, double y1, i
                   double tol, int max_iter, size_t *idx)
 {
     double lo = 0, hi = 1, len = fmax(fabs(x1 - x0), fabs(y1 - y0));
-    int it = 0, third = 0;
+    int it = 0, third = 0, failed = la < 0 || lb < 0;
     while ((hi - lo) * len > tol) {
         if (it++ >= max_iter) {
             c->g->nmaxiter++;
@@ -99,6 +103,7 @@ static int refine(gctx *c, double x0, double y0, int la, double x1, double y1, i
         double t = 0.5 * (lo + hi);
         int id, st = call(c, x0 + t * (x1 - x0), y0 + t * (y1 - y0), &id);
         if (st) return st;
+        failed |= id < 0;
         if (id == la) lo = t;
         else {
             hi = t;
@@ -108,7 +113,12 @@ static int refine(gctx *c, double x0, double y0, int la, double x1, double y1, i
     if (third) c->g->nthird++;
     c->g->ncross++;
     double t = 0.5 * (lo + hi);
-    return add_point(c, x0 + t * (x1 - x0), y0 + t * (y1 - y0), idx);
+    int st = add_point(c, x0 + t * (x1 - x0), y0 + t * (y1 - y0), idx);
+    if (st == PX_OK && failed) {
+        c->bad[*idx] = 1;
+        c->g->nfailcross++;
+    }
+    return st;
 }
 
 /* Add segment p-q separating la | lb; `side` is a point on la's side. */
@@ -319,10 +329,12 @@ static int chain(gctx *c)
     g->npt = npts;
     g->px = px_alloc(c->a, (npts ? npts : 1) * sizeof *g->px);
     g->py = px_alloc(c->a, (npts ? npts : 1) * sizeof *g->py);
-    if (!g->px || !g->py) goto done;
+    g->pfail = px_alloc(c->a, (npts ? npts : 1) * sizeof *g->pfail);
+    if (!g->px || !g->py || !g->pfail) goto done;
     for (size_t i = 0; i < npts; i++) {
         g->px[i] = c->x[pts[i]];
         g->py[i] = c->y[pts[i]];
+        g->pfail[i] = c->bad[pts[i]];
     }
     st = PX_OK;
 done:
@@ -436,6 +448,7 @@ int px_diagram_grid_map(const px_diagram_window *w, px_diagram_label_fn fn, void
                 }
                 size_t m;
                 if ((st = add_point(&c, mx / nc, my / nc, &m))) goto done;
+                for (int k = 0; k < nc; k++) c.bad[m] |= c.bad[ex[which[k]]];
                 for (int k = 0; k < nc && !st; k++) {
                     int e = which[k];
                     st = add_seg(&c, m, ex[e], lab[e], lab[(e + 1) % 4], cxs[e], cys[e]);
@@ -456,6 +469,7 @@ done:
     px_free(c.a, vc);
     px_free(c.a, c.x);
     px_free(c.a, c.y);
+    px_free(c.a, c.bad);
     px_free(c.a, c.s);
     return st;
 }

@@ -10,4 +10,5 @@ const px_lua_opener px_lua_openers[] = {
     px_lua_open_equil,
     px_lua_open_opts,
     px_lua_open_fs,
+    px_lua_open_practice,
     0};

@@ -176,6 +176,13 @@ int px_reaction_parse(const char *text, px_reaction *out, char *msg, size_t msgs
     r.n = m;
     if (r.n == 0)
         return rfail(msg, msgsize, PX_EPARSE, "reaction '%s' cancels to nothing", text);
+    /* the same range after netting: repeated terms add up (found by
+     * fuzz_reaction: ten thousand H2(g) written as many terms) */
+    for (int i = 0; i < r.n; i++)
+        if (!(fabs(r.nu[i]) <= PX_REACTION_COEF_MAX && fabs(r.nu[i]) >= 1.0 / PX_REACTION_COEF_MAX))
+            return rfail(msg, msgsize, PX_ERANGE, "the terms of %s in '%s' add up to %g, outside [%g, %g]",
+                         r.sp[i].text, text, fabs(r.nu[i]), 1.0 / PX_REACTION_COEF_MAX,
+                         PX_REACTION_COEF_MAX);
     /* a species on both sides nets out: a side may end up empty (found by
      * fuzz/fuzz_reaction.c: "0.5 H3(g) = H3(g) + 0.5 e-") */
     int has_left = 0, has_right = 0;

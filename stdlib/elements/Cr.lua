@@ -2,6 +2,8 @@
 --
 -- Data choice (see docs/data/transition-metals.md): Cr^3+ and Cr^2+ from the CRC
 -- electrochemical series (their dfG agree with Shock et al. 1997 Cr3+ to 0.2 kJ/mol);
+-- the enthalpy of Cr^3+ follows from that dfG and the Shock et al. 1997 entropy, so its
+-- couples move with temperature (Cr^2+ still has no enthalpy: no S recalled);
 -- Cr(VI) species and Cr2O3 from the NBS tables (Wagman et al. 1982); Cr(III)
 -- hydrolysis from Baes and Mesmer 1976. No Cp is recalled for any aqueous Cr species,
 -- so all are defined by reactions. Every number below was recalled, not read.
@@ -12,6 +14,8 @@ local KELLEY = "cp from memory of Kelley 1960 (U.S. Bureau of Mines Bulletin 584
                "converted from cal with 4.184"
 local CRC = "from memory of CRC Handbook of Chemistry and Physics, Electrochemical Series " ..
             "(P. Vanysek)"
+local SHOCK97 = "from memory of Shock, Sassani, Willis and Sverjensky 1997 (Geochim. " ..
+                "Cosmochim. Acta 61, 907), cation table"
 local BM = "from memory of Baes and Mesmer 1976, The Hydrolysis of Cations (I = 0, 25 C)"
 
 return {
@@ -31,12 +35,18 @@ return {
     {
       formula = "Cr^3+", model = "logk",
       reaction = "2 Cr(s) + 6 H^+ = 2 Cr^3+ + 3 H2(g)",
-      logK = 75.457,
-      source = "derived here from E0(Cr3+/Cr) = -0.744 V " .. CRC ..
-               " (log K = 6 F E0/(RT ln10))",
+      logK = 75.457, dH = -511.37,
+      source = "log K derived here from E0(Cr3+/Cr) = -0.744 V " .. CRC ..
+               " (log K = 6 F E0/(RT ln10)); dH = 2 dfH(Cr3+), dfH derived here from that dfG " ..
+               "and S(Cr3+) = -73.5 cal/(mol K) = -307.5 J/(mol K) " .. SHOCK97,
       quality = "medium",
       note = "dfG = -215.35 kJ/mol; Shock et al. 1997 give -51500 cal/mol = -215.48 kJ/mol " ..
-             "(as recalled). dfH not recalled: no dH, so the constant holds at 25 C only.",
+             "(as recalled). dfS = S - S(Cr,s) + 1.5 S(H2,g) = -135.27 J/(mol K), so dfH = " ..
+             "dfG + T dfS = -255.69 kJ/mol (-61.11 kcal/mol; a dfH near -61.2 kcal/mol also comes " ..
+             "to mind for that table, a weak recall, within 0.4 kJ). Reaction entropy of the record " ..
+             "-270.5 J/K. No Cp recalled for Cr3+ (and the HKF estimate path needs |Z| <= 2), so " ..
+             "dCp = 0 (van 't Hoff): the error this leaves is small beside the 25 C hold it " ..
+             "replaces (that hold implied a reaction entropy of +1445 J/K).",
     },
     {
       formula = "Cr^2+", model = "logk",
@@ -44,7 +54,9 @@ return {
       logK = -13.759,
       source = "derived here from E0(Cr3+/Cr2+) = -0.407 V " .. CRC,
       quality = "medium",
-      note = "Gives E0(Cr2+/Cr) = -0.913 V, as the CRC series lists. No dH: 25 C only.",
+      note = "Gives E0(Cr2+/Cr) = -0.913 V, as the CRC series lists. No dH: S of Cr2+ is not " ..
+             "recalled, so this couple is held at its 25 C constant (Cr2+ follows Cr3+'s " ..
+             "enthalpy, not its own).",
     },
     -- Cr(III) hydrolysis -----------------------------------------------------
     {

@@ -2,8 +2,9 @@
 --
 -- Data choice (see docs/data/transition-metals.md): ions and solids from the NBS
 -- tables (Wagman et al. 1982), one table for the whole system; hydrolysis from Baes
--- and Mesmer 1976. No Cp is recalled for Cu+ or Cu2+, so both ions are defined by
--- their formation reaction from the metal (log K = -dfG/(RT ln10), dH = dfH).
+-- and Mesmer 1976, Cu(OH)2(aq) from the IUPAC review (Powell et al. 2007). No Cp is
+-- recalled for Cu+ or Cu2+, so both ions are defined by their formation reaction from
+-- the metal (log K = -dfG/(RT ln10), dH = dfH).
 -- Every number below was recalled, not read; "from memory of" says so.
 
 local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic " ..
@@ -51,6 +52,18 @@ return {
       logK = -8.0,
       source = BM, quality = "medium",
       note = "IUPAC review (Powell et al. 2007) about -7.95, as recalled.",
+    },
+    {
+      formula = "Cu(OH)2(aq)", model = "logk",
+      reaction = "Cu^2+ + 2 H2O(l) = Cu(OH)2(aq) + 2 H^+",
+      logK = -16.23,
+      source = "from memory of Powell, Brown, Byrne, Gajda, Hefter, Sjoberg and Wanner 2007 " ..
+               "(IUPAC Technical Report, Pure Appl. Chem. 79, 895), log *beta2 at I = 0, 25 C",
+      quality = "medium",
+      note = "The neutral species that carries CuO's solubility at near-neutral pH at " ..
+             "temperature. Baes and Mesmer 1976 give only a bound. No dH recalled: held at " ..
+             "25 C until a temperature function is added. At 25 C and 1e-6 it has no field " ..
+             "(CuO + H2O = Cu(OH)2(aq), log K about -8.6).",
     },
     {
       formula = "Cu2(OH)2^2+", model = "logk",

@@ -26,14 +26,18 @@ local function cell(v, col)
 end
 
 --- Write rows (a sequence of tables keyed by column name) as CSV.
--- opts.columns: the column order (required); opts.conditions: stamped.
+-- opts.columns: the column order (required); opts.conditions: stamped;
+-- opts.from: the result(s) the rows come from, whose caveats (stamp lines)
+-- become "# note:" lines (default: every caveat of this run).
 local CSV_OPTS = {
   columns = "strings",                    -- the column order (required)
   conditions = "table",                   -- stamped in the header
+  from = "table",                         -- the result(s) whose caveats become notes
   replace = "boolean",                    -- also replace a symbolic link or a read-only file
 }
 local JSON_OPTS = {
   conditions = "table",                   -- stamped in the provenance
+  from = "table",                         -- the result(s) whose caveats are recorded
   replace = "boolean",
 }
 export.option_specs = { ["export.csv"] = CSV_OPTS, ["export.json"] = JSON_OPTS }
@@ -44,7 +48,7 @@ function export.csv(path, rows, opts)
   core.options("export.csv", CSV_OPTS, opts)
   local columns = opts.columns
   if not columns then core.user_error("export.csv: opts.columns is required") end
-  local lines = provenance.comment_lines(provenance.stamp(opts.conditions))
+  local lines = provenance.comment_lines(provenance.stamp(opts.conditions, opts.from))
   lines[#lines + 1] = "# " .. CAUTION
   local head = {}
   for i, c in ipairs(columns) do head[i] = cell(c, c) end
@@ -60,11 +64,12 @@ function export.csv(path, rows, opts)
 end
 
 --- Write a value as JSON: { provenance = ..., caution = ..., data = value }.
+-- opts.conditions and opts.from as export.csv (notes in provenance.notes).
 function export.json(path, value, opts)
   core.check_value("export.json", "path", path, "string")
   if opts ~= nil then core.options("export.json", JSON_OPTS, opts) end
   local doc = {
-    provenance = provenance.stamp(opts and opts.conditions),
+    provenance = provenance.stamp(opts and opts.conditions, opts and opts.from),
     caution = CAUTION,
     data = value,
   }

@@ -967,6 +967,8 @@ static void test_reaction_format_huge(void **state)
     assert_int_equal(px_reaction_parse("0.5 H3(g) = H3(g)+ 0.5 e-", &r, msg, sizeof msg), PX_EPARSE);
     assert_non_null(strstr(msg, "no species left on one side"));
     assert_int_equal(px_reaction_parse("1/8888220 O^+ = HO(l)", &r, msg, sizeof msg), PX_ERANGE);
+    assert_int_equal(px_reaction_parse("H2O(l) = 9999 H2(g) + 9999 H2(g) + O2(g)", &r, msg, sizeof msg), PX_ERANGE);
+    assert_non_null(strstr(msg, "add up to"));
     /* the balance message never writes past a small buffer */
     assert_int_equal(px_reaction_parse("Fe(s) = Fe^2+ + Cl^- + Na^+ + e-", &r, msg, sizeof msg), PX_OK);
     char tiny[8];
