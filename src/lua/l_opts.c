@@ -82,6 +82,16 @@ static int distance(const char *a, const char *b)
 }
 
 /* Is TYPE (one alternative, length N) the name T? */
+/* distance, but a key that begins a valid one ("activity" of
+ * "activity_model", a renamed option) counts as near */
+static int nearness(const char *key, const char *cand)
+{
+    int d = distance(key, cand);
+    size_t n = strlen(key);
+    if (d > OPT_NEAR_MAX && n >= 3 && strncmp(cand, key, n) == 0) d = OPT_NEAR_MAX;
+    return d;
+}
+
 /* Tie-break between keys at the same distance: the longer common
  * subsequence ("TC" is nearer "T_C" than "T"). */
 static int common(const char *a, const char *b)
@@ -322,7 +332,7 @@ void px_lua_opts_check(lua_State *L, int idx, const char *fname, const px_lua_op
             const char *best = NULL;
             int bd = OPT_NEAR_MAX + 1;
             for (o = spec; o->name; o++) {
-                int d = distance(key, o->name);
+                int d = nearness(key, o->name);
                 if (d <= OPT_NEAR_MAX && better(key, o->name, d, best, bd)) bd = d, best = o->name;
             }
             unknown_key(L, fname, key, best);
@@ -374,7 +384,7 @@ static int l_options(lua_State *L)
                 while (lua_next(L, 2)) {
                     lua_pop(L, 1);
                     if (lua_type(L, -1) != LUA_TSTRING || strcmp(lua_tostring(L, -1), "*") == 0) continue;
-                    int d = distance(key, lua_tostring(L, -1));
+                    int d = nearness(key, lua_tostring(L, -1));
                     if (d <= OPT_NEAR_MAX && better(key, lua_tostring(L, -1), d, best, bd))
                         bd = d, best = lua_tostring(L, -1);
                 }
