@@ -140,9 +140,33 @@ function phlox.electrodes() end
 ---@return any
 function phlox.fractions(opts) end
 
+--- Field polygons of a rigorous map: each node stands for the cell of the
+--- grid around it (half a step each way, clipped to the window); cells with
+--- one label are joined and their outline traced counter-clockwise, its
+--- steps smoothed (below).  A
+--- species in several separate pieces gives several fields; an enclosed
+--- hole is left to the field drawn inside it.  Nodes where the solver
+--- failed (label 0) belong to no field.
+---@param g any
+---@return any
+function phlox.grid_fields(g) end
+
 ---@param opts phlox.grid_map.opts
 ---@return any
 function phlox.grid_map(opts) end
+
+--- The ligand groups whose formula appears in a text, in name order:
+--- phlox.groups_in("Au(CN)2^- + e- = Au(s) + 2 CN^-") -> { "CN" }.  A group
+--- name followed by a lower-case letter is another symbol ("CNo" is not CN).
+---@param text string
+---@return any
+function phlox.groups_in(text) end
+
+--- The stamp line naming species whose log K is held at 25 C (each formula
+--- typeset) and its short form (printed by short stamps, phlox.plot).
+---@param held any
+---@return any
+function phlox.held_stamp_line(held) end
 
 ---@param what any
 ---@return any
@@ -199,6 +223,16 @@ function phlox.options(fname, sp, opts) end
 ---@param rel string
 ---@return any
 function phlox.read_library_file(rel) end
+
+--- A study report: one self-contained HTML page (figures as inline SVG,
+--- tables, data notes, provenance, the caution) and optionally a PDF of the
+--- same.  Options (see stdlib/phlox/report.lua and docs/figures.md): file
+--- (".html"), pdf (".pdf"), title, summary, sections = { { heading, text,
+--- figures = { { figure, caption } }, tables = { { caption, columns, rows } } } },
+--- notes, conditions.
+---@param opts table
+---@return any
+function phlox.report(opts) end
 
 --- The folders searched before the built-in library, in order.
 ---@return any
