@@ -3,6 +3,7 @@
  * or fail with a message, never crash or overrun; a parsed formula must
  * parse again from its canonical text to the same composition. */
 #include "core/status.h"
+#include "fuzz_common.h"
 #include "thermo/thermo.h"
 #include <stdint.h>
 #include <stdlib.h>
@@ -10,10 +11,8 @@
 
 int LLVMFuzzerTestOneInput(const uint8_t *data, size_t size)
 {
-    char *s = malloc(size + 1);
+    char *s = fuzz_cstring(data, size);
     if (!s) return 0;
-    memcpy(s, data, size);
-    s[size] = '\0';
     px_formula f, g;
     char msg[256];
     if (px_formula_parse_msg(s, &f, msg, sizeof msg) == PX_OK) {

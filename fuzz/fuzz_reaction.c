@@ -3,6 +3,7 @@
  * with a message; a parsed reaction formats into buffers of every small size
  * without overrunning them (ASan), and the full text parses again. */
 #include "core/status.h"
+#include "fuzz_common.h"
 #include "thermo/thermo.h"
 #include <stdint.h>
 #include <stdio.h>
@@ -13,10 +14,8 @@
 
 int LLVMFuzzerTestOneInput(const uint8_t *data, size_t size)
 {
-    char *s = malloc(size + 1);
+    char *s = fuzz_cstring(data, size);
     if (!s) return 0;
-    memcpy(s, data, size);
-    s[size] = '\0';
     px_reaction r, q;
     char msg[256];
     if (px_reaction_parse(s, &r, msg, sizeof msg) == PX_OK) {

@@ -243,31 +243,27 @@ function phlox.Library:list(element)
   return out
 end
 
---- Standard-state properties of a species at T (K) [and P (bar)]:
--- { G, H, S, Cp, V } in J/mol, J/(mol K), J/bar.
-local PROPS_OPTS = spec("Library:props", {}, true)
-function phlox.Library:props(formula, opts)
-  check_library("Library:props", self)
-  core.check_value("Library:props", "formula", formula, "string")
-  opts = phlox.options("Library:props", PROPS_OPTS, opts)
-  local T = temperature(opts, "Library:props")
-  local r, err = self.db:props(formula, T, pressure(opts, T, "Library:props"))
-  if not r then core.user_error("Library:props: " .. err) end
+-- props and reaction: one argument (a formula or an equation) and T, P options
+local function at_TP(lib, method, what, arg, opts)
+  local fname = "Library:" .. method
+  check_library(fname, lib)
+  core.check_value(fname, what, arg, "string")
+  opts = phlox.options(fname, phlox.option_specs[fname], opts)
+  local T = temperature(opts, fname)
+  local r, err = lib.db[method](lib.db, arg, T, pressure(opts, T, fname))
+  if not r then core.user_error(fname .. ": " .. err) end
   return r
 end
 
+spec("Library:props", {}, true)
+--- Standard-state properties of a species at T (K) [and P (bar)]:
+-- { G, H, S, Cp, V } in J/mol, J/(mol K), J/bar.
+function phlox.Library:props(formula, opts) return at_TP(self, "props", "formula", formula, opts) end
+
+spec("Library:reaction", {}, true)
 --- Reaction properties at T: { dG, dH, dS, logK, E (V vs SHE, half
 -- reactions only), T, P, text }.
-local REACTION_OPTS = spec("Library:reaction", {}, true)
-function phlox.Library:reaction(text, opts)
-  check_library("Library:reaction", self)
-  core.check_value("Library:reaction", "equation", text, "string")
-  opts = phlox.options("Library:reaction", REACTION_OPTS, opts)
-  local T = temperature(opts, "Library:reaction")
-  local r, err = self.db:reaction(text, T, pressure(opts, T, "Library:reaction"))
-  if not r then core.user_error("Library:reaction: " .. err) end
-  return r
-end
+function phlox.Library:reaction(text, opts) return at_TP(self, "reaction", "equation", text, opts) end
 
 --- Properties of water at T [and P]: density, dielectric constant,
 -- Debye-Hueckel A and B, Born functions, pKw (IAPWS R11-07).

@@ -82,16 +82,6 @@ local phlox = {}
 ---@field pH? number
 ---@field reference? any
 
----@class phlox.Library.props.opts
----@field P? number
----@field T? number
----@field T_C? number
-
----@class phlox.Library.reaction.opts
----@field P? number
----@field T? number
----@field T_C? number
-
 --- The activity model at ionic strength I (mol/kg): { model, ionic_strength,
 --- max, in_range, source, text }; a model used beyond its range is warned
 --- about once on stderr.
@@ -276,13 +266,17 @@ phlox.Library = {}
 ---@return any
 function phlox.Library:list(element) end
 
+--- Standard-state properties of a species at T (K) [and P (bar)]:
+--- { G, H, S, Cp, V } in J/mol, J/(mol K), J/bar.
 ---@param formula string
----@param opts phlox.Library.props.opts
+---@param opts table
 ---@return any
 function phlox.Library:props(formula, opts) end
 
+--- Reaction properties at T: { dG, dH, dS, logK, E (V vs SHE, half
+--- reactions only), T, P, text }.
 ---@param text string
----@param opts phlox.Library.reaction.opts
+---@param opts table
 ---@return any
 function phlox.Library:reaction(text, opts) end
 

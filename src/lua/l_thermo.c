@@ -493,15 +493,16 @@ static int l_check_files(lua_State *L)
 /* core.limits: the ranges the entry points accept (lua/phlox.lua reads them) */
 static void push_limits(lua_State *L)
 {
+    static const struct {
+        const char *name;
+        double value;
+    } limits[] = {{"T_min", PX_WATER_TMIN}, {"T_max", PX_WATER_TMAX}, {"P_max", PX_WATER_PMAX},
+                  {"file_max", (double)PX_DATA_FILE_MAX}};
     lua_createtable(L, 0, 4);
-    lua_pushnumber(L, PX_WATER_TMIN);
-    lua_setfield(L, -2, "T_min");
-    lua_pushnumber(L, PX_WATER_TMAX);
-    lua_setfield(L, -2, "T_max");
-    lua_pushnumber(L, PX_WATER_PMAX);
-    lua_setfield(L, -2, "P_max");
-    lua_pushinteger(L, (lua_Integer)PX_DATA_FILE_MAX);
-    lua_setfield(L, -2, "file_max");
+    for (size_t i = 0; i < sizeof limits / sizeof limits[0]; i++) {
+        lua_pushnumber(L, limits[i].value);
+        lua_setfield(L, -2, limits[i].name);
+    }
     lua_setfield(L, -2, "limits");
 }
 

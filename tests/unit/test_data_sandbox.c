@@ -134,6 +134,16 @@ static double seconds(void)
     return (double)ts.tv_sec + 1e-9 * (double)ts.tv_nsec;
 }
 
+/* each source must end with "instruction budget exceeded"; prints how long */
+static void expect_stopped(const char *const *src, size_t n, const char *what)
+{
+    for (size_t i = 0; i < n; i++) {
+        double t0 = seconds();
+        expect(src[i], PX_ELIMIT, "instruction budget exceeded");
+        print_message("%s %zu stopped after %.3f s\n", what, i, seconds() - t0);
+    }
+}
+
 static void test_budget_loops(void **state)
 {
     (void)state;
@@ -146,11 +156,7 @@ static void test_budget_loops(void **state)
         "local function f() return f() end\nf()" OK_TAIL, /* endless tail call */
         "local ok = pcall(function() while true do end end)\nlocal n = 0\nfor i = 1, 10 do n = n + i end" OK_TAIL,
     };
-    for (size_t i = 0; i < sizeof loops / sizeof loops[0]; i++) {
-        double t0 = seconds();
-        expect(loops[i], PX_ELIMIT, "instruction budget exceeded");
-        print_message("loop %zu stopped after %.3f s\n", i, seconds() - t0);
-    }
+    expect_stopped(loops, sizeof loops / sizeof loops[0], "loop");
     /* a smaller budget stops sooner; a larger one lets honest work finish */
     px_data_options o = px_data_options_default();
     o.instr_limit = 10000;
@@ -176,12 +182,7 @@ static void test_budget_inside_c(void **state)
         "local s = string.rep('x', 4096)\nfor k = 1, 1e7 do local u = string.format('%s%s', s, s) end" OK_TAIL,
         "pcall(string.rep, '', math.maxinteger)\nlocal n = 0" OK_TAIL, /* caught: stays tripped */
     };
-    for (size_t i = 0; i < sizeof work / sizeof work[0]; i++) {
-        double t0 = seconds();
-        expect(work[i], PX_ELIMIT, "instruction budget exceeded");
-        double dt = seconds() - t0;
-        print_message("C-work case %zu stopped after %.3f s\n", i, dt);
-    }
+    expect_stopped(work, sizeof work / sizeof work[0], "C-work case");
     /* honest use of the helpers still works */
     const char *ok = "local s = string.rep('ab', 1000, ',')\nlocal t = {3, 1, 2}\ntable.sort(t)\n"
                      "local c = table.concat(t, '-')\nassert(c == '1-2-3' and #s == 2999)" OK_TAIL;
