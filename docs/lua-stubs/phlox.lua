@@ -13,6 +13,9 @@
 ---@field version string
 local phlox = {}
 
+---@class phlox.constant_logk.opts
+---@field cache? any
+
 ---@class phlox.grid_map.opts
 ---@field E_range? number[]
 ---@field P? number
@@ -60,6 +63,8 @@ local phlox = {}
 ---@field T_C? number
 ---@field allow_inhibited? any
 ---@field exclude? string[]
+---@field fixed? table<string, number>
+---@field fugacities? table<string, number>
 ---@field library? phlox.Library
 ---@field require_temperature_data? any
 ---@field solids? boolean
@@ -98,8 +103,9 @@ function phlox.available_elements() end
 ---@param elements any
 ---@param T number
 ---@param P? number
+---@param opts? phlox.constant_logk.opts
 ---@return any
-function phlox.constant_logk(lib, elements, T, P) end
+function phlox.constant_logk(lib, elements, T, P, opts) end
 
 --- The reference electrode record for a short or full name (errors name
 --- the known ones).

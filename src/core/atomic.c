@@ -1,6 +1,12 @@
 /* atomic.c - temporary file + rename (see atomic.h).
  *
- * The temporary file is created with open(O_CREAT | O_EXCL, 0666), so the
+ * On Linux the data are first written to an unnamed file (O_TMPFILE) that
+ * is given its temporary name only once complete, so a process killed while
+ * writing leaves nothing behind; elsewhere, or where the file system refuses
+ * O_TMPFILE, a named temporary file is used.
+ *
+ * The temporary file is created with mode 0666 (O_TMPFILE, or
+ * open(O_CREAT | O_EXCL)), so the
  * kernel applies the user's umask to a new file exactly as for any other
  * program; when the target exists, the temporary file takes the target's
  * permission bits before the rename, so a 0600 file stays 0600.  A symbolic
@@ -9,7 +15,7 @@
  * names carry the writer's process id, and a write first removes the
  * temporaries of the same target left by processes that no longer exist
  * (killed inside the write window). */
-#define _POSIX_C_SOURCE 200809L
+#define _GNU_SOURCE /* O_TMPFILE, linkat's AT_SYMLINK_FOLLOW */
 #include "core/atomic.h"
 #include "core/status.h"
 #include <dirent.h>
@@ -80,6 +86,72 @@ int px_atomic_clean_stale(const char *path)
     return removed;
 }
 
+#define PX_TMP_NUM_LEN 48            /* room for "<pid>-<n>" */
+
+/* <path>.phlox-tmp-<pid>-<k> */
+static void tmp_name(char *buf, size_t size, const char *path, int k)
+{
+    snprintf(buf, size, "%s%s%ld-%d", path, PX_TMP_TAG, (long)getpid(), k);
+}
+
+static int write_all(int fd, const void *data, size_t n)
+{
+    const char *p = data;
+    while (n > 0) {
+        ssize_t w = write(fd, p, n);
+        if (w < 0) {
+            if (errno == EINTR) continue;
+            return errno;
+        }
+        p += w;
+        n -= (size_t)w;
+    }
+    return 0;
+}
+
+#ifdef O_TMPFILE
+#define PX_PROC_FD_LEN 64
+
+/* The O_TMPFILE path (the umask applies to its 0666; MODE >= 0 is the
+ * existing target's, kept): returns 0, an errno, or -1 when O_TMPFILE is
+ * not available here (the caller falls back to a named file). */
+static int write_unnamed(const char *path, const void *data, size_t n, int mode)
+{
+    char *dir;
+    const char *base;
+    if (split_path(path, &dir, &base) != PX_OK) return ENOMEM;
+    int fd = open(dir, O_TMPFILE | O_WRONLY | O_CLOEXEC, PX_NEW_FILE_MODE);
+    free(dir);
+    if (fd < 0) return (errno == EISDIR || errno == EOPNOTSUPP || errno == EINVAL) ? -1 : errno;
+    int err = 0;
+    if (mode >= 0 && fchmod(fd, (mode_t)mode) != 0) err = errno;
+    if (!err) err = write_all(fd, data, n);
+    if (!err && fsync(fd) != 0) err = errno;
+    if (!err) {
+        char proc[PX_PROC_FD_LEN];
+        snprintf(proc, sizeof proc, "/proc/self/fd/%d", fd);
+        size_t cap = strlen(path) + sizeof PX_TMP_TAG + PX_TMP_NUM_LEN;
+        char *tmp = malloc(cap);
+        if (!tmp) err = ENOMEM;
+        for (int t = 0; !err && t < PX_TMP_TRIES; t++) {
+            tmp_name(tmp, cap, path, t);
+            if (linkat(AT_FDCWD, proc, AT_FDCWD, tmp, AT_SYMLINK_FOLLOW) == 0) {
+                if (rename(tmp, path) != 0) {
+                    err = errno;
+                    unlink(tmp);
+                }
+                break;
+            }
+            if (errno != EEXIST) err = errno == ENOENT ? -1 : errno; /* no /proc: fall back */
+            else if (t == PX_TMP_TRIES - 1) err = EEXIST;
+        }
+        free(tmp);
+    }
+    close(fd);
+    return err;
+}
+#endif
+
 int px_write_atomic_ex(const char *path, const void *data, size_t n, int flags, int *errno_out,
                        char *why, size_t whysize)
 {
@@ -104,8 +176,16 @@ int px_write_atomic_ex(const char *path, const void *data, size_t n, int flags, 
         }
     }
     px_atomic_clean_stale(path);
+    int keep_mode = exists && S_ISREG(old.st_mode);
+#ifdef O_TMPFILE
+    int u = write_unnamed(path, data, n, keep_mode ? (int)(old.st_mode & 07777) : -1);
+    if (u >= 0) {
+        if (errno_out) *errno_out = u;
+        return u ? PX_EIO : PX_OK;
+    }
+#endif
     size_t len = strlen(path);
-    size_t cap = len + sizeof PX_TMP_TAG + 48;
+    size_t cap = len + sizeof PX_TMP_TAG + PX_TMP_NUM_LEN;
     char *tmp = malloc(cap);
     if (!tmp) {
         if (errno_out) *errno_out = ENOMEM;
@@ -113,7 +193,7 @@ int px_write_atomic_ex(const char *path, const void *data, size_t n, int flags, 
     }
     int fd = -1;
     for (int k = 0; k < PX_TMP_TRIES && fd < 0; k++) {
-        snprintf(tmp, cap, "%s%s%ld-%d", path, PX_TMP_TAG, (long)getpid(), k);
+        tmp_name(tmp, cap, path, k);
         fd = open(tmp, O_WRONLY | O_CREAT | O_EXCL | O_NOFOLLOW | O_CLOEXEC, PX_NEW_FILE_MODE);
         if (fd < 0 && errno != EEXIST) break;
     }
@@ -124,19 +204,8 @@ int px_write_atomic_ex(const char *path, const void *data, size_t n, int flags, 
         return PX_EIO;
     }
     /* an existing regular file keeps its permission bits */
-    if (exists && S_ISREG(old.st_mode) && fchmod(fd, old.st_mode & 07777) != 0) err = errno;
-    const char *p = data;
-    size_t left = n;
-    while (!err && left > 0) {
-        ssize_t w = write(fd, p, left);
-        if (w < 0) {
-            if (errno == EINTR) continue;
-            err = errno;
-            break;
-        }
-        p += w;
-        left -= (size_t)w;
-    }
+    if (keep_mode && fchmod(fd, old.st_mode & 07777) != 0) err = errno;
+    if (!err) err = write_all(fd, data, n);
     if (!err && fsync(fd) != 0) err = errno;
     if (close(fd) != 0 && !err) err = errno;
     if (!err && rename(tmp, path) != 0) err = errno;

@@ -43,5 +43,6 @@ void px_lua_opt_check_value(lua_State *L, int idx, const char *fname, const char
 void px_lua_push_user_where(lua_State *L);
 int px_lua_user_error(lua_State *L, const char *fmt, ...);
 void px_lua_open_practice(lua_State *L);
+void px_lua_open_proc(lua_State *L);
 
 #endif

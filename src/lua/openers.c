@@ -11,4 +11,5 @@ const px_lua_opener px_lua_openers[] = {
     px_lua_open_opts,
     px_lua_open_fs,
     px_lua_open_practice,
+    px_lua_open_proc,
     0};

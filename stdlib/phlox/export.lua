@@ -25,10 +25,6 @@ local function cell(v, col)
   return s
 end
 
---- Write rows (a sequence of tables keyed by column name) as CSV.
--- opts.columns: the column order (required); opts.conditions: stamped;
--- opts.from: the result(s) the rows come from, whose caveats (stamp lines)
--- become "# note:" lines (default: every caveat of this run).
 local CSV_OPTS = {
   columns = "strings",                    -- the column order (required)
   conditions = "table",                   -- stamped in the header
@@ -41,6 +37,12 @@ local JSON_OPTS = {
   replace = "boolean",
 }
 export.option_specs = { ["export.csv"] = CSV_OPTS, ["export.json"] = JSON_OPTS }
+--- Write rows (a sequence of tables keyed by column name) as CSV.
+-- opts.columns: the column order (required); opts.conditions: stamped;
+-- opts.from: the results the rows come from (a result or a list): their
+-- own data files, conditions, options and caveats (stamp lines, as "# note:"
+-- lines) are stamped; without it, every input and caveat of the run, the
+-- data files marked as such.
 function export.csv(path, rows, opts)
   core.check_value("export.csv", "path", path, "string")
   core.check_value("export.csv", "rows", rows, "table")
@@ -64,7 +66,7 @@ function export.csv(path, rows, opts)
 end
 
 --- Write a value as JSON: { provenance = ..., caution = ..., data = value }.
--- opts.conditions and opts.from as export.csv (notes in provenance.notes).
+-- opts.conditions, opts.from as export.csv (notes in provenance.notes).
 function export.json(path, value, opts)
   core.check_value("export.json", "path", path, "string")
   if opts ~= nil then core.options("export.json", JSON_OPTS, opts) end

@@ -19,32 +19,16 @@
 --   * reproducibility: the two runs give byte-identical SVG, PDF, CSV and
 --     JSON files (DESIGN.md: the same inputs give the same bytes).
 -- Environment (tests/CMakeLists.txt): PHLOX_BIN, PHLOX_SOURCE_DIR.
-local function check(cond, msg) if not cond then error(msg, 2) end end
+local t = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
+                 .. "/tests/scripts/lib/common.lua")
+local check, quote, read, tmpdir = t.check, t.quote, t.read, t.tmpdir
 local function close(a, b, tol, what)
   check(math.abs(a - b) <= tol, ("%s: %.9g vs %.9g (tolerance %g)"):format(what, a, b, tol))
 end
 
-local BIN = assert(os.getenv("PHLOX_BIN"), "PHLOX_BIN is not set (run through ctest)")
-local SRC = assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
+local BIN, SRC = t.BIN, t.SRC
 local DEMO = SRC .. "/examples/demo.lua"
-local R, F = 8.314462618, 96485.33212 -- CODATA 2018
-local function slope(T_C) return R * (T_C + 273.15) * math.log(10) / F end
-
-local function quote(s) return "'" .. s:gsub("'", "'\\''") .. "'" end
-local function read(p)
-  local f = io.open(p, "rb")
-  if not f then return nil end
-  local s = f:read("a")
-  f:close()
-  return s
-end
-
-local function tmpdir()
-  local name = os.tmpname()   -- creates an empty file; use its unique name for a folder
-  os.remove(name)
-  check(require("phlox.core").make_dir(name), "cannot create " .. name)
-  return name
-end
+local function slope(T_C) return t.R * (T_C + 273.15) * math.log(10) / t.F end
 
 local function run(dir)
   local log = dir .. "/stdout.txt"
@@ -118,68 +102,13 @@ local function checks()
   check(pdf:match("/Count (%d+)") == "3", "PDF has 3 pages, found " .. tostring(pdf:match("/Count (%d+)")))
 
   -- CSV --------------------------------------------------------------------------
-  local function parse_csv_line(line)
-    local cells, i, n = {}, 1, #line
-    while i <= n + 1 do
-      if line:sub(i, i) == '"' then
-        local buf, j = {}, i + 1
-        while true do
-          local c = line:sub(j, j)
-          check(c ~= "", "unterminated quote in: " .. line)
-          if c == '"' then
-            if line:sub(j + 1, j + 1) == '"' then buf[#buf + 1] = '"'; j = j + 2
-            else j = j + 1; break end
-          else buf[#buf + 1] = c; j = j + 1 end
-        end
-        cells[#cells + 1] = table.concat(buf)
-        check(line:sub(j, j) == "," or j > n, "text after a closing quote in: " .. line)
-        i = j + 1
-      else
-        local j = line:find(",", i, true) or (n + 1)
-        cells[#cells + 1] = line:sub(i, j - 1)
-        i = j + 1
-      end
-    end
-    return cells
-  end
-
-  local function sha256sum(p)
-    local h = io.popen("sha256sum " .. quote(p))
-    local s = h:read("a")
-    h:close()
-    return s:match("^(%x+)")
-  end
-
   local function read_csv(name, columns)
-    local text = data[name]
-    local lines = {}
-    for l in text:gmatch("([^\n]*)\n") do lines[#lines + 1] = l end
-    local k, header = 1, {}
-    while lines[k] and lines[k]:sub(1, 1) == "#" do header[#header + 1] = lines[k]; k = k + 1 end
-    local htext = table.concat(header, "\n")
+    local htext, cols, rows, nfiles = t.read_csv(data[name], name)
     check(htext:find("^# program: phlox "), name .. ": provenance starts with the program")
     check(htext:find("\n# script: [^\n]*demo%.lua sha256=%x+"), name .. ": script and its checksum")
     check(htext:find("what can form, not how fast", 1, true), name .. ": caution in the header")
-    local nfiles = 0
-    for file, sum in htext:gmatch("# data: (%S+) sha256=(%x+)") do
-      nfiles = nfiles + 1
-      check(#sum == 64, name .. ": sha256 of " .. file .. " has 64 hex digits")
-      local real = SRC .. "/" .. file   -- embedded copies are recorded as stdlib/...
-      check(sha256sum(real) == sum, name .. ": checksum of " .. file .. " differs from sha256sum")
-    end
     check(nfiles >= 3, name .. ": at least the HO, Cu and Cl files are stamped")
-    local cols = parse_csv_line(lines[k])
-    check(table.concat(cols, ",") == table.concat(columns, ","),
-          name .. ": columns are " .. lines[k])
-    local rows = {}
-    for i = k + 1, #lines do
-      local cells = parse_csv_line(lines[i])
-      check(#cells == #cols, ("%s line %d has %d cells, not %d"):format(name, i, #cells, #cols))
-      local row = {}
-      for c, v in ipairs(cells) do row[cols[c]] = v end
-      rows[#rows + 1] = row
-    end
-    check(#rows > 0, name .. ": has rows")
+    check(table.concat(cols, ",") == table.concat(columns, ","), name .. ": columns are " .. table.concat(cols, ","))
     return rows
   end
 
@@ -191,19 +120,7 @@ local function checks()
     "a_Cl", "field", "domain", "solid", "dissolved_Cu", "carrier", "carrier_share_of_dissolved" })
   read_csv("dissolved-copper.csv", { "T_C", "state", "Cl", "pH", "dissolved_Cu" })
 
-  -- Coefficient of a species in "a A + b B = c C": positive on the left.
-  local function coefficient(reaction, species)
-    local lhs, rhs = reaction:match("^(.-) = (.*)$")
-    local total = 0
-    for side, sign in pairs({ [lhs] = 1, [rhs] = -1 }) do
-      for term in (side .. " + "):gmatch("(.-) %+ ") do
-        local n, f = term:match("^(%d+) (.+)$")
-        if not n then n, f = 1, term end
-        if f == species then total = total + sign * tonumber(n) end
-      end
-    end
-    return total
-  end
+  local coefficient = t.coefficient
 
   -- Nernst: on an E-pH map a boundary has dE/dpH = -(RT ln10/F) nH/ne.
   local nslopes = 0

@@ -4,8 +4,15 @@
 
 ---@class phlox.core
 ---@field limits table
+---@field revision string
 ---@field version string
 local phlox_core = {}
+
+--- (C) phlox_core.append_sync(path, text) -> true | nil, message (appended and synced)
+---@param path string
+---@param text string
+---@return any # true | nil, message (appended and synced)
+function phlox_core.append_sync(path, text) end
 
 --- (C) phlox_core.check_files({path...}) -> ok, {problem...}
 ---@param path string
@@ -56,6 +63,25 @@ function phlox_core.embedded_files() end
 ---@return any # source text, or nil.
 function phlox_core.embedded_source(path) end
 
+--- (C) phlox_core.exit_now([code])
+---@param code? any
+function phlox_core.exit_now(code) end
+
+--- (C) phlox_core.fd_close(fd)
+---@param fd any
+function phlox_core.fd_close(fd) end
+
+--- (C) phlox_core.fd_read({fd...}) -> k, bytes ("" at end of file) | nil, message
+---@param fd any
+---@return any # k, bytes ("" at end of file) | nil, message
+function phlox_core.fd_read(fd) end
+
+--- (C) phlox_core.fd_write(fd, text) -> true | nil, message
+---@param fd any
+---@param text string
+---@return any # true | nil, message
+function phlox_core.fd_write(fd, text) end
+
 --- (C) phlox_core.figure(width, height [, rows, cols])
 ---@param width number
 ---@param height number
@@ -68,10 +94,22 @@ function phlox_core.figure(width, height, rows, cols) end
 ---@return any
 function phlox_core.file_kind(...) end
 
+--- (C) phlox_core.fork() -> pid, to_fd, from_fd (pid 0 in the worker) | nil, message
+---@return any # pid, to_fd, from_fd (pid 0 in the worker) | nil, message
+function phlox_core.fork() end
+
 --- (C) phlox_core.formula(text) -> table | nil, message
 ---@param text string
 ---@return any # table | nil, message
 function phlox_core.formula(text) end
+
+--- (C) phlox_core.getpid() -> process id
+---@return any # process id
+function phlox_core.getpid() end
+
+--- (C) phlox_core.getppid() -> parent process id
+---@return any # parent process id
+function phlox_core.getppid() end
 
 --- (C) phlox_core.grid_map(db, opts) -> rigorous map table | nil, message
 ---@param db phlox.Database
@@ -88,10 +126,15 @@ function phlox_core.inhibited_solids() end
 ---@return any # boolean (for progress display)
 function phlox_core.isatty(fd) end
 
---- (C function; no signature in src/lua or docs/lua-api.md)
----@param ... any
----@return any
-function phlox_core.list_dir(...) end
+--- (C) phlox_core.kill(pid) -> boolean (SIGKILL to a worker this process started)
+---@param pid any
+---@return any # boolean (SIGKILL to a worker this process started)
+function phlox_core.kill(pid) end
+
+--- (C) phlox_core.list_dir(path) -> {name...} sorted | nil, message
+---@param path string
+---@return any # {name...} sorted | nil, message
+function phlox_core.list_dir(path) end
 
 --- (C function; no signature in src/lua or docs/lua-api.md)
 ---@param ... any
@@ -103,6 +146,10 @@ function phlox_core.make_dir(...) end
 ---@param opts table
 ---@return any # map table | nil, message
 function phlox_core.map(db, opts) end
+
+--- (C) phlox_core.monotonic() -> seconds of a monotonic clock
+---@return any # seconds of a monotonic clock
+function phlox_core.monotonic() end
 
 --- (C) phlox_core.nernst_slope(T)
 ---@param T number
@@ -155,11 +202,6 @@ function phlox_core.search_paths() end
 ---@param text string
 function phlox_core.sha256(text) end
 
---- (C function; no signature in src/lua or docs/lua-api.md)
----@param ... any
----@return any
-function phlox_core.spawn(...) end
-
 --- (C) phlox_core.speciate(db, opts)
 ---@param db phlox.Database
 ---@param opts table
@@ -190,14 +232,20 @@ function phlox_core.text_width(text, size, chem) end
 ---@param log? any
 function phlox_core.ticks(a, b, n, log) end
 
+--- (C) phlox_core.truncate(path, size) -> true | nil, message
+---@param path string
+---@param size number
+---@return any # true | nil, message
+function phlox_core.truncate(path, size) end
+
 --- (C) phlox_core.user_error(message)
 ---@param message any
 function phlox_core.user_error(message) end
 
---- (C function; no signature in src/lua or docs/lua-api.md)
----@param ... any
----@return any
-function phlox_core.wait(...) end
+--- (C) phlox_core.wait(pid) -> exit code (128 + signal when killed) | nil, message
+---@param pid any
+---@return any # exit code (128 + signal when killed) | nil, message
+function phlox_core.wait(pid) end
 
 --- (C) phlox_core.water(T [, P [, dielectric]]) -> table of the water state
 ---@param T number
