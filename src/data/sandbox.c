@@ -379,9 +379,11 @@ void pxd_sandbox_run(pxd_file *f)
                        f->opt->wall_limit);
             f->status = PX_ELIMIT;
         } else if (s.time_tripped) {
+            /* a helper that would overrun the budget says which (charge()) */
+            const char *in = m ? strstr(m, "(in ") : NULL;
             pxd_report(f, PX_DATA_ERROR, line, "", "",
-                       "instruction budget exceeded (%lu Lua instructions): endless loop?",
-                       s.budget);
+                       "instruction budget exceeded (%lu Lua instructions or units of work)%s%s",
+                       s.budget, in ? " " : ": endless loop?", in ? in : "");
             f->status = PX_ELIMIT;
         } else if (s.mem_tripped) {
             if (line <= 0) line = s.last_line;

@@ -40,6 +40,18 @@ for i, c in ipairs(cases) do
   rows[#rows + 1] = ("| %s | `%s` | %s |"):format(class, fname, (want:gsub("|", "\\|")))
 end
 
+-- element files from a stranger: the first error of each
+local frows = {}
+for i, c in ipairs(cases.files) do
+  local class, src, want = c[1], c[2], c[3]
+  local ok, msg = core.database():load(src, "f.lua")
+  if ok or not tostring(msg):find(want, 1, true) then
+    failed = failed + 1
+    io.stderr:write(("file case %d (%s):\n  want ...%s\n  got  %s\n"):format(i, class, want, ok and "loaded" or tostring(msg)))
+  end
+  frows[#frows + 1] = ("| %s | %s |"):format(class, (tostring(msg):gsub("|", "\\|"):gsub("\n.*", "")))
+end
+
 -- the error of a call through the user's own helper points at the helper's line
 local function helper() local m = phlox.map { library = lib, element = "Zn", T_c = 90 }; return m end
 local line = debug.getinfo(1, "l").currentline - 1
@@ -71,11 +83,20 @@ local doc = table.concat({
   "tests/tools/misuse_def.lua; the test fails if this file is stale.  Each row is",
   "a call a test makes and the message it must raise; every message is prefixed",
   "with the calling script's file and line (`study.lua:12: `).  Element-file",
-  "problems (`phlox check`) are listed in docs/element-files.md.",
+  "problems (`phlox check`, `phlox.library`) follow in the second table.",
   "",
   "| class | function | message |",
   "|---|---|---|",
   table.concat(rows, "\n"),
+  "",
+  "## Element files",
+  "",
+  "Each row is a file a test loads (as `f.lua`) and the first problem it",
+  "reports, as `phlox check` prints it.",
+  "",
+  "| class | message |",
+  "|---|---|",
+  table.concat(frows, "\n"),
   "",
 }, "\n")
 local path = root .. "/docs/bad-input.md"

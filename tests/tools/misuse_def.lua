@@ -6,7 +6,9 @@
 -- staleness by the same test).
 -- Each case: { class, fn name, function(env) ... end, expected plain text }.
 -- env holds a library (lib), a map (map) and a temporary folder (dir).
-return {
+-- `files` (at the end): element files from a stranger, each loaded as
+-- f.lua; the first error must contain the text (what `phlox check` prints).
+local cases = {
   -- unknown and misspelt options
   { "misspelt option", "phlox.map", function(e) return e.phlox.map { library = e.lib, element = "Zn", T_c = 90 } end,
     "phlox.map: unknown option 'T_c' (did you mean 'T_C'?)" },
@@ -165,3 +167,24 @@ return {
   { "cycle in exported data", "export.json", function(e) local t = {}; t.self = t; return e.export.json(e.dir .. "/c.json", t) end,
     "export.json: json: cycle: $.data.self contains $.data again" },
 }
+
+local CP = "return { element = 'Zn', species = { { formula = 'ZnO(s)', model = 'cp', G = -320.479, " ..
+           "H = -350.46, S = 43.65, source = 'x', %s } } }"
+cases.files = {
+  { "endless loop", "while true do end return {}", "instruction budget exceeded" },
+  { "work inside C", "local s = string.rep('', math.maxinteger) return {}", "units of work) (in string.rep)" },
+  { "memory bomb", "local s = 'x' while true do s = s .. s end", "memory limit exceeded" },
+  { "forbidden name", "os.execute('true') return {}", "f.lua:1: undefined global 'os'" },
+  { "precompiled chunk", string.dump(function() return {} end), "attempt to load a binary chunk" },
+  { "syntax error", "return {", "syntax error" },
+  { "control characters", "error('\27[2J')", "\\x1b[2J" },
+  { "absurd value", CP:format("cp = { a = 1e308 }"), "Cp(298.15 K) = 1e+308 J/(mol K) is outside the physical range" },
+  { "absurd count", "return { element = 'Zn', species = { { formula = 'Zn10000000000000000000000(s)', " ..
+    "model = 'cp', G = 0, H = 0, S = 41.63, cp = { a = 25.4 }, source = 'x' } } }", "1e+22 atoms of Zn per formula unit" },
+  { "absurd log K", "return { element = 'Cl', species = { { formula = 'ZnCl^+', model = 'logk', " ..
+    "reaction = 'Zn^2+ + Cl^- = ZnCl^+', logK = 1e300, source = 'x' } } }", "logK = 1e+300  is outside the physical range" },
+  { "unit slip", CP:gsub("G = %-320.479", "G = -320479"):format("cp = { a = 40 }"), "dfG = " },
+  { "unknown field", CP:format("cp = { a = 40 }, colour = 'red'"), "unknown field 'colour'" },
+}
+return cases
+
