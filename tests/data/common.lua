@@ -79,43 +79,13 @@ function M.load_definition(path)
 end
 
 ---------------------------------------------------------------------------- CSV
--- One line of CSV: quoted fields with "" for a quote; no embedded newlines.
-function M.csv_split(line)
-  local out, field, inq = {}, {}, false
-  local i = 1
-  while i <= #line do
-    local c = line:sub(i, i)
-    if inq then
-      if c == '"' then
-        if line:sub(i + 1, i + 1) == '"' then field[#field + 1] = '"'; i = i + 1 else inq = false end
-      else field[#field + 1] = c end
-    elseif c == '"' then inq = true
-    elseif c == "," then out[#out + 1] = table.concat(field); field = {}
-    else field[#field + 1] = c end
-    i = i + 1
-  end
-  out[#out + 1] = table.concat(field)
-  return out
-end
+-- The shared reader of tests/support/csv.lua (RFC 4180 quoting).
+local CSV = dofile((debug.getinfo(1, "S").source:match("^@(.*)[/\\]") or ".") .. "/../support/csv.lua")
+M.csv_split = CSV.split
 
 -- Rows of a CSV file with a header line, each a table keyed by the header names.
 function M.read_csv(path)
-  local fh = io.open(path, "r")
-  if not fh then error("cannot open reference file " .. path) end
-  local header, rows = nil, {}
-  for line in fh:lines() do
-    line = line:gsub("\r$", "")
-    if line ~= "" then
-      local f = M.csv_split(line)
-      if not header then header = f
-      else
-        local row = {}
-        for k, name in ipairs(header) do row[name] = f[k] end
-        rows[#rows + 1] = row
-      end
-    end
-  end
-  fh:close()
+  local _, rows = CSV.read(path)
   return rows
 end
 

@@ -19,10 +19,11 @@
 --   * reproducibility: the two runs give byte-identical SVG, PDF, CSV and
 --     JSON files (DESIGN.md: the same inputs give the same bytes).
 -- Environment (tests/CMakeLists.txt): PHLOX_BIN, PHLOX_SOURCE_DIR.
-local function check(cond, msg) if not cond then error(msg, 2) end end
-local function close(a, b, tol, what)
-  check(math.abs(a - b) <= tol, ("%s: %.9g vs %.9g (tolerance %g)"):format(what, a, b, tol))
-end
+local T = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
+                 .. "/tests/support/check.lua")
+local check, close = T.check, T.close
+local CSV = dofile(os.getenv("PHLOX_SOURCE_DIR") .. "/tests/support/csv.lua")
+local JSON = dofile(os.getenv("PHLOX_SOURCE_DIR") .. "/tests/support/json.lua")
 
 local BIN = assert(os.getenv("PHLOX_BIN"), "PHLOX_BIN is not set (run through ctest)")
 local SRC = assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
@@ -118,28 +119,11 @@ local function checks()
   check(pdf:match("/Count (%d+)") == "3", "PDF has 3 pages, found " .. tostring(pdf:match("/Count (%d+)")))
 
   -- CSV --------------------------------------------------------------------------
+  -- RFC 4180 on one line, strict: an unterminated quote or text after a
+  -- closing quote fails (tests/support/csv.lua)
   local function parse_csv_line(line)
-    local cells, i, n = {}, 1, #line
-    while i <= n + 1 do
-      if line:sub(i, i) == '"' then
-        local buf, j = {}, i + 1
-        while true do
-          local c = line:sub(j, j)
-          check(c ~= "", "unterminated quote in: " .. line)
-          if c == '"' then
-            if line:sub(j + 1, j + 1) == '"' then buf[#buf + 1] = '"'; j = j + 2
-            else j = j + 1; break end
-          else buf[#buf + 1] = c; j = j + 1 end
-        end
-        cells[#cells + 1] = table.concat(buf)
-        check(line:sub(j, j) == "," or j > n, "text after a closing quote in: " .. line)
-        i = j + 1
-      else
-        local j = line:find(",", i, true) or (n + 1)
-        cells[#cells + 1] = line:sub(i, j - 1)
-        i = j + 1
-      end
-    end
+    local cells, err = CSV.split(line)
+    check(cells, err)
     return cells
   end
 
@@ -261,11 +245,15 @@ local function checks()
   check(seen == 4, "three deaerated points and the 25 C aerated point checked")
 
   -- JSON: neutral pH at 25 C
-  local json = data["study.json"]
-  check(json:sub(1, 1) == "{" and json:match("}%s*$"), "study.json is one object")
-  local n25 = tonumber(json:match('"neutral_pH": ([%d%.]+)'))
+  local ok_json, doc = pcall(JSON.decode, data["study.json"])
+  check(ok_json and type(doc) == "table", "study.json is one JSON object: " .. tostring(doc))
+  local n25
+  for _, m in ipairs(doc.data and doc.data.maps or {}) do
+    if m.T_C == 25 then n25 = m.neutral_pH end
+  end
   close(n25, 6.9975, 0.01, "neutral pH at 25 C (pKw 13.995, IAPWS R11-07)")
-  check(json:find('"caution"', 1, true) and json:find('"provenance"', 1, true), "study.json carries caution and provenance")
+  check(type(doc.caution) == "string" and doc.caution ~= "" and type(doc.provenance) == "table",
+        "study.json carries caution and provenance")
 
   -- Reproducibility: byte-identical text outputs and PDF in the two runs.
   for _, name in ipairs(FILES) do

@@ -5,10 +5,9 @@
 -- geometry rules of a map (fields tile the window, boundaries separate the
 -- two fields they name).
 local phlox = require "phlox"
-local function check(cond, msg) if not cond then error(msg, 2) end end
-local function close(a, b, tol, what)
-  check(math.abs(a - b) <= tol, ("%s: %.6g vs %.6g (tolerance %g)"):format(what, a, b, tol))
-end
+local T = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
+                 .. "/tests/support/check.lua")
+local check, close = T.check, T.close
 local R, F = 8.314462618, 96485.33212 -- CODATA 2018
 local function slope(T) return R * T * math.log(10) / F end
 

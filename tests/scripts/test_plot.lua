@@ -6,7 +6,9 @@
 local plot = require "phlox.plot"
 local palette = require "phlox.palette"
 local core = require "phlox.core"
-local function check(cond, msg) if not cond then error(msg, 2) end end
+local T = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
+                 .. "/tests/support/check.lua")
+local check, near = T.check, T.near
 
 -- BEGIN TEST MAP
 -- Nernst slope ln(10) R T / F at 298.15 K from CODATA 2018 R and F; the
@@ -56,7 +58,6 @@ local function slurp(p) local f = assert(io.open(p, "rb")); local s = f:read("a"
 -- palette: CIE L* of sRGB primaries and white (sRGB red L* = 53.24,
 -- green 87.73, blue 32.30: from memory of B. Lindbloom's published sRGB to
 -- Lab tables, D65); the formulas are CIE 15:2004 and IEC 61966-2-1.
-local function near(a, b, tol) return math.abs(a - b) <= tol end
 check(near(palette.lightness({ 1, 1, 1 }), 100, 1e-6), "L* of white")
 check(near(palette.lightness({ 0, 0, 0 }), 0, 1e-9), "L* of black")
 check(near(palette.lightness({ 1, 0, 0 }), 53.24, 0.02), "L* of sRGB red " .. palette.lightness({ 1, 0, 0 }))

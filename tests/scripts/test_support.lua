@@ -1,0 +1,68 @@
+-- test_support.lua: the shared test helpers of tests/support (check, CSV,
+-- JSON, seeded random numbers) on inputs with known answers, including
+-- malformed ones, so a helper that stops failing cannot hide a test's
+-- failure.  Sources: the examples of RFC 4180 (sec. 2, rules 5-7) and of
+-- RFC 8259 (sec. 13), both from memory of the RFCs; the generator's first
+-- value computed by hand from its recurrence.
+local SUP = assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
+            .. "/tests/support/"
+local T = dofile(SUP .. "check.lua")
+local CSV = dofile(SUP .. "csv.lua")
+local JSON = dofile(SUP .. "json.lua")
+local RNG = dofile(SUP .. "rng.lua")
+local check = T.check
+
+-- check, close, rel, near: pass and fail where they should, NaN never passes
+check(pcall(T.close, 1.0, 1.05, 0.1, "close"), "close passes inside the tolerance")
+check(not pcall(T.close, 1.0, 1.2, 0.1, "close"), "close fails outside")
+check(not pcall(T.close, 0 / 0, 0, 1, "close"), "close fails on NaN")
+check(not pcall(T.close, nil, 0, 1, "close"), "close fails on nil")
+check(pcall(T.rel, 105, 100, 0.06, "rel") and not pcall(T.rel, 107, 100, 0.06, "rel"), "rel")
+check(T.near(1, 1 + 1e-12, 1e-9) and not T.near(1, 2, 0.5), "near")
+local ok, err = pcall(T.check, false, "the message")
+check(not ok and tostring(err):find("the message", 1, true), "check raises the message")
+
+-- CSV (RFC 4180 sec. 2: rule 6, commas in quotes; rule 7, "" for a quote)
+local f = CSV.split('"aaa","b,bb","c""cc",,x')
+check(#f == 5 and f[1] == "aaa" and f[2] == "b,bb" and f[3] == 'c"cc' and f[4] == "" and f[5] == "x",
+      "split: " .. table.concat(f or {}, "|"))
+check(CSV.split("") and #CSV.split("") == 1, "an empty line is one empty field")
+check(not CSV.split('a,"b'), "an unterminated quote is refused")
+check(not CSV.split('a,"b"c'), "text after a closing quote is refused")
+local header, rows = CSV.parse('name,value\r\n"x, y",1\r\n\r\n"multi\nline",2\n')
+check(#header == 2 and #rows == 2, "parse: header and two rows (blank line skipped)")
+check(rows[1].name == "x, y" and rows[1].value == "1" and rows[2].name == "multi\nline", "parse: fields")
+check(not pcall(CSV.read, SUP .. "no-such-file.csv"), "a missing file is an error")
+local v, src = CSV.ref_value("standard_potentials.csv", "couple", "2 H^+ + 2 e- = H2(g)", "E0_V_SHE_25C")
+check(v == 0 and src:find("hydrogen electrode", 1, true), "ref_value reads the SHE row")
+check(not pcall(CSV.ref_value, "standard_potentials.csv", "couple", "no such couple", "E0_V_SHE_25C"),
+      "ref_value fails on a missing row")
+
+-- JSON (RFC 8259 sec. 13 example, shortened)
+local doc = JSON.decode([[
+{ "Image": { "Width": 800, "Height": 600, "Title": "View from 15th Floor",
+    "Thumbnail": { "Url": "http://www.example.com/image/481989943", "Height": 125, "Width": 100 },
+    "Animated" : false, "IDs": [116, 943, 234, 38793] } }]])
+check(doc.Image.Width == 800 and doc.Image.Thumbnail.Height == 125 and doc.Image.Animated == false,
+      "JSON object members")
+check(#doc.Image.IDs == 4 and doc.Image.IDs[4] == 38793, "JSON array")
+local s = JSON.decode('["a\\"b\\\\c\\/\\n\\u00e9\\ud834\\udd1e", -0.5e-3, null, true]')
+check(s[1] == 'a"b\\c/\n\u{e9}\u{1d11e}', "JSON string escapes and a surrogate pair")
+check(s[2] == -0.5e-3 and s[3] == JSON.null and s[4] == true, "JSON number, null, true")
+for _, bad in ipairs { "{", "[1,]", '{"a" 1}', '"\\x"', "01", "1 2", '"\\ud834"', "nul", "" } do
+  check(not pcall(JSON.decode, bad), "malformed JSON refused: " .. bad)
+end
+
+-- seeded random numbers: replayable, in [0, 1), first value by hand:
+-- (12345 * 1103515245 + 12345) mod 2^31 = 1406932606
+local a, b = RNG.new(12345), RNG.new(12345)
+check(a() == 1406932606 / 2147483648, "first value of seed 12345")
+b()
+local lo, hi = 1, 0
+for _ = 1, 10000 do
+  local x = b()
+  check(x == a(), "the same seed replays the same sequence")
+  lo, hi = math.min(lo, x), math.max(hi, x)
+end
+check(lo >= 0 and hi < 1 and lo < 0.01 and hi > 0.99, "values cover [0, 1)")
+print("test_support: all checks passed")
