@@ -42,41 +42,36 @@ function M.decode(text)
       else buf[#buf + 1] = c; pos = pos + 1 end
     end
   end
+  -- the members of an object or array, after its opening bracket
+  local function items(close, member)
+    local t = {}
+    pos = pos + 1
+    ws()
+    if text:sub(pos, pos) == close then pos = pos + 1; return t end
+    while true do
+      member(t)
+      ws()
+      local d = text:sub(pos, pos)
+      if d == close then pos = pos + 1; return t end
+      if d ~= "," then fail("',' or '" .. close .. "' expected") end
+      pos = pos + 1
+    end
+  end
+  local function member(t)
+    ws()
+    if text:sub(pos, pos) ~= '"' then fail("object key expected") end
+    local k = str()
+    ws()
+    if text:sub(pos, pos) ~= ":" then fail("':' expected") end
+    pos = pos + 1
+    t[k] = value()
+  end
+  local function element(t) t[#t + 1] = value() end
   function value()
     ws()
     local c = text:sub(pos, pos)
-    if c == "{" then
-      local t = {}
-      pos = pos + 1
-      ws()
-      if text:sub(pos, pos) == "}" then pos = pos + 1; return t end
-      while true do
-        ws()
-        if text:sub(pos, pos) ~= '"' then fail("object key expected") end
-        local k = str()
-        ws()
-        if text:sub(pos, pos) ~= ":" then fail("':' expected") end
-        pos = pos + 1
-        t[k] = value()
-        ws()
-        local d = text:sub(pos, pos)
-        pos = pos + 1
-        if d == "}" then return t end
-        if d ~= "," then pos = pos - 1; fail("',' or '}' expected") end
-      end
-    elseif c == "[" then
-      local t = {}
-      pos = pos + 1
-      ws()
-      if text:sub(pos, pos) == "]" then pos = pos + 1; return t end
-      while true do
-        t[#t + 1] = value()
-        ws()
-        local d = text:sub(pos, pos)
-        pos = pos + 1
-        if d == "]" then return t end
-        if d ~= "," then pos = pos - 1; fail("',' or ']' expected") end
-      end
+    if c == "{" then return items("}", member)
+    elseif c == "[" then return items("]", element)
     elseif c == '"' then return str()
     elseif text:find("^true", pos) then pos = pos + 4; return true
     elseif text:find("^false", pos) then pos = pos + 5; return false
