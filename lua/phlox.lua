@@ -228,11 +228,111 @@ local function held_logk(lib, elements, T, P, opts, where)
   return held
 end
 
+local add_note -- defined below
 local function stamp_held(m, held)
   if #held == 0 then return end
   m.constant_logk = held
-  m.stamp = m.stamp or {}
-  m.stamp[#m.stamp + 1] = "log K held at 25 °C (no temperature data): " .. table.concat(held, ", ")
+  add_note(m, "held", "log K held at 25 °C (no temperature data): " .. table.concat(held, ", "))
+end
+
+-- What practice keeps out, and every caveat that changes a result, as
+-- stamp lines.  A result carries them in `stamp` (plot stamps, curve
+-- stamps) and `notes` ({key, text}); provenance records them for CSV and
+-- JSON files (phlox.export).  Warnings also go to stderr, once per text.
+
+--- Ranges of ionic strength (mol/kg) where each activity model is used.
+phlox.activity_ranges = {
+  ideal = { max = 10 ^ -2.3, source = "from memory of Stumm and Morgan, Aquatic Chemistry, 3rd ed. (1996), "
+    .. "table 3.3: the Debye-Hückel limiting law to I = 10^-2.3; unit activity coefficients are no better" },
+  davies = { max = 0.5, source = "from memory of Stumm and Morgan, Aquatic Chemistry, 3rd ed. (1996), table 3.3 "
+    .. "(Davies equation, I < 0.5)" },
+  bdot = { max = 1.0, source = "common practice, no source" },
+  sit = { max = 3.5, source = "from memory of Grenthe, Plyasunov and Spahiu 1997, NEA-TDB guidelines "
+    .. "(specific ion interaction theory to about I = 3.5 mol/kg)" },
+}
+
+local warned = {}
+local function warn_once(text, key)
+  key = key or text
+  if warned[key] then return end
+  warned[key] = true
+  io.stderr:write("phlox: warning: ", text, "\n")
+end
+
+function add_note(t, key, text)
+  t.notes = t.notes or {}
+  t.stamp = t.stamp or {}
+  for _, n in ipairs(t.notes) do if n.text == text then return end end
+  t.notes[#t.notes + 1] = { key = key, text = text }
+  t.stamp[#t.stamp + 1] = text
+  provenance.record_note(text)
+end
+
+--- The activity model at ionic strength I (mol/kg): { model, ionic_strength,
+-- max, in_range, source, text }; a model used beyond its range is warned
+-- about once on stderr.
+function phlox.activity_range(model, I)
+  local r = phlox.activity_ranges[model]
+  if not r then error("phlox.activity_range: unknown activity model '" .. tostring(model) .. "'", 2) end
+  local info = { model = model, ionic_strength = I, max = r.max, in_range = I <= r.max, source = r.source }
+  info.text = ("activity model %s, ionic strength %.3g mol/kg (used to %g mol/kg: %s)"):format(model, I, r.max, r.source)
+  if not info.in_range then
+    info.warning = ("%s activity coefficients at ionic strength %.3g mol/kg, beyond the model's range "
+      .. "(%g mol/kg: %s): results are indicative"):format(model, I, r.max, r.source)
+    warn_once(info.warning, "range " .. model)
+  end
+  return info
+end
+
+local function note_activity(t, model, I)
+  local a = phlox.activity_range(model, I)
+  t.activity = a
+  add_note(t, "activity", a.warning and ("WARNING: " .. a.warning) or a.text)
+end
+
+--- The sour-service caution, on every output where H2S or HS^- is part of
+-- a map or a speciation.
+phlox.sour_caution = "sour service: H2S/HS- present; this diagram does not show hydrogen uptake, "
+  .. "sulfide stress cracking or hydrogen-induced cracking: defer to the applicable sour-service standards"
+local SULFIDE = { ["H2S(aq)"] = true, ["HS^-"] = true, ["S^2-"] = true, ["H2S(g)"] = true }
+
+local function note_sour(t, names)
+  for _, n in ipairs(names) do
+    if SULFIDE[n] then
+      add_note(t, "sour", phlox.sour_caution)
+      warn_once(phlox.sour_caution)
+      return
+    end
+  end
+end
+
+--- The stamp lines of several results (the solves of a curve or a sweep):
+-- each caveat once, skipping the keys in `skip`; the activity line of the
+-- largest ionic strength first.
+function phlox.merge_notes(results, skip)
+  local out, seen, worst = {}, {}, nil
+  for _, r in ipairs(results) do
+    for _, n in ipairs(r.notes or {}) do
+      if n.key == "activity" then
+        if r.activity and (not worst or r.activity.ionic_strength > worst.ionic_strength) then worst = r.activity end
+      elseif not (skip and skip[n.key]) and not seen[n.text] then
+        seen[n.text] = true
+        out[#out + 1] = n.text
+      end
+    end
+  end
+  if worst then
+    table.insert(out, 1, (worst.warning and ("WARNING: " .. worst.warning) or worst.text) .. " (the largest of these results)")
+  end
+  return out
+end
+
+local function note_list(t, key, what, list)
+  if list and #list > 0 then add_note(t, key, what .. ": " .. table.concat(list, ", ")) end
+end
+
+local function note_ligands(t, text)
+  if text then add_note(t, "ligands", "ligand oxidation states: " .. text) end
 end
 
 local function window_of(opts, xname, yname)
@@ -247,7 +347,11 @@ end
 --   phlox.map { library = lib, element = "Fe", T_C = 25,
 --               pH_range = {0, 14}, E_range = {-2, 2}, activity = 1e-6,
 --               ligand = "S", ligand_activity = 1e-3, ionic_strength = 0,
---               exclude = {"Fe3O4(s)"}, axes = {"pH", "E"} }
+--               exclude = {"Fe3O4(s)"}, axes = {"pH", "E"},
+--               ligand_redox = { N = "full", S = "sulfate" } }
+-- ligand_redox: per ligand "full" (true), "kept" (false) or a form name
+-- (docs/solver.md "What practice keeps out"; N and C kept, S full by
+-- default).  The map's `stamp` and `notes` carry every caveat.
 function phlox.map(opts)
   assert(type(opts) == "table", "phlox.map: options table expected")
   local lib = opts.library
@@ -264,9 +368,18 @@ function phlox.map(opts)
     ligand = opts.ligand, ligand_activity = opts.ligand_activity,
     gas_log_f = opts.gas_log_f, ionic_strength = opts.ionic_strength,
     exclude = opts.exclude, only = opts.only, activities = opts.activities,
+    ligand_redox = opts.ligand_redox,
   }
   local m, err = core.map(lib.db, copt)
   if not m then error(err, 2) end
+  note_ligands(m, m.ligand_states)
+  note_list(m, "exclude", "left out by the user (exclude)", opts.exclude)
+  note_list(m, "only", "only these species of " .. opts.element .. " (only)", opts.only)
+  if (opts.ionic_strength or 0) > 0 then note_activity(m, "davies", opts.ionic_strength) end
+  local names = {}
+  for _, f in ipairs(m.ligand_fields or {}) do names[#names + 1] = f.species end
+  for _, f in ipairs(m.fields) do names[#names + 1] = f.species end
+  note_sour(m, names)
   m.conditions = {
     T_C = T - T0C, P_bar = P, activity = opts.activity or 1e-6,
     ionic_strength = opts.ionic_strength or 0,
@@ -285,7 +398,9 @@ end
 --     fugacities = { ["CO2(g)"] = -3.4 },      -- log10 bar, replaces that element's total
 --     fixed = { ["Cl^-"] = -2 },               -- log10 activity of a basis species
 --     solids = true, suppress = {...}, exclude = {...},
---     activity = "davies" | "bdot" | "ideal" | "sit" }
+--     activity = "davies" | "bdot" | "ideal" | "sit",
+--     ligand_redox = { N = "full" },           -- as phlox.map
+--     allow_inhibited = true }                 -- let dolomite, magnesite, quartz in
 -- Returns a table (pH, pe, E, ionic_strength, species, elements with each
 -- species' share, solids' saturation index and amount), or nil, message,
 -- info when the solver does not converge.
@@ -302,6 +417,41 @@ function phlox.speciate(opts)
   local r, err, info = core.speciate(lib.db, copt)
   if not r then return nil, err, info end
   r.T_C = T - T0C
+  note_activity(r, r.activity_model, r.ionic_strength)
+  if r.activity_model == "sit" then
+    add_note(r, "sit", ("SIT interaction coefficients at 25 °C (NEA-TDB table, src/equil/equil_sit_data.c): "
+      .. "%d ion pairs with one, %d without (taken as 0)"):format(r.sit_pairs, r.sit_missing))
+  end
+  if r.pe then note_ligands(r, r.ligand_states)
+  else add_note(r, "ligands", "no redox constraint: every element stays in the oxidation state of its basis species") end
+  if #r.inhibited > 0 then
+    add_note(r, "inhibited", "kept from precipitating as kinetically inhibited (docs/solver.md; allow_inhibited = true "
+      .. "lets them in; saturation indices still given): " .. table.concat(r.inhibited, ", "))
+  end
+  if opts.allow_inhibited then
+    add_note(r, "inhibited", "kinetically inhibited solids allowed to precipitate (allow_inhibited = true)")
+  end
+  if opts.solids == false then add_note(r, "solids", "no solid may precipitate (solids = false)") end
+  note_list(r, "suppress", "kept from precipitating by the user (suppress)", opts.suppress)
+  note_list(r, "exclude", "left out by the user (exclude)", opts.exclude)
+  local elements = {}
+  for el in pairs(opts.totals or {}) do elements[#elements + 1] = el end
+  table.sort(elements)
+  -- sweeps speciate the same water at one T many times: the held list is
+  -- kept per library, T, P and elements
+  local key = ("%.6f %.6f %s"):format(T, P, table.concat(elements, " "))
+  lib.held_cache = lib.held_cache or {}
+  lib.held_cache[key] = lib.held_cache[key] or phlox.constant_logk(lib, elements, T, P)
+  if #lib.held_cache[key] > 0 and opts.require_temperature_data then
+    error("phlox.speciate: require_temperature_data: no temperature data (log K held at 25 °C) for "
+      .. table.concat(lib.held_cache[key], ", "), 2)
+  end
+  stamp_held(r, lib.held_cache[key])
+  local names = {}
+  for _, sp in ipairs(r.species) do
+    if (sp.molality or 0) > 0 then names[#names + 1] = sp.formula end
+  end
+  note_sour(r, names)
   return r
 end
 
@@ -313,7 +463,9 @@ end
 --   phlox.grid_map { library = lib, element = "Cu", T_C = 25, total = 1e-6,
 --                    ligand = "Cl", ligand_total = 1e-2, n = 201,
 --                    pH_range = {0, 14}, E_range = {-2, 2},
---                    activity = "davies", threads = 2 }
+--                    activity = "davies", threads = 2,
+--                    ligand_redox = {...}, allow_inhibited = false,
+--                    failed_boundaries = false }  -- draw boundaries next to failed solves
 -- Returns a map table with `boundaries` (polylines between named species),
 -- `fields` = {} (no polygons: draw it with phlox.plot.overlay next to an
 -- exact map), `labels` (node labels), `species` and solver statistics.
@@ -330,9 +482,44 @@ function phlox.grid_map(opts)
     nx = opts.nx or opts.n or 101, ny = opts.ny or opts.n or 101,
     total = opts.total, ligand = opts.ligand, ligand_total = opts.ligand_total,
     activity = opts.activity, background_nacl = opts.background_nacl,
-    exclude = opts.exclude, threads = opts.threads })
+    exclude = opts.exclude, threads = opts.threads,
+    ligand_redox = opts.ligand_redox, allow_inhibited = opts.allow_inhibited })
   if not g then error(err, 2) end
   g.fields = {}
+  note_ligands(g, g.ligand_states)
+  note_list(g, "exclude", "left out by the user (exclude)", opts.exclude)
+  note_activity(g, opts.activity or "davies", g.ionic_strength_max or 0)
+  if g.failures > 0 then
+    -- a boundary placed next to a point without a solution (a failed node,
+    -- or a bisection point) is a guess: left out unless the user asks for it
+    local kept, dropped = {}, 0
+    for _, b in ipairs(g.boundaries) do
+      if not b.through_failed or opts.failed_boundaries then kept[#kept + 1] = b
+      else -- keep the runs of points away from the failures
+        local run = { between = b.between, x = {}, y = {} }
+        for k = 1, #b.x do
+          if b.failed_points[k] then
+            dropped = dropped + 1
+            if #run.x >= 2 then kept[#kept + 1] = run end
+            run = { between = b.between, x = {}, y = {} }
+          else
+            run.x[#run.x + 1], run.y[#run.y + 1] = b.x[k], b.y[k]
+          end
+        end
+        if #run.x >= 2 then kept[#kept + 1] = run end
+      end
+    end
+    g.boundaries = kept
+    add_note(g, "failed", ("the solver failed at %d of %d solves; %s"):format(g.failures, g.solves,
+      opts.failed_boundaries and "boundaries next to them drawn on request (failed_boundaries = true)"
+      or ("%d boundary points next to them left out (failed_boundaries = true draws them)"):format(dropped)))
+  end
+  -- the grid keeps no ligand species: sulfide takes part unless sulfur
+  -- is pinned to sulfate (the C rule's own description says which)
+  local st = g.ligand_states or ""
+  if opts.ligand == "S" and (st:find("S full redox", 1, true) or st:find("S as sulfide", 1, true)) then
+    note_sour(g, { "HS^-" })
+  end
   g.conditions = { T_C = T - T0C, P_bar = P, total = opts.total or 1e-6,
                    ligand = opts.ligand, ligand_total = opts.ligand and (opts.ligand_total or 1e-3) or nil }
   g.label = "rigorous"
@@ -355,18 +542,84 @@ function phlox.locate(map, x, y)
   return nil
 end
 
---- Reference electrodes: name -> { name, offset (V vs SHE at 25 C), source }.
+--- Reference electrodes: name -> { name, offset (V vs SHE at 25 C), dEdT
+-- (V/K, the electrode at the test temperature), T_min, T_max (K, where
+-- dEdT is used), source, dEdT_source }.
 function phlox.electrodes()
   local out = {}
-  for _, e in ipairs(core.electrodes()) do out[e.name] = e end
+  for i, e in ipairs(core.electrodes()) do e.index = i; out[e.name] = e end
   return out
 end
 
+-- Short names used on site for the electrodes of phlox.electrodes().
+phlox.electrode_names = {
+  SHE = "standard hydrogen electrode",
+  SCE = "saturated calomel (Hg/Hg2Cl2, saturated KCl)",
+  ["Ag/AgCl"] = "Ag/AgCl, saturated KCl",
+  ["Ag/AgCl sat"] = "Ag/AgCl, saturated KCl",
+  ["Ag/AgCl 3.5M"] = "Ag/AgCl, 3.5 mol/L KCl",
+  CSE = "Cu/CuSO4, saturated",
+  ["Cu/CuSO4"] = "Cu/CuSO4, saturated",
+}
+
+--- The reference electrode record for a short or full name (errors name
+-- the known ones).
+function phlox.electrode(name)
+  local all = phlox.electrodes()
+  local e = all[name] or all[phlox.electrode_names[name] or ""]
+  if not e then
+    local known = {}
+    for k in pairs(phlox.electrode_names) do known[#known + 1] = k end
+    table.sort(known)
+    error(("unknown reference electrode '%s' (known: %s, or the full names of phlox.electrodes())")
+          :format(tostring(name), table.concat(known, ", ")), 3)
+  end
+  return e
+end
+
+--- The offset (V vs SHE) of an electrode at temperature T (K) and a record
+-- of how it was found: { name, offset, T, corrected, valid, text }.
+-- Between T_min and T_max the 25 °C offset is corrected with the
+-- electrode's temperature coefficient (its source in the text); elsewhere
+-- it refuses, unless at_25C is set (the electrode kept at room temperature
+-- outside the hot test, thermal junction potential not included).
+function phlox.electrode_at(name, T, at_25C, where)
+  where = where or "phlox.electrode_at"
+  local e = phlox.electrode(name)
+  T = T or 298.15
+  local info = { name = e.name, T = T, source = e.source }
+  if math.abs(T - 298.15) <= 0.5 or e.offset == 0 and e.dEdT == 0 then
+    info.offset, info.valid = e.offset, true
+    info.text = ("potentials vs %s: offset %.4f V vs SHE (%s)"):format(e.name, e.offset, e.source)
+  elseif at_25C then
+    info.offset, info.valid = e.offset, false
+    info.text = ("potentials vs %s kept at 25 °C (reference_at_25C): offset %.4f V, not corrected to %.1f °C; "
+      .. "the thermal junction potential is not included"):format(e.name, e.offset, T - T0C)
+  else
+    local off, err = core.electrode_offset(e.index, T)
+    if not off then
+      error(("%s: %s; the offset is not valid at %.1f °C (give reference_at_25C = true for an electrode kept "
+        .. "at room temperature)"):format(where, err:gsub("(%d+%.%d)%d+", "%1"), T - T0C), 3)
+    end
+    info.offset, info.valid, info.corrected = off, true, true
+    info.text = ("potentials vs %s at %.1f °C: offset %.4f V = %.4f V at 25 °C %+.3g mV/K (%s)"):format(
+      e.name, T - T0C, off, e.offset, e.dEdT * 1e3, e.dEdT_source)
+  end
+  if e.offset ~= 0 then provenance.record_note(info.text) end
+  return info
+end
+
 --- A potential measured against a reference electrode, on the SHE scale.
-function phlox.to_she(E_measured, electrode)
-  local e = phlox.electrodes()[electrode]
-  if not e then error("unknown reference electrode '" .. tostring(electrode) .. "'", 2) end
-  return E_measured + e.offset
+--   phlox.to_she(-0.45, "SCE")                  -- 25 °C
+--   phlox.to_she(-0.45, "SCE", { T_C = 50 })    -- corrected with dE/dT
+--   phlox.to_she(-0.45, "SCE", { T_C = 200, reference_at_25C = true })
+-- Returns E_SHE and the record of phlox.electrode_at.
+function phlox.to_she(E_measured, electrode, opts)
+  if type(E_measured) ~= "number" then error("phlox.to_she: the measured potential (V) must be a number", 2) end
+  opts = opts or {}
+  local T = temperature(opts, "phlox.to_she")
+  local info = phlox.electrode_at(electrode, T, opts.reference_at_25C, "phlox.to_she")
+  return E_measured + info.offset, info
 end
 
 --- Diagrams on top of speciate and map (stdlib/phlox/diagrams.lua): which

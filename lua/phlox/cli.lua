@@ -4,6 +4,45 @@
 local cli = {}
 local commands = {}
 
+-- `phlox COMMAND --help`: one text per command (the manual page, docs/phlox.1,
+-- is checked against these by tests/packaging/check_manpage.lua).
+cli.help = {
+  reaction = [[
+usage: phlox reaction EQUATION [--temperature C] [--pressure BAR] [--json]
+
+Thermodynamics of one balanced reaction from the species of the library:
+dG, dH, dS, log K and, when electrons take part, E (V vs SHE).  The element
+files of the elements named in the equation are loaded.
+
+  EQUATION              e.g. "Zn^2+ + 2 e- = Zn(s)" (quote it)
+  -T, --temperature C   temperature in degrees C (default 25)
+  -P, --pressure BAR    pressure in bar (default 1 bar up to 100 C, the
+                        saturation pressure above)
+  --json                one JSON object: T_K, P_bar, dG_kJ, logK, E0_V
+  -h, --help            print this help
+]],
+  check = [[
+usage: phlox check FILE...
+
+Validates element definition files: sandbox errors, fields, units, formulas,
+charges, duplicates, dfG/dfH/S consistency, reaction balance.  Each file
+sees the built-in species and those of the files before it.  Problems go to
+standard output as FILE:LINE: severity: message; exit status 1 on an error.
+
+  FILE                  an element definition file (.lua)
+  -h, --help            print this help
+]],
+  list = [[
+usage: phlox list [ELEMENT]
+
+Lists the species of the library (all, or those containing ELEMENT): formula,
+model, dfG in kJ/mol (or log K), file:line and source.
+
+  ELEMENT               an element symbol such as Fe (H and O allowed)
+  -h, --help            print this help
+]],
+}
+
 local function usage(msg)
   io.stderr:write("phlox: ", msg, "\n")
   return 2
@@ -123,6 +162,10 @@ end
 function cli.run(name, args)
   local cmd = commands[name]
   if not cmd then return usage("unknown command '" .. tostring(name) .. "'") end
+  if args[1] == "--help" or args[1] == "-h" then
+    io.write(cli.help[name])
+    return 0
+  end
   return cmd(args)
 end
 

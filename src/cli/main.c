@@ -33,6 +33,7 @@ static void usage(FILE *out)
           "                       thermodynamics of a reaction (dG, dH, dS, log K, E)\n"
           "  check FILE...        validate element definition files\n"
           "  list [ELEMENT]       species in the library (with state, model, source)\n"
+          "  (phlox COMMAND --help describes a command)\n"
           "\n"
           "options:\n"
           "  -e CODE              run CODE (may be given more than once)\n"
@@ -42,6 +43,10 @@ static void usage(FILE *out)
           "                       ':'-separated folders, after the --path ones)\n"
           "  -v, --version        print the version\n"
           "  -h, --help           print this help\n"
+          "  --                   end of options (the next argument is the script)\n"
+          "\n"
+          "environment:\n"
+          "  PHLOX_PATH           ':'-separated folders searched after the --path ones\n"
           "\n"
           "A thermodynamic diagram says what can form, not how fast it forms.\n",
           out);

@@ -153,13 +153,14 @@ typedef struct px_diagram_outlines {
 int px_diagram_map_union(const px_diagram_map *map, const int *field_class,
                          px_diagram_outlines **out);
 
-enum px_diagram_kind { PX_DIAGRAM_METAL = 0, PX_DIAGRAM_SOLID = 1, PX_DIAGRAM_DISSOLVED = 2 };
+enum px_diagram_kind { PX_DIAGRAM_METAL = 0, PX_DIAGRAM_SOLID = 1, PX_DIAGRAM_DISSOLVED = 2,
+                       PX_DIAGRAM_SULFIDE = 3 };
 enum px_diagram_domain { PX_DIAGRAM_IMMUNITY = 0, PX_DIAGRAM_PASSIVATION = 1,
-                         PX_DIAGRAM_CORROSION = 2 };
+                         PX_DIAGRAM_CORROSION = 2, PX_DIAGRAM_SULFIDE_FILM = 3 };
 
 /* Corrosion domains: kind[f] (enum px_diagram_kind) for every field f;
- * metal -> immunity, solid -> passivation, dissolved -> corrosion.  Loops'
- * cls is enum px_diagram_domain. */
+ * metal -> immunity, solid -> passivation, dissolved -> corrosion, sulfide
+ * -> sulfide film.  Loops' cls is enum px_diagram_domain. */
 int px_diagram_corrosion_domains(const px_diagram_map *map, const int *kind,
                                  px_diagram_outlines **out);
 
@@ -205,6 +206,9 @@ typedef struct px_diagram_grid {
     px_diagram_polyline *poly;
     size_t npt;
     double *px, *py;
+    unsigned char *pfail; /* per point: 1 if placed next to a negative label
+                             (a node or bisection point the callback could not
+                             label: a solver failure) */
     size_t nfield;     /* sorted by id */
     px_diagram_grid_field *field;
     /* statistics */
@@ -212,6 +216,7 @@ typedef struct px_diagram_grid {
     size_t ncross;     /* refined edge crossings */
     size_t nthird;     /* bisections that met a third id (a field thinner than a step) */
     size_t nmaxiter;   /* bisections stopped by max_iter */
+    size_t nfailcross; /* crossings placed next to a negative label */
     const px_allocator *alloc;
 } px_diagram_grid;
 
@@ -269,8 +274,10 @@ enum px_diagram_electrode {
 typedef struct px_diagram_electrode_info {
     const char *name;
     double offset_V;  /* its potential vs SHE at 25 C */
-    double dEdT_V_K;  /* temperature coefficient, NAN where not known reliably */
-    const char *source;
+    double dEdT_V_K;  /* isothermal temperature coefficient, V/K (NAN where not known) */
+    double T_min, T_max; /* K: where the coefficient may be used */
+    const char *source;  /* of the offset */
+    const char *dEdT_source;
 } px_diagram_electrode_info;
 
 /* NULL for an unknown electrode. */
@@ -280,5 +287,9 @@ const px_diagram_electrode_info *px_diagram_electrode_get(int electrode);
  * non-finite potential. */
 int px_diagram_electrode_to_she(int electrode, double e_ref_V, double *e_she_V);
 int px_diagram_electrode_from_she(int electrode, double e_she_V, double *e_ref_V);
+/* Offset vs SHE of the electrode at T (K), the electrode itself at T:
+ * offset + dEdT (T - 298.15).  PX_ERANGE outside [T_min, T_max] or without
+ * a coefficient (away from 25 C); PX_EINVAL for an unknown electrode. */
+int px_diagram_electrode_offset_at(int electrode, double T, double *offset_V);
 
 #endif

@@ -30,6 +30,7 @@ px_emap_options px_emap_options_default(void)
     o.E = 0.0;
     o.activity = PX_EMAP_DEFAULT_ACTIVITY;
     o.ligand_activity = PX_EMAP_DEFAULT_LIGAND;
+    o.ligands = px_ligand_states_default();
     return o;
 }
 
@@ -222,6 +223,7 @@ static int collect(const ctx *c, px_thermo_ws *ws, const px_db *db, int z, int z
         if (!made_of(f, z, zl)) continue;
         if (other && px_formula_count(f, other) > 0) continue;
         if (px_formula_listed(o->exclude, o->n_exclude, f->text)) continue;
+        if (!px_ligand_allows(&o->ligands, db, f, for_ligand ? other : z)) continue;
         if (!for_ligand && o->n_only > 0 && !px_formula_listed(o->only, o->n_only, f->text)) continue;
         cand *cd = &v[k];
         cd->db = (long)i;
@@ -307,10 +309,19 @@ static int water_lines(px_thermo_ws *ws, const px_db *db, px_emap *m, const px_e
     return PX_OK;
 }
 
+#define Z_S 16
+int px_emap_domain(const px_formula *f, int z)
+{
+    if (!f) return PX_DIAGRAM_CORROSION;
+    if (f->state == PX_STATE_AQ || f->state == PX_STATE_G || f->state == PX_STATE_E) return PX_DIAGRAM_CORROSION;
+    if (f->n_elem == 1 && f->elem[0].z == z) return PX_DIAGRAM_IMMUNITY;
+    if (px_formula_count(f, Z_S) > 0 && px_formula_count(f, Z_O) == 0) return PX_DIAGRAM_SULFIDE_FILM;
+    return PX_DIAGRAM_PASSIVATION;
+}
+
 /* Join the pieces of each species (same group) into outlines, and classify
- * the fields into corrosion domains: metal -> immunity, solid or liquid ->
- * passivation, dissolved or gas -> corrosion. */
-static int join_and_classify(px_emap *m)
+ * the fields into corrosion domains (px_emap_domain). */
+static int join_and_classify(px_emap *m, const px_db *db, int zM)
 {
     const px_diagram_map *dm = m->map;
     size_t nf = dm->nfield;
@@ -319,12 +330,10 @@ static int join_and_classify(px_emap *m)
     for (size_t f = 0; f < nf; f++) cls[f] = dm->field[f].group;
     int st = px_diagram_map_union(dm, cls, &m->joined);
     if (st == PX_OK) {
-        for (size_t f = 0; f < nf; f++) {
-            px_emap_kind k = m->info[f].kind;
-            cls[f] = k == PX_EMAP_METAL ? PX_DIAGRAM_METAL
-                     : (k == PX_EMAP_SOLID || k == PX_EMAP_LIQUID) ? PX_DIAGRAM_SOLID
-                                                                   : PX_DIAGRAM_DISSOLVED;
-        }
+        static const int kind_of_domain[] = {PX_DIAGRAM_METAL, PX_DIAGRAM_SOLID, PX_DIAGRAM_DISSOLVED,
+                                             PX_DIAGRAM_SULFIDE};
+        for (size_t f = 0; f < nf; f++)
+            cls[f] = kind_of_domain[px_emap_domain(&px_db_get(db, (size_t)m->info[f].species)->f, zM)];
         st = px_diagram_corrosion_domains(dm, cls, &m->domains);
     }
     free(cls);
@@ -536,7 +545,7 @@ int px_emap_build(px_thermo_ws *ws, const px_db *db, const char *element,
         if (!shown) m->absent[m->n_absent++] = cm[i].db;
     }
     water_lines(ws, db, m, o);
-    st = join_and_classify(m);
+    st = join_and_classify(m, db, zM);
     if (st != PX_OK) px_fail(msg, msglen, st, "map of %s: joining fields: %s", element, px_strerror(st));
 
 done:

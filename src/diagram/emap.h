@@ -14,6 +14,7 @@
 #define PX_EMAP_H
 #include "diagram/diagram.h"
 #include "thermo/thermo.h"
+#include "thermo/practice.h"
 
 typedef enum px_emap_axis { PX_AXIS_PH = 0, PX_AXIS_E = 1, PX_AXIS_LOGA = 2 } px_emap_axis;
 
@@ -45,6 +46,7 @@ typedef struct px_emap_options {
     const char *const *act_species; /* per-species activities */
     const double *act_values;
     size_t n_act;
+    px_ligand_states ligands;     /* ligand oxidation states kept (practice's default) */
 } px_emap_options;
 
 px_emap_options px_emap_options_default(void);
@@ -93,6 +95,13 @@ typedef struct px_emap {
 int px_emap_build(px_thermo_ws *ws, const px_db *db, const char *element,
                   const px_emap_options *opt, px_emap **out, char *msg, size_t msglen);
 void px_emap_free(px_emap *m); /* NULL ok */
+
+/* Corrosion domain (enum px_diagram_domain) of a field of species f on a
+ * map of element z: the element itself, solid or liquid -> immunity; a
+ * solid with sulfur and no oxygen (a metal sulfide) -> sulfide film;
+ * other solids and liquids -> passivation; dissolved or gas -> corrosion.
+ * The one rule: phlox.plot asks it through core.domain_of. */
+int px_emap_domain(const px_formula *f, int z);
 
 /* Davies (1962) log10 activity coefficient of charge z at ionic strength I,
  * with the Debye-Hueckel A (log10 basis) at T. */

@@ -47,6 +47,7 @@ void px_diagram_grid_free(px_diagram_grid *g)
     px_free(a, g->poly);
     px_free(a, g->px);
     px_free(a, g->py);
+    px_free(a, g->pfail);
     px_free(a, g->field);
     px_free(a, g);
 }
@@ -63,7 +64,8 @@ typedef struct gctx {
     void *user;
     px_diagram_grid *g;
     double *x, *y; /* points: crossings and cell centres */
-    size_t np, capx, capy;
+    unsigned char *bad; /* per point: placed next to a negative (failed) label */
+    size_t np, capx, capy, capb;
     seg *s;
     size_t ns, caps;
 } gctx;
@@ -71,8 +73,10 @@ typedef struct gctx {
 static int add_point(gctx *c, double x, double y, size_t *idx)
 {
     if (px_dg_reserve(c->a, (void **)&c->x, &c->capx, c->np + 1, sizeof *c->x) ||
-        px_dg_reserve(c->a, (void **)&c->y, &c->capy, c->np + 1, sizeof *c->y))
+        px_dg_reserve(c->a, (void **)&c->y, &c->capy, c->np + 1, sizeof *c->y) ||
+        px_dg_reserve(c->a, (void **)&c->bad, &c->capb, c->np + 1, sizeof *c->bad))
         return PX_ENOMEM;
+    c->bad[c->np] = 0;
     c->x[c->np] = x;
     c->y[c->np] = y;
     *idx = c->np++;
@@ -93,6 +97,7 @@ typedef struct edge_probe {
     gctx *c;
     double x0, y0, x1, y1;
     int la, lb, third;
+    int failed; /* a probe got a negative (failed) label */
     int status; /* the label callback's failure, kept apart from the bisection's */
 } edge_probe;
 
@@ -101,18 +106,20 @@ static int edge_side(double t, void *user, int *high)
     edge_probe *e = user;
     int id, st = call(e->c, e->x0 + t * (e->x1 - e->x0), e->y0 + t * (e->y1 - e->y0), &id);
     if (st) return e->status = st;
+    e->failed |= id < 0;
     *high = id != e->la;
     if (*high) e->third = id != e->lb;
     return PX_OK;
 }
 
 /* Bisection (num/num.h) on the segment from (x0,y0) [label la] to (x1,y1)
- * [label lb] until it is no longer than tol in the axis's units. */
+ * [label lb] until it is no longer than tol in the axis's units.  A point
+ * placed next to a failed (negative) label is marked bad. */
 static int refine(gctx *c, double x0, double y0, int la, double x1, double y1, int lb,
                   double tol, int max_iter, size_t *idx)
 {
     double lo = 0, hi = 1, len = fmax(fabs(x1 - x0), fabs(y1 - y0));
-    edge_probe e = {c, x0, y0, x1, y1, la, lb, 0, PX_OK};
+    edge_probe e = {c, x0, y0, x1, y1, la, lb, 0, la < 0 || lb < 0, PX_OK};
     px_num_root_options o = {tol / len, 0.0, 0.0, max_iter};
     int st = px_num_root_bisect(edge_side, &e, &lo, &hi, &o, NULL);
     if (e.status != PX_OK) return e.status;
@@ -121,7 +128,12 @@ static int refine(gctx *c, double x0, double y0, int la, double x1, double y1, i
     if (e.third) c->g->nthird++;
     c->g->ncross++;
     double t = 0.5 * (lo + hi);
-    return add_point(c, x0 + t * (x1 - x0), y0 + t * (y1 - y0), idx);
+    st = add_point(c, x0 + t * (x1 - x0), y0 + t * (y1 - y0), idx);
+    if (st == PX_OK && e.failed) {
+        c->bad[*idx] = 1;
+        c->g->nfailcross++;
+    }
+    return st;
 }
 
 /* Add segment p-q separating la | lb; `side` is a point on la's side. */
@@ -332,10 +344,12 @@ static int chain(gctx *c)
     g->npt = npts;
     g->px = px_alloc(c->a, (npts ? npts : 1) * sizeof *g->px);
     g->py = px_alloc(c->a, (npts ? npts : 1) * sizeof *g->py);
-    if (!g->px || !g->py) goto done;
+    g->pfail = px_alloc(c->a, (npts ? npts : 1) * sizeof *g->pfail);
+    if (!g->px || !g->py || !g->pfail) goto done;
     for (size_t i = 0; i < npts; i++) {
         g->px[i] = c->x[pts[i]];
         g->py[i] = c->y[pts[i]];
+        g->pfail[i] = c->bad[pts[i]];
     }
     st = PX_OK;
 done:
@@ -449,6 +463,7 @@ int px_diagram_grid_map(const px_diagram_window *w, px_diagram_label_fn fn, void
                 }
                 size_t m;
                 if ((st = add_point(&c, mx / nc, my / nc, &m))) goto done;
+                for (int k = 0; k < nc; k++) c.bad[m] |= c.bad[ex[which[k]]];
                 for (int k = 0; k < nc && !st; k++) {
                     int e = which[k];
                     st = add_seg(&c, m, ex[e], lab[e], lab[(e + 1) % 4], cxs[e], cys[e]);
@@ -469,6 +484,7 @@ done:
     px_free(c.a, vc);
     px_free(c.a, c.x);
     px_free(c.a, c.y);
+    px_free(c.a, c.bad);
     px_free(c.a, c.s);
     return st;
 }

@@ -222,6 +222,7 @@ int px_diagram_corrosion_domains(const px_diagram_map *map, const int *kind,
         case PX_DIAGRAM_METAL: cls[f] = PX_DIAGRAM_IMMUNITY; break;
         case PX_DIAGRAM_SOLID: cls[f] = PX_DIAGRAM_PASSIVATION; break;
         case PX_DIAGRAM_DISSOLVED: cls[f] = PX_DIAGRAM_CORROSION; break;
+        case PX_DIAGRAM_SULFIDE: cls[f] = PX_DIAGRAM_SULFIDE_FILM; break;
         default: st = PX_EINVAL;
         }
     }

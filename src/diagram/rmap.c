@@ -24,6 +24,7 @@ px_rmap_options px_rmap_options_default(void)
     o.ligand_total = 1e-3;
     o.model = PX_EQUIL_DAVIES;
     o.threads = 1;
+    o.ligands = px_ligand_states_default();
     return o;
 }
 
@@ -84,6 +85,9 @@ static int label_node(double x, double y, void *user, int *id)
         *id = -1;
         return 0;
     }
+    px_equil_stats es;
+    if (px_equil_work_get_stats(c->s->work, &es) == PX_OK && es.ionic_strength > c->stats->I_max)
+        c->stats->I_max = es.ionic_strength;
     size_t nb = c->s->n_basis;
     long best_solid = -1, best_aq = -1;
     double amt_solid = 0, amt_aq = 0;
@@ -189,6 +193,8 @@ int px_rmap_build(px_thermo_ws *ws, const px_db *db, const char *element, const 
     so.redox_mode = PX_SPEC_REDOX_E;
     so.E = 0.5 * (o->window.ymin + o->window.ymax);
     so.model = o->model;
+    so.ligands = o->ligands;
+    so.allow_inhibited = o->allow_inhibited;
     /* Dissolved O2, H2 and H2O2 have no mass balance (water is the
      * solvent), so outside water's stability field at a fixed E their
      * molalities have no bound; the exact map leaves them out too (they are
@@ -236,6 +242,7 @@ int px_rmap_build(px_thermo_ws *ws, const px_db *db, const char *element, const 
             }
             stats->failures += bands[t].stats.failures;
             stats->cold_retries += bands[t].stats.cold_retries;
+            if (bands[t].stats.I_max > stats->I_max) stats->I_max = bands[t].stats.I_max;
             if (t > 0) px_spec_free(bands[t].c.s);
         }
         if (st == PX_OK) {

@@ -22,6 +22,8 @@ typedef struct px_rmap_options {
     const char *const *exclude;
     size_t n_exclude;
     int threads;              /* worker threads for the grid nodes (default 1) */
+    px_ligand_states ligands; /* ligand oxidation states kept (practice's default) */
+    int allow_inhibited;      /* 1: inhibited solids may precipitate (thermo/practice.h) */
 } px_rmap_options;
 
 px_rmap_options px_rmap_options_default(void);
@@ -29,6 +31,7 @@ px_rmap_options px_rmap_options_default(void);
 typedef struct px_rmap_stats {
     size_t solves, failures; /* nodes where the solver did not converge: id -1 */
     size_t cold_retries;     /* warm starts that ended over-saturated, solved again cold */
+    double I_max;            /* largest ionic strength of a converged solve, mol/kg */
 #define PX_RMAP_FAIL_KEEP 8
     double fail_x[PX_RMAP_FAIL_KEEP], fail_y[PX_RMAP_FAIL_KEEP]; /* first failing points */
 } px_rmap_stats;

@@ -49,6 +49,7 @@ px_spec_options px_spec_options_default(void)
     o.pH = 7.0;
     o.solids = 1;
     o.model = PX_EQUIL_DAVIES;
+    o.ligands = px_ligand_states_default();
     o.solver = px_equil_options_default();
     return o;
 }
@@ -79,12 +80,12 @@ static const char *const conventional_basis[][2] = {
  * it, else the aqueous species with one atom of z,
  * otherwise only H and O, fewest atoms, then smallest |charge|, then the
  * first in the database (deterministic). */
-static long choose_basis(const px_db *db, int z)
+static long choose_basis(const px_db *db, int z, const px_ligand_states *ls)
 {
     for (size_t k = 0; k < sizeof conventional_basis / sizeof conventional_basis[0]; k++)
         if (px_element_z(conventional_basis[k][0]) == z) {
             long i = px_db_index(db, conventional_basis[k][1]);
-            if (i >= 0) return i;
+            if (i >= 0 && px_ligand_allows(ls, db, &px_db_get(db, (size_t)i)->f, 0)) return i;
         }
     long best = -1;
     double best_atoms = INFINITY;
@@ -99,6 +100,7 @@ static long choose_basis(const px_db *db, int z)
             atoms += f->elem[e].n;
         }
         int q = abs(f->charge);
+        ok = ok && px_ligand_allows(ls, db, f, 0);
         if (ok && (atoms < best_atoms || (atoms == best_atoms && q < best_q))) {
             best = (long)i;
             best_atoms = atoms;
@@ -118,6 +120,28 @@ static int set_activity_model(px_spec *s, const px_water_state *w, double T, px_
     if (!isfinite(act.bdot)) act.bdot = 0.0;
     act.water = model == PX_EQUIL_IDEAL ? PX_EQUIL_WATER_UNITY : PX_EQUIL_WATER_IDEAL;
     return px_equil_system_set_activity(s->sys, &act);
+}
+
+/* SIT: eps(j,k) of every cation-anion pair of the system from the built-in
+ * table (equil_sit_data.c, 25 C values); pairs the table lacks keep eps = 0
+ * and are counted (Grenthe, Plyasunov and Spahiu 1997: only ions of
+ * opposite charge interact specifically). */
+static void set_sit_pairs(px_spec *s, const px_db *db)
+{
+    for (size_t j = 0; j < s->n_species; j++) {
+        const px_formula *fj = &px_db_get(db, (size_t)s->db_index[j])->f;
+        if (fj->state != PX_STATE_AQ || fj->charge <= 0) continue;
+        for (size_t k = 0; k < s->n_species; k++) {
+            const px_formula *fk = &px_db_get(db, (size_t)s->db_index[k])->f;
+            if (fk->state != PX_STATE_AQ || fk->charge >= 0) continue;
+            double eps;
+            if (px_equil_sit_lookup(fj->text, fk->text, &eps) == PX_OK &&
+                px_equil_system_set_sit(s->sys, j, k, eps) == PX_OK)
+                s->sit_pairs++;
+            else
+                s->sit_missing++;
+        }
+    }
 }
 
 static int eval_logk(px_spec *s, px_thermo_ws *ws, const px_db *db, double T, double P, char *msg,
@@ -202,7 +226,7 @@ int px_spec_build(px_thermo_ws *ws, const px_db *db, const px_spec_options *o, p
             goto fail;
         }
         s->elem_z[k + 3] = z;
-        bidx[k + 3] = o->basis[k] ? px_db_index(db, o->basis[k]) : choose_basis(db, z);
+        bidx[k + 3] = o->basis[k] ? px_db_index(db, o->basis[k]) : choose_basis(db, z, &o->ligands);
         if (bidx[k + 3] < 0) {
             st = px_fail(msg, msglen, PX_ENOTFOUND, "no aqueous basis species for %s%s%s", o->element[k],
                       o->basis[k] ? ": " : "", o->basis[k] ? o->basis[k] : "");
@@ -238,6 +262,7 @@ int px_spec_build(px_thermo_ws *ws, const px_db *db, const px_spec_options *o, p
             ok = in;
         }
         if (!ok || px_formula_listed(o->exclude, o->n_exclude, sp->f.text)) continue;
+        if (!px_ligand_allows(&o->ligands, db, &sp->f, 0)) continue; /* ligand kept in its form */
         if (sp->f.state == PX_STATE_L) continue; /* other liquids than water: not modelled */
         double *nu = s->nu + m * nb;
         if (px_basis_formation(bf, nb, &sp->f, nu, NULL, 0) != PX_OK) continue;
@@ -258,12 +283,14 @@ int px_spec_build(px_thermo_ws *ws, const px_db *db, const px_spec_options *o, p
         case PX_STATE_L: es.phase = PX_EQUIL_WATER; break;
         default: es.phase = PX_EQUIL_AQ; break;
         }
-        if (es.phase == PX_EQUIL_SOLID && (!o->solids || px_formula_listed(o->suppress, o->n_suppress, sp->f.text)))
+        if (es.phase == PX_EQUIL_SOLID && (!o->solids || px_formula_listed(o->suppress, o->n_suppress, sp->f.text) ||
+                                           (!o->allow_inhibited && px_inhibited_at(&sp->f, o->T))))
             es.flags |= PX_EQUIL_SUPPRESSED;
         st = px_equil_system_set_species(s->sys, j, &es);
         if (st != PX_OK) px_fail(msg, msglen, st, "species %s: %s", sp->f.text, px_strerror(st));
     }
     if (st != PX_OK) goto fail;
+    if (o->model == PX_EQUIL_SIT) set_sit_pairs(s, db);
     st = px_spec_set_TP(s, ws, db, o->T, o->P, o->model, msg, msglen);
     if (st != PX_OK) goto fail;
 

@@ -11,6 +11,7 @@
 #define PX_SPECIATE_H
 #include "equil/equil.h"
 #include "thermo/thermo.h"
+#include "thermo/practice.h"
 
 typedef enum { PX_SPEC_PH_CHARGE = 0, PX_SPEC_PH_FIXED } px_spec_ph;
 typedef enum { PX_SPEC_REDOX_NONE = 0, PX_SPEC_REDOX_E, PX_SPEC_REDOX_PE, PX_SPEC_REDOX_GAS } px_spec_redox;
@@ -40,6 +41,8 @@ typedef struct px_spec_options {
     const char *suppress[PX_SPEC_MAX_ITEMS]; /* solids never precipitated (metastable) */
     const char *exclude[PX_SPEC_MAX_ITEMS];  /* species left out entirely */
     px_equil_model model;           /* activity model (A, B, B-dot from T) */
+    px_ligand_states ligands;       /* ligand oxidation states kept (thermo/practice.h) */
+    int allow_inhibited;            /* 1: inhibited solids (practice.h) may precipitate */
     px_equil_options solver;
 } px_spec_options;
 
@@ -55,6 +58,7 @@ typedef struct px_spec {
     double *nu;       /* n_species x n_basis formation coefficients */
     int *elem_z;      /* component i -> element (0 for H2O, H+, e-) */
     int redox;        /* electrons take part */
+    size_t sit_pairs, sit_missing; /* SIT: cation-anion pairs with an eps, and without (eps 0) */
     char error[512];
 } px_spec;
 

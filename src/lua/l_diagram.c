@@ -7,6 +7,7 @@
 #include "diagram/emap.h"
 #include "diagram/rmap.h"
 #include "lua/bindings.h"
+#include "lua/practice.h"
 #include <lauxlib.h>
 #include <math.h>
 #include <stdlib.h>
@@ -16,7 +17,6 @@ int px_lua_check_database(lua_State *L, int arg, px_db **db, px_thermo_ws **ws);
 
 static const char *const axis_names[] = {"pH", "E", "loga", NULL};
 static const char *const kind_names[] = {"metal", "solid", "aqueous", "gas", "liquid"};
-static const char *const domain_names[] = {"immunity", "passivation", "corrosion"};
 
 static double optnum(lua_State *L, int t, const char *k, double dflt)
 {
@@ -130,6 +130,7 @@ static int l_map(lua_State *L)
     lua_pop(L, 1);
     o.exclude = optlist(L, 2, "exclude", &o.n_exclude);
     o.only = optlist(L, 2, "only", &o.n_only);
+    px_lua_ligand_states(L, 2, "phlox.map", &o.ligands);
     /* per-species activities: {["Fe^2+"] = 1e-5, ...} sorted for determinism */
     if (lua_getfield(L, 2, "activities") == LUA_TTABLE) {
         size_t n = 0;
@@ -181,6 +182,9 @@ static int l_map(lua_State *L)
         lua_setfield(L, -2, "species");
         lua_pushstring(L, kind_names[info->kind]);
         lua_setfield(L, -2, "kind");
+        lua_pushstring(L, px_lua_domain_name(px_emap_domain(&px_db_get(db, (size_t)info->species)->f,
+                                                            px_element_z(element))));
+        lua_setfield(L, -2, "domain");
         if (info->ligand >= 0) {
             lua_pushstring(L, px_db_get(db, (size_t)info->ligand)->f.text);
             lua_setfield(L, -2, "ligand");
@@ -256,7 +260,7 @@ static int l_map(lua_State *L)
     for (size_t i = 0; i < dom->nloop; i++) {
         const px_diagram_loop *lp = &dom->loop[i];
         lua_createtable(L, 0, 5);
-        lua_pushstring(L, domain_names[lp->cls]);
+        lua_pushstring(L, px_lua_domain_name(lp->cls));
         lua_setfield(L, -2, "domain");
         push_xy(L, dom->x + lp->first, dom->y + lp->first, lp->n, NULL);
         setnum(L, "area", fabs(lp->area));
@@ -267,6 +271,10 @@ static int l_map(lua_State *L)
     lua_setfield(L, -2, "domains");
     lua_pushinteger(L, (lua_Integer)dm->nunmatched);
     lua_setfield(L, -2, "unmatched_edges");
+    {
+        int zs[2] = {px_element_z(element), o.ligand ? px_element_z(o.ligand) : 0};
+        px_lua_push_ligand_text(L, &o.ligands, zs, 2, zs[0]);
+    }
     px_emap_free(m);
     return 1;
 }
@@ -280,7 +288,7 @@ static int l_map(lua_State *L)
  * solver failed) and statistics. */
 static int l_grid_map(lua_State *L)
 {
-    static const char *const models[] = {"ideal", "davies", "bdot", NULL};
+    static const char *const models[] = {"ideal", "davies", "bdot", "sit", NULL};
     px_db *db;
     px_thermo_ws *ws;
     px_lua_check_database(L, 1, &db, &ws);
@@ -314,8 +322,12 @@ static int l_grid_map(lua_State *L)
     lua_getfield(L, 2, "activity");
     int model = luaL_checkoption(L, -1, "davies", models);
     lua_pop(L, 1);
-    o.model = model == 0 ? PX_EQUIL_IDEAL : model == 1 ? PX_EQUIL_DAVIES : PX_EQUIL_BDOT;
+    o.model = (px_equil_model)model; /* same order as px_equil_model */
     o.exclude = optlist(L, 2, "exclude", &o.n_exclude);
+    px_lua_ligand_states(L, 2, "phlox.grid_map", &o.ligands);
+    lua_getfield(L, 2, "allow_inhibited");
+    o.allow_inhibited = lua_toboolean(L, -1);
+    lua_pop(L, 1);
 
     px_diagram_grid *g;
     px_rmap_stats stats;
@@ -343,6 +355,11 @@ static int l_grid_map(lua_State *L)
     lua_setfield(L, -2, "failures");
     lua_pushinteger(L, (lua_Integer)stats.cold_retries);
     lua_setfield(L, -2, "cold_retries");
+    setnum(L, "ionic_strength_max", stats.I_max);
+    {
+        int zs[2] = {px_element_z(element), o.ligand ? px_element_z(o.ligand) : 0};
+        px_lua_push_ligand_text(L, &o.ligands, zs, 2, zs[0]);
+    }
     lua_newtable(L); /* where the solver failed (first few), for diagnosis */
     for (size_t k = 0; k < stats.failures && k < PX_RMAP_FAIL_KEEP; k++) {
         lua_createtable(L, 2, 0);
@@ -409,6 +426,18 @@ static int l_grid_map(lua_State *L)
         lua_rawseti(L, -2, 2);
         lua_setfield(L, -2, "between");
         push_xy(L, g->px + pl->first, g->py + pl->first, pl->n, NULL);
+        int through = pl->id_a < 0 || pl->id_b < 0;
+        for (size_t k = 0; k < pl->n; k++) through |= g->pfail[pl->first + k];
+        lua_pushboolean(L, through);
+        lua_setfield(L, -2, "through_failed");
+        if (through) { /* which points sit next to a failed solve */
+            lua_createtable(L, (int)pl->n, 0);
+            for (size_t k = 0; k < pl->n; k++) {
+                lua_pushboolean(L, pl->id_a < 0 || pl->id_b < 0 || g->pfail[pl->first + k]);
+                lua_rawseti(L, -2, (lua_Integer)k + 1);
+            }
+            lua_setfield(L, -2, "failed_points");
+        }
         lua_rawseti(L, -2, (lua_Integer)b + 1);
     }
     lua_setfield(L, -2, "boundaries");
@@ -418,7 +447,7 @@ static int l_grid_map(lua_State *L)
     return 1;
 }
 
-/* core.electrodes() -> { {name, offset, dEdT, source}, ... } (index 1 = SHE) */
+/* core.electrodes() -> { {name, offset, dEdT, T_min, T_max, source, dEdT_source}, ... } (index 1 = SHE) */
 static int l_electrodes(lua_State *L)
 {
     lua_newtable(L);
@@ -431,10 +460,32 @@ static int l_electrodes(lua_State *L)
         lua_pushnumber(L, e->offset_V);
         lua_setfield(L, -2, "offset");
         setnum(L, "dEdT", e->dEdT_V_K);
+        setnum(L, "T_min", e->T_min);
+        setnum(L, "T_max", e->T_max);
         lua_pushstring(L, e->source ? e->source : "");
         lua_setfield(L, -2, "source");
+        lua_pushstring(L, e->dEdT_source ? e->dEdT_source : "");
+        lua_setfield(L, -2, "dEdT_source");
         lua_rawseti(L, -2, i + 1);
     }
+    return 1;
+}
+
+/* core.electrode_offset(index, T) -> offset (V vs SHE at T) | nil, message */
+static int l_electrode_offset(lua_State *L)
+{
+    int i = (int)luaL_checkinteger(L, 1) - 1;
+    double T = luaL_checknumber(L, 2), off;
+    const px_diagram_electrode_info *e = px_diagram_electrode_get(i);
+    if (!e) return luaL_argerror(L, 1, "no such electrode");
+    int st = px_diagram_electrode_offset_at(i, T, &off);
+    if (st != PX_OK) {
+        luaL_pushfail(L);
+        lua_pushfstring(L, "no temperature coefficient of the %s electrode at %f C (known from %f to %f C)", e->name,
+                        T - 273.15, e->T_min - 273.15, e->T_max - 273.15);
+        return 2;
+    }
+    lua_pushnumber(L, off);
     return 1;
 }
 
@@ -447,6 +498,6 @@ static int l_nernst_slope(lua_State *L)
 void px_lua_open_diagram(lua_State *L)
 {
     static const luaL_Reg funcs[] = {
-        {"map", l_map}, {"grid_map", l_grid_map}, {"electrodes", l_electrodes}, {"nernst_slope", l_nernst_slope}, {NULL, NULL}};
+        {"map", l_map}, {"grid_map", l_grid_map}, {"electrodes", l_electrodes}, {"electrode_offset", l_electrode_offset}, {"nernst_slope", l_nernst_slope}, {NULL, NULL}};
     luaL_setfuncs(L, funcs, 0);
 }

@@ -9,6 +9,7 @@
 #include "core/status.h"
 #include "equil/speciate.h"
 #include "lua/bindings.h"
+#include "lua/practice.h"
 #include <lauxlib.h>
 #include <math.h>
 #include <string.h>
@@ -134,6 +135,10 @@ static int l_speciate(lua_State *L)
     o.model = (px_equil_model)luaL_checkoption(L, -1, "davies", models);
     lua_pop(L, 1);
     o.solver.max_iter = (size_t)optnum(L, 2, "max_iter", (double)o.solver.max_iter, NULL);
+    px_lua_ligand_states(L, 2, "phlox.speciate", &o.ligands);
+    lua_getfield(L, 2, "allow_inhibited");
+    o.allow_inhibited = lua_toboolean(L, -1);
+    lua_pop(L, 1);
 
     px_spec *s;
     char msg[512];
@@ -172,6 +177,28 @@ static int l_speciate(lua_State *L)
     setnum(L, "log_aw", stats.log_aw);
     setnum(L, "iterations", (double)stats.iterations);
     setnum(L, "residual", stats.residual_norm);
+    lua_pushstring(L, models[o.model]);
+    lua_setfield(L, -2, "activity_model");
+    if (o.model == PX_EQUIL_SIT) {
+        setnum(L, "sit_pairs", (double)s->sit_pairs);
+        setnum(L, "sit_missing", (double)s->sit_missing);
+    }
+    {
+        int zs[PX_SPEC_MAX_ITEMS];
+        for (size_t k = 0; k < o.n_totals; k++) zs[k] = px_element_z(o.element[k]);
+        if (s->redox) px_lua_push_ligand_text(L, &o.ligands, zs, o.n_totals, 0);
+    }
+    /* solids kept from precipitating because practice finds them inhibited */
+    lua_newtable(L);
+    int ninh = 0;
+    for (size_t j = 0; j < m; j++) {
+        const px_species *sp = px_db_get(db, (size_t)s->db_index[j]);
+        if (!o.allow_inhibited && o.solids && px_inhibited_at(&sp->f, o.T)) {
+            lua_pushstring(L, sp->f.text);
+            lua_rawseti(L, -2, ++ninh);
+        }
+    }
+    lua_setfield(L, -2, "inhibited");
     /* species and solids */
     lua_createtable(L, (int)m, 0);
     int ns = 0;

@@ -42,7 +42,16 @@ end
 
 -- The options of phlox.speciate that pass through unchanged.
 local PASS = { "T", "T_C", "P", "E", "pe", "redox_gas", "redox_log_f", "fugacities", "basis",
-               "suppress", "exclude", "max_iter" }
+               "suppress", "exclude", "max_iter", "ligand_redox", "allow_inhibited" }
+
+-- A curve's stamp: its own held-constant line, then the caveats of its
+-- solves (phlox.merge_notes).
+local function curve_stamp(notes, held)
+  local out = {}
+  for _, l in ipairs(held or {}) do out[#out + 1] = l end
+  for _, l in ipairs(phlox.merge_notes(notes, { held = true })) do out[#out + 1] = l end
+  return out
+end
 
 local function base_speciate(opts)
   local s = { library = opts.library }
@@ -141,7 +150,7 @@ function diagrams.fractions(opts)
 
   local base = base_speciate(opts)
   base.solids = opts.solids == true
-  local shares, failures = {}, {}
+  local shares, failures, notes = {}, {}, {}
   local t0 = os.clock()
   for i, x in ipairs(xs) do
     local s = copy(base)
@@ -164,6 +173,7 @@ function diagrams.fractions(opts)
       end
     end
     local r, err = phlox.speciate(s)
+    if r then notes[#notes + 1] = { notes = r.notes, activity = r.activity } end
     if r and r.elements[el] then
       shares[i] = r.elements[el].share
     else
@@ -201,7 +211,7 @@ function diagrams.fractions(opts)
              y = { name = "fraction of " .. el, min = 0, max = 1 } },
     conditions = { T_C = T_C_of(opts), [el .. " total (mol/kg)"] = total, pH = xkind ~= "pH" and opts.pH or nil,
                    activity_model = base.activity },
-    stamp = held,
+    stamp = curve_stamp(notes, held),
     stats = { solves = #xs, seconds = seconds },
   }
 end
@@ -240,7 +250,7 @@ function diagrams.solubility(opts)
   local base = base_speciate(opts)
   base.T_C = nil
   base.solids = true
-  local series, failures, retried = {}, {}, 0
+  local series, failures, retried, notes = {}, {}, 0, {}
   local t0 = os.clock()
   for _, tc in ipairs(temps) do
     local y, solids = {}, {}
@@ -257,6 +267,7 @@ function diagrams.solubility(opts)
       for _ = 0, RETRIES do
         s.totals[el] = put
         r, err = phlox.speciate(s)
+        if r then notes[#notes + 1] = { notes = r.notes, activity = r.activity } end
         e = r and r.elements[el]
         if e then break end
         put = put * RETRY_FACTOR
@@ -287,7 +298,7 @@ function diagrams.solubility(opts)
     axes = { x = { name = "pH", min = xs[1], max = xs[#xs] },
              y = { name = "dissolved " .. el, unit = "mol/kg", log = true } },
     conditions = { [el .. " put in (mol/kg)"] = total, activity_model = base.activity },
-    stamp = held,
+    stamp = curve_stamp(notes, held),
     stats = { points = #xs * #temps, retries = retried, seconds = os.clock() - t0 },
   }
 end
@@ -390,30 +401,11 @@ function diagrams.pH_ligand(opts)
   return m
 end
 
--- Short names used on site for the electrodes of phlox.electrodes().
-diagrams.electrode_names = {
-  SHE = "standard hydrogen electrode",
-  SCE = "saturated calomel (Hg/Hg2Cl2, saturated KCl)",
-  ["Ag/AgCl"] = "Ag/AgCl, saturated KCl",
-  ["Ag/AgCl sat"] = "Ag/AgCl, saturated KCl",
-  ["Ag/AgCl 3.5M"] = "Ag/AgCl, 3.5 mol/L KCl",
-  CSE = "Cu/CuSO4, saturated",
-  ["Cu/CuSO4"] = "Cu/CuSO4, saturated",
-}
+-- Short names of the electrodes (phlox.electrode_names).
+diagrams.electrode_names = phlox.electrode_names
 
 --- The reference electrode record for a short or full name.
-function diagrams.electrode(name)
-  local all = phlox.electrodes()
-  local e = all[name] or all[diagrams.electrode_names[name] or ""]
-  if not e then
-    local known = {}
-    for k in pairs(diagrams.electrode_names) do known[#known + 1] = k end
-    table.sort(known)
-    error(("unknown reference electrode '%s' (known: %s, or the full names of phlox.electrodes())")
-          :format(tostring(name), table.concat(known, ", ")), 3)
-  end
-  return e
-end
+function diagrams.electrode(name) return phlox.electrode(name) end
 
 -- The E interval of a field polygon on the vertical line at x that holds E
 -- (crossings by the half-open rule of ray casting, paired bottom-up, so a
@@ -437,10 +429,11 @@ end
 --   diagrams.where { map = m, pH = 5, E = -0.80, reference = "SCE" }
 -- `map` has E on its y axis and pH (give pH) or log a(ligand) (give loga)
 -- on x.  `reference` is a short name (SHE, SCE, Ag/AgCl, Ag/AgCl 3.5M,
--- CSE) or a full name of phlox.electrodes(); default SHE.  The offsets are
--- for electrodes at 25 °C; on a map at another temperature the call needs
--- reference_at_25C = true (an external electrode kept at room temperature;
--- the thermal junction potential is not included).
+-- CSE) or a full name of phlox.electrodes(); default SHE.  On a map at
+-- another temperature the offset is corrected with the electrode's
+-- temperature coefficient where it is known (phlox.electrode_at), else the
+-- call needs reference_at_25C = true (an external electrode kept at room
+-- temperature; the thermal junction potential is not included).
 -- Returns { species, kind, E_SHE, E_measured, reference = {name, offset,
 -- source}, field, E_range = {lo, hi} (the field's extent in E at that
 -- x), margin = {below, above} in V } or nil, message outside the window.
@@ -458,12 +451,7 @@ function diagrams.where(opts)
     if type(x) ~= "number" then fail(where, "loga (the x value, a number) expected") end
   end
   if type(opts.E) ~= "number" then fail(where, "E (the measured potential, V) expected") end
-  local e = diagrams.electrode(opts.reference or "SHE")
-  if e.offset ~= 0 and m.T and math.abs(m.T - 298.15) > 0.5 and not opts.reference_at_25C then
-    fail(where, ("the %s offset is for 25 °C and the map is at %.1f °C: set reference_at_25C = true if the "
-      .. "electrode is kept at room temperature (its thermal junction potential is not included)")
-      :format(e.name, m.T - T0C))
-  end
+  local e = phlox.electrode_at(opts.reference or "SHE", m.T, opts.reference_at_25C, where)
   local E = opts.E + e.offset -- E_SHE = E_ref + offset
   if x < m.x.min or x > m.x.max or E < m.y.min or E > m.y.max then
     return nil, ("(%g, %.4f V vs SHE) is outside the map's window"):format(x, E)
@@ -473,7 +461,7 @@ function diagrams.where(opts)
   local lo, hi = span_at(field, x, E)
   return {
     species = sp, kind = field.kind, field = field, E_SHE = E, E_measured = opts.E,
-    reference = { name = e.name, offset = e.offset, source = e.source },
+    reference = { name = e.name, offset = e.offset, source = e.source, valid = e.valid, text = e.text },
     E_range = lo and { lo, hi } or nil,
     margin = lo and { E - lo, hi - E } or nil,
   }

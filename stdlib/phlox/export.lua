@@ -22,12 +22,14 @@ local function cell(v, col)
 end
 
 --- Write rows (a sequence of tables keyed by column name) as CSV.
--- opts.columns: the column order (required); opts.conditions: stamped.
+-- opts.columns: the column order (required); opts.conditions: stamped;
+-- opts.from: the result(s) the rows come from, whose caveats (stamp lines)
+-- become "# note:" lines (default: every caveat of this run).
 function export.csv(path, rows, opts)
   assert(type(path) == "string", "export.csv: path must be a string")
   assert(type(rows) == "table", "export.csv: rows must be a table")
   local columns = assert(opts and opts.columns, "export.csv: opts.columns is required")
-  local lines = provenance.comment_lines(provenance.stamp(opts.conditions))
+  local lines = provenance.comment_lines(provenance.stamp(opts.conditions, opts.from))
   lines[#lines + 1] = "# " .. CAUTION
   local head = {}
   for i, c in ipairs(columns) do head[i] = cell(c, c) end
@@ -43,10 +45,11 @@ function export.csv(path, rows, opts)
 end
 
 --- Write a value as JSON: { provenance = ..., caution = ..., data = value }.
+-- opts.conditions and opts.from as export.csv (notes in provenance.notes).
 function export.json(path, value, opts)
   assert(type(path) == "string", "export.json: path must be a string")
   local doc = {
-    provenance = provenance.stamp(opts and opts.conditions),
+    provenance = provenance.stamp(opts and opts.conditions, opts and opts.from),
     caution = CAUTION,
     data = value,
   }

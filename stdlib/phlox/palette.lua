@@ -111,11 +111,14 @@ palette.water = palette.lch(38, 40, 262)        -- water stability lines (dashed
 palette.neutral = palette.lch(45, 0, 0)         -- neutral pH at T (dotted)
 palette.label = palette.lch(12, 0, 0)
 
--- Corrosion domains: three fills far apart in lightness and hue.
+-- Corrosion domains: fills far apart in lightness and hue; sulfide films
+-- (not passivation: they do not protect against hydrogen uptake) a dull
+-- olive between passivation and corrosion in lightness.
 palette.domain = {
   immunity    = palette.lch(92, 10, 240),
   passivation = palette.lch(80, 30, 85),
   corrosion   = palette.lch(64, 32, 335),
+  ["sulfide film"] = palette.lch(56, 28, 125),
 }
 palette.domain_ink = palette.lch(25, 10, 335)   -- hatching of overlaid domains
 

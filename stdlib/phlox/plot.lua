@@ -31,7 +31,8 @@ local LINE_WATER = 1.0
 local LINE_NEUTRAL = 0.8
 local SMALL_TEXT = 7.0           -- water-line and neutral-pH labels
 local KINDS = { aqueous = true, solid = true, gas = true, metal = true, liquid = true }
-local DOMAINS = { "immunity", "passivation", "corrosion" }
+local DOMAINS = { "immunity", "passivation", "sulfide film", "corrosion" }
+local DOMAIN_OK = { immunity = true, passivation = true, corrosion = true, ["sulfide film"] = true }
 
 -- Argument checking ------------------------------------------------------
 
@@ -77,8 +78,8 @@ function plot.check_map(map, where)
   for i, b in ipairs(map.boundaries or {}) do check_points(where, ("map.boundaries[%d]"):format(i), b, 2) end
   for i, d in ipairs(map.domains or {}) do
     local what = ("map.domains[%d]"):format(i)
-    if d.domain ~= "immunity" and d.domain ~= "passivation" and d.domain ~= "corrosion" then
-      fail(where, what .. ".domain must be immunity, passivation or corrosion")
+    if not DOMAIN_OK[d.domain] then
+      fail(where, what .. ".domain must be immunity, passivation, sulfide film or corrosion")
     end
     check_points(where, what, d, 3)
   end
@@ -132,17 +133,30 @@ end
 
 local function is_pH(axis) return axis and axis.name == "pH" end
 
--- The displayed potential scale: E_ref = E_SHE - offset.
+-- The displayed potential scale: E_ref = E_SHE - offset.  A name (the
+-- names of phlox.to_she: "SCE", "Ag/AgCl", ... or a full name) is corrected
+-- to the map's temperature with the electrode's coefficient, or refused
+-- away from 25 °C (opts.reference_at_25C keeps the 25 °C offset for an
+-- electrode outside the hot test); { name, offset } is the user's own.
 local function reference(opts, map)
   local ref = opts.reference
   if ref == nil then return { name = "SHE", offset = 0 } end
-  if type(ref) ~= "table" or type(ref.name) ~= "string" or not is_num(ref.offset) then
-    error("plot: opts.reference must be { name = \"SCE\", offset = <E of the electrode vs SHE, V> }", 3)
-  end
   if map and not is_potential(map.y) then
     error("plot: opts.reference needs a potential (E) y axis", 3)
   end
-  return ref
+  if type(ref) == "string" or (type(ref) == "table" and type(ref.name) == "string" and ref.offset == nil) then
+    local name = type(ref) == "string" and ref or ref.name
+    local T = map and (map.T or (map.conditions and map.conditions.T_C and map.conditions.T_C + 273.15))
+    local info = require("phlox").electrode_at(name, T, opts.reference_at_25C, "plot: reference")
+    return { name = name, offset = info.offset, text = info.text }
+  end
+  if type(ref) ~= "table" or type(ref.name) ~= "string" or not is_num(ref.offset) then
+    error("plot: opts.reference must be an electrode name (\"SCE\", \"Ag/AgCl\", ...) or "
+      .. "{ name = \"SCE\", offset = <E of the electrode vs SHE, V> }", 3)
+  end
+  return { name = ref.name, offset = ref.offset,
+           text = ("potentials vs %s: offset %s V given by the user (valid at the temperature it was measured)")
+             :format(ref.name, fmt_num(ref.offset)) }
 end
 
 local function y_title(map, ref)
@@ -446,32 +460,37 @@ local function union_window(maps, ref)
   return w
 end
 
--- Domains: given, or derived from the kinds of the fields when absent:
--- metal (and the element's own liquid) -> immunity; solid and other
--- liquids -> passivation; aqueous and gas -> corrosion (the usual
--- classification of these maps; common practice, no source).
+-- Domains: given, or derived field by field when absent, by the rule of
+-- the map core (core.domain_of, src/diagram/emap.c): the element itself ->
+-- immunity; a metal sulfide -> sulfide film; other solids and liquids ->
+-- passivation; dissolved and gas -> corrosion.  A field whose species is
+-- not a formula (a hand-made table) goes by its kind: metal -> immunity,
+-- solid or liquid -> passivation, else corrosion.
+local KIND_DOMAIN = { metal = "immunity", solid = "passivation", liquid = "passivation" }
+local function domain_of_field(map, f)
+  if f.domain then return f.domain end
+  if map.element then
+    local ok, d = pcall(core.domain_of, f.species, map.element)
+    if ok then return d end
+  end
+  return KIND_DOMAIN[f.kind] or "corrosion"
+end
+
 function plot.domains_of(map)
   if map.domains then return map.domains, false end
   local out = {}
   for _, f in ipairs(map.fields) do
-    local d
-    if f.kind == "metal" or (f.kind == "liquid" and map.element and f.species == map.element .. "(l)") then
-      d = "immunity"
-    elseif f.kind == "solid" or f.kind == "liquid" then
-      d = "passivation"
-    else
-      d = "corrosion"
-    end
-    out[#out + 1] = { domain = d, x = f.x, y = f.y }
+    out[#out + 1] = { domain = domain_of_field(map, f), x = f.x, y = f.y }
   end
   return out, true
 end
 
 -- Hatching of overlaid domains: corrosion dense at 45°, passivation
--- sparse at -45°, immunity bare.
+-- sparse at -45°, sulfide film horizontal, immunity bare.
 local DOMAIN_HATCH = {
   corrosion = { spacing = 3.5, angle = 45, width = 0.5 },
   passivation = { spacing = 6, angle = -45, width = 0.4 },
+  ["sulfide film"] = { spacing = 4.5, angle = 0, width = 0.5 },
 }
 
 -- Drawing a map into a panel -------------------------------------------------
@@ -631,6 +650,7 @@ function plot.map(map, opts)
   if ref.offset ~= 0 then
     extra[#extra + 1] = ("potential vs %s = E(SHE) - %s V"):format(ref.name, fmt_num(ref.offset))
   end
+  if ref.text then extra[#extra + 1] = ref.text end
   if fills.conflicts > 0 then
     extra[#extra + 1] = ("note: %d pairs of neighbouring fields share a lightness tier"):format(fills.conflicts)
   end
@@ -681,11 +701,13 @@ function plot.domains(map, opts)
   for _, s in ipairs(map.stamp or {}) do extra[#extra + 1] = s end
   for _, s in ipairs(opts.stamp or {}) do extra[#extra + 1] = s end
   if derived then
-    extra[#extra + 1] = "domains from field kinds: metal = immunity, solid = passivation, dissolved or gas = corrosion"
+    extra[#extra + 1] = "domains from field kinds: metal = immunity, metal sulfide = sulfide film, "
+      .. "other solid = passivation, dissolved or gas = corrosion"
   end
   if ref.offset ~= 0 then
     extra[#extra + 1] = ("potential vs %s = E(SHE) - %s V"):format(ref.name, fmt_num(ref.offset))
   end
+  if ref.text then extra[#extra + 1] = ref.text end
   add_stamp(fig, plot.stamp_lines(map.conditions, extra, w))
   return finish(fig, opts, plot.defaults)
 end
@@ -876,6 +898,7 @@ function plot.grid(maps, opts)
   if ref.offset ~= 0 then
     extra[#extra + 1] = ("potential vs %s = E(SHE) - %s V"):format(ref.name, fmt_num(ref.offset))
   end
+  if ref.text then extra[#extra + 1] = ref.text end
   add_stamp(fig, plot.stamp_lines(cond, extra, w))
   return finish(fig, opts, plot.defaults)
 end
@@ -937,6 +960,7 @@ function plot.overlay(maps, opts)
   if ref.offset ~= 0 then
     extra[#extra + 1] = ("potential vs %s = E(SHE) - %s V"):format(ref.name, fmt_num(ref.offset))
   end
+  if ref.text then extra[#extra + 1] = ref.text end
   local cond = {}   -- only the conditions all maps share; the legend tells the rest
   for k, v in pairs(m1.conditions or {}) do
     local same = true

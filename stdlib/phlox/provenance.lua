@@ -7,14 +7,42 @@ local core = require "phlox.core"
 
 local provenance = {}
 local data_files = {}   -- path -> sha256, filled by the library loader
+local notes, noted = {}, {} -- caveats of this run's results, in order
 
 --- Record a definition file (or any input) that a result depends on.
 function provenance.record_file(path, text)
   data_files[path] = core.sha256(text)
 end
 
+--- Record a caveat that changes a result (stamp line of a map, a grid map
+-- or a speciation): exported files of the run carry it unless they name
+-- the results they come from.
+function provenance.record_note(text)
+  if noted[text] then return end
+  noted[text] = true
+  notes[#notes + 1] = text
+end
+
+--- The caveats of `from` (a result or a list of results with `stamp`
+-- lines), or every caveat recorded in this run.
+function provenance.notes(from)
+  if from == nil then
+    local out = {}
+    for i, n in ipairs(notes) do out[i] = n end
+    return out
+  end
+  local list = (from.stamp or from.notes or from.fields or from.species) and { from } or from
+  local out, seen = {}, {}
+  for _, r in ipairs(list) do
+    for _, line in ipairs(r.stamp or {}) do
+      if not seen[line] then seen[line] = true; out[#out + 1] = line end
+    end
+  end
+  return out
+end
+
 --- The current stamp: a plain table (stable key order when JSON-encoded).
-function provenance.stamp(conditions)
+function provenance.stamp(conditions, from)
   local files = {}
   for path, sum in pairs(data_files) do files[#files + 1] = { file = path, sha256 = sum } end
   table.sort(files, function(a, b) return a.file < b.file end)
@@ -32,6 +60,7 @@ function provenance.stamp(conditions)
     script = script,
     data = files,
     conditions = conditions,
+    notes = provenance.notes(from),
   }
 end
 
@@ -53,6 +82,7 @@ function provenance.comment_lines(stamp, prefix)
       lines[#lines + 1] = prefix .. "condition: " .. k .. " = " .. tostring(stamp.conditions[k])
     end
   end
+  for _, n in ipairs(stamp.notes or {}) do lines[#lines + 1] = prefix .. "note: " .. n end
   return lines
 end
 

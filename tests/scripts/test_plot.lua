@@ -153,7 +153,18 @@ local ref = { name = "SCE", offset = 0.241 }   -- offset given by the user; any 
 local s2 = plot.map(map, { reference = ref }):render("svg")
 check(s2:find("y axis: E / V vs SCE", 1, true), "axis names the reference electrode")
 check(s2:find("potential vs SCE = E(SHE) - 0.241 V", 1, true), "stamp states the shift")
-check(not pcall(plot.map, map, { reference = { name = "SCE" } }), "reference without offset")
+check(not pcall(plot.map, map, { reference = { name = "no such electrode" } }), "unknown reference name")
+-- by name, the same names as phlox.to_she: 25 °C offset, corrected with the
+-- electrode's dE/dT within its range, refused beyond (issue 14 item 7)
+local phlox = require "phlox"
+local s3 = plot.map(map, { reference = "SCE" }):render("svg")
+check(s3:find("potential vs SCE = E(SHE) - 0.241 V", 1, true), "named reference at 25 °C")
+local E50 = phlox.to_she(0, "SCE", { T_C = 50 })
+local s4 = plot.map(test_map(50), { reference = "SCE" }):render("svg")
+check(s4:find(("potential vs SCE = E(SHE) - %.4g V"):format(E50), 1, true), "named reference corrected to 50 °C")
+check(not pcall(plot.map, test_map(200), { reference = "SCE" }), "SCE refused at 200 °C")
+check(plot.map(test_map(200), { reference = "SCE", reference_at_25C = true }):render("svg")
+  :find("kept at 25 °C", 1, true), "electrode kept at 25 °C is stamped")
 
 -- domains: own figure and overlays
 local d = plot.domains(map):render("svg")

@@ -283,12 +283,53 @@ static void test_grid_failure(void **state)
     px_diagram_grid_free(NULL);
 }
 
+/* Two fields split at x = 0.5, and a disk around (0.5, 0.5) where the
+ * callback cannot label (a solver failure, id -1). */
+static int hole_label(double x, double y, void *user, int *id)
+{
+    (void)user;
+    *id = hypot(x - 0.5, y - 0.5) < 0.1 ? -1 : x < 0.5 ? 1 : 2;
+    return 0;
+}
+
+static void test_grid_unlabelled(void **state)
+{
+    (void)state;
+    px_diagram_window w = {0, 1, 0, 1};
+    px_diagram_grid_options o = px_diagram_grid_options_default();
+    o.nx = 21;
+    o.ny = 21;
+    px_diagram_grid *g = NULL;
+    assert_int_equal(px_diagram_grid_map(&w, hole_label, NULL, &o, &g), PX_OK);
+    assert_true(g->nfailcross > 0);
+    size_t flagged = 0, clean = 0;
+    for (size_t l = 0; l < g->npoly; l++) {
+        const px_diagram_polyline *pl = &g->poly[l];
+        for (size_t k = 0; k < pl->n; k++) {
+            size_t i = pl->first + k;
+            double r = hypot(g->px[i] - 0.5, g->py[i] - 0.5);
+            /* flagged exactly where a crossing was bracketed next to the hole
+             * (within a cell diagonal of it); the 1-2 line far away is clean */
+            if (g->pfail[i]) {
+                flagged++;
+                assert_true(r < 0.1 + 0.05 * sqrt(2.0) + 1e-9);
+            } else if (pl->id_a == 1 && pl->id_b == 2) {
+                clean++;
+                assert_true(r > 0.1 - 1e-9);
+            }
+        }
+    }
+    assert_true(flagged > 0);
+    assert_true(clean > 10);
+    px_diagram_grid_free(g);
+}
+
 int main(void)
 {
     const struct CMUnitTest tests[] = {
         cmocka_unit_test(test_grid_vs_exact), cmocka_unit_test(test_grid_nernst),
         cmocka_unit_test(test_grid_triple),   cmocka_unit_test(test_grid_saddle),
-        cmocka_unit_test(test_grid_failure),
+        cmocka_unit_test(test_grid_failure),  cmocka_unit_test(test_grid_unlabelled),
     };
     return cmocka_run_group_tests(tests, NULL, NULL);
 }
