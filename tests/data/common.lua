@@ -7,10 +7,8 @@
 local M = {}
 
 ---------------------------------------------------------------------------- constants
-M.R = 8.314462618         -- J/(mol K), CODATA 2018
-M.F = 96485.33212         -- C/mol, CODATA 2018
-M.T0 = 298.15             -- K, reference temperature
-M.LN10 = math.log(10)
+local K = dofile((debug.getinfo(1, "S").source:match("^@(.*)[/\\]") or ".") .. "/../support/chem.lua")
+M.R, M.F, M.T0, M.LN10 = K.R, K.F, K.T0, K.LN10 -- CODATA 2018 (tests/support/chem.lua)
 M.CAL = 4.184             -- J per thermochemical calorie
 
 -- Unit words of docs/element-files.md to kJ (energy) and J/(mol K) (entropy).

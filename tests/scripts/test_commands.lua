@@ -34,7 +34,8 @@ end
 check(math.abs(num(out, "E0_V") - (-0.7618)) < 0.005, "E0 Zn2+/Zn: " .. out)
 check(num(out, "T_K") == 298.15 and num(out, "P_bar") == 1, "default T and P: " .. out)
 -- dG = -n F E0 (definition)
-check(math.abs(num(out, "dG_kJ") + 2 * 96485.33212 * num(out, "E0_V") / 1000) < 1e-6, "dG = -nFE")
+local F = dofile(os.getenv("PHLOX_SOURCE_DIR") .. "/tests/support/chem.lua").F
+check(math.abs(num(out, "dG_kJ") + 2 * F * num(out, "E0_V") / 1000) < 1e-6, "dG = -nFE")
 
 -- no electrons: E0 is null
 code, out = run([[reaction "H2O(l) = H^+ + OH^-" --json]])

@@ -16,8 +16,8 @@ local D = require "phlox.diagrams"
 local T = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
                  .. "/tests/support/check.lua")
 local check, close = T.check, T.close
-local R, F = 8.314462618, 96485.33212 -- CODATA 2018
-local s25 = R * 298.15 * math.log(10) / F
+local K = dofile(os.getenv("PHLOX_SOURCE_DIR") .. "/tests/support/chem.lua")
+local s25 = K.nernst_slope(298.15)
 
 -- reference rows (tests/support/csv.lua) ----------------------------------------
 local CSV = dofile(os.getenv("PHLOX_SOURCE_DIR") .. "/tests/support/csv.lua")

@@ -13,8 +13,8 @@ local D = require "phlox.diagrams"
 local T = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
                  .. "/tests/support/check.lua")
 local check, close = T.check, T.close
-local R, F = 8.314462618, 96485.33212 -- CODATA 2018
-local function slope(T) return R * T * math.log(10) / F end
+local K = dofile(os.getenv("PHLOX_SOURCE_DIR") .. "/tests/support/chem.lua")
+local slope = K.nernst_slope
 local s25 = slope(298.15)
 
 -- reference rows (tests/support/csv.lua)
@@ -29,17 +29,7 @@ local function pKw_ref(tc) -- the saturation row of pKw at tc
   error("no pKw row at " .. tc .. " C")
 end
 
-local function boundary(m, a, b)
-  for _, bd in ipairs(m.boundaries) do
-    if (bd.between[1] == a and bd.between[2] == b) or (bd.between[1] == b and bd.between[2] == a) then return bd end
-  end
-  error("no boundary between " .. a .. " and " .. b)
-end
-local function area_sum(m)
-  local t = 0
-  for _, f in ipairs(m.fields) do t = t + f.area end
-  return t
-end
+local boundary, area_sum = K.boundary, K.area_sum
 
 -- 1. E against log a(Cl-) at pH 5: Zn-Cl ------------------------------------------
 local lib = phlox.library { "Zn", "Cu", "Cl" }

@@ -28,8 +28,8 @@ local JSON = dofile(os.getenv("PHLOX_SOURCE_DIR") .. "/tests/support/json.lua")
 local BIN = assert(os.getenv("PHLOX_BIN"), "PHLOX_BIN is not set (run through ctest)")
 local SRC = assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
 local DEMO = SRC .. "/examples/demo.lua"
-local R, F = 8.314462618, 96485.33212 -- CODATA 2018
-local function slope(T_C) return R * (T_C + 273.15) * math.log(10) / F end
+local K = dofile(os.getenv("PHLOX_SOURCE_DIR") .. "/tests/support/chem.lua")
+local function slope(T_C) return K.nernst_slope(T_C + 273.15) end
 
 local function quote(s) return "'" .. s:gsub("'", "'\\''") .. "'" end
 local function read(p)

@@ -1,5 +1,5 @@
 -- test_support.lua: the shared test helpers of tests/support (check, CSV,
--- JSON, seeded random numbers) on inputs with known answers, including
+-- JSON, seeded random numbers, constants and map look-ups) on inputs with known answers, including
 -- malformed ones, so a helper that stops failing cannot hide a test's
 -- failure.  Sources: the examples of RFC 4180 (sec. 2, rules 5-7) and of
 -- RFC 8259 (sec. 13), both from memory of the RFCs; the generator's first
@@ -10,6 +10,7 @@ local T = dofile(SUP .. "check.lua")
 local CSV = dofile(SUP .. "csv.lua")
 local JSON = dofile(SUP .. "json.lua")
 local RNG = dofile(SUP .. "rng.lua")
+local K = dofile(SUP .. "chem.lua")
 local check = T.check
 
 -- check, close, rel, near: pass and fail where they should, NaN never passes
@@ -65,4 +66,12 @@ for _ = 1, 10000 do
   lo, hi = math.min(lo, x), math.max(hi, x)
 end
 check(lo >= 0 and hi < 1 and lo < 0.01 and hi > 0.99, "values cover [0, 1)")
+-- chem: the Nernst slope at 25 C is 59.16 mV per decade (textbook value,
+-- e.g. Bard and Faulkner 2001, Electrochemical Methods, 2nd ed., from memory)
+T.close(K.nernst_slope(298.15), 0.05916, 1e-5, "Nernst slope at 25 C")
+local map = { boundaries = { { between = { "A", "B" } }, { between = { "C", "B" } } },
+              fields = { { area = 1.5 }, { area = 2.5 } } }
+check(K.boundary(map, "B", "C") == map.boundaries[2], "boundary in either order")
+check(not pcall(K.boundary, map, "A", "C"), "a missing boundary is an error")
+check(K.area_sum(map) == 4, "area sum")
 print("test_support: all checks passed")
