@@ -22,9 +22,8 @@ local function run(args, stdin_text)
   return (how == "exit" and code or 128 + code), slurp(out), slurp(err)
 end
 
-local T = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
-                 .. "/tests/support/check.lua")
-local check = T.check
+local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
+local check = S.check
 
 -- --version prints the version and exits 0
 local st, out = run("--version")

@@ -4,9 +4,8 @@
 -- Nernst slope of a one-electron couple changes with T as RT ln10/F.
 local bin = assert(os.getenv("PHLOX_BIN"), "PHLOX_BIN not set")
 local fixtures = assert(os.getenv("PHLOX_TEST_FIXTURES"), "PHLOX_TEST_FIXTURES not set")
-local T = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
-                 .. "/tests/support/check.lua")
-local check = T.check
+local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
+local check = S.check
 
 local function run(args)
   local err = os.tmpname()
@@ -17,7 +16,7 @@ local function run(args)
   return code, out, e
 end
 
-local JSON = dofile(os.getenv("PHLOX_SOURCE_DIR") .. "/tests/support/json.lua")
+local JSON = S.json
 -- a number of the one JSON object the command printed (nil if absent or null)
 local function num(json, key)
   local ok, doc = pcall(JSON.decode, json)
@@ -34,7 +33,7 @@ end
 check(math.abs(num(out, "E0_V") - (-0.7618)) < 0.005, "E0 Zn2+/Zn: " .. out)
 check(num(out, "T_K") == 298.15 and num(out, "P_bar") == 1, "default T and P: " .. out)
 -- dG = -n F E0 (definition)
-local F = dofile(os.getenv("PHLOX_SOURCE_DIR") .. "/tests/support/chem.lua").F
+local F = S.chem.F
 check(math.abs(num(out, "dG_kJ") + 2 * F * num(out, "E0_V") / 1000) < 1e-6, "dG = -nFE")
 
 -- no electrons: E0 is null

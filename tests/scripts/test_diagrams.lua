@@ -13,14 +13,13 @@
 local phlox = require "phlox"
 local D = require "phlox.diagrams"
 
-local T = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
-                 .. "/tests/support/check.lua")
-local check, close = T.check, T.close
-local K = dofile(os.getenv("PHLOX_SOURCE_DIR") .. "/tests/support/chem.lua")
+local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
+local check, close = S.check, S.close
+local K = S.chem
 local s25 = K.nernst_slope(298.15)
 
 -- reference rows (tests/support/csv.lua) ----------------------------------------
-local CSV = dofile(os.getenv("PHLOX_SOURCE_DIR") .. "/tests/support/csv.lua")
+local CSV = S.csv
 local ref_value = CSV.ref_value
 local function logK_ref(rx) return ref_value("log_k_25C.csv", "reaction", rx, "log10_K_25C") end
 local function E0_ref(c) return ref_value("standard_potentials.csv", "couple", c, "E0_V_SHE_25C") end

@@ -10,15 +10,14 @@
 local phlox = require "phlox"
 local D = require "phlox.diagrams"
 
-local T = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
-                 .. "/tests/support/check.lua")
-local check, close = T.check, T.close
-local K = dofile(os.getenv("PHLOX_SOURCE_DIR") .. "/tests/support/chem.lua")
+local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
+local check, close = S.check, S.close
+local K = S.chem
 local slope = K.nernst_slope
 local s25 = slope(298.15)
 
 -- reference rows (tests/support/csv.lua)
-local CSV = dofile(os.getenv("PHLOX_SOURCE_DIR") .. "/tests/support/csv.lua")
+local CSV = S.csv
 local function logK_ref(rx) return (CSV.ref_value("log_k_25C.csv", "reaction", rx, "log10_K_25C")) end
 local function pKw_ref(tc) -- the saturation row of pKw at tc
   for _, r in ipairs(CSV.reference("water.csv")) do

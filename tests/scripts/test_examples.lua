@@ -19,16 +19,15 @@
 --   * reproducibility: the two runs give byte-identical SVG, PDF, CSV and
 --     JSON files (DESIGN.md: the same inputs give the same bytes).
 -- Environment (tests/CMakeLists.txt): PHLOX_BIN, PHLOX_SOURCE_DIR.
-local T = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
-                 .. "/tests/support/check.lua")
-local check, close = T.check, T.close
-local CSV = dofile(os.getenv("PHLOX_SOURCE_DIR") .. "/tests/support/csv.lua")
-local JSON = dofile(os.getenv("PHLOX_SOURCE_DIR") .. "/tests/support/json.lua")
+local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
+local check, close = S.check, S.close
+local CSV = S.csv
+local JSON = S.json
 
 local BIN = assert(os.getenv("PHLOX_BIN"), "PHLOX_BIN is not set (run through ctest)")
 local SRC = assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
 local DEMO = SRC .. "/examples/demo.lua"
-local K = dofile(os.getenv("PHLOX_SOURCE_DIR") .. "/tests/support/chem.lua")
+local K = S.chem
 local function slope(T_C) return K.nernst_slope(T_C + 273.15) end
 
 local function quote(s) return "'" .. s:gsub("'", "'\\''") .. "'" end

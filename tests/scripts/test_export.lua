@@ -4,9 +4,8 @@ local json = require "phlox.json"
 local export = require "phlox.export"
 local sweep = require "phlox.sweep"
 local core = require "phlox.core"
-local T = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
-                 .. "/tests/support/check.lua")
-local check = T.check
+local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
+local check = S.check
 
 -- JSON: sorted keys, escapes (RFC 8259 section 7), shortest round-trip numbers
 check(json.encode({ b = 1, a = "q\"\\\n\1" }) == '{"a":"q\\"\\\\\\n\\u0001","b":1}', "json escapes")

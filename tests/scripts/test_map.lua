@@ -5,10 +5,9 @@
 -- geometry rules of a map (fields tile the window, boundaries separate the
 -- two fields they name).
 local phlox = require "phlox"
-local T = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
-                 .. "/tests/support/check.lua")
-local check, close = T.check, T.close
-local K = dofile(os.getenv("PHLOX_SOURCE_DIR") .. "/tests/support/chem.lua")
+local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
+local check, close = S.check, S.close
+local K = S.chem
 local slope = K.nernst_slope
 
 local lib = phlox.library { "Zn" }

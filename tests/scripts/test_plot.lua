@@ -6,16 +6,15 @@
 local plot = require "phlox.plot"
 local palette = require "phlox.palette"
 local core = require "phlox.core"
-local T = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
-                 .. "/tests/support/check.lua")
-local check, near = T.check, T.near
+local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
+local check, near = S.check, S.near
 
 -- BEGIN TEST MAP
 -- Nernst slope ln(10) R T / F at 298.15 K from CODATA 2018 R and F; the
 -- water lines use E(O2/H2O) = 1.229 V at pH 0 (from memory of Bard, Parsons
 -- and Jordan 1985, Standard Potentials in Aqueous Solution) only to place
 -- dashed lines on the invented map.
-local SLOPE = dofile(os.getenv("PHLOX_SOURCE_DIR") .. "/tests/support/chem.lua").nernst_slope(298.15)
+local SLOPE = S.chem.nernst_slope(298.15)
 local function test_map(T_C)
   T_C = T_C or 25
   local s = SLOPE * (T_C + 273.15) / 298.15

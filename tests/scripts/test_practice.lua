@@ -8,9 +8,8 @@ local export = require "phlox.export"
 local core = phlox.core
 
 local failures = 0
-local T = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
-                 .. "/tests/support/check.lua")
-local check = T.check
+local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
+local check = S.check
 local function has_line(lines, pat)
   for _, l in ipairs(lines or {}) do if l:find(pat, 1, true) then return true end end
   return false
@@ -22,7 +21,7 @@ local function names_of(list, key)
 end
 
 -- rows of a reference CSV (tests/support/csv.lua)
-local CSV = dofile(os.getenv("PHLOX_SOURCE_DIR") .. "/tests/support/csv.lua")
+local CSV = S.csv
 local function rows(name) return CSV.reference(name) end
 
 -- 1. Ligand oxidation states -------------------------------------------------

@@ -3,9 +3,8 @@
 -- use the same constants (so data and solver are checked separately).
 -- Mass balance is checked on every solve.
 local phlox = require "phlox"
-local T = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
-                 .. "/tests/support/check.lua")
-local check, close, rel = T.check, T.close, T.rel
+local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
+local check, close, rel = S.check, S.close, S.rel
 
 local function solve(opts)
   local r, err = phlox.speciate(opts)
@@ -96,7 +95,7 @@ rel(r.elements.Ag.dissolved, 1.33e-5, 0.1, "AgCl solubility (handbook)")
 
 -- 6. Robustness: random but valid cases (seeded, deterministic), zero
 --    failures, zero NaN
-local rnd = dofile(os.getenv("PHLOX_SOURCE_DIR") .. "/tests/support/rng.lua").new(12345)
+local rnd = S.rng.new(12345)
 local fails = 0
 for k = 1, 60 do
   local T = 25 + 275 * rnd()

@@ -74,4 +74,8 @@ local map = { boundaries = { { between = { "A", "B" } }, { between = { "C", "B" 
 check(K.boundary(map, "B", "C") == map.boundaries[2], "boundary in either order")
 check(not pcall(K.boundary, map, "A", "C"), "a missing boundary is an error")
 check(K.area_sum(map) == 4, "area sum")
+-- init.lua gathers them all
+local S = dofile(SUP .. "init.lua")
+check(S.check and S.close and S.rel and S.near and S.csv.split and S.json.decode and S.rng.new
+      and S.chem.nernst_slope, "init.lua gathers every helper")
 print("test_support: all checks passed")

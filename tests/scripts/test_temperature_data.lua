@@ -5,9 +5,8 @@
 -- files themselves (a logk record without dH or logK_T), independently of
 -- the numerical test phlox uses.
 local phlox = require "phlox"
-local T = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
-                 .. "/tests/support/check.lua")
-local check = T.check
+local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
+local check = S.check
 
 local zn = phlox.library { "Zn" }
 
