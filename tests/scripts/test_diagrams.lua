@@ -209,9 +209,7 @@ local tmp = os.tmpname()
 D.plot(fzn, { file = tmp .. ".svg" })
 D.plot(sol, { file = tmp .. "-sol.svg" })
 for _, f in ipairs { tmp .. ".svg", tmp .. "-sol.svg" } do
-  local h = assert(io.open(f, "r"))
-  local svg = h:read("a")
-  h:close()
+  local svg = S.files.slurp(f)
   check(svg:find("<desc>", 1, true), f .. " has a description")
   os.remove(f)
 end

@@ -142,9 +142,7 @@ local plot = require "phlox.plot"
 plot.grid(maps, { file = tmp .. "-grid.svg" })
 plot.overlay(maps, { file = tmp .. "-over.svg" })
 for _, f in ipairs { tmp .. "-grid.svg", tmp .. "-over.svg" } do
-  local h = assert(io.open(f, "r"))
-  local svg = h:read("a")
-  h:close()
+  local svg = S.files.slurp(f)
   check(svg:find("300 °C", 1, true), f .. " names 300 °C")
   check(svg:find("log K held at 25 °C", 1, true), f .. " stamps the species without temperature data")
   os.remove(f)

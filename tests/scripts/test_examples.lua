@@ -30,21 +30,7 @@ local DEMO = SRC .. "/examples/demo.lua"
 local K = S.chem
 local function slope(T_C) return K.nernst_slope(T_C + 273.15) end
 
-local function quote(s) return "'" .. s:gsub("'", "'\\''") .. "'" end
-local function read(p)
-  local f = io.open(p, "rb")
-  if not f then return nil end
-  local s = f:read("a")
-  f:close()
-  return s
-end
-
-local function tmpdir()
-  local name = os.tmpname()   -- creates an empty file; use its unique name for a folder
-  os.remove(name)
-  check(os.execute("mkdir -p " .. quote(name)), "cannot create " .. name)
-  return name
-end
+local quote, read, tmpdir = S.files.quote, S.files.read, S.files.tmpdir
 
 local function run(dir)
   local log = dir .. "/stdout.txt"

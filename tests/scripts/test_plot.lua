@@ -51,8 +51,8 @@ local function test_map(T_C)
 end
 -- END TEST MAP
 
-local dir = os.tmpname(); os.remove(dir); os.execute("mkdir -p " .. dir)
-local function slurp(p) local f = assert(io.open(p, "rb")); local s = f:read("a"); f:close(); return s end
+local dir = S.files.tmpdir()
+local slurp = S.files.slurp
 
 -- palette: CIE L* of sRGB primaries and white (sRGB red L* = 53.24,
 -- green 87.73, blue 32.30: from memory of B. Lindbloom's published sRGB to

@@ -74,8 +74,17 @@ local map = { boundaries = { { between = { "A", "B" } }, { between = { "C", "B" 
 check(K.boundary(map, "B", "C") == map.boundaries[2], "boundary in either order")
 check(not pcall(K.boundary, map, "A", "C"), "a missing boundary is an error")
 check(K.area_sum(map) == 4, "area sum")
+-- files: read, slurp, quote, tmpdir
+local FL = dofile(SUP .. "files.lua")
+check(FL.quote("a'b") == "'a'\\''b'", "shell quoting: " .. FL.quote("a'b"))
+local d = FL.tmpdir()
+local fh = assert(io.open(d .. "/x.txt", "wb")); fh:write("bytes\0\n"); fh:close()
+check(FL.read(d .. "/x.txt") == "bytes\0\n" and FL.slurp(d .. "/x.txt") == "bytes\0\n", "read and slurp")
+check(FL.read(d .. "/missing") == nil and not pcall(FL.slurp, d .. "/missing"), "a missing file")
+os.execute("rm -rf " .. FL.quote(d))
+
 -- init.lua gathers them all
 local S = dofile(SUP .. "init.lua")
 check(S.check and S.close and S.rel and S.near and S.csv.split and S.json.decode and S.rng.new
-      and S.chem.nernst_slope, "init.lua gathers every helper")
+      and S.chem.nernst_slope and S.files.slurp, "init.lua gathers every helper")
 print("test_support: all checks passed")

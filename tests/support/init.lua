@@ -4,8 +4,9 @@
 -- and takes what it needs (tests/scripts/test_support.lua checks them):
 --     S.check, S.close, S.rel, S.near     check.lua
 --     S.csv, S.json, S.rng, S.chem        csv.lua, json.lua, rng.lua, chem.lua
+--     S.files                             files.lua
 local dir = debug.getinfo(1, "S").source:match("^@(.*)[/\\]") or "."
 local S = {}
 for k, v in pairs(dofile(dir .. "/check.lua")) do S[k] = v end
-for _, name in ipairs { "csv", "json", "rng", "chem" } do S[name] = dofile(dir .. "/" .. name .. ".lua") end
+for _, name in ipairs { "csv", "json", "rng", "chem", "files" } do S[name] = dofile(dir .. "/" .. name .. ".lua") end
 return S
