@@ -9,14 +9,25 @@ int px_num_lu_solve(size_t n, double *A, double *b, size_t *perm, double pivot_r
                     double pivot_abs, size_t *bad_col)
 {
     if (n == 0 || !A || !b || !(pivot_rel >= 0.0) || !(pivot_abs >= 0.0)) return PX_EINVAL;
+    /* Non-finite entries: with the relative test on, the column scans below
+     * find them (an entry that is Inf or NaN stays so under elimination,
+     * which only subtracts); without it, one pass first. */
     for (size_t r = 0; r < n; r++) {
         if (!isfinite(b[r])) return PX_ENONFINITE;
-        for (size_t c = 0; c < n; c++)
-            if (!isfinite(A[r * n + c])) return PX_ENONFINITE;
+        if (!(pivot_rel > 0.0))
+            for (size_t c = 0; c < n; c++)
+                if (!isfinite(A[r * n + c])) return PX_ENONFINITE;
     }
     if (perm)
         for (size_t r = 0; r < n; r++) perm[r] = r;
     for (size_t k = 0; k < n; k++) {
+        double cmax = 0.0;
+        if (pivot_rel > 0.0)
+            for (size_t r = 0; r < n; r++) {
+                double a = fabs(A[r * n + k]);
+                if (!isfinite(a)) return PX_ENONFINITE;
+                if (a > cmax) cmax = a;
+            }
         size_t piv = k;
         double best = fabs(A[k * n + k]);
         for (size_t r = k + 1; r < n; r++)
@@ -24,15 +35,8 @@ int px_num_lu_solve(size_t n, double *A, double *b, size_t *perm, double pivot_r
                 best = fabs(A[r * n + k]);
                 piv = r;
             }
-        int refused = !(best > 0.0) || best < pivot_abs;
-        if (pivot_rel > 0.0) {
-            double cmax = 0.0;
-            for (size_t r = 0; r < n; r++) {
-                double a = fabs(A[r * n + k]);
-                if (a > cmax) cmax = a;
-            }
-            if (!(best > pivot_rel * cmax)) refused = 1;
-        }
+        int refused = !(best > 0.0) || best < pivot_abs ||
+                      (pivot_rel > 0.0 && !(best > pivot_rel * cmax));
         if (refused) {
             if (bad_col) *bad_col = k;
             return PX_ESINGULAR;

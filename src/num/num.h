@@ -12,9 +12,11 @@
  *   times the largest magnitude in its column of the partly reduced matrix
  *   (0 switches either test off).  Errors: PX_EINVAL (n == 0, NULL
  *   arrays, negative or NaN thresholds), PX_ENONFINITE (an entry of A or b
- *   is Inf or NaN: checked first, nothing is changed; or the solution
- *   overflowed), PX_ESINGULAR (a pivot refused; its column in *bad_col when
- *   bad_col is not NULL).
+ *   is Inf or NaN, or the solution overflowed), PX_ESINGULAR (a pivot
+ *   refused; its column in *bad_col when bad_col is not NULL).  With the
+ *   relative test on, a non-finite entry is found when elimination reaches
+ *   its column: a pivot refused in an earlier column comes first.
+ *   Non-finite input never comes back as PX_OK.
  *   perm (n entries, may be NULL) receives the row order: row k of the
  *   factor is row perm[k] of the input.
  *

@@ -14,7 +14,7 @@ local check, near = S.check, S.near
 -- water lines use E(O2/H2O) = 1.229 V at pH 0 (from memory of Bard, Parsons
 -- and Jordan 1985, Standard Potentials in Aqueous Solution) only to place
 -- dashed lines on the invented map.
-local SLOPE = S.chem.nernst_slope(298.15)
+local SLOPE = math.log(10) * 8.314462618 * 298.15 / 96485.33212 -- self-contained: test_plot_svg.py runs this block alone
 local function test_map(T_C)
   T_C = T_C or 25
   local s = SLOPE * (T_C + 273.15) / 298.15

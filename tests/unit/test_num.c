@@ -93,7 +93,11 @@ static void test_lu_nonfinite_and_args(void **state)
     (void)state;
     double A[4] = {1, NAN, 1, 1}, b[2] = {1, 1};
     assert_int_equal(px_num_lu_solve(2, A, b, NULL, 1e-13, 0, NULL), PX_ENONFINITE);
-    assert_true(isnan(A[1]) && b[0] == 1); /* nothing touched */
+    double A1[4] = {1, NAN, 1, 1}, b1[2] = {1, 1};
+    assert_int_equal(px_num_lu_solve(2, A1, b1, NULL, 0, 0, NULL), PX_ENONFINITE);
+    assert_true(isnan(A1[1]) && b1[0] == 1); /* found before anything changed */
+    double A6[4] = {INFINITY, 0, 0, 1}, b6[2] = {1, 1};
+    assert_int_equal(px_num_lu_solve(2, A6, b6, NULL, 1e-13, 0, NULL), PX_ENONFINITE);
     double A2[4] = {INFINITY, 0, 0, 1}, b2[2] = {1, 1};
     assert_int_equal(px_num_lu_solve(2, A2, b2, NULL, 0, 0, NULL), PX_ENONFINITE);
     double A3[4] = {2, 0, 0, 1}, b3[2] = {NAN, 1};
