@@ -197,7 +197,7 @@ local written = {}
 local function wrote(name) written[#written + 1] = name end
 
 local STAMP = { "scenario values (chloride, temperatures) are illustrative choices, not plant data",
-                "chloride oxidation (ClO^-, ClO3^-, ClO4^-, Cl2) left out: slow in water" }
+                "chloride oxidation ({ClO^-}, {ClO3^-}, {ClO4^-}, {Cl2}) left out: slow in water" }
 
 for i, T in ipairs(TEMPS) do
   for _, ext in ipairs({ "png", "svg" }) do

@@ -70,6 +70,35 @@ end
 -- Ligand files hold the complexes and solids they form with metals, so they
 -- load after the metals (definition-file format, "Where species go").
 local LIGAND_ORDER = { Cl = 1, S = 2, C = 3, N = 4, P = 5, F = 6 }
+-- Polyatomic ligands (docs/element-files.md): a group file
+-- stdlib/elements/<group>.lua, loaded after the element files of its
+-- elements, which a library naming the group loads too.
+local LIGAND_GROUPS = { CN = { "C", "N" } }
+local GROUP_NAMES = {}
+for g in pairs(LIGAND_GROUPS) do GROUP_NAMES[#GROUP_NAMES + 1] = g end
+table.sort(GROUP_NAMES)
+
+--- The ligand groups whose formula appears in a text, in name order:
+-- phlox.groups_in("Au(CN)2^- + e- = Au(s) + 2 CN^-") -> { "CN" }.  A group
+-- name followed by a lower-case letter is another symbol ("CNo" is not CN).
+function phlox.groups_in(text)
+  local out = {}
+  for _, g in ipairs(GROUP_NAMES) do
+    for rest in text:gmatch(g .. "(.?)") do
+      if not rest:match("%l") then out[#out + 1] = g; break end
+    end
+  end
+  return out
+end
+
+-- The element symbols of a ligand ("Cl" -> {"Cl"}, "CN" -> {"C", "N"}).
+local function ligand_elements(ligand)
+  local out = {}
+  if type(ligand) == "string" then
+    for sym in ligand:gmatch("%u%l?") do out[#out + 1] = sym end
+  end
+  return out
+end
 
 local function temperature(opts, where)
   if opts.T and opts.T_C then error(where .. ": give T (K) or T_C (C), not both", 3) end
@@ -97,12 +126,20 @@ function phlox.library(spec)
   if type(spec) == "string" then spec = { spec } end
   assert(type(spec) == "table", "phlox.library: give a list of element symbols")
   local db = core.database(spec.dielectric)
-  local elements = {}
+  local elements, groups, listed = {}, {}, {}
+  local function add_element(sym)
+    if not listed[sym] then listed[sym] = true; elements[#elements + 1] = sym end
+  end
   for i, sym in ipairs(spec) do
-    if type(sym) ~= "string" or not sym:match("^%u%l?$") then
-      error(("phlox.library: entry %d is not an element symbol: %s"):format(i, tostring(sym)), 2)
+    if type(sym) == "string" and LIGAND_GROUPS[sym] then
+      groups[#groups + 1] = sym
+      for _, e in ipairs(LIGAND_GROUPS[sym]) do add_element(e) end
+    elseif type(sym) ~= "string" or not sym:match("^%u%l?$") then
+      error(("phlox.library: entry %d is not an element symbol or a ligand group (%s): %s"):format(
+        i, table.concat(GROUP_NAMES, ", "), tostring(sym)), 2)
+    else
+      add_element(sym)
     end
-    elements[#elements + 1] = sym
   end
   local order = {}
   for _, e in ipairs(elements) do order[#order + 1] = e end
@@ -130,6 +167,7 @@ function phlox.library(spec)
   end
   load("elements/HO.lua", { elements = filter })
   for _, e in ipairs(order) do load("elements/" .. e .. ".lua", { elements = filter }) end
+  for _, g in ipairs(groups) do load("elements/" .. g .. ".lua", { elements = filter }) end
   for _, path in ipairs(spec.user or {}) do
     local f, err = io.open(path, "rb")
     if not f then error("phlox.library: " .. err, 2) end
@@ -229,10 +267,20 @@ local function held_logk(lib, elements, T, P, opts, where)
 end
 
 local add_note -- defined below
+
+--- The stamp line naming species whose log K is held at 25 C (each formula
+-- typeset) and its short form (printed by short stamps, phlox.plot).
+function phlox.held_stamp_line(held)
+  local f = {}
+  for i, s in ipairs(held) do f[i] = "{" .. s .. "}" end
+  return "log K held at 25 °C (no temperature data): " .. table.concat(f, ", "),
+         ("log K of %d species held at 25 °C (no temperature data)"):format(#held)
+end
+
 local function stamp_held(m, held)
   if #held == 0 then return end
   m.constant_logk = held
-  add_note(m, "held", "log K held at 25 °C (no temperature data): " .. table.concat(held, ", "))
+  add_note(m, "held", phlox.held_stamp_line(held))
 end
 
 -- What practice keeps out, and every caveat that changes a result, as
@@ -259,9 +307,14 @@ local function warn_once(text, key)
   io.stderr:write("phlox: warning: ", text, "\n")
 end
 
-function add_note(t, key, text)
+-- `short`: the line's short form for short stamps (map.stamp_short[text]).
+function add_note(t, key, text, short)
   t.notes = t.notes or {}
   t.stamp = t.stamp or {}
+  if short then
+    t.stamp_short = t.stamp_short or {}
+    t.stamp_short[text] = short
+  end
   for _, n in ipairs(t.notes) do if n.text == text then return end end
   t.notes[#t.notes + 1] = { key = key, text = text }
   t.stamp[#t.stamp + 1] = text
@@ -359,7 +412,9 @@ function phlox.map(opts)
   if type(opts.element) ~= "string" then error("phlox.map: element (a symbol) expected", 2) end
   local T = temperature(opts, "phlox.map")
   local P = pressure(opts, T, "phlox.map")
-  local held = held_logk(lib, { opts.element, opts.ligand }, T, P, opts, "phlox.map")
+  local held_of = { opts.element }
+  for _, e in ipairs(ligand_elements(opts.ligand)) do held_of[#held_of + 1] = e end
+  local held = held_logk(lib, held_of, T, P, opts, "phlox.map")
   local axes = opts.axes or { "pH", "E" }
   local copt = {
     element = opts.element, T = T, P = P, x = axes[1], y = axes[2],
@@ -467,12 +522,17 @@ end
 --                    ligand_redox = {...}, allow_inhibited = false,
 --                    failed_boundaries = false }  -- draw boundaries next to failed solves
 -- Returns a map table with `boundaries` (polylines between named species),
--- `fields` = {} (no polygons: draw it with phlox.plot.overlay next to an
--- exact map), `labels` (node labels), `species` and solver statistics.
+-- `fields` (the nodes' cells joined per species, their steps smoothed, so
+-- phlox.plot.map fills them like an exact map; see phlox.grid_fields),
+-- `water` and `neutral_pH`, `labels` (node labels), `species` and solver
+-- statistics.
 function phlox.grid_map(opts)
   assert(type(opts) == "table", "phlox.grid_map: options table expected")
   local lib = opts.library
   if getmetatable(lib) ~= phlox.Library then error("phlox.grid_map: library = phlox.library{...} expected", 2) end
+  if LIGAND_GROUPS[opts.ligand] then
+    error(("phlox.grid_map: ligand = %q is a ligand group: the rigorous solver balances elements, not groups; draw it with phlox.map"):format(opts.ligand), 2)
+  end
   local T = temperature(opts, "phlox.grid_map")
   local P = pressure(opts, T, "phlox.grid_map")
   local held = held_logk(lib, { opts.element, opts.ligand }, T, P, opts, "phlox.grid_map")
@@ -485,7 +545,19 @@ function phlox.grid_map(opts)
     exclude = opts.exclude, threads = opts.threads,
     ligand_redox = opts.ligand_redox, allow_inhibited = opts.allow_inhibited })
   if not g then error(err, 2) end
-  g.fields = {}
+  g.fields = phlox.grid_fields(g)
+  for _, f in ipairs(g.fields) do   -- the kind, as exact maps name it
+    local rec = lib:species(f.species)
+    local st, only = rec and rec.state, true
+    for e in pairs(rec and rec.elements or {}) do only = only and e == opts.element end
+    f.kind = st == "s" and (only and "metal" or "solid") or st == "g" and "gas" or st == "l" and "liquid" or "aqueous"
+  end
+  -- water lines and neutral pH at T, as exact maps carry them
+  local o2 = lib.db:reaction("O2(g) + 4 H^+ + 4 e- = 2 H2O(l)", T, P)
+  local kw = lib.db:reaction("H2O(l) = H^+ + OH^-", T, P)
+  local slope = core.nernst_slope(T)
+  if o2 and o2.E then g.water = { o2 = { a = o2.E, b = -slope }, h2 = { a = 0, b = -slope } } end
+  if kw and kw.logK then g.neutral_pH = -kw.logK / 2 end
   note_ligands(g, g.ligand_states)
   note_list(g, "exclude", "left out by the user (exclude)", opts.exclude)
   note_activity(g, opts.activity or "davies", g.ionic_strength_max or 0)
@@ -525,6 +597,124 @@ function phlox.grid_map(opts)
   g.label = "rigorous"
   stamp_held(g, held)
   return g
+end
+
+--- Field polygons of a rigorous map: each node stands for the cell of the
+-- grid around it (half a step each way, clipped to the window); cells with
+-- one label are joined and their outline traced counter-clockwise, its
+-- steps smoothed (below).  A
+-- species in several separate pieces gives several fields; an enclosed
+-- hole is left to the field drawn inside it.  Nodes where the solver
+-- failed (label 0) belong to no field.
+function phlox.grid_fields(g)
+  local nx, ny, lab = g.nx, g.ny, g.labels
+  local x0, x1, y0, y1 = g.x.min, g.x.max, g.y.min, g.y.max
+  local function X(i) return math.min(math.max(x0 + (i - 0.5) * (x1 - x0) / (nx - 1), x0), x1) end
+  local function Y(j) return math.min(math.max(y0 + (j - 0.5) * (y1 - y0) / (ny - 1), y0), y1) end
+  local function L(i, j)   -- node label, 0-based indices; -1 outside
+    if i < 0 or j < 0 or i >= nx or j >= ny then return -1 end
+    return lab[j * nx + i + 1]
+  end
+  -- Corner positions, smoothed: a corner where exactly two labels meet
+  -- along a line of cell edges (not on the window's edge, not diagonal)
+  -- moves halfway towards the mean of its two neighbours on that line, twice
+  -- (Laplacian smoothing, as discussed by Taubin 1995, "A signal processing
+  -- approach to fair surface design", SIGGRAPH '95), so the cells' steps
+  -- become slopes.  Every field uses the same corner positions, so the
+  -- fields still tile the window without gaps.
+  local SMOOTH_STEPS, SMOOTH_FACTOR = 2, 0.5   -- our choice (common practice, no source)
+  local PX, PY = {}, {}
+  local function key(i, j) return i * (ny + 1) + j end
+  for i = 0, nx do for j = 0, ny do PX[key(i, j)], PY[key(i, j)] = X(i), Y(j) end end
+  local links = {}
+  for i = 1, nx - 1 do
+    for j = 1, ny - 1 do
+      local a, b, c, d = L(i - 1, j - 1), L(i, j - 1), L(i - 1, j), L(i, j)   -- below left, below right, above left, above right
+      local nb = {}
+      if b ~= d then nb[#nb + 1] = key(i + 1, j) end   -- edge to the right
+      if a ~= c then nb[#nb + 1] = key(i - 1, j) end   -- to the left
+      if c ~= d then nb[#nb + 1] = key(i, j + 1) end   -- upwards
+      if a ~= b then nb[#nb + 1] = key(i, j - 1) end   -- downwards
+      local labels = {}
+      for _, v in ipairs({ a, b, c, d }) do labels[v] = true end
+      local count = 0
+      for _ in pairs(labels) do count = count + 1 end
+      if #nb == 2 and count == 2 then links[key(i, j)] = nb end
+    end
+  end
+  for _ = 1, SMOOTH_STEPS do
+    local nxp, nyp = {}, {}
+    for k, nb in pairs(links) do
+      local mx, my = (PX[nb[1]] + PX[nb[2]]) / 2, (PY[nb[1]] + PY[nb[2]]) / 2
+      nxp[k], nyp[k] = PX[k] + SMOOTH_FACTOR * (mx - PX[k]), PY[k] + SMOOTH_FACTOR * (my - PY[k])
+    end
+    for k in pairs(nxp) do PX[k], PY[k] = nxp[k], nyp[k] end
+  end
+  -- directed cell edges with the species on their left, keyed by start vertex
+  -- (vertex (i, j) is the corner below and left of node (i, j))
+  local fields = {}
+  for sp = 1, #g.species do
+    local out, count = {}, 0
+    local function add(a, b, c, d)
+      local k = a * (ny + 1) + b
+      out[k] = out[k] or {}
+      out[k][#out[k] + 1] = { c, d }
+      count = count + 1
+    end
+    for j = 0, ny - 1 do
+      for i = 0, nx - 1 do
+        if L(i, j) == sp then
+          if L(i, j - 1) ~= sp then add(i, j, i + 1, j) end          -- bottom, left to right
+          if L(i + 1, j) ~= sp then add(i + 1, j, i + 1, j + 1) end  -- right, upwards
+          if L(i, j + 1) ~= sp then add(i + 1, j + 1, i, j + 1) end  -- top, right to left
+          if L(i - 1, j) ~= sp then add(i, j + 1, i, j) end          -- left, downwards
+        end
+      end
+    end
+    while count > 0 do
+      local start
+      for j = 0, ny do
+        for i = 0, nx do
+          local e = out[i * (ny + 1) + j]
+          if e and #e > 0 then start = { i, j }; break end
+        end
+        if start then break end
+      end
+      local xs, ys = {}, {}
+      local ci, cj, pdx, pdy = start[1], start[2], nil, nil
+      repeat
+        local e = out[ci * (ny + 1) + cj]
+        local pick = 1
+        if #e > 1 and pdx then   -- a corner shared diagonally: turn left first
+          for q, t in ipairs(e) do
+            local dx, dy = t[1] - ci, t[2] - cj
+            if pdx * dy - pdy * dx > 0 then pick = q end
+          end
+        end
+        local t = table.remove(e, pick)
+        count = count - 1
+        local dx, dy = t[1] - ci, t[2] - cj
+        if not (pdx == dx and pdy == dy) or links[key(ci, cj)] then
+          xs[#xs + 1], ys[#ys + 1] = PX[key(ci, cj)], PY[key(ci, cj)]
+        end
+        ci, cj, pdx, pdy = t[1], t[2], dx, dy
+      until ci == start[1] and cj == start[2]
+      local a = 0
+      for k = 1, #xs do
+        local k2 = k % #xs + 1
+        a = a + xs[k] * ys[k2] - xs[k2] * ys[k]
+      end
+      if a > 0 and #xs >= 3 then   -- outer outlines run counter-clockwise
+        fields[#fields + 1] = { species = g.species[sp], kind = "aqueous", x = xs, y = ys, area = a / 2 }
+      end
+    end
+  end
+  table.sort(fields, function(p, q) return p.area > q.area end)
+  local labelled = {}   -- one label per species, on its largest piece
+  for _, f in ipairs(fields) do
+    if labelled[f.species] then f.label = false else labelled[f.species] = true end
+  end
+  return fields
 end
 
 --- The species of the map at a point, e.g. phlox.locate(map, 7.0, -0.4).
@@ -630,5 +820,13 @@ function phlox.where(opts) return require("phlox.diagrams").where(opts) end
 function phlox.fractions(opts) return require("phlox.diagrams").fractions(opts) end
 function phlox.solubility(opts) return require("phlox.diagrams").solubility(opts) end
 function phlox.series(opts) return require("phlox.diagrams").series(opts) end
+
+--- A study report: one self-contained HTML page (figures as inline SVG,
+-- tables, data notes, provenance, the caution) and optionally a PDF of the
+-- same.  Options (see stdlib/phlox/report.lua and docs/figures.md): file
+-- (".html"), pdf (".pdf"), title, summary, sections = { { heading, text,
+-- figures = { { figure, caption } }, tables = { { caption, columns, rows } } } },
+-- notes, conditions.
+function phlox.report(opts) return require("phlox.report").write(opts) end
 
 return phlox

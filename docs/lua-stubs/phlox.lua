@@ -154,6 +154,17 @@ function phlox.electrodes() end
 ---@return any
 function phlox.fractions(opts) end
 
+--- Field polygons of a rigorous map: each node stands for the cell of the
+--- grid around it (half a step each way, clipped to the window); cells with
+--- one label are joined and their outline traced counter-clockwise, its
+--- steps smoothed (below).  A
+--- species in several separate pieces gives several fields; an enclosed
+--- hole is left to the field drawn inside it.  Nodes where the solver
+--- failed (label 0) belong to no field.
+---@param g any
+---@return any
+function phlox.grid_fields(g) end
+
 --- A rigorous map: the speciation solver at every node of a pH-E grid
 --- (mass balance of the element and of a ligand, activity coefficients,
 --- solids), boundaries traced between nodes and refined by bisection.  A
@@ -166,11 +177,26 @@ function phlox.fractions(opts) end
 ---                    ligand_redox = {...}, allow_inhibited = false,
 ---                    failed_boundaries = false }  -- draw boundaries next to failed solves
 --- Returns a map table with `boundaries` (polylines between named species),
---- `fields` = {} (no polygons: draw it with phlox.plot.overlay next to an
---- exact map), `labels` (node labels), `species` and solver statistics.
+--- `fields` (the nodes' cells joined per species, their steps smoothed, so
+--- phlox.plot.map fills them like an exact map; see phlox.grid_fields),
+--- `water` and `neutral_pH`, `labels` (node labels), `species` and solver
+--- statistics.
 ---@param opts phlox.grid_map.opts
 ---@return any
 function phlox.grid_map(opts) end
+
+--- The ligand groups whose formula appears in a text, in name order:
+--- phlox.groups_in("Au(CN)2^- + e- = Au(s) + 2 CN^-") -> { "CN" }.  A group
+--- name followed by a lower-case letter is another symbol ("CNo" is not CN).
+---@param text string
+---@return any
+function phlox.groups_in(text) end
+
+--- The stamp line naming species whose log K is held at 25 C (each formula
+--- typeset) and its short form (printed by short stamps, phlox.plot).
+---@param held any
+---@return any
+function phlox.held_stamp_line(held) end
 
 --- A species library: the built-in H/O species plus the element files named.
 ---   phlox.library { "Fe", "Cl", user = { "my/Fe-extra.lua" } }
@@ -216,6 +242,16 @@ function phlox.merge_notes(results, skip) end
 ---@param rel string
 ---@return any
 function phlox.read_library_file(rel) end
+
+--- A study report: one self-contained HTML page (figures as inline SVG,
+--- tables, data notes, provenance, the caution) and optionally a PDF of the
+--- same.  Options (see stdlib/phlox/report.lua and docs/figures.md): file
+--- (".html"), pdf (".pdf"), title, summary, sections = { { heading, text,
+--- figures = { { figure, caption } }, tables = { { caption, columns, rows } } } },
+--- notes, conditions.
+---@param opts table
+---@return any
+function phlox.report(opts) end
 
 --- The folders searched before the built-in library, in order.
 ---@return any

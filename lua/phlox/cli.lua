@@ -69,7 +69,10 @@ local function elements_of(text)
       end
     end
   end
-  for _, s in ipairs(list) do
+  local elements = #list
+  for _, g in ipairs(require("phlox").groups_in(text)) do list[#list + 1] = g end -- cyanide: CN.lua
+  for k = 1, elements do
+    local s = list[k]
     if not core.embedded_source("stdlib/elements/" .. s .. ".lua") then
       local phlox = require "phlox"
       local t = phlox.read_library_file("elements/" .. s .. ".lua")

@@ -322,9 +322,10 @@ void pxd_check_file(pxd_file *f, const px_db *known)
         if (px_formula_parse(x->raw, &fm) != PX_OK) {
             pxd_report(f, PX_DATA_ERROR, x->line, x->raw, "exclude", "malformed formula");
             continue;
-        } else if (known && !px_db_find(known, fm.text)) {
-            pxd_report(f, PX_DATA_WARNING, x->line, x->raw, "exclude",
-                       "not in the database: nothing to exclude");
+        } else if (known && !find_in_file(f, fm.text)) {
+            char why[512]; /* "ZnO(s)" names the only solid of that formula; else an error with the candidates */
+            if (px_db_resolve(known, x->raw, NULL, why, sizeof why) != PX_OK)
+                pxd_report(f, PX_DATA_ERROR, x->line, x->raw, "exclude", "%s", why);
         }
         if (find_in_file(f, fm.text))
             pxd_report(f, PX_DATA_WARNING, x->line, x->raw, "exclude",

@@ -9,6 +9,7 @@
 #include "core/status.h"
 #include "lua/embedded.h"
 #include <math.h>
+#include <stdio.h>
 #include <stdlib.h>
 #include <string.h>
 
@@ -79,9 +80,12 @@ static int commit(px_db *db, pxd_file *f)
 {
     if (f->opt->user_file) {
         for (size_t i = 0; i < f->n_ex; i++) {
-            px_formula fm;
-            if (px_formula_parse(f->ex[i].raw, &fm) == PX_OK && px_db_find(db, fm.text))
-                px_db_remove(db, fm.text);
+            long k;
+            if (px_db_resolve(db, f->ex[i].raw, &k, NULL, 0) == PX_OK) {
+                char text[PX_NAME_MAX];
+                snprintf(text, sizeof text, "%s", px_db_get(db, (size_t)k)->f.text);
+                px_db_remove(db, text);
+            }
         }
         for (size_t i = 0; i < f->n; i++) {
             if (f->e[i].skip) continue;
@@ -265,17 +269,37 @@ size_t px_data_list_write(const px_db *db, const char *element, FILE *out)
         int has = !z;
         for (int j = 0; j < sp->f.n_elem && !has; j++) has = sp->f.elem[j].z == z;
         if (!has) continue;
-        char val[40];
-        if (sp->model == PX_MODEL_LOGK)
+        char val[64];
+        if (sp->model == PX_MODEL_LOGK && isfinite(sp->unc.logK))
+            snprintf(val, sizeof val, "log K %.3f +- %.2g", sp->logk.logK25, sp->unc.logK);
+        else if (sp->model == PX_MODEL_LOGK)
             snprintf(val, sizeof val, "log K %.3f", sp->logk.logK25);
+        else if (isfinite(sp->dGf) && isfinite(sp->unc.G))
+            snprintf(val, sizeof val, "G %.3f +- %.2g kJ/mol", sp->dGf / 1000.0, sp->unc.G / 1000.0);
         else if (isfinite(sp->dGf))
             snprintf(val, sizeof val, "G %.3f kJ/mol", sp->dGf / 1000.0);
         else
             snprintf(val, sizeof val, "-");
+        /* the other published uncertainties, where the source gives them */
+        char unc[96] = "";
+        size_t used = 0;
+        const double u[] = {sp->unc.H / 1000.0, sp->unc.S, sp->model == PX_MODEL_LOGK ? NAN : sp->unc.logK,
+                            sp->model == PX_MODEL_LOGK ? sp->unc.G / 1000.0 : NAN};
+        const char *const un[] = {"H +- %.2g kJ/mol", "S +- %.2g J/(mol K)", "log K +- %.2g", "G +- %.2g kJ/mol"};
+        for (int q = 0; q < 4; q++) {
+            if (!isfinite(u[q]) || used >= sizeof unc) continue;
+            int w = snprintf(unc + used, sizeof unc - used, used ? ", " : " [");
+            if (w > 0) used += (size_t)w;
+            if (used < sizeof unc) {
+                w = snprintf(unc + used, sizeof unc - used, un[q], u[q]);
+                if (w > 0) used += (size_t)w;
+            }
+        }
+        if (used && used + 1 < sizeof unc) strcat(unc, "]");
         char where[300];
         if (sp->file) snprintf(where, sizeof where, "%s:%d", sp->file, sp->line);
         else snprintf(where, sizeof where, "(built in)");
-        fprintf(out, "%-24s %-5s %-22s %s  %s%s\n", sp->f.text, model_name(sp->model), val, where,
+        fprintf(out, "%-24s %-5s %-22s%s %s  %s%s\n", sp->f.text, model_name(sp->model), val, unc, where,
                 sp->source ? sp->source : "", sp->estimated ? " [HKF estimated]" : "");
         k++;
     }

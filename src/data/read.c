@@ -402,18 +402,23 @@ static void read_logk(ctx *c, int t, pxd_entry *e, double eu)
         REPORT(c, PX_DATA_WARNING, "dH", "dH is not used when logK_T is given");
 }
 
-static void read_uncertainty(ctx *c, int t)
+/* uncertainty = { G, H, S, logK }: the source's +-, in the species' units */
+static void read_uncertainty(ctx *c, int t, double eu, double su, px_uncertainty *u)
 {
     if (get_table(c, t, "uncertainty", "uncertainty") != 1) return;
     int p = lua_gettop(c->L);
     static const char *const k[] = {"G", "H", "S", "logK", NULL};
+    double *dst[] = {&u->G, &u->H, &u->S, &u->logK};
+    const double factor[] = {eu, eu, su, 1.0};
     check_keys(c, p, k, "uncertainty");
     for (int i = 0; k[i]; i++) {
         char field[24];
         double v;
         snprintf(field, sizeof field, "uncertainty.%s", k[i]);
-        if (get_num(c, p, k[i], field, 1.0, &v) == 1 && v < 0)
-            REPORT(c, PX_DATA_ERROR, field, "an uncertainty must not be negative");
+        if (get_num(c, p, k[i], field, factor[i], &v) == 1) {
+            if (v < 0) REPORT(c, PX_DATA_ERROR, field, "an uncertainty must not be negative");
+            else *dst[i] = v;
+        }
     }
     lua_pop(c->L, 1);
 }
@@ -434,6 +439,7 @@ static void read_species(ctx *c, int t, int index)
     e->index = index;
     e->sp.dGf = e->sp.dHf = e->sp.S = NAN;
     e->sp.logk.dH = NAN;
+    e->sp.unc.G = e->sp.unc.H = e->sp.unc.S = e->sp.unc.logK = NAN;
     e->sp.Tmin = f->Tmin;
     e->sp.Tmax = f->Tmax;
     c->e = e;
@@ -513,7 +519,7 @@ static void read_species(ctx *c, int t, int index)
     if (ty != LUA_TNIL && ty != LUA_TSTRING)
         REPORT(c, PX_DATA_ERROR, "note", "expected a string, got %s", lua_typename(L, ty));
     lua_pop(L, 1);
-    read_uncertainty(c, t);
+    read_uncertainty(c, t, eu, su, &e->sp.unc);
     ty = rawfield(L, t, "known_mismatch");
     if (ty == LUA_TSTRING && lua_rawlen(L, -1) > 0) e->known_mismatch = 1;
     else if (ty != LUA_TNIL)

@@ -5,6 +5,7 @@
 #include "core/constants.h"
 #include "core/status.h"
 #include "thermo/basis.h"
+#include <ctype.h>
 #include <math.h>
 #include <stdarg.h>
 #include <stdio.h>
@@ -43,12 +44,60 @@ double px_emap_davies(double A, int z, double I)
 }
 
 /* Elements of f are all within {H, O, a, b}. */
-static int made_of(const px_formula *f, int a, int b)
+/* A polyatomic ligand ("CN", "SCN"): its first element stands for the
+ * ligand, the others travel with it in fixed ratio, so every species of the
+ * ligand keeps the group intact (cyanide stays cyanide: its oxidation to
+ * carbonate and nitrogen species is left out, the metastable convention of
+ * cyanide diagrams; docs/diagrams.md). */
+#define LIG_MAX_ELEM 4
+typedef struct ligand_group {
+    int z;                   /* the ligand's first element, 0 without ligand */
+    int n_extra;
+    int extra[LIG_MAX_ELEM]; /* companion elements */
+    double ratio[LIG_MAX_ELEM]; /* atoms of extra[k] per atom of z */
+} ligand_group;
+
+/* "Cl", "S", "CN", "SCN", "C2N2": element symbols with optional counts. */
+static int ligand_parse(const char *s, ligand_group *g)
 {
-    for (int i = 0; i < f->n_elem; i++) {
-        int z = f->elem[i].z;
-        if (z != Z_H && z != Z_O && z != a && !(b && z == b)) return 0;
+    memset(g, 0, sizeof *g);
+    double first = 0;
+    while (*s) {
+        char sym[3] = {0, 0, 0};
+        if (!isupper((unsigned char)*s)) return PX_EINVAL;
+        sym[0] = *s++;
+        if (islower((unsigned char)*s)) sym[1] = *s++;
+        double n = 0;
+        while (isdigit((unsigned char)*s)) n = 10 * n + (*s++ - '0');
+        if (n == 0) n = 1;
+        int z = px_element_z(sym);
+        if (!z || z == Z_H || z == Z_O) return PX_EINVAL;
+        if (!g->z) {
+            g->z = z;
+            first = n;
+            continue;
+        }
+        if (z == g->z || g->n_extra == LIG_MAX_ELEM) return PX_EINVAL;
+        for (int k = 0; k < g->n_extra; k++)
+            if (g->extra[k] == z) return PX_EINVAL;
+        g->extra[g->n_extra] = z;
+        g->ratio[g->n_extra++] = n / first;
     }
+    return g->z ? PX_OK : PX_EINVAL;
+}
+
+/* f is made of H, O, element a and optionally b only; where a or b is the
+ * ligand group's element, its companions may appear, in the group's ratio. */
+static int made_of(const px_formula *f, int a, int b, const ligand_group *g)
+{
+    int lig = g && g->z && (a == g->z || b == g->z);
+    for (int i = 0; i < f->n_elem; i++) {
+        int z = f->elem[i].z, ok = z == Z_H || z == Z_O || z == a || (b && z == b);
+        for (int k = 0; lig && k < g->n_extra && !ok; k++) ok = z == g->extra[k];
+        if (!ok) return 0;
+    }
+    for (int k = 0; lig && k < g->n_extra; k++)
+        if (fabs(px_formula_count(f, g->extra[k]) - g->ratio[k] * px_formula_count(f, g->z)) > 1e-9) return 0;
     return 1;
 }
 
@@ -76,9 +125,27 @@ typedef struct ctx {
     double RT, T;
     double G_h2o, G_h, G_e;
     const px_species *h2o, *hplus, *elec;
+    ligand_group lig;
+    px_ligand_states ls; /* o->ligands, less the rules of a ligand group's elements */
     char *msg;
     size_t msglen;
 } ctx;
+
+/* f without the ligand group's companion elements: they travel with the
+ * group's first element in fixed ratio, so balancing that element balances
+ * them (made_of checked the ratio). */
+static px_formula strip_group(const ctx *c, const px_formula *f)
+{
+    px_formula r = *f;
+    int n = 0;
+    for (int i = 0; i < f->n_elem; i++) {
+        int extra = 0;
+        for (int k = 0; k < c->lig.n_extra; k++) extra |= f->elem[i].z == c->lig.extra[k];
+        if (!extra) r.elem[n++] = f->elem[i];
+    }
+    r.n_elem = n;
+    return r;
+}
 
 static double axis_value(const ctx *c, px_emap_axis ax)
 {
@@ -91,12 +158,13 @@ static double axis_value(const ctx *c, px_emap_axis ax)
 static int phi_of(const ctx *c, const cand *cd, int z, const px_species *ref, double G_ref,
                   const cand *lig, px_diagram_species *out)
 {
-    const px_formula *basis[5] = {&c->h2o->f, &c->hplus->f, &c->elec->f, &ref->f,
-                                  lig ? &lig->sp->f : NULL};
+    px_formula fref = strip_group(c, &ref->f), flig = lig ? strip_group(c, &lig->sp->f) : fref,
+               fcd = strip_group(c, &cd->sp->f);
+    const px_formula *basis[5] = {&c->h2o->f, &c->hplus->f, &c->elec->f, &fref, lig ? &flig : NULL};
     size_t nb = lig ? 5 : 4;
     double nu[5];
     char why[160];
-    int st = px_basis_formation(basis, nb, &cd->sp->f, nu, why, sizeof why);
+    int st = px_basis_formation(basis, nb, &fcd, nu, why, sizeof why);
     if (st != PX_OK)
         return px_fail(c->msg, c->msglen, st, "%s: cannot be formed from the basis: %s",
                     cd->sp->f.text, why);
@@ -135,13 +203,14 @@ static int phi_of(const ctx *c, const cand *cd, int z, const px_species *ref, do
 static void reaction_text(const ctx *c, const px_species *a, const px_species *b, int z,
                           const px_species *ref, const px_species *lig, char *buf, size_t n)
 {
-    const px_formula *basis[5] = {&c->h2o->f, &c->hplus->f, &c->elec->f, &ref->f,
-                                  lig ? &lig->f : NULL};
+    px_formula fref = strip_group(c, &ref->f), flig = lig ? strip_group(c, &lig->f) : fref,
+               fa = strip_group(c, &a->f), fb = strip_group(c, &b->f);
+    const px_formula *basis[5] = {&c->h2o->f, &c->hplus->f, &c->elec->f, &fref, lig ? &flig : NULL};
     size_t nb = lig ? 5 : 4;
     double na[5], nbv[5];
     buf[0] = '\0';
-    if (px_basis_formation(basis, nb, &a->f, na, NULL, 0) != PX_OK ||
-        px_basis_formation(basis, nb, &b->f, nbv, NULL, 0) != PX_OK)
+    if (px_basis_formation(basis, nb, &fa, na, NULL, 0) != PX_OK ||
+        px_basis_formation(basis, nb, &fb, nbv, NULL, 0) != PX_OK)
         return;
     double ma = px_formula_count(&a->f, z), mb = px_formula_count(&b->f, z);
     /* a/ma + sum d_i B_i = b/mb  with d = nu_b/mb - nu_a/ma */
@@ -220,11 +289,11 @@ static int collect(const ctx *c, px_thermo_ws *ws, const px_db *db, int z, int z
         const px_species *sp = px_db_get(db, i);
         const px_formula *f = &sp->f;
         if (f->state == PX_STATE_E || px_formula_count(f, z) <= 0) continue;
-        if (!made_of(f, z, zl)) continue;
+        if (!made_of(f, z, zl, &c->lig)) continue;
         if (other && px_formula_count(f, other) > 0) continue;
-        if (px_formula_listed(o->exclude, o->n_exclude, f->text)) continue;
-        if (!px_ligand_allows(&o->ligands, db, f, for_ligand ? other : z)) continue;
-        if (!for_ligand && o->n_only > 0 && !px_formula_listed(o->only, o->n_only, f->text)) continue;
+        if (px_db_listed(db, o->exclude, o->n_exclude, (long)i)) continue;
+        if (!px_ligand_allows(&c->ls, db, f, for_ligand ? other : z)) continue;
+        if (!for_ligand && o->n_only > 0 && !px_db_listed(db, o->only, o->n_only, (long)i)) continue;
         cand *cd = &v[k];
         cd->db = (long)i;
         cd->sp = sp;
@@ -237,7 +306,7 @@ static int collect(const ctx *c, px_thermo_ws *ws, const px_db *db, int z, int z
         if (f->state == PX_STATE_AQ) {
             double a = for_ligand ? o->ligand_activity : o->activity;
             for (size_t q = 0; q < o->n_act; q++)
-                if (px_formula_listed(&o->act_species[q], 1, f->text)) a = o->act_values[q];
+                if (px_db_listed(db, &o->act_species[q], 1, (long)i)) a = o->act_values[q];
             if (!(a > 0) || !isfinite(a)) {
                 free(v);
                 return px_fail(c->msg, c->msglen, PX_EINVAL, "%s: activity must be positive", f->text);
@@ -386,15 +455,38 @@ int px_emap_build(px_thermo_ws *ws, const px_db *db, const char *element,
         o->yaxis > PX_AXIS_LOGA)
         return px_fail(msg, msglen, PX_EINVAL, "bad temperature, pressure or axes");
     int zM = px_element_z(element);
-    int zL = o->ligand ? px_element_z(o->ligand) : 0;
+    ligand_group lg;
+    memset(&lg, 0, sizeof lg);
     if (!zM || zM == Z_H || zM == Z_O) return px_fail(msg, msglen, PX_EINVAL, "unknown element '%s'", element);
-    if (o->ligand && (!zL || zL == zM || zL == Z_H || zL == Z_O))
-        return px_fail(msg, msglen, PX_EINVAL, "bad ligand element '%s'", o->ligand);
+    int bad_lig = o->ligand && ligand_parse(o->ligand, &lg) != PX_OK;
+    for (int k = 0; !bad_lig && k < lg.n_extra; k++) bad_lig = lg.extra[k] == zM;
+    if (bad_lig || (o->ligand && lg.z == zM))
+        return px_fail(msg, msglen, PX_EINVAL,
+                       "bad ligand '%s' (an element symbol such as \"Cl\", or a group such as \"CN\")", o->ligand);
+    int zL = lg.z;
     if ((o->xaxis == PX_AXIS_LOGA || o->yaxis == PX_AXIS_LOGA) && !zL)
         return px_fail(msg, msglen, PX_EINVAL, "a log a(L) axis needs a ligand element");
 
-    ctx c = {o, PX_R * o->T, o->T, 0, 0, 0, NULL, NULL, NULL, msg, msglen};
-    int st = basis_species(&c, ws, db);
+    /* every named species must exist: a misspelt exclude is an error, not a no-op */
+    int st = px_db_check_list(db, "exclude", o->exclude, o->n_exclude, msg, msglen);
+    if (st == PX_OK) st = px_db_check_list(db, "only", o->only, o->n_only, msg, msglen);
+    if (st == PX_OK) st = px_db_check_list(db, "activities", o->act_species, o->n_act, msg, msglen);
+    if (st != PX_OK) return st;
+    /* a ligand group keeps its own form (cyanide stays cyanide): it replaces
+     * the oxidation-state rules of its elements (C as carbonate, N as
+     * ammonia), which would otherwise exclude every species of the group */
+    px_ligand_states ls = o->ligands;
+    if (lg.n_extra > 0) {
+        size_t kept = 0;
+        for (size_t i = 0; i < ls.n; i++) {
+            int in_group = ls.rule[i].z == lg.z;
+            for (int k = 0; k < lg.n_extra; k++) in_group |= ls.rule[i].z == lg.extra[k];
+            if (!in_group) ls.rule[kept++] = ls.rule[i];
+        }
+        ls.n = kept;
+    }
+    ctx c = {o, PX_R * o->T, o->T, 0, 0, 0, NULL, NULL, NULL, lg, ls, msg, msglen};
+    st = basis_species(&c, ws, db);
     if (st != PX_OK) return st;
 
     px_emap *m = calloc(1, sizeof *m);

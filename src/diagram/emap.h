@@ -38,7 +38,8 @@ typedef struct px_emap_options {
     double ligand_activity;       /* total of L, on the log a(L) axis it varies */
     double gas_log_f;             /* log10 fugacity of gaseous species */
     double ionic_strength;        /* > 0: Davies activity coefficients at T */
-    const char *ligand;           /* ligand element symbol, or NULL */
+    const char *ligand;           /* ligand element symbol ("Cl"), or a group whose
+                                     first element stands for it ("CN"), or NULL */
     const char *const *exclude;   /* formulas left out (metastable maps) */
     size_t n_exclude;
     const char *const *only;      /* if n_only > 0: just these species of M */

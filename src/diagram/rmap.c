@@ -201,7 +201,7 @@ int px_rmap_build(px_thermo_ws *ws, const px_db *db, const char *element, const 
      * not species of the element), and so does the rigorous one. */
     static const char *const water_redox[] = {"O2(aq)", "H2(aq)", "H2O2(aq)"};
     for (size_t i = 0; i < sizeof water_redox / sizeof water_redox[0]; i++)
-        so.exclude[so.n_exclude++] = water_redox[i];
+        if (px_db_find(db, water_redox[i])) so.exclude[so.n_exclude++] = water_redox[i];
     for (size_t i = 0; i < o->n_exclude && so.n_exclude < PX_SPEC_MAX_ITEMS; i++)
         so.exclude[so.n_exclude++] = o->exclude[i];
     px_spec *s;

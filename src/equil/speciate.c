@@ -191,6 +191,14 @@ int px_spec_build(px_thermo_ws *ws, const px_db *db, const px_spec_options *o, p
     if (msg && msglen) msg[0] = '\0';
     if (o->n_totals == 0 || o->n_totals > PX_SPEC_MAX_ITEMS - 3)
         return px_fail(msg, msglen, PX_EINVAL, "give between 1 and %d element totals", PX_SPEC_MAX_ITEMS - 3);
+    /* every named species must exist: a misspelt exclude is an error, not a no-op */
+    int st0 = px_db_check_list(db, "exclude", o->exclude, o->n_exclude, msg, msglen);
+    if (st0 == PX_OK) st0 = px_db_check_list(db, "suppress", o->suppress, o->n_suppress, msg, msglen);
+    if (st0 == PX_OK) st0 = px_db_check_list(db, "fixed", o->fixed, o->n_fixed, msg, msglen);
+    if (st0 == PX_OK) st0 = px_db_check_list(db, "fugacities", o->gas, o->n_gases, msg, msglen);
+    if (st0 == PX_OK && o->redox_mode == PX_SPEC_REDOX_GAS)
+        st0 = px_db_check_list(db, "redox_gas", &o->redox_gas, 1, msg, msglen);
+    if (st0 != PX_OK) return st0;
     px_spec *s = calloc(1, sizeof *s);
     if (!s) return PX_ENOMEM;
     size_t nb = o->n_totals + 3;
@@ -226,7 +234,26 @@ int px_spec_build(px_thermo_ws *ws, const px_db *db, const px_spec_options *o, p
             goto fail;
         }
         s->elem_z[k + 3] = z;
-        bidx[k + 3] = o->basis[k] ? px_db_index(db, o->basis[k]) : choose_basis(db, z, &o->ligands);
+        if (o->basis[k]) {
+            char why[400];
+            if (px_db_resolve(db, o->basis[k], &bidx[k + 3], why, sizeof why) != PX_OK) {
+                st = px_fail(msg, msglen, PX_ENOTFOUND, "basis of %s: %s", o->element[k], why);
+                goto fail;
+            }
+            /* each element's total is carried by its basis species alone: one
+             * that holds another element (CN^- for C) would hide that
+             * element's atoms from its own balance */
+            const px_formula *bfk = &px_db_get(db, (size_t)bidx[k + 3])->f;
+            for (int e = 0; e < bfk->n_elem; e++)
+                if (bfk->elem[e].z != z && bfk->elem[e].z != Z_H && bfk->elem[e].z != Z_O) {
+                    st = px_fail(msg, msglen, PX_EINVAL,
+                                 "basis of %s: %s holds %s too; a basis species may hold one element besides "
+                                 "H and O", o->element[k], bfk->text, px_element_symbol(bfk->elem[e].z));
+                    goto fail;
+                }
+        } else {
+            bidx[k + 3] = choose_basis(db, z, &o->ligands);
+        }
         if (bidx[k + 3] < 0) {
             st = px_fail(msg, msglen, PX_ENOTFOUND, "no aqueous basis species for %s%s%s", o->element[k],
                       o->basis[k] ? ": " : "", o->basis[k] ? o->basis[k] : "");
@@ -261,7 +288,7 @@ int px_spec_build(px_thermo_ws *ws, const px_db *db, const px_spec_options *o, p
             for (size_t i = 3; i < nb; i++) in |= s->elem_z[i] == z;
             ok = in;
         }
-        if (!ok || px_formula_listed(o->exclude, o->n_exclude, sp->f.text)) continue;
+        if (!ok || px_db_listed(db, o->exclude, o->n_exclude, (long)d)) continue;
         if (!px_ligand_allows(&o->ligands, db, &sp->f, 0)) continue; /* ligand kept in its form */
         if (sp->f.state == PX_STATE_L) continue; /* other liquids than water: not modelled */
         double *nu = s->nu + m * nb;
@@ -283,7 +310,7 @@ int px_spec_build(px_thermo_ws *ws, const px_db *db, const px_spec_options *o, p
         case PX_STATE_L: es.phase = PX_EQUIL_WATER; break;
         default: es.phase = PX_EQUIL_AQ; break;
         }
-        if (es.phase == PX_EQUIL_SOLID && (!o->solids || px_formula_listed(o->suppress, o->n_suppress, sp->f.text) ||
+        if (es.phase == PX_EQUIL_SOLID && (!o->solids || px_db_listed(db, o->suppress, o->n_suppress, s->db_index[j]) ||
                                            (!o->allow_inhibited && px_inhibited_at(&sp->f, o->T))))
             es.flags |= PX_EQUIL_SUPPRESSED;
         st = px_equil_system_set_species(s->sys, j, &es);
@@ -310,7 +337,7 @@ int px_spec_build(px_thermo_ws *ws, const px_db *db, const px_spec_options *o, p
     case PX_SPEC_REDOX_GAS: {
         long g = -1;
         for (size_t j = nb; j < m; j++)
-            if (px_formula_listed(&o->redox_gas, 1, px_db_get(db, (size_t)s->db_index[j])->f.text)) g = (long)j;
+            if (px_db_listed(db, &o->redox_gas, 1, s->db_index[j])) g = (long)j;
         if (g < 0) {
             st = px_fail(msg, msglen, PX_ENOTFOUND, "redox gas '%s' is not among the species",
                       o->redox_gas ? o->redox_gas : "?");
@@ -329,7 +356,7 @@ int px_spec_build(px_thermo_ws *ws, const px_db *db, const px_spec_options *o, p
     for (size_t q = 0; q < o->n_gases; q++) {
         long g = -1;
         for (size_t j = nb; j < m; j++)
-            if (px_formula_listed(&o->gas[q], 1, px_db_get(db, (size_t)s->db_index[j])->f.text)) g = (long)j;
+            if (px_db_listed(db, &o->gas[q], 1, s->db_index[j])) g = (long)j;
         if (g < 0) {
             st = px_fail(msg, msglen, PX_ENOTFOUND, "gas '%s' is not among the species", o->gas[q]);
             goto fail;
@@ -350,7 +377,7 @@ int px_spec_build(px_thermo_ws *ws, const px_db *db, const px_spec_options *o, p
     for (size_t q = 0; q < o->n_fixed; q++) {
         size_t comp = 0;
         for (size_t i = 3; i < nb; i++)
-            if (px_formula_listed(&o->fixed[q], 1, bf[i]->text)) comp = i;
+            if (px_db_listed(db, &o->fixed[q], 1, bidx[i])) comp = i;
         if (!comp) {
             st = px_fail(msg, msglen, PX_EINVAL, "fixed activity: %s is not a basis species", o->fixed[q]);
             goto fail;

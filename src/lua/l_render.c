@@ -248,6 +248,165 @@ static int f_plot_rect(lua_State *L)
     return 4;
 }
 
+/* fig:scale(text, line): font sizes and frame strokes (presets) */
+static int f_scale(lua_State *L)
+{
+    px_figure *f = checkfig(L);
+    status_error(L, px_figure_scale(f, luaL_checknumber(L, 2), luaL_optnumber(L, 3, 1.0)),
+                 "figure:scale (text and line scale in [0.3, 4])");
+    return 0;
+}
+
+/* fig:stamp_below([on]): the stamp adds to the height */
+static int f_stamp_below(lua_State *L)
+{
+    px_figure *f = checkfig(L);
+    status_error(L, px_figure_stamp_below(f, lua_isnone(L, 2) || lua_toboolean(L, 2)), "figure:stamp_below");
+    return 0;
+}
+
+/* fig:used(n): only the first n panels are drawn */
+static int f_used(lua_State *L)
+{
+    px_figure *f = checkfig(L);
+    status_error(L, px_figure_panels_used(f, (int)luaL_checkinteger(L, 2)), "figure:used");
+    return 0;
+}
+
+/* fig:line_label(panel, xs, ys, text [, chem, size, colour, at, alt]) */
+static int f_line_label(lua_State *L)
+{
+    px_figure *f = checkfig(L);
+    lua_settop(L, 10); /* the points box goes above every argument */
+    int panel = checkpanel(L, 2);
+    double *x, *y;
+    size_t n = checkpoints(L, 3, 4, &x, &y);
+    const char *text = luaL_checkstring(L, 5);
+    int chem = lua_toboolean(L, 6);
+    double size = luaL_optnumber(L, 7, 7.0);
+    px_rgba c = lua_isnil(L, 8) ? (px_rgba){0, 0, 0, 1} : checkcolor(L, 8);
+    double at = luaL_optnumber(L, 9, 0.5);
+    const char *alt = luaL_optstring(L, 10, NULL);
+    status_error(L, px_figure_line_label(f, panel, x, y, n, text, alt, chem, size, c, at),
+                 "figure:line_label");
+    return 0;
+}
+
+/* fig:meta(key, text): file metadata (SVG, PDF, PNG text chunks) */
+static int f_meta(lua_State *L)
+{
+    px_figure *f = checkfig(L);
+    status_error(L, px_figure_meta(f, luaL_checkstring(L, 2), luaL_checkstring(L, 3)),
+                 "figure:meta (key: 1-79 printable ASCII characters)");
+    return 0;
+}
+
+/* fig:layout() -> { {kind, panel (1-based, 0 = stamp), item, text, placed,
+ * size, angle, x = {4 corners}, y = {...}, ax, ay}, ... } as drawn */
+static int f_layout(lua_State *L)
+{
+    static const char *const kinds[] = {"field", "leader", "line", "text", "legend",
+                                        "tick", "axis", "title", "stamp"};
+    px_figure *f = checkfig(L);
+    px_label_box *b;
+    size_t n;
+    status_error(L, px_figure_layout(f, &b, &n), "figure:layout");
+    lua_createtable(L, (int)n, 0);
+    for (size_t i = 0; i < n; i++) {
+        lua_createtable(L, 0, 12);
+        lua_pushstring(L, kinds[b[i].kind]);
+        lua_setfield(L, -2, "kind");
+        lua_pushinteger(L, b[i].panel + 1);
+        lua_setfield(L, -2, "panel");
+        if (b[i].item >= 0) {
+            lua_pushinteger(L, b[i].item + 1);
+            lua_setfield(L, -2, "item");
+        }
+        lua_pushstring(L, b[i].text);
+        lua_setfield(L, -2, "text");
+        lua_pushboolean(L, b[i].placed);
+        lua_setfield(L, -2, "placed");
+        lua_pushnumber(L, b[i].size);
+        lua_setfield(L, -2, "size");
+        lua_pushnumber(L, b[i].angle);
+        lua_setfield(L, -2, "angle");
+        for (int c = 0; c < 2; c++) {
+            lua_createtable(L, 4, 0);
+            for (int k = 0; k < 4; k++) {
+                lua_pushnumber(L, c ? b[i].qy[k] : b[i].qx[k]);
+                lua_rawseti(L, -2, k + 1);
+            }
+            lua_setfield(L, -2, c ? "y" : "x");
+        }
+        if (b[i].kind == PX_LABEL_LEADER) {
+            lua_pushnumber(L, b[i].ax);
+            lua_setfield(L, -2, "ax");
+            lua_pushnumber(L, b[i].ay);
+            lua_setfield(L, -2, "ay");
+        }
+        lua_rawseti(L, -2, (lua_Integer)i + 1);
+    }
+    px_figure_layout_free(b, n);
+    return 1;
+}
+
+/* fig:bare(panel [, on]): no frame, ticks or titles */
+static int f_bare(lua_State *L)
+{
+    px_figure *f = checkfig(L);
+    status_error(L, px_figure_bare(f, checkpanel(L, 2), lua_isnone(L, 3) || lua_toboolean(L, 3)),
+                 "figure:bare");
+    return 0;
+}
+
+/* core.pdf_pages(path, {fig, ...}) -> true | nil, message: one PDF, a page per figure */
+static int l_pdf_pages(lua_State *L)
+{
+    const char *path = luaL_checkstring(L, 1);
+    luaL_checktype(L, 2, LUA_TTABLE);
+    lua_Integer n = luaL_len(L, 2);
+    luaL_argcheck(L, n >= 1 && n <= 10000, 2, "one figure at least");
+    const px_figure **figs = lua_newuserdatauv(L, (size_t)n * sizeof *figs, 0);
+    for (lua_Integer i = 1; i <= n; i++) {
+        lua_rawgeti(L, 2, i);
+        lfigure *u = luaL_testudata(L, -1, FIGURE_MT);
+        if (!u || !u->fig) luaL_argerror(L, 2, "a list of open figures expected");
+        figs[i - 1] = u->fig;
+        lua_pop(L, 1);
+    }
+    int st = px_figures_save_pdf(figs, (size_t)n, path);
+    if (st != PX_OK) {
+        luaL_pushfail(L);
+        lua_pushfstring(L, "%s: %s", path, px_strerror(st));
+        return 2;
+    }
+    lua_pushboolean(L, 1);
+    return 1;
+}
+
+static void emit_run(void *user, int kind, const char *s)
+{
+    static const char *const kinds[] = {"normal", "sub", "sup"};
+    lua_State *L = user;
+    lua_createtable(L, 0, 2);
+    lua_pushstring(L, kinds[kind]);
+    lua_setfield(L, -2, "kind");
+    lua_pushstring(L, s);
+    lua_setfield(L, -2, "text");
+    lua_rawseti(L, -2, (lua_Integer)luaL_len(L, -2) + 1);
+}
+
+/* core.text_runs(text [, chem]) -> { {kind = "normal"|"sub"|"sup", text}, ... }
+ * as figures typeset it (formulas in braces, or all of it when chem) */
+static int l_text_runs(lua_State *L)
+{
+    const char *text = luaL_checkstring(L, 1);
+    int chem = lua_toboolean(L, 2);
+    lua_newtable(L);
+    px_text_runs(text, chem, emit_run, L);
+    return 1;
+}
+
 static int f_close(lua_State *L)
 {
     lfigure *u = luaL_checkudata(L, 1, FIGURE_MT);
@@ -303,10 +462,14 @@ void px_lua_open_render(lua_State *L)
         {"line", f_line},   {"text", f_text},     {"stamp", f_stamp},
         {"pages", f_pages}, {"save", f_save},     {"render", f_render},
         {"plot_rect", f_plot_rect}, {"close", f_close}, {"hatch", f_hatch},
-        {"legend_patch", f_legend_patch}, {"legend", f_legend}, {NULL, NULL}};
+        {"legend_patch", f_legend_patch}, {"legend", f_legend}, {"scale", f_scale},
+        {"used", f_used}, {"line_label", f_line_label}, {"meta", f_meta},
+        {"layout", f_layout}, {"bare", f_bare},
+        {"stamp_below", f_stamp_below}, {NULL, NULL}};
     static const luaL_Reg funcs[] = {
         {"figure", l_figure}, {"ticks", l_ticks}, {"polygon_pole", l_polygon_pole},
-        {"text_width", l_text_width}, {NULL, NULL}};
+        {"text_width", l_text_width}, {"pdf_pages", l_pdf_pages}, {"text_runs", l_text_runs},
+        {NULL, NULL}};
     luaL_newmetatable(L, FIGURE_MT);
     luaL_newlib(L, methods);
     lua_setfield(L, -2, "__index");

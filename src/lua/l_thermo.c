@@ -211,13 +211,21 @@ static void push_species(lua_State *L, const px_species *sp, long index)
     lua_setfield(L, -2, "estimated");
     setnum(L, "Tmin", sp->Tmin);
     setnum(L, "Tmax", sp->Tmax);
+    /* the source's +- (internal units), only the ones given */
+    lua_createtable(L, 0, 4);
+    setnum(L, "G", sp->unc.G); /* setnum skips NAN */
+    setnum(L, "H", sp->unc.H);
+    setnum(L, "S", sp->unc.S);
+    setnum(L, "logK", sp->unc.logK);
+    lua_setfield(L, -2, "uncertainty");
 }
 
 static const px_species *checkspecies(lua_State *L, ldb *u, int arg, long *index)
 {
     const char *name = luaL_checkstring(L, arg);
-    long i = px_db_index(u->db, name);
-    if (i < 0) luaL_error(L, "no species '%s' in the loaded data", name);
+    long i;
+    char why[512];
+    if (px_db_resolve(u->db, name, &i, why, sizeof why) != PX_OK) luaL_error(L, "%s", why);
     if (index) *index = i;
     return px_db_get(u->db, (size_t)i);
 }
@@ -228,7 +236,7 @@ static int db_species(lua_State *L)
     ldb *u = checkdb(L);
     long i;
     if (lua_type(L, 2) == LUA_TNUMBER) i = (long)luaL_checkinteger(L, 2) - 1;
-    else i = px_db_index(u->db, luaL_checkstring(L, 2));
+    else if (px_db_resolve(u->db, luaL_checkstring(L, 2), &i, NULL, 0) != PX_OK) i = -1;
     const px_species *sp = i >= 0 ? px_db_get(u->db, (size_t)i) : NULL;
     if (!sp) {
         lua_pushnil(L);
@@ -314,12 +322,17 @@ static int db_reaction(lua_State *L)
         lua_pushfstring(L, "reaction '%s': %s", text, msg);
         return 2;
     }
-    for (int i = 0; i < r.n; i++)
-        if (!px_db_find(u->db, r.sp[i].text)) {
+    for (int i = 0; i < r.n; i++) { /* "ZnO(s)" stands for the only solid of that formula */
+        long k;
+        char why[512];
+        if (r.sp[i].state == PX_STATE_E) continue;
+        if (px_db_resolve(u->db, r.sp[i].text, &k, why, sizeof why) != PX_OK) {
             luaL_pushfail(L);
-            lua_pushfstring(L, "reaction '%s': no species '%s' in the loaded data", text, r.sp[i].text);
+            lua_pushfstring(L, "reaction '%s': %s", text, why);
             return 2;
         }
+        r.sp[i] = px_db_get(u->db, (size_t)k)->f;
+    }
     px_reaction_result pr;
     st = px_reaction_props(u->ws, u->db, &r, T, P, &pr);
     if (st != PX_OK) {

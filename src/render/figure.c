@@ -33,6 +33,8 @@ px_figure *px_figure_new(double width, double height, int rows, int cols)
     f->height = height;
     f->rows = rows;
     f->cols = cols;
+    f->used = rows * cols;
+    f->ts = f->ls = 1.0;
     for (int i = 0; i < rows * cols; i++) {
         px_panel *p = &f->panels[i];
         p->x0 = 0, p->x1 = 1, p->y0 = 0, p->y1 = 1;
@@ -45,6 +47,7 @@ static void free_item(px_item *it)
     free(it->x);
     free(it->y);
     free(it->text);
+    free(it->alt);
 }
 
 void px_figure_free(px_figure *f)
@@ -60,6 +63,12 @@ void px_figure_free(px_figure *f)
     }
     for (size_t k = 0; k < f->n_stamp; k++) free(f->stamp[k]);
     free(f->stamp);
+    for (size_t k = 0; k < f->n_meta; k++) {
+        free(f->meta_key[k]);
+        free(f->meta_val[k]);
+    }
+    free(f->meta_key);
+    free(f->meta_val);
     free(f->panels);
     free(f);
 }
@@ -273,5 +282,98 @@ int px_figure_legend_place(px_figure *f, int panel, px_legend_place where)
     px_panel *p = panel_of(f, panel);
     if (!p || where < PX_LEGEND_TOP_RIGHT || where > PX_LEGEND_OUTSIDE) return PX_EINVAL;
     p->legend = where;
+    return PX_OK;
+}
+
+#define PX_SCALE_MIN 0.3 /* sensible bounds of the text and line scales */
+#define PX_SCALE_MAX 4.0
+
+int px_figure_scale(px_figure *f, double text, double line)
+{
+    if (!f || !(text >= PX_SCALE_MIN && text <= PX_SCALE_MAX) ||
+        !(line >= PX_SCALE_MIN && line <= PX_SCALE_MAX))
+        return PX_EINVAL;
+    f->ts = text;
+    f->ls = line;
+    return PX_OK;
+}
+
+int px_figure_panels_used(px_figure *f, int n)
+{
+    if (!f || n < 1 || n > f->rows * f->cols) return PX_EINVAL;
+    f->used = n;
+    return PX_OK;
+}
+
+int px_figure_line_label(px_figure *f, int panel, const double *x, const double *y, size_t n,
+                         const char *text, const char *alt, int chem, double size, px_rgba color,
+                         double at)
+{
+    px_panel *p = panel_of(f, panel);
+    if (!p || !x || !y || n < 2 || !text || !(size > 0 && size < 200) || !valid_color(color) ||
+        !(at >= 0 && at <= 1))
+        return PX_EINVAL;
+    px_item *it = new_item(p);
+    if (!it) return PX_ENOMEM;
+    int st = copy_points(it, x, y, n);
+    if (st != PX_OK) return st;
+    if (!(it->text = dupstr(text)) || (alt && !(it->alt = dupstr(alt)))) {
+        free_item(it);
+        return PX_ENOMEM;
+    }
+    it->kind = PX_ITEM_LINE_LABEL;
+    it->chem = chem != 0;
+    it->width = size;
+    it->color = color;
+    it->at = at;
+    p->n_items++;
+    return PX_OK;
+}
+
+#define PX_META_KEY_MAX 79 /* PNG keyword length limit (PNG spec 11.3.4.2) */
+
+int px_figure_meta(px_figure *f, const char *key, const char *text)
+{
+    if (!f || !key || !text) return PX_EINVAL;
+    size_t kl = strlen(key);
+    if (kl < 1 || kl > PX_META_KEY_MAX || key[0] == ' ' || key[kl - 1] == ' ') return PX_EINVAL;
+    for (size_t i = 0; i < kl; i++)
+        if (key[i] < 0x20 || key[i] > 0x7e) return PX_EINVAL;
+    char *v = dupstr(text);
+    if (!v) return PX_ENOMEM;
+    for (size_t k = 0; k < f->n_meta; k++)
+        if (strcmp(f->meta_key[k], key) == 0) {
+            free(f->meta_val[k]);
+            f->meta_val[k] = v;
+            return PX_OK;
+        }
+    char *kd = dupstr(key);
+    char **nk = realloc(f->meta_key, (f->n_meta + 1) * sizeof *nk);
+    if (nk) f->meta_key = nk;
+    char **nv = nk ? realloc(f->meta_val, (f->n_meta + 1) * sizeof *nv) : NULL;
+    if (nv) f->meta_val = nv;
+    if (!kd || !nk || !nv) {
+        free(kd);
+        free(v);
+        return PX_ENOMEM;
+    }
+    f->meta_key[f->n_meta] = kd;
+    f->meta_val[f->n_meta] = v;
+    f->n_meta++;
+    return PX_OK;
+}
+
+int px_figure_bare(px_figure *f, int panel, int on)
+{
+    px_panel *p = panel_of(f, panel);
+    if (!p) return PX_EINVAL;
+    p->bare = on != 0;
+    return PX_OK;
+}
+
+int px_figure_stamp_below(px_figure *f, int on)
+{
+    if (!f) return PX_EINVAL;
+    f->stamp_below = on != 0;
     return PX_OK;
 }

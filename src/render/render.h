@@ -82,6 +82,76 @@ int px_figure_legend_patch(px_figure *fig, int panel, const char *text, px_rgba 
 int px_figure_legend_place(px_figure *fig, int panel, px_legend_place where);
 /* A line of the stamp at the foot of the figure (conditions, checksums). */
 int px_figure_stamp(px_figure *fig, const char *text);
+/* The stamp goes below the figure's height (the page grows by it) instead
+ * of taking room from the panels; off by default. */
+int px_figure_stamp_below(px_figure *fig, int on);
+
+/* Scale every font size (tick labels, titles, field labels, legend, stamp)
+ * by `text` and the frame and tick strokes by `line` (presets for a journal
+ * column, a slide, ...); both in [0.3, 4], default 1. */
+int px_figure_scale(px_figure *fig, double text, double line);
+/* Only the first n panels are drawn (a grid of 3 maps on 2 x 2 leaves the
+ * fourth cell blank, with no axes); default all. */
+int px_figure_panels_used(px_figure *fig, int n);
+/* A text placed along a polyline (data coordinates of the panel) by the
+ * layout: rotated to the line's direction, on either side of it, at the
+ * clear spot nearest the fraction `at` (0..1) of its length, shrinking to
+ * 80 % of `size` if it must, then trying the shorter `alt` (may be NULL);
+ * left out (the layout says so) when no spot is clear.  The line itself is
+ * drawn by px_figure_line. */
+int px_figure_line_label(px_figure *fig, int panel, const double *x, const double *y, size_t n,
+                         const char *text, const char *alt, int chem, double size, px_rgba color,
+                         double at);
+/* File metadata, one value per key (set again to replace): SVG <metadata>,
+ * PDF document information (Title, Subject = Description + Disclaimer,
+ * Keywords), PNG text chunks (tEXt, or iTXt when not ASCII).  Keys are
+ * 1-79 printable ASCII characters (PNG keyword rules), e.g. "Title",
+ * "Description", "Software", "Disclaimer". */
+int px_figure_meta(px_figure *fig, const char *key, const char *text);
+
+/* What the layout placed: every piece of text with its box.  Kinds: */
+typedef enum px_label_kind {
+    PX_LABEL_FIELD = 0, /* a field label inside its field */
+    PX_LABEL_LEADER,    /* a field label led out by a line (anchor ax, ay) */
+    PX_LABEL_LINE,      /* a px_figure_line_label */
+    PX_LABEL_TEXT,      /* a px_figure_text */
+    PX_LABEL_LEGEND,    /* a legend box (inside or outside the plot) */
+    PX_LABEL_TICK,
+    PX_LABEL_AXIS,      /* axis title */
+    PX_LABEL_TITLE,     /* panel title */
+    PX_LABEL_STAMP      /* a stamp line (panel -1) */
+} px_label_kind;
+
+typedef struct px_label_box {
+    px_label_kind kind;
+    int panel;     /* 0-based, -1 for the stamp */
+    long item;     /* index of the item in its panel (in the order added), or -1 */
+    char *text;    /* owned by the layout */
+    int placed;    /* 0: no clear spot, not drawn (line labels only) */
+    double size;   /* font size, points */
+    double angle;  /* degrees counter-clockwise from the x axis */
+    double qx[4], qy[4];  /* the box's corners, points from the top left of the figure */
+    double ax, ay; /* leader anchor (PX_LABEL_LEADER) */
+} px_label_box;
+
+/* The layout of the whole figure as drawn (not page_per_panel): boxes in
+ * *out (caller frees with px_figure_layout_free). */
+int px_figure_layout(const px_figure *fig, px_label_box **out, size_t *n);
+void px_figure_layout_free(px_label_box *boxes, size_t n);
+
+/* A panel without frame, ticks or titles: its items only, on the whole
+ * cell (pages of text, e.g. a report's; give it axes 0..width, height..0
+ * so data units are points from the top left). */
+int px_figure_bare(px_figure *fig, int panel, int on);
+/* Several figures as the pages of one PDF, each page the size of its
+ * figure; document information from the first figure's metadata.  Written
+ * atomically. */
+int px_figures_save_pdf(const px_figure *const *figs, size_t n, const char *path);
+/* The runs of a text as figures typeset it (see text.h): kind 0 normal,
+ * 1 subscript, 2 superscript, each run's UTF-8 text to `emit`.  Returns
+ * the number of runs. */
+int px_text_runs(const char *text, int chem, void (*emit)(void *user, int kind, const char *s),
+                 void *user);
 
 /* PDF only: put each panel on a page of its own (full page size). */
 int px_figure_page_per_panel(px_figure *fig, int on);

@@ -227,3 +227,14 @@ double px_text_width(const char *text, int chem, double size)
     cairo_destroy(cr);
     return ok ? w : -1;
 }
+
+int px_text_runs(const char *text, int chem, void (*emit)(void *user, int kind, const char *s),
+                 void *user)
+{
+    if (!text || !emit) return 0;
+    run runs[PX_RUN_MAX];
+    int nr = split_text(text, chem, runs);
+    for (int i = 0; i < nr; i++)
+        emit(user, runs[i].kind == RUN_SUB ? 1 : runs[i].kind == RUN_SUP ? 2 : 0, runs[i].text);
+    return nr;
+}

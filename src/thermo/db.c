@@ -3,7 +3,9 @@
  * through a small open-addressing hash table rebuilt when the array
  * changes.  A generation counter changes on every modification so caches
  * held by callers (px_thermo_ws) know when to drop what they computed. */
+#include <ctype.h>
 #include <math.h>
+#include <stdio.h>
 #include <stdlib.h>
 #include <string.h>
 
@@ -229,6 +231,7 @@ void px_species_init(px_species *sp)
     memset(sp, 0, sizeof *sp);
     sp->dGf = sp->dHf = sp->S = NAN;
     sp->logk.dH = NAN;
+    sp->unc.G = sp->unc.H = sp->unc.S = sp->unc.logK = NAN;
     sp->Tmin = 0;
     sp->Tmax = INFINITY;
 }
@@ -269,4 +272,140 @@ int px_db_add_builtins(px_db *db)
     e.source = "convention: e- = H^+ - 1/2 H2(g) (potentials vs SHE at every T, P)";
     strcpy(e.quality, "high");
     return px_db_replace(db, &e);
+}
+
+/* ---- name resolution: formulas as people write them ---- */
+
+/* Same elements, amounts and charge (the state and mineral name aside). */
+static int same_composition(const px_formula *a, const px_formula *b)
+{
+    if (a->n_elem != b->n_elem || a->charge != b->charge)
+        return 0;
+    for (int e = 0; e < a->n_elem; e++)
+        if (a->elem[e].z != b->elem[e].z || fabs(a->elem[e].n - b->elem[e].n) > 1e-9)
+            return 0;
+    return 1;
+}
+
+/* A solid written without a mineral name, "ZnO(s)" or "ZnO(cr)", stands for
+ * any solid of its composition ("(cr)" for any crystalline one). */
+static int generic_solid_matches(const px_formula *q, const px_formula *f)
+{
+    if (q->state != PX_STATE_S || f->state != PX_STATE_S || !same_composition(q, f))
+        return 0;
+    if (!q->form[0])
+        return 1;
+    return !strcmp(q->form, "cr") && strcmp(f->form, "am") != 0;
+}
+
+static int same_text_any_case(const char *a, const char *b)
+{
+    for (; *a && *b; a++, b++)
+        if (tolower((unsigned char)*a) != tolower((unsigned char)*b))
+            return 0;
+    return *a == *b;
+}
+
+/* Which species a failed name may have meant: pass 0 the solids a generic
+ * solid matches, 1 anything of the same composition, 2 the same text in
+ * another letter case (q is NULL when the name does not parse). */
+static int hint_match(int pass, const px_formula *q, const char *name, const px_formula *f)
+{
+    if (f->state == PX_STATE_E)
+        return 0;
+    switch (pass) {
+    case 0: return q && generic_solid_matches(q, f);
+    case 1: return q && same_composition(q, f);
+    default: return same_text_any_case(name, f->text);
+    }
+}
+
+/* "A", "A or B", "A, B or C" of the species hint_match(pass) selects. */
+static int hint_list(const px_db *db, int pass, const px_formula *q, const char *name, char *buf, size_t n)
+{
+    size_t used = 0;
+    int k = 0;
+    buf[0] = '\0';
+    for (size_t j = 0; j < db->n; j++) {
+        if (!hint_match(pass, q, name, &db->sp[j].f))
+            continue;
+        int more = 0;
+        for (size_t j2 = j + 1; j2 < db->n && !more; j2++)
+            more = hint_match(pass, q, name, &db->sp[j2].f);
+        if (used < n) {
+            int w = snprintf(buf + used, n - used, "%s%s", k == 0 ? "" : more ? ", " : " or ",
+                             db->sp[j].f.text);
+            if (w > 0)
+                used += (size_t)w < n - used ? (size_t)w : n - used - 1;
+        }
+        k++;
+    }
+    return k;
+}
+
+int px_db_resolve(const px_db *db, const char *name, long *index, char *msg, size_t msgsize)
+{
+    if (index)
+        *index = -1;
+    if (!db || !name)
+        return PX_EINVAL;
+    char hint[400];
+    px_formula q;
+    char why[160];
+    if (px_formula_parse_msg(name, &q, why, sizeof why)) {
+        if (hint_list(db, 2, NULL, name, hint, sizeof hint) > 0)
+            return px_fail(msg, msgsize, PX_EPARSE, "%s: malformed formula (%s): did you mean %s?", name, why,
+                           hint);
+        return px_fail(msg, msgsize, PX_EPARSE, "%s: malformed formula (%s)", name, why);
+    }
+    long i = find_canon(db, q.text);
+    if (i >= 0) {
+        if (index)
+            *index = i;
+        return PX_OK;
+    }
+    /* a generic solid: the only solid of that composition */
+    size_t n_match = 0;
+    long first = -1;
+    for (size_t k = 0; k < db->n; k++)
+        if (generic_solid_matches(&q, &db->sp[k].f) && !n_match++)
+            first = (long)k;
+    if (n_match == 1) {
+        if (index)
+            *index = first;
+        return PX_OK;
+    }
+    if (n_match > 1) {
+        hint_list(db, 0, &q, name, hint, sizeof hint);
+        return px_fail(msg, msgsize, PX_ENOTFOUND, "%s: %zu solids have this formula: did you mean %s?", name,
+                       n_match, hint);
+    }
+    for (int pass = 1; pass <= 2; pass++)
+        if (hint_list(db, pass, &q, name, hint, sizeof hint) > 0)
+            return px_fail(msg, msgsize, PX_ENOTFOUND, "%s: not in the loaded data: did you mean %s?", name,
+                           hint);
+    return px_fail(msg, msgsize, PX_ENOTFOUND, "%s: not in the loaded data (is its element loaded?)", name);
+}
+int px_db_listed(const px_db *db, const char *const *list, size_t n, long index)
+{
+    for (size_t i = 0; i < n; i++) {
+        long j;
+        if (list && list[i] && px_db_resolve(db, list[i], &j, NULL, 0) == PX_OK && j == index)
+            return 1;
+    }
+    return 0;
+}
+
+int px_db_check_list(const px_db *db, const char *what, const char *const *list, size_t n, char *msg,
+                     size_t msgsize)
+{
+    for (size_t i = 0; i < n; i++) {
+        if (!list || !list[i])
+            continue;
+        char why[512];
+        int st = px_db_resolve(db, list[i], NULL, why, sizeof why);
+        if (st != PX_OK)
+            return px_fail(msg, msgsize, st, "%s: %s", what, why);
+    }
+    return PX_OK;
 }

@@ -96,6 +96,7 @@ static const ref_entropy ref_entropies[] = {
     {35, 152.21 / 2, SRC_CODATA},   /* Br2(l) */
     {36, 164.085, SRC_CODATA},      /* Kr(g) */
     {37, 76.78, SRC_CODATA},        /* Rb(cr) */
+    {38, 55.69, SRC_CODATA},        /* Sr(cr) */
     {42, 28.66, SRC_NBS},           /* Mo(cr) */
     {47, 42.55, SRC_CODATA},        /* Ag(cr) */
     {48, 51.80, SRC_CODATA},        /* Cd(cr) */
@@ -103,6 +104,7 @@ static const ref_entropy ref_entropies[] = {
     {53, 116.14 / 2, SRC_CODATA},   /* I2(cr) */
     {54, 169.685, SRC_CODATA},      /* Xe(g) */
     {55, 85.23, SRC_CODATA},        /* Cs(cr) */
+    {56, 62.8, SRC_NBS},            /* Ba(cr) */
     {74, 32.64, SRC_NBS},           /* W(cr) */
     {79, 47.40, SRC_NBS},           /* Au(cr) */
     {80, 75.90, SRC_CODATA},        /* Hg(l) */

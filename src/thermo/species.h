@@ -72,6 +72,14 @@ typedef struct px_logk_params {
     double k[5];
 } px_logk_params;
 
+/* Published uncertainties (the source's +-), internal units; NAN where the
+ * file gives none.  Kept for propagating boundary uncertainties. */
+typedef struct px_uncertainty {
+    double G, H; /* J/mol */
+    double S;    /* J/(mol K) */
+    double logK; /* log10 units, of the logk reaction as written */
+} px_uncertainty;
+
 typedef struct px_species {
     px_formula f;
     px_model model;
@@ -81,6 +89,7 @@ typedef struct px_species {
     px_hkf_params hkf;
     px_cp_params cp;
     px_logk_params logk;
+    px_uncertainty unc; /* +- of G, H, S, log K; NAN if not given */
     double Tmin, Tmax; /* declared valid range, K */
     int estimated;     /* HKF parameters from correlations, not regressed */
     char quality[16];  /* "high", "medium", "low" or "" */

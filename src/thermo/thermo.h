@@ -96,6 +96,19 @@ size_t px_db_count(const px_db *db);
 const px_species *px_db_get(const px_db *db, size_t i); /* NULL if out of range */
 const px_species *px_db_find(const px_db *db, const char *formula); /* parses+canonicalizes */
 long px_db_index(const px_db *db, const char *formula); /* -1 if absent */
+/* Resolve a formula as a person writes it: the exact (canonical) formula,
+ * else, for a solid written without a mineral name ("ZnO(s)", or "ZnO(cr)"
+ * for a crystalline one), the database's only solid of that composition.
+ * On failure msg says why and lists the candidates: "ZnO(s): 2 solids have
+ * this formula: did you mean ZnO(s,a) or ZnO(s,b)?", or species of the same
+ * composition in another state, or the same text in another letter case.
+ * PX_ENOTFOUND (absent or ambiguous) or PX_EPARSE; index may be NULL. */
+int px_db_resolve(const px_db *db, const char *name, long *index, char *msg, size_t msgsize);
+/* 1 if an entry of list[0..n-1] (NULL entries skipped) resolves to index. */
+int px_db_listed(const px_db *db, const char *const *list, size_t n, long index);
+/* PX_OK if every entry resolves; else the first failure, msg "what: why". */
+int px_db_check_list(const px_db *db, const char *what, const char *const *list, size_t n, char *msg,
+                     size_t msgsize);
 /* Built-ins: H2O(l) (IAPWS-95 model, NBS 1982 dfG/dfH/S) and the electron
  * e- (G(e-) = G(H2,g)/2 - G(H^+) so that H^+ + e- = 1/2 H2(g) has dG = 0 at
  * every T, P).  Other H/O species come from

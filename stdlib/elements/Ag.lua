@@ -15,6 +15,7 @@ return {
     {
       formula = "Ag(s)", model = "cp",
       G = 0, H = 0, S = 42.55,
+      uncertainty = { S = 0.20 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
       cp = { a = 25.35, b = 0, c = 0 },
       V = 10.27,
       source = "S: from memory of " .. CODATA .. " (NBS 42.55); Cp: " .. NBS,
@@ -24,6 +25,7 @@ return {
     {
       formula = "Ag^+", model = "hkf",
       G = 77.096, H = 105.79, S = 73.45,
+      uncertainty = { H = 0.08, S = 0.40 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
       estimate = { Cp = 21.8, V = -0.8 },
       source = "G, H, S: " .. CODATA .. " (dfH and S read in a CODATA-table reprint; dfG = dfH - T dfS, as in phlox's reference gibbs_25C.csv). Cp: " .. NBS .. ". V: from memory of Shock and Helgeson 1988 (weak)",
       quality = "medium",

@@ -29,6 +29,7 @@ return {
     {
       formula = "Al^3+", model = "hkf",
       G = -491.507, H = -538.4, S = -325.0,
+      uncertainty = { H = 1.5, S = 10 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
       hkf = { a1 = -3.3802, a2 = -17.0104, a3 = 14.5797, a4 = -2.0758,
               c1 = 10.7, c2 = -8.06, omega = 2.8711 },
       source = "G, H, S: " .. CODATA .. " (dfH and S read in a CODATA-table reprint; dfG = dfH - T dfS, as in phlox's reference gibbs_25C.csv). HKF parameters: from memory of Shock and Helgeson 1988 (Geochim. Cosmochim. Acta 52, 2009), as in phlox's reference hkf/hkf_parameters.csv",

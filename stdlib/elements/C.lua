@@ -63,6 +63,7 @@ return {
     {
       formula = "CO2(g)", model = "cp",
       G = -394.373, H = -393.51, S = 213.785,
+      uncertainty = { H = 0.13, S = 0.010 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
       cp = { a = 44.225, b = 8.786e-3, c = -8.619e5 },
       source = CODATA .. "; " .. KELLEY .. " (10.57 + 2.10e-3 T - 2.06e5/T^2 cal)",
       quality = "high",
@@ -71,6 +72,7 @@ return {
     {
       formula = "CO(g)", model = "cp",
       G = -137.168, H = -110.53, S = 197.660,
+      uncertainty = { H = 0.17, S = 0.004 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
       cp = { a = 28.409, b = 4.100e-3, c = -0.460e5 },
       source = CODATA .. "; " .. KELLEY .. " (6.79 + 0.98e-3 T - 0.11e5/T^2 cal)",
       quality = "high",
@@ -93,6 +95,7 @@ return {
     {
       formula = "C(s,graphite)", model = "cp",
       G = 0, H = 0, S = 5.74,
+      uncertainty = { S = 0.10 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
       cp = { a = 16.862, b = 4.770e-3, c = -8.535e5 },
       source = "S from memory of Cox, Wagman and Medvedev 1989 (CODATA); " .. KELLEY .. " (4.03 + 1.14e-3 T - 2.04e5/T^2 cal)",
       quality = "high",
@@ -146,11 +149,14 @@ return {
       source = N90 .. " (ordered dolomite); V " .. RH95, quality = "medium",
       note = "disordered dolomite about -16.54; dolomite does not precipitate at 25 C on human time scales" },
     {
-      formula = "MgCO3(s,magnesite)", model = "cp",
-      G = -1029.48, H = -1113.28, S = 65.09,
-      cp = { a = 82.554, b = 52.463e-3, c = -19.866e5 }, V = 28.018,
-      source = RH95 .. "; " .. HDNB .. " (19.731 + 12.539e-3 T - 4.748e5/T^2 cal)", quality = "medium",
-      note = "NBS 1982 magnesite (-1012.1 kJ/mol) is known to be too positive and is not used; log Ksp with NBS ions -8.21, with CODATA ions -8.10 (literature -8.0 to -8.1)",
+      formula = "MgCO3(s,magnesite)", model = "logk",
+      reaction = "MgCO3(s,magnesite) = Mg^2+ + CO3^2-",
+      logK = -8.029, dH = -6.169, units = KCAL,
+      source = N90, quality = "medium",
+      note = "Issue 13: was Robie and Hemingway 1995 magnesite with the SH88 Mg^2+ (log Ksp -8.32), " ..
+             "which made ordered dolomite metastable against calcite + magnesite above about 70 C; " ..
+             "defined now, like dolomite, by the Nordstrom et al. 1990 constant (dolomite = calcite + " ..
+             "magnesite: log K -0.58 at 25 C, falling with T)",
     },
     { formula = "FeCO3(s,siderite)", model = "logk", reaction = "FeCO3(s,siderite) = Fe^2+ + CO3^2-",
       logK = -10.89, dH = -2.48, units = KCAL, V = 29.378,
@@ -185,6 +191,57 @@ return {
       G = -893.6, H = -1051.4, S = 186.2, V = 54.86,
       source = NBS .. "; V " .. RH95, quality = "medium",
       note = "Cp not recalled (loader takes 0; use near 25 C only); azurite left out (values not recalled consistently)",
+    },
+    -- ---------------------------------------------------------------- strontium and barium carbonates (scaling)
+    {
+      formula = "SrCO3(s,strontianite)", model = "logk",
+      reaction = "SrCO3(s,strontianite) = Sr^2+ + CO3^2-",
+      logK = -9.271,
+      logK_T = { 155.0305, 0, -7239.594, -56.58638 },
+      T_range = { 273.15, 363.15 },
+      source = "from memory of Busenberg, Plummer and Parker 1984 (Geochim. Cosmochim. Acta 48, 2021), analytic log K(T), 2-91 C",
+      quality = "high",
+    },
+    {
+      formula = "SrHCO3^+", model = "logk",
+      reaction = "Sr^2+ + HCO3^- = SrHCO3^+",
+      logK = 1.18, logK_T = { -3.248, 0.014867 },
+      T_range = { 273.15, 363.15 },
+      source = "from memory of Busenberg, Plummer and Parker 1984 (Geochim. Cosmochim. Acta 48, 2021)",
+      quality = "medium",
+    },
+    {
+      formula = "SrCO3(aq)", model = "logk",
+      reaction = "Sr^2+ + CO3^2- = SrCO3(aq)",
+      logK = 2.81, logK_T = { -1.019, 0.012826 },
+      T_range = { 273.15, 363.15 },
+      source = "from memory of Busenberg, Plummer and Parker 1984 (Geochim. Cosmochim. Acta 48, 2021)",
+      quality = "medium",
+    },
+    {
+      formula = "BaCO3(s,witherite)", model = "logk",
+      reaction = "BaCO3(s,witherite) = Ba^2+ + CO3^2-",
+      logK = -8.562,
+      logK_T = { 607.642, 0.121098, -20011.25, -236.4948 },
+      T_range = { 273.15, 363.15 },
+      source = "from memory of Busenberg and Plummer 1986 (Geochim. Cosmochim. Acta 50, 2225), analytic log K(T), 5-90 C",
+      quality = "high",
+    },
+    {
+      formula = "BaHCO3^+", model = "logk",
+      reaction = "Ba^2+ + HCO3^- = BaHCO3^+",
+      logK = 0.982, logK_T = { -3.0938, 0.013669 },
+      T_range = { 273.15, 363.15 },
+      source = "from memory of Busenberg and Plummer 1986 (Geochim. Cosmochim. Acta 50, 2225)",
+      quality = "medium",
+    },
+    {
+      formula = "BaCO3(aq)", model = "logk",
+      reaction = "Ba^2+ + CO3^2- = BaCO3(aq)",
+      logK = 2.71, logK_T = { 0.113, 0.008721 },
+      T_range = { 273.15, 363.15 },
+      source = "from memory of Busenberg and Plummer 1986 (Geochim. Cosmochim. Acta 50, 2225)",
+      quality = "medium",
     },
   },
 }

@@ -19,6 +19,7 @@ return {
     {
       formula = "Ca(s)", model = "cp",
       G = 0, H = 0, S = 41.59,
+      uncertainty = { S = 0.40 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
       cp = { a = 25.31, b = 0, c = 0 },
       T_range = { 273.15, 716 },
       source = "S: " .. CODATA .. " (NBS 41.42); Cp: " .. NBS,

@@ -70,6 +70,7 @@ return {
     {
       formula = "CdO(s,monteponite)", model = "cp",
       G = -228.66, H = -258.35, S = 54.8,
+      uncertainty = { H = 0.40, S = 1.5 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
       cp = { a = 43.43, b = 0, c = 0 },
       source = "dfH and S from memory of " .. CODATA .. ", dfG derived here (dfH - T dfS, CODATA element entropies); Cp: " .. NBS,
       quality = "high",

@@ -37,6 +37,7 @@ return {
     {
       formula = "Cl2(g)", model = "cp",
       G = 0, H = 0, S = 223.081,
+      uncertainty = { S = 0.010 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
       cp = { a = 37.028, b = 0.669e-3, c = -2.845e5 },
       T_range = { 273.15, 1500 },
       source = CODATA .. " (S); " .. KELLEY .. " (8.85 + 0.16e-3 T - 0.68e5/T^2 cal)",
@@ -157,6 +158,7 @@ return {
     {
       formula = "AgCl(s,chlorargyrite)", model = "cp",
       G = -109.765, H = -127.01, S = 96.25,
+      uncertainty = { H = 0.05, S = 0.20 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
       cp = { a = 50.79 }, V = 25.73,
       source = CODATA .. " (dfH, S; dfG derived dfH - T dfS); Cp 298 constant from " .. NBS,
       quality = "high",
@@ -187,6 +189,37 @@ return {
       cp = { a = 51.30 }, V = 37.524,
       source = NBS .. "; V from memory of Robie and Hemingway 1995", quality = "high",
       note = "Cp held at its 25 C value",
+    },
+    -- ---------------------------------------------------------------- mercury and gold (issue 13)
+    {
+      formula = "Hg2Cl2(s,calomel)", model = "cp",
+      G = -210.725, H = -265.37, S = 191.6,
+      cp = { a = 102.0 },
+      uncertainty = { H = 0.40, S = 0.8 },
+      source = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values (dfH, S and their +-; " ..
+               "dfG derived here as dfH - T dfS); Cp at 298.15 K from " .. NBS .. ", held constant",
+      quality = "high",
+      note = "Calomel electrode: E0(Hg2Cl2 + 2 e- = 2 Hg + 2 Cl^-) = 0.2680 V with CODATA Cl^-, " ..
+             "0.2687 V with the file's SH88 Cl^-; measured 0.26808 V (recalled).",
+    },
+    {
+      formula = "AuCl2^-", model = "logk",
+      reaction = "Au(s) + 2 Cl^- + H^+ = AuCl2^- + 0.5 H2(g)",
+      logK = -19.507,
+      source = "derived here from E0(AuCl2^- + e- = Au + 2 Cl^-) = 1.154 V, from memory of Bard, " ..
+               "Parsons and Jordan 1985 (Standard Potentials in Aqueous Solution) as printed in the CRC series",
+      quality = "medium",
+      note = "With AuCl4^- below it gives E0(AuCl4^-/AuCl2^-) = 0.926 V, the value printed beside " ..
+             "it. No dH recalled: held at 25 C.",
+    },
+    {
+      formula = "AuCl4^-", model = "logk",
+      reaction = "Au(s) + 4 Cl^- + 3 H^+ = AuCl4^- + 1.5 H2(g)",
+      logK = -50.812,
+      source = "derived here from E0(AuCl4^- + 3 e- = Au + 4 Cl^-) = 1.002 V, from memory of Bard, " ..
+               "Parsons and Jordan 1985 (Standard Potentials in Aqueous Solution) as printed in the CRC series",
+      quality = "medium",
+      note = "No dH recalled: held at 25 C.",
     },
   },
 }

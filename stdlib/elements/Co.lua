@@ -91,5 +91,15 @@ return {
       note = "dfG, dfH and S miss the cycle dfG = dfH - T*dfS by 1.6 kJ/mol (one of them " ..
              "is mis-recalled, probably S). cp: NBS Cp(298.15 K) only.",
     },
+    { -- issue 13
+      formula = "Co(OH)3(s)", model = "logk",
+      reaction = "Co(OH)2(s) + OH^- = Co(OH)3(s) + e-",
+      logK = -2.874,
+      source = "derived here from E0(Co(OH)3 + e- = Co(OH)2 + OH^-) = 0.17 V, from memory of the CRC Handbook electrochemical series (P. Vanysek)",
+      quality = "low",
+      note = "Cobalt(III) hydroxide (CoOOH.H2O) on the file's NBS Co(OH)2. Pourbaix 1966 prints " ..
+             "1.005 - 0.0591 pH for the same couple (recalled), 7 mV from this. Two decimals in " ..
+             "the source. No dH recalled: held at 25 C.",
+    },
   },
 }

@@ -16,6 +16,7 @@ return {
     {
       formula = "K(s)", model = "cp",
       G = 0, H = 0, S = 64.68,
+      uncertainty = { S = 0.20 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
       cp = { a = 29.58, b = 0, c = 0 },
       T_range = { 273.15, 336.53 },
       source = "S: " .. CODATA .. " (NBS 64.18); Cp: " .. NBS,

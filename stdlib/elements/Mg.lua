@@ -19,6 +19,7 @@ return {
     {
       formula = "Mg(s)", model = "cp",
       G = 0, H = 0, S = 32.67,
+      uncertainty = { S = 0.10 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
       cp = { a = 24.89, b = 0, c = 0 },
       V = 13.99,
       source = "S: " .. CODATA .. " (NBS 32.68); Cp: " .. NBS,

@@ -141,5 +141,15 @@ return {
       note = "Amorphous precipitate as listed in the source (not crystalline pyrochroite). " ..
              "Cp not recalled: the loader will take Cp = 0.",
     },
+    { -- issue 13
+      formula = "Mn(OH)2(s,pyrochroite)", model = "logk",
+      reaction = "Mn(OH)2(s,pyrochroite) + 2 H^+ = Mn^2+ + 2 H2O(l)",
+      logK = 15.2,
+      source = BM,
+      quality = "medium",
+      note = "Crystalline Mn(OH)2. The NBS amorphous solid above gives 15.30 with the file's " ..
+             "Mn^2+: the two differ by less than the scatter of the measurements. No dH " ..
+             "recalled: held at 25 C.",
+    },
   },
 }

@@ -3,7 +3,8 @@
 -- for the metal, MoO2, MoO3 and MoO4^2-. No HKF set is recalled for MoO4^2-, so it is
 -- defined by its conventional formation reaction (log K = -dfG/(RT ln 10), dH = dfH).
 -- Left out: H2MoO4(aq) (second protonation constant not recalled with confidence),
--- polymolybdates (Mo7O24^6-, Mo8O26^4-), Mo(III) and Mo(V) species.
+-- polymolybdates (Mo7O24^6-, Mo8O26^4-), Mo(V) species and Mo(III) hydrolysis; Mo^3+
+-- itself is defined from the CRC standard potential (issue 13).
 local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
 
 return {
@@ -49,6 +50,15 @@ return {
       source = "from memory of Smith and Martell, Critical Stability Constants (I = 0, 25 C)",
       quality = "low",
       note = "published values at various ionic strengths spread from about 3.5 to 4.3; at millimolar Mo and low pH polymolybdates (not included) dominate.",
+    },
+    { -- issue 13
+      formula = "Mo^3+", model = "logk",
+      reaction = "Mo(s) + 3 H^+ = Mo^3+ + 1.5 H2(g)",
+      logK = 10.142,
+      source = "derived here from E0(Mo^3+/Mo) = -0.200 V, from memory of the CRC Handbook electrochemical series (P. Vanysek)",
+      quality = "low",
+      note = "Molybdenum(III) in strong acid; no hydrolysis constants recalled. No dH " ..
+             "recalled: held at 25 C.",
     },
   },
 }

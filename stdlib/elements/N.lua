@@ -52,6 +52,7 @@ local species = {
   {
     formula = "NH3(g)", model = "cp",
     G = -16.407, H = -45.94, S = 192.77,
+    uncertainty = { H = 0.35, S = 0.05 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
     cp = { a = 29.748, b = 25.104e-3, c = -1.548e5 },
     source = CODATA .. "; " .. KELLEY .. " (7.11 + 6.00e-3 T - 0.37e5/T^2 cal)",
     quality = "high",
@@ -104,7 +105,6 @@ local species = {
 
 -- ---------------------------------------------------------------- ammine complexes: cumulative log beta_n
 local sets = {
-  { "Cu", "2+", { 4.31, 7.98, 11.02, 13.32 } },
   { "Ni", "2+", { 2.80, 5.04, 6.77, 7.96, 8.71, 8.74 } },
   { "Zn", "2+", { 2.37, 4.81, 7.31, 9.46 } },
   { "Co", "2+", { 2.11, 3.74, 4.79, 5.55, 5.73, 5.11 } },
@@ -114,13 +114,19 @@ for _, s in ipairs(sets) do
   for n, lb in ipairs(s[3]) do
     local q = "medium"
     if s[1] == "Co" and n >= 5 then q = "low" end
-    local note = nil
-    if s[1] == "Cu" and n == 4 then
-      note = BJ_NOTE .. ". Recalled I = 0 values (Smith and Martell) are lower: log beta4 about 11.75; textbooks quote 13.0-13.3"
-    end
-    table.insert(species, ammine(s[1], s[2], n, lb, q, nil, note))
+    table.insert(species, ammine(s[1], s[2], n, lb, q, nil, nil))
   end
 end
+-- Cu(II) ammines at I = 0 and 25 C (issue 13: Bjerrum's 2 mol/L NH4NO3, 30 C
+-- set, log beta 4.31, 7.98, 11.02, 13.32, was used as if at I = 0).
+local CU_I0 = "I = 0, 25 C; Bjerrum 1941 (2 mol/L NH4NO3, 30 C) gives higher values, log beta4 13.32; no dH recalled"
+for n, lb in ipairs({ 4.04, 7.47, 10.27, 11.75 }) do
+  table.insert(species, ammine("Cu", "2+", n, lb, "medium", SM, CU_I0))
+end
+table.insert(species, ammine("Cu", "2+", 5, 11.29, "low",
+  "derived here: log beta4 = 11.75 (" .. SM .. ") plus log K5 = -0.46 (" .. BJERRUM .. ")",
+  "Cu(NH3)5^2+ forms only in concentrated ammonia. The fifth step is Bjerrum's (his medium), " ..
+  "added to the I = 0 beta4: for a neutral ligand the medium shifts one step by a few tenths. No dH recalled"))
 table.insert(species, ammine("Cu", "+", 1, 5.93, "low", SM, "dH not recalled"))
 table.insert(species, ammine("Cu", "+", 2, 10.86, "medium", SM, "dominant Cu(I) species in ammoniacal leach liquors; dH not recalled"))
 table.insert(species, ammine("Ag", "+", 1, 3.31, "medium", SM, "dH not recalled"))

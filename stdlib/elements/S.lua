@@ -54,6 +54,7 @@ return {
     {
       formula = "S(s,rhombic)", model = "cp",
       G = 0, H = 0, S = 32.054,
+      uncertainty = { S = 0.050 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
       cp = { a = 14.979, b = 26.108e-3 },
       T_range = { 273.15, 368.3 },
       source = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values (S); " .. KELLEY .. " (3.58 + 6.24e-3 T cal)",
@@ -63,6 +64,7 @@ return {
     {
       formula = "H2S(g)", model = "cp",
       G = -33.443, H = -20.6, S = 205.81,
+      uncertainty = { H = 0.5, S = 0.05 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
       cp = { a = 32.677, b = 12.385e-3, c = -1.925e5 },
       source = CODATA .. "; " .. KELLEY .. " (7.81 + 2.96e-3 T - 0.46e5/T^2 cal)",
       quality = "high",
@@ -73,6 +75,7 @@ return {
     {
       formula = "SO2(g)", model = "cp",
       G = -300.095, H = -296.81, S = 248.223,
+      uncertainty = { H = 0.20, S = 0.050 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
       cp = { a = 46.191, b = 7.866e-3, c = -7.699e5 },
       source = CODATA .. "; " .. KELLEY .. " (11.04 + 1.88e-3 T - 1.84e5/T^2 cal)",
       quality = "high",
@@ -246,18 +249,23 @@ return {
 
     -- ---------------------------------------------------------------- sulfate salts
     {
-      formula = "CaSO4(s,anhydrite)", model = "cp",
-      G = -1321.79, H = -1434.11, S = 106.7,
-      cp = { a = 70.208, b = 98.742e-3 }, V = 45.94,
-      source = NBS .. "; " .. KELLEY .. " (16.78 + 23.6e-3 T cal); V " .. RH95, quality = "high",
+      formula = "CaSO4(s,anhydrite)", model = "logk",
+      reaction = "CaSO4(s,anhydrite) = Ca^2+ + SO4^2-",
+      logK = -4.36, logK_T = { 197.52, 0, -8669.8, -69.835 },
+      T_range = { 273.15, 373.15 },
+      source = N90 .. ", analytic log K(T) of the measured solubility", quality = "high",
+      note = "Issue 13: was NBS 1982 dfG with the SH88 ions (log Ksp -4.31). Defined by the measured " ..
+             "solubility product so that ions and solid cannot come from different tables. " ..
+             "With the gypsum equation below the gypsum-anhydrite transition in water falls at 58 C.",
     },
     {
-      formula = "CaSO4*2H2O(s,gypsum)", model = "cp",
-      G = -1797.28, H = -2022.63, S = 194.1,
-      cp = { a = 91.379, b = 317.98e-3 }, V = 74.69,
+      formula = "CaSO4*2H2O(s,gypsum)", model = "logk",
+      reaction = "CaSO4*2H2O(s,gypsum) = Ca^2+ + SO4^2- + 2 H2O(l)",
+      logK = -4.58, logK_T = { 68.2401, 0, -3221.51, -25.0627 },
       T_range = { 273.15, 373.15 },
-      source = NBS .. "; " .. KELLEY .. " (21.84 + 76.0e-3 T cal, recall medium); V " .. RH95, quality = "high",
-      note = "log Ksp with NBS ions -4.36, with CODATA ions -4.59 (Nordstrom et al. 1990: -4.58); the gap is NBS dfG(Ca^2+)",
+      source = N90 .. ", analytic log K(T) of the measured solubility", quality = "high",
+      note = "Issue 13: was NBS 1982 gypsum with the SH88 ions (log Ksp -4.515, solubility 18 mmol/kg " ..
+             "against 15.1-15.4 measured). The equation gives -4.581 at 25 C.",
     },
     {
       formula = "MgSO4*7H2O(s,epsomite)", model = "cp",
@@ -343,6 +351,56 @@ return {
       formula = "KAl3(SO4)2(OH)6(s,alunite)", model = "logk",
       reaction = "KAl3(SO4)2(OH)6(s,alunite) + 6 H^+ = K^+ + 3 Al^3+ + 2 SO4^2- + 6 H2O(l)", logK = -1.4, dH = -50.25, units = KCAL,
       source = N90, quality = "medium",
+    },
+    -- ---------------------------------------------------------------- mercury (issue 13: CODATA, as Hg.lua)
+    {
+      formula = "Hg2SO4(s)", model = "cp",
+      G = -625.780, H = -743.09, S = 200.70,
+      cp = { a = 131.96 },
+      uncertainty = { H = 0.40, S = 0.20 },
+      source = CODATA .. " (+- from the same); Cp at 298.15 K from " .. NBS .. ", held constant",
+      quality = "high",
+      note = "Mercurous sulfate electrode: E0(Hg2SO4 + 2 e- = 2 Hg + SO4^2-) = 0.6127 V with " ..
+             "CODATA SO4^2-, 0.6150 V with the file's SH88 SO4^2-; measured 0.6125 V (recalled).",
+    },
+    {
+      formula = "HgS(s,cinnabar)", model = "cp",
+      G = -50.6, H = -58.2, S = 82.4,
+      cp = { a = 48.41 },
+      source = NBS .. " (Cp at 298.15 K held constant)",
+      quality = "medium",
+      note = "NBS solid with the CODATA Hg^2+ of Hg.lua: NBS dfG(Hg^2+) is 0.27 kJ/mol lower " ..
+             "(0.05 in log K), inside the spread of cinnabar solubility data.",
+    },
+    -- ---------------------------------------------------------------- strontium and barium sulfates (scaling)
+    {
+      formula = "SrSO4(s,celestite)", model = "logk",
+      reaction = "SrSO4(s,celestite) = Sr^2+ + SO4^2-",
+      logK = -6.63,
+      logK_T = { -14805.9622, -2.4660924, 756968.533, 5436.3588, -40553604.0 },
+      T_range = { 273.15, 373.15 },
+      source = "from memory of Reardon and Armstrong 1987 (Geochim. Cosmochim. Acta 51, 63), " ..
+               "analytic log K(T) as adopted by " .. N90,
+      quality = "high",
+      note = "Measured solubility product (the equation gives -6.632 at 25 C); range 0-100 C " ..
+             "taken conservatively.",
+    },
+    {
+      formula = "SrSO4(aq)", model = "logk",
+      reaction = "Sr^2+ + SO4^2- = SrSO4(aq)",
+      logK = 2.29, dH = 2.08, units = KCAL,
+      source = N90, quality = "medium",
+    },
+    {
+      formula = "BaSO4(s,barite)", model = "logk",
+      reaction = "BaSO4(s,barite) = Ba^2+ + SO4^2-",
+      logK = -9.97,
+      logK_T = { 136.035, 0, -7680.41, -48.595 },
+      T_range = { 273.15, 373.15 },
+      source = N90 .. ", analytic log K(T) after Blount 1977 (Am. Mineral. 62, 942)",
+      quality = "high",
+      note = "Gives -9.970 at 25 C; NBS barite with NBS Ba^2+ and SH88 SO4^2- gives -9.97 too. " ..
+             "Range 0-100 C taken conservatively (Blount measured to higher T).",
     },
   },
 }

@@ -1,9 +1,10 @@
 -- stdlib/elements/Ti.lua: titanium and its oxides.
 -- Data set choice (see docs/data/other-metals.md): the NBS tables (Wagman et al. 1982);
--- rutile is also a CODATA key value with the same numbers. No aqueous titanium species
--- is included: Ti3+, TiO^2+ and Ti(OH)4(aq) values were not recalled with confidence,
--- so a diagram from this file shows only the metal and its oxides (titanium's passivity
--- in water is a property of the TiO2 film; the dissolved fields are missing).
+-- rutile is also a CODATA key value with the same numbers. The only aqueous titanium
+-- species is Ti^2+ (issue 13, from the CRC standard potential): Ti3+, TiO^2+ and
+-- Ti(OH)4(aq) values were not recalled with confidence, so a diagram from this file
+-- shows the metal, its oxides and Ti^2+ only (titanium's passivity in water is a
+-- property of the TiO2 film; the other dissolved fields are missing).
 local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
 local CODATA = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values for Thermodynamics"
 local RH95 = "from memory of Robie and Hemingway 1995 (USGS Bulletin 2131)"
@@ -17,6 +18,7 @@ return {
     {
       formula = "Ti(s)", model = "cp",
       G = 0, H = 0, S = 30.72,
+      uncertainty = { S = 0.10 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
       cp = { a = 25.02, b = 0, c = 0 },
       V = 10.63,
       source = "S: " .. CODATA .. " (NBS 30.63); Cp: " .. NBS,
@@ -62,6 +64,15 @@ return {
       cp = { a = 39.96, b = 0, c = 0 },
       source = NBS, quality = "medium",
       note = "alpha TiO, a non-stoichiometric phase in reality. cp is NBS Cp at 298.15 K taken as constant.",
+    },
+    { -- issue 13
+      formula = "Ti^2+", model = "logk",
+      reaction = "Ti(s) + 2 H^+ = Ti^2+ + H2(g)",
+      logK = 55.105,
+      source = "derived here from E0(Ti^2+/Ti) = -1.630 V, from memory of the CRC Handbook electrochemical series (P. Vanysek)",
+      quality = "low",
+      note = "Ti^2+ reduces water; it exists only in strongly reducing acid and matters for " ..
+             "the active dissolution of titanium. No dH recalled: held at 25 C.",
     },
   },
 }

@@ -29,6 +29,7 @@ return {
     {
       formula = "Zn^2+", model = "hkf",
       G = -147.203, H = -153.39, S = -109.8,
+      uncertainty = { H = 0.20, S = 0.5 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
       estimate = { Cp = 46 },
       source = CODATA .. "; Cp " .. NBS,
       quality = "high",
@@ -76,6 +77,7 @@ return {
     {
       formula = "ZnO(s,zincite)", model = "cp",
       G = -320.479, H = -350.46, S = 43.65,
+      uncertainty = { H = 0.27, S = 0.40 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
       cp = { a = 48.99, b = 5.10e-3, c = -9.12e5 },
       T_range = { 298.15, 1600 },
       source = CODATA .. "; " .. KELLEY .. " (11.71 + 1.22e-3 T - 2.18e5/T^2 cal/(mol K))",

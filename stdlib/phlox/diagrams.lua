@@ -99,7 +99,8 @@ local function held_stamp(lib, elements, temps, opts, where)
   if opts and opts.require_temperature_data then
     fail(where, "require_temperature_data: no temperature data (log K held at 25 °C) for " .. table.concat(list, ", "))
   end
-  return { "log K held at 25 °C (no temperature data): " .. table.concat(list, ", ") }
+  local text, short = phlox.held_stamp_line(list)
+  return { text, short = short }
 end
 
 --- Fraction (distribution) curves: the share of `element` among its
@@ -203,15 +204,19 @@ function diagrams.fractions(opts)
   end
 
   local xname = xkind == "pH" and "pH"
-    or xkind == "log_total" and ("log total " .. opts.ligand .. " / (mol/kg)")
-    or ("log a(" .. opts.ligand_species .. ")")
+    or xkind == "log_total" and ("log total {" .. opts.ligand .. "} / (mol/kg)")
+    or ("log a({" .. opts.ligand_species .. "})")
+  local ligand_text
+  if opts.ligand and xkind ~= "log_total" and opts.totals and type(opts.totals[opts.ligand]) == "number" then
+    ligand_text = ("{%s} %s mol/kg"):format(opts.ligand, require("phlox.plot").number(opts.totals[opts.ligand]))
+  end
   return {
-    element = el, x = xs, series = series, omitted = omitted, failures = failures,
+    element = el, x = xs, series = series, omitted = omitted, failures = failures, ligand_text = ligand_text,
     axes = { x = { name = xname, min = xs[1], max = xs[#xs] },
-             y = { name = "fraction of " .. el, min = 0, max = 1 } },
+             y = { name = "fraction of {" .. el .. "}", min = 0, max = 1 } },
     conditions = { T_C = T_C_of(opts), [el .. " total (mol/kg)"] = total, pH = xkind ~= "pH" and opts.pH or nil,
                    activity_model = base.activity },
-    stamp = curve_stamp(notes, held),
+    stamp = curve_stamp(notes, held), stamp_short = held and { [held[1]] = held.short } or nil,
     stats = { solves = #xs, seconds = seconds },
   }
 end
@@ -296,9 +301,9 @@ function diagrams.solubility(opts)
   return {
     element = el, x = xs, series = series, failures = failures,
     axes = { x = { name = "pH", min = xs[1], max = xs[#xs] },
-             y = { name = "dissolved " .. el, unit = "mol/kg", log = true } },
+             y = { name = "dissolved {" .. el .. "}", unit = "mol/kg", log = true } },
     conditions = { [el .. " put in (mol/kg)"] = total, activity_model = base.activity },
-    stamp = curve_stamp(notes, held),
+    stamp = curve_stamp(notes, held), stamp_short = held and { [held[1]] = held.short } or nil,
     stats = { points = #xs * #temps, retries = retried, seconds = os.clock() - t0 },
   }
 end
@@ -319,11 +324,30 @@ function diagrams.plot(result, opts)
   end
   local title = opts.title
   if not title and result.element then
-    title = (#result.series > 0 and result.series[1].solids) and ("{%s} solubility"):format(result.element)
-      or ("{%s} species fractions"):format(result.element)
+    local temps, seen = {}, {}
+    for _, s in ipairs(result.series) do
+      if s.T_C and not seen[s.T_C] then seen[s.T_C] = true; temps[#temps + 1] = ("%g"):format(s.T_C) end
+    end
+    if #temps == 0 and result.conditions and result.conditions.T_C then
+      temps[1] = ("%g"):format(result.conditions.T_C)
+    end
+    local at = #temps == 0 and "" or #temps == 1 and (" at " .. temps[1] .. " °C")
+      or (" at " .. table.concat(temps, ", ", 1, #temps - 1) .. " and " .. temps[#temps] .. " °C")
+    local c = result.conditions or {}
+    local fixed = {}
+    if c.pH then fixed[#fixed + 1] = ("pH %g"):format(c.pH) end
+    if result.ligand_text then fixed[#fixed + 1] = result.ligand_text end
+    title = ((#result.series > 0 and result.series[1].solids) and ("{%s} solubility"):format(result.element)
+      or ("{%s} species fractions"):format(result.element)) .. at
+      .. (#fixed > 0 and (", " .. table.concat(fixed, ", ")) or "")
   end
   opts.title = title
-  if not opts.stamp and result.stamp and #result.stamp > 0 then opts.stamp = result.stamp end
+  if type(opts.stamp) ~= "table" and not opts.notes and result.stamp and #result.stamp > 0 then
+    local short = result.stamp_short or {}
+    local notes = {}
+    for i, l in ipairs(result.stamp) do notes[i] = short[l] and { full = l, short = short[l] } or l end
+    opts.notes = notes
+  end
   return plot.curves(result.series, opts)
 end
 
@@ -361,6 +385,8 @@ function diagrams.series(opts)
         if m.stamp[k]:find("^log K held at 25") then table.remove(m.stamp, k) end
       end
       m.stamp[#m.stamp + 1] = stamp[1]
+      m.stamp_short = m.stamp_short or {}
+      m.stamp_short[stamp[1]] = stamp.short
     end
   end
   return maps

@@ -24,12 +24,26 @@ plot.defaults = {
   dpi = 150,                     -- PNG only
 }
 
+--- Figure presets: size in points, text and line scales, and the stamp
+-- printed by default (the full provenance always goes into the file's
+-- metadata).  Sizes are common practice for the targets (no source): a
+-- journal column is about 3.3 in wide, a double column about 7 in, a 16:9
+-- slide 10 x 5.625 in, a report page's text block about 6.5 in.
+plot.presets = {
+  column = { width = 240, height = 200, text = 0.85, line = 0.85, stamp = "short" },
+  double = { width = 504, height = 360, text = 1.0, line = 1.0, stamp = "short" },
+  slide = { width = 720, height = 405, text = 1.6, line = 1.6, stamp = "short", fixed = true },
+  page = { width = 468, height = 351, text = 1.0, line = 1.0, stamp = "short" },
+}
+
 local STAMP_SIZE = 6.5           -- must match PX_STAMP_SIZE in src/render/draw.c
 local STAMP_MARGIN = 10          -- points left free across the stamp's width
-local LINE_BOUNDARY = 0.9        -- line widths, points
+local LINE_BOUNDARY = 0.9        -- line widths, points (times the line scale)
 local LINE_WATER = 1.0
 local LINE_NEUTRAL = 0.8
-local SMALL_TEXT = 7.0           -- water-line and neutral-pH labels
+local SMALL_TEXT = 7.0           -- water-line and neutral-pH labels (times the text scale)
+local WATER_LABEL_AT = 0.88      -- water-line labels near the right end of their line
+local NEUTRAL_LABEL_AT = 0.04    -- the neutral-pH label near the foot of its line
 local KINDS = { aqueous = true, solid = true, gas = true, metal = true, liquid = true }
 local DOMAINS = { "immunity", "passivation", "sulfide film", "corrosion" }
 local DOMAIN_OK = { immunity = true, passivation = true, corrosion = true, ["sulfide film"] = true }
@@ -103,6 +117,27 @@ local function fmt_num(v)
   return (s:gsub("e%-0*", "e-"):gsub("e%+0*", "e"))
 end
 
+local SUP = { ["0"] = "⁰", ["1"] = "¹", ["2"] = "²", ["3"] = "³", ["4"] = "⁴", ["5"] = "⁵",
+              ["6"] = "⁶", ["7"] = "⁷", ["8"] = "⁸", ["9"] = "⁹", ["-"] = "⁻" }
+
+--- A number as typeset on figures: 0.01, 25, 10⁻⁶, 2.5 × 10⁻³ (true minus).
+function plot.number(v)
+  if type(v) ~= "number" then return tostring(v) end
+  local s
+  local a = math.abs(v)
+  if v == 0 or (a >= 1e-2 and a < 1e5) then
+    s = fmt_num(v)
+  else
+    local e = math.floor(math.log(a, 10) + 1e-9)
+    local m = v / 10 ^ e
+    if math.abs(math.abs(m) - 10) < 1e-9 then m, e = m / 10, e + 1 end
+    local ms = ("%.3g"):format(m)
+    local ex = tostring(e):gsub(".", SUP)
+    s = (ms == "1" and "" or ms == "-1" and "-" or (ms .. " × ")) .. "10" .. ex
+  end
+  return (s:gsub("^%-", "−"))
+end
+
 local function celsius(map)
   if map.conditions and is_num(map.conditions.T_C) then return map.conditions.T_C end
   if is_num(map.T) then return map.T - 273.15 end
@@ -115,15 +150,48 @@ local function fmt_T(tc)
   return ("%.1f °C"):format(r)
 end
 
+-- Temperatures of several results: "25 °C", "25 and 150 °C", "25, 90 and 150 °C".
+local function fmt_Ts(list)
+  local parts = {}
+  for i, t in ipairs(list) do parts[i] = (fmt_T(t):gsub(" °C$", "")) end
+  if #parts == 0 then return nil end
+  if #parts == 1 then return parts[1] .. " °C" end
+  return table.concat(parts, ", ", 1, #parts - 1) .. " and " .. parts[#parts] .. " °C"
+end
+
 local function pressure(map)
   if map.conditions and is_num(map.conditions.P_bar) then return map.conditions.P_bar end
   if is_num(map.P) then return map.P end
 end
 
+--- A list of formulas as typeset text: "{Fe^2+}, {FeOH^+}".
+function plot.formulas(list)
+  local out = {}
+  for i, f in ipairs(list) do out[i] = "{" .. tostring(f) .. "}" end
+  return table.concat(out, ", ")
+end
+
+-- The ligand's single species over the whole map, or nil (several fields).
+local function ligand_species(map)
+  local lf = map.ligand_fields
+  if type(lf) ~= "table" or #lf == 0 then return nil end
+  for i = 2, #lf do if lf[i].species ~= lf[1].species then return nil end end
+  return lf[1].species
+end
+
 -- "log a(Cl^-)" -> "log a({Cl^-})": the formula part set in chemical type.
-local function axis_name(name)
+-- A ligand axis ("log a(S)", the total activity of the ligand's dissolved
+-- species) names the species when one ligand species holds the whole map,
+-- else the total: "log a(ΣS)".
+local function axis_name(name, map)
   if type(name) ~= "string" then return "" end
   if name:find("{", 1, true) then return name end
+  local lig = name:match("^log a%((%u%l?)%)$")
+  if lig and map and map.conditions and map.conditions.ligand == lig then
+    local sp = ligand_species(map)
+    if sp then return ("log a({%s})"):format(sp) end
+    return ("log a(Σ{%s})"):format(lig)
+  end
   return (name:gsub("^(log%s+[amfp])%((.+)%)$", "%1({%2})"))
 end
 
@@ -164,28 +232,52 @@ local function y_title(map, ref)
   if is_potential(y) then
     return ("%s / %s vs %s"):format(y.name, y.unit or "V", ref.name)
   end
-  local name = axis_name(y.name)
+  local name = axis_name(y.name, map)
   if y.unit and y.unit ~= "" then return name .. " / " .. y.unit end
   return name
 end
 
 local function x_title(map)
   local x = map.x
-  local name = axis_name(x.name)
+  local name = axis_name(x.name, map)
   if x.unit and x.unit ~= "" then return name .. " / " .. x.unit end
   return name
 end
 
---- The default title of a map: "Fe–H₂O at 25 °C" (and the pressure when
--- it is not 1 bar).
+-- What the map holds fixed, for its title: the ligand's total, a fixed pH
+-- or E (the axes not shown).
+local function fixed_text(c, map)
+  if type(c) ~= "table" then return nil end
+  local parts = {}
+  if c.ligand and is_num(c.ligand_activity) then
+    local sp = map and ligand_species(map)
+    parts[#parts + 1] = sp and ("a({%s}) = %s"):format(sp, plot.number(c.ligand_activity))
+      or ("a(Σ{%s}) = %s"):format(c.ligand, plot.number(c.ligand_activity))
+  elseif c.ligand and is_num(c.ligand_total) then
+    parts[#parts + 1] = ("{%s} %s mol/kg"):format(c.ligand, plot.number(c.ligand_total))
+  end
+  if is_num(c.total) and map and map.element then   -- a rigorous map's total of the element
+    parts[#parts + 1] = ("{%s} %s mol/kg"):format(map.element, plot.number(c.total))
+  end
+  if is_num(c.pH) then parts[#parts + 1] = "pH " .. fmt_num(c.pH) end
+  if is_num(c.E_V) then parts[#parts + 1] = ("E = %s V vs SHE"):format(plot.number(c.E_V)) end
+  return #parts > 0 and table.concat(parts, ", ") or nil
+end
+
+--- The default title of a map: "Fe–S–H₂O at 25 °C, a(ΣS) = 10⁻³" with the
+-- pressure when it is not 1 bar and what the map holds fixed (the ligand's
+-- total, a fixed pH or E).
 function plot.map_title(map)
   local t = fmt_T(celsius(map))
-  local lig = map.conditions and map.conditions.ligand
+  local c = map.conditions or {}
+  local lig = c.ligand
   local head = map.element and (lig and ("{%s}–{%s}–{H2O}"):format(map.element, lig)
                                 or ("{%s}–{H2O}"):format(map.element)) or "map"
   local s = head .. (t and (" at " .. t) or "")
   local p = pressure(map)
-  if p and math.abs(p - 1) > 1e-9 then s = s .. (", %s bar"):format(fmt_num(p)) end
+  if p and math.abs(p - 1) > 1e-9 then s = s .. (", %s bar"):format(plot.number(tonumber(("%.3g"):format(p)))) end
+  local fx = fixed_text(c, map)
+  if fx then s = s .. ", " .. fx end
   return s
 end
 
@@ -193,20 +285,37 @@ end
 
 local COND_NAMES = {
   T_C = function(v) return ("T = %s °C"):format(fmt_num(v)) end,
-  P_bar = function(v) return ("P = %s bar"):format(fmt_num(v)) end,
-  activity = function(v) return ("activity of dissolved species = %s"):format(fmt_num(v)) end,
-  ionic_strength = function(v) return ("I = %s mol/kg"):format(fmt_num(v)) end,
-  ligand = function(v) return ("ligand %s"):format(v) end,
-  ligand_activity = function(v) return ("ligand activity = %s"):format(fmt_num(v)) end,
+  P_bar = function(v) return ("P = %s bar"):format(plot.number(tonumber(("%.4g"):format(v)))) end,
+  activity = function(v) return ("activity of dissolved species = %s"):format(plot.number(v)) end,
+  ionic_strength = function(v) return ("I = %s mol/kg"):format(plot.number(v)) end,
+  ligand = function(v) return ("ligand {%s}"):format(v) end,
+  ligand_activity = function(v) return ("ligand activity = %s"):format(plot.number(v)) end,
+  ligand_total = function(v) return ("ligand total = %s mol/kg"):format(plot.number(v)) end,
+  total = function(v) return ("total of the element = %s mol/kg"):format(plot.number(v)) end,
+  pH = function(v) return ("pH = %s"):format(fmt_num(v)) end,
+  E_V = function(v) return ("E = %s V vs SHE"):format(plot.number(v)) end,
+  activity_model = function(v) return ("activity model: %s"):format(v) end,
 }
-local COND_ORDER = { "T_C", "P_bar", "activity", "ionic_strength", "ligand", "ligand_activity" }
+local COND_ORDER = { "T_C", "P_bar", "pH", "E_V", "activity", "total", "ionic_strength", "ligand",
+                     "ligand_activity", "ligand_total", "activity_model" }
+
+-- A condition key of our own naming, as text: "Zn total (mol/kg)" and
+-- "NaOH_mol_kg" read as "Zn total = 10⁻⁶ mol/kg" and "NaOH = 10⁻⁴ mol/kg".
+local function other_condition(k, v)
+  local val = type(v) == "number" and plot.number(v) or tostring(v)
+  local name, unit = k:match("^(.-)%s*%((.-)%)$")
+  if name then return ("%s = %s %s"):format(name, val, unit) end
+  name = k:match("^(.-)_mol_kg$")
+  if name then return ("%s = %s mol/kg"):format(name:gsub("_", " "), val) end
+  return (k:gsub("_", " ")) .. " = " .. val
+end
 
 local function conditions_text(c)
   if type(c) ~= "table" then return nil end
   local parts, seen = {}, {}
   for _, k in ipairs(COND_ORDER) do
     if c[k] ~= nil then
-      local named = type(c[k]) == "number" or (k == "ligand" and type(c[k]) == "string")
+      local named = type(c[k]) == "number" or ((k == "ligand" or k == "activity_model") and type(c[k]) == "string")
       parts[#parts + 1] = named and COND_NAMES[k](c[k]) or (k .. " = " .. tostring(c[k]))
       seen[k] = true
     end
@@ -214,20 +323,55 @@ local function conditions_text(c)
   local rest = {}
   for k in pairs(c) do if not seen[k] then rest[#rest + 1] = k end end
   table.sort(rest)
-  for _, k in ipairs(rest) do
-    local v = c[k]
-    parts[#parts + 1] = k .. " = " .. (type(v) == "number" and fmt_num(v) or tostring(v))
-  end
+  for _, k in ipairs(rest) do parts[#parts + 1] = other_condition(k, c[k]) end
   return #parts > 0 and ("conditions: " .. table.concat(parts, ", ")) or nil
 end
 
--- Break a line at spaces so it fits `width` points at the stamp size.
-local function wrap(line, width)
-  if core.text_width(line, STAMP_SIZE) <= width then return { line } end
+-- The short form of the conditions: "25 °C, 1 bar, a = 10⁻⁶, I = 0".
+local function conditions_short(c)
+  if type(c) ~= "table" then return nil end
+  local parts = {}
+  if is_num(c.T_C) then parts[#parts + 1] = fmt_T(c.T_C) end
+  if is_num(c.P_bar) then parts[#parts + 1] = plot.number(tonumber(("%.3g"):format(c.P_bar))) .. " bar" end
+  if is_num(c.activity) then parts[#parts + 1] = "a = " .. plot.number(c.activity) end
+  if is_num(c.total) then parts[#parts + 1] = "total " .. plot.number(c.total) .. " mol/kg" end
+  if is_num(c.ionic_strength) then parts[#parts + 1] = "I = " .. plot.number(c.ionic_strength) .. " mol/kg" end
+  if type(c.activity_model) == "string" then parts[#parts + 1] = c.activity_model end
+  local known = { T_C = true, P_bar = true, activity = true, total = true, ionic_strength = true,
+                  activity_model = true, ligand = true, ligand_activity = true, ligand_total = true,
+                  pH = true, E_V = true }
+  local rest = {}
+  for k in pairs(c) do if not known[k] then rest[#rest + 1] = k end end
+  table.sort(rest)
+  for _, k in ipairs(rest) do parts[#parts + 1] = other_condition(k, c[k]) end
+  return #parts > 0 and table.concat(parts, ", ") or nil
+end
+
+-- Pieces of a word too long for a line (a checksum on a narrow figure),
+-- cut at character boundaries, so nothing is cut off with an ellipsis.
+local function split_long(word, width, size)
+  if core.text_width(word, size) <= width then return { word } end
   local out, cur = {}, ""
+  for ch in word:gmatch(utf8.charpattern) do
+    if cur ~= "" and core.text_width(cur .. ch, size) > width then out[#out + 1] = cur; cur = "" end
+    cur = cur .. ch
+  end
+  if cur ~= "" then out[#out + 1] = cur end
+  return out
+end
+
+-- Break a line at spaces so it fits `width` points at the stamp size.
+local function wrap(line, width, size)
+  size = size or STAMP_SIZE
+  if core.text_width(line, size) <= width then return { line } end
+  local out, cur = {}, ""
+  local words = {}
   for word in line:gmatch("%S+") do
+    for _, piece in ipairs(split_long(word, width - core.text_width("  ", size), size)) do words[#words + 1] = piece end
+  end
+  for _, word in ipairs(words) do
     local try = cur == "" and word or (cur .. " " .. word)
-    if cur ~= "" and core.text_width(try, STAMP_SIZE) > width then
+    if cur ~= "" and core.text_width(try, size) > width then
       out[#out + 1] = cur
       cur = "  " .. word
     else
@@ -238,9 +382,17 @@ local function wrap(line, width)
   return out
 end
 
---- The stamp lines of a figure: conditions, program and checksums, extra
--- lines, the caution; wrapped to the figure width.
-function plot.stamp_lines(conditions, extra, width, opts)
+-- An extra stamp line is a string, or { full = "...", short = "..." } (the
+-- short form printed on small figures; false leaves it off them).
+local function line_full(l) return type(l) == "table" and tostring(l.full or l[1] or "") or tostring(l) end
+local function line_short(l)
+  if type(l) ~= "table" then return tostring(l) end
+  if l.short == false then return nil end
+  return tostring(l.short or l.full or l[1] or "")
+end
+
+-- The unwrapped full stamp: conditions, program and checksums, extra lines, caution.
+local function full_lines(conditions, extra, opts)
   opts = opts or {}
   local st = provenance.stamp(conditions)
   local lines = {}
@@ -252,17 +404,75 @@ function plot.stamp_lines(conditions, extra, width, opts)
   end
   lines[#lines + 1] = prog
   for _, d in ipairs(st.data) do lines[#lines + 1] = "data: " .. d.file .. " sha256=" .. d.sha256 end
-  for _, s in ipairs(extra or {}) do lines[#lines + 1] = tostring(s) end
+  for _, s in ipairs(extra or {}) do lines[#lines + 1] = line_full(s) end
   lines[#lines + 1] = plot.caution
+  return lines, st
+end
+
+--- The stamp lines of a figure: conditions, program and checksums, extra
+-- lines, the caution; wrapped to the figure width (points) at text scale
+-- `opts.text` (default 1).
+function plot.stamp_lines(conditions, extra, width, opts)
+  opts = opts or {}
+  local ts = opts.text or 1
   local out = {}
-  for _, l in ipairs(lines) do
-    for _, w in ipairs(wrap(l, width - STAMP_MARGIN)) do out[#out + 1] = w end
+  for _, l in ipairs((full_lines(conditions, extra, opts))) do
+    for _, w in ipairs(wrap(l, width - STAMP_MARGIN * ts, STAMP_SIZE * ts)) do out[#out + 1] = w end
   end
   return out
 end
 
-local function add_stamp(fig, lines)
-  for _, l in ipairs(lines) do fig:stamp(l) end
+--- The short stamp: the conditions in brief, the extra lines' short forms,
+-- and one line naming the program, the caution and where the rest is.
+function plot.stamp_short(conditions, extra, width, opts)
+  opts = opts or {}
+  local ts = opts.text or 1
+  local lines = {}
+  local c = conditions_short(conditions)
+  if c then lines[#lines + 1] = c end
+  for _, s in ipairs(extra or {}) do
+    local t = line_short(s)
+    if t and t ~= "" then lines[#lines + 1] = t end
+  end
+  lines[#lines + 1] = ("phlox %s · what can form, not how fast · full provenance in the file's metadata")
+    :format(core.version)
+  local out = {}
+  for _, l in ipairs(lines) do
+    for _, w in ipairs(wrap(l, width - STAMP_MARGIN * ts, STAMP_SIZE * ts)) do out[#out + 1] = w end
+  end
+  return out
+end
+
+-- Text of the metadata: formula braces dropped.
+local function plain(s) return (s:gsub("[{}]", "")) end
+
+-- Print the stamp the options ask for and put the full provenance in the
+-- file's metadata.  opts.stamp: "full" | "short" | false, or a list of
+-- extra lines (older form: printed in the preset's mode); opts.notes: extra
+-- lines.
+local function apply_stamp(fig, opts, conditions, extra, title, w, look)
+  local lines = {}
+  for _, l in ipairs(extra or {}) do lines[#lines + 1] = l end
+  if type(opts.stamp) == "table" then for _, l in ipairs(opts.stamp) do lines[#lines + 1] = l end end
+  for _, l in ipairs(opts.notes or {}) do lines[#lines + 1] = l end
+  local full = full_lines(conditions, lines, opts)
+  local desc = {}
+  for i, l in ipairs(full) do desc[i] = plain(l) end
+  fig:meta("Title", plain(title or "phlox figure"))
+  fig:meta("Description", table.concat(desc, "\n"))
+  fig:meta("Software", "phlox " .. core.version)
+  fig:meta("Disclaimer", plot.caution)
+  local mode = opts.stamp
+  if mode == nil or type(mode) == "table" then mode = look.stamp end
+  local out = {}
+  if mode == "full" then
+    out = plot.stamp_lines(conditions, lines, w, { text = look.text, no_script = opts.no_script })
+    -- a preset promises its panels' size: the full stamp goes below them
+    if look.name then fig:stamp_below(true) end
+  elseif mode == "short" then
+    out = plot.stamp_short(conditions, lines, w, { text = look.text })
+  end
+  for _, l in ipairs(out) do fig:stamp(l) end
 end
 
 -- Geometry helpers ---------------------------------------------------------
@@ -274,172 +484,9 @@ local function shifted(ys, offset)
   return out
 end
 
--- Small labels (water lines, neutral pH) go where they keep clear of the
--- field labels, which the renderer puts near each field's pole of
--- inaccessibility.  Work in a frame where the plot is about `aspect` wide
--- and 1 high, as the renderer sees it.
-local PLOT_MARGIN_W, PLOT_MARGIN_H = 70, 100   -- rough room for axes and stamp, points
-
-local function frame(win, fig_w, fig_h)
-  local aspect = math.max(fig_w - PLOT_MARGIN_W, 50) / math.max(fig_h - PLOT_MARGIN_H, 50)
-  local sx, sy = aspect / (win.x1 - win.x0), 1 / (win.y1 - win.y0)
-  return function(x, y) return (x - win.x0) * sx, (y - win.y0) * sy end,
-         math.max(fig_h - PLOT_MARGIN_H, 50),   -- points per frame unit
-         function(fx, fy) return win.x0 + fx / sx, win.y0 + fy / sy end,
-         aspect
-end
-
--- Field labels: the renderer (src/render/draw.c) sets a label at the given
--- point if it fits at 9.5 down to 5.5 pt, and otherwise leads it out with a
--- line from the field's centroid to a box 16 pt right or left and 16 pt
--- below or 10 pt above.  These must match its constants.
-local LABEL_MIN, LEADER_SIZE = 5.5, 6.5
-local LEADER_DX, LEADER_DY_DOWN, LEADER_DY_UP = 16, 16, 10
-
-local function seg_dist(px, py, ax, ay, bx, by)
-  local dx, dy = bx - ax, by - ay
-  local l2 = dx * dx + dy * dy
-  local t = l2 > 0 and math.max(0, math.min(1, ((px - ax) * dx + (py - ay) * dy) / l2)) or 0
-  local ex, ey = ax + t * dx - px, ay + t * dy - py
-  return math.sqrt(ex * ex + ey * ey)
-end
-
-local function inside(xs, ys, x, y)   -- even-odd rule
-  local c, n = false, #xs
-  local j = n
-  for i = 1, n do
-    if ((ys[i] > y) ~= (ys[j] > y)) and (x < (xs[j] - xs[i]) * (y - ys[i]) / (ys[j] - ys[i]) + xs[i]) then
-      c = not c
-    end
-    j = i
-  end
-  return c
-end
-
-local function edge_dist(xs, ys, x, y)
-  local d, n = math.huge, #xs
-  for i = 1, n do
-    local j = i % n + 1
-    d = math.min(d, seg_dist(x, y, xs[i], ys[i], xs[j], ys[j]))
-  end
-  return d
-end
-
-local function centroid(xs, ys)
-  local a, gx, gy, n = 0, 0, 0, #xs
-  for i = 1, n do
-    local j = i % n + 1
-    local c = xs[i] * ys[j] - xs[j] * ys[i]
-    a, gx, gy = a + c, gx + (xs[i] + xs[j]) * c, gy + (ys[i] + ys[j]) * c
-  end
-  if a == 0 then return nil end
-  return gx / (3 * a), gy / (3 * a)
-end
-
--- The label point of a field (frame units): among the points nearly as
--- deep inside as the pole of inaccessibility (80 % of its depth), the one
--- nearest the centroid.  A long strip has a ridge of equally deep points,
--- and the pole alone may sit at one end of it; this picks the middle.
-local function label_point(xs, ys)
-  local ok, px, py, depth = pcall(core.polygon_pole, xs, ys, 1e-3)
-  if not ok then return nil end
-  local gx, gy = centroid(xs, ys)
-  if not gx then return px, py end
-  local x0, x1, y0, y1 = math.huge, -math.huge, math.huge, -math.huge
-  for i = 1, #xs do
-    x0, x1 = math.min(x0, xs[i]), math.max(x1, xs[i])
-    y0, y1 = math.min(y0, ys[i]), math.max(y1, ys[i])
-  end
-  local bx, by = px, py
-  local best = (px - gx) ^ 2 + (py - gy) ^ 2
-  local N = 24
-  for i = 0, N do
-    for j = 0, N do
-      local x, y = x0 + (x1 - x0) * i / N, y0 + (y1 - y0) * j / N
-      local d2 = (x - gx) ^ 2 + (y - gy) ^ 2
-      if d2 < best and inside(xs, ys, x, y) and edge_dist(xs, ys, x, y) >= 0.8 * depth then
-        bx, by, best = x, y, d2
-      end
-    end
-  end
-  return bx, by
-end
-
--- Does a w x h box centred at (x, y) fit in the polygon (the renderer's
--- nine-point test)?
-local function box_fits(xs, ys, x, y, w, h)
-  for i = -1, 1 do
-    for j = -1, 1 do
-      if not inside(xs, ys, x + i * w / 2, y + j * h / 2) then return false end
-    end
-  end
-  return true
-end
-
--- Label points (data units, for fig:polygon) and the spots other labels
--- must keep clear of (frame units): each placed label, and the box of each
--- led-out label.
-local function field_labels(map, win, ref, to_frame, from_frame, unit, aspect)
-  local poles, points = {}, {}
-  for k, f in ipairs(map.fields) do
-    local xs, ys = {}, {}
-    for i = 1, #f.x do
-      local x = math.min(math.max(f.x[i], win.x0), win.x1)
-      local y = math.min(math.max(f.y[i] - ref.offset, win.y0), win.y1)
-      xs[i], ys[i] = to_frame(x, y)
-    end
-    local lx, ly = label_point(xs, ys)
-    if lx then
-      local dx, dy = from_frame(lx, ly)
-      points[k] = { dx, dy + ref.offset }
-      local w = (core.text_width(f.species, LABEL_MIN, true) + 2) / unit
-      local h = LABEL_MIN * 1.2 / unit
-      if box_fits(xs, ys, lx, ly, w, h) then
-        poles[#poles + 1] = { lx, ly }
-      else   -- led out from the centroid (or the label point), as the renderer does
-        local cx, cy = centroid(xs, ys)
-        if not (cx and inside(xs, ys, cx, cy)) then cx, cy = lx, ly end
-        local lw, lh = core.text_width(f.species, LEADER_SIZE, true) / unit, LEADER_SIZE * 1.2 / unit
-        local ox = cx < aspect / 2 and cx + LEADER_DX / unit or cx - LEADER_DX / unit - lw
-        local base = cy > 0.5 and cy - LEADER_DY_DOWN / unit or cy + LEADER_DY_UP / unit
-        for q = 0, 4 do poles[#poles + 1] = { ox + lw * q / 4, base + 0.35 * lh } end
-      end
-    end
-  end
-  return poles, points
-end
-
--- What small labels (water lines, neutral pH) must keep clear of, and the
--- field label points.
-local function placement(map, win, ref, cell_w, cell_h)
-  local to_frame, unit, from_frame, aspect = frame(win, cell_w, cell_h)
-  local poles, points = field_labels(map, win, ref, to_frame, from_frame, unit, aspect)
-  local n = map.neutral_pH
-  if n and is_pH(map.x) and n > win.x0 and n < win.x1 then   -- keep labels off the dotted line
-    for k = 0, 10 do
-      local fx, fy = to_frame(n, win.y0 + (win.y1 - win.y0) * k / 10)
-      poles[#poles + 1] = { fx, fy }
-    end
-  end
-  return { to_frame = to_frame, unit = unit, poles = poles, label_points = points }
-end
-
--- Of the candidate boxes {x, y, w, h} (frame units, (x, y) the lower left),
--- the one whose centre is farthest from every pole.
-local function clearest(cands, poles)
-  local best, bscore
-  for _, c in ipairs(cands) do
-    local cx, cy = c[1] + c[3] / 2, c[2] + c[4] / 2
-    local score = math.huge
-    for _, p in ipairs(poles) do
-      -- distance measured in label sizes, so wide labels keep wider berth
-      local dx, dy = (cx - p[1]) / (c[3] / 2 + 0.08), (cy - p[2]) / (c[4] / 2 + 0.04)
-      score = math.min(score, dx * dx + dy * dy)
-    end
-    if not bscore or score > bscore then best, bscore = c, score end
-  end
-  return best
-end
+-- Where labels go is the renderer's business (src/render/draw.c places
+-- every label once and fig:layout() reports it); this module only says
+-- what to draw.
 
 local function window_of(map, ref)
   return { x0 = map.x.min, x1 = map.x.max, y0 = map.y.min - ref.offset, y1 = map.y.max - ref.offset }
@@ -495,7 +542,7 @@ local DOMAIN_HATCH = {
 
 -- Drawing a map into a panel -------------------------------------------------
 
-local function draw_water(fig, panel, map, win, ref, style, labelled, place)
+local function draw_water(fig, panel, map, win, ref, style, labelled, look)
   if not (map.water and is_pH(map.x)) then return end
   local lines = {
     { map.water.o2, "O2/H2O" },
@@ -505,57 +552,24 @@ local function draw_water(fig, panel, map, win, ref, style, labelled, place)
     local w = l[1]
     if w then
       local function E(x) return w.a + w.b * x - ref.offset end
-      fig:line(panel, { win.x0, win.x1 }, { E(win.x0), E(win.x1) }, style.color, style.width,
-               style.dash, style.legend)
-      if labelled and place then
-        local tw = core.text_width(l[2], SMALL_TEXT, true) / place.unit
-        local th = SMALL_TEXT * 1.2 / place.unit
-        local cands = {}
-        for k = 1, 40 do   -- along the line, just above it, inside the window
-          local x = win.x0 + (win.x1 - win.x0) * (0.02 + 0.96 * (k - 1) / 39)
-          local y = E(x) + 0.012 * (win.y1 - win.y0)
-          local fx, fy = place.to_frame(x, y)
-          local x_end = place.to_frame(win.x1, y)
-          if fx + tw < x_end - 0.01 and fy > 0.03 and fy + th < 0.97 then
-            cands[#cands + 1] = { fx, fy, tw, th, x = x, y = y }
-          end
-        end
-        local c = clearest(cands, place.poles)
-        if c then fig:text(panel, c.x, c.y, l[2], true, SMALL_TEXT, style.color) end
+      local xs, ys = { win.x0, win.x1 }, { E(win.x0), E(win.x1) }
+      fig:line(panel, xs, ys, style.color, style.width, style.dash, style.legend)
+      if labelled then   -- along the line, placed by the renderer
+        fig:line_label(panel, xs, ys, l[2], true, SMALL_TEXT * look.text, style.color, WATER_LABEL_AT)
       end
     end
   end
 end
 
-local function draw_neutral(fig, panel, map, win, place)
+local function draw_neutral(fig, panel, map, win, look)
   local n = map.neutral_pH
   if not (n and is_pH(map.x) and n > win.x0 and n < win.x1) then return end
-  fig:line(panel, { n, n }, { win.y0, win.y1 }, palette.neutral, LINE_NEUTRAL, "dotted")
+  local xs, ys = { n, n }, { win.y0, win.y1 }
+  fig:line(panel, xs, ys, palette.neutral, LINE_NEUTRAL * look.line, "dotted")
   local t = fmt_T(celsius(map))
   local label = ("neutral pH %.2f%s"):format(n, t and (" at " .. t) or "")
-  local dx = 0.018 * (win.x1 - win.x0)
-  local x, y = n + dx, win.y0 + 0.02 * (win.y1 - win.y0)
-  if place then   -- right or left of the line, at the foot or the top
-    local tw = core.text_width(label, SMALL_TEXT) / place.unit
-    local th = SMALL_TEXT * 1.2 / place.unit
-    local cands = {}
-    for _, yy in ipairs({ win.y0 + 0.02 * (win.y1 - win.y0), win.y1 - 0.06 * (win.y1 - win.y0) }) do
-      local fx, fy = place.to_frame(n, yy)
-      local x_end = place.to_frame(win.x1, yy)
-      if fx + 0.02 + tw < x_end then cands[#cands + 1] = { fx + 0.02, fy, tw, th, x = n + dx, y = yy } end
-      if fx - 0.02 - tw > 0 then
-        cands[#cands + 1] = { fx - 0.02 - tw, fy, tw, th, x = n - dx - tw * (win.x1 - win.x0) / x_end, y = yy }
-      end
-    end
-    local c = clearest(cands, place.poles)
-    if c then
-      x, y = c.x, c.y
-      for k = 0, 4 do   -- later labels keep off this one
-        place.poles[#place.poles + 1] = { c[1] + c[3] * k / 4, c[2] + c[4] / 2 }
-      end
-    end
-  end
-  fig:text(panel, x, y, label, false, SMALL_TEXT, palette.neutral)
+  fig:line_label(panel, xs, ys, label, false, SMALL_TEXT * look.text, palette.neutral, NEUTRAL_LABEL_AT,
+                 ("pH %.2f"):format(n))
 end
 
 local function draw_domain_overlay(fig, panel, map, ref, mode)
@@ -588,24 +602,21 @@ local function draw_domain_overlay(fig, panel, map, ref, mode)
 end
 
 -- Fields, boundaries, water, neutral pH and (optionally) domains of one map.
-local function draw_map(fig, panel, map, opts, win, ref, cell_w, cell_h, fills)
+local function draw_map(fig, panel, map, opts, win, ref, look, fills)
   fills = fills or palette.map_fills(map)
-  local outline = (map.boundaries == nil or #map.boundaries == 0) and LINE_BOUNDARY or 0
-  local place = placement(map, win, ref, cell_w, cell_h)
+  local outline = (map.boundaries == nil or #map.boundaries == 0) and LINE_BOUNDARY * look.line or 0
   for i, f in ipairs(map.fields) do
     local label = f.species
-    if opts.labels == false then label = nil end
-    local lp = place.label_points[i] or {}
-    fig:polygon(panel, f.x, shifted(f.y, ref.offset), fills.fills[i], palette.ink, outline, label,
-                lp[1], lp[2] and lp[2] - ref.offset)
+    if opts.labels == false or f.label == false then label = nil end
+    fig:polygon(panel, f.x, shifted(f.y, ref.offset), fills.fills[i], palette.ink, outline, label)
   end
   if opts.domains then draw_domain_overlay(fig, panel, map, ref, opts.domains == true and "hatch" or opts.domains) end
   for _, b in ipairs(map.boundaries or {}) do
-    fig:line(panel, b.x, shifted(b.y, ref.offset), palette.ink, LINE_BOUNDARY, "solid")
+    fig:line(panel, b.x, shifted(b.y, ref.offset), palette.ink, LINE_BOUNDARY * look.line, "solid")
   end
-  draw_neutral(fig, panel, map, win, place)
+  draw_neutral(fig, panel, map, win, look)
   draw_water(fig, panel, map, win, ref,
-             { color = palette.water, width = LINE_WATER, dash = "dashed" }, true, place)
+             { color = palette.water, width = LINE_WATER * look.line, dash = "dashed" }, true, look)
   return fills
 end
 
@@ -618,19 +629,67 @@ local function finish(fig, opts, d)
   return fig
 end
 
-local function size(opts)
-  local w, h = opts.width or plot.defaults.width, opts.height or plot.defaults.height
+--- The look of a figure from its options: size, text and line scales,
+-- stamp mode.  opts.preset names one of plot.presets; width and height
+-- override its size.
+function plot.look(opts)
+  opts = opts or {}
+  local pr = { width = plot.defaults.width, height = plot.defaults.height, text = 1, line = 1, stamp = "full" }
+  if opts.preset ~= nil then
+    local p = plot.presets[opts.preset]
+    if not p then
+      local names = {}
+      for k in pairs(plot.presets) do names[#names + 1] = k end
+      table.sort(names)
+      error(("plot: opts.preset '%s' is not one of %s"):format(tostring(opts.preset), table.concat(names, ", ")), 3)
+    end
+    pr = { width = p.width, height = p.height, text = p.text, line = p.line, stamp = p.stamp,
+           fixed = p.fixed, name = opts.preset }
+  end
+  local st = opts.stamp
+  if not (st == nil or st == false or st == "full" or st == "short" or type(st) == "table") then
+    error("plot: opts.stamp must be \"full\", \"short\", false or a list of extra lines", 3)
+  end
+  local w, h = opts.width or pr.width, opts.height or pr.height
   if not (is_num(w) and is_num(h) and w >= 50 and h >= 50) then
     error("plot: opts.width and opts.height are in points (>= 50)", 3)
   end
-  return w, h
+  pr.width, pr.height = w, h
+  return pr
+end
+
+local function new_figure(look, rows, cols)
+  local fig = core.figure(look.width, look.height, rows or 1, cols or 1)
+  fig:scale(look.text, look.line)
+  return fig
+end
+
+-- A map's stamp lines (map.stamp), each with its short form when the map
+-- has one (map.stamp_short[line]), appended to extra.
+local function map_notes(extra, map)
+  local short = map.stamp_short or {}
+  for _, l in ipairs(map.stamp or {}) do
+    extra[#extra + 1] = (type(l) == "string" and short[l]) and { full = l, short = short[l] } or l
+  end
+end
+
+-- The stamp lines of the potential scale: the shift, and the electrode's
+-- own note (temperature correction) when it has one.
+local function add_reference(extra, ref)
+  if ref.offset ~= 0 then
+    extra[#extra + 1] = ("potential vs %s = E(SHE) − %s V"):format(ref.name, fmt_num(ref.offset))
+  end
+  if ref.text then extra[#extra + 1] = ref.text end
 end
 
 --- A predominance map as a figure.
--- opts: file (".png", ".svg", ".pdf"), width, height (points), dpi,
+-- opts: file (".png", ".svg", ".pdf"), preset ("column", "double",
+-- "slide", "page"; see plot.presets), width, height (points), dpi,
 -- reference = { name = "SCE", offset = 0.241 }, title, domains = "hatch" |
--- "tint" (overlay of corrosion domains), labels = false, stamp (extra
--- lines).  Returns the phlox.Figure and the fill table (fills, tiers).
+-- "tint" (overlay of corrosion domains), labels = false, stamp = "full" |
+-- "short" | false (what the figure shows; the file's metadata always holds
+-- the full provenance), notes (extra stamp lines).  Returns the
+-- phlox.Figure and the fill table (fills, tiers).
 function plot.map(map, opts)
   opts = opts or {}
   plot.check_map(map, "plot.map")
@@ -638,23 +697,20 @@ function plot.map(map, opts)
     error("plot.map: opts.domains must be \"hatch\" or \"tint\"", 2)
   end
   local ref = reference(opts, map)
-  local w, h = size(opts)
-  local fig = core.figure(w, h, 1, 1)
+  local look = plot.look(opts)
+  local fig = new_figure(look)
   local win = window_of(map, ref)
   fig:axes(1, win.x0, win.x1, win.y0, win.y1)
-  fig:titles(1, x_title(map), y_title(map, ref), opts.title or plot.map_title(map))
-  local fills = draw_map(fig, 1, map, opts, win, ref, w, h)
+  local title = opts.title or plot.map_title(map)
+  fig:titles(1, x_title(map), y_title(map, ref), title)
+  local fills = draw_map(fig, 1, map, opts, win, ref, look)
   local extra = {}
-  for _, s in ipairs(map.stamp or {}) do extra[#extra + 1] = s end
-  for _, s in ipairs(opts.stamp or {}) do extra[#extra + 1] = s end
-  if ref.offset ~= 0 then
-    extra[#extra + 1] = ("potential vs %s = E(SHE) - %s V"):format(ref.name, fmt_num(ref.offset))
-  end
-  if ref.text then extra[#extra + 1] = ref.text end
+  map_notes(extra, map)
+  add_reference(extra, ref)
   if fills.conflicts > 0 then
     extra[#extra + 1] = ("note: %d pairs of neighbouring fields share a lightness tier"):format(fills.conflicts)
   end
-  add_stamp(fig, plot.stamp_lines(map.conditions, extra, w))
+  apply_stamp(fig, opts, map.conditions, extra, title, look.width, look)
   return finish(fig, opts, plot.defaults), fills
 end
 
@@ -666,13 +722,11 @@ function plot.domains(map, opts)
   opts = opts or {}
   plot.check_map(map, "plot.domains")
   local ref = reference(opts, map)
-  local w, h = size(opts)
-  local fig = core.figure(w, h, 1, 1)
+  local look = plot.look(opts)
+  local fig = new_figure(look)
   local win = window_of(map, ref)
   fig:axes(1, win.x0, win.x1, win.y0, win.y1)
-  local t = fmt_T(celsius(map))
-  local title = opts.title or ((map.element and ("{%s}: corrosion domains"):format(map.element) or "corrosion domains")
-    .. (t and (" at " .. t) or ""))
+  local title = opts.title or (plot.map_title(map):gsub("^(.-H2O})", "%1 corrosion domains", 1))
   fig:titles(1, x_title(map), y_title(map, ref), title)
   local domains, derived = plot.domains_of(map)
   local present = {}
@@ -681,34 +735,27 @@ function plot.domains(map, opts)
     present[d.domain] = true
   end
   for _, b in ipairs(map.boundaries or {}) do
-    fig:line(1, b.x, shifted(b.y, ref.offset), palette.ink, 0.5, "solid")
+    fig:line(1, b.x, shifted(b.y, ref.offset), palette.ink, 0.5 * look.line, "solid")
   end
-  local place = placement(map, win, ref, w - 80, h)   -- the legend sits outside
   if opts.labels ~= false then   -- species names, small, over the domains
-    for i, f in ipairs(map.fields) do
-      local lp = place.label_points[i] or {}
-      fig:polygon(1, f.x, shifted(f.y, ref.offset), { 1, 1, 1, 0 }, palette.ink, 0, f.species,
-                  lp[1], lp[2] and lp[2] - ref.offset)
+    for _, f in ipairs(map.fields) do
+      fig:polygon(1, f.x, shifted(f.y, ref.offset), { 1, 1, 1, 0 }, palette.ink, 0, f.species)
     end
   end
-  draw_neutral(fig, 1, map, win, place)
-  draw_water(fig, 1, map, win, ref, { color = palette.water, width = LINE_WATER, dash = "dashed" }, true, place)
+  draw_neutral(fig, 1, map, win, look)
+  draw_water(fig, 1, map, win, ref, { color = palette.water, width = LINE_WATER * look.line, dash = "dashed" }, true, look)
   for _, name in ipairs(DOMAINS) do
     if present[name] then fig:legend_patch(1, name, palette.domain[name], palette.ink) end
   end
   fig:legend(1, opts.legend or "outside")
   local extra = {}
-  for _, s in ipairs(map.stamp or {}) do extra[#extra + 1] = s end
-  for _, s in ipairs(opts.stamp or {}) do extra[#extra + 1] = s end
+  map_notes(extra, map)
   if derived then
-    extra[#extra + 1] = "domains from field kinds: metal = immunity, metal sulfide = sulfide film, "
-      .. "other solid = passivation, dissolved or gas = corrosion"
+    extra[#extra + 1] = { full = "domains from field kinds: metal = immunity, metal sulfide = sulfide film, "
+      .. "other solid = passivation, dissolved or gas = corrosion", short = "domains from field kinds" }
   end
-  if ref.offset ~= 0 then
-    extra[#extra + 1] = ("potential vs %s = E(SHE) - %s V"):format(ref.name, fmt_num(ref.offset))
-  end
-  if ref.text then extra[#extra + 1] = ref.text end
-  add_stamp(fig, plot.stamp_lines(map.conditions, extra, w))
+  add_reference(extra, ref)
+  apply_stamp(fig, opts, map.conditions, extra, title, look.width, look)
   return finish(fig, opts, plot.defaults)
 end
 
@@ -762,8 +809,9 @@ end
 -- "dashed" | "dotted" | "dashdot", color = {r,g,b}, width = 1.2,
 -- chem = false }, ... }.  Labels without spaces are set as formulas.
 -- opts: x = { name, unit, min, max, log }, y = { ... }, title, legend =
--- "outside" (default) | "top right" | ... | false, conditions, stamp, file,
--- width, height, dpi.
+-- "outside" (default) | "top right" | ... | false, conditions, file,
+-- preset, width, height, dpi, stamp = "full" | "short" | false (or a list
+-- of extra lines), notes (extra stamp lines).
 function plot.curves(series, opts)
   opts = opts or {}
   if type(series) ~= "table" or #series == 0 then error("plot.curves: series must be a non-empty list", 2) end
@@ -785,8 +833,8 @@ function plot.curves(series, opts)
     if not a then error("plot.curves: no drawable y values (all <= 0 on a log axis?)", 2) end
     y0, y1 = y0 or a, y1 or b
   end
-  local w, h = size(opts)
-  local fig = core.figure(w, h, 1, 1)
+  local look = plot.look(opts)
+  local fig = new_figure(look)
   fig:axes(1, x0, x1, y0, y1, ox.log, oy.log)
   local function title_of(a, default)
     local n = axis_name(a.name or default)
@@ -796,14 +844,14 @@ function plot.curves(series, opts)
   fig:titles(1, title_of(ox, "x"), title_of(oy, "y"), opts.title)
   for i, s in ipairs(series) do
     local st = palette.series_style(i)
-    local color, dash, width = s.color or st.color, s.style or st.dash, s.width or 1.2
+    local color, dash, width = s.color or st.color, s.style or st.dash, (s.width or 1.2) * look.line
     local legend = s.label and legend_text(s.label, s.chem) or nil
     for k, r in ipairs(runs(s.x, s.y, ox.log, oy.log)) do
       fig:line(1, r[1], r[2], color, width, dash, k == 1 and opts.legend ~= false and legend or nil)
     end
   end
   if opts.legend ~= false then fig:legend(1, opts.legend or "outside") end
-  add_stamp(fig, plot.stamp_lines(opts.conditions, opts.stamp, w))
+  apply_stamp(fig, opts, opts.conditions, nil, opts.title, look.width, look)
   return finish(fig, opts, plot.defaults)
 end
 
@@ -851,36 +899,56 @@ function plot.shared_fills(maps)
 end
 
 --- Several maps as panels of one figure (e.g. a temperature sweep), on
--- shared axis ranges.  opts: cols (default: about square), panel_title =
--- function(map, i) -> string (default: temperature and pressure), pages
--- (PDF: one page per panel; cols is then ignored), and the options of plot.map (reference,
--- domains, labels, file, width, height, dpi, stamp).
+-- shared axis ranges.  opts: cols (default: one row up to three maps, then
+-- about square; with a preset, fewer when the panels would be narrower
+-- than plot.grid_min_panel points at its text scale, except on a slide's
+-- fixed frame), panel_title =
+-- function(map, i) -> string (default: plot.map_title), pages (PDF: one
+-- page per panel; cols is then ignored), and the options of plot.map
+-- (preset, reference, domains, labels, file, width, height, dpi, stamp,
+-- notes).  Cells left over in the last row stay blank (no empty axes).
+plot.grid_min_panel = 200   -- points (common practice for a readable map panel, no source)
+local GRID_FOOT = 30          -- points added under a preset's grid for the stamp
 function plot.grid(maps, opts)
   opts = opts or {}
   if type(maps) ~= "table" or #maps == 0 then error("plot.grid: maps must be a non-empty list", 2) end
   for i, m in ipairs(maps) do plot.check_map(m, ("plot.grid: maps[%d]"):format(i)) end
   local ref = reference(opts, maps[1])
   local n = #maps
+  local look = plot.look(opts)
   -- pages: one row whatever cols says, so the PDF has one page per map and
   -- no empty page (a cols that leaves cells empty would add blank pages)
-  local cols = (opts.pages and n) or opts.cols or math.ceil(math.sqrt(n))
+  local cols = opts.cols or (n <= 3 and n or math.ceil(math.sqrt(n)))
+  if not opts.cols and look.name and not look.fixed then
+    local fit = math.max(1, math.floor(look.width / (plot.grid_min_panel * look.text)))
+    cols = math.min(cols, fit)
+  end
+  if opts.pages then cols = n end
+  cols = math.max(1, math.min(cols, n))
   local rows = math.ceil(n / cols)
-  local w = opts.width or (plot.defaults.width * (cols > 1 and not opts.pages and 0.75 * cols or 1))
-  local h = opts.height or (plot.defaults.height * (rows > 1 and not opts.pages and 0.75 * rows or 1))
-  local fig = core.figure(w, h, rows, cols)
+  local w, h
+  if look.name then   -- a preset: its width; panels keep its shape unless the frame is fixed
+    w = opts.width or look.width
+    h = opts.height or ((look.fixed or opts.pages) and look.height
+                        or rows * (w / cols) * look.height / look.width + GRID_FOOT * look.text)
+  else
+    w = opts.width or (plot.defaults.width * (cols > 1 and not opts.pages and 0.75 * cols or 1))
+    h = opts.height or (plot.defaults.height * (rows > 1 and not opts.pages and 0.75 * rows or 1))
+  end
+  look.width, look.height = w, h
+  local fig = new_figure(look, rows, cols)
+  fig:used(n)
   local win = opts.shared == false and nil or union_window(maps, ref)
   local temps = {}
   local shared = opts.shared_fills ~= false and plot.shared_fills(maps) or {}
+  local title1
   for i, m in ipairs(maps) do
     local wi = win or window_of(m, ref)
     fig:axes(i, wi.x0, wi.x1, wi.y0, wi.y1)
     local title = opts.panel_title and opts.panel_title(m, i) or plot.map_title(m)
+    title1 = title1 or title
     fig:titles(i, x_title(m), y_title(m, ref), title)
-    if opts.pages then   -- each page shows one panel at the full page size
-      draw_map(fig, i, m, opts, wi, ref, w, h, shared[i])
-    else
-      draw_map(fig, i, m, opts, wi, ref, w / cols, h / rows, shared[i])
-    end
+    draw_map(fig, i, m, opts, wi, ref, look, shared[i])
     temps[#temps + 1] = fmt_T(celsius(m)) or "?"
   end
   local cond = {}   -- only the conditions every panel shares; titles tell the rest
@@ -889,17 +957,13 @@ function plot.grid(maps, opts)
     for i = 2, #maps do same = same and (maps[i].conditions or {})[k] == v end
     if same then cond[k] = v end
   end
-  local extra = { "panels at " .. table.concat(temps, ", ") }
+  local extra = { { full = "panels at " .. table.concat(temps, ", "), short = false } }
   if shared[1] and shared[1].conflicts > 0 then
     extra[#extra + 1] = ("note: %d pairs of neighbouring fields share a lightness tier"):format(shared[1].conflicts)
   end
-  for _, s in ipairs(maps[1].stamp or {}) do extra[#extra + 1] = s end
-  for _, s in ipairs(opts.stamp or {}) do extra[#extra + 1] = s end
-  if ref.offset ~= 0 then
-    extra[#extra + 1] = ("potential vs %s = E(SHE) - %s V"):format(ref.name, fmt_num(ref.offset))
-  end
-  if ref.text then extra[#extra + 1] = ref.text end
-  add_stamp(fig, plot.stamp_lines(cond, extra, w))
+  map_notes(extra, maps[1])
+  add_reference(extra, ref)
+  apply_stamp(fig, opts, cond, extra, title1, w, look)
   return finish(fig, opts, plot.defaults)
 end
 
@@ -914,23 +978,38 @@ function plot.overlay(maps, opts)
   if type(maps) ~= "table" or #maps == 0 then error("plot.overlay: maps must be a non-empty list", 2) end
   for i, m in ipairs(maps) do plot.check_map(m, ("plot.overlay: maps[%d]"):format(i)) end
   local ref = reference(opts, maps[1])
-  local w, h = size(opts)
-  local fig = core.figure(w, h, 1, 1)
+  local look = plot.look(opts)
+  local fig = new_figure(look)
   local win = union_window(maps, ref)
   fig:axes(1, win.x0, win.x1, win.y0, win.y1)
   local m1 = maps[1]
-  local title = opts.title or ((m1.element and ("{%s}–{H2O}: "):format(m1.element) or "") .. "overlaid boundaries")
+  local cond = {}   -- only the conditions all maps share; the legend tells the rest
+  for k, v in pairs(m1.conditions or {}) do
+    local same = true
+    for i = 2, #maps do same = same and (maps[i].conditions or {})[k] == v end
+    if same then cond[k] = v end
+  end
+  local title = opts.title
+  if not title then
+    local lig = (m1.conditions or {}).ligand
+    local head = m1.element and (lig and ("{%s}–{%s}–{H2O}"):format(m1.element, lig) or ("{%s}–{H2O}"):format(m1.element))
+    local temps, seen = {}, {}
+    for _, m in ipairs(maps) do
+      local t = celsius(m)
+      if t and not seen[t] then seen[t] = true; temps[#temps + 1] = t end
+    end
+    title = (head and (head .. ": ") or "") .. "boundaries" .. (#temps > 0 and (" at " .. fmt_Ts(temps)) or "")
+    local fx = fixed_text(cond, m1)
+    if fx then title = title .. ", " .. fx end
+  end
   fig:titles(1, x_title(m1), y_title(m1, ref), title)
   local lab = opts.labels_of == nil and 1 or opts.labels_of
-  local place = placement(maps[lab or 1] or m1, win, ref, w - 80, h)
   if lab and maps[lab] then
-    for i, f in ipairs(maps[lab].fields) do
-      local lp = place.label_points[i] or {}
-      fig:polygon(1, f.x, shifted(f.y, ref.offset), { 1, 1, 1, 0 }, palette.ink, 0, f.species,
-                  lp[1], lp[2] and lp[2] - ref.offset)
+    for _, f in ipairs(maps[lab].fields) do
+      fig:polygon(1, f.x, shifted(f.y, ref.offset), { 1, 1, 1, 0 }, palette.ink, 0, f.species)
     end
   end
-  draw_neutral(fig, 1, m1, win, place)
+  draw_neutral(fig, 1, m1, win, look)
   local labels = {}
   for i, m in ipairs(maps) do
     local st = palette.series_style(i)
@@ -938,36 +1017,26 @@ function plot.overlay(maps, opts)
     labels[i] = label
     local first = true
     for _, b in ipairs(m.boundaries or {}) do
-      fig:line(1, b.x, shifted(b.y, ref.offset), st.color, 1.1, st.dash, first and label or nil)
+      fig:line(1, b.x, shifted(b.y, ref.offset), st.color, 1.1 * look.line, st.dash, first and label or nil)
       first = false
     end
     if first then   -- no boundaries: outline the fields instead
       for _, f in ipairs(m.fields) do
         local xs, ys = { table.unpack(f.x) }, { table.unpack(shifted(f.y, ref.offset)) }
         xs[#xs + 1], ys[#ys + 1] = xs[1], ys[1]
-        fig:line(1, xs, ys, st.color, 1.1, st.dash, first and label or nil)
+        fig:line(1, xs, ys, st.color, 1.1 * look.line, st.dash, first and label or nil)
         first = false
       end
     end
     if opts.water ~= false then
-      draw_water(fig, 1, m, win, ref, { color = st.color, width = 0.6, dash = "dashed" }, i == 1, place)
+      draw_water(fig, 1, m, win, ref, { color = st.color, width = 0.6 * look.line, dash = "dashed" }, i == 1, look)
     end
   end
   fig:legend(1, opts.legend or "outside")
-  local extra = { "overlaid: " .. table.concat(labels, ", ") }
-  for _, s in ipairs(m1.stamp or {}) do extra[#extra + 1] = s end
-  for _, s in ipairs(opts.stamp or {}) do extra[#extra + 1] = s end
-  if ref.offset ~= 0 then
-    extra[#extra + 1] = ("potential vs %s = E(SHE) - %s V"):format(ref.name, fmt_num(ref.offset))
-  end
-  if ref.text then extra[#extra + 1] = ref.text end
-  local cond = {}   -- only the conditions all maps share; the legend tells the rest
-  for k, v in pairs(m1.conditions or {}) do
-    local same = true
-    for i = 2, #maps do same = same and (maps[i].conditions or {})[k] == v end
-    if same then cond[k] = v end
-  end
-  add_stamp(fig, plot.stamp_lines(cond, extra, w))
+  local extra = { { full = "overlaid: " .. table.concat(labels, ", "), short = false } }
+  map_notes(extra, m1)
+  add_reference(extra, ref)
+  apply_stamp(fig, opts, cond, extra, title, look.width, look)
   return finish(fig, opts, plot.defaults)
 end
 

@@ -85,6 +85,7 @@ local S_CODATA = {
   Cu = 33.15, Zn = 41.63, Pb = 64.80, Sn = 51.18, Ag = 42.55, Cd = 51.80, Mg = 32.67,
   Ca = 41.59, Na = 51.30, K = 64.68, Al = 28.30, Ti = 30.72,
   Fe = 27.28, Ni = 29.87, Mn = 32.01, Co = 30.04, Mo = 28.66, Cr = 23.77,
+  Hg = 75.90, Sr = 55.69, B = 5.90,
 }
 -- NBS: from memory of Wagman et al. 1982 (the element entropies the NBS dfG use)
 local S_NBS = {
@@ -93,6 +94,7 @@ local S_NBS = {
   Cu = 33.150, Zn = 41.63, Pb = 64.81, Sn = 51.55, Ag = 42.55, Cd = 51.76, Mg = 32.68,
   Ca = 41.42, Na = 51.21, K = 64.18, Al = 28.33, Ti = 30.63,
   Fe = 27.28, Ni = 29.87, Mn = 32.01, Co = 30.04, Mo = 28.66, Cr = 23.77,
+  Hg = 76.02, Sr = 52.3, Ba = 62.8, Au = 47.40,
 }
 
 -- ---------------------------------------------------------------- load the six files
@@ -249,7 +251,7 @@ local function resolve(setname)
         local logK = r.raw.logK
         if logK == nil then
           local k = r.raw.logK_T
-          logK = k[1] + k[2] * T0 + k[3] / T0 + k[4] * math.log(T0, 10) + k[5] / T0^2
+          logK = k[1] + (k[2] or 0) * T0 + (k[3] or 0) / T0 + (k[4] or 0) * math.log(T0, 10) + (k[5] or 0) / T0^2
         end
         local sum, coef, ok = 0, 0, true
         for _, t in ipairs(r.terms) do
@@ -542,7 +544,7 @@ for _, f in ipairs(order) do
   local sp = species[f].raw
   if sp.logK_T and sp.logK then
     local k = sp.logK_T
-    local v = k[1] + k[2] * T0 + k[3] / T0 + k[4] * math.log(T0, 10) + k[5] / T0^2
+    local v = k[1] + (k[2] or 0) * T0 + (k[3] or 0) / T0 + (k[4] or 0) * math.log(T0, 10) + (k[5] or 0) / T0^2
     check(math.abs(v - sp.logK) <= 0.01, string.format("%-28s analytic %8.4f vs %8.3f", f, v, sp.logK))
   end
 end

@@ -19,6 +19,12 @@ Checks, each with an outside reference:
     15:2004 L* = 116 f(Y/Yn) - 16), differs by >= 9 between every pair of
     neighbouring fields (palette design: 10, less 8-bit rounding).
   * Nothing is cut off: the outermost pixels of every figure are white.
+  * The full provenance is in every file's metadata whatever the figure
+    prints: PNG text chunks (tEXt, iTXt; PNG spec 11.3.4) each with a
+    CRC-32 that zlib computes here, placed before the image data; SVG
+    <metadata>; PDF document information /Title and /Subject (ISO 32000-1,
+    14.3.3; text strings in UTF-16BE with a byte order mark, 7.9.2.2).
+    stamp = false prints no stamp line, "short" prints no checksums.
 """
 import json
 import os
@@ -30,6 +36,8 @@ import sys
 import tempfile
 import xml.etree.ElementTree as ET
 import zlib
+
+from pngdecode import decode_png
 
 PHLOX = sys.argv[1]
 HERE = os.path.dirname(os.path.abspath(__file__))
@@ -60,6 +68,9 @@ local map = test_map()
 local fig, fills = plot.map(map, { file = D .. "m.png", dpi = %(dpi)d })
 plot.map(map, { file = D .. "m.svg" })
 plot.map(map, { file = D .. "m.pdf" })
+plot.map(map, { file = D .. "short.svg", preset = "column" })
+plot.map(map, { file = D .. "none.svg", stamp = false })
+plot.map(map, { file = D .. "none.png", stamp = false, dpi = 72 })
 plot.domains(map, { file = D .. "d.png", dpi = 72 })
 plot.overlay({ test_map(25), test_map(200) }, { file = D .. "o.png", dpi = 72 })
 local maps = { test_map(25), test_map(100), test_map(200), test_map(300) }
@@ -91,47 +102,6 @@ def run_driver(out_dir, work):
         print(r.stdout, r.stderr)
         raise SystemExit("driver failed")
     return json.loads(r.stdout.strip().splitlines()[-1])
-
-
-def decode_png(data):
-    """RGBA 8-bit PNG -> (width, height, rows of bytes); ISO/IEC 15948."""
-    assert data[:8] == b"\x89PNG\r\n\x1a\n", "PNG signature"
-    pos, idat, ihdr = 8, b"", None
-    while pos < len(data):
-        n, kind = struct.unpack(">I4s", data[pos:pos + 8])
-        body = data[pos + 8:pos + 8 + n]
-        if kind == b"IHDR":
-            ihdr = struct.unpack(">IIBBBBB", body)
-        elif kind == b"IDAT":
-            idat += body
-        pos += 12 + n
-    w, h, depth, ctype, _, _, interlace = ihdr
-    assert depth == 8 and ctype in (2, 6) and interlace == 0, "8-bit RGB(A), not interlaced"
-    bpp = 4 if ctype == 6 else 3
-    raw = zlib.decompress(idat)
-    stride = w * bpp
-    rows, prev, i = [], bytearray(stride), 0
-    for _ in range(h):
-        ftype, line = raw[i], bytearray(raw[i + 1:i + 1 + stride])
-        i += 1 + stride
-        for k in range(stride):
-            a = line[k - bpp] if k >= bpp else 0
-            b = prev[k]
-            c = prev[k - bpp] if k >= bpp else 0
-            if ftype == 1:
-                line[k] = (line[k] + a) & 255
-            elif ftype == 2:
-                line[k] = (line[k] + b) & 255
-            elif ftype == 3:
-                line[k] = (line[k] + (a + b) // 2) & 255
-            elif ftype == 4:
-                p = a + b - c
-                pa, pb, pc = abs(p - a), abs(p - b), abs(p - c)
-                pr = a if pa <= pb and pa <= pc else (b if pb <= pc else c)
-                line[k] = (line[k] + pr) & 255
-        rows.append(bytes(line))
-        prev = line
-    return w, h, bpp, rows
 
 
 def pixel(img, x, y):
@@ -241,6 +211,60 @@ def main():
         white_border(img, "map")
         for f in ("d.png", "o.png", "g.png", "c.png"):
             white_border(decode_png(open(os.path.join(a, f), "rb").read()), f)
+        # metadata: full provenance in every format, whatever is printed
+        png = open(os.path.join(a, "none.png"), "rb").read()
+        pos, texts, order = 8, {}, []
+        while pos < len(png):
+            n, kind = struct.unpack(">I4s", png[pos:pos + 8])
+            body = png[pos + 8:pos + 8 + n]
+            crc = struct.unpack(">I", png[pos + 8 + n:pos + 12 + n])[0]
+            check(crc == zlib.crc32(kind + body) & 0xffffffff, "PNG %s chunk CRC" % kind.decode())
+            order.append(kind)
+            if kind == b"tEXt":
+                key, val = body.split(b"\0", 1)
+                texts[key.decode("latin-1")] = val.decode("latin-1")
+            elif kind == b"iTXt":
+                key, rest = body.split(b"\0", 1)
+                check(rest[0:2] == b"\0\0", "iTXt uncompressed")
+                lang, rest = rest[2:].split(b"\0", 1)
+                tkey, val = rest.split(b"\0", 1)
+                texts[key.decode("latin-1")] = val.decode("utf-8")
+            pos += 12 + n
+        check(order[0] == b"IHDR" and order.index(b"tEXt") < order.index(b"IDAT"), "text chunks before the image data")
+        d = texts.get("Description", "")
+        for want in ("conditions: T = 25 °C", "program: phlox", "invented test geometry, not data",
+                     "Equilibrium thermodynamics: shows what can form, not how fast."):
+            check(want in d, "PNG Description holds %r" % want)
+        check(texts.get("Title") == "M–H2O at 25 °C", "PNG Title %r" % texts.get("Title"))
+        check(texts.get("Software", "").startswith("phlox "), "PNG Software")
+        for name, printed in (("m.svg", "full"), ("short.svg", "short"), ("none.svg", "none")):
+            root = ET.parse(os.path.join(a, name)).getroot()
+            meta = root.find(svg_ns + "metadata")
+            entries = {e.get("key"): e.text for e in meta} if meta is not None else {}
+            check("program: phlox" in entries.get("Description", "") and
+                  "invented test geometry, not data" in entries.get("Description", ""),
+                  "%s: full provenance in <metadata>" % name)
+            stamp = [l for l in root.find(svg_ns + "desc").text.splitlines() if l.startswith("stamp: ")]
+            if printed == "none":
+                check(stamp == [], "stamp = false prints nothing: %r" % stamp)
+            elif printed == "short":
+                check(stamp and not any("program: phlox" in l for l in stamp), "short stamp: no checksum lines")
+                check(any("not how fast" in l for l in stamp), "short stamp keeps the caution")
+            else:
+                check(any("program: phlox" in l for l in stamp), "full stamp printed by default")
+
+        def pdf_info(key):
+            m = re.search(rb"/" + key + rb"\s*(<[0-9A-Fa-f]+>|\((?:[^()\\]|\\.)*\))", pdf)
+            if not m:
+                return None
+            v = m.group(1)
+            if v.startswith(b"<"):
+                raw = bytes.fromhex(v[1:-1].decode())
+                return raw[2:].decode("utf-16-be") if raw[:2] == b"\xfe\xff" else raw.decode("latin-1")
+            return v[1:-1].decode("latin-1")
+        check(pdf_info(b"Title") == "M–H2O at 25 °C", "PDF /Title %r" % pdf_info(b"Title"))
+        subj = pdf_info(b"Subject") or ""
+        check("program: phlox" in subj and "not how fast" in subj, "PDF /Subject holds the provenance")
     finally:
         shutil.rmtree(work, ignore_errors=True)
     if FAILURES:

@@ -151,16 +151,16 @@ check(plot.map(map):render("pdf") == plot.map(map):render("pdf"), "PDF bytes dif
 local ref = { name = "SCE", offset = 0.241 }   -- offset given by the user; any number works here
 local s2 = plot.map(map, { reference = ref }):render("svg")
 check(s2:find("y axis: E / V vs SCE", 1, true), "axis names the reference electrode")
-check(s2:find("potential vs SCE = E(SHE) - 0.241 V", 1, true), "stamp states the shift")
+check(s2:find("potential vs SCE = E(SHE) − 0.241 V", 1, true), "stamp states the shift")
 check(not pcall(plot.map, map, { reference = { name = "no such electrode" } }), "unknown reference name")
 -- by name, the same names as phlox.to_she: 25 °C offset, corrected with the
 -- electrode's dE/dT within its range, refused beyond (issue 14 item 7)
 local phlox = require "phlox"
 local s3 = plot.map(map, { reference = "SCE" }):render("svg")
-check(s3:find("potential vs SCE = E(SHE) - 0.241 V", 1, true), "named reference at 25 °C")
+check(s3:find("potential vs SCE = E(SHE) − 0.241 V", 1, true), "named reference at 25 °C")
 local E50 = phlox.to_she(0, "SCE", { T_C = 50 })
 local s4 = plot.map(test_map(50), { reference = "SCE" }):render("svg")
-check(s4:find(("potential vs SCE = E(SHE) - %.4g V"):format(E50), 1, true), "named reference corrected to 50 °C")
+check(s4:find(("potential vs SCE = E(SHE) − %.4g V"):format(E50), 1, true), "named reference corrected to 50 °C")
 check(not pcall(plot.map, test_map(200), { reference = "SCE" }), "SCE refused at 200 °C")
 check(plot.map(test_map(200), { reference = "SCE", reference_at_25C = true }):render("svg")
   :find("kept at 25 °C", 1, true), "electrode kept at 25 °C is stamped")
@@ -223,6 +223,29 @@ bad = test_map(); bad.y.max = bad.y.min
 ok, err = pcall(plot.map, bad)
 check(not ok and err:find("map.y", 1, true), "empty y range: " .. tostring(err))
 check(not pcall(plot.curves, {}), "no series")
+-- titles say what the figure is: ligand and its total, fixed pH or E, temperature
+local lm = test_map(90)
+lm.conditions.ligand, lm.conditions.ligand_activity, lm.conditions.pH = "S", 1e-3, 5
+check(plot.map_title(lm) == "{M}–{S}–{H2O} at 90 °C, a(Σ{S}) = 10⁻³, pH 5", plot.map_title(lm))
+lm.ligand_fields = { { species = "HS^-" } }
+lm.conditions.pH, lm.conditions.E_V = nil, -0.5
+check(plot.map_title(lm) == "{M}–{S}–{H2O} at 90 °C, a({HS^-}) = 10⁻³, E = −0.5 V vs SHE", plot.map_title(lm))
+check(plot.number(2.5e-3) == "2.5 × 10⁻³" and plot.number(-0.25) == "−0.25" and plot.number(1e-6) == "10⁻⁶",
+      "typeset numbers")
+ok, err = pcall(plot.map, map, { stamp = "tiny" })
+check(not ok and err:find("opts.stamp must be", 1, true), "bad stamp mode: " .. tostring(err))
+ok, err = pcall(plot.map, map, { preset = "poster" })
+check(not ok and err:find("column, double, page, slide", 1, true), "unknown preset names the presets: " .. tostring(err))
+-- presets: size and scaled text (the stamp's first line at the preset's size)
+for name, p in pairs(plot.presets) do
+  local f = plot.map(map, { preset = name })
+  local W, H = f:render("svg"):match('width="([%d.]+)p?t?" height="([%d.]+)p?t?"')
+  check(tonumber(W) == p.width and tonumber(H) == p.height, name .. " preset size " .. tostring(W) .. " x " .. tostring(H))
+  for _, b in ipairs(f:layout()) do
+    if b.kind == "title" then check(math.abs(b.size - 10 * p.text) < 1e-9 or b.size < 10 * p.text, name .. " title size") end
+    if b.kind == "tick" then check(math.abs(b.size - 8.5 * p.text) < 1e-9, name .. " tick label size " .. b.size) end
+  end
+end
 check(not pcall(plot.map, map, { file = dir .. "/m.jpg" }), "unknown extension")
 
 os.execute("rm -rf " .. dir)

@@ -76,9 +76,25 @@ compare({ "Zn" }, "Zn", 200, 43, 31)
 -- the Lua wrapper: a map table that phlox.plot can overlay on the exact map
 local gm = phlox.grid_map { library = cl, element = "Cu", T_C = 25, total = 1e-6, ligand = "Cl",
                             ligand_total = 1e-2, n = 41, threads = 2 }
-check(#gm.boundaries > 0 and gm.failures == 0 and #gm.fields == 0, "phlox.grid_map result")
+check(#gm.boundaries > 0 and gm.failures == 0 and #gm.fields > 0, "phlox.grid_map result")
+-- its fields are the nodes' cells joined per species: every node lies in
+-- the field of its own label
+for j = 0, gm.ny - 1 do
+  for i = 0, gm.nx - 1 do
+    local x = gm.x.min + i * (gm.x.max - gm.x.min) / (gm.nx - 1)
+    local y = gm.y.min + j * (gm.y.max - gm.y.min) / (gm.ny - 1)
+    -- nodes on the window's edge sit on their cell's outline: probe just inside
+    x = math.min(math.max(x, gm.x.min + 1e-9), gm.x.max - 1e-9)
+    y = math.min(math.max(y, gm.y.min + 1e-9), gm.y.max - 1e-9)
+    local want = gm.species[gm.labels[j * gm.nx + i + 1]]
+    check(phlox.locate(gm, x, y) == want, ("node (%d, %d) lies in the field of %s"):format(i, j, tostring(want)))
+  end
+end
 for _, b in ipairs(gm.boundaries) do check(#b.x == #b.y and #b.x >= 2, "boundary polyline") end
 local exact = phlox.map { library = cl, element = "Cu", T_C = 25, ligand = "Cl", ligand_activity = 1e-2 }
+-- water lines and neutral pH from the same records as the exact map's
+check(math.abs(gm.water.o2.a - exact.water.o2.a) < 1e-12 and math.abs(gm.water.o2.b - exact.water.o2.b) < 1e-12
+      and math.abs(gm.neutral_pH - exact.neutral_pH) < 1e-12, "rigorous map water lines and neutral pH")
 local svg = require("phlox.plot").overlay({ exact, gm }):render("svg")
 check(svg:find("<svg", 1, true) and svg:find("rigorous", 1, true), "overlay of exact and rigorous maps")
 print("test_rigorous: all checks passed")

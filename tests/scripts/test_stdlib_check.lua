@@ -2,7 +2,8 @@
 -- `phlox check` (the sandboxed loader's structural, unit, membership,
 -- balance and Gibbs-Helmholtz checks; docs/element-files.md, "Checks").
 -- The files are checked together in load order (the built-in H/O file,
--- the metals, then the ligands Cl S C N P F), so reactants defined in earlier
+-- the metals, then the ligands Cl S C N P F, then ligand groups such as
+-- CN), so reactants defined in earlier
 -- files resolve.  Warnings are allowed and listed; any error fails the test.
 local bin = assert(os.getenv("PHLOX_BIN"), "PHLOX_BIN not set")
 local src = assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR not set")
@@ -24,15 +25,21 @@ assert(present.HO, "stdlib/elements/HO.lua missing")
 
 local order = { "HO" }
 local metals = {}
+-- polyatomic ligand groups (CN.lua: two capitals) load after the ligands,
+-- as phlox.library loads them
+local groups = {}
 for sym in pairs(present) do
-  if sym ~= "HO" and not is_ligand[sym] then metals[#metals + 1] = sym end
+  if sym:match("^%u%u$") and sym ~= "HO" then groups[#groups + 1] = sym
+  elseif sym ~= "HO" and not is_ligand[sym] then metals[#metals + 1] = sym end
 end
 table.sort(metals)
+table.sort(groups)
 for _, m in ipairs(metals) do order[#order + 1] = m end
 for _, l in ipairs(LIGANDS) do
   assert(present[l], "ligand file missing: " .. l .. ".lua")
   order[#order + 1] = l
 end
+for _, g in ipairs(groups) do order[#order + 1] = g end
 local n_files = 0
 for _ in pairs(present) do n_files = n_files + 1 end
 assert(#order == n_files, ("ordered %d files of %d"):format(#order, n_files))

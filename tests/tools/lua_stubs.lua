@@ -18,7 +18,7 @@
 local core = require "phlox.core"
 
 local MODULES = { "phlox", "phlox.plot", "phlox.export", "phlox.sweep", "phlox.diagrams",
-                  "phlox.palette", "phlox.json", "phlox.provenance", "phlox.core" }
+                  "phlox.palette", "phlox.json", "phlox.provenance", "phlox.report", "phlox.core" }
 -- phlox.cli is the phlox program's command runner, not a module for studies.
 
 local args = { ... }

@@ -148,6 +148,53 @@ static void test_species_units_override_kcal(void **state)
     px_db_free(db);
 }
 
+/* uncertainty = { G, H, S, logK } is kept in the record in internal units
+ * (the species' own units converted like G, H, S) and shown by the list;
+ * a missing entry stays NAN.  Values: the CODATA 1989 +- of Zn^2+ (dfH
+ * 0.20 kJ/mol, S 0.5 J/(mol K), from memory of Cox, Wagman and Medvedev
+ * 1989), S written here in cal to check the conversion. */
+static void test_uncertainty_stored(void **state)
+{
+    (void)state;
+    const char *src = "return { element = 'Zn', species = {\n"
+                      "  { formula = 'Zn^2+', model = 'hkf', G = -147.203, H = -153.39, S = -109.8 / 4.184,\n"
+                      "    estimate = { Cp = 46, V = -25 }, source = 'test',\n"
+                      "    uncertainty = { H = 0.2, S = 0.5 / 4.184 }, units = { entropy = 'cal' } },\n"
+                      "  { formula = 'ZnOH^+', model = 'logk', reaction = 'Zn^2+ + H2O(l) = ZnOH^+ + H^+',\n"
+                      "    logK = -8.96, uncertainty = { logK = 0.05 }, source = 'test' } } }\n";
+    px_db *db = px_db_new();
+    px_data_problems *p = px_data_problems_new();
+    assert_int_equal(px_db_add_builtins(db), PX_OK);
+    int st = px_data_load_buffer(db, src, strlen(src), "u.lua", NULL, p);
+    if (st != PX_OK) dump(p);
+    assert_int_equal(st, PX_OK);
+    const px_species *z = px_db_find(db, "Zn^2+");
+    assert_close(z->unc.H, 200.0, 1e-12, 0);
+    assert_close(z->unc.S, 0.5, 1e-12, 0);
+    assert_true(isnan(z->unc.G) && isnan(z->unc.logK));
+    const px_species *h = px_db_find(db, "ZnOH^+");
+    assert_close(h->unc.logK, 0.05, 1e-12, 0);
+    assert_true(isnan(h->unc.G));
+    FILE *out = tmpfile();
+    assert_non_null(out);
+    assert_int_equal(px_data_list_write(db, "Zn", out), 2);
+    rewind(out);
+    char line[1024];
+    assert_non_null(fgets(line, sizeof line, out));
+    assert_non_null(strstr(line, "[H +- 0.2 kJ/mol, S +- 0.5 J/(mol K)]"));
+    assert_non_null(fgets(line, sizeof line, out));
+    assert_non_null(strstr(line, "log K -8.960 +- 0.05"));
+    fclose(out);
+    /* negative: an error naming the field */
+    const char *neg = "return { element = 'Zn', species = { { formula = 'Zn(s)', model = 'cp', G = 0, H = 0,"
+                      " S = 41.63, cp = { a = 25.4 }, source = 'test', uncertainty = { S = -0.15 } } } }";
+    px_data_problems_clear(p);
+    assert_int_equal(px_data_check_buffer(NULL, neg, strlen(neg), "n.lua", NULL, p), PX_EDATA);
+    assert_true(has(p, "uncertainty.S: an uncertainty must not be negative", NULL));
+    px_data_problems_free(p);
+    px_db_free(db);
+}
+
 /* an HKF estimate through the loader, against a species Shock and Helgeson
  * estimated themselves: Fe^2+ (reference/hkf/hkf_parameters.csv, "from memory
  * of Shock et al. 1997"; its note: a1/a2/a4 and c2 obey the estimation
@@ -375,11 +422,26 @@ static void test_user_override(void **state)
     assert_close(z->dGf, -147060.0, 0, 1e-6); /* replaced by the NBS value */
     assert_non_null(strstr(z->file, "user_override.lua"));
     assert_int_equal(z->line, 6);
-    /* excluding something absent is a warning, not an error */
+    /* excluding something absent is an error with a hint (issue 13: a
+     * misspelt exclude must not pass silently), and the merge adds nothing */
     const char *src = "return { exclude = { 'ZnO(s)' } }";
     px_data_problems_clear(p);
-    assert_int_equal(px_data_merge_user_buffer(db, src, strlen(src), "u2.lua", NULL, p), PX_OK);
-    assert_true(has(p, "u2.lua:1: ZnO(s): warning: exclude: not in the database", NULL));
+    assert_int_equal(px_data_merge_user_buffer(db, src, strlen(src), "u2.lua", NULL, p), PX_EDATA);
+    assert_true(has(p, "u2.lua:1: ZnO(s): exclude: ZnO(s): not in the loaded data", NULL));
+    assert_int_equal(px_db_count(db), 2);
+    /* a solid named without its mineral name resolves to the only solid of
+     * that formula: add ZnO(s,zincite), then exclude "ZnO(s)" */
+    const char *add = "return { species = { { formula = 'ZnO(s,zincite)', model = 'cp', G = -320.479,"
+                      " H = -350.46, S = 43.65, cp = { a = 40.3 }, source = 'test: stdlib Zn.lua values' } } }";
+    px_data_problems_clear(p);
+    st = px_data_merge_user_buffer(db, add, strlen(add), "u3.lua", NULL, p);
+    if (st != PX_OK) dump(p);
+    assert_int_equal(st, PX_OK);
+    assert_int_equal(px_db_count(db), 3);
+    px_data_problems_clear(p);
+    assert_int_equal(px_data_merge_user_buffer(db, src, strlen(src), "u4.lua", NULL, p), PX_OK);
+    assert_null(px_db_find(db, "ZnO(s,zincite)"));
+    assert_int_equal(px_db_count(db), 2);
     px_data_problems_free(p);
     px_db_free(db);
 }
@@ -468,6 +530,7 @@ int main(void)
         cmocka_unit_test(test_good_zn_si_conversion),
         cmocka_unit_test(test_hkf_printed_scaling_cal),
         cmocka_unit_test(test_species_units_override_kcal),
+        cmocka_unit_test(test_uncertainty_stored),
         cmocka_unit_test(test_hkf_estimate_fe2),
         cmocka_unit_test(test_logk_species),
         cmocka_unit_test(test_logk_reaction_forms),

@@ -4,6 +4,7 @@
 #include "core/status.h"
 #include "render/render.h"
 #include <cairo.h>
+#include <math.h>
 #include <stdlib.h>
 #include <string.h>
 
@@ -185,12 +186,58 @@ static void test_bad_input(void **state)
     px_figure_free(NULL);
 }
 
+/* The layout, on invented geometry: a big square field holds its label, a
+ * sliver gets it led out, a label along the plot's diagonal runs at the
+ * diagonal's angle as drawn, and only the used panels are drawn. */
+static void test_layout(void **state)
+{
+    (void)state;
+    px_figure *f = px_figure_new(300, 300, 1, 2);
+    assert_non_null(f);
+    assert_int_equal(px_figure_panels_used(f, 1), PX_OK);
+    assert_int_equal(px_figure_axes(f, 0, 0, 10, 0, 10, 0, 0), PX_OK);
+    px_rgba grey = {0.8, 0.8, 0.8, 1}, ink = {0, 0, 0, 1};
+    double bx[] = {0, 10, 10, 0}, by[] = {0, 0, 5, 5};
+    double sx[] = {0, 10, 10, 0}, sy[] = {5, 5, 5.05, 5.05};
+    assert_int_equal(px_figure_polygon(f, 0, bx, by, 4, grey, ink, 0, "Big(s)", NAN, NAN), PX_OK);
+    assert_int_equal(px_figure_polygon(f, 0, sx, sy, 4, grey, ink, 0, "Thin^2+", NAN, NAN), PX_OK);
+    double lx[] = {0, 10}, ly[] = {0, 10};
+    assert_int_equal(px_figure_line_label(f, 0, lx, ly, 2, "along", NULL, 0, 7, ink, 0.8), PX_OK);
+    px_label_box *b;
+    size_t n;
+    assert_int_equal(px_figure_layout(f, &b, &n), PX_OK);
+    int big = 0, thin = 0, along = 0, other_panel = 0;
+    for (size_t i = 0; i < n; i++) {
+        if (b[i].panel == 1) other_panel = 1;
+        if (strcmp(b[i].text, "Big(s)") == 0) big = b[i].kind == PX_LABEL_FIELD;
+        if (strcmp(b[i].text, "Thin^2+") == 0) thin = b[i].kind == PX_LABEL_LEADER;
+        if (strcmp(b[i].text, "along") == 0) {
+            along = b[i].placed;
+            /* the angle follows the slope as drawn (the plot is not square) */
+            double x, y, w, h;
+            assert_int_equal(px_figure_plot_rect(f, 0, 72, &x, &y, &w, &h), PX_OK);
+            assert_close(b[i].angle, atan2(h, w) * 180 / 3.14159265358979323846, 0, 1e-9);
+        }
+    }
+    assert_true(big && thin && along && !other_panel);
+    px_figure_layout_free(b, n);
+    /* metadata keys follow the PNG keyword rules */
+    assert_int_equal(px_figure_meta(f, "", "x"), PX_EINVAL);
+    assert_int_equal(px_figure_meta(f, " Title", "x"), PX_EINVAL);
+    assert_int_equal(px_figure_meta(f, "Ti\ntle", "x"), PX_EINVAL);
+    assert_int_equal(px_figure_meta(f, "Title", "x"), PX_OK);
+    assert_int_equal(px_figure_meta(f, "Title", "y"), PX_OK); /* replaced */
+    assert_int_equal(px_figure_scale(f, 0.1, 1), PX_EINVAL);
+    assert_int_equal(px_figure_panels_used(f, 3), PX_EINVAL);
+    px_figure_free(f);
+}
+
 int main(void)
 {
     const struct CMUnitTest tests[] = {
         cmocka_unit_test(test_ticks),         cmocka_unit_test(test_polygon_geometry),
         cmocka_unit_test(test_png_pixels),    cmocka_unit_test(test_vector_outputs),
-        cmocka_unit_test(test_bad_input),
+        cmocka_unit_test(test_bad_input),     cmocka_unit_test(test_layout),
     };
     return cmocka_run_group_tests(tests, NULL, NULL);
 }

@@ -140,6 +140,54 @@ static void test_db(void **state)
     px_db_free(NULL);
 }
 
+/* Name resolution (issue 13): a solid without its mineral name stands for
+ * the only solid of that formula; otherwise the message lists candidates. */
+static void test_db_resolve(void **state)
+{
+    (void)state;
+    px_db *db = px_db_new();
+    assert_non_null(db);
+    const char *names[] = {"ZnO(s,zincite)", "PbO(s,litharge)", "PbO(s,massicot)", "Fe(OH)3(am)",
+                           "FeO(OH)(s,goethite)", "Zn^2+"};
+    for (size_t i = 0; i < sizeof names / sizeof names[0]; i++) {
+        px_species s = mk(names[i], PX_MODEL_CP, 0, 0, 1);
+        assert_int_equal(px_db_add(db, &s), PX_OK);
+    }
+    long k;
+    char msg[512];
+    assert_int_equal(px_db_resolve(db, "ZnO(s)", &k, msg, sizeof msg), PX_OK);
+    assert_string_equal(px_db_get(db, (size_t)k)->f.text, "ZnO(s,zincite)");
+    assert_int_equal(px_db_resolve(db, "ZnO(cr)", &k, msg, sizeof msg), PX_OK);
+    assert_string_equal(px_db_get(db, (size_t)k)->f.text, "ZnO(s,zincite)");
+    assert_int_equal(px_db_resolve(db, "Zn^2+(aq)", &k, msg, sizeof msg), PX_OK); /* canonical */
+    assert_string_equal(px_db_get(db, (size_t)k)->f.text, "Zn^2+");
+    /* two polymorphs: ambiguous, both named */
+    assert_int_equal(px_db_resolve(db, "PbO(s)", &k, msg, sizeof msg), PX_ENOTFOUND);
+    assert_int_equal(k, -1);
+    assert_string_equal(msg, "PbO(s): 2 solids have this formula: did you mean PbO(s,litharge) or "
+                             "PbO(s,massicot)?");
+    /* "(cr)" does not stand for an amorphous solid */
+    assert_int_equal(px_db_resolve(db, "Fe(OH)3(cr)", &k, msg, sizeof msg), PX_ENOTFOUND);
+    assert_string_equal(msg, "Fe(OH)3(cr): not in the loaded data: did you mean Fe(OH)3(am)?");
+    assert_int_equal(px_db_resolve(db, "Fe(OH)3(s)", &k, msg, sizeof msg), PX_OK);
+    /* another state of the same formula is offered, not taken */
+    assert_int_equal(px_db_resolve(db, "ZnO(aq)", &k, msg, sizeof msg), PX_ENOTFOUND);
+    assert_string_equal(msg, "ZnO(aq): not in the loaded data: did you mean ZnO(s,zincite)?");
+    assert_int_equal(px_db_resolve(db, "CuO(s)", &k, msg, sizeof msg), PX_ENOTFOUND);
+    assert_string_equal(msg, "CuO(s): not in the loaded data (is its element loaded?)");
+    assert_int_equal(px_db_resolve(db, "zn^2+", &k, msg, sizeof msg), PX_EPARSE);
+    assert_non_null(strstr(msg, "did you mean Zn^2+?"));
+    /* lists */
+    const char *list[] = {"Zn^2+", "ZnO(s)"};
+    assert_true(px_db_listed(db, list, 2, px_db_index(db, "ZnO(s,zincite)")));
+    assert_false(px_db_listed(db, list, 2, px_db_index(db, "PbO(s,litharge)")));
+    assert_int_equal(px_db_check_list(db, "exclude", list, 2, msg, sizeof msg), PX_OK);
+    const char *bad[] = {"Zn^2+", "PbO(s)"};
+    assert_int_equal(px_db_check_list(db, "exclude", bad, 2, msg, sizeof msg), PX_ENOTFOUND);
+    assert_non_null(strstr(msg, "exclude: PbO(s): 2 solids"));
+    px_db_free(db);
+}
+
 /* ------------------------------------------------------------ HKF table */
 typedef struct hkf_row {
     px_species sp;
@@ -876,7 +924,9 @@ int main(void)
 {
     const struct CMUnitTest tests[] = {
         cmocka_unit_test(test_reaction_parse),  cmocka_unit_test(test_reaction_errors),
-        cmocka_unit_test(test_db),              cmocka_unit_test(test_hkf_table_cp_v),
+        cmocka_unit_test(test_db),
+        cmocka_unit_test(test_db_resolve),
+        cmocka_unit_test(test_hkf_table_cp_v),
         cmocka_unit_test(test_hkf_estimate),    cmocka_unit_test(test_finite_differences),
         cmocka_unit_test(test_pkw),             cmocka_unit_test(test_standard_potentials),
         cmocka_unit_test(test_electron_convention), cmocka_unit_test(test_cp_model),

@@ -83,6 +83,12 @@ function phlox_core.map(db, opts) end
 ---@param T number
 function phlox_core.nernst_slope(T) end
 
+--- (C) phlox_core.pdf_pages(path, {fig, ...}) -> true | nil, message: one PDF, a page per figure
+---@param path string
+---@param fig phlox.Figure
+---@return any # true | nil, message: one PDF, a page per figure
+function phlox_core.pdf_pages(path, fig) end
+
 --- (C) phlox_core.polygon_pole(xs, ys [, tol])
 ---@param xs any
 ---@param ys any
@@ -111,6 +117,12 @@ function phlox_core.speciate(db, opts) end
 ---@param ... any
 ---@return any
 function phlox_core.strerror(...) end
+
+--- (C) phlox_core.text_runs(text [, chem]) -> { {kind = "normal"|"sub"|"sup", text}, ... }
+---@param text string
+---@param chem? any
+---@return any # { {kind = "normal"|"sub"|"sup", text}, ... }
+function phlox_core.text_runs(text, chem) end
 
 --- (C) phlox_core.text_width(text, size [, chem]) -> points, as figures measure it
 ---@param text string
@@ -193,6 +205,11 @@ phlox.Figure = {}
 ---@param ylog? any
 function phlox.Figure:axes(panel, x0, x1, y0, y1, xlog, ylog) end
 
+--- (C) phlox.Figure:bare(panel [, on])
+---@param panel integer
+---@param on? any
+function phlox.Figure:bare(panel, on) end
+
 --- (C) phlox.Figure:close()
 function phlox.Figure:close() end
 
@@ -205,6 +222,10 @@ function phlox.Figure:close() end
 ---@param spacing? any
 ---@param angle? any
 function phlox.Figure:hatch(panel, xs, ys, colour, width, spacing, angle) end
+
+--- (C) phlox.Figure:layout() -> { {kind, panel (1-based, 0 = stamp), item, text, placed,
+---@return any # { {kind, panel (1-based, 0 = stamp), item, text, placed,
+function phlox.Figure:layout() end
 
 --- (C) phlox.Figure:legend(panel, where)
 ---@param panel integer
@@ -229,6 +250,23 @@ function phlox.Figure:legend_patch(panel, text, fill, stroke, hatch, angle) end
 ---@param dash? any
 ---@param legend? any
 function phlox.Figure:line(panel, xs, ys, color, width, dash, legend) end
+
+--- (C) phlox.Figure:line_label(panel, xs, ys, text [, chem, size, colour, at, alt])
+---@param panel integer
+---@param xs any
+---@param ys any
+---@param text string
+---@param chem? any
+---@param size? number
+---@param colour? any
+---@param at? any
+---@param alt? any
+function phlox.Figure:line_label(panel, xs, ys, text, chem, size, colour, at, alt) end
+
+--- (C) phlox.Figure:meta(key, text)
+---@param key any
+---@param text string
+function phlox.Figure:meta(key, text) end
 
 --- (C) phlox.Figure:pages(true)
 ---@param on any
@@ -263,9 +301,18 @@ function phlox.Figure:render(format, dpi) end
 ---@return any # true | nil, message
 function phlox.Figure:save(path, dpi) end
 
+--- (C) phlox.Figure:scale(text, line)
+---@param text string
+---@param line any
+function phlox.Figure:scale(text, line) end
+
 --- (C) phlox.Figure:stamp(line)
 ---@param line any
 function phlox.Figure:stamp(line) end
+
+--- (C) phlox.Figure:stamp_below([on])
+---@param on? any
+function phlox.Figure:stamp_below(on) end
 
 --- (C) phlox.Figure:text(panel, x, y, text [, chem, size, color])
 ---@param panel integer
@@ -283,5 +330,9 @@ function phlox.Figure:text(panel, x, y, text, chem, size, color) end
 ---@param ytitle any
 ---@param title string
 function phlox.Figure:titles(panel, xtitle, ytitle, title) end
+
+--- (C) phlox.Figure:used(n)
+---@param n integer
+function phlox.Figure:used(n) end
 
 return phlox_core

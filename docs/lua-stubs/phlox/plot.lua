@@ -5,12 +5,13 @@
 ---@class phlox.plot
 ---@field caution string
 ---@field defaults table
+---@field grid_min_panel integer
+---@field presets table
 local phlox_plot = {}
 
 ---@class phlox_plot.curves.opts
 ---@field conditions? any
 ---@field legend? any
----@field stamp? any
 ---@field title? string
 ---@field x? number
 ---@field y? number
@@ -18,7 +19,6 @@ local phlox_plot = {}
 ---@class phlox_plot.domains.opts
 ---@field labels? any
 ---@field legend? any
----@field stamp? any
 ---@field title? string
 
 ---@class phlox_plot.grid.opts
@@ -28,6 +28,11 @@ local phlox_plot = {}
 ---@field panel_title? any
 ---@field shared? any
 ---@field shared_fills? any
+---@field width? number
+
+---@class phlox_plot.look.opts
+---@field height? number
+---@field preset? any
 ---@field stamp? any
 ---@field width? number
 
@@ -35,19 +40,20 @@ local phlox_plot = {}
 ---@field domains? any
 ---@field name? string
 ---@field offset? any
----@field stamp? any
 ---@field title? string
 
 ---@class phlox_plot.overlay.opts
 ---@field labels_of? any
 ---@field legend? any
 ---@field legend_label? any
----@field stamp? any
 ---@field title? string
 ---@field water? any
 
 ---@class phlox_plot.stamp_lines.opts
----@field no_script? any
+---@field text? string
+
+---@class phlox_plot.stamp_short.opts
+---@field text? string
 
 --- Check a map table; raises an error naming the offending field.
 ---@param map table
@@ -60,8 +66,9 @@ function phlox_plot.check_map(map, where) end
 --- "dashed" | "dotted" | "dashdot", color = {r,g,b}, width = 1.2,
 --- chem = false }, ... }.  Labels without spaces are set as formulas.
 --- opts: x = { name, unit, min, max, log }, y = { ... }, title, legend =
---- "outside" (default) | "top right" | ... | false, conditions, stamp, file,
---- width, height, dpi.
+--- "outside" (default) | "top right" | ... | false, conditions, file,
+--- preset, width, height, dpi, stamp = "full" | "short" | false (or a list
+--- of extra lines), notes (extra stamp lines).
 ---@param series any
 ---@param opts? phlox_plot.curves.opts
 ---@return any
@@ -80,31 +87,47 @@ function phlox_plot.domains(map, opts) end
 ---@return any
 function phlox_plot.domains_of(map) end
 
---- Several maps as panels of one figure (e.g. a temperature sweep), on
---- shared axis ranges.  opts: cols (default: about square), panel_title =
---- function(map, i) -> string (default: temperature and pressure), pages
---- (PDF: one page per panel; cols is then ignored), and the options of plot.map (reference,
---- domains, labels, file, width, height, dpi, stamp).
+--- A list of formulas as typeset text: "{Fe^2+}, {FeOH^+}".
+---@param list any
+---@return any
+function phlox_plot.formulas(list) end
+
 ---@param maps any
 ---@param opts? phlox_plot.grid.opts
 ---@return any
 function phlox_plot.grid(maps, opts) end
 
+--- The look of a figure from its options: size, text and line scales,
+--- stamp mode.  opts.preset names one of plot.presets; width and height
+--- override its size.
+---@param opts? phlox_plot.look.opts
+---@return any
+function phlox_plot.look(opts) end
+
 --- A predominance map as a figure.
---- opts: file (".png", ".svg", ".pdf"), width, height (points), dpi,
+--- opts: file (".png", ".svg", ".pdf"), preset ("column", "double",
+--- "slide", "page"; see plot.presets), width, height (points), dpi,
 --- reference = { name = "SCE", offset = 0.241 }, title, domains = "hatch" |
---- "tint" (overlay of corrosion domains), labels = false, stamp (extra
---- lines).  Returns the phlox.Figure and the fill table (fills, tiers).
+--- "tint" (overlay of corrosion domains), labels = false, stamp = "full" |
+--- "short" | false (what the figure shows; the file's metadata always holds
+--- the full provenance), notes (extra stamp lines).  Returns the
+--- phlox.Figure and the fill table (fills, tiers).
 ---@param map table
 ---@param opts? phlox_plot.map.opts
 ---@return any
 function phlox_plot.map(map, opts) end
 
---- The default title of a map: "Fe–H₂O at 25 °C" (and the pressure when
---- it is not 1 bar).
+--- The default title of a map: "Fe–S–H₂O at 25 °C, a(ΣS) = 10⁻³" with the
+--- pressure when it is not 1 bar and what the map holds fixed (the ligand's
+--- total, a fixed pH or E).
 ---@param map table
 ---@return any
 function phlox_plot.map_title(map) end
+
+--- A number as typeset on figures: 0.01, 25, 10⁻⁶, 2.5 × 10⁻³ (true minus).
+---@param v any
+---@return any
+function phlox_plot.number(v) end
 
 --- The boundaries of several maps on one plot (temperatures, ligand
 --- levels), each map in its own colour and dash, with a legend.  The field
@@ -126,12 +149,22 @@ function phlox_plot.overlay(maps, opts) end
 function phlox_plot.shared_fills(maps) end
 
 --- The stamp lines of a figure: conditions, program and checksums, extra
---- lines, the caution; wrapped to the figure width.
+--- lines, the caution; wrapped to the figure width (points) at text scale
+--- `opts.text` (default 1).
 ---@param conditions any
----@param extra? any
+---@param extra any
 ---@param width number
 ---@param opts? phlox_plot.stamp_lines.opts
 ---@return any
 function phlox_plot.stamp_lines(conditions, extra, width, opts) end
+
+--- The short stamp: the conditions in brief, the extra lines' short forms,
+--- and one line naming the program, the caution and where the rest is.
+---@param conditions any
+---@param extra? any
+---@param width number
+---@param opts? phlox_plot.stamp_short.opts
+---@return any
+function phlox_plot.stamp_short(conditions, extra, width, opts) end
 
 return phlox_plot

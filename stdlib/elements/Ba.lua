@@ -1,0 +1,43 @@
+-- stdlib/elements/Ba.lua: barium, its ion and hydrolysis species.  Barite
+-- is in S.lua, witherite and the carbonate ion pairs in C.lua (ligand files),
+-- as measured solubility constants with their temperature equations.
+--
+-- Primary compilation: the NBS tables (Wagman et al. 1982) for Ba(cr) and
+-- Ba^2+ (CODATA 1989 gives no key value for barium, as recalled); hydrolysis
+-- from Baes and Mesmer 1976.  The NBS Ba^2+ with NBS barite and the SH88
+-- sulfate reproduces the measured barite Ksp within 0.01.  Every number was
+-- recalled, not read ("from memory of").
+
+local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic " ..
+            "Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
+local BM = "from memory of Baes and Mesmer 1976, The Hydrolysis of Cations (I = 0, 25 C)"
+
+return {
+  element = "Ba",
+  title = "Barium",
+  units = { energy = "kJ", entropy = "J" },
+  species = {
+    {
+      formula = "Ba(s)", model = "cp",
+      G = 0, H = 0, S = 62.8,
+      cp = { a = 28.07 },
+      source = NBS .. " (S; Cp at 298.15 K held constant)",
+      quality = "high",
+    },
+    {
+      formula = "Ba^2+", model = "logk",
+      reaction = "Ba(s) + 2 H^+ = Ba^2+ + H2(g)",
+      logK = 98.243, dH = -537.64,
+      source = "derived here from " .. NBS .. ": Ba^2+ dfG -560.77, dfH -537.64 kJ/mol, S 9.6 J/(mol K)",
+      quality = "high",
+      note = "E0(Ba^2+/Ba) = -2.906 V (CRC -2.912).",
+    },
+    {
+      formula = "BaOH^+", model = "logk",
+      reaction = "Ba^2+ + H2O(l) = BaOH^+ + H^+",
+      logK = -13.47,
+      source = BM, quality = "medium",
+      note = "No dH recalled: held at 25 C.",
+    },
+  },
+}

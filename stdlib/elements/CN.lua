@@ -1,0 +1,130 @@
+-- stdlib/elements/CN.lua: cyanide, a polyatomic ligand.  CN^-, HCN(aq), the
+-- cyanate it oxidises to, and the cyano complexes of Au, Ag, Cu, Zn, Ni and
+-- Fe (ferro- and ferricyanide).
+--
+-- How the library handles a polyatomic ligand (docs/element-files.md,
+-- "Polyatomic ligands"): the species of the group live in a file named after
+-- the group, CN.lua, whose `element` is the group's first element (C), so the
+-- membership and ligand-order checks treat them as carbon species.
+-- phlox.library { "Au", "CN" } loads C.lua and N.lua (graphite and N2(g),
+-- from which CN^- is formed) and then this file; phlox.map { element = "Au",
+-- ligand = "CN" } keeps the C-N group intact: the ligand's species are those
+-- with one N per C (CN^-, HCN(aq), OCN^-), so cyanide's slow oxidation to
+-- carbonate and nitrogen species is left out, the metastable convention of
+-- cyanide diagrams in hydrometallurgy.
+--
+-- Primary compilation: the NBS tables (Wagman et al. 1982) for CN^-, HCN,
+-- OCN^- and the Au, Fe, Ni and Zn cyano complexes (their dfG, dfH and S close
+-- the Gibbs-Helmholtz cycle within 0.6 kJ/mol, a check on the recall), so
+-- these carry reaction enthalpies (van 't Hoff).  Ag and Cu complexes: Smith
+-- and Martell, Critical Stability Constants (no enthalpy recalled: held at
+-- 25 C).  Every number was recalled, not read ("from memory of").
+--
+-- Caution: HCN is volatile and toxic; the diagrams say which species can
+-- form, not how fast cyanide oxidises or gold dissolves.
+
+local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic " ..
+            "Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
+local NBSD = "derived here from dfG and dfH of " .. NBS
+local SM = "from memory of Smith and Martell, Critical Stability Constants (I = 0, 25 C)"
+
+-- A cyano complex of a monovalent ion with a Smith and Martell cumulative
+-- constant and no recalled enthalpy (held at 25 C).
+local function cyano(ion, n, charge, logbeta, note)
+  local metal = ion:sub(1, -3)
+  local f = metal .. "(CN)" .. n .. "^" .. charge
+  return { formula = f, model = "logk", reaction = ion .. " + " .. n .. " CN^- = " .. f,
+           logK = logbeta, source = SM, quality = "medium",
+           note = "No dH recalled: held at 25 C." .. (note and (" " .. note) or "") }
+end
+
+local species = {
+    -- ---------------------------------------------------------------- the ligand
+    {
+      formula = "CN^-", model = "logk",
+      reaction = "C(s,graphite) + 0.5 N2(g) + 0.5 H2(g) = CN^- + H^+",
+      logK = -30.203, dH = 150.6,
+      source = NBSD .. ": CN^- dfG 172.4, dfH 150.6 kJ/mol, S 94.1 J/(mol K)",
+      quality = "medium",
+      note = "Formation from the elements; van 't Hoff with constant dH (no Cp of CN^- recalled).",
+    },
+    {
+      formula = "HCN(aq)", model = "logk",
+      reaction = "CN^- + H^+ = HCN(aq)",
+      logK = 9.233, dH = -43.5,
+      source = NBSD .. ": HCN(aq) dfG 119.7, dfH 107.1 kJ/mol, S 124.7 J/(mol K)",
+      quality = "high",
+      note = "pKa 9.23; Smith and Martell give 9.21 and Izatt et al. 1962 measured dH of " ..
+             "ionisation 43.6 kJ/mol (both recalled).",
+    },
+    {
+      formula = "OCN^-", model = "logk",
+      reaction = "CN^- + H2O(l) = OCN^- + H2(g)",
+      logK = 5.724, dH = -10.77,
+      source = NBSD .. ": OCN^- dfG -97.4, dfH -146.0 kJ/mol, S 106.7 J/(mol K)",
+      quality = "medium",
+      note = "Cyanate, the first oxidation product of cyanide: E0(OCN^- + 2 H^+ + 2 e- = CN^- + " ..
+             "H2O) = -0.169 V.  Exclude it for a diagram of cyanide held unoxidised.",
+    },
+    -- ---------------------------------------------------------------- gold
+    {
+      formula = "Au(CN)2^-", model = "logk",
+      reaction = "Au(s) + 2 CN^- + H^+ = Au(CN)2^- + 0.5 H2(g)",
+      logK = 10.336, dH = -58.9,
+      source = NBSD .. ": Au(CN)2^- dfG 285.8, dfH 242.3 kJ/mol, S 172 J/(mol K)",
+      quality = "medium",
+      note = "E0(Au(CN)2^-/Au) = -0.611 V (CRC -0.60).  With Au^+ of Au.lua (1.692 V) log " ..
+             "beta2 = 38.94; Smith and Martell give 38.3 (recalled), the literature 36.6-39.3.",
+    },
+    -- ---------------------------------------------------------------- silver, copper(I)
+    -- Smith and Martell cumulative constants; see cyano() below
+    -- ---------------------------------------------------------------- zinc, nickel
+    {
+      formula = "Zn(CN)4^2-", model = "logk",
+      reaction = "Zn^2+ + 4 CN^- = Zn(CN)4^2-",
+      logK = 16.76, dH = -106.2,
+      source = NBSD .. ": Zn(CN)4^2- dfG 446.9, dfH 342.3 kJ/mol, S 226 J/(mol K); Zn^2+ dfG -147.06, dfH -153.89",
+      quality = "low",
+      note = "The literature splits: 16.7 (Lange's Handbook) and 19.6 (quoted in gold-processing " ..
+             "texts), both recalled; the NBS entry agrees with the lower one.",
+    },
+    {
+      formula = "Ni(CN)4^2-", model = "logk",
+      reaction = "Ni^2+ + 4 CN^- = Ni(CN)4^2-",
+      logK = 30.12, dH = -180.6,
+      source = NBSD .. ": Ni(CN)4^2- dfG 472.1, dfH 367.8 kJ/mol, S 218 J/(mol K); Ni^2+ dfG -45.6, dfH -54.0",
+      quality = "medium",
+      note = "Smith and Martell 30.22 (recalled).",
+    },
+    -- ---------------------------------------------------------------- iron
+    {
+      formula = "Fe(CN)6^4-", model = "logk",
+      reaction = "Fe^2+ + 6 CN^- = Fe(CN)6^4-",
+      logK = 45.66, dH = -358.9,
+      source = NBSD .. ": Fe(CN)6^4- dfG 694.9, dfH 455.6 kJ/mol, S 95.0 J/(mol K); Fe^2+ dfG -78.90, dfH -89.1",
+      quality = "low",
+      note = "Ferrocyanide.  Older compilations print log beta6 = 35 to 35.4 (recalled), which " ..
+             "with their ferricyanide constants does not reproduce the measured ferri/ferro " ..
+             "potential; the NBS entries do (0.358 V).  Computed with NBS Fe^2+, so with the " ..
+             "file's Fe^2+ (Shock et al. 1997) dfG of the complex differs from NBS by 12.6 kJ/mol.",
+    },
+    {
+      formula = "Fe(CN)6^3-", model = "logk",
+      reaction = "Fe(CN)6^4- + H^+ = Fe(CN)6^3- + 0.5 H2(g)",
+      logK = -6.044, dH = 106.3,
+      source = NBSD .. ": Fe(CN)6^3- dfG 729.4, dfH 561.9 kJ/mol, S 270.3 J/(mol K)",
+      quality = "high",
+      note = "Ferricyanide, defined on ferrocyanide: E0 = 0.358 V, the CRC value.",
+    },
+}
+table.insert(species, cyano("Ag^+", 2, "-", 20.48, "Lange's Handbook lists 21.1 (recalled)."))
+table.insert(species, cyano("Cu^+", 2, "-", 24.0))
+table.insert(species, cyano("Cu^+", 3, "2-", 28.59))
+table.insert(species, cyano("Cu^+", 4, "3-", 30.30))
+
+return {
+  element = "C",
+  title = "Cyanide (C-N group ligand)",
+  units = { energy = "kJ", entropy = "J" },
+  species = species,
+}
