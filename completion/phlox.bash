@@ -6,11 +6,12 @@
 # count), Lua scripts, element files and folders.  Checked against
 # `phlox --help` and `phlox COMMAND --help` by tests/packaging/test_completion.sh.
 
-_phlox_commands="reaction check list"
-_phlox_options="-e -i -p --path -v --version -h --help --"
+_phlox_commands="reaction check list merge"
+_phlox_options="-e -i -p --path --shard -v --version -h --help --"
 _phlox_reaction_options="-T --temperature -P --pressure --json -h --help"
 _phlox_check_options="-h --help"
 _phlox_list_options="-h --help"
+_phlox_merge_options="-h --help"
 
 # Element symbols of the library, with the --path folders given so far.
 _phlox_elements()
@@ -34,7 +35,7 @@ _phlox()
     # argument) and the --path folders before it.
     for ((i = 1; i < COMP_CWORD; i++)); do
         case ${COMP_WORDS[i]} in
-            -e) ((i++)) ;;
+            -e | --shard) ((i++)) ;;
             -p | --path)
                 paths+=(--path "${COMP_WORDS[i + 1]}")
                 ((i++))
@@ -76,6 +77,17 @@ _phlox()
             fi
             return 0
             ;;
+        merge)
+            if [[ $cur == -* ]]; then
+                COMPREPLY=($(compgen -W "$_phlox_merge_options" -- "$cur"))
+            elif ((COMP_CWORD == i + 1)); then
+                compopt -o filenames 2>/dev/null
+                COMPREPLY=($(compgen -f -X '!*.lua' -- "$cur") $(compgen -d -- "$cur"))
+            else
+                compopt -o default 2>/dev/null
+            fi
+            return 0
+            ;;
         "") ;;
         *)
             # a script: its arguments are its own business; offer files
@@ -90,7 +102,7 @@ _phlox()
             COMPREPLY=($(compgen -d -- "$cur"))
             return 0
             ;;
-        -e) return 0 ;;
+        -e | --shard) return 0 ;;
     esac
     if [[ $cur == -* ]]; then
         COMPREPLY=($(compgen -W "$_phlox_options" -- "$cur"))

@@ -114,6 +114,7 @@ end
 
 -- Every result is checked before use: no solid may be supersaturated, and
 -- some copper solid must remain (the water is in equilibrium with the wall).
+local speciation_provenance   -- the files, conditions and options of the speciations
 local function speciate(T_C, redox, cl)
   local r, err = phlox.speciate {
     library = lib, T_C = T_C,
@@ -122,6 +123,7 @@ local function speciate(T_C, redox, cl)
     activity = "davies",
   }
   if not r then return nil, err end
+  speciation_provenance = r.provenance
   for _, s in ipairs(r.species) do
     if s.phase == "solid" and s.si > SI_TOL then
       return nil, ("%s is supersaturated (SI %.3g) at %g C, %s, Cl %g: not an equilibrium")
@@ -288,6 +290,7 @@ for _, ext in ipairs({ "png", "svg" }) do
     x = { name = "T", unit = "°C", min = 25, max = 150 },
     y = { name = "dissolved Cu", unit = "mol/kg", log = true },
     conditions = { NaOH_mol_kg = NAOH, Cu_offered_mol_kg = CU_TOTAL, activity_model = "Davies" },
+    from = speciation_provenance,
     stamp = { STAMP[1], "Cl: total chloride, mol/kg (NaCl)",
               "aerated: " .. REDOX[1].why .. "; deaerated: " .. REDOX[2].why },
   })
@@ -328,12 +331,12 @@ local conditions = { activity_Cu = CU_ACTIVITY, a_Cl = CL, ionic_strength = 0 }
 export.csv(path("boundaries.csv"), boundary_rows, {
   columns = { "T_C", "species_a", "species_b", "reaction", "line", "intercept", "slope_V_per_pH",
               "pH_1", "E_1", "pH_2", "E_2" },
-  conditions = conditions,
+  conditions = conditions, from = maps,
 })
 wrote("boundaries.csv")
 export.csv(path("fields.csv"), field_rows, {
   columns = { "T_C", "species", "kind", "domain", "area_pH_V", "share_percent", "quality" },
-  conditions = conditions,
+  conditions = conditions, from = maps,
 })
 wrote("fields.csv")
 export.csv(path("operating-points.csv"), points, {
@@ -341,11 +344,13 @@ export.csv(path("operating-points.csv"), points, {
               "solid", "dissolved_Cu", "carrier", "carrier_share_of_dissolved" },
   conditions = { Cl_mol_kg = CL, NaOH_mol_kg = NAOH, Cu_offered_mol_kg = CU_TOTAL,
                  activity_model = "Davies" },
+  from = speciation_provenance,
 })
 wrote("operating-points.csv")
 export.csv(path("dissolved-copper.csv"), results, {
   columns = { "T_C", "state", "Cl", "pH", "dissolved_Cu" },
   conditions = { NaOH_mol_kg = NAOH, Cu_offered_mol_kg = CU_TOTAL, activity_model = "Davies" },
+  from = speciation_provenance,
 })
 wrote("dissolved-copper.csv")
 
@@ -370,7 +375,7 @@ export.json(path("study.json"), {
   maps = per_T,
   operating_points = points,
   log_K_held_at_25C = held_list,
-}, { conditions = conditions })
+}, { conditions = conditions, from = { maps, speciation_provenance } })
 wrote("study.json")
 
 -- 6. Summary ---------------------------------------------------------------------

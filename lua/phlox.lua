@@ -150,7 +150,7 @@ function phlox.library(spec)
   end)
   local filter = { "H", "O" }
   for _, e in ipairs(elements) do filter[#filter + 1] = e end
-  local files = {}
+  local files, sources = {}, {}
   local function load(rel, opts)
     local text, where = phlox.read_library_file(rel)
     if not text then error("phlox.library: " .. where, 3) end
@@ -162,7 +162,7 @@ function phlox.library(spec)
       end
       error("phlox.library: " .. (#lines > 0 and table.concat(lines, "\n") or msg), 3)
     end
-    provenance.record_file(where, text)
+    sources[where] = provenance.record_file(where, text).sha256
     files[#files + 1] = where
   end
   load("elements/HO.lua", { elements = filter })
@@ -175,10 +175,10 @@ function phlox.library(spec)
     f:close()
     local ok, msg = db:load(text, path, { elements = filter, user = true })
     if not ok then error("phlox.library: " .. msg, 2) end
-    provenance.record_file(path, text)
+    sources[path] = provenance.record_file(path, text).sha256
     files[#files + 1] = path
   end
-  return setmetatable({ db = db, elements = elements, files = files }, phlox.Library)
+  return setmetatable({ db = db, elements = elements, files = files, sources = sources }, phlox.Library)
 end
 
 phlox.Library = {}
@@ -234,9 +234,14 @@ end
 local T_REF, P_REF = 298.15, 1.0   -- K, bar: where log K records are given
 local NEAR_T_REF = 0.5             -- K: closer than this to 25 C, nothing is held
 local SAME_LOGK = 1e-12            -- log K this close to its 25 C value is held
-function phlox.constant_logk(lib, elements, T, P)
+-- The answer is kept per library, elements, T and P (a sweep asks the same
+-- question for every ligand level); opts.cache = false recomputes it.
+function phlox.constant_logk(lib, elements, T, P, opts)
   if getmetatable(lib) ~= phlox.Library then error("phlox.constant_logk: library expected", 2) end
   P = P or pressure({}, T, "phlox.constant_logk")
+  local key = ("%s|%.17g|%.17g|%d"):format(table.concat(elements, ","), T, P, lib.db:count())
+  local cached = lib._held and lib._held[key]
+  if cached and not (opts and opts.cache == false) then return table.move(cached, 1, #cached, 1, {}) end
   local held, seen = {}, {}
   if math.abs(T - T_REF) <= NEAR_T_REF then return held end
   for _, el in ipairs(elements) do
@@ -250,6 +255,8 @@ function phlox.constant_logk(lib, elements, T, P)
     end
   end
   table.sort(held)
+  lib._held = lib._held or {}
+  lib._held[key] = table.move(held, 1, #held, 1, {})
   return held
 end
 
@@ -441,7 +448,9 @@ function phlox.map(opts)
     ligand = opts.ligand, ligand_activity = opts.ligand and (opts.ligand_activity or 1e-3) or nil,
   }
   m.files = lib.files
+  m.provenance = provenance.of_result(lib, { opts.element, opts.ligand }, m.conditions, opts)
   stamp_held(m, held)
+  m.provenance.notes = m.stamp   -- the caveats travel with the provenance (into sweep results)
   return m
 end
 
@@ -507,6 +516,16 @@ function phlox.speciate(opts)
     if (sp.molality or 0) > 0 then names[#names + 1] = sp.formula end
   end
   note_sour(r, names)
+  local els = {}
+  for e in pairs(opts.totals or {}) do els[#els + 1] = e end
+  for _, f in ipairs({ opts.fugacities or {}, opts.fixed or {} }) do
+    for formula in pairs(f) do
+      for e in tostring(formula):gmatch("%u%l?") do els[#els + 1] = e end
+    end
+  end
+  table.sort(els)
+  r.provenance = provenance.of_result(lib, els, { T_C = r.T_C, P_bar = P }, opts)
+  r.provenance.notes = r.stamp
   return r
 end
 
@@ -595,7 +614,11 @@ function phlox.grid_map(opts)
   g.conditions = { T_C = T - T0C, P_bar = P, total = opts.total or 1e-6,
                    ligand = opts.ligand, ligand_total = opts.ligand and (opts.ligand_total or 1e-3) or nil }
   g.label = "rigorous"
+  local els = { opts.element, opts.ligand or "H" }
+  if opts.background_nacl then els[#els + 1] = "Na"; els[#els + 1] = "Cl" end
+  g.provenance = provenance.of_result(lib, els, g.conditions, opts)
   stamp_held(g, held)
+  g.provenance.notes = g.stamp
   return g
 end
 

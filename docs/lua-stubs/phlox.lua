@@ -12,6 +12,9 @@
 ---@field version string
 local phlox = {}
 
+---@class phlox.constant_logk.opts
+---@field cache? any
+
 ---@class phlox.grid_map.opts
 ---@field E_range? number[]
 ---@field P? number
@@ -118,12 +121,15 @@ function phlox.activity_range(model, I) end
 ---@return any
 function phlox.available_elements() end
 
+--- The answer is kept per library, elements, T and P (a sweep asks the same
+--- question for every ligand level); opts.cache = false recomputes it.
 ---@param lib phlox.Library
 ---@param elements any
 ---@param T number
 ---@param P? number
+---@param opts phlox.constant_logk.opts
 ---@return any
-function phlox.constant_logk(lib, elements, T, P) end
+function phlox.constant_logk(lib, elements, T, P, opts) end
 
 --- The reference electrode record for a short or full name (errors name
 --- the known ones).

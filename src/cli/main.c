@@ -2,6 +2,7 @@
  * interactive prompt and the commands (reaction, check, list).  It only
  * wires: options are parsed here, everything else lives in the library and
  * in the embedded Lua module phlox.cli. */
+#define _POSIX_C_SOURCE 200809L /* setenv */
 #include "lua/host.h"
 #include "px_version.h"
 #include <lauxlib.h>
@@ -33,6 +34,10 @@ static void usage(FILE *out)
           "                       thermodynamics of a reaction (dG, dH, dS, log K, E)\n"
           "  check FILE...        validate element definition files\n"
           "  list [ELEMENT]       species in the library (with state, model, source)\n"
+          "  merge SCRIPT.lua [args...]\n"
+          "                       run SCRIPT with its sweeps taken from the shard\n"
+          "                       journals of earlier --shard runs: writes what a\n"
+          "                       serial run writes\n"
           "  (phlox COMMAND --help describes a command)\n"
           "\n"
           "options:\n"
@@ -41,12 +46,15 @@ static void usage(FILE *out)
           "  -p, --path DIR       search DIR for modules and element files before the\n"
           "                       built-in library (repeatable; PHLOX_PATH also adds\n"
           "                       ':'-separated folders, after the --path ones)\n"
-          "  -v, --version        print the version\n"
+          "  --shard I/N          run shard I of N of the script's sweeps (1-based;\n"
+          "                       also PHLOX_SHARD=I/N), then stop; see merge\n"
+          "  -v, --version        print the version and source revision\n"
           "  -h, --help           print this help\n"
           "  --                   end of options (the next argument is the script)\n"
           "\n"
           "environment:\n"
           "  PHLOX_PATH           ':'-separated folders searched after the --path ones\n"
+          "  PHLOX_SHARD          I/N: as --shard\n"
           "\n"
           "A thermodynamic diagram says what can form, not how fast it forms.\n",
           out);
@@ -213,8 +221,8 @@ int main(int argc, char **argv)
             usage(stdout);
             return PX_EXIT_OK;
         } else if (strcmp(a, "-v") == 0 || strcmp(a, "--version") == 0) {
-            printf("phlox %s (Lua %s.%s)\n", PHLOX_VERSION, LUA_VERSION_MAJOR,
-                   LUA_VERSION_MINOR);
+            printf("phlox %s (%s; Lua %s.%s)\n", PHLOX_VERSION, PHLOX_REVISION,
+                   LUA_VERSION_MAJOR, LUA_VERSION_MINOR);
             return PX_EXIT_OK;
         } else if (strcmp(a, "-i") == 0) {
             interactive = 1;
@@ -231,6 +239,16 @@ int main(int argc, char **argv)
                 return PX_EXIT_USAGE;
             }
             list[(*n)++] = argv[++i];
+        } else if (strcmp(a, "--shard") == 0 || strncmp(a, "--shard=", 8) == 0) {
+            const char *spec = a[7] == '=' ? a + 8 : (i + 1 < argc ? argv[++i] : NULL);
+            int si = 0, sn = 0, used = 0;
+            if (!spec || sscanf(spec, "%d/%d%n", &si, &sn, &used) != 2 || spec[used] != '\0' ||
+                si < 1 || sn < 1 || si > sn) {
+                fprintf(stderr, "phlox: --shard wants I/N with 1 <= I <= N (e.g. --shard 3/8), got '%s'\n",
+                        spec ? spec : "");
+                return PX_EXIT_USAGE;
+            }
+            setenv("PHLOX_SHARD", spec, 1); /* read by phlox.sweep, inherited by workers */
         } else if (strncmp(a, "--path=", 7) == 0) {
             if (npaths >= PX_MAX_PATHS) {
                 fprintf(stderr, "phlox: too many '--path' options (at most %d)\n", PX_MAX_PATHS);
@@ -273,7 +291,31 @@ int main(int argc, char **argv)
         int st = luaL_loadbufferx(L, chunks[k], strlen(chunks[k]), "=(command line)", "t");
         if (dochunk(L, st) != LUA_OK) code = PX_EXIT_ERROR;
     }
-    if (code == PX_EXIT_OK && script) {
+    if (code == PX_EXIT_OK && script && strcmp(argv[script], "merge") == 0) {
+        /* phlox merge SCRIPT args: the script runs with its sweeps read from
+         * the shard journals (phlox.sweep, PHLOX_MERGE) */
+        if (script + 1 < argc && (strcmp(argv[script + 1], "--help") == 0 ||
+                                  strcmp(argv[script + 1], "-h") == 0)) {
+            fputs("usage: phlox merge SCRIPT.lua [args...]\n"
+                  "\n"
+                  "Runs SCRIPT with its journaled sweeps taken from the shard journals that\n"
+                  "earlier runs with --shard I/N (or PHLOX_SHARD=I/N) wrote: nothing is\n"
+                  "computed again, and the script writes exactly what a serial run writes.\n"
+                  "A shard missing or unfinished stops the merge and is named.\n"
+                  "\n"
+                  "  SCRIPT.lua [args...]  the study and its arguments, as the shards ran it\n"
+                  "  -h, --help            print this help\n",
+                  stdout);
+        } else if (script + 1 >= argc) {
+            fputs("phlox: merge needs the study script: phlox merge SCRIPT.lua [args...]\n", stderr);
+            code = PX_EXIT_USAGE;
+        } else {
+            setenv("PHLOX_MERGE", "1", 1);
+            script++;
+            create_arg_table(L, argv, argc, script);
+            if (run_script(L, argv[script], argv, argc, script) != LUA_OK) code = PX_EXIT_ERROR;
+        }
+    } else if (code == PX_EXIT_OK && script) {
         if (is_command(argv[script]))
             code = run_command(L, argv, argc, script);
         else if (run_script(L, argv[script], argv, argc, script) != LUA_OK)

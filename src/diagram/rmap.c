@@ -6,6 +6,7 @@
 #include "core/status.h"
 #include <math.h>
 #include <pthread.h>
+#include <stdatomic.h>
 #include <stdio.h>
 #include <stdlib.h>
 #include <string.h>
@@ -117,29 +118,207 @@ static double node(double lo, double hi, size_t i, size_t n)
     return i + 1 == n ? hi : lo + (hi - lo) * (double)i / (double)(n - 1);
 }
 
-typedef struct band {
+/* Threads share the work dynamically: the grid's rows are handed out a few
+ * at a time from an atomic counter (rows near a boundary cost more solves,
+ * so fixed halves leave one thread idle), then the bisections of every grid
+ * edge whose ends differ are handed out one edge at a time.  Each bisection
+ * repeats exactly the midpoints the grid tracer will ask for (same
+ * arithmetic as px_diagram_grid_map's refinement), so the tracer then finds
+ * every label in a table instead of solving on one thread. */
+#define PX_RMAP_ROW_CHUNK 4 /* rows per hand-out: a warm start across a chunk is rare */
+
+typedef struct probe {
+    double x, y;
+    int id;
+} probe;
+
+typedef struct edge_job {
+    double x0, y0, x1, y1, tol;
+    int la, lb;
+} edge_job;
+
+typedef struct shared {
+    const px_diagram_window *w;
+    size_t nx, ny;
+    int *labels;
+    atomic_size_t next_row, next_edge;
+    const edge_job *edges;
+    size_t nedges;
+    int max_iter;
+} shared;
+
+typedef struct worker {
     rctx c;
     px_rmap_stats stats;
-    const px_diagram_window *w;
-    size_t nx, ny, j0, j1;
-    int *labels;
+    shared *sh;
+    probe *pr; /* the bisection points this thread solved */
+    size_t npr, cappr;
     int st;
-} band;
+} worker;
 
-/* One thread: the rows j0..j1-1, snaking so each solve starts next to the
- * last one. */
-static void *band_run(void *arg)
+static int keep_probe(worker *w, double x, double y, int id)
 {
-    band *b = arg;
-    b->c.stats = &b->stats;
-    for (size_t j = b->j0; j < b->j1 && b->st == 0; j++)
-        for (size_t k = 0; k < b->nx && b->st == 0; k++) {
-            size_t i = (j - b->j0) % 2 ? b->nx - 1 - k : k;
-            b->st = label_node(node(b->w->xmin, b->w->xmax, i, b->nx),
-                               node(b->w->ymin, b->w->ymax, j, b->ny), &b->c,
-                               &b->labels[j * b->nx + i]);
-        }
+    if (w->npr == w->cappr) {
+        size_t nc = w->cappr ? 2 * w->cappr : 256;
+        probe *p = realloc(w->pr, nc * sizeof *p);
+        if (!p) return PX_ENOMEM;
+        w->pr = p;
+        w->cappr = nc;
+    }
+    w->pr[w->npr++] = (probe){x, y, id};
+    return PX_OK;
+}
+
+/* The bisection of px_diagram_grid_map (grid.c, refine), point for point. */
+static int bisect(worker *w, const edge_job *e)
+{
+    double lo = 0, hi = 1, len = fmax(fabs(e->x1 - e->x0), fabs(e->y1 - e->y0));
+    int it = 0;
+    while ((hi - lo) * len > e->tol) {
+        if (it++ >= w->sh->max_iter) break;
+        double t = 0.5 * (lo + hi);
+        double x = e->x0 + t * (e->x1 - e->x0), y = e->y0 + t * (e->y1 - e->y0);
+        int id, st = label_node(x, y, &w->c, &id);
+        if (st != PX_OK) return st;
+        if ((st = keep_probe(w, x, y, id)) != PX_OK) return st;
+        if (id == e->la) lo = t;
+        else hi = t;
+    }
+    return PX_OK;
+}
+
+static void *worker_run(void *arg)
+{
+    worker *w = arg;
+    shared *sh = w->sh;
+    w->c.stats = &w->stats;
+    for (;;) { /* grid rows, a chunk at a time, snaking within the chunk */
+        size_t j0 = atomic_fetch_add(&sh->next_row, PX_RMAP_ROW_CHUNK);
+        if (j0 >= sh->ny || w->st) break;
+        size_t j1 = j0 + PX_RMAP_ROW_CHUNK < sh->ny ? j0 + PX_RMAP_ROW_CHUNK : sh->ny;
+        for (size_t j = j0; j < j1 && w->st == 0; j++)
+            for (size_t k = 0; k < sh->nx && w->st == 0; k++) {
+                size_t i = (j - j0) % 2 ? sh->nx - 1 - k : k;
+                w->st = label_node(node(sh->w->xmin, sh->w->xmax, i, sh->nx),
+                                   node(sh->w->ymin, sh->w->ymax, j, sh->ny), &w->c,
+                                   &sh->labels[j * sh->nx + i]);
+            }
+    }
     return NULL;
+}
+
+static void *refine_run(void *arg)
+{
+    worker *w = arg;
+    shared *sh = w->sh;
+    for (;;) {
+        size_t e = atomic_fetch_add(&sh->next_edge, 1);
+        if (e >= sh->nedges || w->st) break;
+        w->st = bisect(w, &sh->edges[e]);
+    }
+    return NULL;
+}
+
+/* Run fn on nt threads over the workers; PX_ENOMEM if a thread cannot start
+ * (the ones started are joined). */
+static int run_threads(void *(*fn)(void *), worker *ws, int nt)
+{
+    pthread_t tid[PX_RMAP_MAX_THREADS];
+    int started = 0, st = PX_OK;
+    for (int t = 0; t < nt; t++, started++)
+        if (pthread_create(&tid[t], NULL, fn, &ws[t]) != 0) {
+            st = PX_ENOMEM;
+            break;
+        }
+    for (int t = 0; t < started; t++) pthread_join(tid[t], NULL);
+    for (int t = 0; t < nt && st == PX_OK; t++)
+        if (ws[t].st != 0) st = ws[t].st;
+    return st;
+}
+
+/* The grid edges whose end labels differ, with the tracer's tolerances. */
+static int crossing_edges(const shared *sh, const px_diagram_grid_options *g, edge_job **out, size_t *n)
+{
+    size_t nx = sh->nx, ny = sh->ny, cnt = 0, cap = 0;
+    edge_job *e = NULL;
+    const px_diagram_window *w = sh->w;
+    double tolx = fmax(g->epsabs, g->epsrel * (node(w->xmin, w->xmax, 1, nx) - node(w->xmin, w->xmax, 0, nx)));
+    double toly = fmax(g->epsabs, g->epsrel * (node(w->ymin, w->ymax, 1, ny) - node(w->ymin, w->ymax, 0, ny)));
+    const int *L = sh->labels;
+    for (int dir = 0; dir < 2; dir++)
+        for (size_t j = 0; j + (size_t)dir < ny; j++)
+            for (size_t i = 0; i + 1 - (size_t)dir < nx; i++) {
+                size_t k = j * nx + i, k2 = dir ? k + nx : k + 1;
+                if (L[k] == L[k2]) continue;
+                if (cnt == cap) {
+                    size_t nc = cap ? 2 * cap : 256;
+                    edge_job *p = realloc(e, nc * sizeof *p);
+                    if (!p) {
+                        free(e);
+                        return PX_ENOMEM;
+                    }
+                    e = p;
+                    cap = nc;
+                }
+                double x0 = node(w->xmin, w->xmax, i, nx), y0 = node(w->ymin, w->ymax, j, ny);
+                double x1 = dir ? x0 : node(w->xmin, w->xmax, i + 1, nx);
+                double y1 = dir ? node(w->ymin, w->ymax, j + 1, ny) : y0;
+                e[cnt++] = (edge_job){x0, y0, x1, y1, dir ? toly : tolx, L[k], L[k2]};
+            }
+    *out = e;
+    *n = cnt;
+    return PX_OK;
+}
+
+/* Labels at bisection points, by the exact bits of (x, y). */
+typedef struct probe_table {
+    probe *slot;
+    unsigned char *used;
+    size_t cap;
+} probe_table;
+
+static size_t probe_hash(double x, double y, size_t cap)
+{
+    unsigned long long a, b;
+    memcpy(&a, &x, sizeof a);
+    memcpy(&b, &y, sizeof b);
+    unsigned long long h = a * 0x9E3779B97F4A7C15ull ^ (b + 0x632BE59BD9B4E019ull + (a << 6)); /* golden-ratio mixing */
+    h ^= h >> 29;
+    return (size_t)h & (cap - 1);
+}
+
+static int table_build(probe_table *t, const worker *ws, int nt)
+{
+    size_t n = 0;
+    for (int k = 0; k < nt; k++) n += ws[k].npr;
+    t->cap = 16;
+    while (t->cap < 2 * n + 1) t->cap *= 2;
+    t->slot = malloc(t->cap * sizeof *t->slot);
+    t->used = calloc(t->cap, 1);
+    if (!t->slot || !t->used) return PX_ENOMEM;
+    for (int k = 0; k < nt; k++)
+        for (size_t i = 0; i < ws[k].npr; i++) {
+            const probe *p = &ws[k].pr[i];
+            size_t s = probe_hash(p->x, p->y, t->cap);
+            while (t->used[s] && !(t->slot[s].x == p->x && t->slot[s].y == p->y)) s = (s + 1) & (t->cap - 1);
+            t->used[s] = 1;
+            t->slot[s] = *p;
+        }
+    return PX_OK;
+}
+
+static int table_find(const probe_table *t, double x, double y, int *id)
+{
+    if (!t->cap) return 0;
+    size_t s = probe_hash(x, y, t->cap);
+    while (t->used[s]) {
+        if (t->slot[s].x == x && t->slot[s].y == y) {
+            *id = t->slot[s].id;
+            return 1;
+        }
+        s = (s + 1) & (t->cap - 1);
+    }
+    return 0;
 }
 
 typedef struct lookup {
@@ -147,9 +326,11 @@ typedef struct lookup {
     const px_diagram_window *w;
     size_t nx, ny;
     const int *labels;
+    const probe_table *probes;
 } lookup;
 
-/* Labels of grid nodes come from the threads; other points are solved. */
+/* Labels of grid nodes and bisection points come from the threads; other
+ * points (cell centres of saddles) are solved. */
 static int lookup_or_solve(double x, double y, void *user, int *id)
 {
     lookup *l = user;
@@ -162,6 +343,7 @@ static int lookup_or_solve(double x, double y, void *user, int *id)
         *id = l->labels[(size_t)j * l->nx + (size_t)i];
         return 0;
     }
+    if (table_find(l->probes, x, y, id)) return 0;
     return label_node(x, y, l->c, id);
 }
 
@@ -214,42 +396,52 @@ int px_rmap_build(px_thermo_ws *ws, const px_db *db, const char *element, const 
     if (nt == 1 || nx < 2 || ny < (size_t)nt) {
         st = px_diagram_grid_map(&o->window, label_node, &c, &o->grid, out);
     } else {
-        band bands[PX_RMAP_MAX_THREADS];
-        pthread_t tid[PX_RMAP_MAX_THREADS];
-        int *labels = malloc(nx * ny * sizeof *labels);
-        int started = 0;
-        st = labels ? PX_OK : PX_ENOMEM;
-        memset(bands, 0, sizeof bands);
-        for (int t = 0; t < nt && st == PX_OK; t++) { /* systems built here: thermo is not shared */
-            bands[t].c = c;
-            bands[t].w = &o->window;
-            bands[t].nx = nx;
-            bands[t].ny = ny;
-            bands[t].j0 = ny * (size_t)t / (size_t)nt;
-            bands[t].j1 = ny * (size_t)(t + 1) / (size_t)nt;
-            bands[t].labels = labels;
-            if (t > 0) st = px_spec_build(ws, db, &so, &bands[t].c.s, msg, msglen);
+        worker ws_[PX_RMAP_MAX_THREADS];
+        shared sh;
+        memset(ws_, 0, sizeof ws_);
+        memset(&sh, 0, sizeof sh);
+        sh.w = &o->window;
+        sh.nx = nx;
+        sh.ny = ny;
+        sh.max_iter = o->grid.max_iter;
+        atomic_init(&sh.next_row, 0);
+        atomic_init(&sh.next_edge, 0);
+        sh.labels = malloc(nx * ny * sizeof *sh.labels);
+        st = sh.labels ? PX_OK : PX_ENOMEM;
+        int built = 0;
+        for (int t = 0; t < nt && st == PX_OK; t++, built++) { /* systems built here: thermo is not shared */
+            ws_[t].c = c;
+            ws_[t].sh = &sh;
+            ws_[t].c.stats = &ws_[t].stats;
+            if (t > 0) st = px_spec_build(ws, db, &so, &ws_[t].c.s, msg, msglen);
         }
-        for (int t = 0; t < nt && st == PX_OK; t++, started++)
-            if (pthread_create(&tid[t], NULL, band_run, &bands[t]) != 0) st = PX_ENOMEM;
-        for (int t = 0; t < started; t++) pthread_join(tid[t], NULL);
+        if (st == PX_OK) st = run_threads(worker_run, ws_, nt);
+        edge_job *edges = NULL;
+        if (st == PX_OK) st = crossing_edges(&sh, &o->grid, &edges, &sh.nedges);
+        sh.edges = edges;
+        if (st == PX_OK) st = run_threads(refine_run, ws_, nt);
+        probe_table probes = {0};
+        if (st == PX_OK) st = table_build(&probes, ws_, nt);
         for (int t = 0; t < nt; t++) {
-            if (st == PX_OK && bands[t].st != 0) st = bands[t].st;
-            stats->solves += bands[t].stats.solves;
-            for (size_t k = 0; k < bands[t].stats.failures && stats->failures + k < PX_RMAP_FAIL_KEEP; k++) {
-                stats->fail_x[stats->failures + k] = bands[t].stats.fail_x[k];
-                stats->fail_y[stats->failures + k] = bands[t].stats.fail_y[k];
+            stats->solves += ws_[t].stats.solves;
+            for (size_t k = 0; k < ws_[t].stats.failures && stats->failures + k < PX_RMAP_FAIL_KEEP; k++) {
+                stats->fail_x[stats->failures + k] = ws_[t].stats.fail_x[k];
+                stats->fail_y[stats->failures + k] = ws_[t].stats.fail_y[k];
             }
-            stats->failures += bands[t].stats.failures;
-            stats->cold_retries += bands[t].stats.cold_retries;
-            if (bands[t].stats.I_max > stats->I_max) stats->I_max = bands[t].stats.I_max;
-            if (t > 0) px_spec_free(bands[t].c.s);
+            stats->failures += ws_[t].stats.failures;
+            stats->cold_retries += ws_[t].stats.cold_retries;
+            if (ws_[t].stats.I_max > stats->I_max) stats->I_max = ws_[t].stats.I_max;
+            if (t > 0 && t < built) px_spec_free(ws_[t].c.s);
+            free(ws_[t].pr);
         }
         if (st == PX_OK) {
-            lookup l = {&c, &o->window, nx, ny, labels};
+            lookup l = {&c, &o->window, nx, ny, sh.labels, &probes};
             st = px_diagram_grid_map(&o->window, lookup_or_solve, &l, &o->grid, out);
         }
-        free(labels);
+        free(probes.slot);
+        free(probes.used);
+        free(edges);
+        free(sh.labels);
     }
     if (st != PX_OK && msg && msglen && !msg[0])
         snprintf(msg, msglen, "grid map of %s: %s", element, px_strerror(st));

@@ -18,5 +18,6 @@ void px_lua_open_thermo(lua_State *L);
 void px_lua_open_diagram(lua_State *L);
 void px_lua_open_equil(lua_State *L);
 void px_lua_open_practice(lua_State *L);
+void px_lua_open_proc(lua_State *L);
 
 #endif

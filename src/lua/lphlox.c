@@ -58,6 +58,8 @@ int luaopen_phlox_core(lua_State *L)
     luaL_newlib(L, core_funcs);
     lua_pushliteral(L, PHLOX_VERSION);
     lua_setfield(L, -2, "version");
+    lua_pushliteral(L, PHLOX_REVISION);
+    lua_setfield(L, -2, "revision");
     for (const px_lua_opener *o = px_lua_openers; *o; o++) (*o)(L);
     return 1;
 }

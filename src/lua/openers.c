@@ -9,4 +9,5 @@ const px_lua_opener px_lua_openers[] = {
     px_lua_open_diagram,
     px_lua_open_equil,
     px_lua_open_practice,
+    px_lua_open_proc,
     0};

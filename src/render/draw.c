@@ -1273,6 +1273,62 @@ static int svg_renumber(membuf *m)
     return PX_OK;
 }
 
+/* cairo writes SVG coordinates with up to six decimals ("1.671875"); a
+ * thousandth of a point (0.35 um) is far below what any screen or printer
+ * shows, so numbers with more decimals are rounded to three and their
+ * trailing zeros dropped.  Run on cairo's output only, before the <title>
+ * and <desc> are inserted, so no text is touched. */
+#define PX_SVG_DECIMALS 3
+static int svg_compact(membuf *m)
+{
+    unsigned char *out = malloc(m->n + 1);
+    if (!out) return PX_ENOMEM;
+    size_t o = 0;
+    for (size_t i = 0; i < m->n;) {
+        unsigned char c = m->data[i];
+        int starts = (c >= '0' && c <= '9') &&
+                     (i == 0 || !((m->data[i - 1] >= '0' && m->data[i - 1] <= '9') ||
+                                  (m->data[i - 1] >= 'a' && m->data[i - 1] <= 'z') ||
+                                  (m->data[i - 1] >= 'A' && m->data[i - 1] <= 'Z') ||
+                                  m->data[i - 1] == '.' || m->data[i - 1] == '_' || m->data[i - 1] == '#'));
+        if (!starts) {
+            out[o++] = m->data[i++];
+            continue;
+        }
+        size_t j = i;
+        while (j < m->n && m->data[j] >= '0' && m->data[j] <= '9') j++;
+        size_t dot = j, k = j;
+        if (k < m->n && m->data[k] == '.') {
+            k++;
+            while (k < m->n && m->data[k] >= '0' && m->data[k] <= '9') k++;
+        }
+        int is_name = k < m->n && ((m->data[k] >= 'a' && m->data[k] <= 'z') || (m->data[k] >= 'A' && m->data[k] <= 'Z'));
+        if (k - dot - 1 <= PX_SVG_DECIMALS || dot == k || is_name) { /* short, integer or part of a name */
+            memcpy(out + o, m->data + i, k - i);
+            o += k - i;
+            i = k;
+            continue;
+        }
+        char num[64], txt[64];
+        size_t len = k - i < sizeof num - 1 ? k - i : sizeof num - 1;
+        memcpy(num, m->data + i, len);
+        num[len] = '\0';
+        int neg = i > 0 && m->data[i - 1] == '-';
+        int w = snprintf(txt, sizeof txt, "%.*f", PX_SVG_DECIMALS, strtod(num, NULL));
+        while (w > 0 && txt[w - 1] == '0') w--;
+        if (w > 0 && txt[w - 1] == '.') w--;
+        if (neg && w == 1 && txt[0] == '0') o--; /* "-0.0001" -> "0", not "-0" */
+        memcpy(out + o, txt, (size_t)w); /* never longer than the input */
+        o += (size_t)w;
+        i = k;
+    }
+    free(m->data);
+    m->data = out;
+    m->n = o;
+    m->cap = o;
+    return PX_OK;
+}
+
 /* The figure's words for SVG: cairo draws glyphs as paths, so without this
  * an SVG says nothing a search, a screen reader or a test can find.  One
  * <title> (the first panel title) and one <desc> with a line per panel
@@ -1561,6 +1617,7 @@ int px_figure_render(const px_figure *f, px_format fmt, double dpi, unsigned cha
     }
     if (fmt == PX_FORMAT_SVG) {
         int st = svg_renumber(&m);
+        if (st == PX_OK) st = svg_compact(&m);
         if (st == PX_OK) st = svg_describe(&m, f);
         if (st != PX_OK) {
             free(m.data);

@@ -160,7 +160,14 @@ int px_db_add(px_db *db, const px_species *sp)
     }
     db->sp[db->n++] = c;
     db->gen++;
-    st = rehash(db);
+    if (2 * db->n + 1 <= db->hcap) { /* room: insert the one new entry */
+        size_t s = fnv1a(c.f.text) & (db->hcap - 1);
+        while (db->hash[s] >= 0)
+            s = (s + 1) & (db->hcap - 1);
+        db->hash[s] = (long)(db->n - 1);
+        return PX_OK;
+    }
+    st = rehash(db); /* the table doubles: amortised O(1) per species */
     if (st) { /* undo */
         db->n--;
         species_release(&db->sp[db->n]);

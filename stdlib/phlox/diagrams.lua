@@ -16,6 +16,7 @@
 -- phlox.caution).
 local phlox = require "phlox"
 local sweep = require "phlox.sweep"
+local provenance = require "phlox.provenance"
 
 local diagrams = {}
 
@@ -68,6 +69,15 @@ local function copy(t)
   local o = {}
   for k, v in pairs(t or {}) do o[k] = v end
   return o
+end
+
+-- A curve's own provenance: the files defining species of its element,
+-- ligand and the other totals, with its conditions and options.
+local function curve_provenance(lib, opts, ligand, conditions)
+  local els = { opts.element }
+  if ligand then els[#els + 1] = ligand end
+  for e in pairs(opts.totals or {}) do els[#els + 1] = e end
+  return provenance.of_result(lib, els, conditions, opts)
 end
 
 local function T_C_of(opts)
@@ -203,6 +213,8 @@ function diagrams.fractions(opts)
     series[#series + 1] = { species = sp, label = sp, x = xs, y = y }
   end
 
+  local conditions = { T_C = T_C_of(opts), [el .. " total (mol/kg)"] = total, pH = xkind ~= "pH" and opts.pH or nil,
+                       activity_model = base.activity }
   local xname = xkind == "pH" and "pH"
     or xkind == "log_total" and ("log total {" .. opts.ligand .. "} / (mol/kg)")
     or ("log a({" .. opts.ligand_species .. "})")
@@ -210,15 +222,17 @@ function diagrams.fractions(opts)
   if opts.ligand and xkind ~= "log_total" and opts.totals and type(opts.totals[opts.ligand]) == "number" then
     ligand_text = ("{%s} %s mol/kg"):format(opts.ligand, require("phlox.plot").number(opts.totals[opts.ligand]))
   end
-  return {
+  local result = {
     element = el, x = xs, series = series, omitted = omitted, failures = failures, ligand_text = ligand_text,
     axes = { x = { name = xname, min = xs[1], max = xs[#xs] },
              y = { name = "fraction of {" .. el .. "}", min = 0, max = 1 } },
-    conditions = { T_C = T_C_of(opts), [el .. " total (mol/kg)"] = total, pH = xkind ~= "pH" and opts.pH or nil,
-                   activity_model = base.activity },
+    conditions = conditions,
+    provenance = curve_provenance(lib, opts, lig_el, conditions),
     stamp = curve_stamp(notes, held), stamp_short = held and { [held[1]] = held.short } or nil,
     stats = { solves = #xs, seconds = seconds },
   }
+  result.provenance.notes = result.stamp
+  return result
 end
 
 local RETRIES = 3        -- smaller totals tried when a solve fails
@@ -298,14 +312,17 @@ function diagrams.solubility(opts)
     end
     series[#series + 1] = { label = ("%g °C"):format(tc), T_C = tc, x = xs, y = y, solids = solids, chem = false }
   end
-  return {
+  local result = {
     element = el, x = xs, series = series, failures = failures,
     axes = { x = { name = "pH", min = xs[1], max = xs[#xs] },
              y = { name = "dissolved {" .. el .. "}", unit = "mol/kg", log = true } },
     conditions = { [el .. " put in (mol/kg)"] = total, activity_model = base.activity },
+    provenance = curve_provenance(lib, opts, nil, { [el .. " put in (mol/kg)"] = total, T_C = temps }),
     stamp = curve_stamp(notes, held), stamp_short = held and { [held[1]] = held.short } or nil,
     stats = { points = #xs * #temps, retries = retried, seconds = os.clock() - t0 },
   }
+  result.provenance.notes = result.stamp
+  return result
 end
 
 --- Draw a fractions or solubility result with phlox.plot.curves; opts are
@@ -348,6 +365,7 @@ function diagrams.plot(result, opts)
     for i, l in ipairs(result.stamp) do notes[i] = short[l] and { full = l, short = short[l] } or l end
     opts.notes = notes
   end
+  opts.from = opts.from or result
   return plot.curves(result.series, opts)
 end
 

@@ -23,8 +23,10 @@ end
 
 --- Write rows (a sequence of tables keyed by column name) as CSV.
 -- opts.columns: the column order (required); opts.conditions: stamped;
--- opts.from: the result(s) the rows come from, whose caveats (stamp lines)
--- become "# note:" lines (default: every caveat of this run).
+-- opts.from: the results the rows come from (a result or a list): their
+-- own data files, conditions, options and caveats (stamp lines, as "# note:"
+-- lines) are stamped; without it, every input and caveat of the run, the
+-- data files marked as such.
 function export.csv(path, rows, opts)
   assert(type(path) == "string", "export.csv: path must be a string")
   assert(type(rows) == "table", "export.csv: rows must be a table")
@@ -45,7 +47,7 @@ function export.csv(path, rows, opts)
 end
 
 --- Write a value as JSON: { provenance = ..., caution = ..., data = value }.
--- opts.conditions and opts.from as export.csv (notes in provenance.notes).
+-- opts.conditions, opts.from as export.csv (notes in provenance.notes).
 function export.json(path, value, opts)
   assert(type(path) == "string", "export.json: path must be a string")
   local doc = {

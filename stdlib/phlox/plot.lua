@@ -394,15 +394,16 @@ end
 -- The unwrapped full stamp: conditions, program and checksums, extra lines, caution.
 local function full_lines(conditions, extra, opts)
   opts = opts or {}
-  local st = provenance.stamp(conditions)
+  local st = provenance.stamp(conditions, opts.from)
   local lines = {}
   local c = conditions_text(conditions)
   if c then lines[#lines + 1] = c end
-  local prog = "program: " .. st.program
+  local prog = "program: " .. st.program .. " (" .. st.revision .. ")"
   if st.script and not opts.no_script then
     prog = prog .. "; script: " .. st.script.file .. " sha256=" .. st.script.sha256
   end
   lines[#lines + 1] = prog
+  if st.data_scope then lines[#lines + 1] = "data files: " .. st.data_scope end
   for _, d in ipairs(st.data) do lines[#lines + 1] = "data: " .. d.file .. " sha256=" .. d.sha256 end
   for _, s in ipairs(extra or {}) do lines[#lines + 1] = line_full(s) end
   lines[#lines + 1] = plot.caution
@@ -450,23 +451,26 @@ local function plain(s) return (s:gsub("[{}]", "")) end
 -- file's metadata.  opts.stamp: "full" | "short" | false, or a list of
 -- extra lines (older form: printed in the preset's mode); opts.notes: extra
 -- lines.
-local function apply_stamp(fig, opts, conditions, extra, title, w, look)
+-- `from`: the results drawn, whose own data files are stamped (default
+-- opts.from).
+local function apply_stamp(fig, opts, conditions, extra, title, w, look, from)
+  from = from or opts.from
   local lines = {}
   for _, l in ipairs(extra or {}) do lines[#lines + 1] = l end
   if type(opts.stamp) == "table" then for _, l in ipairs(opts.stamp) do lines[#lines + 1] = l end end
   for _, l in ipairs(opts.notes or {}) do lines[#lines + 1] = l end
-  local full = full_lines(conditions, lines, opts)
+  local full = full_lines(conditions, lines, { from = from, no_script = opts.no_script })
   local desc = {}
   for i, l in ipairs(full) do desc[i] = plain(l) end
   fig:meta("Title", plain(title or "phlox figure"))
   fig:meta("Description", table.concat(desc, "\n"))
-  fig:meta("Software", "phlox " .. core.version)
+  fig:meta("Software", "phlox " .. core.version .. " (" .. core.revision .. ")")
   fig:meta("Disclaimer", plot.caution)
   local mode = opts.stamp
   if mode == nil or type(mode) == "table" then mode = look.stamp end
   local out = {}
   if mode == "full" then
-    out = plot.stamp_lines(conditions, lines, w, { text = look.text, no_script = opts.no_script })
+    out = plot.stamp_lines(conditions, lines, w, { text = look.text, no_script = opts.no_script, from = from })
     -- a preset promises its panels' size: the full stamp goes below them
     if look.name then fig:stamp_below(true) end
   elseif mode == "short" then
@@ -710,7 +714,7 @@ function plot.map(map, opts)
   if fills.conflicts > 0 then
     extra[#extra + 1] = ("note: %d pairs of neighbouring fields share a lightness tier"):format(fills.conflicts)
   end
-  apply_stamp(fig, opts, map.conditions, extra, title, look.width, look)
+  apply_stamp(fig, opts, map.conditions, extra, title, look.width, look, map)
   return finish(fig, opts, plot.defaults), fills
 end
 
@@ -755,7 +759,7 @@ function plot.domains(map, opts)
       .. "other solid = passivation, dissolved or gas = corrosion", short = "domains from field kinds" }
   end
   add_reference(extra, ref)
-  apply_stamp(fig, opts, map.conditions, extra, title, look.width, look)
+  apply_stamp(fig, opts, map.conditions, extra, title, look.width, look, map)
   return finish(fig, opts, plot.defaults)
 end
 
@@ -811,7 +815,8 @@ end
 -- opts: x = { name, unit, min, max, log }, y = { ... }, title, legend =
 -- "outside" (default) | "top right" | ... | false, conditions, file,
 -- preset, width, height, dpi, stamp = "full" | "short" | false (or a list
--- of extra lines), notes (extra stamp lines).
+-- of extra lines), notes (extra stamp lines), from (the results drawn:
+-- their own data files are stamped).
 function plot.curves(series, opts)
   opts = opts or {}
   if type(series) ~= "table" or #series == 0 then error("plot.curves: series must be a non-empty list", 2) end
@@ -963,7 +968,7 @@ function plot.grid(maps, opts)
   end
   map_notes(extra, maps[1])
   add_reference(extra, ref)
-  apply_stamp(fig, opts, cond, extra, title1, w, look)
+  apply_stamp(fig, opts, cond, extra, title1, w, look, maps)
   return finish(fig, opts, plot.defaults)
 end
 
@@ -1036,7 +1041,7 @@ function plot.overlay(maps, opts)
   local extra = { { full = "overlaid: " .. table.concat(labels, ", "), short = false } }
   map_notes(extra, m1)
   add_reference(extra, ref)
-  apply_stamp(fig, opts, cond, extra, title, look.width, look)
+  apply_stamp(fig, opts, cond, extra, title, look.width, look, maps)
   return finish(fig, opts, plot.defaults)
 end
 

@@ -69,7 +69,7 @@ opts_of() { # option names at the start of help lines
 prog=$("$PHLOX_BIN" --help | opts_of)
 comp=$(complete_line "phlox -" | sort -u)
 [ "$prog" = "$comp" ] || fail "options: phlox --help has [$(echo $prog)], completion offers [$(echo $comp)]"
-for c in reaction check list; do
+for c in reaction check list merge; do
     prog=$("$PHLOX_BIN" "$c" --help | opts_of)
     comp=$(complete_line "phlox $c -" | sort -u)
     [ "$prog" = "$comp" ] || fail "$c options: phlox $c --help has [$(echo $prog)], completion offers [$(echo $comp)]"

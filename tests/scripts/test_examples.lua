@@ -21,16 +21,11 @@
 -- Environment (tests/CMakeLists.txt): PHLOX_BIN, PHLOX_SOURCE_DIR.
 local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
 local check, close = S.check, S.close
-local CSV = S.csv
-local JSON = S.json
-
-local BIN = assert(os.getenv("PHLOX_BIN"), "PHLOX_BIN is not set (run through ctest)")
-local SRC = assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
-local DEMO = SRC .. "/examples/demo.lua"
-local K = S.chem
-local function slope(T_C) return K.nernst_slope(T_C + 273.15) end
-
 local quote, read, tmpdir = S.files.quote, S.files.read, S.files.tmpdir
+
+local BIN, SRC = assert(S.BIN, "PHLOX_BIN is not set (run through ctest)"), S.SRC
+local DEMO = SRC .. "/examples/demo.lua"
+local function slope(T_C) return S.chem.nernst_slope(T_C + 273.15) end
 
 local function run(dir)
   local log = dir .. "/stdout.txt"
@@ -104,51 +99,13 @@ local function checks()
   check(pdf:match("/Count (%d+)") == "3", "PDF has 3 pages, found " .. tostring(pdf:match("/Count (%d+)")))
 
   -- CSV --------------------------------------------------------------------------
-  -- RFC 4180 on one line, strict: an unterminated quote or text after a
-  -- closing quote fails (tests/support/csv.lua)
-  local function parse_csv_line(line)
-    local cells, err = CSV.split(line)
-    check(cells, err)
-    return cells
-  end
-
-  local function sha256sum(p)
-    local h = io.popen("sha256sum " .. quote(p))
-    local s = h:read("a")
-    h:close()
-    return s:match("^(%x+)")
-  end
-
   local function read_csv(name, columns)
-    local text = data[name]
-    local lines = {}
-    for l in text:gmatch("([^\n]*)\n") do lines[#lines + 1] = l end
-    local k, header = 1, {}
-    while lines[k] and lines[k]:sub(1, 1) == "#" do header[#header + 1] = lines[k]; k = k + 1 end
-    local htext = table.concat(header, "\n")
+    local htext, cols, rows, nfiles = S.csv.stamped(data[name], name)
     check(htext:find("^# program: phlox "), name .. ": provenance starts with the program")
     check(htext:find("\n# script: [^\n]*demo%.lua sha256=%x+"), name .. ": script and its checksum")
     check(htext:find("what can form, not how fast", 1, true), name .. ": caution in the header")
-    local nfiles = 0
-    for file, sum in htext:gmatch("# data: (%S+) sha256=(%x+)") do
-      nfiles = nfiles + 1
-      check(#sum == 64, name .. ": sha256 of " .. file .. " has 64 hex digits")
-      local real = SRC .. "/" .. file   -- embedded copies are recorded as stdlib/...
-      check(sha256sum(real) == sum, name .. ": checksum of " .. file .. " differs from sha256sum")
-    end
     check(nfiles >= 3, name .. ": at least the HO, Cu and Cl files are stamped")
-    local cols = parse_csv_line(lines[k])
-    check(table.concat(cols, ",") == table.concat(columns, ","),
-          name .. ": columns are " .. lines[k])
-    local rows = {}
-    for i = k + 1, #lines do
-      local cells = parse_csv_line(lines[i])
-      check(#cells == #cols, ("%s line %d has %d cells, not %d"):format(name, i, #cells, #cols))
-      local row = {}
-      for c, v in ipairs(cells) do row[cols[c]] = v end
-      rows[#rows + 1] = row
-    end
-    check(#rows > 0, name .. ": has rows")
+    check(table.concat(cols, ",") == table.concat(columns, ","), name .. ": columns are " .. table.concat(cols, ","))
     return rows
   end
 
@@ -160,19 +117,7 @@ local function checks()
     "a_Cl", "field", "domain", "solid", "dissolved_Cu", "carrier", "carrier_share_of_dissolved" })
   read_csv("dissolved-copper.csv", { "T_C", "state", "Cl", "pH", "dissolved_Cu" })
 
-  -- Coefficient of a species in "a A + b B = c C": positive on the left.
-  local function coefficient(reaction, species)
-    local lhs, rhs = reaction:match("^(.-) = (.*)$")
-    local total = 0
-    for side, sign in pairs({ [lhs] = 1, [rhs] = -1 }) do
-      for term in (side .. " + "):gmatch("(.-) %+ ") do
-        local n, f = term:match("^(%d+) (.+)$")
-        if not n then n, f = 1, term end
-        if f == species then total = total + sign * tonumber(n) end
-      end
-    end
-    return total
-  end
+  local coefficient = S.chem.coefficient
 
   -- Nernst: on an E-pH map a boundary has dE/dpH = -(RT ln10/F) nH/ne.
   local nslopes = 0
@@ -230,7 +175,7 @@ local function checks()
   check(seen == 4, "three deaerated points and the 25 C aerated point checked")
 
   -- JSON: neutral pH at 25 C
-  local ok_json, doc = pcall(JSON.decode, data["study.json"])
+  local ok_json, doc = pcall(S.json.decode, data["study.json"])
   check(ok_json and type(doc) == "table", "study.json is one JSON object: " .. tostring(doc))
   local n25
   for _, m in ipairs(doc.data and doc.data.maps or {}) do

@@ -68,6 +68,19 @@ check(g1.failures == 0 and g2.failures == 0, "Cu-Cl rigorous map converges every
 for k = 1, #g1.labels do
   check(g1.species[g1.labels[k]] == g2.species[g2.labels[k]], "node " .. k .. " differs between 1 and 2 threads")
 end
+-- the boundaries too: the bisections run on both threads and the tracer
+-- reads their labels, so the crossing points agree within the bisection
+-- tolerance (epsrel 1e-6 of a grid step, the tracer's default)
+check(#g1.boundaries == #g2.boundaries, "as many boundary polylines on 1 and 2 threads")
+local STEP_TOL = 1e-6 * (14 / 60)
+for b = 1, #g1.boundaries do
+  local p1, p2 = g1.boundaries[b], g2.boundaries[b]
+  check(#p1.x == #p2.x, "boundary " .. b .. ": as many points on 1 and 2 threads")
+  for k = 1, #p1.x do
+    check(math.abs(p1.x[k] - p2.x[k]) <= STEP_TOL and math.abs(p1.y[k] - p2.y[k]) <= STEP_TOL,
+          ("boundary %d point %d: (%g, %g) vs (%g, %g)"):format(b, k, p1.x[k], p1.y[k], p2.x[k], p2.y[k]))
+  end
+end
 local cucl = false
 for _, s in ipairs(g1.species) do cucl = cucl or s:find("^CuCl") ~= nil end
 check(cucl, "a copper chloro complex predominates somewhere at 1e-2 mol/kg chloride")

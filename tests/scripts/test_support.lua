@@ -74,6 +74,14 @@ local map = { boundaries = { { between = { "A", "B" } }, { between = { "C", "B" 
 check(K.boundary(map, "B", "C") == map.boundaries[2], "boundary in either order")
 check(not pcall(K.boundary, map, "A", "C"), "a missing boundary is an error")
 check(K.area_sum(map) == 4, "area sum")
+-- Zn(OH)2(s) + 2 H^+ + 2 e- = Zn(s) + 2 H2O(l): nH = 2, ne = 2, so the
+-- boundary falls by one Nernst slope per pH unit
+check(K.coefficient("Zn(OH)2(s) + 2 H^+ + 2 e- = Zn(s) + 2 H2O(l)", "H^+") == 2
+      and K.coefficient("Zn(OH)2(s) + 2 H^+ + 2 e- = Zn(s) + 2 H2O(l)", "H2O(l)") == -2
+      and K.coefficient("Zn^2+ + 2 e- = Zn(s)", "H^+") == 0, "reaction coefficients")
+T.close(K.boundary_slope("Zn(OH)2(s) + 2 H^+ + 2 e- = Zn(s) + 2 H2O(l)", 25), -K.nernst_slope(298.15), 1e-15,
+        "boundary slope")
+check(K.boundary_slope("Zn^2+ + 2 OH^- = Zn(OH)2(s)", 25) == nil, "no electrons: no E-pH slope")
 -- files: read, slurp, quote, tmpdir
 local FL = dofile(SUP .. "files.lua")
 check(FL.quote("a'b") == "'a'\\''b'", "shell quoting: " .. FL.quote("a'b"))
@@ -81,6 +89,20 @@ local d = FL.tmpdir()
 local fh = assert(io.open(d .. "/x.txt", "wb")); fh:write("bytes\0\n"); fh:close()
 check(FL.read(d .. "/x.txt") == "bytes\0\n" and FL.slurp(d .. "/x.txt") == "bytes\0\n", "read and slurp")
 check(FL.read(d .. "/missing") == nil and not pcall(FL.slurp, d .. "/missing"), "a missing file")
+FL.write(d .. "/abc.txt", "abc")
+-- SHA-256("abc") of FIPS 180-2, appendix B.1 (from memory of the standard)
+check(FL.sha256sum(d .. "/abc.txt") == "ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad",
+      "sha256sum of 'abc'")
+local dirs = {}
+local d2 = FL.tmpdir(dirs)
+check(dirs[1] == d2, "tmpdir lists the folder")
+os.execute("rm -rf " .. FL.quote(d2))
+-- a stamped CSV: header, columns, rows; a ragged row is refused
+local okst, h, cols, srows, nf = pcall(CSV.stamped, "# program: x\na,b\n1,2\n3,4\n", "t.csv")
+check(okst and h == "# program: x" and #cols == 2 and #srows == 2 and srows[2].b == "4" and nf == 0,
+      "stamped CSV: " .. tostring(h))
+check(not pcall(CSV.stamped, "# x\na,b\n1\n", "t.csv"), "a ragged stamped CSV is refused")
+check(not pcall(CSV.cells, 'a,"b'), "cells raises on a malformed line")
 os.execute("rm -rf " .. FL.quote(d))
 
 -- init.lua gathers them all

@@ -5,6 +5,12 @@
 --                             298.15 K, ln 10
 --   K.nernst_slope(T)         RT ln10 / F in V per decade at T in kelvin
 --                             (Nernst equation)
+--   K.coefficient(reaction, species)
+--                             the coefficient of a species in "a A + b B =
+--                             c C" (positive on the left, 0 if absent)
+--   K.boundary_slope(reaction, T_C)
+--                             dE/dpH of an E-pH boundary: -(RT ln10/F)
+--                             nH/ne (Nernst); nil without electrons
 --   K.boundary(map, a, b)     the boundary between species a and b (either
 --                             order); an error naming both if there is none
 --   K.area_sum(map)           the summed area of the map's fields
@@ -16,6 +22,25 @@ M.T0 = 298.15       -- K, reference temperature
 M.LN10 = math.log(10)
 
 function M.nernst_slope(T) return M.R * T * M.LN10 / M.F end
+
+function M.coefficient(reaction, species)
+  local lhs, rhs = reaction:match("^(.-) = (.*)$")
+  local total = 0
+  for side, sign in pairs({ [lhs] = 1, [rhs] = -1 }) do
+    for term in (side .. " + "):gmatch("(.-) %+ ") do
+      local n, f = term:match("^(%d+) (.+)$")
+      if not n then n, f = 1, term end
+      if f == species then total = total + sign * tonumber(n) end
+    end
+  end
+  return total
+end
+
+function M.boundary_slope(reaction, T_C)
+  local nH, ne = M.coefficient(reaction, "H^+"), M.coefficient(reaction, "e-")
+  if ne == 0 then return nil end
+  return -M.R * (T_C + 273.15) * math.log(10) / M.F * nH / ne
+end
 
 function M.boundary(map, a, b)
   for _, bd in ipairs(map.boundaries) do

@@ -12,6 +12,15 @@
 --   C.reference(name [, dir])      C.read of tests/reference/<name> (dir: the
 --                                  reference folder, default from
 --                                  PHLOX_SOURCE_DIR)
+--   C.cells(line)                  C.split, raising the message on a
+--                                  malformed line
+--   C.stamped(text, name)          a CSV file phlox wrote: its "#" header
+--                                  (one string), column names and rows (by
+--                                  column name); raises unless the rows are
+--                                  rectangular and every data file's SHA-256
+--                                  in the header equals sha256sum's of the
+--                                  file under PHLOX_SOURCE_DIR; also returns
+--                                  the number of data files stamped
 --   C.ref_value(name, keycol, key, valcol [, dir])
 --                                  tonumber(valcol) of the first row whose
 --                                  keycol equals key, and that row's source;
@@ -43,6 +52,44 @@ function M.split(line)
     end
   end
   return cells
+end
+
+function M.cells(line)
+  local cells, err = M.split(line)
+  if not cells then error(err, 2) end
+  return cells
+end
+
+function M.stamped(text, name)
+  local F = dofile((debug.getinfo(1, "S").source:match("^@(.*)[/\\]") or ".") .. "/files.lua")
+  local src = assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
+  local function check(cond, msg) if not cond then error(msg, 3) end end
+  local lines = {}
+  for l in text:gmatch("([^\n]*)\n") do lines[#lines + 1] = l end
+  local k, header = 1, {}
+  while lines[k] and lines[k]:sub(1, 1) == "#" do header[#header + 1] = lines[k]; k = k + 1 end
+  local htext = table.concat(header, "\n")
+  local nfiles = 0
+  for file, sum in htext:gmatch("# data: (%S+) sha256=(%x+)") do
+    nfiles = nfiles + 1
+    check(#sum == 64, name .. ": sha256 of " .. file .. " has 64 hex digits")
+    -- embedded copies are recorded as stdlib/...: the file in the tree
+    check(F.sha256sum(src .. "/" .. file) == sum, name .. ": checksum of " .. file .. " differs from sha256sum")
+  end
+  check(lines[k], name .. ": no column line after the header")
+  local cols, err = M.split(lines[k])
+  check(cols, name .. ": " .. tostring(err))
+  local rows = {}
+  for i = k + 1, #lines do
+    local cells, e = M.split(lines[i])
+    check(cells, name .. ": " .. tostring(e))
+    check(#cells == #cols, ("%s line %d has %d cells, not %d"):format(name, i, #cells, #cols))
+    local row = {}
+    for c, v in ipairs(cells) do row[cols[c]] = v end
+    rows[#rows + 1] = row
+  end
+  check(#rows > 0, name .. ": has rows")
+  return htext, cols, rows, nfiles
 end
 
 function M.parse(text)

@@ -3,8 +3,15 @@
 -- phlox.core (phlox 0.1.0)
 
 ---@class phlox.core
+---@field revision string
 ---@field version string
 local phlox_core = {}
+
+--- (C) phlox_core.append_sync(path, text) -> true | nil, message (appended and synced)
+---@param path string
+---@param text string
+---@return any # true | nil, message (appended and synced)
+function phlox_core.append_sync(path, text) end
 
 --- (C) phlox_core.check_files({path...}) -> ok, {problem...}
 ---@param path string
@@ -46,6 +53,25 @@ function phlox_core.embedded_files() end
 ---@return any # source text, or nil.
 function phlox_core.embedded_source(path) end
 
+--- (C) phlox_core.exit_now([code])
+---@param code? any
+function phlox_core.exit_now(code) end
+
+--- (C) phlox_core.fd_close(fd)
+---@param fd any
+function phlox_core.fd_close(fd) end
+
+--- (C) phlox_core.fd_read({fd...}) -> k, bytes ("" at end of file) | nil, message
+---@param fd any
+---@return any # k, bytes ("" at end of file) | nil, message
+function phlox_core.fd_read(fd) end
+
+--- (C) phlox_core.fd_write(fd, text) -> true | nil, message
+---@param fd any
+---@param text string
+---@return any # true | nil, message
+function phlox_core.fd_write(fd, text) end
+
 --- (C) phlox_core.figure(width, height [, rows, cols])
 ---@param width number
 ---@param height number
@@ -53,10 +79,22 @@ function phlox_core.embedded_source(path) end
 ---@param cols? any
 function phlox_core.figure(width, height, rows, cols) end
 
+--- (C) phlox_core.fork() -> pid, to_fd, from_fd (pid 0 in the worker) | nil, message
+---@return any # pid, to_fd, from_fd (pid 0 in the worker) | nil, message
+function phlox_core.fork() end
+
 --- (C) phlox_core.formula(text) -> table | nil, message
 ---@param text string
 ---@return any # table | nil, message
 function phlox_core.formula(text) end
+
+--- (C) phlox_core.getpid() -> process id
+---@return any # process id
+function phlox_core.getpid() end
+
+--- (C) phlox_core.getppid() -> parent process id
+---@return any # parent process id
+function phlox_core.getppid() end
 
 --- (C) phlox_core.grid_map(db, opts) -> rigorous map table | nil, message
 ---@param db phlox.Database
@@ -73,11 +111,25 @@ function phlox_core.inhibited_solids() end
 ---@return any # boolean (for progress display)
 function phlox_core.isatty(fd) end
 
+--- (C) phlox_core.kill(pid) -> boolean (SIGKILL to a worker this process started)
+---@param pid any
+---@return any # boolean (SIGKILL to a worker this process started)
+function phlox_core.kill(pid) end
+
+--- (C) phlox_core.list_dir(path) -> {name...} sorted | nil, message
+---@param path string
+---@return any # {name...} sorted | nil, message
+function phlox_core.list_dir(path) end
+
 --- (C) phlox_core.map(db, opts) -> map table | nil, message
 ---@param db phlox.Database
 ---@param opts table
 ---@return any # map table | nil, message
 function phlox_core.map(db, opts) end
+
+--- (C) phlox_core.monotonic() -> seconds of a monotonic clock
+---@return any # seconds of a monotonic clock
+function phlox_core.monotonic() end
 
 --- (C) phlox_core.nernst_slope(T)
 ---@param T number
@@ -137,6 +189,17 @@ function phlox_core.text_width(text, size, chem) end
 ---@param n? integer
 ---@param log? any
 function phlox_core.ticks(a, b, n, log) end
+
+--- (C) phlox_core.truncate(path, size) -> true | nil, message
+---@param path string
+---@param size number
+---@return any # true | nil, message
+function phlox_core.truncate(path, size) end
+
+--- (C) phlox_core.wait(pid) -> exit code (128 + signal when killed) | nil, message
+---@param pid any
+---@return any # exit code (128 + signal when killed) | nil, message
+function phlox_core.wait(pid) end
 
 --- (C) phlox_core.water(T [, P [, dielectric]]) -> table of the water state
 ---@param T number

@@ -48,6 +48,7 @@ local phlox_diagrams = {}
 
 ---@class phlox_diagrams.plot.opts
 ---@field conditions? any
+---@field from? any
 ---@field notes? any
 ---@field stamp? any
 ---@field title? string

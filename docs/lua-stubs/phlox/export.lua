@@ -20,8 +20,10 @@ local phlox_export = {}
 
 --- Write rows (a sequence of tables keyed by column name) as CSV.
 --- opts.columns: the column order (required); opts.conditions: stamped;
---- opts.from: the result(s) the rows come from, whose caveats (stamp lines)
---- become "# note:" lines (default: every caveat of this run).
+--- opts.from: the results the rows come from (a result or a list): their
+--- own data files, conditions, options and caveats (stamp lines, as "# note:"
+--- lines) are stamped; without it, every input and caveat of the run, the
+--- data files marked as such.
 ---@param path string
 ---@param rows any
 ---@param opts phlox_export.csv.opts
@@ -29,7 +31,7 @@ local phlox_export = {}
 function phlox_export.csv(path, rows, opts) end
 
 --- Write a value as JSON: { provenance = ..., caution = ..., data = value }.
---- opts.conditions and opts.from as export.csv (notes in provenance.notes).
+--- opts.conditions, opts.from as export.csv (notes in provenance.notes).
 ---@param path string
 ---@param value any
 ---@param opts phlox_export.json.opts

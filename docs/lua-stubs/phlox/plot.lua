@@ -68,7 +68,8 @@ function phlox_plot.check_map(map, where) end
 --- opts: x = { name, unit, min, max, log }, y = { ... }, title, legend =
 --- "outside" (default) | "top right" | ... | false, conditions, file,
 --- preset, width, height, dpi, stamp = "full" | "short" | false (or a list
---- of extra lines), notes (extra stamp lines).
+--- of extra lines), notes (extra stamp lines), from (the results drawn:
+--- their own data files are stamped).
 ---@param series any
 ---@param opts? phlox_plot.curves.opts
 ---@return any

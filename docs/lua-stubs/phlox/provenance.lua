@@ -11,13 +11,38 @@ local phlox_provenance = {}
 ---@return any
 function phlox_provenance.comment_lines(stamp, prefix) end
 
+--- Every input this process has read, sorted by path.
+---@return any
+function phlox_provenance.inputs() end
+
+--- The order of table keys in stamps and journals: numbers first, then
+--- strings, each ascending.
+---@param a any
+---@param b any
+---@return any
+function phlox_provenance.key_order(a, b) end
+
 --- The caveats of `from` (a result or a list of results with `stamp`
---- lines), or every caveat recorded in this run.
+--- lines, or provenance records with `notes`), or every caveat recorded in
+--- this run.
 ---@param from? any
 ---@return any
 function phlox_provenance.notes(from) end
 
---- Record a definition file (or any input) that a result depends on.
+--- The provenance of a result built from `lib` (a phlox.Library) for the
+--- elements named (H and O always count): the files that define a species
+--- made only of those elements, with their checksums, plus the conditions
+--- and a plain copy of the options.
+---@param lib phlox.Library
+---@param elements any
+---@param conditions any
+---@param options? any
+---@return any
+function phlox_provenance.of_result(lib, elements, conditions, options) end
+
+--- Record an input file (the library loader calls this for each element
+--- file); returns { file = path, sha256 = ... }.  Every input read feeds the
+--- journal key of resumable sweeps (phlox.sweep).
 ---@param path string
 ---@param text string
 ---@return any
@@ -30,8 +55,12 @@ function phlox_provenance.record_file(path, text) end
 ---@return any
 function phlox_provenance.record_note(text) end
 
---- The current stamp: a plain table (stable key order when JSON-encoded).
----@param conditions any
+--- A stamp: a plain table (stable key order when JSON-encoded).
+---   provenance.stamp(conditions, from)
+--- `from` names the results the output shows (a result, its provenance or a
+--- list of them): their files are stamped, and their options.  Without it,
+--- the stamp lists every input this run has read and says so (data_scope).
+---@param conditions? any
 ---@param from any
 ---@return any
 function phlox_provenance.stamp(conditions, from) end

@@ -5,13 +5,6 @@
 ---@class phlox.sweep
 local phlox_sweep = {}
 
----@class phlox_sweep.parallel.opts
----@field workers? any
-
----@class phlox_sweep.run.opts
----@field label? any
----@field quiet? any
-
 --- n evenly spaced values from a to b inclusive.
 ---@param a any
 ---@param b any
@@ -26,15 +19,13 @@ function phlox_sweep.linear(a, b, n) end
 ---@return any
 function phlox_sweep.log(a, b, n) end
 
---- Run fn over the points on several worker processes (the study script is
---- started again once per worker with PHLOX_SHARD=i/n; each worker runs its
---- shard, writes its results and exits), then return the results in point
---- order, exactly as sweep.run would.  opts.workers (default 1: no workers),
---- opts.quiet.  One parallel sweep per script; the script must reach the
---- sweep.parallel call deterministically (the workers rerun it from the top).
+--- sweep.run on opts.workers worker processes (default 1), forked here:
+--- they share what this process has loaded and take points one at a time.
+--- Results and failures come back in point order, bit for bit as sweep.run
+--- returns them.
 ---@param points any
 ---@param fn any
----@param opts? phlox_sweep.parallel.opts
+---@param opts table
 ---@return any
 function phlox_sweep.parallel(points, fn, opts) end
 
@@ -45,13 +36,17 @@ function phlox_sweep.parallel(points, fn, opts) end
 ---@return any
 function phlox_sweep.product(...) end
 
---- Run fn(point) over the points; returns the results in point order.
---- Shows progress on a terminal (stderr), stays quiet in CI (CI set) or when
---- opts.quiet.  fn may return nil, message to record a failure; failures are
---- collected in the second result rather than stopping the sweep.
+--- Run fn(point) over the points; returns the results in point order and
+--- the failures ({ index, point, message }: fn returned nil, message).
+--- opts.quiet, opts.label (progress on a terminal), opts.workers (several
+--- processes, see sweep.parallel), opts.journal (a file: finished points are
+--- committed there and a rerun skips them; with PHLOX_SHARD=i/n this process
+--- runs shard i into <journal>.shard-i-of-n and exits; `phlox merge` joins
+--- them).  With a journal or workers, results must be plain data (numbers,
+--- strings, booleans, tables of them).
 ---@param points any
 ---@param fn any
----@param opts? phlox_sweep.run.opts
+---@param opts table
 ---@return any
 function phlox_sweep.run(points, fn, opts) end
 
