@@ -12,9 +12,6 @@
 ---@field version string
 local phlox = {}
 
----@class phlox.constant_logk.opts
----@field cache? any
-
 ---@class phlox.grid_map.opts
 ---@field E_range? number[]
 ---@field P? number
@@ -78,10 +75,13 @@ local phlox = {}
 ---@field pe? number
 ---@field redox_gas? any
 ---@field redox_log_f? any
----@field require_temperature_data? any
 ---@field solids? boolean
 ---@field suppress? string[]
 ---@field totals? table<string, number>
+
+---@class phlox.temperature_notes.opts
+---@field accept_held_logk? any
+---@field require_temperature_data? any
 
 ---@class phlox.to_she.opts
 ---@field T? number
@@ -121,13 +121,20 @@ function phlox.activity_range(model, I) end
 ---@return any
 function phlox.available_elements() end
 
---- The answer is kept per library, elements, T and P (a sweep asks the same
---- question for every ligand level); opts.cache = false recomputes it.
+--- The species of `elements` (a list of symbols) whose log K has no
+--- temperature data (a log K record without dH, logK_T or an estimate): phlox
+--- keeps their 25 C value at T.  Read from each record's temperature basis
+--- (species.basis == "held", set by the core from the record's fields).
+--- Empty within 0.5 K of 25 C.  Sorted formulas.  P is accepted for
+--- compatibility and not used (the basis does not depend on P).  opts
+--- (optional): only = a set of element symbols (species with any other
+--- element besides H and O are left out); cache = false re-reads the records
+--- (otherwise they are gathered once per library).
 ---@param lib phlox.Library
 ---@param elements any
 ---@param T number
----@param P? number
----@param opts phlox.constant_logk.opts
+---@param P number
+---@param opts table
 ---@return any
 function phlox.constant_logk(lib, elements, T, P, opts) end
 
@@ -155,6 +162,16 @@ function phlox.electrode_at(name, T, at_25C, where) end
 --- dEdT is used), source, dEdT_source }.
 ---@return any
 function phlox.electrodes() end
+
+--- The species of `elements` whose temperature dependence is estimated by a
+--- named method (species.basis == "estimated"): { { formula, method }, ... }
+--- sorted by formula; empty within 0.5 K of 25 C; opts as for constant_logk.
+---@param lib phlox.Library
+---@param elements any
+---@param T number
+---@param opts table
+---@return any
+function phlox.estimated_species(lib, elements, T, opts) end
 
 ---@param opts table
 ---@return any
@@ -288,6 +305,21 @@ function phlox.solubility(opts) end
 ---@param opts phlox.speciate.opts
 ---@return any
 function phlox.speciate(opts) end
+
+--- Away from 25 C a reader must know which fields rest on 25 C constants or
+--- on estimated temperature functions.  phlox.temperature_notes checks the
+--- species of `elements` at every temperature of `temps` (K): a species held
+--- at its 25 C log K stops the work (before any is done) unless
+--- opts.accept_held_logk is true; it returns the held formulas, the estimated
+--- { formula, method } and the stamp lines naming both.
+---@param lib phlox.Library
+---@param elements any
+---@param temps any
+---@param opts phlox.temperature_notes.opts
+---@param where any
+---@param only string[]
+---@return any
+function phlox.temperature_notes(lib, elements, temps, opts, where, only) end
 
 --- A potential measured against a reference electrode, on the SHE scale.
 ---   phlox.to_she(-0.45, "SCE")                  -- 25 °C

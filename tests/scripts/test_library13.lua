@@ -53,13 +53,16 @@ check(with_ocn, "with cyanate, some Au fields lie in the OCN^- field")
 local ok, err = pcall(phlox.map, { library = lib, element = "Au", ligand = "CQ" })
 check(not ok and tostring(err):find("bad ligand", 1, true), "bad ligand: " .. tostring(err))
 
--- away from 25 C the held log K of the gold ions is reported; Au(CN)2^- has
--- NBS enthalpies and is not held (phlox.map looks up the group's elements)
+-- away from 25 C the estimated temperature functions of the gold ions
+-- (isocoulombic: no dH recalled) are reported; Au(CN)2^- has NBS enthalpies
+-- and is not estimated (phlox.map looks up the group's elements)
 local m100 = phlox.map { library = lib, element = "Au", ligand = "CN", T_C = 100, exclude = { "OCN^-" } }
-local held = {}
-for _, f in ipairs(m100.constant_logk or {}) do held[f] = true end
-check(held["Au^+"] and held["Au^3+"], "Au^+ and Au^3+ are reported as held at 25 C")
-check(not held["Au(CN)2^-"] and not held["CN^-"], "Au(CN)2^- and CN^- carry temperature data")
+local est = {}
+for _, e in ipairs(m100.estimated_logk or {}) do est[e.formula] = e.method end
+check(est["Au^+"] and est["Au^3+"] and est["Au^+"]:find("isocoulombic", 1, true),
+  "Au^+ and Au^3+ are reported with their isocoulombic estimate")
+check(not est["Au(CN)2^-"] and not est["CN^-"], "Au(CN)2^- and CN^- carry measured temperature data")
+check(m100.constant_logk == nil, "nothing of Au.lua or CN.lua is held at 25 C")
 
 -- 2. Boric acid: pKa at 0 C, 9.508 (from memory of Owen 1934, J. Am. Chem.
 --    Soc. 56, 1695); the file uses Mesmer, Baes and Sweeton 1972 with

@@ -220,6 +220,21 @@ phlox.Database = {}
 --- (C) phlox.Database:count()
 function phlox.Database:count() end
 
+--- (C) phlox.Database:hkf_reestimate(formula, T [, P]) -> G_estimated, G_record | nil, message:
+---@param formula string
+---@param T number
+---@param P? number
+---@return any # G_estimated, G_record | nil, message:
+function phlox.Database:hkf_reestimate(formula, T, P) end
+
+--- (C) phlox.Database:isocoulombic(reaction, logK25, T [, P]) -> log K, n | nil, message: the
+---@param reaction any
+---@param logK25 any
+---@param T number
+---@param P? number
+---@return any # log K, n | nil, message: the
+function phlox.Database:isocoulombic(reaction, logK25, T, P) end
+
 --- (C) phlox.Database:list_text([element]) -> the `phlox list` text
 ---@param element? string
 ---@return any # the `phlox list` text

@@ -89,7 +89,8 @@ local phlox_diagrams = {}
 ---@field x? number
 
 --- Species of `element` whose record is a log K without temperature
---- dependence (no dH, no logK_T): their log K stays at its 25 C value at T.
+--- dependence (no dH, logK_T or estimate): their log K stays at its 25 C
+--- value at T (read from the records' temperature basis).
 ---@param lib phlox.Library
 ---@param element string
 ---@param T_C number
