@@ -179,18 +179,18 @@ for _, p in ipairs(points) do
   end
 end
 
--- Species whose log K is held at its 25 C value above 25 C (no reaction
--- enthalpy in the data file; docs/thermo.md, LOGK): the summary says so.
--- Checked on every copper species of the library, shown or not: a species
--- held at its 25 C value can gain or lose a field for that reason alone.
-local held_list = {}
+-- Copper species whose temperature dependence is not measured: estimated by a
+-- named method (docs/thermo.md, "Temperature estimates"), read from each
+-- record's temperature basis.  Checked on every copper species of the
+-- library, shown or not: an estimated species can gain or lose a field
+-- through its estimate alone.
+local estimated_list = {}
 for _, rec in ipairs(lib:list("Cu")) do
-  if rec.model == "logk" then
-    local r = lib:reaction(rec.reaction, { T_C = TEMPS[#TEMPS] })
-    if math.abs(r.logK - rec.logK25) < 1e-9 then held_list[#held_list + 1] = rec.formula end
+  if rec.basis == "estimated" then
+    estimated_list[#estimated_list + 1] = rec.formula .. " (" .. rec.basis_method .. ")"
   end
 end
-table.sort(held_list)
+table.sort(estimated_list)
 
 -- 3. Figures ------------------------------------------------------------------
 
@@ -373,7 +373,7 @@ export.json(path("study.json"), {
   },
   maps = per_T,
   operating_points = points,
-  log_K_held_at_25C = held_list,
+  temperature_estimated = estimated_list,
 }, { conditions = conditions, from = { maps, speciation_provenance } })
 wrote("study.json")
 
@@ -409,12 +409,12 @@ for _, p in ipairs(points) do
   print(("  %3d C %-10s pH %5.2f  E %6.3f V  -> %s (%s); dissolved Cu %.2e mol/kg, mostly %s")
     :format(p.T_C, p.state, p.pH, p.E_V, p.field, p.domain, p.dissolved_Cu, p.carrier))
 end
-if #held_list > 0 then
+if #estimated_list > 0 then
   print()
-  print("Data note: no reaction enthalpy in the library for " .. table.concat(held_list, ", ")
-    .. ", so their log K is held at the 25 C value above 25 C;")
-  print("  the alkaline dissolved fields (present or absent) and the dissolved copper of the aerated")
-  print("  water at 90 and 150 C rest on that.")
+  print("Data note: no measured temperature data in the library for " .. table.concat(estimated_list, ", ")
+    .. "; their temperature dependence is estimated by the method named.")
+  print("  The alkaline dissolved fields (present or absent) and the dissolved copper of the aerated")
+  print("  water at 90 and 150 C rest on those estimates.")
 end
 
 print()

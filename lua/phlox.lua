@@ -276,57 +276,146 @@ function phlox.water(opts)
   return w
 end
 
---- The species of `elements` (a list of symbols) whose log K has no
--- temperature data (a log K record without dH or logK_T): phlox keeps their
--- 25 C value at T.  Found numerically, by comparing log K at (T, P) with log K
--- at 25 C and 1 bar.  P defaults to max(1 bar, saturation).  Sorted formulas.
-local T_REF, P_REF = 298.15, 1.0   -- K, bar: where log K records are given
+local T_REF = 298.15               -- K: where log K records are given
 local NEAR_T_REF = 0.5             -- K: closer than this to 25 C, nothing is held
-local SAME_LOGK = 1e-12            -- log K this close to its 25 C value is held
--- The answer is kept per library, elements, T and P (a sweep asks the same
--- question for every ligand level); opts.cache = false recomputes it.
-local CONSTANT_LOGK_OPTS = spec("phlox.constant_logk", {
-  cache = "boolean",                          -- false: recompute
-})
-function phlox.constant_logk(lib, elements, T, P, opts)
-  check_library("phlox.constant_logk", lib)
-  core.check_value("phlox.constant_logk", "elements", elements, "strings")
-  core.check_value("phlox.constant_logk", "T (K)", T, "number", LIM.T_min, LIM.T_max)
-  if P ~= nil then core.check_value("phlox.constant_logk", "P (bar)", P, "number", 1e-6, LIM.P_max) end
-  if opts ~= nil then options("phlox.constant_logk", CONSTANT_LOGK_OPTS, opts) end
-  P = P or pressure({}, T, "phlox.constant_logk")
-  local key = ("%s|%.17g|%.17g|%d"):format(table.concat(elements, ","), T, P, lib.db:count())
-  local cached = lib._held and lib._held[key]
-  if cached and not (opts and opts.cache == false) then return table.move(cached, 1, #cached, 1, {}) end
-  local held, seen = {}, {}
-  if math.abs(T - T_REF) <= NEAR_T_REF then return held end
-  for _, el in ipairs(elements) do
-    for _, s in ipairs(lib:list(el)) do
-      if s.model == "logk" and s.reaction and not seen[s.formula] then
-        seen[s.formula] = true
-        local a = lib.db:reaction(s.reaction, T_REF, P_REF)
-        local b = lib.db:reaction(s.reaction, T, P)
-        if a and b and math.abs(a.logK - b.logK) < SAME_LOGK then held[#held + 1] = s.formula end
-      end
-    end
+local function made_of(s, only)
+  if not only then return true end
+  for el in pairs(s.elements) do
+    if el ~= "H" and el ~= "O" and not only[el] then return false end
   end
-  table.sort(held)
-  lib._held = lib._held or {}
-  lib._held[key] = table.move(held, 1, #held, 1, {})
+  return true
+end
+
+-- The records of a library whose basis is not "measured", gathered once per
+-- library (a sweep asks the same question for every point); rebuilt if the
+-- species count changes (db:remove, db:load) or when fresh is true.
+local basis_cache = setmetatable({}, { __mode = "k" })
+local function unmeasured(lib, fresh)
+  local n = lib.db:count()
+  local c = basis_cache[lib]
+  if c and c.n == n and not fresh then return c.recs end
+  local recs = {}
+  for i = 1, n do
+    local s = lib.db:species(i)
+    if s.basis ~= "measured" then recs[#recs + 1] = s end
+  end
+  basis_cache[lib] = { n = n, recs = recs }
+  return recs
+end
+
+local function basis_list(lib, elements, T, basis, opts)
+  local out = {}
+  if math.abs(T - T_REF) <= NEAR_T_REF then return out end
+  local only = opts and opts.only
+  local wanted = {}
+  for _, el in ipairs(elements) do wanted[el] = true end
+  for _, s in ipairs(unmeasured(lib, opts and opts.cache == false)) do
+    local has = false
+    for el in pairs(s.elements) do has = has or wanted[el] == true end
+    if has and s.basis == basis and made_of(s, only) then out[#out + 1] = s end
+  end
+  table.sort(out, function(a, b) return a.formula < b.formula end)
+  return out
+end
+
+--- The species of `elements` (a list of symbols) whose log K has no
+-- temperature data (a log K record without dH, logK_T or an estimate): phlox
+-- keeps their 25 C value at T.  Read from each record's temperature basis
+-- (species.basis == "held", set by the core from the record's fields).
+-- Empty within 0.5 K of 25 C.  Sorted formulas.  P is accepted for
+-- compatibility and not used (the basis does not depend on P).  opts
+-- (optional): only = a set of element symbols (species with any other
+-- element besides H and O are left out); cache = false re-reads the records
+-- (otherwise they are gathered once per library).
+local BASIS_OPTS = {
+  only = "table",                             -- a set of element symbols
+  cache = "boolean",                          -- false: re-read the records
+}
+spec("phlox.constant_logk", BASIS_OPTS)
+spec("phlox.estimated_species", BASIS_OPTS)
+local function check_basis_args(fname, lib, elements, T, P, opts)
+  check_library(fname, lib)
+  core.check_value(fname, "elements", elements, "strings")
+  core.check_value(fname, "T (K)", T, "number", LIM.T_min, LIM.T_max)
+  if P ~= nil then core.check_value(fname, "P (bar)", P, "number", 1e-6, LIM.P_max) end
+  if opts ~= nil then options(fname, BASIS_OPTS, opts) end
+end
+function phlox.constant_logk(lib, elements, T, P, opts)
+  check_basis_args("phlox.constant_logk", lib, elements, T, P, opts)
+  local held = {}
+  for _, s in ipairs(basis_list(lib, elements, T, "held", opts)) do held[#held + 1] = s.formula end
   return held
 end
 
--- Away from 25 C a reader must know which fields, present or missing, rest
--- on 25 C constants.  held_logk lists them, or refuses the map when
--- opts.require_temperature_data is set (before any work is done);
--- stamp_held names them in map.constant_logk and a stamp line.
-local function held_logk(lib, elements, T, P, opts, where)
-  local held = phlox.constant_logk(lib, elements, T, P)
-  if #held > 0 and opts.require_temperature_data then
-    core.user_error(("%s: require_temperature_data: no temperature data (log K held at 25 °C) for %s"):format(
-      where, table.concat(held, ", ")))
+--- The species of `elements` whose temperature dependence is estimated by a
+-- named method (species.basis == "estimated"): { { formula, method }, ... }
+-- sorted by formula; empty within 0.5 K of 25 C; opts as for constant_logk.
+function phlox.estimated_species(lib, elements, T, opts)
+  check_basis_args("phlox.estimated_species", lib, elements, T, nil, opts)
+  local out = {}
+  for _, s in ipairs(basis_list(lib, elements, T, "estimated", opts)) do
+    out[#out + 1] = { formula = s.formula, method = s.basis_method or "?" }
   end
-  return held
+  return out
+end
+
+local STOP_HINT = "pass accept_held_logk = true to use the 25 °C constants anyway (the stamp names them), " ..
+  "or give temperature data (dH, logK_T, or estimate = \"isocoulombic\") for them in a user data file " ..
+  "(phlox --path DIR; docs/element-files.md)"
+--- Away from 25 C a reader must know which fields rest on 25 C constants or
+-- on estimated temperature functions.  phlox.temperature_notes checks the
+-- species of `elements` at every temperature of `temps` (K): a species held
+-- at its 25 C log K stops the work (before any is done) unless
+-- opts.accept_held_logk is true; it returns the held formulas, the estimated
+-- { formula, method } and the stamp lines naming both.
+function phlox.temperature_notes(lib, elements, temps, opts, where, only)
+  if opts and opts.require_temperature_data ~= nil then
+    error(("%s: require_temperature_data is gone: stopping on a log K held at 25 °C is now the default; " ..
+      "pass accept_held_logk = true to accept such constants"):format(where), 0)
+  end
+  local held, est, hseen, eseen, at = {}, {}, {}, {}, {}
+  for _, T in ipairs(temps) do
+    for _, f in ipairs(phlox.constant_logk(lib, elements, T, nil, { only = only })) do
+      if not hseen[f] then hseen[f] = true; held[#held + 1] = f end
+      at[#at + 1] = T
+    end
+    for _, e in ipairs(phlox.estimated_species(lib, elements, T, { only = only })) do
+      if not eseen[e.formula] then eseen[e.formula] = true; est[#est + 1] = e end
+    end
+  end
+  table.sort(held)
+  table.sort(est, function(a, b) return a.formula < b.formula end)
+  if #held > 0 and not (opts and opts.accept_held_logk) then
+    error(("%s: no temperature data for %s: its log K would be held at the 25 °C value at %g °C. Either %s"):format(
+      where, table.concat(held, ", "), at[1] - 273.15, STOP_HINT), 0)
+  end
+  -- lines.short[line]: the short form printed by short stamps (phlox.plot)
+  local lines = { short = {} }
+  if #held > 0 then
+    local text, short = phlox.held_stamp_line(held)
+    lines[#lines + 1] = text
+    lines.short[text] = short
+  end
+  if #est > 0 then
+    local by, order = {}, {}
+    for _, e in ipairs(est) do
+      if not by[e.method] then by[e.method] = {}; order[#order + 1] = e.method end
+      table.insert(by[e.method], "{" .. e.formula .. "}")
+    end
+    for _, m in ipairs(order) do
+      local text = ("temperature dependence estimated, %s: %s"):format(m, table.concat(by[m], ", "))
+      lines[#lines + 1] = text
+      lines.short[text] = ("temperature dependence of %d species estimated (%s)"):format(#by[m], m)
+    end
+  end
+  return held, est, lines
+end
+
+-- The notes of one map at T; errors name the caller.
+local function held_logk(lib, elements, T, opts, where, only)
+  local ok, held, est, lines = pcall(phlox.temperature_notes, lib, elements, { T }, opts, where, only)
+  if not ok then error(held, 3) end
+  return { held = held, estimated = est, lines = lines }
 end
 
 local add_note -- defined below
@@ -340,10 +429,15 @@ function phlox.held_stamp_line(held)
          ("log K of %d species held at 25 °C (no temperature data)"):format(#held)
 end
 
-local function stamp_held(m, held)
-  if #held == 0 then return end
-  m.constant_logk = held
-  add_note(m, "held", phlox.held_stamp_line(held))
+-- map.constant_logk (held species, accepted), map.estimated_logk ({ formula,
+-- method }) and their stamp lines (with short forms), as notes with keys
+-- "held" and "estimated"
+local function stamp_held(m, notes)
+  if #notes.held > 0 then m.constant_logk = notes.held end
+  if #notes.estimated > 0 then m.estimated_logk = notes.estimated end
+  for _, l in ipairs(notes.lines) do
+    add_note(m, l:find("^log K held") and "held" or "estimated", l, notes.lines.short[l])
+  end
 end
 
 -- What practice keeps out, and every caveat that changes a result, as
@@ -485,7 +579,8 @@ local MAP_OPTS = spec("phlox.map", {
   exclude = "strings",                        -- species left out
   only = "strings",                           -- only these species
   activities = { "map", ACT[1], ACT[2] },     -- per species activity, {["Fe^2+"] = 1e-5}
-  require_temperature_data = "boolean",       -- refuse log K held at 25 C
+  accept_held_logk = "boolean",               -- use log K held at 25 C away from 25 C (stamped)
+  require_temperature_data = "boolean",       -- gone: phlox.temperature_notes says to use accept_held_logk
   ligand_redox = "table",                     -- {N = "full" | "kept" | form name}
 }, true)
 local function check_window(where, opts, key)
@@ -504,7 +599,7 @@ function phlox.map(opts)
   local P = pressure(opts, T, "phlox.map")
   local held_of = { opts.element }
   for _, e in ipairs(ligand_elements(opts.ligand)) do held_of[#held_of + 1] = e end
-  local held = held_logk(lib, held_of, T, P, opts, "phlox.map")
+  local held = held_logk(lib, held_of, T, opts, "phlox.map")
   local axes = opts.axes or { "pH", "E" }
   local copt = {
     element = opts.element, T = T, P = P, x = axes[1], y = axes[2],
@@ -535,6 +630,25 @@ function phlox.map(opts)
   stamp_held(m, held)
   m.provenance.notes = m.stamp   -- the caveats travel with the provenance (into sweep results)
   return m
+end
+
+-- The elements a speciation involves: those of totals, fugacities and fixed
+-- (each a symbol or a formula); the held-species check looks at species made
+-- of these (with H and O) only.
+local function speciation_elements(lib, opts)
+  local set, out = { H = true, O = true }, {}
+  local function add_formula(f)
+    local rec = lib:species(f)
+    for el in pairs(rec and rec.elements or {}) do set[el] = true end
+  end
+  for k in pairs(type(opts.totals) == "table" and opts.totals or {}) do set[k] = true end
+  for k in pairs(type(opts.fugacities) == "table" and opts.fugacities or {}) do add_formula(k) end
+  for k in pairs(type(opts.fixed) == "table" and opts.fixed or {}) do add_formula(k) end
+  for el in pairs(set) do
+    if el ~= "H" and el ~= "O" then out[#out + 1] = el end
+  end
+  table.sort(out)
+  return out, set
 end
 
 --- Full speciation of a water.
@@ -569,7 +683,8 @@ local SPECIATE_OPTS = spec("phlox.speciate", {
   max_iter = { "integer", 1, 100000 },        -- solver iterations
   ligand_redox = "table",                     -- {N = "full" | "kept" | form name}, as phlox.map
   allow_inhibited = "boolean",                -- let kinetically inhibited solids precipitate
-  require_temperature_data = "boolean",       -- refuse log K held at 25 C
+  accept_held_logk = "boolean",               -- use log K held at 25 C away from 25 C (stamped)
+  require_temperature_data = "boolean",       -- gone: phlox.temperature_notes says to use accept_held_logk
 }, true)
 function phlox.speciate(opts)
   options("phlox.speciate", SPECIATE_OPTS, opts)
@@ -577,9 +692,11 @@ function phlox.speciate(opts)
   check_library("phlox.speciate", lib)
   local T = temperature(opts, "phlox.speciate")
   local P = pressure(opts, T, "phlox.speciate")
+  local els, only = speciation_elements(lib, opts)
+  local notes = held_logk(lib, els, T, opts, "phlox.speciate", only)
   local copt = {}
   for k, v in pairs(opts) do copt[k] = v end
-  copt.library, copt.T_C, copt.require_temperature_data = nil, nil, nil
+  copt.library, copt.T_C, copt.accept_held_logk, copt.require_temperature_data = nil, nil, nil, nil
   copt.T, copt.P = T, P
   local r, err, info = core.speciate(lib.db, copt)
   if not r then return nil, err, info end
@@ -601,19 +718,7 @@ function phlox.speciate(opts)
   if opts.solids == false then add_note(r, "solids", "no solid may precipitate (solids = false)") end
   note_list(r, "suppress", "kept from precipitating by the user (suppress)", opts.suppress)
   note_list(r, "exclude", "left out by the user (exclude)", opts.exclude)
-  local elements = {}
-  for el in pairs(opts.totals or {}) do elements[#elements + 1] = el end
-  table.sort(elements)
-  -- sweeps speciate the same water at one T many times: the held list is
-  -- kept per library, T, P and elements
-  local key = ("%.6f %.6f %s"):format(T, P, table.concat(elements, " "))
-  lib.held_cache = lib.held_cache or {}
-  lib.held_cache[key] = lib.held_cache[key] or phlox.constant_logk(lib, elements, T, P)
-  if #lib.held_cache[key] > 0 and opts.require_temperature_data then
-    core.user_error("phlox.speciate: require_temperature_data: no temperature data (log K held at 25 °C) for "
-      .. table.concat(lib.held_cache[key], ", "))
-  end
-  stamp_held(r, lib.held_cache[key])
+  stamp_held(r, notes)
   local names = {}
   for _, sp in ipairs(r.species) do
     if (sp.molality or 0) > 0 then names[#names + 1] = sp.formula end
@@ -663,7 +768,8 @@ local GRID_MAP_OPTS = spec("phlox.grid_map", {
   background_nacl = { "number", 0, 6.1 },     -- mol/kg NaCl (halite saturation, from memory of the CRC Handbook)
   exclude = "strings",                        -- species left out
   threads = { "integer", 1, 64 },             -- worker threads
-  require_temperature_data = "boolean",       -- refuse log K held at 25 C
+  accept_held_logk = "boolean",               -- use log K held at 25 C away from 25 C (stamped)
+  require_temperature_data = "boolean",       -- gone: phlox.temperature_notes says to use accept_held_logk
   ligand_redox = "table",                     -- as phlox.map
   allow_inhibited = "boolean",                -- let kinetically inhibited solids precipitate
   failed_boundaries = "boolean",              -- draw boundaries next to failed solves
@@ -679,7 +785,7 @@ function phlox.grid_map(opts)
   end
   local T = temperature(opts, "phlox.grid_map")
   local P = pressure(opts, T, "phlox.grid_map")
-  local held = held_logk(lib, { opts.element, opts.ligand }, T, P, opts, "phlox.grid_map")
+  local held = held_logk(lib, { opts.element, opts.ligand }, T, opts, "phlox.grid_map")
   local pr, er = opts.pH_range or { 0, 14 }, opts.E_range or { -2, 2 }
   local g, err = core.grid_map(lib.db, {
     element = opts.element, T = T, P = P, window = { pr[1], pr[2], er[1], er[2] },

@@ -13,9 +13,6 @@
 ---@field version string
 local phlox = {}
 
----@class phlox.constant_logk.opts
----@field cache? any
-
 ---@class phlox.grid_map.opts
 ---@field E_range? number[]
 ---@field P? number
@@ -66,10 +63,13 @@ local phlox = {}
 ---@field fixed? table<string, number>
 ---@field fugacities? table<string, number>
 ---@field library? phlox.Library
----@field require_temperature_data? any
 ---@field solids? boolean
 ---@field suppress? string[]
 ---@field totals? table<string, number>
+
+---@class phlox.temperature_notes.opts
+---@field accept_held_logk? any
+---@field require_temperature_data? any
 
 ---@class phlox.to_she.opts
 ---@field T? number
@@ -102,8 +102,8 @@ function phlox.available_elements() end
 ---@param lib phlox.Library
 ---@param elements any
 ---@param T number
----@param P? number
----@param opts? phlox.constant_logk.opts
+---@param P number
+---@param opts table
 ---@return any
 function phlox.constant_logk(lib, elements, T, P, opts) end
 
@@ -131,6 +131,16 @@ function phlox.electrode_at(name, T, at_25C, where) end
 --- dEdT is used), source, dEdT_source }.
 ---@return any
 function phlox.electrodes() end
+
+--- The species of `elements` whose temperature dependence is estimated by a
+--- named method (species.basis == "estimated"): { { formula, method }, ... }
+--- sorted by formula; empty within 0.5 K of 25 C; opts as for constant_logk.
+---@param lib phlox.Library
+---@param elements any
+---@param T number
+---@param opts table
+---@return any
+function phlox.estimated_species(lib, elements, T, opts) end
 
 ---@param opts table
 ---@return any
@@ -245,6 +255,21 @@ function phlox.solubility(opts) end
 ---@param opts phlox.speciate.opts
 ---@return any
 function phlox.speciate(opts) end
+
+--- Away from 25 C a reader must know which fields rest on 25 C constants or
+--- on estimated temperature functions.  phlox.temperature_notes checks the
+--- species of `elements` at every temperature of `temps` (K): a species held
+--- at its 25 C log K stops the work (before any is done) unless
+--- opts.accept_held_logk is true; it returns the held formulas, the estimated
+--- { formula, method } and the stamp lines naming both.
+---@param lib phlox.Library
+---@param elements any
+---@param temps any
+---@param opts phlox.temperature_notes.opts
+---@param where any
+---@param only string[]
+---@return any
+function phlox.temperature_notes(lib, elements, temps, opts, where, only) end
 
 ---@param E_measured any
 ---@param electrode any

@@ -368,6 +368,8 @@ static int in_filter(const pxd_file *f, const px_formula *fm)
     return 1;
 }
 
+static void resolve_kopp(pxd_file *f, pxd_entry *e, const px_db *known);
+
 static void check_entry(pxd_file *f, pxd_entry *e, const px_db *known)
 {
     px_species *sp = &e->sp;
@@ -414,6 +416,7 @@ static void check_entry(pxd_file *f, pxd_entry *e, const px_db *known)
         check_magnitude(f, e);
     }
     if (sp->model == PX_MODEL_LOGK) check_logk(f, e, known);
+    if (e->want_kopp && e->formula_ok && e->errors == 0 && !e->skip) resolve_kopp(f, e, known);
     if (e->want_estimate && e->formula_ok && e->errors == 0) {
         int st = px_hkf_estimate(sp, e->est_Cp, e->est_V);
         if (st != PX_OK)
@@ -421,6 +424,54 @@ static void check_entry(pxd_file *f, pxd_entry *e, const px_db *known)
                              px_strerror(st));
         sp->estimated = 1;
     }
+}
+
+/* Kopp-Neumann estimate of a solid's Cp (px_cp_kopp) from the components
+ * named in estimate.from: each a cp species of this file or of the loaded
+ * database with a published Cp function.  A component that is not loaded
+ * (a file checked alone) leaves Cp at 0 with a warning. */
+static void resolve_kopp(pxd_file *f, pxd_entry *e, const px_db *known)
+{
+    px_species *sp = &e->sp;
+    px_formula comp[PXD_KOPP_MAX];
+    px_cp_params cps[PXD_KOPP_MAX];
+    for (int i = 0; i < e->n_kopp; i++) {
+        const char *raw = e->kopp_from[i];
+        if (px_formula_parse(raw, &comp[i]) != PX_OK) {
+            pxd_report_entry(f, e, PX_DATA_ERROR, "estimate.from", "malformed formula '%s'", raw);
+            return;
+        }
+        const pxd_entry *o = find_in_file(f, comp[i].text);
+        const px_species *c = o ? &o->sp : (known ? px_db_find(known, comp[i].text) : NULL);
+        if (!c) {
+            pxd_report_entry(f, e, PX_DATA_WARNING, "estimate.from",
+                             "%s is not loaded: no Cp estimate here (Cp taken as 0)", comp[i].text);
+            return;
+        }
+        int published = c->model == PX_MODEL_CP && c->cp.estimate == PX_CP_EST_NONE &&
+                        !(o && o->want_kopp) &&
+                        (c->cp.a != 0 || c->cp.b != 0 || c->cp.c != 0 || c->cp.d != 0 || c->cp.e != 0);
+        if (!published) {
+            pxd_report_entry(f, e, PX_DATA_ERROR, "estimate.from",
+                             "%s has no published Cp function (model 'cp' with a 'cp' table)",
+                             comp[i].text);
+            return;
+        }
+        cps[i] = c->cp;
+    }
+    char msg[256];
+    px_cp_params out = sp->cp;
+    int st = px_cp_kopp(&sp->f, e->n_kopp, comp, e->kopp_nu, cps, &out, msg, sizeof msg);
+    if (st != PX_OK) {
+        pxd_report_entry(f, e, PX_DATA_ERROR, "estimate", "Kopp-Neumann estimate failed: %s", msg);
+        return;
+    }
+    sp->cp.a = out.a;
+    sp->cp.b = out.b;
+    sp->cp.c = out.c;
+    sp->cp.d = out.d;
+    sp->cp.e = out.e;
+    sp->cp.estimate = PX_CP_EST_KOPP;
 }
 
 void pxd_check_file(pxd_file *f, const px_db *known)

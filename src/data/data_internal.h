@@ -17,6 +17,7 @@
 #include <stddef.h>
 
 #define PXD_RAW_MAX 96 /* bytes of a formula as written, with NUL */
+#define PXD_KOPP_MAX 4 /* components of a Kopp-Neumann estimate (estimate.from) */
 
 typedef struct pxd_entry {
     px_species sp;          /* sp.source and sp.file owned (malloc) */
@@ -33,6 +34,10 @@ typedef struct pxd_entry {
     double logK_given;
     int skip;               /* outside the requested element set */
     int known_mismatch;     /* `known_mismatch = "..."` given: cycle mismatch is a warning */
+    int want_kopp;          /* cp from Kopp-Neumann additivity over kopp_from (resolved in check) */
+    int n_kopp;
+    char kopp_from[PXD_KOPP_MAX][PXD_RAW_MAX]; /* component formulas as written, sorted */
+    double kopp_nu[PXD_KOPP_MAX];
 } pxd_entry;
 
 typedef struct pxd_exclude {

@@ -322,8 +322,16 @@ size_t px_data_list_write(const px_db *db, const char *element, FILE *out)
         char where[300];
         if (sp->file) snprintf(where, sizeof where, "%s:%d", sp->file, sp->line);
         else snprintf(where, sizeof where, "(built in)");
+        /* the temperature basis: [held at 25 C], [estimated: method], [no Cp] */
+        char basis[96] = "";
+        if (sp->tbasis == PX_TBASIS_ESTIMATED)
+            snprintf(basis, sizeof basis, " [estimated: %s]", sp->tmethod);
+        else if (sp->tbasis == PX_TBASIS_HELD)
+            snprintf(basis, sizeof basis, " [held at 25 C]");
+        else if (sp->tbasis == PX_TBASIS_NO_CP)
+            snprintf(basis, sizeof basis, " [no Cp: taken as 0]");
         fprintf(out, "%-24s %-5s %-22s%s %s  %s%s\n", sp->f.text, model_name(sp->model), val, unc, where,
-                sp->source ? sp->source : "", sp->estimated ? " [HKF estimated]" : "");
+                sp->source ? sp->source : "", basis);
         k++;
     }
     return k;

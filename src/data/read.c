@@ -45,8 +45,13 @@ static const char *const species_fields[] = {
     "known_mismatch", NULL};
 /* fields that belong to one model only */
 static const char *const cp_only[] = {"cp", "V", NULL};
-static const char *const hkf_only[] = {"hkf", "estimated", "estimate", NULL};
 static const char *const logk_only[] = {"reaction", "logK", "dH", "logK_T", NULL};
+/* HKF fields the other models may not carry (logk and cp have their own 'estimate') */
+static const char *const hkf_fields[] = {"hkf", "estimated", NULL};
+/* temperature-estimation methods of a logk species (docs/thermo.md) */
+#define LOGK_METHOD_ISOCOULOMBIC "isocoulombic"
+#define LOGK_METHOD_MAX 32
+#define CP_METHOD_KOPP "kopp" /* Kopp-Neumann additivity of a solid's Cp */
 static const char *const ghs[] = {"G", "H", "S", NULL};
 
 static int in_list(const char *const *list, const char *s)
@@ -264,10 +269,70 @@ static void require_num(ctx *c, int t, const char *key, double factor, double *o
     if (r == 0) REPORT(c, PX_DATA_ERROR, key, "missing required field '%s' (model '%s')", key, model);
 }
 
+/* cp estimate = { Cp = "kopp", from = { ["NiO(s)"] = 1, ... } } (docs/element-files.md);
+ * returns 1 if a valid estimate was read */
+static int read_cp_estimate(ctx *c, int t, pxd_entry *e)
+{
+    int re = get_table(c, t, "estimate", "estimate");
+    if (re != 1) return 0;
+    lua_State *L = c->L;
+    int p = lua_gettop(L);
+    static const char *const k[] = {"Cp", "from", NULL};
+    check_keys(c, p, k, "estimate");
+    int ok = 1;
+    char method[16];
+    int rm = get_str(c, p, "Cp", "estimate.Cp", method, sizeof method);
+    if (rm == 0) {
+        REPORT(c, PX_DATA_ERROR, "estimate.Cp", "name the method: estimate = { Cp = \"%s\", from = {...} }",
+               CP_METHOD_KOPP);
+        ok = 0;
+    } else if (rm == 1 && strcmp(method, CP_METHOD_KOPP) != 0) {
+        REPORT(c, PX_DATA_ERROR, "estimate.Cp", "unknown estimation method '%s' (model 'cp' knows \"%s\")",
+               method, CP_METHOD_KOPP);
+        ok = 0;
+    } else if (rm < 0) {
+        ok = 0;
+    }
+    int rf = get_table(c, p, "from", "estimate.from");
+    if (rf == 1) {
+        int q = lua_gettop(L);
+        lua_pushnil(L);
+        while (lua_next(L, q)) {
+            if (lua_type(L, -2) != LUA_TSTRING || lua_type(L, -1) != LUA_TNUMBER ||
+                !(lua_tonumber(L, -1) > 0) || !isfinite(lua_tonumber(L, -1)) ||
+                lua_rawlen(L, -2) >= PXD_RAW_MAX) {
+                REPORT(c, PX_DATA_ERROR, "estimate.from",
+                       "expected { [\"formula\"] = amount > 0, ... }, e.g. { [\"NiO(s)\"] = 1 }");
+                ok = 0;
+            } else if (e->n_kopp == PXD_KOPP_MAX) {
+                REPORT(c, PX_DATA_ERROR, "estimate.from", "at most %d components", PXD_KOPP_MAX);
+                ok = 0;
+            } else {
+                /* insert sorted by formula text: the sum does not depend on table order */
+                const char *name = lua_tostring(L, -2);
+                int i = e->n_kopp++;
+                while (i > 0 && strcmp(e->kopp_from[i - 1], name) > 0) {
+                    memcpy(e->kopp_from[i], e->kopp_from[i - 1], PXD_RAW_MAX);
+                    e->kopp_nu[i] = e->kopp_nu[i - 1];
+                    i--;
+                }
+                snprintf(e->kopp_from[i], PXD_RAW_MAX, "%s", name);
+                e->kopp_nu[i] = lua_tonumber(L, -1);
+            }
+            lua_pop(L, 1);
+        }
+        lua_pop(L, 1);
+    } else if (rf < 0) {
+        ok = 0;
+    }
+    lua_pop(L, 1);
+    return ok;
+}
+
 static void read_cp(ctx *c, int t, pxd_entry *e, double eu, double su)
 {
     px_species *sp = &e->sp;
-    forbid(c, t, hkf_only, "cp");
+    forbid(c, t, hkf_fields, "cp");
     forbid(c, t, logk_only, "cp");
     require_num(c, t, "G", eu, &sp->dGf, &e->has_G, "cp");
     require_num(c, t, "H", eu, &sp->dHf, &e->has_H, "cp");
@@ -284,9 +349,17 @@ static void read_cp(ctx *c, int t, pxd_entry *e, double eu, double su)
         get_num(c, p, "d", "cp.d", 1.0, &sp->cp.d);
         get_num(c, p, "e", "cp.e", 1.0, &sp->cp.e);
         lua_pop(c->L, 1);
-    } else if (r == 0) {
+    }
+    int has_estimate = rawfield(c->L, t, "estimate") != LUA_TNIL;
+    lua_pop(c->L, 1);
+    e->want_kopp = read_cp_estimate(c, t, e);
+    if (r == 1 && has_estimate) {
+        REPORT(c, PX_DATA_ERROR, "estimate", "give either a published 'cp' or an estimate, not both");
+        e->want_kopp = 0;
+    } else if (r == 0 && !has_estimate) {
         REPORT(c, PX_DATA_WARNING, "cp",
-               "no heat capacity given: Cp is taken as 0 (G(T) then follows S alone)");
+               "no heat capacity given: Cp is taken as 0 (G(T) then follows S alone; "
+               "or estimate = { Cp = \"%s\", from = {...} })", CP_METHOD_KOPP);
     }
     double V;
     if (get_num(c, t, "V", "V", 1.0, &V) == 1) {
@@ -353,7 +426,7 @@ static void read_logk(ctx *c, int t, pxd_entry *e, double eu)
     px_species *sp = &e->sp;
     static const char *const cp_table[] = {"cp", NULL};
     forbid(c, t, cp_table, "logk");
-    forbid(c, t, hkf_only, "logk");
+    forbid(c, t, hkf_fields, "logk");
     double V;
     if (get_num(c, t, "V", "V", 1.0, &V) == 1) { /* kept in cp.V for reference */
         sp->cp.V = V * PXD_CM3_TO_J_PER_BAR;
@@ -400,6 +473,27 @@ static void read_logk(ctx *c, int t, pxd_entry *e, double eu)
         REPORT(c, PX_DATA_ERROR, "logK", "missing 'logK' (log K at 25 C) or 'logK_T'");
     if (rt == 1 && !isnan(sp->logk.dH))
         REPORT(c, PX_DATA_WARNING, "dH", "dH is not used when logK_T is given");
+    char method[LOGK_METHOD_MAX];
+    int ty = rawfield(c->L, t, "estimate");
+    lua_pop(c->L, 1);
+    if (ty == LUA_TTABLE) {
+        REPORT(c, PX_DATA_ERROR, "estimate",
+               "a logk species names its estimation method: estimate = \"%s\" "
+               "(estimate = { Cp = ..., V = ... } is for model 'hkf')",
+               LOGK_METHOD_ISOCOULOMBIC);
+    } else if (get_str(c, t, "estimate", "estimate", method, sizeof method) == 1) {
+        if (strcmp(method, LOGK_METHOD_ISOCOULOMBIC) != 0)
+            REPORT(c, PX_DATA_ERROR, "estimate",
+                   "unknown estimation method '%s' (model 'logk' knows \"%s\")", method,
+                   LOGK_METHOD_ISOCOULOMBIC);
+        else if (rt == 1 || !isnan(sp->logk.dH))
+            REPORT(c, PX_DATA_ERROR, "estimate",
+                   "an estimate stands in for missing temperature data: this species has %s; "
+                   "drop the estimate",
+                   rt == 1 ? "logK_T" : "dH");
+        else
+            sp->logk.estimate = PX_LOGK_EST_ISOCOULOMBIC;
+    }
 }
 
 /* uncertainty = { G, H, S, logK }: the source's +-, in the species' units */

@@ -205,6 +205,11 @@ static void push_species(lua_State *L, const px_species *sp, long index)
         lua_pushstring(L, sp->logk.reaction);
         lua_setfield(L, -2, "reaction");
         setnum(L, "logK25", sp->logk.logK25);
+        setnum(L, "dH", sp->logk.dH); /* J/mol, absent if not given */
+        if (sp->logk.analytic) {
+            lua_pushboolean(L, 1);
+            lua_setfield(L, -2, "logK_T");
+        }
     }
     lua_pushstring(L, sp->source ? sp->source : "");
     lua_setfield(L, -2, "source");
@@ -218,6 +223,13 @@ static void push_species(lua_State *L, const px_species *sp, long index)
     lua_setfield(L, -2, "quality");
     lua_pushboolean(L, sp->estimated);
     lua_setfield(L, -2, "estimated");
+    /* temperature basis: measured, estimated (by basis_method), held, no Cp */
+    lua_pushstring(L, px_tbasis_name(sp->tbasis));
+    lua_setfield(L, -2, "basis");
+    if (sp->tmethod[0]) {
+        lua_pushstring(L, sp->tmethod);
+        lua_setfield(L, -2, "basis_method");
+    }
     setnum(L, "Tmin", sp->Tmin);
     setnum(L, "Tmax", sp->Tmax);
     /* the source's +- (internal units), only the ones given */
@@ -378,6 +390,64 @@ static int db_reaction(lua_State *L)
     return 1;
 }
 
+/* db:isocoulombic(reaction, logK25, T [, P]) -> log K, n | nil, message: the
+ * one-term isocoulombic estimate of a reaction's log K at T from its 25 C
+ * value (px_isocoulombic_logK); n = water ionisations added. */
+static int db_isocoulombic(lua_State *L)
+{
+    ldb *u = checkdb(L);
+    const char *text = luaL_checkstring(L, 2);
+    double logK25 = luaL_checknumber(L, 3);
+    double T, P;
+    if (checkTP(L, 4, 5, &T, &P)) return 2;
+    px_reaction r;
+    char msg[PX_MSG];
+    if (px_reaction_parse_balanced(text, &r, msg, sizeof msg) != PX_OK)
+        return luaL_error(L, "isocoulombic: reaction '%s': %s", text, msg);
+    double logK, n;
+    int st = px_isocoulombic_logK(u->ws, u->db, &r, logK25, T, P, &logK);
+    if (st != PX_OK) {
+        luaL_pushfail(L);
+        lua_pushfstring(L, "%s: %s", px_strerror(st), px_thermo_ws_error(u->ws));
+        return 2;
+    }
+    px_reaction_isocoulombic_n(&r, &n);
+    lua_pushnumber(L, logK);
+    lua_pushnumber(L, n);
+    return 2;
+}
+
+/* db:hkf_reestimate(formula, T [, P]) -> G_estimated, G_record | nil, message:
+ * an HKF species' G at T from parameters re-derived by the Shock and
+ * Helgeson 1988 correlations (px_hkf_estimate) from its own S and its Cp and
+ * V at 25 C (papers' Born constants), for validating the correlations. */
+static int db_hkf_reestimate(lua_State *L)
+{
+    ldb *u = checkdb(L);
+    const px_species *sp = checkspecies(L, u, 2, NULL);
+    if (sp->model != PX_MODEL_HKF) return luaL_error(L, "hkf_reestimate: %s is not an HKF species", sp->f.text);
+    double T, P;
+    if (checkTP(L, 3, 4, &T, &P)) return 2;
+    px_water_state w25;
+    px_hkf_papers_water_25C(&w25);
+    px_thermo_props p25;
+    int st = px_hkf_props(&sp->hkf, sp->f.charge, sp->dGf, sp->dHf, sp->S, &w25, &w25, 0, &p25);
+    px_species est = *sp; /* borrows the strings of sp: not added to any db */
+    memset(&est.hkf, 0, sizeof est.hkf);
+    if (st == PX_OK) st = px_hkf_estimate(&est, p25.Cp, p25.V * 10.0 /* J/bar -> cm3/mol */);
+    double Ge = NAN, Gr = NAN;
+    if (st == PX_OK) st = px_thermo_species_G(u->ws, u->db, &est, T, P, &Ge);
+    if (st == PX_OK) st = px_thermo_species_G(u->ws, u->db, sp, T, P, &Gr);
+    if (st != PX_OK) {
+        luaL_pushfail(L);
+        lua_pushfstring(L, "%s: %s: %s", sp->f.text, px_strerror(st), px_thermo_ws_error(u->ws));
+        return 2;
+    }
+    lua_pushnumber(L, Ge);
+    lua_pushnumber(L, Gr);
+    return 2;
+}
+
 /* db:list_text([element]) -> the `phlox list` text */
 static int db_list_text(lua_State *L)
 {
@@ -509,6 +579,7 @@ static void push_limits(lua_State *L)
 void px_lua_open_thermo(lua_State *L)
 {
     static const luaL_Reg methods[] = {
+        {"isocoulombic", db_isocoulombic}, {"hkf_reestimate", db_hkf_reestimate},
         {"load", db_load},       {"species", db_species}, {"count", db_count},
         {"remove", db_remove},   {"props", db_props},     {"reaction", db_reaction},
         {"list_text", db_list_text}, {NULL, NULL}};

@@ -127,6 +127,9 @@ static int make_copy(const px_species *src, px_species *dst)
         return PX_EPARSE;
     *dst = *src;
     dst->f = f;
+    const char *method = "";
+    dst->tbasis = px_species_tbasis(dst, &method);
+    snprintf(dst->tmethod, sizeof dst->tmethod, "%s", method);
     dst->source = dupstr(src->source ? src->source : "");
     dst->file = src->file ? dupstr(src->file) : NULL;
     if (!dst->source || (src->file && !dst->file)) {
@@ -231,6 +234,54 @@ const px_species *px_db_find(const px_db *db, const char *formula)
 {
     long i = px_db_index(db, formula);
     return i >= 0 ? &db->sp[i] : NULL;
+}
+
+px_tbasis px_species_tbasis(const px_species *sp, const char **method)
+{
+    const char *m = "";
+    px_tbasis b = PX_TBASIS_MEASURED;
+    switch (sp->model) {
+    case PX_MODEL_LOGK:
+        if (sp->logk.analytic || isfinite(sp->logk.dH)) {
+            b = PX_TBASIS_MEASURED;
+        } else if (sp->logk.estimate == PX_LOGK_EST_ISOCOULOMBIC) {
+            b = PX_TBASIS_ESTIMATED;
+            m = PX_METHOD_ISOCOULOMBIC;
+        } else {
+            b = PX_TBASIS_HELD;
+        }
+        break;
+    case PX_MODEL_HKF:
+        if (sp->estimated) {
+            b = PX_TBASIS_ESTIMATED;
+            m = PX_METHOD_HKF_SH88;
+        }
+        break;
+    case PX_MODEL_CP:
+        if (sp->cp.estimate == PX_CP_EST_KOPP) {
+            b = PX_TBASIS_ESTIMATED;
+            m = PX_METHOD_KOPP;
+        } else if (sp->f.state != PX_STATE_E && sp->cp.a == 0 && sp->cp.b == 0 && sp->cp.c == 0 &&
+            sp->cp.d == 0 && sp->cp.e == 0)
+            b = PX_TBASIS_NO_CP;
+        break;
+    case PX_MODEL_WATER:
+        break;
+    }
+    if (method)
+        *method = m;
+    return b;
+}
+
+const char *px_tbasis_name(px_tbasis b)
+{
+    switch (b) {
+    case PX_TBASIS_MEASURED: return "measured";
+    case PX_TBASIS_ESTIMATED: return "estimated";
+    case PX_TBASIS_HELD: return "held";
+    case PX_TBASIS_NO_CP: return "no Cp";
+    }
+    return "?";
 }
 
 void px_species_init(px_species *sp)

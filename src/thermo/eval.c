@@ -198,6 +198,8 @@ static void logk_reaction(const px_logk_params *lk, double T, double *dG, double
 /* ---- per-species evaluation ---- */
 static int species_G(px_thermo_ws *ws, const px_db *db, const px_species *sp, double T,
                      double P, double *G);
+static int species_props(px_thermo_ws *ws, const px_db *db, const px_species *sp, double T,
+                         double P, px_thermo_props *out);
 
 static int cache_prepare(px_thermo_ws *ws, const px_db *db, double T, double P)
 {
@@ -239,6 +241,119 @@ static int electron_G(px_thermo_ws *ws, const px_db *db, double T, double P, dou
      * and G(H^+) = 0 by the conventional ionic standard state */
     *G = 0.5 * g;
     return PX_OK;
+}
+
+/* ---- the isocoulombic estimate (Gu, Gammons and Bloom 1994, GCA 58, 3545) ---- */
+
+int px_reaction_isocoulombic_n(const px_reaction *r, double *n)
+{
+    if (!r || !n)
+        return PX_EINVAL;
+    double pos = 0; /* total positive ionic charge, products minus reactants */
+    for (int i = 0; i < r->n; i++) {
+        if (r->sp[i].state == PX_STATE_E)
+            pos -= r->nu[i]; /* e- = 1/2 H2(g) - H^+ */
+        else if (r->sp[i].charge > 0)
+            pos += r->nu[i] * r->sp[i].charge;
+    }
+    /* H2O(l) = H^+ + OH^- adds one positive charge per unit: R + n W balances */
+    *n = pos == 0 ? 0 : -pos;
+    return PX_OK;
+}
+
+/* dG (and with full, dH, dS, dCp in p) of H2O(l) = H^+ + OH^- at (T, P), and
+ * dG at Tr, Pr from the three species' dfG */
+static int water_ionisation(px_thermo_ws *ws, const px_db *db, const char *who, double T,
+                            double P, int full, px_thermo_props *p, double *dGref)
+{
+    static const char *const names[3] = {"H^+", "OH^-", "H2O(l)"};
+    static const double nu[3] = {1, 1, -1};
+    memset(p, 0, sizeof *p);
+    *dGref = 0;
+    for (int i = 0; i < 3; i++) {
+        const px_species *s = db ? px_db_find(db, names[i]) : NULL;
+        if (!s)
+            return werr(ws, PX_ENOTFOUND,
+                        "%s: the isocoulombic estimate needs %s in the database "
+                        "(stdlib/elements/HO.lua)",
+                        who, names[i]);
+        if (!isfinite(s->dGf))
+            return werr(ws, PX_EDATA,
+                        "%s: the isocoulombic estimate needs dfG of %s at 25 C (it is "
+                        "reaction-defined)",
+                        who, names[i]);
+        *dGref += nu[i] * s->dGf;
+        int st;
+        if (full) {
+            px_thermo_props q;
+            st = species_props(ws, db, s, T, P, &q);
+            p->H += nu[i] * q.H;
+            p->S += nu[i] * q.S;
+            p->Cp += nu[i] * q.Cp;
+            p->V += nu[i] * q.V;
+            p->G += nu[i] * q.G;
+        } else {
+            double g = 0;
+            st = species_G(ws, db, s, T, P, &g);
+            p->G += nu[i] * g;
+        }
+        if (st)
+            return st;
+    }
+    return PX_OK;
+}
+
+/* reaction dG, dH, dS, dCp by the isocoulombic estimate (px_isocoulombic_logK) */
+static int iso_reaction(px_thermo_ws *ws, const px_db *db, const char *who,
+                        const px_reaction *r, double logK25, double T, double P, int full,
+                        double *dG, double *dH, double *dS, double *dCp, double *dV)
+{
+    *dV = 0;
+    double n;
+    px_reaction_isocoulombic_n(r, &n);
+    double dG0 = -PX_R * PX_TR * PX_LN10 * logK25;
+    if (n == 0) { /* already isocoulombic: dG constant, dS = dCp = 0 */
+        *dG = *dH = dG0;
+        *dS = *dCp = 0;
+        return PX_OK;
+    }
+    px_thermo_props w;
+    double wref;
+    int st = water_ionisation(ws, db, who, T, P, full, &w, &wref);
+    if (st)
+        return st;
+    /* R' = R + n W has dG(R') = dH(R') = dG_R(Tr) + n dG_W(Tr), dS(R') = dCp(R') = 0 */
+    double iso = dG0 + n * wref;
+    *dG = iso - n * w.G;
+    *dH = iso - n * w.H;
+    *dS = -n * w.S;
+    *dCp = -n * w.Cp;
+    *dV = -n * w.V; /* dG(R') is taken independent of P too: R follows W's volume */
+    return PX_OK;
+}
+
+int px_isocoulombic_logK(px_thermo_ws *ws, const px_db *db, const px_reaction *r, double logK25,
+                         double T, double P, double *logK)
+{
+    if (!ws || !r || !logK)
+        return PX_EINVAL;
+    ws->err[0] = '\0';
+    ws->depth = 0;
+    ws->cdb = NULL;
+    if (!(T > 0) || !isfinite(P) || !isfinite(logK25))
+        return werr(ws, PX_EINVAL, "T, P and log K must be finite, T positive");
+    double dG, dH, dS, dCp, dV;
+    int st = iso_reaction(ws, db, "isocoulombic", r, logK25, T, P, 0, &dG, &dH, &dS, &dCp, &dV);
+    if (st)
+        return st;
+    *logK = -dG / (PX_R * T * PX_LN10);
+    return PX_OK;
+}
+
+static int is_iso(const px_species *sp)
+{
+    return sp->logk.estimate == PX_LOGK_EST_ISOCOULOMBIC && !sp->logk.analytic &&
+           !isfinite(sp->logk.dH);
 }
 
 static int logk_find_self(px_thermo_ws *ws, const px_species *sp, px_reaction *r, int *self)
@@ -358,11 +473,19 @@ static int logk_G(px_thermo_ws *ws, const px_db *db, const px_species *sp, doubl
         }
         sum += lc->r.nu[i] * g;
     }
+    if (st) {
+        ws->depth--;
+        return st;
+    }
+    double dG, dH, dS, dCp, dV;
+    if (is_iso(sp))
+        st = iso_reaction(ws, db, sp->f.text, &lc->r, sp->logk.logK25, T, P, 0, &dG, &dH, &dS, &dCp,
+                          &dV);
+    else
+        logk_reaction(&sp->logk, T, &dG, &dH, &dS, &dCp);
     ws->depth--;
     if (st)
         return st;
-    double dG, dH, dS, dCp;
-    logk_reaction(&sp->logk, T, &dG, &dH, &dS, &dCp);
     *G = (dG - sum) / lc->r.nu[lc->self];
     return PX_OK;
 }
@@ -455,8 +578,6 @@ int px_thermo_eval_all(px_thermo_ws *ws, const px_db *db, double T, double P, do
 }
 
 /* ---- full properties (not cached) ---- */
-static int species_props(px_thermo_ws *ws, const px_db *db, const px_species *sp, double T,
-                         double P, px_thermo_props *out);
 
 static int electron_props(px_thermo_ws *ws, const px_db *db, double T, double P,
                           px_thermo_props *out)
@@ -510,17 +631,24 @@ static int logk_props(px_thermo_ws *ws, const px_db *db, const px_species *sp, d
         sum.Cp += r.nu[i] * p.Cp;
         sum.V += r.nu[i] * p.V;
     }
+    if (st) {
+        ws->depth--;
+        return st;
+    }
+    double dG, dH, dS, dCp, dV = 0.0; /* other log K models: independent of P, dV = 0 */
+    if (is_iso(sp))
+        st = iso_reaction(ws, db, sp->f.text, &r, sp->logk.logK25, T, P, 1, &dG, &dH, &dS, &dCp, &dV);
+    else
+        logk_reaction(&sp->logk, T, &dG, &dH, &dS, &dCp);
     ws->depth--;
     if (st)
         return st;
-    double dG, dH, dS, dCp;
-    logk_reaction(&sp->logk, T, &dG, &dH, &dS, &dCp);
     double nu = r.nu[self];
     out->G = (dG - sum.G) / nu;
     out->H = (dH - sum.H) / nu;
     out->S = (dS - sum.S) / nu;
     out->Cp = (dCp - sum.Cp) / nu;
-    out->V = (0.0 - sum.V) / nu; /* log K taken independent of P: dV of reaction = 0 */
+    out->V = (dV - sum.V) / nu;
     return PX_OK;
 }
 

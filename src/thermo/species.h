@@ -55,22 +55,46 @@ typedef struct px_hkf_params { /* SI: the papers' values x PX_CAL, unscaled */
     double omega; /* J/mol, conventional Born coefficient at Tr, Pr */
 } px_hkf_params;
 
+/* Where a Cp polynomial comes from when it is not a published fit. */
+typedef enum px_cp_estimate {
+    PX_CP_EST_NONE = 0, /* a published Cp function (or none: Cp = 0) */
+    PX_CP_EST_KOPP      /* Kopp-Neumann additivity (px_cp_kopp) */
+} px_cp_estimate;
+
 /* Cp = a + b T + c / T^2 + d / sqrt(T) + e T^2  [J/(mol K)], valid to Tmax. */
 typedef struct px_cp_params {
     double a, b, c, d, e;
     double V; /* molar volume, J/bar (= 0.1 x cm3/mol); 0 if unknown */
+    px_cp_estimate estimate;
 } px_cp_params;
+
+/* How log K of a formation reaction depends on T when no measured function
+ * is given (docs/thermo.md, "Temperature estimates"). */
+typedef enum px_logk_estimate {
+    PX_LOGK_EST_NONE = 0,    /* measured dH or logK_T, or else held at 25 C */
+    PX_LOGK_EST_ISOCOULOMBIC /* one-term isocoulombic extrapolation (Gu et al. 1994) */
+} px_logk_estimate;
 
 /* log K of the formation reaction (the species is the reaction's product):
  *   analytic: log K = k[0] + k[1] T + k[2]/T + k[3] log10 T + k[4]/T^2
- *   otherwise: van 't Hoff from logK25 and dH (J/mol), constant dH. */
+ *   otherwise: van 't Hoff from logK25 and dH (J/mol), constant dH;
+ *   estimate = ISOCOULOMBIC (no dH, not analytic): px_isocoulombic_logK. */
 typedef struct px_logk_params {
     char reaction[256]; /* e.g. "Zn^2+ + Cl^- = ZnCl^+" */
     double logK25;
     double dH; /* J/mol; NAN if unknown (then log K is held constant) */
     int analytic;
     double k[5];
+    px_logk_estimate estimate;
 } px_logk_params;
+
+/* Where a species' temperature dependence comes from (px_species_tbasis). */
+typedef enum px_tbasis {
+    PX_TBASIS_MEASURED = 0, /* published data: HKF set, Cp function, dH, log K(T) */
+    PX_TBASIS_ESTIMATED,    /* a named estimation method (px_species.tmethod) */
+    PX_TBASIS_HELD,         /* log K with no temperature data: held at 25 C */
+    PX_TBASIS_NO_CP         /* solid/liquid/gas without Cp: Cp taken as 0 */
+} px_tbasis;
 
 /* Published uncertainties (the source's +-), internal units; NAN where the
  * file gives none.  Kept for propagating boundary uncertainties. */
@@ -92,6 +116,8 @@ typedef struct px_species {
     px_uncertainty unc; /* +- of G, H, S, log K; NAN if not given */
     double Tmin, Tmax; /* declared valid range, K */
     int estimated;     /* HKF parameters from correlations, not regressed */
+    px_tbasis tbasis;  /* set by px_db_add from the fields above (px_species_tbasis) */
+    char tmethod[64];  /* the estimation method's name when tbasis is ESTIMATED, else "" */
     char quality[16];  /* "high", "medium", "low" or "" */
     char *source;      /* owned, never NULL once loaded */
     char *file;        /* definition file (owned), NULL for built-ins */

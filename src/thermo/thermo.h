@@ -115,6 +115,19 @@ int px_db_check_list(const px_db *db, const char *what, const char *const *list,
  * stdlib/elements/HO.lua. */
 int px_db_add_builtins(px_db *db);
 
+/* Where sp's temperature dependence comes from, derived from its fields:
+ * LOGK with dH or logK_T: measured; LOGK with an isocoulombic estimate:
+ * estimated; other LOGK: held at 25 C; HKF with estimated = 1: estimated (SH88
+ * correlations); CP with every Cp coefficient 0: no Cp; else measured.
+ * *method (may be NULL) receives the method's name ("" unless estimated).
+ * px_db_add stores the result in the copy's tbasis and tmethod. */
+#define PX_METHOD_ISOCOULOMBIC "isocoulombic (Gu et al. 1994)"
+#define PX_METHOD_HKF_SH88 "HKF correlations (Shock and Helgeson 1988)"
+#define PX_METHOD_KOPP "Kopp-Neumann additivity (Kopp 1865)"
+px_tbasis px_species_tbasis(const px_species *sp, const char **method);
+/* "measured", "estimated", "held", "no Cp". */
+const char *px_tbasis_name(px_tbasis b);
+
 /* Initialise a record: zeros, NAN for dGf/dHf/S, logk.dH NAN, Tmin/Tmax
  * 0..INFINITY, source NULL.  For code that builds records by hand. */
 void px_species_init(px_species *sp);
@@ -213,11 +226,44 @@ int px_reaction_props(px_thermo_ws *ws, const px_db *db, const px_reaction *r,
 int px_reaction_logK(px_thermo_ws *ws, const px_db *db, const px_reaction *r,
                      double T, double P, double *logK);
 
+/* ------------------------------------------- isocoulombic estimate */
+
+/* The one-term isocoulombic extrapolation (Lindsay 1980; Gu, Gammons and
+ * Bloom 1994, GCA 58, 3545; from memory, docs/thermo.md).  The reaction R is
+ * combined with n times the water ionisation W: H2O(l) = H^+ + OH^- so that
+ * R' = R + n W carries the same total positive (and so negative) ionic charge
+ * on both sides; for R' dCp ~ 0 and dS ~ 0, so dG(R') is constant (log K(R')
+ * T = const, the "one-term" equation), hence
+ *   dG_R(T,P) = dG_R(Tr) + n [dG_W(Tr,Pr) - dG_W(T,P)], with dG_W from
+ * phlox's own H2O(l), H^+ and OH^-.  n = -sum over charged species with z > 0
+ * of nu z (products positive); an electron counts as -1 H^+ (e- = 1/2 H2(g) -
+ * H^+).  PX_OK always (n is an integer for integer coefficients). */
+int px_reaction_isocoulombic_n(const px_reaction *r, double *n);
+/* log K at (T, P) of reaction r from its log K at 25 C by that method; needs
+ * H^+, OH^- and H2O(l) in db (PX_ENOTFOUND otherwise, message in ws).  Also
+ * dG_W at Tr, Pr is taken from their dfG (PX_EDATA if one is not finite). */
+int px_isocoulombic_logK(px_thermo_ws *ws, const px_db *db, const px_reaction *r, double logK25,
+                         double T, double P, double *logK);
+
 /* Default pressure: P = max(1 bar, psat(T)): 1 bar up to the normal boiling
  * point (99.61 C), the saturation pressure above (the usual "1 bar to 100 C,
  * psat above" of the HKF tables, made continuous: at 100 C and 1 bar water
  * would be steam).  PX_ERANGE below 273.15 K or above 623.15 K. */
 int px_thermo_default_pressure(double T, double *P);
+
+/* Kopp's atomic heat capacity of element z in a solid, J/(mol K) (Kopp 1865,
+ * Kopp's rule; docs/thermo.md): C 7.53, H 9.62, B 11.30, Si 15.90, O 16.74,
+ * F 20.92, P and S 22.59, every other element 25.94 (the Dulong-Petit value
+ * Kopp used); NAN for z outside 1..118. */
+double px_kopp_atomic_cp(int z);
+/* Kopp-Neumann additivity: the Cp polynomial of solid f as the sum of n
+ * components (formulas comp[i] with amounts nu[i] > 0 and published Cp
+ * polynomials comp_cp[i]) plus Kopp's atomic heat capacities for the atoms
+ * f holds beyond them.  out->a..e are set (V and the estimate flag are left
+ * to the caller).  PX_EDATA with a reason in msg (may be NULL) if the
+ * components hold more of an element than f, or f is charged. */
+int px_cp_kopp(const px_formula *f, int n, const px_formula *comp, const double *nu,
+               const px_cp_params *comp_cp, px_cp_params *out, char *msg, size_t msgsize);
 
 /* CP model alone (solids, liquids, gases), exact integrals of
  * Cp = a + bT + c/T^2 + d/sqrt(T) + eT^2 from Tr; gases have no pressure

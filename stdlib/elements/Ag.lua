@@ -34,13 +34,13 @@ return {
     {
       formula = "AgOH(aq)", model = "logk",
       reaction = "Ag^+ + H2O(l) = AgOH(aq) + H^+",
-      logK = -12.0,
+      logK = -12.0, estimate = "isocoulombic",
       source = BM76, quality = "medium",
     },
     {
       formula = "Ag(OH)2^-", model = "logk",
       reaction = "Ag^+ + 2 H2O(l) = Ag(OH)2^- + 2 H^+",
-      logK = -24.0,
+      logK = -24.0, estimate = "isocoulombic",
       source = BM76, quality = "medium",
     },
     {

@@ -47,7 +47,7 @@ return {
     {
       formula = "Al(OH)2^+", model = "logk",
       reaction = "Al^3+ + 2 H2O(l) = Al(OH)2^+ + 2 H^+",
-      logK = -9.3,
+      logK = -9.3, estimate = "isocoulombic",
       source = BM76,
       quality = "medium",
       note = "no reaction enthalpy recalled; Nordstrom et al. 1990 use -10.1 (spread reflects the difficulty of measuring the intermediate species).",
@@ -55,7 +55,7 @@ return {
     {
       formula = "Al(OH)3(aq)", model = "logk",
       reaction = "Al^3+ + 3 H2O(l) = Al(OH)3(aq) + 3 H^+",
-      logK = -15.0,
+      logK = -15.0, estimate = "isocoulombic",
       source = BM76,
       quality = "low",
       note = "B&M give this constant with a large uncertainty; Nordstrom et al. 1990 use -16.9. No reaction enthalpy recalled.",
@@ -71,21 +71,21 @@ return {
     {
       formula = "Al2(OH)2^4+", model = "logk",
       reaction = "2 Al^3+ + 2 H2O(l) = Al2(OH)2^4+ + 2 H^+",
-      logK = -7.7,
+      logK = -7.7, estimate = "isocoulombic",
       source = BM76,
       quality = "medium",
     },
     {
       formula = "Al3(OH)4^5+", model = "logk",
       reaction = "3 Al^3+ + 4 H2O(l) = Al3(OH)4^5+ + 4 H^+",
-      logK = -13.94,
+      logK = -13.94, estimate = "isocoulombic",
       source = BM76,
       quality = "medium",
     },
     {
       formula = "Al13O4(OH)24^7+", model = "logk",
       reaction = "13 Al^3+ + 28 H2O(l) = Al13O4(OH)24^7+ + 32 H^+",
-      logK = -98.73,
+      logK = -98.73, estimate = "isocoulombic",
       source = BM76,
       quality = "medium",
       note = "the Keggin-type tridecamer; forms slowly on partial neutralisation of concentrated Al solutions.",

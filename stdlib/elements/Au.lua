@@ -37,30 +37,30 @@ return {
     {
       formula = "Au^+", model = "logk",
       reaction = "Au(s) + H^+ = Au^+ + 0.5 H2(g)",
-      logK = -28.601,
+      logK = -28.601, estimate = "isocoulombic",
       source = "derived here from E0(Au^+/Au) = 1.692 V, " .. BPJ,
       quality = "medium",
       note = "log K = -F E0/(RT ln 10).  Au^+ disproportionates (3 Au^+ = 2 Au + Au^3+ is " ..
-             "favoured by 0.29 V); it matters only in complexes.  No dH recalled: held at 25 C.",
+             "favoured by 0.29 V); it matters only in complexes.  No dH recalled: temperature by the isocoulombic estimate.",
     },
     {
       formula = "Au^3+", model = "logk",
       reaction = "Au(s) + 3 H^+ = Au^3+ + 1.5 H2(g)",
-      logK = -75.964,
+      logK = -75.964, estimate = "isocoulombic",
       source = "derived here from E0(Au^3+/Au) = 1.498 V, " .. BPJ,
       quality = "medium",
       note = "with Au^+ it gives E0(Au^3+/Au^+) = 1.401 V, the value printed beside it in the " ..
-             "same table.  No dH recalled: held at 25 C.",
+             "same table.  No dH recalled: temperature by the isocoulombic estimate.",
     },
     {
       formula = "Au(OH)3(s)", model = "logk",
       reaction = "Au(s) + 3 H2O(l) = Au(OH)3(s) + 1.5 H2(g)",
-      logK = -73.530,
+      logK = -73.530, estimate = "isocoulombic",
       source = "derived here from E0(Au(OH)3 + 3 H^+ + 3 e- = Au + 3 H2O) = 1.45 V, " .. BPJ,
       quality = "low",
       note = "Hydrated gold(III) oxide; Pourbaix 1966 prints 1.457 V for the same couple " ..
              "(recalled). Two decimals in the source: +-5 mV is 0.25 in this log K.  No dH " ..
-             "recalled: held at 25 C.",
+             "recalled: temperature by the isocoulombic estimate.",
     },
   },
 }

@@ -35,9 +35,9 @@ return {
     {
       formula = "BaOH^+", model = "logk",
       reaction = "Ba^2+ + H2O(l) = BaOH^+ + H^+",
-      logK = -13.47,
+      logK = -13.47, estimate = "isocoulombic",
       source = BM, quality = "medium",
-      note = "No dH recalled: held at 25 C.",
+      note = "No dH recalled: temperature by the isocoulombic estimate.",
     },
   },
 }

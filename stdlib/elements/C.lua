@@ -117,23 +117,23 @@ return {
       source = SIEBERT, quality = "medium", note = "dH 2.713 kcal/mol at 25 C" },
     { formula = "NaCO3^-", model = "logk", reaction = "Na^+ + CO3^2- = NaCO3^-", logK = 1.27, dH = 8.91, units = KCAL,
       source = N90, quality = "medium" },
-    { formula = "NaHCO3(aq)", model = "logk", reaction = "Na^+ + HCO3^- = NaHCO3(aq)", logK = -0.25,
+    { formula = "NaHCO3(aq)", model = "logk", reaction = "Na^+ + HCO3^- = NaHCO3(aq)", logK = -0.25, estimate = "isocoulombic",
       source = N90, quality = "medium", note = "dH not recalled" },
-    { formula = "FeHCO3^+", model = "logk", reaction = "Fe^2+ + HCO3^- = FeHCO3^+", logK = 2.0,
+    { formula = "FeHCO3^+", model = "logk", reaction = "Fe^2+ + HCO3^- = FeHCO3^+", logK = 2.0, estimate = "isocoulombic",
       source = COMPILED, quality = "low", note = "dH not recalled" },
-    { formula = "MnHCO3^+", model = "logk", reaction = "Mn^2+ + HCO3^- = MnHCO3^+", logK = 1.95,
+    { formula = "MnHCO3^+", model = "logk", reaction = "Mn^2+ + HCO3^- = MnHCO3^+", logK = 1.95, estimate = "isocoulombic",
       source = COMPILED, quality = "low", note = "dH not recalled" },
-    { formula = "ZnCO3(aq)", model = "logk", reaction = "Zn^2+ + CO3^2- = ZnCO3(aq)", logK = 5.3,
+    { formula = "ZnCO3(aq)", model = "logk", reaction = "Zn^2+ + CO3^2- = ZnCO3(aq)", logK = 5.3, estimate = "isocoulombic",
       source = COMPILED, quality = "low", note = "dH not recalled" },
-    { formula = "ZnHCO3^+", model = "logk", reaction = "Zn^2+ + HCO3^- = ZnHCO3^+", logK = 2.1,
+    { formula = "ZnHCO3^+", model = "logk", reaction = "Zn^2+ + HCO3^- = ZnHCO3^+", logK = 2.1, estimate = "isocoulombic",
       source = COMPILED, quality = "low", note = "dH not recalled" },
-    { formula = "CuCO3(aq)", model = "logk", reaction = "Cu^2+ + CO3^2- = CuCO3(aq)", logK = 6.73,
+    { formula = "CuCO3(aq)", model = "logk", reaction = "Cu^2+ + CO3^2- = CuCO3(aq)", logK = 6.73, estimate = "isocoulombic",
       source = SM, quality = "medium", note = "dH not recalled" },
-    { formula = "Cu(CO3)2^2-", model = "logk", reaction = "Cu^2+ + 2 CO3^2- = Cu(CO3)2^2-", logK = 9.83,
+    { formula = "Cu(CO3)2^2-", model = "logk", reaction = "Cu^2+ + 2 CO3^2- = Cu(CO3)2^2-", logK = 9.83, estimate = "isocoulombic",
       source = SM, quality = "medium", note = "dH not recalled" },
-    { formula = "PbCO3(aq)", model = "logk", reaction = "Pb^2+ + CO3^2- = PbCO3(aq)", logK = 7.24,
+    { formula = "PbCO3(aq)", model = "logk", reaction = "Pb^2+ + CO3^2- = PbCO3(aq)", logK = 7.24, estimate = "isocoulombic",
       source = COMPILED, quality = "low", note = "dH not recalled" },
-    { formula = "Pb(CO3)2^2-", model = "logk", reaction = "Pb^2+ + 2 CO3^2- = Pb(CO3)2^2-", logK = 10.64,
+    { formula = "Pb(CO3)2^2-", model = "logk", reaction = "Pb^2+ + 2 CO3^2- = Pb(CO3)2^2-", logK = 10.64, estimate = "isocoulombic",
       source = COMPILED, quality = "low", note = "dH not recalled" },
 
     -- ---------------------------------------------------------------- carbonate minerals
@@ -177,6 +177,7 @@ return {
     {
       formula = "CdCO3(s,otavite)", model = "cp",
       G = -669.4, H = -750.6, S = 92.5, V = 34.30,
+      estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
       source = NBS .. "; V " .. RH95, quality = "low",
       note = "log Ksp with NBS ions -11.21; Stipp et al. 1992 measured about -12.1 (recalled): NBS value probably too positive. Cp not recalled",
     },
@@ -189,8 +190,9 @@ return {
     {
       formula = "Cu2CO3(OH)2(s,malachite)", model = "cp",
       G = -893.6, H = -1051.4, S = 186.2, V = 54.86,
+      estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
       source = NBS .. "; V " .. RH95, quality = "medium",
-      note = "Cp not recalled (loader takes 0; use near 25 C only); azurite left out (values not recalled consistently)",
+      note = "Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats); azurite left out (values not recalled consistently)",
     },
     -- ---------------------------------------------------------------- strontium and barium carbonates (scaling)
     {

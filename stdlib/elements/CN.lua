@@ -29,13 +29,14 @@ local NBSD = "derived here from dfG and dfH of " .. NBS
 local SM = "from memory of Smith and Martell, Critical Stability Constants (I = 0, 25 C)"
 
 -- A cyano complex of a monovalent ion with a Smith and Martell cumulative
--- constant and no recalled enthalpy (held at 25 C).
+-- constant and no recalled enthalpy (temperature by the isocoulombic
+-- estimate, docs/thermo.md).
 local function cyano(ion, n, charge, logbeta, note)
   local metal = ion:sub(1, -3)
   local f = metal .. "(CN)" .. n .. "^" .. charge
   return { formula = f, model = "logk", reaction = ion .. " + " .. n .. " CN^- = " .. f,
-           logK = logbeta, source = SM, quality = "medium",
-           note = "No dH recalled: held at 25 C." .. (note and (" " .. note) or "") }
+           logK = logbeta, estimate = "isocoulombic", source = SM, quality = "medium",
+           note = "No dH recalled: temperature by the isocoulombic estimate." .. (note and (" " .. note) or "") }
 end
 
 local species = {

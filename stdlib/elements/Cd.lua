@@ -34,37 +34,37 @@ return {
     {
       formula = "CdOH^+", model = "logk",
       reaction = "Cd^2+ + H2O(l) = CdOH^+ + H^+",
-      logK = -10.08,
+      logK = -10.08, estimate = "isocoulombic",
       source = BM76, quality = "medium",
     },
     {
       formula = "Cd(OH)2(aq)", model = "logk",
       reaction = "Cd^2+ + 2 H2O(l) = Cd(OH)2(aq) + 2 H^+",
-      logK = -20.35,
+      logK = -20.35, estimate = "isocoulombic",
       source = BM76, quality = "medium",
     },
     {
       formula = "Cd(OH)3^-", model = "logk",
       reaction = "Cd^2+ + 3 H2O(l) = Cd(OH)3^- + 3 H^+",
-      logK = -33.3,
+      logK = -33.3, estimate = "isocoulombic",
       source = BM76, quality = "medium",
     },
     {
       formula = "Cd(OH)4^2-", model = "logk",
       reaction = "Cd^2+ + 4 H2O(l) = Cd(OH)4^2- + 4 H^+",
-      logK = -47.35,
+      logK = -47.35, estimate = "isocoulombic",
       source = BM76, quality = "medium",
     },
     {
       formula = "Cd2OH^3+", model = "logk",
       reaction = "2 Cd^2+ + H2O(l) = Cd2OH^3+ + H^+",
-      logK = -9.39,
+      logK = -9.39, estimate = "isocoulombic",
       source = BM76, quality = "medium",
     },
     {
       formula = "Cd4(OH)4^4+", model = "logk",
       reaction = "4 Cd^2+ + 4 H2O(l) = Cd4(OH)4^4+ + 4 H^+",
-      logK = -32.85,
+      logK = -32.85, estimate = "isocoulombic",
       source = BM76, quality = "medium",
     },
     {
@@ -79,8 +79,9 @@ return {
     {
       formula = "Cd(OH)2(s)", model = "cp",
       G = -473.6, H = -560.7, S = 96,
+      estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
       source = NBS, quality = "medium",
-      note = "precipitated (beta) Cd(OH)2. No heat capacity recalled: cp omitted, the loader takes Cp = 0 and warns, so use near 25 C only. Gives log K(Cd(OH)2 + 2 H+ = Cd2+ + 2 H2O) = 13.73 with CODATA Cd2+ (Baes and Mesmer: 13.65, recalled).",
+      note = "precipitated (beta) Cd(OH)2. No heat capacity recalled: Cp by Kopp-Neumann additivity (Kopp's atomic heats, an estimate). Gives log K(Cd(OH)2 + 2 H+ = Cd2+ + 2 H2O) = 13.73 with CODATA Cd2+ (Baes and Mesmer: 13.65, recalled).",
     },
   },
 }

@@ -92,13 +92,13 @@ return {
     },
 
     -- ---------------------------------------------------------------- chloro complexes (log K of the formation reaction, I = 0, 25 C)
-    { formula = "FeCl^+", model = "logk", reaction = "Fe^2+ + Cl^- = FeCl^+", logK = 0.14,
+    { formula = "FeCl^+", model = "logk", reaction = "Fe^2+ + Cl^- = FeCl^+", logK = 0.14, estimate = "isocoulombic",
       source = N90, quality = "low", note = "weak ion pair; dH not recalled" },
     { formula = "FeCl^2+", model = "logk", reaction = "Fe^3+ + Cl^- = FeCl^2+", logK = 1.48, dH = 5.6, units = KCAL,
       source = N90, quality = "medium" },
-    { formula = "FeCl2^+", model = "logk", reaction = "Fe^3+ + 2 Cl^- = FeCl2^+", logK = 2.13,
+    { formula = "FeCl2^+", model = "logk", reaction = "Fe^3+ + 2 Cl^- = FeCl2^+", logK = 2.13, estimate = "isocoulombic",
       source = N90, quality = "low", note = "dH not recalled" },
-    { formula = "FeCl3(aq)", model = "logk", reaction = "Fe^3+ + 3 Cl^- = FeCl3(aq)", logK = 1.13,
+    { formula = "FeCl3(aq)", model = "logk", reaction = "Fe^3+ + 3 Cl^- = FeCl3(aq)", logK = 1.13, estimate = "isocoulombic",
       source = N90, quality = "low", note = "dH not recalled" },
 
     { formula = "CuCl^+", model = "logk", reaction = "Cu^2+ + Cl^- = CuCl^+", logK = 0.43, dH = 8.65, units = KCAL,
@@ -128,9 +128,9 @@ return {
       source = COMPILED, quality = "medium" },
     { formula = "AgCl2^-", model = "logk", reaction = "Ag^+ + 2 Cl^- = AgCl2^-", logK = 5.27, dH = -3.93, units = KCAL,
       source = COMPILED, quality = "medium", note = "OpenStax App. K gives 1.8e5 (5.26)" },
-    { formula = "AgCl3^2-", model = "logk", reaction = "Ag^+ + 3 Cl^- = AgCl3^2-", logK = 5.29,
+    { formula = "AgCl3^2-", model = "logk", reaction = "Ag^+ + 3 Cl^- = AgCl3^2-", logK = 5.29, estimate = "isocoulombic",
       source = COMPILED, quality = "low", note = "dH not recalled" },
-    { formula = "AgCl4^3-", model = "logk", reaction = "Ag^+ + 4 Cl^- = AgCl4^3-", logK = 5.51,
+    { formula = "AgCl4^3-", model = "logk", reaction = "Ag^+ + 4 Cl^- = AgCl4^3-", logK = 5.51, estimate = "isocoulombic",
       source = COMPILED, quality = "low", note = "dH not recalled" },
 
     { formula = "CdCl^+", model = "logk", reaction = "Cd^2+ + Cl^- = CdCl^+", logK = 1.98, dH = 0.59, units = KCAL,
@@ -149,9 +149,9 @@ return {
     { formula = "PbCl4^2-", model = "logk", reaction = "Pb^2+ + 4 Cl^- = PbCl4^2-", logK = 1.38, dH = 3.53, units = KCAL,
       source = COMPILED, quality = "low" },
 
-    { formula = "MnCl^+", model = "logk", reaction = "Mn^2+ + Cl^- = MnCl^+", logK = 0.61,
+    { formula = "MnCl^+", model = "logk", reaction = "Mn^2+ + Cl^- = MnCl^+", logK = 0.61, estimate = "isocoulombic",
       source = COMPILED, quality = "low", note = "dH not recalled" },
-    { formula = "NiCl^+", model = "logk", reaction = "Ni^2+ + Cl^- = NiCl^+", logK = 0.40,
+    { formula = "NiCl^+", model = "logk", reaction = "Ni^2+ + Cl^- = NiCl^+", logK = 0.40, estimate = "isocoulombic",
       source = COMPILED, quality = "low", note = "dH not recalled; outer-sphere pair, literature 0.1-0.6" },
 
     -- ---------------------------------------------------------------- chloride salts
@@ -173,8 +173,9 @@ return {
     {
       formula = "PbCl2(s,cotunnite)", model = "cp",
       G = -314.10, H = -359.41, S = 136.0,
+      estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
       source = NBS, quality = "medium",
-      note = "Cp not recalled (loader takes 0; use near 25 C only)",
+      note = "Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats)",
     },
     {
       formula = "NaCl(s,halite)", model = "cp",
@@ -205,21 +206,21 @@ return {
     {
       formula = "AuCl2^-", model = "logk",
       reaction = "Au(s) + 2 Cl^- + H^+ = AuCl2^- + 0.5 H2(g)",
-      logK = -19.507,
+      logK = -19.507, estimate = "isocoulombic",
       source = "derived here from E0(AuCl2^- + e- = Au + 2 Cl^-) = 1.154 V, from memory of Bard, " ..
                "Parsons and Jordan 1985 (Standard Potentials in Aqueous Solution) as printed in the CRC series",
       quality = "medium",
       note = "With AuCl4^- below it gives E0(AuCl4^-/AuCl2^-) = 0.926 V, the value printed beside " ..
-             "it. No dH recalled: held at 25 C.",
+             "it. No dH recalled: temperature by the isocoulombic estimate.",
     },
     {
       formula = "AuCl4^-", model = "logk",
       reaction = "Au(s) + 4 Cl^- + 3 H^+ = AuCl4^- + 1.5 H2(g)",
-      logK = -50.812,
+      logK = -50.812, estimate = "isocoulombic",
       source = "derived here from E0(AuCl4^- + 3 e- = Au + 4 Cl^-) = 1.002 V, from memory of Bard, " ..
                "Parsons and Jordan 1985 (Standard Potentials in Aqueous Solution) as printed in the CRC series",
       quality = "medium",
-      note = "No dH recalled: held at 25 C.",
+      note = "No dH recalled: temperature by the isocoulombic estimate.",
     },
   },
 }

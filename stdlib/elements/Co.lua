@@ -44,25 +44,25 @@ return {
     {
       formula = "CoOH^+", model = "logk",
       reaction = "Co^2+ + H2O(l) = CoOH^+ + H^+",
-      logK = -9.65,
+      logK = -9.65, estimate = "isocoulombic",
       source = BM, quality = "medium",
     },
     {
       formula = "Co(OH)2(aq)", model = "logk",
       reaction = "Co^2+ + 2 H2O(l) = Co(OH)2(aq) + 2 H^+",
-      logK = -18.8,
+      logK = -18.8, estimate = "isocoulombic",
       source = BM, quality = "low",
     },
     {
       formula = "Co(OH)3^-", model = "logk",
       reaction = "Co^2+ + 3 H2O(l) = Co(OH)3^- + 3 H^+",
-      logK = -31.5,
+      logK = -31.5, estimate = "isocoulombic",
       source = BM, quality = "low",
     },
     {
       formula = "Co(OH)4^2-", model = "logk",
       reaction = "Co^2+ + 4 H2O(l) = Co(OH)4^2- + 4 H^+",
-      logK = -46.3,
+      logK = -46.3, estimate = "isocoulombic",
       source = BM, quality = "low",
     },
     {
@@ -76,9 +76,10 @@ return {
     {
       formula = "Co(OH)2(s)", model = "cp",
       G = -454.3, H = -539.7, S = 79,
+      estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
       source = NBS,
       quality = "low",
-      note = "Pink form. Cp not recalled: the loader will take Cp = 0.",
+      note = "Pink form. Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats).",
     },
     {
       formula = "Co3O4(s)", model = "cp",
@@ -94,12 +95,12 @@ return {
     { -- issue 13
       formula = "Co(OH)3(s)", model = "logk",
       reaction = "Co(OH)2(s) + OH^- = Co(OH)3(s) + e-",
-      logK = -2.874,
+      logK = -2.874, estimate = "isocoulombic",
       source = "derived here from E0(Co(OH)3 + e- = Co(OH)2 + OH^-) = 0.17 V, from memory of the CRC Handbook electrochemical series (P. Vanysek)",
       quality = "low",
       note = "Cobalt(III) hydroxide (CoOOH.H2O) on the file's NBS Co(OH)2. Pourbaix 1966 prints " ..
              "1.005 - 0.0591 pH for the same couple (recalled), 7 mV from this. Two decimals in " ..
-             "the source. No dH recalled: held at 25 C.",
+             "the source. No dH recalled: temperature by the isocoulombic estimate.",
     },
   },
 }

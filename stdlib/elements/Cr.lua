@@ -51,49 +51,49 @@ return {
     {
       formula = "Cr^2+", model = "logk",
       reaction = "2 Cr^3+ + H2(g) = 2 Cr^2+ + 2 H^+",
-      logK = -13.759,
+      logK = -13.759, estimate = "isocoulombic",
       source = "derived here from E0(Cr3+/Cr2+) = -0.407 V " .. CRC,
       quality = "medium",
       note = "Gives E0(Cr2+/Cr) = -0.913 V, as the CRC series lists. No dH: S of Cr2+ is not " ..
-             "recalled, so this couple is held at its 25 C constant (Cr2+ follows Cr3+'s " ..
-             "enthalpy, not its own).",
+             "recalled; temperature by the isocoulombic estimate (n = 0: the couple's dS taken " ..
+             "as 0).",
     },
     -- Cr(III) hydrolysis -----------------------------------------------------
     {
       formula = "CrOH^2+", model = "logk",
       reaction = "Cr^3+ + H2O(l) = CrOH^2+ + H^+",
-      logK = -4.0,
+      logK = -4.0, estimate = "isocoulombic",
       source = BM, quality = "medium",
     },
     {
       formula = "Cr(OH)2^+", model = "logk",
       reaction = "Cr^3+ + 2 H2O(l) = Cr(OH)2^+ + 2 H^+",
-      logK = -9.7,
+      logK = -9.7, estimate = "isocoulombic",
       source = BM, quality = "low",
     },
     {
       formula = "Cr(OH)3(aq)", model = "logk",
       reaction = "Cr^3+ + 3 H2O(l) = Cr(OH)3(aq) + 3 H^+",
-      logK = -18.0,
+      logK = -18.0, estimate = "isocoulombic",
       source = BM, quality = "low",
     },
     {
       formula = "Cr(OH)4^-", model = "logk",
       reaction = "Cr^3+ + 4 H2O(l) = Cr(OH)4^- + 4 H^+",
-      logK = -27.4,
+      logK = -27.4, estimate = "isocoulombic",
       source = BM, quality = "low",
       note = "The CrO2^- of older diagrams (same species less two H2O).",
     },
     {
       formula = "Cr2(OH)2^4+", model = "logk",
       reaction = "2 Cr^3+ + 2 H2O(l) = Cr2(OH)2^4+ + 2 H^+",
-      logK = -5.06,
+      logK = -5.06, estimate = "isocoulombic",
       source = BM, quality = "low",
     },
     {
       formula = "Cr3(OH)4^5+", model = "logk",
       reaction = "3 Cr^3+ + 4 H2O(l) = Cr3(OH)4^5+ + 4 H^+",
-      logK = -8.15,
+      logK = -8.15, estimate = "isocoulombic",
       source = BM, quality = "low",
     },
     -- Cr(VI) -----------------------------------------------------------------

@@ -49,14 +49,14 @@ return {
     {
       formula = "CuOH^+", model = "logk",
       reaction = "Cu^2+ + H2O(l) = CuOH^+ + H^+",
-      logK = -8.0,
+      logK = -8.0, estimate = "isocoulombic",
       source = BM, quality = "medium",
       note = "IUPAC review (Powell et al. 2007) about -7.95, as recalled.",
     },
     {
       formula = "Cu(OH)2(aq)", model = "logk",
       reaction = "Cu^2+ + 2 H2O(l) = Cu(OH)2(aq) + 2 H^+",
-      logK = -16.23,
+      logK = -16.23, estimate = "isocoulombic",
       source = "from memory of Powell, Brown, Byrne, Gajda, Hefter, Sjoberg and Wanner 2007 " ..
                "(IUPAC Technical Report, Pure Appl. Chem. 79, 895), log *beta2 at I = 0, 25 C",
       quality = "medium",
@@ -68,25 +68,25 @@ return {
     {
       formula = "Cu2(OH)2^2+", model = "logk",
       reaction = "2 Cu^2+ + 2 H2O(l) = Cu2(OH)2^2+ + 2 H^+",
-      logK = -10.36,
+      logK = -10.36, estimate = "isocoulombic",
       source = BM, quality = "medium",
     },
     {
       formula = "Cu3(OH)4^2+", model = "logk",
       reaction = "3 Cu^2+ + 4 H2O(l) = Cu3(OH)4^2+ + 4 H^+",
-      logK = -21.1,
+      logK = -21.1, estimate = "isocoulombic",
       source = BM, quality = "low",
     },
     {
       formula = "Cu(OH)3^-", model = "logk",
       reaction = "Cu^2+ + 3 H2O(l) = Cu(OH)3^- + 3 H^+",
-      logK = -26.9,
+      logK = -26.9, estimate = "isocoulombic",
       source = BM, quality = "medium",
     },
     {
       formula = "Cu(OH)4^2-", model = "logk",
       reaction = "Cu^2+ + 4 H2O(l) = Cu(OH)4^2- + 4 H^+",
-      logK = -39.6,
+      logK = -39.6, estimate = "isocoulombic",
       source = BM, quality = "medium",
       note = "The CuO2^2- of older diagrams (same species less two H2O).",
     },

@@ -82,13 +82,13 @@ return {
     {
       formula = "Fe(OH)2(aq)", model = "logk",
       reaction = "Fe^2+ + 2 H2O(l) = Fe(OH)2(aq) + 2 H^+",
-      logK = -20.6,
+      logK = -20.6, estimate = "isocoulombic",
       source = BM, quality = "low",
     },
     {
       formula = "Fe(OH)3^-", model = "logk",
       reaction = "Fe^2+ + 3 H2O(l) = Fe(OH)3^- + 3 H^+",
-      logK = -31.0,
+      logK = -31.0, estimate = "isocoulombic",
       source = BM, quality = "low",
       note = "The HFeO2^- of older diagrams (same species less one H2O).",
     },
@@ -110,7 +110,7 @@ return {
     {
       formula = "Fe(OH)3(aq)", model = "logk",
       reaction = "Fe^3+ + 3 H2O(l) = Fe(OH)3(aq) + 3 H^+",
-      logK = -13.6,
+      logK = -13.6, estimate = "isocoulombic",
       source = NORD,
       quality = "low",
       note = "Baes and Mesmer 1976 give only an upper bound (about -12).",
@@ -144,7 +144,7 @@ return {
     {
       formula = "Fe3(OH)4^5+", model = "logk",
       reaction = "3 Fe^3+ + 4 H2O(l) = Fe3(OH)4^5+ + 4 H^+",
-      logK = -6.3,
+      logK = -6.3, estimate = "isocoulombic",
       source = BM,
       quality = "low",
     },
@@ -170,32 +170,35 @@ return {
     {
       formula = "FeO(OH)(s,goethite)", model = "cp",
       G = -488.55, H = -559.3, S = 60.38,
+      estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
       source = "dfH and S from memory of Robie and Hemingway 1995 (USGS Bulletin 2131); " ..
                "dfG derived here as dfH - T*dfS",
       quality = "low",
       note = "A dfG of -489.8 kJ/mol also comes to mind (it would fail the dfG/dfH/S " ..
-             "cycle by 1.3 kJ/mol). Cp not recalled: the loader will take Cp = 0.",
+             "cycle by 1.3 kJ/mol). Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats).",
     },
     {
       formula = "Fe(OH)2(s)", model = "cp",
       G = -486.5, H = -569.0, S = 88,
+      estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
       source = NBS,
       quality = "medium",
-      note = "Cp not recalled: the loader will take Cp = 0.",
+      note = "Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats).",
     },
     {
       formula = "Fe(OH)3(s)", model = "cp",
       G = -696.5, H = -823.0, S = 106.7,
+      estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
       source = NBS,
       quality = "medium",
       note = "Precipitated hydroxide of the NBS tables. With the Fe3+ above it gives " ..
              "log K(Fe(OH)3 + 3H+ = Fe3+ + 3H2O) = 5.63; compare Fe(OH)3(am) below. " ..
-             "Cp not recalled: the loader will take Cp = 0.",
+             "Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats).",
     },
     {
       formula = "Fe(OH)3(am)", model = "logk",
       reaction = "Fe^3+ + 3 H2O(l) = Fe(OH)3(am) + 3 H^+",
-      logK = -4.891,
+      logK = -4.891, estimate = "isocoulombic",
       source = NORD .. " (ferrihydrite, Fe(OH)3 + 3H+ = Fe3+ + 3H2O, log K = 4.891)",
       quality = "medium",
       note = "Ferrihydrite; published values span about 3 to 5 with ageing and particle size.",

@@ -65,16 +65,16 @@ return {
     {
       formula = "HgOH^+", model = "logk",
       reaction = "Hg^2+ + H2O(l) = HgOH^+ + H^+",
-      logK = -3.40,
+      logK = -3.40, estimate = "isocoulombic",
       source = BM, quality = "medium",
-      note = "No dH recalled: held at 25 C.",
+      note = "No dH recalled: temperature by the isocoulombic estimate.",
     },
     {
       formula = "Hg(OH)2(aq)", model = "logk",
       reaction = "Hg^2+ + 2 H2O(l) = Hg(OH)2(aq) + 2 H^+",
-      logK = -6.17,
+      logK = -6.17, estimate = "isocoulombic",
       source = BM, quality = "medium",
-      note = "The dominant dissolved Hg(II) species from pH 3 to 12. No dH recalled: held at 25 C.",
+      note = "The dominant dissolved Hg(II) species from pH 3 to 12. No dH recalled: temperature by the isocoulombic estimate.",
     },
     {
       formula = "HgO(s,montroydite)", model = "cp",

@@ -36,7 +36,7 @@ return {
     {
       formula = "KOH(aq)", model = "logk",
       reaction = "K^+ + H2O(l) = KOH(aq) + H^+",
-      logK = -14.46,
+      logK = -14.46, estimate = "isocoulombic",
       source = BM76, quality = "low",
       note = "a weak ion pair; matters only in concentrated KOH or at high temperature, where this 25 C constant is not enough.",
     },

@@ -46,7 +46,7 @@ return {
     {
       formula = "Mg4(OH)4^4+", model = "logk",
       reaction = "4 Mg^2+ + 4 H2O(l) = Mg4(OH)4^4+ + 4 H^+",
-      logK = -39.71,
+      logK = -39.71, estimate = "isocoulombic",
       source = BM76, quality = "low",
       note = "significant only in concentrated Mg solutions close to brucite saturation.",
     },

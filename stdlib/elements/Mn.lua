@@ -37,11 +37,11 @@ return {
     {
       formula = "Mn^3+", model = "logk",
       reaction = "2 Mn^2+ + 2 H^+ = 2 Mn^3+ + H2(g)",
-      logK = -52.113,
+      logK = -52.113, estimate = "isocoulombic",
       source = "derived here from E0(Mn3+/Mn2+) = 1.5415 V, from memory of CRC Handbook of " ..
                "Chemistry and Physics, Electrochemical Series (P. Vanysek) (log K = -2 F E0/(RT ln10))",
       quality = "low",
-      note = "Disproportionates to Mn2+ and MnO2 except in strong acid; no dH (25 C only).",
+      note = "Disproportionates to Mn2+ and MnO2 except in strong acid; no dH (temperature by the isocoulombic estimate).",
     },
     {
       formula = "MnO4^-", model = "hkf",
@@ -70,32 +70,32 @@ return {
     {
       formula = "Mn(OH)2(aq)", model = "logk",
       reaction = "Mn^2+ + 2 H2O(l) = Mn(OH)2(aq) + 2 H^+",
-      logK = -22.2,
+      logK = -22.2, estimate = "isocoulombic",
       source = BM, quality = "low",
     },
     {
       formula = "Mn(OH)3^-", model = "logk",
       reaction = "Mn^2+ + 3 H2O(l) = Mn(OH)3^- + 3 H^+",
-      logK = -34.8,
+      logK = -34.8, estimate = "isocoulombic",
       source = BM, quality = "low",
       note = "The HMnO2^- of older diagrams (same species less one H2O).",
     },
     {
       formula = "Mn(OH)4^2-", model = "logk",
       reaction = "Mn^2+ + 4 H2O(l) = Mn(OH)4^2- + 4 H^+",
-      logK = -48.3,
+      logK = -48.3, estimate = "isocoulombic",
       source = BM, quality = "low",
     },
     {
       formula = "Mn2OH^3+", model = "logk",
       reaction = "2 Mn^2+ + H2O(l) = Mn2OH^3+ + H^+",
-      logK = -10.56,
+      logK = -10.56, estimate = "isocoulombic",
       source = BM, quality = "low",
     },
     {
       formula = "Mn2(OH)3^+", model = "logk",
       reaction = "2 Mn^2+ + 3 H2O(l) = Mn2(OH)3^+ + 3 H^+",
-      logK = -23.9,
+      logK = -23.9, estimate = "isocoulombic",
       source = BM, quality = "low",
     },
     -- oxides and hydroxide ---------------------------------------------------
@@ -136,20 +136,21 @@ return {
     {
       formula = "Mn(OH)2(am)", model = "cp",
       G = -615.0, H = -695.4, S = 99.2,
+      estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
       source = NBS,
       quality = "medium",
       note = "Amorphous precipitate as listed in the source (not crystalline pyrochroite). " ..
-             "Cp not recalled: the loader will take Cp = 0.",
+             "Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats).",
     },
     { -- issue 13
       formula = "Mn(OH)2(s,pyrochroite)", model = "logk",
       reaction = "Mn(OH)2(s,pyrochroite) + 2 H^+ = Mn^2+ + 2 H2O(l)",
-      logK = 15.2,
+      logK = 15.2, estimate = "isocoulombic",
       source = BM,
       quality = "medium",
       note = "Crystalline Mn(OH)2. The NBS amorphous solid above gives 15.30 with the file's " ..
              "Mn^2+: the two differ by less than the scatter of the measurements. No dH " ..
-             "recalled: held at 25 C.",
+             "recalled: temperature by the isocoulombic estimate.",
     },
   },
 }

@@ -46,7 +46,7 @@ return {
     {
       formula = "HMoO4^-", model = "logk",
       reaction = "MoO4^2- + H^+ = HMoO4^-",
-      logK = 4.24,
+      logK = 4.24, estimate = "isocoulombic",
       source = "from memory of Smith and Martell, Critical Stability Constants (I = 0, 25 C)",
       quality = "low",
       note = "published values at various ionic strengths spread from about 3.5 to 4.3; at millimolar Mo and low pH polymolybdates (not included) dominate.",
@@ -54,11 +54,11 @@ return {
     { -- issue 13
       formula = "Mo^3+", model = "logk",
       reaction = "Mo(s) + 3 H^+ = Mo^3+ + 1.5 H2(g)",
-      logK = 10.142,
+      logK = 10.142, estimate = "isocoulombic",
       source = "derived here from E0(Mo^3+/Mo) = -0.200 V, from memory of the CRC Handbook electrochemical series (P. Vanysek)",
       quality = "low",
       note = "Molybdenum(III) in strong acid; no hydrolysis constants recalled. No dH " ..
-             "recalled: held at 25 C.",
+             "recalled: temperature by the isocoulombic estimate.",
     },
   },
 }

@@ -21,7 +21,7 @@ local SHS89 = "from memory of Shock, Helgeson and Sverjensky 1989 (Geochim. Cosm
 local KELLEY = "Cp: from memory of Kelley 1960 (U.S. Bur. Mines Bull. 584), Maier-Kelley coefficients in cal converted x 4.184"
 local BJERRUM = "from memory of J. Bjerrum 1941, Metal Ammine Formation in Aqueous Solution (2 mol/L NH4NO3, 30 C), as reproduced in Smith and Martell"
 local SM = "from memory of Smith and Martell, Critical Stability Constants (I = 0, 25 C)"
-local BJ_NOTE = "Bjerrum's medium is 2 mol/L NH4NO3 at 30 C, not I = 0 and 25 C; for a neutral ligand the medium effect is modest but real (a few tenths per step); dH not recalled (log K held constant)"
+local BJ_NOTE = "Bjerrum's medium is 2 mol/L NH4NO3 at 30 C, not I = 0 and 25 C; for a neutral ligand the medium effect is modest but real (a few tenths per step); dH not recalled (temperature: isocoulombic estimate)"
 local CAL = { energy = "cal", entropy = "cal" }
 
 local function ammine(metal, charge, n, logbeta, quality, src, note)
@@ -29,7 +29,10 @@ local function ammine(metal, charge, n, logbeta, quality, src, note)
   local f
   if n == 1 then f = metal .. "NH3^" .. charge else f = metal .. "(NH3)" .. n .. "^" .. charge end
   local lhs = ion .. " + " .. (n == 1 and "" or (n .. " ")) .. "NH3(aq)"
+  -- no dH recalled for any ammine step: temperature by the one-term isocoulombic
+  -- estimate (M^z+ + n NH3 = M(NH3)n^z+ is already isocoulombic; docs/thermo.md)
   return { formula = f, model = "logk", reaction = lhs .. " = " .. f, logK = logbeta,
+           estimate = "isocoulombic",
            source = src or BJERRUM, quality = quality or "medium", note = note or BJ_NOTE }
 end
 

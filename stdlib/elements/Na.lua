@@ -35,7 +35,7 @@ return {
     {
       formula = "NaOH(aq)", model = "logk",
       reaction = "Na^+ + H2O(l) = NaOH(aq) + H^+",
-      logK = -14.18,
+      logK = -14.18, estimate = "isocoulombic",
       source = BM76, quality = "low",
       note = "a weak ion pair; matters only in concentrated NaOH or at high temperature, where this 25 C constant is not enough.",
     },

@@ -37,31 +37,31 @@ return {
     {
       formula = "NiOH^+", model = "logk",
       reaction = "Ni^2+ + H2O(l) = NiOH^+ + H^+",
-      logK = -9.86,
+      logK = -9.86, estimate = "isocoulombic",
       source = BM, quality = "medium",
     },
     {
       formula = "Ni(OH)2(aq)", model = "logk",
       reaction = "Ni^2+ + 2 H2O(l) = Ni(OH)2(aq) + 2 H^+",
-      logK = -19.0,
+      logK = -19.0, estimate = "isocoulombic",
       source = BM, quality = "low",
     },
     {
       formula = "Ni(OH)3^-", model = "logk",
       reaction = "Ni^2+ + 3 H2O(l) = Ni(OH)3^- + 3 H^+",
-      logK = -30.0,
+      logK = -30.0, estimate = "isocoulombic",
       source = BM, quality = "low",
     },
     {
       formula = "Ni2OH^3+", model = "logk",
       reaction = "2 Ni^2+ + H2O(l) = Ni2OH^3+ + H^+",
-      logK = -10.7,
+      logK = -10.7, estimate = "isocoulombic",
       source = BM, quality = "low",
     },
     {
       formula = "Ni4(OH)4^4+", model = "logk",
       reaction = "4 Ni^2+ + 4 H2O(l) = Ni4(OH)4^4+ + 4 H^+",
-      logK = -27.74,
+      logK = -27.74, estimate = "isocoulombic",
       source = BM, quality = "medium",
     },
     {
@@ -76,11 +76,12 @@ return {
     {
       formula = "Ni(OH)2(s)", model = "cp",
       G = -447.2, H = -529.7, S = 88,
+      estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
       source = NBS,
       quality = "medium",
       note = "Other compilations: dfH -538, S 79. Gives log K(Ni(OH)2 + 2H+ = Ni2+ + 2H2O) " ..
              "= 12.73; crystalline beta-Ni(OH)2 measured 11.67 +- 0.20 (ORNL; see " ..
-             "docs). Cp not recalled: the loader will take Cp = 0.",
+             "docs). Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats).",
     },
   },
 }

@@ -70,19 +70,19 @@ return {
 
     -- ---------------------------------------------------------------- minerals
     { formula = "Ca5(PO4)3OH(s,hydroxyapatite)", model = "logk",
-      reaction = "Ca5(PO4)3OH(s,hydroxyapatite) = 5 Ca^2+ + 3 PO4^3- + OH^-", logK = -58.5,
+      reaction = "Ca5(PO4)3OH(s,hydroxyapatite) = 5 Ca^2+ + 3 PO4^3- + OH^-", logK = -58.5, estimate = "isocoulombic",
       source = "from memory of McDowell, Gregory and Brown 1977 (J. Res. Natl. Bur. Stand. 81A:273); the abstract of 'Studies on the incongruent solubility of hydroxyapatite' (scilit.com, read) brackets the product between 1e-57 and 1e-60",
       quality = "low",
       note = "apatite dissolves incongruently and its solubility depends on surface phases; dH not recalled" },
     { formula = "CaHPO4*2H2O(s,brushite)", model = "logk",
-      reaction = "CaHPO4*2H2O(s,brushite) = Ca^2+ + HPO4^2- + 2 H2O(l)", logK = -6.59,
+      reaction = "CaHPO4*2H2O(s,brushite) = Ca^2+ + HPO4^2- + 2 H2O(l)", logK = -6.59, estimate = "isocoulombic",
       source = "from memory of Gregory, Moreno and Brown 1970 (J. Res. Natl. Bur. Stand. 74A:461)",
       quality = "medium", note = "metastable with respect to apatite but nucleates first at pH below about 6; dH not recalled" },
     { formula = "FePO4*2H2O(s,strengite)", model = "logk",
-      reaction = "FePO4*2H2O(s,strengite) = Fe^3+ + PO4^3- + 2 H2O(l)", logK = -26.4,
+      reaction = "FePO4*2H2O(s,strengite) = Fe^3+ + PO4^3- + 2 H2O(l)", logK = -26.4, estimate = "isocoulombic",
       source = NRIAGU, quality = "medium", note = "dH not recalled" },
     { formula = "Fe3(PO4)2*8H2O(s,vivianite)", model = "logk",
-      reaction = "Fe3(PO4)2*8H2O(s,vivianite) = 3 Fe^2+ + 2 PO4^3- + 8 H2O(l)", logK = -36.0,
+      reaction = "Fe3(PO4)2*8H2O(s,vivianite) = 3 Fe^2+ + 2 PO4^3- + 8 H2O(l)", logK = -36.0, estimate = "isocoulombic",
       source = NRIAGU, quality = "medium", note = "dH not recalled" },
   },
 }

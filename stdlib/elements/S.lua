@@ -46,7 +46,7 @@ return {
     },
     {
       formula = "S^2-", model = "logk",
-      reaction = "HS^- = S^2- + H^+", logK = -17.4,
+      reaction = "HS^- = S^2- + H^+", logK = -17.4, estimate = "isocoulombic",
       source = "from memory of Migdisov, Williams-Jones, Lakshtanov and Alekhin 2002 (Geochim. Cosmochim. Acta 66:1713), pK2 of H2S about 17.4 at 25 C",
       quality = "low",
       note = "CONTROVERSY: the second dissociation constant of H2S is poorly known. Older tables (NBS 1982 dfG(S^2-) = 85.8 kJ/mol; Nordstrom et al. 1990) give pK2 about 12.9; spectroscopic work since the 1980s gives 17 to 19 (Schoonen and Barnes 1988 about 18.5; Meyer et al. 1983 about 19). S^2- is never a major species below pH 14 with any of the modern values. dH not recalled (log K held constant). Do not use S^2- based solubility products with this value: sulfide minerals here are defined by dfG.",
@@ -135,7 +135,7 @@ return {
     },
     {
       formula = "FeS(s,mackinawite)", model = "logk",
-      reaction = "FeS(s,mackinawite) + H^+ = Fe^2+ + HS^-", logK = -3.5,
+      reaction = "FeS(s,mackinawite) + H^+ = Fe^2+ + HS^-", logK = -3.5, estimate = "isocoulombic",
       source = "from memory of Rickard 2006 (Geochim. Cosmochim. Acta 70:5779), log K*sp = -3.5 +- 0.25",
       quality = "medium",
       note = "first iron sulfide to form in sour corrosion; literature -2.95 (Davison 1991) to -3.6; dH not recalled",
@@ -195,8 +195,9 @@ return {
     {
       formula = "CdS(s,greenockite)", model = "cp",
       G = -156.5, H = -161.9, S = 64.9, V = 29.93,
+      estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
       source = NBS .. "; V " .. RH95, quality = "medium",
-      note = "Cp not recalled (loader takes 0; use near 25 C only)",
+      note = "Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats)",
     },
     {
       formula = "MoS2(s,molybdenite)", model = "cp",
@@ -207,8 +208,9 @@ return {
     {
       formula = "SnS(s,herzenbergite)", model = "cp",
       G = -98.3, H = -100.0, S = 77.0,
+      estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
       source = NBS, quality = "low",
-      note = "Cp not recalled (loader takes 0; use near 25 C only)",
+      note = "Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats)",
     },
 
     -- ---------------------------------------------------------------- sulfate complexes (formation reactions, I = 0, 25 C)
@@ -234,15 +236,15 @@ return {
       source = N90, quality = "medium" },
     { formula = "ZnSO4(aq)", model = "logk", reaction = "Zn^2+ + SO4^2- = ZnSO4(aq)", logK = 2.37, dH = 1.36, units = KCAL,
       source = COMPILED, quality = "medium" },
-    { formula = "Zn(SO4)2^2-", model = "logk", reaction = "Zn^2+ + 2 SO4^2- = Zn(SO4)2^2-", logK = 3.28,
+    { formula = "Zn(SO4)2^2-", model = "logk", reaction = "Zn^2+ + 2 SO4^2- = Zn(SO4)2^2-", logK = 3.28, estimate = "isocoulombic",
       source = COMPILED, quality = "low", note = "dH not recalled" },
     { formula = "CuSO4(aq)", model = "logk", reaction = "Cu^2+ + SO4^2- = CuSO4(aq)", logK = 2.31, dH = 1.22, units = KCAL,
       source = COMPILED, quality = "medium" },
     { formula = "CdSO4(aq)", model = "logk", reaction = "Cd^2+ + SO4^2- = CdSO4(aq)", logK = 2.46, dH = 1.08, units = KCAL,
       source = COMPILED, quality = "medium" },
-    { formula = "PbSO4(aq)", model = "logk", reaction = "Pb^2+ + SO4^2- = PbSO4(aq)", logK = 2.75,
+    { formula = "PbSO4(aq)", model = "logk", reaction = "Pb^2+ + SO4^2- = PbSO4(aq)", logK = 2.75, estimate = "isocoulombic",
       source = COMPILED, quality = "low", note = "dH not recalled" },
-    { formula = "NiSO4(aq)", model = "logk", reaction = "Ni^2+ + SO4^2- = NiSO4(aq)", logK = 2.29,
+    { formula = "NiSO4(aq)", model = "logk", reaction = "Ni^2+ + SO4^2- = NiSO4(aq)", logK = 2.29, estimate = "isocoulombic",
       source = COMPILED, quality = "low", note = "dH not recalled; Smith and Martell list about 2.3" },
     { formula = "AgSO4^-", model = "logk", reaction = "Ag^+ + SO4^2- = AgSO4^-", logK = 1.29, dH = 1.49, units = KCAL,
       source = COMPILED, quality = "low" },
@@ -270,8 +272,9 @@ return {
     {
       formula = "MgSO4*7H2O(s,epsomite)", model = "cp",
       G = -2871.5, H = -3388.71, S = 372,
+      estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
       source = NBS, quality = "medium",
-      note = "Cp not recalled (loader takes 0; use near 25 C only)",
+      note = "Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats)",
     },
     {
       formula = "CuSO4(s,chalcocyanite)", model = "cp",
@@ -285,7 +288,7 @@ return {
     },
     {
       formula = "Cu4(SO4)(OH)6(s,brochantite)", model = "logk",
-      reaction = "Cu4(SO4)(OH)6(s,brochantite) + 6 H^+ = 4 Cu^2+ + SO4^2- + 6 H2O(l)", logK = 15.34,
+      reaction = "Cu4(SO4)(OH)6(s,brochantite) + 6 H^+ = 4 Cu^2+ + SO4^2- + 6 H2O(l)", logK = 15.34, estimate = "isocoulombic",
       source = "from memory of compiled mineral solubility constants (attribution not recalled)",
       quality = "low",
       note = "independently recalled dfG of brochantite about -1818 kJ/mol reproduces this log K with NBS ions; the common green patina of copper in sulfate-bearing air; dH not recalled",
@@ -319,8 +322,9 @@ return {
     {
       formula = "NiSO4*6H2O(s,retgersite)", model = "cp",
       G = -2224.95, H = -2682.8, S = 334.35,
+      estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
       source = NBS .. " (alpha, tetragonal)", quality = "low",
-      note = "S recalled weakly; Cp not recalled (loader takes 0; use near 25 C only)",
+      note = "S recalled weakly; Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats)",
     },
     {
       formula = "Na2SO4(s,thenardite)", model = "cp",
@@ -331,13 +335,14 @@ return {
     {
       formula = "Na2SO4*10H2O(s,mirabilite)", model = "cp",
       G = -3646.85, H = -4327.26, S = 592.0,
+      estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
       T_range = { 273.15, 305.5 },
       source = NBS, quality = "medium",
       note = "recalled values close the cycle only to 0.9 kJ/mol; dehydrates at 32.4 C; Cp not recalled",
     },
     {
       formula = "K2SO4(s,arcanite)", model = "logk",
-      reaction = "K2SO4(s,arcanite) = 2 K^+ + SO4^2-", logK = -1.776,
+      reaction = "K2SO4(s,arcanite) = 2 K^+ + SO4^2-", logK = -1.776, estimate = "isocoulombic",
       source = "from memory of compiled mineral solubility constants (USGS compilations after Nordstrom et al. 1990; primary paper not recalled)",
       quality = "medium",
       note = "written by log K: NBS 1982 arcanite (-1321.37, -1437.79, 175.56; cycle off by 1.3 kJ/mol) is consistent with NBS K^+ (-283.27) but gives -2.10 with SH88/CODATA K^+ (-282.5), which the K file is expected to carry; dH not recalled",

@@ -53,31 +53,31 @@ return {
     {
       formula = "SnOH^+", model = "logk",
       reaction = "Sn^2+ + H2O(l) = SnOH^+ + H^+",
-      logK = -3.40,
+      logK = -3.40, estimate = "isocoulombic",
       source = BM76, quality = "medium",
     },
     {
       formula = "Sn(OH)2(aq)", model = "logk",
       reaction = "Sn^2+ + 2 H2O(l) = Sn(OH)2(aq) + 2 H^+",
-      logK = -7.06,
+      logK = -7.06, estimate = "isocoulombic",
       source = BM76, quality = "medium",
     },
     {
       formula = "Sn(OH)3^-", model = "logk",
       reaction = "Sn^2+ + 3 H2O(l) = Sn(OH)3^- + 3 H^+",
-      logK = -16.61,
+      logK = -16.61, estimate = "isocoulombic",
       source = BM76, quality = "medium",
     },
     {
       formula = "Sn2(OH)2^2+", model = "logk",
       reaction = "2 Sn^2+ + 2 H2O(l) = Sn2(OH)2^2+ + 2 H^+",
-      logK = -4.77,
+      logK = -4.77, estimate = "isocoulombic",
       source = BM76, quality = "low",
     },
     {
       formula = "Sn3(OH)4^2+", model = "logk",
       reaction = "3 Sn^2+ + 4 H2O(l) = Sn3(OH)4^2+ + 4 H^+",
-      logK = -6.88,
+      logK = -6.88, estimate = "isocoulombic",
       source = BM76, quality = "medium",
     },
     {
@@ -99,8 +99,9 @@ return {
     {
       formula = "Sn(OH)2(s)", model = "cp",
       G = -491.6, H = -561.1, S = 155,
+      estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
       source = NBS, quality = "low",
-      note = "precipitated Sn(OH)2 (hydrous SnO). No heat capacity recalled: cp omitted, the loader takes Cp = 0 and warns, so use near 25 C only. SnO + H2O(l) is 2.4 kJ/mol more stable.",
+      note = "precipitated Sn(OH)2 (hydrous SnO). No heat capacity recalled: Cp by Kopp-Neumann additivity (Kopp's atomic heats, an estimate). SnO + H2O(l) is 2.4 kJ/mol more stable.",
     },
   },
 }

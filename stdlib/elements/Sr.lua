@@ -41,9 +41,9 @@ return {
     {
       formula = "SrOH^+", model = "logk",
       reaction = "Sr^2+ + H2O(l) = SrOH^+ + H^+",
-      logK = -13.29,
+      logK = -13.29, estimate = "isocoulombic",
       source = BM, quality = "medium",
-      note = "No dH recalled: held at 25 C.",
+      note = "No dH recalled: temperature by the isocoulombic estimate.",
     },
   },
 }

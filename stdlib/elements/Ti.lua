@@ -68,11 +68,11 @@ return {
     { -- issue 13
       formula = "Ti^2+", model = "logk",
       reaction = "Ti(s) + 2 H^+ = Ti^2+ + H2(g)",
-      logK = 55.105,
+      logK = 55.105, estimate = "isocoulombic",
       source = "derived here from E0(Ti^2+/Ti) = -1.630 V, from memory of the CRC Handbook electrochemical series (P. Vanysek)",
       quality = "low",
       note = "Ti^2+ reduces water; it exists only in strongly reducing acid and matters for " ..
-             "the active dissolution of titanium. No dH recalled: held at 25 C.",
+             "the active dissolution of titanium. No dH recalled: temperature by the isocoulombic estimate.",
     },
   },
 }

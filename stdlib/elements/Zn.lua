@@ -49,20 +49,20 @@ return {
     {
       formula = "Zn(OH)2(aq)", model = "logk",
       reaction = "Zn^2+ + 2 H2O(l) = Zn(OH)2(aq) + 2 H^+",
-      logK = -16.9,
+      logK = -16.9, estimate = "isocoulombic",
       source = BM, quality = "medium",
     },
     {
       formula = "Zn(OH)3^-", model = "logk",
       reaction = "Zn^2+ + 3 H2O(l) = Zn(OH)3^- + 3 H^+",
-      logK = -28.4,
+      logK = -28.4, estimate = "isocoulombic",
       source = BM, quality = "medium",
       note = "The HZnO2^- of older diagrams (same species less one H2O).",
     },
     {
       formula = "Zn(OH)4^2-", model = "logk",
       reaction = "Zn^2+ + 4 H2O(l) = Zn(OH)4^2- + 4 H^+",
-      logK = -41.2,
+      logK = -41.2, estimate = "isocoulombic",
       source = BM, quality = "medium",
       note = "The ZnO2^2- of older diagrams. With the Zn2+ above it gives " ..
              "E0(Zn(OH)4^2-/Zn) = -1.200 V (OpenStax/CRC -1.199).",
@@ -70,7 +70,7 @@ return {
     {
       formula = "Zn2OH^3+", model = "logk",
       reaction = "2 Zn^2+ + H2O(l) = Zn2OH^3+ + H^+",
-      logK = -9.0,
+      logK = -9.0, estimate = "isocoulombic",
       source = BM, quality = "low",
     },
     -- oxide and hydroxide ----------------------------------------------------
@@ -88,7 +88,7 @@ return {
     {
       formula = "Zn(OH)2(s,epsilon)", model = "logk",
       reaction = "Zn^2+ + 2 H2O(l) = Zn(OH)2(s,epsilon) + 2 H^+",
-      logK = -11.38,
+      logK = -11.38, estimate = "isocoulombic",
       source = BM .. " (log *Ks10 of epsilon-Zn(OH)2 = 11.38)",
       quality = "low",
       note = "Slightly more soluble than ZnO (11.19 from the CODATA values above), as expected.",

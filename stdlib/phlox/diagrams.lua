@@ -48,7 +48,8 @@ local CURVE_OWN = {
   total = { "number", 1e-300, 20 },       -- mol/kg of the element
   totals = { "map", 0, 20 },              -- other elements, mol/kg
   solids = "boolean",                     -- let solids precipitate
-  require_temperature_data = "boolean",   -- refuse log K held at 25 C
+  accept_held_logk = "boolean",           -- use log K held at 25 C away from 25 C (stamped)
+  require_temperature_data = "boolean",   -- gone: phlox.temperature_notes says to use accept_held_logk
 }
 
 local function library_of(opts, where)
@@ -70,14 +71,15 @@ end
 
 -- The options of phlox.speciate that pass through unchanged.
 local PASS = { "T", "T_C", "P", "E", "pe", "redox_gas", "redox_log_f", "fugacities", "basis",
-               "suppress", "exclude", "max_iter", "ligand_redox", "allow_inhibited", "activity_model" }
+               "suppress", "exclude", "max_iter", "ligand_redox", "allow_inhibited",
+               "accept_held_logk", "activity_model" }
 
--- A curve's stamp: its own held-constant line, then the caveats of its
--- solves (phlox.merge_notes).
+-- A curve's stamp: its own held-constant and estimate lines, then the
+-- caveats of its solves (phlox.merge_notes).
 local function curve_stamp(notes, held)
   local out = {}
   for _, l in ipairs(held or {}) do out[#out + 1] = l end
-  for _, l in ipairs(phlox.merge_notes(notes, { held = true })) do out[#out + 1] = l end
+  for _, l in ipairs(phlox.merge_notes(notes, { held = true, estimated = true })) do out[#out + 1] = l end
   return out
 end
 
@@ -112,33 +114,17 @@ local function T_C_of(opts)
   return opts.T_C or 25
 end
 
--- Species of `element` whose record is a log K without temperature
--- dependence (no dH, no logK_T): their log K stays at its 25 C value at T.
--- (One public name per thing: phlox.constant_logk(lib, elements, T in K).)
-local function held_at(lib, element, T_C)
-  return phlox.constant_logk(lib, { element }, T_C + T0C)
-end
-
 -- Stamp lines naming, for temperatures other than 25 C, the species whose
--- log K stays at its 25 C value.  With opts.require_temperature_data set,
--- such species are an error instead (call it before the work is done).
+-- log K stays at its 25 C value and those whose temperature dependence is
+-- estimated (with the method).  A held species stops the work unless
+-- opts.accept_held_logk is true (call it before the work is done).
 local function held_stamp(lib, elements, temps, opts, where)
-  local seen, list = {}, {}
-  for _, tc in ipairs(temps) do
-    if math.abs(tc - 25) > 1e-9 then
-      for _, e in ipairs(elements) do
-        for _, f in ipairs(held_at(lib, e, tc)) do
-          if not seen[f] then seen[f] = true; list[#list + 1] = f end
-        end
-      end
-    end
-  end
-  if #list == 0 then return nil end
-  if opts and opts.require_temperature_data then
-    fail(where, "require_temperature_data: no temperature data (log K held at 25 °C) for " .. table.concat(list, ", "))
-  end
-  local text, short = phlox.held_stamp_line(list)
-  return { text, short = short }
+  local tk = {}
+  for i, tc in ipairs(temps) do tk[i] = tc + T0C end
+  local ok, held, _, lines = pcall(phlox.temperature_notes, lib, elements, tk, opts, where)
+  if not ok then error(held, 0) end
+  if #lines == 0 then return nil end
+  return lines, held
 end
 
 --- Fraction (distribution) curves: the share of `element` among its
@@ -266,7 +252,7 @@ function diagrams.fractions(opts)
              y = { name = "fraction of {" .. el .. "}", min = 0, max = 1 } },
     conditions = conditions,
     provenance = curve_provenance(lib, opts, lig_el, conditions),
-    stamp = curve_stamp(notes, held), stamp_short = held and { [held[1]] = held.short } or nil,
+    stamp = curve_stamp(notes, held), stamp_short = held and held.short or nil,
     stats = { solves = #xs, seconds = seconds },
   }
   result.provenance.notes = result.stamp
@@ -363,7 +349,7 @@ function diagrams.solubility(opts)
              y = { name = "dissolved {" .. el .. "}", unit = "mol/kg", log = true } },
     conditions = { [el .. " put in (mol/kg)"] = total, activity_model = base.activity_model },
     provenance = curve_provenance(lib, opts, nil, { [el .. " put in (mol/kg)"] = total, T_C = temps }),
-    stamp = curve_stamp(notes, held), stamp_short = held and { [held[1]] = held.short } or nil,
+    stamp = curve_stamp(notes, held), stamp_short = held and held.short or nil,
     stats = { points = #xs * #temps, retries = retried, seconds = os.clock() - t0 },
   }
   result.provenance.notes = result.stamp
@@ -444,16 +430,20 @@ function diagrams.series(opts)
   end
   -- plot.grid and plot.overlay stamp the first map's lines: every map
   -- carries the note for the whole series
-  local stamp = held_stamp(lib, { opts.element, opts.ligand }, temps)
+  local stamp = held_stamp(lib, { opts.element, opts.ligand }, temps, opts, where)
   if stamp then
     for _, m in ipairs(maps) do
       m.stamp = m.stamp or {}
-      for k = #m.stamp, 1, -1 do -- the single-map note is replaced by the series one
-        if m.stamp[k]:find("^log K held at 25") then table.remove(m.stamp, k) end
+      for k = #m.stamp, 1, -1 do -- the single-map notes are replaced by the series ones
+        if m.stamp[k]:find("^log K held at 25") or m.stamp[k]:find("^temperature dependence estimated") then
+          table.remove(m.stamp, k)
+        end
       end
-      m.stamp[#m.stamp + 1] = stamp[1]
       m.stamp_short = m.stamp_short or {}
-      m.stamp_short[stamp[1]] = stamp.short
+      for _, l in ipairs(stamp) do
+        m.stamp[#m.stamp + 1] = l
+        m.stamp_short[l] = stamp.short[l]
+      end
     end
   end
   return maps

@@ -2,7 +2,8 @@
 --  * docs/data-sources.md lists every publication the element files cite and
 --    the species that use each; every loaded species must match at least one
 --    entry of tests/tools/sources_def.lua.
---  * docs/data-checks.md is the table of tests/tools/checks_def.lua's checks.
+--  * docs/data-checks.md is the table of tests/tools/checks_def.lua's checks
+--    followed by the validation of the temperature estimates (estimates_def.lua).
 -- Both are regenerated here in memory and compared with the committed files.
 -- If this test fails after a change to stdlib/elements, the checks or the
 -- source list, run
@@ -11,12 +12,8 @@
 local src = assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR not set")
 local phlox = require "phlox"
 
-local function read(path)
-  local f = assert(io.open(path, "rb"))
-  local t = f:read("a")
-  f:close()
-  return t
-end
+local S = dofile(src .. "/tests/support/init.lua")
+local read = S.files.slurp
 
 local function first_difference(a, b)
   local la, lb, n = {}, {}, 0
@@ -43,7 +40,8 @@ print(("docs/data-sources.md current: %d species, %d publications"):format(data.
 
 local cdefs = dofile(src .. "/tests/tools/checks_def.lua")
 local results, summary = cdefs.run(phlox, cdefs.reference_dir(src))
-want = cdefs.render(results, summary)
+local edefs = dofile(src .. "/tests/tools/estimates_def.lua")
+want = cdefs.render(results, summary) .. "\n" .. edefs.render(edefs.run(phlox))
 have = read(src .. "/docs/data-checks.md")
 assert(have == want, "docs/data-checks.md is stale (run phlox tests/tools/data_checks.lua): " .. first_difference(have, want))
 print(("docs/data-checks.md current: %d checks"):format(summary.total))

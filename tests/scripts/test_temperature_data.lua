@@ -1,80 +1,108 @@
--- test_temperature_data.lua: maps away from 25 C name the species whose log K
--- has no temperature data (held at 25 C), and refuse to be drawn when the
--- study asks for temperature data everywhere (require_temperature_data).
--- Reference: which records lack temperature data is read from the element
--- files themselves (a logk record without dH or logK_T), independently of
--- the numerical test phlox uses.
+-- test_temperature_data.lua: the temperature basis of every record, and the
+-- policy for log K held at 25 C.
+--  1. The basis phlox reports (species.basis) agrees with the records as
+--     written in a user file read here independently (a logk record without
+--     dH, logK_T or estimate is held).
+--  2. A map, rigorous map, speciation, fraction or solubility curve that
+--     would use a held log K away from 25 C stops by default, naming the
+--     species and the two ways on; accept_held_logk = true draws it and
+--     stamps the held species.
+--  3. Estimated species are named with their method in the stamps.
+--  4. The standard library holds nothing from 0 to 300 C: every element's
+--     records have a temperature function, and a map of every element at
+--     300 C runs with the default options.
 local phlox = require "phlox"
-local function check(cond, msg) if not cond then error(msg, 2) end end
+local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
+local check = S.check
 
-local zn = phlox.library { "Zn" }
-
--- the records of Zn.lua with no temperature data, read from the file itself
--- (a data-only Lua table, evaluated here with an empty environment): model
--- "logk" with neither dH nor logK_T
-local src = assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR not set")
-local fh = assert(io.open(src .. "/stdlib/elements/Zn.lua", "rb"))
-local chunk = assert(load(fh:read("a"), "=Zn.lua", "t", {}))
+-- a user file with one record without temperature data (ZnOH^+ with its
+-- 25 C constant from Zn.lua, dH left out on purpose: a test fixture)
+local tmp = os.tmpname()
+local fh = assert(io.open(tmp, "wb"))
+fh:write([[
+return { species = {
+  { formula = "ZnOH^+", model = "logk", reaction = "Zn^2+ + H2O(l) = ZnOH^+ + H^+", logK = -8.96,
+    source = "test fixture: Zn.lua's 25 C constant without its dH" },
+} }
+]])
 fh:close()
-local expected = {}
-for _, r in ipairs(chunk().species) do
-  if r.model == "logk" and r.dH == nil and r.logK_T == nil then expected[#expected + 1] = r.formula end
-end
-table.sort(expected)
-check(#expected >= 3, "Zn.lua should have log K records without temperature data, found " .. #expected)
+local zn = phlox.library { "Zn", user = { tmp } }
+os.remove(tmp)
 
--- 1. the numerical detection agrees with the records
+-- 1. the basis read from the records
+local rec = zn:species("ZnOH^+")
+check(rec.basis == "held", "a logk record without dH, logK_T or estimate is held: " .. tostring(rec.basis))
+check(zn:species("Zn^2+").basis == "estimated" and zn:species("Zn^2+").basis_method:find("Shock and Helgeson", 1, true),
+  "Zn^2+ (HKF set from the SH88 correlations) is estimated by that method")
+check(zn:species("ZnO(s,zincite)").basis == "measured", "zincite has a Cp function: measured")
 local held = phlox.constant_logk(zn, { "Zn" }, 473.15)
-check(table.concat(held, "|") == table.concat(expected, "|"),
-  "constant_logk at 200 C: got " .. table.concat(held, ", ") .. "; records say " .. table.concat(expected, ", "))
+check(table.concat(held, "|") == "ZnOH^+", "constant_logk at 200 C: " .. table.concat(held, ", "))
 check(#phlox.constant_logk(zn, { "Zn" }, 298.15) == 0, "at 25 C nothing is held")
 
--- 2. exact map at 200 C: listed and stamped
-local m = phlox.map { library = zn, element = "Zn", T_C = 200, activity = 1e-6 }
-check(m.constant_logk and table.concat(m.constant_logk, "|") == table.concat(expected, "|"), "map.constant_logk")
-local stamped = false
-for _, line in ipairs(m.stamp or {}) do stamped = stamped or line:find("log K held at 25", 1, true) ~= nil end
-check(stamped, "the map's stamp names the held species")
+-- 2. stop by default, with the species and both ways on in the message
+local function stops(fn, opts, what)
+  local ok, err = pcall(fn, opts)
+  check(not ok, what .. " must stop on a held log K")
+  err = tostring(err)
+  check(err:find("ZnOH^+", 1, true), what .. ": the message names the species: " .. err)
+  check(err:find("accept_held_logk", 1, true) and err:find("user data file", 1, true),
+    what .. ": the message names both ways on: " .. err)
+end
+stops(phlox.map, { library = zn, element = "Zn", T_C = 200 }, "phlox.map")
+stops(phlox.grid_map, { library = zn, element = "Zn", T_C = 200, n = 11 }, "phlox.grid_map")
+stops(phlox.speciate, { library = zn, T_C = 200, totals = { Zn = 1e-6 }, pH = 8 }, "phlox.speciate")
+stops(phlox.fractions, { library = zn, element = "Zn", T_C = 150, range = { 6, 12 }, n = 7 }, "phlox.fractions")
+stops(phlox.solubility, { library = zn, element = "Zn", T_C = { 25, 200 }, range = { 6, 12 }, n = 7 }, "phlox.solubility")
+stops(phlox.series, { library = zn, element = "Zn", T_C = { 25, 200 } }, "phlox.series")
+-- the option this policy replaced is refused with a pointer to the new one
+local okr, errr = pcall(phlox.map, { library = zn, element = "Zn", T_C = 200, require_temperature_data = true })
+check(not okr and tostring(errr):find("accept_held_logk", 1, true), "require_temperature_data is refused: " .. tostring(errr))
+-- at 25 C nothing stops
+check(pcall(phlox.map, { library = zn, element = "Zn", T_C = 25 }), "at 25 C every log K is at its own temperature")
+check(phlox.speciate { library = zn, T_C = 25, totals = { Zn = 1e-6 }, pH = 8 }, "speciation at 25 C")
 
--- 3. require_temperature_data refuses the map and names the species
-local ok, err = pcall(phlox.map, { library = zn, element = "Zn", T_C = 200, require_temperature_data = true })
-check(not ok, "require_temperature_data must refuse a 200 C zinc map")
-check(tostring(err):find("phlox.map", 1, true) and tostring(err):find("Zn(OH)2(aq)", 1, true),
-  "the message names the function and a species: " .. tostring(err))
--- at 25 C the same request is fine
-check(pcall(phlox.map, { library = zn, element = "Zn", T_C = 25, require_temperature_data = true }),
-  "at 25 C every log K is at its own temperature")
--- an element whose records all carry temperature data passes at 200 C
--- (B.lua: borate from a measured log K(T), boric acid with a dissolution dH;
--- Ti.lua no longer qualifies since issue 13 added Ti^2+ from a 25 C potential)
-local bo = phlox.library { "B" }
-check(#phlox.constant_logk(bo, { "B" }, 473.15) == 0, "B.lua: every record has temperature data")
-check(pcall(phlox.map, { library = bo, element = "B", T_C = 200, require_temperature_data = true }),
-  "a B map at 200 C needs no 25 C constant")
-local ti = phlox.library { "Ti" }
-local held_ti = phlox.constant_logk(ti, { "Ti" }, 473.15)
-check(#held_ti == 1 and held_ti[1] == "Ti^2+", "Ti.lua: only Ti^2+ is held at 25 C")
+-- accepted: drawn, listed and stamped
+local m = phlox.map { library = zn, element = "Zn", T_C = 200, accept_held_logk = true }
+check(m.constant_logk and m.constant_logk[1] == "ZnOH^+", "map.constant_logk lists the held species")
+local function stamped(lines, text)
+  for _, l in ipairs(lines or {}) do if l:find(text, 1, true) then return l end end
+end
+check(stamped(m.stamp, "log K held at 25 °C"), "the map's stamp names the held species")
+local g = phlox.grid_map { library = zn, element = "Zn", T_C = 200, n = 11, accept_held_logk = true }
+check(g.constant_logk and #g.constant_logk == 1, "grid_map.constant_logk")
+local sp = phlox.speciate { library = zn, T_C = 200, totals = { Zn = 1e-6 }, pH = 8, accept_held_logk = true }
+check(sp and stamped(sp.stamp, "ZnOH^+"), "speciation stamps the held species")
+local fr = phlox.fractions { library = zn, element = "Zn", T_C = 150, range = { 6, 12 }, n = 7, accept_held_logk = true }
+check(stamped(fr.stamp, "ZnOH^+"), "fraction curves name the held species")
 
--- 4. rigorous maps: stamped too, and refused before any solve
-local g = phlox.grid_map { library = zn, element = "Zn", T_C = 200, n = 11 }
-check(g.constant_logk and #g.constant_logk == #expected, "grid_map.constant_logk")
-local ok2, err2 = pcall(phlox.grid_map, { library = zn, element = "Zn", T_C = 200, n = 11,
-                                          require_temperature_data = true })
-check(not ok2 and tostring(err2):find("phlox.grid_map", 1, true), "grid_map refuses: " .. tostring(err2))
+-- 3. estimated species are named with their method (the stdlib's Zn(OH)3^-)
+local zs = phlox.library { "Zn" }
+local m2 = phlox.map { library = zs, element = "Zn", T_C = 200 }
+local line = stamped(m2.stamp, "temperature dependence estimated")
+check(line and line:find("isocoulombic", 1, true), "the stamp names the isocoulombic species: " .. tostring(line))
+check(m2.estimated_logk and #m2.estimated_logk > 0, "map.estimated_logk")
+check(not stamped(phlox.map { library = zs, element = "Zn", T_C = 25 }.stamp, "estimated"),
+  "at 25 C no estimate is used")
 
--- 5. a ligand's held species count too (Cl.lua's FeCl^+ in an Fe-Cl map)
-local fecl = phlox.library { "Fe", "Cl" }
-local mf = phlox.map { library = fecl, element = "Fe", ligand = "Cl", ligand_activity = 0.1, T_C = 150 }
-local has = false
-for _, f in ipairs(mf.constant_logk or {}) do has = has or f == "FeCl^+" end
-check(has, "FeCl^+ (Cl.lua, no temperature data) is named in an Fe-Cl map at 150 C")
--- 6. fraction and solubility curves: stamped, and refused on request
-local fr = phlox.fractions { library = zn, element = "Zn", T_C = 150, range = { 6, 12 }, n = 7 }
-check(fr.stamp and fr.stamp[1]:find("Zn(OH)2(aq)", 1, true), "fraction curves at 150 C name the held species")
-local ok3, err3 = pcall(phlox.fractions, { library = zn, element = "Zn", T_C = 150, range = { 6, 12 }, n = 7,
-                                           require_temperature_data = true })
-check(not ok3 and tostring(err3):find("require_temperature_data", 1, true), "fractions refuse: " .. tostring(err3))
-local ok4, err4 = pcall(phlox.solubility, { library = zn, element = "Zn", T_C = { 25, 200 }, range = { 6, 12 }, n = 7,
-                                            require_temperature_data = true })
-check(not ok4 and tostring(err4):find("Zn(OH)2(aq)", 1, true), "solubility refuses: " .. tostring(err4))
-print("test_temperature_data: all checks passed")
+-- 4. the standard library: nothing held anywhere from 0 to 300 C
+local all = phlox.available_elements()
+local spec = { "CN" } -- the ligand groups' files too (phlox.groups_in)
+for _, e in ipairs(all) do spec[#spec + 1] = e end
+local lib = phlox.library(spec)
+for _, tc in ipairs { 0, 50, 100, 150, 200, 250, 300 } do
+  local h = phlox.constant_logk(lib, spec, tc + 273.15)
+  check(#h == 0, ("standard library at %g C holds %d species at 25 C: %s"):format(tc, #h, table.concat(h, ", ")))
+end
+local n = 0
+for _, s in ipairs(lib:list()) do
+  check(s.basis ~= "held", s.formula .. " is held")
+  if s.basis == "estimated" then check(s.basis_method and #s.basis_method > 0, s.formula .. " names its method") end
+  n = n + 1
+end
+for _, el in ipairs(all) do
+  if el ~= "HO" and el ~= "H" and el ~= "O" then
+    local ok, err = pcall(phlox.map, { library = phlox.library { el }, element = el, T_C = 300 })
+    check(ok, el .. ": a 300 C map with the default options: " .. tostring(err))
+  end
+end
+print(("test_temperature_data: all checks passed (%d species, none held)"):format(n))

@@ -2,7 +2,9 @@
 -- standard library:
 --   docs/data-checks.md   every check against published values (definitions:
 --                         tests/tools/checks_def.lua, shared with the test
---                         tests/scripts/test_stdlib_values.lua)
+--                         tests/scripts/test_stdlib_values.lua), then the
+--                         validation of the temperature estimates
+--                         (tests/tools/estimates_def.lua)
 --   docs/data-sources.md  the publications cited by stdlib/elements/*.lua and
 --                         the species that use each (tests/tools/sources_def.lua)
 -- Run from anywhere:   phlox tests/tools/data_checks.lua
@@ -25,7 +27,8 @@ end
 
 local checks = dofile(root .. "/tests/tools/checks_def.lua")
 local results, summary = checks.run(phlox, checks.reference_dir(root))
-write("docs/data-checks.md", checks.render(results, summary))
+local estimates = dofile(root .. "/tests/tools/estimates_def.lua")
+write("docs/data-checks.md", checks.render(results, summary) .. "\n" .. estimates.render(estimates.run(phlox)))
 io.stderr:write(("docs/data-checks.md: %d checks, %d pass, %d known differences, %d fail\n"):format(
   summary.total, summary.pass, summary.known, summary.fail))
 

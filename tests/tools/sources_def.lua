@@ -154,16 +154,16 @@ end
 --- Load every element file and gather species per source.
 -- Returns { species = n, files = {name = count}, by_source = {id = {file = {formulas}}},
 --           counts = {id = n}, unmatched = {"formula (file)"} }
--- where a record's log K is compared with its 25 C value: 200 C at 20 bar
--- (liquid water; saturation is 15.5 bar)
-local T_PROBE_K, P_PROBE_BAR = 473.15, 20.0
+-- where the held species are listed: 200 C (away from 25 C; the basis of a
+-- record does not depend on T)
+local T_PROBE_K = 473.15
 
 function M.collect(phlox)
   local lib = phlox.library(phlox.available_elements())
   local data = { species = 0, files = {}, by_source = {}, counts = {}, unmatched = {}, read = {},
-                 held = {}, nheld = 0 }
+                 held = {}, nheld = 0, basis = {}, estimated = {}, nocp = {} }
   local held = {}
-  for _, f in ipairs(phlox.constant_logk(lib, phlox.available_elements(), T_PROBE_K, P_PROBE_BAR)) do held[f] = true end
+  for _, f in ipairs(phlox.constant_logk(lib, phlox.available_elements(), T_PROBE_K)) do held[f] = true end
   for _, s in ipairs(lib:list()) do
     data.species = data.species + 1
     local file = file_of(s)
@@ -180,8 +180,18 @@ function M.collect(phlox)
     if (s.source or ""):find("%f[%a]read%f[%A]") then
       data.read[#data.read + 1] = { formula = s.formula, file = file }
     end
-    -- a log K record with no temperature data (no dH, no logK_T) keeps its
-    -- 25 C value at every temperature (phlox.constant_logk, as maps use)
+    -- the temperature basis of the record (species.basis, as maps use it)
+    data.basis[s.basis] = (data.basis[s.basis] or 0) + 1
+    if s.basis == "estimated" then
+      local m = s.basis_method or "?"
+      data.estimated[m] = data.estimated[m] or {}
+      data.estimated[m][file] = data.estimated[m][file] or {}
+      table.insert(data.estimated[m][file], s.formula)
+    elseif s.basis == "no Cp" then
+      data.nocp[#data.nocp + 1] = "`" .. s.formula .. "` (" .. file .. ")"
+    end
+    -- a log K record with no temperature data (no dH, logK_T or estimate)
+    -- keeps its 25 C value at every temperature (phlox.constant_logk)
     if held[s.formula] then
       data.held[file] = data.held[file] or {}
       table.insert(data.held[file], s.formula)
@@ -273,18 +283,40 @@ function M.render(data)
     for _, s in ipairs(data.read) do w("- `", s.formula, "` (", s.file, ")") end
   end
   w("")
-  w("## Temperature coverage: log K held at 25 C")
+  w("## Temperature basis")
   w("")
-  w("These species are defined by a log K at 25 C with no reaction enthalpy and no")
-  w("temperature function, so phlox uses their 25 C constant at every temperature.")
-  w("A map away from 25 C names those of its element (and ligand) in a stamp line and")
-  w("in `map.constant_logk`. Most are hydrolysis and complex species: their log K")
-  w("usually changes by several units between 25 and 300 C, so high-temperature maps")
-  w("that depend on them are not reliable until temperature data from a primary")
-  w("source are added (docs/other-diagrams.md, \"High-temperature diagrams from the")
-  w("literature\").")
+  w("Every record says where its temperature dependence comes from")
+  w("(`species.basis`, `phlox list`): *measured* (a published HKF set, Cp function,")
+  w("reaction enthalpy or log K(T)), *estimated* by a named method (docs/thermo.md,")
+  w("\"Temperature estimates\"; its errors against measured data are at the end of")
+  w("docs/data-checks.md), *held* (a log K with no temperature data: maps, curves and")
+  w("speciation away from 25 C stop unless `accept_held_logk = true`), or *no Cp*")
+  w("(a solid, liquid or gas whose Cp is not known and taken as 0).")
   w("")
-  w(("%d of %d species:"):format(data.nheld, data.species))
+  local bases = {}
+  for b, n in pairs(data.basis) do bases[#bases + 1] = ("%s %d"):format(b, n) end
+  table.sort(bases)
+  w(("%d species: %s."):format(data.species, table.concat(bases, ", ")))
+  w("")
+  local methods = {}
+  for m in pairs(data.estimated) do methods[#methods + 1] = m end
+  table.sort(methods)
+  for _, m in ipairs(methods) do
+    w("### Estimated: ", m)
+    w("")
+    local fs = {}
+    for f in pairs(data.estimated[m]) do fs[#fs + 1] = f end
+    table.sort(fs)
+    for _, f in ipairs(fs) do
+      local list = {}
+      for _, formula in ipairs(data.estimated[m][f]) do list[#list + 1] = "`" .. formula .. "`" end
+      w("- ", f, " (", tostring(#data.estimated[m][f]), "): ", table.concat(list, ", "))
+    end
+    w("")
+  end
+  w("### Held at 25 C")
+  w("")
+  w(("%d of %d species%s"):format(data.nheld, data.species, data.nheld > 0 and ":" or "."))
   w("")
   local hf = {}
   for f in pairs(data.held) do hf[#hf + 1] = f end
@@ -294,6 +326,10 @@ function M.render(data)
     for _, formula in ipairs(data.held[f]) do list[#list + 1] = "`" .. formula .. "`" end
     w("- ", f, " (", tostring(#data.held[f]), "): ", table.concat(list, ", "))
   end
+  if #hf > 0 then w("") end
+  w("### No Cp (taken as 0)")
+  w("")
+  w(#data.nocp > 0 and table.concat(data.nocp, ", ") or "none")
   w("")
   if #data.unmatched > 0 then
     w("## Species whose source matches no entry")

@@ -42,6 +42,20 @@ static int has(const px_data_problems *p, ...)
     return 0;
 }
 
+/* each bad[i][0] inserted into template (one %s) must fail the check with a
+ * problem containing prefix and bad[i][1] */
+static void expect_errors(px_data_problems *p, const char *template, const char *const (*bad)[2],
+                          size_t n, const char *name, const char *prefix)
+{
+    for (size_t i = 0; i < n; i++) {
+        char src[768];
+        snprintf(src, sizeof src, template, bad[i][0]);
+        px_data_problems_clear(p);
+        assert_int_equal(px_data_check_buffer(NULL, src, strlen(src), name, NULL, p), PX_EDATA);
+        assert_true(has(p, prefix, bad[i][1], NULL));
+    }
+}
+
 static void test_good_zn_si_conversion(void **state)
 {
     (void)state;
@@ -267,6 +281,113 @@ static void test_logk_reaction_forms(void **state)
     px_data_problems_clear(p);
     assert_int_equal(px_data_check_buffer(NULL, bad, strlen(bad), "r.lua", NULL, p), PX_EDATA);
     assert_true(has(p, "r.lua:2: ZnO(s): reaction: the species ZnO(s) does not appear in its own reaction", NULL));
+    px_data_problems_free(p);
+}
+
+
+/* the temperature basis of logk records and the 'estimate' field
+ * (docs/element-files.md): held without data, estimated with an
+ * isocoulombic estimate, measured with dH; errors name the field */
+static void test_logk_estimate_basis(void **state)
+{
+    (void)state;
+    const char *ok = "return { element = 'Zn', species = {\n"
+                     "{ formula = 'Zn^2+', model = 'logk', reaction = 'Zn(s) + 2 H^+ = Zn^2+ + H2(g)',"
+                     " logK = 25.79, dH = -153.9, source = 's' },\n"
+                     "{ formula = 'ZnOH^+', model = 'logk', reaction = 'Zn^2+ + H2O(l) = ZnOH^+ + H^+',"
+                     " logK = -8.96, estimate = 'isocoulombic', source = 's' },\n"
+                     "{ formula = 'Zn(OH)2(aq)', model = 'logk', reaction = 'Zn^2+ + 2 H2O(l) = Zn(OH)2(aq) + 2 H^+',"
+                     " logK = -17.8, source = 's' } } }\n";
+    px_db *db = px_db_new();
+    px_data_problems *p = px_data_problems_new();
+    int st = px_data_load_buffer(db, ok, strlen(ok), "e.lua", NULL, p);
+    if (st != PX_OK) dump(p);
+    assert_int_equal(st, PX_OK);
+    const px_species *a = px_db_find(db, "Zn^2+");
+    const px_species *b = px_db_find(db, "ZnOH^+");
+    const px_species *c = px_db_find(db, "Zn(OH)2(aq)");
+    assert_int_equal(a->tbasis, PX_TBASIS_MEASURED);
+    assert_int_equal(b->tbasis, PX_TBASIS_ESTIMATED);
+    assert_int_equal(b->logk.estimate, PX_LOGK_EST_ISOCOULOMBIC);
+    assert_string_equal(b->tmethod, PX_METHOD_ISOCOULOMBIC);
+    assert_int_equal(c->tbasis, PX_TBASIS_HELD);
+    assert_string_equal(c->tmethod, "");
+    /* phlox list tags the estimated and the held record */
+    FILE *out = tmpfile();
+    assert_non_null(out);
+    assert_int_equal(px_data_list_write(db, "Zn", out), 3);
+    rewind(out);
+    char line[512];
+    int est = 0, held = 0;
+    while (fgets(line, sizeof line, out)) {
+        if (strstr(line, "ZnOH^+") && strstr(line, "[estimated: isocoulombic (Gu et al. 1994)]")) est = 1;
+        if (strstr(line, "Zn(OH)2(aq)") && strstr(line, "[held at 25 C]")) held = 1;
+    }
+    fclose(out);
+    assert_true(est && held);
+    px_db_free(db);
+
+    static const char *const bad[][2] = {
+        {"estimate = 'vant-hoff'", "estimate: unknown estimation method 'vant-hoff'"},
+        {"estimate = 'isocoulombic', dH = 13.4", "estimate: an estimate stands in for missing temperature data: this species has dH"},
+        {"estimate = { Cp = 1 }", "estimate: a logk species names its estimation method"},
+    };
+    expect_errors(p,
+                  "return { element = 'Zn', species = {\n"
+                  "{ formula = 'ZnOH^+', model = 'logk', reaction = 'Zn^2+ + H2O(l) = ZnOH^+ + H^+',"
+                  " logK = -8.96, %s, source = 's' } } }\n",
+                  bad, sizeof bad / sizeof bad[0], "e.lua", "e.lua:2: ZnOH^+: ");
+    px_data_problems_free(p);
+}
+
+
+/* cp estimate = { Cp = "kopp", from = {...} }: resolved from a component of
+ * the same file (Kopp 1865 atomic heats for the rest, by hand: NiO a = 45
+ * (a test value) + H2O 2 x 2.3 + 4.0 cal), basis estimated; errors named */
+static void test_cp_kopp_estimate(void **state)
+{
+    (void)state;
+    const char *ok = "return { element = 'Ni', species = {\n"
+                     "{ formula = 'NiO(s)', model = 'cp', G = -211.7, H = -239.7, S = 37.99, cp = { a = 45, b = 0.01 },"
+                     " source = 's' },\n"
+                     "{ formula = 'Ni(OH)2(s)', model = 'cp', G = -447.2, H = -529.7, S = 88,"
+                     " estimate = { Cp = 'kopp', from = { ['NiO(s)'] = 1 } }, source = 's' },\n"
+                     "{ formula = 'Ni(OH)2(am)', model = 'cp', G = -447.2, H = -529.7, S = 88,"
+                     " estimate = { Cp = 'kopp' }, source = 's' } } }\n";
+    px_db *db = px_db_new();
+    px_data_problems *p = px_data_problems_new();
+    int st = px_data_load_buffer(db, ok, strlen(ok), "k.lua", NULL, p);
+    if (st != PX_OK) dump(p);
+    assert_int_equal(st, PX_OK);
+    assert_int_equal(px_data_problems_count(p), 0); /* no "Cp taken as 0" warning */
+    const px_species *a = px_db_find(db, "Ni(OH)2(s)");
+    assert_close(a->cp.a, 45 + (2 * 2.3 + 4.0) * 4.184, 1e-12, 0);
+    assert_close(a->cp.b, 0.01, 1e-12, 0);
+    assert_int_equal(a->tbasis, PX_TBASIS_ESTIMATED);
+    const px_species *b = px_db_find(db, "Ni(OH)2(am)");
+    assert_close(b->cp.a, (6.2 + 2 * 4.0 + 2 * 2.3) * 4.184, 1e-12, 0);
+    px_db_free(db);
+
+    static const char *const bad[][2] = {
+        {"estimate = { Cp = 'dulong' }", "estimate.Cp: unknown estimation method 'dulong'"},
+        {"estimate = { Cp = 'kopp' }, cp = { a = 80 }", "estimate: give either a published 'cp' or an estimate"},
+        {"estimate = { Cp = 'kopp', from = { ['NiO(s)'] = 2 } }", "the components hold 1 more Ni than the species"},
+        {"estimate = { Cp = 'kopp', from = { ['NiO(s)'] = -1 } }", "estimate.from: expected"},
+        {"estimate = { from = { ['NiO(s)'] = 1 } }", "estimate.Cp: name the method"},
+    };
+    expect_errors(p,
+                  "return { element = 'Ni', species = {\n"
+                  "{ formula = 'NiO(s)', model = 'cp', G = -211.7, H = -239.7, S = 37.99, cp = { a = 45 },"
+                  " source = 's' },\n"
+                  "{ formula = 'Ni(OH)2(s)', model = 'cp', G = -447.2, H = -529.7, S = 88, %s, source = 's' } } }\n",
+                  bad, sizeof bad / sizeof bad[0], "k.lua", "k.lua:3: Ni(OH)2(s): ");
+    /* a component that is not loaded: a warning, Cp stays 0 */
+    const char *lone = "return { element = 'Ni', species = {\n"
+                       "{ formula = 'Ni(OH)2(s)', model = 'cp', G = -447.2, H = -529.7, S = 88,"
+                       " estimate = { Cp = 'kopp', from = { ['NiO(s)'] = 1 } }, source = 's' } } }\n";
+    px_data_problems_clear(p);
+    assert_int_equal(px_data_check_buffer(NULL, lone, strlen(lone), "k.lua", NULL, p), PX_OK);
+    assert_true(has(p, "warning", "NiO(s) is not loaded", NULL));
     px_data_problems_free(p);
 }
 
@@ -534,6 +655,8 @@ int main(void)
         cmocka_unit_test(test_hkf_estimate_fe2),
         cmocka_unit_test(test_logk_species),
         cmocka_unit_test(test_logk_reaction_forms),
+        cmocka_unit_test(test_logk_estimate_basis),
+        cmocka_unit_test(test_cp_kopp_estimate),
         cmocka_unit_test(test_element_filter),
         cmocka_unit_test(test_bad_fixtures),
         cmocka_unit_test(test_consistency_slips),

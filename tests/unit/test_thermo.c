@@ -12,6 +12,7 @@
  *   - finite differences: -dG/dT = S, dG/dP = V, -T d2G/dT2 = Cp (exact
  *     thermodynamic identities). */
 #include "px_test.h"
+#include "support/px_csv.h"
 
 #include <stdlib.h>
 #include <string.h>
@@ -21,71 +22,6 @@
 #include "thermo/thermo.h"
 
 #define CAL PX_CAL
-
-/* ------------------------------------------------------------ CSV helpers */
-#define MAXF 24
-typedef struct csv_row {
-    char buf[2048];
-    char *f[MAXF];
-    int n;
-} csv_row;
-
-/* split one CSV line in place (double-quoted fields may hold commas) */
-static int csv_read(FILE *fp, csv_row *r)
-{
-    if (!fgets(r->buf, sizeof r->buf, fp))
-        return 0;
-    size_t len = strlen(r->buf);
-    while (len && (r->buf[len - 1] == '\n' || r->buf[len - 1] == '\r'))
-        r->buf[--len] = '\0';
-    r->n = 0;
-    char *p = r->buf;
-    while (r->n < MAXF) {
-        char *out = p, *start = p;
-        int q = 0;
-        if (*p == '"') {
-            q = 1;
-            p++;
-        }
-        while (*p) {
-            if (q && *p == '"' && p[1] == '"') {
-                *out++ = '"';
-                p += 2;
-                continue;
-            }
-            if (q && *p == '"') {
-                q = 0;
-                p++;
-                continue;
-            }
-            if (!q && *p == ',')
-                break;
-            *out++ = *p++;
-        }
-        int end = *p == '\0';
-        *out = '\0';
-        r->f[r->n++] = start;
-        if (end)
-            break;
-        p++;
-    }
-    return 1;
-}
-
-static FILE *ref_open(const char *rel)
-{
-    return px_ref_open(rel);
-}
-
-static int col(const csv_row *hdr, const char *name)
-{
-    for (int i = 0; i < hdr->n; i++)
-        if (!strcmp(hdr->f[i], name))
-            return i;
-    print_error("no column %s\n", name);
-    fail();
-    return -1;
-}
 
 /* ------------------------------------------------------------ reactions */
 static void test_reaction_parse(void **state)
@@ -262,19 +198,19 @@ typedef struct hkf_row {
 
 static int load_hkf(hkf_row *rows, int max)
 {
-    FILE *fp = ref_open("hkf/hkf_parameters.csv");
-    csv_row hdr, r;
-    assert_true(csv_read(fp, &hdr));
-    int ci[] = {col(&hdr, "a1"), col(&hdr, "a2"), col(&hdr, "a3"), col(&hdr, "a4"),
-                col(&hdr, "c1"), col(&hdr, "c2"), col(&hdr, "omega")};
+    FILE *fp = px_ref_open("hkf/hkf_parameters.csv");
+    px_csv_row hdr, r;
+    assert_true(px_csv_next(fp, &hdr));
+    int ci[] = {px_csv_col(&hdr, "a1"), px_csv_col(&hdr, "a2"), px_csv_col(&hdr, "a3"), px_csv_col(&hdr, "a4"),
+                px_csv_col(&hdr, "c1"), px_csv_col(&hdr, "c2"), px_csv_col(&hdr, "omega")};
     /* the papers' printed scaling (hkf/README.md) */
     const double scale[] = {0.1, 1e2, 1, 1e4, 1, 1e4, 1e5};
-    int csp = col(&hdr, "species"), cg = col(&hdr, "dGf_cal_mol"), ch = col(&hdr, "dHf_cal_mol"),
-        cs = col(&hdr, "S_cal_molK"), ccp = col(&hdr, "Cp_25C_cal_molK"),
-        cv = col(&hdr, "V_25C_cm3_mol"), cc = col(&hdr, "confidence"),
-        csrc = col(&hdr, "source");
+    int csp = px_csv_col(&hdr, "species"), cg = px_csv_col(&hdr, "dGf_cal_mol"), ch = px_csv_col(&hdr, "dHf_cal_mol"),
+        cs = px_csv_col(&hdr, "S_cal_molK"), ccp = px_csv_col(&hdr, "Cp_25C_cal_molK"),
+        cv = px_csv_col(&hdr, "V_25C_cm3_mol"), cc = px_csv_col(&hdr, "confidence"),
+        csrc = px_csv_col(&hdr, "source");
     int n = 0;
-    while (n < max && csv_read(fp, &r)) {
+    while (n < max && px_csv_next(fp, &r)) {
         if (r.n < hdr.n)
             continue;
         hkf_row *h = &rows[n];
@@ -505,13 +441,13 @@ static void test_pkw(void **state)
     px_reaction r;
     char msg[128];
     assert_int_equal(px_reaction_parse_balanced("H2O(l) = H^+ + OH^-", &r, msg, sizeof msg), PX_OK);
-    FILE *fp = ref_open("water.csv");
-    csv_row hdr, row;
-    assert_true(csv_read(fp, &hdr));
-    int cg = col(&hdr, "group"), ct = col(&hdr, "T_K"), cq = col(&hdr, "quantity"),
-        cv = col(&hdr, "value");
+    FILE *fp = px_ref_open("water.csv");
+    px_csv_row hdr, row;
+    assert_true(px_csv_next(fp, &hdr));
+    int cg = px_csv_col(&hdr, "group"), ct = px_csv_col(&hdr, "T_K"), cq = px_csv_col(&hdr, "quantity"),
+        cv = px_csv_col(&hdr, "value");
     int n = 0;
-    while (csv_read(fp, &row)) {
+    while (px_csv_next(fp, &row)) {
         if (row.n < hdr.n || strcmp(row.f[cg], "saturation_liquid_computed") ||
             strcmp(row.f[cq], "pKw"))
             continue;
@@ -571,12 +507,12 @@ static px_db *db_from_gibbs(void)
 {
     px_db *db = px_db_new();
     assert_int_equal(px_db_add_builtins(db), PX_OK); /* H2O(l) = the NBS row */
-    FILE *fp = ref_open("gibbs_25C.csv");
-    csv_row hdr, r;
-    assert_true(csv_read(fp, &hdr));
-    int cs = col(&hdr, "species"), cst = col(&hdr, "state"), cg = col(&hdr, "dGf_kJ_mol"),
-        ch = col(&hdr, "dHf_kJ_mol"), cS = col(&hdr, "S_J_molK"), csrc = col(&hdr, "source");
-    while (csv_read(fp, &r)) {
+    FILE *fp = px_ref_open("gibbs_25C.csv");
+    px_csv_row hdr, r;
+    assert_true(px_csv_next(fp, &hdr));
+    int cs = px_csv_col(&hdr, "species"), cst = px_csv_col(&hdr, "state"), cg = px_csv_col(&hdr, "dGf_kJ_mol"),
+        ch = px_csv_col(&hdr, "dHf_kJ_mol"), cS = px_csv_col(&hdr, "S_J_molK"), csrc = px_csv_col(&hdr, "source");
+    while (px_csv_next(fp, &r)) {
         if (r.n < hdr.n || !strstr(r.f[csrc], "Wagman"))
             continue; /* one table consistently: the NBS 1982 rows */
         char text[64];
@@ -633,12 +569,12 @@ static void test_standard_potentials(void **state)
     };
     px_db *db = db_from_gibbs();
     px_thermo_ws *ws = px_thermo_ws_new(PX_DIELECTRIC_R8_97);
-    FILE *fp = ref_open("standard_potentials.csv");
-    csv_row hdr, r;
-    assert_true(csv_read(fp, &hdr));
-    int cc = col(&hdr, "couple"), ce = col(&hdr, "E0_V_SHE_25C");
+    FILE *fp = px_ref_open("standard_potentials.csv");
+    px_csv_row hdr, r;
+    assert_true(px_csv_next(fp, &hdr));
+    int cc = px_csv_col(&hdr, "couple"), ce = px_csv_col(&hdr, "E0_V_SHE_25C");
     int found = 0;
-    while (csv_read(fp, &r)) {
+    while (px_csv_next(fp, &r)) {
         int want = 0;
         for (size_t i = 0; i < sizeof couples / sizeof couples[0]; i++)
             if (!strcmp(couples[i], r.f[cc]))
@@ -755,6 +691,126 @@ static void test_cp_model(void **state)
 }
 
 /* ------------------------------------------------------------ LOGK model */
+
+/* The isocoulombic estimate (Gu, Gammons and Bloom 1994; docs/thermo.md):
+ * the number of water ionisations for reactions worked out by hand, the
+ * water ionisation itself reproduced exactly (R = W gives R' = 0), a
+ * record's G, S, Cp, V consistent by finite differences, and the
+ * temperature basis derived from a record's fields. */
+static void test_isocoulombic(void **state)
+{
+    (void)state;
+    static const struct { const char *rx; double n; } cases[] = {
+        {"Zn^2+ + H2O(l) = ZnOH^+ + H^+", 0},          /* 2+ | 1+, 1+ */
+        {"Ag^+ + Cl^- = AgCl(aq)", 1},                 /* + H2O = H+ + OH- */
+        {"Zn^2+ + 3 H2O(l) = Zn(OH)3^- + 3 H^+", -1},  /* Zn2+ + 2 H2O + OH- = Zn(OH)3- + 2 H+ */
+        {"Zn^2+ + 4 H2O(l) = Zn(OH)4^2- + 4 H^+", -2},
+        {"Zn^2+ + 4 NH3(aq) = Zn(NH3)4^2+", 0},
+        {"Fe^3+ + e- = Fe^2+", 0},                     /* e- = 1/2 H2 - H+: 3+ | 2+, 1+ */
+        {"H2O(l) = H^+ + OH^-", -1},
+    };
+    px_reaction r;
+    char msg[128];
+    for (size_t i = 0; i < sizeof cases / sizeof cases[0]; i++) {
+        assert_int_equal(px_reaction_parse(cases[i].rx, &r, msg, sizeof msg), PX_OK);
+        double n = NAN;
+        assert_int_equal(px_reaction_isocoulombic_n(&r, &n), PX_OK);
+        if (n != cases[i].n) print_error("%s: n = %g\n", cases[i].rx, n);
+        assert_true(n == cases[i].n);
+    }
+
+    px_db *db = db_from_hkf();
+    px_thermo_ws *ws = px_thermo_ws_new(PX_DIELECTRIC_R8_97);
+    /* R = W: the estimate returns phlox's own log Kw at every T */
+    assert_int_equal(px_reaction_parse_balanced("H2O(l) = H^+ + OH^-", &r, msg, sizeof msg), PX_OK);
+    double kw25, kw, est;
+    assert_int_equal(px_reaction_logK(ws, db, &r, PX_TR, PX_PR, &kw25), PX_OK);
+    assert_int_equal(px_reaction_logK(ws, db, &r, 573.15, 100, &kw), PX_OK);
+    assert_int_equal(px_isocoulombic_logK(ws, db, &r, kw25, 573.15, 100, &est), PX_OK);
+    assert_close(est, kw, 0, 1e-9);
+    /* a record: NaCl(aq) from Na+ + Cl- with log K 0.5 (invented demo value,
+     * for the consistency of G, S, Cp, V only) */
+    px_species x = mk("NaCl(aq)", PX_MODEL_LOGK, NAN, NAN, NAN);
+    snprintf(x.logk.reaction, sizeof x.logk.reaction, "Na^+ + Cl^- = NaCl(aq)");
+    x.logk.logK25 = 0.5; /* invented demo value */
+    x.logk.estimate = PX_LOGK_EST_ISOCOULOMBIC;
+    assert_int_equal(px_db_add(db, &x), PX_OK);
+    const px_species *xs = px_db_find(db, "NaCl(aq)");
+    assert_int_equal(xs->tbasis, PX_TBASIS_ESTIMATED);
+    assert_string_equal(xs->tmethod, PX_METHOD_ISOCOULOMBIC);
+    check_fd(ws, db, xs, 373.15, 50);
+    check_fd(ws, db, xs, 573.15, 150);
+    /* its formation log K at 300 C: (0.5 + log Kw(25)) Tr/T - log Kw(300) (n = 1) */
+    assert_int_equal(px_reaction_parse_balanced("Na^+ + Cl^- = NaCl(aq)", &r, msg, sizeof msg), PX_OK);
+    double lk;
+    assert_int_equal(px_reaction_logK(ws, db, &r, 573.15, 100, &lk), PX_OK);
+    assert_int_equal(px_reaction_parse_balanced("H2O(l) = H^+ + OH^-", &r, msg, sizeof msg), PX_OK);
+    double kw25b;
+    assert_int_equal(px_reaction_logK(ws, db, &r, PX_TR, PX_PR, &kw25b), PX_OK);
+    assert_close(lk, (0.5 + kw25b) * PX_TR / 573.15 - kw, 0, 1e-9);
+
+    /* basis from the fields */
+    px_species y = mk("KCl(aq)", PX_MODEL_LOGK, NAN, NAN, NAN);
+    const char *m = NULL;
+    assert_int_equal(px_species_tbasis(&y, &m), PX_TBASIS_HELD);
+    assert_string_equal(m, "");
+    y.logk.dH = 1000;
+    assert_int_equal(px_species_tbasis(&y, NULL), PX_TBASIS_MEASURED);
+    px_species z = mk("ZnO(s)", PX_MODEL_CP, -320.5e3, -350.5e3, 43.65);
+    assert_int_equal(px_species_tbasis(&z, NULL), PX_TBASIS_NO_CP);
+    z.cp.a = 45.3;
+    assert_int_equal(px_species_tbasis(&z, NULL), PX_TBASIS_MEASURED);
+    assert_string_equal(px_tbasis_name(PX_TBASIS_HELD), "held");
+    px_thermo_ws_free(ws);
+    px_db_free(db);
+}
+
+
+/* Kopp-Neumann additivity (Kopp 1865, atomic heats from memory of Perry's
+ * handbook table, docs/thermo.md), worked by hand: Ni(OH)2 from atoms =
+ * 6.2 + 2 x 4.0 + 2 x 2.3 = 18.8 cal/(mol K); gypsum from anhydrite (a Cp
+ * polynomial) + 2 H2O = anhydrite + 2 x (2 x 2.3 + 4.0) cal; components
+ * holding more of an element than the species are refused. */
+static void test_kopp(void **state)
+{
+    (void)state;
+    px_formula f, comp[2];
+    assert_int_equal(px_formula_parse("Ni(OH)2(s)", &f), PX_OK);
+    px_cp_params out;
+    memset(&out, 0, sizeof out);
+    assert_int_equal(px_cp_kopp(&f, 0, NULL, NULL, NULL, &out, NULL, 0), PX_OK);
+    assert_close(out.a, 18.8 * CAL, 1e-12, 0);
+    assert_true(out.b == 0 && out.c == 0 && out.d == 0 && out.e == 0);
+    assert_close(px_kopp_atomic_cp(6), 1.8 * CAL, 1e-12, 0);
+    assert_close(px_kopp_atomic_cp(16), 5.4 * CAL, 1e-12, 0);
+    assert_close(px_kopp_atomic_cp(26), 6.2 * CAL, 1e-12, 0);
+    assert_true(isnan(px_kopp_atomic_cp(0)));
+
+    assert_int_equal(px_formula_parse("CaSO4*2H2O(s,gypsum)", &f), PX_OK);
+    assert_int_equal(px_formula_parse("CaSO4(s,anhydrite)", &comp[0]), PX_OK);
+    px_cp_params anh = {.a = 70.21, .b = 98.74e-3, .c = 0, .d = 0, .e = 0}; /* coefficients only */
+    double one = 1;
+    assert_int_equal(px_cp_kopp(&f, 1, comp, &one, &anh, &out, NULL, 0), PX_OK);
+    assert_close(out.a, 70.21 + 2 * (2 * 2.3 + 4.0) * CAL, 1e-12, 0);
+    assert_close(out.b, 98.74e-3, 1e-12, 0);
+
+    char msg[128];
+    assert_int_equal(px_formula_parse("Fe3O4(s)", &f), PX_OK);
+    assert_int_equal(px_formula_parse("Fe2O3(s)", &comp[0]), PX_OK);
+    double onehalf = 1.5;
+    assert_int_equal(px_cp_kopp(&f, 1, comp, &onehalf, &anh, &out, msg, sizeof msg), PX_EDATA);
+    assert_non_null(strstr(msg, "0.5 more O"));
+    assert_int_equal(px_formula_parse("Zn^2+", &f), PX_OK);
+    assert_int_equal(px_cp_kopp(&f, 0, NULL, NULL, NULL, &out, msg, sizeof msg), PX_EDATA);
+    /* basis */
+    px_species k = mk("Ni(OH)2(s)", PX_MODEL_CP, -447.2e3, -529.7e3, 88);
+    k.cp.a = 18.8 * CAL;
+    k.cp.estimate = PX_CP_EST_KOPP;
+    const char *m = NULL;
+    assert_int_equal(px_species_tbasis(&k, &m), PX_TBASIS_ESTIMATED);
+    assert_string_equal(m, PX_METHOD_KOPP);
+}
+
 static void test_logk_model(void **state)
 {
     (void)state;
@@ -868,13 +924,13 @@ static void test_vaporization(void **state)
     px_reaction r;
     char msg[128];
     assert_int_equal(px_reaction_parse_balanced("H2O(l) = H2O(g)", &r, msg, sizeof msg), PX_OK);
-    FILE *fp = ref_open("water.csv");
-    csv_row hdr, row;
-    assert_true(csv_read(fp, &hdr));
-    int cg = col(&hdr, "group"), ct = col(&hdr, "T_K"), cq = col(&hdr, "quantity"),
-        cv = col(&hdr, "value");
+    FILE *fp = px_ref_open("water.csv");
+    px_csv_row hdr, row;
+    assert_true(px_csv_next(fp, &hdr));
+    int cg = px_csv_col(&hdr, "group"), ct = px_csv_col(&hdr, "T_K"), cq = px_csv_col(&hdr, "quantity"),
+        cv = px_csv_col(&hdr, "value");
     int n = 0;
-    while (csv_read(fp, &row)) {
+    while (px_csv_next(fp, &row)) {
         double T = atof(row.f[ct]);
         if (row.n < hdr.n || strcmp(row.f[cg], "saturation_liquid_computed") ||
             strcmp(row.f[cq], "p_sat") || T < 298 || T > 373.2)
@@ -966,13 +1022,13 @@ static void test_default_pressure(void **state)
     /* 100 C: psat = 1.014 bar (1 bar would be steam) */
     assert_int_equal(px_thermo_default_pressure(373.15, &P), PX_OK);
     assert_close(P, 1.01418, 0, 1e-4);
-    FILE *fp = ref_open("water.csv");
-    csv_row hdr, row;
-    assert_true(csv_read(fp, &hdr));
-    int cg = col(&hdr, "group"), ct = col(&hdr, "T_K"), cq = col(&hdr, "quantity"),
-        cv = col(&hdr, "value");
+    FILE *fp = px_ref_open("water.csv");
+    px_csv_row hdr, row;
+    assert_true(px_csv_next(fp, &hdr));
+    int cg = px_csv_col(&hdr, "group"), ct = px_csv_col(&hdr, "T_K"), cq = px_csv_col(&hdr, "quantity"),
+        cv = px_csv_col(&hdr, "value");
     int n = 0;
-    while (csv_read(fp, &row)) {
+    while (px_csv_next(fp, &row)) {
         if (row.n < hdr.n || strcmp(row.f[cg], "saturation_liquid_computed") ||
             strcmp(row.f[cq], "p_sat") || atof(row.f[ct]) < 373.15)
             continue;
@@ -1039,7 +1095,7 @@ int main(void)
         cmocka_unit_test(test_hkf_estimate),    cmocka_unit_test(test_finite_differences),
         cmocka_unit_test(test_pkw),             cmocka_unit_test(test_standard_potentials),
         cmocka_unit_test(test_electron_convention), cmocka_unit_test(test_cp_model),
-        cmocka_unit_test(test_logk_model),      cmocka_unit_test(test_eval_all),
+        cmocka_unit_test(test_isocoulombic),  cmocka_unit_test(test_kopp),  cmocka_unit_test(test_logk_model),      cmocka_unit_test(test_eval_all),
         cmocka_unit_test(test_default_pressure), cmocka_unit_test(test_bad_inputs),
         cmocka_unit_test(test_ws_reuse),        cmocka_unit_test(test_vaporization),
     };

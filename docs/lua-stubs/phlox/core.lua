@@ -89,10 +89,9 @@ function phlox_core.fd_write(fd, text) end
 ---@param cols? any
 function phlox_core.figure(width, height, rows, cols) end
 
---- (C function; no signature in src/lua or docs/lua-api.md)
----@param ... any
----@return any
-function phlox_core.file_kind(...) end
+--- (C) phlox_core.file_kind(path)
+---@param path string
+function phlox_core.file_kind(path) end
 
 --- (C) phlox_core.fork() -> pid, to_fd, from_fd (pid 0 in the worker) | nil, message
 ---@return any # pid, to_fd, from_fd (pid 0 in the worker) | nil, message
@@ -136,10 +135,10 @@ function phlox_core.kill(pid) end
 ---@return any # {name...} sorted | nil, message
 function phlox_core.list_dir(path) end
 
---- (C function; no signature in src/lua or docs/lua-api.md)
----@param ... any
----@return any
-function phlox_core.make_dir(...) end
+--- (C) phlox_core.make_dir(path [, parents])
+---@param path string
+---@param parents? any
+function phlox_core.make_dir(path, parents) end
 
 --- (C) phlox_core.map(db, opts) -> map table | nil, message
 ---@param db phlox.Database
@@ -179,20 +178,17 @@ function phlox_core.polygon_pole(xs, ys, tol) end
 ---@return any # bar | nil, message
 function phlox_core.psat(T) end
 
---- (C function; no signature in src/lua or docs/lua-api.md)
----@param ... any
----@return any
-function phlox_core.read_file(...) end
+--- (C) phlox_core.read_file(path)
+---@param path string
+function phlox_core.read_file(path) end
 
---- (C function; no signature in src/lua or docs/lua-api.md)
----@param ... any
----@return any
-function phlox_core.remove(...) end
+--- (C) phlox_core.remove(path)
+---@param path string
+function phlox_core.remove(path) end
 
---- (C function; no signature in src/lua or docs/lua-api.md)
----@param ... any
----@return any
-function phlox_core.remove_tree(...) end
+--- (C) phlox_core.remove_tree(path)
+---@param path string
+function phlox_core.remove_tree(path) end
 
 --- (C) phlox_core.search_paths() -> copy of the user folders, in search order.
 ---@return any # copy of the user folders, in search order.
@@ -266,6 +262,21 @@ phlox.Database = {}
 
 --- (C) phlox.Database:count()
 function phlox.Database:count() end
+
+--- (C) phlox.Database:hkf_reestimate(formula, T [, P]) -> G_estimated, G_record | nil, message:
+---@param formula string
+---@param T number
+---@param P? number
+---@return any # G_estimated, G_record | nil, message:
+function phlox.Database:hkf_reestimate(formula, T, P) end
+
+--- (C) phlox.Database:isocoulombic(reaction, logK25, T [, P]) -> log K, n | nil, message: the
+---@param reaction any
+---@param logK25 any
+---@param T number
+---@param P? number
+---@return any # log K, n | nil, message: the
+function phlox.Database:isocoulombic(reaction, logK25, T, P) end
 
 --- (C) phlox.Database:list_text([element]) -> the `phlox list` text
 ---@param element? string
