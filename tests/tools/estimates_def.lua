@@ -335,6 +335,19 @@ function M.library_models(lib, measured)
   return out
 end
 
+-- mean abs. errors of the summed entries: mean, and base_mean and
+-- held_mean where those sums were kept (0 without entries)
+local function finish_means(sum, methods)
+  for _, m in ipairs(methods) do
+    for _, tc in ipairs(M.TEMPS) do
+      local s = sum[m][tc]
+      local function mean(x) return s.n > 0 and (x or 0) / s.n or 0 end
+      s.mean = mean(s.abs)
+      if s.base then s.base_mean, s.held_mean = mean(s.base), mean(s.held) end
+    end
+  end
+end
+
 local function run_models(phlox, lib, rows)
   local measured = {}
   for _, r in ipairs(rows) do
@@ -378,14 +391,7 @@ local function run_models(phlox, lib, rows)
       end
     end
   end
-  for _, m in ipairs(M.MODEL_METHODS) do
-    for _, tc in ipairs(M.TEMPS) do
-      local s = sum[m][tc]
-      s.mean = s.n > 0 and s.abs / s.n or 0
-      s.base_mean = s.n > 0 and s.base / s.n or 0
-      s.held_mean = s.n > 0 and (s.held or 0) / s.n or 0
-    end
-  end
+  finish_means(sum, M.MODEL_METHODS)
   return measured, sum
 end
 
@@ -474,12 +480,7 @@ function M.run(phlox)
       ::continue::
     end
   end
-  for _, m in ipairs(M.METHODS) do
-    for _, tc in ipairs(M.TEMPS) do
-      local s = sum[m][tc]
-      s.mean = s.n > 0 and s.abs / s.n or 0
-    end
-  end
+  finish_means(sum, M.METHODS)
   sum.kopp_rows, sum.kopp = run_kopp(phlox, lib)
   sum.hkf_rows, sum[M.HKF_SPECIES_METHOD] = run_hkf_species(lib)
   sum.model_rows, sum.model = run_models(phlox, lib, rows)
