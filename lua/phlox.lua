@@ -639,9 +639,11 @@ function phlox.map(opts)
   for _, k in ipairs { "pH_range", "E_range", "loga_range" } do check_window("phlox.map", opts, k) end
   local T = temperature(opts, "phlox.map")
   local P = pressure(opts, T, "phlox.map")
-  local held_of = { opts.element }
-  for _, e in ipairs(ligand_elements(opts.ligand)) do held_of[#held_of + 1] = e end
-  local held = held_logk(lib, held_of, T, opts, "phlox.map")
+  -- the map uses species of its element and ligand elements only (with H, O):
+  -- a species of another element in a ligand's file is not part of it
+  local held_of, made_of_set = { opts.element }, { [opts.element] = true }
+  for _, e in ipairs(ligand_elements(opts.ligand)) do held_of[#held_of + 1] = e; made_of_set[e] = true end
+  local held = held_logk(lib, held_of, T, opts, "phlox.map", made_of_set)
   local axes = opts.axes or { "pH", "E" }
   local copt = {
     element = opts.element, T = T, P = P, x = axes[1], y = axes[2],
@@ -827,7 +829,8 @@ function phlox.grid_map(opts)
   end
   local T = temperature(opts, "phlox.grid_map")
   local P = pressure(opts, T, "phlox.grid_map")
-  local held = held_logk(lib, { opts.element, opts.ligand }, T, opts, "phlox.grid_map")
+  local held = held_logk(lib, { opts.element, opts.ligand }, T, opts, "phlox.grid_map",
+    { [opts.element] = true, [opts.ligand or opts.element] = true })
   local pr, er = opts.pH_range or { 0, 14 }, opts.E_range or { -2, 2 }
   local g, err = core.grid_map(lib.db, {
     element = opts.element, T = T, P = P, window = { pr[1], pr[2], er[1], er[2] },
