@@ -14,6 +14,7 @@
 #include <math.h>
 #include <stdio.h>
 #include <time.h>
+#include "../tests/support/px_diagram_cases.h"
 
 #define NSPECIES 100
 #define NGRID 500
@@ -26,46 +27,19 @@ static double now(void)
     return (double)t.tv_sec + 1e-9 * (double)t.tv_nsec;
 }
 
-static unsigned long long rng;
-static double urand(void)
-{
-    rng ^= rng >> 12;
-    rng ^= rng << 25;
-    rng ^= rng >> 27;
-    return (double)((rng * 2685821657736338717ULL) >> 11) / 9007199254740992.0;
-}
+static px_rng rng;
 
 static void make_species(px_diagram_species *sp, size_t m, unsigned long long seed)
 {
-    rng = seed * 0x9E3779B97F4A7C15ULL + 1;
-    double s = PX_R * PX_TR * PX_LN10;
-    for (size_t j = 0; j < m; j++) {
-        int nH = (int)(urand() * 9) - 4, ne = (int)(urand() * 9) - 4, nu = 1 + (int)(urand() * 3);
-        sp[j].c = (urand() - 0.5) * 4.0e5 / nu;
-        sp[j].p = nH * s / nu;
-        sp[j].q = ne * PX_F / nu;
-        sp[j].id = (int)j;
-        sp[j].label = NULL;
-    }
+    px_cases_shaped(&rng, sp, m, seed, 0);
 }
 
-/* Worst case: every species stable.  Planes tangent to the concave
- * f = -A (x - 7)^2 - B y^2 at random points: each plane is lowest at its own
- * point of tangency, so all 100 fields exist (a Voronoi-like map). */
+/* Worst case: every species stable (tangent planes of a concave function,
+ * tests/support/px_diagram_cases.h): all 100 fields exist. */
 static void make_all_stable(px_diagram_species *sp, size_t m, unsigned long long seed)
 {
-    rng = seed * 0x9E3779B97F4A7C15ULL + 1;
-    const double A = 1e3, B = 1e5;
-    for (size_t j = 0; j < m; j++) {
-        double x0 = 14 * urand(), y0 = -2 + 4 * urand();
-        double f = -A * (x0 - 7) * (x0 - 7) - B * y0 * y0;
-        double fx = -2 * A * (x0 - 7), fy = -2 * B * y0;
-        sp[j].c = f - fx * x0 - fy * y0;
-        sp[j].p = fx;
-        sp[j].q = fy;
-        sp[j].id = (int)j;
-        sp[j].label = NULL;
-    }
+    px_rng_seed(&rng, seed);
+    px_cases_tangent(&rng, sp, m, 0);
 }
 
 typedef struct ctx {

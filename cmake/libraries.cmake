@@ -1,6 +1,6 @@
 # libraries.cmake - the phlox libraries by layer (included from CMakeLists.txt).
 #
-#   phlox-core    src/core src/water src/thermo src/equil src/diagram
+#   phlox-core    src/core src/num src/water src/thermo src/equil src/diagram
 #                 (needs only libm and threads: no Lua, no cairo)
 #   phlox-data    src/data (element files are Lua tables, read in a sandboxed
 #                 Lua state) and the embedded library (lua/ and stdlib/):
@@ -46,7 +46,8 @@ phlox_public_headers(OUT_DIR ${PHLOX_PUBLIC_INCLUDE_DIR} SOURCE_DIR ${CMAKE_SOUR
 list(APPEND PHLOX_PUBLIC_HEADER_FILES ${PHLOX_PUBLIC_INCLUDE_DIR}/phlox/version.h)
 
 file(GLOB PHLOX_SOURCES_core CONFIGURE_DEPENDS
-     ${CMAKE_SOURCE_DIR}/src/core/*.c ${CMAKE_SOURCE_DIR}/src/water/*.c
+     ${CMAKE_SOURCE_DIR}/src/core/*.c ${CMAKE_SOURCE_DIR}/src/num/*.c
+     ${CMAKE_SOURCE_DIR}/src/water/*.c
      ${CMAKE_SOURCE_DIR}/src/thermo/*.c ${CMAKE_SOURCE_DIR}/src/equil/*.c
      ${CMAKE_SOURCE_DIR}/src/diagram/*.c)
 file(GLOB PHLOX_SOURCES_data CONFIGURE_DEPENDS ${CMAKE_SOURCE_DIR}/src/data/*.c)

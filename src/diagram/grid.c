@@ -5,7 +5,7 @@
  * grid, then trace boundaries cell by cell with a many-label form of
  * marching squares (Lorensen and Cline 1987, SIGGRAPH '87, 163, in two
  * dimensions): on every grid edge whose two ends differ, the change point is
- * refined by bisection to the requested tolerance and shared by the two
+ * refined by bisection (num/num.h) to the requested tolerance and shared by the two
  * cells beside the edge; a cell with two crossings gets one segment, a
  * saddle (two labels on alternate corners) is resolved by one extra call at
  * the cell centre, and a cell with three or more labels gets a star from its
@@ -20,6 +20,7 @@
 #include "diagram/diagram.h"
 #include "diagram/diagram_impl.h"
 #include "core/status.h"
+#include "num/num.h"
 #include <math.h>
 #include <stdlib.h>
 
@@ -89,32 +90,46 @@ static int call(gctx *c, double x, double y, int *id)
     return st < 0 ? st : PX_OK;
 }
 
-/* Bisection on the segment from (x0,y0) [label la] to (x1,y1) [label lb]. */
+/* One probe of the bisection along a grid edge: which side of the change
+ * the point at fraction t lies on (la's side is low).  A label other than
+ * la and lb at the last high point marks a third field in between. */
+typedef struct edge_probe {
+    gctx *c;
+    double x0, y0, x1, y1;
+    int la, lb, third;
+    int failed; /* a probe got a negative (failed) label */
+    int status; /* the label callback's failure, kept apart from the bisection's */
+} edge_probe;
+
+static int edge_side(double t, void *user, int *high)
+{
+    edge_probe *e = user;
+    int id, st = call(e->c, e->x0 + t * (e->x1 - e->x0), e->y0 + t * (e->y1 - e->y0), &id);
+    if (st) return e->status = st;
+    e->failed |= id < 0;
+    *high = id != e->la;
+    if (*high) e->third = id != e->lb;
+    return PX_OK;
+}
+
+/* Bisection (num/num.h) on the segment from (x0,y0) [label la] to (x1,y1)
+ * [label lb] until it is no longer than tol in the axis's units.  A point
+ * placed next to a failed (negative) label is marked bad. */
 static int refine(gctx *c, double x0, double y0, int la, double x1, double y1, int lb,
                   double tol, int max_iter, size_t *idx)
 {
     double lo = 0, hi = 1, len = fmax(fabs(x1 - x0), fabs(y1 - y0));
-    int it = 0, third = 0, failed = la < 0 || lb < 0;
-    while ((hi - lo) * len > tol) {
-        if (it++ >= max_iter) {
-            c->g->nmaxiter++;
-            break;
-        }
-        double t = 0.5 * (lo + hi);
-        int id, st = call(c, x0 + t * (x1 - x0), y0 + t * (y1 - y0), &id);
-        if (st) return st;
-        failed |= id < 0;
-        if (id == la) lo = t;
-        else {
-            hi = t;
-            third = id != lb;
-        }
-    }
-    if (third) c->g->nthird++;
+    edge_probe e = {c, x0, y0, x1, y1, la, lb, 0, la < 0 || lb < 0, PX_OK};
+    px_num_root_options o = {tol / len, 0.0, 0.0, max_iter};
+    int st = px_num_root_bisect(edge_side, &e, &lo, &hi, &o, NULL);
+    if (e.status != PX_OK) return e.status;
+    if (st == PX_ENOCONV) c->g->nmaxiter++;
+    else if (st != PX_OK) return st;
+    if (e.third) c->g->nthird++;
     c->g->ncross++;
     double t = 0.5 * (lo + hi);
-    int st = add_point(c, x0 + t * (x1 - x0), y0 + t * (y1 - y0), idx);
-    if (st == PX_OK && failed) {
+    st = add_point(c, x0 + t * (x1 - x0), y0 + t * (y1 - y0), idx);
+    if (st == PX_OK && e.failed) {
         c->bad[*idx] = 1;
         c->g->nfailcross++;
     }

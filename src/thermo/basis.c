@@ -1,8 +1,9 @@
 /* basis.c - solve for formation-reaction coefficients over a basis (see
  * basis.h): a small dense linear system, elements and charge as rows,
- * Gaussian elimination with partial pivoting. */
+ * solved by the core's dense solver (num/num.h). */
 #include "thermo/basis.h"
 #include "core/status.h"
+#include "num/num.h"
 #include <math.h>
 #include <stdio.h>
 #include <string.h>
@@ -61,35 +62,22 @@ int px_basis_formation(const px_formula *const *basis, size_t nb, const px_formu
                  nrow);
         return PX_ESINGULAR;
     }
-    double a[PX_BASIS_ROWS][PX_BASIS_ROWS + 1];
+    double a[PX_BASIS_ROWS * PX_BASIS_ROWS], x[PX_BASIS_ROWS];
     for (int r = 0; r < nrow; r++) {
         for (size_t j = 0; j < nb; j++)
-            a[r][j] = r < nz ? count_of(basis[j], zs[r]) : (double)basis[j]->charge;
-        a[r][nb] = r < nz ? count_of(target, zs[r]) : (double)target->charge;
+            a[r * nrow + (int)j] = r < nz ? count_of(basis[j], zs[r]) : (double)basis[j]->charge;
+        x[r] = r < nz ? count_of(target, zs[r]) : (double)target->charge;
     }
     int n = nrow;
-    for (int c = 0; c < n; c++) {
-        int p = c;
-        for (int r = c + 1; r < n; r++)
-            if (fabs(a[r][c]) > fabs(a[p][c])) p = r;
-        if (fabs(a[p][c]) < PX_BASIS_PIVOT_EPS) {
-            snprintf(msg, msglen, "basis species are not independent (%s)", basis[c]->text);
-            return PX_ESINGULAR;
-        }
-        if (p != c)
-            for (int k = 0; k <= n; k++) {
-                double t = a[p][k];
-                a[p][k] = a[c][k];
-                a[c][k] = t;
-            }
-        for (int r = 0; r < n; r++) {
-            if (r == c || a[r][c] == 0.0) continue;
-            double f = a[r][c] / a[c][c];
-            for (int k = c; k <= n; k++) a[r][k] -= f * a[c][k];
-        }
+    size_t bad = 0;
+    int st = px_num_lu_solve((size_t)n, a, x, NULL, 0.0, PX_BASIS_PIVOT_EPS, &bad);
+    if (st == PX_ESINGULAR) {
+        snprintf(msg, msglen, "basis species are not independent (%s)", basis[bad]->text);
+        return PX_ESINGULAR;
     }
+    if (st != PX_OK && st != PX_ENONFINITE) return st;
     for (int j = 0; j < n; j++) {
-        nu[j] = a[j][n] / a[j][j];
+        nu[j] = x[j];
         if (fabs(nu[j]) < PX_BASIS_RESIDUAL_EPS) nu[j] = 0.0; /* no -0 or 1e-17 noise */
         if (!isfinite(nu[j])) return PX_ENONFINITE;
     }

@@ -21,6 +21,8 @@
  * python3-iapws 1.5.3 (iapws/iapws95.py, class IAPWS95) - see
  * tests/ref/test_water_iapws.py, which repeats that comparison. */
 #include "water/water_internal.h"
+#include "core/status.h"
+#include "num/num.h"
 #include <math.h>
 
 /* ---- ideal-gas part: IAPWS R6-95(2018) Table 1 (from memory, checked) ---- */
@@ -342,14 +344,29 @@ px_water_options px_water_options_default(void)
     return o;
 }
 
-/* Liquid root of P(rho) = P_pa at fixed T.  Newton's method; the root is kept
- * inside [lo, hi], which shrinks with every evaluation (a point with P < P_pa
- * on the mechanically stable branch, or any point with dP/drho <= 0, i.e.
- * inside the spinodal, is a lower bound; a stable point with P > P_pa is an
- * upper bound).  A Newton step leaving the bracket is replaced by bisection. */
+/* Liquid root of P(rho) = P_pa at fixed T: Newton's method kept inside
+ * [lo, hi] (num/num.h, px_num_root_newton), which shrinks with every
+ * evaluation (a point with P < P_pa on the mechanically stable branch, or
+ * any point with dP/drho <= 0, i.e. inside the spinodal, is a lower bound;
+ * a stable point with P > P_pa is an upper bound).  A Newton step leaving
+ * the bracket is replaced by bisection. */
 #define DENS_LO_FACTOR 0.8 /* lower bound: 0.8 x the saturated-liquid density
                               (choice of this module: below every liquid root
                               for P >= psat and T <= 646 K) */
+typedef struct dens_ctx {
+    double T, P_pa;
+} dens_ctx;
+
+static int dens_fdf(double rho, void *user, double *f, double *df)
+{
+    const dens_ctx *c = user;
+    px_water_pvt p;
+    px_water_pvt_eval(c->T, rho, &p);
+    *f = p.P - c->P_pa;
+    *df = p.dP_drho;
+    return PX_OK;
+}
+
 int px_water_density_solve(double T, double P_pa, double guess, const px_water_options *opt,
                            double *rho, px_water_stats *stats)
 {
@@ -359,48 +376,13 @@ int px_water_density_solve(double T, double P_pa, double guess, const px_water_o
     if (!isfinite(rl)) rl = PX_WATER_RHOC;
     double lo = DENS_LO_FACTOR * rl, hi = PX_WATER_RHOMAX;
     double x = (guess > lo && guess < hi) ? guess : rl;
-    int bis = 0;
-    double res = NAN;
-    for (int it = 1; it <= o.max_iter; it++) {
-        px_water_pvt p;
-        px_water_pvt_eval(T, x, &p);
-        if (!(isfinite(p.P) && isfinite(p.dP_drho))) return PX_ENONFINITE;
-        double f = p.P - P_pa;
-        res = fabs(f) / P_pa;
-        double xn;
-        int newton = 0;
-        if (p.dP_drho <= 0) {
-            lo = x; /* inside the spinodal: the liquid root is denser */
-            xn = 0.5 * (lo + hi);
-        } else {
-            if (f < 0) lo = x;
-            else if (f > 0) hi = x;
-            else {
-                *rho = x;
-                if (stats) *stats = (px_water_stats){it, bis, 0.0};
-                return PX_OK;
-            }
-            double step = -f / p.dP_drho;
-            if (fabs(step) <= o.epsrel * x) { /* converged (the step may be below 1 ulp) */
-                *rho = x + step;
-                if (stats) *stats = (px_water_stats){it, bis, res};
-                return PX_OK;
-            }
-            xn = x + step;
-            newton = 1;
-            if (!(xn > lo && xn < hi)) {
-                xn = 0.5 * (lo + hi);
-                newton = 0;
-            }
-        }
-        if (!newton) bis++;
-        x = xn;
-        if (hi - lo <= o.epsrel * lo) { /* bracket collapsed (bisection only) */
-            *rho = 0.5 * (lo + hi);
-            if (stats) *stats = (px_water_stats){it, bis, res};
-            return PX_OK;
-        }
-    }
-    if (stats) *stats = (px_water_stats){o.max_iter, bis, res};
-    return PX_ENOCONV;
+    dens_ctx c = {T, P_pa};
+    px_num_root_options ro = {0.0, o.epsrel, 0.0, o.max_iter};
+    px_num_root_stats rs;
+    double r;
+    int st = px_num_root_newton(dens_fdf, &c, lo, hi, x, &ro, &r, &rs);
+    if (st == PX_OK) *rho = r;
+    if ((st == PX_OK || st == PX_ENOCONV) && stats)
+        *stats = (px_water_stats){rs.iterations, rs.bisections, rs.residual / P_pa};
+    return st;
 }

@@ -7,10 +7,8 @@
 local M = {}
 
 ---------------------------------------------------------------------------- constants
-M.R = 8.314462618         -- J/(mol K), CODATA 2018
-M.F = 96485.33212         -- C/mol, CODATA 2018
-M.T0 = 298.15             -- K, reference temperature
-M.LN10 = math.log(10)
+local K = dofile((debug.getinfo(1, "S").source:match("^@(.*)[/\\]") or ".") .. "/../support/chem.lua")
+M.R, M.F, M.T0, M.LN10 = K.R, K.F, K.T0, K.LN10 -- CODATA 2018 (tests/support/chem.lua)
 M.CAL = 4.184             -- J per thermochemical calorie
 
 -- Unit words of docs/element-files.md to kJ (energy) and J/(mol K) (entropy).
@@ -79,43 +77,13 @@ function M.load_definition(path)
 end
 
 ---------------------------------------------------------------------------- CSV
--- One line of CSV: quoted fields with "" for a quote; no embedded newlines.
-function M.csv_split(line)
-  local out, field, inq = {}, {}, false
-  local i = 1
-  while i <= #line do
-    local c = line:sub(i, i)
-    if inq then
-      if c == '"' then
-        if line:sub(i + 1, i + 1) == '"' then field[#field + 1] = '"'; i = i + 1 else inq = false end
-      else field[#field + 1] = c end
-    elseif c == '"' then inq = true
-    elseif c == "," then out[#out + 1] = table.concat(field); field = {}
-    else field[#field + 1] = c end
-    i = i + 1
-  end
-  out[#out + 1] = table.concat(field)
-  return out
-end
+-- The shared reader of tests/support/csv.lua (RFC 4180 quoting).
+local CSV = dofile((debug.getinfo(1, "S").source:match("^@(.*)[/\\]") or ".") .. "/../support/csv.lua")
+M.csv_split = CSV.split
 
 -- Rows of a CSV file with a header line, each a table keyed by the header names.
 function M.read_csv(path)
-  local fh = io.open(path, "r")
-  if not fh then error("cannot open reference file " .. path) end
-  local header, rows = nil, {}
-  for line in fh:lines() do
-    line = line:gsub("\r$", "")
-    if line ~= "" then
-      local f = M.csv_split(line)
-      if not header then header = f
-      else
-        local row = {}
-        for k, name in ipairs(header) do row[name] = f[k] end
-        rows[#rows + 1] = row
-      end
-    end
-  end
-  fh:close()
+  local _, rows = CSV.read(path)
   return rows
 end
 

@@ -22,7 +22,8 @@ local function run(args, stdin_text)
   return (how == "exit" and code or 128 + code), slurp(out), slurp(err)
 end
 
-local function check(cond, msg) if not cond then error(msg, 2) end end
+local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
+local check = S.check
 
 -- --version prints the version and exits 0
 local st, out = run("--version")

@@ -13,53 +13,14 @@
 local phlox = require "phlox"
 local D = require "phlox.diagrams"
 
-local function check(cond, msg) if not cond then error(msg, 2) end end
-local function close(a, b, tol, what)
-  check(type(a) == "number" and math.abs(a - b) <= tol,
-        ("%s: %s vs %.6g (tolerance %g)"):format(what, tostring(a), b, tol))
-end
-local R, F = 8.314462618, 96485.33212 -- CODATA 2018
-local s25 = R * 298.15 * math.log(10) / F
+local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
+local check, close = S.check, S.close
+local K = S.chem
+local s25 = K.nernst_slope(298.15)
 
--- reference rows (tiny CSV reader: quoted fields, no embedded newlines) ---------
-local refdir = (os.getenv("PHLOX_SOURCE_DIR") or ".") .. "/tests/reference/"
-local function csv_rows(name)
-  local f = assert(io.open(refdir .. name, "r"), "reference file " .. refdir .. name)
-  local rows, header = {}, nil
-  for line in f:lines() do
-    local fields, i, n = {}, 1, #line
-    while i <= n + 1 do
-      if line:sub(i, i) == '"' then
-        local j, buf = i + 1, {}
-        while true do
-          local c = line:sub(j, j)
-          if c == '"' and line:sub(j + 1, j + 1) == '"' then buf[#buf + 1] = '"'; j = j + 2
-          elseif c == '"' then break
-          else buf[#buf + 1] = c; j = j + 1 end
-        end
-        fields[#fields + 1] = table.concat(buf)
-        i = j + 2
-      else
-        local j = line:find(",", i, true) or (n + 1)
-        fields[#fields + 1] = line:sub(i, j - 1)
-        i = j + 1
-      end
-    end
-    if not header then header = fields else
-      local row = {}
-      for k, h in ipairs(header) do row[h] = fields[k] end
-      rows[#rows + 1] = row
-    end
-  end
-  f:close()
-  return rows
-end
-local function ref_value(file, keycol, key, valcol)
-  for _, r in ipairs(csv_rows(file)) do
-    if r[keycol] == key then return tonumber(r[valcol]), r.source end
-  end
-  error("no reference row " .. key .. " in " .. file)
-end
+-- reference rows (tests/support/csv.lua) ----------------------------------------
+local CSV = S.csv
+local ref_value = CSV.ref_value
 local function logK_ref(rx) return ref_value("log_k_25C.csv", "reaction", rx, "log10_K_25C") end
 local function E0_ref(c) return ref_value("standard_potentials.csv", "couple", c, "E0_V_SHE_25C") end
 
@@ -248,9 +209,7 @@ local tmp = os.tmpname()
 D.plot(fzn, { file = tmp .. ".svg" })
 D.plot(sol, { file = tmp .. "-sol.svg" })
 for _, f in ipairs { tmp .. ".svg", tmp .. "-sol.svg" } do
-  local h = assert(io.open(f, "r"))
-  local svg = h:read("a")
-  h:close()
+  local svg = S.files.slurp(f)
   check(svg:find("<desc>", 1, true), f .. " has a description")
   os.remove(f)
 end

@@ -10,47 +10,25 @@
 local phlox = require "phlox"
 local D = require "phlox.diagrams"
 
-local function check(cond, msg) if not cond then error(msg, 2) end end
-local function close(a, b, tol, what)
-  check(type(a) == "number" and math.abs(a - b) <= tol,
-        ("%s: %s vs %.6g (tolerance %g)"):format(what, tostring(a), b, tol))
-end
-local R, F = 8.314462618, 96485.33212 -- CODATA 2018
-local function slope(T) return R * T * math.log(10) / F end
+local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
+local check, close = S.check, S.close
+local K = S.chem
+local slope = K.nernst_slope
 local s25 = slope(298.15)
 
--- one value from a reference CSV whose rows have no quoted commas before the value
-local refdir = (os.getenv("PHLOX_SOURCE_DIR") or ".") .. "/tests/reference/"
-local function ref_line(file, prefix)
-  local f = assert(io.open(refdir .. file, "r"), "reference file " .. refdir .. file)
-  for line in f:lines() do
-    if line:sub(1, #prefix) == prefix then f:close(); return line end
-  end
-  f:close()
-  error("no reference row starting " .. prefix .. " in " .. file)
-end
-local function logK_ref(rx) return tonumber(ref_line("log_k_25C.csv", rx .. ","):sub(#rx + 2):match("^([^,]+)")) end
+-- reference rows (tests/support/csv.lua)
+local CSV = S.csv
+local function logK_ref(rx) return (CSV.ref_value("log_k_25C.csv", "reaction", rx, "log10_K_25C")) end
 local function pKw_ref(tc) -- the saturation row of pKw at tc
-  local f = assert(io.open(refdir .. "water.csv", "r"))
-  for l in f:lines() do
-    local g, t, q, v = l:match("^([^,]*),([^,]*),[^,]*,[^,]*,[^,]*,([^,]*),([^,]*),")
-    if g == "saturation_liquid_computed" and tonumber(t) == tc and q == "pKw" then f:close(); return tonumber(v) end
+  for _, r in ipairs(CSV.reference("water.csv")) do
+    if r.group == "saturation_liquid_computed" and tonumber(r.t_C) == tc and r.quantity == "pKw" then
+      return tonumber(r.value)
+    end
   end
-  f:close()
   error("no pKw row at " .. tc .. " C")
 end
 
-local function boundary(m, a, b)
-  for _, bd in ipairs(m.boundaries) do
-    if (bd.between[1] == a and bd.between[2] == b) or (bd.between[1] == b and bd.between[2] == a) then return bd end
-  end
-  error("no boundary between " .. a .. " and " .. b)
-end
-local function area_sum(m)
-  local t = 0
-  for _, f in ipairs(m.fields) do t = t + f.area end
-  return t
-end
+local boundary, area_sum = K.boundary, K.area_sum
 
 -- 1. E against log a(Cl-) at pH 5: Zn-Cl ------------------------------------------
 local lib = phlox.library { "Zn", "Cu", "Cl" }
@@ -169,9 +147,7 @@ local plot = require "phlox.plot"
 plot.grid(maps, { file = tmp .. "-grid.svg" })
 plot.overlay(maps, { file = tmp .. "-over.svg" })
 for _, f in ipairs { tmp .. "-grid.svg", tmp .. "-over.svg" } do
-  local h = assert(io.open(f, "r"))
-  local svg = h:read("a")
-  h:close()
+  local svg = S.files.slurp(f)
   check(svg:find("300 °C", 1, true), f .. " names 300 °C")
   check(svg:find("temperature dependence estimated", 1, true), f .. " stamps the species with estimated temperature functions")
   os.remove(f)

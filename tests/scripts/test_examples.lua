@@ -19,16 +19,13 @@
 --   * reproducibility: the two runs give byte-identical SVG, PDF, CSV and
 --     JSON files (DESIGN.md: the same inputs give the same bytes).
 -- Environment (tests/CMakeLists.txt): PHLOX_BIN, PHLOX_SOURCE_DIR.
-local t = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
-                 .. "/tests/scripts/lib/common.lua")
-local check, quote, read, tmpdir = t.check, t.quote, t.read, t.tmpdir
-local function close(a, b, tol, what)
-  check(math.abs(a - b) <= tol, ("%s: %.9g vs %.9g (tolerance %g)"):format(what, a, b, tol))
-end
+local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
+local check, close = S.check, S.close
+local quote, read, tmpdir = S.files.quote, S.files.read, S.files.tmpdir
 
-local BIN, SRC = t.BIN, t.SRC
+local BIN, SRC = assert(S.BIN, "PHLOX_BIN is not set (run through ctest)"), S.SRC
 local DEMO = SRC .. "/examples/demo.lua"
-local function slope(T_C) return t.R * (T_C + 273.15) * math.log(10) / t.F end
+local function slope(T_C) return S.chem.nernst_slope(T_C + 273.15) end
 
 local function run(dir)
   local log = dir .. "/stdout.txt"
@@ -103,7 +100,7 @@ local function checks()
 
   -- CSV --------------------------------------------------------------------------
   local function read_csv(name, columns)
-    local htext, cols, rows, nfiles = t.read_csv(data[name], name)
+    local htext, cols, rows, nfiles = S.csv.stamped(data[name], name)
     check(htext:find("^# program: phlox "), name .. ": provenance starts with the program")
     check(htext:find("\n# script: [^\n]*demo%.lua sha256=%x+"), name .. ": script and its checksum")
     check(htext:find("what can form, not how fast", 1, true), name .. ": caution in the header")
@@ -120,7 +117,7 @@ local function checks()
     "a_Cl", "field", "domain", "solid", "dissolved_Cu", "carrier", "carrier_share_of_dissolved" })
   read_csv("dissolved-copper.csv", { "T_C", "state", "Cl", "pH", "dissolved_Cu" })
 
-  local coefficient = t.coefficient
+  local coefficient = S.chem.coefficient
 
   -- Nernst: on an E-pH map a boundary has dE/dpH = -(RT ln10/F) nH/ne.
   local nslopes = 0
@@ -178,11 +175,15 @@ local function checks()
   check(seen == 4, "three deaerated points and the 25 C aerated point checked")
 
   -- JSON: neutral pH at 25 C
-  local json = data["study.json"]
-  check(json:sub(1, 1) == "{" and json:match("}%s*$"), "study.json is one object")
-  local n25 = tonumber(json:match('"neutral_pH": ([%d%.]+)'))
+  local ok_json, doc = pcall(S.json.decode, data["study.json"])
+  check(ok_json and type(doc) == "table", "study.json is one JSON object: " .. tostring(doc))
+  local n25
+  for _, m in ipairs(doc.data and doc.data.maps or {}) do
+    if m.T_C == 25 then n25 = m.neutral_pH end
+  end
   close(n25, 6.9975, 0.01, "neutral pH at 25 C (pKw 13.995, IAPWS R11-07)")
-  check(json:find('"caution"', 1, true) and json:find('"provenance"', 1, true), "study.json carries caution and provenance")
+  check(type(doc.caution) == "string" and doc.caution ~= "" and type(doc.provenance) == "table",
+        "study.json carries caution and provenance")
 
   -- Reproducibility: byte-identical text outputs and PDF in the two runs.
   for _, name in ipairs(FILES) do

@@ -4,7 +4,8 @@ local json = require "phlox.json"
 local export = require "phlox.export"
 local sweep = require "phlox.sweep"
 local core = require "phlox.core"
-local function check(cond, msg) if not cond then error(msg, 2) end end
+local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
+local check = S.check
 
 -- JSON: sorted keys, escapes (RFC 8259 section 7), shortest round-trip numbers
 check(json.encode({ b = 1, a = "q\"\\\n\1" }) == '{"a":"q\\"\\\\\\n\\u0001","b":1}', "json escapes")
@@ -42,11 +43,11 @@ local res, fails = sweep.run(pts, function(p) if p.pH == 7 then return nil, "odd
 check(res[1] == 25 and res[2] == nil and #fails == 3 and fails[1].message == "odd", "sweep.run")
 
 -- CSV export: provenance, caution, RFC 4180 quoting, atomic (no temp left)
-local dir = os.tmpname(); os.remove(dir); os.execute("mkdir -p " .. dir)
+local dir = S.files.tmpdir()
 local path = dir .. "/t.csv"
 export.csv(path, { { name = 'a,"b"', x = 0.5 }, { name = "c", x = 2 } },
            { columns = { "name", "x" }, conditions = { T_C = 25 } })
-local f = assert(io.open(path)); local text = f:read("a"); f:close()
+local text = S.files.slurp(path)
 check(text:find("# program: phlox " .. core.version, 1, true), "csv provenance")
 check(text:find("# condition: T_C = 25", 1, true), "csv conditions")
 check(text:find("not how fast", 1, true), "csv caution")
@@ -56,7 +57,7 @@ check(listing == "t.csv\n", "no temporary file left: " .. listing)
 -- the same inputs give the same bytes
 export.csv(dir .. "/u.csv", { { name = 'a,"b"', x = 0.5 }, { name = "c", x = 2 } },
            { columns = { "name", "x" }, conditions = { T_C = 25 } })
-f = assert(io.open(dir .. "/u.csv")); check(f:read("a") == text, "deterministic csv"); f:close()
+check(S.files.slurp(dir .. "/u.csv") == text, "deterministic csv")
 -- writing into a missing folder fails loudly and leaves nothing
 check(not pcall(export.csv, dir .. "/missing/x.csv", {}, { columns = { "a" } }), "csv to a missing folder")
 os.execute("rm -rf " .. dir)

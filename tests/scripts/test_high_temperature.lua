@@ -22,7 +22,8 @@
 --    are named), because a held constant cannot make or unmake the field in a
 --    way that means anything.
 local phlox = require "phlox"
-local function check(cond, msg) if not cond then error(msg, 2) end end
+local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
+local check = S.check
 
 local ACTIVITY = 1e-6 -- published diagrams' convention (common practice)
 local PH_MAX = 14     -- the default window; "reaches pH 14" = alkaline field

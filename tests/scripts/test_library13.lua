@@ -1,11 +1,9 @@
 -- test_library13.lua: the gold-cyanide map, the cyanide ligand group and the
 -- new elements of issue 13, against published values (source beside each).
 local phlox = require "phlox"
-local function check(cond, msg) if not cond then error(msg, 2) end end
-local function close(a, b, tol, what)
-  check(a and math.abs(a - b) <= tol, ("%s: %s vs %.6g (tolerance %g)"):format(what, tostring(a), b, tol))
-end
-local NERNST = 8.314462618 * 298.15 * math.log(10) / 96485.33212   -- V per decade at 25 C (CODATA 2018)
+local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
+local check, close = S.check, S.close
+local NERNST = S.chem.nernst_slope(298.15)   -- V per decade at 25 C (CODATA 2018)
 
 -- 1. The gold-cyanide diagram (Au with the CN group as ligand, cyanate left
 --    out: the metastable-cyanide convention of hydrometallurgy).
@@ -126,7 +124,9 @@ local bin = assert(os.getenv("PHLOX_BIN"), "PHLOX_BIN not set")
 local h = assert(io.popen(('%q reaction "Au(CN)2^- + e- = Au(s) + 2 CN^-" --json 2>&1'):format(bin)))
 local out = h:read("a")
 h:close()
-close(tonumber(out:match('"E0_V":([%-%d%.eE]+)')), -0.60, 0.02, "phlox reaction with cyanide: " .. out)
+local okj, doc = pcall(S.json.decode, out)
+check(okj and type(doc) == "table", "phlox reaction --json prints one JSON object: " .. out)
+close(doc.E0_V, -0.60, 0.02, "phlox reaction with cyanide: " .. out)
 print("test_library13: command line checks passed")
 
 -- 7. rigorous maps balance elements, not groups: a clear refusal

@@ -5,12 +5,10 @@
 -- geometry rules of a map (fields tile the window, boundaries separate the
 -- two fields they name).
 local phlox = require "phlox"
-local function check(cond, msg) if not cond then error(msg, 2) end end
-local function close(a, b, tol, what)
-  check(math.abs(a - b) <= tol, ("%s: %.6g vs %.6g (tolerance %g)"):format(what, a, b, tol))
-end
-local R, F = 8.314462618, 96485.33212 -- CODATA 2018
-local function slope(T) return R * T * math.log(10) / F end
+local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
+local check, close = S.check, S.close
+local K = S.chem
+local slope = K.nernst_slope
 
 local lib = phlox.library { "Zn" }
 local m = phlox.map { library = lib, element = "Zn", T_C = 25 }
@@ -21,14 +19,7 @@ for _, f in ipairs(m.fields) do total = total + f.area end
 close(total, 56, 56e-9, "field areas sum to the window")
 check(m.unmatched_edges == 0, "every interior edge has a partner")
 
-local function boundary(a, b)
-  for _, bd in ipairs(m.boundaries) do
-    if (bd.between[1] == a and bd.between[2] == b) or (bd.between[1] == b and bd.between[2] == a) then
-      return bd
-    end
-  end
-  error("no boundary between " .. a .. " and " .. b)
-end
+local function boundary(a, b) return K.boundary(m, a, b) end
 
 -- Zn2+/Zn at a(Zn2+) = 1e-6: E = E0 - 6 x 0.029580 V = E0 - 0.1775 V (Nernst)
 local E0 = lib:reaction("Zn^2+ + 2 e- = Zn(s)", { T_C = 25 }).E

@@ -3,7 +3,8 @@
 -- PHLOX_PATH overrides an embedded module; LUA_PATH is ignored; C modules
 -- cannot be loaded.
 local bin = assert(os.getenv("PHLOX_BIN"), "PHLOX_BIN not set")
-local function check(cond, msg) if not cond then error(msg, 2) end end
+local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
+local check = S.check
 
 local phlox = require "phlox"
 local core = require "phlox.core"

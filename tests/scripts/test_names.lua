@@ -4,7 +4,8 @@
 -- a name in `exclude`, `only`, `suppress` or `activities` that matches no
 -- species is an error with a hint, never silently ignored.
 local phlox = require "phlox"
-local function check(cond, msg) if not cond then error(msg, 2) end end
+local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
+local check = S.check
 local function fails_with(f, pattern, what)
   local ok, err = pcall(f)
   check(not ok, what .. ": expected an error")

@@ -6,14 +6,15 @@
 local plot = require "phlox.plot"
 local palette = require "phlox.palette"
 local core = require "phlox.core"
-local function check(cond, msg) if not cond then error(msg, 2) end end
+local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
+local check, near = S.check, S.near
 
 -- BEGIN TEST MAP
 -- Nernst slope ln(10) R T / F at 298.15 K from CODATA 2018 R and F; the
 -- water lines use E(O2/H2O) = 1.229 V at pH 0 (from memory of Bard, Parsons
 -- and Jordan 1985, Standard Potentials in Aqueous Solution) only to place
 -- dashed lines on the invented map.
-local SLOPE = math.log(10) * 8.314462618 * 298.15 / 96485.33212
+local SLOPE = math.log(10) * 8.314462618 * 298.15 / 96485.33212 -- self-contained: test_plot_svg.py runs this block alone
 local function test_map(T_C)
   T_C = T_C or 25
   local s = SLOPE * (T_C + 273.15) / 298.15
@@ -50,13 +51,12 @@ local function test_map(T_C)
 end
 -- END TEST MAP
 
-local dir = os.tmpname(); os.remove(dir); os.execute("mkdir -p " .. dir)
-local function slurp(p) local f = assert(io.open(p, "rb")); local s = f:read("a"); f:close(); return s end
+local dir = S.files.tmpdir()
+local slurp = S.files.slurp
 
 -- palette: CIE L* of sRGB primaries and white (sRGB red L* = 53.24,
 -- green 87.73, blue 32.30: from memory of B. Lindbloom's published sRGB to
 -- Lab tables, D65); the formulas are CIE 15:2004 and IEC 61966-2-1.
-local function near(a, b, tol) return math.abs(a - b) <= tol end
 check(near(palette.lightness({ 1, 1, 1 }), 100, 1e-6), "L* of white")
 check(near(palette.lightness({ 0, 0, 0 }), 0, 1e-9), "L* of black")
 check(near(palette.lightness({ 1, 0, 0 }), 53.24, 0.02), "L* of sRGB red " .. palette.lightness({ 1, 0, 0 }))

@@ -8,9 +8,8 @@ local export = require "phlox.export"
 local core = phlox.core
 
 local failures = 0
-local function check(cond, what)
-  if not cond then error(what, 2) end
-end
+local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
+local check = S.check
 local function has_line(lines, pat)
   for _, l in ipairs(lines or {}) do if l:find(pat, 1, true) then return true end end
   return false
@@ -21,23 +20,9 @@ local function names_of(list, key)
   return set
 end
 
-local refdir = (os.getenv("PHLOX_SOURCE_DIR") or ".") .. "/tests/reference/"
--- rows of a reference CSV whose last column (source) may hold commas
-local function rows(name, ncols)
-  local f = assert(io.open(refdir .. name, "r"), "reference file " .. refdir .. name)
-  local out, header = {}, nil
-  local pat = "^" .. ("([^,]*),"):rep(ncols - 1) .. "(.*)$"
-  for line in f:lines() do
-    local v = { line:match(pat) }
-    if not header then header = v else
-      local r = {}
-      for i, h in ipairs(header) do r[h] = v[i] end
-      out[#out + 1] = r
-    end
-  end
-  f:close()
-  return out
-end
+-- rows of a reference CSV (tests/support/csv.lua)
+local CSV = S.csv
+local function rows(name) return CSV.reference(name) end
 
 -- 1. Ligand oxidation states -------------------------------------------------
 -- Cu-NH3-H2O at 25 C, 0.1 mol/kg ammonia: with ammonia kept as ammonia the
@@ -154,7 +139,7 @@ local SALT = { NaCl = { "Na", "Cl", "Na^+", "Cl^-", 1, 1, 0.01 }, KCl = { "K", "
   CaCl2 = { "Ca", "Cl", "Ca^2+", "Cl^-", 1, 2, 0.01 }, Na2SO4 = { "Na", "S", "Na^+", "SO4^2-", 2, 1, 0.06 } }
 local SIT_FORM = 0.01
 local nsit = 0
-for _, row in ipairs(rows("mean_activity_25C.csv", 4)) do
+for _, row in ipairs(rows("mean_activity_25C.csv")) do
   local c, mol, meas = SALT[row.salt], tonumber(row.molality), tonumber(row.gamma_pm)
   local res = assert(phlox.speciate { library = sitlib, activity = "sit", solids = false, pH = 7,
     totals = { [c[1]] = c[5] * mol, [c[2]] = c[6] * mol } })
@@ -239,7 +224,7 @@ else
 end
 
 -- 7. Reference electrodes at temperature ----------------------------------------
-for _, row in ipairs(rows("electrodes.csv", 4)) do
+for _, row in ipairs(rows("electrodes.csv")) do
   local off25 = phlox.to_she(0, row.electrode)
   check(math.abs(off25 - tonumber(row.offset_25C_V)) <= 5e-4, row.electrode .. " offset at 25 C (" .. row.source .. ")")
   local E50, info = phlox.to_she(-0.5, row.electrode, { T_C = 50 })

@@ -11,9 +11,9 @@ local plot = require "phlox.plot"
 local export = require "phlox.export"
 local core = require "phlox.core"
 
-local t = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
-                 .. "/tests/scripts/lib/common.lua")
-local BIN, SRC, check, q, read, sha256sum = t.BIN, t.SRC, t.check, t.quote, t.read, t.sha256sum
+local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
+local BIN, SRC, check = assert(S.BIN, "PHLOX_BIN is not set (run through ctest)"), S.SRC, S.check
+local q, read, sha256sum = S.files.quote, S.files.read, S.files.sha256sum
 local function names(files)
   local t = {}
   for _, d in ipairs(files) do t[#t + 1] = d.file end
@@ -58,7 +58,7 @@ check(names(fr.provenance.files) == "stdlib/elements/HO.lua stdlib/elements/Zn.l
       "Zn fractions: " .. names(fr.provenance.files))
 
 -- Outputs: the zinc figure and table name Zn.lua, not Cu.lua or Cl.lua.
-local dir = t.tmpdir()
+local dir = S.files.tmpdir()
 local ok, err = pcall(function()
   plot.map(zn, { file = dir .. "/zn.svg" })
   local svg = read(dir .. "/zn.svg")

@@ -13,7 +13,8 @@
 -- 60 C on phlox shows iron touching magnetite; the test then prints the
 -- status with the held species (docs/other-diagrams.md, open finding).
 local phlox = require "phlox"
-local function check(cond, msg) if not cond then error(msg, 2) end end
+local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
+local check = S.check
 
 local lib = phlox.library { "Fe" }
 local function gap(T_C)

@@ -15,7 +15,8 @@
 -- falls, ZnO appears from 60 C, and the test prints that status with the
 -- held species instead (docs/other-diagrams.md records the open finding).
 local phlox = require "phlox"
-local function check(cond, msg) if not cond then error(msg, 2) end end
+local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
+local check = S.check
 
 local lib = phlox.library { "Zn" }
 local ACTIVITY = 1e-6   -- the paper's 10^-6 M (molal, activity coefficient 1)

@@ -3,13 +3,8 @@
 -- use the same constants (so data and solver are checked separately).
 -- Mass balance is checked on every solve.
 local phlox = require "phlox"
-local function check(cond, msg) if not cond then error(msg, 2) end end
-local function close(a, b, tol, what)
-  check(a and math.abs(a - b) <= tol, ("%s: %s vs %.6g (tolerance %g)"):format(what, tostring(a), b, tol))
-end
-local function rel(a, b, r, what)
-  check(a and math.abs(a - b) <= r * math.abs(b), ("%s: %s vs %.6g (relative %g)"):format(what, tostring(a), b, r))
-end
+local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
+local check, close, rel = S.check, S.close, S.rel
 
 local function solve(opts)
   local r, err = phlox.speciate(opts)
@@ -100,8 +95,7 @@ rel(r.elements.Ag.dissolved, 1.33e-5, 0.1, "AgCl solubility (handbook)")
 
 -- 6. Robustness: random but valid cases (seeded, deterministic), zero
 --    failures, zero NaN
-local seed = 12345
-local function rnd() seed = (seed * 1103515245 + 12345) % 2147483648; return seed / 2147483648 end
+local rnd = S.rng.new(12345)
 local fails = 0
 for k = 1, 60 do
   local T = 25 + 275 * rnd()

@@ -12,12 +12,8 @@
 local src = assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR not set")
 local phlox = require "phlox"
 
-local function read(path)
-  local f = assert(io.open(path, "rb"))
-  local t = f:read("a")
-  f:close()
-  return t
-end
+local S = dofile(src .. "/tests/support/init.lua")
+local read = S.files.slurp
 
 local function first_difference(a, b)
   local la, lb, n = {}, {}, 0

@@ -15,9 +15,9 @@
 --   * the leach study, a resumable sweep on two worker processes, rerun in
 --     the same folder on one process, rewrites the same bytes.
 -- Environment (tests/CMakeLists.txt): PHLOX_BIN, PHLOX_SOURCE_DIR.
-local t = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
-                 .. "/tests/scripts/lib/common.lua")
-local BIN, SRC, check, q, read = t.BIN, t.SRC, t.check, t.quote, t.read
+local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
+local BIN, SRC, check = assert(S.BIN, "PHLOX_BIN is not set (run through ctest)"), S.SRC, S.check
+local q, read = S.files.quote, S.files.read
 
 local STUDIES = {
   { script = "geothermal_steel.lua", min_files = 9, maps = true },
@@ -27,7 +27,7 @@ local STUDIES = {
 }
 
 local function read_csv(text, name)
-  local h, _, rows, nfiles = t.read_csv(text, name)
+  local h, _, rows, nfiles = S.csv.stamped(text, name)
   check(h:find("^# program: phlox "), name .. ": provenance starts with the program")
   check(h:find("\n# revision: ", 1, true), name .. ": the source revision")
   check(h:find("\n# script: [^\n]*%.lua sha256=%x+"), name .. ": script and its checksum")
@@ -78,7 +78,7 @@ local function checks()
         local rows = read_csv(s, name)
         if name:match("^boundaries%-") then
           for i, b in ipairs(rows) do
-            local want = t.nernst_slope(b.reaction, tonumber(b.T_C))
+            local want = S.chem.boundary_slope(b.reaction, tonumber(b.T_C))
             if want then
               check(math.abs(tonumber(b.slope_V_per_pH) - want) < 1e-9,
                     ("%s row %d (%s): slope %s, Nernst %.9g"):format(name, i, b.reaction, b.slope_V_per_pH, want))

@@ -17,9 +17,9 @@
 -- PHLOX_SOURCE_DIR.
 local core = require "phlox.core"
 
-local t = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
-                 .. "/tests/scripts/lib/common.lua")
-local BIN, SRC, check, q, read, write = t.BIN, t.SRC, t.check, t.quote, t.read, t.write
+local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
+local BIN, SRC, check = assert(S.BIN, "PHLOX_BIN is not set (run through ctest)"), S.SRC, S.check
+local q, read, write = S.files.quote, S.files.read, S.files.write
 local STUDY = SRC .. "/tests/fixtures/sweep_study.lua"
 local POINTS = 24
 
@@ -28,7 +28,7 @@ math.randomseed(seed)
 print("test_sweep_resume: seed " .. seed)
 
 local dirs = {}
-local function tmpdir() return t.tmpdir(dirs) end
+local function tmpdir() return S.files.tmpdir(dirs) end
 
 -- Run the study to the end; returns ok, output.
 local function run(dir, workers, extra, script)

@@ -10,14 +10,14 @@
 -- Environment (tests/CMakeLists.txt): PHLOX_BIN, PHLOX_SOURCE_DIR.
 local core = require "phlox.core"
 
-local t = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)")
-                 .. "/tests/scripts/lib/common.lua")
-local BIN, SRC, check, q, read = t.BIN, t.SRC, t.check, t.quote, t.read
+local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
+local BIN, SRC, check = assert(S.BIN, "PHLOX_BIN is not set (run through ctest)"), S.SRC, S.check
+local q, read = S.files.quote, S.files.read
 local STUDY = SRC .. "/tests/fixtures/sweep_study.lua"
 local POINTS = 24
 
 local dirs = {}
-local function tmpdir() return t.tmpdir(dirs) end
+local function tmpdir() return S.files.tmpdir(dirs) end
 
 local function sh(cmd, log)
   local ok = os.execute(cmd .. " > " .. q(log) .. " 2>&1")

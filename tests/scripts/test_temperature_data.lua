@@ -12,7 +12,8 @@
 --     records have a temperature function, and a map of every element at
 --     300 C runs with the default options.
 local phlox = require "phlox"
-local function check(cond, msg) if not cond then error(msg, 2) end end
+local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
+local check = S.check
 
 -- a user file with one record without temperature data (ZnOH^+ with its
 -- 25 C constant from Zn.lua, dH left out on purpose: a test fixture)

@@ -16,8 +16,9 @@
 --     Perry's handbook, from memory: H 2.3, O 4.0, others 6.2 cal/(g-atom K))
 --     give Ni(OH)2(s) 6.2 + 2 x 4.0 + 2 x 2.3 = 18.8 cal/(mol K).
 local phlox = require "phlox"
-local function check(cond, msg) if not cond then error(msg, 2) end end
-local src = assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR not set")
+local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
+local check = S.check
+local src = S.SRC
 
 local lib = phlox.library { "Zn", "Ag", "Cl" }
 local TR = 298.15
@@ -32,12 +33,9 @@ end
 
 -- 1b: pKw of R11-07 along saturation (tests/reference/water.csv)
 local pKw = {}
-local fh = assert(io.open(src .. "/tests/reference/water.csv", "rb"))
-for line in fh:lines() do
-  local group, t, q, v = line:match("^([^,]*),([^,]*),[^,]*,[^,]*,[^,]*,([^,]*),([^,]*),")
-  if group == "saturation_liquid_computed" and q == "pKw" then pKw[tonumber(t)] = tonumber(v) end
+for _, r in ipairs(S.csv.reference("water.csv")) do
+  if r.group == "saturation_liquid_computed" and r.quantity == "pKw" then pKw[tonumber(r.t_C)] = tonumber(r.value) end
 end
-fh:close()
 check(pKw[25] and pKw[300], "pKw rows in water.csv")
 local TOL_KW = 0.03 + 0.03 -- phlox Kw vs R11-07 at T and at 25 C (docs/thermo.md)
 for _, tc in ipairs { 100, 200, 300 } do

@@ -454,37 +454,11 @@ M.GROUPS = {
 }
 
 -- ---------------------------------------------------------------- helpers
---- Parse a CSV file (RFC 4180 quoting) into a list of rows keyed by header.
+--- Parse a CSV file (RFC 4180 quoting) into a list of rows keyed by header
+--- (the shared reader of tests/support/csv.lua).
+local CSV = dofile((debug.getinfo(1, "S").source:match("^@(.*)[/\\]") or ".") .. "/../support/csv.lua")
 function M.read_csv(path)
-  local f = assert(io.open(path, "rb"))
-  local text = f:read("a")
-  f:close()
-  local rows, header, fields, field = {}, nil, {}, {}
-  local i, n, inq = 1, #text, false
-  local function end_field() fields[#fields + 1] = table.concat(field); field = {} end
-  local function end_row()
-    end_field()
-    if not header then header = fields
-    elseif #fields > 1 or fields[1] ~= "" then
-      local r = {}
-      for k, h in ipairs(header) do r[h] = fields[k] end
-      rows[#rows + 1] = r
-    end
-    fields = {}
-  end
-  while i <= n do
-    local c = text:sub(i, i)
-    if inq then
-      if c == '"' then
-        if text:sub(i + 1, i + 1) == '"' then field[#field + 1] = '"'; i = i + 1 else inq = false end
-      else field[#field + 1] = c end
-    elseif c == '"' then inq = true
-    elseif c == "," then end_field()
-    elseif c == "\n" then end_row()
-    elseif c ~= "\r" then field[#field + 1] = c end
-    i = i + 1
-  end
-  if #field > 0 or #fields > 0 then end_row() end
+  local _, rows = CSV.read(path)
   return rows
 end
 

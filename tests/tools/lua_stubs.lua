@@ -28,13 +28,8 @@ assert(dir, "usage: phlox lua_stubs.lua [--check] DIR")
 
 local src_root = os.getenv("PHLOX_SOURCE_DIR") or "."
 
-local function read(path)
-  local f = io.open(path, "rb")
-  if not f then return nil end
-  local t = f:read("a")
-  f:close()
-  return t
-end
+local read = dofile((debug.getinfo(1, "S").source:match("^@(.*)[/\\]") or ".")
+                   .. "/../support/files.lua").read -- the file's bytes, or nil
 
 local function lines_of(text)
   local t = {}

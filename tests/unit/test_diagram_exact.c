@@ -10,6 +10,8 @@
  * inputs: duplicates, species never stable, coincident and parallel
  * boundaries, NaN/Inf, failing allocations. */
 #include "px_test.h"
+#include "support/px_csv.h"
+#include "support/px_diagram_cases.h"
 #include "core/constants.h"
 #include "core/status.h"
 #include "diagram/diagram.h"
@@ -20,42 +22,16 @@
 
 static double ref_potential(const char *couple)
 {
-    FILE *f = px_ref_open("standard_potentials.csv");
-    char line[4096];
-    double v = NAN;
-    size_t n = strlen(couple);
-    while (fgets(line, sizeof line, f))
-        if (strncmp(line, couple, n) == 0 && line[n] == ',') {
-            v = strtod(line + n + 1, NULL);
-            break;
-        }
-    fclose(f);
-    assert_true(isfinite(v));
-    return v;
+    return px_ref_value("standard_potentials.csv", "couple", couple, "E0_V_SHE_25C");
 }
 
-static unsigned long long rng_state;
-static double urand(void) /* xorshift64*, deterministic per seed */
-{
-    rng_state ^= rng_state >> 12;
-    rng_state ^= rng_state << 25;
-    rng_state ^= rng_state >> 27;
-    return (double)((rng_state * 2685821657736338717ULL) >> 11) / 9007199254740992.0;
-}
+static px_rng rng;
+static double urand(void) { return px_rng_uniform(&rng); }
 
 /* Phi for a random but chemically shaped species: nH, ne, nu small integers */
 static void random_species(px_diagram_species *sp, size_t m, unsigned long long seed)
 {
-    rng_state = seed * 0x9E3779B97F4A7C15ULL + 1;
-    double s = PX_R * PX_TR * PX_LN10;
-    for (size_t j = 0; j < m; j++) {
-        int nH = (int)(urand() * 9) - 4, ne = (int)(urand() * 9) - 4, nu = 1 + (int)(urand() * 3);
-        sp[j].c = (urand() - 0.5) * 4.0e5 / nu;
-        sp[j].p = nH * s / nu;
-        sp[j].q = ne * PX_F / nu;
-        sp[j].id = 100 + (int)j;
-        sp[j].label = NULL;
-    }
+    px_cases_shaped(&rng, sp, m, seed, 100);
 }
 
 static double phi(const px_diagram_species *s, double x, double y)
@@ -218,7 +194,7 @@ static void test_all_stable(void **state)
 {
     (void)state;
     px_diagram_species sp[100];
-    rng_state = 99;
+    px_rng_set_state(&rng, 99);
     for (size_t j = 0; j < 100; j++) {
         double x0 = 14 * urand(), y0 = -2 + 4 * urand(), A = 1e3, B = 1e5;
         double f = -A * (x0 - 7) * (x0 - 7) - B * y0 * y0, fx = -2 * A * (x0 - 7), fy = -2 * B * y0;
@@ -275,7 +251,7 @@ static void test_structured_degenerate(void **state)
     px_diagram_species sp[40];
     px_diagram_window w = {-3, 3, -3, 3};
     for (unsigned long long seed = 1; seed <= 300; seed++) {
-        rng_state = seed * 7919;
+        px_rng_set_state(&rng, seed * 7919);
         size_t m = 2 + (size_t)(urand() * 38);
         for (size_t j = 0; j < m; j++) {
             sp[j].c = (double)((int)(urand() * 5) - 2);

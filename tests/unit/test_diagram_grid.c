@@ -8,6 +8,7 @@
  * requested tolerance of the exact line.  Also: node counts and areas, a
  * failing callback, saddles, bad input. */
 #include "px_test.h"
+#include "support/px_diagram_cases.h"
 #include "core/constants.h"
 #include "core/status.h"
 #include "diagram/diagram.h"
@@ -28,27 +29,11 @@ static int argmin_label(double x, double y, void *user, int *id)
     return PX_OK;
 }
 
-static unsigned long long rng_state;
-static double urand(void)
-{
-    rng_state ^= rng_state >> 12;
-    rng_state ^= rng_state << 25;
-    rng_state ^= rng_state >> 27;
-    return (double)((rng_state * 2685821657736338717ULL) >> 11) / 9007199254740992.0;
-}
+static px_rng rng;
 
 static void random_species(px_diagram_species *sp, size_t m, unsigned long long seed)
 {
-    rng_state = seed * 0x9E3779B97F4A7C15ULL + 1;
-    double s = PX_R * PX_TR * PX_LN10;
-    for (size_t j = 0; j < m; j++) {
-        int nH = (int)(urand() * 9) - 4, ne = (int)(urand() * 9) - 4, nu = 1 + (int)(urand() * 3);
-        sp[j].c = (urand() - 0.5) * 4.0e5 / nu;
-        sp[j].p = nH * s / nu;
-        sp[j].q = ne * PX_F / nu;
-        sp[j].id = 100 + (int)j;
-        sp[j].label = NULL;
-    }
+    px_cases_shaped(&rng, sp, m, seed, 100);
 }
 
 static const px_diagram_species *by_id(const px_diagram_species *sp, size_t m, int id)

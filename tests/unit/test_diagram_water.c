@@ -8,6 +8,7 @@
  * offsets against the values in the task's cited sources and the ordering
  * the Nernst equation demands for Ag/AgCl. */
 #include "px_test.h"
+#include "support/px_csv.h"
 #include "core/constants.h"
 #include "core/status.h"
 #include "diagram/diagram.h"
@@ -16,18 +17,7 @@
 
 static double ref_potential(const char *couple)
 {
-    FILE *f = px_ref_open("standard_potentials.csv");
-    char line[4096];
-    double v = NAN;
-    size_t n = strlen(couple);
-    while (fgets(line, sizeof line, f))
-        if (strncmp(line, couple, n) == 0 && line[n] == ',') {
-            v = strtod(line + n + 1, NULL);
-            break;
-        }
-    fclose(f);
-    assert_true(isfinite(v));
-    return v;
+    return px_ref_value("standard_potentials.csv", "couple", couple, "E0_V_SHE_25C");
 }
 
 static void test_water_lines(void **state)

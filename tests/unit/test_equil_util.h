@@ -1,11 +1,12 @@
 /* test_equil_util.h - helpers shared by the speciation-solver tests: a
  * small system builder that remembers the stoichiometry (so a test can
- * add species up to each component's total on its own), readers for the
- * reference CSV files in PHLOX_REFERENCE_DIR, and the totals check run
+ * add species up to each component's total on its own), reference values
+ * read through tests/support/px_csv.h, and the totals check run
  * after every solve. */
 #ifndef TEST_EQUIL_UTIL_H
 #define TEST_EQUIL_UTIL_H
 #include "px_test.h"
+#include "support/px_csv.h"
 #include "equil/equil.h"
 #include <stdarg.h>
 #include <stdlib.h>
@@ -137,84 +138,68 @@ static inline void tb_check(const tb *t)
     }
 }
 
-/* --- reference CSV readers --------------------------------------------- */
-
-/* Splits one CSV line into fields (quotes honoured, no escaped quotes). */
-static inline int csv_fields(char *line, char **f, int maxf)
-{
-    int n = 0;
-    char *p = line;
-    while (*p && n < maxf) {
-        if (*p == '"') {
-            f[n++] = ++p;
-            while (*p && *p != '"') p++;
-            if (*p) *p++ = '\0';
-            if (*p == ',') p++;
-        } else {
-            f[n++] = p;
-            while (*p && *p != ',' && *p != '\n' && *p != '\r') p++;
-            if (*p) *p++ = '\0';
-        }
-    }
-    return n;
-}
+/* --- reference values (tests/support/px_csv.h) -------------------------- */
 
 /* log10 K of the first row of log_k_25C.csv whose reaction matches. */
 static inline double ref_logk(const char *reaction)
 {
-    FILE *fp = px_ref_open("log_k_25C.csv");
-    char line[4096];
+    return px_ref_value("log_k_25C.csv", "reaction", reaction, "log10_K_25C");
+}
+
+/* The first row of a reference file that `pick` accepts, column `valcol`. */
+static inline double ref_pick(const char *file, const char *valcol,
+                              int (*pick)(const px_csv_row *hdr, const px_csv_row *r,
+                                          const void *key),
+                              const void *key)
+{
+    FILE *fp = px_ref_open(file);
+    px_csv_row hdr, r;
     double v = NAN;
-    while (fgets(line, sizeof line, fp)) {
-        char *f[8];
-        if (csv_fields(line, f, 8) >= 2 && strcmp(f[0], reaction) == 0) {
-            v = strtod(f[1], NULL);
+    assert_true(px_csv_next(fp, &hdr));
+    int cv = px_csv_col(&hdr, valcol);
+    while (px_csv_next(fp, &r))
+        if (r.n > cv && pick(&hdr, &r, key)) {
+            v = strtod(r.f[cv], NULL);
             break;
         }
-    }
     fclose(fp);
-    if (!isfinite(v)) print_error("no row for '%s' in log_k_25C.csv\n", reaction);
+    if (!isfinite(v)) print_error("no matching row in %s\n", file);
     assert_true(isfinite(v));
     return v;
+}
+
+typedef struct water_key {
+    const char *group, *quantity;
+    double t_c;
+} water_key;
+
+static inline int pick_water(const px_csv_row *hdr, const px_csv_row *r, const void *key)
+{
+    const water_key *k = key;
+    int cg = px_csv_col(hdr, "group"), ct = px_csv_col(hdr, "t_C"), cq = px_csv_col(hdr, "quantity");
+    return r->n > cq && strcmp(r->f[cg], k->group) == 0 &&
+           fabs(strtod(r->f[ct], NULL) - k->t_c) < 1e-9 && strcmp(r->f[cq], k->quantity) == 0;
 }
 
 /* A value of water.csv: group, t_C and quantity select the row. */
 static inline double ref_water(const char *group, double t_c, const char *quantity)
 {
-    FILE *fp = px_ref_open("water.csv");
-    char line[4096];
-    double v = NAN;
-    while (fgets(line, sizeof line, fp)) {
-        char *f[12];
-        if (csv_fields(line, f, 12) >= 7 && strcmp(f[0], group) == 0 &&
-            fabs(strtod(f[1], NULL) - t_c) < 1e-9 && strcmp(f[5], quantity) == 0) {
-            v = strtod(f[6], NULL);
-            break;
-        }
-    }
-    fclose(fp);
-    assert_true(isfinite(v));
-    return v;
+    water_key k = {group, quantity, t_c};
+    return ref_pick("water.csv", "value", pick_water, &k);
+}
+
+static inline int pick_dh(const px_csv_row *hdr, const px_csv_row *r, const void *key)
+{
+    int ct = px_csv_col(hdr, "t_C"), cs = px_csv_col(hdr, "source");
+    return r->n > cs && fabs(strtod(r->f[ct], NULL) - *(const double *)key) < 1e-9 &&
+           strncmp(r->f[cs], "computed here: A, B", 19) == 0;
 }
 
 /* Debye-Hueckel A (log10, kg^0.5 mol^-0.5) of debye_huckel.csv, the row
  * computed from IAPWS at saturation ("computed here: A, B ..."). */
 static inline double ref_dh_a(double t_c)
 {
-    FILE *fp = px_ref_open("debye_huckel.csv");
-    char line[4096];
-    double v = NAN;
-    while (fgets(line, sizeof line, fp)) {
-        char *f[12];
-        if (csv_fields(line, f, 12) >= 8 && fabs(strtod(f[0], NULL) - t_c) < 1e-9 &&
-            strncmp(f[7], "computed here: A, B", 19) == 0) {
-            v = strtod(f[5], NULL);
-            break;
-        }
-    }
-    fclose(fp);
-    assert_true(isfinite(v));
-    return v;
+    return ref_pick("debye_huckel.csv", "A_log10_kg05_mol-05", pick_dh, &t_c);
 }
 
 #endif

@@ -12,6 +12,7 @@
  *   - finite differences: -dG/dT = S, dG/dP = V, -T d2G/dT2 = Cp (exact
  *     thermodynamic identities). */
 #include "px_test.h"
+#include "support/px_csv.h"
 
 #include <stdlib.h>
 #include <string.h>
@@ -21,71 +22,6 @@
 #include "thermo/thermo.h"
 
 #define CAL PX_CAL
-
-/* ------------------------------------------------------------ CSV helpers */
-#define MAXF 24
-typedef struct csv_row {
-    char buf[2048];
-    char *f[MAXF];
-    int n;
-} csv_row;
-
-/* split one CSV line in place (double-quoted fields may hold commas) */
-static int csv_read(FILE *fp, csv_row *r)
-{
-    if (!fgets(r->buf, sizeof r->buf, fp))
-        return 0;
-    size_t len = strlen(r->buf);
-    while (len && (r->buf[len - 1] == '\n' || r->buf[len - 1] == '\r'))
-        r->buf[--len] = '\0';
-    r->n = 0;
-    char *p = r->buf;
-    while (r->n < MAXF) {
-        char *out = p, *start = p;
-        int q = 0;
-        if (*p == '"') {
-            q = 1;
-            p++;
-        }
-        while (*p) {
-            if (q && *p == '"' && p[1] == '"') {
-                *out++ = '"';
-                p += 2;
-                continue;
-            }
-            if (q && *p == '"') {
-                q = 0;
-                p++;
-                continue;
-            }
-            if (!q && *p == ',')
-                break;
-            *out++ = *p++;
-        }
-        int end = *p == '\0';
-        *out = '\0';
-        r->f[r->n++] = start;
-        if (end)
-            break;
-        p++;
-    }
-    return 1;
-}
-
-static FILE *ref_open(const char *rel)
-{
-    return px_ref_open(rel);
-}
-
-static int col(const csv_row *hdr, const char *name)
-{
-    for (int i = 0; i < hdr->n; i++)
-        if (!strcmp(hdr->f[i], name))
-            return i;
-    print_error("no column %s\n", name);
-    fail();
-    return -1;
-}
 
 /* ------------------------------------------------------------ reactions */
 static void test_reaction_parse(void **state)
@@ -262,19 +198,19 @@ typedef struct hkf_row {
 
 static int load_hkf(hkf_row *rows, int max)
 {
-    FILE *fp = ref_open("hkf/hkf_parameters.csv");
-    csv_row hdr, r;
-    assert_true(csv_read(fp, &hdr));
-    int ci[] = {col(&hdr, "a1"), col(&hdr, "a2"), col(&hdr, "a3"), col(&hdr, "a4"),
-                col(&hdr, "c1"), col(&hdr, "c2"), col(&hdr, "omega")};
+    FILE *fp = px_ref_open("hkf/hkf_parameters.csv");
+    px_csv_row hdr, r;
+    assert_true(px_csv_next(fp, &hdr));
+    int ci[] = {px_csv_col(&hdr, "a1"), px_csv_col(&hdr, "a2"), px_csv_col(&hdr, "a3"), px_csv_col(&hdr, "a4"),
+                px_csv_col(&hdr, "c1"), px_csv_col(&hdr, "c2"), px_csv_col(&hdr, "omega")};
     /* the papers' printed scaling (hkf/README.md) */
     const double scale[] = {0.1, 1e2, 1, 1e4, 1, 1e4, 1e5};
-    int csp = col(&hdr, "species"), cg = col(&hdr, "dGf_cal_mol"), ch = col(&hdr, "dHf_cal_mol"),
-        cs = col(&hdr, "S_cal_molK"), ccp = col(&hdr, "Cp_25C_cal_molK"),
-        cv = col(&hdr, "V_25C_cm3_mol"), cc = col(&hdr, "confidence"),
-        csrc = col(&hdr, "source");
+    int csp = px_csv_col(&hdr, "species"), cg = px_csv_col(&hdr, "dGf_cal_mol"), ch = px_csv_col(&hdr, "dHf_cal_mol"),
+        cs = px_csv_col(&hdr, "S_cal_molK"), ccp = px_csv_col(&hdr, "Cp_25C_cal_molK"),
+        cv = px_csv_col(&hdr, "V_25C_cm3_mol"), cc = px_csv_col(&hdr, "confidence"),
+        csrc = px_csv_col(&hdr, "source");
     int n = 0;
-    while (n < max && csv_read(fp, &r)) {
+    while (n < max && px_csv_next(fp, &r)) {
         if (r.n < hdr.n)
             continue;
         hkf_row *h = &rows[n];
@@ -505,13 +441,13 @@ static void test_pkw(void **state)
     px_reaction r;
     char msg[128];
     assert_int_equal(px_reaction_parse_balanced("H2O(l) = H^+ + OH^-", &r, msg, sizeof msg), PX_OK);
-    FILE *fp = ref_open("water.csv");
-    csv_row hdr, row;
-    assert_true(csv_read(fp, &hdr));
-    int cg = col(&hdr, "group"), ct = col(&hdr, "T_K"), cq = col(&hdr, "quantity"),
-        cv = col(&hdr, "value");
+    FILE *fp = px_ref_open("water.csv");
+    px_csv_row hdr, row;
+    assert_true(px_csv_next(fp, &hdr));
+    int cg = px_csv_col(&hdr, "group"), ct = px_csv_col(&hdr, "T_K"), cq = px_csv_col(&hdr, "quantity"),
+        cv = px_csv_col(&hdr, "value");
     int n = 0;
-    while (csv_read(fp, &row)) {
+    while (px_csv_next(fp, &row)) {
         if (row.n < hdr.n || strcmp(row.f[cg], "saturation_liquid_computed") ||
             strcmp(row.f[cq], "pKw"))
             continue;
@@ -571,12 +507,12 @@ static px_db *db_from_gibbs(void)
 {
     px_db *db = px_db_new();
     assert_int_equal(px_db_add_builtins(db), PX_OK); /* H2O(l) = the NBS row */
-    FILE *fp = ref_open("gibbs_25C.csv");
-    csv_row hdr, r;
-    assert_true(csv_read(fp, &hdr));
-    int cs = col(&hdr, "species"), cst = col(&hdr, "state"), cg = col(&hdr, "dGf_kJ_mol"),
-        ch = col(&hdr, "dHf_kJ_mol"), cS = col(&hdr, "S_J_molK"), csrc = col(&hdr, "source");
-    while (csv_read(fp, &r)) {
+    FILE *fp = px_ref_open("gibbs_25C.csv");
+    px_csv_row hdr, r;
+    assert_true(px_csv_next(fp, &hdr));
+    int cs = px_csv_col(&hdr, "species"), cst = px_csv_col(&hdr, "state"), cg = px_csv_col(&hdr, "dGf_kJ_mol"),
+        ch = px_csv_col(&hdr, "dHf_kJ_mol"), cS = px_csv_col(&hdr, "S_J_molK"), csrc = px_csv_col(&hdr, "source");
+    while (px_csv_next(fp, &r)) {
         if (r.n < hdr.n || !strstr(r.f[csrc], "Wagman"))
             continue; /* one table consistently: the NBS 1982 rows */
         char text[64];
@@ -633,12 +569,12 @@ static void test_standard_potentials(void **state)
     };
     px_db *db = db_from_gibbs();
     px_thermo_ws *ws = px_thermo_ws_new(PX_DIELECTRIC_R8_97);
-    FILE *fp = ref_open("standard_potentials.csv");
-    csv_row hdr, r;
-    assert_true(csv_read(fp, &hdr));
-    int cc = col(&hdr, "couple"), ce = col(&hdr, "E0_V_SHE_25C");
+    FILE *fp = px_ref_open("standard_potentials.csv");
+    px_csv_row hdr, r;
+    assert_true(px_csv_next(fp, &hdr));
+    int cc = px_csv_col(&hdr, "couple"), ce = px_csv_col(&hdr, "E0_V_SHE_25C");
     int found = 0;
-    while (csv_read(fp, &r)) {
+    while (px_csv_next(fp, &r)) {
         int want = 0;
         for (size_t i = 0; i < sizeof couples / sizeof couples[0]; i++)
             if (!strcmp(couples[i], r.f[cc]))
@@ -988,13 +924,13 @@ static void test_vaporization(void **state)
     px_reaction r;
     char msg[128];
     assert_int_equal(px_reaction_parse_balanced("H2O(l) = H2O(g)", &r, msg, sizeof msg), PX_OK);
-    FILE *fp = ref_open("water.csv");
-    csv_row hdr, row;
-    assert_true(csv_read(fp, &hdr));
-    int cg = col(&hdr, "group"), ct = col(&hdr, "T_K"), cq = col(&hdr, "quantity"),
-        cv = col(&hdr, "value");
+    FILE *fp = px_ref_open("water.csv");
+    px_csv_row hdr, row;
+    assert_true(px_csv_next(fp, &hdr));
+    int cg = px_csv_col(&hdr, "group"), ct = px_csv_col(&hdr, "T_K"), cq = px_csv_col(&hdr, "quantity"),
+        cv = px_csv_col(&hdr, "value");
     int n = 0;
-    while (csv_read(fp, &row)) {
+    while (px_csv_next(fp, &row)) {
         double T = atof(row.f[ct]);
         if (row.n < hdr.n || strcmp(row.f[cg], "saturation_liquid_computed") ||
             strcmp(row.f[cq], "p_sat") || T < 298 || T > 373.2)
@@ -1086,13 +1022,13 @@ static void test_default_pressure(void **state)
     /* 100 C: psat = 1.014 bar (1 bar would be steam) */
     assert_int_equal(px_thermo_default_pressure(373.15, &P), PX_OK);
     assert_close(P, 1.01418, 0, 1e-4);
-    FILE *fp = ref_open("water.csv");
-    csv_row hdr, row;
-    assert_true(csv_read(fp, &hdr));
-    int cg = col(&hdr, "group"), ct = col(&hdr, "T_K"), cq = col(&hdr, "quantity"),
-        cv = col(&hdr, "value");
+    FILE *fp = px_ref_open("water.csv");
+    px_csv_row hdr, row;
+    assert_true(px_csv_next(fp, &hdr));
+    int cg = px_csv_col(&hdr, "group"), ct = px_csv_col(&hdr, "T_K"), cq = px_csv_col(&hdr, "quantity"),
+        cv = px_csv_col(&hdr, "value");
     int n = 0;
-    while (csv_read(fp, &row)) {
+    while (px_csv_next(fp, &row)) {
         if (row.n < hdr.n || strcmp(row.f[cg], "saturation_liquid_computed") ||
             strcmp(row.f[cq], "p_sat") || atof(row.f[ct]) < 373.15)
             continue;

@@ -15,6 +15,7 @@
  * "To the printed digits" means |ours - printed| <= half a unit in the last
  * printed digit. */
 #include "px_test.h"
+#include "support/px_csv.h"
 #include "water/water.h"
 #include "water/water_internal.h"
 #include "core/constants.h"
@@ -45,33 +46,6 @@ static double half_ulp_printed(const char *s)
         assert_close((ours), ref_, 0.0, half_ulp_printed(printed) * (1 + 1e-9)); \
     } while (0)
 
-/* A minimal CSV reader for the reference files (quoted fields, no escaped
- * quotes inside). Splits one line into at most nmax fields, in place. */
-static int csv_split(char *line, char **f, int nmax)
-{
-    int n = 0;
-    char *p = line;
-    while (n < nmax) {
-        if (*p == '"') {
-            p++;
-            f[n++] = p;
-            while (*p && *p != '"') p++;
-            if (*p == '"') *p++ = '\0';
-            if (*p == ',') p++;
-            else break;
-        } else {
-            f[n++] = p;
-            while (*p && *p != ',' && *p != '\n' && *p != '\r') p++;
-            if (*p == ',') *p++ = '\0';
-            else {
-                *p = '\0';
-                break;
-            }
-        }
-    }
-    return n;
-}
-
 typedef struct ref_row {
     char group[64], quantity[32], value[32];
     double T, p_mpa, rho;  /* p_mpa, rho: NAN when blank */
@@ -80,12 +54,12 @@ typedef struct ref_row {
 static int load_water_csv(ref_row *rows, int nmax)
 {
     FILE *fp = px_ref_open("water.csv");
-    char line[2048];
+    px_csv_row row;
     int n = 0;
-    assert_non_null(fgets(line, sizeof line, fp)); /* header */
-    while (n < nmax && fgets(line, sizeof line, fp)) {
-        char *f[12];
-        if (csv_split(line, f, 12) < 7) continue;
+    assert_true(px_csv_next(fp, &row)); /* header */
+    while (n < nmax && px_csv_next(fp, &row)) {
+        char **f = row.f;
+        if (row.n < 7) continue;
         ref_row *r = &rows[n++];
         snprintf(r->group, sizeof r->group, "%s", f[0]);
         r->T = strtod(f[2], NULL);
@@ -315,12 +289,12 @@ static void test_dh_table(void **state)
 {
     (void)state;
     FILE *fp = px_ref_open("debye_huckel.csv");
-    char line[2048];
+    px_csv_row row;
     int ncomp = 0, nhk = 0;
-    assert_non_null(fgets(line, sizeof line, fp));
-    while (fgets(line, sizeof line, fp)) {
-        char *f[12];
-        if (csv_split(line, f, 12) < 8) continue;
+    assert_true(px_csv_next(fp, &row)); /* header */
+    while (px_csv_next(fp, &row)) {
+        char **f = row.f;
+        if (row.n < 8) continue;
         double T = strtod(f[1], NULL);
         px_water_state s;
         if (!strncmp(f[7], "computed here", 13)) {
