@@ -1,6 +1,7 @@
 /* test_render.c - the figure module: tick choice, label geometry, the three
  * output formats, pixel probes away from text, deterministic vector bytes. */
 #include "px_test.h"
+#include "support/px_rng.h"
 #include "core/status.h"
 #include "render/png.h"
 #include "render/render.h"
@@ -235,11 +236,12 @@ static void test_png_encode_alpha(void **state)
     cairo_surface_t *s = cairo_image_surface_create(CAIRO_FORMAT_ARGB32, w, h);
     unsigned char *d = cairo_image_surface_get_data(s);
     int stride = cairo_image_surface_get_stride(s);
-    uint32_t seed = 12345;
+    px_rng rng;
+    px_rng_seed(&rng, 12345);
     for (int y = 0; y < h; y++)
         for (int x = 0; x < w; x++) {
             uint32_t a, r, g, b;
-            seed = seed * 1664525u + 1013904223u; /* Numerical Recipes LCG */
+            uint32_t seed = (uint32_t)(px_rng_uniform(&rng) * 4294967296.0);
             if (y < 30) a = 255, r = 40, g = 90, b = 200;            /* flat */
             else if (y < 60) a = (uint32_t)(x * 255 / (w - 1)), r = g = b = a / 2; /* ramp */
             else a = seed >> 24, r = (seed >> 8) & 0xff, g = (seed >> 16) & 0xff, b = seed & 0xff;
@@ -275,12 +277,11 @@ static void test_svg_rounding(void **state)
     (void)state;
     px_figure *f = two_fields();
     double x[2000], y[2000];
-    uint32_t seed = 777;
+    px_rng rng;
+    px_rng_seed(&rng, 777);
     for (int i = 0; i < 2000; i++) {
-        seed = seed * 1664525u + 1013904223u; /* Numerical Recipes LCG */
-        x[i] = 14.0 * (seed >> 8) / 16777216.0;
-        seed = seed * 1664525u + 1013904223u;
-        y[i] = -1 + 2.0 * (seed >> 8) / 16777216.0;
+        x[i] = 14.0 * px_rng_uniform(&rng);
+        y[i] = -1 + 2.0 * px_rng_uniform(&rng);
     }
     px_rgba grey = {0.5, 0.5, 0.5, 1};
     assert_int_equal(px_figure_line(f, 0, x, y, 2000, grey, 0.3, PX_DASH_SOLID, NULL), PX_OK);
