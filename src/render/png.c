@@ -16,6 +16,7 @@
 #define PX_LZ_WINDOW 32768   /* deflate's largest distance (RFC 1951 3.2.5) */
 #define PX_LZ_MIN 3          /* shortest and longest match (RFC 1951 3.2.5) */
 #define PX_LZ_MAX 258
+#define PX_IDAT_MAX ((size_t)1 << 16) /* image data per IDAT chunk (any split is valid, PNG 11.2.4) */
 
 typedef struct bitw {
     unsigned char *p;
@@ -174,18 +175,15 @@ static size_t zlib_stream(const unsigned char *d, size_t n, size_t bpp, size_t r
     return w.n;
 }
 
-/* CRC-32 of PNG chunks (ISO 3309 polynomial; PNG spec, Annex D), by table. */
+/* CRC-32 of PNG chunks (ISO 3309 polynomial; PNG spec, Annex D), by a
+ * table made per call (2 K steps, no shared state between threads). */
 static uint32_t crc_update(uint32_t c, const unsigned char *p, size_t n)
 {
-    static uint32_t table[256];
-    static int ready; /* filled with the same values by any thread: a benign race */
-    if (!ready) {
-        for (uint32_t k = 0; k < 256; k++) {
-            uint32_t v = k;
-            for (int j = 0; j < 8; j++) v = v & 1 ? 0xedb88320u ^ (v >> 1) : v >> 1;
-            table[k] = v;
-        }
-        ready = 1;
+    uint32_t table[256];
+    for (uint32_t k = 0; k < 256; k++) {
+        uint32_t v = k;
+        for (int j = 0; j < 8; j++) v = v & 1 ? 0xedb88320u ^ (v >> 1) : v >> 1;
+        table[k] = v;
     }
     for (size_t i = 0; i < n; i++) c = table[(c ^ p[i]) & 0xff] ^ (c >> 8);
     return c;
@@ -259,12 +257,11 @@ int px_png_encode(const unsigned char *pix, int width, int height, int stride,
     unsigned char *raw = malloc(nraw);
     int32_t *head = malloc(sizeof *head << PX_LZ_HASH_BITS);
     codes *tab = malloc(sizeof *tab);
-    /* fixed codes take at most 9 bits a byte: room for that, headers,
-     * signature, IHDR, bKGD, IDAT's frame, IEND and the text chunks */
-    size_t cap = nraw + nraw / 8 + 64 + 8 + 25 + 18 + 12 + 12 + px_png_text_size(keys, vals, nmeta);
-    unsigned char *o = malloc(cap);
-    if (!raw || !head || !tab || !o) {
-        free(raw), free(head), free(tab), free(o);
+    /* fixed codes take at most 9 bits a byte, plus the zlib frame */
+    size_t zcap = nraw + nraw / 8 + 64;
+    unsigned char *zb = malloc(zcap);
+    if (!raw || !head || !tab || !zb) {
+        free(raw), free(head), free(tab), free(zb);
         return PX_ENOMEM;
     }
     for (size_t y = 0; y < h; y++) {
@@ -288,9 +285,19 @@ int px_png_encode(const unsigned char *pix, int width, int height, int stride,
             if (!opaque) *d++ = (unsigned char)a;
         }
     }
-    size_t n = 0;
+    size_t z = zlib_stream(raw, nraw, bpp, row, zb, head, tab);
+    free(raw);
+    free(head);
+    free(tab);
+    /* signature, IHDR, bKGD, the IDAT chunks, IEND and the text chunks */
+    size_t cap = 8 + 25 + 18 + z + 12 * (z / PX_IDAT_MAX + 1) + 12 + px_png_text_size(keys, vals, nmeta);
+    unsigned char *o = malloc(cap);
+    if (!o) {
+        free(zb);
+        return PX_ENOMEM;
+    }
+    size_t n = 8;
     memcpy(o, "\x89PNG\r\n\x1a\n", 8);
-    n = 8;
     unsigned char ihdr[13];
     be32(ihdr, (uint32_t)w);
     be32(ihdr + 4, (uint32_t)h);
@@ -301,16 +308,10 @@ int px_png_encode(const unsigned char *pix, int width, int height, int stride,
     n += px_png_text(o + n, keys, vals, nmeta);
     /* background white, as cairo's writer sets it (PNG spec 11.3.5.1) */
     n += px_png_chunk(o + n, "bKGD", (const unsigned char *)"\0\xff\0\xff\0\xff", 6, NULL, 0);
-    /* IDAT: compress in place after its 8-byte head, then frame it */
-    size_t z = zlib_stream(raw, nraw, bpp, row, o + n + 8, head, tab);
-    be32(o + n, (uint32_t)z);
-    memcpy(o + n + 4, "IDAT", 4);
-    be32(o + n + 8 + z, crc_update(0xffffffffu, o + n + 4, 4 + z) ^ 0xffffffffu);
-    n += 12 + z;
+    for (size_t at = 0; at < z; at += PX_IDAT_MAX)
+        n += px_png_chunk(o + n, "IDAT", zb + at, z - at < PX_IDAT_MAX ? z - at : PX_IDAT_MAX, NULL, 0);
     n += px_png_chunk(o + n, "IEND", NULL, 0, NULL, 0);
-    free(raw);
-    free(head);
-    free(tab);
+    free(zb);
     *out = o;
     *nout = n;
     return PX_OK;
