@@ -113,18 +113,15 @@ static size_t match_len(const unsigned char *d, size_t i, size_t j, size_t n)
 }
 
 /* zlib stream of d[0..n) into out (room for px_png_deflate_bound(n)). */
-/* Adler-32 (RFC 1950 2.2, 8.2), sixteen bytes a step: a gains their sum,
- * b gains 16 a plus their sum weighted 16, 15, ..., 1. */
+/* Adler-32 (RFC 1950 2.2, 8.2), eight bytes a step. */
 static uint32_t adler32(const unsigned char *d, size_t n)
 {
     uint32_t a = 1, b = 0;
     for (size_t k = 0; k < n;) {
         size_t stop = n - k < 5552 ? n : k + 5552; /* largest run without overflow (RFC 1950 9) */
-        for (; k + 16 <= stop; k += 16) {
-            uint32_t s1 = 0, s2 = 0;
-            for (int j = 0; j < 16; j++) s1 += d[k + j], s2 += (uint32_t)(16 - j) * d[k + j];
-            b += 16 * a + s2;
-            a += s1;
+        for (; k + 8 <= stop; k += 8) {
+            a += d[k], b += a, a += d[k + 1], b += a, a += d[k + 2], b += a, a += d[k + 3], b += a;
+            a += d[k + 4], b += a, a += d[k + 5], b += a, a += d[k + 6], b += a, a += d[k + 7], b += a;
         }
         for (; k < stop; k++) a += d[k], b += a;
         a %= 65521u, b %= 65521u;
@@ -243,24 +240,16 @@ int px_png_encode(const unsigned char *pix, int width, int height, int stride,
     for (size_t k = 0; k < nmeta; k++)
         if (strlen(keys[k]) > PX_PNG_KEY_MAX) return PX_EINVAL;
     size_t w = (size_t)width, h = (size_t)height;
-    /* cairo's ARGB32: native-endian 32-bit words, alpha premultiplied */
+    /* cairo's ARGB32: native-endian 32-bit words, alpha premultiplied.
+     * Figures are opaque (white page): convert to RGB, and start again
+     * as RGBA at the first pixel that is not. */
     int opaque = 1;
-    for (size_t y = 0; y < h && opaque; y++) {
-        const uint32_t *r = (const uint32_t *)(const void *)(pix + y * (size_t)stride);
-        for (size_t x = 0; x < w; x++)
-            if ((r[x] >> 24) != 0xff) {
-                opaque = 0;
-                break;
-            }
-    }
-    size_t bpp = opaque ? 3 : 4, row = 1 + w * bpp, nraw = row * h;
+    size_t bpp = 3, row = 1 + w * bpp, nraw = row * h;
     unsigned char *raw = malloc(nraw);
     int32_t *head = malloc(sizeof *head << PX_LZ_HASH_BITS);
     codes *tab = malloc(sizeof *tab);
-    /* fixed codes take at most 9 bits a byte, plus the zlib frame */
-    size_t zcap = nraw + nraw / 8 + 64;
-    unsigned char *zb = malloc(zcap);
-    if (!raw || !head || !tab || !zb) {
+    unsigned char *zb = NULL;
+    if (!raw || !head || !tab) {
         free(raw), free(head), free(tab), free(zb);
         return PX_ENOMEM;
     }
@@ -268,10 +257,30 @@ int px_png_encode(const unsigned char *pix, int width, int height, int stride,
         const uint32_t *r = (const uint32_t *)(const void *)(pix + y * (size_t)stride);
         unsigned char *d = raw + y * row;
         *d++ = 0; /* filter type 0: the LZ77 repeats stand in for filtering */
+        if (opaque) {
+            uint32_t all = 0xffffffffu;
+            for (size_t x = 0; x < w; x++) {
+                uint32_t p = r[x];
+                all &= p;
+                d[0] = (unsigned char)(p >> 16), d[1] = (unsigned char)(p >> 8), d[2] = (unsigned char)p;
+                d += 3;
+            }
+            if ((all >> 24) == 0xff) continue;
+            opaque = 0; /* a pixel that is not opaque: RGBA from the first row */
+            bpp = 4, row = 1 + w * 4, nraw = row * h;
+            unsigned char *g = realloc(raw, nraw);
+            if (!g) {
+                free(raw), free(head), free(tab), free(zb);
+                return PX_ENOMEM;
+            }
+            raw = g;
+            y = (size_t)-1; /* the loop's y++ makes it 0 */
+            continue;
+        }
         for (size_t x = 0; x < w; x++) {
             uint32_t p = r[x], a = p >> 24;
             uint32_t cr = (p >> 16) & 0xff, cg = (p >> 8) & 0xff, cb = p & 0xff;
-            if (!opaque && a != 0xff) { /* un-premultiply, rounding to nearest */
+            if (a != 0xff) { /* un-premultiply, rounding to nearest */
                 if (a == 0) cr = cg = cb = 0;
                 else {
                     cr = (cr * 255 + a / 2) / a;
@@ -279,11 +288,15 @@ int px_png_encode(const unsigned char *pix, int width, int height, int stride,
                     cb = (cb * 255 + a / 2) / a;
                 }
             }
-            *d++ = (unsigned char)cr;
-            *d++ = (unsigned char)cg;
-            *d++ = (unsigned char)cb;
-            if (!opaque) *d++ = (unsigned char)a;
+            d[0] = (unsigned char)cr, d[1] = (unsigned char)cg, d[2] = (unsigned char)cb;
+            d[3] = (unsigned char)a;
+            d += 4;
         }
+    }
+    zb = malloc(nraw + nraw / 8 + 64); /* fixed codes: at most 9 bits a byte, and the frame */
+    if (!zb) {
+        free(raw), free(head), free(tab);
+        return PX_ENOMEM;
     }
     size_t z = zlib_stream(raw, nraw, bpp, row, zb, head, tab);
     free(raw);
