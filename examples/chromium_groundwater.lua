@@ -50,7 +50,7 @@ plot.map(map, { file = o.path("Cr-12C.svg"), stamp = STAMP })
 o.wrote("Cr-12C.svg")
 
 local function speciate(pH, E)
-  return phlox.speciate { library = lib, T_C = T_C, pH = pH, E = E, activity = "davies",
+  return phlox.speciate { library = lib, T_C = T_C, pH = pH, E = E, activity_model = "davies",
                           totals = { Cr = CR_TOTAL, C = DIC, Na = DIC } }
 end
 local function cr_vi_share(r)

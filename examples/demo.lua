@@ -37,8 +37,7 @@ local export = require "phlox.export"
 local sweep = require "phlox.sweep"
 
 local OUT = (arg and arg[1]) or "demo-out"
-if OUT:find('"', 1, true) then error("demo: the output folder name must not contain '\"'") end
-os.execute(('mkdir -p "%s"'):format(OUT))
+phlox.make_dir(OUT) -- no shell: any folder name is only a name
 local function path(name) return OUT .. "/" .. name end
 
 -- The scenario ---------------------------------------------------------------
@@ -120,7 +119,7 @@ local function speciate(T_C, redox, cl)
     library = lib, T_C = T_C,
     totals = { Na = cl + NAOH, Cl = cl, Cu = CU_TOTAL },
     redox_gas = redox.gas, redox_log_f = redox.log_f,
-    activity = "davies",
+    activity_model = "davies",
   }
   if not r then return nil, err end
   speciation_provenance = r.provenance

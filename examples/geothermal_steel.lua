@@ -67,7 +67,7 @@ o.wrote("Fe-S-sulfide-150C.svg")
 local states, spec = {}, nil
 for i, T in ipairs(TEMPS) do
   local r, err = phlox.speciate { library = lib, T_C = T, pH = BRINE.pH, redox_gas = "H2(g)",
-    redox_log_f = BRINE.log_f_H2, activity = "bdot",
+    redox_log_f = BRINE.log_f_H2, activity_model = "bdot",
     totals = { Na = BRINE.NaCl, Cl = BRINE.NaCl, S = BRINE.S, Fe = BRINE.Fe } }
   if not r then error(("brine at %d C: %s"):format(T, err)) end
   spec = r

@@ -64,7 +64,7 @@ local diagrams = require "phlox.diagrams"
 local series, rows, curves = {}, {}, {}
 for i, dic in ipairs(DIC_LEVELS) do
   local s = diagrams.solubility { library = lib, element = "Pb", T_C = { T_C }, range = { 6, 10.5 }, n = 46,
-    total = PB_PUT_IN, totals = { C = dic, Na = dic }, E = E_WATER, activity = "davies" }
+    total = PB_PUT_IN, totals = { C = dic, Na = dic }, E = E_WATER, activity_model = "davies" }
   local c = s.series[1]
   c.label = ("DIC %g mol/kg"):format(dic)
   c.style = ({ "solid", "dashed", "dotted" })[i]
@@ -84,7 +84,7 @@ export.csv(o.path("Pb-solubility.csv"), rows, { columns = { "DIC", "pH", "dissol
 o.wrote("Pb-solubility.csv")
 
 -- The treated water.
-local r, err = phlox.speciate { library = lib, T_C = T_C, pH = TREATED.pH, E = TREATED.E, activity = "davies",
+local r, err = phlox.speciate { library = lib, T_C = T_C, pH = TREATED.pH, E = TREATED.E, activity_model = "davies",
                                 totals = { Pb = PB_PUT_IN, C = TREATED.DIC, Na = TREATED.DIC } }
 if not r then error("treated water: " .. err) end
 local solid = "none"

@@ -16,8 +16,7 @@ common.DOMAIN_OF_KIND = { metal = "immunity", solid = "passivation", liquid = "p
 -- Returns a table: out, path(name), wrote(name), written (list).
 function common.output(default)
   local out = (arg and arg[1]) or default
-  if out:find('"', 1, true) then error("the output folder name must not contain '\"'") end
-  os.execute(('mkdir -p "%s"'):format(out))
+  require("phlox").make_dir(out) -- no shell: any folder name is only a name
   local o = { out = out, written = {} }
   function o.path(name) return out .. "/" .. name end
   function o.wrote(name) o.written[#o.written + 1] = name end

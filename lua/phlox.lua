@@ -17,6 +17,33 @@ local phlox = {
 
 local T0C = 273.15 -- K at 0 C
 
+-- The one option reader (src/lua/l_opts.c): each public function lists its
+-- keys next to it, one line per key: name = "type" or {"type", lo, hi}.
+-- Unknown keys, wrong types and values out of range are errors at the
+-- caller's line.  See DEVELOPERS.md, "Options".
+local options = core.options
+local LIM = core.limits
+local T_OPTS = {
+  T = { "number", LIM.T_min, LIM.T_max },                 -- K
+  T_C = { "number", LIM.T_min - T0C, LIM.T_max - T0C },   -- degrees C
+  P = { "number", 1e-6, LIM.P_max },                      -- bar
+}
+-- Ranges in the user's units (the C bindings check the same):
+local ACT = { 1e-300, 10 }   -- an activity: positive; above 10 no model holds (common practice, no source)
+local I_MAX = 0.5            -- mol/kg: Davies equation, stated range (Davies 1962, from memory of Stumm and Morgan)
+local COORD = 1e3            -- |pH|, |E| (V), |log a| of a window: a guard
+local TOTAL_MAX = 20         -- mol/kg: common practice, no source
+phlox.option_specs = {}      -- function name -> spec (phlox.help lists them)
+local function spec(fname, t, with_T)
+  if with_T then for k, v in pairs(T_OPTS) do t[k] = v end end
+  phlox.option_specs[fname] = t
+  return t
+end
+phlox.options = function(fname, sp, opts)
+  if opts == nil then opts = {} end
+  return options(fname, sp, opts)
+end
+
 phlox.caution = "A thermodynamic diagram says what can form, not how fast it forms: "
   .. "passivity depends on film kinetics, alloying, flow and deposits. Use these results "
   .. "with the applicable codes, standards and licensed engineering practice."
@@ -32,10 +59,10 @@ end
 function phlox.read_library_file(rel)
   for _, dir in ipairs(core.search_paths()) do
     local path = dir .. "/" .. rel
-    local f = io.open(path, "rb")
-    if f then
-      local text = f:read("a")
-      f:close()
+    if core.file_kind(path) then
+      -- regular files only, at most the element-file size cap (src/data/load.c)
+      local text, err = core.read_file(path)
+      if not text then return nil, err end
       return text, path
     end
   end
@@ -54,17 +81,29 @@ function phlox.available_elements()
     if sym then add(sym) end
   end
   for _, dir in ipairs(core.search_paths()) do
-    local p = io.popen('ls "' .. dir .. '/elements" 2>/dev/null')
-    if p then
-      for name in p:lines() do
-        local sym = name:match("^(%u%l?)%.lua$")
-        if sym then add(sym) end
-      end
-      p:close()
+    for _, name in ipairs(core.list_dir(dir .. "/elements") or {}) do -- opendir, no shell
+      local sym = name:match("^(%u%l?)%.lua$")
+      if sym then add(sym) end
     end
   end
   table.sort(list)
   return list
+end
+
+--- Folders without a shell (opendir and mkdir in C, src/lua/l_fs.c): names
+-- with quotes, spaces or "$(...)" are only names.
+--   phlox.make_dir("out/figures")   -- with its parents; mode 0777 less the umask
+--   phlox.list_dir("out")           -- sorted names, or nil, message
+function phlox.make_dir(path)
+  core.check_value("phlox.make_dir", "path", path, "string")
+  local ok, err = core.make_dir(path, true)
+  if not ok then core.user_error("phlox.make_dir: " .. err) end
+  return path
+end
+
+function phlox.list_dir(path)
+  core.check_value("phlox.list_dir", "path", path, "string")
+  return core.list_dir(path)
 end
 
 -- Ligand files hold the complexes and solids they form with metals, so they
@@ -101,30 +140,39 @@ local function ligand_elements(ligand)
 end
 
 local function temperature(opts, where)
-  if opts.T and opts.T_C then error(where .. ": give T (K) or T_C (C), not both", 3) end
-  local T = opts.T or (opts.T_C and opts.T_C + T0C) or 298.15
-  if type(T) ~= "number" or T ~= T then error(where .. ": temperature must be a number", 3) end
-  return T
+  if opts.T and opts.T_C then core.user_error(where .. ": give T (K) or T_C (C), not both") end
+  return opts.T or (opts.T_C and opts.T_C + T0C) or 298.15
 end
 
 local function pressure(opts, T, where)
-  if opts.P ~= nil then
-    if type(opts.P) ~= "number" then error(where .. ": P must be a number (bar)", 3) end
-    return opts.P
-  end
+  if opts.P ~= nil then return opts.P end
   local P, err = core.default_pressure(T)
-  if not P then error(where .. ": " .. err, 3) end
+  if not P then core.user_error(where .. ": " .. err) end
   return P
 end
+
+local function check_library(where, lib)
+  if getmetatable(lib) ~= phlox.Library then
+    core.user_error(where .. ": library = phlox.library{...} expected, got " .. type(lib))
+  end
+end
+
 
 --- A species library: the built-in H/O species plus the element files named.
 --   phlox.library { "Fe", "Cl", user = { "my/Fe-extra.lua" } }
 -- The user's folders (--path, PHLOX_PATH) override built-in element files;
 -- `user` files add, replace or exclude species.  Complexes of metals that
 -- are not loaded are left out.  Errors name the file, line and field.
-function phlox.library(spec)
+local LIBRARY_OPTS = spec("phlox.library", {
+  ["*"] = "string",                     -- element symbols, {"Fe", "S"}
+  user = "strings",                     -- user files that add, replace or exclude species
+  dielectric = "fernandez|johnson-norton", -- water's dielectric constant: Fernandez et al. 1997 (IAPWS R8-97) or Johnson and Norton 1991
+})
+function phlox.library(spec_)
+  local spec = spec_
   if type(spec) == "string" then spec = { spec } end
-  assert(type(spec) == "table", "phlox.library: give a list of element symbols")
+  if type(spec) ~= "table" then core.user_error("phlox.library: give a list of element symbols, got " .. type(spec)) end
+  options("phlox.library", LIBRARY_OPTS, spec)
   local db = core.database(spec.dielectric)
   local elements, groups, listed = {}, {}, {}
   local function add_element(sym)
@@ -135,8 +183,8 @@ function phlox.library(spec)
       groups[#groups + 1] = sym
       for _, e in ipairs(LIGAND_GROUPS[sym]) do add_element(e) end
     elseif type(sym) ~= "string" or not sym:match("^%u%l?$") then
-      error(("phlox.library: entry %d is not an element symbol or a ligand group (%s): %s"):format(
-        i, table.concat(GROUP_NAMES, ", "), tostring(sym)), 2)
+      core.user_error(("phlox.library: entry %d is not an element symbol or a ligand group (%s): '%s'"):format(
+        i, table.concat(GROUP_NAMES, ", "), tostring(sym)))
     else
       add_element(sym)
     end
@@ -153,14 +201,14 @@ function phlox.library(spec)
   local files, sources = {}, {}
   local function load(rel, opts)
     local text, where = phlox.read_library_file(rel)
-    if not text then error("phlox.library: " .. where, 3) end
+    if not text then core.user_error("phlox.library: " .. where) end
     local ok, msg, problems = db:load(text, where, opts)
     if not ok then
       local lines = {}
       for _, p in ipairs(problems or {}) do
         if p.severity == "error" then lines[#lines + 1] = p.text end
       end
-      error("phlox.library: " .. (#lines > 0 and table.concat(lines, "\n") or msg), 3)
+      core.user_error("phlox.library: " .. (#lines > 0 and table.concat(lines, "\n") or msg))
     end
     sources[where] = provenance.record_file(where, text).sha256
     files[#files + 1] = where
@@ -169,12 +217,10 @@ function phlox.library(spec)
   for _, e in ipairs(order) do load("elements/" .. e .. ".lua", { elements = filter }) end
   for _, g in ipairs(groups) do load("elements/" .. g .. ".lua", { elements = filter }) end
   for _, path in ipairs(spec.user or {}) do
-    local f, err = io.open(path, "rb")
-    if not f then error("phlox.library: " .. err, 2) end
-    local text = f:read("a")
-    f:close()
+    local text, err = core.read_file(path) -- regular files only, size cap
+    if not text then core.user_error("phlox.library: " .. err) end
     local ok, msg = db:load(text, path, { elements = filter, user = true })
-    if not ok then error("phlox.library: " .. msg, 2) end
+    if not ok then core.user_error("phlox.library: " .. msg) end
     sources[path] = provenance.record_file(path, text).sha256
     files[#files + 1] = path
   end
@@ -197,33 +243,36 @@ function phlox.Library:list(element)
   return out
 end
 
---- Standard-state properties of a species at T (K) [and P (bar)]:
--- { G, H, S, Cp, V } in J/mol, J/(mol K), J/bar.
-function phlox.Library:props(formula, opts)
-  opts = opts or {}
-  local T = temperature(opts, "props")
-  local r, err = self.db:props(formula, T, pressure(opts, T, "props"))
-  if not r then error("props: " .. err, 2) end
+-- props and reaction: one argument (a formula or an equation) and T, P options
+local function at_TP(lib, method, what, arg, opts)
+  local fname = "Library:" .. method
+  check_library(fname, lib)
+  core.check_value(fname, what, arg, "string")
+  opts = phlox.options(fname, phlox.option_specs[fname], opts)
+  local T = temperature(opts, fname)
+  local r, err = lib.db[method](lib.db, arg, T, pressure(opts, T, fname))
+  if not r then core.user_error(fname .. ": " .. err) end
   return r
 end
 
+spec("Library:props", {}, true)
+--- Standard-state properties of a species at T (K) [and P (bar)]:
+-- { G, H, S, Cp, V } in J/mol, J/(mol K), J/bar.
+function phlox.Library:props(formula, opts) return at_TP(self, "props", "formula", formula, opts) end
+
+spec("Library:reaction", {}, true)
 --- Reaction properties at T: { dG, dH, dS, logK, E (V vs SHE, half
 -- reactions only), T, P, text }.
-function phlox.Library:reaction(text, opts)
-  opts = opts or {}
-  local T = temperature(opts, "reaction")
-  local r, err = self.db:reaction(text, T, pressure(opts, T, "reaction"))
-  if not r then error(err, 2) end
-  return r
-end
+function phlox.Library:reaction(text, opts) return at_TP(self, "reaction", "equation", text, opts) end
 
 --- Properties of water at T [and P]: density, dielectric constant,
 -- Debye-Hueckel A and B, Born functions, pKw (IAPWS R11-07).
+local WATER_OPTS = spec("phlox.water", {}, true)
 function phlox.water(opts)
-  opts = opts or {}
-  local T = temperature(opts, "water")
-  local w, err = core.water(T, pressure(opts, T, "water"))
-  if not w then error(err, 2) end
+  opts = phlox.options("phlox.water", WATER_OPTS, opts)
+  local T = temperature(opts, "phlox.water")
+  local w, err = core.water(T, pressure(opts, T, "phlox.water"))
+  if not w then core.user_error("phlox.water: " .. err) end
   return w
 end
 
@@ -278,9 +327,21 @@ end
 -- (optional): only = a set of element symbols (species with any other
 -- element besides H and O are left out); cache = false re-reads the records
 -- (otherwise they are gathered once per library).
+local BASIS_OPTS = {
+  only = "table",                             -- a set of element symbols
+  cache = "boolean",                          -- false: re-read the records
+}
+spec("phlox.constant_logk", BASIS_OPTS)
+spec("phlox.estimated_species", BASIS_OPTS)
+local function check_basis_args(fname, lib, elements, T, P, opts)
+  check_library(fname, lib)
+  core.check_value(fname, "elements", elements, "strings")
+  core.check_value(fname, "T (K)", T, "number", LIM.T_min, LIM.T_max)
+  if P ~= nil then core.check_value(fname, "P (bar)", P, "number", 1e-6, LIM.P_max) end
+  if opts ~= nil then options(fname, BASIS_OPTS, opts) end
+end
 function phlox.constant_logk(lib, elements, T, P, opts)
-  if getmetatable(lib) ~= phlox.Library then error("phlox.constant_logk: library expected", 2) end
-  if type(T) ~= "number" then error("phlox.constant_logk: T (K) expected", 2) end
+  check_basis_args("phlox.constant_logk", lib, elements, T, P, opts)
   local held = {}
   for _, s in ipairs(basis_list(lib, elements, T, "held", opts)) do held[#held + 1] = s.formula end
   return held
@@ -290,8 +351,7 @@ end
 -- named method (species.basis == "estimated"): { { formula, method }, ... }
 -- sorted by formula; empty within 0.5 K of 25 C; opts as for constant_logk.
 function phlox.estimated_species(lib, elements, T, opts)
-  if getmetatable(lib) ~= phlox.Library then error("phlox.estimated_species: library expected", 2) end
-  if type(T) ~= "number" then error("phlox.estimated_species: T (K) expected", 2) end
+  check_basis_args("phlox.estimated_species", lib, elements, T, nil, opts)
   local out = {}
   for _, s in ipairs(basis_list(lib, elements, T, "estimated", opts)) do
     out[#out + 1] = { formula = s.formula, method = s.basis_method or "?" }
@@ -423,7 +483,7 @@ end
 -- about once on stderr.
 function phlox.activity_range(model, I)
   local r = phlox.activity_ranges[model]
-  if not r then error("phlox.activity_range: unknown activity model '" .. tostring(model) .. "'", 2) end
+  if not r then core.user_error("phlox.activity_range: unknown activity model '" .. tostring(model) .. "'") end
   local info = { model = model, ionic_strength = I, max = r.max, in_range = I <= r.max, source = r.source }
   info.text = ("activity model %s, ionic strength %.3g mol/kg (used to %g mol/kg: %s)"):format(model, I, r.max, r.source)
   if not info.in_range then
@@ -502,11 +562,39 @@ end
 -- ligand_redox: per ligand "full" (true), "kept" (false) or a form name
 -- (docs/solver.md "What practice keeps out"; N and C kept, S full by
 -- default).  The map's `stamp` and `notes` carry every caveat.
+local MAP_OPTS = spec("phlox.map", {
+  library = "table",                          -- phlox.library{...}
+  element = "string",                         -- the element mapped, "Fe"
+  axes = "strings",                           -- {"pH", "E"} (default), {"loga", "E"}, {"pH", "loga"}
+  pH_range = { "numbers", -COORD, COORD },    -- {0, 14}
+  E_range = { "numbers", -COORD, COORD },     -- V vs SHE, {-2, 2}
+  loga_range = { "numbers", -COORD, COORD },  -- log a(ligand), {-8, 0}
+  pH = { "number", -COORD, COORD },           -- fixed pH (when pH is not an axis)
+  E = { "number", -COORD, COORD },            -- fixed E (when E is not an axis)
+  activity = { "number", ACT[1], ACT[2] },    -- activity of each dissolved species of the element (1e-6)
+  ligand = "string",                          -- a ligand element, "S"
+  ligand_activity = { "number", ACT[1], ACT[2] }, -- total ligand activity (1e-3)
+  gas_log_f = { "number", -300, 3 },          -- log10 fugacity (bar) of gases
+  ionic_strength = { "number", 0, I_MAX },    -- mol/kg, Davies correction
+  exclude = "strings",                        -- species left out
+  only = "strings",                           -- only these species
+  activities = { "map", ACT[1], ACT[2] },     -- per species activity, {["Fe^2+"] = 1e-5}
+  accept_held_logk = "boolean",               -- use log K held at 25 C away from 25 C (stamped)
+  require_temperature_data = "boolean",       -- gone: phlox.temperature_notes says to use accept_held_logk
+  ligand_redox = "table",                     -- {N = "full" | "kept" | form name}
+}, true)
+local function check_window(where, opts, key)
+  local r = opts[key]
+  if r ~= nil and not (#r == 2 and r[1] < r[2]) then
+    core.user_error(("%s: option '%s' must be {from, to} with from < to"):format(where, key))
+  end
+end
 function phlox.map(opts)
-  assert(type(opts) == "table", "phlox.map: options table expected")
+  options("phlox.map", MAP_OPTS, opts)
   local lib = opts.library
-  if getmetatable(lib) ~= phlox.Library then error("phlox.map: library = phlox.library{...} expected", 2) end
-  if type(opts.element) ~= "string" then error("phlox.map: element (a symbol) expected", 2) end
+  check_library("phlox.map", lib)
+  if type(opts.element) ~= "string" then core.user_error("phlox.map: element (a symbol) is required") end
+  for _, k in ipairs { "pH_range", "E_range", "loga_range" } do check_window("phlox.map", opts, k) end
   local T = temperature(opts, "phlox.map")
   local P = pressure(opts, T, "phlox.map")
   local held_of = { opts.element }
@@ -523,7 +611,7 @@ function phlox.map(opts)
     ligand_redox = opts.ligand_redox,
   }
   local m, err = core.map(lib.db, copt)
-  if not m then error(err, 2) end
+  if not m then core.user_error(err) end
   note_ligands(m, m.ligand_states)
   note_list(m, "exclude", "left out by the user (exclude)", opts.exclude)
   note_list(m, "only", "only these species of " .. opts.element .. " (only)", opts.only)
@@ -571,23 +659,44 @@ end
 --     fugacities = { ["CO2(g)"] = -3.4 },      -- log10 bar, replaces that element's total
 --     fixed = { ["Cl^-"] = -2 },               -- log10 activity of a basis species
 --     solids = true, suppress = {...}, exclude = {...},
---     activity = "davies" | "bdot" | "ideal" | "sit",
+--     activity_model = "davies" | "bdot" | "ideal" | "sit",
 --     ligand_redox = { N = "full" },           -- as phlox.map
 --     allow_inhibited = true }                 -- let dolomite, magnesite, quartz in
 -- Returns a table (pH, pe, E, ionic_strength, species, elements with each
 -- species' share, solids' saturation index and amount), or nil, message,
 -- info when the solver does not converge.
+local SPECIATE_OPTS = spec("phlox.speciate", {
+  library = "table",                          -- phlox.library{...}
+  totals = { "map", 0, TOTAL_MAX },           -- mol/kg of each element, {Ca = 1e-3}
+  basis = "table",                            -- basis species per element, {C = "HCO3^-"}
+  pH = { "number", -3, 17 },                  -- fixed pH; omit for charge balance (common practice, no source)
+  E = { "number", -5, 5 },                    -- V vs SHE
+  pe = { "number", -100, 100 },               -- pe = E F / (RT ln 10)
+  redox_gas = "string",                       -- "O2(g)": redox set by a gas fugacity
+  redox_log_f = { "number", -300, 3 },        -- its log10 fugacity (bar)
+  fugacities = { "map", -300, 3 },            -- log10 bar, {["CO2(g)"] = -3.4}
+  fixed = { "map", -300, 1 },                 -- log10 activity of a basis species
+  solids = "boolean",                         -- let solids precipitate (default true)
+  suppress = "strings",                       -- solids never precipitated (metastable)
+  exclude = "strings",                        -- species left out
+  activity_model = "ideal|davies|bdot|sit",   -- activity coefficients (davies)
+  max_iter = { "integer", 1, 100000 },        -- solver iterations
+  ligand_redox = "table",                     -- {N = "full" | "kept" | form name}, as phlox.map
+  allow_inhibited = "boolean",                -- let kinetically inhibited solids precipitate
+  accept_held_logk = "boolean",               -- use log K held at 25 C away from 25 C (stamped)
+  require_temperature_data = "boolean",       -- gone: phlox.temperature_notes says to use accept_held_logk
+}, true)
 function phlox.speciate(opts)
-  assert(type(opts) == "table", "phlox.speciate: options table expected")
+  options("phlox.speciate", SPECIATE_OPTS, opts)
   local lib = opts.library
-  if getmetatable(lib) ~= phlox.Library then error("phlox.speciate: library = phlox.library{...} expected", 2) end
+  check_library("phlox.speciate", lib)
   local T = temperature(opts, "phlox.speciate")
   local P = pressure(opts, T, "phlox.speciate")
   local els, only = speciation_elements(lib, opts)
   local notes = held_logk(lib, els, T, opts, "phlox.speciate", only)
   local copt = {}
   for k, v in pairs(opts) do copt[k] = v end
-  copt.library, copt.T_C, copt.accept_held_logk = nil, nil, nil
+  copt.library, copt.T_C, copt.accept_held_logk, copt.require_temperature_data = nil, nil, nil, nil
   copt.T, copt.P = T, P
   local r, err, info = core.speciate(lib.db, copt)
   if not r then return nil, err, info end
@@ -636,7 +745,7 @@ end
 --   phlox.grid_map { library = lib, element = "Cu", T_C = 25, total = 1e-6,
 --                    ligand = "Cl", ligand_total = 1e-2, n = 201,
 --                    pH_range = {0, 14}, E_range = {-2, 2},
---                    activity = "davies", threads = 2,
+--                    activity_model = "davies", threads = 2,
 --                    ligand_redox = {...}, allow_inhibited = false,
 --                    failed_boundaries = false }  -- draw boundaries next to failed solves
 -- Returns a map table with `boundaries` (polylines between named species),
@@ -644,12 +753,35 @@ end
 -- phlox.plot.map fills them like an exact map; see phlox.grid_fields),
 -- `water` and `neutral_pH`, `labels` (node labels), `species` and solver
 -- statistics.
+local GRID_MAP_OPTS = spec("phlox.grid_map", {
+  library = "table",                          -- phlox.library{...}
+  element = "string",                         -- the element mapped
+  total = { "number", ACT[1], TOTAL_MAX },    -- mol/kg of the element (1e-6)
+  ligand = "string",                          -- a ligand element
+  ligand_total = { "number", ACT[1], TOTAL_MAX }, -- mol/kg of the ligand (1e-3)
+  n = { "integer", 2, 4001 },                 -- nodes per axis (101)
+  nx = { "integer", 2, 4001 },                -- nodes along pH
+  ny = { "integer", 2, 4001 },                -- nodes along E
+  pH_range = { "numbers", -COORD, COORD },    -- {0, 14}
+  E_range = { "numbers", -COORD, COORD },     -- {-2, 2}
+  activity_model = "ideal|davies|bdot|sit",   -- activity coefficients (davies)
+  background_nacl = { "number", 0, 6.1 },     -- mol/kg NaCl (halite saturation, from memory of the CRC Handbook)
+  exclude = "strings",                        -- species left out
+  threads = { "integer", 1, 64 },             -- worker threads
+  accept_held_logk = "boolean",               -- use log K held at 25 C away from 25 C (stamped)
+  require_temperature_data = "boolean",       -- gone: phlox.temperature_notes says to use accept_held_logk
+  ligand_redox = "table",                     -- as phlox.map
+  allow_inhibited = "boolean",                -- let kinetically inhibited solids precipitate
+  failed_boundaries = "boolean",              -- draw boundaries next to failed solves
+}, true)
 function phlox.grid_map(opts)
-  assert(type(opts) == "table", "phlox.grid_map: options table expected")
+  options("phlox.grid_map", GRID_MAP_OPTS, opts)
   local lib = opts.library
-  if getmetatable(lib) ~= phlox.Library then error("phlox.grid_map: library = phlox.library{...} expected", 2) end
+  check_library("phlox.grid_map", lib)
+  if type(opts.element) ~= "string" then core.user_error("phlox.grid_map: element (a symbol) is required") end
+  for _, k in ipairs { "pH_range", "E_range" } do check_window("phlox.grid_map", opts, k) end
   if LIGAND_GROUPS[opts.ligand] then
-    error(("phlox.grid_map: ligand = %q is a ligand group: the rigorous solver balances elements, not groups; draw it with phlox.map"):format(opts.ligand), 2)
+    core.user_error(("phlox.grid_map: ligand = %q is a ligand group: the rigorous solver balances elements, not groups; draw it with phlox.map"):format(opts.ligand))
   end
   local T = temperature(opts, "phlox.grid_map")
   local P = pressure(opts, T, "phlox.grid_map")
@@ -659,10 +791,10 @@ function phlox.grid_map(opts)
     element = opts.element, T = T, P = P, window = { pr[1], pr[2], er[1], er[2] },
     nx = opts.nx or opts.n or 101, ny = opts.ny or opts.n or 101,
     total = opts.total, ligand = opts.ligand, ligand_total = opts.ligand_total,
-    activity = opts.activity, background_nacl = opts.background_nacl,
+    activity_model = opts.activity_model, background_nacl = opts.background_nacl,
     exclude = opts.exclude, threads = opts.threads,
     ligand_redox = opts.ligand_redox, allow_inhibited = opts.allow_inhibited })
-  if not g then error(err, 2) end
+  if not g then core.user_error(err) end
   g.fields = phlox.grid_fields(g)
   for _, f in ipairs(g.fields) do   -- the kind, as exact maps name it
     local rec = lib:species(f.species)
@@ -678,7 +810,7 @@ function phlox.grid_map(opts)
   if kw and kw.logK then g.neutral_pH = -kw.logK / 2 end
   note_ligands(g, g.ligand_states)
   note_list(g, "exclude", "left out by the user (exclude)", opts.exclude)
-  note_activity(g, opts.activity or "davies", g.ionic_strength_max or 0)
+  note_activity(g, opts.activity_model or "davies", g.ionic_strength_max or 0)
   if g.failures > 0 then
     -- a boundary placed next to a point without a solution (a failed node,
     -- or a bisection point) is a guess: left out unless the user asks for it
@@ -841,6 +973,10 @@ end
 
 --- The species of the map at a point, e.g. phlox.locate(map, 7.0, -0.4).
 function phlox.locate(map, x, y)
+  core.check_value("phlox.locate", "map", map, "table")
+  if type(map.fields) ~= "table" then core.user_error("phlox.locate: a map (phlox.map{...}) expected") end
+  core.check_value("phlox.locate", "x", x, "number", -COORD, COORD)
+  core.check_value("phlox.locate", "y", y, "number", -COORD, COORD)
   for _, f in ipairs(map.fields) do
     local inside, n = false, #f.x
     local j = n
@@ -883,8 +1019,8 @@ function phlox.electrode(name)
     local known = {}
     for k in pairs(phlox.electrode_names) do known[#known + 1] = k end
     table.sort(known)
-    error(("unknown reference electrode '%s' (known: %s, or the full names of phlox.electrodes())")
-          :format(tostring(name), table.concat(known, ", ")), 3)
+    core.user_error(("unknown reference electrode '%s' (known: %s, or the full names of phlox.electrodes())")
+          :format(tostring(name), table.concat(known, ", ")))
   end
   return e
 end
@@ -910,8 +1046,8 @@ function phlox.electrode_at(name, T, at_25C, where)
   else
     local off, err = core.electrode_offset(e.index, T)
     if not off then
-      error(("%s: %s; the offset is not valid at %.1f °C (give reference_at_25C = true for an electrode kept "
-        .. "at room temperature)"):format(where, err:gsub("(%d+%.%d)%d+", "%1"), T - T0C), 3)
+      core.user_error(("%s: %s; the offset is not valid at %.1f °C (give reference_at_25C = true for an electrode kept "
+        .. "at room temperature)"):format(where, (err:gsub("(%d+%.%d)%d+", "%1")), T - T0C))
     end
     info.offset, info.valid, info.corrected = off, true, true
     info.text = ("potentials vs %s at %.1f °C: offset %.4f V = %.4f V at 25 °C %+.3g mV/K (%s)"):format(
@@ -926,12 +1062,120 @@ end
 --   phlox.to_she(-0.45, "SCE", { T_C = 50 })    -- corrected with dE/dT
 --   phlox.to_she(-0.45, "SCE", { T_C = 200, reference_at_25C = true })
 -- Returns E_SHE and the record of phlox.electrode_at.
+local TO_SHE_OPTS = spec("phlox.to_she", {
+  reference_at_25C = "boolean",               -- the electrode is kept at room temperature
+}, true)
 function phlox.to_she(E_measured, electrode, opts)
-  if type(E_measured) ~= "number" then error("phlox.to_she: the measured potential (V) must be a number", 2) end
-  opts = opts or {}
+  core.check_value("phlox.to_she", "E_measured", E_measured, "number", -COORD, COORD)
+  core.check_value("phlox.to_she", "electrode", electrode, "string")
+  opts = phlox.options("phlox.to_she", TO_SHE_OPTS, opts)
   local T = temperature(opts, "phlox.to_she")
   local info = phlox.electrode_at(electrode, T, opts.reference_at_25C, "phlox.to_she")
   return E_measured + info.offset, info
+end
+
+--- Help at the prompt and in scripts: phlox.help(phlox.map) or
+-- phlox.help("plot.map") prints (and returns) what the function does and its
+-- options with their types and ranges; phlox.help() lists the functions.
+local SUMMARY = {
+  ["phlox.library"] = "phlox.library { \"Fe\", \"S\", user = {...} }: a species library from element files",
+  ["phlox.map"] = "phlox.map { library = lib, element = \"Fe\", ... }: an exact predominance map",
+  ["phlox.grid_map"] = "phlox.grid_map { library = lib, element = \"Cu\", ... }: a rigorous map (solver on a grid)",
+  ["phlox.speciate"] = "phlox.speciate { library = lib, totals = {...}, ... }: full speciation of a water",
+  ["phlox.water"] = "phlox.water { T_C = 25 }: properties of water (IAPWS-95, R8-97, R11-07)",
+  ["phlox.constant_logk"] = "phlox.constant_logk(lib, elements, T [, P]): species whose log K is held at 25 C (T in K)",
+  ["phlox.locate"] = "phlox.locate(map, x, y): the species of the map at a point",
+  ["phlox.to_she"] = "phlox.to_she(E_measured, electrode): a potential on the SHE scale (electrode: SCE, Ag/AgCl, CSE or a full name)",
+  ["phlox.where"] = "phlox.where { map = m, pH = 5, E = -0.8, reference = \"SCE\" }: the field a measured potential falls in",
+  ["phlox.electrodes"] = "phlox.electrodes(): the reference electrodes (name -> offset, source)",
+  ["phlox.make_dir"] = "phlox.make_dir(path): create a folder and its parents (no shell)",
+  ["phlox.list_dir"] = "phlox.list_dir(path): sorted names in a folder (no shell)",
+  ["phlox.help"] = "phlox.help(function or name): this help",
+  ["Library:props"] = "lib:props(formula, { T_C = 25 }): G, H, S, Cp, V of a species",
+  ["Library:reaction"] = "lib:reaction(\"A + B = C\", { T_C = 25 }): dG, dH, dS, log K, E of a reaction",
+  ["plot.map"] = "plot.map(map, { file = \"fe.svg\", ... }): draw a map",
+  ["plot.domains"] = "plot.domains(map, opts): draw the corrosion domains of a map",
+  ["plot.grid"] = "plot.grid(maps, opts): maps side by side",
+  ["plot.overlay"] = "plot.overlay(maps, opts): maps drawn over each other",
+  ["plot.curves"] = "plot.curves(series, opts): curves (fractions, solubility)",
+  ["export.csv"] = "export.csv(path, rows, { columns = {...} }): a CSV file with provenance",
+  ["export.json"] = "export.json(path, value, opts): a JSON file with provenance",
+  ["sweep.run"] = "sweep.run(points, fn, opts): fn over points, failures collected",
+  ["sweep.parallel"] = "sweep.parallel(points, fn, { workers = 4 }): the same on worker processes",
+  ["phlox.report"] = "phlox.report { file = \"study.html\", sections = {...} }: one self-contained HTML (and PDF) page per study",
+  ["diagrams.fractions"] = "diagrams.fractions { library = lib, element = \"Zn\", ... }: distribution curves",
+  ["diagrams.solubility"] = "diagrams.solubility { library = lib, element = \"Zn\", T_C = {...} }: solubility curves",
+  ["diagrams.series"] = "diagrams.series { library = lib, element = \"Zn\", T_C = {...} }: maps at several temperatures",
+  ["diagrams.ligand_E"] = "diagrams.ligand_E { ..., ligand = \"Cl\", pH = 5 }: E against log a(ligand)",
+  ["diagrams.pH_ligand"] = "diagrams.pH_ligand { ..., ligand = \"Cl\", E = -0.5 }: log a(ligand) against pH",
+}
+
+-- every documented function by value -> its name (modules loaded on demand)
+local function help_index()
+  local by_fn, specs = {}, {}
+  local mods = { phlox = phlox, plot = require "phlox.plot", export = require "phlox.export",
+                 sweep = require "phlox.sweep", diagrams = require "phlox.diagrams",
+                 report = require "phlox.report" }
+  for name in pairs(SUMMARY) do
+    local mod, fn = name:match("^(%w+)[%.:](.+)$")
+    local t = mod == "Library" and phlox.Library or mods[mod]
+    if mod == "phlox" and fn == "report" then t, fn = mods.report, "write" end
+    if t and type(t[fn]) == "function" then by_fn[t[fn]] = name end
+  end
+  for _, m in pairs(mods) do
+    for k, v in pairs(m.option_specs or {}) do specs[k] = v end
+  end
+  return by_fn, specs
+end
+
+function phlox.help_name(fn)
+  local by_fn = help_index()
+  return by_fn[fn]
+end
+
+local function range_text(e)
+  if type(e) == "string" then return e end
+  local t, lo, hi = e[1], e[2], e[3]
+  if lo or hi then return ("%s [%g, %g]"):format(t, lo or -math.huge, hi or math.huge) end
+  return t
+end
+
+function phlox.help(what)
+  local by_fn, specs = help_index()
+  local name = type(what) == "function" and by_fn[what] or what
+  local out = {}
+  if name == nil then
+    out[1] = "phlox functions (phlox.help(name) for one):"
+    local names = {}
+    for n in pairs(SUMMARY) do names[#names + 1] = n end
+    table.sort(names)
+    for _, n in ipairs(names) do out[#out + 1] = "  " .. SUMMARY[n] end
+  else
+    if type(name) ~= "string" then core.user_error("phlox.help: a phlox function or its name expected, got " .. type(what)) end
+    name = name:gsub("^phlox%.plot%.", "plot."):gsub("^phlox%.export%.", "export.")
+               :gsub("^phlox%.sweep%.", "sweep."):gsub("^phlox%.diagrams%.", "diagrams.")
+    if not SUMMARY[name] then
+      local near = {}
+      for n in pairs(SUMMARY) do if n:lower():find(name:lower(), 1, true) then near[#near + 1] = n end end
+      table.sort(near)
+      core.user_error(("phlox.help: no function '%s'%s"):format(name,
+        #near > 0 and (" (did you mean " .. table.concat(near, ", ") .. "?)") or ""))
+    end
+    out[1] = SUMMARY[name]
+    local spec = specs[name]
+    if spec then
+      out[#out + 1] = "options:"
+      local keys = {}
+      for k in pairs(spec) do keys[#keys + 1] = k end
+      table.sort(keys)
+      for _, k in ipairs(keys) do
+        out[#out + 1] = ("  %-26s %s"):format(k == "*" and "[1], [2], ..." or k, range_text(spec[k]))
+      end
+    end
+  end
+  local text = table.concat(out, "\n")
+  print(text)
+  return text
 end
 
 --- Diagrams on top of speciate and map (stdlib/phlox/diagrams.lua): which

@@ -8,6 +8,7 @@
 ---@field caution string
 ---@field core phlox.core
 ---@field electrode_names table
+---@field option_specs table
 ---@field sour_caution string
 ---@field version string
 local phlox = {}
@@ -17,7 +18,7 @@ local phlox = {}
 ---@field P? number
 ---@field T? number
 ---@field T_C? number
----@field activity? any
+---@field activity_model? any
 ---@field allow_inhibited? any
 ---@field background_nacl? any
 ---@field element? string
@@ -34,13 +35,8 @@ local phlox = {}
 ---@field threads? integer
 ---@field total? number
 
----@class phlox.library.spec
----@field dielectric? any
----@field user? string[]
-
 ---@class phlox.map.opts
 ---@field E? number
----@field E_range? number[]
 ---@field P? number
 ---@field T? number
 ---@field T_C? number
@@ -57,24 +53,16 @@ local phlox = {}
 ---@field ligand_redox? any
 ---@field only? string[]
 ---@field pH? number
----@field pH_range? number[]
 
 ---@class phlox.speciate.opts
----@field E? number
 ---@field P? number
 ---@field T? number
 ---@field T_C? number
----@field activity? any
 ---@field allow_inhibited? any
 ---@field exclude? string[]
 ---@field fixed? table<string, number>
 ---@field fugacities? table<string, number>
 ---@field library? phlox.Library
----@field ligand_redox? any
----@field pH? number
----@field pe? number
----@field redox_gas? any
----@field redox_log_f? any
 ---@field solids? boolean
 ---@field suppress? string[]
 ---@field totals? table<string, number>
@@ -99,16 +87,6 @@ local phlox = {}
 ---@field pH? number
 ---@field reference? any
 
----@class phlox.Library.props.opts
----@field P? number
----@field T? number
----@field T_C? number
-
----@class phlox.Library.reaction.opts
----@field P? number
----@field T? number
----@field T_C? number
-
 --- The activity model at ionic strength I (mol/kg): { model, ionic_strength,
 --- max, in_range, source, text }; a model used beyond its range is warned
 --- about once on stderr.
@@ -121,15 +99,6 @@ function phlox.activity_range(model, I) end
 ---@return any
 function phlox.available_elements() end
 
---- The species of `elements` (a list of symbols) whose log K has no
---- temperature data (a log K record without dH, logK_T or an estimate): phlox
---- keeps their 25 C value at T.  Read from each record's temperature basis
---- (species.basis == "held", set by the core from the record's fields).
---- Empty within 0.5 K of 25 C.  Sorted formulas.  P is accepted for
---- compatibility and not used (the basis does not depend on P).  opts
---- (optional): only = a set of element symbols (species with any other
---- element besides H and O are left out); cache = false re-reads the records
---- (otherwise they are gathered once per library).
 ---@param lib phlox.Library
 ---@param elements any
 ---@param T number
@@ -188,22 +157,6 @@ function phlox.fractions(opts) end
 ---@return any
 function phlox.grid_fields(g) end
 
---- A rigorous map: the speciation solver at every node of a pH-E grid
---- (mass balance of the element and of a ligand, activity coefficients,
---- solids), boundaries traced between nodes and refined by bisection.  A
---- node is marked by the element's precipitated solid, else by the
---- dissolved species holding most of it.
----   phlox.grid_map { library = lib, element = "Cu", T_C = 25, total = 1e-6,
----                    ligand = "Cl", ligand_total = 1e-2, n = 201,
----                    pH_range = {0, 14}, E_range = {-2, 2},
----                    activity = "davies", threads = 2,
----                    ligand_redox = {...}, allow_inhibited = false,
----                    failed_boundaries = false }  -- draw boundaries next to failed solves
---- Returns a map table with `boundaries` (polylines between named species),
---- `fields` (the nodes' cells joined per species, their steps smoothed, so
---- phlox.plot.map fills them like an exact map; see phlox.grid_fields),
---- `water` and `neutral_pH`, `labels` (node labels), `species` and solver
---- statistics.
 ---@param opts phlox.grid_map.opts
 ---@return any
 function phlox.grid_map(opts) end
@@ -221,14 +174,21 @@ function phlox.groups_in(text) end
 ---@return any
 function phlox.held_stamp_line(held) end
 
---- A species library: the built-in H/O species plus the element files named.
----   phlox.library { "Fe", "Cl", user = { "my/Fe-extra.lua" } }
---- The user's folders (--path, PHLOX_PATH) override built-in element files;
---- `user` files add, replace or exclude species.  Complexes of metals that
---- are not loaded are left out.  Errors name the file, line and field.
----@param spec phlox.library.spec|string[]|string
+---@param what any
 ---@return any
-function phlox.library(spec) end
+function phlox.help(what) end
+
+---@param fn any
+---@return any
+function phlox.help_name(fn) end
+
+---@param spec_ any
+---@return any
+function phlox.library(spec_) end
+
+---@param path string
+---@return any
+function phlox.list_dir(path) end
 
 --- The species of the map at a point, e.g. phlox.locate(map, 7.0, -0.4).
 ---@param map table
@@ -237,16 +197,14 @@ function phlox.library(spec) end
 ---@return any
 function phlox.locate(map, x, y) end
 
---- An exact predominance map (fields as polygons, boundaries with their
---- reactions, water lines, neutral pH, corrosion domains).
----   phlox.map { library = lib, element = "Fe", T_C = 25,
----               pH_range = {0, 14}, E_range = {-2, 2}, activity = 1e-6,
----               ligand = "S", ligand_activity = 1e-3, ionic_strength = 0,
----               exclude = {"Fe3O4(s)"}, axes = {"pH", "E"},
----               ligand_redox = { N = "full", S = "sulfate" } }
---- ligand_redox: per ligand "full" (true), "kept" (false) or a form name
---- (docs/solver.md "What practice keeps out"; N and C kept, S full by
---- default).  The map's `stamp` and `notes` carry every caveat.
+--- Folders without a shell (opendir and mkdir in C, src/lua/l_fs.c): names
+--- with quotes, spaces or "$(...)" are only names.
+---   phlox.make_dir("out/figures")   -- with its parents; mode 0777 less the umask
+---   phlox.list_dir("out")           -- sorted names, or nil, message
+---@param path string
+---@return any
+function phlox.make_dir(path) end
+
 ---@param opts phlox.map.opts
 ---@return any
 function phlox.map(opts) end
@@ -258,6 +216,12 @@ function phlox.map(opts) end
 ---@param skip any
 ---@return any
 function phlox.merge_notes(results, skip) end
+
+---@param fname any
+---@param sp any
+---@param opts? table
+---@return any
+function phlox.options(fname, sp, opts) end
 
 --- Read a library file: the user's folders first, then the embedded copy.
 --- `rel` is a path relative to a library root, e.g. "elements/Zn.lua".
@@ -288,20 +252,6 @@ function phlox.series(opts) end
 ---@return any
 function phlox.solubility(opts) end
 
---- Full speciation of a water.
----   phlox.speciate { library = lib, T_C = 25,
----     totals = { Ca = 1e-3, C = 2e-3 },        -- mol/kg of each element
----     pH = 8.3,                                -- fixed; omit for charge balance
----     E = 0.2 | pe = 3 | redox_gas = "O2(g)", redox_log_f = -0.68,
----     fugacities = { ["CO2(g)"] = -3.4 },      -- log10 bar, replaces that element's total
----     fixed = { ["Cl^-"] = -2 },               -- log10 activity of a basis species
----     solids = true, suppress = {...}, exclude = {...},
----     activity = "davies" | "bdot" | "ideal" | "sit",
----     ligand_redox = { N = "full" },           -- as phlox.map
----     allow_inhibited = true }                 -- let dolomite, magnesite, quartz in
---- Returns a table (pH, pe, E, ionic_strength, species, elements with each
---- species' share, solids' saturation index and amount), or nil, message,
---- info when the solver does not converge.
 ---@param opts phlox.speciate.opts
 ---@return any
 function phlox.speciate(opts) end
@@ -321,20 +271,13 @@ function phlox.speciate(opts) end
 ---@return any
 function phlox.temperature_notes(lib, elements, temps, opts, where, only) end
 
---- A potential measured against a reference electrode, on the SHE scale.
----   phlox.to_she(-0.45, "SCE")                  -- 25 °C
----   phlox.to_she(-0.45, "SCE", { T_C = 50 })    -- corrected with dE/dT
----   phlox.to_she(-0.45, "SCE", { T_C = 200, reference_at_25C = true })
---- Returns E_SHE and the record of phlox.electrode_at.
 ---@param E_measured any
 ---@param electrode any
----@param opts? phlox.to_she.opts
+---@param opts phlox.to_she.opts
 ---@return any
 function phlox.to_she(E_measured, electrode, opts) end
 
---- Properties of water at T [and P]: density, dielectric constant,
---- Debye-Hueckel A and B, Born functions, pKw (IAPWS R11-07).
----@param opts? phlox.water.opts
+---@param opts phlox.water.opts
 ---@return any
 function phlox.water(opts) end
 
@@ -357,14 +300,14 @@ function phlox.Library:list(element) end
 --- Standard-state properties of a species at T (K) [and P (bar)]:
 --- { G, H, S, Cp, V } in J/mol, J/(mol K), J/bar.
 ---@param formula string
----@param opts? phlox.Library.props.opts
+---@param opts table
 ---@return any
 function phlox.Library:props(formula, opts) end
 
 --- Reaction properties at T: { dG, dH, dS, logK, E (V vs SHE, half
 --- reactions only), T, P, text }.
 ---@param text string
----@param opts? phlox.Library.reaction.opts
+---@param opts table
 ---@return any
 function phlox.Library:reaction(text, opts) end
 

@@ -25,7 +25,7 @@ files of the elements named in the equation are loaded.
 usage: phlox check FILE...
 
 Validates element definition files: sandbox errors, fields, units, formulas,
-charges, duplicates, dfG/dfH/S consistency, reaction balance.  Each file
+charges, duplicates, physical ranges, dfG/dfH/S consistency, reaction balance.  Each file
 sees the built-in species and those of the files before it.  Problems go to
 standard output as FILE:LINE: severity: message; exit status 1 on an error.
 
@@ -35,8 +35,10 @@ standard output as FILE:LINE: severity: message; exit status 1 on an error.
   list = [[
 usage: phlox list [ELEMENT]
 
-Lists the species of the library (all, or those containing ELEMENT): formula,
-model, dfG in kJ/mol (or log K), file:line and source.
+Without ELEMENT, lists the elements the library has definition files for and
+where each file comes from (built in, or a --path folder).  With ELEMENT,
+lists the species containing it: formula, model, dfG in kJ/mol (or log K),
+file:line and source.
 
   ELEMENT               an element symbol such as Fe (H and O allowed)
   -h, --help            print this help
@@ -146,6 +148,14 @@ function commands.list(args)
   local element = args[1]
   if #args > 1 then return usage("list: usage: phlox list [ELEMENT]") end
   local els = phlox.available_elements()
+  if not element then -- the elements, with where each file comes from
+    for _, e in ipairs(els) do
+      local _, where = phlox.read_library_file("elements/" .. e .. ".lua")
+      io.write(("%-3s %s\n"):format(e, where or "?"))
+    end
+    io.stderr:write(("phlox list: %d elements (phlox list ELEMENT lists its species)\n"):format(#els))
+    return 0
+  end
   if element then
     local found = false
     for _, e in ipairs(els) do if e == element then found = true end end
@@ -170,6 +180,58 @@ function cli.run(name, args)
     return 0
   end
   return cmd(args)
+end
+
+-- The interactive prompt shows values with cli.show: records (tables) as
+-- sorted, indented fields instead of `table: 0x...`; long lists shortened.
+local SHOW_ITEMS = 12 -- entries shown per table
+local SHOW_DEPTH = 2  -- nested tables shown
+
+local function pretty(v, depth, seen, out, indent)
+  local t = type(v)
+  if t == "string" then out[#out + 1] = string.format("%q", v)
+  elseif t == "function" then
+    local name = require("phlox").help_name(v)
+    out[#out + 1] = name and ("function " .. name .. " (phlox.help(" .. name .. "))") or tostring(v)
+  elseif t ~= "table" then out[#out + 1] = tostring(v)
+  elseif seen[v] then out[#out + 1] = "{ ... (cycle) }"
+  elseif depth > SHOW_DEPTH then out[#out + 1] = "{ ... }"
+  else
+    seen[v] = true
+    local keys = {}
+    for k in pairs(v) do keys[#keys + 1] = k end
+    table.sort(keys, function(a, b)
+      if type(a) == type(b) and (type(a) == "number" or type(a) == "string") then return a < b end
+      return type(a) == "number"
+    end)
+    if #keys == 0 then out[#out + 1] = "{}"; seen[v] = nil; return end
+    out[#out + 1] = "{"
+    local pad = indent .. "  "
+    for i, k in ipairs(keys) do
+      if i > SHOW_ITEMS then
+        out[#out + 1] = "\n" .. pad .. ("... (%d more)"):format(#keys - SHOW_ITEMS)
+        break
+      end
+      local key = type(k) == "string" and k:match("^[%a_][%w_]*$") and k or ("[" .. (type(k) == "string" and string.format("%q", k) or tostring(k)) .. "]")
+      out[#out + 1] = "\n" .. pad .. key .. " = "
+      pretty(v[k], depth + 1, seen, out, pad)
+      out[#out + 1] = ","
+    end
+    out[#out + 1] = "\n" .. indent .. "}"
+    seen[v] = nil
+  end
+end
+
+function cli.pretty(v)
+  local out = {}
+  pretty(v, 1, {}, out, "")
+  return table.concat(out)
+end
+
+function cli.show(...)
+  local parts = {}
+  for i = 1, select("#", ...) do parts[i] = cli.pretty((select(i, ...))) end
+  io.write(table.concat(parts, "\t"), "\n")
 end
 
 cli.commands = commands

@@ -183,10 +183,16 @@ static void repl(lua_State *L)
             if (status == LUA_OK) status = px_host_docall(L, 0, LUA_MULTRET);
             if (status == LUA_OK) {
                 int n = lua_gettop(L) - base + 1;
-                if (n > 0) {
-                    lua_getglobal(L, "print");
+                if (n > 0) { /* records shown as fields, not table: 0x... (phlox.cli show) */
+                    if (px_host_require(L, "phlox.cli") == LUA_OK && lua_istable(L, -1)) {
+                        lua_getfield(L, -1, "show");
+                        lua_remove(L, -2);
+                    } else {
+                        lua_pop(L, 1);
+                        lua_getglobal(L, "print");
+                    }
                     lua_insert(L, -(n + 1));
-                    status = lua_pcall(L, n, 0, 0);
+                    status = px_host_docall(L, n, 0);
                 }
             }
             report(L, status);

@@ -5,7 +5,20 @@
 #define PX_ATOMIC_H
 #include <stddef.h>
 
-/* Returns PX_OK or PX_EIO; on failure errno_out (may be NULL) gets errno. */
+#define PX_WRITE_REPLACE 1 /* replace a symbolic link or a read-only file */
+
+/* Writes DATA to PATH.  A new file gets 0666 less the umask; an existing one
+ * keeps its permission bits.  Without PX_WRITE_REPLACE a symbolic link, a
+ * non-regular file or a read-only file at PATH is refused (PX_EINVAL, WHY
+ * says which).  Temporary files of the same target left by dead processes
+ * are removed first.  Returns PX_OK, PX_EINVAL, PX_ENOMEM or PX_EIO (errno
+ * in *errno_out, which may be NULL). */
+int px_write_atomic_ex(const char *path, const void *data, size_t n, int flags, int *errno_out,
+                       char *why, size_t whysize);
+/* The same with flags 0 and no WHY. */
 int px_write_atomic(const char *path, const void *data, size_t n, int *errno_out);
+/* Removes PATH's temporaries left by processes that no longer exist;
+ * returns how many. */
+int px_atomic_clean_stale(const char *path);
 
 #endif

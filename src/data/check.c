@@ -186,6 +186,89 @@ static void check_magnitude(pxd_file *f, pxd_entry *e)
                              v[i] / PXD_KJ, atoms);
 }
 
+/* Physical ranges: values beyond these are slips (a pasted exponent, a
+ * garbled number), not data.  Each is far outside what any published value
+ * reaches, and outside what a unit slip (J for kJ, cal for J: the
+ * consistency check names those with a hint) makes of one (common practice,
+ * no source; the largest known magnitudes are given beside each). */
+#define RANGE_LOGK_MAX 500.0    /* |log K|: the most insoluble sulfides reach about 100 */
+#define RANGE_G_MAX 1e12        /* |dfG|, |dfH| J/mol: large silicates reach about 1.5e7 */
+#define RANGE_S_MAX 1e8         /* |S| J/(mol K): large minerals reach a few 1e3 */
+#define RANGE_CP_MAX 1e5        /* |Cp(T)| J/(mol K) over the valid range: same */
+#define RANGE_V_MAX 1e5         /* |V| J/bar (1e6 cm3/mol): minerals reach about 1e2 J/bar */
+#define RANGE_DH_MAX 1e7        /* |dH| of a log K reaction, J/mol: about 1e6 at most */
+#define RANGE_HKF_MAX 1e9       /* |HKF parameter| in SI units: omega reaches about 1e7 J/mol */
+#define RANGE_T_MAX 10000.0     /* K: gas Cp tables end at 6000 K (JANAF, from memory) */
+
+/* Cp = a + b T + c/T^2 + d/sqrt(T) + e T^2 (docs/element-files.md) */
+static double cp_at(const px_cp_params *p, double T)
+{
+    return p->a + p->b * T + p->c / (T * T) + p->d / sqrt(T) + p->e * T * T;
+}
+
+/* log K = k0 + k1 T + k2/T + k3 log10 T + k4/T^2 (docs/element-files.md) */
+static double logk_at(const double *k, double T)
+{
+    return k[0] + k[1] * T + k[2] / T + k[3] * log10(T) + k[4] / (T * T);
+}
+
+static void out_of_range(pxd_file *f, pxd_entry *e, const char *field, const char *what, double v,
+                         double max, const char *unit)
+{
+    pxd_report_entry(f, e, PX_DATA_ERROR, field,
+                     "%s = %g %s is outside the physical range (|value| <= %g %s): a unit or "
+                     "exponent slip?", what, v, unit, max, unit);
+}
+
+static void check_ranges(pxd_file *f, pxd_entry *e)
+{
+    const px_species *sp = &e->sp;
+    if (isfinite(sp->dGf) && fabs(sp->dGf) > RANGE_G_MAX) out_of_range(f, e, "G", "G", sp->dGf, RANGE_G_MAX, "J/mol");
+    if (isfinite(sp->dHf) && fabs(sp->dHf) > RANGE_G_MAX) out_of_range(f, e, "H", "H", sp->dHf, RANGE_G_MAX, "J/mol");
+    if (isfinite(sp->S) && fabs(sp->S) > RANGE_S_MAX) out_of_range(f, e, "S", "S", sp->S, RANGE_S_MAX, "J/(mol K)");
+    if (sp->Tmax > RANGE_T_MAX && isfinite(sp->Tmax))
+        out_of_range(f, e, "T_range", "Tmax", sp->Tmax, RANGE_T_MAX, "K");
+    double T[3] = {PX_TR, sp->Tmin > 0 ? sp->Tmin : PXD_TMIN_DEFAULT,
+                   isfinite(sp->Tmax) && sp->Tmax <= RANGE_T_MAX ? sp->Tmax : PXD_TMAX_DEFAULT};
+    if (sp->model == PX_MODEL_CP) {
+        for (int i = 0; i < 3; i++) {
+            double cp = cp_at(&sp->cp, T[i]);
+            if (!(fabs(cp) <= RANGE_CP_MAX)) {
+                char what[40];
+                snprintf(what, sizeof what, "Cp(%.2f K)", T[i]);
+                out_of_range(f, e, "cp", what, cp, RANGE_CP_MAX, "J/(mol K)");
+                break;
+            }
+        }
+        if (!(fabs(sp->cp.V) <= RANGE_V_MAX)) out_of_range(f, e, "V", "V", sp->cp.V, RANGE_V_MAX, "J/bar");
+    }
+    if (sp->model == PX_MODEL_HKF) {
+        const double *h = &sp->hkf.a1;
+        static const char *const names[] = {"hkf.a1", "hkf.a2", "hkf.a3", "hkf.a4", "hkf.c1", "hkf.c2", "hkf.omega"};
+        for (int i = 0; i < 7; i++)
+            if (!(fabs(h[i]) <= RANGE_HKF_MAX)) {
+                out_of_range(f, e, names[i], names[i], h[i], RANGE_HKF_MAX, "(SI)");
+                break;
+            }
+    }
+    if (sp->model == PX_MODEL_LOGK) {
+        if (e->has_logK && !(fabs(e->logK_given) <= RANGE_LOGK_MAX))
+            out_of_range(f, e, "logK", "logK", e->logK_given, RANGE_LOGK_MAX, "");
+        if (isfinite(sp->logk.dH) && fabs(sp->logk.dH) > RANGE_DH_MAX)
+            out_of_range(f, e, "dH", "dH", sp->logk.dH, RANGE_DH_MAX, "J/mol");
+        if (e->has_logK_T)
+            for (int i = 0; i < 3; i++) {
+                double v = logk_at(sp->logk.k, T[i]);
+                if (!(fabs(v) <= RANGE_LOGK_MAX)) {
+                    char what[40];
+                    snprintf(what, sizeof what, "logK_T(%.2f K)", T[i]);
+                    out_of_range(f, e, "logK_T", what, v, RANGE_LOGK_MAX, "");
+                    break;
+                }
+            }
+    }
+}
+
 static int is_builtin(const char *canonical)
 {
     for (int i = 0; builtin_names[i]; i++) {
@@ -196,10 +279,37 @@ static int is_builtin(const char *canonical)
     return 0;
 }
 
+static int cmp_name(const void *a, const void *b)
+{
+    const pxd_name *x = a, *y = b;
+    int c = strcmp(x->text, y->text);
+    return c ? c : (x->index > y->index) - (x->index < y->index);
+}
+
+/* the formula-ok entries sorted by (formula, position): lookups and the
+ * duplicate check in O(log n) instead of a scan of the file */
+static void build_names(pxd_file *f)
+{
+    f->names = malloc((f->n ? f->n : 1) * sizeof *f->names);
+    if (!f->names) {
+        f->oom = 1;
+        return;
+    }
+    for (size_t i = 0; i < f->n; i++)
+        if (f->e[i].formula_ok) f->names[f->n_names++] = (pxd_name){f->e[i].sp.f.text, i};
+    qsort(f->names, f->n_names, sizeof *f->names, cmp_name);
+}
+
+/* the first entry (lowest position) with this canonical formula, or NULL */
 static const pxd_entry *find_in_file(const pxd_file *f, const char *canonical)
 {
-    for (size_t i = 0; i < f->n; i++)
-        if (f->e[i].formula_ok && strcmp(f->e[i].sp.f.text, canonical) == 0) return &f->e[i];
+    size_t lo = 0, hi = f->n_names;
+    while (lo < hi) {
+        size_t mid = lo + (hi - lo) / 2;
+        if (strcmp(f->names[mid].text, canonical) < 0) lo = mid + 1;
+        else hi = mid;
+    }
+    if (lo < f->n_names && strcmp(f->names[lo].text, canonical) == 0) return &f->e[f->names[lo].index];
     return NULL;
 }
 
@@ -282,12 +392,10 @@ static void check_entry(pxd_file *f, pxd_entry *e, const px_db *known)
                              "%s is built in: do not define it in an element file", fm->text);
         else
             check_membership(f, e);
-        for (pxd_entry *o = f->e; o < e; o++)
-            if (o->formula_ok && strcmp(o->sp.f.text, fm->text) == 0) {
-                pxd_report_entry(f, e, PX_DATA_ERROR, "formula",
-                                 "defined twice in this file (first at line %d)", o->sp.line);
-                break;
-            }
+        const pxd_entry *o = find_in_file(f, fm->text);
+        if (o && o < e)
+            pxd_report_entry(f, e, PX_DATA_ERROR, "formula",
+                             "defined twice in this file (first at line %d)", o->sp.line);
         if (known && !f->opt->user_file) {
             const px_species *k = px_db_find(known, fm->text);
             if (k && k->file)
@@ -301,7 +409,9 @@ static void check_entry(pxd_file *f, pxd_entry *e, const px_db *known)
     if (e->has_S && fm->state != PX_STATE_AQ && e->formula_ok && !(sp->S > 0))
         pxd_report_entry(f, e, PX_DATA_ERROR, "S",
                          "the third-law entropy of a solid, liquid or gas must be positive");
-    if (e->formula_ok) {
+    int before = e->errors;
+    check_ranges(f, e);
+    if (e->formula_ok && e->errors == before) { /* absurd values: the range error says it all */
         check_cycle(f, e);
         check_magnitude(f, e);
     }
@@ -366,6 +476,8 @@ static void resolve_kopp(pxd_file *f, pxd_entry *e, const px_db *known)
 
 void pxd_check_file(pxd_file *f, const px_db *known)
 {
+    build_names(f);
+    if (f->oom) return;
     for (size_t i = 0; i < f->n; i++) check_entry(f, &f->e[i], known);
     for (size_t i = 0; i < f->n_ex; i++) {
         px_formula fm;

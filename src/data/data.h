@@ -59,7 +59,10 @@ size_t px_data_problems_write(const px_data_problems *p, FILE *out);
 /* ---- options ------------------------------------------------------------ */
 
 #define PX_DATA_MEM_LIMIT_DEFAULT ((size_t)8 << 20) /* bytes held by the sandbox */
-#define PX_DATA_INSTR_LIMIT_DEFAULT 20000000UL      /* Lua VM instructions per file */
+#define PX_DATA_INSTR_LIMIT_DEFAULT 20000000UL      /* Lua VM instructions per file (and
+                                                      units of work charged by helpers) */
+#define PX_DATA_WALL_LIMIT_DEFAULT 30.0             /* seconds per file (a guard for work the
+                                                      budget does not see; slow machines) */
 /* dfG vs dfH - T dfS mismatch that is an error, J/mol (docs/element-files.md,
  * "Consistency"; common practice, no source) */
 #define PX_DATA_CONSISTENCY_TOL_DEFAULT 1500.0
@@ -74,6 +77,7 @@ size_t px_data_problems_write(const px_data_problems *p, FILE *out);
 typedef struct px_data_options {
     size_t mem_limit;          /* sandbox allocator cap, bytes */
     unsigned long instr_limit; /* instruction budget, Lua VM instructions */
+    double wall_limit;         /* seconds of wall-clock time per file */
     double consistency_tol;    /* J/mol; INFINITY switches the check off */
     double magnitude_warn;     /* J/mol per atom; INFINITY switches it off */
     int user_file;             /* user override file: `element` optional, `exclude`
@@ -101,6 +105,10 @@ int px_data_load_buffer(px_db *db, const char *text, size_t len, const char *nam
 /* Same for a file on disk (PX_EIO if it cannot be read; PX_ELIMIT if larger
  * than PX_DATA_FILE_MAX). */
 #define PX_DATA_FILE_MAX ((size_t)4 << 20)
+/* Reads a whole file for loading: regular files only, at most
+ * PX_DATA_FILE_MAX bytes, NUL-terminated (free() it).  PX_EIO (cannot open,
+ * not a regular file, read error) or PX_ELIMIT (too large), with MSG set. */
+int px_data_read_file(const char *path, char **text, size_t *len, char *msg, size_t msgsize);
 int px_data_load_file(px_db *db, const char *path, const px_data_options *opt,
                       px_data_problems *probs);
 /* Loads the embedded standard-library file stdlib/elements/<ELEMENT>.lua

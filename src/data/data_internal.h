@@ -78,7 +78,36 @@ typedef struct pxd_file {
 
     pxd_tok *tok;
     size_t ntok;
+
+    /* indexes that keep the loader linear in the number of species
+     * (lines.c and check.c build them once per file) */
+    struct pxd_name *names;   /* formula-ok entries by canonical formula */
+    size_t n_names;
+    struct pxd_strtok *ftok;  /* `formula = "..."` string tokens by contents */
+    size_t n_ftok;
+    struct pxd_strtok *stok;  /* every plain string token by contents */
+    size_t n_stok;
+    long *list_tables;        /* the tables of a literal `species = { ... }` list */
+    size_t n_list_tables;
+    int indexed;              /* token indexes built (or failed: -1) */
+    struct pxd_rawcount *raws;/* raw formula -> entries located so far */
+    size_t cap_raws, n_raws;
 } pxd_file;
+
+typedef struct pxd_name {
+    const char *text;
+    size_t index;
+} pxd_name;
+typedef struct pxd_strtok {
+    const char *s;
+    size_t len, tok;
+} pxd_strtok;
+typedef struct pxd_rawcount {
+    size_t entry; /* an entry with this raw text (its raw[] is the key) */
+    int count;
+    int used;
+} pxd_rawcount;
+void pxd_index_free(pxd_file *f);
 
 /* problems.c */
 void pxd_report(pxd_file *f, px_data_severity sev, int line, const char *species,

@@ -5,11 +5,16 @@
  * file exactly when loading it would succeed.  Loading is all or nothing: a
  * file with any error adds nothing, and the database is only touched after
  * every check has passed. */
+#define _POSIX_C_SOURCE 200809L
 #include "data/data_internal.h"
 #include "core/status.h"
 #include "lua/embedded.h"
+#include <errno.h>
+#include <fcntl.h>
 #include <math.h>
 #include <stdio.h>
+#include <sys/stat.h>
+#include <unistd.h>
 #include <stdlib.h>
 #include <string.h>
 
@@ -19,6 +24,7 @@ px_data_options px_data_options_default(void)
     memset(&o, 0, sizeof o);
     o.mem_limit = PX_DATA_MEM_LIMIT_DEFAULT;
     o.instr_limit = PX_DATA_INSTR_LIMIT_DEFAULT;
+    o.wall_limit = PX_DATA_WALL_LIMIT_DEFAULT;
     o.consistency_tol = PX_DATA_CONSISTENCY_TOL_DEFAULT;
     o.magnitude_warn = PX_DATA_MAGNITUDE_WARN_DEFAULT;
     return o;
@@ -30,6 +36,7 @@ static void file_free(pxd_file *f, px_data_problems *own)
     free(f->e);
     free(f->ex);
     free(f->tok);
+    pxd_index_free(f);
     px_data_problems_free(own);
 }
 
@@ -51,7 +58,7 @@ static int run(pxd_file *f, px_data_problems **own, const char *text, size_t len
     f->s_unit = 1.0;    /* J/(mol K) */
     f->Tmin = PXD_TMIN_DEFAULT;
     f->Tmax = PXD_TMAX_DEFAULT;
-    if (!text || opt->mem_limit == 0 || opt->instr_limit == 0 ||
+    if (!text || opt->mem_limit == 0 || opt->instr_limit == 0 || !(opt->wall_limit > 0) ||
         !(opt->consistency_tol > 0) || !(opt->magnitude_warn > 0))
         return PX_EINVAL;
     if (pxd_tokenize(f) != PX_OK) return PX_ENOMEM;
@@ -132,59 +139,75 @@ int px_data_merge_user_buffer(px_db *db, const char *text, size_t len, const cha
     return load(db, text, len, name, opt, probs, 1);
 }
 
-/* reads PATH into a NUL-terminated buffer; problems name the path */
-static int read_file(const char *path, char **out, size_t *len, px_data_problems *probs)
+/* Reads PATH into a NUL-terminated buffer: regular files only (a FIFO, a
+ * device or a symlink to /dev/zero is refused before reading), at most
+ * PX_DATA_FILE_MAX bytes.  Every load path (C, `phlox check`, the Lua
+ * library reader) goes through here. */
+int px_data_read_file(const char *path, char **out, size_t *len, char *msg, size_t msgsize)
 {
     *out = NULL;
+    *len = 0;
+    if (msgsize) msg[0] = '\0';
     if (!path) return PX_EINVAL;
-    FILE *fp = fopen(path, "rb");
-    pxd_file f; /* only for pxd_report */
-    memset(&f, 0, sizeof f);
-    f.name = path;
-    f.probs = probs;
-    if (!fp) {
-        if (probs) pxd_report(&f, PX_DATA_ERROR, 0, "", "", "cannot open the file");
+    int fd = open(path, O_RDONLY | O_NONBLOCK | O_NOCTTY);
+    if (fd < 0) {
+        snprintf(msg, msgsize, "cannot open the file (%s)", strerror(errno));
         return PX_EIO;
     }
-    size_t cap = 4096, n = 0;
-    char *buf = malloc(cap);
-    int st = buf ? PX_OK : PX_ENOMEM;
-    while (st == PX_OK) {
-        if (n + 1 >= cap) {
-            if (cap > PX_DATA_FILE_MAX) {
-                st = PX_ELIMIT;
-                if (probs)
-                    pxd_report(&f, PX_DATA_ERROR, 0, "", "", "file larger than %zu bytes",
-                               (size_t)PX_DATA_FILE_MAX);
-                break;
-            }
-            char *nb = realloc(buf, cap * 2);
-            if (!nb) {
-                st = PX_ENOMEM;
-                break;
-            }
-            buf = nb;
-            cap *= 2;
+    struct stat st;
+    if (fstat(fd, &st) != 0 || !S_ISREG(st.st_mode)) {
+        snprintf(msg, msgsize, "not a regular file (a folder, device or pipe is refused)");
+        close(fd);
+        return PX_EIO;
+    }
+    if ((unsigned long long)st.st_size > PX_DATA_FILE_MAX) {
+        snprintf(msg, msgsize, "file larger than %zu bytes", (size_t)PX_DATA_FILE_MAX);
+        close(fd);
+        return PX_ELIMIT;
+    }
+    size_t cap = (size_t)st.st_size + 1, n = 0;
+    char *buf = malloc(cap + 1);
+    if (!buf) {
+        close(fd);
+        return PX_ENOMEM;
+    }
+    for (;;) { /* read one byte past the stat size to see a growing file */
+        ssize_t r = read(fd, buf + n, cap - n);
+        if (r < 0 && errno == EINTR) continue;
+        if (r < 0) {
+            snprintf(msg, msgsize, "read error (%s)", strerror(errno));
+            free(buf);
+            close(fd);
+            return PX_EIO;
         }
-        size_t r = fread(buf + n, 1, cap - n - 1, fp);
-        n += r;
-        if (r == 0) {
-            if (ferror(fp)) {
-                st = PX_EIO;
-                if (probs) pxd_report(&f, PX_DATA_ERROR, 0, "", "", "read error");
-            }
-            break;
+        if (r == 0) break;
+        n += (size_t)r;
+        if (n == cap) {
+            snprintf(msg, msgsize, "file changed size while read");
+            free(buf);
+            close(fd);
+            return PX_EIO;
         }
     }
-    fclose(fp);
-    if (st != PX_OK) {
-        free(buf);
-        return st;
-    }
+    close(fd);
     buf[n] = '\0';
     *out = buf;
     *len = n;
     return PX_OK;
+}
+
+static int read_file(const char *path, char **out, size_t *len, px_data_problems *probs)
+{
+    char msg[256];
+    int st = px_data_read_file(path, out, len, msg, sizeof msg);
+    if (st != PX_OK && probs && path) {
+        pxd_file f; /* only for pxd_report */
+        memset(&f, 0, sizeof f);
+        f.name = path;
+        f.probs = probs;
+        pxd_report(&f, PX_DATA_ERROR, 0, "", "", "%s", msg[0] ? msg : px_strerror(st));
+    }
+    return st;
 }
 
 int px_data_load_file(px_db *db, const char *path, const px_data_options *opt,

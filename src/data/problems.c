@@ -100,6 +100,23 @@ size_t px_data_problems_write(const px_data_problems *p, FILE *out)
     return errors;
 }
 
+/* A copy of S with control characters written as \xNN (an element file
+ * from a stranger must not drive the user's terminal); NULL if out of memory. */
+static char *escaped_dup(const char *s)
+{
+    if (!s) s = "";
+    size_t n = 0;
+    for (const unsigned char *p = (const unsigned char *)s; *p; p++) n += (*p < 0x20 || *p == 0x7f) ? 4 : 1;
+    char *out = malloc(n + 1), *q = out;
+    if (!out) return NULL;
+    for (const unsigned char *p = (const unsigned char *)s; *p; p++) {
+        if (*p < 0x20 || *p == 0x7f) q += snprintf(q, 5, "\\x%02x", *p);
+        else *q++ = (char)*p;
+    }
+    *q = '\0';
+    return out;
+}
+
 static void vreport(pxd_file *f, px_data_severity sev, int line, const char *species,
                     const char *field, const char *fmt, va_list ap)
 {
@@ -122,9 +139,11 @@ static void vreport(pxd_file *f, px_data_severity sev, int line, const char *spe
     va_copy(ap2, ap);
     int n = vsnprintf(NULL, 0, fmt, ap2);
     va_end(ap2);
-    char *msg = n >= 0 ? malloc((size_t)n + 1) : NULL;
-    if (msg) vsnprintf(msg, (size_t)n + 1, fmt, ap);
-    px_data_problem pr = {sev, pxd_strdup(f->name), line, pxd_strdup(species), pxd_strdup(field),
+    char *raw = n >= 0 ? malloc((size_t)n + 1) : NULL;
+    if (raw) vsnprintf(raw, (size_t)n + 1, fmt, ap);
+    char *msg = raw ? escaped_dup(raw) : NULL;
+    free(raw);
+    px_data_problem pr = {sev, escaped_dup(f->name), line, escaped_dup(species), escaped_dup(field),
                           msg};
     if (!pr.file || !pr.species || !pr.field || !pr.message) {
         problem_free(&pr);

@@ -547,6 +547,7 @@ static void read_species(ctx *c, int t, int index)
     lua_pop(L, 1);
     pxd_locate_species(f, e);
     e->sp.line = pxd_species_line(f, e);
+    char fmsg[200];
     e->sp.file = pxd_strdup(f->name);
     if (!e->sp.file) oom(c);
     if (ty == LUA_TNIL) REPORT(c, PX_DATA_ERROR, "formula", "missing required field 'formula'");
@@ -554,9 +555,9 @@ static void read_species(ctx *c, int t, int index)
         REPORT(c, PX_DATA_ERROR, "formula", "expected a string, got %s", lua_typename(L, ty));
     else if (e->raw[0] == '#')
         REPORT(c, PX_DATA_ERROR, "formula", "formula too long (at most %d bytes)", PXD_RAW_MAX - 1);
-    else if (px_formula_parse(e->raw, &e->sp.f) != PX_OK)
-        REPORT(c, PX_DATA_ERROR, "formula", "malformed formula '%s' (see docs/element-files.md, Formulas)",
-               e->raw);
+    else if (px_formula_parse_msg(e->raw, &e->sp.f, fmsg, sizeof fmsg) != PX_OK)
+        REPORT(c, PX_DATA_ERROR, "formula", "malformed formula '%s': %s (see docs/element-files.md, Formulas)",
+               e->raw, fmsg);
     else
         e->formula_ok = 1;
 

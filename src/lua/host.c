@@ -58,6 +58,21 @@ static int embedded_searcher(lua_State *L)
     return 1;
 }
 
+/* `phlox` and `phlox.*` are reserved for the built-in library: a user folder
+ * adds modules of other names but can never replace or extend these (a shared
+ * folder holding phlox/cli.lua would otherwise run with full rights on every
+ * command).  Placed after the embedded searcher, before the user folders. */
+static int reserved_searcher(lua_State *L)
+{
+    const char *name = luaL_checkstring(L, 1);
+    if (strcmp(name, "phlox") == 0 || strncmp(name, "phlox.", 6) == 0)
+        return luaL_error(L, "module '%s' not found: the names phlox and phlox.* are reserved "
+                             "for the built-in library (user folders cannot add or replace them)",
+                          name);
+    lua_pushliteral(L, "\n\tnot a reserved phlox module");
+    return 1;
+}
+
 /* package.path from the user folders: DIR/?.lua;DIR/?/init.lua for each. */
 static void set_package_paths(lua_State *L, const char *const *paths, size_t n)
 {
@@ -74,15 +89,18 @@ static void set_package_paths(lua_State *L, const char *const *paths, size_t n)
     lua_pushliteral(L, "");
     lua_setfield(L, -2, "cpath");
 
-    /* searchers: preload, the Lua-file searcher (user folders), embedded. */
+    /* searchers: preload, embedded, the reserved-name guard, then the
+     * Lua-file searcher over the user folders. */
     lua_getfield(L, -1, "searchers");
-    lua_createtable(L, 3, 0);
+    lua_createtable(L, 4, 0);
     lua_rawgeti(L, -2, 1); /* the preload searcher */
     lua_rawseti(L, -2, 1);
-    lua_rawgeti(L, -2, 2); /* the Lua-file searcher over package.path */
-    lua_rawseti(L, -2, 2);
     lua_pushcfunction(L, embedded_searcher);
+    lua_rawseti(L, -2, 2);
+    lua_pushcfunction(L, reserved_searcher);
     lua_rawseti(L, -2, 3);
+    lua_rawgeti(L, -2, 2); /* the Lua-file searcher over package.path */
+    lua_rawseti(L, -2, 4);
     lua_setfield(L, -3, "searchers");
     lua_pop(L, 2); /* old searchers, package */
 

@@ -7,6 +7,7 @@
 #include "diagram/emap.h"
 #include "diagram/rmap.h"
 #include "lua/bindings.h"
+#include "water/water.h"
 #include "lua/practice.h"
 #include <lauxlib.h>
 #include <math.h>
@@ -18,15 +19,69 @@ int px_lua_check_database(lua_State *L, int arg, px_db **db, px_thermo_ws **ws);
 static const char *const axis_names[] = {"pH", "E", "loga", NULL};
 static const char *const kind_names[] = {"metal", "solid", "aqueous", "gas", "liquid"};
 
+/* Ranges of the options (the Lua layer, lua/phlox.lua, checks the same
+ * quantities in the user's units). */
+#define MAP_ACT_MIN 1e-300  /* an activity is positive */
+#define MAP_ACT_MAX 10.0    /* common practice, no source: above 10 no activity model holds */
+#define MAP_I_MAX 0.5       /* mol/kg: Davies equation, stated range I <= 0.5 (Davies 1962, from memory of Stumm and Morgan, Aquatic Chemistry) */
+#define MAP_LOGF_MIN -300.0 /* log10 fugacity/bar: below double precision's reach */
+#define MAP_LOGF_MAX 3.0    /* log10 bar: 1000 bar, the water model's top (water.h PX_WATER_PMAX) */
+#define MAP_COORD_MAX 1e3   /* |pH|, |E/V|, |log a| of a window or fixed coordinate: a guard */
+#define GRID_NODES_MAX 4001 /* nodes per axis: a memory and time guard, not a physical limit */
+#define GRID_TOTAL_MAX 20.0 /* mol/kg: common practice, no source (beyond any salt's solubility) */
+#define GRID_NACL_MAX 6.1   /* mol/kg: halite saturation at 25 C (from memory of the CRC Handbook) */
+
+static const px_lua_opt map_opts[] = {
+    {"element", "string", 0, 0},
+    {"T", "number", PX_WATER_TMIN, PX_WATER_TMAX},
+    {"P", "number", 0, PX_WATER_PMAX},
+    {"x", "pH|E|loga", 0, 0},
+    {"y", "pH|E|loga", 0, 0},
+    {"window", "numbers", -MAP_COORD_MAX, MAP_COORD_MAX},
+    {"pH", "number", -MAP_COORD_MAX, MAP_COORD_MAX},
+    {"E", "number", -MAP_COORD_MAX, MAP_COORD_MAX},
+    {"activity", "number", MAP_ACT_MIN, MAP_ACT_MAX},
+    {"ligand", "string", 0, 0},
+    {"ligand_activity", "number", MAP_ACT_MIN, MAP_ACT_MAX},
+    {"gas_log_f", "number", MAP_LOGF_MIN, MAP_LOGF_MAX},
+    {"ionic_strength", "number", 0, MAP_I_MAX},
+    {"exclude", "strings", 0, 0},
+    {"only", "strings", 0, 0},
+    {"activities", "map", MAP_ACT_MIN, MAP_ACT_MAX},
+    {"ligand_redox", "table", 0, 0}, /* {N = "full" | "kept" | form} (l_practice.c) */
+    {NULL, NULL, 0, 0}};
+
+static const px_lua_opt grid_opts[] = {
+    {"element", "string", 0, 0},
+    {"T", "number", PX_WATER_TMIN, PX_WATER_TMAX},
+    {"P", "number", 0, PX_WATER_PMAX},
+    {"window", "numbers", -MAP_COORD_MAX, MAP_COORD_MAX},
+    {"nx", "integer", 2, GRID_NODES_MAX},
+    {"ny", "integer", 2, GRID_NODES_MAX},
+    {"total", "number", MAP_ACT_MIN, GRID_TOTAL_MAX},
+    {"ligand", "string", 0, 0},
+    {"ligand_total", "number", MAP_ACT_MIN, GRID_TOTAL_MAX},
+    {"activity_model", "ideal|davies|bdot|sit", 0, 0},
+    {"background_nacl", "number", 0, GRID_NACL_MAX},
+    {"exclude", "strings", 0, 0},
+    {"threads", "integer", 1, PX_RMAP_MAX_THREADS},
+    {"ligand_redox", "table", 0, 0},
+    {"allow_inhibited", "boolean", 0, 0}, /* let inhibited solids precipitate */
+    {NULL, NULL, 0, 0}};
+
+/* a number option already checked by the option reader */
 static double optnum(lua_State *L, int t, const char *k, double dflt)
 {
     lua_getfield(L, t, k);
-    double v = luaL_optnumber(L, -1, dflt);
+    double v = lua_isnil(L, -1) ? dflt : lua_tonumber(L, -1);
     lua_pop(L, 1);
     return v;
 }
 
-/* A list option of strings -> array in a userdata box left on the stack. */
+/* A list option of strings (checked by the option reader: every entry is a
+ * string, so no lua_tostring converts a number in place) -> array in a
+ * userdata box left on the stack, which keeps the list (and so the strings)
+ * alive. */
 static const char **optlist(lua_State *L, int t, const char *k, size_t *n)
 {
     *n = 0;
@@ -34,19 +89,37 @@ static const char **optlist(lua_State *L, int t, const char *k, size_t *n)
         lua_pop(L, 1);
         return NULL;
     }
-    size_t len = (size_t)luaL_len(L, -1);
+    size_t len = lua_rawlen(L, -1);
     const char **v = lua_newuserdatauv(L, (len ? len : 1) * sizeof *v, 1);
     lua_pushvalue(L, -2);
     lua_setiuservalue(L, -2, 1); /* keep the strings alive with the box */
     for (size_t i = 0; i < len; i++) {
-        lua_rawgeti(L, -2, (lua_Integer)i + 1);
+        if (lua_rawgeti(L, -2, (lua_Integer)i + 1) != LUA_TSTRING)
+            luaL_error(L, "option '%s'[%d] must be a string", k, (int)i + 1);
         v[i] = lua_tostring(L, -1);
-        if (!v[i]) luaL_error(L, "map option '%s'[%d] must be a string", k, (int)i + 1);
         lua_pop(L, 1);
     }
     lua_remove(L, -2);
     *n = len;
     return v;
+}
+
+/* window {xmin, xmax, ymin, ymax}: four numbers, each pair increasing */
+static void optwindow(lua_State *L, int t, const char *fname, px_diagram_window *win)
+{
+    if (lua_getfield(L, t, "window") == LUA_TTABLE) {
+        double w[4];
+        if (lua_rawlen(L, -1) != 4) px_lua_user_error(L, "%s: option 'window' must hold 4 numbers", fname);
+        for (int i = 0; i < 4; i++) {
+            lua_rawgeti(L, -1, i + 1);
+            w[i] = lua_tonumber(L, -1);
+            lua_pop(L, 1);
+        }
+        if (!(w[0] < w[1] && w[2] < w[3]))
+            px_lua_user_error(L, "%s: option 'window' = {xmin, xmax, ymin, ymax} needs xmin < xmax and ymin < ymax", fname);
+        *win = (px_diagram_window){w[0], w[1], w[2], w[3]};
+    }
+    lua_pop(L, 1);
 }
 
 static void push_xy(lua_State *L, const double *x, const double *y, size_t n, const size_t *idx)
@@ -96,11 +169,11 @@ static int l_map(lua_State *L)
     px_db *db;
     px_thermo_ws *ws;
     px_lua_check_database(L, 1, &db, &ws);
-    luaL_checktype(L, 2, LUA_TTABLE);
+    px_lua_opts_check(L, 2, "core.map", map_opts);
     lua_settop(L, 2);
     px_emap_options o = px_emap_options_default();
-    lua_getfield(L, 2, "element");
-    const char *element = luaL_checkstring(L, -1);
+    if (lua_getfield(L, 2, "element") != LUA_TSTRING) px_lua_user_error(L, "core.map: element (a symbol) is required");
+    const char *element = lua_tostring(L, -1);
     lua_pop(L, 1); /* still referenced by opts */
     o.T = optnum(L, 2, "T", o.T);
     o.P = optnum(L, 2, "P", o.P);
@@ -109,16 +182,7 @@ static int l_map(lua_State *L)
     lua_getfield(L, 2, "y");
     o.yaxis = (px_emap_axis)luaL_checkoption(L, -1, "E", axis_names);
     lua_pop(L, 2);
-    if (lua_getfield(L, 2, "window") == LUA_TTABLE) {
-        double w[4];
-        for (int i = 0; i < 4; i++) {
-            lua_rawgeti(L, -1, i + 1);
-            w[i] = luaL_checknumber(L, -1);
-            lua_pop(L, 1);
-        }
-        o.window = (px_diagram_window){w[0], w[1], w[2], w[3]};
-    }
-    lua_pop(L, 1);
+    optwindow(L, 2, "core.map", &o.window);
     o.pH = optnum(L, 2, "pH", o.pH);
     o.E = optnum(L, 2, "E", o.E);
     o.activity = optnum(L, 2, "activity", o.activity);
@@ -143,9 +207,8 @@ static int l_map(lua_State *L)
         double *vals = lua_newuserdatauv(L, (n ? n : 1) * sizeof *vals, 0);
         size_t k = 0;
         lua_pushnil(L);
-        while (lua_next(L, -4)) {
+        while (lua_next(L, -4)) { /* keys are strings (checked): never converted in place */
             names[k] = lua_tostring(L, -2);
-            if (!names[k] || !lua_isnumber(L, -1)) luaL_error(L, "activities: {formula = number}");
             vals[k++] = lua_tonumber(L, -1);
             lua_pop(L, 1);
         }
@@ -281,7 +344,7 @@ static int l_map(lua_State *L)
 
 /* core.grid_map(db, opts) -> rigorous map table | nil, message
  * opts: element, T, P, window {pHmin, pHmax, Emin, Emax}, nx, ny, total,
- * ligand, ligand_total, activity ("ideal"|"davies"|"bdot"), background_nacl,
+ * ligand, ligand_total, activity_model ("ideal"|"davies"|"bdot"), background_nacl,
  * exclude {...}.  The table has fields (species, count, area, label_x,
  * label_y), boundaries (between, x, y polylines), the node labels (labels:
  * nx*ny indices into `species`, row by row from the lowest E; 0 where the
@@ -292,24 +355,16 @@ static int l_grid_map(lua_State *L)
     px_db *db;
     px_thermo_ws *ws;
     px_lua_check_database(L, 1, &db, &ws);
-    luaL_checktype(L, 2, LUA_TTABLE);
+    px_lua_opts_check(L, 2, "core.grid_map", grid_opts);
     lua_settop(L, 2);
     px_rmap_options o = px_rmap_options_default();
-    lua_getfield(L, 2, "element");
-    const char *element = luaL_checkstring(L, -1);
+    if (lua_getfield(L, 2, "element") != LUA_TSTRING)
+        px_lua_user_error(L, "core.grid_map: element (a symbol) is required");
+    const char *element = lua_tostring(L, -1);
     lua_pop(L, 1);
     o.T = optnum(L, 2, "T", o.T);
     o.P = optnum(L, 2, "P", o.P);
-    if (lua_getfield(L, 2, "window") == LUA_TTABLE) {
-        double w[4];
-        for (int i = 0; i < 4; i++) {
-            lua_rawgeti(L, -1, i + 1);
-            w[i] = luaL_checknumber(L, -1);
-            lua_pop(L, 1);
-        }
-        o.window = (px_diagram_window){w[0], w[1], w[2], w[3]};
-    }
-    lua_pop(L, 1);
+    optwindow(L, 2, "core.grid_map", &o.window);
     o.grid.nx = (size_t)optnum(L, 2, "nx", (double)o.grid.nx);
     o.grid.ny = (size_t)optnum(L, 2, "ny", (double)o.grid.ny);
     o.total = optnum(L, 2, "total", o.total);
@@ -319,7 +374,7 @@ static int l_grid_map(lua_State *L)
     lua_getfield(L, 2, "ligand");
     o.ligand = lua_tostring(L, -1);
     lua_pop(L, 1);
-    lua_getfield(L, 2, "activity");
+    lua_getfield(L, 2, "activity_model");
     int model = luaL_checkoption(L, -1, "davies", models);
     lua_pop(L, 1);
     o.model = (px_equil_model)model; /* same order as px_equil_model */

@@ -9,6 +9,7 @@
 #include "core/status.h"
 #include "equil/speciate.h"
 #include "lua/bindings.h"
+#include "water/water.h"
 #include "lua/practice.h"
 #include <lauxlib.h>
 #include <math.h>
@@ -16,12 +17,44 @@
 
 int px_lua_check_database(lua_State *L, int arg, px_db **db, px_thermo_ws **ws);
 
+/* Ranges (the option reader checks them before anything is read) */
+#define SPEC_TOTAL_MAX 20.0    /* mol/kg: common practice, no source (beyond any salt's solubility) */
+#define SPEC_PH_MIN -3.0       /* common practice, no source: concentrated acids reach about -1 */
+#define SPEC_PH_MAX 17.0       /* common practice, no source: pKw is 14.9 at 0 C (IAPWS R11-07) */
+#define SPEC_E_MAX 5.0         /* V: common practice, no source (beyond any aqueous couple) */
+#define SPEC_PE_MAX 100.0      /* pe = E F/(RT ln 10): 5 V at 0 C is 92 */
+#define SPEC_LOG_MIN -300.0    /* log10 fugacity or activity: below double precision's reach */
+#define SPEC_LOGF_MAX 3.0      /* log10 bar: 1000 bar, the water model's top (water.h) */
+#define SPEC_LOGA_MAX 1.0      /* log10 activity: common practice, no source */
+#define SPEC_ITER_MAX 100000   /* a time guard */
+
+static const px_lua_opt speciate_opts[] = {
+    {"T", "number", PX_WATER_TMIN, PX_WATER_TMAX},
+    {"P", "number", 0, PX_WATER_PMAX},
+    {"totals", "map", 0, SPEC_TOTAL_MAX},
+    {"basis", "table", 0, 0},
+    {"pH", "number", SPEC_PH_MIN, SPEC_PH_MAX},
+    {"E", "number", -SPEC_E_MAX, SPEC_E_MAX},
+    {"pe", "number", -SPEC_PE_MAX, SPEC_PE_MAX},
+    {"redox_gas", "string", 0, 0},
+    {"redox_log_f", "number", SPEC_LOG_MIN, SPEC_LOGF_MAX},
+    {"fugacities", "map", SPEC_LOG_MIN, SPEC_LOGF_MAX},
+    {"fixed", "map", SPEC_LOG_MIN, SPEC_LOGA_MAX},
+    {"solids", "boolean", 0, 0},
+    {"suppress", "strings", 0, 0},
+    {"exclude", "strings", 0, 0},
+    {"activity_model", "ideal|davies|bdot|sit", 0, 0},
+    {"max_iter", "integer", 1, SPEC_ITER_MAX},
+    {"ligand_redox", "table", 0, 0},         /* {N = "full" | "kept" | form, ...} (l_practice.c) */
+    {"allow_inhibited", "boolean", 0, 0},    /* let inhibited solids precipitate */
+    {NULL, NULL, 0, 0}};
+
+/* a number option already checked by the option reader */
 static double optnum(lua_State *L, int t, const char *k, double dflt, int *given)
 {
     int ty = lua_getfield(L, t, k);
     double v = dflt;
     if (ty != LUA_TNIL) {
-        if (!lua_isnumber(L, -1)) luaL_error(L, "speciate: option '%s' must be a number", k);
         v = lua_tonumber(L, -1);
         if (given) *given = 1;
     }
@@ -39,9 +72,7 @@ static size_t optmap(lua_State *L, int t, const char *k, const char **names, dou
     size_t n = 0;
     lua_pushnil(L);
     while (lua_next(L, -2)) {
-        if (lua_type(L, -2) != LUA_TSTRING || !lua_isnumber(L, -1))
-            luaL_error(L, "speciate: option '%s' must map names to numbers", k);
-        if (n >= max) luaL_error(L, "speciate: option '%s' has more than %d entries", k, (int)max);
+        if (n >= max) px_lua_user_error(L, "speciate: option '%s' has more than %d entries", k, (int)max);
         names[n] = lua_tostring(L, -2); /* anchored in the option table */
         vals[n++] = lua_tonumber(L, -1);
         lua_pop(L, 1);
@@ -65,12 +96,11 @@ static size_t optlist(lua_State *L, int t, const char *k, const char **out, size
         lua_pop(L, 1);
         return 0;
     }
-    size_t n = (size_t)luaL_len(L, -1);
-    if (n > max) luaL_error(L, "speciate: option '%s' has more than %d entries", k, (int)max);
-    for (size_t i = 0; i < n; i++) {
+    size_t n = lua_rawlen(L, -1);
+    if (n > max) px_lua_user_error(L, "speciate: option '%s' has more than %d entries", k, (int)max);
+    for (size_t i = 0; i < n; i++) { /* strings (checked): anchored in the option table */
         lua_rawgeti(L, -1, (lua_Integer)i + 1);
         out[i] = lua_tostring(L, -1);
-        if (!out[i]) luaL_error(L, "speciate: option '%s'[%d] must be a string", k, (int)i + 1);
         lua_pop(L, 1);
     }
     lua_pop(L, 1);
@@ -90,19 +120,26 @@ static int l_speciate(lua_State *L)
     px_db *db;
     px_thermo_ws *ws;
     px_lua_check_database(L, 1, &db, &ws);
-    luaL_checktype(L, 2, LUA_TTABLE);
+    px_lua_opts_check(L, 2, "core.speciate", speciate_opts);
     lua_settop(L, 2);
     px_spec_options o = px_spec_options_default();
     o.T = optnum(L, 2, "T", o.T, NULL);
     o.P = optnum(L, 2, "P", o.P, NULL);
     o.n_totals = optmap(L, 2, "totals", o.element, o.total, PX_SPEC_MAX_ITEMS - 3);
-    if (o.n_totals == 0) return luaL_error(L, "speciate: totals = {Element = mol/kg, ...} is required");
-    if (lua_getfield(L, 2, "basis") == LUA_TTABLE)
-        for (size_t k = 0; k < o.n_totals; k++) {
-            lua_getfield(L, -1, o.element[k]);
-            o.basis[k] = lua_tostring(L, -1);
+    if (o.n_totals == 0) return px_lua_user_error(L, "speciate: totals = {Element = mol/kg, ...} is required");
+    if (lua_getfield(L, 2, "basis") == LUA_TTABLE) {
+        lua_pushnil(L);
+        while (lua_next(L, -2)) {
+            if (lua_type(L, -2) != LUA_TSTRING || lua_type(L, -1) != LUA_TSTRING)
+                px_lua_user_error(L, "speciate: option 'basis' must map element symbols to species formulas");
             lua_pop(L, 1);
         }
+        for (size_t k = 0; k < o.n_totals; k++) {
+            lua_getfield(L, -1, o.element[k]);
+            o.basis[k] = lua_tostring(L, -1); /* a string or NULL; anchored in basis */
+            lua_pop(L, 1);
+        }
+    }
     lua_pop(L, 1);
     int given = 0;
     o.pH = optnum(L, 2, "pH", o.pH, &given);
@@ -113,12 +150,13 @@ static int l_speciate(lua_State *L)
     given = 0;
     o.pe = optnum(L, 2, "pe", 0, &given);
     if (given) {
-        if (o.redox_mode != PX_SPEC_REDOX_NONE) return luaL_error(L, "speciate: give E or pe, not both");
+        if (o.redox_mode != PX_SPEC_REDOX_NONE) return px_lua_user_error(L, "speciate: give E or pe, not both");
         o.redox_mode = PX_SPEC_REDOX_PE;
     }
     lua_getfield(L, 2, "redox_gas");
     if (!lua_isnil(L, -1)) {
-        if (o.redox_mode != PX_SPEC_REDOX_NONE) return luaL_error(L, "speciate: give one redox constraint");
+        if (o.redox_mode != PX_SPEC_REDOX_NONE)
+            return px_lua_user_error(L, "speciate: give one redox constraint (E, pe or redox_gas)");
         o.redox_gas = luaL_checkstring(L, -1);
         o.redox_mode = PX_SPEC_REDOX_GAS;
         o.redox_log_f = optnum(L, 2, "redox_log_f", 0, NULL);
@@ -131,7 +169,7 @@ static int l_speciate(lua_State *L)
     lua_pop(L, 1);
     o.n_suppress = optlist(L, 2, "suppress", o.suppress, PX_SPEC_MAX_ITEMS);
     o.n_exclude = optlist(L, 2, "exclude", o.exclude, PX_SPEC_MAX_ITEMS);
-    lua_getfield(L, 2, "activity");
+    lua_getfield(L, 2, "activity_model");
     o.model = (px_equil_model)luaL_checkoption(L, -1, "davies", models);
     lua_pop(L, 1);
     o.solver.max_iter = (size_t)optnum(L, 2, "max_iter", (double)o.solver.max_iter, NULL);
@@ -143,7 +181,7 @@ static int l_speciate(lua_State *L)
     px_spec *s;
     char msg[512];
     int st = px_spec_build(ws, db, &o, &s, msg, sizeof msg);
-    if (st != PX_OK) return luaL_error(L, "speciate: %s", msg[0] ? msg : px_strerror(st));
+    if (st != PX_OK) return px_lua_user_error(L, "speciate: %s", msg[0] ? msg : px_strerror(st));
     st = px_spec_solve(s, &o.solver, msg, sizeof msg);
     px_equil_stats stats;
     px_equil_work_get_stats(s->work, &stats);

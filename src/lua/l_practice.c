@@ -27,18 +27,18 @@ void px_lua_ligand_states(lua_State *L, int t, const char *where, px_ligand_stat
         return;
     }
     if (ty != LUA_TTABLE)
-        luaL_error(L, "%s: option 'ligand_redox' must be a table { N = \"full\" | \"kept\" | form, ... }", where);
+        px_lua_user_error(L, "%s: option 'ligand_redox' must be a table { N = \"full\" | \"kept\" | form, ... }", where);
     lua_pushnil(L);
     while (lua_next(L, -2)) {
         if (lua_type(L, -2) != LUA_TSTRING)
-            luaL_error(L, "%s: ligand_redox keys are element symbols (N, C, S)", where);
+            px_lua_user_error(L, "%s: ligand_redox keys are element symbols (N, C, S)", where);
         const char *el = lua_tostring(L, -2), *setting;
         if (lua_type(L, -1) == LUA_TBOOLEAN) setting = lua_toboolean(L, -1) ? "full" : "kept";
         else if (lua_type(L, -1) == LUA_TSTRING) setting = lua_tostring(L, -1);
         else setting = NULL;
         char msg[256];
         if (!setting || px_ligand_states_set(ls, el, setting, msg, sizeof msg) != PX_OK)
-            luaL_error(L, "%s: %s", where,
+            px_lua_user_error(L, "%s: %s", where,
                        setting ? msg : "ligand_redox values are true (full redox), false (kept) or a form name");
         lua_pop(L, 1);
     }

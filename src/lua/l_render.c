@@ -1,6 +1,7 @@
 /* l_render.c - figures for Lua: core.figure(w, h, rows, cols) returns a
  * phlox.Figure userdata whose methods add panels' content and save it.
  * Panels are 1-based here, as Lua users expect. */
+#include "core/atomic.h"
 #include "core/status.h"
 #include "lua/bindings.h"
 #include "render/render.h"
@@ -199,17 +200,29 @@ static int f_pages(lua_State *L)
     return 0;
 }
 
-/* fig:save(path [, dpi]) -> true | nil, message */
+/* fig:save(path [, dpi [, replace]]) -> true | nil, message
+ * (replace: also replace a symbolic link or a read-only file) */
 static int f_save(lua_State *L)
 {
     px_figure *f = checkfig(L);
     const char *path = luaL_checkstring(L, 2);
     double dpi = luaL_optnumber(L, 3, 150);
-    luaL_argcheck(L, px_format_from_path(path) >= 0, 2, "file name must end in .png, .svg or .pdf");
-    int st = px_figure_save(f, path, dpi);
+    int fmt = px_format_from_path(path);
+    luaL_argcheck(L, fmt >= 0, 2, "file name must end in .png, .svg or .pdf");
+    unsigned char *data;
+    size_t n;
+    int st = px_figure_render(f, (px_format)fmt, dpi, &data, &n);
+    int err = 0;
+    char why[1024] = "";
+    if (st == PX_OK) {
+        st = px_write_atomic_ex(path, data, n, lua_toboolean(L, 4) ? PX_WRITE_REPLACE : 0, &err, why,
+                                sizeof why);
+        free(data);
+    }
     if (st != PX_OK) {
         luaL_pushfail(L);
-        lua_pushfstring(L, "%s: %s", path, px_strerror(st));
+        if (why[0]) lua_pushstring(L, why);
+        else lua_pushfstring(L, "%s: %s", path, err ? strerror(err) : px_strerror(st));
         return 2;
     }
     lua_pushboolean(L, 1);

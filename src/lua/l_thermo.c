@@ -11,6 +11,7 @@
 #include "water/water.h"
 #include <lauxlib.h>
 #include <math.h>
+#include <limits.h>
 #include <stdio.h>
 #include <stdlib.h>
 #include <string.h>
@@ -43,8 +44,8 @@ static int db_gc(lua_State *L)
 /* core.database([dielectric]) -> Database with the built-in species */
 static int l_database(lua_State *L)
 {
-    static const char *const models[] = {"R8-97", "JN91", NULL};
-    int model = luaL_checkoption(L, 1, "R8-97", models);
+    static const char *const models[] = {"fernandez", "johnson-norton", NULL};
+    int model = luaL_checkoption(L, 1, "fernandez", models);
     ldb *u = lua_newuserdatauv(L, sizeof *u, 0);
     u->db = NULL;
     u->ws = NULL;
@@ -90,13 +91,18 @@ static int *opt_elements(lua_State *L, int idx, size_t *n)
         lua_pop(L, 1);
         return NULL;
     }
-    size_t len = (size_t)luaL_len(L, -1);
+    /* the raw length: a __len metamethod could claim any size (a negative
+     * one wrapped to a huge size_t) */
+    size_t len = lua_rawlen(L, -1);
+    if (len > PX_ELEMENT_MAX)
+        px_lua_user_error(L, "load: option 'elements' lists %d entries (at most %d elements exist)",
+                          (int)(len > INT_MAX ? INT_MAX : len), PX_ELEMENT_MAX);
     int *z = lua_newuserdatauv(L, (len ? len : 1) * sizeof *z, 0);
     for (size_t i = 0; i < len; i++) {
-        lua_rawgeti(L, -2, (lua_Integer)i + 1);
-        const char *sym = lua_tostring(L, -1);
+        const char *sym = lua_rawgeti(L, -2, (lua_Integer)i + 1) == LUA_TSTRING ? lua_tostring(L, -1) : NULL;
         if (!sym || !(z[i] = px_element_z(sym)))
-            luaL_error(L, "elements[%d]: unknown element '%s'", (int)i + 1, sym ? sym : "?");
+            px_lua_user_error(L, "load: option 'elements'[%d]: unknown element '%s'", (int)i + 1,
+                              sym ? sym : luaL_typename(L, -1));
         lua_pop(L, 1);
     }
     lua_remove(L, -2); /* the list; the box stays on the stack */
@@ -115,6 +121,9 @@ static int db_load(lua_State *L)
     lua_settop(L, 4);
     px_data_options o = px_data_options_default();
     int user = 0;
+    static const px_lua_opt load_opts[] = {{"elements", "strings", 0, 0}, {"user", "boolean", 0, 0},
+                                           {NULL, NULL, 0, 0}};
+    if (!lua_isnil(L, 4)) px_lua_opts_check(L, 4, "Database:load", load_opts);
     if (lua_istable(L, 4)) {
         o.elements = opt_elements(L, 4, &o.n_elements);
         lua_getfield(L, 4, "user");
@@ -278,6 +287,12 @@ static int db_remove(lua_State *L)
 static int checkTP(lua_State *L, int iT, int iP, double *T, double *P)
 {
     *T = luaL_checknumber(L, iT);
+    if (!isfinite(*T) || *T <= 0) return px_lua_user_error(L, "temperature must be a finite number of kelvin, got %f", *T);
+    if (!lua_isnoneornil(L, iP)) {
+        double p = luaL_checknumber(L, iP);
+        if (!(p > 0 && p <= PX_WATER_PMAX))
+            return px_lua_user_error(L, "pressure %f bar is out of range (0, %f]", p, PX_WATER_PMAX);
+    }
     if (lua_isnoneornil(L, iP)) {
         int st = px_thermo_default_pressure(*T, P);
         if (st != PX_OK) {
@@ -455,10 +470,10 @@ static int db_list_text(lua_State *L)
 /* core.water(T [, P [, dielectric]]) -> table of the water state */
 static int l_water(lua_State *L)
 {
-    static const char *const models[] = {"R8-97", "JN91", NULL};
+    static const char *const models[] = {"fernandez", "johnson-norton", NULL};
     double T, P;
     if (checkTP(L, 1, 2, &T, &P)) return 2;
-    int model = luaL_checkoption(L, 3, "R8-97", models);
+    int model = luaL_checkoption(L, 3, "fernandez", models);
     px_water_state w;
     int st = px_water_state_eval(T, P, model == 0 ? PX_DIELECTRIC_R8_97 : PX_DIELECTRIC_JN91, &w);
     if (st != PX_OK) {
@@ -545,6 +560,22 @@ static int l_check_files(lua_State *L)
     return 2;
 }
 
+/* core.limits: the ranges the entry points accept (lua/phlox.lua reads them) */
+static void push_limits(lua_State *L)
+{
+    static const struct {
+        const char *name;
+        double value;
+    } limits[] = {{"T_min", PX_WATER_TMIN}, {"T_max", PX_WATER_TMAX}, {"P_max", PX_WATER_PMAX},
+                  {"file_max", (double)PX_DATA_FILE_MAX}};
+    lua_createtable(L, 0, 4);
+    for (size_t i = 0; i < sizeof limits / sizeof limits[0]; i++) {
+        lua_pushnumber(L, limits[i].value);
+        lua_setfield(L, -2, limits[i].name);
+    }
+    lua_setfield(L, -2, "limits");
+}
+
 void px_lua_open_thermo(lua_State *L)
 {
     static const luaL_Reg methods[] = {
@@ -565,6 +596,7 @@ void px_lua_open_thermo(lua_State *L)
     lua_setfield(L, -2, "__close");
     lua_pop(L, 1);
     luaL_setfuncs(L, funcs, 0);
+    push_limits(L);
 }
 
 /* For other binding files (maps, speciation): the db and workspace behind

@@ -19,17 +19,21 @@ static int l_sha256(lua_State *L)
     return 1;
 }
 
-/* core.write_atomic(path, text) -> true | nil, message */
+/* core.write_atomic(path, text [, replace]) -> true | nil, message
+ * (replace: also replace a symbolic link or a read-only file) */
 static int l_write_atomic(lua_State *L)
 {
     const char *path = luaL_checkstring(L, 1);
     size_t n;
     const char *s = luaL_checklstring(L, 2, &n);
     int err = 0;
-    int st = px_write_atomic(path, s, n, &err);
+    char why[1024];
+    int st = px_write_atomic_ex(path, s, n, lua_toboolean(L, 3) ? PX_WRITE_REPLACE : 0, &err, why,
+                                sizeof why);
     if (st != PX_OK) {
         luaL_pushfail(L);
-        lua_pushfstring(L, "%s: %s", path, err ? strerror(err) : px_strerror(st));
+        if (why[0]) lua_pushstring(L, why);
+        else lua_pushfstring(L, "%s: %s", path, err ? strerror(err) : px_strerror(st));
         return 2;
     }
     lua_pushboolean(L, 1);

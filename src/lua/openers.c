@@ -8,6 +8,8 @@ const px_lua_opener px_lua_openers[] = {
     px_lua_open_thermo,
     px_lua_open_diagram,
     px_lua_open_equil,
+    px_lua_open_opts,
+    px_lua_open_fs,
     px_lua_open_practice,
     px_lua_open_proc,
     0};

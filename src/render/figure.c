@@ -20,8 +20,9 @@ static char *dupstr(const char *s)
 
 px_figure *px_figure_new(double width, double height, int rows, int cols)
 {
+    /* rows * cols is not formed before both are known small (int overflow) */
     if (!(width >= 50 && height >= 50 && width <= 20000 && height <= 20000) || rows < 1 ||
-        cols < 1 || rows * cols > PX_FIG_MAX_PANELS)
+        cols < 1 || rows > PX_FIG_MAX_PANELS || cols > PX_FIG_MAX_PANELS / rows)
         return NULL;
     px_figure *f = calloc(1, sizeof *f);
     if (!f) return NULL;

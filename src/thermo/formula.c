@@ -24,6 +24,9 @@
 #include "thermo/thermo_internal.h"
 
 #define MAX_DEPTH 8 /* nesting of parentheses */
+/* atoms of one element per formula unit: a slip beyond this (common practice,
+ * no source: the largest aqueous clusters hold a few hundred) */
+#define MAX_COUNT 1000.0
 
 typedef struct parser {
     const char *text; /* whole input, for messages */
@@ -330,6 +333,10 @@ int px__formula_parse_prefix(const char *text, px_formula *out, size_t *used, ch
     }
     if (len >= PX_NAME_MAX)
         return fail(&ps, PX_ERANGE, "formula longer than %d characters", PX_NAME_MAX - 1);
+    for (int i = 0; i < out->n_elem; i++)
+        if (!(out->elem[i].n <= MAX_COUNT))
+            return fail(&ps, PX_ERANGE, "%g atoms of %s per formula unit (at most %g)", out->elem[i].n,
+                        px_element_symbol(out->elem[i].z), MAX_COUNT);
     memcpy(out->text, canon, len);
     out->text[len] = '\0';
     *used = (size_t)(ps.p - text);

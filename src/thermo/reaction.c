@@ -14,6 +14,13 @@
 #include "thermo/thermo.h"
 #include "thermo/thermo_internal.h"
 
+/* a coefficient larger than this, or smaller than its inverse, is a slip,
+ * not chemistry (common practice, no source: balanced reactions of the trade
+ * need tens at most, and fractions like 1/2 or 1/6); in this range the
+ * formatter's "%.6g" never writes an exponent */
+#define PX_REACTION_COEF_MAX 1e4
+/* longest coefficient text: "%.0f" of DBL_MAX is 309 digits */
+#define PX_REACTION_NUM_MAX 320
 #define BALANCE_TOL 1e-9 /* atoms; coefficients are small rationals */
 
 static int rfail(char *msg, size_t msgsize, int status, const char *fmt, ...)
@@ -127,6 +134,16 @@ int px_reaction_parse(const char *text, px_reaction *out, char *msg, size_t msgs
                 return rfail(msg, msgsize, PX_EPARSE,
                              "coefficient must be positive at position %d in '%s'",
                              (int)(p - text) + 1, text);
+            if (!(coef <= PX_REACTION_COEF_MAX))
+                return rfail(msg, msgsize, PX_ERANGE,
+                             "coefficient %g at position %d in '%s' is larger than %g",
+                             coef, (int)(p - text) + 1, text, PX_REACTION_COEF_MAX);
+            /* and smaller than 1/COEF_MAX is a slip too (found by fuzz_reaction:
+             * "1/8888220 O^+" formatted as 1.12508e-07, which the grammar cannot read) */
+            if (!(coef >= 1.0 / PX_REACTION_COEF_MAX))
+                return rfail(msg, msgsize, PX_ERANGE,
+                             "coefficient %g at position %d in '%s' is smaller than %g",
+                             coef, (int)(p - text) + 1, text, 1.0 / PX_REACTION_COEF_MAX);
             p = skip_ws(p + k);
         }
         px_formula f;
@@ -159,8 +176,36 @@ int px_reaction_parse(const char *text, px_reaction *out, char *msg, size_t msgs
     r.n = m;
     if (r.n == 0)
         return rfail(msg, msgsize, PX_EPARSE, "reaction '%s' cancels to nothing", text);
+    /* the same range after netting: repeated terms add up (found by
+     * fuzz_reaction: ten thousand H2(g) written as many terms) */
+    for (int i = 0; i < r.n; i++)
+        if (!(fabs(r.nu[i]) <= PX_REACTION_COEF_MAX && fabs(r.nu[i]) >= 1.0 / PX_REACTION_COEF_MAX))
+            return rfail(msg, msgsize, PX_ERANGE, "the terms of %s in '%s' add up to %g, outside [%g, %g]",
+                         r.sp[i].text, text, fabs(r.nu[i]), 1.0 / PX_REACTION_COEF_MAX,
+                         PX_REACTION_COEF_MAX);
+    /* a species on both sides nets out: a side may end up empty (found by
+     * fuzz/fuzz_reaction.c: "0.5 H3(g) = H3(g) + 0.5 e-") */
+    int has_left = 0, has_right = 0;
+    for (int i = 0; i < r.n; i++) {
+        has_left |= r.nu[i] < 0;
+        has_right |= r.nu[i] > 0;
+    }
+    if (!has_left || !has_right)
+        return rfail(msg, msgsize, PX_EPARSE, "reaction '%s' has no species left on one side once "
+                                              "species on both sides cancel", text);
     *out = r;
     return PX_OK;
+}
+
+/* appends to BUF (SIZE bytes) at offset LEN, never past the end; returns
+ * the length the text would have (so truncation is len >= size) */
+static size_t append(char *buf, size_t size, size_t len, const char *fmt, ...)
+{
+    va_list ap;
+    va_start(ap, fmt);
+    int n = len < size ? vsnprintf(buf + len, size - len, fmt, ap) : vsnprintf(NULL, 0, fmt, ap);
+    va_end(ap);
+    return len + (n > 0 ? (size_t)n : 0);
 }
 
 static void fmt_num(char *b, size_t n, double x)
@@ -213,9 +258,8 @@ int px_reaction_balance(const px_reaction *r, char *msg, size_t msgsize)
                 char a[32], b[32];
                 fmt_num(a, sizeof a, left);
                 fmt_num(b, sizeof b, right);
-                len += (size_t)snprintf(msg + len, msgsize - len, "%s%s: left %s, right %s",
-                                        len ? "; " : "",
-                                        k < nz ? px_element_symbol(zs[k]) : "charge", a, b);
+                len = append(msg, msgsize, len, "%s%s: left %s, right %s", len ? "; " : "",
+                             k < nz ? px_element_symbol(zs[k]) : "charge", a, b);
             }
         }
     }
@@ -254,18 +298,17 @@ int px_reaction_format(const px_reaction *r, char *buf, size_t bufsize)
     for (int side = 0; side < 2; side++) {
         int first = 1;
         if (side == 1)
-            len += (size_t)snprintf(buf + len, len < bufsize ? bufsize - len : 0, " =");
+            len = append(buf, bufsize, len, " =");
         for (int i = 0; i < r->n; i++) {
             double nu = side == 0 ? -r->nu[i] : r->nu[i];
             if (nu <= 0)
                 continue;
-            char c[32] = "";
-            if (fabs(nu - 1) > 1e-12) {
-                fmt_num(c, sizeof c, nu);
-                strcat(c, " ");
-            }
-            len += (size_t)snprintf(buf + len, len < bufsize ? bufsize - len : 0, "%s%s%s",
-                                    first ? (side ? " " : "") : " + ", c, r->sp[i].text);
+            /* "%.0f" of a coefficient of 1e300 is 301 digits: format it in
+             * place, never through a small fixed buffer */
+            char c[PX_REACTION_NUM_MAX] = "";
+            if (fabs(nu - 1) > 1e-12) fmt_num(c, sizeof c, nu);
+            len = append(buf, bufsize, len, "%s%s%s%s", first ? (side ? " " : "") : " + ", c,
+                         c[0] ? " " : "", r->sp[i].text);
             first = 0;
         }
     }

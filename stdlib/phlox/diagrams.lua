@@ -16,13 +16,41 @@
 -- phlox.caution).
 local phlox = require "phlox"
 local sweep = require "phlox.sweep"
+local core = require "phlox.core"
 local provenance = require "phlox.provenance"
 
 local diagrams = {}
 
 local T0C = 273.15 -- K at 0 C
 
-local function fail(where, msg) error(where .. ": " .. msg, 3) end
+local function fail(where, msg) core.user_error(where .. ": " .. msg) end
+
+-- Option specs (the one reader, src/lua/l_opts.c): one line per key.  The
+-- options passed through to phlox.speciate or phlox.map keep that
+-- function's types and ranges.
+local function spec(fname, from, keys, own)
+  local t = {}
+  for _, k in ipairs(keys) do t[k] = assert(phlox.option_specs[from][k], k) end
+  for k, v in pairs(own) do t[k] = v end
+  phlox.option_specs[fname] = t
+  return t
+end
+local function map_keys(but)
+  local keys = {}
+  for k in pairs(phlox.option_specs["phlox.map"]) do if not but[k] then keys[#keys + 1] = k end end
+  table.sort(keys)
+  return keys
+end
+local CURVE_OWN = {
+  library = "table", element = "string",
+  range = "numbers",                      -- {from, to} of x
+  n = { "integer", 2, 100001 },           -- points along x
+  total = { "number", 1e-300, 20 },       -- mol/kg of the element
+  totals = { "map", 0, 20 },              -- other elements, mol/kg
+  solids = "boolean",                     -- let solids precipitate
+  accept_held_logk = "boolean",           -- use log K held at 25 C away from 25 C (stamped)
+  require_temperature_data = "boolean",   -- gone: phlox.temperature_notes says to use accept_held_logk
+}
 
 local function library_of(opts, where)
   if type(opts) ~= "table" then fail(where, "options table expected") end
@@ -44,7 +72,7 @@ end
 -- The options of phlox.speciate that pass through unchanged.
 local PASS = { "T", "T_C", "P", "E", "pe", "redox_gas", "redox_log_f", "fugacities", "basis",
                "suppress", "exclude", "max_iter", "ligand_redox", "allow_inhibited",
-               "accept_held_logk" }
+               "accept_held_logk", "activity_model" }
 
 -- A curve's stamp: its own held-constant and estimate lines, then the
 -- caveats of its solves (phlox.merge_notes).
@@ -61,8 +89,8 @@ local function base_speciate(opts)
   -- Textbook distribution and solubility diagrams are drawn at infinite
   -- dilution; a fixed pH imposes no charge balance, so an ionic strength
   -- would only count the ions given (add counter-ions to `totals` and set
-  -- activity = "davies" or "bdot" when it matters).
-  s.activity = opts.activity or "ideal"
+  -- activity_model = "davies" or "bdot" when it matters).
+  s.activity_model = opts.activity_model or "ideal"
   return s
 end
 
@@ -84,13 +112,6 @@ end
 local function T_C_of(opts)
   if opts.T then return opts.T - T0C end
   return opts.T_C or 25
-end
-
--- Species of `element` whose record is a log K without temperature
--- dependence (no dH, logK_T or estimate): their log K stays at its 25 C
--- value at T (read from the records' temperature basis).
-function diagrams.constant_logk(lib, element, T_C)
-  return phlox.constant_logk(lib, { element }, T_C + T0C)
 end
 
 -- Stamp lines naming, for temperatures other than 25 C, the species whose
@@ -117,15 +138,25 @@ end
 --     totals = { Na = 0.1 },                  -- other elements, mol/kg
 --     solids = false,      -- true lets solids precipitate (their share counts)
 --     min_share = 0.01,    -- species never reaching this share are left out
---     activity = "ideal",  -- or "davies", "bdot", "sit"
+--     activity_model = "ideal",  -- or "davies", "bdot", "sit"
 --     E = ..., pe = ..., fixed = {...}, exclude = {...}, ... (as phlox.speciate) }
 -- Returns { x = {...}, series = { { species, label, x, y }, ... }, axes =
 -- { x = {...}, y = {...} }, omitted = { {species, max_share} }, failures =
 -- { {x, message} }, conditions, stats = { solves, seconds } }.  y is false
 -- at a point where the solver did not converge (plot.curves breaks the line
 -- there).
+local FRACTIONS_OPTS = spec("diagrams.fractions", "phlox.speciate", PASS, {
+  x = "pH|log_total|log_a",               -- what runs along x
+  pH = { "number", -3, 17 },              -- fixed pH when x is not pH
+  ligand = "string",                      -- ligand element (x = "log_total")
+  ligand_species = "string",              -- ligand basis species (x = "log_a")
+  fixed = { "map", -300, 1 },             -- log10 activity of basis species
+  min_share = { "number", 0, 1 },         -- species below this share are left out
+})
+for k, v in pairs(CURVE_OWN) do FRACTIONS_OPTS[k] = v end
 function diagrams.fractions(opts)
   local where = "diagrams.fractions"
+  core.options(where, FRACTIONS_OPTS, opts)
   local lib = library_of(opts, where)
   local el = opts.element
   local xkind = opts.x or "pH"
@@ -207,7 +238,7 @@ function diagrams.fractions(opts)
   end
 
   local conditions = { T_C = T_C_of(opts), [el .. " total (mol/kg)"] = total, pH = xkind ~= "pH" and opts.pH or nil,
-                       activity_model = base.activity }
+                       activity_model = base.activity_model }
   local xname = xkind == "pH" and "pH"
     or xkind == "log_total" and ("log total {" .. opts.ligand .. "} / (mol/kg)")
     or ("log a({" .. opts.ligand_species .. "})")
@@ -236,7 +267,7 @@ local RETRY_FACTOR = 0.1
 --   diagrams.solubility { library = lib, element = "Zn", T_C = {25, 150, 300},
 --     range = {4, 14}, n = 121,
 --     total = 1,           -- mol/kg put in: large, so a solid is stable
---     totals = {...}, E = ..., activity = "ideal", suppress = {...}, ... }
+--     totals = {...}, E = ..., activity_model = "ideal", suppress = {...}, ... }
 -- Returns { x, series = { { label = "25 °C", T_C, x, y, solids }, ... },
 -- axes (y logarithmic), failures, conditions, stats }.  y[i] is the
 -- dissolved total (mol/kg of the element); it is false where no solid is
@@ -245,8 +276,15 @@ local RETRY_FACTOR = 0.1
 -- retried with a tenth, a hundredth and a thousandth of `total` (the
 -- dissolved total over a solid does not depend on the solid's amount);
 -- stats.retries counts them.
+local SOLUBILITY_OPTS = spec("diagrams.solubility", "phlox.speciate", PASS, {
+  T_C = "number/numbers",                 -- one temperature or a list, degrees C
+  fixed = { "map", -300, 1 },             -- log10 activity of basis species
+})
+for k, v in pairs(CURVE_OWN) do SOLUBILITY_OPTS[k] = v end
+SOLUBILITY_OPTS.solids = nil              -- solids are the point here
 function diagrams.solubility(opts)
   local where = "diagrams.solubility"
+  core.options(where, SOLUBILITY_OPTS, opts)
   local lib = library_of(opts, where)
   local el = opts.element
   if opts.T then fail(where, "give temperatures as T_C = {25, 150, ...}") end
@@ -309,7 +347,7 @@ function diagrams.solubility(opts)
     element = el, x = xs, series = series, failures = failures,
     axes = { x = { name = "pH", min = xs[1], max = xs[#xs] },
              y = { name = "dissolved {" .. el .. "}", unit = "mol/kg", log = true } },
-    conditions = { [el .. " put in (mol/kg)"] = total, activity_model = base.activity },
+    conditions = { [el .. " put in (mol/kg)"] = total, activity_model = base.activity_model },
     provenance = curve_provenance(lib, opts, nil, { [el .. " put in (mol/kg)"] = total, T_C = temps }),
     stamp = curve_stamp(notes, held), stamp_short = held and held.short or nil,
     stats = { points = #xs * #temps, retries = retried, seconds = os.clock() - t0 },
@@ -370,8 +408,12 @@ end
 -- species that keep their 25 °C log K (records without dH or logK_T) in
 -- map.constant_logk; every map of the series names them in a stamp line
 -- (plot.grid and plot.overlay stamp the first map's lines).
+local SERIES_OPTS = spec("diagrams.series", "phlox.map", map_keys { T_C = true, T = true }, {
+  T_C = "numbers",                        -- temperatures, degrees C
+})
 function diagrams.series(opts)
   local where = "diagrams.series"
+  core.options(where, SERIES_OPTS, opts)
   local lib = library_of(opts, where)
   if opts.T then fail(where, "give temperatures as T_C = {25, 150, ...}") end
   local temps = opts.T_C
@@ -414,7 +456,9 @@ local LOGA_RANGE = { -4, 1 }
 --- Predominance map on E (y) against log a(ligand) (x) at a fixed pH.
 --   diagrams.ligand_E { library = lib, element = "Zn", ligand = "Cl", pH = 5,
 --                       loga_range = {-4, 1}, E_range = {-1.5, 1.5}, ... }
+local LIGAND_E_OPTS = spec("diagrams.ligand_E", "phlox.map", map_keys { axes = true }, {})
 function diagrams.ligand_E(opts)
+  core.options("diagrams.ligand_E", LIGAND_E_OPTS, opts)
   library_of(opts, "diagrams.ligand_E")
   if type(opts.ligand) ~= "string" then fail("diagrams.ligand_E", "ligand (an element symbol) expected") end
   if type(opts.pH) ~= "number" then fail("diagrams.ligand_E", "a fixed pH is needed") end
@@ -429,7 +473,9 @@ end
 
 --- Predominance map on log a(ligand) (y) against pH (x) at a fixed E (V vs SHE).
 --   diagrams.pH_ligand { library = lib, element = "Zn", ligand = "Cl", E = -0.5, ... }
+local PH_LIGAND_OPTS = spec("diagrams.pH_ligand", "phlox.map", map_keys { axes = true }, {})
 function diagrams.pH_ligand(opts)
+  core.options("diagrams.pH_ligand", PH_LIGAND_OPTS, opts)
   library_of(opts, "diagrams.pH_ligand")
   if type(opts.ligand) ~= "string" then fail("diagrams.pH_ligand", "ligand (an element symbol) expected") end
   if type(opts.E) ~= "number" then fail("diagrams.pH_ligand", "a fixed E (V vs SHE) is needed") end
@@ -478,9 +524,19 @@ end
 -- Returns { species, kind, E_SHE, E_measured, reference = {name, offset,
 -- source}, field, E_range = {lo, hi} (the field's extent in E at that
 -- x), margin = {below, above} in V } or nil, message outside the window.
+local WHERE_OPTS = spec("phlox.where", "phlox.map", {}, {
+  map = "table",                          -- phlox.map{...} with E on y
+  pH = { "number", -1e3, 1e3 },           -- x on a pH-E map
+  loga = { "number", -1e3, 1e3 },         -- x on a log a-E map
+  x = { "number", -1e3, 1e3 },            -- the same, by its axis name
+  E = { "number", -5, 5 },                -- the measured potential, V
+  reference = "string",                   -- electrode, short or full name (SHE)
+  reference_at_25C = "boolean",           -- the electrode is kept at room temperature
+})
 function diagrams.where(opts)
   local where = "phlox.where"
-  if type(opts) ~= "table" or type(opts.map) ~= "table" then fail(where, "map = phlox.map{...} expected") end
+  core.options(where, WHERE_OPTS, opts)
+  if type(opts.map) ~= "table" then fail(where, "map = phlox.map{...} expected") end
   local m = opts.map
   if not (m.y and m.y.name == "E") then fail(where, "the map needs E on its y axis") end
   local x

@@ -36,7 +36,7 @@ local function is_array(t)
   return count == n, n
 end
 
-local function encode(v, indent, depth, path, out)
+local function encode(v, indent, depth, path, out, open)
   local tv = type(v)
   if v == nil or v == json.null then
     out[#out + 1] = "null"
@@ -47,6 +47,9 @@ local function encode(v, indent, depth, path, out)
   elseif tv == "string" then
     out[#out + 1] = encode_string(v)
   elseif tv == "table" then
+    -- a table that contains itself would never finish: an error naming both places
+    if open[v] then error(("json: cycle: %s contains %s again"):format(path, open[v]), 0) end
+    open[v] = path
     local arr, n = is_array(v)
     local nl = indent and ("\n" .. string.rep(indent, depth + 1)) or ""
     local close = indent and ("\n" .. string.rep(indent, depth)) or ""
@@ -55,7 +58,7 @@ local function encode(v, indent, depth, path, out)
       for i = 1, n do
         if i > 1 then out[#out + 1] = "," end
         out[#out + 1] = nl
-        encode(v[i], indent, depth + 1, path .. "[" .. i .. "]", out)
+        encode(v[i], indent, depth + 1, path .. "[" .. i .. "]", out, open)
       end
       out[#out + 1] = (n > 0 and close or "") .. "]"
     else
@@ -71,10 +74,11 @@ local function encode(v, indent, depth, path, out)
       for i, k in ipairs(keys) do
         if i > 1 then out[#out + 1] = "," end
         out[#out + 1] = nl .. encode_string(k) .. (indent and ": " or ":")
-        encode(v[k], indent, depth + 1, path .. "." .. k, out)
+        encode(v[k], indent, depth + 1, path .. "." .. k, out, open)
       end
       out[#out + 1] = (#keys > 0 and close or "") .. "}"
     end
+    open[v] = nil
   else
     error(("json: cannot encode a %s at %s"):format(tv, path), 0)
   end
@@ -89,7 +93,7 @@ function json.object(t) return setmetatable(t or {}, json.object_mt) end
 --- Encode a value; opts.indent (string) pretty-prints.
 function json.encode(v, opts)
   local out = {}
-  encode(v, opts and opts.indent, 0, "$", out)
+  encode(v, opts and opts.indent, 0, "$", out, {})
   return table.concat(out)
 end
 

@@ -627,7 +627,7 @@ end
 local function finish(fig, opts, d)
   if opts.pages then fig:pages(true) end
   if opts.file then
-    local ok, err = fig:save(opts.file, opts.dpi or d.dpi)
+    local ok, err = fig:save(opts.file, opts.dpi or d.dpi, opts.replace)
     if not ok then error("plot: " .. err, 3) end
   end
   return fig
@@ -686,6 +686,57 @@ local function add_reference(extra, ref)
   if ref.text then extra[#extra + 1] = ref.text end
 end
 
+-- Options of the drawing functions (the one reader, src/lua/l_opts.c):
+-- one line per key; plot.map's keys are shared by domains, grid and overlay.
+local FIG_OPTS = {
+  file = "string",                        -- .png, .svg or .pdf
+  title = "string",
+  width = { "number", 50, 20000 },        -- points (figure.c limits)
+  height = { "number", 50, 20000 },
+  dpi = { "number", 10, 2400 },           -- PNG only
+  conditions = "table",                   -- stamped under the figure
+  preset = "string",                      -- one of plot.presets (column, double, slide, page)
+  stamp = "boolean/full|short/strings",   -- what the figure shows ("full", "short", false) or extra lines
+  notes = "table",                        -- extra stamp lines (strings, or records of phlox notes)
+  from = "table",                         -- the result(s) drawn: their own data files and caveats are stamped
+  no_script = "boolean",                  -- leave the script's name off the stamp
+  legend = "boolean",
+  replace = "boolean",                    -- also replace a symbolic link or a read-only file
+}
+local MAP_OPTS = {
+  labels = "boolean",                     -- field labels
+  water = "boolean",                      -- water stability lines
+  domains = "boolean/hatch|tint",         -- corrosion domains overlay
+  reference = "table/string",             -- E axis against this electrode: a name (as phlox.to_she) or {name, offset}
+  reference_at_25C = "boolean",           -- the electrode is kept at room temperature
+}
+local MULTI_OPTS = {
+  cols = { "integer", 1, 64 },
+  pages = "boolean",                      -- one page per map (PDF)
+  shared = "boolean",                     -- one window for all maps
+  shared_fills = "boolean",               -- one colour per species across maps
+  labels_of = "integer/boolean",          -- overlay: whose labels are shown
+  legend_label = "function",              -- function(map, i) -> legend text
+  panel_title = "function",               -- function(map, i) -> panel title
+  x = "table", y = "table",               -- axis overrides
+}
+local function opts_spec(fname, ...)
+  local t = {}
+  for _, part in ipairs { FIG_OPTS, ... } do for k, v in pairs(part) do t[k] = v end end
+  plot.option_specs = plot.option_specs or {}
+  plot.option_specs[fname] = t
+  return t
+end
+local PLOT_MAP_OPTS = opts_spec("plot.map", MAP_OPTS)
+local PLOT_DOMAINS_OPTS = opts_spec("plot.domains", MAP_OPTS)
+local PLOT_GRID_OPTS = opts_spec("plot.grid", MAP_OPTS, MULTI_OPTS)
+local PLOT_OVERLAY_OPTS = opts_spec("plot.overlay", MAP_OPTS, MULTI_OPTS)
+local PLOT_CURVES_OPTS = opts_spec("plot.curves", { x = "table", y = "table" })
+local function read_opts(fname, spec, opts)
+  if opts == nil then return {} end
+  return core.options(fname, spec, opts)
+end
+
 --- A predominance map as a figure.
 -- opts: file (".png", ".svg", ".pdf"), preset ("column", "double",
 -- "slide", "page"; see plot.presets), width, height (points), dpi,
@@ -695,7 +746,7 @@ end
 -- the full provenance), notes (extra stamp lines).  Returns the
 -- phlox.Figure and the fill table (fills, tiers).
 function plot.map(map, opts)
-  opts = opts or {}
+  opts = read_opts("plot.map", PLOT_MAP_OPTS, opts)
   plot.check_map(map, "plot.map")
   if opts.domains ~= nil and opts.domains ~= false and opts.domains ~= true and opts.domains ~= "hatch" and opts.domains ~= "tint" then
     error("plot.map: opts.domains must be \"hatch\" or \"tint\"", 2)
@@ -723,7 +774,7 @@ end
 -- pH and a legend.  Uses map.domains, or derives them from the field kinds
 -- (see plot.domains_of).  opts as plot.map.
 function plot.domains(map, opts)
-  opts = opts or {}
+  opts = read_opts("plot.domains", PLOT_DOMAINS_OPTS, opts)
   plot.check_map(map, "plot.domains")
   local ref = reference(opts, map)
   local look = plot.look(opts)
@@ -818,7 +869,7 @@ end
 -- of extra lines), notes (extra stamp lines), from (the results drawn:
 -- their own data files are stamped).
 function plot.curves(series, opts)
-  opts = opts or {}
+  opts = read_opts("plot.curves", PLOT_CURVES_OPTS, opts)
   if type(series) ~= "table" or #series == 0 then error("plot.curves: series must be a non-empty list", 2) end
   local ox, oy = opts.x or {}, opts.y or {}
   for i, s in ipairs(series) do
@@ -915,7 +966,7 @@ end
 plot.grid_min_panel = 200   -- points (common practice for a readable map panel, no source)
 local GRID_FOOT = 30          -- points added under a preset's grid for the stamp
 function plot.grid(maps, opts)
-  opts = opts or {}
+  opts = read_opts("plot.grid", PLOT_GRID_OPTS, opts)
   if type(maps) ~= "table" or #maps == 0 then error("plot.grid: maps must be a non-empty list", 2) end
   for i, m in ipairs(maps) do plot.check_map(m, ("plot.grid: maps[%d]"):format(i)) end
   local ref = reference(opts, maps[1])
@@ -979,7 +1030,7 @@ end
 -- the temperature), water = false to leave out water lines, title, and the
 -- options of plot.map.
 function plot.overlay(maps, opts)
-  opts = opts or {}
+  opts = read_opts("plot.overlay", PLOT_OVERLAY_OPTS, opts)
   if type(maps) ~= "table" or #maps == 0 then error("plot.overlay: maps must be a non-empty list", 2) end
   for i, m in ipairs(maps) do plot.check_map(m, ("plot.overlay: maps[%d]"):format(i)) end
   local ref = reference(opts, maps[1])

@@ -47,13 +47,21 @@ local function paragraphs(v, what)
   return v
 end
 
+-- the options (the one reader, src/lua/l_opts.c): one line per key
+local REPORT_OPTS = {
+  file = "string",                        -- the HTML page (required, ".html")
+  pdf = "string",                         -- the same content as a PDF
+  title = "string",
+  summary = "string/strings",             -- a paragraph or a list of them
+  sections = "table",                     -- { heading, text, figures, tables }, ...
+  notes = "table",                        -- data notes
+  conditions = "table",                   -- listed with the provenance
+  replace = "boolean",                    -- also replace a symbolic link or a read-only file
+}
+report.option_specs = { ["phlox.report"] = REPORT_OPTS }
+
 local function check(opts)
-  if type(opts) ~= "table" then fail("options table expected") end
-  local known = { file = true, pdf = true, title = true, summary = true, sections = true, notes = true,
-                  conditions = true }
-  for k in pairs(opts) do
-    if not known[k] then fail(("unknown option '%s' (file, pdf, title, summary, sections, notes, conditions)"):format(tostring(k))) end
-  end
+  core.options("phlox.report", REPORT_OPTS, opts)
   if type(opts.file) ~= "string" or not opts.file:match("%.html?$") then fail("file = \"name.html\" expected") end
   if opts.pdf ~= nil and (type(opts.pdf) ~= "string" or not opts.pdf:match("%.pdf$")) then
     fail("pdf must be a file name ending in .pdf")
@@ -206,7 +214,7 @@ local function write_html(opts, sections, caution)
     w("<tr><th>" .. esc(r[1]) .. "</th><td><code>" .. esc(r[2]) .. "</code></td></tr>\n")
   end
   w("</tbody>\n</table>\n</section>\n</main>\n</body>\n</html>\n")
-  local ok, err = core.write_atomic(opts.file, table.concat(h))
+  local ok, err = core.write_atomic(opts.file, table.concat(h), opts.replace)
   if not ok then fail(err) end
   return nfig, ntab
 end

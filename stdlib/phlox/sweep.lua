@@ -513,11 +513,19 @@ local function execute(points, fn, opts, where)
   return results, failures
 end
 
+-- the options of sweep.run and sweep.parallel (the one reader, src/lua/l_opts.c)
+local RUN_OPTS = {
+  quiet = "boolean",                      -- no progress display
+  label = "string",                       -- progress label
+  workers = { "integer", 1, 256 },        -- worker processes (1: none)
+  journal = "string",                     -- a file: finished points are kept, a rerun skips them
+}
+sweep.option_specs = { ["sweep.run"] = RUN_OPTS, ["sweep.parallel"] = RUN_OPTS }
+
 local function checked(points, fn, opts, where)
-  if type(points) ~= "table" then error(where .. ": points must be a list", 3) end
-  if type(fn) ~= "function" then error(where .. ": fn must be a function", 3) end
-  if opts ~= nil and type(opts) ~= "table" then error(where .. ": opts must be a table", 3) end
-  return opts or {}
+  core.check_value(where, "points", points, "table")
+  core.check_value(where, "fn", fn, "function")
+  return core.options(where, RUN_OPTS, opts or {})
 end
 
 --- Run fn(point) over the points; returns the results in point order and

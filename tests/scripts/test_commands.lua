@@ -73,6 +73,27 @@ check(code == 1 and out:find("bad_sign.lua:%d+:"), "check bad fixture: " .. out 
 -- list: species with model and source
 code, out = run("list Zn")
 check(code == 0 and out:find("Zn^2+", 1, true) and out:find("from memory of", 1, true), "list Zn: " .. out)
+-- list without an element: the elements and where each file comes from
+code, out, err = run("list")
+check(code == 0 and out:find("\nZn  stdlib/elements/Zn.lua\n", 1, true) and err:find("elements"), "list: " .. out)
+-- COMMAND --help: usage on standard output, exit 0, for every command
+for _, cmd in ipairs { "reaction", "check", "list" } do
+  code, out = run(cmd .. " --help")
+  check(code == 0 and out:find("usage: phlox " .. cmd, 1, true), cmd .. " --help: " .. out)
+end
+-- phlox.help names the options of a function, with types and ranges
+code, out = run([[-e "require('phlox').help(require('phlox').map)"]])
+check(code == 0 and out:find("ionic_strength%s+number %[0, 0.5%]"), "phlox.help(phlox.map): " .. out)
+code, out = run([[-e "require('phlox').help('plot.map')"]])
+check(code == 0 and out:find("dpi%s+number"), "phlox.help('plot.map'): " .. out)
+code, out, err = run([[-e "require('phlox').help('mapp')"]])
+check(code == 1 and err:find("no function 'mapp'", 1, true), "phlox.help of an unknown name: " .. err)
+-- the prompt shows records as fields, not table: 0x...
+local pretty = require("phlox.cli").pretty
+local shown = pretty({ b = 2, a = { 1, "x" } })
+check(shown == '{\n  a = {\n    [1] = 1,\n    [2] = "x",\n  },\n  b = 2,\n}', "pretty: " .. shown)
+check(not pretty(require("phlox").water {}):find("table: 0x", 1, true), "pretty water record")
+
 code, out, err = run("list Xx")
 check(code == 1 and err:find("Xx"), "list unknown element: " .. err)
 print("test_commands: all checks passed")

@@ -128,7 +128,7 @@ check(y4 == false and solid4 == false, "pH 4: all the zinc dissolves, the point 
 check(logKs - 2 * 4.0 > 0, "hand calculation agrees: log *Ks - 8 > 0")
 -- the dissolved total does not depend on the amount of solid (retries use less)
 for _, pH in ipairs { 8.5, 9.0 } do
-  local r = assert(phlox.speciate { library = lib, totals = { Zn = 0.01 }, pH = pH, activity = "ideal" })
+  local r = assert(phlox.speciate { library = lib, totals = { Zn = 0.01 }, pH = pH, activity_model = "ideal" })
   close(at(s1, pH), r.elements.Zn.dissolved, 1e-9 * r.elements.Zn.dissolved,
         ("dissolved Zn at pH %.1f independent of the solid's amount"):format(pH))
 end

@@ -196,6 +196,6 @@ end
 
 -- The folders are removed whether the checks pass or not.
 local ok, err = xpcall(checks, debug.traceback)
-os.execute("rm -rf " .. quote(dir1) .. " " .. quote(dir2))
+require("phlox.core").remove_tree(dir1); require("phlox.core").remove_tree(dir2)
 if not ok then error(err, 0) end
 print("test_examples: all checks passed")

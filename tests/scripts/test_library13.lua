@@ -93,7 +93,7 @@ local cs = phlox.library { "Ca", "Mg", "S", "C" }
 -- Chem. 70, 4015); B-dot activity coefficients and the CaSO4(aq) pair;
 -- tolerance 4 %: the activity model at I = 0.04 is good to a few per cent
 -- (common practice, no source).  Before issue 13: 18.1 mmol/kg.
-local g = assert(phlox.speciate { library = cs, totals = { Ca = 0.05, S = 0.05 }, pH = 7, activity = "bdot" })
+local g = assert(phlox.speciate { library = cs, totals = { Ca = 0.05, S = 0.05 }, pH = 7, activity_model = "bdot" })
 local sol = 0.05
 for _, sp in ipairs(g.species) do if sp.phase == "solid" then sol = sol - (sp.amount or 0) end end
 close(sol * 1000, 15.25, 0.04 * 15.25, "gypsum solubility at 25 C, mmol/kg")

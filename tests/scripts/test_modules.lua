@@ -1,6 +1,6 @@
 -- test_modules.lua: module resolution.  `require "phlox"` works from any
 -- folder; every embedded Lua file compiles; a user folder given by --path or
--- PHLOX_PATH overrides an embedded module; LUA_PATH is ignored; C modules
+-- PHLOX_PATH adds modules but never replaces a phlox one; LUA_PATH is ignored; C modules
 -- cannot be loaded.
 local bin = assert(os.getenv("PHLOX_BIN"), "PHLOX_BIN not set")
 local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
@@ -31,19 +31,26 @@ local function run(cmd)
   return code, out
 end
 
--- a user folder overrides an embedded module (phlox.cli is embedded)
+-- a user folder can never replace or add a phlox module: a shared folder
+-- holding phlox/cli.lua must not run with full rights on every command
 local dir = os.tmpname()
 os.remove(dir)
-assert(os.execute("mkdir -p " .. dir .. "/phlox " .. dir .. "/elements"))
+assert(core.make_dir(dir .. "/phlox", true) and core.make_dir(dir .. "/elements", true))
 local f = assert(io.open(dir .. "/phlox/cli.lua", "w"))
-f:write("return { marker = 'user copy' }\n"); f:close()
-local code, out = run(string.format("%q --path %q -e \"io.write(require('phlox.cli').marker)\"", bin, dir))
-check(code == 0 and out == "user copy", "--path override: " .. out)
-code, out = run(string.format("PHLOX_PATH=%q %q -e \"io.write(require('phlox.cli').marker)\"", dir, bin))
-check(code == 0 and out == "user copy", "PHLOX_PATH override: " .. out)
--- without the folder, the embedded module is used
-code, out = run(string.format("%q -e \"io.write(tostring(require('phlox.cli').marker))\"", bin))
-check(code == 0 and out == "nil", "embedded module without override: " .. out)
+f:write("io.write('USER CODE RAN'); return { marker = 'user copy' }\n"); f:close()
+f = assert(io.open(dir .. "/phlox/extra.lua", "w")); f:write("return 1\n"); f:close()
+f = assert(io.open(dir .. "/mymod.lua", "w")); f:write("return { mine = true }\n"); f:close()
+local code, out = run(string.format("%q --path %q -e \"io.write(tostring(require('phlox.cli').marker))\"", bin, dir))
+check(code == 0 and out == "nil", "--path must not replace phlox.cli: " .. out)
+code, out = run(string.format("PHLOX_PATH=%q %q -e \"io.write(tostring(require('phlox.cli').marker))\"", dir, bin))
+check(code == 0 and out == "nil", "PHLOX_PATH must not replace phlox.cli: " .. out)
+code, out = run(string.format("%q --path %q list Zn", bin, dir))
+check(code == 0 and not out:find("USER CODE RAN"), "a command must not run the user's phlox/cli.lua: " .. out)
+code, out = run(string.format("%q --path %q -e \"require('phlox.extra')\"", bin, dir))
+check(code == 1 and out:find("reserved for the built-in library", 1, true), "phlox.* names are reserved: " .. out)
+-- user modules of other names are found
+code, out = run(string.format("%q --path %q -e \"io.write(tostring(require('mymod').mine))\"", bin, dir))
+check(code == 0 and out == "true", "user module through --path: " .. out)
 
 -- LUA_PATH is ignored: a module only reachable through it is not found
 f = assert(io.open(dir .. "/onlyvialuapath.lua", "w")); f:write("return 1\n"); f:close()
@@ -55,5 +62,10 @@ f = assert(io.open(dir .. "/elements/Xx.lua", "w")); f:write("return { element =
 code, out = run(string.format("%q --path %q -e \"local t, w = require('phlox').read_library_file('elements/Xx.lua'); io.write(w)\"", bin, dir))
 check(code == 0 and out == dir .. "/elements/Xx.lua", "user element file found: " .. out)
 
-os.execute("rm -rf " .. dir)
+for _, sub in ipairs { "phlox", "elements" } do
+  for _, n in ipairs(core.list_dir(dir .. "/" .. sub) or {}) do core.remove(dir .. "/" .. sub .. "/" .. n) end
+  core.remove(dir .. "/" .. sub)
+end
+for _, n in ipairs(core.list_dir(dir) or {}) do core.remove(dir .. "/" .. n) end
+core.remove(dir)
 print("test_modules: all checks passed")

@@ -233,7 +233,7 @@ check(plot.map_title(lm) == "{M}–{S}–{H2O} at 90 °C, a({HS^-}) = 10⁻³, E
 check(plot.number(2.5e-3) == "2.5 × 10⁻³" and plot.number(-0.25) == "−0.25" and plot.number(1e-6) == "10⁻⁶",
       "typeset numbers")
 ok, err = pcall(plot.map, map, { stamp = "tiny" })
-check(not ok and err:find("opts.stamp must be", 1, true), "bad stamp mode: " .. tostring(err))
+check(not ok and err:find("option 'stamp' must be", 1, true), "bad stamp mode: " .. tostring(err))
 ok, err = pcall(plot.map, map, { preset = "poster" })
 check(not ok and err:find("column, double, page, slide", 1, true), "unknown preset names the presets: " .. tostring(err))
 -- presets: size and scaled text (the stamp's first line at the preset's size)
@@ -248,5 +248,5 @@ for name, p in pairs(plot.presets) do
 end
 check(not pcall(plot.map, map, { file = dir .. "/m.jpg" }), "unknown extension")
 
-os.execute("rm -rf " .. dir)
+require("phlox.core").remove_tree(dir)
 print("test_plot: ok")

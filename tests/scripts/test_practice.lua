@@ -141,7 +141,7 @@ local SIT_FORM = 0.01
 local nsit = 0
 for _, row in ipairs(rows("mean_activity_25C.csv")) do
   local c, mol, meas = SALT[row.salt], tonumber(row.molality), tonumber(row.gamma_pm)
-  local res = assert(phlox.speciate { library = sitlib, activity = "sit", solids = false, pH = 7,
+  local res = assert(phlox.speciate { library = sitlib, activity_model = "sit", solids = false, pH = 7,
     totals = { [c[1]] = c[5] * mol, [c[2]] = c[6] * mol } })
   local la = {}
   for _, s in ipairs(res.species) do la[s.formula] = s.log_activity end
@@ -163,7 +163,7 @@ end
 check(nsit >= 14, "SIT rows checked")
 -- without the eps table NaCl at 1 mol/kg would give 0.626 (the Debye-Hueckel
 -- term alone); with it the solver must land near the measured 0.657
-local r1 = assert(phlox.speciate { library = sitlib, activity = "sit", solids = false, pH = 7, totals = { Na = 1, Cl = 1 } })
+local r1 = assert(phlox.speciate { library = sitlib, activity_model = "sit", solids = false, pH = 7, totals = { Na = 1, Cl = 1 } })
 check(r1.sit_pairs > 0, "SIT pairs were set in the solver")
 
 -- 5. Activity-model range ------------------------------------------------------
@@ -172,7 +172,7 @@ local r5 = assert(phlox.speciate { library = nacl, totals = { Na = 5, Cl = 5 }, 
 check(r5.activity.model == "davies" and not r5.activity.in_range and math.abs(r5.activity.ionic_strength - 5) < 0.1,
   "Davies at 5 mol/kg is out of range")
 check(has_line(r5.stamp, "WARNING: davies"), "result stamp warns")
-local r6 = assert(phlox.speciate { library = nacl, totals = { Na = 0.1, Cl = 0.1 }, activity = "bdot" })
+local r6 = assert(phlox.speciate { library = nacl, totals = { Na = 0.1, Cl = 0.1 }, activity_model = "bdot" })
 check(r6.activity.in_range and has_line(r6.stamp, "activity model bdot"), "B-dot at 0.1 mol/kg is in range and stamped")
 -- once on stderr
 local bin = os.getenv("PHLOX_BIN") or "phlox"

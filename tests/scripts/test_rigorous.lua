@@ -15,7 +15,7 @@ local function compare(elements, element, T_C, nx, ny)
   local T = T_C + 273.15
   local P = phlox.core.default_pressure(T)
   local g, err = phlox.core.grid_map(lib.db, { element = element, T = T, P = P, nx = nx, ny = ny,
-                                               total = 1e-6, activity = "ideal", window = { 0, 14, -2, 2 } })
+                                               total = 1e-6, activity_model = "ideal", window = { 0, 14, -2, 2 } })
   check(g, "grid map failed: " .. tostring(err))
   check(g.failures == 0, g.failures .. " nodes did not converge")
   local m = phlox.map { library = lib, element = element, T_C = T_C, activity = 1e-6 }

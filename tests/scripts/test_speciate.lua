@@ -30,7 +30,7 @@ end
 --    docs/thermo.md, so pH within 0.015)
 local nacl = phlox.library { "Na", "Cl" }
 for _, T in ipairs { 25, 100, 250 } do
-  local r = solve { library = nacl, T_C = T, totals = { Na = 1e-12, Cl = 1e-12 }, activity = "ideal" }
+  local r = solve { library = nacl, T_C = T, totals = { Na = 1e-12, Cl = 1e-12 }, activity_model = "ideal" }
   local own = -nacl:reaction("H2O(l) = H^+ + OH^-", { T_C = T }).logK / 2
   close(r.pH, own, 1e-6, ("pure water pH at %d C equals pKw/2 of the data"):format(T))
   close(r.pH, phlox.water { T_C = T }.pKw / 2, 0.015, ("neutral pH at %d C vs IAPWS R11-07"):format(T))
@@ -45,7 +45,7 @@ local logKw = carb:reaction("H2O(l) = H^+ + OH^-", { T_C = 25 }).logK
 close(logKH, -1.468, 0.02, "Henry constant of CO2 vs Plummer and Busenberg 1982")
 close(logK1, -6.352, 0.02, "first carbonate constant vs Plummer and Busenberg 1982")
 local r = solve { library = carb, T_C = 25, totals = { C = 1e-5 }, fugacities = { ["CO2(g)"] = -3.4 },
-                  activity = "ideal" }
+                  activity_model = "ideal" }
 local h = math.sqrt(10 ^ (logKH + logK1 - 3.4) + 10 ^ logKw)
 close(r.pH, -math.log(h, 10), 1e-3, "CO2-water pH vs hand calculation")
 -- common practice, no source: rain in equilibrium with air is about pH 5.6
@@ -55,7 +55,7 @@ close(r.pH, 5.6, 0.05, "CO2-water pH (about 5.6, common practice; Stumm and Morg
 --    (from memory of Stumm and Morgan 1996, Aquatic Chemistry, 3rd ed.,
 --    calcite in equilibrium with atmospheric CO2, 25 C)
 r = solve { library = carb, T_C = 25, totals = { C = 1e-3, Ca = 0.01 },
-            fugacities = { ["CO2(g)"] = -3.5 }, activity = "davies" }
+            fugacities = { ["CO2(g)"] = -3.5 }, activity_model = "davies" }
 close(r.pH, 8.3, 0.1, "calcite-CO2 pH (Stumm and Morgan)")
 rel(r.elements.Ca.dissolved, 5e-4, 0.2, "calcite-CO2 dissolved Ca (Stumm and Morgan)")
 local calcite
@@ -66,7 +66,7 @@ check(calcite and calcite.amount > 0 and math.abs(calcite.si) < 1e-8, "calcite p
 --    (a) Solver vs an independent iteration with the same data: s from
 --        Ksp = (g2 s_free)^2, CaSO4(aq) ion pair, Davies log g = -A z^2 (sqrt I/(1+sqrt I) - 0.3 I)
 local gyp = phlox.library { "Ca", "S" }
-r = solve { library = gyp, T_C = 25, totals = { Ca = 0.1, S = 0.1 }, activity = "davies" }
+r = solve { library = gyp, T_C = 25, totals = { Ca = 0.1, S = 0.1 }, activity_model = "davies" }
 local logKsp = gyp:reaction("CaSO4*2H2O(s,gypsum) = Ca^2+ + SO4^2- + 2 H2O(l)", { T_C = 25 }).logK
 local logKp = gyp:reaction("Ca^2+ + SO4^2- = CaSO4(aq)", { T_C = 25 }).logK
 local A = phlox.water { T_C = 25 }.A

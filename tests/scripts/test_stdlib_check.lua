@@ -14,13 +14,11 @@ local is_ligand = {}
 for _, l in ipairs(LIGANDS) do is_ligand[l] = true end
 
 -- every element file in the folder (a new file cannot be forgotten)
-local p = assert(io.popen('ls "' .. dir .. '"'))
 local present = {}
-for name in p:lines() do
+for _, name in ipairs(assert(require("phlox.core").list_dir(dir))) do
   local sym = name:match("^(%u%a?)%.lua$")
   if sym then present[sym] = true end
 end
-p:close()
 assert(present.HO, "stdlib/elements/HO.lua missing")
 
 local order = { "HO" }

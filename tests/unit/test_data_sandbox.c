@@ -134,6 +134,16 @@ static double seconds(void)
     return (double)ts.tv_sec + 1e-9 * (double)ts.tv_nsec;
 }
 
+/* each source must end with "instruction budget exceeded"; prints how long */
+static void expect_stopped(const char *const *src, size_t n, const char *what)
+{
+    for (size_t i = 0; i < n; i++) {
+        double t0 = seconds();
+        expect(src[i], PX_ELIMIT, "instruction budget exceeded");
+        print_message("%s %zu stopped after %.3f s\n", what, i, seconds() - t0);
+    }
+}
+
 static void test_budget_loops(void **state)
 {
     (void)state;
@@ -146,11 +156,7 @@ static void test_budget_loops(void **state)
         "local function f() return f() end\nf()" OK_TAIL, /* endless tail call */
         "local ok = pcall(function() while true do end end)\nlocal n = 0\nfor i = 1, 10 do n = n + i end" OK_TAIL,
     };
-    for (size_t i = 0; i < sizeof loops / sizeof loops[0]; i++) {
-        double t0 = seconds();
-        expect(loops[i], PX_ELIMIT, "instruction budget exceeded");
-        print_message("loop %zu stopped after %.3f s\n", i, seconds() - t0);
-    }
+    expect_stopped(loops, sizeof loops / sizeof loops[0], "loop");
     /* a smaller budget stops sooner; a larger one lets honest work finish */
     px_data_options o = px_data_options_default();
     o.instr_limit = 10000;
@@ -158,6 +164,74 @@ static void test_budget_loops(void **state)
     assert_int_equal(px_data_check_buffer(NULL, work, strlen(work), "w.lua", &o, NULL), PX_ELIMIT);
     o.instr_limit = PX_DATA_INSTR_LIMIT_DEFAULT;
     assert_int_equal(px_data_check_buffer(NULL, work, strlen(work), "w.lua", &o, NULL), PX_OK);
+}
+
+/* Work inside C functions is charged to the same budget: each of these ran
+ * for hours before the helpers were bounded (one C call, no instructions). */
+static void test_budget_inside_c(void **state)
+{
+    (void)state;
+    static const char *work[] = {
+        "local s = string.rep('', math.maxinteger)" OK_TAIL,
+        "local s = ('') : rep(math.maxinteger)" OK_TAIL,
+        "local s = string.rep('', 1 << 40, '')" OK_TAIL,
+        "local t = {} for i = 1, 1000 do t[i] = i end\nfor k = 1, 1e6 do table.sort(t) end" OK_TAIL,
+        "local t = {} for i = 1, 1000 do t[i] = 'x' end\nfor k = 1, 1e6 do local s = table.concat(t) end" OK_TAIL,
+        "local t = {} for i = 1, 1000 do t[i] = i end\nfor k = 1, 1e6 do table.insert(t, 1, k); table.remove(t, 1) end" OK_TAIL,
+        "local s = string.rep('x', 4096)\nfor k = 1, 1e7 do local u = s:upper() end" OK_TAIL,
+        "local s = string.rep('x', 4096)\nfor k = 1, 1e7 do local u = string.format('%s%s', s, s) end" OK_TAIL,
+        "pcall(string.rep, '', math.maxinteger)\nlocal n = 0" OK_TAIL, /* caught: stays tripped */
+    };
+    expect_stopped(work, sizeof work / sizeof work[0], "C-work case");
+    /* honest use of the helpers still works */
+    const char *ok = "local s = string.rep('ab', 1000, ',')\nlocal t = {3, 1, 2}\ntable.sort(t)\n"
+                     "local c = table.concat(t, '-')\nassert(c == '1-2-3' and #s == 2999)" OK_TAIL;
+    assert_int_equal(px_data_check_buffer(NULL, ok, strlen(ok), "ok.lua", NULL, NULL), PX_OK);
+}
+
+/* Absurd but finite values are errors, each naming the field (they passed
+ * `phlox check` before: logK = 1e300, Cp coefficients of 1e308, element
+ * counts of 1e22). */
+static void test_physical_ranges(void **state)
+{
+    (void)state;
+#define CP_SP(extra) "return { element = 'Zn', species = { { formula = 'ZnO(s)', model = 'cp', " \
+                     "G = -320.479, H = -350.46, S = 43.65, source = 'x', " extra " } } }"
+    expect(CP_SP("cp = { a = 1e308 }"), PX_EDATA, "Cp(298.15 K) = 1e+308 J/(mol K) is outside the physical range");
+    expect(CP_SP("cp = { a = 40, e = 1e300 }"), PX_EDATA, "is outside the physical range");
+    expect(CP_SP("cp = { a = 40 }, V = 1e30"), PX_EDATA, "V = 1e+29 J/bar is outside");
+    expect("return { element = 'Zn', species = { { formula = 'ZnO(s)', model = 'cp', G = -1e300, H = -350.46, "
+           "S = 43.65, cp = { a = 40 }, source = 'x' } } }", PX_EDATA, "G = -1e+303 J/mol is outside the physical range");
+#define LK_SP(extra) "return { element = 'Cl', species = { { formula = 'ZnCl^+', model = 'logk', " \
+                     "reaction = 'Zn^2+ + Cl^- = ZnCl^+', source = 'x', " extra " } } }"
+    expect(LK_SP("logK = 1e300"), PX_EDATA, "logK = 1e+300  is outside the physical range");
+    expect(LK_SP("logK = 0.43, dH = 1e12"), PX_EDATA, "dH = 1e+15 J/mol is outside");
+    expect(LK_SP("logK_T = { 0, 0, 0, 0, 1e30 }"), PX_EDATA, "logK_T(298.15 K)");
+    expect("return { element = 'Zn', species = { { formula = 'Zn10000000000000000000000(s)', model = 'cp', "
+           "G = 0, H = 0, S = 41.63, cp = { a = 25.4 }, source = 'x' } } }", PX_EDATA,
+           "1e+22 atoms of Zn per formula unit (at most 1000)");
+    /* a real record passes */
+    const char *ok = CP_SP("cp = { a = 40.25 }");
+    assert_int_equal(px_data_check_buffer(NULL, ok, strlen(ok), "ok.lua", NULL, NULL), PX_OK);
+#undef CP_SP
+#undef LK_SP
+}
+
+/* A wall-clock limit per file stops what the budget does not see. */
+static void test_wall_clock(void **state)
+{
+    (void)state;
+    px_data_options o = px_data_options_default();
+    o.instr_limit = (unsigned long)-1 / 2; /* practically no instruction budget */
+    o.wall_limit = 0.2;
+    const char *spin = "while true do end" OK_TAIL;
+    px_data_problems *p = px_data_problems_new();
+    double t0 = seconds();
+    assert_int_equal(px_data_check_buffer(NULL, spin, strlen(spin), "w.lua", &o, p), PX_ELIMIT);
+    double dt = seconds() - t0;
+    assert_true(problem_has(p, "wall-clock limit exceeded"));
+    assert_true(dt >= 0.2 && dt < 20.0);
+    px_data_problems_free(p);
 }
 
 static void test_memory_cap(void **state)
@@ -226,6 +300,10 @@ static void test_runtime_errors(void **state)
     expect("return { element = 'Zn', species = {}, extra = 1 }", PX_EDATA,
            "t.lua:1: extra: unknown field 'extra'");
     expect("return { element = 'Zn', species = {}, [1] = 2 }", PX_EDATA, "unexpected entry [1]");
+    /* control characters from a file never reach the terminal raw */
+    expect("error('clear\\27[2J\\7 bell')" OK_TAIL, PX_EDATA, "t.lua:1: clear\\x1b[2J\\x07 bell");
+    expect("return { element = 'Zn', species = { { formula = 'Zn\\27[31m' } } }", PX_EDATA,
+           "Zn\\x1b[31m");
 }
 
 /* NaN and infinities never reach a record */
@@ -250,6 +328,8 @@ int main(void)
         cmocka_unit_test(test_allowed_helpers),   cmocka_unit_test(test_budget_loops),
         cmocka_unit_test(test_memory_cap),        cmocka_unit_test(test_binary_chunk_refused),
         cmocka_unit_test(test_runtime_errors),    cmocka_unit_test(test_non_finite),
+        cmocka_unit_test(test_budget_inside_c),   cmocka_unit_test(test_wall_clock),
+        cmocka_unit_test(test_physical_ranges),
     };
     return cmocka_run_group_tests(tests, NULL, NULL);
 }

@@ -8,6 +8,7 @@
 #include <cairo.h>
 #include <math.h>
 #include <stdlib.h>
+#include <limits.h>
 #include <string.h>
 
 static void test_ticks(void **state)
@@ -332,6 +333,11 @@ static void test_vector_outputs(void **state)
 
 static void test_bad_input(void **state)
 {
+    /* rows * cols overflowing int must not slip under the panel limit
+     * (65536 * 65536 wraps to 0 in 32-bit arithmetic) */
+    assert_null(px_figure_new(400, 300, 65536, 65536));
+    assert_null(px_figure_new(400, 300, INT_MAX, 2));
+    assert_null(px_figure_new(400, 300, 2, INT_MAX));
     (void)state;
     assert_null(px_figure_new(0, 100, 1, 1));
     assert_null(px_figure_new(100, 100, 0, 1));

@@ -1040,9 +1040,54 @@ static void test_default_pressure(void **state)
     assert_true(n >= 4);
 }
 
+/* px_reaction_format with huge coefficients: "%.0f" of 1e30 is 31 digits
+ * and overflowed a 32-byte stack buffer; now the text is complete when the
+ * buffer is large enough and truncated (PX_ERANGE) when it is not.  The parser
+ * refuses such coefficients (a slip, not chemistry). */
+static void test_reaction_format_huge(void **state)
+{
+    (void)state;
+    px_reaction r;
+    char msg[256], big[1024], small[16];
+    assert_int_equal(px_reaction_parse("2 H2O(l) = O2(g) + 4 H^+ + 4 e-", &r, msg, sizeof msg), PX_OK);
+    static const double coefs[] = {1e30, -1e30, 1e300, 12345678901234567890.0, 1.5e-300};
+    for (size_t k = 0; k < sizeof coefs / sizeof coefs[0]; k++) {
+        px_reaction q = r;
+        q.nu[0] = -fabs(coefs[k]);
+        assert_int_equal(px_reaction_format(&q, big, sizeof big), PX_OK);
+        char want[400];
+        snprintf(want, sizeof want, "%.0f H2O(l) =", fabs(coefs[k]));
+        if (fabs(coefs[k]) >= 1) assert_non_null(strstr(big, want));
+        assert_int_equal(px_reaction_format(&q, small, sizeof small), PX_ERANGE);
+        assert_true(strlen(small) < sizeof small);
+    }
+    /* coefficients outside [1e-4, 1e4], also once netted; a side that nets
+     * to nothing (the last three found by fuzz_reaction) */
+    static const struct {
+        const char *text, *needle;
+        int status;
+    } bad[] = {
+        {"1000000000000000000000000000000 H2O(l) = O2(g)", "larger than", PX_ERANGE},
+        {"20000.5 H2O(l) = O2(g)", "larger than", PX_ERANGE},
+        {"0.5 H3(g) = H3(g)+ 0.5 e-", "no species left on one side", PX_EPARSE},
+        {"1/8888220 O^+ = HO(l)", "smaller than", PX_ERANGE},
+        {"H2O(l) = 9999 H2(g) + 9999 H2(g) + O2(g)", "add up to", PX_ERANGE},
+    };
+    for (size_t k = 0; k < sizeof bad / sizeof bad[0]; k++) {
+        assert_int_equal(px_reaction_parse(bad[k].text, &r, msg, sizeof msg), bad[k].status);
+        assert_non_null(strstr(msg, bad[k].needle));
+    }
+    /* the balance message never writes past a small buffer */
+    assert_int_equal(px_reaction_parse("Fe(s) = Fe^2+ + Cl^- + Na^+ + e-", &r, msg, sizeof msg), PX_OK);
+    char tiny[8];
+    assert_int_not_equal(px_reaction_balance(&r, tiny, sizeof tiny), PX_OK);
+    assert_true(strlen(tiny) < sizeof tiny);
+}
+
 int main(void)
 {
     const struct CMUnitTest tests[] = {
+        cmocka_unit_test(test_reaction_format_huge),
         cmocka_unit_test(test_reaction_parse),  cmocka_unit_test(test_reaction_errors),
         cmocka_unit_test(test_db),
         cmocka_unit_test(test_db_resolve),

@@ -3,6 +3,7 @@
 -- phlox.core (phlox 0.1.0)
 
 ---@class phlox.core
+---@field limits table
 ---@field revision string
 ---@field version string
 local phlox_core = {}
@@ -17,6 +18,15 @@ function phlox_core.append_sync(path, text) end
 ---@param path string
 ---@return any # ok, {problem...}
 function phlox_core.check_files(path) end
+
+--- (C) phlox_core.check_value(fname, key, value, type [, lo, hi])
+---@param fname any
+---@param key any
+---@param value any
+---@param type any
+---@param lo? any
+---@param hi? any
+function phlox_core.check_value(fname, key, value, type, lo, hi) end
 
 --- (C) phlox_core.database([dielectric]) -> Database with the built-in species
 ---@param dielectric? any
@@ -79,6 +89,10 @@ function phlox_core.fd_write(fd, text) end
 ---@param cols? any
 function phlox_core.figure(width, height, rows, cols) end
 
+--- (C) phlox_core.file_kind(path)
+---@param path string
+function phlox_core.file_kind(path) end
+
 --- (C) phlox_core.fork() -> pid, to_fd, from_fd (pid 0 in the worker) | nil, message
 ---@return any # pid, to_fd, from_fd (pid 0 in the worker) | nil, message
 function phlox_core.fork() end
@@ -121,6 +135,11 @@ function phlox_core.kill(pid) end
 ---@return any # {name...} sorted | nil, message
 function phlox_core.list_dir(path) end
 
+--- (C) phlox_core.make_dir(path [, parents])
+---@param path string
+---@param parents? any
+function phlox_core.make_dir(path, parents) end
+
 --- (C) phlox_core.map(db, opts) -> map table | nil, message
 ---@param db phlox.Database
 ---@param opts table
@@ -134,6 +153,13 @@ function phlox_core.monotonic() end
 --- (C) phlox_core.nernst_slope(T)
 ---@param T number
 function phlox_core.nernst_slope(T) end
+
+--- (C) phlox_core.options(fname, spec, opts) -> opts (raises on any misuse)
+---@param fname any
+---@param spec table|string
+---@param opts table
+---@return any # opts (raises on any misuse)
+function phlox_core.options(fname, spec, opts) end
 
 --- (C) phlox_core.pdf_pages(path, {fig, ...}) -> true | nil, message: one PDF, a page per figure
 ---@param path string
@@ -151,6 +177,18 @@ function phlox_core.polygon_pole(xs, ys, tol) end
 ---@param T number
 ---@return any # bar | nil, message
 function phlox_core.psat(T) end
+
+--- (C) phlox_core.read_file(path)
+---@param path string
+function phlox_core.read_file(path) end
+
+--- (C) phlox_core.remove(path)
+---@param path string
+function phlox_core.remove(path) end
+
+--- (C) phlox_core.remove_tree(path)
+---@param path string
+function phlox_core.remove_tree(path) end
 
 --- (C) phlox_core.search_paths() -> copy of the user folders, in search order.
 ---@return any # copy of the user folders, in search order.
@@ -196,6 +234,10 @@ function phlox_core.ticks(a, b, n, log) end
 ---@return any # true | nil, message
 function phlox_core.truncate(path, size) end
 
+--- (C) phlox_core.user_error(message)
+---@param message any
+function phlox_core.user_error(message) end
+
 --- (C) phlox_core.wait(pid) -> exit code (128 + signal when killed) | nil, message
 ---@param pid any
 ---@return any # exit code (128 + signal when killed) | nil, message
@@ -208,11 +250,12 @@ function phlox_core.wait(pid) end
 ---@return any # table of the water state
 function phlox_core.water(T, P, dielectric) end
 
---- (C) phlox_core.write_atomic(path, text) -> true | nil, message
+--- (C) phlox_core.write_atomic(path, text [, replace]) -> true | nil, message
 ---@param path string
 ---@param text string
+---@param replace? any
 ---@return any # true | nil, message
-function phlox_core.write_atomic(path, text) end
+function phlox_core.write_atomic(path, text, replace) end
 
 ---@class phlox.Database
 phlox.Database = {}
@@ -377,11 +420,12 @@ function phlox.Figure:reference_output(on) end
 ---@return any # bytes (for tests and pipelines)
 function phlox.Figure:render(format, dpi) end
 
---- (C) phlox.Figure:save(path [, dpi]) -> true | nil, message
+--- (C) phlox.Figure:save(path [, dpi [, replace]]) -> true | nil, message
 ---@param path string
 ---@param dpi? number
+---@param replace? any
 ---@return any # true | nil, message
-function phlox.Figure:save(path, dpi) end
+function phlox.Figure:save(path, dpi, replace) end
 
 --- (C) phlox.Figure:scale(text, line)
 ---@param text string

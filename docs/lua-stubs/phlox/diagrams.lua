@@ -7,43 +7,24 @@
 local phlox_diagrams = {}
 
 ---@class phlox_diagrams.fractions.opts
----@field E? number
----@field T_C? number
----@field activity? any
----@field axes? string[]
 ---@field basis? any
 ---@field element? string
----@field exclude? string[]
----@field failures? any
 ---@field fixed? table<string, number>
----@field library? phlox.Library
 ---@field ligand? string
 ---@field ligand_species? any
 ---@field min_share? any
----@field n? integer
----@field omitted? any
 ---@field pH? number
----@field pe? number
----@field range? any
----@field series? any
 ---@field solids? boolean
----@field stats? any
 ---@field total? number
 ---@field totals? table<string, number>
 ---@field x? number
 
 ---@class phlox_diagrams.ligand_E.opts
----@field E_range? number[]
----@field element? string
----@field library? phlox.Library
 ---@field ligand? string
----@field loga_range? any
 ---@field pH? number
 
 ---@class phlox_diagrams.pH_ligand.opts
 ---@field E? number
----@field element? string
----@field library? phlox.Library
 ---@field ligand? string
 
 ---@class phlox_diagrams.plot.opts
@@ -59,80 +40,38 @@ local phlox_diagrams = {}
 ---@field T? number
 ---@field T_C? number
 ---@field element? string
----@field library? phlox.Library
 ---@field ligand? string
 
 ---@class phlox_diagrams.solubility.opts
----@field E? number
 ---@field T? number
 ---@field T_C? number
----@field activity? any
 ---@field element? string
 ---@field fixed? table<string, number>
----@field library? phlox.Library
----@field n? integer
----@field range? any
----@field series? any
----@field suppress? string[]
 ---@field total? number
 ---@field totals? table<string, number>
 
 ---@class phlox_diagrams.where.opts
 ---@field E? number
----@field E_range? number[]
 ---@field loga? any
 ---@field map? table
----@field margin? any
 ---@field pH? number
 ---@field reference? any
 ---@field reference_at_25C? any
 ---@field x? number
-
---- Species of `element` whose record is a log K without temperature
---- dependence (no dH, logK_T or estimate): their log K stays at its 25 C
---- value at T (read from the records' temperature basis).
----@param lib phlox.Library
----@param element string
----@param T_C number
----@return any
-function phlox_diagrams.constant_logk(lib, element, T_C) end
 
 --- The reference electrode record for a short or full name.
 ---@param name string
 ---@return any
 function phlox_diagrams.electrode(name) end
 
---- Fraction (distribution) curves: the share of `element` among its
---- species.
----   diagrams.fractions { library = lib, element = "Zn", T_C = 25,
----     x = "pH",            -- or "log_total" (of `ligand`) or "log_a" (of `ligand_species`)
----     range = {2, 14}, n = 121,
----     total = 1e-6,        -- mol/kg of the element
----     pH = 6,              -- fixed pH when x is not pH
----     ligand = "Cl", ligand_species = "Cl^-",
----     totals = { Na = 0.1 },                  -- other elements, mol/kg
----     solids = false,      -- true lets solids precipitate (their share counts)
----     min_share = 0.01,    -- species never reaching this share are left out
----     activity = "ideal",  -- or "davies", "bdot", "sit"
----     E = ..., pe = ..., fixed = {...}, exclude = {...}, ... (as phlox.speciate) }
---- Returns { x = {...}, series = { { species, label, x, y }, ... }, axes =
---- { x = {...}, y = {...} }, omitted = { {species, max_share} }, failures =
---- { {x, message} }, conditions, stats = { solves, seconds } }.  y is false
---- at a point where the solver did not converge (plot.curves breaks the line
---- there).
 ---@param opts phlox_diagrams.fractions.opts
 ---@return any
 function phlox_diagrams.fractions(opts) end
 
---- Predominance map on E (y) against log a(ligand) (x) at a fixed pH.
----   diagrams.ligand_E { library = lib, element = "Zn", ligand = "Cl", pH = 5,
----                       loga_range = {-4, 1}, E_range = {-1.5, 1.5}, ... }
 ---@param opts phlox_diagrams.ligand_E.opts
 ---@return any
 function phlox_diagrams.ligand_E(opts) end
 
---- Predominance map on log a(ligand) (y) against pH (x) at a fixed E (V vs SHE).
----   diagrams.pH_ligand { library = lib, element = "Zn", ligand = "Cl", E = -0.5, ... }
 ---@param opts phlox_diagrams.pH_ligand.opts
 ---@return any
 function phlox_diagrams.pH_ligand(opts) end
@@ -144,48 +83,14 @@ function phlox_diagrams.pH_ligand(opts) end
 ---@return any
 function phlox_diagrams.plot(result, opts) end
 
---- Exact E-pH maps of one element at several temperatures, for plot.grid
---- and plot.overlay.
----   diagrams.series { library = lib, element = "Zn", T_C = {25, 150, 300},
----                     ... any other phlox.map option }
---- Each map gets label "150 °C".  At T other than 25 °C, a map lists the
---- species that keep their 25 °C log K (records without dH or logK_T) in
---- map.constant_logk; every map of the series names them in a stamp line
---- (plot.grid and plot.overlay stamp the first map's lines).
 ---@param opts phlox_diagrams.series.opts
 ---@return any
 function phlox_diagrams.series(opts) end
 
---- Solubility curves: total dissolved element in equilibrium with its
---- stable solid against pH, one series per temperature.
----   diagrams.solubility { library = lib, element = "Zn", T_C = {25, 150, 300},
----     range = {4, 14}, n = 121,
----     total = 1,           -- mol/kg put in: large, so a solid is stable
----     totals = {...}, E = ..., activity = "ideal", suppress = {...}, ... }
---- Returns { x, series = { { label = "25 °C", T_C, x, y, solids }, ... },
---- axes (y logarithmic), failures, conditions, stats }.  y[i] is the
---- dissolved total (mol/kg of the element); it is false where no solid is
---- stable (all of `total` dissolves: raise total) or the solver failed.
---- solids[i] names the solid(s) present.  A point where the solver fails is
---- retried with a tenth, a hundredth and a thousandth of `total` (the
---- dissolved total over a solid does not depend on the solid's amount);
---- stats.retries counts them.
 ---@param opts phlox_diagrams.solubility.opts
 ---@return any
 function phlox_diagrams.solubility(opts) end
 
---- Which field of a map a measured potential falls in.
----   diagrams.where { map = m, pH = 5, E = -0.80, reference = "SCE" }
---- `map` has E on its y axis and pH (give pH) or log a(ligand) (give loga)
---- on x.  `reference` is a short name (SHE, SCE, Ag/AgCl, Ag/AgCl 3.5M,
---- CSE) or a full name of phlox.electrodes(); default SHE.  On a map at
---- another temperature the offset is corrected with the electrode's
---- temperature coefficient where it is known (phlox.electrode_at), else the
---- call needs reference_at_25C = true (an external electrode kept at room
---- temperature; the thermal junction potential is not included).
---- Returns { species, kind, E_SHE, E_measured, reference = {name, offset,
---- source}, field, E_range = {lo, hi} (the field's extent in E at that
---- x), margin = {below, above} in V } or nil, message outside the window.
 ---@param opts phlox_diagrams.where.opts
 ---@return any
 function phlox_diagrams.where(opts) end

@@ -4,12 +4,14 @@
 
 ---@class phlox.export
 ---@field caution string
+---@field option_specs table
 local phlox_export = {}
 
 ---@class phlox_export.csv.opts
 ---@field columns? any
 ---@field conditions? any
 ---@field from? any
+---@field replace? any
 
 ---@class phlox_export.json.opts
 ---@field caution? any
@@ -17,6 +19,7 @@ local phlox_export = {}
 ---@field data? any
 ---@field from? any
 ---@field provenance? any
+---@field replace? any
 
 --- Write rows (a sequence of tables keyed by column name) as CSV.
 --- opts.columns: the column order (required); opts.conditions: stamped;
@@ -34,7 +37,7 @@ function phlox_export.csv(path, rows, opts) end
 --- opts.conditions, opts.from as export.csv (notes in provenance.notes).
 ---@param path string
 ---@param value any
----@param opts phlox_export.json.opts
+---@param opts? phlox_export.json.opts
 ---@return any
 function phlox_export.json(path, value, opts) end
 

@@ -6,6 +6,7 @@
 ---@field caution string
 ---@field defaults table
 ---@field grid_min_panel integer
+---@field option_specs table
 ---@field presets table
 local phlox_plot = {}
 
@@ -71,7 +72,7 @@ function phlox_plot.check_map(map, where) end
 --- of extra lines), notes (extra stamp lines), from (the results drawn:
 --- their own data files are stamped).
 ---@param series any
----@param opts? phlox_plot.curves.opts
+---@param opts phlox_plot.curves.opts
 ---@return any
 function phlox_plot.curves(series, opts) end
 
@@ -80,7 +81,7 @@ function phlox_plot.curves(series, opts) end
 --- pH and a legend.  Uses map.domains, or derives them from the field kinds
 --- (see plot.domains_of).  opts as plot.map.
 ---@param map table
----@param opts? phlox_plot.domains.opts
+---@param opts phlox_plot.domains.opts
 ---@return any
 function phlox_plot.domains(map, opts) end
 
@@ -114,7 +115,7 @@ function phlox_plot.look(opts) end
 --- the full provenance), notes (extra stamp lines).  Returns the
 --- phlox.Figure and the fill table (fills, tiers).
 ---@param map table
----@param opts? phlox_plot.map.opts
+---@param opts phlox_plot.map.opts
 ---@return any
 function phlox_plot.map(map, opts) end
 
@@ -137,7 +138,7 @@ function phlox_plot.number(v) end
 --- the temperature), water = false to leave out water lines, title, and the
 --- options of plot.map.
 ---@param maps any
----@param opts? phlox_plot.overlay.opts
+---@param opts phlox_plot.overlay.opts
 ---@return any
 function phlox_plot.overlay(maps, opts) end
 

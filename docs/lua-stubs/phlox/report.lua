@@ -3,6 +3,7 @@
 -- phlox.report (phlox 0.1.0)
 
 ---@class phlox.report
+---@field option_specs table
 local phlox_report = {}
 
 ---@class phlox_report.write.opts

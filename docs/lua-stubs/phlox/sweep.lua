@@ -3,6 +3,7 @@
 -- phlox.sweep (phlox 0.1.0)
 
 ---@class phlox.sweep
+---@field option_specs table
 local phlox_sweep = {}
 
 --- n evenly spaced values from a to b inclusive.
