@@ -1263,8 +1263,12 @@ static int svg_renumber(membuf *m)
             memcpy(out + o + klen, num, (size_t)len);
             o += klen + (size_t)len;
             i = j;
-        } else {
-            out[o++] = m->data[i++];
+        } else { /* copy up to the next 's' in one go */
+            const unsigned char *nx = memchr(m->data + i + 1, 's', m->n - i - 1);
+            size_t stop = nx ? (size_t)(nx - m->data) : m->n;
+            memcpy(out + o, m->data + i, stop - i);
+            o += stop - i;
+            i = stop;
         }
     }
     free(m->data);
