@@ -1,9 +1,13 @@
 -- bench_study.lua: the 240-map study of issue 17 - 8 temperatures x 6
 -- chloride levels x 5 metals, one exact potential-pH map and one SVG each -
--- timed as a user runs it: one process (the current path), then
--- sweep.parallel on 2 worker processes, then 2 workers writing PNG as well.
--- Prints wall times and the ratios; targets (issue 17, on 2 cores): under
--- 1 s with SVG, under 3 s with PNG.  Also times the part of a map spent
+-- timed as a user runs it: one process, then sweep.parallel on 2 worker
+-- processes, then 2 workers writing PNG as well; each on the figure output
+-- path and on the former one (fig:reference_output: cairo's PNG writer,
+-- SVG numbers rounded by strtod/printf) in the same run.  First the cost of
+-- one map and one figure by each path.  Prints wall and CPU times (the
+-- machine may be loaded: CPU / 2 is the wall time on 2 idle cores) and the
+-- ratios; targets (issue 17, on 2 cores): under 1 s with SVG, under 3 s
+-- with PNG.  Also times the part of a map spent
 -- finding the species whose log K is held at 25 C (phlox.constant_logk),
 -- uncached against the cached lookup maps now use.  Never fails on time.
 -- Run on a release build: ctest --test-dir build-rel -L bench -V
@@ -17,24 +21,51 @@ local MODE = arg[2]   -- set when the study reruns itself as a timed child
 local METALS = { "Cu", "Zn", "Ni", "Co", "Fe" }
 local TEMPS = { 25, 50, 75, 100, 150, 200, 250, 300 }
 local LEVELS = sweep.log(1e-4, 1e1, 6)
+local DPI = 150   -- plot.map's default
 
 local function q(s) return "'" .. tostring(s):gsub("'", "'\\''") .. "'" end
 
+-- CPU seconds of this process and of its reaped children (the forked
+-- workers): utime, stime, cutime, cstime of /proc/self/stat (proc(5)), in
+-- clock ticks of 1/100 s (sysconf(_SC_CLK_TCK) on Linux); os.clock alone
+-- where /proc is missing (it misses the workers).
+local function cpu_all()
+  local f = io.open("/proc/self/stat")
+  if not f then return os.clock(), false end
+  local s = f:read("a")
+  f:close()
+  local rest = s:match("%) (.*)$")
+  local v = {}
+  for w in rest:gmatch("%S+") do v[#v + 1] = w end
+  -- fields after the command: 3 state ... 14 utime 15 stime 16 cutime 17 cstime
+  local t = 0
+  for k = 12, 15 do t = t + tonumber(v[k]) end
+  return t / 100, true
+end
+
+-- One figure saved: the new output path, or the former one (cairo's PNG
+-- writer, SVG numbers by strtod/printf) when ref.
+local function save(m, file, ref)
+  local fig = plot.map(m, {})
+  if ref then fig:reference_output(true) end
+  local ok, err = fig:save(file, DPI)
+  assert(ok, err)
+end
+
 if MODE then -- the study itself: a child process so each run starts cold
+  local fmt, workers, path = MODE:match("^(%a+):(%d):(%a+)$")
   local libs = {}
   for _, el in ipairs(METALS) do libs[el] = phlox.library { el, "Cl" } end
   local points = sweep.product({ "el", METALS }, { "T_C", TEMPS }, { "a", LEVELS })
-  local workers = MODE == "serial" and 1 or 2
-  local png = MODE == "png"
   local res, fails = sweep.parallel(points, function(p)
     local m = phlox.map { library = libs[p.el], element = p.el, T_C = p.T_C, ligand = "Cl", ligand_activity = p.a }
     local base = ("%s/%s-%d-%d"):format(OUT, p.el, p.T_C, math.floor(math.log(p.a, 10) + 0.5))
-    plot.map(m, { file = base .. ".svg" })
-    if png then plot.map(m, { file = base .. ".png" }) end
+    save(m, base .. ".svg", path == "ref")
+    if fmt == "png" then save(m, base .. ".png", path == "ref") end
     return #m.fields
-  end, { workers = workers, quiet = true })
+  end, { workers = tonumber(workers), quiet = true })
   assert(#fails == 0 and #res == 240, "the study failed: " .. tostring(fails[1] and fails[1].message))
-  print(("CPU %.3f"):format(os.clock()))   -- this process's CPU (all of it on one process)
+  print(("CPU %.3f"):format((cpu_all())))
   return
 end
 
@@ -43,21 +74,44 @@ local dir = os.tmpname()
 os.remove(dir)
 assert(os.execute("mkdir -p " .. q(dir)))
 local bin = arg[-1]
-local cpu = {}
 local function timed(mode)
   local t0 = core.monotonic()
   local h = io.popen(("%s %s %s %s"):format(q(bin), q(arg[0]), q(dir), mode))
   local out = h:read("a")
   assert(h:close(), "the " .. mode .. " run failed")
-  cpu[mode] = tonumber(out:match("CPU ([%d%.]+)"))
-  return core.monotonic() - t0
+  return core.monotonic() - t0, tonumber(out:match("CPU ([%d%.]+)"))
 end
-local ts = timed("serial")
-local tp = timed("parallel")
-local tg = timed("png")
+
+-- Per figure, in this process: the map alone, then one figure saved as SVG
+-- and as PNG by each path (CPU time, after one warm-up figure of each).
+local culib = phlox.library { "Cu", "Cl" }
+local m = phlox.map { library = culib, element = "Cu", T_C = 150, ligand = "Cl", ligand_activity = 1e-2 }
+local NF = 20
+local function per(fn)
+  fn()
+  local c0 = os.clock()
+  for _ = 1, NF do fn() end
+  return (os.clock() - c0) / NF
+end
+local cmap = per(function() phlox.map { library = culib, element = "Cu", T_C = 150, ligand = "Cl", ligand_activity = 1e-2 } end)
+local c = {}
+for _, fmt in ipairs { "svg", "png" } do
+  for _, path in ipairs { "new", "ref" } do
+    c[fmt .. path] = per(function() save(m, dir .. "/one." .. fmt, path == "ref") end)
+  end
+end
+print(("per figure (Cu-Cl, 150 C; CPU): map %.2f ms; SVG %.2f ms (former path %.2f ms, %.2fx); "
+  .. "PNG at %d dpi %.2f ms (former path %.2f ms, %.2fx)"):format(1e3 * cmap, 1e3 * c.svgnew, 1e3 * c.svgref,
+  c.svgref / c.svgnew, DPI, 1e3 * c.pngnew, 1e3 * c.pngref, c.pngref / c.pngnew))
+
+local runs = {}
+for _, mode in ipairs { "svg:1:new", "svg:2:new", "svg:2:ref", "png:2:new", "png:2:ref" } do
+  local wall, cpu = timed(mode)
+  runs[mode] = { wall = wall, cpu = cpu }
+end
 local svg_bytes, n = 0, 0
 for _, name in ipairs(core.list_dir(dir)) do
-  if name:match("%.svg$") then
+  if name:match("%.svg$") and name ~= "one.svg" then
     local f = io.open(dir .. "/" .. name, "rb")
     svg_bytes = svg_bytes + #f:read("a")
     f:close()
@@ -65,11 +119,17 @@ for _, name in ipairs(core.list_dir(dir)) do
   end
 end
 os.execute("rm -rf " .. q(dir))
-print(("240-map study, one SVG each: 1 process %.2f s; 2 workers %.2f s (%.2fx)  [target < 1 s]"):format(ts, tp, ts / tp))
-print(("240-map study with PNG too, 2 workers: %.2f s  [target < 3 s]"):format(tg))
-print(("CPU of the one-process run: %.2f s (%.1f ms per map and SVG); wall time on 2 idle cores is about half; "
-  .. "on a loaded machine the wall times above are longer"):format(cpu.serial, 1e3 * cpu.serial / 240))
-print(("SVG size: %d files, %.0f kB each on average"):format(n, svg_bytes / n / 1024))
+local function line(what, mode, ref, target)
+  local r, o = runs[mode], runs[ref]
+  print(("%s: wall %.2f s, CPU %.2f s (CPU / 2 cores %.2f s)%s%s"):format(what, r.wall, r.cpu, r.cpu / 2,
+    o and ("; former path CPU %.2f s (%.2fx)"):format(o.cpu, o.cpu / r.cpu) or "",
+    target and ("  [target < %s s]"):format(target) or ""))
+end
+line("240-map study, one SVG each, 1 process", "svg:1:new")
+line("240-map study, one SVG each, 2 workers", "svg:2:new", "svg:2:ref", 1)
+line("240-map study with PNG too, 2 workers", "png:2:new", "png:2:ref", 3)
+print(("the wall times count this machine's load; CPU / 2 is the wall time on 2 idle cores. "
+  .. "SVG size: %d files, %.0f kB each on average"):format(n, svg_bytes / n / 1024))
 
 -- The held-at-25-C lookup of one map, uncached (every call evaluates each
 -- log K species' reaction at 25 C and at T) against the cache.

@@ -278,6 +278,16 @@ static int f_stamp_below(lua_State *L)
     return 0;
 }
 
+/* fig:reference_output([on]): PNG by cairo's writer and SVG numbers by
+ * strtod/printf, the former paths (for the benchmark's comparison) */
+static int f_reference_output(lua_State *L)
+{
+    px_figure *f = checkfig(L);
+    status_error(L, px_figure_reference_output(f, lua_isnone(L, 2) || lua_toboolean(L, 2)),
+                 "figure:reference_output");
+    return 0;
+}
+
 /* fig:used(n): only the first n panels are drawn */
 static int f_used(lua_State *L)
 {
@@ -478,7 +488,7 @@ void px_lua_open_render(lua_State *L)
         {"legend_patch", f_legend_patch}, {"legend", f_legend}, {"scale", f_scale},
         {"used", f_used}, {"line_label", f_line_label}, {"meta", f_meta},
         {"layout", f_layout}, {"bare", f_bare},
-        {"stamp_below", f_stamp_below}, {NULL, NULL}};
+        {"stamp_below", f_stamp_below}, {"reference_output", f_reference_output}, {NULL, NULL}};
     static const luaL_Reg funcs[] = {
         {"figure", l_figure}, {"ticks", l_ticks}, {"polygon_pole", l_polygon_pole},
         {"text_width", l_text_width}, {"pdf_pages", l_pdf_pages}, {"text_runs", l_text_runs},

@@ -12,6 +12,7 @@
 #include "core/atomic.h"
 #include "core/status.h"
 #include "render/figure_priv.h"
+#include "render/png.h"
 #include "render/text.h"
 #include <cairo-pdf.h>
 #include <cairo-svg.h>
@@ -1232,7 +1233,7 @@ static int svg_renumber(membuf *m)
     if (!out) return PX_ENOMEM;
     size_t o = 0;
     for (size_t i = 0; i < m->n;) {
-        if (i + klen < m->n && memcmp(m->data + i, key, klen) == 0 &&
+        if (m->data[i] == 's' && i + klen < m->n && memcmp(m->data + i, key, klen) == 0 &&
             m->data[i + klen] >= '0' && m->data[i + klen] <= '9') {
             size_t j = i + klen;
             unsigned long v = 0;
@@ -1262,8 +1263,12 @@ static int svg_renumber(membuf *m)
             memcpy(out + o + klen, num, (size_t)len);
             o += klen + (size_t)len;
             i = j;
-        } else {
-            out[o++] = m->data[i++];
+        } else { /* copy up to the next 's' in one go */
+            const unsigned char *nx = memchr(m->data + i + 1, 's', m->n - i - 1);
+            size_t stop = nx ? (size_t)(nx - m->data) : m->n;
+            memcpy(out + o, m->data + i, stop - i);
+            o += stop - i;
+            i = stop;
         }
     }
     free(m->data);
@@ -1277,46 +1282,98 @@ static int svg_renumber(membuf *m)
  * thousandth of a point (0.35 um) is far below what any screen or printer
  * shows, so numbers with more decimals are rounded to three and their
  * trailing zeros dropped.  Run on cairo's output only, before the <title>
- * and <desc> are inserted, so no text is touched. */
+ * and <desc> are inserted, so no text is touched.  Two implementations of
+ * the same rounding: svg_round_text rounds the digits as text (the output
+ * path), svg_round_strtod by strtod and printf (the former path, kept as
+ * the reference the benchmark and tests compare with); both give the same
+ * bytes. */
 #define PX_SVG_DECIMALS 3
-static int svg_compact(membuf *m)
+
+/* Round the decimal number s[0..len) (digits, '.', digits; more than
+ * PX_SVG_DECIMALS decimals) into txt; returns its length, or -1 on an exact
+ * tie (...5000), where the binary value decides the rounding as printf does. */
+static int svg_round_text(const unsigned char *s, size_t len, char *txt, size_t cap)
+{
+    size_t dot = 0;
+    while (dot < len && s[dot] != '.') dot++;
+    size_t keep = dot + 1 + PX_SVG_DECIMALS; /* digits kept, with the dot */
+    if (dot >= len || keep >= len || keep + 2 > cap) return -1;
+    int up = s[keep] > '5';
+    if (s[keep] == '5') {
+        size_t k = keep + 1;
+        while (k < len && s[k] == '0') k++;
+        if (k == len) return -1;
+        up = 1;
+    }
+    memcpy(txt, s, keep);
+    size_t w = keep;
+    if (up) { /* carry from the last kept digit leftwards, over the dot */
+        size_t k = keep;
+        int carry = 1;
+        while (carry && k-- > 0) {
+            if (txt[k] == '.') continue;
+            if (txt[k] == '9') txt[k] = '0';
+            else txt[k]++, carry = 0;
+        }
+        if (carry) { /* 999.9996 -> 1000.000 */
+            memmove(txt + 1, txt, w);
+            txt[0] = '1';
+            w++;
+        }
+    }
+    while (w > 0 && txt[w - 1] == '0') w--;
+    if (w > 0 && txt[w - 1] == '.') w--;
+    return (int)w;
+}
+
+static int svg_round_strtod(const unsigned char *s, size_t len, char *txt, size_t cap)
+{
+    char num[64];
+    if (len > sizeof num - 1) len = sizeof num - 1;
+    memcpy(num, s, len);
+    num[len] = '\0';
+    int w = snprintf(txt, cap, "%.*f", PX_SVG_DECIMALS, strtod(num, NULL));
+    while (w > 0 && txt[w - 1] == '0') w--;
+    if (w > 0 && txt[w - 1] == '.') w--;
+    return w;
+}
+
+static int is_digit(unsigned char c) { return c >= '0' && c <= '9'; }
+static int is_alpha(unsigned char c) { return (c >= 'a' && c <= 'z') || (c >= 'A' && c <= 'Z'); }
+
+static int svg_compact(membuf *m, int reference)
 {
     unsigned char *out = malloc(m->n + 1);
     if (!out) return PX_ENOMEM;
     size_t o = 0;
     for (size_t i = 0; i < m->n;) {
         unsigned char c = m->data[i];
-        int starts = (c >= '0' && c <= '9') &&
-                     (i == 0 || !((m->data[i - 1] >= '0' && m->data[i - 1] <= '9') ||
-                                  (m->data[i - 1] >= 'a' && m->data[i - 1] <= 'z') ||
-                                  (m->data[i - 1] >= 'A' && m->data[i - 1] <= 'Z') ||
+        int starts = is_digit(c) &&
+                     (i == 0 || !(is_digit(m->data[i - 1]) || is_alpha(m->data[i - 1]) ||
                                   m->data[i - 1] == '.' || m->data[i - 1] == '_' || m->data[i - 1] == '#'));
         if (!starts) {
             out[o++] = m->data[i++];
             continue;
         }
         size_t j = i;
-        while (j < m->n && m->data[j] >= '0' && m->data[j] <= '9') j++;
+        while (j < m->n && is_digit(m->data[j])) j++;
         size_t dot = j, k = j;
         if (k < m->n && m->data[k] == '.') {
             k++;
-            while (k < m->n && m->data[k] >= '0' && m->data[k] <= '9') k++;
+            while (k < m->n && is_digit(m->data[k])) k++;
         }
-        int is_name = k < m->n && ((m->data[k] >= 'a' && m->data[k] <= 'z') || (m->data[k] >= 'A' && m->data[k] <= 'Z'));
+        int is_name = k < m->n && is_alpha(m->data[k]);
         if (k - dot - 1 <= PX_SVG_DECIMALS || dot == k || is_name) { /* short, integer or part of a name */
             memcpy(out + o, m->data + i, k - i);
             o += k - i;
             i = k;
             continue;
         }
-        char num[64], txt[64];
-        size_t len = k - i < sizeof num - 1 ? k - i : sizeof num - 1;
-        memcpy(num, m->data + i, len);
-        num[len] = '\0';
+        char txt[64];
+        int w = -1;
+        if (!reference && k - i < sizeof txt - 2) w = svg_round_text(m->data + i, k - i, txt, sizeof txt);
+        if (w < 0) w = svg_round_strtod(m->data + i, k - i, txt, sizeof txt);
         int neg = i > 0 && m->data[i - 1] == '-';
-        int w = snprintf(txt, sizeof txt, "%.*f", PX_SVG_DECIMALS, strtod(num, NULL));
-        while (w > 0 && txt[w - 1] == '0') w--;
-        if (w > 0 && txt[w - 1] == '.') w--;
         if (neg && w == 1 && txt[0] == '0') o--; /* "-0.0001" -> "0", not "-0" */
         memcpy(out + o, txt, (size_t)w); /* never longer than the input */
         o += (size_t)w;
@@ -1511,56 +1568,19 @@ static int finish_surface(cairo_surface_t *s, cairo_status_t cst, membuf *m)
     return PX_OK;
 }
 
-/* CRC-32 of PNG chunks (ISO 3309 polynomial; PNG spec, Annex D). */
-static unsigned long png_crc(const unsigned char *buf, size_t n, unsigned long c)
-{
-    for (size_t i = 0; i < n; i++) {
-        c ^= buf[i];
-        for (int k = 0; k < 8; k++) c = c & 1 ? 0xedb88320UL ^ (c >> 1) : c >> 1;
-    }
-    return c;
-}
-
-static void put_be32(unsigned char *p, unsigned long v)
-{
-    p[0] = (unsigned char)(v >> 24), p[1] = (unsigned char)(v >> 16);
-    p[2] = (unsigned char)(v >> 8), p[3] = (unsigned char)v;
-}
-
-/* The figure's metadata as PNG text chunks right after IHDR: tEXt for
- * ASCII text, iTXt (UTF-8, uncompressed) otherwise (PNG spec 11.3.4). */
+/* The former PNG path: cairo's writer, then the figure's metadata as text
+ * chunks inserted right after IHDR. */
 #define PX_PNG_IHDR_END 33 /* 8-byte signature + IHDR (4 + 4 + 13 + 4) */
 static int png_text_chunks(membuf *m, const px_figure *f)
 {
     if (!f->n_meta) return PX_OK;
     if (m->n < PX_PNG_IHDR_END || memcmp(m->data + 12, "IHDR", 4) != 0) return PX_EIO;
-    size_t extra = 0;
-    for (size_t k = 0; k < f->n_meta; k++)
-        extra += 12 + strlen(f->meta_key[k]) + 5 + strlen(f->meta_val[k]);
-    unsigned char *out = malloc(m->n + extra);
+    const char *const *keys = (const char *const *)f->meta_key;
+    const char *const *vals = (const char *const *)f->meta_val;
+    unsigned char *out = malloc(m->n + px_png_text_size(keys, vals, f->n_meta));
     if (!out) return PX_ENOMEM;
     memcpy(out, m->data, PX_PNG_IHDR_END);
-    size_t o = PX_PNG_IHDR_END;
-    for (size_t k = 0; k < f->n_meta; k++) {
-        const char *key = f->meta_key[k], *val = f->meta_val[k];
-        int ascii = 1;
-        for (const char *c = val; *c; c++)
-            if ((unsigned char)*c >= 0x80) ascii = 0;
-        size_t kl = strlen(key), vl = strlen(val);
-        size_t len = kl + 1 + (ascii ? 0 : 4) + vl;
-        put_be32(out + o, (unsigned long)len);
-        memcpy(out + o + 4, ascii ? "tEXt" : "iTXt", 4);
-        unsigned char *d = out + o + 8;
-        memcpy(d, key, kl + 1); /* keyword and its null separator */
-        d += kl + 1;
-        if (!ascii) { /* compression flag, method, empty language tag and translated keyword */
-            memcpy(d, "\0\0\0\0", 4);
-            d += 4;
-        }
-        memcpy(d, val, vl);
-        put_be32(out + o + 8 + len, png_crc(out + o + 4, len + 4, 0xffffffffUL) ^ 0xffffffffUL);
-        o += 12 + len;
-    }
+    size_t o = PX_PNG_IHDR_END + px_png_text(out + PX_PNG_IHDR_END, keys, vals, f->n_meta);
     memcpy(out + o, m->data + PX_PNG_IHDR_END, m->n - PX_PNG_IHDR_END);
     o += m->n - PX_PNG_IHDR_END;
     free(m->data);
@@ -1568,6 +1588,17 @@ static int png_text_chunks(membuf *m, const px_figure *f)
     m->n = o;
     m->cap = o;
     return PX_OK;
+}
+
+/* The image surface as PNG by png.c, metadata included. */
+static int png_write(cairo_surface_t *s, membuf *m, const px_figure *f)
+{
+    cairo_surface_flush(s);
+    const unsigned char *pix = cairo_image_surface_get_data(s);
+    if (!pix || cairo_image_surface_get_format(s) != CAIRO_FORMAT_ARGB32) return PX_EIO;
+    return px_png_encode(pix, cairo_image_surface_get_width(s), cairo_image_surface_get_height(s),
+                         cairo_image_surface_get_stride(s), (const char *const *)f->meta_key,
+                         (const char *const *)f->meta_val, f->n_meta, &m->data, &m->n);
 }
 
 int px_figure_render(const px_figure *f, px_format fmt, double dpi, unsigned char **out, size_t *n)
@@ -1602,13 +1633,22 @@ int px_figure_render(const px_figure *f, px_format fmt, double dpi, unsigned cha
     }
     cairo_status_t cst = cairo_status(cr);
     cairo_destroy(cr);
+    int pst = PX_OK;
     if (fmt == PX_FORMAT_PNG && cst == CAIRO_STATUS_SUCCESS) {
-        cairo_surface_flush(s);
-        cst = cairo_surface_write_to_png_stream(s, mem_write, &m);
+        if (f->reference_output) {
+            cairo_surface_flush(s);
+            cst = cairo_surface_write_to_png_stream(s, mem_write, &m);
+        } else {
+            pst = png_write(s, &m, f);
+        }
     }
     int fst = finish_surface(s, cst, &m);
     if (fst != PX_OK) return fst;
-    if (fmt == PX_FORMAT_PNG) {
+    if (pst != PX_OK) {
+        free(m.data);
+        return pst;
+    }
+    if (fmt == PX_FORMAT_PNG && f->reference_output) {
         int st = png_text_chunks(&m, f);
         if (st != PX_OK) {
             free(m.data);
@@ -1617,7 +1657,7 @@ int px_figure_render(const px_figure *f, px_format fmt, double dpi, unsigned cha
     }
     if (fmt == PX_FORMAT_SVG) {
         int st = svg_renumber(&m);
-        if (st == PX_OK) st = svg_compact(&m);
+        if (st == PX_OK) st = svg_compact(&m, f->reference_output);
         if (st == PX_OK) st = svg_describe(&m, f);
         if (st != PX_OK) {
             free(m.data);

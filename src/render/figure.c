@@ -2,6 +2,7 @@
  * plain data until px_figure_save() lays them out (draw.c). */
 #include "render/figure_priv.h"
 #include "core/status.h"
+#include "render/png.h"
 #include <math.h>
 #include <stdlib.h>
 #include <string.h>
@@ -331,13 +332,12 @@ int px_figure_line_label(px_figure *f, int panel, const double *x, const double 
     return PX_OK;
 }
 
-#define PX_META_KEY_MAX 79 /* PNG keyword length limit (PNG spec 11.3.4.2) */
 
 int px_figure_meta(px_figure *f, const char *key, const char *text)
 {
     if (!f || !key || !text) return PX_EINVAL;
     size_t kl = strlen(key);
-    if (kl < 1 || kl > PX_META_KEY_MAX || key[0] == ' ' || key[kl - 1] == ' ') return PX_EINVAL;
+    if (kl < 1 || kl > PX_PNG_KEY_MAX || key[0] == ' ' || key[kl - 1] == ' ') return PX_EINVAL;
     for (size_t i = 0; i < kl; i++)
         if (key[i] < 0x20 || key[i] > 0x7e) return PX_EINVAL;
     char *v = dupstr(text);
@@ -376,5 +376,12 @@ int px_figure_stamp_below(px_figure *f, int on)
 {
     if (!f) return PX_EINVAL;
     f->stamp_below = on != 0;
+    return PX_OK;
+}
+
+int px_figure_reference_output(px_figure *f, int on)
+{
+    if (!f) return PX_EINVAL;
+    f->reference_output = on != 0;
     return PX_OK;
 }

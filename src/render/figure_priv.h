@@ -50,6 +50,7 @@ struct px_figure {
     double ts, ls;         /* text and line scale */
     char **meta_key, **meta_val;
     size_t n_meta;
+    int reference_output;  /* cairo's PNG writer and the former SVG rounding */
 };
 
 

@@ -153,6 +153,12 @@ int px_figures_save_pdf(const px_figure *const *figs, size_t n, const char *path
 int px_text_runs(const char *text, int chem, void (*emit)(void *user, int kind, const char *s),
                  void *user);
 
+/* Output through the former paths, kept as the reference the benchmark
+ * and tests compare with: PNG by cairo's writer (slower, compresses harder;
+ * the same pixels and text chunks) and SVG numbers rounded by strtod and
+ * printf (the same bytes).  Off by default. */
+int px_figure_reference_output(px_figure *fig, int on);
+
 /* PDF only: put each panel on a page of its own (full page size). */
 int px_figure_page_per_panel(px_figure *fig, int on);
 

@@ -1,7 +1,9 @@
 /* test_render.c - the figure module: tick choice, label geometry, the three
  * output formats, pixel probes away from text, deterministic vector bytes. */
 #include "px_test.h"
+#include "support/px_rng.h"
 #include "core/status.h"
+#include "render/png.h"
 #include "render/render.h"
 #include <cairo.h>
 #include <math.h>
@@ -83,6 +85,22 @@ typedef struct {
     size_t n, at;
 } reader;
 
+typedef struct {
+    unsigned char *p;
+    size_t n;
+} membuf_t;
+
+static cairo_status_t membuf_write(void *closure, const unsigned char *data, unsigned int len)
+{
+    membuf_t *m = closure;
+    unsigned char *q = realloc(m->p, m->n + len);
+    if (!q) return CAIRO_STATUS_NO_MEMORY;
+    memcpy(q + m->n, data, len);
+    m->p = q;
+    m->n += len;
+    return CAIRO_STATUS_SUCCESS;
+}
+
 static cairo_status_t read_mem(void *closure, unsigned char *data, unsigned int len)
 {
     reader *r = closure;
@@ -130,6 +148,152 @@ static void test_png_pixels(void **state)
     assert_true(r >= 250 && g <= 5 && b <= 5);
     cairo_surface_destroy(s);
     free(png);
+    px_figure_free(f);
+}
+
+/* A PNG decoded by cairo's reader (libpng) into an image surface. */
+static cairo_surface_t *decode(const unsigned char *png, size_t n)
+{
+    reader rd = {png, n, 0};
+    cairo_surface_t *s = cairo_image_surface_create_from_png_stream(read_mem, &rd);
+    assert_int_equal(cairo_surface_status(s), CAIRO_STATUS_SUCCESS);
+    cairo_surface_flush(s);
+    return s;
+}
+
+static void assert_same_pixels(cairo_surface_t *a, cairo_surface_t *b)
+{
+    int w = cairo_image_surface_get_width(a), h = cairo_image_surface_get_height(a);
+    assert_int_equal(cairo_image_surface_get_width(b), w);
+    assert_int_equal(cairo_image_surface_get_height(b), h);
+    assert_int_equal(cairo_image_surface_get_format(a), cairo_image_surface_get_format(b));
+    for (int y = 0; y < h; y++)
+        assert_memory_equal(cairo_image_surface_get_data(a) + y * cairo_image_surface_get_stride(a),
+                            cairo_image_surface_get_data(b) + y * cairo_image_surface_get_stride(b),
+                            (size_t)w * 4);
+}
+
+static int has_bytes(const unsigned char *p, size_t n, const char *s)
+{
+    size_t k = strlen(s);
+    for (size_t i = 0; i + k <= n; i++)
+        if (memcmp(p + i, s, k) == 0) return 1;
+    return 0;
+}
+
+/* The chunks of a PNG other than IDAT (type and data), concatenated: the
+ * header, text chunks and background must match cairo's writer's. */
+static size_t non_idat(const unsigned char *p, size_t n, unsigned char *out)
+{
+    size_t o = 0;
+    for (size_t at = 8; at + 12 <= n;) {
+        size_t len = (size_t)p[at] << 24 | (size_t)p[at + 1] << 16 | (size_t)p[at + 2] << 8 | p[at + 3];
+        if (memcmp(p + at + 4, "IDAT", 4) != 0) {
+            memcpy(out + o, p + at + 4, 4 + len);
+            o += 4 + len;
+        }
+        at += 12 + len;
+    }
+    return o;
+}
+
+/* The PNG writer of png.c against cairo's (the former path): the same
+ * pixels through libpng's decoder and the same chunks besides the image
+ * data, for a figure with non-ASCII metadata (iTXt) and ASCII (tEXt). */
+static void test_png_writer(void **state)
+{
+    (void)state;
+    px_figure *f = two_fields();
+    assert_int_equal(px_figure_meta(f, "Title", "Fe\xe2\x80\x93H2O at 25 \xc2\xb0" "C"), PX_OK);
+    assert_int_equal(px_figure_meta(f, "Software", "phlox test"), PX_OK);
+    unsigned char *fast, *ref;
+    size_t nf, nr;
+    assert_int_equal(px_figure_render(f, PX_FORMAT_PNG, 144, &fast, &nf), PX_OK);
+    assert_int_equal(px_figure_reference_output(f, 1), PX_OK);
+    assert_int_equal(px_figure_render(f, PX_FORMAT_PNG, 144, &ref, &nr), PX_OK);
+    cairo_surface_t *a = decode(fast, nf), *b = decode(ref, nr);
+    assert_same_pixels(a, b);
+    unsigned char *ca = malloc(nf), *cb = malloc(nr);
+    assert_non_null(ca);
+    assert_non_null(cb);
+    size_t la = non_idat(fast, nf, ca), lb = non_idat(ref, nr, cb);
+    assert_int_equal(la, lb);
+    assert_memory_equal(ca, cb, la);
+    assert_true(has_bytes(ca, la, "iTXtTitle"));
+    assert_true(has_bytes(ca, la, "tEXtSoftware"));
+    free(ca), free(cb), free(fast), free(ref);
+    cairo_surface_destroy(a);
+    cairo_surface_destroy(b);
+    px_figure_free(f);
+}
+
+/* Transparent and translucent pixels (RGBA, un-premultiplied), long runs
+ * and noise (matches at every distance, literals): what libpng decodes
+ * from png.c's bytes equals what it decodes from cairo's writer's. */
+static void test_png_encode_alpha(void **state)
+{
+    (void)state;
+    const int w = 301, h = 97;
+    cairo_surface_t *s = cairo_image_surface_create(CAIRO_FORMAT_ARGB32, w, h);
+    unsigned char *d = cairo_image_surface_get_data(s);
+    int stride = cairo_image_surface_get_stride(s);
+    px_rng rng;
+    px_rng_seed(&rng, 12345);
+    for (int y = 0; y < h; y++)
+        for (int x = 0; x < w; x++) {
+            uint32_t a, r, g, b;
+            uint32_t seed = (uint32_t)(px_rng_uniform(&rng) * 4294967296.0);
+            if (y < 30) a = 255, r = 40, g = 90, b = 200;            /* flat */
+            else if (y < 60) a = (uint32_t)(x * 255 / (w - 1)), r = g = b = a / 2; /* ramp */
+            else a = seed >> 24, r = (seed >> 8) & 0xff, g = (seed >> 16) & 0xff, b = seed & 0xff;
+            if (r > a) r = a; /* premultiplied: no channel above alpha */
+            if (g > a) g = a;
+            if (b > a) b = a;
+            *(uint32_t *)(void *)(d + y * stride + x * 4) = a << 24 | r << 16 | g << 8 | b;
+        }
+    cairo_surface_mark_dirty(s);
+    const char *keys[] = {"Comment"}, *vals[] = {"alpha test"};
+    unsigned char *png;
+    size_t n;
+    assert_int_equal(px_png_encode(d, w, h, stride, keys, vals, 1, &png, &n), PX_OK);
+    membuf_t ref = {0};
+    assert_int_equal(cairo_surface_write_to_png_stream(s, membuf_write, &ref), CAIRO_STATUS_SUCCESS);
+    cairo_surface_t *a = decode(png, n), *b = decode(ref.p, ref.n);
+    assert_same_pixels(a, b);
+    assert_true(has_bytes(png, n, "tEXtComment"));
+    free(png);
+    assert_int_equal(px_png_encode(d, 0, h, stride, keys, vals, 1, &png, &n), PX_EINVAL);
+    assert_null(png);
+    free(ref.p);
+    cairo_surface_destroy(a);
+    cairo_surface_destroy(b);
+    cairo_surface_destroy(s);
+}
+
+/* SVG numbers rounded as text equal those rounded by strtod and printf
+ * (the former path): a figure of many pseudo-random points, so thousands
+ * of numbers with carries (x.9996), ties and negative zeros are rounded. */
+static void test_svg_rounding(void **state)
+{
+    (void)state;
+    px_figure *f = two_fields();
+    double x[2000], y[2000];
+    px_rng rng;
+    px_rng_seed(&rng, 777);
+    for (int i = 0; i < 2000; i++) {
+        x[i] = 14.0 * px_rng_uniform(&rng);
+        y[i] = -1 + 2.0 * px_rng_uniform(&rng);
+    }
+    px_rgba grey = {0.5, 0.5, 0.5, 1};
+    assert_int_equal(px_figure_line(f, 0, x, y, 2000, grey, 0.3, PX_DASH_SOLID, NULL), PX_OK);
+    unsigned char *fast, *ref;
+    size_t nf, nr;
+    assert_int_equal(px_figure_render(f, PX_FORMAT_SVG, 72, &fast, &nf), PX_OK);
+    assert_int_equal(px_figure_reference_output(f, 1), PX_OK);
+    assert_int_equal(px_figure_render(f, PX_FORMAT_SVG, 72, &ref, &nr), PX_OK);
+    assert_int_equal(nf, nr);
+    assert_memory_equal(fast, ref, nf);
+    free(fast), free(ref);
     px_figure_free(f);
 }
 
@@ -244,6 +408,8 @@ int main(void)
         cmocka_unit_test(test_ticks),         cmocka_unit_test(test_polygon_geometry),
         cmocka_unit_test(test_png_pixels),    cmocka_unit_test(test_vector_outputs),
         cmocka_unit_test(test_bad_input),     cmocka_unit_test(test_layout),
+        cmocka_unit_test(test_png_writer),    cmocka_unit_test(test_png_encode_alpha),
+        cmocka_unit_test(test_svg_rounding),
     };
     return cmocka_run_group_tests(tests, NULL, NULL);
 }

@@ -410,6 +410,10 @@ function phlox.Figure:plot_rect(panel, dpi) end
 ---@param ly? any
 function phlox.Figure:polygon(panel, xs, ys, fill, stroke, width, label, lx, ly) end
 
+--- (C) phlox.Figure:reference_output([on])
+---@param on? any
+function phlox.Figure:reference_output(on) end
+
 --- (C) phlox.Figure:render(format [, dpi]) -> bytes (for tests and pipelines)
 ---@param format string
 ---@param dpi? number
