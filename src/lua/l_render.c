@@ -288,6 +288,17 @@ static int f_reference_output(lua_State *L)
     return 0;
 }
 
+/* fig:svg_text("text" | "outline"): how SVG output writes text */
+static int f_svg_text(lua_State *L)
+{
+    px_figure *f = checkfig(L);
+    static const char *const modes[] = {"text", "outline", NULL};
+    int k = luaL_checkoption(L, 2, NULL, modes);
+    status_error(L, px_figure_svg_text(f, k == 1 ? PX_SVG_TEXT_OUTLINE : PX_SVG_TEXT_TEXT),
+                 "figure:svg_text");
+    return 0;
+}
+
 /* fig:used(n): only the first n panels are drawn */
 static int f_used(lua_State *L)
 {
@@ -488,7 +499,8 @@ void px_lua_open_render(lua_State *L)
         {"legend_patch", f_legend_patch}, {"legend", f_legend}, {"scale", f_scale},
         {"used", f_used}, {"line_label", f_line_label}, {"meta", f_meta},
         {"layout", f_layout}, {"bare", f_bare},
-        {"stamp_below", f_stamp_below}, {"reference_output", f_reference_output}, {NULL, NULL}};
+        {"stamp_below", f_stamp_below}, {"reference_output", f_reference_output},
+        {"svg_text", f_svg_text}, {NULL, NULL}};
     static const luaL_Reg funcs[] = {
         {"figure", l_figure}, {"ticks", l_ticks}, {"polygon_pole", l_polygon_pole},
         {"text_width", l_text_width}, {"pdf_pages", l_pdf_pages}, {"text_runs", l_text_runs},

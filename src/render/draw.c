@@ -1622,6 +1622,8 @@ int px_figure_render(const px_figure *f, px_format fmt, double dpi, unsigned cha
     }
     cairo_t *cr = cairo_create(s);
     px_text_prepare(cr);
+    px_text_sink sink = {0};
+    if (fmt == PX_FORMAT_SVG && f->svg_text == PX_SVG_TEXT_TEXT) px_text_sink_attach(cr, &sink);
     cairo_scale(cr, scale, scale);
     if (fmt == PX_FORMAT_PDF && f->page_per_panel) {
         for (int i = 0; i < f->used; i++) {
@@ -1643,10 +1645,10 @@ int px_figure_render(const px_figure *f, px_format fmt, double dpi, unsigned cha
         }
     }
     int fst = finish_surface(s, cst, &m);
-    if (fst != PX_OK) return fst;
-    if (pst != PX_OK) {
-        free(m.data);
-        return pst;
+    if (fst != PX_OK || pst != PX_OK) {
+        px_text_sink_free(&sink);
+        if (fst == PX_OK) free(m.data);
+        return fst != PX_OK ? fst : pst;
     }
     if (fmt == PX_FORMAT_PNG && f->reference_output) {
         int st = png_text_chunks(&m, f);
@@ -1658,6 +1660,16 @@ int px_figure_render(const px_figure *f, px_format fmt, double dpi, unsigned cha
     if (fmt == PX_FORMAT_SVG) {
         int st = svg_renumber(&m);
         if (st == PX_OK) st = svg_compact(&m, f->reference_output);
+        if (st == PX_OK && f->svg_text == PX_SVG_TEXT_TEXT) { /* after rounding: text is not numbers */
+            unsigned char *t;
+            size_t nt;
+            st = px_text_sink_splice(&sink, m.data, m.n, &t, &nt);
+            if (st == PX_OK) {
+                free(m.data);
+                m.data = t, m.n = nt, m.cap = nt;
+            }
+        }
+        px_text_sink_free(&sink);
         if (st == PX_OK) st = svg_describe(&m, f);
         if (st != PX_OK) {
             free(m.data);

@@ -385,3 +385,10 @@ int px_figure_reference_output(px_figure *f, int on)
     f->reference_output = on != 0;
     return PX_OK;
 }
+
+int px_figure_svg_text(px_figure *f, px_svg_text mode)
+{
+    if (!f || (mode != PX_SVG_TEXT_TEXT && mode != PX_SVG_TEXT_OUTLINE)) return PX_EINVAL;
+    f->svg_text = mode;
+    return PX_OK;
+}

@@ -51,6 +51,7 @@ struct px_figure {
     char **meta_key, **meta_val;
     size_t n_meta;
     int reference_output;  /* cairo's PNG writer and the former SVG rounding */
+    px_svg_text svg_text;  /* SVG text as <text> (default) or as glyph outlines */
 };
 
 

@@ -159,6 +159,13 @@ int px_text_runs(const char *text, int chem, void (*emit)(void *user, int kind, 
  * printf (the same bytes).  Off by default. */
 int px_figure_reference_output(px_figure *fig, int on);
 
+/* How SVG output writes text: as SVG <text> elements in the font the
+ * layout measured with (the default; small files, searchable, drawn by the
+ * viewer's copy of the font), or as cairo's glyph outlines (the same
+ * look everywhere, about seven times the bytes). */
+typedef enum px_svg_text { PX_SVG_TEXT_TEXT = 0, PX_SVG_TEXT_OUTLINE } px_svg_text;
+int px_figure_svg_text(px_figure *fig, px_svg_text mode);
+
 /* PDF only: put each panel on a page of its own (full page size). */
 int px_figure_page_per_panel(px_figure *fig, int on);
 

@@ -7,7 +7,11 @@
  * Plain text may carry formulas in braces: "{Fe^2+} at 25 °C". */
 #include "render/render.h"
 #include "render/text.h"
+#include "core/status.h"
 #include <ctype.h>
+#include <math.h>
+#include <stdio.h>
+#include <stdlib.h>
 #include <string.h>
 
 #define PX_SCRIPT_SCALE 0.68 /* size of sub- and superscripts relative to text */
@@ -167,14 +171,259 @@ void px_text_measure(cairo_t *cr, const char *text, int chem, double size, doubl
     *h = fe.ascent + fe.descent;
 }
 
+/* ---- SVG text (see text.h) ---- */
+
+static const cairo_user_data_key_t sink_key; /* its address names the sink on a context */
+
+/* The marker's colour: red 1 %, green and blue the element number's two
+ * base-100 digits in whole percent, opacity 0.01; cairo writes it as
+ * "fill:rgb(1%,G%,B%);fill-opacity:0.01;" (whole numbers, kept by the
+ * rounding pass). */
+#define PX_TEXT_MARK_RED 0.01
+#define PX_TEXT_MARK_ALPHA 0.01
+static const char mark_head[] = "fill:rgb(1%,";
+static const char mark_tail[] = "%);fill-opacity:0.01;";
+
+static void sk_put(px_text_sink *k, const char *s, size_t n)
+{
+    if (k->failed) return;
+    if (k->n + n + 1 > k->cap) {
+        size_t cap = k->cap ? k->cap : 4096;
+        while (cap < k->n + n + 1) cap *= 2;
+        char *d = realloc(k->s, cap);
+        if (!d) {
+            k->failed = 1;
+            return;
+        }
+        k->s = d;
+        k->cap = cap;
+    }
+    memcpy(k->s + k->n, s, n);
+    k->n += n;
+    k->s[k->n] = '\0';
+}
+
+static void sk_str(px_text_sink *k, const char *s) { sk_put(k, s, strlen(s)); }
+
+/* A number with at most three decimals, trailing zeros dropped (as the
+ * rounding pass leaves cairo's numbers). */
+static void sk_num(px_text_sink *k, double v)
+{
+    char b[48];
+    if (!isfinite(v)) v = 0;
+    int w = snprintf(b, sizeof b, "%.3f", v);
+    while (w > 0 && b[w - 1] == '0') w--;
+    if (w > 0 && b[w - 1] == '.') w--;
+    if (w == 2 && b[0] == '-' && b[1] == '0') b[0] = '0', w = 1; /* "-0" */
+    sk_put(k, b, (size_t)w);
+}
+
+static void sk_attr(px_text_sink *k, const char *name, double v)
+{
+    sk_str(k, " ");
+    sk_str(k, name);
+    sk_str(k, "=\"");
+    sk_num(k, v);
+    sk_str(k, "\"");
+}
+
+static void sk_colour(px_text_sink *k, const char *name, double r, double g, double b, double a)
+{
+    char c[64];
+    snprintf(c, sizeof c, " %s=\"#%02x%02x%02x\"", name, (unsigned)lround(fmin(fmax(r, 0), 1) * 255),
+             (unsigned)lround(fmin(fmax(g, 0), 1) * 255), (unsigned)lround(fmin(fmax(b, 0), 1) * 255));
+    sk_str(k, c);
+    if (a < 1) {
+        snprintf(c, sizeof c, " %s-opacity=\"", name);
+        sk_str(k, c);
+        sk_num(k, a);
+        sk_str(k, "\"");
+    }
+}
+
+static void sk_xml(px_text_sink *k, const char *s)
+{
+    for (; *s; s++) {
+        if (*s == '&') sk_str(k, "&amp;");
+        else if (*s == '<') sk_str(k, "&lt;");
+        else if (*s == '>') sk_str(k, "&gt;");
+        else if ((unsigned char)*s >= 0x20) sk_put(k, s, 1);
+    }
+}
+
+/* One <text> for the text at (x, y) in user space (any rotation goes to a
+ * transform), each run a <tspan> at the position cairo laid it out; then
+ * the marker in its place.  halo: the stroke's width and colour, or NULL. */
+static void svg_text(cairo_t *cr, px_text_sink *k, const char *text, int chem, double size,
+                     double x, double y, const double *halo)
+{
+    if (k->count >= PX_TEXT_MARK_MAX) k->failed = 1;
+    if (k->failed) return;
+    size_t *at = realloc(k->at, (size_t)(k->count + 2) * sizeof *at);
+    if (!at) {
+        k->failed = 1;
+        return;
+    }
+    k->at = at;
+    k->at[k->count] = k->n;
+    cairo_matrix_t m;
+    cairo_get_matrix(cr, &m);
+    int plain = m.xx == 1 && m.yy == 1 && m.xy == 0 && m.yx == 0;
+    double ox = plain ? m.x0 : 0, oy = plain ? m.y0 : 0; /* device offset of a pure translation */
+    sk_str(k, "<text xml:space=\"preserve\" font-family=\"" PX_FONT_FAMILY "\"");
+    sk_attr(k, "font-size", size);
+    double r = 0, g = 0, b = 0, a = 1;
+    cairo_pattern_get_rgba(cairo_get_source(cr), &r, &g, &b, &a);
+    sk_colour(k, "fill", r, g, b, a);
+    if (halo) {
+        sk_colour(k, "stroke", halo[1], halo[2], halo[3], halo[4]);
+        sk_attr(k, "stroke-width", halo[0]);
+        sk_str(k, " stroke-linejoin=\"round\" paint-order=\"stroke\"");
+    }
+    if (!plain) {
+        sk_str(k, " transform=\"matrix(");
+        const double v[6] = {m.xx, m.yx, m.xy, m.yy, m.x0, m.y0};
+        for (int i = 0; i < 6; i++) {
+            if (i) sk_str(k, ",");
+            sk_num(k, v[i]);
+        }
+        sk_str(k, ")\"");
+    }
+    sk_str(k, ">");
+    run runs[PX_RUN_MAX];
+    int nr = split_text(text, chem, runs);
+    double adv = 0.0;
+    for (int i = 0; i < nr; i++) {
+        double fs = runs[i].kind == RUN_NORMAL ? size : size * PX_SCRIPT_SCALE;
+        double dy = runs[i].kind == RUN_SUB ? size * PX_SUB_DROP
+                    : runs[i].kind == RUN_SUP ? -size * PX_SUP_RISE : 0.0;
+        set_font(cr, fs);
+        cairo_text_extents_t te;
+        cairo_text_extents(cr, runs[i].text, &te);
+        sk_str(k, "<tspan");
+        sk_attr(k, "x", ox + x + adv);
+        sk_attr(k, "y", oy + y + dy);
+        if (runs[i].kind != RUN_NORMAL) sk_attr(k, "font-size", fs);
+        sk_str(k, ">");
+        sk_xml(k, runs[i].text);
+        sk_str(k, "</tspan>");
+        adv += te.x_advance;
+    }
+    sk_str(k, "</text>");
+    if (k->failed) return;
+    k->at[++k->count] = k->n;
+    /* the marker: the text's box, so it shares the text's clip */
+    set_font(cr, size);
+    cairo_font_extents_t fe;
+    cairo_font_extents(cr, &fe);
+    int id = k->count - 1;
+    cairo_save(cr);
+    cairo_new_path(cr);
+    cairo_set_source_rgba(cr, PX_TEXT_MARK_RED, (id / 100) / 100.0, (id % 100) / 100.0,
+                          PX_TEXT_MARK_ALPHA);
+    cairo_rectangle(cr, x, y - fe.ascent, adv > 0 ? adv : size * 0.01, fe.ascent + fe.descent);
+    cairo_fill(cr);
+    cairo_restore(cr);
+}
+
+void px_text_sink_attach(cairo_t *cr, px_text_sink *sink)
+{
+    cairo_set_user_data(cr, &sink_key, sink, NULL);
+}
+
+void px_text_sink_free(px_text_sink *sink)
+{
+    if (!sink) return;
+    free(sink->s);
+    free(sink->at);
+    *sink = (px_text_sink){0};
+}
+
+/* Two whole-percent digits "D" or "DD" at s, followed by `end`; -1 if not. */
+static int mark_digits(const unsigned char *s, size_t n, size_t *i, char end)
+{
+    int v = 0, nd = 0;
+    while (*i < n && s[*i] >= '0' && s[*i] <= '9' && nd < 3) v = v * 10 + (s[(*i)++] - '0'), nd++;
+    if (nd == 0 || nd > 2 || *i >= n || s[*i] != end) return -1;
+    (*i)++;
+    return v;
+}
+
+int px_text_sink_splice(const px_text_sink *sink, const unsigned char *svg, size_t n,
+                        unsigned char **out, size_t *nout)
+{
+    *out = NULL;
+    *nout = 0;
+    if (sink->failed) return PX_ENOMEM;
+    size_t cap = n + sink->n + 1, o = 0, from = 0;
+    unsigned char *d = malloc(cap);
+    if (!d) return PX_ENOMEM;
+    const size_t hl = sizeof mark_head - 1, tl = sizeof mark_tail - 1;
+    for (size_t i = 0; i + hl < n;) {
+        const unsigned char *h = memchr(svg + i, 'f', n - i);
+        if (!h) break;
+        i = (size_t)(h - svg);
+        if (n - i < hl || memcmp(svg + i, mark_head, hl) != 0) {
+            i++;
+            continue;
+        }
+        size_t j = i + hl;
+        int hi = mark_digits(svg, n, &j, '%');
+        int lo = hi >= 0 && j < n && svg[j] == ',' ? (j++, mark_digits(svg, n, &j, '%')) : -1;
+        if (lo < 0 || j < 1 || n - (j - 1) < tl || memcmp(svg + j - 1, mark_tail, tl) != 0) {
+            i++;
+            continue;
+        }
+        int id = hi * 100 + lo;
+        /* the element around it: from its '<' to its "/>" */
+        size_t s0 = i;
+        while (s0 > from && svg[s0] != '<') s0--;
+        const unsigned char *e = svg + j;
+        while ((size_t)(e - svg) + 1 < n && !(e[0] == '/' && e[1] == '>')) e++;
+        if (svg[s0] != '<' || (size_t)(e - svg) + 1 >= n || id >= sink->count) {
+            free(d);
+            return PX_EIO;
+        }
+        size_t s1 = (size_t)(e - svg) + 2;
+        memcpy(d + o, svg + from, s0 - from);
+        o += s0 - from;
+        size_t el = sink->at[id + 1] - sink->at[id];
+        if (o + el + (n - s1) + 1 > cap) { /* a marker is shorter than its element */
+            cap = o + el + (n - s1) + 1 + sink->n;
+            unsigned char *g = realloc(d, cap);
+            if (!g) {
+                free(d);
+                return PX_ENOMEM;
+            }
+            d = g;
+        }
+        memcpy(d + o, sink->s + sink->at[id], el);
+        o += el;
+        from = i = s1;
+    }
+    memcpy(d + o, svg + from, n - from);
+    o += n - from;
+    *out = d;
+    *nout = o;
+    return PX_OK;
+}
+
 void px_text_draw(cairo_t *cr, const char *text, int chem, double size, double x, double y)
 {
-    layout(cr, text, chem, size, x, y, 1);
+    px_text_sink *k = cairo_get_user_data(cr, &sink_key);
+    if (k) svg_text(cr, k, text, chem, size, x, y, NULL);
+    else layout(cr, text, chem, size, x, y, 1);
 }
 
 void px_text_draw_halo(cairo_t *cr, const char *text, int chem, double size, double x, double y,
                        double halo_width, double r, double g, double b, double a)
 {
+    px_text_sink *k = cairo_get_user_data(cr, &sink_key);
+    if (k) {
+        const double halo[5] = {halo_width, r, g, b, a};
+        svg_text(cr, k, text, chem, size, x, y, halo);
+        return;
+    }
     cairo_save(cr);
     cairo_new_path(cr);
     layout(cr, text, chem, size, x, y, 2);

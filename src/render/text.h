@@ -21,6 +21,26 @@ void px_text_draw(cairo_t *cr, const char *text, int chem, double size, double x
  * colour (r, g, b, a) first, so text stays legible over lines and hatching. */
 void px_text_draw_halo(cairo_t *cr, const char *text, int chem, double size, double x, double y,
                        double halo_width, double r, double g, double b, double a);
+/* SVG text: while a sink is attached to cr, the drawing calls write each
+ * text as one SVG <text> element (a <tspan> per run, the halo as a stroke
+ * painted first) into the sink, and draw in its place a marker: the text's
+ * box filled in a colour that carries the element's number (PX_TEXT_MARK_*),
+ * which px_text_sink_splice replaces by the element in cairo's SVG, so the
+ * text keeps its place in the drawing order and its clip. */
+#define PX_TEXT_MARK_MAX 10000 /* elements a figure can hold (two 2-digit colour channels) */
+typedef struct px_text_sink {
+    char *s;        /* the elements, one after another */
+    size_t n, cap;
+    size_t *at;     /* start of element k in s; at[count] = n */
+    int count, failed;
+} px_text_sink;
+void px_text_sink_attach(cairo_t *cr, px_text_sink *sink);
+void px_text_sink_free(px_text_sink *sink);
+/* Replace the markers in the SVG text svg[0..n) by their elements: a new
+ * buffer in *out (free it); PX_OK, PX_ENOMEM, or PX_EIO when a marker
+ * names no element. */
+int px_text_sink_splice(const px_text_sink *sink, const unsigned char *svg, size_t n,
+                        unsigned char **out, size_t *nout);
 /* Draw rotated by -90 degrees (for the y axis title), centred on (x, y). */
 void px_text_draw_vertical(cairo_t *cr, const char *text, double size, double x, double y);
 
