@@ -6,7 +6,8 @@ tests/scripts/test_plot.lua, read from between its BEGIN/END TEST MAP marks.
 
 Checks, each with an outside reference:
   * SVG is well-formed XML (Python's xml.etree parser) and its <desc> names
-    every field in phlox notation (the figure's words; glyphs are paths).
+    every field in phlox notation; field labels are <text> with their
+    sub- and superscripts; fig:svg_text("outline") still gives glyph paths.
   * Two runs in separate processes give byte-identical SVG and PDF.
   * PDF starts with "%PDF-" (ISO 32000-1, 7.5.2) and a grid saved with
     pages = true has one /Type /Page object per panel.
@@ -84,6 +85,8 @@ plot.curves({ { x = xs, y = ys, label = "Fe(OH)3(s) and a rather long legend ent
     y = { name = "solubility", unit = "mol/kg", log = true },
     title = "A deliberately long title that would run past both edges of a narrow figure",
     width = 240, height = 200, file = D .. "c.png", dpi = 72 })
+fig:svg_text("outline")
+fig:save(D .. "outline.svg")
 local x, y, w, h = fig:plot_rect(1, %(dpi)d)
 local out = { rect = { x, y, w, h }, fills = {}, water = palette.water,
               window = { map.x.min, map.x.max, map.y.min, map.y.max } }
@@ -157,8 +160,57 @@ def main():
             check(("field: %s\n" % s) in text, "SVG desc names field %s" % s)
         check("Equilibrium thermodynamics: shows what can form, not how fast." in text, "caution in SVG")
 
+        # SVG text as <text>: each field label typeset as chemists write
+        # formulas (IUPAC Green Book, 3rd ed., 2.10: counts as right
+        # subscripts, charges as right superscripts), with a minus sign
+        # U+2212; the runs are written out here by hand from that rule.
+        typeset = {
+            "M(s)": [("M(s)", 0)],
+            "M^2+": [("M", 0), ("2+", 1)],
+            "M(OH)2(s)": [("M(OH)", 0), ("2", -1), ("(s)", 0)],
+            "MO4^-": [("MO", 0), ("4", -1), ("\u2212", 1)],
+            "MH2(g)": [("MH", 0), ("2", -1), ("(g)", 0)],
+        }
+        check(sorted(typeset) == sorted(species), "typeset runs written for every field")
+        texts = list(root.iter(svg_ns + "text"))
+        check(len(texts) > 10, "SVG labels are <text> elements (%d)" % len(texts))
+        check(b"<symbol" not in open(os.path.join(a, "m.svg"), "rb").read(), "no glyph outlines in text SVG")
+        check(all(t.get("font-family") == "DejaVu Sans" for t in texts), "text in the layout's font")
+        check(any(t.get("paint-order") == "stroke" and t.get("stroke") == "#ffffff" for t in texts),
+              "label halo: a white stroke painted under the text")
+
+        def runs_of(t):
+            base = float(t.get("font-size"))
+            out = []
+            for sp in t.findall(svg_ns + "tspan"):
+                fs = float(sp.get("font-size", base))
+                out.append((sp.text or "", float(sp.get("y")), fs))
+            return base, out
+
+        for sp, want in typeset.items():
+            found = False
+            for t in texts:
+                base, got = runs_of(t)
+                if [g[0] for g in got] != [w[0] for w in want]:
+                    continue
+                y0 = next(g[1] for g, w in zip(got, want) if w[1] == 0)
+                ok = True
+                for g, w in zip(got, want):
+                    if w[1] == 0:
+                        ok &= g[2] == base and abs(g[1] - y0) < 1e-9
+                    else:  # smaller, and below (sub) or above (sup) the baseline; SVG y grows down
+                        ok &= g[2] < base and (g[1] - y0) * -w[1] > 0
+                found |= ok
+            check(found, "field %s drawn as <text> with its sub- and superscripts" % sp)
+
+        # the glyph-outline path, still selectable: no <text>, glyphs as paths
+        out_svg = open(os.path.join(a, "outline.svg"), "rb").read()
+        ET.fromstring(out_svg)
+        check(b"<text" not in out_svg and b"<symbol" in out_svg, "fig:svg_text('outline') draws glyph outlines")
+        check(len(out_svg) > 3 * os.path.getsize(os.path.join(a, "m.svg")), "outline SVG is the larger one")
+
         # determinism across processes
-        for f in ("m.svg", "m.pdf", "g.pdf"):
+        for f in ("m.svg", "outline.svg", "m.pdf", "g.pdf"):
             same = open(os.path.join(a, f), "rb").read() == open(os.path.join(b, f), "rb").read()
             check(same, "%s identical in two runs" % f)
 

@@ -139,6 +139,23 @@ check(svg:find("invented test geometry, not data", 1, true), "extra stamp line")
 check(svg:find("T = 25 °C", 1, true) and svg:find("I = 0 mol/kg", 1, true), "conditions in the stamp")
 check(svg:find("program: phlox " .. core.version, 1, true), "program version in the stamp")
 check(svg:find("neutral pH 7.00 at 25 °C", 1, true), "neutral pH label")
+-- the words drawn as SVG <text> (not only named in <desc>): the drawing
+-- without <desc>, <title> and <metadata>, each <text> as its runs joined
+do
+  local drawing = svg:gsub("<desc>.-</desc>", ""):gsub("<title>.-</title>", ""):gsub("<metadata.-</metadata>", "")
+  local words = {}
+  for body in drawing:gmatch("<text[^>]*>(.-)</text>") do words[#words + 1] = body:gsub("<[^>]*>", "") end
+  local drawn = "\n" .. table.concat(words, "\n") .. "\n"
+  check(drawn:find("\nE / V vs SHE\n", 1, true) and drawn:find("\npH\n", 1, true), "axis titles drawn as <text>")
+  check(drawn:find("neutral pH 7.00 at 25 °C", 1, true), "neutral pH label drawn as <text>")
+  check(drawn:find(plot.caution, 1, true), "caution drawn as <text>")
+  check(drawn:find("program: phlox " .. core.version, 1, true), "program version drawn as <text>")
+  -- drawing order kept: the water lines (dashed) come before the labels over them
+  local line_at = drawing:find("stroke-dasharray", 1, true)
+  local label_at = drawing:find('paint-order="stroke"', 1, true)
+  check(line_at and label_at and line_at < label_at, "labels with halos drawn after the lines")
+  check(not drawing:find("<symbol", 1, true), "no glyph outlines in the default SVG")
+end
 plot.map(map, { file = dir .. "/m.pdf" })
 check(slurp(dir .. "/m.pdf"):sub(1, 5) == "%PDF-", "PDF header")
 -- identical inputs, identical bytes (two separate figures)

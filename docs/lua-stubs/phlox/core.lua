@@ -440,6 +440,10 @@ function phlox.Figure:stamp(line) end
 ---@param on? any
 function phlox.Figure:stamp_below(on) end
 
+--- (C) phlox.Figure:svg_text("text" | "outline")
+---@param text string
+function phlox.Figure:svg_text(text) end
+
 --- (C) phlox.Figure:text(panel, x, y, text [, chem, size, color])
 ---@param panel integer
 ---@param x number
