@@ -3,7 +3,8 @@
 -- timed as a user runs it: one process, then sweep.parallel on 2 worker
 -- processes, then 2 workers writing PNG as well; each on the figure output
 -- path and on the former one (fig:reference_output: cairo's PNG writer,
--- SVG numbers rounded by strtod/printf) in the same run.  First the cost of
+-- SVG numbers rounded by strtod/printf) in the same run, and the SVG study
+-- with text as glyph outlines (fig:svg_text "outline") against SVG <text>.  First the cost of
 -- one map and one figure by each path.  Prints wall and CPU times (the
 -- machine may be loaded: CPU / 2 is the wall time on 2 idle cores) and the
 -- ratios; targets (issue 17, on 2 cores): under 1 s with SVG, under 3 s
@@ -43,11 +44,13 @@ local function cpu_all()
   return t / 100, true
 end
 
--- One figure saved: the new output path, or the former one (cairo's PNG
--- writer, SVG numbers by strtod/printf) when ref.
-local function save(m, file, ref)
+-- One figure saved: path "new" the output path, "ref" the former one
+-- (cairo's PNG writer, SVG numbers by strtod/printf), "outline" the output
+-- path with SVG text as glyph outlines.
+local function save(m, file, path)
   local fig = plot.map(m, {})
-  if ref then fig:reference_output(true) end
+  if path == "ref" then fig:reference_output(true) end
+  if path == "outline" then fig:svg_text("outline") end
   local ok, err = fig:save(file, DPI)
   assert(ok, err)
 end
@@ -60,8 +63,8 @@ if MODE then -- the study itself: a child process so each run starts cold
   local res, fails = sweep.parallel(points, function(p)
     local m = phlox.map { library = libs[p.el], element = p.el, T_C = p.T_C, ligand = "Cl", ligand_activity = p.a }
     local base = ("%s/%s-%d-%d"):format(OUT, p.el, p.T_C, math.floor(math.log(p.a, 10) + 0.5))
-    save(m, base .. ".svg", path == "ref")
-    if fmt == "png" then save(m, base .. ".png", path == "ref") end
+    save(m, base .. ".svg", path)
+    if fmt == "png" then save(m, base .. ".png", path) end
     return #m.fields
   end, { workers = tonumber(workers), quiet = true })
   assert(#fails == 0 and #res == 240, "the study failed: " .. tostring(fails[1] and fails[1].message))
@@ -94,29 +97,43 @@ local function per(fn)
   return (os.clock() - c0) / NF
 end
 local cmap = per(function() phlox.map { library = culib, element = "Cu", T_C = 150, ligand = "Cl", ligand_activity = 1e-2 } end)
-local c = {}
+local function size_of(file)
+  local f = assert(io.open(file, "rb"))
+  local n = #f:read("a")
+  f:close()
+  return n
+end
+local c, one = {}, {}
 for _, fmt in ipairs { "svg", "png" } do
-  for _, path in ipairs { "new", "ref" } do
-    c[fmt .. path] = per(function() save(m, dir .. "/one." .. fmt, path == "ref") end)
+  for _, path in ipairs { "new", "ref", "outline" } do
+    if fmt == "svg" or path ~= "outline" then
+      c[fmt .. path] = per(function() save(m, dir .. "/one." .. fmt, path) end)
+      one[fmt .. path] = size_of(dir .. "/one." .. fmt)
+    end
   end
 end
 print(("per figure (Cu-Cl, 150 C; CPU): map %.2f ms; SVG %.2f ms (former path %.2f ms, %.2fx); "
   .. "PNG at %d dpi %.2f ms (former path %.2f ms, %.2fx)"):format(1e3 * cmap, 1e3 * c.svgnew, 1e3 * c.svgref,
   c.svgref / c.svgnew, DPI, 1e3 * c.pngnew, 1e3 * c.pngref, c.pngref / c.pngnew))
+print(("per SVG figure: text as <text> %.2f ms, %.1f kB; as glyph outlines %.2f ms, %.1f kB (%.2fx the time, %.1fx the bytes)")
+  :format(1e3 * c.svgnew, one.svgnew / 1024, 1e3 * c.svgoutline, one.svgoutline / 1024, c.svgoutline / c.svgnew,
+    one.svgoutline / one.svgnew))
 
-local runs = {}
-for _, mode in ipairs { "svg:1:new", "svg:2:new", "svg:2:ref", "png:2:new", "png:2:ref" } do
+-- the study's SVG files: how many, and their mean size in bytes
+local function svg_files()
+  local bytes, n = 0, 0
+  for _, name in ipairs(core.list_dir(dir)) do
+    if name:match("%.svg$") and name ~= "one.svg" then
+      bytes, n = bytes + size_of(dir .. "/" .. name), n + 1
+    end
+  end
+  return n, bytes / math.max(n, 1)
+end
+local runs, sizes = {}, {}
+for _, mode in ipairs { "svg:1:new", "svg:2:outline", "svg:2:new", "svg:2:ref", "png:2:new", "png:2:ref" } do
   local wall, cpu = timed(mode)
   runs[mode] = { wall = wall, cpu = cpu }
-end
-local svg_bytes, n = 0, 0
-for _, name in ipairs(core.list_dir(dir)) do
-  if name:match("%.svg$") and name ~= "one.svg" then
-    local f = io.open(dir .. "/" .. name, "rb")
-    svg_bytes = svg_bytes + #f:read("a")
-    f:close()
-    n = n + 1
-  end
+  if mode:match("^svg:2") then sizes[mode] = { svg_files() } end
 end
 os.execute("rm -rf " .. q(dir))
 local function line(what, mode, ref, target)
@@ -127,9 +144,15 @@ local function line(what, mode, ref, target)
 end
 line("240-map study, one SVG each, 1 process", "svg:1:new")
 line("240-map study, one SVG each, 2 workers", "svg:2:new", "svg:2:ref", 1)
+local o, t = runs["svg:2:outline"], runs["svg:2:new"]
+print(("240-map study, one SVG each, 2 workers, text as glyph outlines: wall %.2f s, CPU %.2f s (CPU / 2 cores %.2f s); "
+  .. "SVG <text> takes %.2fx less CPU"):format(o.wall, o.cpu, o.cpu / 2, o.cpu / t.cpu))
 line("240-map study with PNG too, 2 workers", "png:2:new", "png:2:ref", 3)
+local n, avg = table.unpack(sizes["svg:2:new"])
+local _, avg_out = table.unpack(sizes["svg:2:outline"])
 print(("the wall times count this machine's load; CPU / 2 is the wall time on 2 idle cores. "
-  .. "SVG size: %d files, %.0f kB each on average"):format(n, svg_bytes / n / 1024))
+  .. "SVG size: %d files, %.0f kB each on average with <text>, %.0f kB with glyph outlines (%.1fx)")
+  :format(n, avg / 1024, avg_out / 1024, avg_out / avg))
 
 -- The held-at-25-C lookup of one map, uncached (every call evaluates each
 -- log K species' reaction at 25 C and at T) against the cache.

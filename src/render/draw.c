@@ -1386,8 +1386,8 @@ static int svg_compact(membuf *m, int reference)
     return PX_OK;
 }
 
-/* The figure's words for SVG: cairo draws glyphs as paths, so without this
- * an SVG says nothing a search, a screen reader or a test can find.  One
+/* The figure's words for SVG, whole and in phlox notation (with glyph
+ * outlines the file's only words) for a search, a screen reader or a test.  One
  * <title> (the first panel title) and one <desc> with a line per panel
  * title, axis title, field label (phlox notation), legend entry, text and
  * stamp line, XML-escaped, inserted after the root element's start tag. */

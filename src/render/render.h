@@ -7,10 +7,11 @@
  * draws it; the output format follows the file extension.  Identical figures
  * give identical SVG and PDF bytes (no timestamps; PDF dates are pinned).
  * Margins follow the measured tick labels and titles, so no text is cut off
- * at the figure's edges.  SVG output draws glyphs as paths, so it also
- * carries the figure's words as an SVG <title> and <desc> (panel titles,
- * axis titles, field labels in phlox notation, legend entries, stamp) for
- * search, screen readers and tests.
+ * at the figure's edges.  SVG output writes text as SVG <text> (or as
+ * glyph outlines, px_figure_svg_text) and also carries the figure's words
+ * as an SVG <title> and <desc> (panel titles, axis titles, field labels in
+ * phlox notation, legend entries, stamp) for search, screen readers and
+ * tests.
  *
  * Units: figure sizes in points (1/72 in); PNG pixels = points x dpi / 72.
  * Coordinates of items are data coordinates of their panel. */
@@ -162,7 +163,7 @@ int px_figure_reference_output(px_figure *fig, int on);
 /* How SVG output writes text: as SVG <text> elements in the font the
  * layout measured with (the default; small files, searchable, drawn by the
  * viewer's copy of the font), or as cairo's glyph outlines (the same
- * look everywhere, about seven times the bytes). */
+ * look everywhere, about eight times the bytes). */
 typedef enum px_svg_text { PX_SVG_TEXT_TEXT = 0, PX_SVG_TEXT_OUTLINE } px_svg_text;
 int px_figure_svg_text(px_figure *fig, px_svg_text mode);
 

@@ -294,6 +294,42 @@ static void test_svg_rounding(void **state)
     assert_int_equal(nf, nr);
     assert_memory_equal(fast, ref, nf);
     free(fast), free(ref);
+    /* and with text as glyph outlines, where most numbers are */
+    assert_int_equal(px_figure_svg_text(f, PX_SVG_TEXT_OUTLINE), PX_OK);
+    assert_int_equal(px_figure_render(f, PX_FORMAT_SVG, 72, &ref, &nr), PX_OK);
+    assert_int_equal(px_figure_reference_output(f, 0), PX_OK);
+    assert_int_equal(px_figure_render(f, PX_FORMAT_SVG, 72, &fast, &nf), PX_OK);
+    assert_int_equal(nf, nr);
+    assert_memory_equal(fast, ref, nf);
+    free(fast), free(ref);
+    px_figure_free(f);
+}
+
+/* SVG text: every marker replaced by its <text>, none left; the outline
+ * path has glyphs and no <text>; an unknown mode is refused. */
+static void test_svg_text(void **state)
+{
+    (void)state;
+    px_figure *f = two_fields();
+    unsigned char *t, *o;
+    size_t nt, no;
+    assert_int_equal(px_figure_render(f, PX_FORMAT_SVG, 72, &t, &nt), PX_OK);
+    assert_int_equal(px_figure_svg_text(f, PX_SVG_TEXT_OUTLINE), PX_OK);
+    assert_int_equal(px_figure_render(f, PX_FORMAT_SVG, 72, &o, &no), PX_OK);
+    assert_int_equal(px_figure_svg_text(f, (px_svg_text)7), PX_EINVAL);
+    char *ts = malloc(nt + 1), *os = malloc(no + 1);
+    assert_non_null(ts);
+    assert_non_null(os);
+    memcpy(ts, t, nt), ts[nt] = '\0';
+    memcpy(os, o, no), os[no] = '\0';
+    assert_non_null(strstr(ts, "<text "));
+    assert_non_null(strstr(ts, "font-family=\"DejaVu Sans\""));
+    assert_null(strstr(ts, "fill:rgb(1%,")); /* no marker left */
+    assert_null(strstr(ts, "<symbol"));
+    assert_null(strstr(os, "<text"));
+    assert_non_null(strstr(os, "<symbol"));
+    assert_true(nt < no);
+    free(ts), free(os), free(t), free(o);
     px_figure_free(f);
 }
 
@@ -410,6 +446,7 @@ int main(void)
         cmocka_unit_test(test_bad_input),     cmocka_unit_test(test_layout),
         cmocka_unit_test(test_png_writer),    cmocka_unit_test(test_png_encode_alpha),
         cmocka_unit_test(test_svg_rounding),
+        cmocka_unit_test(test_svg_text),
     };
     return cmocka_run_group_tests(tests, NULL, NULL);
 }
