@@ -178,6 +178,11 @@ function phlox_core.polygon_pole(xs, ys, tol) end
 ---@return any # bar | nil, message
 function phlox_core.psat(T) end
 
+--- (C) phlox_core.reaction_terms(text) -> {{formula, charge, state, elements, nu}...} | nil, message:
+---@param text string
+---@return any # {{formula, charge, state, elements, nu}...} | nil, message:
+function phlox_core.reaction_terms(text) end
+
 --- (C) phlox_core.read_file(path)
 ---@param path string
 function phlox_core.read_file(path) end
