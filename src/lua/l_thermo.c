@@ -561,6 +561,17 @@ static int l_reaction_terms(lua_State *L)
     return 1;
 }
 
+/* core.ligand_order() -> {"Cl", "S", ...}: the ligand files in load order */
+static int l_ligand_order(lua_State *L)
+{
+    lua_newtable(L);
+    for (size_t i = 0; px_data_ligand_z(i); i++) {
+        lua_pushstring(L, px_element_symbol(px_data_ligand_z(i)));
+        lua_rawseti(L, -2, (lua_Integer)i + 1);
+    }
+    return 1;
+}
+
 /* core.check_files({path...}) -> ok, {problem...} */
 static int l_check_files(lua_State *L)
 {
@@ -607,7 +618,7 @@ void px_lua_open_thermo(lua_State *L)
     static const luaL_Reg funcs[] = {
         {"database", l_database}, {"water", l_water},         {"psat", l_psat},
         {"default_pressure", l_default_pressure}, {"formula", l_formula},
-        {"reaction_terms", l_reaction_terms},
+        {"reaction_terms", l_reaction_terms}, {"ligand_order", l_ligand_order},
         {"check_files", l_check_files}, {NULL, NULL}};
     luaL_newmetatable(L, DB_MT);
     luaL_newlib(L, methods);

@@ -130,6 +130,10 @@ function phlox_core.isatty(fd) end
 ---@return any # boolean (SIGKILL to a worker this process started)
 function phlox_core.kill(pid) end
 
+--- (C) phlox_core.ligand_order() -> {"Cl", "S", ...}: the ligand files in load order
+---@return any # {"Cl", "S", ...}: the ligand files in load order
+function phlox_core.ligand_order() end
+
 --- (C) phlox_core.list_dir(path) -> {name...} sorted | nil, message
 ---@param path string
 ---@return any # {name...} sorted | nil, message
