@@ -32,7 +32,8 @@ set(PHLOX_PUBLIC_HEADERS_core
     thermo/species.h=species thermo/thermo.h=thermo thermo/basis.h=basis
     thermo/practice.h=practice
     equil/equil.h=equil equil/speciate.h=speciate
-    diagram/diagram.h=diagram diagram/emap.h=emap diagram/rmap.h=rmap)
+    diagram/diagram.h=diagram diagram/potential.h=potential diagram/emap.h=emap
+    diagram/rmap.h=rmap)
 set(PHLOX_PUBLIC_HEADERS_data data/data.h=data)
 set(PHLOX_PUBLIC_HEADERS_render render/render.h=render)
 set(PHLOX_PUBLIC_HEADERS ${PHLOX_PUBLIC_HEADERS_core} ${PHLOX_PUBLIC_HEADERS_data}
