@@ -170,11 +170,18 @@ local LIBRARY_OPTS = spec("phlox.library", {
   user = "strings",                     -- user files that add, replace or exclude species
   dielectric = "fernandez|johnson-norton", -- water's dielectric constant: Fernandez et al. 1997 (IAPWS R8-97) or Johnson and Norton 1991
 })
+local library_build
 function phlox.library(spec_)
   local spec = spec_
   if type(spec) == "string" then spec = { spec } end
   if type(spec) ~= "table" then core.user_error("phlox.library: give a list of element symbols, got " .. type(spec)) end
   options("phlox.library", LIBRARY_OPTS, spec)
+  return library_build(spec, {})
+end
+
+-- the library of spec, with the element files of model_elements loaded too
+-- (for isocoulombic model reactions only; not in lib.elements)
+function library_build(spec, model_elements)
   local db = core.database(spec.dielectric)
   local elements, groups, listed = {}, {}, {}
   local function add_element(sym)
@@ -193,13 +200,16 @@ function phlox.library(spec_)
   end
   local order = {}
   for _, e in ipairs(elements) do order[#order + 1] = e end
+  for _, e in ipairs(model_elements) do -- loaded for model reactions only
+    if not listed[e] then order[#order + 1] = e end
+  end
   table.sort(order, function(a, b)
     local la, lb = LIGAND_ORDER[a] or 0, LIGAND_ORDER[b] or 0
     if la ~= lb then return la < lb end
     return a < b
   end)
   local filter = { "H", "O" }
-  for _, e in ipairs(elements) do filter[#filter + 1] = e end
+  for _, e in ipairs(order) do filter[#filter + 1] = e end
   local files, sources = {}, {}
   local function load(rel, opts)
     local text, where = phlox.read_library_file(rel)
@@ -226,7 +236,39 @@ function phlox.library(spec_)
     sources[path] = provenance.record_file(path, text).sha256
     files[#files + 1] = path
   end
-  return setmetatable({ db = db, elements = elements, files = files, sources = sources }, phlox.Library)
+  local lib = setmetatable({ db = db, elements = elements, files = files, sources = sources }, phlox.Library)
+  -- an isocoulombic model reaction (docs/element-files.md) may name another
+  -- metal's complex: its element files are loaded too (lib.model_elements)
+  local extra = phlox.model_elements(lib, filter)
+  if #extra > 0 then
+    local more = {}
+    for _, e in ipairs(model_elements) do more[#more + 1] = e end
+    for _, e in ipairs(extra) do more[#more + 1] = e end
+    return library_build(spec, more)
+  end
+  if #model_elements > 0 then lib.model_elements = model_elements end
+  return lib
+end
+
+--- Elements (not in `loaded`) of species that the isocoulombic model
+--  reactions of lib's species name but lib lacks; sorted, {} if none.
+function phlox.model_elements(lib, loaded)
+  local have, want, out = {}, {}, {}
+  for _, e in ipairs(loaded) do have[e] = true end
+  for _, s in ipairs(lib:list()) do
+    if s.estimate_model then
+      for term in (s.estimate_model:gsub(" = ", " + ") .. " + "):gmatch("(.-) %+ ") do
+        local f = term:match("^[%d/.]+ (.+)$") or term
+        if f ~= "e-" and not lib:species(f) then
+          for sym in f:gsub("%^.*$", ""):gsub("%(.-%)", ""):gmatch("%u%l?") do
+            if not have[sym] and not want[sym] then want[sym] = true; out[#out + 1] = sym end
+          end
+        end
+      end
+    end
+  end
+  table.sort(out)
+  return out
 end
 
 phlox.Library = {}

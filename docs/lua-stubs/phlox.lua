@@ -217,6 +217,13 @@ function phlox.map(opts) end
 ---@return any
 function phlox.merge_notes(results, skip) end
 
+--- Elements (not in `loaded`) of species that the isocoulombic model
+---  reactions of lib's species name but lib lacks; sorted, {} if none.
+---@param lib? phlox.Library
+---@param loaded any
+---@return any
+function phlox.model_elements(lib, loaded) end
+
 ---@param fname any
 ---@param sp any
 ---@param opts? table

@@ -473,15 +473,53 @@ static void read_logk(ctx *c, int t, pxd_entry *e, double eu)
         REPORT(c, PX_DATA_ERROR, "logK", "missing 'logK' (log K at 25 C) or 'logK_T'");
     if (rt == 1 && !isnan(sp->logk.dH))
         REPORT(c, PX_DATA_WARNING, "dH", "dH is not used when logK_T is given");
-    char method[LOGK_METHOD_MAX];
+    char method[LOGK_METHOD_MAX] = "";
+    char model[sizeof sp->logk.model] = "";
     int ty = rawfield(c->L, t, "estimate");
     lua_pop(c->L, 1);
+    int rm = 0;
     if (ty == LUA_TTABLE) {
-        REPORT(c, PX_DATA_ERROR, "estimate",
-               "a logk species names its estimation method: estimate = \"%s\" "
-               "(estimate = { Cp = ..., V = ... } is for model 'hkf')",
-               LOGK_METHOD_ISOCOULOMBIC);
-    } else if (get_str(c, t, "estimate", "estimate", method, sizeof method) == 1) {
+        /* estimate = { method = "isocoulombic", model = "<reaction>" } */
+        get_table(c, t, "estimate", "estimate");
+        int p = lua_gettop(c->L);
+        static const char *const k[] = {"method", "model", NULL};
+        check_keys(c, p, k, "estimate");
+        rm = get_str(c, p, "method", "estimate.method", method, sizeof method);
+        if (rm == 0)
+            REPORT(c, PX_DATA_ERROR, "estimate.method",
+                   "name the method: estimate = { method = \"%s\", model = \"<reaction>\" } "
+                   "(estimate = { Cp = ..., V = ... } is for model 'hkf')",
+                   LOGK_METHOD_ISOCOULOMBIC);
+        int rmod = get_str(c, p, "model", "estimate.model", model, sizeof model);
+        if (rmod == 1) {
+            px_reaction mr;
+            char msg[200];
+            if (px_reaction_parse_balanced(model, &mr, msg, sizeof msg) != PX_OK) {
+                REPORT(c, PX_DATA_ERROR, "estimate.model", "model reaction '%s': %s", model, msg);
+                rm = -1;
+            } else {
+                for (int i = 0; i < mr.n; i++)
+                    if (!strcmp(mr.sp[i].text, sp->f.text)) {
+                        REPORT(c, PX_DATA_ERROR, "estimate.model",
+                               "the model reaction must not contain the species itself (%s)",
+                               sp->f.text);
+                        rm = -1;
+                    }
+            }
+        } else if (rmod == 0 && rm == 1) {
+            REPORT(c, PX_DATA_ERROR, "estimate.model",
+                   "the table form names a model reaction with measured temperature data: "
+                   "model = \"<reaction>\" (or write estimate = \"%s\")",
+                   LOGK_METHOD_ISOCOULOMBIC);
+            rm = -1;
+        } else if (rmod == -1) {
+            rm = -1;
+        }
+        lua_pop(c->L, 1);
+    } else {
+        rm = get_str(c, t, "estimate", "estimate", method, sizeof method);
+    }
+    if (rm == 1) {
         if (strcmp(method, LOGK_METHOD_ISOCOULOMBIC) != 0)
             REPORT(c, PX_DATA_ERROR, "estimate",
                    "unknown estimation method '%s' (model 'logk' knows \"%s\")", method,
@@ -491,8 +529,10 @@ static void read_logk(ctx *c, int t, pxd_entry *e, double eu)
                    "an estimate stands in for missing temperature data: this species has %s; "
                    "drop the estimate",
                    rt == 1 ? "logK_T" : "dH");
-        else
+        else {
             sp->logk.estimate = PX_LOGK_EST_ISOCOULOMBIC;
+            memcpy(sp->logk.model, model, sizeof model);
+        }
     }
 }
 

@@ -210,6 +210,10 @@ static void push_species(lua_State *L, const px_species *sp, long index)
             lua_pushboolean(L, 1);
             lua_setfield(L, -2, "logK_T");
         }
+        if (sp->logk.estimate == PX_LOGK_EST_ISOCOULOMBIC && sp->logk.model[0]) {
+            lua_pushstring(L, sp->logk.model); /* the isocoulombic model reaction */
+            lua_setfield(L, -2, "estimate_model");
+        }
     }
     lua_pushstring(L, sp->source ? sp->source : "");
     lua_setfield(L, -2, "source");

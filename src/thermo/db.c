@@ -246,7 +246,7 @@ px_tbasis px_species_tbasis(const px_species *sp, const char **method)
             b = PX_TBASIS_MEASURED;
         } else if (sp->logk.estimate == PX_LOGK_EST_ISOCOULOMBIC) {
             b = PX_TBASIS_ESTIMATED;
-            m = PX_METHOD_ISOCOULOMBIC;
+            m = PX_METHOD_ISOCOULOMBIC; /* with or without a model reaction (logk.model) */
         } else {
             b = PX_TBASIS_HELD;
         }

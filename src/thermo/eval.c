@@ -39,6 +39,8 @@ typedef struct logk_cache {
     px_reaction r;
     int self;
     long idx[PX_REACTION_MAX];
+    char model_text[256]; /* isocoulombic model reaction (px_logk_params.model) */
+    px_reaction model;    /* parsed; model.n = 0 if none */
 } logk_cache;
 
 struct px_thermo_ws {
@@ -200,6 +202,9 @@ static int species_G(px_thermo_ws *ws, const px_db *db, const px_species *sp, do
                      double P, double *G);
 static int species_props(px_thermo_ws *ws, const px_db *db, const px_species *sp, double T,
                          double P, px_thermo_props *out);
+static int is_iso(const px_species *sp);
+static int logk_find_self(px_thermo_ws *ws, const px_species *sp, px_reaction *r, int *self);
+static int push(px_thermo_ws *ws, const px_species *sp);
 
 static int cache_prepare(px_thermo_ws *ws, const px_db *db, double T, double P)
 {
@@ -245,57 +250,117 @@ static int electron_G(px_thermo_ws *ws, const px_db *db, double T, double P, dou
 
 /* ---- the isocoulombic estimate (Gu, Gammons and Bloom 1994, GCA 58, 3545) ---- */
 
+/* total positive ionic charge, products minus reactants; an electron counts
+ * as -1 H^+ (e- = 1/2 H2(g) - H^+) */
+static double positive_charge(const px_reaction *r)
+{
+    double pos = 0;
+    for (int i = 0; i < r->n; i++) {
+        if (r->sp[i].state == PX_STATE_E)
+            pos -= r->nu[i];
+        else if (r->sp[i].charge > 0)
+            pos += r->nu[i] * r->sp[i].charge;
+    }
+    return pos;
+}
+
 int px_reaction_isocoulombic_n(const px_reaction *r, double *n)
 {
     if (!r || !n)
         return PX_EINVAL;
-    double pos = 0; /* total positive ionic charge, products minus reactants */
-    for (int i = 0; i < r->n; i++) {
-        if (r->sp[i].state == PX_STATE_E)
-            pos -= r->nu[i]; /* e- = 1/2 H2(g) - H^+ */
-        else if (r->sp[i].charge > 0)
-            pos += r->nu[i] * r->sp[i].charge;
-    }
+    double pos = positive_charge(r);
     /* H2O(l) = H^+ + OH^- adds one positive charge per unit: R + n W balances */
     *n = pos == 0 ? 0 : -pos;
     return PX_OK;
 }
 
-/* dG (and with full, dH, dS, dCp in p) of H2O(l) = H^+ + OH^- at (T, P), and
- * dG at Tr, Pr from the three species' dfG */
-static int water_ionisation(px_thermo_ws *ws, const px_db *db, const char *who, double T,
-                            double P, int full, px_thermo_props *p, double *dGref)
+/* G of sp at Tr, Pr from its dfG, or for a reaction-defined species from its
+ * record's dG at Tr and its reaction partners' G at Tr, Pr; no evaluation at
+ * another T (the G cache of ws holds one T, P at a time). */
+static int species_G_ref(px_thermo_ws *ws, const px_db *db, const char *who, const px_formula *f,
+                         double *G)
 {
-    static const char *const names[3] = {"H^+", "OH^-", "H2O(l)"};
-    static const double nu[3] = {1, 1, -1};
+    if (f->state == PX_STATE_E) { /* as electron_G: G(e-) = G(H2,g)/2 */
+        px_formula h2;
+        memset(&h2, 0, sizeof h2);
+        snprintf(h2.text, sizeof h2.text, "%s", "H2(g)");
+        double g;
+        int st = species_G_ref(ws, db, who, &h2, &g);
+        *G = 0.5 * g;
+        return st;
+    }
+    const px_species *sp = db ? px_db_find(db, f->text) : NULL;
+    if (!sp)
+        return werr(ws, PX_ENOTFOUND, "%s: the isocoulombic estimate needs %s in the database",
+                    who, f->text);
+    if (isfinite(sp->dGf)) {
+        *G = sp->dGf;
+        return PX_OK;
+    }
+    if (sp->model != PX_MODEL_LOGK)
+        return werr(ws, PX_EDATA, "%s: the isocoulombic estimate needs dfG of %s at 25 C", who,
+                    f->text);
+    px_reaction r;
+    int self;
+    int st = logk_find_self(ws, sp, &r, &self);
+    if (!st)
+        st = push(ws, sp);
+    if (st)
+        return st;
+    double sum = 0;
+    for (int i = 0; i < r.n && !st; i++) {
+        double g = 0;
+        if (i != self)
+            st = species_G_ref(ws, db, who, &r.sp[i], &g);
+        sum += r.nu[i] * g;
+    }
+    ws->depth--;
+    if (st)
+        return st;
+    double dG, dH, dS, dCp;
+    if (is_iso(sp)) /* every isocoulombic form keeps its 25 C log K at Tr */
+        dG = -PX_R * PX_TR * PX_LN10 * sp->logk.logK25;
+    else
+        logk_reaction(&sp->logk, PX_TR, &dG, &dH, &dS, &dCp);
+    *G = (dG - sum) / r.nu[self];
+    return PX_OK;
+}
+
+/* Reaction m at (T, P): dG (and with full, dH, dS, dCp, dV) in p, and its dG
+ * at Tr, Pr in *dGref.  m is the water ionisation or a model reaction. */
+static int combo_reaction(px_thermo_ws *ws, const px_db *db, const char *who,
+                          const px_reaction *m, double T, double P, int full, px_thermo_props *p,
+                          double *dGref)
+{
     memset(p, 0, sizeof *p);
     *dGref = 0;
-    for (int i = 0; i < 3; i++) {
-        const px_species *s = db ? px_db_find(db, names[i]) : NULL;
-        if (!s)
-            return werr(ws, PX_ENOTFOUND,
-                        "%s: the isocoulombic estimate needs %s in the database "
-                        "(stdlib/elements/HO.lua)",
-                        who, names[i]);
-        if (!isfinite(s->dGf))
-            return werr(ws, PX_EDATA,
-                        "%s: the isocoulombic estimate needs dfG of %s at 25 C (it is "
-                        "reaction-defined)",
-                        who, names[i]);
-        *dGref += nu[i] * s->dGf;
-        int st;
+    for (int i = 0; i < m->n; i++) {
+        double gref;
+        int st = species_G_ref(ws, db, who, &m->sp[i], &gref);
+        if (st)
+            return st;
+        *dGref += m->nu[i] * gref;
+        const px_species *s = NULL;
+        px_species tmp;
+        if (m->sp[i].state == PX_STATE_E) {
+            px_species_init(&tmp);
+            tmp.f = m->sp[i];
+            s = &tmp;
+        } else {
+            s = px_db_find(db, m->sp[i].text); /* found: species_G_ref succeeded */
+        }
         if (full) {
             px_thermo_props q;
             st = species_props(ws, db, s, T, P, &q);
-            p->H += nu[i] * q.H;
-            p->S += nu[i] * q.S;
-            p->Cp += nu[i] * q.Cp;
-            p->V += nu[i] * q.V;
-            p->G += nu[i] * q.G;
+            p->H += m->nu[i] * q.H;
+            p->S += m->nu[i] * q.S;
+            p->Cp += m->nu[i] * q.Cp;
+            p->V += m->nu[i] * q.V;
+            p->G += m->nu[i] * q.G;
         } else {
             double g = 0;
             st = species_G(ws, db, s, T, P, &g);
-            p->G += nu[i] * g;
+            p->G += m->nu[i] * g;
         }
         if (st)
             return st;
@@ -303,32 +368,45 @@ static int water_ionisation(px_thermo_ws *ws, const px_db *db, const char *who, 
     return PX_OK;
 }
 
-/* reaction dG, dH, dS, dCp by the isocoulombic estimate (px_isocoulombic_logK) */
+/* reaction dG, dH, dS, dCp by the isocoulombic estimate (px_isocoulombic_logK);
+ * model (may be NULL): a reaction with measured data subtracted from r first
+ * (the model-reaction form of the method, Lindsay 1980; Gu et al. 1994) */
 static int iso_reaction(px_thermo_ws *ws, const px_db *db, const char *who,
-                        const px_reaction *r, double logK25, double T, double P, int full,
-                        double *dG, double *dH, double *dS, double *dCp, double *dV)
+                        const px_reaction *r, const px_reaction *model, double logK25, double T,
+                        double P, int full, double *dG, double *dH, double *dS, double *dCp,
+                        double *dV)
 {
-    *dV = 0;
-    double n;
-    px_reaction_isocoulombic_n(r, &n);
+    /* R' = R - M + n W, n water ionisations W: H2O(l) = H^+ + OH^- */
+    double pos = positive_charge(r) - (model ? positive_charge(model) : 0);
+    double n = pos == 0 ? 0 : -pos;
     double dG0 = -PX_R * PX_TR * PX_LN10 * logK25;
-    if (n == 0) { /* already isocoulombic: dG constant, dS = dCp = 0 */
-        *dG = *dH = dG0;
-        *dS = *dCp = 0;
-        return PX_OK;
+    px_thermo_props w = {0, 0, 0, 0, 0}, mp = {0, 0, 0, 0, 0};
+    double wref = 0, mref = 0;
+    int st = PX_OK;
+    if (n != 0) {
+        px_reaction water; /* local: workers of one process share this code */
+        if (px_reaction_parse("H2O(l) = H^+ + OH^-", &water, NULL, 0) != PX_OK)
+            return werr(ws, PX_EDATA, "%s: water ionisation does not parse", who);
+        st = combo_reaction(ws, db, who, &water, T, P, full, &w, &wref);
     }
-    px_thermo_props w;
-    double wref;
-    int st = water_ionisation(ws, db, who, T, P, full, &w, &wref);
+    for (int i = 0; model && !st && i < model->n; i++) { /* a model carries measured data */
+        const px_species *o = db ? px_db_find(db, model->sp[i].text) : NULL;
+        if (o && px_species_tbasis(o, NULL) != PX_TBASIS_MEASURED)
+            st = werr(ws, PX_EDATA,
+                      "%s: isocoulombic model reaction: %s has no measured temperature data (%s)",
+                      who, o->f.text, px_tbasis_name(px_species_tbasis(o, NULL)));
+    }
+    if (!st && model)
+        st = combo_reaction(ws, db, who, model, T, P, full, &mp, &mref);
     if (st)
         return st;
-    /* R' = R + n W has dG(R') = dH(R') = dG_R(Tr) + n dG_W(Tr), dS(R') = dCp(R') = 0 */
-    double iso = dG0 + n * wref;
-    *dG = iso - n * w.G;
-    *dH = iso - n * w.H;
-    *dS = -n * w.S;
-    *dCp = -n * w.Cp;
-    *dV = -n * w.V; /* dG(R') is taken independent of P too: R follows W's volume */
+    /* dG(R') = dH(R') = dG_R(Tr) - dG_M(Tr) + n dG_W(Tr), dS(R') = dCp(R') = 0 */
+    double iso = dG0 - mref + n * wref;
+    *dG = iso + mp.G - n * w.G;
+    *dH = iso + mp.H - n * w.H;
+    *dS = mp.S - n * w.S;
+    *dCp = mp.Cp - n * w.Cp;
+    *dV = mp.V - n * w.V; /* dG(R') is taken independent of P too */
     return PX_OK;
 }
 
@@ -343,7 +421,8 @@ int px_isocoulombic_logK(px_thermo_ws *ws, const px_db *db, const px_reaction *r
     if (!(T > 0) || !isfinite(P) || !isfinite(logK25))
         return werr(ws, PX_EINVAL, "T, P and log K must be finite, T positive");
     double dG, dH, dS, dCp, dV;
-    int st = iso_reaction(ws, db, "isocoulombic", r, logK25, T, P, 0, &dG, &dH, &dS, &dCp, &dV);
+    int st = iso_reaction(ws, db, "isocoulombic", r, NULL, logK25, T, P, 0, &dG, &dH, &dS, &dCp,
+                          &dV);
     if (st)
         return st;
     *logK = -dG / (PX_R * T * PX_LN10);
@@ -369,6 +448,19 @@ static int logk_find_self(px_thermo_ws *ws, const px_species *sp, px_reaction *r
     if (*self < 0)
         return werr(ws, PX_EDATA, "%s: the species is not in its reaction '%s'", sp->f.text,
                     sp->logk.reaction);
+    return PX_OK;
+}
+
+/* the parsed isocoulombic model reaction of sp; m->n = 0 if it has none */
+static int model_parse(px_thermo_ws *ws, const px_species *sp, px_reaction *m)
+{
+    m->n = 0;
+    if (!is_iso(sp) || !sp->logk.model[0])
+        return PX_OK;
+    char msg[256];
+    int st = px_reaction_parse_balanced(sp->logk.model, m, msg, sizeof msg);
+    if (st)
+        return werr(ws, st, "%s: isocoulombic model reaction: %s", sp->f.text, msg);
     return PX_OK;
 }
 
@@ -410,7 +502,8 @@ static int logk_get(px_thermo_ws *ws, const px_db *db, const px_species *sp, log
             ws->lk_gen = px__db_generation(db);
         }
         const logk_cache *c = ws->lk[k];
-        int valid = c && !strcmp(c->text, sp->f.text) && !strcmp(c->reaction, sp->logk.reaction);
+        int valid = c && !strcmp(c->text, sp->f.text) && !strcmp(c->reaction, sp->logk.reaction) &&
+                    !strcmp(c->model_text, sp->logk.model);
         for (int i = 0; valid && i < c->r.n; i++) /* another db may sit at the same address */
             if (c->idx[i] >= 0) {
                 const px_species *o = px_db_get(db, (size_t)c->idx[i]);
@@ -428,6 +521,9 @@ static int logk_get(px_thermo_ws *ws, const px_db *db, const px_species *sp, log
         return st;
     snprintf(tmp->text, sizeof tmp->text, "%s", sp->f.text);
     snprintf(tmp->reaction, sizeof tmp->reaction, "%s", sp->logk.reaction);
+    snprintf(tmp->model_text, sizeof tmp->model_text, "%s", sp->logk.model);
+    if ((st = model_parse(ws, sp, &tmp->model)))
+        return st;
     for (int i = 0; i < tmp->r.n; i++)
         tmp->idx[i] = (i == tmp->self || tmp->r.sp[i].state == PX_STATE_E || !db)
                           ? -1
@@ -479,8 +575,8 @@ static int logk_G(px_thermo_ws *ws, const px_db *db, const px_species *sp, doubl
     }
     double dG, dH, dS, dCp, dV;
     if (is_iso(sp))
-        st = iso_reaction(ws, db, sp->f.text, &lc->r, sp->logk.logK25, T, P, 0, &dG, &dH, &dS, &dCp,
-                          &dV);
+        st = iso_reaction(ws, db, sp->f.text, &lc->r, lc->model.n ? &lc->model : NULL,
+                          sp->logk.logK25, T, P, 0, &dG, &dH, &dS, &dCp, &dV);
     else
         logk_reaction(&sp->logk, T, &dG, &dH, &dS, &dCp);
     ws->depth--;
@@ -636,9 +732,13 @@ static int logk_props(px_thermo_ws *ws, const px_db *db, const px_species *sp, d
         return st;
     }
     double dG, dH, dS, dCp, dV = 0.0; /* other log K models: independent of P, dV = 0 */
-    if (is_iso(sp))
-        st = iso_reaction(ws, db, sp->f.text, &r, sp->logk.logK25, T, P, 1, &dG, &dH, &dS, &dCp, &dV);
-    else
+    px_reaction model;
+    if (is_iso(sp)) {
+        st = model_parse(ws, sp, &model);
+        if (!st)
+            st = iso_reaction(ws, db, sp->f.text, &r, model.n ? &model : NULL, sp->logk.logK25, T,
+                              P, 1, &dG, &dH, &dS, &dCp, &dV);
+    } else
         logk_reaction(&sp->logk, T, &dG, &dH, &dS, &dCp);
     ws->depth--;
     if (st)

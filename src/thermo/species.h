@@ -72,13 +72,15 @@ typedef struct px_cp_params {
  * is given (docs/thermo.md, "Temperature estimates"). */
 typedef enum px_logk_estimate {
     PX_LOGK_EST_NONE = 0,    /* measured dH or logK_T, or else held at 25 C */
-    PX_LOGK_EST_ISOCOULOMBIC /* one-term isocoulombic extrapolation (Gu et al. 1994) */
+    PX_LOGK_EST_ISOCOULOMBIC /* one-term isocoulombic extrapolation (Gu et al. 1994),
+                                with a model reaction when px_logk_params.model is set */
 } px_logk_estimate;
 
 /* log K of the formation reaction (the species is the reaction's product):
  *   analytic: log K = k[0] + k[1] T + k[2]/T + k[3] log10 T + k[4]/T^2
  *   otherwise: van 't Hoff from logK25 and dH (J/mol), constant dH;
- *   estimate = ISOCOULOMBIC (no dH, not analytic): px_isocoulombic_logK. */
+ *   estimate = ISOCOULOMBIC (no dH, not analytic): px_isocoulombic_logK, on
+ *   the reaction minus the model reaction when model is not empty. */
 typedef struct px_logk_params {
     char reaction[256]; /* e.g. "Zn^2+ + Cl^- = ZnCl^+" */
     double logK25;
@@ -86,6 +88,7 @@ typedef struct px_logk_params {
     int analytic;
     double k[5];
     px_logk_estimate estimate;
+    char model[256]; /* isocoulombic model reaction with measured data, "" if none */
 } px_logk_params;
 
 /* Where a species' temperature dependence comes from (px_species_tbasis). */

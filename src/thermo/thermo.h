@@ -117,7 +117,8 @@ int px_db_add_builtins(px_db *db);
 
 /* Where sp's temperature dependence comes from, derived from its fields:
  * LOGK with dH or logK_T: measured; LOGK with an isocoulombic estimate:
- * estimated; other LOGK: held at 25 C; HKF with estimated = 1: estimated (SH88
+ * estimated (with or without a model reaction, logk.model); other
+ * LOGK: held at 25 C; HKF with estimated = 1: estimated (SH88
  * correlations); CP with every Cp coefficient 0: no Cp; else measured.
  * *method (may be NULL) receives the method's name ("" unless estimated).
  * px_db_add stores the result in the copy's tbasis and tmethod. */
@@ -237,7 +238,12 @@ int px_reaction_logK(px_thermo_ws *ws, const px_db *db, const px_reaction *r,
  *   dG_R(T,P) = dG_R(Tr) + n [dG_W(Tr,Pr) - dG_W(T,P)], with dG_W from
  * phlox's own H2O(l), H^+ and OH^-.  n = -sum over charged species with z > 0
  * of nu z (products positive); an electron counts as -1 H^+ (e- = 1/2 H2(g) -
- * H^+).  PX_OK always (n is an integer for integer coefficients). */
+ * H^+).  PX_OK always (n is an integer for integer coefficients).
+ * With a model reaction M (px_logk_params.model: a reaction of the same
+ * charge type whose species have measured temperature data; Lindsay 1980;
+ * Gu et al. 1994), R' = R - M + n W with n from the charges of R - M, and
+ *   dG_R(T,P) = dG_R(Tr) - dG_M(Tr) + dG_M(T,P) + n [dG_W(Tr,Pr) - dG_W(T,P)],
+ * dG_M from the database's own species (docs/thermo.md). */
 int px_reaction_isocoulombic_n(const px_reaction *r, double *n);
 /* log K at (T, P) of reaction r from its log K at 25 C by that method; needs
  * H^+, OH^- and H2O(l) in db (PX_ENOTFOUND otherwise, message in ws).  Also

@@ -92,7 +92,7 @@ return {
     },
 
     -- ---------------------------------------------------------------- chloro complexes (log K of the formation reaction, I = 0, 25 C)
-    { formula = "FeCl^+", model = "logk", reaction = "Fe^2+ + Cl^- = FeCl^+", logK = 0.14, estimate = "isocoulombic",
+    { formula = "FeCl^+", model = "logk", reaction = "Fe^2+ + Cl^- = FeCl^+", logK = 0.14, estimate = { method = "isocoulombic", model = "Cu^2+ + Cl^- = CuCl^+" },
       source = N90, quality = "low", note = "weak ion pair; dH not recalled" },
     { formula = "FeCl^2+", model = "logk", reaction = "Fe^3+ + Cl^- = FeCl^2+", logK = 1.48, dH = 5.6, units = KCAL,
       source = N90, quality = "medium" },
@@ -128,7 +128,7 @@ return {
       source = COMPILED, quality = "medium" },
     { formula = "AgCl2^-", model = "logk", reaction = "Ag^+ + 2 Cl^- = AgCl2^-", logK = 5.27, dH = -3.93, units = KCAL,
       source = COMPILED, quality = "medium", note = "OpenStax App. K gives 1.8e5 (5.26)" },
-    { formula = "AgCl3^2-", model = "logk", reaction = "Ag^+ + 3 Cl^- = AgCl3^2-", logK = 5.29, estimate = "isocoulombic",
+    { formula = "AgCl3^2-", model = "logk", reaction = "Ag^+ + 3 Cl^- = AgCl3^2-", logK = 5.29, estimate = { method = "isocoulombic", model = "Cu^+ + 3 Cl^- = CuCl3^2-" },
       source = COMPILED, quality = "low", note = "dH not recalled" },
     { formula = "AgCl4^3-", model = "logk", reaction = "Ag^+ + 4 Cl^- = AgCl4^3-", logK = 5.51, estimate = "isocoulombic",
       source = COMPILED, quality = "low", note = "dH not recalled" },
@@ -149,9 +149,9 @@ return {
     { formula = "PbCl4^2-", model = "logk", reaction = "Pb^2+ + 4 Cl^- = PbCl4^2-", logK = 1.38, dH = 3.53, units = KCAL,
       source = COMPILED, quality = "low" },
 
-    { formula = "MnCl^+", model = "logk", reaction = "Mn^2+ + Cl^- = MnCl^+", logK = 0.61, estimate = "isocoulombic",
+    { formula = "MnCl^+", model = "logk", reaction = "Mn^2+ + Cl^- = MnCl^+", logK = 0.61, estimate = { method = "isocoulombic", model = "Cu^2+ + Cl^- = CuCl^+" },
       source = COMPILED, quality = "low", note = "dH not recalled" },
-    { formula = "NiCl^+", model = "logk", reaction = "Ni^2+ + Cl^- = NiCl^+", logK = 0.40, estimate = "isocoulombic",
+    { formula = "NiCl^+", model = "logk", reaction = "Ni^2+ + Cl^- = NiCl^+", logK = 0.40, estimate = { method = "isocoulombic", model = "Cu^2+ + Cl^- = CuCl^+" },
       source = COMPILED, quality = "low", note = "dH not recalled; outer-sphere pair, literature 0.1-0.6" },
 
     -- ---------------------------------------------------------------- chloride salts

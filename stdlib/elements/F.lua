@@ -44,7 +44,7 @@ return {
       source = N90, quality = "medium" },
     { formula = "FeF3(aq)", model = "logk", reaction = "Fe^3+ + 3 F^- = FeF3(aq)", logK = 14.0, dH = 5.4, units = KCAL,
       source = N90, quality = "medium" },
-    { formula = "FeF^+", model = "logk", reaction = "Fe^2+ + F^- = FeF^+", logK = 1.0, estimate = "isocoulombic",
+    { formula = "FeF^+", model = "logk", reaction = "Fe^2+ + F^- = FeF^+", logK = 1.0, estimate = { method = "isocoulombic", model = "Ca^2+ + F^- = CaF^+" },
       source = COMPILED, quality = "low", note = "dH not recalled" },
     { formula = "MgF^+", model = "logk", reaction = "Mg^2+ + F^- = MgF^+", logK = 1.82, dH = 3.2, units = KCAL,
       source = N90, quality = "medium" },
@@ -52,7 +52,7 @@ return {
       source = N90, quality = "medium" },
     { formula = "NaF(aq)", model = "logk", reaction = "Na^+ + F^- = NaF(aq)", logK = -0.24, estimate = "isocoulombic",
       source = COMPILED, quality = "low", note = "very weak ion pair; dH not recalled" },
-    { formula = "MnF^+", model = "logk", reaction = "Mn^2+ + F^- = MnF^+", logK = 0.84, estimate = "isocoulombic",
+    { formula = "MnF^+", model = "logk", reaction = "Mn^2+ + F^- = MnF^+", logK = 0.84, estimate = { method = "isocoulombic", model = "Ca^2+ + F^- = CaF^+" },
       source = COMPILED, quality = "low", note = "dH not recalled" },
 
     { formula = "CaF2(s,fluorite)", model = "logk", reaction = "CaF2(s,fluorite) = Ca^2+ + 2 F^-",

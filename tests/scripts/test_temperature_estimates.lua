@@ -7,6 +7,14 @@
 --        Kw from IAPWS R11-07 (tests/reference/water.csv, python3-iapws);
 --        phlox's own Kw (HKF H^+/OH^- with IAPWS-95 water) agrees with R11-07
 --        within 0.03 (docs/thermo.md), so the tolerance is 0.03 + 0.03.
+--  1c. The model-reaction form by hand: NiCl^+ with the model
+--     Cu^2+ + Cl^- = CuCl^+ (R - M = Ni^2+ + CuCl^+ = NiCl^+ + Cu^2+, n = 0):
+--     log K(T) = [log K_R(25 C) - log K_M(25 C)] 298.15/T + log K_M(T), with
+--     log K_M(T) by van 't Hoff from the CuCl^+ record's measured dH;
+--     a library without Cu loads Cu for the model (lib.model_elements); the
+--     element files name exactly the models of the documented rule
+--     (estimates_def.library_models); a model with an estimated species and a
+--     malformed model are refused.
 --  2. The validation table of docs/data-checks.md (tests/tools/estimates_def.lua)
 --     recomputed: each method's mean and maximum error at 100, 200 and 300 C
 --     (isocoulombic, HKF correlations, Kopp-Neumann and the baselines) must
@@ -62,6 +70,52 @@ for _, tc in ipairs { 100, 300 } do
   check(math.abs(-(g2 - g1) / (2 * h) - p.S) < 0.05, ("Zn(OH)3^- S at %d C: %.3f vs %.3f"):format(tc, -(g2 - g1) / (2 * h), p.S))
 end
 
+-- 1c
+do
+  local R_LN10 = 8.314462618 * math.log(10)
+  local nlib = phlox.library { "Ni", "Cl" }
+  check(nlib.model_elements and nlib.model_elements[1] == "Cu" and #nlib.model_elements == 1,
+        "Ni + Cl library loads Cu for the NiCl^+ model")
+  check(#nlib.elements == 2, "model elements are not listed as the library's elements")
+  local rec = nlib:species("NiCl^+")
+  check(rec.estimate_model == "Cu^2+ + Cl^- = CuCl^+", "NiCl^+ model: " .. tostring(rec.estimate_model))
+  local m = nlib:species("CuCl^+")
+  check(m.basis == "measured" and m.dH, "CuCl^+ has a measured dH")
+  for _, tc in ipairs { 25, 100, 200, 300 } do
+    local T = tc + 273.15
+    local km = m.logK25 - m.dH / R_LN10 * (1 / T - 1 / TR)
+    local hand = (rec.logK25 - m.logK25) * TR / T + km
+    local got = nlib:reaction(rec.reaction, { T = T }).logK
+    check(math.abs(got - hand) < 1e-9, ("NiCl^+ at %d C: phlox %.9f, by hand %.9f"):format(tc, got, hand))
+  end
+  -- S = -dG/dT of the record holds with the model too
+  local h, P = 0.01, 100
+  local T = 473.15
+  local g1 = nlib:props("NiCl^+", { T = T - h, P = P }).G
+  local g2 = nlib:props("NiCl^+", { T = T + h, P = P }).G
+  local p = nlib:props("NiCl^+", { T = T, P = P })
+  check(math.abs(-(g2 - g1) / (2 * h) - p.S) < 0.05, ("NiCl^+ S at 200 C: %.3f vs %.3f"):format(-(g2 - g1) / (2 * h), p.S))
+  -- refusals: a model with an estimated species; a model that does not balance
+  local function user(text)
+    local path = os.tmpname()
+    local fh = assert(io.open(path, "wb")); fh:write(text); fh:close()
+    local ok, l = pcall(phlox.library, { "Ni", "Cl", "Zn", user = { path } })
+    os.remove(path)
+    return ok, l
+  end
+  local ok, l = user([[return { species = { { formula = "NiCl^+", model = "logk", reaction = "Ni^2+ + Cl^- = NiCl^+",
+    logK = 0.40, source = "test", estimate = { method = "isocoulombic", model = "Zn^2+ + 3 H2O(l) = Zn(OH)3^- + 3 H^+" } } } }]])
+  check(ok, "a library with a user model loads: " .. tostring(l))
+  local k, why = l.db:reaction("Ni^2+ + Cl^- = NiCl^+", 473.15)
+  check(not k and tostring(why):find("no measured temperature data", 1, true), "estimated model refused: " .. tostring(why))
+  ok, l = user([[return { species = { { formula = "NiCl^+", model = "logk", reaction = "Ni^2+ + Cl^- = NiCl^+",
+    logK = 0.40, source = "test", estimate = { method = "isocoulombic", model = "Cu^2+ + Cl^- = CuCl2(aq)" } } } }]])
+  check(not ok and tostring(l):find("estimate.model", 1, true), "unbalanced model refused: " .. tostring(l))
+  ok, l = user([[return { species = { { formula = "NiCl^+", model = "logk", reaction = "Ni^2+ + Cl^- = NiCl^+",
+    logK = 0.40, source = "test", estimate = { method = "isocoulombic" } } } }]])
+  check(not ok and tostring(l):find("estimate.model", 1, true), "table form without a model refused: " .. tostring(l))
+end
+
 -- 2
 local defs = dofile(src .. "/tests/tools/estimates_def.lua")
 local rows, sum = defs.run(phlox)
@@ -79,6 +133,14 @@ for m, byT in pairs(defs.DOCUMENTED) do
 end
 check(next(defs.DOCUMENTED), "documented errors missing")
 for m in pairs(defs.DOCUMENTED) do check(sum[m], "no recomputed summary for " .. m) end
+-- the element files follow the documented model rule, species by species
+check(#sum.library_models >= 8, "estimated complexes of the library: " .. #sum.library_models)
+local all = phlox.library(phlox.available_elements())
+for _, x in ipairs(sum.library_models) do
+  local rec = all:species(x.species)
+  check(rec.estimate_model == x.model, ("%s: element file names model %s, the rule picks %s"):format(
+    x.species, tostring(rec.estimate_model), tostring(x.model)))
+end
 check(#bad == 0, "validation table moved from docs/thermo.md (update the docs):\n  " .. table.concat(bad, "\n  "))
 -- 3
 local ni = phlox.library { "Ni" }

@@ -330,7 +330,14 @@ static void test_logk_estimate_basis(void **state)
     static const char *const bad[][2] = {
         {"estimate = 'vant-hoff'", "estimate: unknown estimation method 'vant-hoff'"},
         {"estimate = 'isocoulombic', dH = 13.4", "estimate: an estimate stands in for missing temperature data: this species has dH"},
-        {"estimate = { Cp = 1 }", "estimate: a logk species names its estimation method"},
+        {"estimate = { Cp = 1 }", "estimate.method: name the method"},
+        {"estimate = { method = 'isocoulombic' }", "estimate.model: the table form names a model reaction"},
+        {"estimate = { method = 'isocoulombic', model = 'Cu^2+ + Cl^- = CuCl2(aq)' }",
+         "estimate.model: model reaction 'Cu^2+ + Cl^- = CuCl2(aq)': "},
+        {"estimate = { method = 'isocoulombic', model = 'Zn^2+ + H2O(l) = ZnOH^+ + H^+' }",
+         "estimate.model: the model reaction must not contain the species itself (ZnOH^+)"},
+        {"estimate = { method = 'one-term', model = 'Cu^2+ + Cl^- = CuCl^+' }",
+         "estimate: unknown estimation method 'one-term'"},
     };
     expect_errors(p,
                   "return { element = 'Zn', species = {\n"
