@@ -3,8 +3,9 @@
 #   phlox-core    src/core src/num src/water src/thermo src/equil src/diagram
 #                 (needs only libm and threads: no Lua, no cairo)
 #   phlox-data    src/data (element files are Lua tables, read in a sandboxed
-#                 Lua state) and the embedded library (lua/ and stdlib/):
-#                 links liblua and phlox-core
+#                 Lua state) and the embedded library (src/embed: the index of
+#                 lua/ and stdlib/ compiled in, below both data and the
+#                 bindings): links liblua and phlox-core
 #   phlox-render  src/render: links cairo and phlox-core
 #   phlox_lua     src/lua: the bindings "phlox.core" and the host interpreter
 #                 (static only; inside the phlox program and the Lua module)
@@ -31,7 +32,8 @@ set(PHLOX_PUBLIC_HEADERS_core
     thermo/species.h=species thermo/thermo.h=thermo thermo/basis.h=basis
     thermo/practice.h=practice
     equil/equil.h=equil equil/speciate.h=speciate
-    diagram/diagram.h=diagram diagram/emap.h=emap diagram/rmap.h=rmap)
+    diagram/diagram.h=diagram diagram/potential.h=potential diagram/emap.h=emap
+    diagram/rmap.h=rmap)
 set(PHLOX_PUBLIC_HEADERS_data data/data.h=data)
 set(PHLOX_PUBLIC_HEADERS_render render/render.h=render)
 set(PHLOX_PUBLIC_HEADERS ${PHLOX_PUBLIC_HEADERS_core} ${PHLOX_PUBLIC_HEADERS_data}
@@ -50,11 +52,11 @@ file(GLOB PHLOX_SOURCES_core CONFIGURE_DEPENDS
      ${CMAKE_SOURCE_DIR}/src/water/*.c
      ${CMAKE_SOURCE_DIR}/src/thermo/*.c ${CMAKE_SOURCE_DIR}/src/equil/*.c
      ${CMAKE_SOURCE_DIR}/src/diagram/*.c)
-file(GLOB PHLOX_SOURCES_data CONFIGURE_DEPENDS ${CMAKE_SOURCE_DIR}/src/data/*.c)
-list(APPEND PHLOX_SOURCES_data ${CMAKE_SOURCE_DIR}/src/lua/embedded_find.c ${PHLOX_EMBED_C})
+file(GLOB PHLOX_SOURCES_data CONFIGURE_DEPENDS ${CMAKE_SOURCE_DIR}/src/data/*.c
+     ${CMAKE_SOURCE_DIR}/src/embed/*.c)
+list(APPEND PHLOX_SOURCES_data ${PHLOX_EMBED_C})
 file(GLOB PHLOX_SOURCES_render CONFIGURE_DEPENDS ${CMAKE_SOURCE_DIR}/src/render/*.c)
 file(GLOB PHLOX_SOURCES_lua CONFIGURE_DEPENDS ${CMAKE_SOURCE_DIR}/src/lua/*.c)
-list(REMOVE_ITEM PHLOX_SOURCES_lua ${CMAKE_SOURCE_DIR}/src/lua/embedded_find.c)
 
 set(PHLOX_LAYER_DEPS_core Threads::Threads m)
 set(PHLOX_LAYER_DEPS_data PkgConfig::LUA)

@@ -107,8 +107,10 @@ function phlox.list_dir(path)
 end
 
 -- Ligand files hold the complexes and solids they form with metals, so they
--- load after the metals (definition-file format, "Where species go").
-local LIGAND_ORDER = { Cl = 1, S = 2, C = 3, N = 4, P = 5, F = 6 }
+-- load after the metals (definition-file format, "Where species go"), in
+-- the order `phlox check` holds them to (core.ligand_order, src/data/check.c).
+local LIGAND_ORDER = {}
+for i, sym in ipairs(core.ligand_order()) do LIGAND_ORDER[sym] = i end
 -- Polyatomic ligands (docs/element-files.md): a group file
 -- stdlib/elements/<group>.lua, loaded after the element files of its
 -- elements, which a library naming the group loads too.

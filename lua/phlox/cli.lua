@@ -55,16 +55,18 @@ local function json_number(x)
   return require("phlox.json").number(x)
 end
 
--- Elements of a reaction's species, to know which files to load.
+-- Elements of a reaction's species, to know which files to load: the C
+-- reaction parser reads the equation (core.reaction_terms).
 local function elements_of(text)
   local core = require "phlox.core"
+  local terms, perr = core.reaction_terms(text)
+  if not terms then return nil, perr end
   local seen, list = {}, {}
-  local lhs, rhs = text:match("^(.-)=(.*)$")
-  if not lhs then return nil, "a reaction needs '='" end
-  for side in (lhs .. "+" .. rhs):gmatch("[^+]+") do
-    -- each term: optional coefficient, then a formula (charges like ^2+ were
-    -- split at '+'; rejoin is not needed for element detection)
-    for sym in side:gmatch("(%u%l?)") do
+  for _, term in ipairs(terms) do
+    local syms = {}
+    for sym in pairs(term.elements) do syms[#syms + 1] = sym end
+    table.sort(syms)
+    for _, sym in ipairs(syms) do
       if sym ~= "H" and sym ~= "O" and not seen[sym] then
         seen[sym] = true
         list[#list + 1] = sym

@@ -25,13 +25,14 @@
 #include "core/constants.h"
 #include "core/status.h"
 #include <math.h>
+#include <stdio.h>
 #include <stdlib.h>
 #include <string.h>
 
 /* the ligand files in the order docs/element-files.md gives for mixed-ligand species:
  * Cl, S, C, N, P, F (atomic numbers) */
 static const int ligand_order[] = {17, 16, 6, 7, 15, 9};
-#define N_LIGANDS 6
+#define N_LIGANDS (sizeof ligand_order / sizeof ligand_order[0])
 /* log K from logK_T at 25 C versus the given logK: warning beyond this
  * (common practice, no source: about the rounding of published fits) */
 #define LOGK_AGREE_TOL 0.05
@@ -47,11 +48,26 @@ static double count_of(const px_formula *fm, int z)
     return 0;
 }
 
-static int ligand_rank(int z)
+int px_data_ligand_z(size_t i)
 {
-    for (int i = 0; i < N_LIGANDS; i++)
-        if (ligand_order[i] == z) return i;
+    return i < N_LIGANDS ? ligand_order[i] : 0;
+}
+
+int px_data_ligand_rank(int z)
+{
+    for (size_t i = 0; i < N_LIGANDS; i++)
+        if (ligand_order[i] == z) return (int)i;
     return -1;
+}
+
+/* "Cl, S, C, N, P, F" into buf */
+static const char *ligand_order_text(char *buf, size_t size)
+{
+    size_t len = 0;
+    buf[0] = '\0';
+    for (size_t i = 0; i < N_LIGANDS && len < size; i++)
+        len += (size_t)snprintf(buf + len, size - len, "%s%s", i ? ", " : "", px_element_symbol(ligand_order[i]));
+    return buf;
 }
 
 static int only_h_o(const px_formula *fm)
@@ -76,17 +92,19 @@ static void check_membership(pxd_file *f, pxd_entry *e)
                          "does not contain %s, the element of this file", f->element);
         return;
     }
-    int own = ligand_rank(f->element_z);
+    int own = px_data_ligand_rank(f->element_z);
     int first = -1;
     for (int i = 0; i < fm->n_elem; i++) {
-        int r = ligand_rank(fm->elem[i].z);
+        int r = px_data_ligand_rank(fm->elem[i].z);
         if (r >= 0 && (first < 0 || r < first)) first = r;
     }
-    if (first >= 0 && (own < 0 || first < own))
+    if (first >= 0 && (own < 0 || first < own)) {
+        char order[64];
         pxd_report_entry(f, e, PX_DATA_WARNING, "formula",
                          "belongs in %s.lua (species with ligands go in the first ligand's file, "
-                         "order Cl, S, C, N, P, F)",
-                         px_element_symbol(ligand_order[first]));
+                         "order %s)",
+                         px_element_symbol(ligand_order[first]), ligand_order_text(order, sizeof order));
+    }
 }
 
 /* dfG - (dfH - Tr dfS); NAN if an element has no reference entropy.

@@ -116,6 +116,15 @@ int px_data_load_file(px_db *db, const char *path, const px_data_options *opt,
 int px_data_load_embedded(px_db *db, const char *element, const px_data_options *opt,
                           px_data_problems *probs);
 
+/* The ligand files in their order (docs/element-files.md, "Where species
+ * go"): a species with several ligands belongs in the first one's file, and
+ * ligand files load after the metals' in this order (Cl, S, C, N, P, F).
+ * The one home of the order: phlox.library asks for it (core.ligand_order).
+ * px_data_ligand_z: atomic number of the i-th ligand (0-based), 0 past the
+ * end; px_data_ligand_rank: the rank of element z, -1 if z is no ligand. */
+int px_data_ligand_z(size_t i);
+int px_data_ligand_rank(int z);
+
 /* User overrides: a file whose species are added or replace species with the
  * same (canonical) formula in DB, and whose file-level `exclude = {...}` list
  * removes species from DB (excludes are applied first).  `element` may be

@@ -8,7 +8,7 @@
 #define _POSIX_C_SOURCE 200809L
 #include "data/data_internal.h"
 #include "core/status.h"
-#include "lua/embedded.h"
+#include "embed/embedded.h"
 #include <errno.h>
 #include <fcntl.h>
 #include <math.h>

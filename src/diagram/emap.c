@@ -4,6 +4,7 @@
 #include "diagram/emap.h"
 #include "core/constants.h"
 #include "core/status.h"
+#include "equil/equil.h"
 #include "thermo/basis.h"
 #include <ctype.h>
 #include <math.h>
@@ -14,7 +15,6 @@
 
 #define Z_H 1
 #define Z_O 8
-#define PX_EMAP_DAVIES_B 0.3     /* Davies 1962: log g = -A z^2 (sqrt I/(1+sqrt I) - 0.3 I) */
 #define PX_EMAP_COEF_EPS 1e-9    /* a reaction coefficient this close to 0 is 0 */
 #define PX_EMAP_MAX_SCALE 60     /* largest multiplier tried to clear fractions */
 
@@ -33,14 +33,6 @@ px_emap_options px_emap_options_default(void)
     o.ligand_activity = PX_EMAP_DEFAULT_LIGAND;
     o.ligands = px_ligand_states_default();
     return o;
-}
-
-double px_emap_davies(double A, int z, double I)
-{
-    if (!(I > 0)) return 0.0;
-    double s = sqrt(I);
-    /* Davies 1962, Ion Association (Butterworths), eq. for log10 gamma */
-    return -A * z * z * (s / (1.0 + s) - PX_EMAP_DAVIES_B * I);
 }
 
 /* Elements of f are all within {H, O, a, b}. */
@@ -311,7 +303,7 @@ static int collect(const ctx *c, px_thermo_ws *ws, const px_db *db, int z, int z
                 free(v);
                 return px_fail(c->msg, c->msglen, PX_EINVAL, "%s: activity must be positive", f->text);
             }
-            cd->ln_a = log(a) + PX_LN10 * px_emap_davies(A, f->charge, o->ionic_strength);
+            cd->ln_a = log(a) + PX_LN10 * px_equil_davies_log_gamma(A, f->charge, o->ionic_strength);
             cd->on_axis_activity = for_ligand && (o->xaxis == PX_AXIS_LOGA || o->yaxis == PX_AXIS_LOGA);
         } else if (f->state == PX_STATE_G) {
             cd->ln_a = PX_LN10 * o->gas_log_f;

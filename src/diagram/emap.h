@@ -104,8 +104,5 @@ void px_emap_free(px_emap *m); /* NULL ok */
  * The one rule: phlox.plot asks it through core.domain_of. */
 int px_emap_domain(const px_formula *f, int z);
 
-/* Davies (1962) log10 activity coefficient of charge z at ionic strength I,
- * with the Debye-Hueckel A (log10 basis) at T. */
-double px_emap_davies(double A, int z, double I);
 
 #endif

@@ -10,6 +10,7 @@
  * a field measurement to that scale at 25 C, and with its temperature
  * coefficients between 0 and 60 C. */
 #include "diagram/diagram.h"
+#include "diagram/potential.h"
 #include "core/constants.h"
 #include "core/status.h"
 #include <math.h>

@@ -89,6 +89,14 @@ typedef struct px_equil_activity {
 /* Ideal solution, unit water activity (valid input for any caller). */
 px_equil_activity px_equil_activity_default(void);
 
+/* Davies 1962 (Ion Association, Butterworths; from memory): log10 gamma =
+ * -A z^2 f(I) with f(I) = sqrt(I)/(1+sqrt(I)) - 0.3 I.  The one home of the
+ * equation (equil_activity.c); the solver and the exact maps both use it. */
+double px_equil_davies_factor(double I);
+/* log10 gamma of charge z at ionic strength I (mol/kg) with the Debye-Hueckel
+ * A (log10 basis) at T; 0 for I <= 0. */
+double px_equil_davies_log_gamma(double A, int z, double I);
+
 /* Solver options. */
 typedef struct px_equil_options {
     double epsabs;   /* absolute tolerance of balances, mol/kg (>= 0) */

@@ -22,13 +22,25 @@
 #define PX_SIT_BA 1.5
 #define LN10 2.302585092994045684
 
+double px_equil_davies_factor(double I)
+{
+    double s = sqrt(I);
+    return s / (1.0 + s) - PX_DAVIES_LINEAR * I;
+}
+
+double px_equil_davies_log_gamma(double A, int z, double I)
+{
+    if (!(I > 0)) return 0.0;
+    return -A * z * z * px_equil_davies_factor(I);
+}
+
 void px_equil_gamma(const px_equil_system *sys, const unsigned char *absent,
                     double I, const double *lag, double *g, double *dg)
 {
     const px_equil_activity *a = &sys->act;
     double s = sqrt(I);
     /* the I-dependent factors shared by all ions of a model */
-    double fd = s / (1.0 + s) - PX_DAVIES_LINEAR * I;
+    double fd = px_equil_davies_factor(I);
     double dfd = LN10 * (s / (2.0 * (1.0 + s) * (1.0 + s)) - PX_DAVIES_LINEAR * I);
     double ds = 1.0 + PX_SIT_BA * s;
     double fs = a->A * s / ds, dfs = a->A * LN10 * s * 0.5 / (ds * ds);

@@ -180,6 +180,7 @@ int px_spec_set_TP(px_spec *s, px_thermo_ws *ws, const px_db *db, double T, doub
     if (st != PX_OK) return px_fail(msg, msglen, st, "water at %.2f K, %.4g bar: %s", T, P, px_strerror(st));
     st = eval_logk(s, ws, db, T, P, msg, msglen);
     if (st == PX_OK) st = set_activity_model(s, w, T, model);
+    if (st == PX_OK) s->T = T;
     return st;
 }
 
@@ -205,10 +206,10 @@ int px_spec_build(px_thermo_ws *ws, const px_db *db, const px_spec_options *o, p
     s->n_basis = nb;
     long bidx[PX_SPEC_MAX_ITEMS];
     int st = PX_OK;
-    bidx[0] = px_db_index(db, "H2O(l)");
-    bidx[1] = px_db_index(db, "H^+");
-    bidx[2] = px_db_index(db, "e-");
-    if (bidx[0] < 0 || bidx[1] < 0 || bidx[2] < 0) {
+    bidx[PX_SPEC_BASIS_WATER] = px_db_index(db, "H2O(l)");
+    bidx[PX_SPEC_BASIS_H] = px_db_index(db, "H^+");
+    bidx[PX_SPEC_BASIS_E] = px_db_index(db, "e-");
+    if (bidx[PX_SPEC_BASIS_WATER] < 0 || bidx[PX_SPEC_BASIS_H] < 0 || bidx[PX_SPEC_BASIS_E] < 0) {
         st = px_fail(msg, msglen, PX_ENOTFOUND, "the database lacks H2O(l), H^+ or e-");
         goto fail;
     }
@@ -438,4 +439,53 @@ int px_spec_solve(px_spec *s, const px_equil_options *opt, char *msg, size_t msg
                  px_strerror(st), stats.iterations, k, stats.fail_index, stats.residual_norm);
     }
     return st;
+}
+
+double px_spec_pH(const px_spec *s)
+{
+    px_equil_species_result r;
+    if (!s || px_equil_work_get_species(s->work, PX_SPEC_BASIS_H, &r) != PX_OK) return NAN;
+    return -r.log_activity;
+}
+
+int px_spec_redox_state(const px_spec *s, double *pe, double *E)
+{
+    px_equil_species_result r;
+    if (!s || !s->redox || !pe || !E) return PX_EINVAL;
+    int st = px_equil_work_get_species(s->work, PX_SPEC_BASIS_E, &r);
+    if (st != PX_OK) return st;
+    *pe = -r.log_activity;
+    /* E = pe RT ln10 / F (DESIGN.md conventions; CODATA 2018 F and R) */
+    *E = *pe * PX_R * s->T * PX_LN10 / PX_F;
+    return PX_OK;
+}
+
+size_t px_spec_n_elements(const px_spec *s)
+{
+    return s && s->n_basis > PX_SPEC_BASIS_ELEMENTS ? s->n_basis - PX_SPEC_BASIS_ELEMENTS : 0;
+}
+
+int px_spec_element(const px_spec *s, size_t k, px_spec_element_result *out)
+{
+    if (!out || k >= px_spec_n_elements(s)) return PX_EINVAL;
+    px_equil_component_result c;
+    int st = px_equil_work_get_component(s->work, PX_SPEC_BASIS_ELEMENTS + k, &c);
+    if (st != PX_OK) return st;
+    out->z = s->elem_z[PX_SPEC_BASIS_ELEMENTS + k];
+    out->dissolved = c.total_aq;
+    out->solid = c.total_solid;
+    out->total = c.total_aq + c.total_solid;
+    return PX_OK;
+}
+
+double px_spec_element_share(const px_spec *s, size_t k, size_t j)
+{
+    px_spec_element_result e;
+    px_equil_species_result r;
+    if (px_spec_element(s, k, &e) != PX_OK || j >= s->n_species) return NAN;
+    double nu = s->nu[j * s->n_basis + PX_SPEC_BASIS_ELEMENTS + k];
+    if (nu == 0.0 || px_equil_work_get_species(s->work, j, &r) != PX_OK) return NAN;
+    double amount = r.molality > 0 ? r.molality : r.amount;
+    if (!(amount > 0) || !(e.total > 0)) return NAN;
+    return nu * amount / e.total;
 }

@@ -18,6 +18,11 @@ typedef enum { PX_SPEC_REDOX_NONE = 0, PX_SPEC_REDOX_E, PX_SPEC_REDOX_PE, PX_SPE
 
 #define PX_SPEC_MAX_ITEMS 32
 
+/* The basis of every px_spec system, in this order (component index and
+ * system species index alike): H2O(l), H^+, e-, then one basis species per
+ * element in the order of the options' totals. */
+enum { PX_SPEC_BASIS_WATER = 0, PX_SPEC_BASIS_H = 1, PX_SPEC_BASIS_E = 2, PX_SPEC_BASIS_ELEMENTS = 3 };
+
 typedef struct px_spec_options {
     double T, P;                    /* K, bar */
     size_t n_totals;
@@ -58,6 +63,7 @@ typedef struct px_spec {
     double *nu;       /* n_species x n_basis formation coefficients */
     int *elem_z;      /* component i -> element (0 for H2O, H+, e-) */
     int redox;        /* electrons take part */
+    double T;         /* K, of the last px_spec_build or px_spec_set_TP */
     size_t sit_pairs, sit_missing; /* SIT: cation-anion pairs with an eps, and without (eps 0) */
     char error[512];
 } px_spec;
@@ -72,6 +78,25 @@ int px_spec_set_TP(px_spec *s, px_thermo_ws *ws, const px_db *db, double T, doub
                    char *msg, size_t msglen);
 int px_spec_solve(px_spec *s, const px_equil_options *opt, char *msg, size_t msglen);
 void px_spec_free(px_spec *s); /* NULL ok */
+
+/* Results of a solved problem, read without knowing the basis layout. */
+/* pH = -log10 a(H^+). */
+double px_spec_pH(const px_spec *s);
+/* pe = -log10 a(e-) and E = pe RT ln10 / F (V vs SHE, at s->T).  PX_EINVAL
+ * if electrons take no part (s->redox == 0). */
+int px_spec_redox_state(const px_spec *s, double *pe, double *E);
+/* The elements of the problem (the options' totals), k = 0 .. n-1. */
+size_t px_spec_n_elements(const px_spec *s);
+typedef struct px_spec_element_result {
+    int z;                  /* atomic number */
+    double total;           /* dissolved + solid, mol/kg */
+    double dissolved, solid; /* mol/kg */
+} px_spec_element_result;
+int px_spec_element(const px_spec *s, size_t k, px_spec_element_result *out);
+/* Share of element k's total held by system species j: nu m / total (or
+ * nu n / total for a precipitated solid); NAN if the species holds none of
+ * the element, has no amount, or the total is not positive. */
+double px_spec_element_share(const px_spec *s, size_t k, size_t j);
 
 /* Helgeson 1969 B-dot (kg/mol) for NaCl-dominated solutions at T (K),
  * interpolated in his table; NAN outside 0-300 C. */

@@ -1,7 +1,7 @@
 /* host.c - interpreter set-up: libraries, module search order, protected
  * calls with tracebacks (see host.h). */
 #include "lua/host.h"
-#include "lua/embedded.h"
+#include "embed/embedded.h"
 #include <lauxlib.h>
 #include <lualib.h>
 #include <string.h>

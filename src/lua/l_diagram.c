@@ -4,6 +4,7 @@
  * Also the reference electrodes and the Nernst slope. */
 #include "core/status.h"
 #include "diagram/diagram.h"
+#include "diagram/potential.h"
 #include "diagram/emap.h"
 #include "diagram/rmap.h"
 #include "lua/bindings.h"

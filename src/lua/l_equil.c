@@ -198,17 +198,15 @@ static int l_speciate(lua_State *L)
         px_spec_free(s);
         return 3;
     }
-    size_t nb = s->n_basis, m = s->n_species;
+    size_t m = s->n_species;
     lua_createtable(L, 0, 16);
     setnum(L, "T", o.T);
     setnum(L, "P", o.P);
-    px_equil_species_result r;
-    px_equil_work_get_species(s->work, 1, &r);
-    setnum(L, "pH", -r.log_activity);
-    if (s->redox) {
-        px_equil_work_get_species(s->work, 2, &r);
-        setnum(L, "pe", -r.log_activity);
-        setnum(L, "E", -r.log_activity * PX_R * o.T * PX_LN10 / PX_F);
+    setnum(L, "pH", px_spec_pH(s));
+    double pe, E;
+    if (px_spec_redox_state(s, &pe, &E) == PX_OK) {
+        setnum(L, "pe", pe);
+        setnum(L, "E", E);
     }
     setnum(L, "ionic_strength", stats.ionic_strength);
     setnum(L, "charge_imbalance", stats.charge_imbalance);
@@ -242,6 +240,7 @@ static int l_speciate(lua_State *L)
     int ns = 0;
     for (size_t j = 0; j < m; j++) {
         const px_species *sp = px_db_get(db, (size_t)s->db_index[j]);
+        px_equil_species_result r;
         px_equil_work_get_species(s->work, j, &r);
         if (sp->f.state == PX_STATE_E || sp->f.state == PX_STATE_L) continue;
         lua_createtable(L, 0, 8);
@@ -265,27 +264,24 @@ static int l_speciate(lua_State *L)
     }
     lua_setfield(L, -2, "species");
     /* each element's distribution: share of its total per species */
-    lua_createtable(L, 0, (int)o.n_totals);
-    for (size_t i = 3; i < nb; i++) {
-        px_equil_component_result c;
-        px_equil_work_get_component(s->work, i, &c);
-        double total = c.total_aq + c.total_solid;
+    size_t ne = px_spec_n_elements(s);
+    lua_createtable(L, 0, (int)ne);
+    for (size_t k = 0; k < ne; k++) {
+        px_spec_element_result e;
+        px_spec_element(s, k, &e);
         lua_createtable(L, 0, 3);
-        setnum(L, "total", total);
-        setnum(L, "dissolved", c.total_aq);
-        setnum(L, "solid", c.total_solid);
+        setnum(L, "total", e.total);
+        setnum(L, "dissolved", e.dissolved);
+        setnum(L, "solid", e.solid);
         lua_newtable(L);
         for (size_t j = 0; j < m; j++) {
-            double nu = s->nu[j * nb + i];
-            if (nu == 0.0) continue;
-            px_equil_work_get_species(s->work, j, &r);
-            double amount = r.molality > 0 ? r.molality : r.amount;
-            if (!(amount > 0) || !(total > 0)) continue;
-            lua_pushnumber(L, nu * amount / total);
+            double share = px_spec_element_share(s, k, j);
+            if (isnan(share)) continue;
+            lua_pushnumber(L, share);
             lua_setfield(L, -2, px_db_get(db, (size_t)s->db_index[j])->f.text);
         }
         lua_setfield(L, -2, "share");
-        lua_setfield(L, -2, px_element_symbol(s->elem_z[i]));
+        lua_setfield(L, -2, px_element_symbol(e.z));
     }
     lua_setfield(L, -2, "elements");
     px_spec_free(s);

@@ -21,7 +21,7 @@
  * gives the type of positional entries (opts[1], opts[2], ...), which are
  * refused otherwise.  core.user_error(msg) raises MSG at the user's line. */
 #include "lua/bindings.h"
-#include "lua/embedded.h"
+#include "embed/embedded.h"
 #include <lauxlib.h>
 #include <math.h>
 #include <stdarg.h>

@@ -544,6 +544,38 @@ static int l_formula(lua_State *L)
     return 1;
 }
 
+/* core.reaction_terms(text) -> {{formula, charge, state, elements, nu}...} | nil, message:
+ * the species of a reaction as the C parser reads it (balance not checked) */
+static int l_reaction_terms(lua_State *L)
+{
+    px_reaction r;
+    char msg[PX_MSG];
+    if (px_reaction_parse(luaL_checkstring(L, 1), &r, msg, sizeof msg) != PX_OK) {
+        luaL_pushfail(L);
+        lua_pushstring(L, msg);
+        return 2;
+    }
+    lua_createtable(L, r.n, 0);
+    for (int i = 0; i < r.n; i++) {
+        push_formula(L, &r.sp[i]);
+        lua_pushnumber(L, r.nu[i]);
+        lua_setfield(L, -2, "nu");
+        lua_rawseti(L, -2, i + 1);
+    }
+    return 1;
+}
+
+/* core.ligand_order() -> {"Cl", "S", ...}: the ligand files in load order */
+static int l_ligand_order(lua_State *L)
+{
+    lua_newtable(L);
+    for (size_t i = 0; px_data_ligand_z(i); i++) {
+        lua_pushstring(L, px_element_symbol(px_data_ligand_z(i)));
+        lua_rawseti(L, -2, (lua_Integer)i + 1);
+    }
+    return 1;
+}
+
 /* core.check_files({path...}) -> ok, {problem...} */
 static int l_check_files(lua_State *L)
 {
@@ -590,6 +622,7 @@ void px_lua_open_thermo(lua_State *L)
     static const luaL_Reg funcs[] = {
         {"database", l_database}, {"water", l_water},         {"psat", l_psat},
         {"default_pressure", l_default_pressure}, {"formula", l_formula},
+        {"reaction_terms", l_reaction_terms}, {"ligand_order", l_ligand_order},
         {"check_files", l_check_files}, {NULL, NULL}};
     luaL_newmetatable(L, DB_MT);
     luaL_newlib(L, methods);

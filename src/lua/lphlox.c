@@ -2,7 +2,7 @@
  * module of phlox builds on.  Each binding file adds its functions to this
  * table through a px_lua_open_* function listed in bindings.h. */
 #include "lua/bindings.h"
-#include "lua/embedded.h"
+#include "embed/embedded.h"
 #include "lua/host.h"
 #include "px_version.h"
 #include <lauxlib.h>

@@ -9,7 +9,7 @@
  * replace the built-in one.  Element files follow the phlox program's rule:
  * folders named in PHLOX_PATH (':'-separated) are searched before the
  * built-in element library. */
-#include "lua/embedded.h"
+#include "embed/embedded.h"
 #include "lua/host.h"
 #include <lauxlib.h>
 #include <stdlib.h>

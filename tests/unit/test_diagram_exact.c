@@ -15,6 +15,7 @@
 #include "core/constants.h"
 #include "core/status.h"
 #include "diagram/diagram.h"
+#include "diagram/potential.h"
 #include <stdlib.h>
 #include <string.h>
 

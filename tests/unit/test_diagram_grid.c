@@ -12,6 +12,7 @@
 #include "core/constants.h"
 #include "core/status.h"
 #include "diagram/diagram.h"
+#include "diagram/potential.h"
 #include <stdlib.h>
 
 typedef struct argmin_ctx {

@@ -1,7 +1,7 @@
 /* test_host.c - the embedded interpreter: the embedded file index, module
  * search order, protected calls with tracebacks. */
 #include "px_test.h"
-#include "lua/embedded.h"
+#include "embed/embedded.h"
 #include "lua/host.h"
 #include <lauxlib.h>
 #include <string.h>

@@ -8,6 +8,7 @@
 #include "core/status.h"
 #include "data/data.h"
 #include "diagram/emap.h"
+#include "diagram/potential.h"
 #include "thermo/practice.h"
 #include <string.h>
 

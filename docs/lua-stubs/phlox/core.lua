@@ -130,6 +130,10 @@ function phlox_core.isatty(fd) end
 ---@return any # boolean (SIGKILL to a worker this process started)
 function phlox_core.kill(pid) end
 
+--- (C) phlox_core.ligand_order() -> {"Cl", "S", ...}: the ligand files in load order
+---@return any # {"Cl", "S", ...}: the ligand files in load order
+function phlox_core.ligand_order() end
+
 --- (C) phlox_core.list_dir(path) -> {name...} sorted | nil, message
 ---@param path string
 ---@return any # {name...} sorted | nil, message
@@ -177,6 +181,11 @@ function phlox_core.polygon_pole(xs, ys, tol) end
 ---@param T number
 ---@return any # bar | nil, message
 function phlox_core.psat(T) end
+
+--- (C) phlox_core.reaction_terms(text) -> {{formula, charge, state, elements, nu}...} | nil, message:
+---@param text string
+---@return any # {{formula, charge, state, elements, nu}...} | nil, message:
+function phlox_core.reaction_terms(text) end
 
 --- (C) phlox_core.read_file(path)
 ---@param path string

@@ -1,5 +1,5 @@
 /* embedded_find.c - lookup in the table of embedded Lua sources. */
-#include "lua/embedded.h"
+#include "embed/embedded.h"
 #include <string.h>
 
 const px_embedded_file *px_embedded_find(const char *path)
