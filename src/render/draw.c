@@ -1391,30 +1391,9 @@ static int svg_compact(membuf *m, int reference)
  * <title> (the first panel title) and one <desc> with a line per panel
  * title, axis title, field label (phlox notation), legend entry, text and
  * stamp line, XML-escaped, inserted after the root element's start tag. */
-typedef struct sbuf {
-    char *s;
-    size_t n, cap;
-    int failed;
-} sbuf;
+typedef px_strbuf sbuf;
 
-static void sb_put(sbuf *b, const char *s, size_t k)
-{
-    if (b->failed) return;
-    if (b->n + k + 1 > b->cap) {
-        size_t cap = b->cap ? b->cap : 1024;
-        while (cap < b->n + k + 1) cap *= 2;
-        char *d = realloc(b->s, cap);
-        if (!d) {
-            b->failed = 1;
-            return;
-        }
-        b->s = d;
-        b->cap = cap;
-    }
-    memcpy(b->s + b->n, s, k);
-    b->n += k;
-    b->s[b->n] = '\0';
-}
+static void sb_put(sbuf *b, const char *s, size_t k) { px_strbuf_put(b, s, k); }
 
 static void sb_str(sbuf *b, const char *s) { sb_put(b, s, strlen(s)); }
 

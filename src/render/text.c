@@ -137,6 +137,18 @@ static int split_text(const char *text, int chem, run *runs)
     return nr;
 }
 
+/* A run's font size and baseline shift at text size `size`; sets the font
+ * on cr and returns the run's advance. */
+static double run_metrics(cairo_t *cr, const run *r, double size, double *fs, double *dy)
+{
+    *fs = r->kind == RUN_NORMAL ? size : size * PX_SCRIPT_SCALE;
+    *dy = r->kind == RUN_SUB ? size * PX_SUB_DROP : r->kind == RUN_SUP ? -size * PX_SUP_RISE : 0.0;
+    set_font(cr, *fs);
+    cairo_text_extents_t te;
+    cairo_text_extents(cr, r->text, &te);
+    return te.x_advance;
+}
+
 /* Walk the runs; draw = 0 measures, 1 shows the text, 2 adds its outline to
  * the path; returns the advance width. */
 static double layout(cairo_t *cr, const char *text, int chem, double size, double x, double y,
@@ -146,18 +158,13 @@ static double layout(cairo_t *cr, const char *text, int chem, double size, doubl
     int nr = split_text(text, chem, runs);
     double adv = 0.0;
     for (int i = 0; i < nr; i++) {
-        double fs = runs[i].kind == RUN_NORMAL ? size : size * PX_SCRIPT_SCALE;
-        double dy = runs[i].kind == RUN_SUB ? size * PX_SUB_DROP
-                    : runs[i].kind == RUN_SUP ? -size * PX_SUP_RISE : 0.0;
-        set_font(cr, fs);
-        cairo_text_extents_t te;
-        cairo_text_extents(cr, runs[i].text, &te);
+        double fs, dy, w = run_metrics(cr, &runs[i], size, &fs, &dy);
         if (draw) {
             cairo_move_to(cr, x + adv, y + dy);
             if (draw == 2) cairo_text_path(cr, runs[i].text);
             else cairo_show_text(cr, runs[i].text);
         }
-        adv += te.x_advance;
+        adv += w;
     }
     return adv;
 }
@@ -184,24 +191,26 @@ static const cairo_user_data_key_t sink_key; /* its address names the sink on a 
 static const char mark_head[] = "fill:rgb(1%,";
 static const char mark_tail[] = "%);fill-opacity:0.01;";
 
-static void sk_put(px_text_sink *k, const char *s, size_t n)
+void px_strbuf_put(px_strbuf *b, const char *s, size_t k)
 {
-    if (k->failed) return;
-    if (k->n + n + 1 > k->cap) {
-        size_t cap = k->cap ? k->cap : 4096;
-        while (cap < k->n + n + 1) cap *= 2;
-        char *d = realloc(k->s, cap);
+    if (b->failed) return;
+    if (b->n + k + 1 > b->cap) {
+        size_t cap = b->cap ? b->cap : 1024;
+        while (cap < b->n + k + 1) cap *= 2;
+        char *d = realloc(b->s, cap);
         if (!d) {
-            k->failed = 1;
+            b->failed = 1;
             return;
         }
-        k->s = d;
-        k->cap = cap;
+        b->s = d;
+        b->cap = cap;
     }
-    memcpy(k->s + k->n, s, n);
-    k->n += n;
-    k->s[k->n] = '\0';
+    memcpy(b->s + b->n, s, k);
+    b->n += k;
+    b->s[b->n] = '\0';
 }
+
+static void sk_put(px_text_sink *k, const char *s, size_t n) { px_strbuf_put(&k->b, s, n); }
 
 static void sk_str(px_text_sink *k, const char *s) { sk_put(k, s, strlen(s)); }
 
@@ -257,15 +266,15 @@ static void sk_xml(px_text_sink *k, const char *s)
 static void svg_text(cairo_t *cr, px_text_sink *k, const char *text, int chem, double size,
                      double x, double y, const double *halo)
 {
-    if (k->count >= PX_TEXT_MARK_MAX) k->failed = 1;
-    if (k->failed) return;
+    if (k->count >= PX_TEXT_MARK_MAX) k->over = 1;
+    if (k->b.failed || k->over) return;
     size_t *at = realloc(k->at, (size_t)(k->count + 2) * sizeof *at);
     if (!at) {
-        k->failed = 1;
+        k->b.failed = 1;
         return;
     }
     k->at = at;
-    k->at[k->count] = k->n;
+    k->at[k->count] = k->b.n;
     cairo_matrix_t m;
     cairo_get_matrix(cr, &m);
     int plain = m.xx == 1 && m.yy == 1 && m.xy == 0 && m.yx == 0;
@@ -294,12 +303,7 @@ static void svg_text(cairo_t *cr, px_text_sink *k, const char *text, int chem, d
     int nr = split_text(text, chem, runs);
     double adv = 0.0;
     for (int i = 0; i < nr; i++) {
-        double fs = runs[i].kind == RUN_NORMAL ? size : size * PX_SCRIPT_SCALE;
-        double dy = runs[i].kind == RUN_SUB ? size * PX_SUB_DROP
-                    : runs[i].kind == RUN_SUP ? -size * PX_SUP_RISE : 0.0;
-        set_font(cr, fs);
-        cairo_text_extents_t te;
-        cairo_text_extents(cr, runs[i].text, &te);
+        double fs, dy, w = run_metrics(cr, &runs[i], size, &fs, &dy);
         sk_str(k, "<tspan");
         sk_attr(k, "x", ox + x + adv);
         sk_attr(k, "y", oy + y + dy);
@@ -307,11 +311,11 @@ static void svg_text(cairo_t *cr, px_text_sink *k, const char *text, int chem, d
         sk_str(k, ">");
         sk_xml(k, runs[i].text);
         sk_str(k, "</tspan>");
-        adv += te.x_advance;
+        adv += w;
     }
     sk_str(k, "</text>");
-    if (k->failed) return;
-    k->at[++k->count] = k->n;
+    if (k->b.failed) return;
+    k->at[++k->count] = k->b.n;
     /* the marker: the text's box, so it shares the text's clip */
     set_font(cr, size);
     cairo_font_extents_t fe;
@@ -334,7 +338,7 @@ void px_text_sink_attach(cairo_t *cr, px_text_sink *sink)
 void px_text_sink_free(px_text_sink *sink)
 {
     if (!sink) return;
-    free(sink->s);
+    free(sink->b.s);
     free(sink->at);
     *sink = (px_text_sink){0};
 }
@@ -354,8 +358,9 @@ int px_text_sink_splice(const px_text_sink *sink, const unsigned char *svg, size
 {
     *out = NULL;
     *nout = 0;
-    if (sink->failed) return PX_ENOMEM;
-    size_t cap = n + sink->n + 1, o = 0, from = 0;
+    if (sink->over) return PX_ELIMIT;
+    if (sink->b.failed) return PX_ENOMEM;
+    size_t cap = n + sink->b.n + 1, o = 0, from = 0;
     unsigned char *d = malloc(cap);
     if (!d) return PX_ENOMEM;
     const size_t hl = sizeof mark_head - 1, tl = sizeof mark_tail - 1;
@@ -389,7 +394,7 @@ int px_text_sink_splice(const px_text_sink *sink, const unsigned char *svg, size
         o += s0 - from;
         size_t el = sink->at[id + 1] - sink->at[id];
         if (o + el + (n - s1) + 1 > cap) { /* a marker is shorter than its element */
-            cap = o + el + (n - s1) + 1 + sink->n;
+            cap = o + el + (n - s1) + 1 + sink->b.n;
             unsigned char *g = realloc(d, cap);
             if (!g) {
                 free(d);
@@ -397,7 +402,7 @@ int px_text_sink_splice(const px_text_sink *sink, const unsigned char *svg, size
             }
             d = g;
         }
-        memcpy(d + o, sink->s + sink->at[id], el);
+        memcpy(d + o, sink->b.s + sink->at[id], el);
         o += el;
         from = i = s1;
     }

@@ -28,17 +28,23 @@ void px_text_draw_halo(cairo_t *cr, const char *text, int chem, double size, dou
  * which px_text_sink_splice replaces by the element in cairo's SVG, so the
  * text keeps its place in the drawing order and its clip. */
 #define PX_TEXT_MARK_MAX 10000 /* elements a figure can hold (two 2-digit colour channels) */
-typedef struct px_text_sink {
-    char *s;        /* the elements, one after another */
+/* A growable NUL-terminated string; `failed` once memory ran out. */
+typedef struct px_strbuf {
+    char *s;
     size_t n, cap;
-    size_t *at;     /* start of element k in s; at[count] = n */
-    int count, failed;
+    int failed;
+} px_strbuf;
+void px_strbuf_put(px_strbuf *b, const char *s, size_t k);
+typedef struct px_text_sink {
+    px_strbuf b;    /* the elements, one after another */
+    size_t *at;     /* start of element k in b.s; at[count] = b.n */
+    int count, over; /* over: more texts than PX_TEXT_MARK_MAX */
 } px_text_sink;
 void px_text_sink_attach(cairo_t *cr, px_text_sink *sink);
 void px_text_sink_free(px_text_sink *sink);
 /* Replace the markers in the SVG text svg[0..n) by their elements: a new
- * buffer in *out (free it); PX_OK, PX_ENOMEM, or PX_EIO when a marker
- * names no element. */
+ * buffer in *out (free it); PX_OK, PX_ENOMEM, PX_ELIMIT (more texts than
+ * PX_TEXT_MARK_MAX), or PX_EIO when a marker names no element. */
 int px_text_sink_splice(const px_text_sink *sink, const unsigned char *svg, size_t n,
                         unsigned char **out, size_t *nout);
 /* Draw rotated by -90 degrees (for the y axis title), centred on (x, y). */
