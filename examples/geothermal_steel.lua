@@ -21,6 +21,7 @@
 local phlox = require "phlox"
 local plot = require "phlox.plot"
 local export = require "phlox.export"
+local plain = require("phlox.provenance").plain -- stamp lines as plain text
 local common = dofile((arg[0]:match("^(.*)/") or ".") .. "/study_common.lua")
 
 local o = common.output("geothermal-out")
@@ -103,6 +104,6 @@ for i, s in ipairs(states) do
     :format(s.pH, s.E_V, s.field, s.domain, s.solid, s.dissolved_Fe))
 end
 for _, m in ipairs(maps) do
-  for _, line in ipairs(m.stamp or {}) do print(("%g C: %s"):format(m.conditions.T_C, line)) end
+  for _, line in ipairs(m.stamp or {}) do print(("%g C: %s"):format(m.conditions.T_C, plain(line))) end
 end
 common.finish(o, "brine composition, sulfide levels, pH, hydrogen level and temperatures")

@@ -445,7 +445,7 @@ function plot.stamp_short(conditions, extra, width, opts)
 end
 
 -- Text of the metadata: formula braces dropped.
-local function plain(s) return (s:gsub("[{}]", "")) end
+local plain = provenance.plain
 
 -- Print the stamp the options ask for and put the full provenance in the
 -- file's metadata.  opts.stamp: "full" | "short" | false, or a list of

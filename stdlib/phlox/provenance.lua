@@ -107,19 +107,25 @@ end
 
 local function records(from) return select(2, flatten(from)) end
 
+--- A stamp line as plain text: the braces that mark formulas for
+-- typesetting in figures are dropped (tables, JSON, terminals).
+function provenance.plain(s) return (tostring(s):gsub("[{}]", "")) end
+local plain = provenance.plain
+
 --- The caveats of `from` (a result or a list of results with `stamp`
 -- lines, or provenance records with `notes`), or every caveat recorded in
--- this run.
+-- this run, as plain text.
 function provenance.notes(from)
   if from == nil then
     local out = {}
-    for i, n in ipairs(notes) do out[i] = n end
+    for i, n in ipairs(notes) do out[i] = plain(n) end
     return out
   end
   local results, recs = flatten(from)
   local out, seen = {}, {}
   local function add(list)
     for _, line in ipairs(list or {}) do
+      line = plain(line)
       if not seen[line] then seen[line] = true; out[#out + 1] = line end
     end
   end

@@ -24,7 +24,7 @@ function phlox_provenance.key_order(a, b) end
 
 --- The caveats of `from` (a result or a list of results with `stamp`
 --- lines, or provenance records with `notes`), or every caveat recorded in
---- this run.
+--- this run, as plain text.
 ---@param from? any
 ---@return any
 function phlox_provenance.notes(from) end
@@ -39,6 +39,12 @@ function phlox_provenance.notes(from) end
 ---@param options? any
 ---@return any
 function phlox_provenance.of_result(lib, elements, conditions, options) end
+
+--- A stamp line as plain text: the braces that mark formulas for
+--- typesetting in figures are dropped (tables, JSON, terminals).
+---@param s any
+---@return any
+function phlox_provenance.plain(s) end
 
 --- Record an input file (the library loader calls this for each element
 --- file); returns { file = path, sha256 = ... }.  Every input read feeds the
