@@ -581,8 +581,14 @@ function phlox.merge_notes(results, skip)
   return out
 end
 
+-- A note naming species: each formula in braces, so figures typeset it
+-- (provenance.plain drops the braces for tables and terminals).
 local function note_list(t, key, what, list)
-  if list and #list > 0 then add_note(t, key, what .. ": " .. table.concat(list, ", ")) end
+  if list and #list > 0 then
+    local f = {}
+    for i, s in ipairs(list) do f[i] = "{" .. tostring(s) .. "}" end
+    add_note(t, key, what .. ": " .. table.concat(f, ", "))
+  end
 end
 
 local function note_ligands(t, text)
