@@ -301,7 +301,7 @@ static int species_G_ref(px_thermo_ws *ws, const px_db *db, const char *who, con
         return werr(ws, PX_EDATA, "%s: the isocoulombic estimate needs dfG of %s at 25 C", who,
                     f->text);
     px_reaction r;
-    int self;
+    int self = -1; /* set by logk_find_self on success */
     int st = logk_find_self(ws, sp, &r, &self);
     if (!st)
         st = push(ws, sp);
