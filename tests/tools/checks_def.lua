@@ -555,10 +555,7 @@ function M.run(phlox, refdir, opts)
       else
         published = tonumber(row[c.ref.file == SP and "E0_V_SHE_25C" or "log10_K_25C"])
       end
-      -- one reference row names a course handout by its numbering; keep
-      -- the institution and course number only
-      source = row.source:gsub("NPTEL course (%d+) %a+ %d+ %(IIT Kanpur%) corrosion notes",
-                               "IIT Kanpur corrosion course notes (NPTEL %1)") .. " [" .. c.ref.file .. "]"
+      source = row.source .. " [" .. c.ref.file .. "]"
       confidence = row.confidence
       r.ref_key = c.ref.key ~= c.reaction and c.ref.key or nil
     elseif c.water_row then
