@@ -1218,6 +1218,17 @@ static cairo_status_t mem_write(void *closure, const unsigned char *data, unsign
     return CAIRO_STATUS_SUCCESS;
 }
 
+/* Replace a buffer's bytes by a rewritten copy of n bytes (the rewriting
+ * passes below build `out` from m->data, then hand it over here). */
+static int mem_replace(membuf *m, unsigned char *out, size_t n)
+{
+    free(m->data);
+    m->data = out;
+    m->n = n;
+    m->cap = n;
+    return PX_OK;
+}
+
 /* cairo names SVG groups "surfaceN" from a process-wide counter, so the
  * second identical figure of a run would differ in those names.  Renumber
  * them by first appearance (1, 2, ...) so identical inputs give identical
@@ -1271,11 +1282,7 @@ static int svg_renumber(membuf *m)
             i = stop;
         }
     }
-    free(m->data);
-    m->data = out;
-    m->n = o;
-    m->cap = o;
-    return PX_OK;
+    return mem_replace(m, out, o);
 }
 
 /* cairo writes SVG coordinates with up to six decimals ("1.671875"); a
@@ -1379,11 +1386,7 @@ static int svg_compact(membuf *m, int reference)
         o += (size_t)w;
         i = k;
     }
-    free(m->data);
-    m->data = out;
-    m->n = o;
-    m->cap = o;
-    return PX_OK;
+    return mem_replace(m, out, o);
 }
 
 /* The figure's words for SVG, whole and in phlox notation (with glyph
@@ -1488,11 +1491,7 @@ static int svg_describe(membuf *m, const px_figure *f)
     memcpy(out + at, b.s, b.n);
     memcpy(out + at + b.n, m->data + at, m->n - at);
     free(b.s);
-    free(m->data);
-    m->data = out;
-    m->n += b.n;
-    m->cap = m->n;
-    return PX_OK;
+    return mem_replace(m, out, m->n + b.n);
 }
 
 static const char *meta_get(const px_figure *f, const char *key)
@@ -1562,11 +1561,7 @@ static int png_text_chunks(membuf *m, const px_figure *f)
     size_t o = PX_PNG_IHDR_END + px_png_text(out + PX_PNG_IHDR_END, keys, vals, f->n_meta);
     memcpy(out + o, m->data + PX_PNG_IHDR_END, m->n - PX_PNG_IHDR_END);
     o += m->n - PX_PNG_IHDR_END;
-    free(m->data);
-    m->data = out;
-    m->n = o;
-    m->cap = o;
-    return PX_OK;
+    return mem_replace(m, out, o);
 }
 
 /* The image surface as PNG by png.c, metadata included. */

@@ -39,18 +39,12 @@ import xml.etree.ElementTree as ET
 import zlib
 
 from pngdecode import decode_png
+from refcheck import check, finish
 
 PHLOX = sys.argv[1]
 HERE = os.path.dirname(os.path.abspath(__file__))
 TEST_LUA = os.path.join(HERE, "..", "scripts", "test_plot.lua")
 DPI = 144
-FAILURES = []
-
-
-def check(cond, msg):
-    if not cond:
-        FAILURES.append(msg)
-        print("FAIL:", msg)
 
 
 def map_block():
@@ -319,10 +313,7 @@ def main():
         check("program: phlox" in subj and "not how fast" in subj, "PDF /Subject holds the provenance")
     finally:
         shutil.rmtree(work, ignore_errors=True)
-    if FAILURES:
-        print("%d failures" % len(FAILURES))
-        sys.exit(1)
-    print("test_plot_svg: ok")
+    finish("test_plot_svg")
 
 
 main()

@@ -27,16 +27,10 @@ import sys
 import tempfile
 
 from pngdecode import decode_png
+from refcheck import check, finish
 
 PHLOX = sys.argv[1]
-FAILURES = []
 WIDTH, HEIGHT = 800, 1600   # screenshot size, CSS pixels at scale 1
-
-
-def check(cond, msg):
-    if not cond:
-        FAILURES.append(msg)
-        print("FAIL:", msg)
 
 
 DRIVER = r"""
@@ -139,10 +133,7 @@ def main():
         check(b"/Title" in pdf and b"/Subject" in pdf, "PDF document information")
     finally:
         shutil.rmtree(work, ignore_errors=True)
-    if FAILURES:
-        print("%d failures" % len(FAILURES))
-        sys.exit(1)
-    print("test_report_browser: ok")
+    finish("test_report_browser")
 
 
 main()
