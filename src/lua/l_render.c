@@ -93,6 +93,16 @@ static int f_axes(lua_State *L)
     return 0;
 }
 
+/* The (fig, panel, xs, ys, ...) head of the drawing methods with nargs
+ * arguments: the stack is set to nargs first so the points box goes above
+ * every argument. */
+static size_t checkpanelpoints(lua_State *L, int nargs, int *panel, double **x, double **y)
+{
+    lua_settop(L, nargs);
+    *panel = checkpanel(L, 2);
+    return checkpoints(L, 3, 4, x, y);
+}
+
 static int f_titles(lua_State *L)
 {
     px_figure *f = checkfig(L);
@@ -105,10 +115,9 @@ static int f_titles(lua_State *L)
 static int f_polygon(lua_State *L)
 {
     px_figure *f = checkfig(L);
-    lua_settop(L, 10); /* the points box goes above every argument */
-    int panel = checkpanel(L, 2);
+    int panel;
     double *x, *y;
-    size_t n = checkpoints(L, 3, 4, &x, &y);
+    size_t n = checkpanelpoints(L, 10, &panel, &x, &y);
     px_rgba fill = checkcolor(L, 5), stroke = checkcolor(L, 6);
     double width = luaL_optnumber(L, 7, 0.6);
     const char *label = luaL_optstring(L, 8, NULL);
@@ -311,10 +320,9 @@ static int f_used(lua_State *L)
 static int f_line_label(lua_State *L)
 {
     px_figure *f = checkfig(L);
-    lua_settop(L, 10); /* the points box goes above every argument */
-    int panel = checkpanel(L, 2);
+    int panel;
     double *x, *y;
-    size_t n = checkpoints(L, 3, 4, &x, &y);
+    size_t n = checkpanelpoints(L, 10, &panel, &x, &y);
     const char *text = luaL_checkstring(L, 5);
     int chem = lua_toboolean(L, 6);
     double size = luaL_optnumber(L, 7, 7.0);
