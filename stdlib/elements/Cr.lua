@@ -8,15 +8,11 @@
 -- hydrolysis from Baes and Mesmer 1976. No Cp is recalled for any aqueous Cr species,
 -- so all are defined by reactions. Every number below was recalled, not read.
 
-local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic " ..
-            "Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
-local KELLEY = "cp from memory of Kelley 1960 (U.S. Bureau of Mines Bulletin 584), " ..
-               "converted from cal with 4.184"
-local CRC = "from memory of CRC Handbook of Chemistry and Physics, Electrochemical Series " ..
-            "(P. Vanysek)"
-local SHOCK97 = "from memory of Shock, Sassani, Willis and Sverjensky 1997 (Geochim. " ..
-                "Cosmochim. Acta 61, 907), cation table"
-local BM = "from memory of Baes and Mesmer 1976, The Hydrolysis of Cations (I = 0, 25 C)"
+local NBS = "from memory of [NBS82]"
+local KELLEY = "cp from memory of [K60], converted from cal with 4.184"
+local CRC = "from memory of [CRC]"
+local SHOCK97 = "from memory of [SSWS97], cation table"
+local BM = "from memory of [BM76] (I = 0, 25 C)"
 
 return {
   element = "Cr",
@@ -37,16 +33,9 @@ return {
       reaction = "2 Cr(s) + 6 H^+ = 2 Cr^3+ + 3 H2(g)",
       logK = 75.457, dH = -511.37,
       source = "log K derived here from E0(Cr3+/Cr) = -0.744 V " .. CRC ..
-               " (log K = 6 F E0/(RT ln10)); dH = 2 dfH(Cr3+), dfH derived here from that dfG " ..
-               "and S(Cr3+) = -73.5 cal/(mol K) = -307.5 J/(mol K) " .. SHOCK97,
+               " (log K = 6 F E0/(RT ln10)); dH = 2 dfH(Cr3+), dfH derived here from that dfG and S(Cr3+) = -73.5 cal/(mol K) = -307.5 J/(mol K) " .. SHOCK97,
       quality = "medium",
-      note = "dfG = -215.35 kJ/mol; Shock et al. 1997 give -51500 cal/mol = -215.48 kJ/mol " ..
-             "(as recalled). dfS = S - S(Cr,s) + 1.5 S(H2,g) = -135.27 J/(mol K), so dfH = " ..
-             "dfG + T dfS = -255.69 kJ/mol (-61.11 kcal/mol; a dfH near -61.2 kcal/mol also comes " ..
-             "to mind for that table, a weak recall, within 0.4 kJ). Reaction entropy of the record " ..
-             "-270.5 J/K. No Cp recalled for Cr3+ (and the HKF estimate path needs |Z| <= 2), so " ..
-             "dCp = 0 (van 't Hoff): the error this leaves is small beside the 25 C hold it " ..
-             "replaces (that hold implied a reaction entropy of +1445 J/K).",
+      note = "dfG = -215.35 kJ/mol; Shock et al. 1997 give -51500 cal/mol = -215.48 kJ/mol (as recalled). dfS = S - S(Cr,s) + 1.5 S(H2,g) = -135.27 J/(mol K), so dfH = dfG + T dfS = -255.69 kJ/mol (-61.11 kcal/mol; a dfH near -61.2 kcal/mol also comes to mind for that table, a weak recall, within 0.4 kJ). Reaction entropy of the record -270.5 J/K. No Cp recalled for Cr3+ (and the HKF estimate path needs |Z| <= 2), so dCp = 0 (van 't Hoff): the error this leaves is small beside the 25 C hold it replaces (that hold implied a reaction entropy of +1445 J/K).",
     },
     {
       formula = "Cr^2+", model = "logk",
@@ -54,9 +43,7 @@ return {
       logK = -13.759, estimate = "isocoulombic",
       source = "derived here from E0(Cr3+/Cr2+) = -0.407 V " .. CRC,
       quality = "medium",
-      note = "Gives E0(Cr2+/Cr) = -0.913 V, as the CRC series lists. No dH: S of Cr2+ is not " ..
-             "recalled; temperature by the isocoulombic estimate (n = 0: the couple's dS taken " ..
-             "as 0).",
+      note = "Gives E0(Cr2+/Cr) = -0.913 V, as the CRC series lists. No dH: S of Cr2+ is not recalled; temperature by the isocoulombic estimate (n = 0: the couple's dS taken as 0).",
     },
     -- Cr(III) hydrolysis -----------------------------------------------------
     {
@@ -128,8 +115,7 @@ return {
       cp = { a = 118.74, b = 0, c = 0 },
       source = NBS,
       quality = "high",
-      note = "cp: NBS Cp(298.15 K) only (a = Cp, b = c = 0). Stands in for the hydrated " ..
-             "Cr(III) oxide of older diagrams (Cr(OH)3 left out, see docs).",
+      note = "cp: NBS Cp(298.15 K) only (a = Cp, b = c = 0). Stands in for the hydrated Cr(III) oxide of older diagrams (Cr(OH)3 left out, see docs).",
     },
   },
 }

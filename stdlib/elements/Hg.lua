@@ -13,12 +13,10 @@
 --
 -- Caution: mercury is toxic; diagrams say what can form, not how fast.
 
-local CODATA = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values for " ..
-               "Thermodynamics (dfH, S; dfG derived here as dfH - T dfS)"
-local CODATA_U = "+-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)"
-local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic " ..
-            "Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
-local BM = "from memory of Baes and Mesmer 1976, The Hydrolysis of Cations (I = 0, 25 C)"
+local CODATA = "from memory of [CODATA89] (dfH, S; dfG derived here as dfH - T dfS)"
+local CODATA_U = "+-: from memory of [CODATA89]"
+local NBS = "from memory of [NBS82]"
+local BM = "from memory of [BM76] (I = 0, 25 C)"
 
 return {
   element = "Hg",
@@ -33,8 +31,7 @@ return {
       uncertainty = { S = 0.12 },
       source = CODATA .. " (S; " .. CODATA_U .. "); Cp at 298.15 K from " .. NBS .. ", held constant",
       quality = "high",
-      note = "Liquid to its normal boiling point (629.88 K). Cp of liquid mercury falls by " ..
-             "about 1 % from 298 to 450 K.",
+      note = "Liquid to its normal boiling point (629.88 K). Cp of liquid mercury falls by about 1 % from 298 to 450 K.",
     },
     {
       formula = "Hg(g)", model = "cp",
@@ -43,8 +40,7 @@ return {
       uncertainty = { H = 0.04, S = 0.005 },
       source = CODATA .. " (" .. CODATA_U .. "); Cp = 5R/2 (monatomic ideal gas)",
       quality = "high",
-      note = "log10 of the vapour pressure over Hg(l) at 25 C: -5.578 bar (0.264 Pa), " ..
-             "the measured 0.26 Pa.",
+      note = "log10 of the vapour pressure over Hg(l) at 25 C: -5.578 bar (0.264 Pa), the measured 0.26 Pa.",
     },
     {
       formula = "Hg^2+", model = "logk",

@@ -4,12 +4,12 @@
 -- confidence there); MgO and brucite from the NBS tables (one table for the oxide /
 -- hydroxide pair). The SH88 dfG of Mg2+ is 0.8 kJ/mol less negative than NBS and
 -- 1.4 kJ/mol less negative than CODATA: brucite solubility and E(Mg2+/Mg) carry that.
-local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
-local CODATA = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values for Thermodynamics"
-local RH95 = "from memory of Robie and Hemingway 1995 (USGS Bulletin 2131)"
-local SH88 = "from memory of Shock and Helgeson 1988 (Geochim. Cosmochim. Acta 52, 2009; ion tables, table no. not recalled), as in phlox's reference hkf/hkf_parameters.csv (high confidence, passes the Cp/V check)"
-local BM76 = "from memory of Baes and Mesmer 1976, The Hydrolysis of Cations (I = 0, 25 C)"
-local N90 = "from memory of Nordstrom et al. 1990 (ACS Symp. Ser. 416)"
+local NBS = "from memory of [NBS82]"
+local CODATA = "from memory of [CODATA89]"
+local RH95 = "from memory of [RH95]"
+local SH88 = "from memory of [SH88] (ion tables, table no. not recalled), as in phlox's reference hkf/hkf_parameters.csv (high confidence, passes the Cp/V check)"
+local BM76 = "from memory of [BM76] (I = 0, 25 C)"
+local N90 = "from memory of [N90]"
 
 return {
   element = "Mg",
@@ -66,7 +66,7 @@ return {
       V = 24.63,
       source = NBS .. " (also phlox's reference gibbs_25C.csv); V: " .. RH95,
       quality = "high",
-      note = "cp is NBS Cp at 298.15 K taken as constant. With the SH88 Mg2+ above, log Ksp (brucite = Mg2+ + 2 OH-) = -11.39; Smith and Martell (via Harris) -11.15; see docs/data/other-metals.md.",
+      note = "cp is NBS Cp at 298.15 K taken as constant. With the SH88 Mg2+ above, log Ksp (brucite = Mg2+ + 2 OH-) = -11.39; [SM] (via Harris) -11.15; see docs/data/other-metals.md.",
     },
   },
 }

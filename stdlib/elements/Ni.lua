@@ -5,11 +5,9 @@
 -- Ni^2+, so it is defined by its formation reaction from the metal.
 -- Every number below was recalled, not read; "from memory of" says so.
 
-local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic " ..
-            "Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
-local KELLEY = "cp from memory of Kelley 1960 (U.S. Bureau of Mines Bulletin 584), " ..
-               "converted from cal with 4.184"
-local BM = "from memory of Baes and Mesmer 1976, The Hydrolysis of Cations (I = 0, 25 C)"
+local NBS = "from memory of [NBS82]"
+local KELLEY = "cp from memory of [K60], converted from cal with 4.184"
+local BM = "from memory of [BM76] (I = 0, 25 C)"
 
 return {
   element = "Ni",
@@ -31,8 +29,7 @@ return {
       logK = 7.989, dH = -54.0,
       source = "derived here from " .. NBS .. ": Ni2+ dfG -45.6, dfH -54.0 kJ/mol, S -128.9 J/(mol K)",
       quality = "medium",
-      note = "E0(Ni2+/Ni) = -0.236 V; the CRC series lists -0.257 V (not in the shared " ..
-             "reference table). No Cp recalled; van 't Hoff only above 25 C.",
+      note = "E0(Ni2+/Ni) = -0.236 V; the CRC series lists -0.257 V (not in the shared reference table). No Cp recalled; van 't Hoff only above 25 C.",
     },
     {
       formula = "NiOH^+", model = "logk",
@@ -70,8 +67,7 @@ return {
       cp = { a = 44.31, b = 0, c = 0 },
       source = NBS,
       quality = "medium",
-      note = "cp: NBS Cp(298.15 K) only (a = Cp, b = c = 0); NiO has a magnetic Cp " ..
-             "anomaly near 525 K that this ignores.",
+      note = "cp: NBS Cp(298.15 K) only (a = Cp, b = c = 0); NiO has a magnetic Cp anomaly near 525 K that this ignores.",
     },
     {
       formula = "Ni(OH)2(s)", model = "cp",
@@ -79,9 +75,7 @@ return {
       estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
       source = NBS,
       quality = "medium",
-      note = "Other compilations: dfH -538, S 79. Gives log K(Ni(OH)2 + 2H+ = Ni2+ + 2H2O) " ..
-             "= 12.73; crystalline beta-Ni(OH)2 measured 11.67 +- 0.20 (ORNL; see " ..
-             "docs). Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats).",
+      note = "Other compilations: dfH -538, S 79. Gives log K(Ni(OH)2 + 2H+ = Ni2+ + 2H2O) = 12.73; crystalline beta-Ni(OH)2 measured 11.67 +- 0.20 (ORNL; see docs). Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats).",
     },
   },
 }
