@@ -2,6 +2,11 @@
 -- (Cl2, hypochlorite, chlorite, chlorate, perchlorate), chloro complexes of the
 -- metals and the common chloride salts.
 --
+-- Primary compilation: NBS 1982 for the chlorine redox species (Cl2, ClO^-, HClO2,
+-- ClO2^-, ClO3^-, ClO4^-); Cl^- is the SH88 HKF row, whose dfG (-131.29 kJ/mol) agrees
+-- with CODATA 1989 (-131.22) within 0.07 kJ/mol. Chloro complexes: Smith and Martell /
+-- Nordstrom et al. 1990 constants at I = 0 (each record names its source).
+--
 -- Data sets: Cl^- carries the revised-HKF parameters of Shock and Helgeson 1988
 -- (recalled from the paper). The
 -- oxychlorine species are written as reactions whose log K and dH are derived
