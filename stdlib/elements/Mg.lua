@@ -69,7 +69,7 @@ return {
       V = 24.63,
       source = NBS .. " (also phlox's reference gibbs_25C.csv); V: " .. RH95,
       quality = "high",
-      note = "cp is NBS Cp at 298.15 K taken as constant. CODATA 1989 has no brucite. With the CODATA Mg2+ above, log Ksp (brucite = Mg2+ + 2 OH-) = -11.15, as Smith and Martell (via Harris) print; with the SH88 Mg2+ it was -11.39 (see docs/data/other-metals.md).",
+      note = "cp is NBS Cp at 298.15 K taken as constant. CODATA 1989 has no brucite. With the CODATA Mg2+ above, log Ksp (brucite = Mg2+ + 2 OH-) = -11.13 (Smith and Martell via Harris: -11.15); with the SH88 Mg2+ it was -11.39 (see docs/data/other-metals.md).",
     },
   },
 }

@@ -305,7 +305,7 @@ rk("CuSO4*5H2O(s,chalcanthite) = Cu^2+ + SO4^2- + 5 H2O(l)", -2.64, N90C, "mediu
 rk("ZnSO4*7H2O(s,goslarite) = Zn^2+ + SO4^2- + 7 H2O(l)", -1.96, N90C, "medium")
 rk("Ag2SO4(s) = 2 Ag^+ + SO4^2-", -4.92, N90C, "medium")
 rk("MgCO3(s,magnesite) = Mg^2+ + CO3^2-", -8.03, N90C, "medium", { same = true,
-  note = "issue 13: magnesite is now the Nordstrom et al. 1990 constant (Robie and Hemingway magnesite with SH88 Mg^2+ gave -8.32 and made dolomite metastable above about 70 C); dolomite stability is checked in test_library13.lua" })
+  note = "issue 13: magnesite is now the Nordstrom et al. 1990 constant (Robie and Hemingway magnesite with SH88 Mg^2+ gave -8.32 and made dolomite metastable above about 70 C); dolomite stability is checked in test_library13.lua. With the CODATA Mg^2+ adopted later in issue 13, the Robie and Hemingway magnesite would give about -8.08: most of the old gap was the SH88 Mg^2+" })
 rk("MnCO3(s,rhodochrosite) = Mn^2+ + CO3^2-", -11.13, N90, "medium", { known = { diff = 0.51, margin = 0.02,
   why = "file: NBS 1982 rhodochrosite and Mn^2+ give -10.62; Nordstrom et al. 1990 list -11.13; the literature spreads -10.4 to -11.13 (file note). Same finding as docs/data/ligands.md" } })
 rk("PbCO3(s,cerussite) = Pb^2+ + CO3^2-", -13.13, "from memory of the solubility literature on cerussite (about -13.13)", "medium", { known = { diff = 0.326, margin = 0.02,
@@ -373,19 +373,21 @@ local SOLUB = "from memory of the gas-solubility literature (Henry constant at 2
 crc("ZnO(s,zincite) + H2O(l) + 2 e- = Zn(s) + 2 OH^-", -1.260, "medium", { note = "file: CODATA 1989 ZnO and Zn" })
 crc("Zn(OH)2(s,epsilon) + 2 e- = Zn(s) + 2 OH^-", -1.249, "medium", { note = "file: Baes and Mesmer log *Ks of epsilon-Zn(OH)2 (11.38) with the CODATA Zn^2+" })
 crc("Sn(OH)3^- + 2 e- = Sn(s) + 3 OH^-", -0.909, "low", { note = "CRC writes HSnO2^- + H2O; file: Baes and Mesmer beta3 of Sn(II) (-16.61) with NBS Sn^2+ gives -0.891 V. 18 mV is 0.6 in log beta3, inside the spread of published Sn(II) hydrolysis constants (Sn(II) hydrolysis is hard to measure: Sn^2+ oxidises and precipitates)" })
-crc("SnO2(s,cassiterite) + 4 H^+ + 4 e- = Sn(s) + 2 H2O(l)", -0.117, "medium", { note = "file: NBS 1982 cassiterite; the CRC value follows the same NBS-era data" })
-crc("SnO2(s,cassiterite) + 4 H^+ + 2 e- = Sn^2+ + 2 H2O(l)", -0.094, "medium", { note = "file: NBS 1982 cassiterite and Sn^2+; the CRC value follows the same NBS-era data" })
+crc("SnO2(s,cassiterite) + 4 H^+ + 4 e- = Sn(s) + 2 H2O(l)", -0.117, "medium", { note = "file: NBS 1982 cassiterite; the CRC value probably follows the same NBS-era data" })
+crc("SnO2(s,cassiterite) + 4 H^+ + 2 e- = Sn^2+ + 2 H2O(l)", -0.094, "medium", { note = "file: NBS 1982 cassiterite and Sn^2+; the CRC value probably follows the same NBS-era data" })
 crc("Pb(OH)3^- + 2 e- = Pb(s) + 3 OH^-", -0.537, "medium", { note = "CRC writes HPbO2^- + H2O; file: Baes and Mesmer beta3 of Pb(II) (-28.06) with NBS Pb^2+" })
 crc("Cd(OH)4^2- + 2 e- = Cd(s) + 4 OH^-", -0.658, "low", { note = "file: Baes and Mesmer beta4 of Cd(II) (-47.35) with the CODATA Cd^2+" })
 crc("CdO(s,monteponite) + H2O(l) + 2 e- = Cd(s) + 2 OH^-", -0.783, "medium", { note = "file: CODATA 1989 CdO" })
-crc("MoO2(s) + 4 H^+ + 4 e- = Mo(s) + 2 H2O(l)", -0.152, "medium", { note = "file: NBS 1982 MoO2; the CRC value follows the same NBS-era data" })
+crc("MoO2(s) + 4 H^+ + 4 e- = Mo(s) + 2 H2O(l)", -0.152, "medium", { note = "file: NBS 1982 MoO2; the CRC value probably follows the same NBS-era data" })
+sp("Ti^2+ + 2 e- = Ti(s)", nil, { same = true, note = "Ti^2+ is defined from this CRC value" })
+sp("Mo^3+ + 3 e- = Mo(s)", nil, { same = true, note = "Mo^3+ is defined from this CRC value" })
 crc("TiO2(s,rutile) + 4 H^+ + 2 e- = Ti^2+ + 2 H2O(l)", -0.502, "low", { note = "Ti^2+ is defined from the CRC Ti^2+/Ti value (-1.630 V), so this row tests NBS rutile against the CRC's own rutile: 16 mV is 2 kJ/mol in dfG of a two-electron couple, inside the spread of old Ti(II) data (Ti^2+ is not stable in water; its E is estimated, not measured)" })
 crc("TiO(s) + 2 H^+ + 2 e- = Ti(s) + H2O(l)", -1.31, "low", { note = "file: NBS 1982 TiO (alpha) gives -1.336 V; CRC -1.31 V implies dfG(TiO) about 5 kJ/mol less negative; TiO data spread with stoichiometry (TiO(1+-x)) and phase" })
 crc("Al(OH)4^- + 3 e- = Al(s) + 4 OH^-", -2.33, "medium", { note = "CRC writes H2AlO3^- + H2O; file: CODATA Al^3+ with the Baes and Mesmer beta4 (-23.0) gives -2.348 V; the 18 mV follow the Al^3+ choice (-1.698 against CRC -1.662 V for Al^3+/Al, 36 mV, row above) less the hydrolysis constant's share" })
 rk("H^+ + F^- = HF(aq)", 3.17, SM, "high", { note = "file: Nordstrom et al. 1990 (3.18)" })
 rk("HF(aq) + F^- = HF2^-", 0.58, SM, "low", { note = "file: Nordstrom et al. 1990 log K of H^+ + 2 F^- = HF2^- (3.76) less that of HF (3.18)" })
 rk("CaF2(s,fluorite) = Ca^2+ + 2 F^-", -10.46, "from memory of CRC Handbook of Chemistry and Physics, solubility products (Ksp 3.45e-11)", "medium",
-   { note = "file: Nordstrom et al. 1990 -10.60; the CRC Ksp gives -10.46. Published fluorite constants spread about -10.4 to -10.6 (natural against synthetic fluorite, and the CaF^+ pair used in the reduction); Nordstrom et al. is the evaluated value, so the file keeps it" })
+   { note = "file: Nordstrom et al. 1990 -10.60; the CRC Ksp gives -10.46. published fluorite constants spread about -10.4 to -10.6 (recalled); Nordstrom et al. is an evaluated value, so the file keeps it" })
 rk("CaCO3(s,aragonite) = Ca^2+ + CO3^2-", -8.22, "from memory of Harris, Quantitative Chemical Analysis, Appendix F (Ksp 6.0e-9, after Smith and Martell)", "medium",
    { note = "file: Plummer and Busenberg 1982 (-8.336), measured with the CaHCO3^+ and CaCO3(aq) pairs; the older Smith and Martell value is 0.12 higher, as for calcite (reference row: Harris -8.35 against Plummer and Busenberg -8.48)" })
 rk("ZnO(s,zincite) + 2 H^+ = Zn^2+ + H2O(l)", 11.14, BM76, "medium", { note = "file: CODATA 1989 ZnO and Zn^2+ (11.19)" })
@@ -656,7 +658,25 @@ function M.run(phlox, refdir, opts)
     else summary.fail, g.fail = summary.fail + 1, g.fail + 1 end
    end
   end
-  if not opts.filter then summary.coverage = M.coverage(phlox, results, opts) end
+  if not opts.filter then
+    summary.coverage = M.coverage(phlox, results, opts)
+    -- reference rows (25 C tables) that no check uses, and why
+    local used = {}
+    for _, c in ipairs(M.checks) do if c.ref then used[c.ref.file .. "\0" .. c.ref.key] = true end end
+    summary.unused = {}
+    local all = phlox.library({ user = opts.user, table.unpack(phlox.available_elements()) })
+    for _, f in ipairs({ SP, LK }) do
+      local keycol = f == SP and "couple" or "reaction"
+      for _, row in ipairs(csv[f]) do
+        local key = row[keycol]
+        if not used[f .. "\0" .. key] then
+          local ok, err = pcall(function() return all:reaction(key) end)
+          summary.unused[#summary.unused + 1] = { file = f, key = key,
+            why = ok and "computable; no check written" or (tostring(err):match("^[^\n]*"):gsub("^.-Library:reaction: ", ""):gsub("^reaction '.-': ", "")) }
+        end
+      end
+    end
+  end
   return results, summary
 end
 
@@ -969,8 +989,12 @@ function M.render(results, summary)
   w("  300 C): not recalled with enough confidence to serve as a check. Records")
   w("  without a dH or log K(T) use the isocoulombic estimate; its errors against")
   w("  the records that do have temperature data are in the last section.")
-  w("- Reference rows whose species are not in the library: NiO2, Cr(OH)3,")
-  w("  Co(OH)3, Hg, Au, Ti2+ and Mo3+ couples.")
+  if summary.unused then
+    w(("- Reference rows of the 25 C tables that no check uses (%d):"):format(#summary.unused))
+    for _, u in ipairs(summary.unused) do
+      w(("  - `%s` (%s): %s"):format(u.key, u.file, esc(u.why)))
+    end
+  end
   w("- S^2- based couples other than the one row above (pK2 of H2S is disputed).")
   w("")
   w("## Notes and sources, row by row")
