@@ -7,8 +7,9 @@
 -- from the isocoulombic estimate against the Co3+/Co2+ couple (flagged estimated);
 -- Cr(VI) species and Cr2O3 from the NBS tables (Wagman et al. 1982); Cr(III)
 -- hydrolysis from Baes and Mesmer 1976; amorphous Cr(OH)3 from the solubility study of
--- Rai, Sass and Moore 1987 (metastable; eskolaite is the default solid). No Cp is recalled for any aqueous Cr species,
--- so all are defined by reactions. Every number below was recalled, not read.
+-- Rai, Sass and Moore 1987 (metastable; eskolaite is the default solid). No Cp is
+-- recalled for any aqueous Cr species, so all are defined by reactions. Every number
+-- below was recalled, not read.
 
 local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic " ..
             "Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
@@ -163,8 +164,10 @@ return {
              "only when eskolaite is excluded (exclude = {\"Cr2O3(s,eskolaite)\"}, which the " ..
              "map's stamp names). No dH measured: temperature by the isocoulombic estimate with " ..
              "the eskolaite solubility as model reaction (Cr(OH)3(am) = 0.5 Cr2O3 + 1.5 H2O(l) " ..
-             "taken with dS = dCp = 0). With the file's Cr(VI) it gives E(CrO4^2-/Cr(OH)3) = " ..
-             "-0.066 V against the CRC -0.13 V (docs/data/transition-metals.md).",
+             "taken with dS = dCp = 0; the S and Cp this implies for the solid, 145 and 172 " ..
+             "J/(mol K), carry those of the 1.5 H2O(l) and are not the solid's own). With the " ..
+             "file's Cr(VI) it gives E(CrO4^2-/Cr(OH)3) = " ..
+             "-0.065 V against the CRC -0.13 V (docs/data/transition-metals.md).",
     },
   },
 }
