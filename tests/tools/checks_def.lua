@@ -319,6 +319,8 @@ rk("PbCO3(s,cerussite) = Pb^2+ + CO3^2-", -13.13, "from memory of the solubility
   why = "file: NBS 1982 cerussite and Pb^2+ give -12.80 (-12.83 with NBS CO3^2-); measured about -13.13 (recalled). Same finding as docs/data/ligands.md" } })
 rk("CuCl(s,nantokite) = Cu^+ + Cl^-", -6.76, "from memory of CRC Handbook of Chemistry and Physics, solubility products (Ksp 1.72e-7)", "medium")
 rk("PbCl2(s,cotunnite) = Pb^2+ + 2 Cl^-", -4.78, N90C, "medium")
+rk("HCrO4^- = CrO4^2- + H^+", -6.51, SM, "medium", { note = "file: NBS 1982 dfG of HCrO4^- and CrO4^2- give -6.473 (the record's note recalls the measured 6.51)" })
+rk("2 HCrO4^- = Cr2O7^2- + H2O(l)", 1.5, SM .. "; recalled to two digits only", "low", { note = "file: NBS 1982 dfG of Cr2O7^2- and HCrO4^- give 1.547" })
 rk("Cr(OH)3(am) + 2 H^+ = CrOH^2+ + 2 H2O(l)", 6.0, "Rai, Sass and Moore 1987, Inorg. Chem. 26, 345, as summarised in the ECHA registration dossier for chromium(III) hydroxide (read): about 520 mg/L Cr at pH about 4, read from the paper's figure (0.01 M NaClO4); CrOH^2+ is the dominant species there (the paper's abstract, OSTI 6772597, read), so log K = log(1.0e-2) + 2 x 4 = 6.0", "low",
    { note = "file: Rai et al. log *Ks 9.76 (recalled) with the Baes and Mesmer CrOH^2+ constant (-4.0) gives 5.76. The published figure is a concentration at I = 0.01 (gamma of CrOH^2+ about 0.67 by Davies: -0.17 at I = 0) read off a log plot, and its total includes Cr^3+ (as large as CrOH^2+ at pH 4 with the Baes and Mesmer constant: up to -0.3); both corrections bring it to 5.5-5.8, so the 0.24 lies within the reading" })
 rk("Ag2O(s) + 2 H^+ = 2 Ag^+ + H2O(l)", 12.58, BM76, "medium")
