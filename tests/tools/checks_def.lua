@@ -163,6 +163,8 @@ sp("Cr^3+ + e- = Cr^2+", nil, { same = true, note = "Cr^2+ is defined from this 
 sp("Cr2O7^2- + 14 H^+ + 6 e- = 2 Cr^3+ + 7 H2O(l)", nil, { known = { diff = 0.1318, margin = 0.003,
   why = "CRC 1.232 V; NBS 1982 Cr2O7^2- with the CRC Cr^3+ gives 1.364 V; the reference note records 1.33 (Latimer/Pourbaix-era tables) and 1.36 in other compilations; the CRC value is the outlier of the three" } })
 sp("Cr2O3(s,eskolaite) + 6 H^+ + 6 e- = 2 Cr(s) + 3 H2O(l)", "Cr2O3(s) + 6 H^+ + 6 e- = 2 Cr(s) + 3 H2O(l)", { same = true })
+sp("Cr(OH)3(am) + 3 e- = Cr(s) + 3 OH^-", "Cr(OH)3(s) + 3 e- = Cr(s) + 3 OH^-", { known = { diff = 0.1011, margin = 0.003,
+  why = "file: amorphous Cr(OH)3 of Rai, Sass and Moore 1987 (log *Ks 9.76, recalled) on the CRC-derived Cr^3+ gives -1.379 V. The CRC -1.48 V needs dfG(Cr(OH)3) = -900.1 kJ/mol (computed here), the hydrated oxide of the Pourbaix-era tables (the Cr2O3 reference row notes -0.65 V for it, which the same dfG reproduces: -0.652 V); that solid would be 15 kJ/mol more stable than eskolaite + water and have log *Ks = 4.7, i.e. about 5e-8 mol/kg Cr^3+ at pH 4 where Rai et al. measured about 1e-2 (ECHA summary of the paper, read). The measured solubility is kept" } })
 sp("Mn^2+ + 2 e- = Mn(s)")
 sp("MnO4^- + 8 H^+ + 5 e- = Mn^2+ + 4 H2O(l)")
 sp("MnO4^- + 2 H2O(l) + 3 e- = MnO2(s,pyrolusite) + 4 OH^-", "MnO4^- + 2 H2O(l) + 3 e- = MnO2(s) + 4 OH^-")
@@ -203,7 +205,11 @@ crc("Na^+ + e- = Na(s)", -2.71, "high")
 crc("K^+ + e- = K(s)", -2.931, "high")
 crc("Al^3+ + 3 e- = Al(s)", -1.662, "medium", { known = { diff = -0.0360, margin = 0.003,
   why = "file: CODATA dfG(Al^3+) = -491.5 kJ/mol gives -1.698 V; NBS (-485.0) gives -1.676 V; CRC -1.662 V needs about -481 kJ/mol; dfG(Al^3+) spreads 10 kJ/mol across tables (SH88 -483.7). Same finding as docs/data/other-metals.md" } })
-crc("MnO2(s,pyrolusite) + 4 H^+ + 2 e- = Mn^2+ + 2 H2O(l)", 1.224, "high")
+crc("MnO2(s,pyrolusite) + 4 H^+ + 2 e- = Mn^2+ + 2 H2O(l)", 1.224, "high", { note = "5.3 mV: file NBS 1982 pyrolusite (-465.14) and Mn^2+ (-228.1 kJ/mol) give 1.2293 V; the CRC 1.224 V corresponds to 1.0 kJ/mol in dfG(MnO2), the rounding spread of the older MnO2 tables; the other CRC Mn couples of this page (Mn^2+/Mn, MnO4^-/Mn^2+, MnO4^-/MnO2) agree within 5 mV with the same NBS data" })
+crc("Mn^3+ + e- = Mn^2+", 1.5415, "high", { same = true,
+  note = "Mn^3+ is defined from this CRC value; a conditional potential of 1.535 V at I = 3.31 mol/dm3 (HClO4/NaClO4) was measured for the same couple (abstract read, BITS Pilani repository 123456789/17836), 6.5 mV below, as expected for a medium that is not I = 0" })
+crc("CrO4^2- + 4 H2O(l) + 3 e- = Cr(OH)3(am) + 5 OH^-", -0.13, "medium", { known = { diff = 0.0652, margin = 0.003,
+  why = "file: NBS 1982 CrO4^2- (-727.75 kJ/mol), the CRC-derived Cr^3+ (-215.35) and Rai, Sass and Moore 1987 amorphous Cr(OH)3 (log *Ks 9.76, recalled) give -0.065 V. The CRC -0.13 V needs either log *Ks = 13.1 (a solid 3 log units more soluble than freshly precipitated Cr(OH)3, refuted by the measured 1e-2 mol/kg at pH 4) or dfG(CrO4^2-) 18.9 kJ/mol below NBS; it does not agree with the CRC's own Cr(OH)3/Cr -1.48 V either (together they give CrO4^2-/Cr -0.805 V, NBS -0.722 V). Same direction as the Cr2O7^2-/Cr^3+ row: the older tables put Cr(VI) lower against Cr(III) than NBS Cr(VI) with the CRC Cr^3+ does. Ball and Nordstrom 1998 (J. Chem. Eng. Data 43, 895; abstract read) revised this network (the Cr2+/Cr3+ path); their values could not be read, so the file keeps NBS and the CRC potentials" } })
 crc("Ag2O(s) + H2O(l) + 2 e- = 2 Ag(s) + 2 OH^-", 0.342, "high")
 crc("S(s,rhombic) + 2 H^+ + 2 e- = H2S(aq)", 0.142, "high")
 crc("ClO3^- + 6 H^+ + 6 e- = Cl^- + 3 H2O(l)", 1.451, "medium", { note = "9 mV: file: NBS 1982 dfG of ClO3^- (-7.95 kJ/mol) and Cl^- give 1.442 V; CRC 1.451 V implies dfG(ClO3^-) about -2.6 kJ/mol. The CRC chlorate and perchlorate couples do not close among themselves either (rows below), so the spread sits in old chlorate thermal data, not in the file" })
@@ -260,7 +266,7 @@ lk("Ni(OH)2(s) = Ni^2+ + 2 OH^-")
 lk("Ni(OH)2(s) + 2 H^+ = Ni^2+ + 2 H2O(l)", "beta-Ni(OH)2(cr) + 2 H^+ = Ni^2+ + 2 H2O(l)", { known = { diff = 1.059, margin = 0.02,
   why = "ORNL solubility study of crystalline beta-Ni(OH)2: 11.67; the file's NBS 1982 Ni(OH)2 (not the well-crystallised beta phase) gives 12.73; NEA-TDB selects about 11.0 (recalled). Not resolved; see docs/data/transition-metals.md" } })
 lk("Mg(OH)2(s,brucite) = Mg^2+ + 2 OH^-", nil, { note = "issue 13: CODATA Mg^2+ with NBS brucite gives -11.13 (the former SH88 Mg^2+ gave -11.38)" })
-lk("Mn(OH)2(am) = Mn^2+ + 2 OH^-", "Mn(OH)2(s) = Mn^2+ + 2 OH^-")
+lk("Mn(OH)2(am) = Mn^2+ + 2 OH^-", "Mn(OH)2(s) = Mn^2+ + 2 OH^-", { note = "0.13: file NBS 1982 amorphous Mn(OH)2 with NBS Mn^2+ gives -12.67; the row (Smith and Martell, solid not named) matches crystalline pyrochroite: Mn.lua's Baes and Mesmer pyrochroite (log *Ks 15.2) gives -12.79 here. The row is the crystalline solid, the file keeps both" })
 lk("CaCO3(s,calcite) = Ca^2+ + CO3^2-", nil, { ref = { file = LK, key = "CaCO3(s,calcite) = Ca^2+ + CO3^2-", source_has = "Plummer" }, same = true })
 lk("CaCO3(s,calcite) = Ca^2+ + CO3^2-", nil, { ref = { file = LK, key = "CaCO3(s,calcite) = Ca^2+ + CO3^2-", source_has = "Harris" },
   note = "older Smith and Martell value; the row itself says prefer Plummer and Busenberg" })
@@ -312,6 +318,10 @@ rk("PbCO3(s,cerussite) = Pb^2+ + CO3^2-", -13.13, "from memory of the solubility
   why = "file: NBS 1982 cerussite and Pb^2+ give -12.80 (-12.83 with NBS CO3^2-); measured about -13.13 (recalled). Same finding as docs/data/ligands.md" } })
 rk("CuCl(s,nantokite) = Cu^+ + Cl^-", -6.76, "from memory of CRC Handbook of Chemistry and Physics, solubility products (Ksp 1.72e-7)", "medium")
 rk("PbCl2(s,cotunnite) = Pb^2+ + 2 Cl^-", -4.78, N90C, "medium")
+rk("HCrO4^- = CrO4^2- + H^+", -6.51, SM, "medium", { note = "file: NBS 1982 dfG of HCrO4^- and CrO4^2- give -6.473 (the record's note recalls the measured 6.51)" })
+rk("2 HCrO4^- = Cr2O7^2- + H2O(l)", 1.5, SM .. "; recalled to two digits only", "low", { note = "file: NBS 1982 dfG of Cr2O7^2- and HCrO4^- give 1.547" })
+rk("Cr(OH)3(am) + 2 H^+ = CrOH^2+ + 2 H2O(l)", 6.0, "Rai, Sass and Moore 1987, Inorg. Chem. 26, 345, as summarised in the ECHA registration dossier for chromium(III) hydroxide (read): about 520 mg/L Cr at pH about 4, read from the paper's figure (0.01 M NaClO4); CrOH^2+ is the dominant species there (the paper's abstract, OSTI 6772597, read), so log K = log(1.0e-2) + 2 x 4 = 6.0", "low",
+   { note = "file: Rai et al. log *Ks 9.76 (recalled) with the Baes and Mesmer CrOH^2+ constant (-4.0) gives 5.76. The published figure is a concentration at I = 0.01 (gamma of CrOH^2+ about 0.67 by Davies: -0.17 at I = 0) read off a log plot, and its total includes Cr^3+ (as large as CrOH^2+ at pH 4 with the Baes and Mesmer constant: up to -0.3); both corrections bring it to 5.5-5.8, so the 0.24 lies within the reading" })
 rk("Ag2O(s) + 2 H^+ = 2 Ag^+ + H2O(l)", 12.58, BM76, "medium")
 rk("Cd(OH)2(s) + 2 H^+ = Cd^2+ + 2 H2O(l)", 13.65, BM76, "medium")
 rk("Mg(OH)2(s,brucite) + 2 H^+ = Mg^2+ + 2 H2O(l)", 16.84, BM76 .. " (as quoted in the note of log_k_25C.csv)", "medium",
