@@ -73,15 +73,7 @@ o.wrote("Au-CN-maps.svg")
 local main = by_key[("%g C, a(CN) %g"):format(T_LEACH, CYANIDE[2])]
 plot.map(main, { file = o.path("Au-CN-25C.svg"), stamp = STAMP })
 o.wrote("Au-CN-25C.svg")
-local fig = plot.domains(main, { stamp = STAMP })
-for k, t in ipairs(TANKS) do
-  fig:line(1, { t.pH - 0.1, t.pH + 0.1 }, { t.E, t.E }, { 0, 0, 0 }, 1.4, "solid")
-  fig:line(1, { t.pH, t.pH }, { t.E - 0.04, t.E + 0.04 }, { 0, 0, 0 }, 1.4, "solid")
-  fig:text(1, t.pH + 0.15, t.E + 0.05, tostring(k), false, 9, { 0, 0, 0 })
-end
-local ok, err = fig:save(o.path("Au-CN-25C-tanks.png"), plot.defaults.dpi)
-if not ok then error(err) end
-o.wrote("Au-CN-25C-tanks.png")
+common.marked_domains(o, "Au-CN-25C-tanks.png", main, TANKS, STAMP)
 common.map_tables(o, "Au-CN", maps, key, { activity_Au = AU_ACTIVITY })
 
 -- 2. Curves from the library's reactions.  In the window of the maps the
