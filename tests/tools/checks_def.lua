@@ -342,7 +342,7 @@ crc("Sr^2+ + 2 e- = Sr(s)", -2.899, "high", { known = { diff = -0.0227, margin =
 rk("HCN(aq) = CN^- + H^+", -9.21, SM, "high", { note = "file: NBS 1982 CN^- and HCN(aq) (pKa 9.233)" })
 rk("Au^+ + 2 CN^- = Au(CN)2^-", 38.3, SM, "medium", { known = { diff = 0.637, margin = 0.02,
   why = "file: NBS 1982 Au(CN)2^- with the Bard-Parsons-Jordan Au^+ (1.692 V) gives 38.94; Smith and Martell 38.3 (recalled); published values spread 36.6-39.3 because Au^+ cannot be measured directly. The E0 of Au(CN)2^-/Au, which a diagram uses, agrees with CRC within 11 mV (row above)" } })
-rk("Ni^2+ + 4 CN^- = Ni(CN)4^2-", 30.22, SM, "medium", { note = "file: NBS 1982 Ni(CN)4^2- with NBS Ni^2+ (30.12)" })
+rk("Ni^2+ + 4 CN^- = Ni(CN)4^2-", 30.22, SM, "medium", { note = "file: NBS 1982 Ni(CN)4^2- with NBS Ni^2+ (30.12); the 0.10 is 0.6 kJ/mol in dfG of the complex, inside the medium class; the NBS route is kept because it carries the reaction enthalpy (van 't Hoff), the Smith and Martell constant none" })
 rk("Zn^2+ + 4 CN^- = Zn(CN)4^2-", 16.7, "from memory of Lange's Handbook of Chemistry, cumulative formation constants", "low",
    { note = "file: NBS 1982 (16.76); other texts quote 19.6 (recalled), see CN.lua" })
 rk("Ag^+ + 2 CN^- = Ag(CN)2^-", 21.1, "from memory of Lange's Handbook of Chemistry, cumulative formation constants", "low", { known = { diff = -0.62, margin = 0.02,
