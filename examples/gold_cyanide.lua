@@ -46,7 +46,7 @@ local WINDOW = { pH = { 6, 14 }, E = { -1.0, 1.4 } }
 local TANKS = {                         -- pH and platinum-electrode potential vs SHE (illustrative)
   { name = "Leach tank 1", pH = 10.8, E = 0.10 },
   { name = "CIL tank 6", pH = 10.3, E = 0.02 },
-  { name = "Leach feed, lime short", pH = 9.2, E = 0.15 },
+  { name = "Leach feed, lime short", pH = 8.8, E = 0.15 },
 }
 local STAMP = { "cyanide levels, gold in solution, temperatures and tanks are illustrative choices, not plant data" }
 local CYANATE = { "OCN^-" }
