@@ -351,7 +351,7 @@ crc("Sr^2+ + 2 e- = Sr(s)", -2.899, "high", { known = { diff = -0.0227, margin =
 rk("HCN(aq) = CN^- + H^+", -9.21, SM, "high", { note = "file: NBS 1982 CN^- and HCN(aq) (pKa 9.233)" })
 rk("Au^+ + 2 CN^- = Au(CN)2^-", 38.3, SM, "medium", { known = { diff = 0.637, margin = 0.02,
   why = "file: NBS 1982 Au(CN)2^- with the Bard-Parsons-Jordan Au^+ (1.692 V) gives 38.94; Smith and Martell 38.3 (recalled); published values spread 36.6-39.3 because Au^+ cannot be measured directly. The E0 of Au(CN)2^-/Au, which a diagram uses, agrees with CRC within 11 mV (row above)" } })
-rk("Ni^2+ + 4 CN^- = Ni(CN)4^2-", 30.22, SM, "medium", { note = "file: NBS 1982 Ni(CN)4^2- with NBS Ni^2+ (30.12)" })
+rk("Ni^2+ + 4 CN^- = Ni(CN)4^2-", 30.22, SM, "medium", { note = "file: NBS 1982 Ni(CN)4^2- with NBS Ni^2+ (30.12); the 0.10 is 0.6 kJ/mol in dfG of the complex, inside the medium class; the NBS route is kept because it carries the reaction enthalpy (van 't Hoff), the Smith and Martell constant none" })
 rk("Zn^2+ + 4 CN^- = Zn(CN)4^2-", 16.7, "from memory of Lange's Handbook of Chemistry, cumulative formation constants", "low",
    { note = "file: NBS 1982 (16.76); other texts quote 19.6 (recalled), see CN.lua" })
 rk("Ag^+ + 2 CN^- = Ag(CN)2^-", 21.1, "from memory of Lange's Handbook of Chemistry, cumulative formation constants", "low", { known = { diff = -0.62, margin = 0.02,
@@ -371,6 +371,27 @@ rk("SrSO4(s,celestite) = Sr^2+ + SO4^2-", -6.46, NBS_D .. "SrSO4 -1340.9, Sr^2+ 
    { note = "file: Reardon and Armstrong 1987 (-6.632, measured); the NBS-derived value is 0.17 higher; measured solubility is the better basis for scaling" })
 rk("SrCO3(s,strontianite) = Sr^2+ + CO3^2-", -9.252, NBS_D .. "SrCO3 -1140.1, Sr^2+ -559.48, CO3^2- -527.81 kJ/mol", "medium", { note = "file: Busenberg, Plummer and Parker 1984 (-9.271)" })
 rk("BaCO3(s,witherite) = Ba^2+ + CO3^2-", -8.588, NBS_D .. "BaCO3 -1137.6, Ba^2+ -560.77, CO3^2- -527.81 kJ/mol", "medium", { note = "file: Busenberg and Plummer 1986 (-8.562)" })
+-- Hg(II) chloro and hydroxo complexes, calomel, Hg(aq) (issue 13, s4-hgau):
+-- Cl.lua and Hg.lua take Powell et al. 2005 (IUPAC); the rows are Smith and
+-- Martell, Baes and Mesmer, the IUPAC calomel evaluation and the Henry
+-- constants of Clever et al. 1985.
+lk("Hg^2+ + Cl^- = HgCl^+", nil, { note = "file: Powell et al. 2005 (IUPAC) 7.31, recalled" })
+lk("Hg^2+ + 2 Cl^- = HgCl2(aq)", nil, { note = "file: Powell et al. 2005 14.00 +- 0.07 (read)" })
+lk("Hg^2+ + 3 Cl^- = HgCl3^-", nil, { note = "file: Powell et al. 2005 14.925 (recalled); 0.075 within the one decimal of the row" })
+lk("Hg^2+ + 4 Cl^- = HgCl4^2-", nil, { note = "file: Powell et al. 2005 15.535 (recalled); 0.065 within the one decimal of the row" })
+lk("Hg^2+ + H2O(l) = HgOH^+ + H^+", nil, { note = "file: Baes and Mesmer 1976 -3.40; the row is the IUPAC review" })
+lk("Hg^2+ + 2 H2O(l) = Hg(OH)2(aq) + 2 H^+", nil, { known = { diff = 0.19, margin = 0.02,
+  why = "file: Powell et al. 2005 (IUPAC critical review, I = 0) -5.98 +- 0.06 (read); the row is the older Baes and Mesmer 1976 selection -6.17 (recalled). The IUPAC value is kept: with CODATA HgO it gives HgO's solubility within 0.07 of the handbook value (next row), Baes and Mesmer's within 0.26" } })
+lk("HgO(s,montroydite) + H2O(l) = Hg(OH)2(aq)", nil, { note = "CODATA HgO with Powell et al. 2005 Hg(OH)2(aq): the dissolved Hg(II) of an HgO-saturated water" })
+lk("Hg2Cl2(s,calomel) = Hg2^2+ + 2 Cl^-", nil, { note = "file: CODATA calomel and Hg2^2+ with SH88 Cl^- (-17.82; the dH 98.08 kJ/mol agrees with the evaluation's 98.08 +- 0.18)" })
+lk("Hg(g) = Hg(aq)", nil, { note = "file: Andersson et al. 2008 Hcp 1.3e-3 mol/(m3 Pa) (read in Sander 2023); the row is Clever et al. 1985, 1.1e-3" })
+lk("Hg(l) = Hg(aq)", nil, { note = "file: CODATA Hg(g) over Hg(l) (vapour pressure 0.264 Pa) and the Hg(aq) Henry constant: 3.4e-7 mol/kg against about 3.0e-7" })
+-- Cu(I) cyanide: the file's Smith and Martell values against Penneman and
+-- Jones 1956, the infrared study they come from (abstract read).  These check
+-- the recall, not the measurement: no independent determination was found.
+lk("Cu^+ + 2 CN^- = Cu(CN)2^-", nil, { note = "file: Smith and Martell 24.0 (recalled); the row is the basis Penneman and Jones took from earlier work, not a measurement of theirs" })
+lk("Cu^+ + 3 CN^- = Cu(CN)3^2-", nil, { note = "file: Smith and Martell 28.59 (recalled), the value Penneman and Jones derived" })
+lk("Cu^+ + 4 CN^- = Cu(CN)4^3-", nil, { note = "file: Smith and Martell 30.30 (recalled), the value Penneman and Jones derived" })
 
 -- 4c. issue 13 coverage: records of C, N, Cl, Al, Mg, Ca, Na, K, Pb, Cd, Sn,
 -- Ti, Mo, B, F, HO and Zn that had no independent check.  Each value is from
@@ -494,6 +515,17 @@ for _, t in ipairs({ 50, 100 }) do
           why = "the 25 C offset of Al.lua's Al(OH)4^- (Brown and Ekberg 2016 hydrolysis constant on the CODATA Al^3+: +0.537 against Wesolowski's gibbsite solubility at 25 C) carried up; the change of log K from 25 C agrees within 0.08 (phlox +0.894, measured +0.973 at 100 C)" } })
 end
 
+-- Dissolved elemental mercury at 60 C (high_temperature.csv): the Henry
+-- constant's temperature dependence, measured (Sanemasa 1975, 5-60 C) and as
+-- evaluated by Clever et al. 1985.
+add({ kind = "logK", reaction = "Hg(g) = Hg(aq)", T_C = 60, group = "T_hg",
+      ref = { file = HT, key = "Hg(g) = Hg(aq)", source_has = "Sanemasa" },
+      note = "file: Andersson et al. 2008, dH -21.62 kJ/mol (2600 K); Sanemasa measured -22.2 kJ/mol over 5-60 C" })
+add({ kind = "logK", reaction = "Hg(g) = Hg(aq)", T_C = 60, group = "T_hg",
+      ref = { file = HT, key = "Hg(g) = Hg(aq)", source_has = "Clever" },
+      known = { diff = 0.409, margin = 0.02,
+        why = "Clever et al. 1985 (after Glew and Hames 1971) put the Henry constant 0.07 lower at 25 C and give a slope of 4800 K (dH -39.9 kJ/mol) against 2500-2600 K of the direct measurements of Sanemasa 1975 and Andersson et al. 2008 and of the JPL evaluation (Burkholder et al. 2019), all read in Sander 2023. The file follows the direct measurements (previous row passes); the disagreement is in the literature" } })
+
 -- Hematite solubility at 200 C (Sergeeva et al. 1999, abstract read;
 -- high_temperature.csv).  The Fe(OH)4^- row is the value Fe.lua's record was
 -- fitted through; the acid rows hold the file's Fe^3+ (Shock et al. 1997 dfG,
@@ -520,6 +552,7 @@ M.GROUPS = {
   { id = "T_carb", title = "Carbonate constants at 100-250 C (Plummer and Busenberg 1982)" },
   { id = "T_other", title = "Other temperatures: AgCl/Ag electrode and NH4+ (0-50 C), beta-Ni(OH)2 (100-200 C), aluminate (50-100 C)" },
   { id = "T_hot", title = "Oxide solubility at 200 C: hematite (high_temperature.csv)" },
+  { id = "T_hg", title = "Dissolved elemental mercury at 60 C: Hg(aq) Henry constant (high_temperature.csv)" },
 }
 
 -- ---------------------------------------------------------------- helpers
@@ -759,6 +792,9 @@ local SHORT = {
   { "Wesolowski 1992", "Wesolowski 1992 (abstract read)" }, { "Harris", "Harris (Smith & Martell)" }, { "Plummer", "Plummer & Busenberg 1982" },
   { "Nordstrom", "Nordstrom et al. 1990" }, { "Smith & Martell", "Smith & Martell" },
   { "Smith and Martell", "Smith & Martell" }, { "Bjerrum", "Bjerrum 1941" },
+  { "Wanner 2005", "Powell et al. 2005 (IUPAC)" }, { "Marcus 1980", "Marcus 1980 (IUPAC)" },
+  { "Sanemasa", "Sanemasa 1975" }, { "Clever, Johnson and Derrick", "Clever et al. 1985" },
+  { "Penneman", "Penneman & Jones 1956" }, { "handbook solubility tables", "handbook solubility" },
   { "ORNL", "ORNL (beta-Ni(OH)2)" }, { "Morris", "Morris 1966" }, { "Bates & Pinching", "Bates & Pinching 1949" },
   { "Bates and Pinching", "Bates & Pinching 1949" }, { "Bates and Bower", "Bates & Bower 1954" },
   { "Wagman", "NBS 1982 (derived)" }, { "CODATA", "CODATA 1989 (derived)" },
