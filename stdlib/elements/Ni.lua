@@ -10,6 +10,8 @@ local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Therm
 local KELLEY = "cp from memory of Kelley 1960 (U.S. Bureau of Mines Bulletin 584), " ..
                "converted from cal with 4.184"
 local BM = "from memory of Baes and Mesmer 1976, The Hydrolysis of Cations (I = 0, 25 C)"
+local NEA = "from memory of Gamsjaeger, Bugajski, Gajda, Lemire and Preis 2005, Chemical " ..
+            "Thermodynamics of Nickel (OECD NEA-TDB vol. 6), selected value"
 
 return {
   element = "Ni",
@@ -26,13 +28,18 @@ return {
       note = "Polynomial gives Cp(298.15 K) = 25.77 J/(mol K) against NBS 26.07.",
     },
     {
-      formula = "Ni^2+", model = "logk",
-      reaction = "Ni(s) + 2 H^+ = Ni^2+ + H2(g)",
-      logK = 7.989, dH = -54.0,
-      source = "derived here from " .. NBS .. ": Ni2+ dfG -45.6, dfH -54.0 kJ/mol, S -128.9 J/(mol K)",
+      formula = "Ni^2+", model = "hkf",
+      G = -45.6, H = -54.0, S = -128.9,
+      estimate = { Cp = -46 },
+      source = NBS .. "; Cp -46 +- 10 J/(mol K) " .. NEA,
       quality = "medium",
-      note = "E0(Ni2+/Ni) = -0.236 V; the CRC series lists -0.257 V (not in the shared " ..
-             "reference table). No Cp recalled; van 't Hoff only above 25 C.",
+      note = "E0(Ni2+/Ni) = -0.236 V; the CRC series lists -0.257 V. HKF parameters not " ..
+             "recalled as a set: estimated by the loader from S and Cp (Shock and Helgeson " ..
+             "1988 correlations). Shock et al. 1997 list Cp -11.6 cal/(mol K) = -48.5 J/(mol K) " ..
+             "(recalled), inside the NEA uncertainty. V not recalled: volume terms zero " ..
+             "(poor at high pressure). Before issue 12 the ion was defined by its formation " ..
+             "reaction from Ni(s) with van 't Hoff only (dCp of Ni(OH)2 dissolution +69 " ..
+             "J/(mol K) against about 0 measured).",
     },
     {
       formula = "NiOH^+", model = "logk",
