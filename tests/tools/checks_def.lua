@@ -159,6 +159,7 @@ sp("ZnO(s,zincite) + 2 H^+ + 2 e- = Zn(s) + H2O(l)", "ZnO(s) + 2 H^+ + 2 e- = Zn
 sp("Ni(OH)2(s) + 2 e- = Ni(s) + 2 OH^-", nil, { known = { diff = 0.0328, margin = 0.003,
   why = "CRC -0.72 V; the NBS 1982 dfG of Ni(OH)2 (used by the file) gives -0.688 V, as the reference row's note says; spread reflects the Ni(OH)2 solubility uncertainty" } })
 sp("Ni(OH)2(s) + 2 H^+ + 2 e- = Ni(s) + 2 H2O(l)", nil, { same = true })
+sp("NiO2(s) + 4 H^+ + 2 e- = Ni^2+ + 2 H2O(l)", nil, { same = true, note = "NiO2 is defined from this value (Ni.lua)" })
 sp("Cr^3+ + 3 e- = Cr(s)", nil, { same = true, note = "Cr^3+ is defined from this CRC value" })
 sp("Cr^3+ + e- = Cr^2+", nil, { same = true, note = "Cr^2+ is defined from this CRC value" })
 sp("Cr2O7^2- + 14 H^+ + 6 e- = 2 Cr^3+ + 7 H2O(l)", nil, { known = { diff = 0.1318, margin = 0.003,
@@ -199,6 +200,8 @@ crc("Pb^2+ + 2 e- = Pb(s)", -0.1262, "high")
 crc("PbSO4(s,anglesite) + 2 e- = Pb(s) + SO4^2-", -0.3588, "high")
 crc("Ni^2+ + 2 e- = Ni(s)", -0.257, "high", { known = { diff = 0.0207, margin = 0.003,
   why = "file: NBS 1982 dfG(Ni^2+) = -45.6 kJ/mol gives -0.236 V; NEA-TDB (Gamsjaeger et al. 2005) selects about -45.8 kJ/mol (recalled), also -0.237 V; the CRC -0.257 V follows an older, more negative dfG (about -49.6 kJ/mol)" } })
+crc("NiO2(s) + 2 H2O(l) + 2 e- = Ni(OH)2(s) + 2 OH^-", 0.490, "low", { known = { diff = -0.1010, margin = 0.003,
+  why = "file: NiO2 from the OpenStax/CRC acid couple (1.593 V, read) with the NBS 1982 Ni(OH)2 gives 0.389 V; the recalled CRC 0.490 V would need 1.694 V for the acid couple (CRC itself is recalled as listing 1.678 V there). Higher nickel oxides are non-stoichiometric Ni(II)/Ni(IV) solid solutions (Balej and Divisek 1993, abstract read), so single-phase NiO2 data scatter by this much" } })
 crc("Sn^4+ + 2 e- = Sn^2+", 0.151, "medium")
 crc("Ca^2+ + 2 e- = Ca(s)", -2.868, "high")
 crc("Na^+ + e- = Na(s)", -2.71, "high")
@@ -838,8 +841,8 @@ function M.render(results, summary)
   w("  300 C): not recalled with enough confidence to serve as a check. Records")
   w("  without a dH or log K(T) use the isocoulombic estimate; its errors against")
   w("  the records that do have temperature data are in the last section.")
-  w("- Reference rows whose species are not in the library: NiO2, Cr(OH)3,")
-  w("  Co(OH)3, Hg, Au, Ti2+ and Mo3+ couples.")
+  w("- Reference rows whose species are not in the library: Cr(OH)3, Hg, Au,")
+  w("  Ti2+ and Mo3+ couples.")
   w("- S^2- based couples other than the one row above (pK2 of H2S is disputed).")
   w("")
   w("## Notes and sources, row by row")
