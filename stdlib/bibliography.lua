@@ -121,6 +121,30 @@ return {
       short = "Sergeeva et al. 1999",
       cite = "Sergeeva, E. I., Suleimenov, O. M., Evstigneev, A. V. and Khodakovsky, I. L. (1999). Solubility of hematite, Fe2O3(cr, alpha), at 200 C and the standard entropy of the Fe3+ ion in aqueous solution. Geokhimiya 37 (11), 1218-1229.",
     },
+    RSM87 = {
+      short = "Rai, Sass and Moore 1987",
+      cite = "Rai, D., Sass, B. M. and Moore, D. A. (1987). Chromium(III) hydrolysis constants and solubility of chromium(III) hydroxide. Inorganic Chemistry 26, 345.",
+    },
+    NEA05NI = {
+      short = "Gamsjaeger et al. 2005 (NEA-TDB nickel)",
+      cite = "Gamsjaeger, H., Bugajski, J., Gajda, T., Lemire, R. J. and Preis, W. (2005). Chemical Thermodynamics of Nickel. Chemical Thermodynamics vol. 6, OECD Nuclear Energy Agency / Elsevier, Amsterdam.",
+    },
+    POWELL05 = {
+      short = "Powell et al. 2005",
+      cite = "Powell, K. J., Brown, P. L., Byrne, R. H., Gajda, T., Hefter, G., Sjoberg, S. and Wanner, H. (2005). Chemical speciation of environmentally significant heavy metals with inorganic ligands. Part 1: The Hg2+-Cl-, OH-, CO32-, SO42-, and PO43- aqueous systems (IUPAC Technical Report). Pure Appl. Chem. 77, 739-800.",
+    },
+    ANDERSSON08 = {
+      short = "Andersson et al. 2008",
+      cite = "Andersson, M. E., Gaardfeldt, K., Waengberg, I. and Stroemberg, D. (2008). Determination of Henry's law constant for elemental mercury. Chemosphere 73, 587-592; as tabulated in Sander, R. (2023). Compilation of Henry's law constants (version 5.0.0) for water as solvent. Atmos. Chem. Phys. 23, 10901-12440.",
+    },
+    MH06 = {
+      short = "Marsden and House 2006",
+      cite = "Marsden, J. O. and House, C. I. (2006). The Chemistry of Gold Extraction, 2nd ed. Society for Mining, Metallurgy and Exploration, Littleton.",
+    },
+    OPENSTAX = {
+      short = "OpenStax Chemistry 2e (Flowers et al. 2019)",
+      cite = "Flowers, P., Theopold, K., Langley, R. and Robinson, W. R. (2019). Chemistry 2e. OpenStax, Houston. Appendices K (solubility products) and L (standard electrode potentials, reprinted from the CRC Handbook series).",
+    },
     POWELL07 = {
       short = "Powell et al. 2007",
       cite = "Powell, K. J., Brown, P. L., Byrne, R. H., Gajda, T., Hefter, G., Sjoberg, S. and Wanner, H. (2007). Chemical speciation of environmentally significant metals with inorganic ligands. Part 2: The Cu2+-OH-, Cl-, CO32-, SO42-, and PO43- systems (IUPAC Technical Report). Pure Appl. Chem. 79, 895-950.",

