@@ -28,13 +28,12 @@ return {
       quality = "high",
     },
     {
-      formula = "Sr^2+", model = "hkf",
-      G = -563.87, H = -550.90, S = -31.5,
-      uncertainty = { H = 0.50, S = 2.0 },  -- +-: from memory of [CODATA89]
-      estimate = { Cp = -42.05 },
-      source = CODATA .. "; Cp -10.05 cal/(mol K) = -42.05 J/(mol K) from memory of [SH88]",
+      formula = "Sr^2+", model = "logk",
+      reaction = "Sr(s) + 2 H^+ = Sr^2+ + H2(g)",
+      logK = 98.785, dH = -550.90,
+      source = "derived here from " .. CODATA .. ": Sr^2+ dfH -550.90 +- 0.50 kJ/mol, S -31.5 +- 2.0 J/(mol K)",
       quality = "high",
-      note = "E0(Sr^2+/Sr) = -2.922 V; NBS 1982 (dfG -559.48) gives -2.899 V, the value the CRC series prints; CODATA revised dfH by 5 kJ/mol. dfG = dfH - T dfS with the CODATA S of Sr(s) and H2(g). HKF parameters estimated by the loader from S and Cp ([SH88] correlations); the paper's regressed set is not recalled, nor V: volume terms zero (poor at high pressure). SH88 list S -7.53 cal/(mol K) = -31.5 J/(mol K), as CODATA. Before issue 12 the ion was defined by its formation reaction from Sr(s) with van 't Hoff only (implied Cp(Sr^2+) = Cp(Sr) - Cp(H2) = -2 J/(mol K) at every T).",
+      note = "E0(Sr^2+/Sr) = -2.922 V; NBS 1982 (dfG -559.48) gives -2.899 V, the value the CRC series prints; CODATA revised dfH by 5 kJ/mol. No heat capacity of its own: van 't Hoff on the formation reaction implies Cp(Sr^2+) = Cp(Sr) - Cp(H2) = -2 J/(mol K) at every T. [SH88] list Cp -10.05 cal/(mol K) (recalled); the HKF record estimated from it (+27 mV in E0 at 300 C) waits for the NiSO4(aq) model of S.lua, which is the SrSO4(aq) pair (docs/data/transition-metals.md).",
     },
     {
       formula = "SrOH^+", model = "logk",
