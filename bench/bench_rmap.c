@@ -10,7 +10,30 @@
 #include "diagram/rmap.h"
 #include <stdio.h>
 #include <stdlib.h>
+#include <string.h>
 #include <time.h>
+
+#define PX_BENCH_REPS 3 /* runs per thread count, the best kept */
+
+/* Seconds of the phases px_rmap_build timed itself. */
+static double profile_sum(const px_rmap_profile *p)
+{
+    return p->wall_setup + p->wall_nodes + p->wall_edges + p->wall_refine + p->wall_merge + p->wall_trace;
+}
+
+/* Byte for byte: labels, boundary points and polylines, fields (calloc'd:
+ * padding is zero), statistics. */
+static int same_map(const px_diagram_grid *a, const px_rmap_stats *sa, const px_diagram_grid *b,
+                    const px_rmap_stats *sb)
+{
+    return a->nx == b->nx && a->ny == b->ny && a->npt == b->npt && a->npoly == b->npoly &&
+           a->nfield == b->nfield && memcmp(a->label, b->label, a->nx * a->ny * sizeof *a->label) == 0 &&
+           memcmp(a->px, b->px, a->npt * sizeof *a->px) == 0 && memcmp(a->py, b->py, a->npt * sizeof *a->py) == 0 &&
+           memcmp(a->pfail, b->pfail, a->npt) == 0 && memcmp(a->poly, b->poly, a->npoly * sizeof *a->poly) == 0 &&
+           a->ncalls == b->ncalls && a->ncross == b->ncross && a->nthird == b->nthird &&
+           a->nmaxiter == b->nmaxiter && a->nfailcross == b->nfailcross &&
+           memcmp(a->field, b->field, a->nfield * sizeof *a->field) == 0 && memcmp(sa, sb, sizeof *sa) == 0;
+}
 
 static double now(void)
 {
@@ -39,26 +62,74 @@ int main(void)
     o.ligand_total = 1e-2;
     o.grid.nx = o.grid.ny = 501;
     char msg[256];
-    double t_one = 0;
+    /* best of PX_BENCH_REPS runs per thread count: the machine may be shared */
+    double best[3] = {0};
+    px_rmap_profile prof[3];
+    px_diagram_grid *keep[3] = {NULL};
+    px_rmap_stats keep_st[3];
     for (int threads = 1; threads <= 2; threads++) {
         o.threads = threads;
-        px_diagram_grid *g;
-        px_rmap_stats st;
-        double t0 = now();
-        int s = px_rmap_build(ws, db, "Cu", &o, &g, &st, msg, sizeof msg);
-        double dt = now() - t0;
-        if (s != PX_OK) {
-            fprintf(stderr, "bench_rmap: %s\n", msg);
-            return 1;
+        for (int rep = 0; rep < PX_BENCH_REPS; rep++) {
+            px_diagram_grid *g;
+            px_rmap_stats st;
+            px_rmap_profile pf;
+            o.profile = &pf;
+            double t0 = now();
+            int s = px_rmap_build(ws, db, "Cu", &o, &g, &st, msg, sizeof msg);
+            double dt = now() - t0;
+            if (s != PX_OK) {
+                fprintf(stderr, "bench_rmap: %s\n", msg);
+                return 1;
+            }
+            if (rep == 0 || dt < best[threads]) {
+                best[threads] = dt;
+                prof[threads] = pf;
+                prof[threads].wall_setup += dt - profile_sum(&pf); /* outside the phases: the first system */
+            }
+            if (rep == 0) {
+                keep[threads] = g;
+                keep_st[threads] = st;
+            } else {
+                px_diagram_grid_free(g);
+            }
         }
-        if (threads == 1) t_one = dt;
-        printf("rigorous Cu-Cl map 501 x 501, %d thread(s): %.3f s wall, %zu solves (%.2f us each), "
+        const px_rmap_profile *p = &prof[threads];
+        const px_rmap_stats *st = &keep_st[threads];
+        printf("rigorous Cu-Cl map 501 x 501, %d thread(s): %.3f s wall (best of %d), %zu solves (%.2f us each), "
                "%zu failures, %zu boundary polylines%s\n",
-               threads, dt, st.solves, 1e6 * dt / (double)st.solves, st.failures, g->npoly,
-               threads > 1 ? "" : "  [target < 3 s]");
-        if (threads > 1) printf("  speed-up on %d threads: %.2fx\n", threads, t_one / dt);
-        px_diagram_grid_free(g);
+               threads, best[threads], PX_BENCH_REPS, st->solves, 1e6 * best[threads] / (double)st->solves,
+               st->failures, keep[threads]->npoly, threads > 1 ? "" : "  [target < 3 s]");
+        printf("  phases (s wall): setup %.4f, nodes %.4f [parallel, %zu jobs], edge list %.4f, "
+               "refine %.4f [parallel, %zu jobs], merge %.4f, trace %.4f\n",
+               p->wall_setup, p->wall_nodes, p->chunks, p->wall_edges, p->wall_refine, p->edges, p->wall_merge,
+               p->wall_trace);
+        for (int t = 0; t < p->threads; t++)
+            printf("  thread %d: %.4f s CPU in the parallel phases, %zu jobs\n", t, p->cpu[t], p->jobs[t]);
     }
+    const px_rmap_profile *p1 = &prof[1], *p2 = &prof[2];
+    double serial = best[1] - p1->wall_nodes - p1->wall_refine;
+    double f = serial / best[1];
+    double cpu_max = p2->cpu[0] > p2->cpu[1] ? p2->cpu[0] : p2->cpu[1];
+    double serial2 = best[2] - p2->wall_nodes - p2->wall_refine;
+    printf("  serial fraction on one thread: %.4f (%.4f s of %.3f s); Amdahl bound on 2 threads: %.2fx\n", f,
+           serial, best[1], 1.0 / (f + (1.0 - f) / 2.0));
+    printf("  CPU of the parallel phases: %.4f s on one thread, %.4f + %.4f s on two (split %.3f / %.3f)\n",
+           p1->cpu[0], p2->cpu[0], p2->cpu[1], p2->cpu[0] / (p2->cpu[0] + p2->cpu[1]),
+           p2->cpu[1] / (p2->cpu[0] + p2->cpu[1]));
+    printf("  speed-up on 2 threads: %.2fx wall; %.2fx if each thread had a core of its own "
+           "(serial wall + the busier thread's CPU)\n",
+           best[1] / best[2], best[1] / (serial2 + cpu_max));
+    printf("  1 and 2 threads give the same bytes: %s\n", same_map(keep[1], &keep_st[1], keep[2], &keep_st[2]) ? "yes" : "NO");
+    {
+        FILE *la = fopen("/proc/loadavg", "r"); /* Linux: how busy the machine was */
+        char line[128];
+        if (la && fgets(line, sizeof line, la)) printf("  load average: %s", line);
+        if (la) fclose(la);
+    }
+    px_diagram_grid_free(keep[1]);
+    px_diagram_grid_free(keep[2]);
+    o.profile = NULL;
+    double t_one = best[1];
     /* brute force: cold solve at every node of a 101 x 101 grid */
     px_spec_options so = px_spec_options_default();
     so.element[0] = "Cu";
