@@ -127,12 +127,15 @@ static double node(double lo, double hi, size_t i, size_t n)
  * bytes.  Jobs are handed out from an atomic counter (dynamic sharing:
  * rows near a boundary cost more solves, so fixed halves leave a thread
  * idle).  Phase 1: the grid's rows, a chunk at a time, snaking within the
- * chunk.  Phase 2: the bisection of every grid edge whose ends differ, one
- * edge a job, repeating exactly the midpoints the grid tracer will ask for
- * (same arithmetic as px_diagram_grid_map's refinement), and the centre of
- * every saddle cell; the tracer then finds every label in a table and
- * solves nothing. */
-#define PX_RMAP_ROW_CHUNK 4 /* rows per job: one cold start per chunk, common practice, no source */
+ * chunk.  Phase 2: the bisection of every grid edge whose ends differ,
+ * repeating exactly the midpoints the grid tracer will ask for (same
+ * arithmetic as px_diagram_grid_map's refinement), and the centre of every
+ * saddle cell; the tracer then finds every label in a table and solves
+ * nothing.  The edges of one pair of labels, sorted by row then column,
+ * follow their boundary, so a job takes a few consecutive ones and each
+ * bisection starts warm from the last point of the one before. */
+#define PX_RMAP_ROW_CHUNK 4  /* rows per job: one cold start per chunk, common practice, no source */
+#define PX_RMAP_EDGE_CHUNK 8 /* edges per job (about 160 solves), common practice, no source */
 
 typedef struct probe {
     double x, y;
@@ -143,7 +146,13 @@ typedef struct probe {
 typedef struct edge_job {
     double x0, y0, x1, y1, tol; /* a saddle centre: (x0, y0) alone, tol < 0 */
     int la, lb;
+    size_t i, j; /* lower-left node; sort key with the pair */
+    int dir;     /* 0: along x, 1: along y, 2: saddle centre */
 } edge_job;
+
+typedef struct edge_range {
+    size_t first, n; /* edges of one phase-2 job */
+} edge_range;
 
 typedef struct shared {
     const px_diagram_window *w;
@@ -153,7 +162,8 @@ typedef struct shared {
     atomic_int stop;    /* a worker failed: the others stop */
     int phase;          /* 1: rows, 2: edges and saddle centres */
     const edge_job *edges;
-    size_t nedges;
+    const edge_range *ranges;
+    size_t nranges;
     px_rmap_stats *jstats; /* per job: the row chunks, then the edges */
     int max_iter;
 } shared;
@@ -240,14 +250,16 @@ static void *worker_run(void *arg)
     shared *sh = w->sh;
     double c0 = cpu_now();
     int rows = sh->phase == 1;
-    size_t njobs = rows ? sh->nchunks : sh->nedges;
+    size_t njobs = rows ? sh->nchunks : sh->nranges;
     while (w->st == PX_OK && !atomic_load(&sh->stop)) {
         size_t k = atomic_fetch_add(&sh->next, 1);
         if (k >= njobs) break;
         size_t job = rows ? k : sh->nchunks + k;
         w->c.stats = &sh->jstats[job];
         px_equil_work_reset(w->c.s->work); /* a cold start: the job's result is its own */
-        w->st = rows ? row_run(w, k) : edge_run(w, &sh->edges[k], job);
+        if (rows) w->st = row_run(w, k);
+        for (size_t e = 0; !rows && e < sh->ranges[k].n && w->st == PX_OK; e++)
+            w->st = edge_run(w, &sh->edges[sh->ranges[k].first + e], job);
         w->jobs++;
         if (w->st != PX_OK) atomic_store(&sh->stop, 1);
     }
@@ -288,9 +300,8 @@ static int push_edge(edge_job **e, size_t *cnt, size_t *cap, edge_job j)
     return PX_OK;
 }
 
-/* The grid edges whose end labels differ, with the tracer's tolerances, in
- * the tracer's order, then the centres of saddle cells (two labels on
- * alternate corners). */
+/* The grid edges whose end labels differ, with the tracer's tolerances,
+ * and the centres of saddle cells (two labels on alternate corners). */
 static int crossing_edges(const shared *sh, const px_diagram_grid_options *g, edge_job **out, size_t *n)
 {
     size_t nx = sh->nx, ny = sh->ny, cnt = 0, cap = 0;
@@ -308,7 +319,7 @@ static int crossing_edges(const shared *sh, const px_diagram_grid_options *g, ed
                 double x0 = node(w->xmin, w->xmax, i, nx), y0 = node(w->ymin, w->ymax, j, ny);
                 double x1 = dir ? x0 : node(w->xmin, w->xmax, i + 1, nx);
                 double y1 = dir ? node(w->ymin, w->ymax, j + 1, ny) : y0;
-                st = push_edge(&e, &cnt, &cap, (edge_job){x0, y0, x1, y1, dir ? toly : tolx, L[k], L[k2]});
+                st = push_edge(&e, &cnt, &cap, (edge_job){x0, y0, x1, y1, dir ? toly : tolx, L[k], L[k2], i, j, dir});
             }
     for (size_t j = 0; j + 1 < ny && st == PX_OK; j++)
         for (size_t i = 0; i + 1 < nx && st == PX_OK; i++) {
@@ -316,7 +327,7 @@ static int crossing_edges(const shared *sh, const px_diagram_grid_options *g, ed
             if (L[k] == L[k + 1] || L[k] != L[k + nx + 1] || L[k + 1] != L[k + nx]) continue;
             double x = 0.5 * (node(w->xmin, w->xmax, i, nx) + node(w->xmin, w->xmax, i + 1, nx));
             double y = 0.5 * (node(w->ymin, w->ymax, j, ny) + node(w->ymin, w->ymax, j + 1, ny));
-            st = push_edge(&e, &cnt, &cap, (edge_job){x, y, x, y, -1, L[k], L[k + 1]});
+            st = push_edge(&e, &cnt, &cap, (edge_job){x, y, x, y, -1, L[k], L[k + 1], i, j, 2});
         }
     if (st != PX_OK) {
         free(e);
@@ -324,6 +335,52 @@ static int crossing_edges(const shared *sh, const px_diagram_grid_options *g, ed
     }
     *out = e;
     *n = cnt;
+    return PX_OK;
+}
+
+/* The pair of labels of an edge, lower first. */
+static void pair_of(const edge_job *e, int *lo, int *hi)
+{
+    *lo = e->la < e->lb ? e->la : e->lb;
+    *hi = e->la < e->lb ? e->lb : e->la;
+}
+
+/* Edges by pair of labels, then row, column and direction (saddle centres
+ * last): a total order, so the jobs do not depend on the sort. */
+static int edge_cmp(const void *pa, const void *pb)
+{
+    const edge_job *a = pa, *b = pb;
+    int a0, a1, b0, b1;
+    pair_of(a, &a0, &a1);
+    pair_of(b, &b0, &b1);
+    if ((a->dir == 2) != (b->dir == 2)) return a->dir == 2 ? 1 : -1;
+    if (a0 != b0) return a0 < b0 ? -1 : 1;
+    if (a1 != b1) return a1 < b1 ? -1 : 1;
+    if (a->j != b->j) return a->j < b->j ? -1 : 1;
+    if (a->i != b->i) return a->i < b->i ? -1 : 1;
+    return a->dir - b->dir;
+}
+
+/* Sort the edges and cut them into jobs: up to PX_RMAP_EDGE_CHUNK edges of
+ * one pair each, every saddle centre a job of its own. */
+static int edge_jobs(edge_job *e, size_t n, edge_range **out, size_t *nr)
+{
+    qsort(e, n, sizeof *e, edge_cmp);
+    edge_range *r = malloc((n ? n : 1) * sizeof *r);
+    if (!r) return PX_ENOMEM;
+    size_t m = 0;
+    for (size_t k = 0; k < n; k++) {
+        int p0, p1, q0, q1, join = 0;
+        if (m > 0 && e[k].dir != 2 && r[m - 1].n < PX_RMAP_EDGE_CHUNK) {
+            pair_of(&e[k - 1], &p0, &p1);
+            pair_of(&e[k], &q0, &q1);
+            join = p0 == q0 && p1 == q1;
+        }
+        if (join) r[m - 1].n++;
+        else r[m++] = (edge_range){k, 1};
+    }
+    *out = r;
+    *nr = m;
     return PX_OK;
 }
 
@@ -384,8 +441,10 @@ typedef struct lookup {
     rctx *c;
     const px_diagram_window *w;
     size_t nx, ny;
+    const double *xs, *ys; /* the nodes' coordinates */
     const int *labels;
     const probe_table *probes;
+    size_t next;   /* the tracer asks for the nodes in order: the one expected */
     size_t solved; /* points the tables missed (none expected) */
 } lookup;
 
@@ -395,12 +454,14 @@ typedef struct lookup {
 static int lookup_or_solve(double x, double y, void *user, int *id)
 {
     lookup *l = user;
+    if (l->next < l->nx * l->ny && l->xs[l->next % l->nx] == x && l->ys[l->next / l->nx] == y) {
+        *id = l->labels[l->next++];
+        return 0;
+    }
     double fi = (x - l->w->xmin) / (l->w->xmax - l->w->xmin) * (double)(l->nx - 1);
     double fj = (y - l->w->ymin) / (l->w->ymax - l->w->ymin) * (double)(l->ny - 1);
     long i = lround(fi), j = lround(fj);
-    if (i >= 0 && j >= 0 && (size_t)i < l->nx && (size_t)j < l->ny &&
-        node(l->w->xmin, l->w->xmax, (size_t)i, l->nx) == x &&
-        node(l->w->ymin, l->w->ymax, (size_t)j, l->ny) == y) {
+    if (i >= 0 && j >= 0 && (size_t)i < l->nx && (size_t)j < l->ny && l->xs[i] == x && l->ys[j] == y) {
         *id = l->labels[(size_t)j * l->nx + (size_t)i];
         return 0;
     }
@@ -469,35 +530,43 @@ static int build_threads(px_thermo_ws *ws, const px_db *db, const px_spec_option
     if (st == PX_OK) st = run_phase(ws_, nt);
     t2 = wall_now();
     edge_job *edges = NULL;
+    edge_range *ranges = NULL;
     size_t nedges = 0;
     if (st == PX_OK) st = crossing_edges(&sh, &o->grid, &edges, &nedges);
+    if (st == PX_OK) st = edge_jobs(edges, nedges, &ranges, &sh.nranges);
     if (st == PX_OK) {
-        px_rmap_stats *js = realloc(sh.jstats, (sh.nchunks + nedges) * sizeof *js);
+        px_rmap_stats *js = realloc(sh.jstats, (sh.nchunks + sh.nranges) * sizeof *js);
         if (js) {
             sh.jstats = js;
-            memset(js + sh.nchunks, 0, nedges * sizeof *js);
+            memset(js + sh.nchunks, 0, sh.nranges * sizeof *js);
         } else {
             st = PX_ENOMEM;
         }
     }
     sh.edges = edges;
+    sh.ranges = ranges;
     sh.phase = 2;
-    sh.nedges = nedges;
     t3 = wall_now();
     if (st == PX_OK) st = run_phase(ws_, nt);
     t4 = wall_now();
     probe_table probes = {0};
     if (st == PX_OK) st = table_build(&probes, ws_, nt);
-    for (size_t k = 0; st == PX_OK && k < sh.nchunks + nedges; k++) merge_stats(stats, &sh.jstats[k]);
+    for (size_t k = 0; st == PX_OK && k < sh.nchunks + sh.nranges; k++) merge_stats(stats, &sh.jstats[k]);
+    size_t missed = 0;
+    double *xs = malloc(nx * sizeof *xs), *ys = malloc(ny * sizeof *ys);
+    if (st == PX_OK && (!xs || !ys)) st = PX_ENOMEM;
     if (st == PX_OK) {
         px_rmap_stats tail;
         memset(&tail, 0, sizeof tail);
         rctx c0 = *c;
         c0.stats = &tail;
-        lookup l = {&c0, &o->window, nx, ny, sh.labels, &probes, 0};
+        for (size_t i = 0; i < nx; i++) xs[i] = node(o->window.xmin, o->window.xmax, i, nx);
+        for (size_t j = 0; j < ny; j++) ys[j] = node(o->window.ymin, o->window.ymax, j, ny);
+        lookup l = {&c0, &o->window, nx, ny, xs, ys, sh.labels, &probes, 0, 0};
         t5 = wall_now();
         st = px_diagram_grid_map(&o->window, lookup_or_solve, &l, &o->grid, out);
         merge_stats(stats, &tail);
+        missed = l.solved;
     }
     double t6 = wall_now();
     if (prof) {
@@ -509,7 +578,9 @@ static int build_threads(px_thermo_ws *ws, const px_db *db, const px_spec_option
         prof->wall_merge = t5 - t4;
         prof->wall_trace = t6 - t5;
         prof->edges = nedges;
+        prof->edge_jobs = sh.nranges;
         prof->chunks = sh.nchunks;
+        prof->missed = missed;
         for (int t = 0; t < nt; t++) {
             prof->cpu[t] = ws_[t].cpu;
             prof->jobs[t] = ws_[t].jobs;
@@ -520,6 +591,9 @@ static int build_threads(px_thermo_ws *ws, const px_db *db, const px_spec_option
     free(probes.slot);
     free(probes.used);
     free(edges);
+    free(ranges);
+    free(xs);
+    free(ys);
     free(sh.jstats);
     free(sh.labels);
     return st;

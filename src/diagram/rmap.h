@@ -23,7 +23,9 @@ typedef struct px_rmap_profile {
     double wall_refine; /* phase 2: bisections and saddle centres (parallel) */
     double wall_merge;  /* probe table and statistics (serial) */
     double wall_trace;  /* the tracer: segments, chains, fields (serial) */
-    size_t chunks, edges;                /* jobs of phase 1 and of phase 2 */
+    size_t chunks;                       /* jobs of phase 1 (row chunks) */
+    size_t edges, edge_jobs;             /* crossing edges and saddle centres; their jobs */
+    size_t missed;                       /* points the tracer had to solve itself (0 expected) */
     double cpu[PX_RMAP_MAX_THREADS];     /* CPU seconds of each worker in both phases */
     size_t jobs[PX_RMAP_MAX_THREADS];    /* jobs each worker took */
 } px_rmap_profile;

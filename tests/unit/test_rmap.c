@@ -128,15 +128,17 @@ static void check_threads(const char *element, const char *ligand, double T, dou
     assert_same(&one, &three, what);
     snprintf(what, sizeof what, "%s two runs on 2 threads", element);
     assert_same(&two, &again, what);
-    /* every job ran once, whoever took it: row chunks, then one per
-     * crossing edge and saddle centre (at least one per crossing) */
+    /* every job ran once, whoever took it: row chunks, then groups of
+     * crossing edges and saddle centres (at least one per crossing); the
+     * tracer found every label it asked for */
     for (int k = 0; k < 3; k++) {
         size_t jobs = 0;
         assert_int_equal(prof[k].threads, k + 1);
         for (int t = 0; t < prof[k].threads; t++) jobs += prof[k].jobs[t];
-        assert_int_equal(jobs, prof[k].chunks + prof[k].edges);
-        assert_true(prof[k].edges >= one.g->ncross);
+        assert_int_equal(jobs, prof[k].chunks + prof[k].edge_jobs);
+        assert_true(prof[k].edges >= one.g->ncross && prof[k].edge_jobs <= prof[k].edges);
         assert_int_equal(prof[k].edges, prof[0].edges);
+        assert_int_equal(prof[k].missed, 0);
     }
     px_diagram_grid_free(one.g);
     px_diagram_grid_free(two.g);
