@@ -6,14 +6,13 @@
  * under 3 s on one core, at least 1.8x on two.  Prints wall times, the
  * phases, CPU seconds per thread, the serial fraction (Amdahl's bound) and
  * whether 1 and 2 threads give the same bytes; never fails on time. */
-#define _POSIX_C_SOURCE 200809L
+#include "core/proc.h"
 #include "core/status.h"
 #include "data/data.h"
 #include "diagram/rmap.h"
 #include <stdio.h>
 #include <stdlib.h>
 #include <string.h>
-#include <time.h>
 
 #define PX_BENCH_REPS 3 /* runs per thread count, the best kept */
 
@@ -35,20 +34,6 @@ static int same_map(const px_diagram_grid *a, const px_rmap_stats *sa, const px_
            a->ncalls == b->ncalls && a->ncross == b->ncross && a->nthird == b->nthird &&
            a->nmaxiter == b->nmaxiter && a->nfailcross == b->nfailcross &&
            memcmp(a->field, b->field, a->nfield * sizeof *a->field) == 0 && memcmp(sa, sb, sizeof *sa) == 0;
-}
-
-static double thread_cpu(void)
-{
-    struct timespec t;
-    clock_gettime(CLOCK_THREAD_CPUTIME_ID, &t);
-    return (double)t.tv_sec + 1e-9 * (double)t.tv_nsec;
-}
-
-static double now(void)
-{
-    struct timespec t;
-    clock_gettime(CLOCK_MONOTONIC, &t);
-    return (double)t.tv_sec + 1e-9 * (double)t.tv_nsec;
 }
 
 int main(void)
@@ -85,9 +70,9 @@ int main(void)
             px_rmap_stats st;
             px_rmap_profile pf;
             o.profile = &pf;
-            double t0 = now(), c0 = thread_cpu();
+            double t0 = px_clock_wall(), c0 = px_clock_thread_cpu();
             int s = px_rmap_build(ws, db, "Cu", &o, &g, &st, msg, sizeof msg);
-            double dt = now() - t0, dc = thread_cpu() - c0;
+            double dt = px_clock_wall() - t0, dc = px_clock_thread_cpu() - c0;
             if (s != PX_OK) {
                 fprintf(stderr, "bench_rmap: %s\n", msg);
                 return 1;
@@ -166,7 +151,7 @@ int main(void)
     if (px_spec_build(ws, db, &so, &sp, msg, sizeof msg) != PX_OK) return 1;
     const size_t n = 101;
     size_t fails = 0;
-    double t0 = now();
+    double t0 = px_clock_wall();
     for (size_t j = 0; j < n; j++)
         for (size_t i = 0; i < n; i++) {
             px_equil_system_set_ph(sp->sys, 1, 14.0 * (double)i / (double)(n - 1));
@@ -174,7 +159,7 @@ int main(void)
             px_equil_work_reset(sp->work);
             if (px_equil_solve(sp->sys, sp->work, NULL) != PX_OK) fails++;
         }
-    double per = (now() - t0) / (double)(n * n);
+    double per = (px_clock_wall() - t0) / (double)(n * n);
     printf("plain brute force (cold solve per node, no tracing), 101 x 101: %.2f us per node, %zu failures\n",
            1e6 * per, fails);
     printf("  brute force extrapolated to 501 x 501: %.2f s; rigorous map on one thread is %.1fx faster\n",

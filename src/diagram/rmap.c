@@ -1,9 +1,11 @@
-/* rmap.c - rigorous maps: the speciation solver as the labelling callback
- * of the grid tracer (see rmap.h).  Each solve starts warm from the last
- * one; a failed warm start is retried cold before the node is given up. */
-#define _POSIX_C_SOURCE 200809L /* clock_gettime */
+/* rmap.c - rigorous maps: the speciation solver labels the grid's nodes
+ * and the bisection points of its boundaries on one or more threads, then
+ * the grid tracer reads those labels (see rmap.h).  Each solve starts warm
+ * from the last one of its job; a failed warm start is retried cold before
+ * the point is given up. */
 #include "diagram/rmap.h"
 #include "core/constants.h"
+#include "core/proc.h"
 #include "core/status.h"
 #include <math.h>
 #include <pthread.h>
@@ -11,7 +13,6 @@
 #include <stdio.h>
 #include <stdlib.h>
 #include <string.h>
-#include <time.h>
 
 #define PX_RMAP_DEFAULT_TOTAL 1e-6 /* mol/kg: the corrosion convention, common practice */
 
@@ -178,20 +179,6 @@ typedef struct worker {
     int st;
 } worker;
 
-static double wall_now(void)
-{
-    struct timespec t;
-    clock_gettime(CLOCK_MONOTONIC, &t);
-    return (double)t.tv_sec + 1e-9 * (double)t.tv_nsec;
-}
-
-static double cpu_now(void)
-{
-    struct timespec t;
-    if (clock_gettime(CLOCK_THREAD_CPUTIME_ID, &t) != 0) return 0;
-    return (double)t.tv_sec + 1e-9 * (double)t.tv_nsec;
-}
-
 static int keep_probe(worker *w, double x, double y, int id, size_t job)
 {
     if (w->npr == w->cappr) {
@@ -248,7 +235,7 @@ static void *worker_run(void *arg)
 {
     worker *w = arg;
     shared *sh = w->sh;
-    double c0 = cpu_now();
+    double c0 = px_clock_thread_cpu();
     int rows = sh->phase == 1;
     size_t njobs = rows ? sh->nchunks : sh->nranges;
     while (w->st == PX_OK && !atomic_load(&sh->stop)) {
@@ -263,7 +250,7 @@ static void *worker_run(void *arg)
         w->jobs++;
         if (w->st != PX_OK) atomic_store(&sh->stop, 1);
     }
-    w->cpu += cpu_now() - c0;
+    w->cpu += px_clock_thread_cpu() - c0;
     return NULL;
 }
 
@@ -503,7 +490,7 @@ static int build_threads(px_thermo_ws *ws, const px_db *db, const px_spec_option
                          int nt, px_diagram_grid **out, px_rmap_stats *stats, px_rmap_profile *prof, char *msg,
                          size_t msglen)
 {
-    double t0 = wall_now(), t1 = t0, t2 = t0, t3 = t0, t4 = t0, t5 = t0;
+    double t0 = px_clock_wall(), t1 = t0, t2 = t0, t3 = t0, t4 = t0, t5 = t0;
     worker ws_[PX_RMAP_MAX_THREADS];
     shared sh;
     memset(ws_, 0, sizeof ws_);
@@ -525,10 +512,10 @@ static int build_threads(px_thermo_ws *ws, const px_db *db, const px_spec_option
         ws_[t].sh = &sh;
         if (t > 0) st = px_spec_build(ws, db, so, &ws_[t].c.s, msg, msglen);
     }
-    t1 = wall_now();
+    t1 = px_clock_wall();
     sh.phase = 1;
     if (st == PX_OK) st = run_phase(ws_, nt);
-    t2 = wall_now();
+    t2 = px_clock_wall();
     edge_job *edges = NULL;
     edge_range *ranges = NULL;
     size_t nedges = 0;
@@ -546,9 +533,9 @@ static int build_threads(px_thermo_ws *ws, const px_db *db, const px_spec_option
     sh.edges = edges;
     sh.ranges = ranges;
     sh.phase = 2;
-    t3 = wall_now();
+    t3 = px_clock_wall();
     if (st == PX_OK) st = run_phase(ws_, nt);
-    t4 = wall_now();
+    t4 = px_clock_wall();
     probe_table probes = {0};
     if (st == PX_OK) st = table_build(&probes, ws_, nt);
     for (size_t k = 0; st == PX_OK && k < sh.nchunks + sh.nranges; k++) merge_stats(stats, &sh.jstats[k]);
@@ -563,12 +550,12 @@ static int build_threads(px_thermo_ws *ws, const px_db *db, const px_spec_option
         for (size_t i = 0; i < nx; i++) xs[i] = node(o->window.xmin, o->window.xmax, i, nx);
         for (size_t j = 0; j < ny; j++) ys[j] = node(o->window.ymin, o->window.ymax, j, ny);
         lookup l = {&c0, &o->window, nx, ny, xs, ys, sh.labels, &probes, 0, 0};
-        t5 = wall_now();
+        t5 = px_clock_wall();
         st = px_diagram_grid_map(&o->window, lookup_or_solve, &l, &o->grid, out);
         merge_stats(stats, &tail);
         missed = l.solved;
     }
-    double t6 = wall_now();
+    double t6 = px_clock_wall();
     if (prof) {
         prof->threads = nt;
         prof->wall_setup = t1 - t0;

@@ -41,7 +41,7 @@ typedef struct px_rmap_options {
     double background_na_cl;  /* mol/kg of NaCl background electrolyte (0: none) */
     const char *const *exclude;
     size_t n_exclude;
-    int threads;              /* worker threads for the grid nodes (default 1) */
+    int threads;              /* worker threads for nodes and bisections (default 1) */
     px_ligand_states ligands; /* ligand oxidation states kept (practice's default) */
     int allow_inhibited;      /* 1: inhibited solids may precipitate (thermo/practice.h) */
     px_rmap_profile *profile; /* NULL, or filled with the phase timings */
