@@ -110,18 +110,22 @@ int main(void)
     }
     const px_rmap_profile *p2 = &prof[2];
     double f = cpu_serial[1] / cpu_all[1];
-    double par2 = p2->cpu[0] + p2->cpu[1], busier = p2->cpu[0] > p2->cpu[1] ? p2->cpu[0] : p2->cpu[1];
+    double par2 = p2->cpu[0] + p2->cpu[1];
     printf("  serial fraction (CPU, one thread): %.4f (%.4f s of %.4f s); Amdahl bound on 2 threads: %.2fx\n", f,
            cpu_serial[1], cpu_all[1], 1.0 / (f + (1.0 - f) / 2.0));
     printf("  work split on 2 threads (CPU): %.3f / %.3f; parallel work %.4f s on one thread, %.4f s on two\n",
            p2->cpu[0] / par2, p2->cpu[1] / par2, cpu_all[1] - cpu_serial[1], par2);
     /* CPU seconds of one run against another are noisy on a busy machine,
-     * so the projection takes the one-thread run's CPU and only the share
-     * of the parallel work the busier thread did on two */
-    double share = busier / par2;
-    printf("  speed-up on 2 threads: %.2fx wall (load below); projected for a core per thread: %.2fx "
-           "(one-thread CPU: serial + parallel x the busier thread's share %.3f)\n",
-           best[1] / best[2], cpu_all[1] / (cpu_serial[1] + share * (cpu_all[1] - cpu_serial[1])), share);
+     * and there the split shows which thread got a core more often (the
+     * counter hands jobs to whichever runs), so the projection takes the
+     * one-thread run's CPU: serial + parallel / 2, plus at worst the
+     * longest job of each phase waited for at the phase's end */
+    const px_rmap_profile *p1 = &prof[1];
+    double par1 = cpu_all[1] - cpu_serial[1], tail = p1->job_max_rows + p1->job_max_edges;
+    printf("  speed-up on 2 threads: %.2fx wall (load below); projected for a core per thread: %.2fx with an even "
+           "split, %.2fx if a thread waits the longest job of each phase (%.4f + %.4f s CPU)\n",
+           best[1] / best[2], cpu_all[1] / (cpu_serial[1] + 0.5 * par1),
+           cpu_all[1] / (cpu_serial[1] + 0.5 * par1 + tail), p1->job_max_rows, p1->job_max_edges);
     printf("  1 and 2 threads give the same bytes: %s\n",
            same_map(keep[1], &keep_st[1], keep[2], &keep_st[2]) ? "yes" : "NO");
     {

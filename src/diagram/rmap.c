@@ -175,7 +175,8 @@ typedef struct worker {
     probe *pr; /* the bisection points this thread solved */
     size_t npr, cappr;
     size_t jobs;
-    double cpu; /* seconds of CPU over the parallel phases */
+    double cpu;        /* seconds of CPU over the parallel phases */
+    double job_max[2]; /* seconds of CPU of the longest job of each phase */
     int st;
 } worker;
 
@@ -244,9 +245,11 @@ static void *worker_run(void *arg)
         size_t job = rows ? k : sh->nchunks + k;
         w->c.stats = &sh->jstats[job];
         px_equil_work_reset(w->c.s->work); /* a cold start: the job's result is its own */
+        double cj = px_clock_thread_cpu();
         if (rows) w->st = row_run(w, k);
         for (size_t e = 0; !rows && e < sh->ranges[k].n && w->st == PX_OK; e++)
             w->st = edge_run(w, &sh->edges[sh->ranges[k].first + e], job);
+        w->job_max[!rows] = fmax(w->job_max[!rows], px_clock_thread_cpu() - cj);
         w->jobs++;
         if (w->st != PX_OK) atomic_store(&sh->stop, 1);
     }
@@ -568,9 +571,12 @@ static int build_threads(px_thermo_ws *ws, const px_db *db, const px_spec_option
         prof->edge_jobs = sh.nranges;
         prof->chunks = sh.nchunks;
         prof->missed = missed;
+        prof->job_max_rows = prof->job_max_edges = 0;
         for (int t = 0; t < nt; t++) {
             prof->cpu[t] = ws_[t].cpu;
             prof->jobs[t] = ws_[t].jobs;
+            prof->job_max_rows = fmax(prof->job_max_rows, ws_[t].job_max[0]);
+            prof->job_max_edges = fmax(prof->job_max_edges, ws_[t].job_max[1]);
         }
     }
     for (int t = 1; t < built; t++) px_spec_free(ws_[t].c.s);

@@ -26,6 +26,7 @@ typedef struct px_rmap_profile {
     size_t chunks;                       /* jobs of phase 1 (row chunks) */
     size_t edges, edge_jobs;             /* crossing edges and saddle centres; their jobs */
     size_t missed;                       /* points the tracer had to solve itself (0 expected) */
+    double job_max_rows, job_max_edges;  /* CPU seconds of the longest job of each phase */
     double cpu[PX_RMAP_MAX_THREADS];     /* CPU seconds of each worker in both phases */
     size_t jobs[PX_RMAP_MAX_THREADS];    /* jobs each worker took */
 } px_rmap_profile;
