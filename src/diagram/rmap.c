@@ -434,7 +434,7 @@ typedef struct lookup {
     const double *xs, *ys; /* the nodes' coordinates */
     const int *labels;
     const probe_table *probes;
-    size_t next;   /* the tracer asks for the nodes in order: the one expected */
+    size_t next, ni, nj; /* the tracer asks for the nodes in order: the one expected */
     size_t solved; /* points the tables missed (none expected) */
 } lookup;
 
@@ -444,8 +444,12 @@ typedef struct lookup {
 static int lookup_or_solve(double x, double y, void *user, int *id)
 {
     lookup *l = user;
-    if (l->next < l->nx * l->ny && l->xs[l->next % l->nx] == x && l->ys[l->next / l->nx] == y) {
+    if (l->nj < l->ny && l->xs[l->ni] == x && l->ys[l->nj] == y) {
         *id = l->labels[l->next++];
+        if (++l->ni == l->nx) {
+            l->ni = 0;
+            l->nj++;
+        }
         return 0;
     }
     double fi = (x - l->w->xmin) / (l->w->xmax - l->w->xmin) * (double)(l->nx - 1);
@@ -552,7 +556,7 @@ static int build_threads(px_thermo_ws *ws, const px_db *db, const px_spec_option
         c0.stats = &tail;
         for (size_t i = 0; i < nx; i++) xs[i] = node(o->window.xmin, o->window.xmax, i, nx);
         for (size_t j = 0; j < ny; j++) ys[j] = node(o->window.ymin, o->window.ymax, j, ny);
-        lookup l = {&c0, &o->window, nx, ny, xs, ys, sh.labels, &probes, 0, 0};
+        lookup l = {&c0, &o->window, nx, ny, xs, ys, sh.labels, &probes, 0, 0, 0, 0};
         t5 = px_clock_wall();
         st = px_diagram_grid_map(&o->window, lookup_or_solve, &l, &o->grid, out);
         merge_stats(stats, &tail);
