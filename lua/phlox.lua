@@ -678,7 +678,10 @@ function phlox.map(opts)
     ligand = opts.ligand, ligand_activity = opts.ligand and (opts.ligand_activity or 1e-3) or nil,
   }
   m.files = lib.files
-  m.provenance = provenance.of_result(lib, { opts.element, opts.ligand }, m.conditions, opts)
+  -- a ligand group (CN) stamps the files of its elements: its complexes live there
+  local els = { opts.element }
+  for _, e in ipairs(LIGAND_GROUPS[opts.ligand] or { opts.ligand }) do els[#els + 1] = e end
+  m.provenance = provenance.of_result(lib, els, m.conditions, opts)
   stamp_held(m, held)
   m.provenance.notes = m.stamp   -- the caveats travel with the provenance (into sweep results)
   return m

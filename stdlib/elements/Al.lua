@@ -4,6 +4,11 @@
 -- 1995; hydrolysis constants from Baes and Mesmer 1976 written against Al3+, so they keep
 -- their published log K whatever dfG of Al3+ is chosen. All values are recalled, not read,
 -- unless the source says "(read)".
+--
+-- Primary compilation: CODATA 1989 (Al^3+, corundum); Robie and Hemingway 1995 for
+-- gibbsite and boehmite, which CODATA does not cover. That pairing misses the measured
+-- gibbsite solubility (log *Ks 8.41 against 8.11 Nordstrom et al. 1990 and 7.74 Palmer and
+-- Wesolowski 1992): said here, checked and kept as a known difference in docs/data-checks.md.
 local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
 local CODATA = "CODATA Key Values for Thermodynamics (Cox, Wagman and Medvedev 1989)"
 local RH95 = "from memory of Robie and Hemingway 1995, Thermodynamic properties of minerals ... at 298.15 K and 1 bar (USGS Bulletin 2131)"

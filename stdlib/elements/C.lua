@@ -2,6 +2,14 @@
 -- methane, carbon monoxide and graphite; carbonate and bicarbonate complexes of
 -- the metals; carbonate minerals.
 --
+-- Primary compilation: Nordstrom et al. 1990 (ACS Symp. Ser. 416), the evaluated
+-- aqueous carbonate constants, which adopt Plummer and Busenberg 1982 for the
+-- CO2-H2O-CaCO3 system (CO3^2- is defined by that K2 equation; the SH88/SHS89 HKF sets
+-- of CO2(aq) and HCO3^- reproduce K1 and KH). Solids without an evaluated constant
+-- (smithsonite, cerussite, rhodochrosite, otavite, malachite) are NBS 1982 solids on
+-- the metal file's ion: rhodochrosite and cerussite then miss the measured solubility
+-- by +0.51 and +0.33 (known differences, docs/data-checks.md).
+--
 -- Data sets: CO2(aq), HCO3^- and CO3^2- carry the revised-HKF parameters of
 -- Shock and Helgeson 1988 / Shock, Helgeson and Sverjensky 1989 (as recalled in
 -- the project reference table tests/reference/hkf). Gases: CODATA 1989 key

@@ -17,8 +17,12 @@
 -- OCN^- and the Au, Fe, Ni and Zn cyano complexes (their dfG, dfH and S close
 -- the Gibbs-Helmholtz cycle within 0.6 kJ/mol, a check on the recall), so
 -- these carry reaction enthalpies (van 't Hoff).  Ag and Cu complexes: Smith
--- and Martell, Critical Stability Constants (no enthalpy recalled: held at
--- 25 C).  Every number was recalled, not read ("from memory of").
+-- and Martell, Critical Stability Constants (no enthalpy recalled:
+-- isocoulombic estimate); the Cu(I) values are those Penneman and Jones 1956
+-- derived from their infrared measurements (abstract read, checked in
+-- docs/data-checks.md).  Au(CN)4^-: the order-of-magnitude constant printed
+-- in gold-processing texts (low quality; no second value found).  Every
+-- number was recalled, not read ("from memory of"), unless marked read.
 --
 -- Caution: HCN is volatile and toxic; the diagrams say which species can
 -- form, not how fast cyanide oxidises or gold dissolves.
@@ -77,6 +81,20 @@ local species = {
       note = "E0(Au(CN)2^-/Au) = -0.611 V (CRC -0.60).  With Au^+ of Au.lua (1.692 V) log " ..
              "beta2 = 38.94; Smith and Martell give 38.3 (recalled), the literature 36.6-39.3.",
     },
+    {
+      formula = "Au(CN)4^-", model = "logk",
+      reaction = "Au^3+ + 4 CN^- = Au(CN)4^-",
+      logK = 56, estimate = "isocoulombic",
+      source = "from memory of Marsden and House 2006, The Chemistry of Gold Extraction (2nd ed.), " ..
+               "table of stability constants of gold complexes (beta4 about 1e56)",
+      quality = "low",
+      note = "Gold(III) cyanide. The constant is an order-of-magnitude value (two significant " ..
+             "figures at best) and no second published value was found. With Au^3+ of Au.lua it " ..
+             "gives E0(Au(CN)4^- + 2 e- = Au(CN)2^- + 2 CN^-) = 0.89 V: Au(CN)4^- is stable only " ..
+             "above the O2/H2O line in alkaline cyanide, so oxygen does not form it, as leaching " ..
+             "practice finds (strong oxidants or anodic oxidation do). No dH recalled: temperature " ..
+             "by the isocoulombic estimate.",
+    },
     -- ---------------------------------------------------------------- silver, copper(I)
     -- Smith and Martell cumulative constants; see cyano() below
     -- ---------------------------------------------------------------- zinc, nickel
@@ -119,9 +137,12 @@ local species = {
     },
 }
 table.insert(species, cyano("Ag^+", 2, "-", 20.48, "Lange's Handbook lists 21.1 (recalled)."))
-table.insert(species, cyano("Cu^+", 2, "-", 24.0))
-table.insert(species, cyano("Cu^+", 3, "2-", 28.59))
-table.insert(species, cyano("Cu^+", 4, "3-", 30.30))
+table.insert(species, cyano("Cu^+", 2, "-", 24.0, "Penneman and Jones 1956 (J. Chem. Phys. 24, 293, abstract " ..
+  "read) take the same 1e24 as the basis of their beta3 and beta4; no independent second value was found."))
+table.insert(species, cyano("Cu^+", 3, "2-", 28.59, "Penneman and Jones 1956 (abstract read): 1/2.6e-29, i.e. 28.585, " ..
+  "from their measured K3 on beta2 = 1e24."))
+table.insert(species, cyano("Cu^+", 4, "3-", 30.30, "Penneman and Jones 1956 (abstract read): 1/5e-31, i.e. 30.30, " ..
+  "from their measured K4 on beta2 = 1e24."))
 
 return {
   element = "C",

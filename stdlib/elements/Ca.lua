@@ -1,8 +1,14 @@
 -- stdlib/elements/Ca.lua: calcium, Ca2+, CaOH+, lime and portlandite.
 -- Data set choice (see docs/data/other-metals.md): Ca2+ with the revised-HKF row of
 -- Shock and Helgeson 1988 exactly as in phlox's reference hkf/hkf_parameters.csv (its
--- dfG agrees with CODATA within 0.02 kJ/mol); CaO and Ca(OH)2 from the NBS tables.
+-- dfG agrees with CODATA within 0.02 kJ/mol); CaO from CODATA (issue 13; it was NBS);
+-- Ca(OH)2 from the NBS tables.
 -- Carbonates and sulfates of Ca live in C.lua and S.lua.
+--
+-- Primary compilation: CODATA 1989 key values (Ca(cr), CaO; Ca2+ through the SH88 row,
+-- whose dfG agrees with CODATA within 0.02 kJ/mol); NBS 1982 for portlandite, which CODATA
+-- does not cover. That pairing gives log *Ks(portlandite) 22.52 against 22.8 measured
+-- (Baes and Mesmer): said here, a known difference in docs/data-checks.md.
 local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
 local CODATA = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values for Thermodynamics"
 local RH95 = "from memory of Robie and Hemingway 1995 (USGS Bulletin 2131)"
@@ -45,13 +51,14 @@ return {
     },
     {
       formula = "CaO(s,lime)", model = "cp",
-      G = -604.03, H = -635.09, S = 39.75,
+      G = -603.30, H = -634.92, S = 38.1,
+      uncertainty = { H = 0.90, S = 0.4 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
       cp = { a = 48.83, b = 4.52e-3, c = -6.53e5 },
       V = 16.764,
       T_range = { 298.15, 2000 },
-      source = NBS .. "; cp: " .. K60 .. "; V: " .. RH95,
+      source = "G, H, S: " .. CODATA .. " (dfG = dfH - T dfS); cp: " .. K60 .. "; V: " .. RH95,
       quality = "high",
-      note = "cp = Kelley's 11.67 + 1.08e-3 T - 1.56e5/T^2 cal/(mol K) times 4.184; gives 42.83 at 298.15 K (NBS Cp 42.80). CODATA 1989: dfH -634.92, S 38.1 (dfG -603.30).",
+      note = "cp = Kelley's 11.67 + 1.08e-3 T - 1.56e5/T^2 cal/(mol K) times 4.184; gives 42.83 at 298.15 K (NBS Cp 42.80). NBS 1982: dfG -604.03, dfH -635.09, S 39.75 (issue 13: the file used NBS; CODATA is now the primary compilation).",
     },
     {
       formula = "Ca(OH)2(s,portlandite)", model = "cp",

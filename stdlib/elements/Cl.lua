@@ -2,6 +2,11 @@
 -- (Cl2, hypochlorite, chlorite, chlorate, perchlorate), chloro complexes of the
 -- metals and the common chloride salts.
 --
+-- Primary compilation: NBS 1982 for the chlorine redox species (Cl2, ClO^-, HClO2,
+-- ClO2^-, ClO3^-, ClO4^-); Cl^- is the SH88 HKF row, whose dfG (-131.29 kJ/mol) agrees
+-- with CODATA 1989 (-131.22) within 0.07 kJ/mol. Chloro complexes: Smith and Martell /
+-- Nordstrom et al. 1990 constants at I = 0 (each record names its source).
+--
 -- Data sets: Cl^- carries the revised-HKF parameters of Shock and Helgeson 1988
 -- (recalled from the paper). The
 -- oxychlorine species are written as reactions whose log K and dH are derived
@@ -18,6 +23,10 @@ local KELLEY = "Cp: from memory of Kelley 1960 (U.S. Bur. Mines Bull. 584), Maie
 local N90 = "from memory of Nordstrom, Plummer, Langmuir, Busenberg, May, Jones and Parkhurst 1990 (ACS Symp. Ser. 416, 398-413)"
 local COMPILED = "from memory of the I = 0 constants compiled from Smith and Martell (Critical Stability Constants) in Nordstrom et al. 1990-era aqueous data sets; attribution to the primary paper not recalled"
 local SM = "from memory of Smith and Martell, Critical Stability Constants (I = 0, 25 C)"
+local POWELL05 = "Powell, Brown, Byrne, Gajda, Hefter, Sjoeberg and Wanner 2005 (IUPAC Technical Report), " ..
+                 "Pure Appl. Chem. 77, 739-800: Hg2+-Cl-, OH- systems (I = 0, 25 C)"
+local POWELL05_READ = POWELL05 .. "; value and +- read in the abstract of its summary (Aust. J. Chem. 2004, " ..
+                      "doi:10.1071/CH04063)"
 local CAL = { energy = "cal", entropy = "cal" }
 local KCAL = { energy = "kcal" }
 
@@ -222,5 +231,35 @@ return {
       quality = "medium",
       note = "No dH recalled: temperature by the isocoulombic estimate.",
     },
+    -- Hg(II) chloro complexes (issue 13): Powell et al. 2005, the IUPAC
+    -- critical review, one compilation with Hg(OH)2(aq) in Hg.lua.  The
+    -- review gives reaction enthalpies, but they were not recalled: the
+    -- temperature dependence is the isocoulombic estimate (flagged in stamps).
+    { formula = "HgCl^+", model = "logk", reaction = "Hg^2+ + Cl^- = HgCl^+", logK = 7.31,
+      uncertainty = { logK = 0.04 },  -- +-: from memory of Powell et al. 2005
+      estimate = { method = "isocoulombic", model = "Cd^2+ + Cl^- = CdCl^+" },
+      source = "from memory of " .. POWELL05, quality = "high",
+      note = "Smith and Martell 7.30 (recalled). No dH recalled: temperature by the isocoulombic estimate with the model the library's rule picks (docs/thermo.md)." },
+    { formula = "HgCl2(aq)", model = "logk", reaction = "Hg^2+ + 2 Cl^- = HgCl2(aq)", logK = 14.00,
+      uncertainty = { logK = 0.07 },
+      estimate = { method = "isocoulombic", model = "Cd^2+ + 2 Cl^- = CdCl2(aq)" },
+      source = POWELL05_READ, quality = "high",
+      note = "The dominant Hg(II) species in fresh and condensate waters with chloride, pH below " ..
+             "about 7. No dH recalled: temperature by the isocoulombic estimate." },
+    { formula = "HgCl3^-", model = "logk", reaction = "Hg^2+ + 3 Cl^- = HgCl3^-", logK = 14.925,
+      estimate = { method = "isocoulombic", model = "Cd^2+ + 3 Cl^- = CdCl3^-" },
+      source = "from memory of " .. POWELL05 .. " (log K3 0.925 on beta2)", quality = "medium",
+      note = "Smith and Martell 15.0 (recalled). No dH recalled: temperature by the isocoulombic estimate." },
+    { formula = "HgCl4^2-", model = "logk", reaction = "Hg^2+ + 4 Cl^- = HgCl4^2-", logK = 15.535,
+      estimate = { method = "isocoulombic", model = "Pb^2+ + 4 Cl^- = PbCl4^2-" },
+      source = "from memory of " .. POWELL05 .. " (log K4 0.61 on beta3)", quality = "medium",
+      note = "Dominant in seawater and brines. Smith and Martell 15.6 (recalled). No dH recalled: " ..
+             "temperature by the isocoulombic estimate." },
+    { formula = "Hg(OH)Cl(aq)", model = "logk", reaction = "Hg^2+ + Cl^- + H2O(l) = Hg(OH)Cl(aq) + H^+", logK = 4.27,
+      uncertainty = { logK = 0.35 },
+      estimate = "isocoulombic",
+      source = POWELL05_READ, quality = "medium",
+      note = "Mixed hydroxo-chloro complex, important near pH 7 in chloride waters. No second " ..
+             "published value recalled. No dH recalled: temperature by the isocoulombic estimate." },
   },
 }

@@ -1,5 +1,8 @@
 -- stdlib/elements/Cu.lua: copper, its ions, hydrolysis species and oxides.
 --
+-- Primary compilation: NBS 1982 (ions and solids); hydrolysis from Baes and Mesmer 1976,
+-- Cu(OH)2(aq) from the IUPAC review (Powell et al. 2007).
+--
 -- Data choice (see docs/data/transition-metals.md): ions and solids from the NBS
 -- tables (Wagman et al. 1982), one table for the whole system; hydrolysis from Baes
 -- and Mesmer 1976, Cu(OH)2(aq) from the IUPAC review (Powell et al. 2007). No Cp is

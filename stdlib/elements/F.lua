@@ -1,6 +1,9 @@
 -- stdlib/elements/F.lua: fluorine. Fluoride, hydrofluoric acid, bifluoride;
 -- fluoro complexes (Al, Fe, Mg, Ca, Na, Mn) and fluorite.
 --
+-- Primary compilation: Nordstrom et al. 1990 (ACS Symp. Ser. 416) for every constant;
+-- F^- is the SH88 HKF row.
+--
 -- Data sets: F^- carries the revised-HKF parameters of Shock and Helgeson 1988
 -- (recalled from the paper). Everything
 -- else is a formation constant at I = 0, 25 C, mostly from Nordstrom et al.

@@ -5,6 +5,9 @@
 -- recalled, not read.  Aqueous HKF rows are those of
 -- tests/reference/hkf/hkf_parameters.csv with confidence high or medium
 -- (checked there against their published Cp and V at 25 C).
+--
+-- Primary compilation: NBS 1982 for H2O(l), H2O(g), H2O2 and the gases; OH^- and the
+-- dissolved gases carry the SH88/SHS89 HKF sets.
 return {
   element = "HO",
   title = "Hydrogen and oxygen (built-in aqueous and gas species)",

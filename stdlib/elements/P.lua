@@ -2,6 +2,10 @@
 -- calcium and magnesium phosphate complexes, and the common phosphate minerals
 -- (apatite, brushite, strengite, vivianite).
 --
+-- Primary compilation: Smith and Martell (Critical Stability Constants, I = 0) for the
+-- acid constants, with NBS 1982 enthalpies; H2PO4^- and HPO4^2- carry the SH88 values;
+-- the minerals are defined by their measured solubility products (each record names it).
+--
 -- Data sets: H2PO4^- carries revised-HKF parameters of Shock and Helgeson 1988
 -- as recalled in the project reference table tests/reference/hkf (its c2 was
 -- reconstructed there from the published Cp, see the note). HPO4^2- uses the

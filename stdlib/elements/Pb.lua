@@ -5,6 +5,8 @@
 -- Pb(IV) appears only in the solids PbO2 and Pb3O4 (no Pb4+ aqueous ion).
 -- No complete HKF set is recalled for Pb2+, so it is defined by its conventional
 -- formation reaction (log K = -dfG/(RT ln 10), dH = dfH).
+--
+-- Primary compilation: NBS 1982 (ions and solids); hydrolysis from Baes and Mesmer 1976.
 local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
 local CODATA = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values for Thermodynamics"
 local K60 = "from memory of Kelley 1960, US Bureau of Mines Bulletin 584"

@@ -7,6 +7,8 @@
 -- their conventional formation reactions (log K = -dfG/(RT ln 10), dH = dfH).
 -- Aqueous Sn(IV) hydroxo species (Sn(OH)4(aq), Sn(OH)5^-, Sn(OH)6^2-) are left out: no
 -- constants recalled with confidence.
+--
+-- Primary compilation: NBS 1982 (ions and solids); Sn(II) hydrolysis from Baes and Mesmer 1976.
 local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
 local CODATA = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values for Thermodynamics"
 local RH95 = "from memory of Robie and Hemingway 1995 (USGS Bulletin 2131)"

@@ -5,6 +5,8 @@
 -- Ti(OH)4(aq) values were not recalled with confidence, so a diagram from this file
 -- shows the metal, its oxides and Ti^2+ only (titanium's passivity in water is a
 -- property of the TiO2 film; the other dissolved fields are missing).
+--
+-- Primary compilation: NBS 1982; Ti^2+ from the CRC standard potential (no NBS value).
 local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
 local CODATA = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values for Thermodynamics"
 local RH95 = "from memory of Robie and Hemingway 1995 (USGS Bulletin 2131)"

@@ -1,5 +1,8 @@
 -- stdlib/elements/Zn.lua: zinc, its ion, hydrolysis species, oxide and hydroxide.
 --
+-- Primary compilation: CODATA 1989 (Zn^2+, ZnO); hydrolysis and epsilon-Zn(OH)2 from
+-- Baes and Mesmer 1976, written against Zn^2+.
+--
 -- Data choice (see docs/data/transition-metals.md): Zn^2+ and ZnO from the CODATA key
 -- values (Cox, Wagman and Medvedev 1989), which supersede the NBS-1982 ZnO; hydrolysis
 -- from Baes and Mesmer 1976. Every number below was recalled, not read.
