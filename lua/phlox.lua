@@ -287,6 +287,12 @@ function phlox.Library:list(element)
   return out
 end
 
+--- The publications the loaded records cite, each once: a list of
+--- { key = "NBS82", short = "Wagman et al. 1982", cite = "<full citation>" }
+--- in the order first cited.  A record's `source` names them as "[KEY]" and
+--- its `refs` lists the keys.
+function phlox.Library:references() return self.db:references() end
+
 -- props and reaction: one argument (a formula or an equation) and T, P options
 local function at_TP(lib, method, what, arg, opts)
   local fname = "Library:" .. method

@@ -9,13 +9,13 @@
 -- whose dfG agrees with CODATA within 0.02 kJ/mol); NBS 1982 for portlandite, which CODATA
 -- does not cover. That pairing gives log *Ks(portlandite) 22.52 against 22.8 measured
 -- (Baes and Mesmer): said here, a known difference in docs/data-checks.md.
-local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
-local CODATA = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values for Thermodynamics"
-local RH95 = "from memory of Robie and Hemingway 1995 (USGS Bulletin 2131)"
-local K60 = "from memory of Kelley 1960, US Bureau of Mines Bulletin 584"
-local SH88 = "from memory of Shock and Helgeson 1988 (Geochim. Cosmochim. Acta 52, 2009; ion tables, table no. not recalled), as in phlox's reference hkf/hkf_parameters.csv (high confidence, passes the Cp/V check)"
-local BM76 = "from memory of Baes and Mesmer 1976, The Hydrolysis of Cations (I = 0, 25 C)"
-local N90 = "from memory of Nordstrom et al. 1990 (ACS Symp. Ser. 416)"
+local NBS = "from memory of [NBS82]"
+local CODATA = "from memory of [CODATA89]"
+local RH95 = "from memory of [RH95]"
+local K60 = "from memory of [K60]"
+local SH88 = "from memory of [SH88] (ion tables, table no. not recalled), as in phlox's reference hkf/hkf_parameters.csv (high confidence, passes the Cp/V check)"
+local BM76 = "from memory of [BM76] (I = 0, 25 C)"
+local N90 = "from memory of [N90]"
 
 return {
   element = "Ca",

@@ -19,16 +19,11 @@
 --
 -- Caution: mercury is toxic; diagrams say what can form, not how fast.
 
-local CODATA = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values for " ..
-               "Thermodynamics (dfH, S; dfG derived here as dfH - T dfS)"
-local CODATA_U = "+-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)"
-local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic " ..
-            "Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
-local BM = "from memory of Baes and Mesmer 1976, The Hydrolysis of Cations (I = 0, 25 C)"
-local POWELL = "Powell, Brown, Byrne, Gajda, Hefter, Sjoeberg and Wanner 2005, Chemical speciation of " ..
-               "environmentally significant heavy metals with inorganic ligands, Part 1: the Hg2+-Cl-, OH-, " ..
-               "CO3 2-, SO4 2- and PO4 3- aqueous systems (IUPAC Technical Report), Pure Appl. Chem. 77, 739-800 " ..
-               "(I = 0, 25 C)"
+local CODATA = "from memory of [CODATA89] (dfH, S; dfG derived here as dfH - T dfS)"
+local CODATA_U = "+-: from memory of [CODATA89]"
+local NBS = "from memory of [NBS82]"
+local BM = "from memory of [BM76] (I = 0, 25 C)"
+local POWELL = "[POWELL05] (I = 0, 25 C)"
 -- Henry constant of Hg(0): Sander 2023 (Atmos. Chem. Phys. 23, 10901),
 -- compilation of Henry's law constants, entry for mercury (read):
 -- Hcp = 1.3e-3 mol/(m3 Pa) and d ln Hcp/d(1/T) = 2600 K at 298.15 K for
@@ -38,9 +33,7 @@ local POWELL = "Powell, Brown, Byrne, Gajda, Hefter, Sjoeberg and Wanner 2005, C
 -- K(Hg(g) = Hg(aq)) in mol/(kg bar) = Hcp * 1e5 Pa/bar / rho, rho = 997.05
 -- kg/m3 (IAPWS-95 at 25 C, 1 bar): log K = log10(1.3e-3 * 100.296) = -0.8848;
 -- dH = -R * 2600 K = -21.62 kJ/mol.
-local HENRY = "derived here from Andersson, Gaardfeldt, Waengberg and Stroemberg 2008 (Chemosphere 73, 587): " ..
-              "Hcp 1.3e-3 mol/(m3 Pa), d ln Hcp/d(1/T) = 2600 K at 298.15 K, as tabulated in Sander 2023 " ..
-              "(Atmos. Chem. Phys. 23, 10901), read; molar to molal with the water density 997.05 kg/m3"
+local HENRY = "derived here from [ANDERSSON08]: Hcp 1.3e-3 mol/(m3 Pa), d ln Hcp/d(1/T) = 2600 K at 298.15 K, read in the table of Sander 2023 cited there; molar to molal with the water density 997.05 kg/m3"
 
 return {
   element = "Hg",
@@ -55,8 +48,7 @@ return {
       uncertainty = { S = 0.12 },
       source = CODATA .. " (S; " .. CODATA_U .. "); Cp at 298.15 K from " .. NBS .. ", held constant",
       quality = "high",
-      note = "Liquid to its normal boiling point (629.88 K). Cp of liquid mercury falls by " ..
-             "about 1 % from 298 to 450 K.",
+      note = "Liquid to its normal boiling point (629.88 K). Cp of liquid mercury falls by about 1 % from 298 to 450 K.",
     },
     {
       formula = "Hg(g)", model = "cp",
@@ -65,8 +57,7 @@ return {
       uncertainty = { H = 0.04, S = 0.005 },
       source = CODATA .. " (" .. CODATA_U .. "); Cp = 5R/2 (monatomic ideal gas)",
       quality = "high",
-      note = "log10 of the vapour pressure over Hg(l) at 25 C: -5.578 bar (0.264 Pa), " ..
-             "the measured 0.26 Pa.",
+      note = "log10 of the vapour pressure over Hg(l) at 25 C: -5.578 bar (0.264 Pa), the measured 0.26 Pa.",
     },
     {
       formula = "Hg^2+", model = "logk",
@@ -89,21 +80,16 @@ return {
       reaction = "Hg^2+ + H2O(l) = HgOH^+ + H^+",
       logK = -3.40, estimate = "isocoulombic",
       source = BM, quality = "medium",
-      note = "Powell et al. 2005 (IUPAC) select the same -3.40 (recalled). No dH recalled: " ..
-             "temperature by the isocoulombic estimate.",
+      note = "Powell et al. 2005 (IUPAC) select the same -3.40 (recalled). No dH recalled: temperature by the isocoulombic estimate.",
     },
     {
       formula = "Hg(OH)2(aq)", model = "logk",
       reaction = "Hg^2+ + 2 H2O(l) = Hg(OH)2(aq) + 2 H^+",
       logK = -5.98, estimate = "isocoulombic",
       uncertainty = { logK = 0.06 },
-      source = POWELL .. "; value and +- read in the abstract of its summary (Aust. J. Chem. 2004, " ..
-               "doi:10.1071/CH04063)",
+      source = POWELL .. "; value and +- read in the abstract of its summary (Aust. J. Chem. 2004, doi:10.1071/CH04063)",
       quality = "high",
-      note = "The dominant dissolved Hg(II) species from pH 3 to 12 without chloride. Baes and Mesmer " ..
-             "1976 give -6.17 (recalled); with CODATA HgO the IUPAC value gives HgO solubility " ..
-             "2.9e-4 mol/kg against about 2.5e-4 in handbooks, the Baes and Mesmer value 1.9e-4 " ..
-             "(docs/data-checks.md). No dH recalled: temperature by the isocoulombic estimate.",
+      note = "The dominant dissolved Hg(II) species from pH 3 to 12 without chloride. [BM76] give -6.17 (recalled); with CODATA HgO the IUPAC value gives HgO solubility 2.9e-4 mol/kg against about 2.5e-4 in handbooks, the Baes and Mesmer value 1.9e-4 (docs/data-checks.md). No dH recalled: temperature by the isocoulombic estimate.",
     },
     {
       formula = "HgO(s,montroydite)", model = "cp",
@@ -121,12 +107,7 @@ return {
       T_range = { 273.15, 333.15 },
       source = HENRY,
       quality = "medium",
-      note = "Dissolved elemental mercury (condensates, scrubber and process waters). With Hg(g) " ..
-             "over Hg(l) it gives the solubility of the liquid metal, 3.3e-7 mol/kg (66 ug/kg) at " ..
-             "25 C; Clever, Johnson and Derrick 1985 recommend Hcp 1.1e-3 (0.07 lower in log K). " ..
-             "dH is measured (Sanemasa 1975: -5.3 kcal/mol, 5-60 C); Glew and Hames 1971 and " ..
-             "Clever et al. 1985 give a steeper slope (4800-5700 K), 0.4 lower in log K at 60 C " ..
-             "(docs/data-checks.md). Constant dH above 60 C is an extrapolation.",
+      note = "Dissolved elemental mercury (condensates, scrubber and process waters). With Hg(g) over Hg(l) it gives the solubility of the liquid metal, 3.3e-7 mol/kg (66 ug/kg) at 25 C; Clever, Johnson and Derrick 1985 recommend Hcp 1.1e-3 (0.07 lower in log K). dH is measured (Sanemasa 1975: -5.3 kcal/mol, 5-60 C); Glew and Hames 1971 and Clever et al. 1985 give a steeper slope (4800-5700 K), 0.4 lower in log K at 60 C (docs/data-checks.md). Constant dH above 60 C is an extrapolation.",
     },
   },
 }

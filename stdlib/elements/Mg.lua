@@ -6,12 +6,12 @@
 -- SH88 row, whose dfG is 1.4 kJ/mol less negative than CODATA; brucite solubility and
 -- epsomite were 0.16-0.24 log units off the measured values). CODATA Mg2+ with NBS brucite
 -- reproduces the measured brucite solubility (log Ksp -11.15); see docs/data/other-metals.md.
-local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
-local CODATA = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values for Thermodynamics"
-local RH95 = "from memory of Robie and Hemingway 1995 (USGS Bulletin 2131)"
-local SH88 = "from memory of Shock and Helgeson 1988 (Geochim. Cosmochim. Acta 52, 2009; ion tables, table no. not recalled), as in phlox's reference hkf/hkf_parameters.csv (high confidence, passes the Cp/V check)"
-local BM76 = "from memory of Baes and Mesmer 1976, The Hydrolysis of Cations (I = 0, 25 C)"
-local N90 = "from memory of Nordstrom et al. 1990 (ACS Symp. Ser. 416)"
+local NBS = "from memory of [NBS82]"
+local CODATA = "from memory of [CODATA89]"
+local RH95 = "from memory of [RH95]"
+local SH88 = "from memory of [SH88] (ion tables, table no. not recalled), as in phlox's reference hkf/hkf_parameters.csv (high confidence, passes the Cp/V check)"
+local BM76 = "from memory of [BM76] (I = 0, 25 C)"
+local N90 = "from memory of [N90]"
 
 return {
   element = "Mg",
@@ -69,7 +69,7 @@ return {
       V = 24.63,
       source = NBS .. " (also phlox's reference gibbs_25C.csv); V: " .. RH95,
       quality = "high",
-      note = "cp is NBS Cp at 298.15 K taken as constant. CODATA 1989 has no brucite. With the CODATA Mg2+ above, log Ksp (brucite = Mg2+ + 2 OH-) = -11.13 (Smith and Martell via Harris: -11.15); with the SH88 Mg2+ it was -11.39 (see docs/data/other-metals.md).",
+      note = "cp is NBS Cp at 298.15 K taken as constant. CODATA 1989 has no brucite. With the CODATA Mg2+ above, log Ksp (brucite = Mg2+ + 2 OH-) = -11.13 ([SM] via Harris: -11.15); with the SH88 Mg2+ it was -11.39 (see docs/data/other-metals.md).",
     },
   },
 }

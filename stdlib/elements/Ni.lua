@@ -5,13 +5,10 @@
 -- the heat capacity of Ni^2+ from the NEA-TDB nickel review (HKF estimate from it).
 -- Numbers are recalled ("from memory of") unless a source says read.
 
-local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic " ..
-            "Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
-local KELLEY = "cp from memory of Kelley 1960 (U.S. Bureau of Mines Bulletin 584), " ..
-               "converted from cal with 4.184"
-local BM = "from memory of Baes and Mesmer 1976, The Hydrolysis of Cations (I = 0, 25 C)"
-local NEA = "from memory of Gamsjaeger, Bugajski, Gajda, Lemire and Preis 2005, Chemical " ..
-            "Thermodynamics of Nickel (OECD NEA-TDB vol. 6), selected value"
+local NBS = "from memory of [NBS82]"
+local KELLEY = "cp from memory of [K60], converted from cal with 4.184"
+local BM = "from memory of [BM76] (I = 0, 25 C)"
+local NEA = "from memory of [NEA05NI], selected value"
 
 return {
   element = "Ni",
@@ -33,13 +30,7 @@ return {
       estimate = { Cp = -46 },
       source = NBS .. "; Cp -46 +- 10 J/(mol K) " .. NEA,
       quality = "medium",
-      note = "E0(Ni2+/Ni) = -0.236 V; the CRC series lists -0.257 V. HKF parameters not " ..
-             "recalled as a set: estimated by the loader from S and Cp (Shock and Helgeson " ..
-             "1988 correlations). Shock et al. 1997 list Cp -11.6 cal/(mol K) = -48.5 J/(mol K) " ..
-             "(recalled), inside the NEA uncertainty. V not recalled: volume terms zero " ..
-             "(poor at high pressure). Before issue 12 the ion was defined by its formation " ..
-             "reaction from Ni(s) with van 't Hoff only (dCp of Ni(OH)2 dissolution +69 " ..
-             "J/(mol K) against about 0 measured).",
+      note = "E0(Ni2+/Ni) = -0.236 V; the CRC series lists -0.257 V. HKF parameters not recalled as a set: estimated by the loader from S and Cp ([SH88] correlations). Shock et al. 1997 list Cp -11.6 cal/(mol K) = -48.5 J/(mol K) (recalled), inside the NEA uncertainty. V not recalled: volume terms zero (poor at high pressure). Before issue 12 the ion was defined by its formation reaction from Ni(s) with van 't Hoff only (dCp of Ni(OH)2 dissolution +69 J/(mol K) against about 0 measured).",
     },
     {
       formula = "NiOH^+", model = "logk",
@@ -77,8 +68,7 @@ return {
       cp = { a = 44.31, b = 0, c = 0 },
       source = NBS,
       quality = "medium",
-      note = "cp: NBS Cp(298.15 K) only (a = Cp, b = c = 0); NiO has a magnetic Cp " ..
-             "anomaly near 525 K that this ignores.",
+      note = "cp: NBS Cp(298.15 K) only (a = Cp, b = c = 0); NiO has a magnetic Cp anomaly near 525 K that this ignores.",
     },
     {
       formula = "Ni(OH)2(s)", model = "cp",
@@ -86,28 +76,15 @@ return {
       estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
       source = NBS,
       quality = "medium",
-      note = "Other compilations: dfH -538, S 79. Gives log K(Ni(OH)2 + 2H+ = Ni2+ + 2H2O) " ..
-             "= 12.73; crystalline beta-Ni(OH)2 measured 11.67 +- 0.20 (ORNL; see " ..
-             "docs). Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats).",
+      note = "Other compilations: dfH -538, S 79. Gives log K(Ni(OH)2 + 2H+ = Ni2+ + 2H2O) = 12.73; crystalline beta-Ni(OH)2 measured 11.67 +- 0.20 (ORNL; see docs). Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats).",
     },
     { -- issue 13: the higher oxide the published data allow
       formula = "NiO2(s)", model = "logk",
       reaction = "Ni^2+ + 2 H2O(l) = NiO2(s) + 4 H^+ + 2 e-",
       logK = -53.855, estimate = "isocoulombic",
-      source = "derived here from E0(NiO2 + 4 H^+ + 2 e- = Ni^2+ + 2 H2O) = 1.593 V, OpenStax " ..
-               "Chemistry 2e (Flowers et al. 2019) Appendix L Table L1 (read; values taken from the " ..
-               "CRC Handbook series): log K = -2 x 1.593 / 0.0591593",
+      source = "derived here from E0(NiO2 + 4 H^+ + 2 e- = Ni^2+ + 2 H2O) = 1.593 V, [OPENSTAX] Appendix L Table L1 (read; values taken from the series of [CRC]): log K = -2 x 1.593 / 0.0591593",
       quality = "low",
-      note = "Nickel(IV) oxide, the end member of the higher nickel oxo compounds: measured " ..
-             "potentials of the charged nickel electrode behave as Ni(II)/Ni(IV) solid solutions " ..
-             "and the beta-Ni(OH)2/beta-NiOOH system with z(Ni) < 3 as metastable (Balej and " ..
-             "Divisek 1993, Ber. Bunsenges. Phys. Chem. 97, 929, abstract read), so no beta-NiOOH " ..
-             "record: no dfG for it was read or is recalled with confidence. With the file's NiO its " ..
-             "field lies 4 mV below the O2/H2O line at 25 C and above it at 100-300 C, i.e. where " ..
-             "water itself is oxidised: it marks the nickel-electrode region, not a corrosion " ..
-             "product of aerated water; kept in by default. The CRC alkaline couple " ..
-             "NiO2/Ni(OH)2 (0.490 V, recalled) is 0.10 V above what this value and the NBS " ..
-             "Ni(OH)2 give. No dH: temperature by the isocoulombic estimate.",
+      note = "Nickel(IV) oxide, the end member of the higher nickel oxo compounds: measured potentials of the charged nickel electrode behave as Ni(II)/Ni(IV) solid solutions and the beta-Ni(OH)2/beta-NiOOH system with z(Ni) < 3 as metastable (Balej and Divisek 1993, Ber. Bunsenges. Phys. Chem. 97, 929, abstract read), so no beta-NiOOH record: no dfG for it was read or is recalled with confidence. With the file's NiO its field lies 4 mV below the O2/H2O line at 25 C and above it at 100-300 C, i.e. where water itself is oxidised: it marks the nickel-electrode region, not a corrosion product of aerated water; kept in by default. The CRC alkaline couple NiO2/Ni(OH)2 (0.490 V, recalled) is 0.10 V above what this value and the NBS Ni(OH)2 give. No dH: temperature by the isocoulombic estimate.",
     },
   },
 }
