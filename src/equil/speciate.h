@@ -49,6 +49,7 @@ typedef struct px_spec_options {
     px_ligand_states ligands;       /* ligand oxidation states kept (thermo/practice.h) */
     int allow_inhibited;            /* 1: inhibited solids (practice.h) may precipitate */
     px_equil_options solver;
+    const px_allocator *alloc;      /* every allocation of the px_spec (NULL: malloc/free) */
 } px_spec_options;
 
 px_spec_options px_spec_options_default(void);
@@ -65,6 +66,7 @@ typedef struct px_spec {
     int redox;        /* electrons take part */
     double T;         /* K, of the last px_spec_build or px_spec_set_TP */
     size_t sit_pairs, sit_missing; /* SIT: cation-anion pairs with an eps, and without (eps 0) */
+    const px_allocator *alloc;     /* the options' allocator, for px_spec_free */
     char error[512];
 } px_spec;
 

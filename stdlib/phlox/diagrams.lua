@@ -185,29 +185,30 @@ function diagrams.fractions(opts)
 
   local base = base_speciate(opts)
   base.solids = opts.solids == true
+  base.totals = copy(opts.totals)
+  base.totals[el] = total
+  base.fixed = copy(opts.fixed)
+  local curve = { var = xkind, x = xs, element = el }
+  if xkind ~= "pH" then
+    base.pH = opts.pH
+    if xkind == "log_total" then
+      curve.name = opts.ligand
+      base.totals[opts.ligand] = 1 -- placeholder: the driver sets 10^x at each point
+    else
+      -- the ligand element joins with its species as basis; the fixed
+      -- activity replaces its balance (the total given is a placeholder)
+      curve.name = opts.ligand_species
+      base.fixed[opts.ligand_species] = 0 -- placeholder: x at each point
+      base.totals[lig_el] = base.totals[lig_el] or 1e-3
+      base.basis = copy(opts.basis)
+      base.basis[lig_el] = opts.ligand_species
+    end
+  end
   local shares, failures, notes = {}, {}, {}
   local t0 = os.clock()
+  local points = phlox.speciate_curve(base, curve)
   for i, x in ipairs(xs) do
-    local s = copy(base)
-    s.totals = copy(opts.totals)
-    s.totals[el] = total
-    s.fixed = copy(opts.fixed)
-    if xkind == "pH" then
-      s.pH = x
-    else
-      s.pH = opts.pH
-      if xkind == "log_total" then
-        s.totals[opts.ligand] = 10 ^ x
-      else
-        -- the ligand element joins with its species as basis; the fixed
-        -- activity replaces its balance (the total given is a placeholder)
-        s.fixed[opts.ligand_species] = x
-        s.totals[lig_el] = s.totals[lig_el] or 1e-3
-        s.basis = copy(opts.basis)
-        s.basis[lig_el] = opts.ligand_species
-      end
-    end
-    local r, err = phlox.speciate(s)
+    local r, err = points[i].r, points[i].err
     if r then notes[#notes + 1] = { notes = r.notes, activity = r.activity } end
     if r and r.elements[el] then
       shares[i] = r.elements[el].share
@@ -304,25 +305,22 @@ function diagrams.solubility(opts)
   local t0 = os.clock()
   for _, tc in ipairs(temps) do
     local y, solids = {}, {}
+    local s = copy(base)
+    s.T_C = tc
+    s.pH = xs[1] -- the driver sets each x
+    s.totals = copy(opts.totals)
+    s.totals[el] = total
+    s.fixed = copy(opts.fixed)
+    -- The dissolved total in equilibrium with a solid does not depend on
+    -- how much solid there is, so when the solver fails with a large
+    -- excess of solid the point is retried with less of it.
+    local points, tries = phlox.speciate_curve(s, { var = "pH", x = xs, element = el,
+                                                     retries = RETRIES, retry_factor = RETRY_FACTOR })
+    retried = retried + tries
     for i, pH in ipairs(xs) do
-      local s = copy(base)
-      s.T_C, s.pH = tc, pH
-      s.totals = copy(opts.totals)
-      s.fixed = copy(opts.fixed)
-      -- The dissolved total in equilibrium with a solid does not depend on
-      -- how much solid there is, so when the solver fails with a large
-      -- excess of solid the point is retried with less of it.
-      local r, err, e
-      local put = total
-      for _ = 0, RETRIES do
-        s.totals[el] = put
-        r, err = phlox.speciate(s)
-        if r then notes[#notes + 1] = { notes = r.notes, activity = r.activity } end
-        e = r and r.elements[el]
-        if e then break end
-        put = put * RETRY_FACTOR
-        retried = retried + 1
-      end
+      local r, err, put = points[i].r, points[i].err, points[i].total
+      if r then notes[#notes + 1] = { notes = r.notes, activity = r.activity } end
+      local e = r and r.elements[el]
       y[i], solids[i] = false, false
       if not e then
         failures[#failures + 1] = { T_C = tc, x = pH, message = err or ("no " .. el .. " in the result") }
