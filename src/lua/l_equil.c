@@ -4,7 +4,9 @@
  * activity, the saturation index and amount of every solid, each element's
  * distribution, pH, pe, E, ionic strength and the solver statistics.  A solve
  * that does not converge returns nil, message, info (which equation did not
- * close); misuse raises. */
+ * close); misuse raises.  core.curve(db, opts, curve) runs the curve driver
+ * (src/equil/curve.h) over the same options and returns one such result
+ * (or message) per point. */
 #include "core/constants.h"
 #include "core/status.h"
 #include "equil/curve.h"

@@ -5,6 +5,7 @@
  * the reference path), SVG rewritten by svgpass.c, PDF with pinned dates
  * and document information.  Files are written atomically.  Public
  * functions in render.h; the memory buffer in backend.h. */
+#include "core/alloc.h"
 #include "core/atomic.h"
 #include "core/status.h"
 #include "render/backend.h"
@@ -37,7 +38,7 @@ cairo_status_t px_mem_write(void *closure, const unsigned char *data, unsigned i
     if (m->n + len > m->cap) {
         size_t cap = m->cap ? m->cap : 65536;
         while (cap < m->n + len) cap *= 2;
-        unsigned char *d = realloc(m->data, cap);
+        unsigned char *d = px_realloc(NULL, m->data, m->cap, cap);
         if (!d) {
             m->failed = 1;
             return CAIRO_STATUS_WRITE_ERROR;
@@ -54,7 +55,7 @@ cairo_status_t px_mem_write(void *closure, const unsigned char *data, unsigned i
  * passes below build `out` from m->data, then hand it over here). */
 int px_mem_replace(px_membuf *m, unsigned char *out, size_t n)
 {
-    free(m->data);
+    px_free(NULL, m->data);
     m->data = out;
     m->n = n;
     m->cap = n;
@@ -87,7 +88,7 @@ static void pdf_metadata(cairo_surface_t *s, const px_figure *f)
         if (d && c) px_strbuf_put(&b, "\n", 1);
         if (c) px_strbuf_put(&b, c, strlen(c));
         if (!b.failed) cairo_pdf_surface_set_metadata(s, CAIRO_PDF_METADATA_SUBJECT, b.s);
-        free(b.s);
+        px_free(NULL, b.s);
     }
 }
 
@@ -111,7 +112,7 @@ static int finish_surface(cairo_surface_t *s, cairo_status_t cst, px_membuf *m)
     if (cst == CAIRO_STATUS_SUCCESS) cst = cairo_surface_status(s);
     cairo_surface_destroy(s);
     if (cst != CAIRO_STATUS_SUCCESS || m->failed) {
-        free(m->data);
+        px_free(NULL, m->data);
         m->data = NULL;
         return m->failed || cst == CAIRO_STATUS_NO_MEMORY ? PX_ENOMEM : PX_EIO;
     }
@@ -127,7 +128,7 @@ static int png_text_chunks(px_membuf *m, const px_figure *f)
     if (m->n < PX_PNG_IHDR_END || memcmp(m->data + 12, "IHDR", 4) != 0) return PX_EIO;
     const char *const *keys = (const char *const *)f->meta_key;
     const char *const *vals = (const char *const *)f->meta_val;
-    unsigned char *out = malloc(m->n + px_png_text_size(keys, vals, f->n_meta));
+    unsigned char *out = px_alloc(NULL, m->n + px_png_text_size(keys, vals, f->n_meta));
     if (!out) return PX_ENOMEM;
     memcpy(out, m->data, PX_PNG_IHDR_END);
     size_t o = PX_PNG_IHDR_END + px_png_text(out + PX_PNG_IHDR_END, keys, vals, f->n_meta);
@@ -193,13 +194,13 @@ int px_figure_render(const px_figure *f, px_format fmt, double dpi, unsigned cha
     int fst = finish_surface(s, cst, &m);
     if (fst != PX_OK || pst != PX_OK) {
         px_text_sink_free(&sink);
-        if (fst == PX_OK) free(m.data);
+        if (fst == PX_OK) px_free(NULL, m.data);
         return fst != PX_OK ? fst : pst;
     }
     if (fmt == PX_FORMAT_PNG && f->reference_output) {
         int st = png_text_chunks(&m, f);
         if (st != PX_OK) {
-            free(m.data);
+            px_free(NULL, m.data);
             return st;
         }
     }
@@ -211,14 +212,14 @@ int px_figure_render(const px_figure *f, px_format fmt, double dpi, unsigned cha
             size_t nt;
             st = px_text_sink_splice(&sink, m.data, m.n, &t, &nt);
             if (st == PX_OK) {
-                free(m.data);
+                px_free(NULL, m.data);
                 m.data = t, m.n = nt, m.cap = nt;
             }
         }
         px_text_sink_free(&sink);
         if (st == PX_OK) st = px_svg_describe(&m, f);
         if (st != PX_OK) {
-            free(m.data);
+            px_free(NULL, m.data);
             return st;
         }
     }
@@ -236,7 +237,7 @@ int px_figure_save(const px_figure *f, const char *path, double dpi)
     int st = px_figure_render(f, (px_format)fmt, dpi, &data, &n);
     if (st != PX_OK) return st;
     st = px_write_atomic(path, data, n, NULL);
-    free(data);
+    px_free(NULL, data);
     return st;
 }
 
@@ -259,6 +260,6 @@ int px_figures_save_pdf(const px_figure *const *figs, size_t n, const char *path
     int st = finish_surface(s, cst, &m);
     if (st != PX_OK) return st;
     st = px_write_atomic(path, m.data, m.n, NULL);
-    free(m.data);
+    px_free(NULL, m.data);
     return st;
 }

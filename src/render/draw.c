@@ -5,6 +5,7 @@
  * scratch context and hands back the recorded boxes.  With text.c, the only
  * file that calls cairo drawing functions.  Output surfaces are backend.c's.
  * Contract in layout.h (px_draw_page) and render.h (px_figure_layout). */
+#include "core/alloc.h"
 #include "core/status.h"
 #include "render/layout.h"
 #include "render/text.h"
@@ -364,6 +365,6 @@ int px_figure_layout(const px_figure *f, px_label_box **out, size_t *n)
 
 void px_figure_layout_free(px_label_box *b, size_t n)
 {
-    for (size_t i = 0; b && i < n; i++) free(b[i].text);
-    free(b);
+    for (size_t i = 0; b && i < n; i++) px_free(NULL, b[i].text);
+    px_free(NULL, b);
 }

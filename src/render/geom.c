@@ -3,6 +3,7 @@
  * the boundary (concept: Garcia-Castellanos and Lombardo 2007, Scottish
  * Geographical Journal 123, 227), found by refining square cells kept in a
  * max-heap keyed by the best distance a cell could still contain. */
+#include "core/alloc.h"
 #include "core/status.h"
 #include "render/render.h"
 #include <math.h>
@@ -101,7 +102,7 @@ int px_polygon_pole(const double *x, const double *y, size_t n, double tol, doub
         if (dist) *dist = 0;
         return PX_OK;
     }
-    cell *heap = malloc(sizeof(cell) * (PX_POLE_MAX_CELLS + 8));
+    cell *heap = px_alloc(NULL, sizeof(cell) * (PX_POLE_MAX_CELLS + 8));
     if (!heap) return PX_ENOMEM;
     size_t nh = 0;
     double h = size / 2;
@@ -129,7 +130,7 @@ int px_polygon_pole(const double *x, const double *y, size_t n, double tol, doub
         heap_push(heap, &nh, mkcell(x, y, n, c.cx - hh, c.cy + hh, hh));
         heap_push(heap, &nh, mkcell(x, y, n, c.cx + hh, c.cy + hh, hh));
     }
-    free(heap);
+    px_free(NULL, heap);
     *px = best.cx;
     *py = best.cy;
     if (dist) *dist = best.d;

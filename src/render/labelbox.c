@@ -4,19 +4,12 @@
  * placed boxes and their leader lines.  Boxes may be rotated (line labels,
  * vertical field labels); each carries its four corners.  Contract in
  * layout.h; the box type in render.h (px_label_box). */
+#include "core/alloc.h"
 #include "render/layout.h"
 #include "render/render.h"
 #include <math.h>
 #include <stdlib.h>
 #include <string.h>
-
-static char *dup_text(const char *s)
-{
-    size_t n = strlen(s) + 1;
-    char *d = malloc(n);
-    if (d) memcpy(d, s, n);
-    return d;
-}
 
 /* A box of w along the text direction and h across it, centred on (cx, cy),
  * at `angle` degrees counter-clockwise (page y points down). */
@@ -47,7 +40,7 @@ px_label_box *px_lrec_add(px_lrec *r, px_label_box b, const char *text)
     if (!r || r->failed) return NULL;
     if (r->n == r->cap) {
         size_t cap = r->cap ? 2 * r->cap : 64;
-        px_label_box *d = realloc(r->b, cap * sizeof *d);
+        px_label_box *d = px_realloc(NULL, r->b, r->cap * sizeof *d, cap * sizeof *d);
         if (!d) {
             r->failed = 1;
             return NULL;
@@ -55,7 +48,7 @@ px_label_box *px_lrec_add(px_lrec *r, px_label_box b, const char *text)
         r->b = d;
         r->cap = cap;
     }
-    b.text = dup_text(text ? text : "");
+    b.text = px_strdup(NULL, text ? text : "");
     if (!b.text) {
         r->failed = 1;
         return NULL;
@@ -66,8 +59,8 @@ px_label_box *px_lrec_add(px_lrec *r, px_label_box b, const char *text)
 
 void px_lrec_free(px_lrec *r)
 {
-    for (size_t i = 0; i < r->n; i++) free(r->b[i].text);
-    free(r->b);
+    for (size_t i = 0; i < r->n; i++) px_free(NULL, r->b[i].text);
+    px_free(NULL, r->b);
     r->b = NULL;
     r->n = r->cap = 0;
 }

@@ -7,6 +7,7 @@
  * keeps clear of the boxes placed before it.  Draws nothing: draw.c draws
  * the recorded boxes, px_figure_layout hands them to callers.  Contract in
  * layout.h. */
+#include "core/alloc.h"
 #include "core/status.h"
 #include "render/layout.h"
 #include "render/text.h"
@@ -34,7 +35,7 @@ static int segs_init(pgeom *g)
     for (size_t i = 0; i < g->p->n_items; i++)
         if (g->p->items[i].kind == PX_ITEM_LINE) n += g->p->items[i].n - 1;
     g->nseg = 0;
-    g->sx0 = malloc((n ? n : 1) * 4 * sizeof(double));
+    g->sx0 = px_alloc(NULL, (n ? n : 1) * 4 * sizeof(double));
     if (!g->sx0) return PX_ENOMEM;
     g->sy0 = g->sx0 + n, g->sx1 = g->sy0 + n, g->sy1 = g->sx1 + n;
     for (size_t i = 0; i < g->p->n_items; i++) {
@@ -267,7 +268,7 @@ static void place_line_label(cairo_t *cr, const pgeom *g, long item, px_lrec *re
 {
     const px_item *it = &g->p->items[item];
     size_t n = it->n;
-    double *x = malloc(2 * n * sizeof *x);
+    double *x = px_alloc(NULL, 2 * n * sizeof *x);
     if (!x) {
         if (rec) rec->failed = 1;
         return;
@@ -319,7 +320,7 @@ static void place_line_label(cairo_t *cr, const pgeom *g, long item, px_lrec *re
         b.placed = 0;
         px_lrec_add(rec, b, it->text);
     }
-    free(x);
+    px_free(NULL, x);
 }
 
 
@@ -347,15 +348,15 @@ void px_labels_place(cairo_t *cr, const px_figure *f, int panel, px_rect r, size
     int st = segs_init(&g);
     size_t cap = 0;
     for (size_t i = 0; i < p->n_items; i++) cap = p->items[i].n > cap ? p->items[i].n : cap;
-    double *px = st == PX_OK ? malloc((cap ? cap : 1) * 2 * sizeof *px) : NULL;
-    char *led = px ? calloc(p->n_items ? p->n_items : 1, 1) : NULL;
-    size_t *order = led ? malloc((p->n_items ? p->n_items : 1) * sizeof *order) : NULL;
+    double *px = st == PX_OK ? px_alloc(NULL, (cap ? cap : 1) * 2 * sizeof *px) : NULL;
+    char *led = px ? px_calloc(NULL, p->n_items ? p->n_items : 1, 1) : NULL;
+    size_t *order = led ? px_alloc(NULL, (p->n_items ? p->n_items : 1) * sizeof *order) : NULL;
     if (order) {
         /* larger fields choose first */
         size_t no = 0;
         for (size_t i = 0; i < p->n_items; i++)
             if (p->items[i].kind == PX_ITEM_POLYGON && p->items[i].text) order[no++] = i;
-        double *area = malloc((no ? no : 1) * sizeof *area);
+        double *area = px_alloc(NULL, (no ? no : 1) * sizeof *area);
         if (area) {
             for (size_t k = 0; k < no; k++) {
                 const px_item *it = &p->items[order[k]];
@@ -370,7 +371,7 @@ void px_labels_place(cairo_t *cr, const px_figure *f, int panel, px_rect r, size
                     double t = area[b]; area[b] = area[b - 1]; area[b - 1] = t;
                     size_t o = order[b]; order[b] = order[b - 1]; order[b - 1] = o;
                 }
-            free(area);
+            px_free(NULL, area);
         }
         for (size_t k = 0; k < no; k++) {
             const px_item *it = &p->items[order[k]];
@@ -392,8 +393,8 @@ void px_labels_place(cairo_t *cr, const px_figure *f, int panel, px_rect r, size
     } else {
         lr->failed = 1;
     }
-    free(order);
-    free(led);
-    free(px);
-    free(g.sx0);
+    px_free(NULL, order);
+    px_free(NULL, led);
+    px_free(NULL, px);
+    px_free(NULL, g.sx0);
 }

@@ -6,6 +6,7 @@
  * <metadata>.  Each pass reads the buffer and hands a rewritten copy over
  * with px_mem_replace; PX_OK, PX_ENOMEM, PX_ELIMIT or PX_EIO, the buffer
  * unchanged on failure.  Contract in backend.h. */
+#include "core/alloc.h"
 #include "core/status.h"
 #include "render/backend.h"
 #include "render/text.h"
@@ -20,7 +21,8 @@ int px_svg_renumber(px_membuf *m)
     const size_t klen = sizeof key - 1;
     unsigned long seen[PX_SVG_MAX_SURFACES];
     size_t nseen = 0;
-    unsigned char *out = malloc(m->n + 1);
+    size_t cap = m->n + 1;
+    unsigned char *out = px_alloc(NULL, cap);
     if (!out) return PX_ENOMEM;
     size_t o = 0;
     for (size_t i = 0; i < m->n;) {
@@ -34,7 +36,7 @@ int px_svg_renumber(px_membuf *m)
             while (k < nseen && seen[k] != v) k++;
             if (k == nseen) {
                 if (nseen == PX_SVG_MAX_SURFACES) {
-                    free(out);
+                    px_free(NULL, out);
                     return PX_ELIMIT;
                 }
                 seen[nseen++] = v;
@@ -42,13 +44,14 @@ int px_svg_renumber(px_membuf *m)
             char num[32];
             int len = snprintf(num, sizeof num, "%zu", k + 1);
             size_t need = o + klen + (size_t)len + (m->n - j) + 1;
-            if (need > m->n + 1) { /* renumbering never lengthens much; grow if it does */
-                unsigned char *g = realloc(out, need + 64);
+            if (need > cap) { /* renumbering never lengthens much; grow if it does */
+                unsigned char *g = px_realloc(NULL, out, cap, need + 64);
                 if (!g) {
-                    free(out);
+                    px_free(NULL, out);
                     return PX_ENOMEM;
                 }
                 out = g;
+                cap = need + 64;
             }
             memcpy(out + o, key, klen);
             memcpy(out + o + klen, num, (size_t)len);
@@ -130,7 +133,7 @@ static int is_alpha(unsigned char c) { return (c >= 'a' && c <= 'z') || (c >= 'A
 
 int px_svg_compact(px_membuf *m, int reference)
 {
-    unsigned char *out = malloc(m->n + 1);
+    unsigned char *out = px_alloc(NULL, m->n + 1);
     if (!out) return PX_ENOMEM;
     size_t o = 0;
     for (size_t i = 0; i < m->n;) {
@@ -246,7 +249,7 @@ int px_svg_describe(px_membuf *m, const px_figure *f)
         sb_str(&b, "</metadata>");
     }
     if (b.failed) {
-        free(b.s);
+        px_free(NULL, b.s);
         return PX_ENOMEM;
     }
     /* after the '>' that closes "<svg ...": attribute values hold no '>' */
@@ -258,18 +261,18 @@ int px_svg_describe(px_membuf *m, const px_figure *f)
         }
     unsigned char *gt = root ? memchr(root, '>', m->n - (size_t)(root - m->data)) : NULL;
     if (!gt) {
-        free(b.s);
+        px_free(NULL, b.s);
         return PX_EIO;
     }
     size_t at = (size_t)(gt - m->data) + 1;
-    unsigned char *out = malloc(m->n + b.n);
+    unsigned char *out = px_alloc(NULL, m->n + b.n);
     if (!out) {
-        free(b.s);
+        px_free(NULL, b.s);
         return PX_ENOMEM;
     }
     memcpy(out, m->data, at);
     memcpy(out + at, b.s, b.n);
     memcpy(out + at + b.n, m->data + at, m->n - at);
-    free(b.s);
+    px_free(NULL, b.s);
     return px_mem_replace(m, out, m->n + b.n);
 }

@@ -3,6 +3,7 @@
  * through a small open-addressing hash table rebuilt when the array
  * changes.  A generation counter changes on every modification so caches
  * held by callers (px_thermo_ws) know when to drop what they computed. */
+#include "core/alloc.h"
 #include <ctype.h>
 #include <math.h>
 #include <stdio.h>
@@ -37,7 +38,7 @@ static char *dupstr(const char *s)
     if (!s)
         return NULL;
     size_t n = strlen(s) + 1;
-    char *d = malloc(n);
+    char *d = px_alloc(NULL, n);
     if (d)
         memcpy(d, s, n);
     return d;
@@ -45,8 +46,8 @@ static char *dupstr(const char *s)
 
 static void species_release(px_species *sp)
 {
-    free(sp->source);
-    free(sp->file);
+    px_free(NULL, sp->source);
+    px_free(NULL, sp->file);
     sp->source = sp->file = NULL;
 }
 
@@ -56,10 +57,10 @@ static int rehash(px_db *db)
     while (want < 2 * db->n + 1)
         want *= 2;
     if (want != db->hcap) {
-        long *h = malloc(want * sizeof *h);
+        long *h = px_alloc(NULL, want * sizeof *h);
         if (!h)
             return PX_ENOMEM;
-        free(db->hash);
+        px_free(NULL, db->hash);
         db->hash = h;
         db->hcap = want;
     }
@@ -89,9 +90,9 @@ static long find_canon(const px_db *db, const char *canon)
 
 px_db *px_db_new(void)
 {
-    px_db *db = calloc(1, sizeof *db);
+    px_db *db = px_calloc(NULL, 1, sizeof *db);
     if (db && rehash(db)) {
-        free(db);
+        px_free(NULL, db);
         return NULL;
     }
     return db;
@@ -103,9 +104,9 @@ void px_db_free(px_db *db)
         return;
     for (size_t i = 0; i < db->n; i++)
         species_release(&db->sp[i]);
-    free(db->sp);
-    free(db->hash);
-    free(db);
+    px_free(NULL, db->sp);
+    px_free(NULL, db->hash);
+    px_free(NULL, db);
 }
 
 unsigned long px__db_generation(const px_db *db) { return db ? db->gen : 0; }
@@ -153,7 +154,7 @@ int px_db_add(px_db *db, const px_species *sp)
     }
     if (db->n == db->cap) {
         size_t nc = db->cap ? 2 * db->cap : 32;
-        px_species *p = realloc(db->sp, nc * sizeof *p);
+        px_species *p = px_realloc(NULL, db->sp, db->cap * sizeof *p, nc * sizeof *p);
         if (!p) {
             species_release(&c);
             return PX_ENOMEM;

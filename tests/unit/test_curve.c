@@ -6,6 +6,8 @@
  * misuse; a visitor that stops; and every allocation failing in turn
  * (nothing leaks, the status is PX_ENOMEM). */
 #include "px_test.h"
+#include "support/px_alloc_fail.h"
+#include "support/px_db_fixture.h"
 #include "support/px_csv.h"
 #include "core/status.h"
 #include "data/data.h"
@@ -16,18 +18,13 @@
 
 #define NPTS 41
 
-static px_db *al_db(void)
+
+/* Built-ins, water and Al, shared by every test of the group. */
+static int setup(void **state)
 {
+    static const char *const files[] = {"HO", "Al", NULL};
     static const int zs[] = {1, 8, 13};
-    px_db *db = px_db_new();
-    assert_non_null(db);
-    assert_int_equal(px_db_add_builtins(db), PX_OK);
-    px_data_options o = px_data_options_default();
-    o.elements = zs;
-    o.n_elements = 3;
-    assert_int_equal(px_data_load_embedded(db, "HO", &o, NULL), PX_OK);
-    assert_int_equal(px_data_load_embedded(db, "Al", &o, NULL), PX_OK);
-    return db;
+    return px_db_fixture_new(state, px_test_db(files, zs, sizeof zs / sizeof zs[0]));
 }
 
 /* Al at 1e-9 mol/kg (no solid), ideal activities: textbook distribution
@@ -84,9 +81,9 @@ static int record(void *ud, const px_curve_point *p)
 
 static void test_fraction_curve(void **state)
 {
-    (void)state;
-    px_db *db = al_db();
-    px_thermo_ws *ws = px_thermo_ws_new(PX_DIELECTRIC_R8_97);
+    const px_db_fixture *fx = *state;
+    px_db *db = fx->db;
+    px_thermo_ws *ws = fx->ws;
     px_spec_options o = al_options();
     double x[NPTS];
     for (int i = 0; i < NPTS; i++) x[i] = 3.0 + 4.0 * i / (NPTS - 1);
@@ -117,8 +114,6 @@ static void test_fraction_curve(void **state)
         assert_true(share_of(s, db, "Al^3+") == v.a[i] && share_of(s, db, "AlOH^2+") == v.b[i]);
         px_spec_free(s);
     }
-    px_thermo_ws_free(ws);
-    px_db_free(db);
 }
 
 /* Every try fails (1 mol/kg of Al with its solids, one iteration allowed:
@@ -127,9 +122,9 @@ static void test_fraction_curve(void **state)
  * phlox.diagrams.solubility documents. */
 static void test_retry_policy(void **state)
 {
-    (void)state;
-    px_db *db = al_db();
-    px_thermo_ws *ws = px_thermo_ws_new(PX_DIELECTRIC_R8_97);
+    const px_db_fixture *fx = *state;
+    px_db *db = fx->db;
+    px_thermo_ws *ws = fx->ws;
     px_spec_options o = al_options();
     o.total[0] = 1;
     o.solids = 1;
@@ -156,15 +151,13 @@ static void test_retry_policy(void **state)
     assert_int_equal(px_curve_run(ws, db, &o, &c, record, &v, &retried, msg, sizeof msg), PX_OK);
     assert_int_equal(retried, 0);
     for (int i = 0; i < 3; i++) assert_true(v.status[i] == PX_OK && v.total[i] == 1);
-    px_thermo_ws_free(ws);
-    px_db_free(db);
 }
 
 static void test_misuse_and_stop(void **state)
 {
-    (void)state;
-    px_db *db = al_db();
-    px_thermo_ws *ws = px_thermo_ws_new(PX_DIELECTRIC_R8_97);
+    const px_db_fixture *fx = *state;
+    px_db *db = fx->db;
+    px_thermo_ws *ws = fx->ws;
     px_spec_options o = al_options();
     double x[3] = {4, 5, 6};
     char msg[256];
@@ -193,44 +186,21 @@ static void test_misuse_and_stop(void **state)
     assert_int_equal(px_curve_run(ws, db, &o, &c, record, &v, NULL, msg, sizeof msg), PX_ENOTFOUND);
     assert_non_null(strstr(msg, "Fe^2+"));
     assert_int_equal(v.n, 0);
-    px_thermo_ws_free(ws);
-    px_db_free(db);
 }
 
 /* --- allocation failures -------------------------------------------------- */
 
-typedef struct failing {
-    long countdown; /* fail when it reaches 0 */
-    long live;
-} failing;
-
-static void *fa_alloc(void *ud, size_t n)
-{
-    failing *f = ud;
-    if (f->countdown-- == 0) return NULL;
-    void *p = malloc(n);
-    if (p) f->live++;
-    return p;
-}
-
-static void fa_release(void *ud, void *p)
-{
-    failing *f = ud;
-    f->live--;
-    free(p);
-}
-
 static void test_alloc_failure(void **state)
 {
-    (void)state;
-    px_db *db = al_db();
-    px_thermo_ws *ws = px_thermo_ws_new(PX_DIELECTRIC_R8_97);
+    const px_db_fixture *fx = *state;
+    px_db *db = fx->db;
+    px_thermo_ws *ws = fx->ws;
     double x[2] = {4, 6};
     px_curve c = {PX_CURVE_PH, NULL, x, 2, "Al", 1, 0.1};
     int succeeded = 0;
     for (long nth = 0; nth < 400 && !succeeded; nth++) {
-        failing f = {nth, 0};
-        px_allocator al = {fa_alloc, fa_release, &f};
+        px_alloc_fail f;
+        px_allocator al = px_alloc_fail_init(&f, nth);
         px_spec_options o = al_options();
         o.alloc = &al;
         seen v = {db, 0, 0, {0}, {0}, {0}, {0}, {0}};
@@ -238,14 +208,13 @@ static void test_alloc_failure(void **state)
         int st = px_curve_run(ws, db, &o, &c, record, &v, NULL, msg, sizeof msg);
         assert_true(st == PX_OK || st == PX_ENOMEM);
         assert_int_equal(f.live, 0); /* every allocation released */
-        if (st == PX_OK) {
+        if (st == PX_OK) { /* only when no allocation failed: a failure is never swallowed */
+            assert_true(f.countdown >= 0);
             assert_int_equal(v.n, 2);
-            succeeded = f.countdown >= 0; /* no allocation failed on the way */
+            succeeded = 1;
         }
     }
     assert_true(succeeded);
-    px_thermo_ws_free(ws);
-    px_db_free(db);
 }
 
 int main(void)
@@ -256,5 +225,5 @@ int main(void)
         cmocka_unit_test(test_misuse_and_stop),
         cmocka_unit_test(test_alloc_failure),
     };
-    return cmocka_run_group_tests(tests, NULL, NULL);
+    return cmocka_run_group_tests(tests, setup, px_db_fixture_free);
 }
