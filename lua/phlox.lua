@@ -817,7 +817,9 @@ local CURVE_VARY = { pH = function(x) return { pH = x } end,
 -- (any value).  curve: var ("pH", "log_total" or "log_a"), name (the
 -- element or fixed species varied), x (the values), element (every
 -- point's result must hold it), retries and retry_factor (a failing point
--- is tried again with the element's total times retry_factor).  Returns a
+-- is tried again with the element's total times retry_factor), warm (true:
+-- each point starts from the last one's solution; fewer iterations, the
+-- same results to the solver's tolerance but not to the bit).  Returns a
 -- list, one entry per x: r (as phlox.speciate, without provenance) or err
 -- (the message), each with total (the element's total after the last try)
 -- and retries; and the number of failing tries.

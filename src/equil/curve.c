@@ -24,6 +24,54 @@ static int holds_element(const px_spec *s, int z)
     return 0;
 }
 
+/* The cold path of a point: built anew, retried with less of the element.
+ * Returns a build failure's status (the sweep stops), else PX_OK with
+ * p->status, p->retries, p->total and *out (the solved system or NULL). */
+static int solve_point(px_thermo_ws *ws, const px_db *db, px_spec_options *o, const px_curve *c, int el,
+                       int var, int z, double total, px_spec **out, px_curve_point *p, size_t *failed,
+                       char *detail, size_t dlen, char *msg, size_t msglen)
+{
+    double put = total;
+    px_spec *s = NULL;
+    for (int t = 0; t <= c->retries; t++) {
+        if (var != el || c->var != PX_CURVE_LOG_TOTAL) o->total[el] = put;
+        else put = o->total[el]; /* the varied total is the element's own */
+        int st = px_spec_build(ws, db, o, &s, msg, msglen);
+        if (st != PX_OK) return st;
+        st = px_spec_solve(s, &o->solver, detail, dlen);
+        if (st == PX_OK && !holds_element(s, z)) {
+            st = PX_ENOTFOUND;
+            detail[0] = '\0';
+        }
+        p->status = st;
+        if (st == PX_OK) break;
+        px_spec_free(s);
+        s = NULL;
+        put *= c->retry_factor;
+        p->retries++;
+        (*failed)++;
+    }
+    p->total = put;
+    *out = s;
+    return PX_OK;
+}
+
+/* The warm path: the last point's system with the varied constraint set
+ * to x, solved from its last solution. */
+static int warm_step(px_spec *s, const px_db *db, const px_curve *c, int var, const px_spec_options *o,
+                     double x, char *detail, size_t dlen, int z)
+{
+    int st = c->var == PX_CURVE_PH          ? px_spec_set_pH(s, x)
+             : c->var == PX_CURVE_LOG_TOTAL ? px_spec_set_total(s, (size_t)var, pow(10.0, x))
+                                            : px_spec_set_fixed(s, db, c->name, x);
+    if (st != PX_OK) return st;
+    px_equil_options wo = o->solver;
+    wo.warm = 1;
+    st = px_spec_solve(s, &wo, detail, dlen);
+    if (st == PX_OK && !holds_element(s, z)) st = PX_ENOTFOUND;
+    return st;
+}
+
 int px_curve_run(px_thermo_ws *ws, const px_db *db, const px_spec_options *base, const px_curve *c,
                  px_curve_visit visit, void *ud, size_t *retries, char *msg, size_t msglen)
 {
@@ -50,45 +98,38 @@ int px_curve_run(px_thermo_ws *ws, const px_db *db, const px_spec_options *base,
     const double total = base->total[el];
     size_t failed = 0;
     char detail[512];
+    px_spec *prev = NULL; /* warm: the last point's solved system, at the given total */
     for (size_t i = 0; i < c->n; i++) {
         double x = c->x[i];
         if (c->var == PX_CURVE_PH) o.pH = x;
         else if (c->var == PX_CURVE_LOG_TOTAL) o.total[var] = pow(10.0, x);
         else o.fixed_log_a[var] = x;
         px_curve_point p = {i, x, total, 0, PX_OK, NULL, ""};
-        double put = total;
         px_spec *s = NULL;
-        for (int t = 0; t <= c->retries; t++) {
-            if (var != el || c->var != PX_CURVE_LOG_TOTAL) o.total[el] = put;
-            else put = o.total[el]; /* the varied total is the element's own */
-            int st = px_spec_build(ws, db, &o, &s, msg, msglen);
+        if (prev && warm_step(prev, db, c, var, &o, x, detail, sizeof detail, z) == PX_OK) {
+            s = prev; /* solved from the last point */
+            prev = NULL;
+        } else {
+            px_spec_free(prev);
+            prev = NULL;
+            int st = solve_point(ws, db, &o, c, el, var, z, total, &s, &p, &failed, detail, sizeof detail, msg, msglen);
             if (st != PX_OK) {
                 if (retries) *retries = failed;
                 return st;
             }
-            st = px_spec_solve(s, &o.solver, detail, sizeof detail);
-            if (st == PX_OK && !holds_element(s, z)) {
-                st = PX_ENOTFOUND;
-                detail[0] = '\0';
-            }
-            p.status = st;
-            if (st == PX_OK) break;
-            px_spec_free(s);
-            s = NULL;
-            put *= c->retry_factor;
-            p.retries++;
-            failed++;
         }
-        p.total = put;
         p.spec = s;
         p.message = p.status == PX_OK ? "" : detail;
         int vst = visit(ud, &p);
-        px_spec_free(s);
+        if (c->warm && p.status == PX_OK && p.retries == 0) prev = s;
+        else px_spec_free(s);
         if (vst != 0) {
+            px_spec_free(prev);
             if (retries) *retries = failed;
             return vst;
         }
     }
+    px_spec_free(prev);
     if (retries) *retries = failed;
     return PX_OK;
 }

@@ -3,10 +3,10 @@
  *
  * A curve varies one option of a px_spec_options along a list of values:
  * the fixed pH, the log10 total of one element, or the log10 fixed activity
- * of one basis species.  Each point is built and solved anew from the
- * options (a cold start: a point's result does not depend on the points
- * before it, so a curve and a single speciation at that x agree to the
- * bit).  A point whose solve fails (or whose result lacks the curve's
+ * of one basis species.  By default each point is built and solved anew
+ * from the options (a cold start: a point's result does not depend on the
+ * points before it, so a curve and a single speciation at that x agree to
+ * the bit); with `warm` a point starts from the last one's solution.  A point whose solve fails (or whose result lacks the curve's
  * element) is retried, when asked, with the element's total multiplied by
  * retry_factor, up to `retries` times: the dissolved total over a solid
  * does not depend on how much solid there is, so less of it is as good an
@@ -37,6 +37,10 @@ typedef struct px_curve {
     const char *element;  /* the element each point's result must hold (one of the totals) */
     int retries;          /* further tries of a failing point (0: none) */
     double retry_factor;  /* the element's total is multiplied by this before each retry */
+    int warm;             /* 1: each point starts from the last point's solution (the same
+                           * system, one constraint changed; a failure falls back to the
+                           * cold build and its retries): fewer iterations, results equal
+                           * to the solver's tolerance but not to the bit */
 } px_curve;
 
 typedef struct px_curve_point {

@@ -398,6 +398,33 @@ fail:
     return st;
 }
 
+int px_spec_set_pH(px_spec *s, double pH)
+{
+    px_equil_component_result c;
+    if (!s || px_equil_work_get_component(s->work, PX_SPEC_BASIS_H, &c) != PX_OK || c.kind != PX_EQUIL_C_ACTIVITY)
+        return PX_EINVAL;
+    return px_equil_system_set_ph(s->sys, PX_SPEC_BASIS_H, pH);
+}
+
+int px_spec_set_total(px_spec *s, size_t k, double total)
+{
+    if (!s || k >= px_spec_n_elements(s)) return PX_EINVAL;
+    return px_equil_system_set_total(s->sys, PX_SPEC_BASIS_ELEMENTS + k, total);
+}
+
+int px_spec_set_fixed(px_spec *s, const px_db *db, const char *species, double log_a)
+{
+    long d = s && db && species ? px_db_index(db, species) : -1;
+    px_equil_component_result c;
+    for (size_t i = PX_SPEC_BASIS_ELEMENTS; d >= 0 && i < s->n_basis; i++)
+        if (s->db_index[i] == d) {
+            if (px_equil_work_get_component(s->work, i, &c) != PX_OK || c.kind != PX_EQUIL_C_ACTIVITY)
+                return PX_EINVAL;
+            return px_equil_system_set_log_activity(s->sys, i, log_a);
+        }
+    return PX_EINVAL;
+}
+
 /* Continuation in the totals: solve with every element total scaled down
  * (where cold starts are easy), then raise them in steps, each solve warm
  * from the last.  A standard homotopy for stiff equilibrium problems (e.g.

@@ -313,7 +313,7 @@ static int l_speciate(lua_State *L)
 /* core.curve(db, opts, curve): the curve driver (src/equil/curve.h) over
  * the options of core.speciate.  curve = { var = "pH" | "log_total" |
  * "log_a", name = element or species varied, x = {...}, element = symbol,
- * retries = 0, retry_factor = 0.1 }.  Returns a list with one entry per x:
+ * retries = 0, retry_factor = 0.1, warm = false }.  Returns a list with one entry per x:
  * { r = <core.speciate's result> } or { err = message }, each with `total`
  * (the element's total after the last try) and `retries`; then the
  * failing tries of all points. */
@@ -324,6 +324,7 @@ static const px_lua_opt curve_opts[] = {
     {"element", "string", 0, 0},
     {"retries", "integer", 0, CURVE_RETRIES_MAX},
     {"retry_factor", "number", 0, 1},
+    {"warm", "boolean", 0, 0},
     {NULL, NULL, 0, 0}};
 
 typedef struct curve_ud {
@@ -393,7 +394,9 @@ static int l_curve(lua_State *L)
     c.retries = (int)luaL_optinteger(L, -1, 0);
     lua_getfield(L, 3, "retry_factor");
     c.retry_factor = luaL_optnumber(L, -1, 1);
-    lua_pop(L, 5);
+    lua_getfield(L, 3, "warm");
+    c.warm = lua_toboolean(L, -1);
+    lua_pop(L, 6);
     lua_getfield(L, 3, "x");
     size_t n = lua_istable(L, -1) ? lua_rawlen(L, -1) : 0;
     double *x = lua_newuserdatauv(L, (n ? n : 1) * sizeof *x, 0); /* freed by the collector */

@@ -58,6 +58,7 @@ typedef struct seen {
     double a[NPTS], b[NPTS]; /* shares of Al^3+ and AlOH^2+ */
     int status[NPTS], retries[NPTS];
     double total[NPTS];
+    size_t iterations; /* Newton iterations of all points */
 } seen;
 
 static int record(void *ud, const px_curve_point *p)
@@ -69,6 +70,9 @@ static int record(void *ud, const px_curve_point *p)
     v->total[p->i] = p->total;
     if (p->status == PX_OK) {
         assert_non_null(p->spec);
+        px_equil_stats stats;
+        px_equil_work_get_stats(p->spec->work, &stats);
+        v->iterations += stats.iterations;
         v->a[p->i] = share_of(p->spec, v->db, "Al^3+");
         v->b[p->i] = share_of(p->spec, v->db, "AlOH^2+");
     } else {
@@ -87,8 +91,8 @@ static void test_fraction_curve(void **state)
     px_spec_options o = al_options();
     double x[NPTS];
     for (int i = 0; i < NPTS; i++) x[i] = 3.0 + 4.0 * i / (NPTS - 1);
-    px_curve c = {PX_CURVE_PH, NULL, x, NPTS, "Al", 0, 1};
-    seen v = {db, 0, 0, {0}, {0}, {0}, {0}, {0}};
+    px_curve c = {PX_CURVE_PH, NULL, x, NPTS, "Al", 0, 1, 0};
+    seen v = {db, 0, 0, {0}, {0}, {0}, {0}, {0}, 0};
     size_t retried = 99;
     char msg[256];
     assert_int_equal(px_curve_run(ws, db, &o, &c, record, &v, &retried, msg, sizeof msg), PX_OK);
@@ -116,6 +120,37 @@ static void test_fraction_curve(void **state)
     }
 }
 
+/* Warm starts, where they pay (1e-3 mol/kg Al with its solids, Davies
+ * activities: each cold start searches the solid's active set again): the
+ * same shares to the solver's tolerance (relative 1e-12 on balances,
+ * px_equil_options_default; 1e-8 allowed on a share), fewer Newton
+ * iterations than cold starts. */
+static void test_warm_start(void **state)
+{
+    const px_db_fixture *fx = *state;
+    px_db *db = fx->db;
+    px_thermo_ws *ws = fx->ws;
+    px_spec_options o = al_options();
+    o.total[0] = 1e-3;
+    o.solids = 1;
+    o.model = PX_EQUIL_DAVIES;
+    double x[NPTS];
+    for (int i = 0; i < NPTS; i++) x[i] = 3.0 + 4.0 * i / (NPTS - 1);
+    px_curve c = {PX_CURVE_PH, NULL, x, NPTS, "Al", 0, 1, 0};
+    seen cold = {db, 0, 0, {0}, {0}, {0}, {0}, {0}, 0}, warm = cold;
+    char msg[256];
+    assert_int_equal(px_curve_run(ws, db, &o, &c, record, &cold, NULL, msg, sizeof msg), PX_OK);
+    c.warm = 1;
+    assert_int_equal(px_curve_run(ws, db, &o, &c, record, &warm, NULL, msg, sizeof msg), PX_OK);
+    assert_int_equal(warm.n, NPTS);
+    for (int i = 0; i < NPTS; i++) {
+        assert_int_equal(warm.status[i], PX_OK);
+        assert_close(warm.a[i], cold.a[i], 1e-8, 1e-15);
+        assert_close(warm.b[i], cold.b[i], 1e-8, 1e-15);
+    }
+    assert_true(warm.iterations < cold.iterations);
+}
+
 /* Every try fails (1 mol/kg of Al with its solids, one iteration allowed:
  * not enough from a cold start): each point is tried 1 + retries times,
  * the total multiplied by the factor after each failure, as
@@ -130,8 +165,8 @@ static void test_retry_policy(void **state)
     o.solids = 1;
     o.solver.max_iter = 1;
     double x[3] = {4, 5, 6};
-    px_curve c = {PX_CURVE_PH, NULL, x, 3, "Al", 3, 0.1};
-    seen v = {db, 0, 0, {0}, {0}, {0}, {0}, {0}};
+    px_curve c = {PX_CURVE_PH, NULL, x, 3, "Al", 3, 0.1, 0};
+    seen v = {db, 0, 0, {0}, {0}, {0}, {0}, {0}, 0};
     size_t retried = 0;
     char msg[256];
     assert_int_equal(px_curve_run(ws, db, &o, &c, record, &v, &retried, msg, sizeof msg), PX_OK);
@@ -161,8 +196,8 @@ static void test_misuse_and_stop(void **state)
     px_spec_options o = al_options();
     double x[3] = {4, 5, 6};
     char msg[256];
-    seen v = {db, 0, 0, {0}, {0}, {0}, {0}, {0}};
-    px_curve c = {PX_CURVE_PH, NULL, x, 3, "Fe", 0, 1};
+    seen v = {db, 0, 0, {0}, {0}, {0}, {0}, {0}, 0};
+    px_curve c = {PX_CURVE_PH, NULL, x, 3, "Fe", 0, 1, 0};
     assert_int_equal(px_curve_run(ws, db, &o, &c, record, &v, NULL, msg, sizeof msg), PX_EINVAL);
     assert_non_null(strstr(msg, "Fe"));
     c.element = "Al";
@@ -196,14 +231,14 @@ static void test_alloc_failure(void **state)
     px_db *db = fx->db;
     px_thermo_ws *ws = fx->ws;
     double x[2] = {4, 6};
-    px_curve c = {PX_CURVE_PH, NULL, x, 2, "Al", 1, 0.1};
+    px_curve c = {PX_CURVE_PH, NULL, x, 2, "Al", 1, 0.1, 1}; /* warm: the kept system is freed too */
     int succeeded = 0;
     for (long nth = 0; nth < 400 && !succeeded; nth++) {
         px_alloc_fail f;
         px_allocator al = px_alloc_fail_init(&f, nth);
         px_spec_options o = al_options();
         o.alloc = &al;
-        seen v = {db, 0, 0, {0}, {0}, {0}, {0}, {0}};
+        seen v = {db, 0, 0, {0}, {0}, {0}, {0}, {0}, 0};
         char msg[256];
         int st = px_curve_run(ws, db, &o, &c, record, &v, NULL, msg, sizeof msg);
         assert_true(st == PX_OK || st == PX_ENOMEM);
@@ -221,6 +256,7 @@ int main(void)
 {
     const struct CMUnitTest tests[] = {
         cmocka_unit_test(test_fraction_curve),
+        cmocka_unit_test(test_warm_start),
         cmocka_unit_test(test_retry_policy),
         cmocka_unit_test(test_misuse_and_stop),
         cmocka_unit_test(test_alloc_failure),
