@@ -451,39 +451,38 @@ end
 -- activity of a saturated salt solution (common practice, no source).
 local LOGA_RANGE = { -4, 1 }
 
+local LIGAND_E_OPTS = spec("diagrams.ligand_E", "phlox.map", map_keys { axes = true }, {})
+local PH_LIGAND_OPTS = spec("diagrams.pH_ligand", "phlox.map", map_keys { axes = true }, {})
+
+-- A predominance map with log a(ligand) on an axis (diagrams.ligand_E and
+-- diagrams.pH_ligand): `fixed` is the option held fixed (pH or E), stored
+-- in the map's conditions as `cond`; `missing` says it is needed.
+local function ligand_map(where, opts_spec, opts, axes, fixed, cond, missing)
+  core.options(where, opts_spec, opts)
+  library_of(opts, where)
+  if type(opts.ligand) ~= "string" then fail(where, "ligand (an element symbol) expected") end
+  if type(opts[fixed]) ~= "number" then fail(where, missing) end
+  local o = copy(opts)
+  o.loga_range = o.loga_range or LOGA_RANGE
+  o.axes = axes
+  local m = phlox.map(o)
+  m.conditions[cond] = opts[fixed]
+  m.conditions.ligand_activity = nil -- it is an axis
+  return m
+end
+
 --- Predominance map on E (y) against log a(ligand) (x) at a fixed pH.
 --   diagrams.ligand_E { library = lib, element = "Zn", ligand = "Cl", pH = 5,
 --                       loga_range = {-4, 1}, E_range = {-1.5, 1.5}, ... }
-local LIGAND_E_OPTS = spec("diagrams.ligand_E", "phlox.map", map_keys { axes = true }, {})
 function diagrams.ligand_E(opts)
-  core.options("diagrams.ligand_E", LIGAND_E_OPTS, opts)
-  library_of(opts, "diagrams.ligand_E")
-  if type(opts.ligand) ~= "string" then fail("diagrams.ligand_E", "ligand (an element symbol) expected") end
-  if type(opts.pH) ~= "number" then fail("diagrams.ligand_E", "a fixed pH is needed") end
-  local o = copy(opts)
-  o.loga_range = o.loga_range or LOGA_RANGE
-  o.axes = { "loga", "E" }
-  local m = phlox.map(o)
-  m.conditions.pH = opts.pH
-  m.conditions.ligand_activity = nil -- it is the x axis
-  return m
+  return ligand_map("diagrams.ligand_E", LIGAND_E_OPTS, opts, { "loga", "E" }, "pH", "pH", "a fixed pH is needed")
 end
 
 --- Predominance map on log a(ligand) (y) against pH (x) at a fixed E (V vs SHE).
 --   diagrams.pH_ligand { library = lib, element = "Zn", ligand = "Cl", E = -0.5, ... }
-local PH_LIGAND_OPTS = spec("diagrams.pH_ligand", "phlox.map", map_keys { axes = true }, {})
 function diagrams.pH_ligand(opts)
-  core.options("diagrams.pH_ligand", PH_LIGAND_OPTS, opts)
-  library_of(opts, "diagrams.pH_ligand")
-  if type(opts.ligand) ~= "string" then fail("diagrams.pH_ligand", "ligand (an element symbol) expected") end
-  if type(opts.E) ~= "number" then fail("diagrams.pH_ligand", "a fixed E (V vs SHE) is needed") end
-  local o = copy(opts)
-  o.loga_range = o.loga_range or LOGA_RANGE
-  o.axes = { "pH", "loga" }
-  local m = phlox.map(o)
-  m.conditions.E_V = opts.E
-  m.conditions.ligand_activity = nil -- it is the y axis
-  return m
+  return ligand_map("diagrams.pH_ligand", PH_LIGAND_OPTS, opts, { "pH", "loga" }, "E", "E_V",
+                    "a fixed E (V vs SHE) is needed")
 end
 
 -- Short names of the electrodes (phlox.electrode_names).

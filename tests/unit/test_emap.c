@@ -21,15 +21,23 @@ static int setup(void **state)
     return px_db_fixture_new(state, px_test_db(files, zs, sizeof zs / sizeof zs[0]));
 }
 
+/* The zinc map with options o. */
+static px_emap *zinc_map(const px_db_fixture *fx, const px_emap_options *o)
+{
+    px_emap *m = NULL;
+    char msg[256];
+    assert_int_equal(px_emap_build(fx->ws, fx->db, "Zn", o, &m, msg, sizeof msg), PX_OK);
+    return m;
+}
+
 static void test_zinc_map(void **state)
 {
     const px_db_fixture *fx = *state;
     px_db *db = fx->db;
     px_thermo_ws *ws = fx->ws;
     px_emap_options o = px_emap_options_default();
-    px_emap *m;
+    px_emap *m = zinc_map(fx, &o);
     char msg[256];
-    assert_int_equal(px_emap_build(ws, db, "Zn", &o, &m, msg, sizeof msg), PX_OK);
 
     px_reaction r;
     px_reaction_result rr;
@@ -72,19 +80,16 @@ static void test_zinc_map(void **state)
 static void test_alloc_failure(void **state)
 {
     const px_db_fixture *fx = *state;
-    px_db *db = fx->db;
-    px_thermo_ws *ws = fx->ws;
     px_emap_options o = px_emap_options_default();
-    px_emap *ref;
-    char msg[256];
-    assert_int_equal(px_emap_build(ws, db, "Zn", &o, &ref, msg, sizeof msg), PX_OK);
+    px_emap *ref = zinc_map(fx, &o);
     int done = 0;
     for (long nth = 0; nth < 5000 && !done; nth++) {
         px_alloc_fail f;
         px_allocator al = px_alloc_fail_init(&f, nth);
         o.alloc = &al;
         px_emap *m = NULL;
-        int st = px_emap_build(ws, db, "Zn", &o, &m, msg, sizeof msg);
+        char msg[256];
+        int st = px_emap_build(fx->ws, fx->db, "Zn", &o, &m, msg, sizeof msg);
         if (st == PX_OK) { /* only when no allocation failed: a failure is never swallowed */
             assert_true(f.countdown >= 0);
             done = 1;
