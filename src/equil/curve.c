@@ -1,5 +1,6 @@
 /* curve.c - the curve driver of curve.h: one speciation per point along x,
- * each built anew, failing points retried with a smaller total of the
+ * each built anew (or, warm, the last point's system with the varied
+ * constraint changed), failing points retried with a smaller total of the
  * curve's element.  Never prints; see curve.h for the contract. */
 #include "equil/curve.h"
 #include "core/status.h"
