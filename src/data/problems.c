@@ -17,14 +17,7 @@ struct px_data_problems {
     size_t n, cap;
 };
 
-char *pxd_strdup(const char *s)
-{
-    if (!s) s = "";
-    size_t n = strlen(s) + 1;
-    char *d = px_alloc(NULL, n);
-    if (d) memcpy(d, s, n);
-    return d;
-}
+char *pxd_strdup(const char *s) { return px_strdup(NULL, s ? s : ""); }
 
 px_data_problems *px_data_problems_new(void)
 {
