@@ -5,6 +5,7 @@
  * vertical field labels); each carries its four corners.  Contract in
  * layout.h; the box type in render.h (px_label_box). */
 #include "core/alloc.h"
+#include "geom/geom.h"
 #include "render/layout.h"
 #include "render/render.h"
 #include <math.h>
@@ -142,5 +143,5 @@ int px_seg_hits_box(const px_label_box *b, double x0, double y0, double x1, doub
         if (px_seg_seg_cross(x0, y0, x1, y1, b->qx[k], b->qy[k], b->qx[(k + 1) % 4],
                           b->qy[(k + 1) % 4]))
             return 1;
-    return px_polygon_contains(b->qx, b->qy, 4, x0, y0);
+    return px_geom_polygon_contains(b->qx, b->qy, 4, x0, y0);
 }

@@ -527,7 +527,7 @@ static void test_alloc_failure(void **state)
     int succeeded = 0;
     for (long nth = 0; nth < 200 && !succeeded; nth++) {
         px_alloc_fail f;
-        px_allocator al = px_alloc_fail_init(&f, nth);
+        px_allocator al = px_alloc_fail_make(&f, nth);
         px_equil_system *s = NULL;
         px_equil_work *w = NULL;
         int st = px_equil_system_create(&s, 3, 5, &al);
