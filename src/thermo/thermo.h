@@ -116,7 +116,8 @@ int px_db_check_list(const px_db *db, const char *what, const char *const *list,
 int px_db_add_builtins(px_db *db);
 
 /* Where sp's temperature dependence comes from, derived from its fields:
- * LOGK with dH or logK_T: measured; LOGK with an isocoulombic estimate:
+ * LOGK with dH or logK_T: measured, unless its dCp is a Criss-Cobble
+ * estimate (estimated); LOGK with an isocoulombic estimate:
  * estimated (with or without a model reaction, logk.model); other
  * LOGK: held at 25 C; HKF with estimated = 1: estimated (SH88
  * correlations); CP with every Cp coefficient 0: no Cp; else measured.
@@ -125,6 +126,7 @@ int px_db_add_builtins(px_db *db);
 #define PX_METHOD_ISOCOULOMBIC "isocoulombic (Gu et al. 1994)"
 #define PX_METHOD_HKF_SH88 "HKF correlations (Shock and Helgeson 1988)"
 #define PX_METHOD_KOPP "Kopp-Neumann additivity (Kopp 1865)"
+#define PX_METHOD_CRISS_COBBLE "Criss-Cobble correspondence (Criss and Cobble 1964)"
 px_tbasis px_species_tbasis(const px_species *sp, const char **method);
 /* "measured", "estimated", "held", "no Cp". */
 const char *px_tbasis_name(px_tbasis b);

@@ -131,14 +131,24 @@ return {
       G = -100.4, H = -100.0, S = 60.29, cp = { a = 50.54 }, V = 18.20,
       T_range = { 273.15, 411 },
       source = NBS .. " (FeS cr); V " .. RH95, quality = "medium",
-      note = "stoichiometric pyrrhotite; lambda transition at 411 K; Cp held at its 25 C value",
+      note = "Troilite is the stoichiometric end member of the pyrrhotite group (Fe(1-x)S, x = 0 to 0.125); " ..
+             "the library's pyrrhotite, and the iron sulfide of a sour-corrosion map above pH about 6 at 25 C " ..
+             "(1e-3 sulfide). Non-stoichiometric pyrrhotite (Fe7S8) has no record: no data recalled. " ..
+             "Lambda transition at 411 K not modelled; Cp held at its 25 C value (NBS 50.54 J/(mol K))",
     },
     {
       formula = "FeS(s,mackinawite)", model = "logk",
-      reaction = "FeS(s,mackinawite) + H^+ = Fe^2+ + HS^-", logK = -3.5, estimate = "isocoulombic",
-      source = "from memory of Rickard 2006 (Geochim. Cosmochim. Acta 70:5779), log K*sp = -3.5 +- 0.25",
+      reaction = "FeS(s,mackinawite) + 2 H^+ = Fe^2+ + H2S(aq)", logK_T = { -6.347, 0, 2848.779 },
+      source = "Benning, Wilkin and Barnes 2000 (Chem. Geol. 167, 25; authors, journal and volume as recalled; " ..
+               "abstract read): log K = 2848.779/T - 6.347 (T in K), fitted to measured mackinawite solubility " ..
+               "from 25 to 95 C (3.1 at 25 C, 1.2 at 95 C)",
       quality = "medium",
-      note = "first iron sulfide to form in sour corrosion; literature -2.95 (Davison 1991) to -3.6; dH not recalled",
+      note = "The first iron sulfide to form in sour corrosion and in sediments (metastable against troilite/pyrrhotite " ..
+             "and pyrite). The fit gives log K = 3.21 at 25 C and dH = -54.5 kJ/mol (constant: dCp = 0 over 25-95 C; " ..
+             "used beyond 95 C as a van 't Hoff extrapolation). Rickard 2006 (Geochim. Cosmochim. Acta 70, 5779) gives " ..
+             "3.5 +- 0.25 at 25 C (recalled); disordered (nanoparticulate) mackinawite is more soluble, 4.87 +- 0.27 " ..
+             "(Wolthers, Charlet and Rickard 2005, abstract read). The previous record was Rickard's constant written " ..
+             "with HS^- (-3.5) and the isocoulombic estimate. Checks: docs/data-checks.md",
     },
     {
       formula = "FeS2(s,pyrite)", model = "cp",
@@ -248,6 +258,21 @@ return {
       source = COMPILED, quality = "low", note = "dH not recalled; Smith and Martell list about 2.3" },
     { formula = "AgSO4^-", model = "logk", reaction = "Ag^+ + SO4^2- = AgSO4^-", logK = 1.29, dH = 1.49, units = KCAL,
       source = COMPILED, quality = "low" },
+
+    -- ---------------------------------------------------------------- bisulfide complexes (I = 0, 25 C)
+    {
+      formula = "FeHS^+", model = "logk",
+      reaction = "Fe^2+ + HS^- = FeHS^+", logK = 5.07, estimate = "isocoulombic",
+      source = "from memory of Luther, Rickard, Theberge and Olroyd 1996 (Environ. Sci. Technol. 30, 671; the " ..
+               "abstract, read, names the FeSH+ and Fe2(SH)3+ complexes but its constants were not in the excerpt): " ..
+               "thermodynamic constant (I = 0) log K = 5.07 +- 0.09, as recalled",
+      quality = "low",
+      note = "The iron(II) bisulfide complex of sour and anoxic waters (written FeSH+ in the voltammetric literature). " ..
+             "Luther's earlier seawater work gives log K = 5.5 (NSF award OCE-9314349 abstract, read; a constant in " ..
+             "seawater, not I = 0). dH not known: isocoulombic estimate (Fe^2+ + HS^- + H2O = FeHS^+ + H^+ + OH^-). " ..
+             "Fe2(HS)^3+ (log K about 10-11) is left out: it matters only at Fe(II) well above 1e-6. Checks: " ..
+             "docs/data-checks.md",
+    },
 
     -- ---------------------------------------------------------------- sulfate salts
     {
