@@ -138,17 +138,21 @@ return {
     },
     {
       formula = "FeS(s,mackinawite)", model = "logk",
-      reaction = "FeS(s,mackinawite) + 2 H^+ = Fe^2+ + H2S(aq)", logK_T = { -6.347, 0, 2848.779 },
-      source = "Benning, Wilkin and Barnes 2000 (Chem. Geol. 167, 25; authors, journal and volume as recalled; " ..
-               "abstract read): log K = 2848.779/T - 6.347 (T in K), fitted to measured mackinawite solubility " ..
-               "from 25 to 95 C (3.1 at 25 C, 1.2 at 95 C)",
+      reaction = "FeS(s,mackinawite) + 2 H^+ = Fe^2+ + H2S(aq)", logK = 3.5, estimate = "isocoulombic",
+      source = "from memory of Rickard 2006 (Geochim. Cosmochim. Acta 70:5779), log K*sp = 3.5 +- 0.25 " ..
+               "for FeS(m) + 2 H+ = Fe2+ + H2S(aq)",
       quality = "medium",
-      note = "The first iron sulfide to form in sour corrosion and in sediments (metastable against troilite/pyrrhotite " ..
-             "and pyrite). The fit gives log K = 3.21 at 25 C and dH = -54.5 kJ/mol (constant: dCp = 0 over 25-95 C; " ..
-             "used beyond 95 C as a van 't Hoff extrapolation). Rickard 2006 (Geochim. Cosmochim. Acta 70, 5779) gives " ..
-             "3.5 +- 0.25 at 25 C (recalled); disordered (nanoparticulate) mackinawite is more soluble, 4.87 +- 0.27 " ..
-             "(Wolthers, Charlet and Rickard 2005, abstract read). The previous record was Rickard's constant written " ..
-             "with HS^- (-3.5) and the isocoulombic estimate. Checks: docs/data-checks.md",
+      note = "The first iron sulfide to form in sour corrosion and in sediments; metastable against troilite " ..
+             "(pyrrhotite) and pyrite. Second source, read: Benning, Wilkin and Barnes 2000 (abstract) fit " ..
+             "log K = 2848.779/T - 6.347 to measured solubility at 25-95 C (3.21 at 25 C, 1.39 at 95 C). Its " ..
+             "slope (dH = -54.5 kJ/mol) is not used: it is 25 kJ/mol more exothermic than troilite's " ..
+             "calorimetric dissolution enthalpy (-29.9 kJ/mol with these files), which would make the metastable " ..
+             "phase the stable one above about 40 C and the only FeS of every map at 100-300 C, contrary to its " ..
+             "observed transformation to pyrrhotite and pyrite on heating. The isocoulombic estimate keeps " ..
+             "mackinawite above troilite's solubility at every temperature (known differences against the fit, " ..
+             "docs/data-checks.md). Disordered (nanoparticulate) mackinawite is more soluble, 4.87 +- 0.27 " ..
+             "(Wolthers, Charlet and Rickard 2005, abstract read). The previous record was this constant written " ..
+             "with HS^- (-3.5).",
     },
     {
       formula = "FeS2(s,pyrite)", model = "cp",

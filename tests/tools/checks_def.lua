@@ -112,6 +112,7 @@ local function bp49_logK(T) return -(2835.76 / T - 0.6322 + 0.001225 * T) end
 local SP = "standard_potentials.csv"
 local LK = "log_k_25C.csv"
 local HT = "high_temperature.csv"
+local BWB00 = "Benning, Wilkin and Barnes 2000, Chem. Geol. 167, 25 (authors and journal recalled; abstract read): log K = 2848.779/T - 6.347 (T in K) for FeS(m) + 2 H+ = Fe2+ + H2S(aq), fitted to measured solubility 25-95 C (3.1 at 25 C and 1.2 at 95 C measured)"
 
 local C = {}
 local function add(t) C[#C + 1] = t end
@@ -397,11 +398,13 @@ for _, t in ipairs({ 100, 150, 200, 250 }) do
         value_fn = function(T) return PB.KH(T) end, source = PB82 .. "; 1 atm converted to 1 bar",
         confidence = "high", note = "phlox: CO2(aq) at the saturation pressure, CO2(g) ideal at 1 bar" })
 end
--- Mackinawite solubility at 95 C: the fit the record uses (same source), so
--- the chain from logK_T to a result away from 25 C is guarded.
+-- Mackinawite solubility at 95 C (Benning et al. 2000, abstract read): the
+-- library keeps the isocoulombic estimate (S.lua explains why the measured
+-- slope is not used), so this row records how far it is from the measurement.
 add({ kind = "logK", reaction = "FeS(s,mackinawite) + 2 H^+ = Fe^2+ + H2S(aq)", T_C = 95, group = "T_other",
-      value_fn = function(T) return 2848.779 / T - 6.347 end, same = true, confidence = "medium",
-      source = "Benning, Wilkin and Barnes 2000, Chem. Geol. 167, 25 (authors and journal recalled; abstract read): log K = 2848.779/T - 6.347, fitted 25-95 C (measured 1.2 at 95 C)" })
+      value_fn = function(T) return 2848.779 / T - 6.347 end, source = BWB00, confidence = "medium",
+      known = { diff = 1.44, margin = 0.02,
+        why = "the file's isocoulombic estimate (3.5 x 298.15/T, n = 0) against the fit of Benning et al. 2000: the 25 C offset (+0.29, row above) plus a measured slope twice as steep (dH -54.5 against -29.9 kJ/mol for troilite with these files' data). Used as measured, that slope makes mackinawite more stable than troilite above about 40 C and the only iron sulfide of every map from 100 to 300 C, contrary to its observed transformation to pyrrhotite and pyrite on heating; the metastable order is kept until the troilite/Fe2+ pair (docs/data/ligands.md) is resolved" } })
 -- Silver chloride electrode and ammonium ion away from 25 C.
 add({ kind = "E0", reaction = "AgCl(s,chlorargyrite) + e- = Ag(s) + Cl^-", T_C = 0, group = "T_other", tolclass = "BB54_T",
       value = 0.23655, source = "from memory of Bates and Bower 1954 (J. Res. NBS 53, 283)", confidence = "high" })
@@ -467,9 +470,9 @@ add({ kind = "logK", reaction = "0.5 Fe2O3(s,hematite) + 2 H^+ = FeOH^2+ + 0.5 H
 
 -- Iron sulfides and the iron(II) bisulfide complex (issue 13): each against
 -- a published value other than the one the record came from.
-rk("FeS(s,mackinawite) + 2 H^+ = Fe^2+ + H2S(aq)", 3.5, "from memory of Rickard 2006 (Geochim. Cosmochim. Acta 70, 5779): log K*sp = 3.5 +- 0.25 for FeS(m) + 2 H+ = Fe2+ + H2S(aq), 25 C", "medium",
-   { known = { diff = -0.292, margin = 0.02,
-     why = "S.lua takes mackinawite from Benning, Wilkin and Barnes 2000 (abstract read: log K = 2848.779/T - 6.347, 3.21 at 25 C), the only measured temperature function (25-95 C); Rickard 2006 (recalled) gives 3.5 +- 0.25 at 25 C from a different synthesis: the two overlap within Rickard's stated uncertainty plus 0.04. Disordered (nanoparticulate) mackinawite is more soluble still, 4.87 +- 0.27 (Wolthers, Charlet and Rickard 2005, abstract read), a different material, not a check" } })
+rk("FeS(s,mackinawite) + 2 H^+ = Fe^2+ + H2S(aq)", 3.208, BWB00, "medium",
+   { known = { diff = 0.292, margin = 0.02,
+     why = "S.lua keeps Rickard 2006, 3.5 +- 0.25 (recalled), the value the sour-corrosion and sediment literature cites; the fit of Benning, Wilkin and Barnes 2000 (read) gives 3.21 from a different synthesis. The two overlap within Rickard's stated uncertainty plus 0.04. Disordered (nanoparticulate) mackinawite is more soluble still, 4.87 +- 0.27 (Wolthers, Charlet and Rickard 2005, abstract read), a different material, not a check" } })
 rk("Fe^2+ + HS^- = FeHS^+", 5.5, "Luther, NSF award OCE-9314349 abstract (read): initial voltammetric work in seawater gives Fe(SH)+ log B = 5.5 and Fe2(SH)3+ log B = 11.1", "low",
    { known = { diff = -0.43, margin = 0.02,
      why = "S.lua uses the thermodynamic (I = 0) constant 5.07 +- 0.09 of Luther et al. 1996 (recalled; the ES&T abstract, read, names the complexes but its constants were not in the excerpt); the row is the seawater constant of the same group's earlier work (I about 0.7, medium not stated). A medium constant is not an I = 0 constant: the difference is the medium and the preliminary fit, not a disagreement between I = 0 values. Low confidence either way" } })
