@@ -766,6 +766,29 @@ static void place_leader(cairo_t *cr, const pgeom *g, long item, double ax, doub
                 best = b, have = 1, bestd = d;
             }
     }
+    /* no leader runs clear: a box clear of the placed labels whose line crosses one (a
+     * crossed line is legible, two labels on one spot are not), around the anchor first */
+    for (int d = 1; d <= PX_LEAD_RINGS && !have; d++)
+        for (size_t k = 0; k < sizeof dir / sizeof dir[0] && !have; k++) {
+            double ox = sx * dir[k][0] * PX_LEAD_STEP * ts * d, oy = sy * dir[k][1] * PX_LEAD_STEP * ts * d * 0.7;
+            double cx = ax + ox + (ox > 0 ? bw / 2 : ox < 0 ? -bw / 2 : 0);
+            double cy = ay + oy + (oy > 0 ? bh / 2 : oy < 0 ? -bh / 2 : 0);
+            px_label_box b = make_box(PX_LABEL_LEADER, g->panel, item, s, 0, cx, cy, bw, bh);
+            if (box_in_rect(&b, g->inner) && box_clear(rec, g->first, &b)) best = b, have = 1;
+        }
+    if (!have) { /* then anywhere in the plot, nearest first */
+        double bestd = INFINITY;
+        for (int i = 0; i <= PX_CANDIDATES * 2; i++)
+            for (int j = 0; j <= PX_CANDIDATES * 2; j++) {
+                double cx = in.x + bw / 2 + (in.w - bw) * i / (PX_CANDIDATES * 2.0);
+                double cy = in.y + bh / 2 + (in.h - bh) * j / (PX_CANDIDATES * 2.0);
+                double d = hypot(cx - ax, cy - ay);
+                if (d >= bestd) continue;
+                px_label_box b = make_box(PX_LABEL_LEADER, g->panel, item, s, 0, cx, cy, bw, bh);
+                if (!box_in_rect(&b, g->inner) || !box_clear(rec, g->first, &b)) continue;
+                best = b, have = 1, bestd = d;
+            }
+    }
     if (!have) { /* nothing clear: beside the anchor, kept inside the frame */
         double cx = fmin(fmax(ax + sx * (PX_LEAD_STEP * ts + bw / 2), in.x + bw / 2), in.x + in.w - bw / 2);
         double cy = fmin(fmax(ay + sy * PX_LEAD_STEP * ts, in.y + bh / 2), in.y + in.h - bh / 2);

@@ -82,7 +82,7 @@ return {
       source = "derived here from dfG/dfH " .. SHOCK97 ..
                ": Fe3+ dfG -4120 cal/mol, dfH -11850 cal/mol, S -66.30 cal/(mol K); " ..
                "Fe2+ as above; dCp estimated with " .. CRISS_COBBLE .. " from these two entropies; " ..
-               "Cp(H2,g) 28.836 J/(mol K) from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)",
+               "Cp(H2,g) 28.836 J/(mol K) from memory of the CODATA Key Values (1989)",
       quality = "medium",
       note = "HKF parameters of Fe3+ not recalled, so the ion is defined against Fe2+ " ..
              "(logK = -2*dG/(RT ln10), dH from dfH). E0(Fe3+/Fe2+) = 0.770 V (CRC 0.771), unchanged " ..
