@@ -104,15 +104,7 @@ for _, w in ipairs(WELLS) do
   wells[#wells + 1] = { well = w.name, pH = w.pH, Eh_V = w.E, field = common.at(map, w.pH, w.E),
                         dissolved_Cr = r.elements.Cr.dissolved, CrVI_share = cr_vi_share(r) }
 end
-local fig = plot.domains(map, { stamp = STAMP })
-for k, w in ipairs(WELLS) do
-  fig:line(1, { w.pH - 0.08, w.pH + 0.08 }, { w.E, w.E }, { 0, 0, 0 }, 1.4, "solid")
-  fig:line(1, { w.pH, w.pH }, { w.E - 0.03, w.E + 0.03 }, { 0, 0, 0 }, 1.4, "solid")
-  fig:text(1, w.pH + 0.12, w.E + 0.04, tostring(k), false, 9, { 0, 0, 0 })
-end
-local ok, err = fig:save(o.path("Cr-domains-wells.svg"), plot.defaults.dpi)
-if not ok then error(err) end
-o.wrote("Cr-domains-wells.svg")
+common.marked_domains(o, "Cr-domains-wells.svg", map, WELLS, STAMP)
 export.csv(o.path("wells.csv"), wells, { columns = { "well", "pH", "Eh_V", "field", "dissolved_Cr", "CrVI_share" },
   conditions = { T_C = T_C, Cr_mol_kg = CR_TOTAL, DIC_mol_kg = DIC, activity_model = "Davies" }, from = spec })
 o.wrote("wells.csv")

@@ -79,6 +79,24 @@ function common.at(m, pH, E)
   return phlox.locate(m, pH, E) or "outside the window"
 end
 
+--- The corrosion domains of map m with numbered cross marks at points
+-- ({ pH, E } each), saved as `name` in the output folder.  The marks' arms
+-- scale with the window (1/75 of the pH range, 1/60 of the E range).
+local BLACK = { 0, 0, 0 }
+function common.marked_domains(o, name, m, points, stamp)
+  local plot = require "phlox.plot"
+  local fig = plot.domains(m, { stamp = stamp })
+  local dx, dy = (m.x.max - m.x.min) / 75, (m.y.max - m.y.min) / 60
+  for k, p in ipairs(points) do
+    fig:line(1, { p.pH - dx, p.pH + dx }, { p.E, p.E }, BLACK, 1.4, "solid")
+    fig:line(1, { p.pH, p.pH }, { p.E - dy, p.E + dy }, BLACK, 1.4, "solid")
+    fig:text(1, p.pH + 1.5 * dx, p.E + 4 / 3 * dy, tostring(k), false, 9, BLACK)
+  end
+  local ok, err = fig:save(o.path(name), plot.defaults.dpi)
+  if not ok then error(err) end
+  o.wrote(name)
+end
+
 --- Closing lines: the files written, which values are illustrative, the
 -- caution.
 function common.finish(o, illustrative)

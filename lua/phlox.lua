@@ -287,6 +287,12 @@ function phlox.Library:list(element)
   return out
 end
 
+--- The publications the loaded records cite, each once: a list of
+--- { key = "NBS82", short = "Wagman et al. 1982", cite = "<full citation>" }
+--- in the order first cited.  A record's `source` names them as "[KEY]" and
+--- its `refs` lists the keys.
+function phlox.Library:references() return self.db:references() end
+
 -- props and reaction: one argument (a formula or an equation) and T, P options
 local function at_TP(lib, method, what, arg, opts)
   local fname = "Library:" .. method
@@ -678,7 +684,10 @@ function phlox.map(opts)
     ligand = opts.ligand, ligand_activity = opts.ligand and (opts.ligand_activity or 1e-3) or nil,
   }
   m.files = lib.files
-  m.provenance = provenance.of_result(lib, { opts.element, opts.ligand }, m.conditions, opts)
+  -- a ligand group (CN) stamps the files of its elements: its complexes live there
+  local els = { opts.element }
+  for _, e in ipairs(LIGAND_GROUPS[opts.ligand] or { opts.ligand }) do els[#els + 1] = e end
+  m.provenance = provenance.of_result(lib, els, m.conditions, opts)
   stamp_held(m, held)
   m.provenance.notes = m.stamp   -- the caveats travel with the provenance (into sweep results)
   return m

@@ -318,6 +318,13 @@ function phlox.Library:props(formula, opts) end
 ---@return any
 function phlox.Library:reaction(text, opts) end
 
+--- The publications the loaded records cite, each once: a list of
+--- { key = "NBS82", short = "Wagman et al. 1982", cite = "<full citation>" }
+--- in the order first cited.  A record's `source` names them as "[KEY]" and
+--- its `refs` lists the keys.
+---@return any
+function phlox.Library:references() end
+
 --- Species record (a table) by formula, or nil.
 ---@param formula string
 ---@return any

@@ -24,6 +24,7 @@
 #include "data/data_internal.h"
 #include "core/constants.h"
 #include "core/status.h"
+#include <ctype.h>
 #include <math.h>
 #include <stdio.h>
 #include <stdlib.h>
@@ -492,11 +493,102 @@ static void resolve_kopp(pxd_file *f, pxd_entry *e, const px_db *known)
     sp->cp.estimate = PX_CP_EST_KOPP;
 }
 
+/* ---- references ----------------------------------------------------------- */
+
+/* Edit distance of two short keys (Levenshtein 1966), for "did you mean". */
+static size_t key_distance(const char *a, const char *b)
+{
+    size_t na = strlen(a), nb = strlen(b), row[PX_REF_KEY_MAX + 1];
+    if (na >= PX_REF_KEY_MAX || nb >= PX_REF_KEY_MAX) return (size_t)-1;
+    for (size_t j = 0; j <= nb; j++) row[j] = j;
+    for (size_t i = 1; i <= na; i++) {
+        size_t diag = row[0];
+        row[0] = i;
+        for (size_t j = 1; j <= nb; j++) {
+            size_t up = row[j];
+            size_t sub = diag + (toupper((unsigned char)a[i - 1]) != toupper((unsigned char)b[j - 1]));
+            size_t best = up + 1 < row[j - 1] + 1 ? up + 1 : row[j - 1] + 1;
+            row[j] = sub < best ? sub : best;
+            diag = up;
+        }
+    }
+    return row[nb];
+}
+
+#define PXD_KEY_HINT_DISTANCE 3 /* edits within which a key is offered as a hint (common practice, no source) */
+
+static const char *nearest_key(const pxd_file *f, const char *key)
+{
+    const pxd_file *files[2] = {f, pxd_stdlib_bibliography()};
+    const char *best = NULL;
+    size_t bd = PXD_KEY_HINT_DISTANCE + 1;
+    for (int k = 0; k < 2; k++)
+        for (size_t i = 0; files[k] && i < files[k]->n_refs; i++) {
+            size_t d = key_distance(key, files[k]->refs[i].key);
+            if (d < bd) {
+                bd = d;
+                best = files[k]->refs[i].key;
+            }
+        }
+    return best;
+}
+
+/* Every [KEY] in the source text names a publication. */
+static void check_refs(pxd_file *f, pxd_entry *e)
+{
+    char key[PX_REF_KEY_MAX];
+    size_t pos = 0;
+    while (px_ref_next(e->sp.source, &pos, key)) {
+        const char *st, *ci;
+        if (pxd_ref_lookup(f, key, &st, &ci)) continue;
+        const char *near = nearest_key(f, key);
+        char hint[PX_REF_KEY_MAX + 32] = "";
+        if (near) snprintf(hint, sizeof hint, " (did you mean [%s]?)", near);
+        pxd_report_entry(f, e, PX_DATA_ERROR, "source",
+                         "unknown reference [%s]%s: keys are defined in stdlib/bibliography.lua or in the "
+                         "file's own `sources` table",
+                         key, hint);
+    }
+}
+
+/* A file's own keys: not another citation under a key already in use, and
+ * each cited by some species. */
+static void check_file_refs(pxd_file *f)
+{
+    if (f->bibliography) return; /* (and the standard one is being read: no lookup) */
+    const pxd_file *bib = pxd_stdlib_bibliography();
+    for (size_t i = 0; i < f->n_refs; i++) {
+        const pxd_ref *r = &f->refs[i];
+        char field[PX_REF_KEY_MAX + 16];
+        snprintf(field, sizeof field, "sources.%s", r->key);
+        const char *other = NULL, *where = NULL;
+        const px_ref *k = f->known ? px_db_ref_find(f->known, r->key) : NULL;
+        if (k) {
+            other = k->cite;
+            where = "a file loaded before";
+        }
+        for (size_t j = 0; !other && bib && bib != f && j < bib->n_refs; j++)
+            if (strcmp(bib->refs[j].key, r->key) == 0) {
+                other = bib->refs[j].cite;
+                where = "stdlib/bibliography.lua";
+            }
+        if (other && strcmp(other, r->cite) != 0)
+            pxd_report(f, PX_DATA_ERROR, r->line, "", field,
+                       "key [%s] already names another publication in %s; choose another key", r->key, where);
+        else if (!f->bibliography && !r->cited)
+            pxd_report(f, PX_DATA_WARNING, r->line, "", field, "defined but cited by no species");
+    }
+}
+
 void pxd_check_file(pxd_file *f, const px_db *known)
 {
     build_names(f);
     if (f->oom) return;
-    for (size_t i = 0; i < f->n; i++) check_entry(f, &f->e[i], known);
+    for (size_t i = 0; i < f->n; i++) {
+        check_entry(f, &f->e[i], known);
+        check_refs(f, &f->e[i]);
+    }
+    check_file_refs(f);
     for (size_t i = 0; i < f->n_ex; i++) {
         px_formula fm;
         pxd_exclude *x = &f->ex[i];

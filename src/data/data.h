@@ -159,5 +159,9 @@ int px_data_check_files(const char *const *paths, size_t n, const px_data_option
  * NULL or ""): formula, model, dfG kJ/mol (or log K), file:line, source.
  * Returns the number of species written. */
 size_t px_data_list_write(const px_db *db, const char *element, FILE *out);
+/* The citations of keys the database's records cite but its references
+ * lack (the built-in species'), from the standard bibliography
+ * (stdlib/bibliography.lua).  PX_ENOTFOUND if a key is not there. */
+int px_data_cite_builtins(px_db *db);
 
 #endif

@@ -40,6 +40,16 @@ typedef struct pxd_entry {
     double kopp_nu[PXD_KOPP_MAX];
 } pxd_entry;
 
+/* A publication a file defines in its `sources` table (or the standard
+ * bibliography, stdlib/bibliography.lua, defines in its own). */
+typedef struct pxd_ref {
+    char key[PX_REF_KEY_MAX];
+    char *short_text; /* owned; the key itself if none was given */
+    char *cite;       /* owned */
+    int line;
+    int cited;        /* some species of the file cites it */
+} pxd_ref;
+
 typedef struct pxd_exclude {
     char raw[PXD_RAW_MAX];
     int line;
@@ -75,6 +85,10 @@ typedef struct pxd_file {
     size_t n, cap;
     pxd_exclude *ex;
     size_t n_ex, cap_ex;
+    pxd_ref *refs;     /* the file's `sources`, sorted by key */
+    size_t n_refs;
+    int bibliography;  /* the file holds `sources` only (no element, no species) */
+    const px_db *known;/* species (and references) loaded before; may be NULL */
 
     pxd_tok *tok;
     size_t ntok;
@@ -131,6 +145,17 @@ void pxd_sandbox_run(pxd_file *f);
 /* read.c: lua_CFunction; upvalue 1 = light userdata pxd_file*, arg 1 = table */
 struct lua_State;
 int pxd_read_table(struct lua_State *L);
+
+/* read.c: orders pxd_ref by key (f->refs is sorted with it) */
+int pxd_ref_cmp(const void *a, const void *b);
+
+/* load.c: the standard bibliography (stdlib/bibliography.lua, embedded),
+ * read once per process; NULL if it failed to load (a build error). */
+const pxd_file *pxd_stdlib_bibliography(void);
+/* A key's citation: the file's own `sources` (marked cited), then the known
+ * database's references, then the standard bibliography.  1 and the texts
+ * (borrowed), or 0 if none has the key. */
+int pxd_ref_lookup(pxd_file *f, const char *key, const char **short_text, const char **cite);
 
 /* lines.c */
 int pxd_tokenize(pxd_file *f);                     /* PX_OK or PX_ENOMEM */

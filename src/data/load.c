@@ -10,6 +10,7 @@
 #include "core/status.h"
 #include "embed/embedded.h"
 #include <errno.h>
+#include <pthread.h>
 #include <fcntl.h>
 #include <math.h>
 #include <stdio.h>
@@ -35,6 +36,11 @@ static void file_free(pxd_file *f, px_data_problems *own)
     for (size_t i = 0; i < f->n; i++) pxd_entry_free(&f->e[i]);
     free(f->e);
     free(f->ex);
+    for (size_t i = 0; i < f->n_refs; i++) {
+        free(f->refs[i].cite);
+        free(f->refs[i].short_text);
+    }
+    free(f->refs);
     free(f->tok);
     pxd_index_free(f);
     px_data_problems_free(own);
@@ -54,6 +60,7 @@ static int run(pxd_file *f, px_data_problems **own, const char *text, size_t len
     f->len = len;
     f->opt = opt;
     f->probs = probs;
+    f->known = known;
     f->e_unit = 1000.0; /* kJ by default (docs/element-files.md, Units) */
     f->s_unit = 1.0;    /* J/(mol K) */
     f->Tmin = PXD_TMIN_DEFAULT;
@@ -83,8 +90,101 @@ int px_data_check_buffer(const px_db *known, const char *text, size_t len, const
 }
 
 /* adds (or, for user files, replaces) the entries; undoes additions on failure */
+/* ---- the standard bibliography ------------------------------------------ */
+
+#define PXD_BIBLIOGRAPHY "stdlib/bibliography.lua"
+
+static pxd_file stdlib_bib;
+static int stdlib_bib_ok;
+static pthread_once_t stdlib_bib_once = PTHREAD_ONCE_INIT;
+
+/* Read once per process and kept: the records of every database borrow
+ * nothing from it (px_db_ref_add copies). */
+static void stdlib_bib_load(void)
+{
+    const px_embedded_file *ef = px_embedded_find(PXD_BIBLIOGRAPHY);
+    static px_data_options opt;
+    px_data_problems *own;
+    opt = px_data_options_default();
+    if (!ef) return;
+    int st = run(&stdlib_bib, &own, ef->data, ef->size, ef->path, &opt, NULL, NULL);
+    stdlib_bib_ok = st == PX_OK && stdlib_bib.bibliography;
+    stdlib_bib.probs = NULL; /* the private list goes; the references stay */
+    stdlib_bib.known = NULL;
+    px_data_problems_free(own);
+}
+
+const pxd_file *pxd_stdlib_bibliography(void)
+{
+    pthread_once(&stdlib_bib_once, stdlib_bib_load);
+    return stdlib_bib_ok ? &stdlib_bib : NULL;
+}
+
+static pxd_ref *refs_find(const pxd_file *f, const char *key)
+{
+    pxd_ref probe;
+    snprintf(probe.key, sizeof probe.key, "%s", key);
+    return f && f->n_refs ? bsearch(&probe, f->refs, f->n_refs, sizeof *f->refs, pxd_ref_cmp) : NULL;
+}
+
+int pxd_ref_lookup(pxd_file *f, const char *key, const char **short_text, const char **cite)
+{
+    pxd_ref *r = refs_find(f, key);
+    if (r) {
+        r->cited = 1;
+    } else if (f->known && px_db_ref_find(f->known, key)) {
+        const px_ref *k = px_db_ref_find(f->known, key);
+        *short_text = k->short_text;
+        *cite = k->cite;
+        return 1;
+    } else if (!(r = refs_find(pxd_stdlib_bibliography(), key))) {
+        return 0;
+    }
+    *short_text = r->short_text;
+    *cite = r->cite;
+    return 1;
+}
+
+int px_data_cite_builtins(px_db *db)
+{
+    const pxd_file *bib = pxd_stdlib_bibliography();
+    if (!db) return PX_EINVAL;
+    if (!bib) return PX_ENOTFOUND;
+    for (size_t i = 0; i < px_db_count(db); i++) {
+        char key[PX_REF_KEY_MAX];
+        size_t pos = 0;
+        while (px_ref_next(px_db_get(db, i)->source, &pos, key)) {
+            if (px_db_ref_find(db, key)) continue;
+            const pxd_ref *r = refs_find(bib, key);
+            if (!r) return PX_ENOTFOUND;
+            int st = px_db_ref_add(db, key, r->short_text, r->cite);
+            if (st != PX_OK) return st;
+        }
+    }
+    return PX_OK;
+}
+
+/* The references the file's loaded species cite, into the database. */
+static int commit_refs(px_db *db, pxd_file *f)
+{
+    for (size_t i = 0; i < f->n; i++) {
+        if (f->e[i].skip) continue;
+        char key[PX_REF_KEY_MAX];
+        size_t pos = 0;
+        while (px_ref_next(f->e[i].sp.source, &pos, key)) {
+            const char *st = NULL, *ci = NULL;
+            if (!pxd_ref_lookup(f, key, &st, &ci)) continue; /* the check reported it */
+            int rc = px_db_ref_add(db, key, st, ci);
+            if (rc == PX_ENOMEM) return rc;
+        }
+    }
+    return PX_OK;
+}
+
 static int commit(px_db *db, pxd_file *f)
 {
+    int rst = commit_refs(db, f);
+    if (rst != PX_OK) return rst;
     if (f->opt->user_file) {
         for (size_t i = 0; i < f->n_ex; i++) {
             long k;
@@ -282,6 +382,34 @@ static const char *model_name(px_model m)
     return "?";
 }
 
+static int has_element(const px_species *sp, int z)
+{
+    int has = !z;
+    for (int j = 0; j < sp->f.n_elem && !has; j++) has = sp->f.elem[j].z == z;
+    return has;
+}
+
+/* The references the listed species cite, each once, in the order the
+ * database holds them. */
+static void list_refs(const px_db *db, int z, FILE *out)
+{
+    int head = 0;
+    for (size_t r = 0; r < px_db_ref_count(db); r++) {
+        const px_ref *ref = px_db_ref_get(db, r);
+        int cited = 0;
+        for (size_t i = 0; i < px_db_count(db) && !cited; i++) {
+            const px_species *sp = px_db_get(db, i);
+            char key[PX_REF_KEY_MAX];
+            size_t pos = 0;
+            if (!has_element(sp, z)) continue;
+            while (!cited && px_ref_next(sp->source, &pos, key)) cited = strcmp(key, ref->key) == 0;
+        }
+        if (!cited) continue;
+        if (!head++) fprintf(out, "\nreferences:\n");
+        fprintf(out, "[%s] %s\n", ref->key, ref->cite);
+    }
+}
+
 size_t px_data_list_write(const px_db *db, const char *element, FILE *out)
 {
     int z = 0;
@@ -289,9 +417,7 @@ size_t px_data_list_write(const px_db *db, const char *element, FILE *out)
     size_t k = 0;
     for (size_t i = 0; i < px_db_count(db); i++) {
         const px_species *sp = px_db_get(db, i);
-        int has = !z;
-        for (int j = 0; j < sp->f.n_elem && !has; j++) has = sp->f.elem[j].z == z;
-        if (!has) continue;
+        if (!has_element(sp, z)) continue;
         char val[64];
         if (sp->model == PX_MODEL_LOGK && isfinite(sp->unc.logK))
             snprintf(val, sizeof val, "log K %.3f +- %.2g", sp->logk.logK25, sp->unc.logK);
@@ -334,5 +460,6 @@ size_t px_data_list_write(const px_db *db, const char *element, FILE *out)
                 sp->source ? sp->source : "", basis);
         k++;
     }
+    list_refs(db, z, out);
     return k;
 }

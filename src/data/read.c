@@ -37,7 +37,7 @@
 #define TRANGE_SUSPECT_K 200.0
 
 static const char *const file_fields[] = {"element", "title", "units", "T_range", "note",
-                                          "references", "species", "exclude", NULL};
+                                          "references", "sources", "species", "exclude", NULL};
 static const char *const species_fields[] = {
     "formula", "model",    "G",        "H",      "S",        "cp",     "V",
     "T_range", "source",   "quality",  "note",   "hkf",      "estimated", "estimate",
@@ -694,12 +694,107 @@ static void read_species(ctx *c, int t, int index)
     c->e = NULL;
 }
 
+/* The line of the key NAME inside the `sources` table (the table's line if
+ * not found). */
+static int source_key_line(const pxd_file *f, const char *key)
+{
+    int from = pxd_toplevel_line(f, "sources");
+    size_t n = strlen(key);
+    for (size_t i = 0; i < f->ntok; i++) {
+        const pxd_tok *t = &f->tok[i];
+        if (t->kind == PXD_TOK_NAME && t->line >= from && t->len == n &&
+            memcmp(f->text + t->start, key, n) == 0)
+            return t->line;
+    }
+    return from;
+}
+
+int pxd_ref_cmp(const void *a, const void *b)
+{
+    return strcmp(((const pxd_ref *)a)->key, ((const pxd_ref *)b)->key);
+}
+
+static int valid_key(const char *k)
+{
+    size_t n = strlen(k);
+    if (n == 0 || n >= PX_REF_KEY_MAX || !isupper((unsigned char)k[0])) return 0;
+    for (size_t i = 0; i < n; i++)
+        if (!isalnum((unsigned char)k[i]) && k[i] != '_') return 0;
+    return 1;
+}
+
+/* sources = { KEY = "citation" | { cite = "...", short = "..." }, ... } */
+static void read_sources(ctx *c, int top)
+{
+    lua_State *L = c->L;
+    pxd_file *f = c->f;
+    if (get_table(c, top, "sources", "sources") != 1) return;
+    int p = lua_gettop(L);
+    size_t n = 0;
+    lua_pushnil(L);
+    while (lua_next(L, p)) {
+        n++;
+        lua_pop(L, 1);
+    }
+    f->refs = calloc(n ? n : 1, sizeof *f->refs);
+    if (!f->refs) oom(c);
+    lua_pushnil(L);
+    while (lua_next(L, p)) {
+        char field[PX_REF_KEY_MAX + 16];
+        const char *key = lua_type(L, -2) == LUA_TSTRING ? lua_tostring(L, -2) : NULL;
+        if (!key || !valid_key(key)) {
+            char kt[64];
+            key_text(L, -2, kt, sizeof kt);
+            REPORT(c, PX_DATA_ERROR, "sources",
+                   "bad key %s: a key starts with an upper-case letter, then letters, digits or '_' "
+                   "(at most %d characters), as in sources = { SMITH1990 = \"...\" }",
+                   kt, PX_REF_KEY_MAX - 1);
+            lua_pop(L, 1);
+            continue;
+        }
+        snprintf(field, sizeof field, "sources.%s", key);
+        const char *cite = NULL, *shrt = NULL;
+        if (lua_type(L, -1) == LUA_TSTRING) {
+            cite = lua_tostring(L, -1);
+        } else if (lua_type(L, -1) == LUA_TTABLE) {
+            static const char *const k[] = {"cite", "short", NULL};
+            check_keys(c, lua_gettop(L), k, field);
+            if (rawfield(L, lua_gettop(L), "cite") == LUA_TSTRING) cite = lua_tostring(L, -1);
+            lua_pop(L, 1); /* the string stays alive: the table holds it */
+            if (rawfield(L, lua_gettop(L), "short") == LUA_TSTRING) shrt = lua_tostring(L, -1);
+            lua_pop(L, 1);
+        }
+        if (!cite || !*cite) {
+            pxd_report(f, PX_DATA_ERROR, source_key_line(f, key), "", field,
+                       "expected the citation: a non-empty string, or { cite = \"...\", short = \"...\" }");
+        } else {
+            pxd_ref *r = &f->refs[f->n_refs++];
+            snprintf(r->key, sizeof r->key, "%s", key);
+            r->cite = pxd_strdup(cite);
+            r->short_text = pxd_strdup(shrt && *shrt ? shrt : key);
+            r->line = source_key_line(f, key);
+            if (!r->cite || !r->short_text) oom(c);
+        }
+        lua_pop(L, 1);
+    }
+    lua_pop(L, 1);
+    qsort(f->refs, f->n_refs, sizeof *f->refs, pxd_ref_cmp);
+}
+
 int pxd_read_table(lua_State *L)
 {
     pxd_file *f = lua_touserdata(L, lua_upvalueindex(1));
     ctx c = {L, f, NULL};
     const int top = 1;
     check_keys(&c, top, file_fields, "");
+    /* a bibliography: `sources` without element or species */
+    int has_src = rawfield(L, top, "sources") != LUA_TNIL;
+    int has_el = rawfield(L, top, "element") != LUA_TNIL;
+    int has_sp = rawfield(L, top, "species") != LUA_TNIL;
+    lua_pop(L, 3);
+    f->bibliography = has_src && !has_el && !has_sp;
+    read_sources(&c, top);
+    if (f->bibliography) return 0;
 
     /* element */
     int r = get_str(&c, top, "element", "element", f->element, sizeof f->element);

@@ -54,6 +54,7 @@ static int l_database(lua_State *L)
     u->ws = px_thermo_ws_new(model == 0 ? PX_DIELECTRIC_R8_97 : PX_DIELECTRIC_JN91);
     if (!u->db || !u->ws) return luaL_error(L, "database: out of memory");
     int st = px_db_add_builtins(u->db);
+    if (st == PX_OK) st = px_data_cite_builtins(u->db);
     if (st != PX_OK) return luaL_error(L, "database: built-in species: %s", px_strerror(st));
     return 1;
 }
@@ -218,6 +219,24 @@ static void push_species(lua_State *L, const px_species *sp, long index)
     }
     lua_pushstring(L, sp->source ? sp->source : "");
     lua_setfield(L, -2, "source");
+    lua_newtable(L); /* the keys the source cites, in order, each once */
+    {
+        char key[PX_REF_KEY_MAX];
+        size_t pos = 0;
+        lua_Integer n = 0;
+        while (px_ref_next(sp->source, &pos, key)) {
+            int seen = 0;
+            for (lua_Integer i = 1; i <= n && !seen; i++) {
+                lua_rawgeti(L, -1, i);
+                seen = strcmp(lua_tostring(L, -1), key) == 0;
+                lua_pop(L, 1);
+            }
+            if (seen) continue;
+            lua_pushstring(L, key);
+            lua_rawseti(L, -2, ++n);
+        }
+    }
+    lua_setfield(L, -2, "refs");
     if (sp->file) {
         lua_pushstring(L, sp->file);
         lua_setfield(L, -2, "file");
@@ -453,6 +472,27 @@ static int db_hkf_reestimate(lua_State *L)
     return 2;
 }
 
+/* db:references() -> { {key =, short =, cite =}, ... }: the publications
+ * the loaded records cite, in the order they were first cited */
+static int db_references(lua_State *L)
+{
+    ldb *u = checkdb(L);
+    size_t n = px_db_ref_count(u->db);
+    lua_createtable(L, (int)n, 0);
+    for (size_t i = 0; i < n; i++) {
+        const px_ref *r = px_db_ref_get(u->db, i);
+        lua_createtable(L, 0, 3);
+        lua_pushstring(L, r->key);
+        lua_setfield(L, -2, "key");
+        lua_pushstring(L, r->short_text);
+        lua_setfield(L, -2, "short");
+        lua_pushstring(L, r->cite);
+        lua_setfield(L, -2, "cite");
+        lua_rawseti(L, -2, (lua_Integer)i + 1);
+    }
+    return 1;
+}
+
 /* db:list_text([element]) -> the `phlox list` text */
 static int db_list_text(lua_State *L)
 {
@@ -619,7 +659,7 @@ void px_lua_open_thermo(lua_State *L)
         {"isocoulombic", db_isocoulombic}, {"hkf_reestimate", db_hkf_reestimate},
         {"load", db_load},       {"species", db_species}, {"count", db_count},
         {"remove", db_remove},   {"props", db_props},     {"reaction", db_reaction},
-        {"list_text", db_list_text}, {NULL, NULL}};
+        {"list_text", db_list_text}, {"references", db_references}, {NULL, NULL}};
     static const luaL_Reg funcs[] = {
         {"database", l_database}, {"water", l_water},         {"psat", l_psat},
         {"default_pressure", l_default_pressure}, {"formula", l_formula},

@@ -20,6 +20,8 @@ struct px_db {
     long *hash; /* slot -> index, -1 empty */
     size_t hcap;
     unsigned long gen;
+    px_ref *ref; /* the publications the records cite by key, in order added */
+    size_t nref, capref;
 };
 
 static unsigned long fnv1a(const char *s)
@@ -105,6 +107,11 @@ void px_db_free(px_db *db)
         species_release(&db->sp[i]);
     free(db->sp);
     free(db->hash);
+    for (size_t i = 0; i < db->nref; i++) {
+        free(db->ref[i].short_text);
+        free(db->ref[i].cite);
+    }
+    free(db->ref);
     free(db);
 }
 
@@ -318,9 +325,7 @@ int px_db_add_builtins(px_db *db)
     w.Tmin = PX_WATER_TMIN;
     w.Tmax = PX_WATER_TMAX;
     strcpy(w.quality, "high");
-    w.source = "dfG, dfH, S: from memory of Wagman et al. 1982 (NBS tables, J. Phys. Chem. "
-               "Ref. Data 11 Suppl. 2); G(T,P) - G(Tr,Pr) from IAPWS-95 (Wagner and Pruss "
-               "2002)";
+    w.source = "dfG, dfH, S: from memory of [NBS82]; G(T,P) - G(Tr,Pr) from IAPWS-95 [IAPWS95]";
     int st = px_db_replace(db, &w);
     if (st)
         return st;
@@ -331,7 +336,7 @@ int px_db_add_builtins(px_db *db)
     e.dGf = 0;
     e.dHf = 0;
     e.S = NAN;
-    e.source = "convention: e- = H^+ - 1/2 H2(g) (potentials vs SHE at every T, P)";
+    e.source = "[CONVENTION]: e- = H^+ - 1/2 H2(g) (potentials vs SHE at every T, P)";
     strcpy(e.quality, "high");
     return px_db_replace(db, &e);
 }
@@ -471,3 +476,57 @@ int px_db_check_list(const px_db *db, const char *what, const char *const *list,
     }
     return PX_OK;
 }
+
+/* ------------------------------------------------------------- references */
+
+int px_ref_next(const char *text, size_t *pos, char key[PX_REF_KEY_MAX])
+{
+    if (!text || !pos) return 0;
+    for (size_t i = *pos; text[i]; i++) {
+        if (text[i] != '[' || !isupper((unsigned char)text[i + 1])) continue;
+        size_t k = i + 1;
+        while (isalnum((unsigned char)text[k]) || text[k] == '_') k++;
+        if (text[k] != ']' || k - (i + 1) >= PX_REF_KEY_MAX) continue;
+        memcpy(key, text + i + 1, k - (i + 1));
+        key[k - (i + 1)] = '\0';
+        *pos = k + 1;
+        return 1;
+    }
+    return 0;
+}
+
+const px_ref *px_db_ref_find(const px_db *db, const char *key)
+{
+    for (size_t i = 0; db && key && i < db->nref; i++)
+        if (strcmp(db->ref[i].key, key) == 0) return &db->ref[i];
+    return NULL;
+}
+
+int px_db_ref_add(px_db *db, const char *key, const char *short_text, const char *cite)
+{
+    if (!db || !key || !cite || !*key || strlen(key) >= PX_REF_KEY_MAX) return PX_EINVAL;
+    const px_ref *old = px_db_ref_find(db, key);
+    if (old) return strcmp(old->cite, cite) == 0 ? PX_OK : PX_EINVAL;
+    if (db->nref == db->capref) {
+        size_t cap = db->capref ? 2 * db->capref : 32;
+        px_ref *r = realloc(db->ref, cap * sizeof *r);
+        if (!r) return PX_ENOMEM;
+        db->ref = r;
+        db->capref = cap;
+    }
+    px_ref *r = &db->ref[db->nref];
+    snprintf(r->key, sizeof r->key, "%s", key);
+    r->short_text = dupstr(short_text && *short_text ? short_text : key);
+    r->cite = dupstr(cite);
+    if (!r->short_text || !r->cite) {
+        free(r->short_text);
+        free(r->cite);
+        return PX_ENOMEM;
+    }
+    db->nref++;
+    return PX_OK;
+}
+
+size_t px_db_ref_count(const px_db *db) { return db ? db->nref : 0; }
+
+const px_ref *px_db_ref_get(const px_db *db, size_t i) { return db && i < db->nref ? &db->ref[i] : NULL; }

@@ -115,6 +115,26 @@ int px_db_check_list(const px_db *db, const char *what, const char *const *list,
  * stdlib/elements/HO.lua. */
 int px_db_add_builtins(px_db *db);
 
+/* References: the publications the records cite.  A record's source text
+ * names each by key in brackets ("from memory of [NBS82] (S)"); the key's
+ * full citation is kept once, in the database (stdlib/bibliography.lua for
+ * the standard library, a file's own `sources` table otherwise). */
+#define PX_REF_KEY_MAX 32 /* bytes of a key, with NUL */
+typedef struct px_ref {
+    char key[PX_REF_KEY_MAX];
+    char *short_text; /* author-year form, "Wagman et al. 1982" */
+    char *cite;       /* the full citation */
+} px_ref;
+/* Adds a reference; PX_OK also when the key is there with the same
+ * citation, PX_EINVAL when it is there with another one. */
+int px_db_ref_add(px_db *db, const char *key, const char *short_text, const char *cite);
+const px_ref *px_db_ref_find(const px_db *db, const char *key); /* NULL if absent */
+size_t px_db_ref_count(const px_db *db);
+const px_ref *px_db_ref_get(const px_db *db, size_t i); /* in the order added */
+/* The next "[KEY]" in text from *pos (KEY: an upper-case letter, then
+ * letters, digits or '_'): 1 and the key, *pos moved past it; 0 at the end. */
+int px_ref_next(const char *text, size_t *pos, char key[PX_REF_KEY_MAX]);
+
 /* Where sp's temperature dependence comes from, derived from its fields:
  * LOGK with dH or logK_T: measured, unless its dCp is a Criss-Cobble
  * estimate (estimated); LOGK with an isocoulombic estimate:

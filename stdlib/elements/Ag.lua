@@ -3,9 +3,9 @@
 -- (Cox, Wagman and Medvedev 1989); Ag2O from the NBS tables (no CODATA value; the two
 -- tables agree on Ag+ to 0.01 kJ/mol). Hydrolysis from Baes and Mesmer 1976.
 -- Ag(II) and Ag(III) species (Ag2+, AgO, Ag2O3) are left out: values not recalled.
-local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
-local CODATA = "CODATA Key Values for Thermodynamics (Cox, Wagman and Medvedev 1989)"
-local BM76 = "from memory of Baes and Mesmer 1976, The Hydrolysis of Cations (I = 0, 25 C)"
+local NBS = "from memory of [NBS82]"
+local CODATA = "[CODATA89]"
+local BM76 = "from memory of [BM76] (I = 0, 25 C)"
 
 return {
   element = "Ag",
@@ -27,9 +27,9 @@ return {
       G = 77.096, H = 105.79, S = 73.45,
       uncertainty = { H = 0.08, S = 0.40 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
       estimate = { Cp = 21.8, V = -0.8 },
-      source = "G, H, S: " .. CODATA .. " (dfH and S read in a CODATA-table reprint; dfG = dfH - T dfS, as in phlox's reference gibbs_25C.csv). Cp: " .. NBS .. ". V: from memory of Shock and Helgeson 1988 (weak)",
+      source = "G, H, S: " .. CODATA .. " (dfH and S read in a CODATA-table reprint; dfG = dfH - T dfS, as in phlox's reference gibbs_25C.csv). Cp: " .. NBS .. ". V: from memory of [SH88] (weak)",
       quality = "medium",
-      note = "G/H/S high; HKF parameters estimated by the loader from Cp and V (Shock and Helgeson 1988 correlations). NBS 1982: dfG 77.107, dfH 105.579, S 72.68.",
+      note = "G/H/S high; HKF parameters estimated by the loader from Cp and V ([SH88] correlations). NBS 1982: dfG 77.107, dfH 105.579, S 72.68.",
     },
     {
       formula = "AgOH(aq)", model = "logk",

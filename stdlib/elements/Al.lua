@@ -4,12 +4,17 @@
 -- 1995; hydrolysis constants from Baes and Mesmer 1976 written against Al3+, so they keep
 -- their published log K whatever dfG of Al3+ is chosen. All values are recalled, not read,
 -- unless the source says "(read)".
-local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
-local CODATA = "CODATA Key Values for Thermodynamics (Cox, Wagman and Medvedev 1989)"
-local RH95 = "from memory of Robie and Hemingway 1995, Thermodynamic properties of minerals ... at 298.15 K and 1 bar (USGS Bulletin 2131)"
-local K60 = "from memory of Kelley 1960, High-temperature heat-content, heat-capacity and entropy data for the elements and inorganic compounds (US Bureau of Mines Bulletin 584)"
-local BM76 = "from memory of Baes and Mesmer 1976, The Hydrolysis of Cations (I = 0, 25 C)"
-local N90 = "from memory of Nordstrom et al. 1990, Revised chemical equilibrium data for major water-mineral reactions (ACS Symp. Ser. 416)"
+--
+-- Primary compilation: CODATA 1989 (Al^3+, corundum); Robie and Hemingway 1995 for
+-- gibbsite and boehmite, which CODATA does not cover. That pairing misses the measured
+-- gibbsite solubility (log *Ks 8.41 against 8.11 Nordstrom et al. 1990 and 7.74 Palmer and
+-- Wesolowski 1992): said here, checked and kept as a known difference in docs/data-checks.md.
+local NBS = "from memory of [NBS82]"
+local CODATA = "[CODATA89]"
+local RH95 = "from memory of [RH95]"
+local K60 = "from memory of [K60]"
+local BM76 = "from memory of [BM76] (I = 0, 25 C)"
+local N90 = "from memory of [N90]"
 
 return {
   element = "Al",
@@ -32,7 +37,7 @@ return {
       uncertainty = { H = 1.5, S = 10 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
       hkf = { a1 = -3.3802, a2 = -17.0104, a3 = 14.5797, a4 = -2.0758,
               c1 = 10.7, c2 = -8.06, omega = 2.8711 },
-      source = "G, H, S: " .. CODATA .. " (dfH and S read in a CODATA-table reprint; dfG = dfH - T dfS, as in phlox's reference gibbs_25C.csv). HKF parameters: from memory of Shock and Helgeson 1988 (Geochim. Cosmochim. Acta 52, 2009), as in phlox's reference hkf/hkf_parameters.csv",
+      source = "G, H, S: " .. CODATA .. " (dfH and S read in a CODATA-table reprint; dfG = dfH - T dfS, as in phlox's reference gibbs_25C.csv). HKF parameters: from memory of [SH88], as in phlox's reference hkf/hkf_parameters.csv",
       quality = "medium",
       note = "G/H/S high (key value). HKF parameters LOW: they reproduce the published Cp (-32.5 cal/(mol K)) but give V = -44.66 vs the weakly recalled -45.3 cm3/mol; Shock et al. 1997 may have revised them. NBS 1982 gives dfG -485.0, dfH -531, S -321.7; the 6.5 kJ/mol spread matters for Al solubility (see docs/data/other-metals.md).",
     },
@@ -50,7 +55,7 @@ return {
       logK = -9.3, estimate = "isocoulombic",
       source = BM76,
       quality = "medium",
-      note = "no reaction enthalpy recalled; Nordstrom et al. 1990 use -10.1 (spread reflects the difficulty of measuring the intermediate species).",
+      note = "no reaction enthalpy recalled; [N90] use -10.1 (spread reflects the difficulty of measuring the intermediate species).",
     },
     {
       formula = "Al(OH)3(aq)", model = "logk",
@@ -58,7 +63,7 @@ return {
       logK = -15.0, estimate = "isocoulombic",
       source = BM76,
       quality = "low",
-      note = "B&M give this constant with a large uncertainty; Nordstrom et al. 1990 use -16.9. No reaction enthalpy recalled.",
+      note = "B&M give this constant with a large uncertainty; [N90] use -16.9. No reaction enthalpy recalled.",
     },
     {
       formula = "Al(OH)4^-", model = "logk",
@@ -66,7 +71,7 @@ return {
       logK = -23.0, dH = 176.98,
       source = "logK: " .. BM76 .. "; dH: " .. N90 .. " (42.30 kcal/mol)",
       quality = "high",
-      note = "Brown and Ekberg 2016: -22.91 +- 0.10 (read, Wikipedia 'Hydrolysis constant'); Nordstrom et al. 1990: -22.7. NBS 1982 dfG(Al(OH)4-) = -1305.3 kJ/mol is consistent with NBS Al3+ (-485.0), not with the CODATA Al3+ used here.",
+      note = "Brown and Ekberg 2016: -22.91 +- 0.10 (read, Wikipedia 'Hydrolysis constant'); [N90]: -22.7. NBS 1982 dfG(Al(OH)4-) = -1305.3 kJ/mol is consistent with NBS Al3+ (-485.0), not with the CODATA Al3+ used here.",
     },
     {
       formula = "Al2(OH)2^4+", model = "logk",
@@ -107,14 +112,14 @@ return {
       V = 31.956,
       source = RH95,
       quality = "medium",
-      note = "cp is Cp at 298.15 K taken as constant (R&H give a polynomial that is not recalled). Gibbsite solubility: this G with CODATA Al3+ gives log K(Al(OH)3 + 3 H+ = Al3+ + 3 H2O) = 8.41; Nordstrom et al. 1990 use 8.11 and Palmer and Wesolowski 1992 7.74 (both recalled).",
+      note = "cp is Cp at 298.15 K taken as constant (R&H give a polynomial that is not recalled). Gibbsite solubility: this G with CODATA Al3+ gives log K(Al(OH)3 + 3 H+ = Al3+ + 3 H2O) = 8.41; [N90] use 8.11 and Palmer and Wesolowski 1992 7.74 (both recalled).",
     },
     {
       formula = "AlO(OH)(s,boehmite)", model = "cp",
       G = -918.4, H = -996.4, S = 37.19,
       cp = { a = 65.6, b = 0, c = 0 },
       V = 19.535,
-      source = RH95 .. " (values of Hemingway, Robie and Apps 1991)",
+      source = RH95 .. " (values of [HRA91])",
       quality = "low",
       note = "Cp at 298.15 K recalled weakly, taken as constant. With these values boehmite + water is 0.6 kJ/mol below gibbsite at 25 C, inside the combined uncertainty (about 2 kJ/mol); in nature gibbsite is the stable phase at 25 C. Exclude boehmite for 25 C diagrams if gibbsite is wanted.",
     },

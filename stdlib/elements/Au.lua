@@ -16,10 +16,8 @@
 -- governed by kinetics (passivation, oxygen transport); a diagram shows
 -- which species can form, not how fast.
 
-local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic " ..
-            "Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
-local BPJ = "from memory of Bard, Parsons and Jordan 1985, Standard Potentials in Aqueous " ..
-            "Solution (IUPAC), as printed in the CRC Handbook electrochemical series (P. Vanysek)"
+local NBS = "from memory of [NBS82]"
+local BPJ = "from memory of [BPJ85], as printed in [CRC]"
 
 return {
   element = "Au",
@@ -40,8 +38,7 @@ return {
       logK = -28.601, estimate = "isocoulombic",
       source = "derived here from E0(Au^+/Au) = 1.692 V, " .. BPJ,
       quality = "medium",
-      note = "log K = -F E0/(RT ln 10).  Au^+ disproportionates (3 Au^+ = 2 Au + Au^3+ is " ..
-             "favoured by 0.29 V); it matters only in complexes.  No dH recalled: temperature by the isocoulombic estimate.",
+      note = "log K = -F E0/(RT ln 10).  Au^+ disproportionates (3 Au^+ = 2 Au + Au^3+ is favoured by 0.29 V); it matters only in complexes.  No dH recalled: temperature by the isocoulombic estimate.",
     },
     {
       formula = "Au^3+", model = "logk",
@@ -49,8 +46,7 @@ return {
       logK = -75.964, estimate = "isocoulombic",
       source = "derived here from E0(Au^3+/Au) = 1.498 V, " .. BPJ,
       quality = "medium",
-      note = "with Au^+ it gives E0(Au^3+/Au^+) = 1.401 V, the value printed beside it in the " ..
-             "same table.  No dH recalled: temperature by the isocoulombic estimate.",
+      note = "with Au^+ it gives E0(Au^3+/Au^+) = 1.401 V, the value printed beside it in the same table.  No dH recalled: temperature by the isocoulombic estimate.",
     },
     {
       formula = "Au(OH)3(s)", model = "logk",
@@ -58,9 +54,7 @@ return {
       logK = -73.530, estimate = "isocoulombic",
       source = "derived here from E0(Au(OH)3 + 3 H^+ + 3 e- = Au + 3 H2O) = 1.45 V, " .. BPJ,
       quality = "low",
-      note = "Hydrated gold(III) oxide; Pourbaix 1966 prints 1.457 V for the same couple " ..
-             "(recalled). Two decimals in the source: +-5 mV is 0.25 in this log K.  No dH " ..
-             "recalled: temperature by the isocoulombic estimate.",
+      note = "Hydrated gold(III) oxide; Pourbaix 1966 prints 1.457 V for the same couple (recalled). Two decimals in the source: +-5 mV is 0.25 in this log K.  No dH recalled: temperature by the isocoulombic estimate.",
     },
   },
 }

@@ -9,13 +9,10 @@
 -- matter above about 0.025 mol/kg B) are not included: their constants were
 -- not recalled with confidence.  Every number was recalled, not read.
 
-local CODATA = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values for " ..
-               "Thermodynamics (dfH, S; dfG derived here as dfH - T dfS)"
-local CODATA_U = "+-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)"
-local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic " ..
-            "Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
-local MBS72 = "from memory of Mesmer, Baes and Sweeton 1972 (Inorg. Chem. 11, 537), " ..
-              "log K = 1573.21/T + 28.6059 + 0.012078 T - 13.2258 log10 T, 0-300 C"
+local CODATA = "from memory of [CODATA89] (dfH, S; dfG derived here as dfH - T dfS)"
+local CODATA_U = "+-: from memory of [CODATA89]"
+local NBS = "from memory of [NBS82]"
+local MBS72 = "from memory of [MBS72], log K = 1573.21/T + 28.6059 + 0.012078 T - 13.2258 log10 T, 0-300 C"
 
 return {
   element = "B",
@@ -44,12 +41,9 @@ return {
       formula = "B(OH)3(aq)", model = "logk",
       reaction = "B(OH)3(s,sassolite) = B(OH)3(aq)",
       logK = -0.070, dH = 22.0,
-      source = "derived here from " .. CODATA .. ": B(OH)3(aq) dfH -1072.8 +- 0.8 kJ/mol, " ..
-               "S 162.4 +- 0.6 J/(mol K), with sassolite above",
+      source = "derived here from " .. CODATA .. ": B(OH)3(aq) dfH -1072.8 +- 0.8 kJ/mol, S 162.4 +- 0.6 J/(mol K), with sassolite above",
       quality = "medium",
-      note = "Solubility of boric acid 0.85 mol/kg at unit activity coefficient (measured about " ..
-             "0.88-0.92 mol/kg at 25 C, recalled). Van 't Hoff with the CODATA dissolution " ..
-             "enthalpy; the solubility rises steeply with T.",
+      note = "Solubility of boric acid 0.85 mol/kg at unit activity coefficient (measured about 0.88-0.92 mol/kg at 25 C, recalled). Van 't Hoff with the CODATA dissolution enthalpy; the solubility rises steeply with T.",
     },
     {
       formula = "B(OH)4^-", model = "logk",
@@ -59,8 +53,7 @@ return {
       T_range = { 273.15, 573.15 },
       source = MBS72,
       quality = "high",
-      note = "With pKw this gives pKa(B(OH)3 + H2O = B(OH)4^- + H^+) = 9.24 at 25 C (Owen " ..
-             "1934 and Manov et al. 1944: 9.237, recalled); at 0 C 9.50 (Owen: 9.508).",
+      note = "With pKw this gives pKa(B(OH)3 + H2O = B(OH)4^- + H^+) = 9.24 at 25 C (Owen 1934 and Manov et al. 1944: 9.237, recalled); at 0 C 9.50 (Owen: 9.508).",
     },
   },
 }

@@ -8,9 +8,8 @@
 -- sulfate reproduces the measured barite Ksp within 0.01.  Every number was
 -- recalled, not read ("from memory of").
 
-local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic " ..
-            "Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
-local BM = "from memory of Baes and Mesmer 1976, The Hydrolysis of Cations (I = 0, 25 C)"
+local NBS = "from memory of [NBS82]"
+local BM = "from memory of [BM76] (I = 0, 25 C)"
 
 return {
   element = "Ba",

@@ -2,6 +2,14 @@
 -- methane, carbon monoxide and graphite; carbonate and bicarbonate complexes of
 -- the metals; carbonate minerals.
 --
+-- Primary compilation: Nordstrom et al. 1990 (ACS Symp. Ser. 416), the evaluated
+-- aqueous carbonate constants, which adopt Plummer and Busenberg 1982 for the
+-- CO2-H2O-CaCO3 system (CO3^2- is defined by that K2 equation; the SH88/SHS89 HKF sets
+-- of CO2(aq) and HCO3^- reproduce K1 and KH). Solids without an evaluated constant
+-- (smithsonite, cerussite, rhodochrosite, otavite, malachite) are NBS 1982 solids on
+-- the metal file's ion: rhodochrosite and cerussite then miss the measured solubility
+-- by +0.51 and +0.33 (known differences, docs/data-checks.md).
+--
 -- Data sets: CO2(aq), HCO3^- and CO3^2- carry the revised-HKF parameters of
 -- Shock and Helgeson 1988 / Shock, Helgeson and Sverjensky 1989 (as recalled in
 -- the project reference table tests/reference/hkf). Gases: CODATA 1989 key
@@ -10,19 +18,19 @@
 -- (valid 0-90 C). Other minerals: NBS 1982 or Robie and Hemingway 1995.
 -- Complexes: I = 0, 25 C. Nearly every number was recalled, not read.
 
-local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
+local NBS = "from memory of [NBS82]"
 local NBS_DERIVED = "derived here from dfG and dfH of " .. NBS
-local CODATA = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values for Thermodynamics (dfH, S; dfG derived here as dfH - T dfS)"
-local SH88 = "from memory of Shock and Helgeson 1988 (Geochim. Cosmochim. Acta 52:2009), ion tables (table no. not recalled)"
-local SHS89 = "from memory of Shock, Helgeson and Sverjensky 1989 (Geochim. Cosmochim. Acta 53:2157), neutral species (table no. not recalled)"
-local KELLEY = "Cp: from memory of Kelley 1960 (U.S. Bur. Mines Bull. 584), Maier-Kelley coefficients in cal converted x 4.184"
-local HDNB = "Cp: from memory of Helgeson, Delany, Nesbitt and Bird 1978 (Am. J. Sci. 278-A), Maier-Kelley coefficients in cal converted x 4.184"
-local RH95 = "from memory of Robie and Hemingway 1995 (U.S. Geol. Surv. Bull. 2131)"
-local PB82 = "Plummer and Busenberg 1982 (Geochim. Cosmochim. Acta 46:1011), analytic log K(T), 0-90 C; coefficients from memory (they reproduce the published 25 C values)"
-local N90 = "from memory of Nordstrom, Plummer, Langmuir, Busenberg, May, Jones and Parkhurst 1990 (ACS Symp. Ser. 416, 398-413)"
-local SIEBERT = "from memory of Siebert and Hostetler 1977 (Am. J. Sci. 277:697) as adopted by Nordstrom et al. 1990 (ACS Symp. Ser. 416)"
-local COMPILED = "from memory of the I = 0 constants compiled from Smith and Martell (Critical Stability Constants) in Nordstrom et al. 1990-era aqueous data sets; attribution to the primary paper not recalled"
-local SM = "from memory of Smith and Martell, Critical Stability Constants (I = 0, 25 C)"
+local CODATA = "from memory of [CODATA89] (dfH, S; dfG derived here as dfH - T dfS)"
+local SH88 = "from memory of [SH88], ion tables (table no. not recalled)"
+local SHS89 = "from memory of [SHS89], neutral species (table no. not recalled)"
+local KELLEY = "Cp: from memory of [K60], Maier-Kelley coefficients in cal converted x 4.184"
+local HDNB = "Cp: from memory of [HDNB78], Maier-Kelley coefficients in cal converted x 4.184"
+local RH95 = "from memory of [RH95]"
+local PB82 = "[PB82], analytic log K(T), 0-90 C; coefficients from memory (they reproduce the published 25 C values)"
+local N90 = "from memory of [N90]"
+local SIEBERT = "from memory of [SH77] as adopted by [N90]"
+local COMPILED = "from memory of [COMPILED]"
+local SM = "from memory of [SM] (I = 0, 25 C)"
 local CAL = { energy = "cal", entropy = "cal" }
 local KCAL = { energy = "kcal" }
 
@@ -44,7 +52,7 @@ return {
       G = -140282, H = -164898, S = 23.53,
       hkf = { a1 = 7.5621, a2 = 1.1505, a3 = 1.2346, a4 = -2.8266, c1 = 12.9395, c2 = -4.7579, omega = 1.2733 },
       source = SH88, quality = "high",
-      note = "log K(CO2(aq) + H2O = HCO3^- + H^+) from these dfG: -6.34 (Plummer and Busenberg 1982: -6.352)",
+      note = "log K(CO2(aq) + H2O = HCO3^- + H^+) from these dfG: -6.34 ([PB82]: -6.352)",
     },
     {
       formula = "CO3^2-", model = "logk",
@@ -52,13 +60,9 @@ return {
       logK = -10.329,
       logK_T = { -107.8871, -0.03252849, 5151.79, 38.92561, -563713.9 },
       T_range = { 273.15, 523.15 },
-      source = "from memory of Plummer and Busenberg 1982 (Geochim. Cosmochim. Acta 46, 1011), " ..
-               "fitted equation for the second dissociation constant of carbonic acid, 0-250 C",
+      source = "from memory of [PB82], fitted equation for the second dissociation constant of carbonic acid, 0-250 C",
       quality = "high",
-      note = "Replaces the SH88 revised-HKF set (G -126191, H -161385 cal/mol, S -11.95 cal/(mol K); " ..
-             "a1..omega 2.8524, -3.9844, 6.4142, -2.6143, -3.3206, -17.1917, 3.3914, from memory of SH88), " ..
-             "which gives the same log K2 at 25 C (-10.33) but 0.19/0.31/0.40 above the measured K2 at " ..
-             "150/200/250 C (docs/data-checks.md); the fitted equation follows the measurements.",
+      note = "Replaces the SH88 revised-HKF set (G -126191, H -161385 cal/mol, S -11.95 cal/(mol K); a1..omega 2.8524, -3.9844, 6.4142, -2.6143, -3.3206, -17.1917, 3.3914, from memory of SH88), which gives the same log K2 at 25 C (-10.33) but 0.19/0.31/0.40 above the measured K2 at 150/200/250 C (docs/data-checks.md); the fitted equation follows the measurements.",
     },
     {
       formula = "CO2(g)", model = "cp",
@@ -67,7 +71,7 @@ return {
       cp = { a = 44.225, b = 8.786e-3, c = -8.619e5 },
       source = CODATA .. "; " .. KELLEY .. " (10.57 + 2.10e-3 T - 2.06e5/T^2 cal)",
       quality = "high",
-      note = "Henry constant with CO2(aq) above: log K = -1.471 (Plummer and Busenberg 1982: -1.468)",
+      note = "Henry constant with CO2(aq) above: log K = -1.471 ([PB82]: -1.468)",
     },
     {
       formula = "CO(g)", model = "cp",
@@ -97,7 +101,7 @@ return {
       G = 0, H = 0, S = 5.74,
       uncertainty = { S = 0.10 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
       cp = { a = 16.862, b = 4.770e-3, c = -8.535e5 },
-      source = "S from memory of Cox, Wagman and Medvedev 1989 (CODATA); " .. KELLEY .. " (4.03 + 1.14e-3 T - 2.04e5/T^2 cal)",
+      source = "S from memory of [CODATA89]; " .. KELLEY .. " (4.03 + 1.14e-3 T - 2.04e5/T^2 cal)",
       quality = "high",
       note = "the Cp fit gives 8.68 J/(mol K) at 298.15 K vs NBS 8.517 (2 % high)",
     },
@@ -153,26 +157,23 @@ return {
       reaction = "MgCO3(s,magnesite) = Mg^2+ + CO3^2-",
       logK = -8.029, dH = -6.169, units = KCAL,
       source = N90, quality = "medium",
-      note = "Issue 13: was Robie and Hemingway 1995 magnesite with the SH88 Mg^2+ (log Ksp -8.32), " ..
-             "which made ordered dolomite metastable against calcite + magnesite above about 70 C; " ..
-             "defined now, like dolomite, by the Nordstrom et al. 1990 constant (dolomite = calcite + " ..
-             "magnesite: log K -0.58 at 25 C, falling with T)",
+      note = "Issue 13: was [RH95] magnesite with the SH88 Mg^2+ (log Ksp -8.32), which made ordered dolomite metastable against calcite + magnesite above about 70 C; defined now, like dolomite, by the [N90] constant (dolomite = calcite + magnesite: log K -0.58 at 25 C, falling with T)",
     },
     { formula = "FeCO3(s,siderite)", model = "logk", reaction = "FeCO3(s,siderite) = Fe^2+ + CO3^2-",
       logK = -10.89, dH = -2.48, units = KCAL, V = 29.378,
-      source = N90 .. " (after Bruno et al. 1992); V " .. RH95, quality = "medium",
-      note = "Smith and Martell give -10.68 (Harris App. F); precipitated siderite about -10.45. Defined by log K because dfG(Fe^2+) differs between data sets by 12 kJ/mol (docs/data/ligands.md)" },
+      source = N90 .. " (after [BRUNO92]); V " .. RH95, quality = "medium",
+      note = "[SM] give -10.68 (Harris App. F); precipitated siderite about -10.45. Defined by log K because dfG(Fe^2+) differs between data sets by 12 kJ/mol (docs/data/ligands.md)" },
     {
       formula = "MnCO3(s,rhodochrosite)", model = "cp",
       G = -816.7, H = -894.1, S = 85.8, cp = { a = 81.5 }, V = 31.075,
       source = NBS .. "; V " .. RH95, quality = "medium",
-      note = "log Ksp with NBS ions -10.65; literature -10.4 to -11.13 (Nordstrom et al. 1990 list -11.13): uncertain by about 0.5; Cp held at its 25 C value",
+      note = "log Ksp with NBS ions -10.65; literature -10.4 to -11.13 ([N90] list -11.13): uncertain by about 0.5; Cp held at its 25 C value",
     },
     {
       formula = "ZnCO3(s,smithsonite)", model = "cp",
       G = -731.52, H = -812.78, S = 82.4, cp = { a = 79.71 }, V = 28.275,
       source = NBS .. "; V " .. RH95, quality = "medium",
-      note = "log Ksp with NBS ions -9.93 (Smith and Martell -10.00); Cp held at its 25 C value",
+      note = "log Ksp with NBS ions -9.93 ([SM] -10.00); Cp held at its 25 C value",
     },
     {
       formula = "CdCO3(s,otavite)", model = "cp",
@@ -201,7 +202,7 @@ return {
       logK = -9.271,
       logK_T = { 155.0305, 0, -7239.594, -56.58638 },
       T_range = { 273.15, 363.15 },
-      source = "from memory of Busenberg, Plummer and Parker 1984 (Geochim. Cosmochim. Acta 48, 2021), analytic log K(T), 2-91 C",
+      source = "from memory of [BPP84], analytic log K(T), 2-91 C",
       quality = "high",
     },
     {
@@ -209,7 +210,7 @@ return {
       reaction = "Sr^2+ + HCO3^- = SrHCO3^+",
       logK = 1.18, logK_T = { -3.248, 0.014867 },
       T_range = { 273.15, 363.15 },
-      source = "from memory of Busenberg, Plummer and Parker 1984 (Geochim. Cosmochim. Acta 48, 2021)",
+      source = "from memory of [BPP84]",
       quality = "medium",
     },
     {
@@ -217,7 +218,7 @@ return {
       reaction = "Sr^2+ + CO3^2- = SrCO3(aq)",
       logK = 2.81, logK_T = { -1.019, 0.012826 },
       T_range = { 273.15, 363.15 },
-      source = "from memory of Busenberg, Plummer and Parker 1984 (Geochim. Cosmochim. Acta 48, 2021)",
+      source = "from memory of [BPP84]",
       quality = "medium",
     },
     {
@@ -226,7 +227,7 @@ return {
       logK = -8.562,
       logK_T = { 607.642, 0.121098, -20011.25, -236.4948 },
       T_range = { 273.15, 363.15 },
-      source = "from memory of Busenberg and Plummer 1986 (Geochim. Cosmochim. Acta 50, 2225), analytic log K(T), 5-90 C",
+      source = "from memory of [BP86], analytic log K(T), 5-90 C",
       quality = "high",
     },
     {
@@ -234,7 +235,7 @@ return {
       reaction = "Ba^2+ + HCO3^- = BaHCO3^+",
       logK = 0.982, logK_T = { -3.0938, 0.013669 },
       T_range = { 273.15, 363.15 },
-      source = "from memory of Busenberg and Plummer 1986 (Geochim. Cosmochim. Acta 50, 2225)",
+      source = "from memory of [BP86]",
       quality = "medium",
     },
     {
@@ -242,7 +243,7 @@ return {
       reaction = "Ba^2+ + CO3^2- = BaCO3(aq)",
       logK = 2.71, logK_T = { 0.113, 0.008721 },
       T_range = { 273.15, 363.15 },
-      source = "from memory of Busenberg and Plummer 1986 (Geochim. Cosmochim. Acta 50, 2225)",
+      source = "from memory of [BP86]",
       quality = "medium",
     },
   },

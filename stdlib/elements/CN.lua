@@ -17,16 +17,19 @@
 -- OCN^- and the Au, Fe, Ni and Zn cyano complexes (their dfG, dfH and S close
 -- the Gibbs-Helmholtz cycle within 0.6 kJ/mol, a check on the recall), so
 -- these carry reaction enthalpies (van 't Hoff).  Ag and Cu complexes: Smith
--- and Martell, Critical Stability Constants (no enthalpy recalled: held at
--- 25 C).  Every number was recalled, not read ("from memory of").
+-- and Martell, Critical Stability Constants (no enthalpy recalled:
+-- isocoulombic estimate); the Cu(I) values are those Penneman and Jones 1956
+-- derived from their infrared measurements (abstract read, checked in
+-- docs/data-checks.md).  Au(CN)4^-: the order-of-magnitude constant printed
+-- in gold-processing texts (low quality; no second value found).  Every
+-- number was recalled, not read ("from memory of"), unless marked read.
 --
 -- Caution: HCN is volatile and toxic; the diagrams say which species can
 -- form, not how fast cyanide oxidises or gold dissolves.
 
-local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic " ..
-            "Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
+local NBS = "from memory of [NBS82]"
 local NBSD = "derived here from dfG and dfH of " .. NBS
-local SM = "from memory of Smith and Martell, Critical Stability Constants (I = 0, 25 C)"
+local SM = "from memory of [SM] (I = 0, 25 C)"
 
 -- A cyano complex of a monovalent ion with a Smith and Martell cumulative
 -- constant and no recalled enthalpy (temperature by the isocoulombic
@@ -55,8 +58,7 @@ local species = {
       logK = 9.233, dH = -43.5,
       source = NBSD .. ": HCN(aq) dfG 119.7, dfH 107.1 kJ/mol, S 124.7 J/(mol K)",
       quality = "high",
-      note = "pKa 9.23; Smith and Martell give 9.21 and Izatt et al. 1962 measured dH of " ..
-             "ionisation 43.6 kJ/mol (both recalled).",
+      note = "pKa 9.23; [SM] give 9.21 and Izatt et al. 1962 measured dH of ionisation 43.6 kJ/mol (both recalled).",
     },
     {
       formula = "OCN^-", model = "logk",
@@ -64,8 +66,7 @@ local species = {
       logK = 5.724, dH = -10.77,
       source = NBSD .. ": OCN^- dfG -97.4, dfH -146.0 kJ/mol, S 106.7 J/(mol K)",
       quality = "medium",
-      note = "Cyanate, the first oxidation product of cyanide: E0(OCN^- + 2 H^+ + 2 e- = CN^- + " ..
-             "H2O) = -0.169 V.  Exclude it for a diagram of cyanide held unoxidised.",
+      note = "Cyanate, the first oxidation product of cyanide: E0(OCN^- + 2 H^+ + 2 e- = CN^- + H2O) = -0.169 V.  Exclude it for a diagram of cyanide held unoxidised.",
     },
     -- ---------------------------------------------------------------- gold
     {
@@ -74,8 +75,15 @@ local species = {
       logK = 10.336, dH = -58.9,
       source = NBSD .. ": Au(CN)2^- dfG 285.8, dfH 242.3 kJ/mol, S 172 J/(mol K)",
       quality = "medium",
-      note = "E0(Au(CN)2^-/Au) = -0.611 V (CRC -0.60).  With Au^+ of Au.lua (1.692 V) log " ..
-             "beta2 = 38.94; Smith and Martell give 38.3 (recalled), the literature 36.6-39.3.",
+      note = "E0(Au(CN)2^-/Au) = -0.611 V (CRC -0.60).  With Au^+ of Au.lua (1.692 V) log beta2 = 38.94; [SM] give 38.3 (recalled), the literature 36.6-39.3.",
+    },
+    {
+      formula = "Au(CN)4^-", model = "logk",
+      reaction = "Au^3+ + 4 CN^- = Au(CN)4^-",
+      logK = 56, estimate = "isocoulombic",
+      source = "from memory of [MH06], table of stability constants of gold complexes (beta4 about 1e56)",
+      quality = "low",
+      note = "Gold(III) cyanide. The constant is an order-of-magnitude value (two significant figures at best) and no second published value was found. With Au^3+ of Au.lua it gives E0(Au(CN)4^- + 2 e- = Au(CN)2^- + 2 CN^-) = 0.89 V: Au(CN)4^- is stable only above the O2/H2O line in alkaline cyanide, so oxygen does not form it, as leaching practice finds (strong oxidants or anodic oxidation do). No dH recalled: temperature by the isocoulombic estimate.",
     },
     -- ---------------------------------------------------------------- silver, copper(I)
     -- Smith and Martell cumulative constants; see cyano() below
@@ -86,8 +94,7 @@ local species = {
       logK = 16.76, dH = -106.2,
       source = NBSD .. ": Zn(CN)4^2- dfG 446.9, dfH 342.3 kJ/mol, S 226 J/(mol K); Zn^2+ dfG -147.06, dfH -153.89",
       quality = "low",
-      note = "The literature splits: 16.7 (Lange's Handbook) and 19.6 (quoted in gold-processing " ..
-             "texts), both recalled; the NBS entry agrees with the lower one.",
+      note = "The literature splits: 16.7 (Lange's Handbook) and 19.6 (quoted in gold-processing texts), both recalled; the NBS entry agrees with the lower one.",
     },
     {
       formula = "Ni(CN)4^2-", model = "logk",
@@ -95,7 +102,7 @@ local species = {
       logK = 30.12, dH = -180.6,
       source = NBSD .. ": Ni(CN)4^2- dfG 472.1, dfH 367.8 kJ/mol, S 218 J/(mol K); Ni^2+ dfG -45.6, dfH -54.0",
       quality = "medium",
-      note = "Smith and Martell 30.22 (recalled).",
+      note = "[SM] 30.22 (recalled).",
     },
     -- ---------------------------------------------------------------- iron
     {
@@ -104,10 +111,7 @@ local species = {
       logK = 45.66, dH = -358.9,
       source = NBSD .. ": Fe(CN)6^4- dfG 694.9, dfH 455.6 kJ/mol, S 95.0 J/(mol K); Fe^2+ dfG -78.90, dfH -89.1",
       quality = "low",
-      note = "Ferrocyanide.  Older compilations print log beta6 = 35 to 35.4 (recalled), which " ..
-             "with their ferricyanide constants does not reproduce the measured ferri/ferro " ..
-             "potential; the NBS entries do (0.358 V).  Computed with NBS Fe^2+, so with the " ..
-             "file's Fe^2+ (Shock et al. 1997) dfG of the complex differs from NBS by 12.6 kJ/mol.",
+      note = "Ferrocyanide.  Older compilations print log beta6 = 35 to 35.4 (recalled), which with their ferricyanide constants does not reproduce the measured ferri/ferro potential; the NBS entries do (0.358 V).  Computed with NBS Fe^2+, so with the file's Fe^2+ (Shock et al. 1997) dfG of the complex differs from NBS by 12.6 kJ/mol.",
     },
     {
       formula = "Fe(CN)6^3-", model = "logk",
@@ -119,9 +123,9 @@ local species = {
     },
 }
 table.insert(species, cyano("Ag^+", 2, "-", 20.48, "Lange's Handbook lists 21.1 (recalled)."))
-table.insert(species, cyano("Cu^+", 2, "-", 24.0))
-table.insert(species, cyano("Cu^+", 3, "2-", 28.59))
-table.insert(species, cyano("Cu^+", 4, "3-", 30.30))
+table.insert(species, cyano("Cu^+", 2, "-", 24.0, "Penneman and Jones 1956 (J. Chem. Phys. 24, 293, abstract read) take the same 1e24 as the basis of their beta3 and beta4; no independent second value was found."))
+table.insert(species, cyano("Cu^+", 3, "2-", 28.59, "Penneman and Jones 1956 (abstract read): 1/2.6e-29, i.e. 28.585, from their measured K3 on beta2 = 1e24."))
+table.insert(species, cyano("Cu^+", 4, "3-", 30.30, "Penneman and Jones 1956 (abstract read): 1/5e-31, i.e. 30.30, from their measured K4 on beta2 = 1e24."))
 
 return {
   element = "C",

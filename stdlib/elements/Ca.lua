@@ -1,15 +1,21 @@
 -- stdlib/elements/Ca.lua: calcium, Ca2+, CaOH+, lime and portlandite.
 -- Data set choice (see docs/data/other-metals.md): Ca2+ with the revised-HKF row of
 -- Shock and Helgeson 1988 exactly as in phlox's reference hkf/hkf_parameters.csv (its
--- dfG agrees with CODATA within 0.02 kJ/mol); CaO and Ca(OH)2 from the NBS tables.
+-- dfG agrees with CODATA within 0.02 kJ/mol); CaO from CODATA (issue 13; it was NBS);
+-- Ca(OH)2 from the NBS tables.
 -- Carbonates and sulfates of Ca live in C.lua and S.lua.
-local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
-local CODATA = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values for Thermodynamics"
-local RH95 = "from memory of Robie and Hemingway 1995 (USGS Bulletin 2131)"
-local K60 = "from memory of Kelley 1960, US Bureau of Mines Bulletin 584"
-local SH88 = "from memory of Shock and Helgeson 1988 (Geochim. Cosmochim. Acta 52, 2009; ion tables, table no. not recalled), as in phlox's reference hkf/hkf_parameters.csv (high confidence, passes the Cp/V check)"
-local BM76 = "from memory of Baes and Mesmer 1976, The Hydrolysis of Cations (I = 0, 25 C)"
-local N90 = "from memory of Nordstrom et al. 1990 (ACS Symp. Ser. 416)"
+--
+-- Primary compilation: CODATA 1989 key values (Ca(cr), CaO; Ca2+ through the SH88 row,
+-- whose dfG agrees with CODATA within 0.02 kJ/mol); NBS 1982 for portlandite, which CODATA
+-- does not cover. That pairing gives log *Ks(portlandite) 22.52 against 22.8 measured
+-- (Baes and Mesmer): said here, a known difference in docs/data-checks.md.
+local NBS = "from memory of [NBS82]"
+local CODATA = "from memory of [CODATA89]"
+local RH95 = "from memory of [RH95]"
+local K60 = "from memory of [K60]"
+local SH88 = "from memory of [SH88] (ion tables, table no. not recalled), as in phlox's reference hkf/hkf_parameters.csv (high confidence, passes the Cp/V check)"
+local BM76 = "from memory of [BM76] (I = 0, 25 C)"
+local N90 = "from memory of [N90]"
 
 return {
   element = "Ca",
@@ -45,13 +51,14 @@ return {
     },
     {
       formula = "CaO(s,lime)", model = "cp",
-      G = -604.03, H = -635.09, S = 39.75,
+      G = -603.30, H = -634.92, S = 38.1,
+      uncertainty = { H = 0.90, S = 0.4 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
       cp = { a = 48.83, b = 4.52e-3, c = -6.53e5 },
       V = 16.764,
       T_range = { 298.15, 2000 },
-      source = NBS .. "; cp: " .. K60 .. "; V: " .. RH95,
+      source = "G, H, S: " .. CODATA .. " (dfG = dfH - T dfS); cp: " .. K60 .. "; V: " .. RH95,
       quality = "high",
-      note = "cp = Kelley's 11.67 + 1.08e-3 T - 1.56e5/T^2 cal/(mol K) times 4.184; gives 42.83 at 298.15 K (NBS Cp 42.80). CODATA 1989: dfH -634.92, S 38.1 (dfG -603.30).",
+      note = "cp = Kelley's 11.67 + 1.08e-3 T - 1.56e5/T^2 cal/(mol K) times 4.184; gives 42.83 at 298.15 K (NBS Cp 42.80). NBS 1982: dfG -604.03, dfH -635.09, S 39.75 (issue 13: the file used NBS; CODATA is now the primary compilation).",
     },
     {
       formula = "Ca(OH)2(s,portlandite)", model = "cp",

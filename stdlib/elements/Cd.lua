@@ -4,9 +4,13 @@
 -- agree on Cd2+ and CdO within 0.12 kJ/mol). Hydrolysis from Baes and Mesmer 1976.
 -- No complete HKF set is recalled for Cd2+, so it is defined by its conventional
 -- formation reaction (log K = -dfG/(RT ln 10), dH = dfH).
-local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
-local CODATA = "CODATA Key Values for Thermodynamics (Cox, Wagman and Medvedev 1989)"
-local BM76 = "from memory of Baes and Mesmer 1976, The Hydrolysis of Cations (I = 0, 25 C)"
+--
+-- Primary compilation: CODATA 1989 (Cd^2+, CdO); NBS 1982 for Cd(OH)2, which CODATA does
+-- not cover (the two tables agree on Cd^2+ and CdO within 0.12 kJ/mol; the Cd(OH)2
+-- solubility check passes). Hydrolysis from Baes and Mesmer 1976.
+local NBS = "from memory of [NBS82]"
+local CODATA = "[CODATA89]"
+local BM76 = "from memory of [BM76] (I = 0, 25 C)"
 
 return {
   element = "Cd",

@@ -2,6 +2,11 @@
 -- (Cl2, hypochlorite, chlorite, chlorate, perchlorate), chloro complexes of the
 -- metals and the common chloride salts.
 --
+-- Primary compilation: NBS 1982 for the chlorine redox species (Cl2, ClO^-, HClO2,
+-- ClO2^-, ClO3^-, ClO4^-); Cl^- is the SH88 HKF row, whose dfG (-131.29 kJ/mol) agrees
+-- with CODATA 1989 (-131.22) within 0.07 kJ/mol. Chloro complexes: Smith and Martell /
+-- Nordstrom et al. 1990 constants at I = 0 (each record names its source).
+--
 -- Data sets: Cl^- carries the revised-HKF parameters of Shock and Helgeson 1988
 -- (recalled from the paper). The
 -- oxychlorine species are written as reactions whose log K and dH are derived
@@ -10,14 +15,16 @@
 -- recalled, not read: "from memory of" says so. docs/data/ligands.md lists what
 -- was left out and the known disagreements.
 
-local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
+local NBS = "from memory of [NBS82]"
 local NBS_DERIVED = "derived here from dfG and dfH of " .. NBS
-local CODATA = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values for Thermodynamics"
-local SH88 = "from memory of Shock and Helgeson 1988 (Geochim. Cosmochim. Acta 52:2009), ion tables (table no. not recalled)"
-local KELLEY = "Cp: from memory of Kelley 1960 (U.S. Bur. Mines Bull. 584), Maier-Kelley coefficients in cal converted x 4.184"
-local N90 = "from memory of Nordstrom, Plummer, Langmuir, Busenberg, May, Jones and Parkhurst 1990 (ACS Symp. Ser. 416, 398-413)"
-local COMPILED = "from memory of the I = 0 constants compiled from Smith and Martell (Critical Stability Constants) in Nordstrom et al. 1990-era aqueous data sets; attribution to the primary paper not recalled"
-local SM = "from memory of Smith and Martell, Critical Stability Constants (I = 0, 25 C)"
+local CODATA = "from memory of [CODATA89]"
+local SH88 = "from memory of [SH88], ion tables (table no. not recalled)"
+local KELLEY = "Cp: from memory of [K60], Maier-Kelley coefficients in cal converted x 4.184"
+local N90 = "from memory of [N90]"
+local COMPILED = "from memory of [COMPILED]"
+local SM = "from memory of [SM] (I = 0, 25 C)"
+local POWELL05 = "[POWELL05], the Hg2+-Cl-, OH- systems (I = 0, 25 C)"
+local POWELL05_READ = POWELL05 .. "; value and +- read in the abstract of its summary (Aust. J. Chem. 2004, doi:10.1071/CH04063)"
 local CAL = { energy = "cal", entropy = "cal" }
 local KCAL = { energy = "kcal" }
 
@@ -60,7 +67,7 @@ return {
     {
       formula = "HClO(aq)", model = "logk",
       reaction = "ClO^- + H^+ = HClO(aq)", logK = 7.537, dH = -13.8,
-      source = "log K from memory of Morris 1966 (J. Phys. Chem. 70:3798), pKa 7.537 at 25 C; dH " .. NBS_DERIVED .. " HClO(aq) (-120.9) and ClO^- (-107.1)",
+      source = "log K from memory of [MORRIS66], pKa 7.537 at 25 C; dH " .. NBS_DERIVED .. " HClO(aq) (-120.9) and ClO^- (-107.1)",
       quality = "high",
       note = "NBS dfG values give log K 7.551",
     },
@@ -162,7 +169,7 @@ return {
       cp = { a = 50.79 }, V = 25.73,
       source = CODATA .. " (dfH, S; dfG derived dfH - T dfS); Cp 298 constant from " .. NBS,
       quality = "high",
-      note = "Cp held at its 25 C value (temperature coefficients not recalled); V from memory of Robie and Hemingway 1995",
+      note = "Cp held at its 25 C value (temperature coefficients not recalled); V from memory of [RH95]",
     },
     {
       formula = "CuCl(s,nantokite)", model = "cp",
@@ -181,14 +188,14 @@ return {
       formula = "NaCl(s,halite)", model = "cp",
       G = -384.138, H = -411.153, S = 72.13,
       cp = { a = 50.50 }, V = 27.015,
-      source = NBS .. "; V from memory of Robie and Hemingway 1995", quality = "high",
+      source = NBS .. "; V from memory of [RH95]", quality = "high",
       note = "Cp held at its 25 C value",
     },
     {
       formula = "KCl(s,sylvite)", model = "cp",
       G = -409.14, H = -436.747, S = 82.59,
       cp = { a = 51.30 }, V = 37.524,
-      source = NBS .. "; V from memory of Robie and Hemingway 1995", quality = "high",
+      source = NBS .. "; V from memory of [RH95]", quality = "high",
       note = "Cp held at its 25 C value",
     },
     -- ---------------------------------------------------------------- mercury and gold (issue 13)
@@ -197,30 +204,52 @@ return {
       G = -210.725, H = -265.37, S = 191.6,
       cp = { a = 102.0 },
       uncertainty = { H = 0.40, S = 0.8 },
-      source = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values (dfH, S and their +-; " ..
-               "dfG derived here as dfH - T dfS); Cp at 298.15 K from " .. NBS .. ", held constant",
+      source = "from memory of [CODATA89], CODATA Key Values (dfH, S and their +-; dfG derived here as dfH - T dfS); Cp at 298.15 K from " .. NBS .. ", held constant",
       quality = "high",
-      note = "Calomel electrode: E0(Hg2Cl2 + 2 e- = 2 Hg + 2 Cl^-) = 0.2680 V with CODATA Cl^-, " ..
-             "0.2687 V with the file's SH88 Cl^-; measured 0.26808 V (recalled).",
+      note = "Calomel electrode: E0(Hg2Cl2 + 2 e- = 2 Hg + 2 Cl^-) = 0.2680 V with CODATA Cl^-, 0.2687 V with the file's SH88 Cl^-; measured 0.26808 V (recalled).",
     },
     {
       formula = "AuCl2^-", model = "logk",
       reaction = "Au(s) + 2 Cl^- + H^+ = AuCl2^- + 0.5 H2(g)",
       logK = -19.507, estimate = "isocoulombic",
-      source = "derived here from E0(AuCl2^- + e- = Au + 2 Cl^-) = 1.154 V, from memory of Bard, " ..
-               "Parsons and Jordan 1985 (Standard Potentials in Aqueous Solution) as printed in the CRC series",
+      source = "derived here from E0(AuCl2^- + e- = Au + 2 Cl^-) = 1.154 V, from memory of [BPJ85] (Standard Potentials in Aqueous Solution) as printed in the CRC series",
       quality = "medium",
-      note = "With AuCl4^- below it gives E0(AuCl4^-/AuCl2^-) = 0.926 V, the value printed beside " ..
-             "it. No dH recalled: temperature by the isocoulombic estimate.",
+      note = "With AuCl4^- below it gives E0(AuCl4^-/AuCl2^-) = 0.926 V, the value printed beside it. No dH recalled: temperature by the isocoulombic estimate.",
     },
     {
       formula = "AuCl4^-", model = "logk",
       reaction = "Au(s) + 4 Cl^- + 3 H^+ = AuCl4^- + 1.5 H2(g)",
       logK = -50.812, estimate = "isocoulombic",
-      source = "derived here from E0(AuCl4^- + 3 e- = Au + 4 Cl^-) = 1.002 V, from memory of Bard, " ..
-               "Parsons and Jordan 1985 (Standard Potentials in Aqueous Solution) as printed in the CRC series",
+      source = "derived here from E0(AuCl4^- + 3 e- = Au + 4 Cl^-) = 1.002 V, from memory of [BPJ85] (Standard Potentials in Aqueous Solution) as printed in the CRC series",
       quality = "medium",
       note = "No dH recalled: temperature by the isocoulombic estimate.",
     },
+    -- Hg(II) chloro complexes (issue 13): Powell et al. 2005, the IUPAC
+    -- critical review, one compilation with Hg(OH)2(aq) in Hg.lua.  The
+    -- review gives reaction enthalpies, but they were not recalled: the
+    -- temperature dependence is the isocoulombic estimate (flagged in stamps).
+    { formula = "HgCl^+", model = "logk", reaction = "Hg^2+ + Cl^- = HgCl^+", logK = 7.31,
+      uncertainty = { logK = 0.04 },  -- +-: from memory of Powell et al. 2005
+      estimate = { method = "isocoulombic", model = "Cd^2+ + Cl^- = CdCl^+" },
+      source = "from memory of " .. POWELL05, quality = "high",
+      note = "[SM] 7.30 (recalled). No dH recalled: temperature by the isocoulombic estimate with the model the library's rule picks (docs/thermo.md)." },
+    { formula = "HgCl2(aq)", model = "logk", reaction = "Hg^2+ + 2 Cl^- = HgCl2(aq)", logK = 14.00,
+      uncertainty = { logK = 0.07 },
+      estimate = { method = "isocoulombic", model = "Cd^2+ + 2 Cl^- = CdCl2(aq)" },
+      source = POWELL05_READ, quality = "high",
+      note = "The dominant Hg(II) species in fresh and condensate waters with chloride, pH below about 7. No dH recalled: temperature by the isocoulombic estimate." },
+    { formula = "HgCl3^-", model = "logk", reaction = "Hg^2+ + 3 Cl^- = HgCl3^-", logK = 14.925,
+      estimate = { method = "isocoulombic", model = "Cd^2+ + 3 Cl^- = CdCl3^-" },
+      source = "from memory of " .. POWELL05 .. " (log K3 0.925 on beta2)", quality = "medium",
+      note = "[SM] 15.0 (recalled). No dH recalled: temperature by the isocoulombic estimate." },
+    { formula = "HgCl4^2-", model = "logk", reaction = "Hg^2+ + 4 Cl^- = HgCl4^2-", logK = 15.535,
+      estimate = { method = "isocoulombic", model = "Pb^2+ + 4 Cl^- = PbCl4^2-" },
+      source = "from memory of " .. POWELL05 .. " (log K4 0.61 on beta3)", quality = "medium",
+      note = "Dominant in seawater and brines. [SM] 15.6 (recalled). No dH recalled: temperature by the isocoulombic estimate." },
+    { formula = "Hg(OH)Cl(aq)", model = "logk", reaction = "Hg^2+ + Cl^- + H2O(l) = Hg(OH)Cl(aq) + H^+", logK = 4.27,
+      uncertainty = { logK = 0.35 },
+      estimate = "isocoulombic",
+      source = POWELL05_READ, quality = "medium",
+      note = "Mixed hydroxo-chloro complex, important near pH 7 in chloride waters. No second published value recalled. No dH recalled: temperature by the isocoulombic estimate." },
   },
 }

@@ -5,11 +5,9 @@
 -- ions, so they are defined by formation reactions.
 -- Every number below was recalled, not read; "from memory of" says so.
 
-local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic " ..
-            "Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
-local KELLEY = "cp from memory of Kelley 1960 (U.S. Bureau of Mines Bulletin 584), " ..
-               "converted from cal with 4.184"
-local BM = "from memory of Baes and Mesmer 1976, The Hydrolysis of Cations (I = 0, 25 C)"
+local NBS = "from memory of [NBS82]"
+local KELLEY = "cp from memory of [K60], converted from cal with 4.184"
+local BM = "from memory of [BM76] (I = 0, 25 C)"
 
 return {
   element = "Co",
@@ -87,20 +85,16 @@ return {
       cp = { a = 123.4, b = 0, c = 0 },
       source = NBS,
       quality = "medium",
-      known_mismatch = "dfG, dfH and S recalled from NBS 1982 miss the cycle by 1.64 kJ/mol; " ..
-                       "one of them is mis-recalled (probably S); check against the printed table",
-      note = "dfG, dfH and S miss the cycle dfG = dfH - T*dfS by 1.6 kJ/mol (one of them " ..
-             "is mis-recalled, probably S). cp: NBS Cp(298.15 K) only.",
+      known_mismatch = "dfG, dfH and S recalled from NBS 1982 miss the cycle by 1.64 kJ/mol; one of them is mis-recalled (probably S); check against the printed table",
+      note = "dfG, dfH and S miss the cycle dfG = dfH - T*dfS by 1.6 kJ/mol (one of them is mis-recalled, probably S). cp: NBS Cp(298.15 K) only.",
     },
     { -- issue 13
       formula = "Co(OH)3(s)", model = "logk",
       reaction = "Co(OH)2(s) + OH^- = Co(OH)3(s) + e-",
       logK = -2.874, estimate = "isocoulombic",
-      source = "derived here from E0(Co(OH)3 + e- = Co(OH)2 + OH^-) = 0.17 V, from memory of the CRC Handbook electrochemical series (P. Vanysek)",
+      source = "derived here from E0(Co(OH)3 + e- = Co(OH)2 + OH^-) = 0.17 V, from memory of the [CRC]",
       quality = "low",
-      note = "Cobalt(III) hydroxide (CoOOH.H2O) on the file's NBS Co(OH)2. Pourbaix 1966 prints " ..
-             "1.005 - 0.0591 pH for the same couple (recalled), 7 mV from this. Two decimals in " ..
-             "the source. No dH recalled: temperature by the isocoulombic estimate.",
+      note = "Cobalt(III) hydroxide (CoOOH.H2O) on the file's NBS Co(OH)2. Pourbaix 1966 prints 1.005 - 0.0591 pH for the same couple (recalled), 7 mV from this. Two decimals in the source. No dH recalled: temperature by the isocoulombic estimate.",
     },
   },
 }

@@ -1,5 +1,8 @@
 -- stdlib/elements/Cu.lua: copper, its ions, hydrolysis species and oxides.
 --
+-- Primary compilation: NBS 1982 (ions and solids); hydrolysis from Baes and Mesmer 1976,
+-- Cu(OH)2(aq) from the IUPAC review (Powell et al. 2007).
+--
 -- Data choice (see docs/data/transition-metals.md): ions and solids from the NBS
 -- tables (Wagman et al. 1982), one table for the whole system; hydrolysis from Baes
 -- and Mesmer 1976, Cu(OH)2(aq) from the IUPAC review (Powell et al. 2007). No Cp is
@@ -7,11 +10,9 @@
 -- the metal (log K = -dfG/(RT ln10), dH = dfH).
 -- Every number below was recalled, not read; "from memory of" says so.
 
-local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic " ..
-            "Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
-local KELLEY = "cp from memory of Kelley 1960 (U.S. Bureau of Mines Bulletin 584), " ..
-               "converted from cal with 4.184"
-local BM = "from memory of Baes and Mesmer 1976, The Hydrolysis of Cations (I = 0, 25 C)"
+local NBS = "from memory of [NBS82]"
+local KELLEY = "cp from memory of [K60], converted from cal with 4.184"
+local BM = "from memory of [BM76] (I = 0, 25 C)"
 
 return {
   element = "Cu",
@@ -33,8 +34,7 @@ return {
       logK = -17.512, dH = 143.34,
       source = "derived here from " .. NBS .. ": Cu+ dfG 49.98, dfH 71.67 kJ/mol, S 40.6 J/(mol K)",
       quality = "medium",
-      note = "No Cp or complete HKF set recalled; defined by its formation reaction " ..
-             "(log K = -2 dfG/(RT ln10)). Van 't Hoff only above 25 C.",
+      note = "No Cp or complete HKF set recalled; defined by its formation reaction (log K = -2 dfG/(RT ln10)). Van 't Hoff only above 25 C.",
     },
     {
       formula = "Cu^2+", model = "logk",
@@ -42,8 +42,7 @@ return {
       logK = -11.473, dH = 64.77,
       source = "derived here from " .. NBS .. ": Cu2+ dfG 65.49, dfH 64.77 kJ/mol, S -99.6 J/(mol K)",
       quality = "high",
-      note = "E0(Cu2+/Cu) = 0.3394 V (CRC 0.3419; CODATA dfG 65.04 gives 0.3370). " ..
-             "No Cp recalled; van 't Hoff only above 25 C.",
+      note = "E0(Cu2+/Cu) = 0.3394 V (CRC 0.3419; CODATA dfG 65.04 gives 0.3370). No Cp recalled; van 't Hoff only above 25 C.",
     },
     -- Cu(II) hydrolysis ------------------------------------------------------
     {
@@ -51,19 +50,15 @@ return {
       reaction = "Cu^2+ + H2O(l) = CuOH^+ + H^+",
       logK = -8.0, estimate = "isocoulombic",
       source = BM, quality = "medium",
-      note = "IUPAC review (Powell et al. 2007) about -7.95, as recalled.",
+      note = "IUPAC review ([POWELL07]) about -7.95, as recalled.",
     },
     {
       formula = "Cu(OH)2(aq)", model = "logk",
       reaction = "Cu^2+ + 2 H2O(l) = Cu(OH)2(aq) + 2 H^+",
       logK = -16.23, estimate = "isocoulombic",
-      source = "from memory of Powell, Brown, Byrne, Gajda, Hefter, Sjoberg and Wanner 2007 " ..
-               "(IUPAC Technical Report, Pure Appl. Chem. 79, 895), log *beta2 at I = 0, 25 C",
+      source = "from memory of [POWELL07] (IUPAC Technical Report, Pure Appl. Chem. 79, 895), log *beta2 at I = 0, 25 C",
       quality = "medium",
-      note = "The neutral species that carries CuO's solubility at near-neutral pH at " ..
-             "temperature. Baes and Mesmer 1976 give only a bound. No dH recalled: held at " ..
-             "25 C until a temperature function is added. At 25 C and 1e-6 it has no field " ..
-             "(CuO + H2O = Cu(OH)2(aq), log K about -8.6).",
+      note = "The neutral species that carries CuO's solubility at near-neutral pH at temperature. [BM76] give only a bound. No dH recalled: held at 25 C until a temperature function is added. At 25 C and 1e-6 it has no field (CuO + H2O = Cu(OH)2(aq), log K about -8.6).",
     },
     {
       formula = "Cu2(OH)2^2+", model = "logk",

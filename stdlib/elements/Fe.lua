@@ -11,29 +11,22 @@
 -- Every number below was recalled, not read, unless its source says "read"; "from memory
 -- of" marks the recalled ones.
 
-local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic " ..
-            "Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
-local KELLEY = "cp from memory of Kelley 1960 (U.S. Bureau of Mines Bulletin 584), " ..
-               "converted from cal with 4.184"
-local SHOCK97 = "from memory of Shock, Sassani, Willis and Sverjensky 1997 (Geochim. Cosmochim. " ..
-                "Acta 61, 907), cation table; table no. not recalled"
-local BM = "from memory of Baes and Mesmer 1976, The Hydrolysis of Cations (I = 0, 25 C)"
-local DIAKONOV99 = "Diakonov, Schott, Martin, Harrichourry and Escalier 1999 (Geochim. Cosmochim. " ..
-                   "Acta 63, 2247; abstract read)"
-local SERGEEVA99 = "Sergeeva, Suleimenov, Evstigneev and Khodakovsky 1999 (Geokhimiya 37, 1218; " ..
-                   "abstract read: 0.5 Fe2O3 + OH- + 1.5 H2O = Fe(OH)4-, 200 C, saturation pressure)"
-local RH95 = "from memory of Robie and Hemingway 1995 (USGS Bulletin 2131)"
-local NORD = "from memory of Nordstrom et al. 1990 (ACS Symp. Ser. 416, revised equilibrium " ..
-             "data for major water-mineral reactions)"
+local NBS = "from memory of [NBS82]"
+local KELLEY = "cp from memory of [K60], converted from cal with 4.184"
+local SHOCK97 = "from memory of [SSWS97], cation table; table no. not recalled"
+local BM = "from memory of [BM76] (I = 0, 25 C)"
+local DIAKONOV99 = "[DIAKONOV99] (abstract read)"
+local SERGEEVA99 = "[SERGEEVA99] (Geokhimiya 37, 1218; abstract read: 0.5 Fe2O3 + OH- + 1.5 H2O = Fe(OH)4-, 200 C, saturation pressure)"
+local RH95 = "from memory of [RH95]"
+local NORD = "from memory of [N90]"
 -- Criss-Cobble correspondence principle (ionic heat capacities from entropies):
 -- mean Cp(25 C..T) of a cation on the absolute scale = alpha(T) + beta(T) S_abs(25 C),
 -- S_abs = S_conv - 5.0 z cal/(mol K); on the conventional scale this is
 -- alpha (1 - z) + beta S_conv, so for two cations of the same element
 -- Cp(Fe3+) - Cp(Fe2+) = -alpha + beta (S(Fe3+) - S(Fe2+)).  Cation parameters for
 -- 25-200 C: alpha = 50, beta = -0.63 (cal/(mol K)).
-local CRISS_COBBLE = "the correspondence principle of Criss and Cobble 1964 (J. Am. Chem. Soc. " ..
-                     "86, 5385 and 5390; cation parameters alpha = 50, beta = -0.63 for 25-200 C, " ..
-                     "S_abs(H+) = -5.0 cal/(mol K), from memory)"
+local CRISS_COBBLE = "the correspondence principle of [CC64] (cation parameters alpha = 50, " ..
+                     "beta = -0.63 for 25-200 C, S_abs(H+) = -5.0 cal/(mol K), from memory)"
 local CC_ALPHA_200, CC_BETA_200 = 50, -0.63          -- cal/(mol K), as above
 local S_FE3, S_FE2 = -66.30, -25.30                  -- cal/(mol K), Shock et al. 1997 (records below)
 local CAL = 4.184                                    -- J per cal (thermochemical)
@@ -53,8 +46,7 @@ return {
       T_range = { 298.15, 1033 },
       source = NBS .. " (S); " .. KELLEY .. " (alpha-Fe: 3.37 + 7.10e-3 T + 0.43e5/T^2 cal/(mol K))",
       quality = "high",
-      note = "alpha-Fe. The polynomial gives Cp(298.15 K) = 24.98 J/(mol K) against NBS 25.10; " ..
-             "it does not follow the magnetic Cp anomaly near the Curie point (1043 K).",
+      note = "alpha-Fe. The polynomial gives Cp(298.15 K) = 24.98 J/(mol K) against NBS 25.10; it does not follow the magnetic Cp anomaly near the Curie point (1043 K).",
     },
     -- ions ----------------------------------------------------------------
     {
@@ -66,10 +58,7 @@ return {
       estimated = true,
       source = SHOCK97,
       quality = "high",
-      note = "Revised Fe2+ (published Cp 25 C = -7.9 cal/(mol K), V = -22.2 cm3/mol; the set " ..
-             "reproduces both). Parameters were estimated by the paper with the Shock and " ..
-             "Helgeson 1988 correlations. Gives E0(Fe2+/Fe) = -0.474 V; CRC lists -0.447 V and " ..
-             "NBS-1982 data give -0.409 V (documented spread).",
+      note = "Revised Fe2+ (published Cp 25 C = -7.9 cal/(mol K), V = -22.2 cm3/mol; the set reproduces both). Parameters were estimated by the paper with the [SH88] correlations. Gives E0(Fe2+/Fe) = -0.474 V; CRC lists -0.447 V and NBS-1982 data give -0.409 V (documented spread).",
     },
     {
       formula = "Fe^3+", model = "logk",
@@ -82,7 +71,7 @@ return {
       source = "derived here from dfG/dfH " .. SHOCK97 ..
                ": Fe3+ dfG -4120 cal/mol, dfH -11850 cal/mol, S -66.30 cal/(mol K); " ..
                "Fe2+ as above; dCp estimated with " .. CRISS_COBBLE .. " from these two entropies; " ..
-               "Cp(H2,g) 28.836 J/(mol K) from memory of the CODATA Key Values (1989)",
+               "Cp(H2,g) 28.836 J/(mol K) from memory of [CODATA89]",
       quality = "medium",
       note = "HKF parameters of Fe3+ not recalled, so the ion is defined against Fe2+ " ..
              "(logK = -2*dG/(RT ln10), dH from dfH). E0(Fe3+/Fe2+) = 0.770 V (CRC 0.771), unchanged " ..
@@ -91,7 +80,7 @@ return {
              "= -24.2 cal/(mol K) (cation parameters for the mean over 25-200 C; the 100 and 150 C " ..
              "parameters give -23.5 and -21.8), held beyond 200 C. Trivalent ions have strongly negative " ..
              "Cp; without it (van 't Hoff only) hematite solubility to Fe3+ at 200 C came out 0.61 log " ..
-             "units above the measurement of Sergeeva et al. 1999 (docs/data-checks.md).",
+             "units above the measurement of [SERGEEVA99] (docs/data-checks.md).",
     },
     -- Fe(II) hydrolysis ------------------------------------------------------
     {
@@ -100,8 +89,7 @@ return {
       logK = -9.5, dH = 55.23,
       source = BM .. "; dH 13.2 kcal/mol " .. NORD,
       quality = "medium",
-      note = "NBS-1982 dfG(FeOH+) = -277.4 kJ/mol is not used: with NBS Fe2+ it implies " ..
-             "log K = -6.8, far from the hydrolysis measurements.",
+      note = "NBS-1982 dfG(FeOH+) = -277.4 kJ/mol is not used: with NBS Fe2+ it implies log K = -6.8, far from the hydrolysis measurements.",
     },
     {
       formula = "Fe(OH)2(aq)", model = "logk",
@@ -137,7 +125,7 @@ return {
       logK = -13.6, estimate = "isocoulombic",
       source = NORD,
       quality = "low",
-      note = "Baes and Mesmer 1976 give only an upper bound (about -12).",
+      note = "[BM76] give only an upper bound (about -12).",
     },
     {
       formula = "Fe(OH)4^-", model = "logk",
@@ -146,17 +134,9 @@ return {
       reaction = "0.5 Fe2O3(s,hematite) + OH^- + 1.5 H2O(l) = Fe(OH)4^-",
       logK = -7.05, dH = 38.43,
       source = "log K(25 C) derived here from dfG(Fe(OH)4^-) = -201.97 kcal/mol of " .. DIAKONOV99 ..
-               " with hematite dfG -744.4 kJ/mol " .. RH95 .. " and OH^-, H2O of Shock and Helgeson " ..
-               "1988 as that paper used them; dH derived here (van 't Hoff through two points) from " ..
-               "that value and log K(200 C) = -4.56 +- 0.10 of " .. SERGEEVA99,
+               " with hematite dfG -744.4 kJ/mol " .. RH95 .. " and OH^-, H2O of [SH88] as that paper used them; dH derived here (van 't Hoff through two points) from that value and log K(200 C) = -4.56 +- 0.10 of " .. SERGEEVA99,
       quality = "medium",
-      note = "Hematite solubility measured to 300 C (Diakonov et al.) and at 200 C (Sergeeva et al.). " ..
-             "dH = R ln10 (-4.56 + 7.05)/(1/298.15 - 1/473.15) = 38.43 kJ/mol; gives log K = -5.70 " ..
-             "at 100 C and -3.82 at 300 C. The reaction keeps one negative charge on each side, so " ..
-             "dCp is small and a constant dH is a fair description (isocoulombic form). " ..
-             "Equivalent to log *beta4(Fe3+ + 4 H2O) = -21.36 at 25 C with this file's Fe3+ " ..
-             "(Baes and Mesmer 1976: -21.6, recalled). The previous record held -21.6 at every " ..
-             "temperature, which put log K of this reaction at -14.2 at 200 C.",
+      note = "Hematite solubility measured to 300 C (Diakonov et al.) and at 200 C (Sergeeva et al.). dH = R ln10 (-4.56 + 7.05)/(1/298.15 - 1/473.15) = 38.43 kJ/mol; gives log K = -5.70 at 100 C and -3.82 at 300 C. The reaction keeps one negative charge on each side, so dCp is small and a constant dH is a fair description (isocoulombic form). Equivalent to log *beta4(Fe3+ + 4 H2O) = -21.36 at 25 C with this file's Fe3+ ([BM76]: -21.6, recalled). The previous record held -21.6 at every temperature, which put log K of this reaction at -14.2 at 200 C.",
     },
     {
       formula = "Fe2(OH)2^4+", model = "logk",
@@ -179,8 +159,7 @@ return {
       cp = { a = 143.43, b = 0, c = 0 },
       source = NBS,
       quality = "high",
-      note = "cp: NBS Cp(298.15 K) only (a = Cp, b = c = 0); magnetite Cp rises steeply " ..
-             "with T, so this underestimates Cp at high temperature.",
+      note = "cp: NBS Cp(298.15 K) only (a = Cp, b = c = 0); magnetite Cp rises steeply with T, so this underestimates Cp at high temperature.",
     },
     {
       formula = "Fe2O3(s,hematite)", model = "cp",
@@ -195,11 +174,9 @@ return {
       formula = "FeO(OH)(s,goethite)", model = "cp",
       G = -488.55, H = -559.3, S = 60.38,
       estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
-      source = "dfH and S from memory of Robie and Hemingway 1995 (USGS Bulletin 2131); " ..
-               "dfG derived here as dfH - T*dfS",
+      source = "dfH and S from memory of [RH95]; dfG derived here as dfH - T*dfS",
       quality = "low",
-      note = "A dfG of -489.8 kJ/mol also comes to mind (it would fail the dfG/dfH/S " ..
-             "cycle by 1.3 kJ/mol). Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats).",
+      note = "A dfG of -489.8 kJ/mol also comes to mind (it would fail the dfG/dfH/S cycle by 1.3 kJ/mol). Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats).",
     },
     {
       formula = "Fe(OH)2(s)", model = "cp",
@@ -215,9 +192,7 @@ return {
       estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
       source = NBS,
       quality = "medium",
-      note = "Precipitated hydroxide of the NBS tables. With the Fe3+ above it gives " ..
-             "log K(Fe(OH)3 + 3H+ = Fe3+ + 3H2O) = 5.63; compare Fe(OH)3(am) below. " ..
-             "Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats).",
+      note = "Precipitated hydroxide of the NBS tables. With the Fe3+ above it gives log K(Fe(OH)3 + 3H+ = Fe3+ + 3H2O) = 5.63; compare Fe(OH)3(am) below. Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats).",
     },
     {
       formula = "Fe(OH)3(am)", model = "logk",

@@ -3,10 +3,13 @@
 -- revised-HKF row of Shock and Helgeson 1988 exactly as in phlox's reference
 -- hkf/hkf_parameters.csv; KOH(s) from the NBS tables. K2O is left out (values not
 -- recalled consistently).
-local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
-local CODATA = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values for Thermodynamics"
-local SH88 = "from memory of Shock and Helgeson 1988 (Geochim. Cosmochim. Acta 52, 2009; ion tables, table no. not recalled), as in phlox's reference hkf/hkf_parameters.csv (high confidence, passes the Cp/V check)"
-local BM76 = "from memory of Baes and Mesmer 1976, The Hydrolysis of Cations (I = 0, 25 C)"
+--
+-- Primary compilation: CODATA 1989 for K^+ (through the SH88 row, whose 25 C dfG agrees
+-- with CODATA within 0.05 kJ/mol); NBS 1982 for KOH(s).
+local NBS = "from memory of [NBS82]"
+local CODATA = "from memory of [CODATA89]"
+local SH88 = "from memory of [SH88] (ion tables, table no. not recalled), as in phlox's reference hkf/hkf_parameters.csv (high confidence, passes the Cp/V check)"
+local BM76 = "from memory of [BM76] (I = 0, 25 C)"
 
 return {
   element = "K",

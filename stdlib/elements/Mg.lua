@@ -1,15 +1,17 @@
 -- stdlib/elements/Mg.lua: magnesium, Mg2+, its hydrolysis species, periclase and brucite.
--- Data set choice (see docs/data/other-metals.md): Mg2+ with the revised-HKF row of
--- Shock and Helgeson 1988 exactly as in phlox's reference hkf/hkf_parameters.csv (high
--- confidence there); MgO and brucite from the NBS tables (one table for the oxide /
--- hydroxide pair). The SH88 dfG of Mg2+ is 0.8 kJ/mol less negative than NBS and
--- 1.4 kJ/mol less negative than CODATA: brucite solubility and E(Mg2+/Mg) carry that.
-local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
-local CODATA = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values for Thermodynamics"
-local RH95 = "from memory of Robie and Hemingway 1995 (USGS Bulletin 2131)"
-local SH88 = "from memory of Shock and Helgeson 1988 (Geochim. Cosmochim. Acta 52, 2009; ion tables, table no. not recalled), as in phlox's reference hkf/hkf_parameters.csv (high confidence, passes the Cp/V check)"
-local BM76 = "from memory of Baes and Mesmer 1976, The Hydrolysis of Cations (I = 0, 25 C)"
-local N90 = "from memory of Nordstrom et al. 1990 (ACS Symp. Ser. 416)"
+-- Primary compilation: CODATA Key Values (Cox, Wagman and Medvedev 1989) for Mg(cr), Mg2+
+-- and MgO; the NBS tables (Wagman et al. 1982) for brucite, which CODATA does not cover.
+-- Mg2+ takes the CODATA dfG/dfH/S with the revised-HKF parameters (a1..a4, c1, c2, omega)
+-- of Shock and Helgeson 1988 for its temperature dependence (issue 13: it was the complete
+-- SH88 row, whose dfG is 1.4 kJ/mol less negative than CODATA; brucite solubility and
+-- epsomite were 0.16-0.24 log units off the measured values). CODATA Mg2+ with NBS brucite
+-- reproduces the measured brucite solubility (log Ksp -11.15); see docs/data/other-metals.md.
+local NBS = "from memory of [NBS82]"
+local CODATA = "from memory of [CODATA89]"
+local RH95 = "from memory of [RH95]"
+local SH88 = "from memory of [SH88] (ion tables, table no. not recalled), as in phlox's reference hkf/hkf_parameters.csv (high confidence, passes the Cp/V check)"
+local BM76 = "from memory of [BM76] (I = 0, 25 C)"
+local N90 = "from memory of [N90]"
 
 return {
   element = "Mg",
@@ -28,13 +30,13 @@ return {
     },
     {
       formula = "Mg^2+", model = "hkf",
-      units = { energy = "cal", entropy = "cal" },
-      G = -108505, H = -111367, S = -33.00,
+      G = -455.375, H = -467.0, S = -137.0,
+      uncertainty = { H = 0.6, S = 4 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
       hkf = { a1 = -0.8217, a2 = -8.599, a3 = 8.390, a4 = -2.390,
               c1 = 20.80, c2 = -5.892, omega = 1.5372 },
-      source = SH88,
+      source = "G, H, S: " .. CODATA .. " (dfG = dfH - T dfS with the CODATA S of Mg(cr) and H2(g)). HKF parameters: " .. SH88,
       quality = "high",
-      note = "published Cp -5.34 cal/(mol K), V -21.55 cm3/mol. Other tables: NBS 1982 dfG -454.8 kJ/mol; CODATA 1989 dfG -455.375 (dfH -467.0, S -137).",
+      note = "issue 13: G/H/S were SH88's -108505 cal/mol, -111367 cal/mol, -33.00 cal/(mol K) (-453.985 kJ/mol, -465.96 kJ/mol, -138.07 J/(mol K)); NBS 1982 dfG -454.8 kJ/mol. The SH88 a1..omega were regressed with SH88's S; the 1.07 J/(mol K) difference in S moves G(300 C) by 0.3 kJ/mol (0.03 in log K). Published Cp -5.34 cal/(mol K), V -21.55 cm3/mol.",
     },
     {
       formula = "MgOH^+", model = "logk",
@@ -52,12 +54,13 @@ return {
     },
     {
       formula = "MgO(s,periclase)", model = "cp",
-      G = -569.43, H = -601.70, S = 26.94,
+      G = -569.31, H = -601.60, S = 26.95,
+      uncertainty = { H = 0.3, S = 0.15 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
       cp = { a = 37.15, b = 0, c = 0 },
       V = 11.248,
-      source = NBS .. "; V: " .. RH95,
+      source = "G, H, S: " .. CODATA .. " (dfG = dfH - T dfS); Cp: " .. NBS .. "; V: " .. RH95,
       quality = "high",
-      note = "cp is NBS Cp at 298.15 K taken as constant. CODATA 1989: dfH -601.60, S 26.95 (dfG -569.31).",
+      note = "cp is NBS Cp at 298.15 K taken as constant. NBS 1982: dfG -569.43, dfH -601.70, S 26.94 (issue 13: the file used NBS; CODATA is now the primary compilation).",
     },
     {
       formula = "Mg(OH)2(s,brucite)", model = "cp",
@@ -66,7 +69,7 @@ return {
       V = 24.63,
       source = NBS .. " (also phlox's reference gibbs_25C.csv); V: " .. RH95,
       quality = "high",
-      note = "cp is NBS Cp at 298.15 K taken as constant. With the SH88 Mg2+ above, log Ksp (brucite = Mg2+ + 2 OH-) = -11.39; Smith and Martell (via Harris) -11.15; see docs/data/other-metals.md.",
+      note = "cp is NBS Cp at 298.15 K taken as constant. CODATA 1989 has no brucite. With the CODATA Mg2+ above, log Ksp (brucite = Mg2+ + 2 OH-) = -11.13 ([SM] via Harris: -11.15); with the SH88 Mg2+ it was -11.39 (see docs/data/other-metals.md).",
     },
   },
 }

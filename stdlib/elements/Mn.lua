@@ -1,15 +1,15 @@
 -- stdlib/elements/Mn.lua: manganese, its ions, oxyanions, hydrolysis species, oxides.
 --
 -- Data choice (see docs/data/transition-metals.md): ions, oxyanions and solids from the
--- NBS tables (Wagman et al. 1982); hydrolysis from Baes and Mesmer 1976. Mn^2+ and
+-- NBS tables (Wagman et al. 1982); hydrolysis from Baes and Mesmer 1976. Mn^3+ is
+-- defined by the CRC Mn3+/Mn2+ potential; its enthalpy and entropy come from the
+-- isocoulombic estimate against the Co3+/Co2+ couple (flagged estimated). Mn^2+ and
 -- MnO4^- have an NBS Cp and use the HKF estimation path; MnO4^2- has none and is
 -- defined by its formation reaction. Every number below was recalled, not read.
 
-local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic " ..
-            "Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
-local KELLEY = "cp from memory of Kelley 1960 (U.S. Bureau of Mines Bulletin 584), " ..
-               "converted from cal with 4.184"
-local BM = "from memory of Baes and Mesmer 1976, The Hydrolysis of Cations (I = 0, 25 C)"
+local NBS = "from memory of [NBS82]"
+local KELLEY = "cp from memory of [K60], converted from cal with 4.184"
+local BM = "from memory of [BM76] (I = 0, 25 C)"
 
 return {
   element = "Mn",
@@ -31,17 +31,16 @@ return {
       estimate = { Cp = 50 },
       source = NBS .. " (dfG, dfH, S and Cp)",
       quality = "high",
-      note = "HKF parameters not recalled; estimated by the loader from Cp. V not " ..
-             "recalled: volume terms zero (poor at high pressure).",
+      note = "HKF parameters not recalled; estimated by the loader from Cp. V not recalled: volume terms zero (poor at high pressure).",
     },
     {
       formula = "Mn^3+", model = "logk",
       reaction = "2 Mn^2+ + 2 H^+ = 2 Mn^3+ + H2(g)",
-      logK = -52.113, estimate = "isocoulombic",
-      source = "derived here from E0(Mn3+/Mn2+) = 1.5415 V, from memory of CRC Handbook of " ..
-               "Chemistry and Physics, Electrochemical Series (P. Vanysek) (log K = -2 F E0/(RT ln10))",
+      logK = -52.113,
+      estimate = { method = "isocoulombic", model = "2 Co^2+ + 2 H^+ = 2 Co^3+ + H2(g)" },
+      source = "derived here from E0(Mn3+/Mn2+) = 1.5415 V, from memory of [CRC] (log K = -2 F E0/(RT ln10)); dH, S and Cp by the isocoulombic estimate (Gu, Gammons and Bloom 1994) with the Co2+/Co3+ couple of Co.lua as model reaction",
       quality = "low",
-      note = "Disproportionates to Mn2+ and MnO2 except in strong acid; no dH (temperature by the isocoulombic estimate).",
+      note = "Disproportionates to Mn2+ and MnO2 except in strong acid. dfG = -79.37 kJ/mol. No dfH or S of Mn3+ is recalled from any table, so the temperature function is the isocoulombic estimate with a model reaction of the same charge type (Mn2+ + Co3+ = Mn3+ + Co2+ taken with dS = dCp = 0): S(Mn3+) = S(Mn2+) - 193.5 = -267.1 J/(mol K) and dfH = -110.22 kJ/mol at 25 C (closes dfG = dfH - T dfS with S(Mn,s) 32.01 and S(H2,g) 130.68 to the 0.12 kJ/mol of the NBS Mn2+ itself). Before the model the couple kept dS = 0 (E fixed at 1.5415 V at every temperature); now it rises by 1.33 mV/K (1.641, 1.774 and 1.907 V at 100, 200 and 300 C), as the Fe3+/Fe2+ couple does (1.10 mV/K with the Shock et al. 1997 ions of Fe.lua).",
     },
     {
       formula = "MnO4^-", model = "hkf",
@@ -64,7 +63,7 @@ return {
       formula = "MnOH^+", model = "logk",
       reaction = "Mn^2+ + H2O(l) = MnOH^+ + H^+",
       logK = -10.59, dH = 60.25,
-      source = BM .. "; dH 14.4 kcal/mol from memory of Nordstrom et al. 1990 (ACS Symp. Ser. 416)",
+      source = BM .. "; dH 14.4 kcal/mol from memory of [N90]",
       quality = "medium",
     },
     {
@@ -139,8 +138,7 @@ return {
       estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
       source = NBS,
       quality = "medium",
-      note = "Amorphous precipitate as listed in the source (not crystalline pyrochroite). " ..
-             "Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats).",
+      note = "Amorphous precipitate as listed in the source (not crystalline pyrochroite). Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats).",
     },
     { -- issue 13
       formula = "Mn(OH)2(s,pyrochroite)", model = "logk",
@@ -148,9 +146,7 @@ return {
       logK = 15.2, estimate = "isocoulombic",
       source = BM,
       quality = "medium",
-      note = "Crystalline Mn(OH)2. The NBS amorphous solid above gives 15.30 with the file's " ..
-             "Mn^2+: the two differ by less than the scatter of the measurements. No dH " ..
-             "recalled: temperature by the isocoulombic estimate.",
+      note = "Crystalline Mn(OH)2. The NBS amorphous solid above gives 15.30 with the file's Mn^2+: the two differ by less than the scatter of the measurements. No dH recalled: temperature by the isocoulombic estimate.",
     },
   },
 }

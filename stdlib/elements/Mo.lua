@@ -5,7 +5,9 @@
 -- Left out: H2MoO4(aq) (second protonation constant not recalled with confidence),
 -- polymolybdates (Mo7O24^6-, Mo8O26^4-), Mo(V) species and Mo(III) hydrolysis; Mo^3+
 -- itself is defined from the CRC standard potential (issue 13).
-local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
+--
+-- Primary compilation: NBS 1982; Mo^3+ from the CRC standard potential (no NBS value).
+local NBS = "from memory of [NBS82]"
 
 return {
   element = "Mo",
@@ -47,7 +49,7 @@ return {
       formula = "HMoO4^-", model = "logk",
       reaction = "MoO4^2- + H^+ = HMoO4^-",
       logK = 4.24, estimate = "isocoulombic",
-      source = "from memory of Smith and Martell, Critical Stability Constants (I = 0, 25 C)",
+      source = "from memory of [SM] (I = 0, 25 C)",
       quality = "low",
       note = "published values at various ionic strengths spread from about 3.5 to 4.3; at millimolar Mo and low pH polymolybdates (not included) dominate.",
     },
@@ -55,10 +57,9 @@ return {
       formula = "Mo^3+", model = "logk",
       reaction = "Mo(s) + 3 H^+ = Mo^3+ + 1.5 H2(g)",
       logK = 10.142, estimate = "isocoulombic",
-      source = "derived here from E0(Mo^3+/Mo) = -0.200 V, from memory of the CRC Handbook electrochemical series (P. Vanysek)",
+      source = "derived here from E0(Mo^3+/Mo) = -0.200 V, from memory of the [CRC]",
       quality = "low",
-      note = "Molybdenum(III) in strong acid; no hydrolysis constants recalled. No dH " ..
-             "recalled: temperature by the isocoulombic estimate.",
+      note = "Molybdenum(III) in strong acid; no hydrolysis constants recalled. No dH recalled: temperature by the isocoulombic estimate.",
     },
   },
 }

@@ -1,6 +1,12 @@
 -- stdlib/elements/N.lua: nitrogen. Ammonia/ammonium, dinitrogen, nitrite,
 -- nitrous acid, nitrate, nitric oxide; ammine complexes of the metals.
 --
+-- Primary compilation: NBS 1982 for the nitrogen redox species (NO2^-, HNO2, NO, N2(aq),
+-- N2O); NH3(aq), NH4^+ and NO3^- carry SH88/SHS89 HKF sets whose 25 C values follow
+-- CODATA 1989 (NBS dfG(NO3^-) is 2.1 kJ/mol apart: docs/data/ligands.md). Ammine
+-- constants as each record names them (Bjerrum 1941 sets; Cu(II) at I = 0 from Smith and
+-- Martell, issue 13).
+--
 -- Data sets: NH3(aq), NH4^+ and NO3^- carry the revised-HKF parameters of Shock
 -- and Helgeson 1988 / Shock, Helgeson and Sverjensky 1989 (as recalled in the
 -- project reference table tests/reference/hkf). NO2^- is an HKF estimate from
@@ -13,14 +19,14 @@
 -- N2 is the thermodynamically stable form over most of the water field, which a
 -- diagram shows but water rarely reaches.
 
-local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
+local NBS = "from memory of [NBS82]"
 local NBS_DERIVED = "derived here from dfG and dfH of " .. NBS
-local CODATA = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values for Thermodynamics (dfH, S; dfG derived here as dfH - T dfS)"
-local SH88 = "from memory of Shock and Helgeson 1988 (Geochim. Cosmochim. Acta 52:2009), ion tables (table no. not recalled)"
-local SHS89 = "from memory of Shock, Helgeson and Sverjensky 1989 (Geochim. Cosmochim. Acta 53:2157), neutral species (table no. not recalled)"
-local KELLEY = "Cp: from memory of Kelley 1960 (U.S. Bur. Mines Bull. 584), Maier-Kelley coefficients in cal converted x 4.184"
-local BJERRUM = "from memory of J. Bjerrum 1941, Metal Ammine Formation in Aqueous Solution (2 mol/L NH4NO3, 30 C), as reproduced in Smith and Martell"
-local SM = "from memory of Smith and Martell, Critical Stability Constants (I = 0, 25 C)"
+local CODATA = "from memory of [CODATA89] (dfH, S; dfG derived here as dfH - T dfS)"
+local SH88 = "from memory of [SH88], ion tables (table no. not recalled)"
+local SHS89 = "from memory of [SHS89], neutral species (table no. not recalled)"
+local KELLEY = "Cp: from memory of [K60], Maier-Kelley coefficients in cal converted x 4.184"
+local BJERRUM = "from memory of J. [BJ41] (2 mol/L NH4NO3, 30 C), as reproduced in [SM]"
+local SM = "from memory of [SM] (I = 0, 25 C)"
 local BJ_NOTE = "Bjerrum's medium is 2 mol/L NH4NO3 at 30 C, not I = 0 and 25 C; for a neutral ligand the medium effect is modest but real (a few tenths per step); dH not recalled (temperature: isocoulombic estimate)"
 local CAL = { energy = "cal", entropy = "cal" }
 
@@ -65,7 +71,7 @@ local species = {
     formula = "N2(g)", model = "cp",
     G = 0, H = 0, S = 191.61,
     cp = { a = 28.577, b = 3.766e-3, c = -0.502e5 },
-    source = "S from memory of Cox, Wagman and Medvedev 1989 (CODATA); " .. KELLEY .. " (6.83 + 0.90e-3 T - 0.12e5/T^2 cal)",
+    source = "S from memory of [CODATA89]; " .. KELLEY .. " (6.83 + 0.90e-3 T - 0.12e5/T^2 cal)",
     quality = "high",
   },
   {
@@ -86,7 +92,7 @@ local species = {
     formula = "NO2^-", model = "hkf",
     G = -32.2, H = -104.6, S = 123.0,
     estimate = { Cp = -97.5 },
-    source = NBS .. " (dfG, dfH, S and Cp 25 C); HKF parameters estimated by the loader (Shock and Helgeson 1988 correlations)",
+    source = NBS .. " (dfG, dfH, S and Cp 25 C); HKF parameters estimated by the loader ([SH88] correlations)",
     quality = "medium",
     note = "V not recalled, so the volume terms are zero: poor at high pressure. NBS dfG is consistent with NBS NO3^- (-108.74); with the SH88 NO3^- above the NO3^-/NO2^- couple moves by 11 mV",
   },
@@ -95,7 +101,7 @@ local species = {
     reaction = "NO2^- + H^+ = HNO2(aq)", logK = 3.224, dH = -14.6,
     source = NBS_DERIVED .. " HNO2(aq) (-50.6, -119.2; S 135.6) and NO2^-",
     quality = "medium",
-    note = "literature pKa 3.15 (Smith and Martell) to 3.35",
+    note = "literature pKa 3.15 ([SM]) to 3.35",
   },
   {
     formula = "NO(g)", model = "cp",
@@ -122,14 +128,13 @@ for _, s in ipairs(sets) do
 end
 -- Cu(II) ammines at I = 0 and 25 C (issue 13: Bjerrum's 2 mol/L NH4NO3, 30 C
 -- set, log beta 4.31, 7.98, 11.02, 13.32, was used as if at I = 0).
-local CU_I0 = "I = 0, 25 C; Bjerrum 1941 (2 mol/L NH4NO3, 30 C) gives higher values, log beta4 13.32; no dH recalled"
+local CU_I0 = "I = 0, 25 C; [BJ41] (2 mol/L NH4NO3, 30 C) gives higher values, log beta4 13.32; no dH recalled"
 for n, lb in ipairs({ 4.04, 7.47, 10.27, 11.75 }) do
   table.insert(species, ammine("Cu", "2+", n, lb, "medium", SM, CU_I0))
 end
 table.insert(species, ammine("Cu", "2+", 5, 11.29, "low",
   "derived here: log beta4 = 11.75 (" .. SM .. ") plus log K5 = -0.46 (" .. BJERRUM .. ")",
-  "Cu(NH3)5^2+ forms only in concentrated ammonia. The fifth step is Bjerrum's (his medium), " ..
-  "added to the I = 0 beta4: for a neutral ligand the medium shifts one step by a few tenths. No dH recalled"))
+  "Cu(NH3)5^2+ forms only in concentrated ammonia. The fifth step is Bjerrum's (his medium), added to the I = 0 beta4: for a neutral ligand the medium shifts one step by a few tenths. No dH recalled"))
 table.insert(species, ammine("Cu", "+", 1, 5.93, "low", SM, "dH not recalled"))
 table.insert(species, ammine("Cu", "+", 2, 10.86, "medium", SM, "dominant Cu(I) species in ammoniacal leach liquors; dH not recalled"))
 table.insert(species, ammine("Ag", "+", 1, 3.31, "medium", SM, "dH not recalled"))

@@ -2,10 +2,13 @@
 -- Na2O and NaOH(s). Ion pairs and salts with ligands (NaCl(aq), NaSO4^-, ...) are in the
 -- ligand files. Na+ uses the revised-HKF row of Shock and Helgeson 1988 exactly as in
 -- phlox's reference hkf/hkf_parameters.csv; the solids come from the NBS tables.
-local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
-local CODATA = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values for Thermodynamics"
-local SH88 = "from memory of Shock and Helgeson 1988 (Geochim. Cosmochim. Acta 52, 2009; ion tables, table no. not recalled), as in phlox's reference hkf/hkf_parameters.csv (high confidence, passes the Cp/V check)"
-local BM76 = "from memory of Baes and Mesmer 1976, The Hydrolysis of Cations (I = 0, 25 C)"
+--
+-- Primary compilation: CODATA 1989 for Na^+ (through the SH88 row, whose 25 C dfG agrees
+-- with CODATA within 0.05 kJ/mol); NBS 1982 for the solids.
+local NBS = "from memory of [NBS82]"
+local CODATA = "from memory of [CODATA89]"
+local SH88 = "from memory of [SH88] (ion tables, table no. not recalled), as in phlox's reference hkf/hkf_parameters.csv (high confidence, passes the Cp/V check)"
+local BM76 = "from memory of [BM76] (I = 0, 25 C)"
 
 return {
   element = "Na",

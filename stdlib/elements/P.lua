@@ -2,6 +2,10 @@
 -- calcium and magnesium phosphate complexes, and the common phosphate minerals
 -- (apatite, brushite, strengite, vivianite).
 --
+-- Primary compilation: Smith and Martell (Critical Stability Constants, I = 0) for the
+-- acid constants, with NBS 1982 enthalpies; H2PO4^- and HPO4^2- carry the SH88 values;
+-- the minerals are defined by their measured solubility products (each record names it).
+--
 -- Data sets: H2PO4^- carries revised-HKF parameters of Shock and Helgeson 1988
 -- as recalled in the project reference table tests/reference/hkf (its c2 was
 -- reconstructed there from the published Cp, see the note). HPO4^2- uses the
@@ -10,12 +14,12 @@
 -- reactions (Smith and Martell constants, NBS 1982 enthalpies). Nearly every
 -- number was recalled, not read.
 
-local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
-local SH88 = "from memory of Shock and Helgeson 1988 (Geochim. Cosmochim. Acta 52:2009), ion tables (table no. not recalled)"
-local SM = "from memory of Smith and Martell, Critical Stability Constants (I = 0, 25 C)"
-local CAP = "from memory of Chughtai, Marshall and Nancollas 1968 (J. Phys. Chem. 72:208) as compiled with I = 0 constants in Nordstrom et al. 1990-era aqueous data sets"
-local MGP = "from memory of I = 0 constants compiled in Nordstrom et al. 1990-era aqueous data sets; primary paper not recalled"
-local NRIAGU = "from memory of Nriagu 1972 (Geochim. Cosmochim. Acta 36:459), solubility of strengite and vivianite"
+local NBS = "from memory of [NBS82]"
+local SH88 = "from memory of [SH88], ion tables (table no. not recalled)"
+local SM = "from memory of [SM] (I = 0, 25 C)"
+local CAP = "from memory of [CHUGHTAI68] as compiled in [COMPILED]"
+local MGP = "from memory of [COMPILED]"
+local NRIAGU = "from memory of [NRIAGU72], solubility of strengite and vivianite"
 local CAL = { energy = "cal", entropy = "cal" }
 local KCAL = { energy = "kcal" }
 
@@ -38,7 +42,7 @@ return {
       estimate = { Cp = -243.9, V = 5.4 },  -- J/(mol K) and cm3/mol (estimate is always in J)
       source = SH88 .. " (dfG, dfH, S); estimate Cp = -58.3 cal/(mol K) = -243.9 J/(mol K) and V = 5.4 cm3/mol are the published 25 C values as recalled in that table's README (weak)",
       quality = "low",
-      note = "the recalled HKF set fails the Cp check (c1 repeats the omega digits), so the loader estimates the parameters from Cp, V, S and charge. log K(H2PO4^- = HPO4^2- + H^+) from these dfG -7.21 (Smith and Martell 7.20)",
+      note = "the recalled HKF set fails the Cp check (c1 repeats the omega digits), so the loader estimates the parameters from Cp, V, S and charge. log K(H2PO4^- = HPO4^2- + H^+) from these dfG -7.21 ([SM] 7.20)",
     },
     {
       formula = "PO4^3-", model = "logk",
@@ -71,12 +75,12 @@ return {
     -- ---------------------------------------------------------------- minerals
     { formula = "Ca5(PO4)3OH(s,hydroxyapatite)", model = "logk",
       reaction = "Ca5(PO4)3OH(s,hydroxyapatite) = 5 Ca^2+ + 3 PO4^3- + OH^-", logK = -58.5, estimate = "isocoulombic",
-      source = "from memory of McDowell, Gregory and Brown 1977 (J. Res. Natl. Bur. Stand. 81A:273); the abstract of 'Studies on the incongruent solubility of hydroxyapatite' (scilit.com, read) brackets the product between 1e-57 and 1e-60",
+      source = "from memory of [MGB77]; the abstract of 'Studies on the incongruent solubility of hydroxyapatite' (scilit.com, read) brackets the product between 1e-57 and 1e-60",
       quality = "low",
       note = "apatite dissolves incongruently and its solubility depends on surface phases; dH not recalled" },
     { formula = "CaHPO4*2H2O(s,brushite)", model = "logk",
       reaction = "CaHPO4*2H2O(s,brushite) = Ca^2+ + HPO4^2- + 2 H2O(l)", logK = -6.59, estimate = "isocoulombic",
-      source = "from memory of Gregory, Moreno and Brown 1970 (J. Res. Natl. Bur. Stand. 74A:461)",
+      source = "from memory of [GMB70]",
       quality = "medium", note = "metastable with respect to apatite but nucleates first at pH below about 6; dH not recalled" },
     { formula = "FePO4*2H2O(s,strengite)", model = "logk",
       reaction = "FePO4*2H2O(s,strengite) = Fe^3+ + PO4^3- + 2 H2O(l)", logK = -26.4, estimate = "isocoulombic",

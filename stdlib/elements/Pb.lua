@@ -5,10 +5,12 @@
 -- Pb(IV) appears only in the solids PbO2 and Pb3O4 (no Pb4+ aqueous ion).
 -- No complete HKF set is recalled for Pb2+, so it is defined by its conventional
 -- formation reaction (log K = -dfG/(RT ln 10), dH = dfH).
-local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
-local CODATA = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values for Thermodynamics"
-local K60 = "from memory of Kelley 1960, US Bureau of Mines Bulletin 584"
-local BM76 = "from memory of Baes and Mesmer 1976, The Hydrolysis of Cations (I = 0, 25 C)"
+--
+-- Primary compilation: NBS 1982 (ions and solids); hydrolysis from Baes and Mesmer 1976.
+local NBS = "from memory of [NBS82]"
+local CODATA = "from memory of [CODATA89]"
+local K60 = "from memory of [K60]"
+local BM76 = "from memory of [BM76] (I = 0, 25 C)"
 
 return {
   element = "Pb",

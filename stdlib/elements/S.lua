@@ -11,16 +11,16 @@
 -- Complexes: stability constants at I = 0, 25 C. Nearly every number was
 -- recalled, not read ("from memory of").
 
-local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
+local NBS = "from memory of [NBS82]"
 local NBS_DERIVED = "derived here from dfG and dfH of " .. NBS
-local CODATA = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values for Thermodynamics (dfH, S; dfG derived here as dfH - T dfS)"
-local SH88 = "from memory of Shock and Helgeson 1988 (Geochim. Cosmochim. Acta 52:2009), ion tables (table no. not recalled)"
-local SHS89 = "from memory of Shock, Helgeson and Sverjensky 1989 (Geochim. Cosmochim. Acta 53:2157), neutral species (table no. not recalled)"
-local KELLEY = "Cp: from memory of Kelley 1960 (U.S. Bur. Mines Bull. 584), Maier-Kelley coefficients in cal converted x 4.184"
-local HDNB = "Cp: from memory of Helgeson, Delany, Nesbitt and Bird 1978 (Am. J. Sci. 278-A), Maier-Kelley coefficients in cal converted x 4.184"
-local RH95 = "from memory of Robie and Hemingway 1995 (U.S. Geol. Surv. Bull. 2131)"
-local N90 = "from memory of Nordstrom, Plummer, Langmuir, Busenberg, May, Jones and Parkhurst 1990 (ACS Symp. Ser. 416, 398-413)"
-local COMPILED = "from memory of the I = 0 constants compiled from Smith and Martell (Critical Stability Constants) in Nordstrom et al. 1990-era aqueous data sets; attribution to the primary paper not recalled"
+local CODATA = "from memory of [CODATA89] (dfH, S; dfG derived here as dfH - T dfS)"
+local SH88 = "from memory of [SH88], ion tables (table no. not recalled)"
+local SHS89 = "from memory of [SHS89], neutral species (table no. not recalled)"
+local KELLEY = "Cp: from memory of [K60], Maier-Kelley coefficients in cal converted x 4.184"
+local HDNB = "Cp: from memory of [HDNB78], Maier-Kelley coefficients in cal converted x 4.184"
+local RH95 = "from memory of [RH95]"
+local N90 = "from memory of [N90]"
+local COMPILED = "from memory of [COMPILED]"
 local CAL = { energy = "cal", entropy = "cal" }
 local KCAL = { energy = "kcal" }
 
@@ -47,9 +47,9 @@ return {
     {
       formula = "S^2-", model = "logk",
       reaction = "HS^- = S^2- + H^+", logK = -17.4, estimate = "isocoulombic",
-      source = "from memory of Migdisov, Williams-Jones, Lakshtanov and Alekhin 2002 (Geochim. Cosmochim. Acta 66:1713), pK2 of H2S about 17.4 at 25 C",
+      source = "from memory of [MIGDISOV02], pK2 of H2S about 17.4 at 25 C",
       quality = "low",
-      note = "CONTROVERSY: the second dissociation constant of H2S is poorly known. Older tables (NBS 1982 dfG(S^2-) = 85.8 kJ/mol; Nordstrom et al. 1990) give pK2 about 12.9; spectroscopic work since the 1980s gives 17 to 19 (Schoonen and Barnes 1988 about 18.5; Meyer et al. 1983 about 19). S^2- is never a major species below pH 14 with any of the modern values. dH not recalled (log K held constant). Do not use S^2- based solubility products with this value: sulfide minerals here are defined by dfG.",
+      note = "CONTROVERSY: the second dissociation constant of H2S is poorly known. Older tables (NBS 1982 dfG(S^2-) = 85.8 kJ/mol; [N90]) give pK2 about 12.9; spectroscopic work since the 1980s gives 17 to 19 (Schoonen and Barnes 1988 about 18.5; Meyer et al. 1983 about 19). S^2- is never a major species below pH 14 with any of the modern values. dH not recalled (log K held constant). Do not use S^2- based solubility products with this value: sulfide minerals here are defined by dfG.",
     },
     {
       formula = "S(s,rhombic)", model = "cp",
@@ -57,7 +57,7 @@ return {
       uncertainty = { S = 0.050 },  -- +-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)
       cp = { a = 14.979, b = 26.108e-3 },
       T_range = { 273.15, 368.3 },
-      source = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values (S); " .. KELLEY .. " (3.58 + 6.24e-3 T cal)",
+      source = "from memory of [CODATA89], CODATA Key Values (S); " .. KELLEY .. " (3.58 + 6.24e-3 T cal)",
       quality = "high",
       note = "rhombic sulfur turns monoclinic at 368.3 K and melts near 388 K; no data above that here. Cp(298.15) from the fit 22.76 vs NBS 22.64",
     },
@@ -122,7 +122,7 @@ return {
       G = -180630, H = -212500, S = 30.0,
       hkf = { a1 = 6.9788, a2 = 9.259, a3 = 2.1108, a4 = -3.1618, c1 = 20.0961, c2 = -1.955, omega = 1.1748 },
       source = SH88, quality = "medium",
-      note = "log K(HSO4^- = SO4^2- + H^+) from these dfG: -1.98 (Nordstrom et al. 1990: -1.988)",
+      note = "log K(HSO4^- = SO4^2- + H^+) from these dfG: -1.98 ([N90]: -1.988)",
     },
 
     -- ---------------------------------------------------------------- metal sulfides
@@ -132,18 +132,18 @@ return {
       T_range = { 273.15, 411 },
       source = NBS .. " (FeS cr); V " .. RH95, quality = "medium",
       note = "Troilite is the stoichiometric end member of the pyrrhotite group (Fe(1-x)S, x = 0 to 0.125); " ..
-             "the library's pyrrhotite, and the iron sulfide of a sour-corrosion map above pH about 6 at 25 C " ..
-             "(1e-3 sulfide). Non-stoichiometric pyrrhotite (Fe7S8) has no record: no data recalled. " ..
+             "the library's pyrrhotite, and the iron sulfide of a sour-corrosion map from pH 7.4 at 25 C and " ..
+             "1e-6 iron (the edge FeS + H+ = FeHS+ sets). Non-stoichiometric pyrrhotite (Fe7S8) has no record: no data recalled. " ..
              "Lambda transition at 411 K not modelled; Cp held at its 25 C value (NBS 50.54 J/(mol K))",
     },
     {
       formula = "FeS(s,mackinawite)", model = "logk",
       reaction = "FeS(s,mackinawite) + 2 H^+ = Fe^2+ + H2S(aq)", logK = 3.5, estimate = "isocoulombic",
-      source = "from memory of Rickard 2006 (Geochim. Cosmochim. Acta 70:5779), log K*sp = 3.5 +- 0.25 " ..
+      source = "from memory of [RICKARD06], log K*sp = 3.5 +- 0.25 " ..
                "for FeS(m) + 2 H+ = Fe2+ + H2S(aq)",
       quality = "medium",
       note = "The first iron sulfide to form in sour corrosion and in sediments; metastable against troilite " ..
-             "(pyrrhotite) and pyrite. Second source, read: Benning, Wilkin and Barnes 2000 (abstract) fit " ..
+             "(pyrrhotite) and pyrite. Second source, read: [BWB00] (abstract) fit " ..
              "log K = 2848.779/T - 6.347 to measured solubility at 25-95 C (3.21 at 25 C, 1.39 at 95 C). Its " ..
              "slope (dH = -54.5 kJ/mol) is not used: it is 25 kJ/mol more exothermic than troilite's " ..
              "calorimetric dissolution enthalpy (-29.9 kJ/mol with these files), which would make the metastable " ..
@@ -160,7 +160,7 @@ return {
       cp = { a = 74.810, b = 5.523e-3, c = -12.761e5 }, V = 23.94,
       source = NBS .. "; " .. HDNB .. " (17.88 + 1.32e-3 T - 3.05e5/T^2 cal); V " .. RH95,
       quality = "medium",
-      note = "Robie and Hemingway 1995 (after Toulmin) give dfH about -171.5 kJ/mol, dfG about -160.2 (recalled): pyrite's dfG is uncertain by about 6 kJ/mol",
+      note = "[RH95] (after Toulmin) give dfH about -171.5 kJ/mol, dfG about -160.2 (recalled): pyrite's dfG is uncertain by about 6 kJ/mol",
     },
     {
       formula = "CuS(s,covellite)", model = "cp",
@@ -259,7 +259,7 @@ return {
     { formula = "PbSO4(aq)", model = "logk", reaction = "Pb^2+ + SO4^2- = PbSO4(aq)", logK = 2.75, estimate = { method = "isocoulombic", model = "Cd^2+ + SO4^2- = CdSO4(aq)" },
       source = COMPILED, quality = "low", note = "dH not recalled" },
     { formula = "NiSO4(aq)", model = "logk", reaction = "Ni^2+ + SO4^2- = NiSO4(aq)", logK = 2.29, estimate = { method = "isocoulombic", model = "Sr^2+ + SO4^2- = SrSO4(aq)" },
-      source = COMPILED, quality = "low", note = "dH not recalled; Smith and Martell list about 2.3" },
+      source = COMPILED, quality = "low", note = "dH not recalled; [SM] list about 2.3" },
     { formula = "AgSO4^-", model = "logk", reaction = "Ag^+ + SO4^2- = AgSO4^-", logK = 1.29, dH = 1.49, units = KCAL,
       source = COMPILED, quality = "low" },
 
@@ -267,8 +267,8 @@ return {
     {
       formula = "FeHS^+", model = "logk",
       reaction = "Fe^2+ + HS^- = FeHS^+", logK = 5.07, estimate = "isocoulombic",
-      source = "from memory of Luther, Rickard, Theberge and Olroyd 1996 (Environ. Sci. Technol. 30, 671; the " ..
-               "abstract, read, names the FeSH+ and Fe2(SH)3+ complexes but its constants were not in the excerpt): " ..
+      source = "from memory of [LUTHER96] (the abstract, read, names the FeSH+ and Fe2(SH)3+ complexes " ..
+               "but its constants were not in the excerpt): " ..
                "thermodynamic constant (I = 0) log K = 5.07 +- 0.09, as recalled",
       quality = "low",
       note = "The iron(II) bisulfide complex of sour and anoxic waters (written FeSH+ in the voltammetric literature). " ..
@@ -285,9 +285,7 @@ return {
       logK = -4.36, logK_T = { 197.52, 0, -8669.8, -69.835 },
       T_range = { 273.15, 373.15 },
       source = N90 .. ", analytic log K(T) of the measured solubility", quality = "high",
-      note = "Issue 13: was NBS 1982 dfG with the SH88 ions (log Ksp -4.31). Defined by the measured " ..
-             "solubility product so that ions and solid cannot come from different tables. " ..
-             "With the gypsum equation below the gypsum-anhydrite transition in water falls at 58 C.",
+      note = "Issue 13: was NBS 1982 dfG with the SH88 ions (log Ksp -4.31). Defined by the measured solubility product so that ions and solid cannot come from different tables. With the gypsum equation below the gypsum-anhydrite transition in water falls at 58 C.",
     },
     {
       formula = "CaSO4*2H2O(s,gypsum)", model = "logk",
@@ -295,8 +293,7 @@ return {
       logK = -4.58, logK_T = { 68.2401, 0, -3221.51, -25.0627 },
       T_range = { 273.15, 373.15 },
       source = N90 .. ", analytic log K(T) of the measured solubility", quality = "high",
-      note = "Issue 13: was NBS 1982 gypsum with the SH88 ions (log Ksp -4.515, solubility 18 mmol/kg " ..
-             "against 15.1-15.4 measured). The equation gives -4.581 at 25 C.",
+      note = "Issue 13: was NBS 1982 gypsum with the SH88 ions (log Ksp -4.515, solubility 18 mmol/kg against 15.1-15.4 measured). The equation gives -4.581 at 25 C.",
     },
     {
       formula = "MgSO4*7H2O(s,epsomite)", model = "cp",
@@ -318,7 +315,7 @@ return {
     {
       formula = "Cu4(SO4)(OH)6(s,brochantite)", model = "logk",
       reaction = "Cu4(SO4)(OH)6(s,brochantite) + 6 H^+ = 4 Cu^2+ + SO4^2- + 6 H2O(l)", logK = 15.34, estimate = "isocoulombic",
-      source = "from memory of compiled mineral solubility constants (attribution not recalled)",
+      source = "from memory of [COMPILED] (a mineral solubility constant; attribution not recalled)",
       quality = "low",
       note = "independently recalled dfG of brochantite about -1818 kJ/mol reproduces this log K with NBS ions; the common green patina of copper in sulfate-bearing air; dH not recalled",
     },
@@ -372,7 +369,7 @@ return {
     {
       formula = "K2SO4(s,arcanite)", model = "logk",
       reaction = "K2SO4(s,arcanite) = 2 K^+ + SO4^2-", logK = -1.776, estimate = "isocoulombic",
-      source = "from memory of compiled mineral solubility constants (USGS compilations after Nordstrom et al. 1990; primary paper not recalled)",
+      source = "from memory of [COMPILED] (a mineral solubility constant, in USGS compilations after [N90]; primary paper not recalled)",
       quality = "medium",
       note = "written by log K: NBS 1982 arcanite (-1321.37, -1437.79, 175.56; cycle off by 1.3 kJ/mol) is consistent with NBS K^+ (-283.27) but gives -2.10 with SH88/CODATA K^+ (-282.5), which the K file is expected to carry; dH not recalled",
     },
@@ -394,8 +391,7 @@ return {
       uncertainty = { H = 0.40, S = 0.20 },
       source = CODATA .. " (+- from the same); Cp at 298.15 K from " .. NBS .. ", held constant",
       quality = "high",
-      note = "Mercurous sulfate electrode: E0(Hg2SO4 + 2 e- = 2 Hg + SO4^2-) = 0.6127 V with " ..
-             "CODATA SO4^2-, 0.6150 V with the file's SH88 SO4^2-; measured 0.6125 V (recalled).",
+      note = "Mercurous sulfate electrode: E0(Hg2SO4 + 2 e- = 2 Hg + SO4^2-) = 0.6127 V with CODATA SO4^2-, 0.6150 V with the file's SH88 SO4^2-; measured 0.6125 V (recalled).",
     },
     {
       formula = "HgS(s,cinnabar)", model = "cp",
@@ -403,8 +399,7 @@ return {
       cp = { a = 48.41 },
       source = NBS .. " (Cp at 298.15 K held constant)",
       quality = "medium",
-      note = "NBS solid with the CODATA Hg^2+ of Hg.lua: NBS dfG(Hg^2+) is 0.27 kJ/mol lower " ..
-             "(0.05 in log K), inside the spread of cinnabar solubility data.",
+      note = "NBS solid with the CODATA Hg^2+ of Hg.lua: NBS dfG(Hg^2+) is 0.27 kJ/mol lower (0.05 in log K), inside the spread of cinnabar solubility data.",
     },
     -- ---------------------------------------------------------------- strontium and barium sulfates (scaling)
     {
@@ -413,11 +408,9 @@ return {
       logK = -6.63,
       logK_T = { -14805.9622, -2.4660924, 756968.533, 5436.3588, -40553604.0 },
       T_range = { 273.15, 373.15 },
-      source = "from memory of Reardon and Armstrong 1987 (Geochim. Cosmochim. Acta 51, 63), " ..
-               "analytic log K(T) as adopted by " .. N90,
+      source = "from memory of [RA87], analytic log K(T) as adopted by " .. N90,
       quality = "high",
-      note = "Measured solubility product (the equation gives -6.632 at 25 C); range 0-100 C " ..
-             "taken conservatively.",
+      note = "Measured solubility product (the equation gives -6.632 at 25 C); range 0-100 C taken conservatively.",
     },
     {
       formula = "SrSO4(aq)", model = "logk",
@@ -431,10 +424,9 @@ return {
       logK = -9.97,
       logK_T = { 136.035, 0, -7680.41, -48.595 },
       T_range = { 273.15, 373.15 },
-      source = N90 .. ", analytic log K(T) after Blount 1977 (Am. Mineral. 62, 942)",
+      source = N90 .. ", analytic log K(T) after [BLOUNT77]",
       quality = "high",
-      note = "Gives -9.970 at 25 C; NBS barite with NBS Ba^2+ and SH88 SO4^2- gives -9.97 too. " ..
-             "Range 0-100 C taken conservatively (Blount measured to higher T).",
+      note = "Gives -9.970 at 25 C; NBS barite with NBS Ba^2+ and SH88 SO4^2- gives -9.97 too. Range 0-100 C taken conservatively (Blount measured to higher T).",
     },
   },
 }

@@ -7,10 +7,12 @@
 -- their conventional formation reactions (log K = -dfG/(RT ln 10), dH = dfH).
 -- Aqueous Sn(IV) hydroxo species (Sn(OH)4(aq), Sn(OH)5^-, Sn(OH)6^2-) are left out: no
 -- constants recalled with confidence.
-local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
-local CODATA = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values for Thermodynamics"
-local RH95 = "from memory of Robie and Hemingway 1995 (USGS Bulletin 2131)"
-local BM76 = "from memory of Baes and Mesmer 1976, The Hydrolysis of Cations (I = 0, 25 C)"
+--
+-- Primary compilation: NBS 1982 (ions and solids); Sn(II) hydrolysis from Baes and Mesmer 1976.
+local NBS = "from memory of [NBS82]"
+local CODATA = "from memory of [CODATA89]"
+local RH95 = "from memory of [RH95]"
+local BM76 = "from memory of [BM76] (I = 0, 25 C)"
 
 return {
   element = "Sn",

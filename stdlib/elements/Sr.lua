@@ -9,12 +9,10 @@
 -- Busenberg, Plummer and Parker 1984), so dfG(Sr^2+) does not enter any
 -- solubility.  Every number was recalled, not read ("from memory of").
 
-local CODATA = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values for " ..
-               "Thermodynamics (dfH, S; dfG derived here as dfH - T dfS)"
-local CODATA_U = "+-: from memory of Cox, Wagman and Medvedev 1989 (CODATA Key Values)"
-local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic " ..
-            "Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
-local BM = "from memory of Baes and Mesmer 1976, The Hydrolysis of Cations (I = 0, 25 C)"
+local CODATA = "from memory of [CODATA89] (dfH, S; dfG derived here as dfH - T dfS)"
+local CODATA_U = "+-: from memory of [CODATA89]"
+local NBS = "from memory of [NBS82]"
+local BM = "from memory of [BM76] (I = 0, 25 C)"
 
 return {
   element = "Sr",
@@ -35,8 +33,7 @@ return {
       logK = 98.785, dH = -550.90,
       source = "derived here from " .. CODATA .. ": Sr^2+ dfH -550.90 +- 0.50 kJ/mol, S -31.5 +- 2.0 J/(mol K)",
       quality = "high",
-      note = "E0(Sr^2+/Sr) = -2.922 V; NBS 1982 (dfG -559.48) gives -2.899 V, the value the " ..
-             "CRC series prints; CODATA revised dfH by 5 kJ/mol.",
+      note = "E0(Sr^2+/Sr) = -2.922 V; NBS 1982 (dfG -559.48) gives -2.899 V, the value the CRC series prints; CODATA revised dfH by 5 kJ/mol.",
     },
     {
       formula = "SrOH^+", model = "logk",

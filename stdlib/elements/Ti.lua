@@ -5,10 +5,12 @@
 -- Ti(OH)4(aq) values were not recalled with confidence, so a diagram from this file
 -- shows the metal, its oxides and Ti^2+ only (titanium's passivity in water is a
 -- property of the TiO2 film; the other dissolved fields are missing).
-local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
-local CODATA = "from memory of Cox, Wagman and Medvedev 1989, CODATA Key Values for Thermodynamics"
-local RH95 = "from memory of Robie and Hemingway 1995 (USGS Bulletin 2131)"
-local K60 = "from memory of Kelley 1960, US Bureau of Mines Bulletin 584"
+--
+-- Primary compilation: NBS 1982; Ti^2+ from the CRC standard potential (no NBS value).
+local NBS = "from memory of [NBS82]"
+local CODATA = "from memory of [CODATA89]"
+local RH95 = "from memory of [RH95]"
+local K60 = "from memory of [K60]"
 
 return {
   element = "Ti",
@@ -69,10 +71,9 @@ return {
       formula = "Ti^2+", model = "logk",
       reaction = "Ti(s) + 2 H^+ = Ti^2+ + H2(g)",
       logK = 55.105, estimate = "isocoulombic",
-      source = "derived here from E0(Ti^2+/Ti) = -1.630 V, from memory of the CRC Handbook electrochemical series (P. Vanysek)",
+      source = "derived here from E0(Ti^2+/Ti) = -1.630 V, from memory of the [CRC]",
       quality = "low",
-      note = "Ti^2+ reduces water; it exists only in strongly reducing acid and matters for " ..
-             "the active dissolution of titanium. No dH recalled: temperature by the isocoulombic estimate.",
+      note = "Ti^2+ reduces water; it exists only in strongly reducing acid and matters for the active dissolution of titanium. No dH recalled: temperature by the isocoulombic estimate.",
     },
   },
 }

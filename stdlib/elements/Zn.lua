@@ -1,16 +1,16 @@
 -- stdlib/elements/Zn.lua: zinc, its ion, hydrolysis species, oxide and hydroxide.
 --
+-- Primary compilation: CODATA 1989 (Zn^2+, ZnO); hydrolysis and epsilon-Zn(OH)2 from
+-- Baes and Mesmer 1976, written against Zn^2+.
+--
 -- Data choice (see docs/data/transition-metals.md): Zn^2+ and ZnO from the CODATA key
 -- values (Cox, Wagman and Medvedev 1989), which supersede the NBS-1982 ZnO; hydrolysis
 -- from Baes and Mesmer 1976. Every number below was recalled, not read.
 
-local NBS = "from memory of Wagman et al. 1982, The NBS Tables of Chemical Thermodynamic " ..
-            "Properties (J. Phys. Chem. Ref. Data 11, Suppl. 2)"
-local CODATA = "from memory of CODATA Key Values for Thermodynamics (Cox, Wagman and " ..
-               "Medvedev 1989): dfH and S; dfG as dfH - T*dfS (reproduces the tabulated dfG)"
-local KELLEY = "cp from memory of Kelley 1960 (U.S. Bureau of Mines Bulletin 584), " ..
-               "converted from cal with 4.184"
-local BM = "from memory of Baes and Mesmer 1976, The Hydrolysis of Cations (I = 0, 25 C)"
+local NBS = "from memory of [NBS82]"
+local CODATA = "from memory of [CODATA89]: dfH and S; dfG as dfH - T*dfS (reproduces the tabulated dfG)"
+local KELLEY = "cp from memory of [K60], converted from cal with 4.184"
+local BM = "from memory of [BM76] (I = 0, 25 C)"
 
 return {
   element = "Zn",
@@ -33,17 +33,14 @@ return {
       estimate = { Cp = 46 },
       source = CODATA .. "; Cp " .. NBS,
       quality = "high",
-      note = "HKF parameters not recalled as a set (only a1, a2); estimated by the loader " ..
-             "from Cp. V not recalled: volume terms zero (poor at high pressure). " ..
-             "NBS-1982 gives dfG -147.06, dfH -153.89, S -112.1.",
+      note = "HKF parameters not recalled as a set (only a1, a2); estimated by the loader from Cp. V not recalled: volume terms zero (poor at high pressure). NBS-1982 gives dfG -147.06, dfH -153.89, S -112.1.",
     },
     -- hydrolysis -------------------------------------------------------------
     {
       formula = "ZnOH^+", model = "logk",
       reaction = "Zn^2+ + H2O(l) = ZnOH^+ + H^+",
       logK = -8.96, dH = 56.07,
-      source = BM .. "; dH 13.4 kcal/mol from memory of Nordstrom et al. 1990 " ..
-               "(ACS Symp. Ser. 416)",
+      source = BM .. "; dH 13.4 kcal/mol from memory of [N90]",
       quality = "medium",
     },
     {
@@ -64,8 +61,7 @@ return {
       reaction = "Zn^2+ + 4 H2O(l) = Zn(OH)4^2- + 4 H^+",
       logK = -41.2, estimate = "isocoulombic",
       source = BM, quality = "medium",
-      note = "The ZnO2^2- of older diagrams. With the Zn2+ above it gives " ..
-             "E0(Zn(OH)4^2-/Zn) = -1.200 V (OpenStax/CRC -1.199).",
+      note = "The ZnO2^2- of older diagrams. With the Zn2+ above it gives E0(Zn(OH)4^2-/Zn) = -1.200 V (OpenStax/CRC -1.199).",
     },
     {
       formula = "Zn2OH^3+", model = "logk",
@@ -82,8 +78,7 @@ return {
       T_range = { 298.15, 1600 },
       source = CODATA .. "; " .. KELLEY .. " (11.71 + 1.22e-3 T - 2.18e5/T^2 cal/(mol K))",
       quality = "high",
-      note = "Polynomial gives Cp(298.15 K) = 40.25 J/(mol K), equal to NBS 40.25. " ..
-             "NBS-1982 dfG -318.30 is superseded.",
+      note = "Polynomial gives Cp(298.15 K) = 40.25 J/(mol K), equal to NBS 40.25. NBS-1982 dfG -318.30 is superseded.",
     },
     {
       formula = "Zn(OH)2(s,epsilon)", model = "logk",

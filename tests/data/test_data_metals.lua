@@ -287,7 +287,8 @@ end
 
 -- HKF: parameters and G/H/S as in hkf_parameters.csv; Cp and V at 25 C recomputed.
 local HKF_KEYS = C.HKF_KEYS
-local HKF_GHS_FROM_TABLE = { ["Na^+"] = true, ["K^+"] = true, ["Mg^2+"] = true, ["Ca^2+"] = true }
+-- Mg^2+ keeps the SH88 parameters but takes G/H/S from CODATA 1989 (issue 13), as Al^3+ does.
+local HKF_GHS_FROM_TABLE = { ["Na^+"] = true, ["K^+"] = true, ["Ca^2+"] = true }
 for _, f in ipairs(order) do
   local sp = species[f]
   if sp.model == "hkf" and sp.hkf then
@@ -325,12 +326,10 @@ end
 ---------------------------------------------------------------------------- 5. reference rows
 -- Understood disagreements: deviation (computed - reference) expected, and why.
 local DOCUMENTED = {
-  ["Mg^2+ + 2 e- = Mg(s)"] = { dev = 0.0194, why =
-    "CRC -2.372 V is not consistent with any modern dfG(Mg2+): SH88 (used) gives -2.3526, NBS -2.357 (row note), CODATA -2.360" },
+  ["Mg^2+ + 2 e- = Mg(s)"] = { dev = 0.0122, why =
+    "CRC -2.372 V is not consistent with any modern dfG(Mg2+): CODATA (used since issue 13) gives -2.360, NBS -2.357 (row note), SH88 -2.3526" },
   ["MoO4^2- + 4 H2O(l) + 6 e- = Mo(s) + 8 OH^-"] = { dev = 0.140, why =
     "CRC -1.05 V follows an old dfG(MoO4^2-) near -915 kJ/mol (Latimer era); NBS 1982 -836.3 (used, and Shock et al. 1997) gives -0.910 V" },
-  ["Mg(OH)2(s,brucite) = Mg^2+ + 2 OH^-"] = { dev = -0.244, why =
-    "SH88 dfG(Mg2+) (used, as the project asks) is 0.8 kJ/mol above NBS and 1.4 above CODATA; CODATA Mg2+ with NBS brucite gives -11.15 exactly" },
   ["Ca(OH)2(s,portlandite) + 2 H^+ = Ca^2+ + 2 H2O(l)"] = { dev = -0.279, why =
     "SH88 Ca2+ (about CODATA) with NBS portlandite gives 22.52; NBS Ca2+ would give 22.66; R&H/CODATA-consistent portlandite not recalled" },
   ["Al(OH)3(s,gibbsite) + 3 H^+ = Al^3+ + 3 H2O(l)"] = { dev = 0.298, why =

@@ -13,7 +13,20 @@ local m = phlox.map { library = lib, element = "Au", ligand = "CN", ligand_activ
                       activity = a_au, exclude = { "OCN^-" } }
 local shown = {}
 for _, f in ipairs(m.fields) do shown[f.species] = true end
-check(shown["Au(CN)2^-"] and shown["Au(s)"] and shown["Au(OH)3(s)"], "Au(CN)2^-, Au and Au(OH)3 have fields")
+check(shown["Au(CN)2^-"] and shown["Au(s)"] and shown["Au(CN)4^-"], "Au(CN)2^-, Au and Au(CN)4^- have fields")
+-- with cyanide held unoxidised, gold(III) is the cyano complex (beta4 about
+-- 1e56, CN.lua), not Au(OH)3; its field lies above the O2/H2O line from pH 7
+-- to 13: oxygen does not oxidise Au(CN)2^- to Au(III) in leach liquors
+-- (common practice, no source)
+for _, b in ipairs(m.boundaries) do
+  if (b.between[1] == "Au(CN)4^-" or b.between[2] == "Au(CN)4^-") then
+    for i = 1, #b.x do
+      if b.x[i] >= 7 and b.x[i] <= 13 then
+        check(b.y[i] > m.water.o2.a + m.water.o2.b * b.x[i], ("Au(CN)4^- boundary at pH %.2f, E %.3f V lies above O2/H2O"):format(b.x[i], b.y[i]))
+      end
+    end
+  end
+end
 -- the Au(CN)2^-/Au boundary in the CN^- field (pH > pKa(HCN)): y at pH 12
 local function boundary_E(reaction, pH)
   for _, b in ipairs(m.boundaries) do

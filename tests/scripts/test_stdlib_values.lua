@@ -45,6 +45,29 @@ assert(nE_ind >= 30, "fewer than 30 independent E checks at 25 C: " .. nE_ind)
 assert(nK_ind >= 30, "fewer than 30 independent log K checks at 25 C: " .. nK_ind)
 assert(nhot >= 10, "fewer than 10 checks at 100-300 C: " .. nhot)
 
+-- Coverage (issue 13): every record counted once; reference states (elements,
+-- H^+, e-) not counted; a record named in an independent row is checked.
+local function same_list(got, want, what)
+  assert(#got == #want, what .. ": " .. table.concat(got, " | "))
+  for i = 1, #want do assert(got[i] == want[i], what .. ": " .. table.concat(got, " | ")) end
+end
+same_list(defs.species_of("Cu^+ + e- = Cu(s)"), { "Cu^+", "e-", "Cu(s)" }, "species_of (charge with +)")
+same_list(defs.species_of("2 SO3^2- + 3 H2O(l) + 4 e- = S2O3^2- + 6 OH^-"),
+  { "SO3^2-", "H2O(l)", "e-", "S2O3^2-", "OH^-" }, "species_of (coefficients)")
+same_list(defs.species_of("0.5 Fe2O3(s,hematite) + 3 H^+ = Fe^3+ + 1.5 H2O(l)"),
+  { "Fe2O3(s,hematite)", "H^+", "Fe^3+", "H2O(l)" }, "species_of (fractional coefficients)")
+local cov = assert(summary.coverage, "run() without a filter reports coverage")
+local sum_n, unchecked = 0, {}
+for _, e in ipairs(cov.files) do
+  assert(e.n == e.indep + e.same_only + #e.none, "coverage of " .. e.file .. " does not add up")
+  sum_n = sum_n + e.n
+  for _, f in ipairs(e.none) do unchecked[f] = true end
+end
+assert(sum_n == cov.n and cov.n == cov.indep + cov.same_only + cov.none, "coverage totals do not add up")
+for _, f in ipairs({ "Mg(s)", "Cu(s)", "H^+", "e-", "H2O(l)" }) do assert(not unchecked[f], f .. " is a reference state, not a record to check") end
+for _, f in ipairs({ "Mg^2+", "Cu^2+", "Cl^-" }) do assert(not unchecked[f], f .. " has independent rows but is listed unchecked") end
+print(("coverage: %d records, %d with an independent check, %d same-source only, %d none"):format(cov.n, cov.indep, cov.same_only, cov.none))
+
 -- The checks can fail.  A user override shifts log K of Cu^2+ formation by
 -- +0.5 (E(Cu2+/Cu) by -14.8 mV): the Cu2+/Cu row (tolerance 10 mV) must fail.
 local tmp = os.tmpname() .. "-cu.lua"

@@ -13,7 +13,16 @@
 --     the reaction printed beside it (CODATA 2018 R and F), and each map's
 --     fields tile its window;
 --   * the leach study, a resumable sweep on two worker processes, rerun in
---     the same folder on one process, rewrites the same bytes.
+--     the same folder on one process, rewrites the same bytes; the gold
+--     study, rerun in its folder, rewrites every file (PNG too) byte for byte;
+--   * the gold study's Au(s)/Au(CN)2^- boundaries at 25 C against the
+--     published E0 (-0.60 V, from memory of the CRC electrochemical series
+--     after Bard, Parsons and Jordan 1985) with the Nernst terms of each
+--     map's activities, tolerance 0.02 V (two decimals in the source, medium
+--     confidence; the library's NBS data give -0.611 V), and its HCN share
+--     crossing one half at pKa 9.21 (from memory of Smith and Martell),
+--     tolerance 0.05 (high confidence); its tables stamp CN.lua, where the
+--     gold cyanide complexes are defined.
 -- Environment (tests/CMakeLists.txt): PHLOX_BIN, PHLOX_SOURCE_DIR.
 local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
 local BIN, SRC, check = assert(S.BIN, "PHLOX_BIN is not set (run through ctest)"), S.SRC, S.check
@@ -24,7 +33,39 @@ local STUDIES = {
   { script = "ammonia_leach.lua", min_files = 19, maps = true, args = { "2" } },
   { script = "chromium_groundwater.lua", min_files = 8, maps = true },
   { script = "lead_water_main.lua", min_files = 8, maps = true },
+  { script = "gold_cyanide.lua", min_files = 11, maps = true, rerun = true },
 }
+local AU_CN2_E0 = -0.60     -- V: from memory of the CRC electrochemical series (Bard, Parsons and Jordan 1985)
+local HCN_PKA = 9.21        -- from memory of Smith and Martell, Critical Stability Constants (I = 0, 25 C)
+
+-- The gold study's anchors (published values above).
+local function gold_anchors(dir)
+  local h, _, rows = S.csv.stamped(read(dir .. "/boundaries-Au-CN.csv"), "boundaries-Au-CN.csv")
+  check(h:find("\n# data: stdlib/elements/CN.lua sha256=%x+"), "boundaries-Au-CN.csv stamps CN.lua")
+  local a_au = tonumber(h:match("\n# condition: activity_Au = ([^\n]+)"))
+  check(a_au, "boundaries-Au-CN.csv: activity_Au condition")
+  local n = 0
+  for _, b in ipairs(rows) do
+    if tonumber(b.T_C) == 25 and b.reaction == "Au(CN)2^- + e- = Au(s) + 2 CN^-" then
+      local a_cn = tonumber(b.map:match("a%(CN%) ([%d.e+-]+)"))
+      local want = AU_CN2_E0 + S.chem.nernst_slope(298.15) * math.log(a_au / a_cn ^ 2, 10)
+      S.close(tonumber(b.intercept), want, 0.02, "Au(s)/Au(CN)2^- boundary of " .. b.map)
+      n = n + 1
+    end
+  end
+  check(n == 3, "three 25 C gold boundaries checked, got " .. n)
+  local _, _, share = S.csv.stamped(read(dir .. "/HCN-share.csv"), "HCN-share.csv")
+  local cross
+  for i = 2, #share do
+    local a, b = share[i - 1], share[i]
+    if tonumber(a.T_C) == 25 and tonumber(b.T_C) == 25 and tonumber(a.HCN_share) >= 0.5 and tonumber(b.HCN_share) < 0.5 then
+      local ya, yb = tonumber(a.HCN_share), tonumber(b.HCN_share)
+      cross = tonumber(a.pH) + (tonumber(b.pH) - tonumber(a.pH)) * (ya - 0.5) / (ya - yb)
+    end
+  end
+  check(cross, "HCN share crosses one half at 25 C")
+  S.close(cross, HCN_PKA, 0.05, "pH of half HCN at 25 C (pKa)")
+end
 
 local function read_csv(text, name)
   local h, _, rows, nfiles = S.csv.stamped(text, name)
@@ -100,6 +141,15 @@ local function checks()
       end
     end
     check(nernst >= 3 and tiled >= 1, study.script .. ": Nernst slopes and tiling checked")
+    if study.script == "gold_cyanide.lua" then gold_anchors(dir) end
+    if study.rerun then -- the same study in the same folder: the same bytes, every file
+      local before = {}
+      for _, name in ipairs(files) do before[name] = read(dir .. "/" .. name) end
+      run(study, dir)
+      for _, name in ipairs(files) do
+        check(read(dir .. "/" .. name) == before[name], study.script .. ": " .. name .. " differs on the rerun")
+      end
+    end
     if study.script == "ammonia_leach.lua" then -- resume on one worker: same bytes
       local before = {}
       for _, name in ipairs(files) do before[name] = read(dir .. "/" .. name) end

@@ -639,6 +639,74 @@ static void test_list(void **state)
     px_db_free(db);
 }
 
+/* Keyed references (issue "one home for each concern": each publication
+ * defined once): a source cites "[KEY]"; the key resolves against the file's
+ * own `sources`, the loaded database, then stdlib/bibliography.lua. */
+static void test_references(void **state)
+{
+    (void)state;
+    static const char good[] =
+        "return { element = 'Zn', sources = { DOE2020 = { cite = 'Doe, J. (2020). A paper. J. Nowhere 1, 1.',\n"
+        "  short = 'Doe 2020' } },\n"
+        "  species = { { formula = 'Zn(s)', model = 'cp', G = 0, H = 0, S = 41.63, cp = { a = 25 },\n"
+        "    source = 'from memory of [DOE2020]; S from memory of [NBS82]' } } }\n";
+    px_db *db = px_db_new();
+    px_data_problems *p = px_data_problems_new();
+    int st = px_data_load_buffer(db, good, strlen(good), "refs.lua", NULL, p);
+    if (st != PX_OK) dump(p);
+    assert_int_equal(st, PX_OK);
+    assert_int_equal(px_data_problems_count(p), 0);
+    /* both keys now in the database, each once, with their citations */
+    assert_int_equal(px_db_ref_count(db), 2);
+    const px_ref *r = px_db_ref_find(db, "DOE2020");
+    assert_non_null(r);
+    assert_string_equal(r->short_text, "Doe 2020");
+    r = px_db_ref_find(db, "NBS82");
+    assert_non_null(r);
+    assert_non_null(strstr(r->cite, "Wagman")); /* from stdlib/bibliography.lua */
+    FILE *out = tmpfile();
+    assert_non_null(out);
+    assert_int_equal(px_data_list_write(db, "Zn", out), 1);
+    rewind(out);
+    char buf[2048];
+    size_t n = fread(buf, 1, sizeof buf - 1, out);
+    buf[n] = '\0';
+    fclose(out);
+    assert_non_null(strstr(buf, "references:\n[DOE2020] Doe, J. (2020)"));
+    assert_non_null(strstr(buf, "\n[NBS82] Wagman"));
+
+    /* a misspelt key is an error naming the field, with the nearest key */
+    static const char bad[] = "return { element = 'Zn', species = { { formula = 'ZnO(s)', model = 'cp',\n"
+                              "  G = -320.479, H = -350.46, S = 43.65, cp = { a = 40 },\n"
+                              "  source = 'from memory of [NBS28]' } } }\n";
+    px_data_problems_clear(p);
+    assert_int_equal(px_data_check_buffer(NULL, bad, strlen(bad), "bad.lua", NULL, p), PX_EDATA);
+    assert_true(has(p, "bad.lua:", "ZnO(s)", "source", "unknown reference [NBS28]", "did you mean [NBS82]?", NULL));
+
+    /* a file's key that names another publication under a key in use */
+    static const char clash[] = "return { element = 'Zn', sources = { NBS82 = 'Someone else (1999).' },\n"
+                                "  species = { { formula = 'ZnO(s)', model = 'cp', G = -320.479, H = -350.46,\n"
+                                "    S = 43.65, cp = { a = 40 }, source = '[NBS82]' } } }\n";
+    px_data_problems_clear(p);
+    assert_int_equal(px_data_check_buffer(NULL, clash, strlen(clash), "clash.lua", NULL, p), PX_EDATA);
+    assert_true(has(p, "clash.lua:1", "sources.NBS82", "already names another publication", NULL));
+
+    /* a key defined and never cited: a warning, not silence; a bad key: an error */
+    static const char unused[] = "return { element = 'Zn', sources = { SPARE1 = 'x (2000).', ['bad key'] = 'y' },\n"
+                                 "  species = { { formula = 'ZnO(s)', model = 'cp', G = -320.479, H = -350.46,\n"
+                                 "    S = 43.65, cp = { a = 40 }, source = '[NBS82]' } } }\n";
+    px_data_problems_clear(p);
+    assert_int_equal(px_data_check_buffer(NULL, unused, strlen(unused), "unused.lua", NULL, p), PX_EDATA);
+    assert_true(has(p, "warning", "sources.SPARE1", "cited by no species", NULL));
+    assert_true(has(p, "sources", "bad key", "upper-case letter", NULL));
+
+    /* the standard bibliography itself checks as a bibliography */
+    px_data_problems_clear(p);
+    assert_int_equal(px_data_check_file(NULL, PHLOX_SOURCE_DIR "/stdlib/bibliography.lua", NULL, p), PX_OK);
+    px_data_problems_free(p);
+    px_db_free(db);
+}
+
 /* line numbers when species are built by a helper function */
 static void test_lines_helper_function(void **state)
 {
@@ -694,6 +762,7 @@ int main(void)
         cmocka_unit_test(test_user_override),
         cmocka_unit_test(test_check_files),
         cmocka_unit_test(test_list),
+        cmocka_unit_test(test_references),
         cmocka_unit_test(test_lines_helper_function),
         cmocka_unit_test(test_problem_format),
     };

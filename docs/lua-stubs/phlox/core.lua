@@ -313,6 +313,10 @@ function phlox.Database:props(formula, T, P) end
 ---@return any # {dG, dH, dS, logK, E, n_e, T, P, text} | nil, message
 function phlox.Database:reaction(text, T, P) end
 
+--- (C) phlox.Database:references() -> { {key =, short =, cite =}, ... }: the publications
+---@return any # { {key =, short =, cite =}, ... }: the publications
+function phlox.Database:references() end
+
 --- (C) phlox.Database:remove(formula)
 ---@param formula string
 function phlox.Database:remove(formula) end
