@@ -8,7 +8,7 @@ local phlox = require "phlox"
 local core = require "phlox.core"
 local root = assert(os.getenv("PHLOX_SOURCE_DIR") or (arg[0]:match("^(.*)/tests/scripts/[^/]+$")), "PHLOX_SOURCE_DIR")
 local cases = dofile(root .. "/tests/tools/misuse_def.lua")
-local function check(cond, msg) if not cond then error(msg, 2) end end
+local check = dofile(root .. "/tests/support/check.lua").check
 
 local dir = os.tmpname()
 os.remove(dir)

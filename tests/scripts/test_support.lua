@@ -82,7 +82,7 @@ check(K.coefficient("Zn(OH)2(s) + 2 H^+ + 2 e- = Zn(s) + 2 H2O(l)", "H^+") == 2
 T.close(K.boundary_slope("Zn(OH)2(s) + 2 H^+ + 2 e- = Zn(s) + 2 H2O(l)", 25), -K.nernst_slope(298.15), 1e-15,
         "boundary slope")
 check(K.boundary_slope("Zn^2+ + 2 OH^- = Zn(OH)2(s)", 25) == nil, "no electrons: no E-pH slope")
--- files: read, slurp, quote, tmpdir
+-- files: read, slurp, quote, tmpdir, mkdir, remove, sha256
 local FL = dofile(SUP .. "files.lua")
 check(FL.quote("a'b") == "'a'\\''b'", "shell quoting: " .. FL.quote("a'b"))
 local d = FL.tmpdir()
@@ -91,22 +91,49 @@ check(FL.read(d .. "/x.txt") == "bytes\0\n" and FL.slurp(d .. "/x.txt") == "byte
 check(FL.read(d .. "/missing") == nil and not pcall(FL.slurp, d .. "/missing"), "a missing file")
 FL.write(d .. "/abc.txt", "abc")
 -- SHA-256("abc") of FIPS 180-2, appendix B.1 (from memory of the standard)
-check(FL.sha256sum(d .. "/abc.txt") == "ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad",
-      "sha256sum of 'abc'")
+check(FL.sha256(d .. "/abc.txt") == "ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad",
+      "sha256 of 'abc'")
 local dirs = {}
 local d2 = FL.tmpdir(dirs)
 check(dirs[1] == d2, "tmpdir lists the folder")
-os.execute("rm -rf " .. FL.quote(d2))
+FL.mkdir(d2 .. "/a b/it's")
+FL.write(d2 .. "/a b/it's/f", "x")
+check(FL.read(d2 .. "/a b/it's/f") == "x", "mkdir makes the parents too (names with a space and a quote)")
+FL.remove(d2, d2 .. "/no-such-file")
+check(FL.read(d2 .. "/a b/it's/f") == nil and not io.open(d2), "remove takes the whole folder, skips what is missing")
 -- a stamped CSV: header, columns, rows; a ragged row is refused
 local okst, h, cols, srows, nf = pcall(CSV.stamped, "# program: x\na,b\n1,2\n3,4\n", "t.csv")
 check(okst and h == "# program: x" and #cols == 2 and #srows == 2 and srows[2].b == "4" and nf == 0,
       "stamped CSV: " .. tostring(h))
 check(not pcall(CSV.stamped, "# x\na,b\n1\n", "t.csv"), "a ragged stamped CSV is refused")
 check(not pcall(CSV.cells, 'a,"b'), "cells raises on a malformed line")
-os.execute("rm -rf " .. FL.quote(d))
+FL.remove(d)
+
+-- soft checks go on after a failure and raise at the end
+local sc = T.soft()
+check(sc.check(true, "fine") and not sc.check(false, "first") and #sc.failures == 1
+      and sc.failures[1] == "first", "soft check records the failure")
+check(pcall(T.soft().finish, "problems"), "finish without failures passes")
+local okf, errf = pcall(sc.finish, "problems")
+check(not okf and tostring(errf):find("1 problems", 1, true), "finish raises the count: " .. tostring(errf))
+
+-- proc: exit codes, the two output streams, stdin, merge, a kept log
+local PR = dofile(SUP .. "proc.lua")
+local code, out, err = PR.run("printf out; printf err >&2; exit 3")
+check(code == 3 and out == "out" and err == "err", ("run: %s %q %q"):format(code, out, err))
+code, out = PR.run("cat; printf err >&2", { stdin = "in\0put", merge = true })
+check(code == 0 and out == "in\0puterr", "run with stdin and merged streams: " .. out)
+code, out = PR.run("cat")
+check(code == 0 and out == "", "stdin is empty unless given")
+code = PR.run("kill -9 $$")
+check(code == 128 + 9, "a signal's exit code is 128 + its number: " .. code)
+local logf = os.tmpname()
+code, out = PR.run("printf logged", { log = logf })
+check(code == 0 and out == "logged" and FL.read(logf) == "logged", "run keeps its log")
+os.remove(logf)
 
 -- init.lua gathers them all
 local S = dofile(SUP .. "init.lua")
 check(S.check and S.close and S.rel and S.near and S.csv.split and S.json.decode and S.rng.new
-      and S.chem.nernst_slope and S.files.slurp, "init.lua gathers every helper")
+      and S.chem.nernst_slope and S.files.slurp and S.proc.run and S.soft and S.reporter, "init.lua gathers every helper")
 print("test_support: all checks passed")

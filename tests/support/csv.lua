@@ -18,8 +18,9 @@
 --                                  (one string), column names and rows (by
 --                                  column name); raises unless the rows are
 --                                  rectangular and every data file's SHA-256
---                                  in the header equals sha256sum's of the
---                                  file under PHLOX_SOURCE_DIR; also returns
+--                                  in the header equals the SHA-256 of the
+--                                  file under PHLOX_SOURCE_DIR (files.lua,
+--                                  F.sha256: needs phlox); also returns
 --                                  the number of data files stamped
 --   C.ref_value(name, keycol, key, valcol [, dir])
 --                                  tonumber(valcol) of the first row whose
@@ -74,7 +75,7 @@ function M.stamped(text, name)
     nfiles = nfiles + 1
     check(#sum == 64, name .. ": sha256 of " .. file .. " has 64 hex digits")
     -- embedded copies are recorded as stdlib/...: the file in the tree
-    check(F.sha256sum(src .. "/" .. file) == sum, name .. ": checksum of " .. file .. " differs from sha256sum")
+    check(F.sha256(src .. "/" .. file) == sum, name .. ": checksum of " .. file .. " differs from the file's SHA-256")
   end
   check(lines[k], name .. ": no column line after the header")
   local cols, err = M.split(lines[k])
