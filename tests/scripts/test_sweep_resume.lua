@@ -71,7 +71,7 @@ local function no_survivors(dir, what)
   for _ = 1, 50 do   -- up to 5 s for the kernel to reap them
     left = alive_with(dir)
     if #left == 0 then return end
-    os.execute("sleep 0.1")
+    S.proc.run("sleep 0.1")
   end
   error(what .. ": processes still running after their parent died: " .. table.concat(left, " "))
 end
