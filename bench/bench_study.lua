@@ -79,8 +79,8 @@ local dir = S.files.tmpdir()
 local bin = arg[-1]
 local function timed(mode)
   local t0 = core.monotonic()
-  local code, out = S.proc.run(("%s %s %s %s"):format(q(bin), q(arg[0]), q(dir), mode))
-  assert(code == 0, "the " .. mode .. " run failed")
+  local code, out, err = S.proc.run(("%s %s %s %s"):format(q(bin), q(arg[0]), q(dir), mode))
+  assert(code == 0, "the " .. mode .. " run failed:\n" .. err)
   return core.monotonic() - t0, tonumber(out:match("CPU ([%d%.]+)"))
 end
 

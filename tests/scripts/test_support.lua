@@ -1,5 +1,6 @@
--- test_support.lua: the shared test helpers of tests/support (check, CSV,
--- JSON, seeded random numbers, constants and map look-ups) on inputs with known answers, including
+-- test_support.lua: the shared test helpers of tests/support (check, soft
+-- checks, CSV, JSON, seeded random numbers, constants and map look-ups,
+-- files, running programs) on inputs with known answers, including
 -- malformed ones, so a helper that stops failing cannot hide a test's
 -- failure.  Sources: the examples of RFC 4180 (sec. 2, rules 5-7) and of
 -- RFC 8259 (sec. 13), both from memory of the RFCs; the generator's first
