@@ -24,9 +24,9 @@ static double uni(px_rng *r) { return px_rng_uniform(r); }
 
 static void build(tb *t, size_t *co2g)
 {
-    double kw = ref_logk("H2O(l) = H^+ + OH^-");
-    double k1 = ref_logk("CO2(aq) + H2O(l) = HCO3^- + H^+");
-    double kh = ref_logk("CO2(g) = CO2(aq)");
+    double kw = px_ref_logk("H2O(l) = H^+ + OH^-");
+    double k1 = px_ref_logk("CO2(aq) + H2O(l) = HCO3^- + H^+");
+    double kh = px_ref_logk("CO2(g) = CO2(aq)");
     tb_init(t, NBASIS, 18);
     tb_add(t, 0, 0, PX_EQUIL_WATER, 0, END);
     tb_add(t, 0, 1, PX_EQUIL_AQ, 9.0, END);   /* H+; sizes from memory of Kielland 1937 */
@@ -39,16 +39,16 @@ static void build(tb *t, size_t *co2g)
     tb_add(t, -k1, 0, PX_EQUIL_AQ, 0, C, 1.0, H, 1.0, W, -1.0, END);
     tb_add(t, LOGK_HCO3_CO3, -2, PX_EQUIL_AQ, 4.5, C, 1.0, H, -1.0, END);
     *co2g = tb_add(t, -k1 - kh, 0, PX_EQUIL_GAS, 0, C, 1.0, H, 1.0, W, -1.0, END);
-    tb_add(t, ref_logk("Ca^2+ + CO3^2- = CaCO3(aq)") + LOGK_HCO3_CO3, 0, PX_EQUIL_AQ, 0, CA, 1.0,
+    tb_add(t, px_ref_logk("Ca^2+ + CO3^2- = CaCO3(aq)") + LOGK_HCO3_CO3, 0, PX_EQUIL_AQ, 0, CA, 1.0,
            C, 1.0, H, -1.0, END);
     tb_add(t, LOGK_CAHCO3, 1, PX_EQUIL_AQ, 4.0, CA, 1.0, C, 1.0, END);
-    tb_add(t, ref_logk("Ca^2+ + H2O(l) = CaOH^+ + H^+"), 1, PX_EQUIL_AQ, 4.0, CA, 1.0, W, 1.0, H,
+    tb_add(t, px_ref_logk("Ca^2+ + H2O(l) = CaOH^+ + H^+"), 1, PX_EQUIL_AQ, 4.0, CA, 1.0, W, 1.0, H,
            -1.0, END);
     tb_add(t, LOGK_CASO4, 0, PX_EQUIL_AQ, 0, CA, 1.0, SO4, 1.0, END);
     tb_add(t, LOGK_HSO4, -1, PX_EQUIL_AQ, 4.0, SO4, 1.0, H, 1.0, END);
-    tb_add(t, -ref_logk("CaCO3(s,calcite) = Ca^2+ + CO3^2-") + LOGK_HCO3_CO3, 0, PX_EQUIL_SOLID, 0,
+    tb_add(t, -px_ref_logk("CaCO3(s,calcite) = Ca^2+ + CO3^2-") + LOGK_HCO3_CO3, 0, PX_EQUIL_SOLID, 0,
            CA, 1.0, C, 1.0, H, -1.0, END);
-    tb_add(t, -ref_logk("CaSO4.2H2O(s,gypsum) = Ca^2+ + SO4^2- + 2 H2O(l)"), 0, PX_EQUIL_SOLID, 0,
+    tb_add(t, -px_ref_logk("CaSO4.2H2O(s,gypsum) = Ca^2+ + SO4^2- + 2 H2O(l)"), 0, PX_EQUIL_SOLID, 0,
            CA, 1.0, SO4, 1.0, W, 2.0, END);
     /* SIT pairs from the built-in table (by species index) */
     const struct { size_t a, b; const char *na, *nb; } pairs[] = {
