@@ -10,10 +10,7 @@ local core = phlox.core
 local failures = 0
 local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
 local check = S.check
-local function has_line(lines, pat)
-  for _, l in ipairs(lines or {}) do if l:find(pat, 1, true) then return true end end
-  return false
-end
+local has_line = S.chem.stamp_line
 local function names_of(list, key)
   local set = {}
   for _, x in ipairs(list or {}) do set[x[key or "species"]] = true end

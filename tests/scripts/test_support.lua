@@ -75,6 +75,10 @@ local map = { boundaries = { { between = { "A", "B" } }, { between = { "C", "B" 
 check(K.boundary(map, "B", "C") == map.boundaries[2], "boundary in either order")
 check(not pcall(K.boundary, map, "A", "C"), "a missing boundary is an error")
 check(K.area_sum(map) == 4, "area sum")
+local fmap = { fields = { { species = "A", area = 1 }, { species = "B(s)", area = 2 } } }
+check(K.fields(fmap)["B(s)"] == fmap.fields[2] and K.fields(fmap).C == nil, "fields by species")
+check(K.stamp_line({ "a: x", "b: y.z" }, "y.z") == "b: y.z" and K.stamp_line({ "a: xyz" }, "x.z") == nil
+      and K.stamp_line(nil, "a") == nil, "stamp_line finds plain text")
 -- Zn(OH)2(s) + 2 H^+ + 2 e- = Zn(s) + 2 H2O(l): nH = 2, ne = 2, so the
 -- boundary falls by one Nernst slope per pH unit
 check(K.coefficient("Zn(OH)2(s) + 2 H^+ + 2 e- = Zn(s) + 2 H2O(l)", "H^+") == 2
