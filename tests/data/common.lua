@@ -60,10 +60,7 @@ local CSV = dofile(SUP .. "csv.lua")
 M.csv_split = CSV.split
 
 -- Rows of a CSV file with a header line, each a table keyed by the header names.
-function M.read_csv(path)
-  local _, rows = CSV.read(path)
-  return rows
-end
+M.read_csv = CSV.rows
 
 ---------------------------------------------------------------------------- formulas
 -- Split a trailing state group off a formula: "AlO(OH)(s,boehmite)" -> "AlO(OH)", "s".

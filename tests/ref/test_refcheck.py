@@ -2,13 +2,15 @@
 (refcheck.py) on cases with known answers, so a helper that stops failing
 cannot hide a test's failure: close passes inside the tolerance (absolute or
 relative), fails outside it and on NaN or infinity, returns the difference
-it measured; finish exits 1 after a failure.  No phlox needed (argv[1], the
-phlox binary, is ignored)."""
+it measured; finish exits 1 after a failure; run_lua returns the JSON of a
+driver's last line and ends the test when the driver fails.  argv[1] is the
+phlox binary."""
 import subprocess
 import sys
+import tempfile
 
 import refcheck
-from refcheck import check, close, finish
+from refcheck import check, close, finish, run_lua
 
 SELF = """
 import refcheck
@@ -34,6 +36,17 @@ def main():
     r = subprocess.run([sys.executable, "-c", SELF], cwd=here, capture_output=True, text=True)
     check(r.returncode == 1 and "x: phlox 1.0 vs reference 2.0" in r.stdout,
           f"finish exits 1 naming the failure: {r.returncode} {r.stdout!r}")
+    # run_lua: the last line's JSON, the environment passed on; a failing driver ends the test
+    with tempfile.TemporaryDirectory(prefix="phlox-refcheck-") as work:
+        got = run_lua(sys.argv[1], 'print("noise")\nprint(\'{"a": [1, 2.5], "e": "\' .. os.getenv("RC_X") .. \'"}\')\n',
+                      work, {"RC_X": "x y"})
+        check(got == {"a": [1, 2.5], "e": "x y"}, f"run_lua: {got!r}")
+        try:
+            run_lua(sys.argv[1], 'error("deliberate")\n', work)
+            ended = False
+        except SystemExit:
+            ended = True
+        check(ended, "run_lua ends the test when the driver fails")
     finish("test_refcheck")
 
 

@@ -35,6 +35,8 @@ local header, rows = CSV.parse('name,value\r\n"x, y",1\r\n\r\n"multi\nline",2\n'
 check(#header == 2 and #rows == 2, "parse: header and two rows (blank line skipped)")
 check(rows[1].name == "x, y" and rows[1].value == "1" and rows[2].name == "multi\nline", "parse: fields")
 check(not pcall(CSV.read, SUP .. "no-such-file.csv"), "a missing file is an error")
+check(#CSV.rows(SUP .. "../reference/standard_potentials.csv") == #CSV.reference("standard_potentials.csv")
+      and CSV.reference("standard_potentials.csv")[1].couple, "rows and reference read the same rows")
 local v, src = CSV.ref_value("standard_potentials.csv", "couple", "2 H^+ + 2 e- = H2(g)", "E0_V_SHE_25C")
 check(v == 0 and src:find("hydrogen electrode", 1, true), "ref_value reads the SHE row")
 check(not pcall(CSV.ref_value, "standard_potentials.csv", "couple", "no such couple", "E0_V_SHE_25C"),

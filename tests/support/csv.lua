@@ -9,6 +9,7 @@
 --                                  a quoted field may span lines
 --   C.read(path)                   the same from a file; a missing file is an
 --                                  error naming it
+--   C.rows(path)                   the rows of C.read alone
 --   C.reference(name [, dir])      C.read of tests/reference/<name> (dir: the
 --                                  reference folder, default from
 --                                  PHLOX_SOURCE_DIR)
@@ -131,13 +132,17 @@ function M.read(path)
   return M.parse(text)
 end
 
+function M.rows(path)
+  local _, rows = M.read(path)
+  return rows
+end
+
 local function refdir(dir)
   return dir or ((os.getenv("PHLOX_SOURCE_DIR") or ".") .. "/tests/reference")
 end
 
 function M.reference(name, dir)
-  local _, rows = M.read(refdir(dir) .. "/" .. name)
-  return rows
+  return M.rows(refdir(dir) .. "/" .. name)
 end
 
 function M.ref_value(name, keycol, key, valcol, dir)
