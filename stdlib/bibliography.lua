@@ -29,6 +29,14 @@ return {
       short = "Hemingway et al. 1991",
       cite = "Hemingway, B. S., Robie, R. A. and Apps, J. A. (1991). Boehmite and related phases in the system Al-H-O (American Mineralogist 76; title and pages not recalled).",
     },
+    PW92 = {
+      short = "Palmer and Wesolowski 1992",
+      cite = "Palmer, D. A. and Wesolowski, D. J. (1992). Aluminum speciation and equilibria in aqueous solution: II. The solubility of gibbsite in acidic sodium chloride solutions from 30 to 70 C. Geochim. Cosmochim. Acta 56, 1093-1111 (abstract read at OSTI 7235603).",
+    },
+    WES92 = {
+      short = "Wesolowski 1992",
+      cite = "Wesolowski, D. J. (1992). Aluminum speciation and equilibria in aqueous solution: I. The solubility of gibbsite in the system Na-K-Cl-OH-Al(OH)4 from 0 to 100 C. Geochim. Cosmochim. Acta 56, 1065 (abstract read at OSTI 7278378, which names neither author nor volume and page: those are recalled).",
+    },
     K60 = {
       short = "Kelley 1960",
       cite = "Kelley, K. K. (1960). Contributions to the data on theoretical metallurgy XIII: High-temperature heat-content, heat-capacity and entropy data for the elements and inorganic compounds. U.S. Bureau of Mines Bulletin 584.",

@@ -22,6 +22,8 @@ M.USES = {
   { id = "CODATA89", use = "dfH and S of key ions, oxides and gases (dfG derived as dfH - T dfS); S of elements. A few dfH and S were read in a reprint of the CODATA table (the record says so); the rest are recalled." },
   { id = "RH95", use = "dfH, S (and dfG) of some minerals and molar volumes of minerals. Recalled." },
   { id = "HRA91", use = "boehmite (as tabulated by Robie and Hemingway 1995). Recalled." },
+  { id = "PW92", use = "dfG and dfH of Al3+ (the paper's recommended values from its measured gibbsite solubility, abstract read; S derived)." },
+  { id = "WES92", use = "log K, dH and dCp of gibbsite + OH- = Al(OH)4- at 25 C, measured 0-100 C (abstract read)." },
   { id = "K60", use = "Maier-Kelley heat-capacity coefficients (cal, converted with 4.184) of metals, oxides and gases. Recalled; each fit was held against the NBS Cp at 25 C (docs/data/*.md)." },
   { id = "HDNB78", use = "Maier-Kelley heat-capacity coefficients of some minerals (sulfides, sulfates, magnesite). Recalled." },
   { id = "SH88", use = "revised-HKF parameters and dfG, dfH, S of aqueous ions, recalled from the paper's tables; its correlations also estimate HKF parameters from Cp (and V) for the `estimate` records." },
