@@ -65,6 +65,14 @@ return {
       short = "Baes and Mesmer 1976",
       cite = "Baes, C. F. and Mesmer, R. E. (1976). The Hydrolysis of Cations. Wiley, New York.",
     },
+    BE16 = {
+      short = "Brown and Ekberg 2016",
+      cite = "Brown, P. L. and Ekberg, C. (2016). Hydrolysis of Metal Ions. Wiley-VCH, Weinheim (the Al constants read in the Wikipedia table 'Hydrolysis constant', which also lists the Baes and Mesmer 1976 and Hummel and Thoenen 2023 values).",
+    },
+    STIPP93 = {
+      short = "Stipp et al. 1993",
+      cite = "Stipp, S. L., Parks, G. A., Nordstrom, D. K. and Leckie, J. O. Solubility-product constant and thermodynamic properties for synthetic otavite, CdCO3(s), and aqueous association constants for the Cd(II)-CO2-H2O system. Geochim. Cosmochim. Acta (1992 or 1993; volume and pages not recalled).",
+    },
     N90 = {
       short = "Nordstrom et al. 1990",
       cite = "Nordstrom, D. K., Plummer, L. N., Langmuir, D., Busenberg, E., May, H. M., Jones, B. F. and Parkhurst, D. L. (1990). Revised chemical equilibrium data for major water-mineral reactions and their limitations. In: Chemical Modeling of Aqueous Systems II, ACS Symposium Series 416, 398-413.",

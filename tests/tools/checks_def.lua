@@ -208,8 +208,8 @@ crc("Sn^4+ + 2 e- = Sn^2+", 0.151, "medium")
 crc("Ca^2+ + 2 e- = Ca(s)", -2.868, "high")
 crc("Na^+ + e- = Na(s)", -2.71, "high")
 crc("K^+ + e- = K(s)", -2.931, "high")
-crc("Al^3+ + 3 e- = Al(s)", -1.662, "medium", { known = { diff = -0.0360, margin = 0.003,
-  why = "file: CODATA dfG(Al^3+) = -491.5 kJ/mol gives -1.698 V; NBS (-485.0) gives -1.676 V; CRC -1.662 V needs about -481 kJ/mol; dfG(Al^3+) spreads 10 kJ/mol across tables (SH88 -483.7). Same finding as docs/data/other-metals.md" } })
+crc("Al^3+ + 3 e- = Al(s)", -1.662, "medium", { known = { diff = -0.0229, margin = 0.003,
+  why = "file: dfG(Al3+) = -487.7 kJ/mol of Palmer and Wesolowski 1992 (from the measured gibbsite solubility) gives -1.685 V; CODATA (-491.5) gives -1.698 V, NBS (-485.0) -1.676 V; CRC -1.662 V needs about -481 kJ/mol; dfG(Al3+) spreads 10 kJ/mol across tables (SH88 -483.7). Same finding as docs/data/other-metals.md" } })
 crc("MnO2(s,pyrolusite) + 4 H^+ + 2 e- = Mn^2+ + 2 H2O(l)", 1.224, "high", { note = "5.3 mV: file NBS 1982 pyrolusite (-465.14) and Mn^2+ (-228.1 kJ/mol) give 1.2293 V; the CRC 1.224 V corresponds to 1.0 kJ/mol in dfG(MnO2), the rounding spread of the older MnO2 tables; the other CRC Mn couples of this page (Mn^2+/Mn, MnO4^-/Mn^2+, MnO4^-/MnO2) agree within 5 mV with the same NBS data" })
 crc("Mn^3+ + e- = Mn^2+", 1.5415, "high", { same = true,
   note = "Mn^3+ is defined from this CRC value; a conditional potential of 1.535 V at I = 3.31 mol/dm3 (HClO4/NaClO4) was measured for the same couple (abstract read, BITS Pilani repository 123456789/17836), 6.5 mV below, as expected for a medium that is not I = 0" })
@@ -256,9 +256,8 @@ lk("2 Fe^3+ + 2 H2O(l) = Fe2(OH)2^4+ + 2 H^+", nil, { same = true })
 lk("Fe^2+ + H2O(l) = FeOH^+ + H^+", nil, { same = true })
 lk("Cu^2+ + H2O(l) = CuOH^+ + H^+", nil, { same = true })
 lk("2 Cu^2+ + 2 H2O(l) = Cu2(OH)2^2+ + 2 H^+", nil, { same = true })
-lk("Al^3+ + H2O(l) = AlOH^2+ + H^+", nil, { same = true })
-lk("Al^3+ + 4 H2O(l) = Al(OH)4^- + 4 H^+", nil, { known = { diff = -0.09, margin = 0.02,
-  why = "file: Baes and Mesmer 1976 -23.0 (recalled; the row's note gives the same), kept with the other Baes and Mesmer Al constants; the row is Brown and Ekberg 2016, -22.91 +- 0.10. The difference lies inside the row's stated uncertainty" } })
+lk("Al^3+ + H2O(l) = AlOH^2+ + H^+", nil, { note = "file: Brown and Ekberg 2016 -4.98 +- 0.02 (read); the row is the Baes and Mesmer column of the same table" })
+lk("Al^3+ + 4 H2O(l) = Al(OH)4^- + 4 H^+", nil, { note = "file: Wesolowski 1992 gibbsite solubility in base with the Palmer and Wesolowski 1992 Al3+ and the Robie and Hemingway gibbsite (-22.87); the row is the Brown and Ekberg 2016 selection, an evaluation that draws on the same Oak Ridge measurements among others. Baes and Mesmer (-23.0, next rows) is older and independent" })
 lk("Pb^2+ + H2O(l) = PbOH^+ + H^+", nil, { same = true })
 lk("Co^2+ + H2O(l) = CoOH^+ + H^+", nil, { same = true })
 lk("Mg^2+ + H2O(l) = MgOH^+ + H^+", nil, { same = true })
@@ -333,8 +332,8 @@ rk("Mg(OH)2(s,brucite) + 2 H^+ = Mg^2+ + 2 H2O(l)", 16.84, BM76 .. " (as quoted 
    { note = "issue 13: CODATA Mg^2+ with NBS brucite (the former SH88 Mg^2+ gave 16.60)" })
 rk("Ca(OH)2(s,portlandite) + 2 H^+ = Ca^2+ + 2 H2O(l)", 22.8, BM76, "medium", { known = { diff = -0.278, margin = 0.02,
   why = "file: SH88 Ca^2+ (close to CODATA) with NBS portlandite gives 22.52; NBS Ca^2+ would give 22.66; Baes and Mesmer 22.8 (recalled). Same finding as docs/data/other-metals.md" } })
-rk("Al(OH)3(s,gibbsite) + 3 H^+ = Al^3+ + 3 H2O(l)", 8.11, N90, "medium", { known = { diff = 0.298, margin = 0.02,
-  why = "file: CODATA Al^3+ with Robie and Hemingway gibbsite gives 8.41; Nordstrom et al. 1990 8.11, Palmer and Wesolowski 1992 7.74 (recalled); NBS Al^3+ would give 7.27. Same finding as docs/data/other-metals.md" } })
+rk("Al(OH)3(s,gibbsite) + 3 H^+ = Al^3+ + 3 H2O(l)", 8.11, N90, "medium", { known = { diff = -0.369, margin = 0.02,
+  why = "file (issue 13): the Al3+ that Palmer and Wesolowski 1992 recommend from their measured gibbsite solubility (dG -44.2 +- 0.3 kJ/mol, log *Ks 7.74; abstract read) with Robie and Hemingway gibbsite gives 7.74; Brown and Ekberg 2016 select 7.75 +- 0.08 (read, next row). Nordstrom et al. 1990 (8.11, recalled) predates that measurement, which its abstract says differs markedly from all but the most recent earlier studies. CODATA Al3+ gave 8.41, NBS Al3+ 7.27. Same finding as docs/data/other-metals.md" } })
 
 -- 4b. issue 13: gold, cyanide, mercury, boron, strontium and barium ------
 -- Each against a published value other than the file's source.
@@ -419,7 +418,7 @@ sp("Ti^2+ + 2 e- = Ti(s)", nil, { same = true, note = "Ti^2+ is defined from thi
 sp("Mo^3+ + 3 e- = Mo(s)", nil, { same = true, note = "Mo^3+ is defined from this CRC value" })
 crc("TiO2(s,rutile) + 4 H^+ + 2 e- = Ti^2+ + 2 H2O(l)", -0.502, "low", { note = "Ti^2+ is defined from the CRC Ti^2+/Ti value (-1.630 V), so this row tests NBS rutile against the CRC's own rutile: 16 mV is 2 kJ/mol in dfG of a two-electron couple, inside the spread of old Ti(II) data (Ti^2+ is not stable in water; its E is estimated, not measured)" })
 crc("TiO(s) + 2 H^+ + 2 e- = Ti(s) + H2O(l)", -1.31, "low", { note = "file: NBS 1982 TiO (alpha) gives -1.336 V; CRC -1.31 V implies dfG(TiO) about 5 kJ/mol less negative; TiO data spread with stoichiometry (TiO(1+-x)) and phase" })
-crc("Al(OH)4^- + 3 e- = Al(s) + 4 OH^-", -2.33, "medium", { note = "CRC writes H2AlO3^- + H2O; file: CODATA Al^3+ with the Baes and Mesmer beta4 (-23.0) gives -2.348 V; the 18 mV follow the Al^3+ choice (-1.698 against CRC -1.662 V for Al^3+/Al, 36 mV, row above) less the hydrolysis constant's share" })
+crc("Al(OH)4^- + 3 e- = Al(s) + 4 OH^-", -2.33, "medium", { note = "CRC writes H2AlO3^- + H2O; file: Robie and Hemingway gibbsite with the Wesolowski 1992 aluminate (the couple does not involve Al^3+) gives -2.337 V; CRC prints two decimals (+-5 mV)" })
 crc("CO(g) + 2 H^+ + 2 e- = C(s,graphite) + H2O(l)", 0.517, "medium", { note = "file: CODATA 1989 CO(g); the CRC value probably follows the same key value" })
 crc("C(s,graphite) + 4 H^+ + 4 e- = CH4(g)", 0.13, "medium", { note = "file: NBS 1982 CH4(g); the CRC value has two decimals" })
 crc("N2(g) + 8 H^+ + 6 e- = 2 NH4^+", 0.275, "low", { note = "file: SH88 NH4^+ (HKF); the couple is kinetically inert (nitrogen fixation needs enzymes or catalysts)" })
@@ -515,9 +514,8 @@ function M.wes92_logK(T)
 end
 for _, t in ipairs({ 50, 100 }) do
   add({ kind = "logK", reaction = "Al(OH)3(s,gibbsite) + OH^- = Al(OH)4^-", T_C = t, group = "T_other",
-        tolclass = "WES_T", value_fn = M.wes92_logK, source = WES92, confidence = "medium",
-        known = { diff = ({ [50] = 0.492, [100] = 0.458 })[t], margin = 0.02,
-          why = "the 25 C offset of Al.lua's Al(OH)4^- (Brown and Ekberg 2016 hydrolysis constant on the CODATA Al^3+: +0.537 against Wesolowski's gibbsite solubility at 25 C) carried up; the change of log K from 25 C agrees within 0.08 (phlox +0.894, measured +0.973 at 100 C)" } })
+        value_fn = M.wes92_logK, source = WES92, confidence = "medium", same = true,
+        note = "issue 13: Al.lua now defines Al(OH)4^- by this very measurement (logK_T from the paper's 25 C log K, dH and dCp), so these rows check the chain from file to result only. Before, Baes and Mesmer's beta4 on the CODATA Al3+ put it 0.49/0.46 above the measurement at 50/100 C" })
 end
 
 -- Dissolved elemental mercury at 60 C (high_temperature.csv): the Henry
