@@ -1,6 +1,7 @@
 # libraries.cmake - the phlox libraries by layer (included from CMakeLists.txt).
 #
-#   phlox-core    src/core src/num src/water src/thermo src/equil src/diagram
+#   phlox-core    src/core src/num src/geom src/water src/thermo src/equil
+#                 src/diagram
 #                 (needs only libm and threads: no Lua, no cairo)
 #   phlox-data    src/data (element files are Lua tables, read in a sandboxed
 #                 Lua state) and the embedded library (src/embed: the index of
@@ -33,7 +34,7 @@ set(PHLOX_PUBLIC_HEADERS_core
     thermo/practice.h=practice
     equil/equil.h=equil equil/speciate.h=speciate
     diagram/diagram.h=diagram diagram/potential.h=potential diagram/emap.h=emap
-    diagram/rmap.h=rmap)
+    diagram/rmap.h=rmap geom/geom.h=geom)
 set(PHLOX_PUBLIC_HEADERS_data data/data.h=data)
 set(PHLOX_PUBLIC_HEADERS_render render/render.h=render)
 set(PHLOX_PUBLIC_HEADERS ${PHLOX_PUBLIC_HEADERS_core} ${PHLOX_PUBLIC_HEADERS_data}
@@ -49,6 +50,7 @@ list(APPEND PHLOX_PUBLIC_HEADER_FILES ${PHLOX_PUBLIC_INCLUDE_DIR}/phlox/version.
 
 file(GLOB PHLOX_SOURCES_core CONFIGURE_DEPENDS
      ${CMAKE_SOURCE_DIR}/src/core/*.c ${CMAKE_SOURCE_DIR}/src/num/*.c
+     ${CMAKE_SOURCE_DIR}/src/geom/*.c
      ${CMAKE_SOURCE_DIR}/src/water/*.c
      ${CMAKE_SOURCE_DIR}/src/thermo/*.c ${CMAKE_SOURCE_DIR}/src/equil/*.c
      ${CMAKE_SOURCE_DIR}/src/diagram/*.c)

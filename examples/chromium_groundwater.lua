@@ -53,9 +53,14 @@ local function speciate(pH, E)
   return phlox.speciate { library = lib, T_C = T_C, pH = pH, E = E, activity_model = "davies",
                           totals = { Cr = CR_TOTAL, C = DIC, Na = DIC } }
 end
+-- Summed in a fixed (sorted) order: pairs() visits string keys in an order
+-- that changes from run to run, and a floating-point sum in another order can
+-- differ in its last digit, which would break byte-identical reruns.
 local function cr_vi_share(r)
-  local s = 0
-  for sp, v in pairs(r.elements.Cr.share) do if CR_VI[sp] then s = s + v end end
+  local names, s = {}, 0
+  for sp in pairs(r.elements.Cr.share) do if CR_VI[sp] then names[#names + 1] = sp end end
+  table.sort(names)
+  for _, sp in ipairs(names) do s = s + r.elements.Cr.share[sp] end
   return s
 end
 

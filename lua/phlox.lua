@@ -1015,13 +1015,9 @@ function phlox.grid_fields(g)
         end
         ci, cj, pdx, pdy = t[1], t[2], dx, dy
       until ci == start[1] and cj == start[2]
-      local a = 0
-      for k = 1, #xs do
-        local k2 = k % #xs + 1
-        a = a + xs[k] * ys[k2] - xs[k2] * ys[k]
-      end
+      local a = core.polygon_area(xs, ys)   -- signed, src/geom
       if a > 0 and #xs >= 3 then   -- outer outlines run counter-clockwise
-        fields[#fields + 1] = { species = g.species[sp], kind = "aqueous", x = xs, y = ys, area = a / 2 }
+        fields[#fields + 1] = { species = g.species[sp], kind = "aqueous", x = xs, y = ys, area = a }
       end
     end
   end
@@ -1039,16 +1035,8 @@ function phlox.locate(map, x, y)
   if type(map.fields) ~= "table" then core.user_error("phlox.locate: a map (phlox.map{...}) expected") end
   core.check_value("phlox.locate", "x", x, "number", -COORD, COORD)
   core.check_value("phlox.locate", "y", y, "number", -COORD, COORD)
-  for _, f in ipairs(map.fields) do
-    local inside, n = false, #f.x
-    local j = n
-    for i = 1, n do
-      local xi, yi, xj, yj = f.x[i], f.y[i], f.x[j], f.y[j]
-      if ((yi > y) ~= (yj > y)) and (x < (xj - xi) * (y - yi) / (yj - yi) + xi) then inside = not inside end
-      j = i
-    end
-    if inside then return f.species, f end
-  end
+  local k = core.locate(map.fields, x, y)   -- even-odd rule, src/geom
+  if k then return map.fields[k].species, map.fields[k] end
   return nil
 end
 

@@ -1,4 +1,4 @@
-/* proc.c - worker processes, durable appends, folder listing (see proc.h). */
+/* proc.c - worker processes, durable appends, folder listing, clocks (see proc.h). */
 #define _POSIX_C_SOURCE 200809L
 #define _DEFAULT_SOURCE /* DT_* and d_type where present; harmless elsewhere */
 #include "core/proc.h"
@@ -13,6 +13,7 @@
 #include <string.h>
 #include <sys/stat.h>
 #include <sys/wait.h>
+#include <time.h>
 #include <unistd.h>
 #ifdef __linux__
 #include <sys/prctl.h>
@@ -251,4 +252,21 @@ nomem:
     closedir(d);
     px_dir_list_free(list, n);
     return fail_errno(errno_out, ENOMEM, PX_ENOMEM);
+}
+
+static double seconds(clockid_t id)
+{
+    struct timespec t;
+    if (clock_gettime(id, &t) != 0) return 0;
+    return (double)t.tv_sec + 1e-9 * (double)t.tv_nsec;
+}
+
+double px_clock_wall(void)
+{
+    return seconds(CLOCK_MONOTONIC);
+}
+
+double px_clock_thread_cpu(void)
+{
+    return seconds(CLOCK_THREAD_CPUTIME_ID);
 }

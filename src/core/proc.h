@@ -1,6 +1,6 @@
 /* proc.h - the operating-system helpers that sweeps need: forked worker
  * processes that die with their parent and talk through pipes, a durable append for
- * journals, and a directory listing.  POSIX; the parent-death signal is
+ * journals, a directory listing and the clocks that time threads.  POSIX; the parent-death signal is
  * Linux's prctl(PR_SET_PDEATHSIG) where available, and workers also check
  * their parent between points (px_proc_parent) everywhere else.
  *
@@ -42,6 +42,11 @@ int px_file_append_sync(const char *path, const void *data, size_t n, int *errno
 
 /* Cut path to len bytes and sync it (drops a torn last record). */
 int px_file_truncate(const char *path, size_t len, int *errno_out);
+
+/* Seconds of a monotonic clock (for intervals), and CPU seconds the
+ * calling thread has used (0 where the system cannot tell). */
+double px_clock_wall(void);
+double px_clock_thread_cpu(void);
 
 /* The names in folder `path` (without "." and ".."), sorted bytewise, as one
  * malloc'd array of malloc'd strings; free with px_dir_list_free. */

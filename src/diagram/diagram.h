@@ -9,8 +9,8 @@
  *     clipped to the window (or to a ligand field, nested mode);
  *   - rigorous grid maps: a caller's labelling callback on an nx x ny grid,
  *     boundaries traced between grid points and refined by bisection;
- *   - geometry helpers (area, point in polygon, pole of inaccessibility),
- *     union of fields into outlines and corrosion domains;
+ *   - union of fields into outlines and corrosion domains (the plane
+ *     geometry itself, areas and point in polygon, is src/geom/geom.h);
  *   - water stability lines, neutral pH and reference-electrode offsets.
  * All functions are reentrant; results depend only on the inputs (same
  * inputs, same bits).  Status codes from core/status.h. */
@@ -223,29 +223,5 @@ typedef struct px_diagram_grid {
 int px_diagram_grid_map(const px_diagram_window *w, px_diagram_label_fn fn, void *user,
                         const px_diagram_grid_options *opt, px_diagram_grid **out);
 void px_diagram_grid_free(px_diagram_grid *g); /* NULL ok */
-
-/* ------------------------------------------------------------- geometry */
-
-/* Signed area (shoelace): > 0 for counter-clockwise vertices. */
-double px_diagram_polygon_area(const double *x, const double *y, size_t n);
-
-/* 1 if (px, py) is inside the simple polygon (even-odd rule), else 0;
- * points exactly on an edge may go either way. */
-int px_diagram_polygon_contains(const double *x, const double *y, size_t n,
-                                double px, double py);
-
-/* Signed distance from (px, py) to the polygon outline: > 0 inside. */
-double px_diagram_polygon_distance(const double *x, const double *y, size_t n,
-                                   double px, double py);
-
-/* Pole of inaccessibility: a point inside the simple polygon whose distance
- * to the outline is within `precision` of the largest (iterative cell
- * refinement).  *dist receives that distance.  PX_EINVAL for n < 3,
- * non-finite input, precision <= 0 or zero area; PX_ELIMIT when a budget
- * of 1e6 cells ran out (a ridge of equally good points, e.g. a long
- * rectangle, with a tiny precision): the best point found is still set. */
-int px_diagram_polygon_pole(const double *x, const double *y, size_t n, double precision,
-                            const px_allocator *alloc, double *px, double *py,
-                            double *dist);
 
 #endif

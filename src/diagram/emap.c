@@ -5,6 +5,7 @@
 #include "core/constants.h"
 #include "core/status.h"
 #include "equil/equil.h"
+#include "geom/geom.h"
 #include "thermo/basis.h"
 #include <ctype.h>
 #include <math.h>
@@ -413,8 +414,8 @@ static int join_and_classify(px_emap *m, const px_db *db, int zM)
         for (size_t h = 0; h < u->nloop; h++) {
             const px_diagram_loop *hl = &u->loop[h];
             if (hl->area < 0 && hl->cls == lp->cls &&
-                px_diagram_polygon_contains(u->x + lp->first, u->y + lp->first, lp->n,
-                                            u->x[hl->first], u->y[hl->first]))
+                px_geom_polygon_contains(u->x + lp->first, u->y + lp->first, lp->n,
+                                         u->x[hl->first], u->y[hl->first]))
                 o->area += hl->area;
         }
     }

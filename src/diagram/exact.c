@@ -17,6 +17,7 @@
  * the same bits. */
 #include "diagram/diagram.h"
 #include "diagram/diagram_impl.h"
+#include "geom/geom.h"
 #include "core/status.h"
 #include <float.h>
 #include <math.h>
@@ -732,7 +733,7 @@ int px_diagram_map_nested(const px_diagram_region *r, size_t nr, const px_diagra
     size_t off = 0;
     for (size_t k = 0; k < nr; k++) {
         size_t n = r[k].n;
-        double s = px_diagram_polygon_area(r[k].x, r[k].y, n);
+        double s = px_geom_polygon_area(r[k].x, r[k].y, n);
         int rev = s < 0;
         cv *D = doms + off;
         for (size_t i = 0; i < n; i++) {

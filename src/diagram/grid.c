@@ -162,6 +162,18 @@ static size_t id_index(const px_diagram_grid_field *f, size_t n, int id)
     return lo;
 }
 
+/* The smaller and larger of two finite numbers, inline: the summary's loops
+ * run over every node on the calling thread, and fmin is a library call. */
+static inline double min2(double a, double b)
+{
+    return b < a ? b : a;
+}
+
+static inline double max2(double a, double b)
+{
+    return b > a ? b : a;
+}
+
 static int fields_summary(gctx *c, const double *xs, const double *ys)
 {
     px_diagram_grid *g = c->g;
@@ -205,18 +217,18 @@ static int fields_summary(gctx *c, const double *xs, const double *ys)
             F->area += w;
             F->cx += w * xs[i];
             F->cy += w * ys[j];
-            F->xmin = fmin(F->xmin, xs[i]);
-            F->xmax = fmax(F->xmax, xs[i]);
-            F->ymin = fmin(F->ymin, ys[j]);
-            F->ymax = fmax(F->ymax, ys[j]);
+            F->xmin = min2(F->xmin, xs[i]);
+            F->xmax = max2(F->xmax, xs[i]);
+            F->ymin = min2(F->ymin, ys[j]);
+            F->ymax = max2(F->ymax, ys[j]);
             /* distance seed: half a step next to another label, else to the border */
             int l = g->label[j * nx + i];
-            double d = fmin(fmin(xs[i] - xs[0], xs[nx - 1] - xs[i]),
-                            fmin(ys[j] - ys[0], ys[ny - 1] - ys[j]));
-            if (i > 0 && g->label[j * nx + i - 1] != l) d = fmin(d, 0.5 * dx);
-            if (i + 1 < nx && g->label[j * nx + i + 1] != l) d = fmin(d, 0.5 * dx);
-            if (j > 0 && g->label[(j - 1) * nx + i] != l) d = fmin(d, 0.5 * dy);
-            if (j + 1 < ny && g->label[(j + 1) * nx + i] != l) d = fmin(d, 0.5 * dy);
+            double d = min2(min2(xs[i] - xs[0], xs[nx - 1] - xs[i]),
+                            min2(ys[j] - ys[0], ys[ny - 1] - ys[j]));
+            if (i > 0 && g->label[j * nx + i - 1] != l) d = min2(d, 0.5 * dx);
+            if (i + 1 < nx && g->label[j * nx + i + 1] != l) d = min2(d, 0.5 * dx);
+            if (j > 0 && g->label[(j - 1) * nx + i] != l) d = min2(d, 0.5 * dy);
+            if (j + 1 < ny && g->label[(j + 1) * nx + i] != l) d = min2(d, 0.5 * dy);
             dist[j * nx + i] = d;
         }
     }
@@ -225,23 +237,23 @@ static int fields_summary(gctx *c, const double *xs, const double *ys)
         for (size_t i = 0; i < nx; i++) {
             size_t k = j * nx + i;
             int l = g->label[k];
-            if (i > 0 && g->label[k - 1] == l) dist[k] = fmin(dist[k], dist[k - 1] + dx);
-            if (j > 0 && g->label[k - nx] == l) dist[k] = fmin(dist[k], dist[k - nx] + dy);
+            if (i > 0 && g->label[k - 1] == l) dist[k] = min2(dist[k], dist[k - 1] + dx);
+            if (j > 0 && g->label[k - nx] == l) dist[k] = min2(dist[k], dist[k - nx] + dy);
             if (j > 0 && i > 0 && g->label[k - nx - 1] == l)
-                dist[k] = fmin(dist[k], dist[k - nx - 1] + dd);
+                dist[k] = min2(dist[k], dist[k - nx - 1] + dd);
             if (j > 0 && i + 1 < nx && g->label[k - nx + 1] == l)
-                dist[k] = fmin(dist[k], dist[k - nx + 1] + dd);
+                dist[k] = min2(dist[k], dist[k - nx + 1] + dd);
         }
     for (size_t j = ny; j-- > 0;)
         for (size_t i = nx; i-- > 0;) {
             size_t k = j * nx + i;
             int l = g->label[k];
-            if (i + 1 < nx && g->label[k + 1] == l) dist[k] = fmin(dist[k], dist[k + 1] + dx);
-            if (j + 1 < ny && g->label[k + nx] == l) dist[k] = fmin(dist[k], dist[k + nx] + dy);
+            if (i + 1 < nx && g->label[k + 1] == l) dist[k] = min2(dist[k], dist[k + 1] + dx);
+            if (j + 1 < ny && g->label[k + nx] == l) dist[k] = min2(dist[k], dist[k + nx] + dy);
             if (j + 1 < ny && i + 1 < nx && g->label[k + nx + 1] == l)
-                dist[k] = fmin(dist[k], dist[k + nx + 1] + dd);
+                dist[k] = min2(dist[k], dist[k + nx + 1] + dd);
             if (j + 1 < ny && i > 0 && g->label[k + nx - 1] == l)
-                dist[k] = fmin(dist[k], dist[k + nx - 1] + dd);
+                dist[k] = min2(dist[k], dist[k + nx - 1] + dd);
         }
     for (size_t k = 0; k < nu; k++) { /* best distance per field; -1: unset */
         g->field[k].cx /= g->field[k].area;

@@ -16,6 +16,7 @@
  * says what can form, not how fast. */
 #include "diagram/diagram.h"
 #include "diagram/diagram_impl.h"
+#include "geom/geom.h"
 #include "core/status.h"
 #include <math.h>
 #include <stdlib.h>
@@ -178,13 +179,7 @@ int px_diagram_map_union(const px_diagram_map *map, const int *field_class,
             }
         }
         nvid = first + n;
-        px_diagram_loop L = {e[s].cls, first, n, 0.0};
-        double ar = 0;
-        for (size_t i = 0; i < n; i++) {
-            size_t p0 = vid[first + i], p1 = vid[first + (i + 1) % n];
-            ar += X[p0] * Y[p1] - X[p1] * Y[p0];
-        }
-        L.area = 0.5 * ar;
+        px_diagram_loop L = {e[s].cls, first, n, 0.0}; /* area once the points are out */
         if (PX_DG_PUSH(a, o->loop, o->nloop, caploop, L)) goto done;
     }
     o->nvert = nvid;
@@ -194,6 +189,10 @@ int px_diagram_map_union(const px_diagram_map *map, const int *field_class,
     for (size_t i = 0; i < nvid; i++) {
         o->x[i] = X[vid[i]];
         o->y[i] = Y[vid[i]];
+    }
+    for (size_t l = 0; l < o->nloop; l++) {
+        px_diagram_loop *lp = &o->loop[l];
+        lp->area = px_geom_polygon_area(o->x + lp->first, o->y + lp->first, lp->n);
     }
     *out = o;
     st = PX_OK;

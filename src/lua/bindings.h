@@ -20,6 +20,13 @@ void px_lua_open_diagram(lua_State *L);
 void px_lua_open_equil(lua_State *L);
 void px_lua_open_opts(lua_State *L);
 void px_lua_open_fs(lua_State *L);
+void px_lua_open_geom(lua_State *L);
+
+/* Reads the point lists at stack indices ax, ay (tables of numbers of one
+ * length) into a box pushed on the stack (it lives until the call returns;
+ * lua_settop() first so it sits above the arguments).  Misuse raises an
+ * argument error.  Returns the number of points. */
+size_t px_lua_check_points(lua_State *L, int ax, int ay, double **x, double **y);
 
 /* The option reader (l_opts.c).  A function's options are a NULL-terminated
  * array, one line per key:

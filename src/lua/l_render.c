@@ -50,27 +50,6 @@ static px_rgba checkcolor(lua_State *L, int arg)
 
 /* Two equal-length number arrays -> malloc'd copies (in a userdata box so
  * an error in between leaks nothing). */
-static size_t checkpoints(lua_State *L, int ax, int ay, double **x, double **y)
-{
-    luaL_checktype(L, ax, LUA_TTABLE);
-    luaL_checktype(L, ay, LUA_TTABLE);
-    lua_Integer n = luaL_len(L, ax);
-    luaL_argcheck(L, luaL_len(L, ay) == n, ay, "x and y must have the same length");
-    /* the caller lua_settop()s first so this box sits above all arguments */
-    double *buf = lua_newuserdatauv(L, 2 * (size_t)(n > 0 ? n : 1) * sizeof(double), 0);
-    for (lua_Integer i = 1; i <= n; i++) {
-        lua_rawgeti(L, ax, i);
-        lua_rawgeti(L, ay, i);
-        if (!lua_isnumber(L, -2) || !lua_isnumber(L, -1)) luaL_argerror(L, ax, "points must be numbers");
-        buf[i - 1] = lua_tonumber(L, -2);
-        buf[n + i - 1] = lua_tonumber(L, -1);
-        lua_pop(L, 2);
-    }
-    *x = buf;
-    *y = buf + n;
-    return (size_t)n; /* the box stays on the stack until the call returns */
-}
-
 static int l_figure(lua_State *L)
 {
     double w = luaL_checknumber(L, 1), h = luaL_checknumber(L, 2);
@@ -100,7 +79,7 @@ static size_t checkpanelpoints(lua_State *L, int nargs, int *panel, double **x, 
 {
     lua_settop(L, nargs);
     *panel = checkpanel(L, 2);
-    return checkpoints(L, 3, 4, x, y);
+    return px_lua_check_points(L, 3, 4, x, y);
 }
 
 static int f_titles(lua_State *L)
@@ -134,7 +113,7 @@ static int f_line(lua_State *L)
     lua_settop(L, 8); /* the points box goes above every argument */
     int panel = checkpanel(L, 2);
     double *x, *y;
-    size_t n = checkpoints(L, 3, 4, &x, &y);
+    size_t n = px_lua_check_points(L, 3, 4, &x, &y);
     px_rgba c = checkcolor(L, 5);
     double width = luaL_optnumber(L, 6, 1.0);
     int dash = luaL_checkoption(L, 7, "solid", dashes);
@@ -160,7 +139,7 @@ static int f_hatch(lua_State *L)
     lua_settop(L, 8); /* the points box goes above every argument */
     int panel = checkpanel(L, 2);
     double *x, *y;
-    size_t n = checkpoints(L, 3, 4, &x, &y);
+    size_t n = px_lua_check_points(L, 3, 4, &x, &y);
     px_rgba c = checkcolor(L, 5);
     double width = luaL_optnumber(L, 6, 0.5), spacing = luaL_optnumber(L, 7, 5.0);
     double angle = luaL_optnumber(L, 8, 45.0);
@@ -484,19 +463,6 @@ static int l_text_width(lua_State *L)
     return 1;
 }
 
-static int l_polygon_pole(lua_State *L)
-{
-    double *x, *y, px, py, d;
-    lua_settop(L, 3);
-    size_t n = checkpoints(L, 1, 2, &x, &y);
-    int st = px_polygon_pole(x, y, n, luaL_optnumber(L, 3, 1e-3), &px, &py, &d);
-    status_error(L, st, "polygon_pole");
-    lua_pushnumber(L, px);
-    lua_pushnumber(L, py);
-    lua_pushnumber(L, d);
-    return 3;
-}
-
 void px_lua_open_render(lua_State *L)
 {
     static const luaL_Reg methods[] = {
@@ -510,9 +476,8 @@ void px_lua_open_render(lua_State *L)
         {"stamp_below", f_stamp_below}, {"reference_output", f_reference_output},
         {"svg_text", f_svg_text}, {NULL, NULL}};
     static const luaL_Reg funcs[] = {
-        {"figure", l_figure}, {"ticks", l_ticks}, {"polygon_pole", l_polygon_pole},
-        {"text_width", l_text_width}, {"pdf_pages", l_pdf_pages}, {"text_runs", l_text_runs},
-        {NULL, NULL}};
+        {"figure", l_figure}, {"ticks", l_ticks}, {"text_width", l_text_width},
+        {"pdf_pages", l_pdf_pages}, {"text_runs", l_text_runs}, {NULL, NULL}};
     luaL_newmetatable(L, FIGURE_MT);
     luaL_newlib(L, methods);
     lua_setfield(L, -2, "__index");

@@ -10,6 +10,7 @@ const px_lua_opener px_lua_openers[] = {
     px_lua_open_equil,
     px_lua_open_opts,
     px_lua_open_fs,
+    px_lua_open_geom,
     px_lua_open_practice,
     px_lua_open_proc,
     0};

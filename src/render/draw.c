@@ -11,6 +11,7 @@
  * boxes to callers and tests, so nothing models the layout a second time. */
 #include "core/atomic.h"
 #include "core/status.h"
+#include "geom/geom.h"
 #include "render/figure_priv.h"
 #include "render/png.h"
 #include "render/text.h"
@@ -208,7 +209,7 @@ static int seg_hits_box(const px_label_box *b, double x0, double y0, double x1, 
         if (seg_seg_cross(x0, y0, x1, y1, b->qx[k], b->qy[k], b->qx[(k + 1) % 4],
                           b->qy[(k + 1) % 4]))
             return 1;
-    return px_polygon_contains(b->qx, b->qy, 4, x0, y0);
+    return px_geom_polygon_contains(b->qx, b->qy, 4, x0, y0);
 }
 
 static double foot_height(const px_figure *f)
@@ -612,15 +613,6 @@ static int lines_crossing(const pgeom *g, const px_label_box *b)
     return c;
 }
 
-static double pt_seg_dist(double px, double py, double ax, double ay, double bx, double by)
-{
-    double dx = bx - ax, dy = by - ay, l2 = dx * dx + dy * dy;
-    double t = l2 > 0 ? ((px - ax) * dx + (py - ay) * dy) / l2 : 0;
-    t = t < 0 ? 0 : t > 1 ? 1 : t;
-    double ex = ax + t * dx - px, ey = ay + t * dy - py;
-    return sqrt(ex * ex + ey * ey);
-}
-
 /* Is the box inside the polygon (corners inside, no edge crossing it)?
  * *clear receives the least distance from the box's corners and centre
  * region to the polygon's edges (a measure of breathing room). */
@@ -628,7 +620,7 @@ static int box_in_poly(const double *x, const double *y, size_t n, const px_labe
                        double *clear)
 {
     for (int k = 0; k < 4; k++)
-        if (!px_polygon_contains(x, y, n, b->qx[k], b->qy[k])) return 0;
+        if (!px_geom_polygon_contains(x, y, n, b->qx[k], b->qy[k])) return 0;
     double c = INFINITY;
     for (size_t i = 0, j = n - 1; i < n; j = i++) {
         for (int k = 0; k < 4; k++)
@@ -636,7 +628,7 @@ static int box_in_poly(const double *x, const double *y, size_t n, const px_labe
                               b->qy[(k + 1) % 4]))
                 return 0;
         for (int k = 0; k < 4; k++)
-            c = fmin(c, pt_seg_dist(b->qx[k], b->qy[k], x[j], y[j], x[i], y[i]));
+            c = fmin(c, px_geom_segment_distance(b->qx[k], b->qy[k], x[j], y[j], x[i], y[i]));
     }
     *clear = c;
     return 1;
@@ -786,32 +778,21 @@ static void field_geometry(const pgeom *g, const px_item *it, double *x, double 
         y[i] = fmin(fmax(map_y(g->p, g->r, it->y[i]), g->r.y), g->r.y + g->r.h);
     }
     double dist;
-    if (px_polygon_pole(x, y, n, 0.5, px, py, &dist) != PX_OK) *px = *py = NAN;
+    int st = px_geom_polygon_pole(x, y, n, 0.5, NULL, px, py, &dist);
+    if (st != PX_OK && st != PX_ELIMIT) *px = *py = NAN; /* ELIMIT: the best point found */
     if (isfinite(it->lx) && isfinite(it->ly)) { /* a label point given by the caller */
         *px = map_x(g->p, g->r, it->lx);
         *py = map_y(g->p, g->r, it->ly);
     }
-    double a = 0, sx = 0, sy = 0;
-    for (size_t i = 0, j = n - 1; i < n; j = i++) {
-        double c = x[j] * y[i] - x[i] * y[j];
-        a += c;
-        sx += (x[j] + x[i]) * c;
-        sy += (y[j] + y[i]) * c;
-    }
-    if (a != 0 && px_polygon_contains(x, y, n, sx / (3 * a), sy / (3 * a))) {
-        *gx = sx / (3 * a);
-        *gy = sy / (3 * a);
+    double cx, cy;
+    if (px_geom_polygon_centroid(x, y, n, &cx, &cy) == PX_OK &&
+        px_geom_polygon_contains(x, y, n, cx, cy)) {
+        *gx = cx;
+        *gy = cy;
     } else {
         *gx = *px;
         *gy = *py;
     }
-}
-
-static double poly_area(const double *x, const double *y, size_t n)
-{
-    double a = 0;
-    for (size_t i = 0, j = n - 1; i < n; j = i++) a += x[j] * y[i] - x[i] * y[j];
-    return fabs(a) / 2;
 }
 
 /* ---- labels along lines ---------------------------------------------- */
@@ -1069,7 +1050,7 @@ static void draw_panel(cairo_t *cr, const px_figure *f, int panel, rect r, rect 
                     px[q] = map_x(p, r, it->x[q]);
                     px[cap + q] = map_y(p, r, it->y[q]);
                 }
-                area[k] = poly_area(px, px + cap, it->n);
+                area[k] = fabs(px_geom_polygon_area(px, px + cap, it->n));
             }
             for (size_t a = 1; a < no; a++) /* insertion sort, stable */
                 for (size_t b = a; b > 0 && area[b] > area[b - 1]; b--) {
@@ -1090,7 +1071,8 @@ static void draw_panel(cairo_t *cr, const px_figure *f, int panel, rect r, rect 
             const px_item *it = &p->items[order[k]];
             double gx, gy, qx, qy;
             field_geometry(&g, it, px, px + cap, &gx, &gy, &qx, &qy);
-            if (poly_area(px, px + cap, it->n) <= 0 || !isfinite(gx)) continue; /* not visible */
+            if (fabs(px_geom_polygon_area(px, px + cap, it->n)) <= 0 || !isfinite(gx))
+                continue; /* not visible */
             place_leader(cr, &g, (long)order[k], gx, gy, lr);
         }
         for (size_t i = 0; i < p->n_items; i++)

@@ -193,10 +193,4 @@ size_t px_ticks_linear(double a, double b, size_t max_ticks, double *ticks);
 /* Decades (and 2, 5 between when there are few) for a log axis, a, b > 0. */
 size_t px_ticks_log(double a, double b, size_t max_ticks, double *ticks);
 
-/* Point-in-polygon (even-odd) and the pole of inaccessibility (the interior
- * point farthest from the edges, to precision `tol`), for label placement. */
-int px_polygon_contains(const double *x, const double *y, size_t n, double px, double py);
-int px_polygon_pole(const double *x, const double *y, size_t n, double tol, double *px,
-                    double *py, double *dist);
-
 #endif

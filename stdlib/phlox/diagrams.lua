@@ -494,24 +494,6 @@ diagrams.electrode_names = phlox.electrode_names
 --- The reference electrode record for a short or full name.
 function diagrams.electrode(name) return phlox.electrode(name) end
 
--- The E interval of a field polygon on the vertical line at x that holds E
--- (crossings by the half-open rule of ray casting, paired bottom-up, so a
--- field that is not convex gives the right piece).
-local function span_at(field, x, E)
-  local ys = {}
-  local n = #field.x
-  for i = 1, n do
-    local j = i % n + 1
-    local x1, y1, x2, y2 = field.x[i], field.y[i], field.x[j], field.y[j]
-    if (x1 <= x) ~= (x2 <= x) then ys[#ys + 1] = y1 + (y2 - y1) * (x - x1) / (x2 - x1) end
-  end
-  table.sort(ys)
-  for k = 1, #ys - 1, 2 do
-    if ys[k] <= E and E <= ys[k + 1] then return ys[k], ys[k + 1] end
-  end
-  return nil
-end
-
 --- Which field of a map a measured potential falls in.
 --   diagrams.where { map = m, pH = 5, E = -0.80, reference = "SCE" }
 -- `map` has E on its y axis and pH (give pH) or log a(ligand) (give loga)
@@ -555,7 +537,9 @@ function diagrams.where(opts)
   end
   local sp, field = phlox.locate(m, x, E)
   if not sp then return nil, ("no field at (%g, %.4f V vs SHE)"):format(x, E) end
-  local lo, hi = span_at(field, x, E)
+  -- the E interval of the field on the vertical line at x that holds E
+  -- (src/geom: crossings paired bottom-up, right for fields not convex)
+  local lo, hi = core.polygon_span(field.x, field.y, x, E)
   return {
     species = sp, kind = field.kind, field = field, E_SHE = E, E_measured = opts.E,
     reference = { name = e.name, offset = e.offset, source = e.source, valid = e.valid, text = e.text },

@@ -18,6 +18,8 @@
 -- transfer function (IEC 61966-2-1:1999, section 5.2 and 5.3, as in
 -- Stokes et al. 1996, "A Standard Default Color Space for the Internet").
 -- Colours are rounded to 8 bits (k/255) so a PNG pixel equals the fill.
+
+local core = require "phlox.core"
 local palette = {}
 
 local XN, YN, ZN = 0.95047, 1.0, 1.08883       -- D65 reference white (CIE 15:2004)
@@ -141,22 +143,10 @@ end
 
 -- Geometry for neighbour detection -------------------------------------
 
-local function seg_dist(px, py, ax, ay, bx, by)
-  local dx, dy = bx - ax, by - ay
-  local l2 = dx * dx + dy * dy
-  local t = l2 > 0 and ((px - ax) * dx + (py - ay) * dy) / l2 or 0
-  t = math.max(0, math.min(1, t))
-  local ex, ey = ax + t * dx - px, ay + t * dy - py
-  return math.sqrt(ex * ex + ey * ey)
-end
-
+-- Is (px, py) within tol of the polygon's outline (the distance of
+-- src/geom, phlox.core.polygon_distance)?
 local function on_boundary(px, py, xs, ys, tol)
-  local n = #xs
-  for i = 1, n do
-    local j = i % n + 1
-    if seg_dist(px, py, xs[i], ys[i], xs[j], ys[j]) <= tol then return true end
-  end
-  return false
+  return math.abs(core.polygon_distance(xs, ys, px, py)) <= tol
 end
 
 -- Do polygons A and B share a stretch of boundary (not just a corner)?

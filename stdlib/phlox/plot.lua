@@ -12,13 +12,41 @@
 --
 -- Every figure carries a stamp: the conditions, the program version, the
 -- checksums of the data files (phlox.provenance) and the safety caution.
+--
+-- Contract (each returns the phlox.Figure, saved when opts.file is given;
+-- misuse is an error at the user's call; options are read by the one
+-- option reader, plot.option_specs):
+--   plot.map(map, opts)        a predominance map; also returns its fills
+--   plot.domains(map, opts)    its corrosion domains as a figure of their own
+--   plot.curves(series, opts)  curve plots (fractions, solubility, ...)
+--   plot.grid(maps, opts)      several maps as panels on shared axes
+--   plot.overlay(maps, opts)   the boundaries of several maps on one plot
+--   plot.shared_fills(maps)    one fill per species across several maps
+--   plot.look(opts)            size, text and line scales, stamp mode
+--   plot.presets, plot.defaults, plot.grid_min_panel
+--
+-- The module is split by concern; each part states its contract at its top:
+--   stdlib/phlox/plot.lua           drawing: maps, domains, curves, grids,
+--                                   overlays (this file), presets and looks
+--   stdlib/phlox/plot/check.lua     argument checks and option specs
+--   stdlib/phlox/plot/text.lua      numbers, titles, the potential scale
+--   stdlib/phlox/plot/stamp.lua     the stamp and the file's metadata
+--   stdlib/phlox/plot/geometry.lua  windows, domains, curve ranges
+-- Their public functions are published here under their old names
+-- (plot.check_map, plot.number, plot.formulas, plot.map_title,
+-- plot.stamp_lines, plot.stamp_short, plot.domains_of, plot.option_specs,
+-- plot.caution).
 local core = require "phlox.core"
 local palette = require "phlox.palette"
-local provenance = require "phlox.provenance"
+local check = require "phlox.plot.check"
+local text = require "phlox.plot.text"
+local stamp = require "phlox.plot.stamp"
+local geometry = require "phlox.plot.geometry"
 
 local plot = {}
 
-plot.caution = "Equilibrium thermodynamics: shows what can form, not how fast."
+plot.caution = stamp.caution
+
 plot.defaults = {
   width = 396, height = 324,     -- points: 5.5 x 4.5 in, a report column
   dpi = 150,                     -- PNG only
@@ -36,505 +64,33 @@ plot.presets = {
   page = { width = 468, height = 351, text = 1.0, line = 1.0, stamp = "short" },
 }
 
-local STAMP_SIZE = 6.5           -- must match PX_STAMP_SIZE in src/render/draw.c
-local STAMP_MARGIN = 10          -- points left free across the stamp's width
 local LINE_BOUNDARY = 0.9        -- line widths, points (times the line scale)
 local LINE_WATER = 1.0
 local LINE_NEUTRAL = 0.8
 local SMALL_TEXT = 7.0           -- water-line and neutral-pH labels (times the text scale)
 local WATER_LABEL_AT = 0.88      -- water-line labels near the right end of their line
 local NEUTRAL_LABEL_AT = 0.04    -- the neutral-pH label near the foot of its line
-local KINDS = { aqueous = true, solid = true, gas = true, metal = true, liquid = true }
 local DOMAINS = { "immunity", "passivation", "sulfide film", "corrosion" }
-local DOMAIN_OK = { immunity = true, passivation = true, corrosion = true, ["sulfide film"] = true }
 
--- Argument checking ------------------------------------------------------
+-- Parts published under their old names -----------------------------------
 
-local function fail(where, msg) error(("%s: %s"):format(where, msg), 3) end
+plot.check_map = check.check_map
+plot.option_specs = check.option_specs
+plot.number, plot.formulas, plot.map_title = text.number, text.formulas, text.map_title
+plot.stamp_lines, plot.stamp_short = stamp.stamp_lines, stamp.stamp_short
+plot.domains_of = geometry.domains_of
 
-local function is_num(v) return type(v) == "number" and v == v and v ~= math.huge and v ~= -math.huge end
-
-local function check_points(where, what, t, min_n)
-  if type(t) ~= "table" or type(t.x) ~= "table" or type(t.y) ~= "table" then
-    fail(where, what .. " needs x and y lists")
-  end
-  if #t.x ~= #t.y then fail(where, what .. ": x and y differ in length") end
-  if #t.x < min_n then fail(where, ("%s: needs at least %d points"):format(what, min_n)) end
-  for i = 1, #t.x do
-    if not (is_num(t.x[i]) and is_num(t.y[i])) then
-      fail(where, ("%s: point %d is not a pair of finite numbers"):format(what, i))
-    end
-  end
-end
-
-local function check_axis(where, name, a)
-  if type(a) ~= "table" then fail(where, "map." .. name .. " must be a table") end
-  if not (is_num(a.min) and is_num(a.max) and a.max > a.min) then
-    fail(where, ("map.%s needs finite min < max"):format(name))
-  end
-end
-
---- Check a map table; raises an error naming the offending field.
-function plot.check_map(map, where)
-  where = where or "plot"
-  if type(map) ~= "table" then fail(where, "map must be a table") end
-  check_axis(where, "x", map.x)
-  check_axis(where, "y", map.y)
-  if type(map.fields) ~= "table" then fail(where, "map.fields must be a list") end
-  for i, f in ipairs(map.fields) do
-    local what = ("map.fields[%d]"):format(i)
-    if type(f.species) ~= "string" then fail(where, what .. ".species must be a string") end
-    if f.kind ~= nil and not KINDS[f.kind] then
-      fail(where, ("%s.kind '%s' is not aqueous, solid, gas, metal or liquid"):format(what, tostring(f.kind)))
-    end
-    check_points(where, what, f, 3)
-  end
-  for i, b in ipairs(map.boundaries or {}) do check_points(where, ("map.boundaries[%d]"):format(i), b, 2) end
-  for i, d in ipairs(map.domains or {}) do
-    local what = ("map.domains[%d]"):format(i)
-    if not DOMAIN_OK[d.domain] then
-      fail(where, what .. ".domain must be immunity, passivation, sulfide film or corrosion")
-    end
-    check_points(where, what, d, 3)
-  end
-  if map.water ~= nil then
-    for _, k in ipairs({ "o2", "h2" }) do
-      local w = map.water[k]
-      if w ~= nil and not (is_num(w.a) and is_num(w.b)) then
-        fail(where, ("map.water.%s needs numbers a and b (E = a + b pH)"):format(k))
-      end
-    end
-  end
-  if map.neutral_pH ~= nil and not is_num(map.neutral_pH) then fail(where, "map.neutral_pH must be a number") end
-  return map
-end
-
--- Text helpers -----------------------------------------------------------
-
-local function fmt_num(v)
-  if v == math.floor(v) and math.abs(v) < 1e6 then return ("%d"):format(v) end
-  local s = ("%.4g"):format(v)
-  return (s:gsub("e%-0*", "e-"):gsub("e%+0*", "e"))
-end
-
-local SUP = { ["0"] = "⁰", ["1"] = "¹", ["2"] = "²", ["3"] = "³", ["4"] = "⁴", ["5"] = "⁵",
-              ["6"] = "⁶", ["7"] = "⁷", ["8"] = "⁸", ["9"] = "⁹", ["-"] = "⁻" }
-
---- A number as typeset on figures: 0.01, 25, 10⁻⁶, 2.5 × 10⁻³ (true minus).
-function plot.number(v)
-  if type(v) ~= "number" then return tostring(v) end
-  local s
-  local a = math.abs(v)
-  if v == 0 or (a >= 1e-2 and a < 1e5) then
-    s = fmt_num(v)
-  else
-    local e = math.floor(math.log(a, 10) + 1e-9)
-    local m = v / 10 ^ e
-    if math.abs(math.abs(m) - 10) < 1e-9 then m, e = m / 10, e + 1 end
-    local ms = ("%.3g"):format(m)
-    local ex = tostring(e):gsub(".", SUP)
-    s = (ms == "1" and "" or ms == "-1" and "-" or (ms .. " × ")) .. "10" .. ex
-  end
-  return (s:gsub("^%-", "−"))
-end
-
-local function celsius(map)
-  if map.conditions and is_num(map.conditions.T_C) then return map.conditions.T_C end
-  if is_num(map.T) then return map.T - 273.15 end
-end
-
-local function fmt_T(tc)
-  if not tc then return nil end
-  local r = math.floor(tc * 10 + 0.5) / 10
-  if r == math.floor(r) then return ("%d °C"):format(r) end
-  return ("%.1f °C"):format(r)
-end
-
--- Temperatures of several results: "25 °C", "25 and 150 °C", "25, 90 and 150 °C".
-local function fmt_Ts(list)
-  local parts = {}
-  for i, t in ipairs(list) do parts[i] = (fmt_T(t):gsub(" °C$", "")) end
-  if #parts == 0 then return nil end
-  if #parts == 1 then return parts[1] .. " °C" end
-  return table.concat(parts, ", ", 1, #parts - 1) .. " and " .. parts[#parts] .. " °C"
-end
-
-local function pressure(map)
-  if map.conditions and is_num(map.conditions.P_bar) then return map.conditions.P_bar end
-  if is_num(map.P) then return map.P end
-end
-
---- A list of formulas as typeset text: "{Fe^2+}, {FeOH^+}".
-function plot.formulas(list)
-  local out = {}
-  for i, f in ipairs(list) do out[i] = "{" .. tostring(f) .. "}" end
-  return table.concat(out, ", ")
-end
-
--- The ligand's single species over the whole map, or nil (several fields).
-local function ligand_species(map)
-  local lf = map.ligand_fields
-  if type(lf) ~= "table" or #lf == 0 then return nil end
-  for i = 2, #lf do if lf[i].species ~= lf[1].species then return nil end end
-  return lf[1].species
-end
-
--- "log a(Cl^-)" -> "log a({Cl^-})": the formula part set in chemical type.
--- A ligand axis ("log a(S)", the total activity of the ligand's dissolved
--- species) names the species when one ligand species holds the whole map,
--- else the total: "log a(ΣS)".
-local function axis_name(name, map)
-  if type(name) ~= "string" then return "" end
-  if name:find("{", 1, true) then return name end
-  local lig = name:match("^log a%((%u%l?)%)$")
-  if lig and map and map.conditions and map.conditions.ligand == lig then
-    local sp = ligand_species(map)
-    if sp then return ("log a({%s})"):format(sp) end
-    return ("log a(Σ{%s})"):format(lig)
-  end
-  return (name:gsub("^(log%s+[amfp])%((.+)%)$", "%1({%2})"))
-end
-
-local function is_potential(axis)
-  return axis and (axis.name == "E" or axis.name == "Eh")
-end
-
-local function is_pH(axis) return axis and axis.name == "pH" end
-
--- The displayed potential scale: E_ref = E_SHE - offset.  A name (the
--- names of phlox.to_she: "SCE", "Ag/AgCl", ... or a full name) is corrected
--- to the map's temperature with the electrode's coefficient, or refused
--- away from 25 °C (opts.reference_at_25C keeps the 25 °C offset for an
--- electrode outside the hot test); { name, offset } is the user's own.
-local function reference(opts, map)
-  local ref = opts.reference
-  if ref == nil then return { name = "SHE", offset = 0 } end
-  if map and not is_potential(map.y) then
-    error("plot: opts.reference needs a potential (E) y axis", 3)
-  end
-  if type(ref) == "string" or (type(ref) == "table" and type(ref.name) == "string" and ref.offset == nil) then
-    local name = type(ref) == "string" and ref or ref.name
-    local T = map and (map.T or (map.conditions and map.conditions.T_C and map.conditions.T_C + 273.15))
-    local info = require("phlox").electrode_at(name, T, opts.reference_at_25C, "plot: reference")
-    return { name = name, offset = info.offset, text = info.text }
-  end
-  if type(ref) ~= "table" or type(ref.name) ~= "string" or not is_num(ref.offset) then
-    error("plot: opts.reference must be an electrode name (\"SCE\", \"Ag/AgCl\", ...) or "
-      .. "{ name = \"SCE\", offset = <E of the electrode vs SHE, V> }", 3)
-  end
-  return { name = ref.name, offset = ref.offset,
-           text = ("potentials vs %s: offset %s V given by the user (valid at the temperature it was measured)")
-             :format(ref.name, fmt_num(ref.offset)) }
-end
-
-local function y_title(map, ref)
-  local y = map.y
-  if is_potential(y) then
-    return ("%s / %s vs %s"):format(y.name, y.unit or "V", ref.name)
-  end
-  local name = axis_name(y.name, map)
-  if y.unit and y.unit ~= "" then return name .. " / " .. y.unit end
-  return name
-end
-
-local function x_title(map)
-  local x = map.x
-  local name = axis_name(x.name, map)
-  if x.unit and x.unit ~= "" then return name .. " / " .. x.unit end
-  return name
-end
-
--- What the map holds fixed, for its title: the ligand's total, a fixed pH
--- or E (the axes not shown).
-local function fixed_text(c, map)
-  if type(c) ~= "table" then return nil end
-  local parts = {}
-  if c.ligand and is_num(c.ligand_activity) then
-    local sp = map and ligand_species(map)
-    parts[#parts + 1] = sp and ("a({%s}) = %s"):format(sp, plot.number(c.ligand_activity))
-      or ("a(Σ{%s}) = %s"):format(c.ligand, plot.number(c.ligand_activity))
-  elseif c.ligand and is_num(c.ligand_total) then
-    parts[#parts + 1] = ("{%s} %s mol/kg"):format(c.ligand, plot.number(c.ligand_total))
-  end
-  if is_num(c.total) and map and map.element then   -- a rigorous map's total of the element
-    parts[#parts + 1] = ("{%s} %s mol/kg"):format(map.element, plot.number(c.total))
-  end
-  if is_num(c.pH) then parts[#parts + 1] = "pH " .. fmt_num(c.pH) end
-  if is_num(c.E_V) then parts[#parts + 1] = ("E = %s V vs SHE"):format(plot.number(c.E_V)) end
-  return #parts > 0 and table.concat(parts, ", ") or nil
-end
-
---- The default title of a map: "Fe–S–H₂O at 25 °C, a(ΣS) = 10⁻³" with the
--- pressure when it is not 1 bar and what the map holds fixed (the ligand's
--- total, a fixed pH or E).
-function plot.map_title(map)
-  local t = fmt_T(celsius(map))
-  local c = map.conditions or {}
-  local lig = c.ligand
-  local head = map.element and (lig and ("{%s}–{%s}–{H2O}"):format(map.element, lig)
-                                or ("{%s}–{H2O}"):format(map.element)) or "map"
-  local s = head .. (t and (" at " .. t) or "")
-  local p = pressure(map)
-  if p and math.abs(p - 1) > 1e-9 then s = s .. (", %s bar"):format(plot.number(tonumber(("%.3g"):format(p)))) end
-  local fx = fixed_text(c, map)
-  if fx then s = s .. ", " .. fx end
-  return s
-end
-
--- Stamp -------------------------------------------------------------------
-
-local COND_NAMES = {
-  T_C = function(v) return ("T = %s °C"):format(fmt_num(v)) end,
-  P_bar = function(v) return ("P = %s bar"):format(plot.number(tonumber(("%.4g"):format(v)))) end,
-  activity = function(v) return ("activity of dissolved species = %s"):format(plot.number(v)) end,
-  ionic_strength = function(v) return ("I = %s mol/kg"):format(plot.number(v)) end,
-  ligand = function(v) return ("ligand {%s}"):format(v) end,
-  ligand_activity = function(v) return ("ligand activity = %s"):format(plot.number(v)) end,
-  ligand_total = function(v) return ("ligand total = %s mol/kg"):format(plot.number(v)) end,
-  total = function(v) return ("total of the element = %s mol/kg"):format(plot.number(v)) end,
-  pH = function(v) return ("pH = %s"):format(fmt_num(v)) end,
-  E_V = function(v) return ("E = %s V vs SHE"):format(plot.number(v)) end,
-  activity_model = function(v) return ("activity model: %s"):format(v) end,
-}
-local COND_ORDER = { "T_C", "P_bar", "pH", "E_V", "activity", "total", "ionic_strength", "ligand",
-                     "ligand_activity", "ligand_total", "activity_model" }
-
--- A condition key of our own naming, as text: "Zn total (mol/kg)" and
--- "NaOH_mol_kg" read as "Zn total = 10⁻⁶ mol/kg" and "NaOH = 10⁻⁴ mol/kg".
-local function other_condition(k, v)
-  local val = type(v) == "number" and plot.number(v) or tostring(v)
-  local name, unit = k:match("^(.-)%s*%((.-)%)$")
-  if name then return ("%s = %s %s"):format(name, val, unit) end
-  name = k:match("^(.-)_mol_kg$")
-  if name then return ("%s = %s mol/kg"):format(name:gsub("_", " "), val) end
-  return (k:gsub("_", " ")) .. " = " .. val
-end
-
-local function conditions_text(c)
-  if type(c) ~= "table" then return nil end
-  local parts, seen = {}, {}
-  for _, k in ipairs(COND_ORDER) do
-    if c[k] ~= nil then
-      local named = type(c[k]) == "number" or ((k == "ligand" or k == "activity_model") and type(c[k]) == "string")
-      parts[#parts + 1] = named and COND_NAMES[k](c[k]) or (k .. " = " .. tostring(c[k]))
-      seen[k] = true
-    end
-  end
-  local rest = {}
-  for k in pairs(c) do if not seen[k] then rest[#rest + 1] = k end end
-  table.sort(rest)
-  for _, k in ipairs(rest) do parts[#parts + 1] = other_condition(k, c[k]) end
-  return #parts > 0 and ("conditions: " .. table.concat(parts, ", ")) or nil
-end
-
--- The short form of the conditions: "25 °C, 1 bar, a = 10⁻⁶, I = 0".
-local function conditions_short(c)
-  if type(c) ~= "table" then return nil end
-  local parts = {}
-  if is_num(c.T_C) then parts[#parts + 1] = fmt_T(c.T_C) end
-  if is_num(c.P_bar) then parts[#parts + 1] = plot.number(tonumber(("%.3g"):format(c.P_bar))) .. " bar" end
-  if is_num(c.activity) then parts[#parts + 1] = "a = " .. plot.number(c.activity) end
-  if is_num(c.total) then parts[#parts + 1] = "total " .. plot.number(c.total) .. " mol/kg" end
-  if is_num(c.ionic_strength) then parts[#parts + 1] = "I = " .. plot.number(c.ionic_strength) .. " mol/kg" end
-  if type(c.activity_model) == "string" then parts[#parts + 1] = c.activity_model end
-  local known = { T_C = true, P_bar = true, activity = true, total = true, ionic_strength = true,
-                  activity_model = true, ligand = true, ligand_activity = true, ligand_total = true,
-                  pH = true, E_V = true }
-  local rest = {}
-  for k in pairs(c) do if not known[k] then rest[#rest + 1] = k end end
-  table.sort(rest)
-  for _, k in ipairs(rest) do parts[#parts + 1] = other_condition(k, c[k]) end
-  return #parts > 0 and table.concat(parts, ", ") or nil
-end
-
--- Pieces of a word too long for a line (a checksum on a narrow figure),
--- cut at character boundaries, so nothing is cut off with an ellipsis.
-local function split_long(word, width, size)
-  if core.text_width(word, size) <= width then return { word } end
-  local out, cur = {}, ""
-  for ch in word:gmatch(utf8.charpattern) do
-    if cur ~= "" and core.text_width(cur .. ch, size) > width then out[#out + 1] = cur; cur = "" end
-    cur = cur .. ch
-  end
-  if cur ~= "" then out[#out + 1] = cur end
-  return out
-end
-
--- Break a line at spaces so it fits `width` points at the stamp size.
-local function wrap(line, width, size)
-  size = size or STAMP_SIZE
-  if core.text_width(line, size) <= width then return { line } end
-  local out, cur = {}, ""
-  local words = {}
-  for word in line:gmatch("%S+") do
-    for _, piece in ipairs(split_long(word, width - core.text_width("  ", size), size)) do words[#words + 1] = piece end
-  end
-  for _, word in ipairs(words) do
-    local try = cur == "" and word or (cur .. " " .. word)
-    if cur ~= "" and core.text_width(try, size) > width then
-      out[#out + 1] = cur
-      cur = "  " .. word
-    else
-      cur = try
-    end
-  end
-  if cur ~= "" then out[#out + 1] = cur end
-  return out
-end
-
--- An extra stamp line is a string, or { full = "...", short = "..." } (the
--- short form printed on small figures; false leaves it off them).
-local function line_full(l) return type(l) == "table" and tostring(l.full or l[1] or "") or tostring(l) end
-local function line_short(l)
-  if type(l) ~= "table" then return tostring(l) end
-  if l.short == false then return nil end
-  return tostring(l.short or l.full or l[1] or "")
-end
-
--- The unwrapped full stamp: conditions, program and checksums, extra lines, caution.
-local function full_lines(conditions, extra, opts)
-  opts = opts or {}
-  local st = provenance.stamp(conditions, opts.from)
-  local lines = {}
-  local c = conditions_text(conditions)
-  if c then lines[#lines + 1] = c end
-  local prog = "program: " .. st.program .. " (" .. st.revision .. ")"
-  if st.script and not opts.no_script then
-    prog = prog .. "; script: " .. st.script.file .. " sha256=" .. st.script.sha256
-  end
-  lines[#lines + 1] = prog
-  if st.data_scope then lines[#lines + 1] = "data files: " .. st.data_scope end
-  for _, d in ipairs(st.data) do lines[#lines + 1] = "data: " .. d.file .. " sha256=" .. d.sha256 end
-  for _, s in ipairs(extra or {}) do lines[#lines + 1] = line_full(s) end
-  lines[#lines + 1] = plot.caution
-  return lines, st
-end
-
---- The stamp lines of a figure: conditions, program and checksums, extra
--- lines, the caution; wrapped to the figure width (points) at text scale
--- `opts.text` (default 1).
-function plot.stamp_lines(conditions, extra, width, opts)
-  opts = opts or {}
-  local ts = opts.text or 1
-  local out = {}
-  for _, l in ipairs((full_lines(conditions, extra, opts))) do
-    for _, w in ipairs(wrap(l, width - STAMP_MARGIN * ts, STAMP_SIZE * ts)) do out[#out + 1] = w end
-  end
-  return out
-end
-
---- The short stamp: the conditions in brief, the extra lines' short forms,
--- and one line naming the program, the caution and where the rest is.
-function plot.stamp_short(conditions, extra, width, opts)
-  opts = opts or {}
-  local ts = opts.text or 1
-  local lines = {}
-  local c = conditions_short(conditions)
-  if c then lines[#lines + 1] = c end
-  for _, s in ipairs(extra or {}) do
-    local t = line_short(s)
-    if t and t ~= "" then lines[#lines + 1] = t end
-  end
-  lines[#lines + 1] = ("phlox %s · what can form, not how fast · full provenance in the file's metadata")
-    :format(core.version)
-  local out = {}
-  for _, l in ipairs(lines) do
-    for _, w in ipairs(wrap(l, width - STAMP_MARGIN * ts, STAMP_SIZE * ts)) do out[#out + 1] = w end
-  end
-  return out
-end
-
--- Text of the metadata: formula braces dropped.
-local plain = provenance.plain
-
--- Print the stamp the options ask for and put the full provenance in the
--- file's metadata.  opts.stamp: "full" | "short" | false, or a list of
--- extra lines (older form: printed in the preset's mode); opts.notes: extra
--- lines.
--- `from`: the results drawn, whose own data files are stamped (default
--- opts.from).
-local function apply_stamp(fig, opts, conditions, extra, title, w, look, from)
-  from = from or opts.from
-  local lines = {}
-  for _, l in ipairs(extra or {}) do lines[#lines + 1] = l end
-  if type(opts.stamp) == "table" then for _, l in ipairs(opts.stamp) do lines[#lines + 1] = l end end
-  for _, l in ipairs(opts.notes or {}) do lines[#lines + 1] = l end
-  local full = full_lines(conditions, lines, { from = from, no_script = opts.no_script })
-  local desc = {}
-  for i, l in ipairs(full) do desc[i] = plain(l) end
-  fig:meta("Title", plain(title or "phlox figure"))
-  fig:meta("Description", table.concat(desc, "\n"))
-  fig:meta("Software", "phlox " .. core.version .. " (" .. core.revision .. ")")
-  fig:meta("Disclaimer", plot.caution)
-  local mode = opts.stamp
-  if mode == nil or type(mode) == "table" then mode = look.stamp end
-  local out = {}
-  if mode == "full" then
-    out = plot.stamp_lines(conditions, lines, w, { text = look.text, no_script = opts.no_script, from = from })
-    -- a preset promises its panels' size: the full stamp goes below them
-    if look.name then fig:stamp_below(true) end
-  elseif mode == "short" then
-    out = plot.stamp_short(conditions, lines, w, { text = look.text })
-  end
-  for _, l in ipairs(out) do fig:stamp(l) end
-end
-
--- Geometry helpers ---------------------------------------------------------
-
-local function shifted(ys, offset)
-  if offset == 0 then return ys end
-  local out = {}
-  for i, v in ipairs(ys) do out[i] = v - offset end
-  return out
-end
+local is_num, read_opts = check.is_num, check.read_opts
+local fmt_T, fmt_Ts, celsius = text.fmt_T, text.fmt_Ts, text.celsius
+local axis_name, is_pH, reference = text.axis_name, text.is_pH, text.reference
+local x_title, y_title, fixed_text = text.x_title, text.y_title, text.fixed_text
+local apply_stamp, map_notes, add_reference = stamp.apply_stamp, stamp.map_notes, stamp.add_reference
+local shifted, window_of, union_window = geometry.shifted, geometry.window_of, geometry.union_window
+local range_of, runs = geometry.range_of, geometry.runs
 
 -- Where labels go is the renderer's business (src/render/draw.c places
 -- every label once and fig:layout() reports it); this module only says
 -- what to draw.
-
-local function window_of(map, ref)
-  return { x0 = map.x.min, x1 = map.x.max, y0 = map.y.min - ref.offset, y1 = map.y.max - ref.offset }
-end
-
--- Union of the maps' windows (shared axis ranges).
-local function union_window(maps, ref)
-  local w
-  for _, m in ipairs(maps) do
-    local v = window_of(m, ref)
-    if not w then
-      w = v
-    else
-      w = { x0 = math.min(w.x0, v.x0), x1 = math.max(w.x1, v.x1),
-            y0 = math.min(w.y0, v.y0), y1 = math.max(w.y1, v.y1) }
-    end
-  end
-  return w
-end
-
--- Domains: given, or derived field by field when absent, by the rule of
--- the map core (core.domain_of, src/diagram/emap.c): the element itself ->
--- immunity; a metal sulfide -> sulfide film; other solids and liquids ->
--- passivation; dissolved and gas -> corrosion.  A field whose species is
--- not a formula (a hand-made table) goes by its kind: metal -> immunity,
--- solid or liquid -> passivation, else corrosion.
-local KIND_DOMAIN = { metal = "immunity", solid = "passivation", liquid = "passivation" }
-local function domain_of_field(map, f)
-  if f.domain then return f.domain end
-  if map.element then
-    local ok, d = pcall(core.domain_of, f.species, map.element)
-    if ok then return d end
-  end
-  return KIND_DOMAIN[f.kind] or "corrosion"
-end
-
-function plot.domains_of(map)
-  if map.domains then return map.domains, false end
-  local out = {}
-  for _, f in ipairs(map.fields) do
-    out[#out + 1] = { domain = domain_of_field(map, f), x = f.x, y = f.y }
-  end
-  return out, true
-end
 
 -- Hatching of overlaid domains: corrosion dense at 45°, passivation
 -- sparse at -45°, sulfide film horizontal, immunity bare.
@@ -668,74 +224,11 @@ local function new_figure(look, rows, cols)
   return fig
 end
 
--- A map's stamp lines (map.stamp), each with its short form when the map
--- has one (map.stamp_short[line]), appended to extra.
-local function map_notes(extra, map)
-  local short = map.stamp_short or {}
-  for _, l in ipairs(map.stamp or {}) do
-    extra[#extra + 1] = (type(l) == "string" and short[l]) and { full = l, short = short[l] } or l
-  end
-end
-
--- The stamp lines of the potential scale: the shift, and the electrode's
--- own note (temperature correction) when it has one.
-local function add_reference(extra, ref)
-  if ref.offset ~= 0 then
-    extra[#extra + 1] = ("potential vs %s = E(SHE) − %s V"):format(ref.name, fmt_num(ref.offset))
-  end
-  if ref.text then extra[#extra + 1] = ref.text end
-end
-
--- Options of the drawing functions (the one reader, src/lua/l_opts.c):
--- one line per key; plot.map's keys are shared by domains, grid and overlay.
-local FIG_OPTS = {
-  file = "string",                        -- .png, .svg or .pdf
-  title = "string",
-  width = { "number", 50, 20000 },        -- points (figure.c limits)
-  height = { "number", 50, 20000 },
-  dpi = { "number", 10, 2400 },           -- PNG only
-  conditions = "table",                   -- stamped under the figure
-  preset = "string",                      -- one of plot.presets (column, double, slide, page)
-  stamp = "boolean/full|short/strings",   -- what the figure shows ("full", "short", false) or extra lines
-  notes = "table",                        -- extra stamp lines (strings, or records of phlox notes)
-  from = "table",                         -- the result(s) drawn: their own data files and caveats are stamped
-  no_script = "boolean",                  -- leave the script's name off the stamp
-  legend = "boolean",
-  replace = "boolean",                    -- also replace a symbolic link or a read-only file
-}
-local MAP_OPTS = {
-  labels = "boolean",                     -- field labels
-  water = "boolean",                      -- water stability lines
-  domains = "boolean/hatch|tint",         -- corrosion domains overlay
-  reference = "table/string",             -- E axis against this electrode: a name (as phlox.to_she) or {name, offset}
-  reference_at_25C = "boolean",           -- the electrode is kept at room temperature
-}
-local MULTI_OPTS = {
-  cols = { "integer", 1, 64 },
-  pages = "boolean",                      -- one page per map (PDF)
-  shared = "boolean",                     -- one window for all maps
-  shared_fills = "boolean",               -- one colour per species across maps
-  labels_of = "integer/boolean",          -- overlay: whose labels are shown
-  legend_label = "function",              -- function(map, i) -> legend text
-  panel_title = "function",               -- function(map, i) -> panel title
-  x = "table", y = "table",               -- axis overrides
-}
-local function opts_spec(fname, ...)
-  local t = {}
-  for _, part in ipairs { FIG_OPTS, ... } do for k, v in pairs(part) do t[k] = v end end
-  plot.option_specs = plot.option_specs or {}
-  plot.option_specs[fname] = t
-  return t
-end
-local PLOT_MAP_OPTS = opts_spec("plot.map", MAP_OPTS)
-local PLOT_DOMAINS_OPTS = opts_spec("plot.domains", MAP_OPTS)
-local PLOT_GRID_OPTS = opts_spec("plot.grid", MAP_OPTS, MULTI_OPTS)
-local PLOT_OVERLAY_OPTS = opts_spec("plot.overlay", MAP_OPTS, MULTI_OPTS)
-local PLOT_CURVES_OPTS = opts_spec("plot.curves", { x = "table", y = "table" })
-local function read_opts(fname, spec, opts)
-  if opts == nil then return {} end
-  return core.options(fname, spec, opts)
-end
+local PLOT_MAP_OPTS = check.option_specs["plot.map"]
+local PLOT_DOMAINS_OPTS = check.option_specs["plot.domains"]
+local PLOT_GRID_OPTS = check.option_specs["plot.grid"]
+local PLOT_OVERLAY_OPTS = check.option_specs["plot.overlay"]
+local PLOT_CURVES_OPTS = check.option_specs["plot.curves"]
 
 --- A predominance map as a figure.
 -- opts: file (".png", ".svg", ".pdf"), preset ("column", "double",
@@ -815,44 +308,6 @@ function plot.domains(map, opts)
 end
 
 -- Curves ---------------------------------------------------------------------
-
-local function range_of(series, key, log, pad_frac)
-  local lo, hi = math.huge, -math.huge
-  for _, s in ipairs(series) do
-    for _, v in ipairs(s[key]) do
-      if is_num(v) and (not log or v > 0) then lo, hi = math.min(lo, v), math.max(hi, v) end
-    end
-  end
-  if lo > hi then return nil end
-  if lo == hi then
-    if log then return lo / 10, hi * 10 end
-    return lo - 1, hi + 1
-  end
-  if log then   -- whole decades
-    return 10 ^ math.floor(math.log(lo, 10) + 1e-9), 10 ^ math.ceil(math.log(hi, 10) - 1e-9)
-  end
-  local pad = (pad_frac or 0) * (hi - lo)
-  return lo - pad, hi + pad
-end
-
--- Runs of consecutive drawable points (finite, and > 0 on a log axis).
-local function runs(xs, ys, xlog, ylog)
-  local out, cx, cy = {}, {}, {}
-  local function flush()
-    if #cx >= 2 then out[#out + 1] = { cx, cy } end
-    cx, cy = {}, {}
-  end
-  for i = 1, #xs do
-    local x, y = xs[i], ys[i]
-    if is_num(x) and is_num(y) and (not xlog or x > 0) and (not ylog or y > 0) then
-      cx[#cx + 1], cy[#cy + 1] = x, y
-    else
-      flush()
-    end
-  end
-  flush()
-  return out
-end
 
 local function legend_text(label, chem)
   if chem == false or label:find("[%s{]") then return label end

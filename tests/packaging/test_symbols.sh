@@ -15,7 +15,7 @@ declared() { # functions declared by <phlox/$1.h> ... (preprocessed)
 }
 exported() { nm -D --defined-only "$1" | awk '{print $3}' | sort -u; }
 
-core_h="status alloc constants atomic sha256 water species thermo basis equil speciate diagram potential emap rmap"
+core_h="status alloc constants atomic sha256 geom water species thermo basis equil speciate diagram potential emap rmap"
 # A header of a later layer includes the earlier layers' headers: its own
 # functions are the difference.
 declared $core_h >"$B/sym-core.txt"

@@ -64,14 +64,7 @@ local function field_points(f, win, r)
   return xs, ys
 end
 
-local function area(xs, ys)
-  local a = 0
-  for i = 1, #xs do
-    local j = i % #xs + 1
-    a = a + xs[i] * ys[j] - xs[j] * ys[i]
-  end
-  return math.abs(a) / 2
-end
+local function area(xs, ys) return math.abs(core.polygon_area(xs, ys)) end   -- src/geom
 
 -- what: a name for messages; fig: the figure; look: plot.look's table (text scale);
 -- panels: { { map = m, win = {x0, x1, y0, y1} }, ... } for map figures

@@ -12,6 +12,9 @@
 --   * every map boundary has the Nernst slope dE/dpH = -(RT ln10/F) nH/ne of
 --     the reaction printed beside it (CODATA 2018 R and F), and each map's
 --     fields tile its window;
+--   * every study, run again into a fresh folder, writes the same bytes in
+--     every file (Lua visits string keys in an order that changes between
+--     runs: a sum in that order once broke this);
 --   * the leach study, a resumable sweep on two worker processes, rerun in
 --     the same folder on one process, rewrites the same bytes; the gold
 --     study, rerun in its folder, rewrites every file (PNG too) byte for byte;
@@ -142,6 +145,16 @@ local function checks()
     end
     check(nernst >= 3 and tiled >= 1, study.script .. ": Nernst slopes and tiling checked")
     if study.script == "gold_cyanide.lua" then gold_anchors(dir) end
+    do -- the same study again in a fresh folder (no journal to resume from): the same bytes, every file
+      local dir2 = os.tmpname()
+      os.remove(dir2)
+      dirs[#dirs + 1] = dir2
+      run(study, dir2)
+      for _, name in ipairs(files) do
+        check(read(dir2 .. "/" .. name) == read(dir .. "/" .. name),
+              study.script .. ": " .. name .. " differs between two fresh runs")
+      end
+    end
     if study.rerun then -- the same study in the same folder: the same bytes, every file
       local before = {}
       for _, name in ipairs(files) do before[name] = read(dir .. "/" .. name) end

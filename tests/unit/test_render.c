@@ -39,29 +39,6 @@ static void test_ticks(void **state)
     assert_int_equal(px_ticks_log(-1, 10, 9, t), 0);
 }
 
-static void test_polygon_geometry(void **state)
-{
-    (void)state;
-    double x[] = {0, 4, 4, 0}, y[] = {0, 0, 2, 2};
-    assert_true(px_polygon_contains(x, y, 4, 1, 1));
-    assert_false(px_polygon_contains(x, y, 4, 5, 1));
-    double px, py, d;
-    assert_int_equal(px_polygon_pole(x, y, 4, 1e-4, &px, &py, &d), PX_OK);
-    assert_close(py, 1.0, 0, 1e-3); /* a 4 x 2 rectangle: 1 from the long sides */
-    assert_close(d, 1.0, 0, 1e-3);
-    assert_true(px > 1 - 1e-3 && px < 3 + 1e-3);
-    /* an L of arms 2 wide: the largest inscribed circle sits in the corner,
-     * centre (r, r) with r = sqrt(2) (2 - r), so r = 2 sqrt(2) / (1 + sqrt(2)) */
-    double lx[] = {0, 10, 10, 2, 2, 0}, ly[] = {0, 0, 2, 2, 10, 10};
-    assert_int_equal(px_polygon_pole(lx, ly, 6, 1e-5, &px, &py, &d), PX_OK);
-    assert_true(px_polygon_contains(lx, ly, 6, px, py));
-    assert_close(d, 2 * sqrt(2) / (1 + sqrt(2)), 0, 1e-4);
-    assert_close(px, d, 0, 1e-3);
-    assert_close(py, d, 0, 1e-3);
-    double bad[] = {0, NAN, 1};
-    assert_int_equal(px_polygon_pole(bad, bad, 3, 1e-3, &px, &py, &d), PX_EINVAL);
-}
-
 static px_figure *two_fields(void)
 {
     px_figure *f = px_figure_new(400, 300, 1, 1);
@@ -441,8 +418,7 @@ static void test_layout(void **state)
 int main(void)
 {
     const struct CMUnitTest tests[] = {
-        cmocka_unit_test(test_ticks),         cmocka_unit_test(test_polygon_geometry),
-        cmocka_unit_test(test_png_pixels),    cmocka_unit_test(test_vector_outputs),
+        cmocka_unit_test(test_ticks),         cmocka_unit_test(test_png_pixels),    cmocka_unit_test(test_vector_outputs),
         cmocka_unit_test(test_bad_input),     cmocka_unit_test(test_layout),
         cmocka_unit_test(test_png_writer),    cmocka_unit_test(test_png_encode_alpha),
         cmocka_unit_test(test_svg_rounding),

@@ -139,6 +139,13 @@ function phlox_core.ligand_order() end
 ---@return any # {name...} sorted | nil, message
 function phlox_core.list_dir(path) end
 
+--- (C) phlox_core.locate(fields, x, y) -> index of the first field that holds the point | nil
+---@param fields any
+---@param x number
+---@param y number
+---@return any # index of the first field that holds the point | nil
+function phlox_core.locate(fields, x, y) end
+
 --- (C) phlox_core.make_dir(path [, parents])
 ---@param path string
 ---@param parents? any
@@ -171,11 +178,34 @@ function phlox_core.options(fname, spec, opts) end
 ---@return any # true | nil, message: one PDF, a page per figure
 function phlox_core.pdf_pages(path, fig) end
 
---- (C) phlox_core.polygon_pole(xs, ys [, tol])
+--- (C) phlox_core.polygon_area(xs, ys) -> signed area, > 0 counter-clockwise
+---@param xs any
+---@param ys any
+---@return any # signed area, > 0 counter-clockwise
+function phlox_core.polygon_area(xs, ys) end
+
+--- (C) phlox_core.polygon_distance(xs, ys, x, y) -> signed distance to the outline, > 0 inside
+---@param xs any
+---@param ys any
+---@param x number
+---@param y number
+---@return any # signed distance to the outline, > 0 inside
+function phlox_core.polygon_distance(xs, ys, x, y) end
+
+--- (C) phlox_core.polygon_pole(xs, ys [, tol]) -> x, y, distance of the pole of inaccessibility
 ---@param xs any
 ---@param ys any
 ---@param tol? any
+---@return any # x, y, distance of the pole of inaccessibility
 function phlox_core.polygon_pole(xs, ys, tol) end
+
+--- (C) phlox_core.polygon_span(xs, ys, x, y) -> lo, hi | nil: the piece inside on the line at x, holding y
+---@param xs any
+---@param ys any
+---@param x number
+---@param y number
+---@return any # lo, hi | nil: the piece inside on the line at x, holding y
+function phlox_core.polygon_span(xs, ys, x, y) end
 
 --- (C) phlox_core.psat(T) -> bar | nil, message
 ---@param T number
