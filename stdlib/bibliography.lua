@@ -73,6 +73,10 @@ return {
       short = "Stipp et al. 1993",
       cite = "Stipp, S. L., Parks, G. A., Nordstrom, D. K. and Leckie, J. O. Solubility-product constant and thermodynamic properties for synthetic otavite, CdCO3(s), and aqueous association constants for the Cd(II)-CO2-H2O system. Geochim. Cosmochim. Acta (1992 or 1993; volume and pages not recalled).",
     },
+    PG02 = {
+      short = "Preis and Gamsjaeger 2002",
+      cite = "Preis, W. and Gamsjaeger, H. (2002). Solid-solute phase equilibria in aqueous solution. XVI. Thermodynamic properties of malachite and azurite - predominance diagrams for the system Cu2+-H2O-CO2. J. Chem. Thermodyn. (doi 10.1006/jcht.2002.0928; abstract read).",
+    },
     N90 = {
       short = "Nordstrom et al. 1990",
       cite = "Nordstrom, D. K., Plummer, L. N., Langmuir, D., Busenberg, E., May, H. M., Jones, B. F. and Parkhurst, D. L. (1990). Revised chemical equilibrium data for major water-mineral reactions and their limitations. In: Chemical Modeling of Aqueous Systems II, ACS Symposium Series 416, 398-413.",

@@ -33,6 +33,7 @@ M.USES = {
   { id = "BM76", use = "hydrolysis constants at I = 0 and 25 C (mononuclear and polynuclear) of every metal. Recalled; the Al constants also appear in the Wikipedia table 'Hydrolysis constant' (read)." },
   { id = "BE16", use = "Al hydrolysis constants at I = 0, 25 C (read in the Wikipedia table 'Hydrolysis constant')." },
   { id = "STIPP93", use = "otavite (CdCO3) solubility product from its measured solubility. Recalled." },
+  { id = "PG02", use = "malachite solubility constant and dfH from solubility measured at 15-65 C (abstract read)." },
   { id = "N90", use = "log K and dH of complexes and minerals, and dH of several hydrolysis reactions. Recalled." },
   { id = "COMPILED", use = "stability constants of many chloro, sulfato, carbonato and fluoro complexes and a few mineral solubility constants. Recalled; the records say that the attribution is incomplete." },
   { id = "SM", use = "acid constants (H3PO4, HPO4^2-, HMoO4-) and copper complexes at I = 0, 25 C; also the compilation behind the Bjerrum ammine constants and many compiled constants above. Recalled." },
