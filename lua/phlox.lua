@@ -712,20 +712,7 @@ local function speciation_elements(lib, opts)
   return out, set
 end
 
---- Full speciation of a water.
---   phlox.speciate { library = lib, T_C = 25,
---     totals = { Ca = 1e-3, C = 2e-3 },        -- mol/kg of each element
---     pH = 8.3,                                -- fixed; omit for charge balance
---     E = 0.2 | pe = 3 | redox_gas = "O2(g)", redox_log_f = -0.68,
---     fugacities = { ["CO2(g)"] = -3.4 },      -- log10 bar, replaces that element's total
---     fixed = { ["Cl^-"] = -2 },               -- log10 activity of a basis species
---     solids = true, suppress = {...}, exclude = {...},
---     activity_model = "davies" | "bdot" | "ideal" | "sit",
---     ligand_redox = { N = "full" },           -- as phlox.map
---     allow_inhibited = true }                 -- let dolomite, magnesite, quartz in
--- Returns a table (pH, pe, E, ionic_strength, species, elements with each
--- species' share, solids' saturation index and amount), or nil, message,
--- info when the solver does not converge.
+-- The options of phlox.speciate (documented at the function below).
 local SPECIATE_OPTS = spec("phlox.speciate", {
   library = "table",                          -- phlox.library{...}
   totals = { "map", 0, TOTAL_MAX },           -- mol/kg of each element, {Ca = 1e-3}
@@ -747,20 +734,9 @@ local SPECIATE_OPTS = spec("phlox.speciate", {
   accept_held_logk = "boolean",               -- use log K held at 25 C away from 25 C (stamped)
   require_temperature_data = "boolean",       -- gone: phlox.temperature_notes says to use accept_held_logk
 }, true)
-function phlox.speciate(opts)
-  options("phlox.speciate", SPECIATE_OPTS, opts)
-  local lib = opts.library
-  check_library("phlox.speciate", lib)
-  local T = temperature(opts, "phlox.speciate")
-  local P = pressure(opts, T, "phlox.speciate")
-  local els, only = speciation_elements(lib, opts)
-  local notes = held_logk(lib, els, T, opts, "phlox.speciate", only)
-  local copt = {}
-  for k, v in pairs(opts) do copt[k] = v end
-  copt.library, copt.T_C, copt.accept_held_logk, copt.require_temperature_data = nil, nil, nil, nil
-  copt.T, copt.P = T, P
-  local r, err, info = core.speciate(lib.db, copt)
-  if not r then return nil, err, info end
+-- The stamp lines and notes of a core.speciate result r at T (K), as
+-- phlox.speciate gives them; held: held_logk's record at T.
+local function speciation_notes(r, opts, T, held)
   r.T_C = T - T0C
   note_activity(r, r.activity_model, r.ionic_strength)
   if r.activity_model == "sit" then
@@ -779,12 +755,53 @@ function phlox.speciate(opts)
   if opts.solids == false then add_note(r, "solids", "no solid may precipitate (solids = false)") end
   note_list(r, "suppress", "kept from precipitating by the user (suppress)", opts.suppress)
   note_list(r, "exclude", "left out by the user (exclude)", opts.exclude)
-  stamp_held(r, notes)
+  stamp_held(r, held)
   local names = {}
   for _, sp in ipairs(r.species) do
     if (sp.molality or 0) > 0 then names[#names + 1] = sp.formula end
   end
   note_sour(r, names)
+end
+
+-- The checked options of phlox.speciate for core.speciate or core.curve:
+-- the library, the copy passed to C, T (K), P (bar), and the elements
+-- for held_logk (called by the public function itself: its errors name
+-- the caller's line).
+local function speciation_setup(opts, where)
+  options(where, SPECIATE_OPTS, opts)
+  local lib = opts.library
+  check_library(where, lib)
+  local T = temperature(opts, where)
+  local P = pressure(opts, T, where)
+  local els, only = speciation_elements(lib, opts)
+  local copt = {}
+  for k, v in pairs(opts) do copt[k] = v end
+  copt.library, copt.T_C, copt.accept_held_logk, copt.require_temperature_data = nil, nil, nil, nil
+  copt.T, copt.P = T, P
+  return lib, copt, T, P, els, only
+end
+
+--- Full speciation of a water.
+--   phlox.speciate { library = lib, T_C = 25,
+--     T = 298.15, P = 1,                       -- instead of T_C: K; bar (default core.default_pressure(T))
+--     totals = { Ca = 1e-3, C = 2e-3 },        -- mol/kg of each element
+--     pH = 8.3,                                -- fixed; omit for charge balance
+--     E = 0.2 | pe = 3 | redox_gas = "O2(g)", redox_log_f = -0.68,
+--     fugacities = { ["CO2(g)"] = -3.4 },      -- log10 bar, replaces that element's total
+--     fixed = { ["Cl^-"] = -2 },               -- log10 activity of a basis species
+--     solids = true, suppress = {...}, exclude = {...},
+--     activity_model = "davies" | "bdot" | "ideal" | "sit",
+--     ligand_redox = { N = "full" },           -- as phlox.map
+--     allow_inhibited = true }                 -- let dolomite, magnesite, quartz in
+-- Returns a table (pH, pe, E, ionic_strength, species, elements with each
+-- species' share, solids' saturation index and amount), or nil, message,
+-- info when the solver does not converge.
+function phlox.speciate(opts)
+  local lib, copt, T, P, els, only = speciation_setup(opts, "phlox.speciate")
+  local held = held_logk(lib, els, T, opts, "phlox.speciate", only)
+  local r, err, info = core.speciate(lib.db, copt)
+  if not r then return nil, err, info end
+  speciation_notes(r, opts, T, held)
   local els = {}
   for e in pairs(opts.totals or {}) do els[#els + 1] = e end
   for _, f in ipairs({ opts.fugacities or {}, opts.fixed or {} }) do
@@ -796,6 +813,57 @@ function phlox.speciate(opts)
   r.provenance = provenance.of_result(lib, els, { T_C = r.T_C, P_bar = P }, opts)
   r.provenance.notes = r.stamp
   return r
+end
+
+local CURVE_VARY = { pH = function(x) return { pH = x } end,
+                     log_total = function(x, name) return { totals = { [name] = 10 ^ x } } end,
+                     log_a = function(x, name) return { fixed = { [name] = x } } end }
+--- Speciation along a curve, one solve per value of x, by the C curve
+-- driver (src/equil/curve.h): the driver of diagrams.fractions and
+-- diagrams.solubility.
+--   phlox.speciate_curve(opts, curve)
+-- opts: phlox.speciate's, with the varied total or fixed activity present
+-- (any value).  curve: var ("pH", "log_total" or "log_a"), name (the
+-- element or fixed species varied), x (the values), element (every
+-- point's result must hold it), retries and retry_factor (a failing point
+-- is tried again with the element's total times retry_factor), warm (true:
+-- each point starts from the last one's solution; fewer iterations, the
+-- same results to the solver's tolerance but not to the bit).  Returns a
+-- list, one entry per x: r (as phlox.speciate, without provenance) or err
+-- (the message), each with total (the element's total after the last try)
+-- and retries; and the number of failing tries.
+function phlox.speciate_curve(opts, curve)
+  local where = "phlox.speciate"
+  local lib, copt, T, _, els, only = speciation_setup(opts, where)
+  local held = held_logk(lib, els, T, opts, where, only)
+  core.check_value("phlox.speciate_curve", "curve", curve, "table")
+  local vary = CURVE_VARY[curve.var]
+  if not vary then core.user_error("phlox.speciate_curve: curve.var must be \"pH\", \"log_total\" or \"log_a\"") end
+  core.check_value("phlox.speciate_curve", "curve.x", curve.x, "numbers")
+  -- each varied value meets phlox.speciate's range, as a single call would:
+  -- the points before the first that does not are solved, then its error
+  -- is raised (what a loop of phlox.speciate calls would do)
+  local bad
+  for i, x in ipairs(curve.x) do
+    local ok, err = pcall(options, where, SPECIATE_OPTS, vary(x, curve.name))
+    if not ok then
+      if i == 1 then error(err, 0) end
+      bad = { at = i, err = err }
+      break
+    end
+  end
+  local run = curve
+  if bad then
+    run = {}
+    for k, v in pairs(curve) do run[k] = v end
+    run.x = table.move(curve.x, 1, bad.at - 1, 1, {})
+  end
+  local points, retried = core.curve(lib.db, copt, run)
+  for _, p in ipairs(points) do
+    if p.r then speciation_notes(p.r, opts, T, held) end
+  end
+  if bad then error(bad.err, 0) end
+  return points, retried
 end
 
 --- A rigorous map: the speciation solver at every node of a pH-E grid
@@ -1132,6 +1200,7 @@ local SUMMARY = {
   ["phlox.map"] = "phlox.map { library = lib, element = \"Fe\", ... }: an exact predominance map",
   ["phlox.grid_map"] = "phlox.grid_map { library = lib, element = \"Cu\", ... }: a rigorous map (solver on a grid)",
   ["phlox.speciate"] = "phlox.speciate { library = lib, totals = {...}, ... }: full speciation of a water",
+  ["phlox.speciate_curve"] = "phlox.speciate_curve(opts, curve): speciation along pH, a log total or a log activity (the curve driver)",
   ["phlox.water"] = "phlox.water { T_C = 25 }: properties of water (IAPWS-95, R8-97, R11-07)",
   ["phlox.constant_logk"] = "phlox.constant_logk(lib, elements, T [, P]): species whose log K is held at 25 C (T in K)",
   ["phlox.locate"] = "phlox.locate(map, x, y): the species of the map at a point",

@@ -55,14 +55,21 @@ local phlox = {}
 ---@field pH? number
 
 ---@class phlox.speciate.opts
+---@field E? number
 ---@field P? number
 ---@field T? number
 ---@field T_C? number
+---@field activity_model? any
 ---@field allow_inhibited? any
 ---@field exclude? string[]
 ---@field fixed? table<string, number>
 ---@field fugacities? table<string, number>
 ---@field library? phlox.Library
+---@field ligand_redox? any
+---@field pH? number
+---@field pe? number
+---@field redox_gas? any
+---@field redox_log_f? any
 ---@field solids? boolean
 ---@field suppress? string[]
 ---@field totals? table<string, number>
@@ -259,9 +266,43 @@ function phlox.series(opts) end
 ---@return any
 function phlox.solubility(opts) end
 
+--- Full speciation of a water.
+---   phlox.speciate { library = lib, T_C = 25,
+---     T = 298.15, P = 1,                       -- instead of T_C: K; bar (default core.default_pressure(T))
+---     totals = { Ca = 1e-3, C = 2e-3 },        -- mol/kg of each element
+---     pH = 8.3,                                -- fixed; omit for charge balance
+---     E = 0.2 | pe = 3 | redox_gas = "O2(g)", redox_log_f = -0.68,
+---     fugacities = { ["CO2(g)"] = -3.4 },      -- log10 bar, replaces that element's total
+---     fixed = { ["Cl^-"] = -2 },               -- log10 activity of a basis species
+---     solids = true, suppress = {...}, exclude = {...},
+---     activity_model = "davies" | "bdot" | "ideal" | "sit",
+---     ligand_redox = { N = "full" },           -- as phlox.map
+---     allow_inhibited = true }                 -- let dolomite, magnesite, quartz in
+--- Returns a table (pH, pe, E, ionic_strength, species, elements with each
+--- species' share, solids' saturation index and amount), or nil, message,
+--- info when the solver does not converge.
 ---@param opts phlox.speciate.opts
 ---@return any
 function phlox.speciate(opts) end
+
+--- Speciation along a curve, one solve per value of x, by the C curve
+--- driver (src/equil/curve.h): the driver of diagrams.fractions and
+--- diagrams.solubility.
+---   phlox.speciate_curve(opts, curve)
+--- opts: phlox.speciate's, with the varied total or fixed activity present
+--- (any value).  curve: var ("pH", "log_total" or "log_a"), name (the
+--- element or fixed species varied), x (the values), element (every
+--- point's result must hold it), retries and retry_factor (a failing point
+--- is tried again with the element's total times retry_factor), warm (true:
+--- each point starts from the last one's solution; fewer iterations, the
+--- same results to the solver's tolerance but not to the bit).  Returns a
+--- list, one entry per x: r (as phlox.speciate, without provenance) or err
+--- (the message), each with total (the element's total after the last try)
+--- and retries; and the number of failing tries.
+---@param opts table
+---@param curve any
+---@return any
+function phlox.speciate_curve(opts, curve) end
 
 --- Away from 25 C a reader must know which fields rest on 25 C constants or
 --- on estimated temperature functions.  phlox.temperature_notes checks the

@@ -3,6 +3,7 @@
  * wires: options are parsed here, everything else lives in the library and
  * in the embedded Lua module phlox.cli. */
 #define _POSIX_C_SOURCE 200809L /* setenv */
+#include "core/alloc.h"
 #include "lua/host.h"
 #include "px_version.h"
 #include <lauxlib.h>
@@ -275,7 +276,7 @@ int main(int argc, char **argv)
     char *envcopy = NULL;
     const char *env = getenv("PHLOX_PATH");
     if (env && *env) {
-        envcopy = malloc(strlen(env) + 1);
+        envcopy = px_alloc(NULL, strlen(env) + 1);
         if (!envcopy) {
             fputs("phlox: out of memory\n", stderr);
             return PX_EXIT_ERROR;
@@ -288,7 +289,7 @@ int main(int argc, char **argv)
     lua_State *L = px_host_new(paths, npaths);
     if (!L) {
         fputs("phlox: cannot create the Lua state (out of memory)\n", stderr);
-        free(envcopy);
+        px_free(NULL, envcopy);
         return PX_EXIT_ERROR;
     }
     int code = PX_EXIT_OK;
@@ -335,6 +336,6 @@ int main(int argc, char **argv)
         if (run_script(L, "-", argv, argc, argc - 1) != LUA_OK) code = PX_EXIT_ERROR;
     }
     lua_close(L);
-    free(envcopy);
+    px_free(NULL, envcopy);
     return code;
 }

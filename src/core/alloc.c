@@ -19,6 +19,27 @@ void *px_calloc(const px_allocator *a, size_t n, size_t size)
     return p;
 }
 
+void *px_realloc(const px_allocator *a, void *ptr, size_t old, size_t size)
+{
+    if (size == 0) size = 1;
+    if (!a) return realloc(ptr, size);
+    void *p = a->alloc(a->ud, size);
+    if (!p) return NULL;
+    if (ptr) {
+        memcpy(p, ptr, old < size ? old : size);
+        a->release(a->ud, ptr);
+    }
+    return p;
+}
+
+char *px_strdup(const px_allocator *a, const char *s)
+{
+    size_t n = strlen(s) + 1;
+    char *d = px_alloc(a, n);
+    if (d) memcpy(d, s, n);
+    return d;
+}
+
 void px_free(const px_allocator *a, void *ptr)
 {
     if (!ptr) return;

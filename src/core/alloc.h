@@ -1,8 +1,12 @@
-/* alloc.h - an injectable allocator for the C core.
+/* alloc.h - the injectable allocator of phlox's C code: every allocation
+ * of src/ (but for the Lua states' own allocators and memory the C library
+ * hands out, such as readdir's) goes through these functions.
  *
  * Objects that allocate take a const px_allocator * (NULL means the C
  * library's malloc/free), so tests can make the Nth allocation fail and check
- * that nothing leaks and the status is PX_ENOMEM. */
+ * that nothing leaks and the status is PX_ENOMEM.  Code without an object
+ * to carry an allocator passes NULL.  Memory from px_alloc(a, ...) is freed
+ * with px_free(a, ...); with a == NULL it is the C library's. */
 #ifndef PX_ALLOC_H
 #define PX_ALLOC_H
 #include <stddef.h>
@@ -14,7 +18,13 @@ typedef struct px_allocator {
 } px_allocator;
 
 void *px_alloc(const px_allocator *a, size_t size);
+/* n * size bytes, zeroed; NULL when the product overflows. */
 void *px_calloc(const px_allocator *a, size_t n, size_t size);
+/* Resize ptr (of `old` bytes, NULL for none) to `size` bytes, keeping the
+ * first min(old, size); NULL on failure, ptr then untouched. */
+void *px_realloc(const px_allocator *a, void *ptr, size_t old, size_t size);
+/* A copy of the string s. */
+char *px_strdup(const px_allocator *a, const char *s);
 void px_free(const px_allocator *a, void *ptr);
 
 #endif

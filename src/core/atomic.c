@@ -16,6 +16,7 @@
  * temporaries of the same target left by processes that no longer exist
  * (killed inside the write window). */
 #define _GNU_SOURCE /* O_TMPFILE, linkat's AT_SYMLINK_FOLLOW */
+#include "core/alloc.h"
 #include "core/atomic.h"
 #include "core/status.h"
 #include <dirent.h>
@@ -42,7 +43,7 @@ static int split_path(const char *path, char **dir, const char **base)
 {
     const char *slash = strrchr(path, '/');
     size_t n = slash ? (size_t)(slash - path) : 1;
-    *dir = malloc(n + 1);
+    *dir = px_alloc(NULL, n + 1);
     if (!*dir) return PX_ENOMEM;
     if (slash) {
         memcpy(*dir, path, n);
@@ -73,16 +74,16 @@ int px_atomic_clean_stale(const char *path)
             if (end == name + blen + tlen || *end != '-' || pid <= 0) continue;
             if (kill((pid_t)pid, 0) == 0 || errno != ESRCH) continue; /* alive, or not ours to judge */
             size_t n = strlen(dir) + strlen(name) + 2;
-            char *full = malloc(n);
+            char *full = px_alloc(NULL, n);
             if (!full) break;
             snprintf(full, n, "%s/%s", dir, name);
             struct stat st;
             if (lstat(full, &st) == 0 && S_ISREG(st.st_mode) && unlink(full) == 0) removed++;
-            free(full);
+            px_free(NULL, full);
         }
         closedir(d);
     }
-    free(dir);
+    px_free(NULL, dir);
     return removed;
 }
 
@@ -121,7 +122,7 @@ static int write_unnamed(const char *path, const void *data, size_t n, int mode)
     const char *base;
     if (split_path(path, &dir, &base) != PX_OK) return ENOMEM;
     int fd = open(dir, O_TMPFILE | O_WRONLY | O_CLOEXEC, PX_NEW_FILE_MODE);
-    free(dir);
+    px_free(NULL, dir);
     if (fd < 0) return (errno == EISDIR || errno == EOPNOTSUPP || errno == EINVAL) ? -1 : errno;
     int err = 0;
     if (mode >= 0 && fchmod(fd, (mode_t)mode) != 0) err = errno;
@@ -131,7 +132,7 @@ static int write_unnamed(const char *path, const void *data, size_t n, int mode)
         char proc[PX_PROC_FD_LEN];
         snprintf(proc, sizeof proc, "/proc/self/fd/%d", fd);
         size_t cap = strlen(path) + sizeof PX_TMP_TAG + PX_TMP_NUM_LEN;
-        char *tmp = malloc(cap);
+        char *tmp = px_alloc(NULL, cap);
         if (!tmp) err = ENOMEM;
         for (int t = 0; !err && t < PX_TMP_TRIES; t++) {
             tmp_name(tmp, cap, path, t);
@@ -145,7 +146,7 @@ static int write_unnamed(const char *path, const void *data, size_t n, int mode)
             if (errno != EEXIST) err = errno == ENOENT ? -1 : errno; /* no /proc: fall back */
             else if (t == PX_TMP_TRIES - 1) err = EEXIST;
         }
-        free(tmp);
+        px_free(NULL, tmp);
     }
     close(fd);
     return err;
@@ -186,7 +187,7 @@ int px_write_atomic_ex(const char *path, const void *data, size_t n, int flags, 
 #endif
     size_t len = strlen(path);
     size_t cap = len + sizeof PX_TMP_TAG + PX_TMP_NUM_LEN;
-    char *tmp = malloc(cap);
+    char *tmp = px_alloc(NULL, cap);
     if (!tmp) {
         if (errno_out) *errno_out = ENOMEM;
         return PX_ENOMEM;
@@ -199,7 +200,7 @@ int px_write_atomic_ex(const char *path, const void *data, size_t n, int flags, 
     }
     if (fd < 0) {
         err = errno;
-        free(tmp);
+        px_free(NULL, tmp);
         if (errno_out) *errno_out = err;
         return PX_EIO;
     }
@@ -210,7 +211,7 @@ int px_write_atomic_ex(const char *path, const void *data, size_t n, int flags, 
     if (close(fd) != 0 && !err) err = errno;
     if (!err && rename(tmp, path) != 0) err = errno;
     if (err) unlink(tmp);
-    free(tmp);
+    px_free(NULL, tmp);
     if (errno_out) *errno_out = err;
     return err ? PX_EIO : PX_OK;
 }

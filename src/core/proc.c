@@ -1,6 +1,7 @@
 /* proc.c - worker processes, durable appends, folder listing, clocks (see proc.h). */
 #define _POSIX_C_SOURCE 200809L
 #define _DEFAULT_SOURCE /* DT_* and d_type where present; harmless elsewhere */
+#include "core/alloc.h"
 #include "core/proc.h"
 #include "core/status.h"
 #include <dirent.h>
@@ -126,7 +127,7 @@ int px_fd_write_all(int fd, const void *data, size_t n, int *errno_out)
 int px_fd_poll_read(const int *fds, size_t n, char *buf, size_t cap, size_t *which,
                     size_t *got, int *errno_out)
 {
-    struct pollfd *pf = calloc(n ? n : 1, sizeof *pf);
+    struct pollfd *pf = px_calloc(NULL, n ? n : 1, sizeof *pf);
     if (!pf) return fail_errno(errno_out, ENOMEM, PX_ENOMEM);
     for (size_t i = 0; i < n; i++) {
         pf[i].fd = fds[i];
@@ -154,7 +155,7 @@ int px_fd_poll_read(const int *fds, size_t n, char *buf, size_t cap, size_t *whi
         *got = (size_t)k;
         break;
     }
-    free(pf);
+    px_free(NULL, pf);
     return st;
 }
 
@@ -163,10 +164,10 @@ static void sync_parent(const char *path)
 {
     const char *slash = strrchr(path, '/');
     char *dir = NULL;
-    if (!slash) dir = strdup(".");
-    else if (slash == path) dir = strdup("/");
+    if (!slash) dir = px_strdup(NULL, ".");
+    else if (slash == path) dir = px_strdup(NULL, "/");
     else {
-        dir = malloc((size_t)(slash - path) + 1);
+        dir = px_alloc(NULL, (size_t)(slash - path) + 1);
         if (dir) {
             memcpy(dir, path, (size_t)(slash - path));
             dir[slash - path] = '\0';
@@ -178,7 +179,7 @@ static void sync_parent(const char *path)
         fsync(fd); /* best effort: some file systems refuse fsync on folders */
         close(fd);
     }
-    free(dir);
+    px_free(NULL, dir);
 }
 
 int px_file_append_sync(const char *path, const void *data, size_t n, int *errno_out)
@@ -210,8 +211,8 @@ static int cmp_names(const void *a, const void *b)
 
 void px_dir_list_free(char **names, size_t count)
 {
-    for (size_t i = 0; i < count; i++) free(names[i]);
-    free(names);
+    for (size_t i = 0; i < count; i++) px_free(NULL, names[i]);
+    px_free(NULL, names);
 }
 
 int px_dir_list(const char *path, char ***names, size_t *count, int *errno_out)
@@ -228,12 +229,12 @@ int px_dir_list(const char *path, char ***names, size_t *count, int *errno_out)
         if (strcmp(e->d_name, ".") == 0 || strcmp(e->d_name, "..") == 0) continue;
         if (n == cap) {
             size_t nc = cap ? 2 * cap : 16;
-            char **nl = realloc(list, nc * sizeof *nl);
+            char **nl = px_realloc(NULL, list, cap * sizeof *nl, nc * sizeof *nl);
             if (!nl) goto nomem;
             list = nl;
             cap = nc;
         }
-        list[n] = strdup(e->d_name);
+        list[n] = px_strdup(NULL, e->d_name);
         if (!list[n]) goto nomem;
         n++;
     }

@@ -21,6 +21,7 @@
  *     product with coefficient 1; reactants known (when a database is given);
  *   - HKF estimates are made here (px_hkf_estimate) once the formula, and so
  *     the charge, is known. */
+#include "core/alloc.h"
 #include "data/data_internal.h"
 #include "core/constants.h"
 #include "core/status.h"
@@ -309,7 +310,7 @@ static int cmp_name(const void *a, const void *b)
  * duplicate check in O(log n) instead of a scan of the file */
 static void build_names(pxd_file *f)
 {
-    f->names = malloc((f->n ? f->n : 1) * sizeof *f->names);
+    f->names = px_alloc(NULL, (f->n ? f->n : 1) * sizeof *f->names);
     if (!f->names) {
         f->oom = 1;
         return;

@@ -16,6 +16,7 @@
  *     `species = { ... }` list; else line 0 (unknown).
  * Comments and strings are skipped properly, so commented-out species do not
  * confuse the count. */
+#include "core/alloc.h"
 #include "data/data_internal.h"
 #include "core/status.h"
 #include <ctype.h>
@@ -26,7 +27,7 @@ static int push_tok(pxd_file *f, size_t *cap, pxd_tok t)
 {
     if (f->ntok == *cap) {
         size_t c = *cap ? 2 * *cap : 256;
-        pxd_tok *n = realloc(f->tok, c * sizeof *n);
+        pxd_tok *n = px_realloc(NULL, f->tok, *cap * sizeof *n, c * sizeof *n);
         if (!n) return PX_ENOMEM;
         f->tok = n;
         *cap = c;
@@ -165,9 +166,9 @@ static int build_index(pxd_file *f)
     if (f->indexed) return f->indexed > 0;
     f->indexed = -1;
     size_t n = f->ntok ? f->ntok : 1;
-    f->ftok = malloc(n * sizeof *f->ftok);
-    f->stok = malloc(n * sizeof *f->stok);
-    f->list_tables = malloc(n * sizeof *f->list_tables);
+    f->ftok = px_alloc(NULL, n * sizeof *f->ftok);
+    f->stok = px_alloc(NULL, n * sizeof *f->stok);
+    f->list_tables = px_alloc(NULL, n * sizeof *f->list_tables);
     if (!f->ftok || !f->stok || !f->list_tables) {
         f->oom = 1;
         return 0;
@@ -241,7 +242,7 @@ static int earlier_same_raw(pxd_file *f, const pxd_entry *e)
 {
     if (f->n_raws * 2 >= f->cap_raws) { /* grow the open-addressing table */
         size_t cap = f->cap_raws ? 2 * f->cap_raws : 64;
-        pxd_rawcount *t = calloc(cap, sizeof *t);
+        pxd_rawcount *t = px_calloc(NULL, cap, sizeof *t);
         if (!t) {
             f->oom = 1;
             return 0;
@@ -252,7 +253,7 @@ static int earlier_same_raw(pxd_file *f, const pxd_entry *e)
             while (t[h].used) h = (h + 1) & (cap - 1);
             t[h] = f->raws[i];
         }
-        free(f->raws);
+        px_free(NULL, f->raws);
         f->raws = t;
         f->cap_raws = cap;
     }
@@ -268,11 +269,11 @@ static int earlier_same_raw(pxd_file *f, const pxd_entry *e)
 
 void pxd_index_free(pxd_file *f)
 {
-    free(f->ftok);
-    free(f->stok);
-    free(f->list_tables);
-    free(f->raws);
-    free(f->names);
+    px_free(NULL, f->ftok);
+    px_free(NULL, f->stok);
+    px_free(NULL, f->list_tables);
+    px_free(NULL, f->raws);
+    px_free(NULL, f->names);
     f->ftok = f->stok = NULL;
     f->list_tables = NULL;
     f->raws = NULL;

@@ -6,6 +6,7 @@
  * file with any error adds nothing, and the database is only touched after
  * every check has passed. */
 #define _POSIX_C_SOURCE 200809L
+#include "core/alloc.h"
 #include "data/data_internal.h"
 #include "core/status.h"
 #include "embed/embedded.h"
@@ -34,14 +35,14 @@ px_data_options px_data_options_default(void)
 static void file_free(pxd_file *f, px_data_problems *own)
 {
     for (size_t i = 0; i < f->n; i++) pxd_entry_free(&f->e[i]);
-    free(f->e);
-    free(f->ex);
+    px_free(NULL, f->e);
+    px_free(NULL, f->ex);
     for (size_t i = 0; i < f->n_refs; i++) {
-        free(f->refs[i].cite);
-        free(f->refs[i].short_text);
+        px_free(NULL, f->refs[i].cite);
+        px_free(NULL, f->refs[i].short_text);
     }
-    free(f->refs);
-    free(f->tok);
+    px_free(NULL, f->refs);
+    px_free(NULL, f->tok);
     pxd_index_free(f);
     px_data_problems_free(own);
 }
@@ -266,7 +267,7 @@ int px_data_read_file(const char *path, char **out, size_t *len, char *msg, size
         return PX_ELIMIT;
     }
     size_t cap = (size_t)st.st_size + 1, n = 0;
-    char *buf = malloc(cap + 1);
+    char *buf = px_alloc(NULL, cap + 1);
     if (!buf) {
         close(fd);
         return PX_ENOMEM;
@@ -276,7 +277,7 @@ int px_data_read_file(const char *path, char **out, size_t *len, char *msg, size
         if (r < 0 && errno == EINTR) continue;
         if (r < 0) {
             snprintf(msg, msgsize, "read error (%s)", strerror(errno));
-            free(buf);
+            px_free(NULL, buf);
             close(fd);
             return PX_EIO;
         }
@@ -284,7 +285,7 @@ int px_data_read_file(const char *path, char **out, size_t *len, char *msg, size
         n += (size_t)r;
         if (n == cap) {
             snprintf(msg, msgsize, "file changed size while read");
-            free(buf);
+            px_free(NULL, buf);
             close(fd);
             return PX_EIO;
         }
@@ -318,7 +319,7 @@ int px_data_load_file(px_db *db, const char *path, const px_data_options *opt,
     int st = read_file(path, &text, &len, probs);
     if (st != PX_OK) return st;
     st = px_data_load_buffer(db, text, len, path, opt, probs);
-    free(text);
+    px_free(NULL, text);
     return st;
 }
 
@@ -330,7 +331,7 @@ int px_data_merge_user_file(px_db *db, const char *path, const px_data_options *
     int st = read_file(path, &text, &len, probs);
     if (st != PX_OK) return st;
     st = px_data_merge_user_buffer(db, text, len, path, opt, probs);
-    free(text);
+    px_free(NULL, text);
     return st;
 }
 
@@ -342,7 +343,7 @@ int px_data_check_file(const px_db *known, const char *path, const px_data_optio
     int st = read_file(path, &text, &len, probs);
     if (st != PX_OK) return st;
     st = px_data_check_buffer(known, text, len, path, opt, probs);
-    free(text);
+    px_free(NULL, text);
     return st;
 }
 

@@ -5,6 +5,7 @@
  *     Zn.lua:14: ZnO(s): S: must be positive for a solid
  *     Zn.lua:20: Zn(s): warning: cp: no heat capacity given
  * Errors reject the file; warnings do not. */
+#include "core/alloc.h"
 #include "data/data_internal.h"
 #include "core/status.h"
 #include <stdio.h>
@@ -16,26 +17,19 @@ struct px_data_problems {
     size_t n, cap;
 };
 
-char *pxd_strdup(const char *s)
-{
-    if (!s) s = "";
-    size_t n = strlen(s) + 1;
-    char *d = malloc(n);
-    if (d) memcpy(d, s, n);
-    return d;
-}
+char *pxd_strdup(const char *s) { return px_strdup(NULL, s ? s : ""); }
 
 px_data_problems *px_data_problems_new(void)
 {
-    return calloc(1, sizeof(px_data_problems));
+    return px_calloc(NULL, 1, sizeof(px_data_problems));
 }
 
 static void problem_free(px_data_problem *p)
 {
-    free(p->file);
-    free(p->species);
-    free(p->field);
-    free(p->message);
+    px_free(NULL, p->file);
+    px_free(NULL, p->species);
+    px_free(NULL, p->field);
+    px_free(NULL, p->message);
 }
 
 void px_data_problems_clear(px_data_problems *p)
@@ -49,8 +43,8 @@ void px_data_problems_free(px_data_problems *p)
 {
     if (!p) return;
     px_data_problems_clear(p);
-    free(p->items);
-    free(p);
+    px_free(NULL, p->items);
+    px_free(NULL, p);
 }
 
 size_t px_data_problems_count(const px_data_problems *p) { return p ? p->n : 0; }
@@ -87,11 +81,11 @@ size_t px_data_problems_write(const px_data_problems *p, FILE *out)
     for (size_t i = 0; p && i < p->n; i++) {
         const px_data_problem *pr = &p->items[i];
         int n = px_data_problem_format(pr, NULL, 0);
-        char *buf = n >= 0 ? malloc((size_t)n + 1) : NULL;
+        char *buf = n >= 0 ? px_alloc(NULL, (size_t)n + 1) : NULL;
         if (buf) {
             px_data_problem_format(pr, buf, (size_t)n + 1);
             fprintf(out, "%s\n", buf);
-            free(buf);
+            px_free(NULL, buf);
         } else {
             fprintf(out, "%s: %s\n", pr->file, pr->message);
         }
@@ -107,7 +101,7 @@ static char *escaped_dup(const char *s)
     if (!s) s = "";
     size_t n = 0;
     for (const unsigned char *p = (const unsigned char *)s; *p; p++) n += (*p < 0x20 || *p == 0x7f) ? 4 : 1;
-    char *out = malloc(n + 1), *q = out;
+    char *out = px_alloc(NULL, n + 1), *q = out;
     if (!out) return NULL;
     for (const unsigned char *p = (const unsigned char *)s; *p; p++) {
         if (*p < 0x20 || *p == 0x7f) q += snprintf(q, 5, "\\x%02x", *p);
@@ -127,7 +121,7 @@ static void vreport(pxd_file *f, px_data_severity sev, int line, const char *spe
     px_data_problems *p = f->probs;
     if (p->n == p->cap) {
         size_t cap = p->cap ? 2 * p->cap : 16;
-        px_data_problem *it = realloc(p->items, cap * sizeof *it);
+        px_data_problem *it = px_realloc(NULL, p->items, p->cap * sizeof *it, cap * sizeof *it);
         if (!it) {
             f->oom = 1;
             return;
@@ -139,10 +133,10 @@ static void vreport(pxd_file *f, px_data_severity sev, int line, const char *spe
     va_copy(ap2, ap);
     int n = vsnprintf(NULL, 0, fmt, ap2);
     va_end(ap2);
-    char *raw = n >= 0 ? malloc((size_t)n + 1) : NULL;
+    char *raw = n >= 0 ? px_alloc(NULL, (size_t)n + 1) : NULL;
     if (raw) vsnprintf(raw, (size_t)n + 1, fmt, ap);
     char *msg = raw ? escaped_dup(raw) : NULL;
-    free(raw);
+    px_free(NULL, raw);
     px_data_problem pr = {sev, escaped_dup(f->name), line, escaped_dup(species), escaped_dup(field),
                           msg};
     if (!pr.file || !pr.species || !pr.field || !pr.message) {
@@ -176,7 +170,7 @@ void pxd_report_entry(pxd_file *f, pxd_entry *e, px_data_severity sev, const cha
 
 void pxd_entry_free(pxd_entry *e)
 {
-    free(e->sp.source);
-    free(e->sp.file);
+    px_free(NULL, e->sp.source);
+    px_free(NULL, e->sp.file);
     e->sp.source = e->sp.file = NULL;
 }

@@ -13,6 +13,7 @@
  *   molar volume V: cm3/mol x 0.1 -> J/bar
  * Host memory failures set f->oom and raise, so the sandbox can tell them
  * from data errors. */
+#include "core/alloc.h"
 #include "data/data_internal.h"
 #include "core/constants.h"
 #include "core/status.h"
@@ -563,7 +564,7 @@ static void read_species(ctx *c, int t, int index)
     pxd_file *f = c->f;
     if (f->n == f->cap) {
         size_t cap = f->cap ? 2 * f->cap : 32;
-        pxd_entry *n = realloc(f->e, cap * sizeof *n);
+        pxd_entry *n = px_realloc(NULL, f->e, f->cap * sizeof *n, cap * sizeof *n);
         if (!n) oom(c);
         f->e = n;
         f->cap = cap;
@@ -705,7 +706,7 @@ static void read_sources(ctx *c, int top)
         n++;
         lua_pop(L, 1);
     }
-    f->refs = calloc(n ? n : 1, sizeof *f->refs);
+    f->refs = px_calloc(NULL, n ? n : 1, sizeof *f->refs);
     if (!f->refs) oom(c);
     lua_pushnil(L);
     while (lua_next(L, p)) {
@@ -815,7 +816,7 @@ int pxd_read_table(lua_State *L)
             } else {
                 if (f->n_ex == f->cap_ex) {
                     size_t cap = f->cap_ex ? 2 * f->cap_ex : 16;
-                    pxd_exclude *x = realloc(f->ex, cap * sizeof *x);
+                    pxd_exclude *x = px_realloc(NULL, f->ex, f->cap_ex * sizeof *x, cap * sizeof *x);
                     if (!x) oom(&c);
                     f->ex = x;
                     f->cap_ex = cap;

@@ -1,6 +1,7 @@
 /* emap.c - element maps: from species data to the affine functions of the
  * exact predominance map, and back to species, kinds and reactions (see
  * emap.h for the method). */
+#include "core/alloc.h"
 #include "diagram/emap.h"
 #include "core/constants.h"
 #include "core/status.h"
@@ -265,7 +266,7 @@ static int collect(const ctx *c, px_thermo_ws *ws, const px_db *db, int z, int z
                    int for_ligand, cand **out, size_t *nout)
 {
     size_t n = px_db_count(db), k = 0;
-    cand *v = calloc(n ? n : 1, sizeof *v);
+    cand *v = px_calloc(c->o->alloc, n ? n : 1, sizeof *v);
     if (!v) return PX_ENOMEM;
     const px_emap_options *o = c->o;
     double A = 0;
@@ -273,7 +274,7 @@ static int collect(const ctx *c, px_thermo_ws *ws, const px_db *db, int z, int z
         const px_water_state *w;
         int st = px_thermo_ws_water(ws, o->T, o->P, &w);
         if (st != PX_OK) {
-            free(v);
+            px_free(c->o->alloc, v);
             return px_fail(c->msg, c->msglen, st, "water at %.2f K, %.3g bar: %s", o->T, o->P, px_strerror(st));
         }
         A = w->A_gamma;
@@ -292,7 +293,7 @@ static int collect(const ctx *c, px_thermo_ws *ws, const px_db *db, int z, int z
         cd->sp = sp;
         int st = px_thermo_species_G(ws, db, sp, o->T, o->P, &cd->G);
         if (st != PX_OK) {
-            free(v);
+            px_free(c->o->alloc, v);
             return px_fail(c->msg, c->msglen, st, "%s at %.2f K, %.4g bar: %s", f->text, o->T, o->P,
                         px_thermo_ws_error(ws)[0] ? px_thermo_ws_error(ws) : px_strerror(st));
         }
@@ -301,7 +302,7 @@ static int collect(const ctx *c, px_thermo_ws *ws, const px_db *db, int z, int z
             for (size_t q = 0; q < o->n_act; q++)
                 if (px_db_listed(db, &o->act_species[q], 1, (long)i)) a = o->act_values[q];
             if (!(a > 0) || !isfinite(a)) {
-                free(v);
+                px_free(c->o->alloc, v);
                 return px_fail(c->msg, c->msglen, PX_EINVAL, "%s: activity must be positive", f->text);
             }
             cd->ln_a = log(a) + PX_LN10 * px_equil_davies_log_gamma(A, f->charge, o->ionic_strength);
@@ -387,7 +388,7 @@ static int join_and_classify(px_emap *m, const px_db *db, int zM)
 {
     const px_diagram_map *dm = m->map;
     size_t nf = dm->nfield;
-    int *cls = malloc((nf ? nf : 1) * sizeof *cls);
+    int *cls = px_alloc(m->alloc, (nf ? nf : 1) * sizeof *cls);
     if (!cls) return PX_ENOMEM;
     for (size_t f = 0; f < nf; f++) cls[f] = dm->field[f].group;
     int st = px_diagram_map_union(dm, cls, &m->joined);
@@ -398,10 +399,10 @@ static int join_and_classify(px_emap *m, const px_db *db, int zM)
             cls[f] = kind_of_domain[px_emap_domain(&px_db_get(db, (size_t)m->info[f].species)->f, zM)];
         st = px_diagram_corrosion_domains(dm, cls, &m->domains);
     }
-    free(cls);
+    px_free(m->alloc, cls);
     if (st != PX_OK) return st;
     const px_diagram_outlines *u = m->joined;
-    m->outline = calloc(u->nloop ? u->nloop : 1, sizeof *m->outline);
+    m->outline = px_calloc(m->alloc, u->nloop ? u->nloop : 1, sizeof *m->outline);
     if (!m->outline) return PX_ENOMEM;
     for (size_t i = 0; i < u->nloop; i++) {
         const px_diagram_loop *lp = &u->loop[i];
@@ -425,16 +426,17 @@ static int join_and_classify(px_emap *m, const px_db *db, int zM)
 void px_emap_free(px_emap *m)
 {
     if (!m) return;
+    const px_allocator *a = m->alloc;
     px_diagram_map_free(m->map);
     px_diagram_map_free(m->ligand_map);
     px_diagram_outlines_free(m->joined);
     px_diagram_outlines_free(m->domains);
-    free(m->outline);
-    free(m->info);
-    free(m->bnd);
-    free(m->ligand_species);
-    free(m->absent);
-    free(m);
+    px_free(m->alloc, m->outline);
+    px_free(m->alloc, m->info);
+    px_free(m->alloc, m->bnd);
+    px_free(m->alloc, m->ligand_species);
+    px_free(m->alloc, m->absent);
+    px_free(a, m);
 }
 
 int px_emap_build(px_thermo_ws *ws, const px_db *db, const char *element,
@@ -482,8 +484,9 @@ int px_emap_build(px_thermo_ws *ws, const px_db *db, const char *element,
     st = basis_species(&c, ws, db);
     if (st != PX_OK) return st;
 
-    px_emap *m = calloc(1, sizeof *m);
+    px_emap *m = px_calloc(o->alloc, 1, sizeof *m);
     if (!m) return PX_ENOMEM;
+    m->alloc = o->alloc;
     cand *cm = NULL, *cl = NULL;
     size_t ncm = 0, ncl = 0;
     px_diagram_species *phi = NULL;
@@ -491,6 +494,7 @@ int px_emap_build(px_thermo_ws *ws, const px_db *db, const char *element,
     const cand **lig_of_region = NULL;
     size_t nreg = 0;
     px_diagram_options dopt = px_diagram_options_default();
+    dopt.alloc = o->alloc;
 
     st = collect(&c, ws, db, zM, zL, 0, 0, &cm, &ncm);
     if (st != PX_OK) goto done;
@@ -513,7 +517,7 @@ int px_emap_build(px_thermo_ws *ws, const px_db *db, const char *element,
             goto done;
         }
         const cand *refL = reference(cl, ncl, 0);
-        px_diagram_species *lphi = calloc(ncl, sizeof *lphi);
+        px_diagram_species *lphi = px_calloc(o->alloc, ncl, sizeof *lphi);
         if (!lphi) {
             st = PX_ENOMEM;
             goto done;
@@ -523,22 +527,22 @@ int px_emap_build(px_thermo_ws *ws, const px_db *db, const char *element,
             lphi[i].id = (int)i; /* index into cl */
         }
         if (st == PX_OK) st = px_diagram_map_exact(&o->window, lphi, ncl, &dopt, &m->ligand_map);
-        free(lphi);
+        px_free(o->alloc, lphi);
         if (st != PX_OK) goto done;
         nreg = m->ligand_map->nfield;
-        m->ligand_species = calloc(nreg ? nreg : 1, sizeof *m->ligand_species);
-        reg = calloc(nreg ? nreg : 1, sizeof *reg);
-        lig_of_region = calloc(nreg ? nreg : 1, sizeof *lig_of_region);
-        phi = calloc(nreg * ncm + 1, sizeof *phi);
+        m->ligand_species = px_calloc(o->alloc, nreg ? nreg : 1, sizeof *m->ligand_species);
+        reg = px_calloc(o->alloc, nreg ? nreg : 1, sizeof *reg);
+        lig_of_region = px_calloc(o->alloc, nreg ? nreg : 1, sizeof *lig_of_region);
+        phi = px_calloc(o->alloc, nreg * ncm + 1, sizeof *phi);
         if (!m->ligand_species || !reg || !lig_of_region || !phi) {
             st = PX_ENOMEM;
             goto done;
         }
     } else {
         nreg = 1;
-        reg = calloc(1, sizeof *reg);
-        lig_of_region = calloc(1, sizeof *lig_of_region);
-        phi = calloc(ncm, sizeof *phi);
+        reg = px_calloc(o->alloc, 1, sizeof *reg);
+        lig_of_region = px_calloc(o->alloc, 1, sizeof *lig_of_region);
+        phi = px_calloc(o->alloc, ncm, sizeof *phi);
         if (!reg || !lig_of_region || !phi) {
             st = PX_ENOMEM;
             goto done;
@@ -551,11 +555,11 @@ int px_emap_build(px_thermo_ws *ws, const px_db *db, const char *element,
     double *rx = NULL, *ry = NULL;
     if (zL) {
         size_t tot = m->ligand_map->nring;
-        rx = malloc((tot ? tot : 1) * sizeof *rx);
-        ry = malloc((tot ? tot : 1) * sizeof *ry);
+        rx = px_alloc(o->alloc, (tot ? tot : 1) * sizeof *rx);
+        ry = px_alloc(o->alloc, (tot ? tot : 1) * sizeof *ry);
         if (!rx || !ry) {
-            free(rx);
-            free(ry);
+            px_free(o->alloc, rx);
+            px_free(o->alloc, ry);
             st = PX_ENOMEM;
             goto done;
         }
@@ -588,16 +592,16 @@ int px_emap_build(px_thermo_ws *ws, const px_db *db, const char *element,
         reg[r].id = (int)r;
     }
     if (st == PX_OK) st = px_diagram_map_nested(reg, nreg, &dopt, &m->map);
-    free(rx);
-    free(ry);
+    px_free(o->alloc, rx);
+    px_free(o->alloc, ry);
     if (st != PX_OK) {
         if (msg && msglen && !msg[0]) snprintf(msg, msglen, "map of %s: %s", element, px_strerror(st));
         goto done;
     }
 
     /* fields: species, ligand, kind */
-    m->info = calloc(m->map->nfield ? m->map->nfield : 1, sizeof *m->info);
-    m->bnd = calloc(m->map->nboundary ? m->map->nboundary : 1, sizeof *m->bnd);
+    m->info = px_calloc(o->alloc, m->map->nfield ? m->map->nfield : 1, sizeof *m->info);
+    m->bnd = px_calloc(o->alloc, m->map->nboundary ? m->map->nboundary : 1, sizeof *m->bnd);
     if (!m->info || !m->bnd) {
         st = PX_ENOMEM;
         goto done;
@@ -619,7 +623,7 @@ int px_emap_build(px_thermo_ws *ws, const px_db *db, const char *element,
                       refM->sp, lig ? lig->sp : NULL, m->bnd[b].reaction, sizeof m->bnd[b].reaction);
     }
     /* candidates never shown */
-    m->absent = calloc(ncm, sizeof *m->absent);
+    m->absent = px_calloc(o->alloc, ncm, sizeof *m->absent);
     if (!m->absent) {
         st = PX_ENOMEM;
         goto done;
@@ -634,11 +638,11 @@ int px_emap_build(px_thermo_ws *ws, const px_db *db, const char *element,
     if (st != PX_OK) px_fail(msg, msglen, st, "map of %s: joining fields: %s", element, px_strerror(st));
 
 done:
-    free(cm);
-    free(cl);
-    free(phi);
-    free(reg);
-    free(lig_of_region);
+    px_free(o->alloc, cm);
+    px_free(o->alloc, cl);
+    px_free(o->alloc, phi);
+    px_free(o->alloc, reg);
+    px_free(o->alloc, lig_of_region);
     if (st != PX_OK) {
         px_emap_free(m);
         return st;

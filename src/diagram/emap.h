@@ -48,6 +48,7 @@ typedef struct px_emap_options {
     const double *act_values;
     size_t n_act;
     px_ligand_states ligands;     /* ligand oxidation states kept (practice's default) */
+    const px_allocator *alloc;    /* every allocation of the map (NULL: malloc/free) */
 } px_emap_options;
 
 px_emap_options px_emap_options_default(void);
@@ -89,6 +90,7 @@ typedef struct px_emap {
     double E0_o2;               /* E of O2(g) + 4 H+ + 4 e- = 2 H2O(l) at T, P, V vs SHE */
     double pKw;                 /* from the database's H2O, H+, OH- at T, P */
     char error[256];
+    const px_allocator *alloc;  /* the options' allocator, for px_emap_free */
 } px_emap;
 
 /* Build the map.  On failure returns a status and, if out_msg is given,

@@ -254,6 +254,7 @@ static int map_domain(builder *B, int region, const cv *dom, size_t nd,
             if ((st = push_absent(B, region, (int)j, sp[j].id, reason))) goto done;
             continue;
         }
+        st = PX_ENOMEM; /* st holds push_absent's PX_OK here */
         if (px_dg_reserve(B->a, (void **)&B->v, &B->capv, B->nv + n, sizeof *B->v)) goto done;
         rawpoly rp = {region, (int)j, B->nv, n};
         if (PX_DG_PUSH(B->a, B->p, B->np, B->capp, rp)) goto done;

@@ -85,8 +85,8 @@ int px_diagram_map_union(const px_diagram_map *map, const int *field_class,
     size_t caploop = 0, nvid = 0, capvid = 0;
     size_t *vid = NULL;
     px_diagram_outlines *o = px_calloc(a, 1, sizeof *o);
+    if (o) o->alloc = a; /* before any failure: px_diagram_outlines_free releases through it */
     if (!e || !k || !ecls || !drop || !start || !o) goto done;
-    o->alloc = a;
 
     /* cancel partner pairs inside one class */
     size_t nk = 0;

@@ -1,6 +1,7 @@
 /* speciate.c - from the species database to the generic solver (see
  * speciate.h). */
 #include "equil/speciate.h"
+#include "core/alloc.h"
 #include "core/constants.h"
 #include "core/status.h"
 #include "thermo/basis.h"
@@ -57,12 +58,13 @@ px_spec_options px_spec_options_default(void)
 void px_spec_free(px_spec *s)
 {
     if (!s) return;
+    const px_allocator *a = s->alloc;
     px_equil_work_free(s->work);
     px_equil_system_free(s->sys);
-    free(s->db_index);
-    free(s->nu);
-    free(s->elem_z);
-    free(s);
+    px_free(a, s->db_index);
+    px_free(a, s->nu);
+    px_free(a, s->elem_z);
+    px_free(a, s);
 }
 
 /* Conventional basis species: the form in which water analyses and
@@ -148,7 +150,7 @@ static int eval_logk(px_spec *s, px_thermo_ws *ws, const px_db *db, double T, do
                      size_t msglen)
 {
     size_t nb = s->n_basis;
-    double *Gb = malloc(nb * sizeof *Gb);
+    double *Gb = px_calloc(s->alloc, nb, sizeof *Gb);
     if (!Gb) return PX_ENOMEM;
     int st = PX_OK;
     for (size_t i = 0; i < nb && st == PX_OK; i++)
@@ -167,7 +169,7 @@ static int eval_logk(px_spec *s, px_thermo_ws *ws, const px_db *db, double T, do
         double logk = -dG / (PX_R * T * PX_LN10);
         st = px_equil_system_set_log_k(s->sys, j, logk);
     }
-    free(Gb);
+    px_free(s->alloc, Gb);
     if (st != PX_OK && msg && !msg[0]) px_fail(msg, msglen, st, "log K at %.2f K: %s", T, px_strerror(st));
     return st;
 }
@@ -200,8 +202,9 @@ int px_spec_build(px_thermo_ws *ws, const px_db *db, const px_spec_options *o, p
     if (st0 == PX_OK && o->redox_mode == PX_SPEC_REDOX_GAS)
         st0 = px_db_check_list(db, "redox_gas", &o->redox_gas, 1, msg, msglen);
     if (st0 != PX_OK) return st0;
-    px_spec *s = calloc(1, sizeof *s);
+    px_spec *s = px_calloc(o->alloc, 1, sizeof *s);
     if (!s) return PX_ENOMEM;
+    s->alloc = o->alloc;
     size_t nb = o->n_totals + 3;
     s->n_basis = nb;
     long bidx[PX_SPEC_MAX_ITEMS];
@@ -213,7 +216,7 @@ int px_spec_build(px_thermo_ws *ws, const px_db *db, const px_spec_options *o, p
         st = px_fail(msg, msglen, PX_ENOTFOUND, "the database lacks H2O(l), H^+ or e-");
         goto fail;
     }
-    s->elem_z = calloc(nb, sizeof *s->elem_z);
+    s->elem_z = px_calloc(s->alloc, nb, sizeof *s->elem_z);
     if (!s->elem_z) {
         st = PX_ENOMEM;
         goto fail;
@@ -265,8 +268,8 @@ int px_spec_build(px_thermo_ws *ws, const px_db *db, const px_spec_options *o, p
     s->redox = redox;
     /* species: basis first, then every other species made of the elements */
     size_t ndb = px_db_count(db);
-    s->db_index = malloc((ndb + nb) * sizeof *s->db_index);
-    s->nu = calloc((ndb + nb) * nb, sizeof *s->nu);
+    s->db_index = px_calloc(s->alloc, ndb + nb, sizeof *s->db_index);
+    s->nu = px_calloc(s->alloc, (ndb + nb) * nb, sizeof *s->nu);
     if (!s->db_index || !s->nu) {
         st = PX_ENOMEM;
         goto fail;
@@ -298,7 +301,7 @@ int px_spec_build(px_thermo_ws *ws, const px_db *db, const px_spec_options *o, p
         s->db_index[m++] = (long)d;
     }
     s->n_species = m;
-    st = px_equil_system_create(&s->sys, nb, m, NULL);
+    st = px_equil_system_create(&s->sys, nb, m, s->alloc);
     if (st != PX_OK) goto fail;
     for (size_t j = 0; j < m && st == PX_OK; j++) {
         const px_species *sp = px_db_get(db, (size_t)s->db_index[j]);
@@ -386,13 +389,40 @@ int px_spec_build(px_thermo_ws *ws, const px_db *db, const px_spec_options *o, p
         st = px_equil_system_set_log_activity(s->sys, comp, o->fixed_log_a[q]);
         if (st != PX_OK) goto fail;
     }
-    st = px_equil_work_create(&s->work, s->sys, NULL);
+    st = px_equil_work_create(&s->work, s->sys, s->alloc);
     if (st != PX_OK) goto fail;
     *out = s;
     return PX_OK;
 fail:
     px_spec_free(s);
     return st;
+}
+
+int px_spec_set_pH(px_spec *s, double pH)
+{
+    px_equil_component_result c;
+    if (!s || px_equil_work_get_component(s->work, PX_SPEC_BASIS_H, &c) != PX_OK || c.kind != PX_EQUIL_C_ACTIVITY)
+        return PX_EINVAL;
+    return px_equil_system_set_ph(s->sys, PX_SPEC_BASIS_H, pH);
+}
+
+int px_spec_set_total(px_spec *s, size_t k, double total)
+{
+    if (!s || k >= px_spec_n_elements(s)) return PX_EINVAL;
+    return px_equil_system_set_total(s->sys, PX_SPEC_BASIS_ELEMENTS + k, total);
+}
+
+int px_spec_set_fixed(px_spec *s, const px_db *db, const char *species, double log_a)
+{
+    long d = s && db && species ? px_db_index(db, species) : -1;
+    px_equil_component_result c;
+    for (size_t i = PX_SPEC_BASIS_ELEMENTS; d >= 0 && i < s->n_basis; i++)
+        if (s->db_index[i] == d) {
+            if (px_equil_work_get_component(s->work, i, &c) != PX_OK || c.kind != PX_EQUIL_C_ACTIVITY)
+                return PX_EINVAL;
+            return px_equil_system_set_log_activity(s->sys, i, log_a);
+        }
+    return PX_EINVAL;
 }
 
 /* Continuation in the totals: solve with every element total scaled down

@@ -49,6 +49,7 @@ typedef struct px_spec_options {
     px_ligand_states ligands;       /* ligand oxidation states kept (thermo/practice.h) */
     int allow_inhibited;            /* 1: inhibited solids (practice.h) may precipitate */
     px_equil_options solver;
+    const px_allocator *alloc;      /* every allocation of the px_spec (NULL: malloc/free) */
 } px_spec_options;
 
 px_spec_options px_spec_options_default(void);
@@ -65,6 +66,7 @@ typedef struct px_spec {
     int redox;        /* electrons take part */
     double T;         /* K, of the last px_spec_build or px_spec_set_TP */
     size_t sit_pairs, sit_missing; /* SIT: cation-anion pairs with an eps, and without (eps 0) */
+    const px_allocator *alloc;     /* the options' allocator, for px_spec_free */
     char error[512];
 } px_spec;
 
@@ -77,6 +79,14 @@ int px_spec_build(px_thermo_ws *ws, const px_db *db, const px_spec_options *o, p
 int px_spec_set_TP(px_spec *s, px_thermo_ws *ws, const px_db *db, double T, double P, px_equil_model model,
                    char *msg, size_t msglen);
 int px_spec_solve(px_spec *s, const px_equil_options *opt, char *msg, size_t msglen);
+/* Change one constraint of a built system, keeping its last solution as a
+ * warm start (solve with opt.warm = 1): the fixed pH (PX_EINVAL when the
+ * system balances charge instead), the total of element k of the options'
+ * totals, or the fixed log10 activity of basis species `species`
+ * (PX_EINVAL when it is not a fixed basis species of the system). */
+int px_spec_set_pH(px_spec *s, double pH);
+int px_spec_set_total(px_spec *s, size_t k, double total);
+int px_spec_set_fixed(px_spec *s, const px_db *db, const char *species, double log_a);
 void px_spec_free(px_spec *s); /* NULL ok */
 
 /* Results of a solved problem, read without knowing the basis layout. */

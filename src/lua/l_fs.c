@@ -11,6 +11,7 @@
  *                                     the element-file size cap; src/data/load.c)
  *   core.file_kind(path)           -> "file"|"dir"|"link"|"other" | nil */
 #define _POSIX_C_SOURCE 200809L
+#include "core/alloc.h"
 #include "data/data.h"
 #include "lua/bindings.h"
 #include <dirent.h>
@@ -83,14 +84,14 @@ static int remove_tree(const char *path, int depth)
     while (!err && (e = readdir(d)) != NULL) {
         if (strcmp(e->d_name, ".") == 0 || strcmp(e->d_name, "..") == 0) continue;
         size_t n = strlen(path) + strlen(e->d_name) + 2;
-        char *sub = malloc(n);
+        char *sub = px_alloc(NULL, n);
         if (!sub) {
             err = ENOMEM;
             break;
         }
         snprintf(sub, n, "%s/%s", path, e->d_name);
         err = remove_tree(sub, depth + 1);
-        free(sub);
+        px_free(NULL, sub);
     }
     closedir(d);
     if (!err && rmdir(path) != 0) err = errno;
@@ -130,7 +131,7 @@ static int l_read_file(lua_State *L)
         return 2;
     }
     lua_pushlstring(L, text, len);
-    free(text);
+    px_free(NULL, text);
     return 1;
 }
 

@@ -1,6 +1,7 @@
 /* l_render.c - figures for Lua: core.figure(w, h, rows, cols) returns a
  * phlox.Figure userdata whose methods add panels' content and save it.
  * Panels are 1-based here, as Lua users expect. */
+#include "core/alloc.h"
 #include "core/atomic.h"
 #include "core/status.h"
 #include "lua/bindings.h"
@@ -205,7 +206,7 @@ static int f_save(lua_State *L)
     if (st == PX_OK) {
         st = px_write_atomic_ex(path, data, n, lua_toboolean(L, 4) ? PX_WRITE_REPLACE : 0, &err, why,
                                 sizeof why);
-        free(data);
+        px_free(NULL, data);
     }
     if (st != PX_OK) {
         luaL_pushfail(L);
@@ -232,7 +233,7 @@ static int f_render(lua_State *L)
         return 2;
     }
     lua_pushlstring(L, (const char *)data, n);
-    free(data);
+    px_free(NULL, data);
     return 1;
 }
 

@@ -1,5 +1,7 @@
 /* figure.c - the figure model: panels and the items drawn in them, kept as
- * plain data until px_figure_save() lays them out (draw.c). */
+ * plain data until px_figure_save() lays them out (layout.c, labels.c) and
+ * draws them (draw.c, backend.c). */
+#include "core/alloc.h"
 #include "render/figure_priv.h"
 #include "core/status.h"
 #include "render/png.h"
@@ -9,14 +11,7 @@
 
 #define PX_FIG_MAX_PANELS 64
 
-static char *dupstr(const char *s)
-{
-    if (!s) return NULL;
-    size_t n = strlen(s) + 1;
-    char *d = malloc(n);
-    if (d) memcpy(d, s, n);
-    return d;
-}
+static char *dupstr(const char *s) { return s ? px_strdup(NULL, s) : NULL; }
 
 px_figure *px_figure_new(double width, double height, int rows, int cols)
 {
@@ -24,11 +19,11 @@ px_figure *px_figure_new(double width, double height, int rows, int cols)
     if (!(width >= 50 && height >= 50 && width <= 20000 && height <= 20000) || rows < 1 ||
         cols < 1 || rows > PX_FIG_MAX_PANELS || cols > PX_FIG_MAX_PANELS / rows)
         return NULL;
-    px_figure *f = calloc(1, sizeof *f);
+    px_figure *f = px_calloc(NULL, 1, sizeof *f);
     if (!f) return NULL;
-    f->panels = calloc((size_t)(rows * cols), sizeof *f->panels);
+    f->panels = px_calloc(NULL, (size_t)(rows * cols), sizeof *f->panels);
     if (!f->panels) {
-        free(f);
+        px_free(NULL, f);
         return NULL;
     }
     f->width = width;
@@ -46,10 +41,10 @@ px_figure *px_figure_new(double width, double height, int rows, int cols)
 
 static void free_item(px_item *it)
 {
-    free(it->x);
-    free(it->y);
-    free(it->text);
-    free(it->alt);
+    px_free(NULL, it->x);
+    px_free(NULL, it->y);
+    px_free(NULL, it->text);
+    px_free(NULL, it->alt);
 }
 
 void px_figure_free(px_figure *f)
@@ -58,21 +53,21 @@ void px_figure_free(px_figure *f)
     for (int i = 0; i < f->rows * f->cols; i++) {
         px_panel *p = &f->panels[i];
         for (size_t k = 0; k < p->n_items; k++) free_item(&p->items[k]);
-        free(p->items);
-        free(p->xlabel);
-        free(p->ylabel);
-        free(p->title);
+        px_free(NULL, p->items);
+        px_free(NULL, p->xlabel);
+        px_free(NULL, p->ylabel);
+        px_free(NULL, p->title);
     }
-    for (size_t k = 0; k < f->n_stamp; k++) free(f->stamp[k]);
-    free(f->stamp);
+    for (size_t k = 0; k < f->n_stamp; k++) px_free(NULL, f->stamp[k]);
+    px_free(NULL, f->stamp);
     for (size_t k = 0; k < f->n_meta; k++) {
-        free(f->meta_key[k]);
-        free(f->meta_val[k]);
+        px_free(NULL, f->meta_key[k]);
+        px_free(NULL, f->meta_val[k]);
     }
-    free(f->meta_key);
-    free(f->meta_val);
-    free(f->panels);
-    free(f);
+    px_free(NULL, f->meta_key);
+    px_free(NULL, f->meta_val);
+    px_free(NULL, f->panels);
+    px_free(NULL, f);
 }
 
 static px_panel *panel_of(px_figure *f, int panel)
@@ -98,7 +93,7 @@ static int replace(char **slot, const char *s)
 {
     char *d = NULL;
     if (s && !(d = dupstr(s))) return PX_ENOMEM;
-    free(*slot);
+    px_free(NULL, *slot);
     *slot = d;
     return PX_OK;
 }
@@ -118,7 +113,7 @@ static px_item *new_item(px_panel *p)
 {
     if (p->n_items == p->cap) {
         size_t cap = p->cap ? 2 * p->cap : 16;
-        px_item *it = realloc(p->items, cap * sizeof *it);
+        px_item *it = px_realloc(NULL, p->items, p->cap * sizeof *it, cap * sizeof *it);
         if (!it) return NULL;
         p->items = it;
         p->cap = cap;
@@ -138,11 +133,11 @@ static int copy_points(px_item *it, const double *x, const double *y, size_t n)
 {
     for (size_t i = 0; i < n; i++)
         if (!isfinite(x[i]) || !isfinite(y[i])) return PX_EINVAL;
-    it->x = malloc(n * sizeof *x);
-    it->y = malloc(n * sizeof *y);
+    it->x = px_alloc(NULL, n * sizeof *x);
+    it->y = px_alloc(NULL, n * sizeof *y);
     if (!it->x || !it->y) {
-        free(it->x);
-        free(it->y);
+        px_free(NULL, it->x);
+        px_free(NULL, it->y);
         it->x = it->y = NULL;
         return PX_ENOMEM;
     }
@@ -224,7 +219,7 @@ int px_figure_text(px_figure *f, int panel, double x, double y, const char *text
 int px_figure_stamp(px_figure *f, const char *text)
 {
     if (!f || !text) return PX_EINVAL;
-    char **s = realloc(f->stamp, (f->n_stamp + 1) * sizeof *s);
+    char **s = px_realloc(NULL, f->stamp, f->n_stamp * sizeof *s, (f->n_stamp + 1) * sizeof *s);
     if (!s) return PX_ENOMEM;
     f->stamp = s;
     if (!(s[f->n_stamp] = dupstr(text))) return PX_ENOMEM;
@@ -344,18 +339,18 @@ int px_figure_meta(px_figure *f, const char *key, const char *text)
     if (!v) return PX_ENOMEM;
     for (size_t k = 0; k < f->n_meta; k++)
         if (strcmp(f->meta_key[k], key) == 0) {
-            free(f->meta_val[k]);
+            px_free(NULL, f->meta_val[k]);
             f->meta_val[k] = v;
             return PX_OK;
         }
     char *kd = dupstr(key);
-    char **nk = realloc(f->meta_key, (f->n_meta + 1) * sizeof *nk);
+    char **nk = px_realloc(NULL, f->meta_key, f->n_meta * sizeof *nk, (f->n_meta + 1) * sizeof *nk);
     if (nk) f->meta_key = nk;
-    char **nv = nk ? realloc(f->meta_val, (f->n_meta + 1) * sizeof *nv) : NULL;
+    char **nv = nk ? px_realloc(NULL, f->meta_val, f->n_meta * sizeof *nv, (f->n_meta + 1) * sizeof *nv) : NULL;
     if (nv) f->meta_val = nv;
     if (!kd || !nk || !nv) {
-        free(kd);
-        free(v);
+        px_free(NULL, kd);
+        px_free(NULL, v);
         return PX_ENOMEM;
     }
     f->meta_key[f->n_meta] = kd;

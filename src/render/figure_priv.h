@@ -1,5 +1,5 @@
 /* figure_priv.h - private: the figure model shared by figure.c (building)
- * and draw.c (layout and cairo drawing). */
+ * and the layout and drawing files (layout.h lists them). */
 #ifndef PX_FIGURE_PRIV_H
 #define PX_FIGURE_PRIV_H
 #include "render/render.h"

@@ -6,6 +6,7 @@
  * per figure; figures are large flat fields, where the repeats found here
  * do nearly all the work.  Formats: PNG (ISO/IEC 15948, W3C PNG 2nd ed.),
  * zlib (RFC 1950), deflate (RFC 1951). */
+#include "core/alloc.h"
 #include "render/png.h"
 #include "core/status.h"
 #include <stdint.h>
@@ -245,12 +246,12 @@ int px_png_encode(const unsigned char *pix, int width, int height, int stride,
      * as RGBA at the first pixel that is not. */
     int opaque = 1;
     size_t bpp = 3, row = 1 + w * bpp, nraw = row * h;
-    unsigned char *raw = malloc(nraw);
-    int32_t *head = malloc(sizeof *head << PX_LZ_HASH_BITS);
-    codes *tab = malloc(sizeof *tab);
+    unsigned char *raw = px_alloc(NULL, nraw);
+    int32_t *head = px_alloc(NULL, sizeof *head << PX_LZ_HASH_BITS);
+    codes *tab = px_alloc(NULL, sizeof *tab);
     unsigned char *zb = NULL;
     if (!raw || !head || !tab) {
-        free(raw), free(head), free(tab), free(zb);
+        px_free(NULL, raw), px_free(NULL, head), px_free(NULL, tab), px_free(NULL, zb);
         return PX_ENOMEM;
     }
     for (size_t y = 0; y < h; y++) {
@@ -267,10 +268,11 @@ int px_png_encode(const unsigned char *pix, int width, int height, int stride,
             }
             if ((all >> 24) == 0xff) continue;
             opaque = 0; /* a pixel that is not opaque: RGBA from the first row */
+            size_t old = nraw;
             bpp = 4, row = 1 + w * 4, nraw = row * h;
-            unsigned char *g = realloc(raw, nraw);
+            unsigned char *g = px_realloc(NULL, raw, old, nraw);
             if (!g) {
-                free(raw), free(head), free(tab), free(zb);
+                px_free(NULL, raw), px_free(NULL, head), px_free(NULL, tab), px_free(NULL, zb);
                 return PX_ENOMEM;
             }
             raw = g;
@@ -293,20 +295,20 @@ int px_png_encode(const unsigned char *pix, int width, int height, int stride,
             d += 4;
         }
     }
-    zb = malloc(nraw + nraw / 8 + 64); /* fixed codes: at most 9 bits a byte, and the frame */
+    zb = px_alloc(NULL, nraw + nraw / 8 + 64); /* fixed codes: at most 9 bits a byte, and the frame */
     if (!zb) {
-        free(raw), free(head), free(tab);
+        px_free(NULL, raw), px_free(NULL, head), px_free(NULL, tab);
         return PX_ENOMEM;
     }
     size_t z = zlib_stream(raw, nraw, bpp, row, zb, head, tab);
-    free(raw);
-    free(head);
-    free(tab);
+    px_free(NULL, raw);
+    px_free(NULL, head);
+    px_free(NULL, tab);
     /* signature, IHDR, bKGD, the IDAT chunks, IEND and the text chunks */
     size_t cap = 8 + 25 + 18 + z + 12 * (z / PX_IDAT_MAX + 1) + 12 + px_png_text_size(keys, vals, nmeta);
-    unsigned char *o = malloc(cap);
+    unsigned char *o = px_alloc(NULL, cap);
     if (!o) {
-        free(zb);
+        px_free(NULL, zb);
         return PX_ENOMEM;
     }
     size_t n = 8;
@@ -324,7 +326,7 @@ int px_png_encode(const unsigned char *pix, int width, int height, int stride,
     for (size_t at = 0; at < z; at += PX_IDAT_MAX)
         n += px_png_chunk(o + n, "IDAT", zb + at, z - at < PX_IDAT_MAX ? z - at : PX_IDAT_MAX, NULL, 0);
     n += px_png_chunk(o + n, "IEND", NULL, 0, NULL, 0);
-    free(zb);
+    px_free(NULL, zb);
     *out = o;
     *nout = n;
     return PX_OK;

@@ -5,6 +5,7 @@
  * '^' is a superscript with a true minus sign, '*' is the hydrate dot, and a
  * trailing state such as (s), (aq) or (s,calcite) is set in normal type.
  * Plain text may carry formulas in braces: "{Fe^2+} at 25 °C". */
+#include "core/alloc.h"
 #include "render/render.h"
 #include "render/text.h"
 #include "core/status.h"
@@ -197,7 +198,7 @@ void px_strbuf_put(px_strbuf *b, const char *s, size_t k)
     if (b->n + k + 1 > b->cap) {
         size_t cap = b->cap ? b->cap : 1024;
         while (cap < b->n + k + 1) cap *= 2;
-        char *d = realloc(b->s, cap);
+        char *d = px_realloc(NULL, b->s, b->cap, cap);
         if (!d) {
             b->failed = 1;
             return;
@@ -268,7 +269,8 @@ static void svg_text(cairo_t *cr, px_text_sink *k, const char *text, int chem, d
 {
     if (k->count >= PX_TEXT_MARK_MAX) k->over = 1;
     if (k->b.failed || k->over) return;
-    size_t *at = realloc(k->at, (size_t)(k->count + 2) * sizeof *at);
+    size_t *at = px_realloc(NULL, k->at, k->at ? (size_t)(k->count + 1) * sizeof *at : 0,
+                            (size_t)(k->count + 2) * sizeof *at);
     if (!at) {
         k->b.failed = 1;
         return;
@@ -338,8 +340,8 @@ void px_text_sink_attach(cairo_t *cr, px_text_sink *sink)
 void px_text_sink_free(px_text_sink *sink)
 {
     if (!sink) return;
-    free(sink->b.s);
-    free(sink->at);
+    px_free(NULL, sink->b.s);
+    px_free(NULL, sink->at);
     *sink = (px_text_sink){0};
 }
 
@@ -361,7 +363,7 @@ int px_text_sink_splice(const px_text_sink *sink, const unsigned char *svg, size
     if (sink->over) return PX_ELIMIT;
     if (sink->b.failed) return PX_ENOMEM;
     size_t cap = n + sink->b.n + 1, o = 0, from = 0;
-    unsigned char *d = malloc(cap);
+    unsigned char *d = px_alloc(NULL, cap);
     if (!d) return PX_ENOMEM;
     const size_t hl = sizeof mark_head - 1, tl = sizeof mark_tail - 1;
     for (size_t i = 0; i + hl < n;) {
@@ -386,7 +388,7 @@ int px_text_sink_splice(const px_text_sink *sink, const unsigned char *svg, size
         const unsigned char *e = svg + j;
         while ((size_t)(e - svg) + 1 < n && !(e[0] == '/' && e[1] == '>')) e++;
         if (svg[s0] != '<' || (size_t)(e - svg) + 1 >= n || id >= sink->count) {
-            free(d);
+            px_free(NULL, d);
             return PX_EIO;
         }
         size_t s1 = (size_t)(e - svg) + 2;
@@ -394,10 +396,11 @@ int px_text_sink_splice(const px_text_sink *sink, const unsigned char *svg, size
         o += s0 - from;
         size_t el = sink->at[id + 1] - sink->at[id];
         if (o + el + (n - s1) + 1 > cap) { /* a marker is shorter than its element */
+            size_t old = cap;
             cap = o + el + (n - s1) + 1 + sink->b.n;
-            unsigned char *g = realloc(d, cap);
+            unsigned char *g = px_realloc(NULL, d, old, cap);
             if (!g) {
-                free(d);
+                px_free(NULL, d);
                 return PX_ENOMEM;
             }
             d = g;

@@ -3,6 +3,7 @@
  * through a small open-addressing hash table rebuilt when the array
  * changes.  A generation counter changes on every modification so caches
  * held by callers (px_thermo_ws) know when to drop what they computed. */
+#include "core/alloc.h"
 #include <ctype.h>
 #include <math.h>
 #include <stdio.h>
@@ -34,21 +35,12 @@ static unsigned long fnv1a(const char *s)
     return h;
 }
 
-static char *dupstr(const char *s)
-{
-    if (!s)
-        return NULL;
-    size_t n = strlen(s) + 1;
-    char *d = malloc(n);
-    if (d)
-        memcpy(d, s, n);
-    return d;
-}
+static char *dupstr(const char *s) { return s ? px_strdup(NULL, s) : NULL; }
 
 static void species_release(px_species *sp)
 {
-    free(sp->source);
-    free(sp->file);
+    px_free(NULL, sp->source);
+    px_free(NULL, sp->file);
     sp->source = sp->file = NULL;
 }
 
@@ -58,10 +50,10 @@ static int rehash(px_db *db)
     while (want < 2 * db->n + 1)
         want *= 2;
     if (want != db->hcap) {
-        long *h = malloc(want * sizeof *h);
+        long *h = px_alloc(NULL, want * sizeof *h);
         if (!h)
             return PX_ENOMEM;
-        free(db->hash);
+        px_free(NULL, db->hash);
         db->hash = h;
         db->hcap = want;
     }
@@ -91,9 +83,9 @@ static long find_canon(const px_db *db, const char *canon)
 
 px_db *px_db_new(void)
 {
-    px_db *db = calloc(1, sizeof *db);
+    px_db *db = px_calloc(NULL, 1, sizeof *db);
     if (db && rehash(db)) {
-        free(db);
+        px_free(NULL, db);
         return NULL;
     }
     return db;
@@ -105,14 +97,14 @@ void px_db_free(px_db *db)
         return;
     for (size_t i = 0; i < db->n; i++)
         species_release(&db->sp[i]);
-    free(db->sp);
-    free(db->hash);
+    px_free(NULL, db->sp);
+    px_free(NULL, db->hash);
     for (size_t i = 0; i < db->nref; i++) {
-        free(db->ref[i].short_text);
-        free(db->ref[i].cite);
+        px_free(NULL, db->ref[i].short_text);
+        px_free(NULL, db->ref[i].cite);
     }
-    free(db->ref);
-    free(db);
+    px_free(NULL, db->ref);
+    px_free(NULL, db);
 }
 
 unsigned long px__db_generation(const px_db *db) { return db ? db->gen : 0; }
@@ -160,7 +152,7 @@ int px_db_add(px_db *db, const px_species *sp)
     }
     if (db->n == db->cap) {
         size_t nc = db->cap ? 2 * db->cap : 32;
-        px_species *p = realloc(db->sp, nc * sizeof *p);
+        px_species *p = px_realloc(NULL, db->sp, db->cap * sizeof *p, nc * sizeof *p);
         if (!p) {
             species_release(&c);
             return PX_ENOMEM;
@@ -505,7 +497,7 @@ int px_db_ref_add(px_db *db, const char *key, const char *short_text, const char
     if (old) return strcmp(old->cite, cite) == 0 ? PX_OK : PX_EINVAL;
     if (db->nref == db->capref) {
         size_t cap = db->capref ? 2 * db->capref : 32;
-        px_ref *r = realloc(db->ref, cap * sizeof *r);
+        px_ref *r = px_realloc(NULL, db->ref, db->capref * sizeof *r, cap * sizeof *r);
         if (!r) return PX_ENOMEM;
         db->ref = r;
         db->capref = cap;
@@ -515,8 +507,8 @@ int px_db_ref_add(px_db *db, const char *key, const char *short_text, const char
     r->short_text = dupstr(short_text && *short_text ? short_text : key);
     r->cite = dupstr(cite);
     if (!r->short_text || !r->cite) {
-        free(r->short_text);
-        free(r->cite);
+        px_free(NULL, r->short_text);
+        px_free(NULL, r->cite);
         return PX_ENOMEM;
     }
     db->nref++;

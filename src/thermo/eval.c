@@ -17,6 +17,7 @@
  * anchored at the NBS 1982 values: G - G_r = [g - g_r] - (S_3rd - s_r)(T - Tr),
  * g and s molar IAPWS-95 values).  The electron: e- = H^+ - 1/2 H2(g)
  * (DESIGN.md), so potentials are against the SHE at the same T and P. */
+#include "core/alloc.h"
 #include <math.h>
 #include <stdarg.h>
 #include <stdio.h>
@@ -85,7 +86,7 @@ static int werr(px_thermo_ws *ws, int st, const char *fmt, ...)
 
 px_thermo_ws *px_thermo_ws_new(px_dielectric_model m)
 {
-    px_thermo_ws *ws = calloc(1, sizeof *ws);
+    px_thermo_ws *ws = px_calloc(NULL, 1, sizeof *ws);
     if (ws)
         ws->model = m;
     return ws;
@@ -96,11 +97,11 @@ void px_thermo_ws_free(px_thermo_ws *ws)
     if (!ws)
         return;
     for (size_t i = 0; i < ws->lk_n; i++)
-        free(ws->lk[i]);
-    free(ws->lk);
-    free(ws->Gc);
-    free(ws->Gok);
-    free(ws);
+        px_free(NULL, ws->lk[i]);
+    px_free(NULL, ws->lk);
+    px_free(NULL, ws->Gc);
+    px_free(NULL, ws->Gok);
+    px_free(NULL, ws);
 }
 
 const char *px_thermo_ws_error(const px_thermo_ws *ws) { return ws ? ws->err : ""; }
@@ -214,11 +215,11 @@ static int cache_prepare(px_thermo_ws *ws, const px_db *db, double T, double P)
         return PX_OK;
     if (ws->ccap < n) {
         size_t cap = n < 64 ? 64 : n;
-        double *g = realloc(ws->Gc, cap * sizeof *g);
+        double *g = px_realloc(NULL, ws->Gc, ws->ccap * sizeof *g, cap * sizeof *g);
         if (!g)
             return PX_ENOMEM;
         ws->Gc = g;
-        unsigned char *ok = realloc(ws->Gok, cap);
+        unsigned char *ok = px_realloc(NULL, ws->Gok, ws->ccap, cap);
         if (!ok)
             return PX_ENOMEM;
         ws->Gok = ok;
@@ -492,9 +493,9 @@ static int logk_get(px_thermo_ws *ws, const px_db *db, const px_species *sp, log
         size_t n = px_db_count(db);
         if (ws->lk_db != db || ws->lk_gen != px__db_generation(db) || ws->lk_n < n) {
             for (size_t i = 0; i < ws->lk_n; i++)
-                free(ws->lk[i]);
-            free(ws->lk);
-            ws->lk = calloc(n, sizeof *ws->lk);
+                px_free(NULL, ws->lk[i]);
+            px_free(NULL, ws->lk);
+            ws->lk = px_calloc(NULL, n, sizeof *ws->lk);
             ws->lk_n = ws->lk ? n : 0;
             if (!ws->lk)
                 return werr(ws, PX_ENOMEM, "out of memory");
@@ -513,7 +514,7 @@ static int logk_get(px_thermo_ws *ws, const px_db *db, const px_species *sp, log
             *out = c;
             return PX_OK;
         }
-        free(ws->lk[k]);
+        px_free(NULL, ws->lk[k]);
         ws->lk[k] = NULL;
     }
     int st = logk_find_self(ws, sp, &tmp->r, &tmp->self);
@@ -529,7 +530,7 @@ static int logk_get(px_thermo_ws *ws, const px_db *db, const px_species *sp, log
                           ? -1
                           : px_db_index(db, tmp->r.sp[i].text);
     if (k >= 0) {
-        logk_cache *c = malloc(sizeof *c);
+        logk_cache *c = px_alloc(NULL, sizeof *c);
         if (!c)
             return werr(ws, PX_ENOMEM, "out of memory");
         *c = *tmp;

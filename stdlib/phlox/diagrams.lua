@@ -185,29 +185,30 @@ function diagrams.fractions(opts)
 
   local base = base_speciate(opts)
   base.solids = opts.solids == true
+  base.totals = copy(opts.totals)
+  base.totals[el] = total
+  base.fixed = copy(opts.fixed)
+  local curve = { var = xkind, x = xs, element = el }
+  if xkind ~= "pH" then
+    base.pH = opts.pH
+    if xkind == "log_total" then
+      curve.name = opts.ligand
+      base.totals[opts.ligand] = 1 -- placeholder: the driver sets 10^x at each point
+    else
+      -- the ligand element joins with its species as basis; the fixed
+      -- activity replaces its balance (the total given is a placeholder)
+      curve.name = opts.ligand_species
+      base.fixed[opts.ligand_species] = 0 -- placeholder: x at each point
+      base.totals[lig_el] = base.totals[lig_el] or 1e-3
+      base.basis = copy(opts.basis)
+      base.basis[lig_el] = opts.ligand_species
+    end
+  end
   local shares, failures, notes = {}, {}, {}
   local t0 = os.clock()
+  local points = phlox.speciate_curve(base, curve)
   for i, x in ipairs(xs) do
-    local s = copy(base)
-    s.totals = copy(opts.totals)
-    s.totals[el] = total
-    s.fixed = copy(opts.fixed)
-    if xkind == "pH" then
-      s.pH = x
-    else
-      s.pH = opts.pH
-      if xkind == "log_total" then
-        s.totals[opts.ligand] = 10 ^ x
-      else
-        -- the ligand element joins with its species as basis; the fixed
-        -- activity replaces its balance (the total given is a placeholder)
-        s.fixed[opts.ligand_species] = x
-        s.totals[lig_el] = s.totals[lig_el] or 1e-3
-        s.basis = copy(opts.basis)
-        s.basis[lig_el] = opts.ligand_species
-      end
-    end
-    local r, err = phlox.speciate(s)
+    local r, err = points[i].r, points[i].err
     if r then notes[#notes + 1] = { notes = r.notes, activity = r.activity } end
     if r and r.elements[el] then
       shares[i] = r.elements[el].share
@@ -304,25 +305,22 @@ function diagrams.solubility(opts)
   local t0 = os.clock()
   for _, tc in ipairs(temps) do
     local y, solids = {}, {}
+    local s = copy(base)
+    s.T_C = tc
+    s.pH = xs[1] -- the driver sets each x
+    s.totals = copy(opts.totals)
+    s.totals[el] = total
+    s.fixed = copy(opts.fixed)
+    -- The dissolved total in equilibrium with a solid does not depend on
+    -- how much solid there is, so when the solver fails with a large
+    -- excess of solid the point is retried with less of it.
+    local points, tries = phlox.speciate_curve(s, { var = "pH", x = xs, element = el,
+                                                     retries = RETRIES, retry_factor = RETRY_FACTOR })
+    retried = retried + tries
     for i, pH in ipairs(xs) do
-      local s = copy(base)
-      s.T_C, s.pH = tc, pH
-      s.totals = copy(opts.totals)
-      s.fixed = copy(opts.fixed)
-      -- The dissolved total in equilibrium with a solid does not depend on
-      -- how much solid there is, so when the solver fails with a large
-      -- excess of solid the point is retried with less of it.
-      local r, err, e
-      local put = total
-      for _ = 0, RETRIES do
-        s.totals[el] = put
-        r, err = phlox.speciate(s)
-        if r then notes[#notes + 1] = { notes = r.notes, activity = r.activity } end
-        e = r and r.elements[el]
-        if e then break end
-        put = put * RETRY_FACTOR
-        retried = retried + 1
-      end
+      local r, err, put = points[i].r, points[i].err, points[i].total
+      if r then notes[#notes + 1] = { notes = r.notes, activity = r.activity } end
+      local e = r and r.elements[el]
       y[i], solids[i] = false, false
       if not e then
         failures[#failures + 1] = { T_C = tc, x = pH, message = err or ("no " .. el .. " in the result") }
@@ -453,39 +451,38 @@ end
 -- activity of a saturated salt solution (common practice, no source).
 local LOGA_RANGE = { -4, 1 }
 
+local LIGAND_E_OPTS = spec("diagrams.ligand_E", "phlox.map", map_keys { axes = true }, {})
+local PH_LIGAND_OPTS = spec("diagrams.pH_ligand", "phlox.map", map_keys { axes = true }, {})
+
+-- A predominance map with log a(ligand) on an axis (diagrams.ligand_E and
+-- diagrams.pH_ligand): `fixed` is the option held fixed (pH or E), stored
+-- in the map's conditions as `cond`; `missing` says it is needed.
+local function ligand_map(where, opts_spec, opts, axes, fixed, cond, missing)
+  core.options(where, opts_spec, opts)
+  library_of(opts, where)
+  if type(opts.ligand) ~= "string" then fail(where, "ligand (an element symbol) expected") end
+  if type(opts[fixed]) ~= "number" then fail(where, missing) end
+  local o = copy(opts)
+  o.loga_range = o.loga_range or LOGA_RANGE
+  o.axes = axes
+  local m = phlox.map(o)
+  m.conditions[cond] = opts[fixed]
+  m.conditions.ligand_activity = nil -- it is an axis
+  return m
+end
+
 --- Predominance map on E (y) against log a(ligand) (x) at a fixed pH.
 --   diagrams.ligand_E { library = lib, element = "Zn", ligand = "Cl", pH = 5,
 --                       loga_range = {-4, 1}, E_range = {-1.5, 1.5}, ... }
-local LIGAND_E_OPTS = spec("diagrams.ligand_E", "phlox.map", map_keys { axes = true }, {})
 function diagrams.ligand_E(opts)
-  core.options("diagrams.ligand_E", LIGAND_E_OPTS, opts)
-  library_of(opts, "diagrams.ligand_E")
-  if type(opts.ligand) ~= "string" then fail("diagrams.ligand_E", "ligand (an element symbol) expected") end
-  if type(opts.pH) ~= "number" then fail("diagrams.ligand_E", "a fixed pH is needed") end
-  local o = copy(opts)
-  o.loga_range = o.loga_range or LOGA_RANGE
-  o.axes = { "loga", "E" }
-  local m = phlox.map(o)
-  m.conditions.pH = opts.pH
-  m.conditions.ligand_activity = nil -- it is the x axis
-  return m
+  return ligand_map("diagrams.ligand_E", LIGAND_E_OPTS, opts, { "loga", "E" }, "pH", "pH", "a fixed pH is needed")
 end
 
 --- Predominance map on log a(ligand) (y) against pH (x) at a fixed E (V vs SHE).
 --   diagrams.pH_ligand { library = lib, element = "Zn", ligand = "Cl", E = -0.5, ... }
-local PH_LIGAND_OPTS = spec("diagrams.pH_ligand", "phlox.map", map_keys { axes = true }, {})
 function diagrams.pH_ligand(opts)
-  core.options("diagrams.pH_ligand", PH_LIGAND_OPTS, opts)
-  library_of(opts, "diagrams.pH_ligand")
-  if type(opts.ligand) ~= "string" then fail("diagrams.pH_ligand", "ligand (an element symbol) expected") end
-  if type(opts.E) ~= "number" then fail("diagrams.pH_ligand", "a fixed E (V vs SHE) is needed") end
-  local o = copy(opts)
-  o.loga_range = o.loga_range or LOGA_RANGE
-  o.axes = { "pH", "loga" }
-  local m = phlox.map(o)
-  m.conditions.E_V = opts.E
-  m.conditions.ligand_activity = nil -- it is the y axis
-  return m
+  return ligand_map("diagrams.pH_ligand", PH_LIGAND_OPTS, opts, { "pH", "loga" }, "E", "E_V",
+                    "a fixed E (V vs SHE) is needed")
 end
 
 -- Short names of the electrodes (phlox.electrode_names).

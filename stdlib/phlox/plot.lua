@@ -88,7 +88,7 @@ local apply_stamp, map_notes, add_reference = stamp.apply_stamp, stamp.map_notes
 local shifted, window_of, union_window = geometry.shifted, geometry.window_of, geometry.union_window
 local range_of, runs = geometry.range_of, geometry.runs
 
--- Where labels go is the renderer's business (src/render/draw.c places
+-- Where labels go is the renderer's business (src/render/labels.c places
 -- every label once and fig:layout() reports it); this module only says
 -- what to draw.
 

@@ -7,7 +7,7 @@
 --     figure;
 --   * every field with room for its label has it inside, every other
 --     visible field has one led out, and every line label found a place.
--- The geometry checks here are written independently of src/render/draw.c:
+-- The geometry checks here are written independently of src/render/labels.c:
 -- overlap by separating axes, room by the field's inscribed circle (the
 -- pole of inaccessibility) holding the label's box at the smallest size.
 -- "Room" is a sufficient condition, common practice for label placement

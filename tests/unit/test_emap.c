@@ -1,37 +1,43 @@
 /* test_emap.c - element maps from the embedded standard library, checked in
  * C against the Nernst equation (E = E0 + (RT ln10 / 2F) log a for
  * Zn2+/Zn: 0.1775 V below E0 at a = 1e-6, textbook) and the tiling rules;
- * and a failing allocation-free misuse path. */
+ * and a failing allocation-free misuse path; every allocation of a map
+ * build failing in turn (tests/support/px_alloc_fail.h). */
 #include "px_test.h"
+#include "support/px_alloc_fail.h"
+#include "support/px_db_fixture.h"
 #include "core/constants.h"
 #include "core/status.h"
 #include "data/data.h"
 #include "diagram/emap.h"
+#include <stdlib.h>
 #include <string.h>
 
-static px_db *zinc_db(void)
+/* Built-ins, water and Zn, shared by every test of the group. */
+static int setup(void **state)
 {
+    static const char *const files[] = {"HO", "Zn", NULL};
     static const int zs[] = {1, 8, 30};
-    px_db *db = px_db_new();
-    assert_non_null(db);
-    assert_int_equal(px_db_add_builtins(db), PX_OK);
-    px_data_options o = px_data_options_default();
-    o.elements = zs;
-    o.n_elements = 3;
-    assert_int_equal(px_data_load_embedded(db, "HO", &o, NULL), PX_OK);
-    assert_int_equal(px_data_load_embedded(db, "Zn", &o, NULL), PX_OK);
-    return db;
+    return px_db_fixture_new(state, px_test_db(files, zs, sizeof zs / sizeof zs[0]));
+}
+
+/* The zinc map with options o. */
+static px_emap *zinc_map(const px_db_fixture *fx, const px_emap_options *o)
+{
+    px_emap *m = NULL;
+    char msg[256];
+    assert_int_equal(px_emap_build(fx->ws, fx->db, "Zn", o, &m, msg, sizeof msg), PX_OK);
+    return m;
 }
 
 static void test_zinc_map(void **state)
 {
-    (void)state;
-    px_db *db = zinc_db();
-    px_thermo_ws *ws = px_thermo_ws_new(PX_DIELECTRIC_R8_97);
+    const px_db_fixture *fx = *state;
+    px_db *db = fx->db;
+    px_thermo_ws *ws = fx->ws;
     px_emap_options o = px_emap_options_default();
-    px_emap *m;
+    px_emap *m = zinc_map(fx, &o);
     char msg[256];
-    assert_int_equal(px_emap_build(ws, db, "Zn", &o, &m, msg, sizeof msg), PX_OK);
 
     px_reaction r;
     px_reaction_result rr;
@@ -66,12 +72,42 @@ static void test_zinc_map(void **state)
     o.xaxis = PX_AXIS_LOGA;
     assert_int_equal(px_emap_build(ws, db, "Zn", &o, &m, msg, sizeof msg), PX_EINVAL);
     px_emap_free(NULL);
-    px_thermo_ws_free(ws);
-    px_db_free(db);
+}
+
+/* Every allocation of the map build failing in turn: PX_ENOMEM, nothing
+ * held (ASan reports any leak), and PX_OK only once none fails, with the
+ * same map as with malloc. */
+static void test_alloc_failure(void **state)
+{
+    const px_db_fixture *fx = *state;
+    px_emap_options o = px_emap_options_default();
+    px_emap *ref = zinc_map(fx, &o);
+    int done = 0;
+    for (long nth = 0; nth < 5000 && !done; nth++) {
+        px_alloc_fail f;
+        px_allocator al = px_alloc_fail_make(&f, nth);
+        o.alloc = &al;
+        px_emap *m = NULL;
+        char msg[256];
+        int st = px_emap_build(fx->ws, fx->db, "Zn", &o, &m, msg, sizeof msg);
+        if (st == PX_OK) { /* only when no allocation failed: a failure is never swallowed */
+            assert_true(f.left >= 0);
+            done = 1;
+            assert_int_equal(m->map->nfield, ref->map->nfield);
+            assert_int_equal(m->map->nboundary, ref->map->nboundary);
+            px_emap_free(m);
+        } else {
+            assert_int_equal(st, PX_ENOMEM);
+            assert_null(m);
+        }
+        assert_int_equal(f.live, 0);
+    }
+    assert_true(done);
+    px_emap_free(ref);
 }
 
 int main(void)
 {
-    const struct CMUnitTest tests[] = {cmocka_unit_test(test_zinc_map)};
-    return cmocka_run_group_tests(tests, NULL, NULL);
+    const struct CMUnitTest tests[] = {cmocka_unit_test(test_zinc_map), cmocka_unit_test(test_alloc_failure)};
+    return cmocka_run_group_tests(tests, setup, px_db_fixture_free);
 }

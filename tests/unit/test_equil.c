@@ -8,6 +8,7 @@
  * their source beside them.  Every solve is followed by tb_check(): species
  * add up to each total to 1e-10 relative. */
 #include "test_equil_util.h"
+#include "support/px_alloc_fail.h"
 #include "core/constants.h"
 
 /* K2 of carbonic acid, HCO3- = CO3^2- + H+: log K = -10.329 at 25 C, from
@@ -520,34 +521,13 @@ static void test_warm_start(void **state)
 
 /* --- allocation failures -------------------------------------------------- */
 
-typedef struct failing {
-    long countdown; /* fail when it reaches 0 */
-    long live;
-} failing;
-
-static void *fa_alloc(void *ud, size_t n)
-{
-    failing *f = ud;
-    if (f->countdown-- == 0) return NULL;
-    void *p = malloc(n);
-    if (p) f->live++;
-    return p;
-}
-
-static void fa_release(void *ud, void *p)
-{
-    failing *f = ud;
-    f->live--;
-    free(p);
-}
-
 static void test_alloc_failure(void **state)
 {
     (void)state;
     int succeeded = 0;
     for (long nth = 0; nth < 200 && !succeeded; nth++) {
-        failing f = {nth, 0};
-        px_allocator al = {fa_alloc, fa_release, &f};
+        px_alloc_fail f;
+        px_allocator al = px_alloc_fail_make(&f, nth);
         px_equil_system *s = NULL;
         px_equil_work *w = NULL;
         int st = px_equil_system_create(&s, 3, 5, &al);

@@ -28,6 +28,12 @@ function phlox_core.check_files(path) end
 ---@param hi? any
 function phlox_core.check_value(fname, key, value, type, lo, hi) end
 
+--- (C) phlox_core.curve(db, opts, curve)
+---@param db phlox.Database
+---@param opts table
+---@param curve any
+function phlox_core.curve(db, opts, curve) end
+
 --- (C) phlox_core.database([dielectric]) -> Database with the built-in species
 ---@param dielectric? any
 ---@return any # Database with the built-in species

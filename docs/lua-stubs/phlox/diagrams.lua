@@ -20,11 +20,17 @@ local phlox_diagrams = {}
 ---@field x? number
 
 ---@class phlox_diagrams.ligand_E.opts
+---@field E_range? number[]
+---@field element? string
+---@field library? phlox.Library
 ---@field ligand? string
+---@field loga_range? any
 ---@field pH? number
 
 ---@class phlox_diagrams.pH_ligand.opts
 ---@field E? number
+---@field element? string
+---@field library? phlox.Library
 ---@field ligand? string
 
 ---@class phlox_diagrams.plot.opts
@@ -68,10 +74,15 @@ function phlox_diagrams.electrode(name) end
 ---@return any
 function phlox_diagrams.fractions(opts) end
 
+--- Predominance map on E (y) against log a(ligand) (x) at a fixed pH.
+---   diagrams.ligand_E { library = lib, element = "Zn", ligand = "Cl", pH = 5,
+---                       loga_range = {-4, 1}, E_range = {-1.5, 1.5}, ... }
 ---@param opts phlox_diagrams.ligand_E.opts
 ---@return any
 function phlox_diagrams.ligand_E(opts) end
 
+--- Predominance map on log a(ligand) (y) against pH (x) at a fixed E (V vs SHE).
+---   diagrams.pH_ligand { library = lib, element = "Zn", ligand = "Cl", E = -0.5, ... }
 ---@param opts phlox_diagrams.pH_ligand.opts
 ---@return any
 function phlox_diagrams.pH_ligand(opts) end

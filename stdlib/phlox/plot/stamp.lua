@@ -34,7 +34,7 @@ local stamp = {}
 
 stamp.caution = "Equilibrium thermodynamics: shows what can form, not how fast."
 
-local STAMP_SIZE = 6.5           -- must match PX_STAMP_SIZE in src/render/draw.c
+local STAMP_SIZE = 6.5           -- must match PX_STAMP_SIZE in src/render/layout.h
 local STAMP_MARGIN = 10          -- points left free across the stamp's width
 
 local COND_NAMES = {
