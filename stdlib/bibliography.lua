@@ -121,6 +121,18 @@ return {
       short = "Rickard 2006",
       cite = "Rickard, D. (2006). The solubility of FeS. Geochim. Cosmochim. Acta 70, 5779.",
     },
+    BWB00 = {
+      short = "Benning et al. 2000",
+      cite = "Benning, L. G., Wilkin, R. T. and Barnes, H. L. (2000). Reaction pathways in the Fe-S system below 100 C. Chemical Geology 167, 25-51 (authors, title, journal and pages as recalled; the abstract was read).",
+    },
+    LUTHER96 = {
+      short = "Luther et al. 1996",
+      cite = "Luther, G. W., Rickard, D. T., Theberge, S. and Olroyd, A. (1996). Determination of metal (bi)sulfide stability constants of Mn2+, Fe2+, Co2+, Ni2+, Cu2+, and Zn2+ by voltammetric methods. Environ. Sci. Technol. 30, 671-679.",
+    },
+    CC64 = {
+      short = "Criss and Cobble 1964",
+      cite = "Criss, C. M. and Cobble, J. W. (1964). The thermodynamic properties of high temperature aqueous solutions. IV and V: Entropies of the ions up to 200 C and the correspondence principle; the calculation of ionic heat capacities up to 200 C. J. Am. Chem. Soc. 86, 5385-5390 and 5390-5393 (titles as recalled).",
+    },
     MIGDISOV02 = {
       short = "Migdisov et al. 2002",
       cite = "Migdisov, A. A., Williams-Jones, A. E., Lakshtanov, L. Z. and Alekhin, Y. V. (2002). Geochim. Cosmochim. Acta 66, 1713 (second dissociation constant of H2S).",

@@ -43,15 +43,17 @@ static const char *const species_fields[] = {
     "formula", "model",    "G",        "H",      "S",        "cp",     "V",
     "T_range", "source",   "quality",  "note",   "hkf",      "estimated", "estimate",
     "reaction", "logK",    "dH",       "logK_T", "units",    "uncertainty",
-    "known_mismatch", NULL};
+    "known_mismatch", "dCp", NULL};
 /* fields that belong to one model only */
 static const char *const cp_only[] = {"cp", "V", NULL};
-static const char *const logk_only[] = {"reaction", "logK", "dH", "logK_T", NULL};
+static const char *const logk_only[] = {"reaction", "logK", "dH", "logK_T", "dCp", NULL};
 /* HKF fields the other models may not carry (logk and cp have their own 'estimate') */
 static const char *const hkf_fields[] = {"hkf", "estimated", NULL};
 /* temperature-estimation methods of a logk species (docs/thermo.md) */
 #define LOGK_METHOD_ISOCOULOMBIC "isocoulombic"
 #define LOGK_METHOD_MAX 32
+/* the estimation method of a logk species' constant dCp (docs/thermo.md) */
+#define LOGK_CP_METHOD_CRISS_COBBLE "criss-cobble"
 #define CP_METHOD_KOPP "kopp" /* Kopp-Neumann additivity of a solid's Cp */
 static const char *const ghs[] = {"G", "H", "S", NULL};
 
@@ -474,25 +476,54 @@ static void read_logk(ctx *c, int t, pxd_entry *e, double eu)
         REPORT(c, PX_DATA_ERROR, "logK", "missing 'logK' (log K at 25 C) or 'logK_T'");
     if (rt == 1 && !isnan(sp->logk.dH))
         REPORT(c, PX_DATA_WARNING, "dH", "dH is not used when logK_T is given");
+    /* dCp: constant reaction heat capacity, always J/(mol K), only with dH */
+    int rcp = get_num(c, t, "dCp", "dCp", 1.0, &sp->logk.dCp);
+    if (rcp == 1 && (rt == 1 || isnan(sp->logk.dH))) {
+        REPORT(c, PX_DATA_ERROR, "dCp",
+               "dCp (J/(mol K)) extends a measured dH (Kirchhoff); give it with 'dH', not %s",
+               rt == 1 ? "with 'logK_T'" : "alone");
+        sp->logk.dCp = 0;
+    }
     char method[LOGK_METHOD_MAX] = "";
     char model[sizeof sp->logk.model] = "";
     int ty = rawfield(c->L, t, "estimate");
     lua_pop(c->L, 1);
     int rm = 0;
     if (ty == LUA_TTABLE) {
-        /* estimate = { method = "isocoulombic", model = "<reaction>" } */
+        /* estimate = { method = "isocoulombic", model = "<reaction>" }
+         * or estimate = { dCp = "criss-cobble" } (with dH and dCp) */
         get_table(c, t, "estimate", "estimate");
         int p = lua_gettop(c->L);
-        static const char *const k[] = {"method", "model", NULL};
+        static const char *const k[] = {"method", "model", "dCp", NULL};
         check_keys(c, p, k, "estimate");
+        char cpm[LOGK_METHOD_MAX] = "";
+        int rc = get_str(c, p, "dCp", "estimate.dCp", cpm, sizeof cpm);
+        if (rc == 1) {
+            if (strcmp(cpm, LOGK_CP_METHOD_CRISS_COBBLE) != 0)
+                REPORT(c, PX_DATA_ERROR, "estimate.dCp",
+                       "unknown estimation method '%s' for dCp (model 'logk' knows \"%s\")", cpm,
+                       LOGK_CP_METHOD_CRISS_COBBLE);
+            else if (rcp != 1 || sp->logk.dCp == 0)
+                REPORT(c, PX_DATA_ERROR, "estimate.dCp",
+                       "estimate = { dCp = \"%s\" } names how the record's 'dCp' was obtained: "
+                       "give dH and the estimated dCp (J/(mol K))", LOGK_CP_METHOD_CRISS_COBBLE);
+            else
+                sp->logk.cp_estimate = PX_LOGK_CP_EST_CRISS_COBBLE;
+        }
         rm = get_str(c, p, "method", "estimate.method", method, sizeof method);
-        if (rm == 0)
+        if (rm == 0 && rc == 1) {
+            /* only dCp is estimated: log K at 25 C and dH are published */
+        } else if (rm == 0)
             REPORT(c, PX_DATA_ERROR, "estimate.method",
                    "name the method: estimate = { method = \"%s\", model = \"<reaction>\" } "
                    "(estimate = { Cp = ..., V = ... } is for model 'hkf')",
                    LOGK_METHOD_ISOCOULOMBIC);
         int rmod = get_str(c, p, "model", "estimate.model", model, sizeof model);
-        if (rmod == 1) {
+        if (rmod == 1 && rm == 0 && rc == 1) {
+            REPORT(c, PX_DATA_ERROR, "estimate.model",
+                   "a model reaction belongs to estimate.method = \"%s\", not to a dCp estimate",
+                   LOGK_METHOD_ISOCOULOMBIC);
+        } else if (rmod == 1) {
             px_reaction mr;
             char msg[200];
             if (px_reaction_parse_balanced(model, &mr, msg, sizeof msg) != PX_OK) {

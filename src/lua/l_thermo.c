@@ -207,6 +207,7 @@ static void push_species(lua_State *L, const px_species *sp, long index)
         lua_setfield(L, -2, "reaction");
         setnum(L, "logK25", sp->logk.logK25);
         setnum(L, "dH", sp->logk.dH); /* J/mol, absent if not given */
+        if (sp->logk.dCp != 0) setnum(L, "dCp", sp->logk.dCp); /* J/(mol K), constant */
         if (sp->logk.analytic) {
             lua_pushboolean(L, 1);
             lua_setfield(L, -2, "logK_T");

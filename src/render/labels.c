@@ -162,10 +162,66 @@ static int leader_clear(const pgeom *g, const px_lrec *rec, px_label_box *b, dou
     return 1;
 }
 
+/* A led-out label's candidate box: strict, its leader must run clear too
+ * (leader_clear); else only the box must be clear of the placed labels. */
+static int lead_ok(const pgeom *g, const px_lrec *rec, px_label_box *b, double ax, double ay, int strict)
+{
+    if (strict) return leader_clear(g, rec, b, ax, ay);
+    return px_box_in_rect(b, g->inner) && px_box_clear(rec, g->first, b);
+}
+
+/* Spots around the anchor (ax, ay) at growing distances, towards the roomier
+ * side first: the first acceptable box of size bw x bh, or 0. */
+static int lead_rings(const pgeom *g, const px_lrec *rec, long item, double s, double bw, double bh,
+                      double ax, double ay, int strict, px_label_box *best)
+{
+    static const double dir[][2] = {{1, 1}, {1, -1}, {1, 0}, {0, 1}, {-1, 1}, {0, -1},
+                                    {-1, -1}, {-1, 0}, {2, 1}, {2, -1}, {-2, 1}, {-2, -1},
+                                    {1, 2}, {1, -2}, {-1, 2}, {-1, -2}};
+    double ts = g->f->ts;
+    px_rect in = g->inner;
+    double sx = ax < in.x + in.w / 2 ? 1 : -1, sy = ay < in.y + in.h / 2 ? 1 : -1;
+    for (int d = 1; d <= PX_LEAD_RINGS; d++)
+        for (size_t k = 0; k < sizeof dir / sizeof dir[0]; k++) {
+            double ox = sx * dir[k][0] * PX_LEAD_STEP * ts * d, oy = sy * dir[k][1] * PX_LEAD_STEP * ts * d * 0.7;
+            double cx = ax + ox + (ox > 0 ? bw / 2 : ox < 0 ? -bw / 2 : 0);
+            double cy = ay + oy + (oy > 0 ? bh / 2 : oy < 0 ? -bh / 2 : 0);
+            px_label_box b = px_box_make(PX_LABEL_LEADER, g->panel, item, s, 0, cx, cy, bw, bh);
+            if (lead_ok(g, rec, &b, ax, ay, strict)) {
+                *best = b;
+                return 1;
+            }
+        }
+    return 0;
+}
+
+/* Anywhere in the plot on a grid, nearest the anchor first: the acceptable box, or 0. */
+static int lead_grid(const pgeom *g, const px_lrec *rec, long item, double s, double bw, double bh,
+                     double ax, double ay, int strict, px_label_box *best)
+{
+    px_rect in = g->inner;
+    double bestd = INFINITY;
+    int have = 0;
+    for (int i = 0; i <= PX_CANDIDATES * 2; i++)
+        for (int j = 0; j <= PX_CANDIDATES * 2; j++) {
+            double cx = in.x + bw / 2 + (in.w - bw) * i / (PX_CANDIDATES * 2.0);
+            double cy = in.y + bh / 2 + (in.h - bh) * j / (PX_CANDIDATES * 2.0);
+            double d = hypot(cx - ax, cy - ay);
+            if (d >= bestd) continue;
+            px_label_box b = px_box_make(PX_LABEL_LEADER, g->panel, item, s, 0, cx, cy, bw, bh);
+            if (!lead_ok(g, rec, &b, ax, ay, strict)) continue;
+            *best = b, have = 1, bestd = d;
+        }
+    return have;
+}
+
 /* Lead a label out of a field too small for it: spots around the anchor at
  * growing distances, towards the roomier side first; the first clear one
  * inside the frame wins, else the clear spot nearest the anchor anywhere in
- * the plot (at the leader size, then the smallest), else one beside it. */
+ * the plot (at the leader size, then the smallest). When no leader line can
+ * run clear of the placed labels (a crowded corner), the same search for a
+ * box that is clear while its line crosses a label (a crossed line is
+ * legible, two labels on one spot are not); else one beside the anchor. */
 static void place_leader(cairo_t *cr, const pgeom *g, long item, double ax, double ay, px_lrec *rec)
 {
     const px_item *it = &g->p->items[item];
@@ -173,40 +229,19 @@ static void place_leader(cairo_t *cr, const pgeom *g, long item, double ax, doub
     px_text_measure(cr, it->text, 1, s, &w, &h);
     double bw = w + 2 * ts, bh = h;
     px_rect in = g->inner;
-    double sx = ax < in.x + in.w / 2 ? 1 : -1, sy = ay < in.y + in.h / 2 ? 1 : -1;
-    static const double dir[][2] = {{1, 1}, {1, -1}, {1, 0}, {0, 1}, {-1, 1}, {0, -1},
-                                    {-1, -1}, {-1, 0}, {2, 1}, {2, -1}, {-2, 1}, {-2, -1},
-                                    {1, 2}, {1, -2}, {-1, 2}, {-1, -2}};
     px_label_box best;
-    int have = 0;
-    for (int d = 1; d <= PX_LEAD_RINGS && !have; d++)
-        for (size_t k = 0; k < sizeof dir / sizeof dir[0] && !have; k++) {
-            double ox = sx * dir[k][0] * PX_LEAD_STEP * ts * d, oy = sy * dir[k][1] * PX_LEAD_STEP * ts * d * 0.7;
-            double cx = ax + ox + (ox > 0 ? bw / 2 : ox < 0 ? -bw / 2 : 0);
-            double cy = ay + oy + (oy > 0 ? bh / 2 : oy < 0 ? -bh / 2 : 0);
-            px_label_box b = px_box_make(PX_LABEL_LEADER, g->panel, item, s, 0, cx, cy, bw, bh);
-            if (!leader_clear(g, rec, &b, ax, ay)) continue;
-            best = b, have = 1;
-        }
-    for (int shrink = 0; shrink < 2 && !have; shrink++) { /* anywhere in the plot, nearest first */
-        if (shrink) {
-            s = PX_LABEL_MIN * ts;
-            px_text_measure(cr, it->text, 1, s, &w, &h);
-            bw = w + 2 * ts, bh = h;
-        }
-        double bestd = INFINITY;
-        for (int i = 0; i <= PX_CANDIDATES * 2; i++)
-            for (int j = 0; j <= PX_CANDIDATES * 2; j++) {
-                double cx = in.x + bw / 2 + (in.w - bw) * i / (PX_CANDIDATES * 2.0);
-                double cy = in.y + bh / 2 + (in.h - bh) * j / (PX_CANDIDATES * 2.0);
-                double d = hypot(cx - ax, cy - ay);
-                if (d >= bestd) continue;
-                px_label_box b = px_box_make(PX_LABEL_LEADER, g->panel, item, s, 0, cx, cy, bw, bh);
-                if (!leader_clear(g, rec, &b, ax, ay)) continue;
-                best = b, have = 1, bestd = d;
-            }
+    int have = lead_rings(g, rec, item, s, bw, bh, ax, ay, 1, &best);
+    if (!have) have = lead_grid(g, rec, item, s, bw, bh, ax, ay, 1, &best);
+    if (!have) {
+        s = PX_LABEL_MIN * ts;
+        px_text_measure(cr, it->text, 1, s, &w, &h);
+        bw = w + 2 * ts, bh = h;
+        have = lead_grid(g, rec, item, s, bw, bh, ax, ay, 1, &best) ||
+               lead_rings(g, rec, item, s, bw, bh, ax, ay, 0, &best) ||
+               lead_grid(g, rec, item, s, bw, bh, ax, ay, 0, &best);
     }
     if (!have) { /* nothing clear: beside the anchor, kept inside the frame */
+        double sx = ax < in.x + in.w / 2 ? 1 : -1, sy = ay < in.y + in.h / 2 ? 1 : -1;
         double cx = fmin(fmax(ax + sx * (PX_LEAD_STEP * ts + bw / 2), in.x + bw / 2), in.x + in.w - bw / 2);
         double cy = fmin(fmax(ay + sy * PX_LEAD_STEP * ts, in.y + bh / 2), in.y + in.h - bh / 2);
         best = px_box_make(PX_LABEL_LEADER, g->panel, item, s, 0, cx, cy, bw, bh);

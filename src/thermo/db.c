@@ -243,6 +243,10 @@ px_tbasis px_species_tbasis(const px_species *sp, const char **method)
     case PX_MODEL_LOGK:
         if (sp->logk.analytic || isfinite(sp->logk.dH)) {
             b = PX_TBASIS_MEASURED;
+            if (sp->logk.cp_estimate == PX_LOGK_CP_EST_CRISS_COBBLE) {
+                b = PX_TBASIS_ESTIMATED;
+                m = PX_METHOD_CRISS_COBBLE; /* dH measured, dCp estimated */
+            }
         } else if (sp->logk.estimate == PX_LOGK_EST_ISOCOULOMBIC) {
             b = PX_TBASIS_ESTIMATED;
             m = PX_METHOD_ISOCOULOMBIC; /* with or without a model reaction (logk.model) */

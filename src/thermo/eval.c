@@ -189,12 +189,15 @@ static void logk_reaction(const px_logk_params *lk, double T, double *dG, double
         *dCp = RL * (2 * k[1] * T + k[3] / PX_LN10 + 2 * k[4] / (T * T));
     } else {
         double h = isfinite(lk->dH) ? lk->dH : 0.0;
-        /* van 't Hoff with constant dH: log K(T) = log K(Tr) - dH/(R ln10) (1/T - 1/Tr) */
-        double lg = lk->logK25 - h / RL * (1 / T - 1 / PX_TR);
-        *dG = -RL * T * lg;
-        *dH = h;
-        *dS = (h - *dG) / T;
-        *dCp = 0;
+        double cp = isfinite(lk->dH) ? lk->dCp : 0.0;
+        /* Kirchhoff with constant dCp (van 't Hoff when dCp = 0):
+         * dH(T) = dH(Tr) + dCp (T - Tr), dS(T) = dS(Tr) + dCp ln(T/Tr), dG = dH - T dS */
+        double g0 = -RL * PX_TR * lk->logK25;
+        double s0 = (h - g0) / PX_TR;
+        *dH = h + cp * (T - PX_TR);
+        *dS = s0 + cp * log(T / PX_TR);
+        *dG = *dH - T * *dS;
+        *dCp = cp;
     }
 }
 

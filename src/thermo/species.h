@@ -76,15 +76,25 @@ typedef enum px_logk_estimate {
                                 with a model reaction when px_logk_params.model is set */
 } px_logk_estimate;
 
+/* Where a constant reaction heat capacity px_logk_params.dCp comes from. */
+typedef enum px_logk_cp_estimate {
+    PX_LOGK_CP_EST_NONE = 0,     /* published (or no dCp: 0) */
+    PX_LOGK_CP_EST_CRISS_COBBLE  /* ionic heat capacities by the correspondence principle
+                                    (Criss and Cobble 1964) */
+} px_logk_cp_estimate;
+
 /* log K of the formation reaction (the species is the reaction's product):
  *   analytic: log K = k[0] + k[1] T + k[2]/T + k[3] log10 T + k[4]/T^2
- *   otherwise: van 't Hoff from logK25 and dH (J/mol), constant dH;
+ *   otherwise: van 't Hoff from logK25 and dH (J/mol), constant dH, or with
+ *   dCp != 0 Kirchhoff with constant dCp (J/(mol K)) from logK25, dH at Tr;
  *   estimate = ISOCOULOMBIC (no dH, not analytic): px_isocoulombic_logK, on
  *   the reaction minus the model reaction when model is not empty. */
 typedef struct px_logk_params {
     char reaction[256]; /* e.g. "Zn^2+ + Cl^- = ZnCl^+" */
     double logK25;
     double dH; /* J/mol; NAN if unknown (then log K is held constant) */
+    double dCp; /* J/(mol K), constant dCp of the reaction with dH; 0 if not given */
+    px_logk_cp_estimate cp_estimate; /* how dCp was obtained */
     int analytic;
     double k[5];
     px_logk_estimate estimate;

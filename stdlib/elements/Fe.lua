@@ -19,6 +19,19 @@ local DIAKONOV99 = "[DIAKONOV99] (abstract read)"
 local SERGEEVA99 = "[SERGEEVA99] (Geokhimiya 37, 1218; abstract read: 0.5 Fe2O3 + OH- + 1.5 H2O = Fe(OH)4-, 200 C, saturation pressure)"
 local RH95 = "from memory of [RH95]"
 local NORD = "from memory of [N90]"
+-- Criss-Cobble correspondence principle (ionic heat capacities from entropies):
+-- mean Cp(25 C..T) of a cation on the absolute scale = alpha(T) + beta(T) S_abs(25 C),
+-- S_abs = S_conv - 5.0 z cal/(mol K); on the conventional scale this is
+-- alpha (1 - z) + beta S_conv, so for two cations of the same element
+-- Cp(Fe3+) - Cp(Fe2+) = -alpha + beta (S(Fe3+) - S(Fe2+)).  Cation parameters for
+-- 25-200 C: alpha = 50, beta = -0.63 (cal/(mol K)).
+local CRISS_COBBLE = "the correspondence principle of [CC64] (cation parameters alpha = 50, " ..
+                     "beta = -0.63 for 25-200 C, S_abs(H+) = -5.0 cal/(mol K), from memory)"
+local CC_ALPHA_200, CC_BETA_200 = 50, -0.63          -- cal/(mol K), as above
+local S_FE3, S_FE2 = -66.30, -25.30                  -- cal/(mol K), Shock et al. 1997 (records below)
+local CAL = 4.184                                    -- J per cal (thermochemical)
+local CC_FE3_MINUS_FE2 = (-CC_ALPHA_200 + CC_BETA_200 * (S_FE3 - S_FE2)) * CAL -- J/(mol K)
+local CP_H2 = 28.836                                 -- J/(mol K), H2(g) at 25 C (CODATA, recalled)
 
 return {
   element = "Fe",
@@ -51,10 +64,23 @@ return {
       formula = "Fe^3+", model = "logk",
       reaction = "2 Fe^2+ + 2 H^+ = 2 Fe^3+ + H2(g)",
       logK = -26.022, dH = 85.354,
+      -- dCp of the reaction (J/(mol K)): Cp(Fe3+) - Cp(Fe2+) by the Criss-Cobble
+      -- correspondence principle, twice, plus Cp of H2(g) (see CRISS_COBBLE above)
+      dCp = 2 * CC_FE3_MINUS_FE2 + CP_H2,
+      estimate = { dCp = "criss-cobble" },
       source = "derived here from dfG/dfH " .. SHOCK97 ..
-               ": Fe3+ dfG -4120 cal/mol, dfH -11850 cal/mol, S -66.30 cal/(mol K); Fe2+ as above",
+               ": Fe3+ dfG -4120 cal/mol, dfH -11850 cal/mol, S -66.30 cal/(mol K); " ..
+               "Fe2+ as above; dCp estimated with " .. CRISS_COBBLE .. " from these two entropies; " ..
+               "Cp(H2,g) 28.836 J/(mol K) from memory of [CODATA89]",
       quality = "medium",
-      note = "HKF parameters of Fe3+ not recalled and no Cp known, so the ion is defined against Fe2+ (logK = -2*dG/(RT ln10), dH from dfH). E0(Fe3+/Fe2+) = 0.770 V (CRC 0.771). Temperature dependence above ~100 C is only van 't Hoff.",
+      note = "HKF parameters of Fe3+ not recalled, so the ion is defined against Fe2+ " ..
+             "(logK = -2*dG/(RT ln10), dH from dfH). E0(Fe3+/Fe2+) = 0.770 V (CRC 0.771), unchanged " ..
+             "by the dCp (it acts away from 25 C only). Temperature: Kirchhoff with constant dCp = " ..
+             "-173.4 J/(mol K): Cp(Fe3+) - Cp(Fe2+) = -alpha + beta (S(Fe3+) - S(Fe2+)) = -50 + 0.63 x 41.0 " ..
+             "= -24.2 cal/(mol K) (cation parameters for the mean over 25-200 C; the 100 and 150 C " ..
+             "parameters give -23.5 and -21.8), held beyond 200 C. Trivalent ions have strongly negative " ..
+             "Cp; without it (van 't Hoff only) hematite solubility to Fe3+ at 200 C came out 0.61 log " ..
+             "units above the measurement of [SERGEEVA99] (docs/data-checks.md).",
     },
     -- Fe(II) hydrolysis ------------------------------------------------------
     {

@@ -131,14 +131,28 @@ return {
       G = -100.4, H = -100.0, S = 60.29, cp = { a = 50.54 }, V = 18.20,
       T_range = { 273.15, 411 },
       source = NBS .. " (FeS cr); V " .. RH95, quality = "medium",
-      note = "stoichiometric pyrrhotite; lambda transition at 411 K; Cp held at its 25 C value",
+      note = "Troilite is the stoichiometric end member of the pyrrhotite group (Fe(1-x)S, x = 0 to 0.125); " ..
+             "the library's pyrrhotite, and the iron sulfide of a sour-corrosion map from pH 7.4 at 25 C and " ..
+             "1e-6 iron (the edge FeS + H+ = FeHS+ sets). Non-stoichiometric pyrrhotite (Fe7S8) has no record: no data recalled. " ..
+             "Lambda transition at 411 K not modelled; Cp held at its 25 C value (NBS 50.54 J/(mol K))",
     },
     {
       formula = "FeS(s,mackinawite)", model = "logk",
-      reaction = "FeS(s,mackinawite) + H^+ = Fe^2+ + HS^-", logK = -3.5, estimate = "isocoulombic",
-      source = "from memory of [RICKARD06], log K*sp = -3.5 +- 0.25",
+      reaction = "FeS(s,mackinawite) + 2 H^+ = Fe^2+ + H2S(aq)", logK = 3.5, estimate = "isocoulombic",
+      source = "from memory of [RICKARD06], log K*sp = 3.5 +- 0.25 " ..
+               "for FeS(m) + 2 H+ = Fe2+ + H2S(aq)",
       quality = "medium",
-      note = "first iron sulfide to form in sour corrosion; literature -2.95 (Davison 1991) to -3.6; dH not recalled",
+      note = "The first iron sulfide to form in sour corrosion and in sediments; metastable against troilite " ..
+             "(pyrrhotite) and pyrite. Second source, read: [BWB00] (abstract) fit " ..
+             "log K = 2848.779/T - 6.347 to measured solubility at 25-95 C (3.21 at 25 C, 1.39 at 95 C). Its " ..
+             "slope (dH = -54.5 kJ/mol) is not used: it is 25 kJ/mol more exothermic than troilite's " ..
+             "calorimetric dissolution enthalpy (-29.9 kJ/mol with these files), which would make the metastable " ..
+             "phase the stable one above about 40 C and the only FeS of every map at 100-300 C, contrary to its " ..
+             "observed transformation to pyrrhotite and pyrite on heating. The isocoulombic estimate keeps " ..
+             "mackinawite above troilite's solubility at every temperature (known differences against the fit, " ..
+             "docs/data-checks.md). Disordered (nanoparticulate) mackinawite is more soluble, 4.87 +- 0.27 " ..
+             "(Wolthers, Charlet and Rickard 2005, abstract read). The previous record was this constant written " ..
+             "with HS^- (-3.5).",
     },
     {
       formula = "FeS2(s,pyrite)", model = "cp",
@@ -248,6 +262,21 @@ return {
       source = COMPILED, quality = "low", note = "dH not recalled; [SM] list about 2.3" },
     { formula = "AgSO4^-", model = "logk", reaction = "Ag^+ + SO4^2- = AgSO4^-", logK = 1.29, dH = 1.49, units = KCAL,
       source = COMPILED, quality = "low" },
+
+    -- ---------------------------------------------------------------- bisulfide complexes (I = 0, 25 C)
+    {
+      formula = "FeHS^+", model = "logk",
+      reaction = "Fe^2+ + HS^- = FeHS^+", logK = 5.07, estimate = "isocoulombic",
+      source = "from memory of [LUTHER96] (the abstract, read, names the FeSH+ and Fe2(SH)3+ complexes " ..
+               "but its constants were not in the excerpt): " ..
+               "thermodynamic constant (I = 0) log K = 5.07 +- 0.09, as recalled",
+      quality = "low",
+      note = "The iron(II) bisulfide complex of sour and anoxic waters (written FeSH+ in the voltammetric literature). " ..
+             "Luther's earlier seawater work gives log K = 5.5 (NSF award OCE-9314349 abstract, read; a constant in " ..
+             "seawater, not I = 0). dH not known: isocoulombic estimate (Fe^2+ + HS^- + H2O = FeHS^+ + H^+ + OH^-). " ..
+             "Fe2(HS)^3+ (log K about 10-11) is left out: it matters only at Fe(II) well above 1e-6. Checks: " ..
+             "docs/data-checks.md",
+    },
 
     -- ---------------------------------------------------------------- sulfate salts
     {

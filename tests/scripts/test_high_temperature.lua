@@ -95,5 +95,23 @@ for _, el in ipairs { "Fe", "Zn", "Ni", "Cu" } do
   end
 end
 check(#asserted >= 1, "at least iron must be asserted")
+
+-- 3. Steel in sour water: with 1e-3 dissolved sulfide an iron monosulfide
+--    (troilite, the pyrrhotite end member) and pyrite keep fields from 25 to
+--    300 C, the sulfide film of sour corrosion and the pyrite-pyrrhotite pair
+--    that buffers hydrothermal and geothermal fluids (from memory of the
+--    geothermal literature, e.g. Giggenbach 1980, Geochim. Cosmochim. Acta 44,
+--    2021; common practice for the film).  The FeS field's acid edge is set by
+--    FeHS^+ (FeS + H^+ = FeHS^+, no free sulfide in the reaction).
+local fes = phlox.library { "Fe", "S" }
+for _, T in ipairs { 25, 100, 200, 300 } do
+  local m = phlox.map { library = fes, element = "Fe", ligand = "S", ligand_activity = 1e-3, T_C = T, activity = ACTIVITY }
+  local set = field_set(m)
+  check(set["FeS(s,troilite)"], ("Fe-S %d C: an iron monosulfide field must exist at 1e-3 sulfide"):format(T))
+  check(set["FeS2(s,pyrite)"], ("Fe-S %d C: a pyrite field must exist at 1e-3 sulfide"):format(T))
+  local lo = math.huge
+  for _, x in ipairs(set["FeS(s,troilite)"].x) do lo = math.min(lo, x) end
+  io.write(("Fe-S %3d C: troilite from pH %.2f, pyrite field yes\n"):format(T, lo))
+end
 print(("test_high_temperature: all asserted checks passed (alkaline field asserted for %s; pending %s)"):format(
   table.concat(asserted, ", "), #pending > 0 and table.concat(pending, ", ") or "none"))

@@ -327,6 +327,25 @@ static void test_logk_estimate_basis(void **state)
     assert_true(est && held);
     px_db_free(db);
 
+    /* a measured dH with a constant dCp: measured, or estimated when the dCp
+     * is marked as a Criss-Cobble estimate (docs/thermo.md) */
+    const char *cp = "return { element = 'Zn', species = {\n"
+                     "{ formula = 'Zn^2+', model = 'logk', reaction = 'Zn(s) + 2 H^+ = Zn^2+ + H2(g)',"
+                     " logK = 25.79, dH = -153.9, dCp = -40, source = 's' },\n"
+                     "{ formula = 'ZnOH^+', model = 'logk', reaction = 'Zn^2+ + H2O(l) = ZnOH^+ + H^+',"
+                     " logK = -8.96, dH = 56.07, dCp = -60, estimate = { dCp = 'criss-cobble' }, source = 's' } } }\n";
+    db = px_db_new();
+    st = px_data_load_buffer(db, cp, strlen(cp), "c.lua", NULL, p);
+    if (st != PX_OK) dump(p);
+    assert_int_equal(st, PX_OK);
+    a = px_db_find(db, "Zn^2+");
+    b = px_db_find(db, "ZnOH^+");
+    assert_close(a->logk.dCp, -40, 0, 0); /* always J/(mol K) */
+    assert_int_equal(a->tbasis, PX_TBASIS_MEASURED);
+    assert_int_equal(b->tbasis, PX_TBASIS_ESTIMATED);
+    assert_string_equal(b->tmethod, PX_METHOD_CRISS_COBBLE);
+    px_db_free(db);
+
     static const char *const bad[][2] = {
         {"estimate = 'vant-hoff'", "estimate: unknown estimation method 'vant-hoff'"},
         {"estimate = 'isocoulombic', dH = 13.4", "estimate: an estimate stands in for missing temperature data: this species has dH"},
@@ -338,6 +357,11 @@ static void test_logk_estimate_basis(void **state)
          "estimate.model: the model reaction must not contain the species itself (ZnOH^+)"},
         {"estimate = { method = 'one-term', model = 'Cu^2+ + Cl^- = CuCl^+' }",
          "estimate: unknown estimation method 'one-term'"},
+        {"dCp = -50", "dCp: dCp (J/(mol K)) extends a measured dH (Kirchhoff); give it with 'dH', not alone"},
+        {"dH = 13.4, dCp = -50, estimate = { dCp = 'kopp' }", "estimate.dCp: unknown estimation method 'kopp' for dCp"},
+        {"dH = 13.4, estimate = { dCp = 'criss-cobble' }", "estimate.dCp: estimate = { dCp = \"criss-cobble\" } names how"},
+        {"dH = 13.4, dCp = -50, estimate = { dCp = 'criss-cobble', model = 'Cu^2+ + Cl^- = CuCl^+' }",
+         "estimate.model: a model reaction belongs to estimate.method"},
     };
     expect_errors(p,
                   "return { element = 'Zn', species = {\n"

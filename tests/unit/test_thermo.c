@@ -839,6 +839,30 @@ static void test_logk_model(void **state)
     assert_close(p.H / 1000, -191.17, 0, 0.01);
     assert_close(p.S, 143.9, 0, 0.5); /* NBS S (from memory), not an input */
 
+    /* with a constant dCp: Kirchhoff from 25 C (docs/thermo.md, LOGK), by hand:
+     * dG(T) = dH + dCp (T - Tr) - T [dS + dCp ln(T/Tr)], dS = (dH - dG(Tr))/Tr;
+     * 25 C unchanged; dCp is the species' reaction Cp; the basis stays measured
+     * unless the dCp is marked as a Criss-Cobble estimate */
+    h.logk.dCp = -150;
+    assert_int_equal(px_db_replace(db, &h), PX_OK);
+    assert_int_equal(px_reaction_logK(ws, db, &r, 298.15, 1, &lk), PX_OK);
+    assert_close(lk, 23.481, 0, 1e-9);
+    {
+        double T = 473.15, g0 = -PX_R * PX_TR * PX_LN10 * 23.481, s0 = (-191.17e3 - g0) / PX_TR;
+        double g = -191.17e3 - 150 * (T - PX_TR) - T * (s0 - 150 * log(T / PX_TR));
+        assert_int_equal(px_reaction_logK(ws, db, &r, T, 1, &lk), PX_OK);
+        assert_close(lk, -g / (PX_R * PX_LN10 * T), 0, 1e-9);
+    }
+    check_fd(ws, db, px_db_find(db, "H2O2(aq)"), 400, 5);
+    assert_int_equal(px_species_tbasis(px_db_find(db, "H2O2(aq)"), NULL), PX_TBASIS_MEASURED);
+    h.logk.cp_estimate = PX_LOGK_CP_EST_CRISS_COBBLE;
+    const char *cm = NULL;
+    assert_int_equal(px_species_tbasis(&h, &cm), PX_TBASIS_ESTIMATED);
+    assert_string_equal(cm, PX_METHOD_CRISS_COBBLE);
+    h.logk.dCp = 0;
+    h.logk.cp_estimate = PX_LOGK_CP_EST_NONE;
+    assert_int_equal(px_db_replace(db, &h), PX_OK);
+
     /* analytic form: Plummer and Busenberg 1982 log K1 of CO2(aq) (log_k_25C.csv):
      * HCO3^- defined by it gives log K(25 C) = -6.352 through the HKF CO2(aq) */
     px_species hc = mk("HCO3^-", PX_MODEL_LOGK, NAN, NAN, NAN);
