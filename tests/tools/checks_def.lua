@@ -663,10 +663,7 @@ M.GROUPS = {
 --- Parse a CSV file (RFC 4180 quoting) into a list of rows keyed by header
 --- (the shared reader of tests/support/csv.lua).
 local CSV = dofile((debug.getinfo(1, "S").source:match("^@(.*)[/\\]") or ".") .. "/../support/csv.lua")
-function M.read_csv(path)
-  local _, rows = CSV.read(path)
-  return rows
-end
+M.read_csv = CSV.rows
 
 function M.reference_dir(root)
   return root .. "/tests/reference"

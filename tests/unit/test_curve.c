@@ -100,7 +100,7 @@ static void test_fraction_curve(void **state)
     assert_int_equal(retried, 0);
     /* Al^3+ = AlOH^2+ where pH = -log *K1: log_k_25C.csv (Baes and Mesmer
      * 1976 as tabulated, high confidence: +-0.02, the reference README) */
-    double k1 = px_ref_value("log_k_25C.csv", "reaction", "Al^3+ + H2O(l) = AlOH^2+ + H^+", "log10_K_25C");
+    double k1 = px_ref_logk("Al^3+ + H2O(l) = AlOH^2+ + H^+");
     double cross = NAN;
     for (int i = 0; i + 1 < NPTS && isnan(cross); i++) {
         assert_int_equal(v.status[i], PX_OK);
