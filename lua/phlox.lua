@@ -72,17 +72,26 @@ function phlox.read_library_file(rel)
   return nil, "no file '" .. rel .. "' in the search path or the built-in library"
 end
 
---- The elements whose definition files the library has (built-in and user).
+-- (the ligand groups, CN, are defined below; available_elements lists them too)
+local LIGAND_GROUP_FILES = { CN = true }
+
+--- The elements (and ligand groups, such as CN) whose definition files the
+--- library has (built-in and user): every name phlox.library accepts.
 function phlox.available_elements()
   local seen, list = {}, {}
-  local function add(sym) if not seen[sym] then seen[sym] = true; list[#list + 1] = sym end end
+  local function add(sym)
+    if (sym:match("^%u%l?$") or LIGAND_GROUP_FILES[sym]) and not seen[sym] then
+      seen[sym] = true
+      list[#list + 1] = sym
+    end
+  end
   for _, path in ipairs(core.embedded_files()) do
-    local sym = path:match("^stdlib/elements/(%u%l?)%.lua$")
+    local sym = path:match("^stdlib/elements/(%u%w?)%.lua$")
     if sym then add(sym) end
   end
   for _, dir in ipairs(core.search_paths()) do
     for _, name in ipairs(core.list_dir(dir .. "/elements") or {}) do -- opendir, no shell
-      local sym = name:match("^(%u%l?)%.lua$")
+      local sym = name:match("^(%u%w?)%.lua$")
       if sym then add(sym) end
     end
   end
@@ -114,7 +123,7 @@ for i, sym in ipairs(core.ligand_order()) do LIGAND_ORDER[sym] = i end
 -- Polyatomic ligands (docs/element-files.md): a group file
 -- stdlib/elements/<group>.lua, loaded after the element files of its
 -- elements, which a library naming the group loads too.
-local LIGAND_GROUPS = { CN = { "C", "N" } }
+local LIGAND_GROUPS = { CN = { "C", "N" } } -- keep LIGAND_GROUP_FILES above in step
 local GROUP_NAMES = {}
 for g in pairs(LIGAND_GROUPS) do GROUP_NAMES[#GROUP_NAMES + 1] = g end
 table.sort(GROUP_NAMES)

@@ -102,7 +102,8 @@ local phlox = {}
 ---@return any
 function phlox.activity_range(model, I) end
 
---- The elements whose definition files the library has (built-in and user).
+--- The elements (and ligand groups, such as CN) whose definition files the
+--- library has (built-in and user): every name phlox.library accepts.
 ---@return any
 function phlox.available_elements() end
 

@@ -158,6 +158,11 @@ function commands.list(args)
     io.stderr:write(("phlox list: %d elements (phlox list ELEMENT lists its species)\n"):format(#els))
     return 0
   end
+  if element and not element:match("^%u%l?$") then -- a ligand group (CN): its species have no element of that name
+    io.stderr:write("phlox: list: '", element, "' is a ligand group, not an element: its complexes are listed",
+                    " under their metal and under each of its elements (phlox list Au, phlox list N)\n")
+    return 1
+  end
   if element then
     local found = false
     for _, e in ipairs(els) do if e == element then found = true end end
