@@ -417,20 +417,37 @@ local STOP_HINT = "pass accept_held_logk = true to use the 25 °C constants anyw
 -- species of `elements` at every temperature of `temps` (K): a species held
 -- at its 25 C log K stops the work (before any is done) unless
 -- opts.accept_held_logk is true; it returns the held formulas, the estimated
--- { formula, method } and the stamp lines naming both.
-function phlox.temperature_notes(lib, elements, temps, opts, where, only)
+-- { formula, method } and the stamp lines naming both.  `elements` are the
+-- elements of the result's own system (an entry may be a ligand group, "CN"
+-- for C and N); only species made of them (with H and O) are named, unless
+-- `only` (a set of symbols) says otherwise: a species of another element
+-- that a loaded file defines is not part of the result.  `species` (a set
+-- of formulas, optional): the species the result's system holds, once it
+-- is known (a speciation's r.species); no other is named.
+function phlox.temperature_notes(lib, elements, temps, opts, where, only, species)
   if opts and opts.require_temperature_data ~= nil then
     error(("%s: require_temperature_data is gone: stopping on a log K held at 25 °C is now the default; " ..
       "pass accept_held_logk = true to accept such constants"):format(where), 0)
   end
+  local els, set = {}, {}
+  for _, e in ipairs(elements) do
+    for sym in tostring(e):gmatch("%u%l?") do
+      if not set[sym] then set[sym] = true; els[#els + 1] = sym end
+    end
+  end
+  elements, only = els, only or set
   local held, est, hseen, eseen, at = {}, {}, {}, {}, {}
   for _, T in ipairs(temps) do
     for _, f in ipairs(phlox.constant_logk(lib, elements, T, nil, { only = only })) do
-      if not hseen[f] then hseen[f] = true; held[#held + 1] = f end
-      at[#at + 1] = T
+      if not species or species[f] then -- in the system
+        if not hseen[f] then hseen[f] = true; held[#held + 1] = f end
+        at[#at + 1] = T
+      end
     end
     for _, e in ipairs(phlox.estimated_species(lib, elements, T, { only = only })) do
-      if not eseen[e.formula] then eseen[e.formula] = true; est[#est + 1] = e end
+      if not eseen[e.formula] and (not species or species[e.formula]) then
+        eseen[e.formula] = true; est[#est + 1] = e
+      end
     end
   end
   table.sort(held)
@@ -462,8 +479,8 @@ function phlox.temperature_notes(lib, elements, temps, opts, where, only)
 end
 
 -- The notes of one map at T; errors name the caller.
-local function held_logk(lib, elements, T, opts, where, only)
-  local ok, held, est, lines = pcall(phlox.temperature_notes, lib, elements, { T }, opts, where, only)
+local function held_logk(lib, elements, T, opts, where, only, species)
+  local ok, held, est, lines = pcall(phlox.temperature_notes, lib, elements, { T }, opts, where, only, species)
   if not ok then error(held, 3) end
   return { held = held, estimated = est, lines = lines }
 end
@@ -696,7 +713,17 @@ end
 -- The elements a speciation involves: those of totals, fugacities and fixed
 -- (each a symbol or a formula); the held-species check looks at species made
 -- of these (with H and O) only.
-local function speciation_elements(lib, opts)
+local speciation_elements
+--- The elements (besides H and O) of the system a speciation with these
+-- options (those of phlox.speciate) contains: those of totals, and of the
+-- species of fugacities and fixed; sorted.  Its stamps name the estimated
+-- and held species made of these (with H and O) only.
+function phlox.system_elements(lib, opts)
+  check_library("phlox.system_elements", lib)
+  core.check_value("phlox.system_elements", "opts", opts, "table")
+  return (speciation_elements(lib, opts))
+end
+function speciation_elements(lib, opts)
   local set, out = { H = true, O = true }, {}
   local function add_formula(f)
     local rec = lib:species(f)
@@ -735,8 +762,10 @@ local SPECIATE_OPTS = spec("phlox.speciate", {
   require_temperature_data = "boolean",       -- gone: phlox.temperature_notes says to use accept_held_logk
 }, true)
 -- The stamp lines and notes of a core.speciate result r at T (K), as
--- phlox.speciate gives them; held: held_logk's record at T.
-local function speciation_notes(r, opts, T, held)
+-- phlox.speciate gives them; sys: the system's elements (speciation_setup)
+-- for the held and estimated species, of which r names those its system
+-- holds (r.species).
+local function speciation_notes(r, opts, T, sys)
   r.T_C = T - T0C
   note_activity(r, r.activity_model, r.ionic_strength)
   if r.activity_model == "sit" then
@@ -755,7 +784,9 @@ local function speciation_notes(r, opts, T, held)
   if opts.solids == false then add_note(r, "solids", "no solid may precipitate (solids = false)") end
   note_list(r, "suppress", "kept from precipitating by the user (suppress)", opts.suppress)
   note_list(r, "exclude", "left out by the user (exclude)", opts.exclude)
-  stamp_held(r, held)
+  local in_system = {}
+  for _, sp in ipairs(r.species) do in_system[sp.formula] = true end
+  stamp_held(r, held_logk(sys.lib, sys.els, T, opts, sys.where, sys.only, in_system))
   local names = {}
   for _, sp in ipairs(r.species) do
     if (sp.molality or 0) > 0 then names[#names + 1] = sp.formula end
@@ -798,10 +829,10 @@ end
 -- info when the solver does not converge.
 function phlox.speciate(opts)
   local lib, copt, T, P, els, only = speciation_setup(opts, "phlox.speciate")
-  local held = held_logk(lib, els, T, opts, "phlox.speciate", only)
+  held_logk(lib, els, T, opts, "phlox.speciate", only) -- stops before the work
   local r, err, info = core.speciate(lib.db, copt)
   if not r then return nil, err, info end
-  speciation_notes(r, opts, T, held)
+  speciation_notes(r, opts, T, { lib = lib, els = els, only = only, where = "phlox.speciate" })
   local els = {}
   for e in pairs(opts.totals or {}) do els[#els + 1] = e end
   for _, f in ipairs({ opts.fugacities or {}, opts.fixed or {} }) do
@@ -835,7 +866,7 @@ local CURVE_VARY = { pH = function(x) return { pH = x } end,
 function phlox.speciate_curve(opts, curve)
   local where = "phlox.speciate"
   local lib, copt, T, _, els, only = speciation_setup(opts, where)
-  local held = held_logk(lib, els, T, opts, where, only)
+  held_logk(lib, els, T, opts, where, only) -- stops before the work
   core.check_value("phlox.speciate_curve", "curve", curve, "table")
   local vary = CURVE_VARY[curve.var]
   if not vary then core.user_error("phlox.speciate_curve: curve.var must be \"pH\", \"log_total\" or \"log_a\"") end
@@ -860,7 +891,7 @@ function phlox.speciate_curve(opts, curve)
   end
   local points, retried = core.curve(lib.db, copt, run)
   for _, p in ipairs(points) do
-    if p.r then speciation_notes(p.r, opts, T, held) end
+    if p.r then speciation_notes(p.r, opts, T, { lib = lib, els = els, only = only, where = where }) end
   end
   if bad then error(bad.err, 0) end
   return points, retried
@@ -914,8 +945,10 @@ function phlox.grid_map(opts)
   end
   local T = temperature(opts, "phlox.grid_map")
   local P = pressure(opts, T, "phlox.grid_map")
-  local held = held_logk(lib, { opts.element, opts.ligand }, T, opts, "phlox.grid_map",
-    { [opts.element] = true, [opts.ligand or opts.element] = true })
+  -- the grid's system: the element, the ligand and a NaCl background
+  local held_of = { opts.element, opts.ligand }
+  if opts.background_nacl then held_of[#held_of + 1] = "Na"; held_of[#held_of + 1] = "Cl" end
+  local held = held_logk(lib, held_of, T, opts, "phlox.grid_map")
   local pr, er = opts.pH_range or { 0, 14 }, opts.E_range or { -2, 2 }
   local g, err = core.grid_map(lib.db, {
     element = opts.element, T = T, P = P, window = { pr[1], pr[2], er[1], er[2] },
