@@ -186,6 +186,17 @@ static void test_tiny_grids(void **state)
     px_db_free(db);
 }
 
+/* Cu with 0.01 mol/kg chloride on an nx by ny grid. */
+static px_rmap_options cu_cl(size_t nx, size_t ny)
+{
+    px_rmap_options o = px_rmap_options_default();
+    o.ligand = "Cl";
+    o.ligand_total = 1e-2;
+    o.grid.nx = nx;
+    o.grid.ny = ny;
+    return o;
+}
+
 /* Every allocation of a build goes through px_rmap_options.alloc: failing
  * the Nth one gives PX_ENOMEM with nothing leaked, never a map missing a
  * part; once none fails, the map is the one built with malloc. */
@@ -194,11 +205,7 @@ static void test_alloc_failure(void **state)
     (void)state;
     px_db *db = load("Cu", "Cl");
     px_thermo_ws *ws = px_thermo_ws_new(PX_DIELECTRIC_R8_97);
-    px_rmap_options o = px_rmap_options_default();
-    o.ligand = "Cl";
-    o.ligand_total = 1e-2;
-    o.grid.nx = 9;
-    o.grid.ny = 7;
+    px_rmap_options o = cu_cl(9, 7);
     map_run plain = run(ws, db, "Cu", o, 1, NULL);
     int succeeded = 0;
     for (long nth = 0; nth < 5000 && !succeeded; nth++) {
@@ -260,11 +267,7 @@ static void test_alloc_threads(void **state)
     (void)state;
     px_db *db = load("Cu", "Cl");
     px_thermo_ws *ws = px_thermo_ws_new(PX_DIELECTRIC_R8_97);
-    px_rmap_options o = px_rmap_options_default();
-    o.ligand = "Cl";
-    o.ligand_total = 1e-2;
-    o.grid.nx = 31;
-    o.grid.ny = 21;
+    px_rmap_options o = cu_cl(31, 21);
     map_run plain = run(ws, db, "Cu", o, 1, NULL);
     counted c = {PTHREAD_MUTEX_INITIALIZER, 0, 0};
     px_allocator al = {counted_alloc, counted_release, &c};
