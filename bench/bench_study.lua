@@ -24,7 +24,9 @@ local TEMPS = { 25, 50, 75, 100, 150, 200, 250, 300 }
 local LEVELS = sweep.log(1e-4, 1e1, 6)
 local DPI = 150   -- plot.map's default
 
-local function q(s) return "'" .. tostring(s):gsub("'", "'\\''") .. "'" end
+-- the shared helpers of the tests (tests/support: files, processes)
+local S = dofile((arg[0]:match("^(.*)[/\\]") or ".") .. "/../tests/support/init.lua")
+local q = S.files.quote
 
 -- CPU seconds of this process and of its reaped children (the forked
 -- workers): utime, stime, cutime, cstime of /proc/self/stat (proc(5)), in
@@ -73,15 +75,12 @@ if MODE then -- the study itself: a child process so each run starts cold
 end
 
 -- The driver.
-local dir = os.tmpname()
-os.remove(dir)
-assert(os.execute("mkdir -p " .. q(dir)))
+local dir = S.files.tmpdir()
 local bin = arg[-1]
 local function timed(mode)
   local t0 = core.monotonic()
-  local h = io.popen(("%s %s %s %s"):format(q(bin), q(arg[0]), q(dir), mode))
-  local out = h:read("a")
-  assert(h:close(), "the " .. mode .. " run failed")
+  local code, out, err = S.proc.run(("%s %s %s %s"):format(q(bin), q(arg[0]), q(dir), mode))
+  assert(code == 0, "the " .. mode .. " run failed:\n" .. err)
   return core.monotonic() - t0, tonumber(out:match("CPU ([%d%.]+)"))
 end
 
@@ -135,7 +134,7 @@ for _, mode in ipairs { "svg:1:new", "svg:2:outline", "svg:2:new", "svg:2:ref", 
   runs[mode] = { wall = wall, cpu = cpu }
   if mode:match("^svg:2") then sizes[mode] = { svg_files() } end
 end
-os.execute("rm -rf " .. q(dir))
+S.files.remove(dir)
 local function line(what, mode, ref, target)
   local r, o = runs[mode], runs[ref]
   print(("%s: wall %.2f s, CPU %.2f s (CPU / 2 cores %.2f s)%s%s"):format(what, r.wall, r.cpu, r.cpu / 2,

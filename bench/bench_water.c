@@ -11,6 +11,7 @@
  * call, the ratio, and the largest differences between the two (they must
  * agree to the differencing error, ~1e-6). */
 #include "water/water.h"
+#include "../tests/support/px_rng.h"
 #include <math.h>
 #include <stdint.h>
 #include <stdio.h>
@@ -25,12 +26,6 @@ static double now(void)
     return ts.tv_sec + 1e-9 * ts.tv_nsec;
 }
 
-/* Deterministic points: a 64-bit LCG (Knuth's MMIX constants). */
-static double lcg01(uint64_t *s)
-{
-    *s = *s * 6364136223846793005ULL + 1442695040888963407ULL;
-    return (double)(*s >> 11) / 9007199254740992.0;
-}
 
 /* ---- the plain reference ---------------------------------------------- */
 
@@ -105,12 +100,13 @@ static double rel(double a, double b) { return fabs(a - b) / fabs(b); }
 int main(void)
 {
     static double Ts[N_POINTS], Ps[N_POINTS];
-    uint64_t seed = 20240611u;
+    px_rng rng; /* deterministic points (tests/support/px_rng.h) */
+    px_rng_seed(&rng, 20240611u);
     for (int i = 0; i < N_POINTS; i++) { /* T uniform, P between psat+1 and 1000 bar */
-        double T = PX_WATER_TMIN + (PX_WATER_TMAX - PX_WATER_TMIN) * lcg01(&seed), ps;
+        double T = PX_WATER_TMIN + (PX_WATER_TMAX - PX_WATER_TMIN) * px_rng_uniform(&rng), ps;
         if (px_water_psat(T, &ps) != PX_OK) return 1;
         Ts[i] = T;
-        Ps[i] = fmax(ps, 1.0) + 1.0 + (PX_WATER_PMAX - 2.0 - fmax(ps, 1.0)) * lcg01(&seed);
+        Ps[i] = fmax(ps, 1.0) + 1.0 + (PX_WATER_PMAX - 2.0 - fmax(ps, 1.0)) * px_rng_uniform(&rng);
     }
 
     double sink = 0;

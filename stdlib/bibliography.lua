@@ -29,6 +29,14 @@ return {
       short = "Hemingway et al. 1991",
       cite = "Hemingway, B. S., Robie, R. A. and Apps, J. A. (1991). Boehmite and related phases in the system Al-H-O (American Mineralogist 76; title and pages not recalled).",
     },
+    PW92 = {
+      short = "Palmer and Wesolowski 1992",
+      cite = "Palmer, D. A. and Wesolowski, D. J. (1992). Aluminum speciation and equilibria in aqueous solution: II. The solubility of gibbsite in acidic sodium chloride solutions from 30 to 70 C. Geochim. Cosmochim. Acta 56, 1093-1111 (abstract read at OSTI 7235603).",
+    },
+    WES92 = {
+      short = "Wesolowski 1992",
+      cite = "Wesolowski, D. J. (1992). Aluminum speciation and equilibria in aqueous solution: I. The solubility of gibbsite in the system Na-K-Cl-OH-Al(OH)4 from 0 to 100 C. Geochim. Cosmochim. Acta 56, 1065 (abstract read at OSTI 7278378, which names neither author nor volume and page: those are recalled).",
+    },
     K60 = {
       short = "Kelley 1960",
       cite = "Kelley, K. K. (1960). Contributions to the data on theoretical metallurgy XIII: High-temperature heat-content, heat-capacity and entropy data for the elements and inorganic compounds. U.S. Bureau of Mines Bulletin 584.",
@@ -56,6 +64,18 @@ return {
     BM76 = {
       short = "Baes and Mesmer 1976",
       cite = "Baes, C. F. and Mesmer, R. E. (1976). The Hydrolysis of Cations. Wiley, New York.",
+    },
+    BE16 = {
+      short = "Brown and Ekberg 2016",
+      cite = "Brown, P. L. and Ekberg, C. (2016). Hydrolysis of Metal Ions. Wiley-VCH, Weinheim (the Al constants read in the Wikipedia table 'Hydrolysis constant', which also lists the Baes and Mesmer 1976 and Hummel and Thoenen 2023 values).",
+    },
+    STIPP93 = {
+      short = "Stipp et al. 1993",
+      cite = "Stipp, S. L., Parks, G. A., Nordstrom, D. K. and Leckie, J. O. Solubility-product constant and thermodynamic properties for synthetic otavite, CdCO3(s), and aqueous association constants for the Cd(II)-CO2-H2O system. Geochim. Cosmochim. Acta (1992 or 1993; volume and pages not recalled).",
+    },
+    PG02 = {
+      short = "Preis and Gamsjaeger 2002",
+      cite = "Preis, W. and Gamsjaeger, H. (2002). Solid-solute phase equilibria in aqueous solution. XVI. Thermodynamic properties of malachite and azurite - predominance diagrams for the system Cu2+-H2O-CO2. J. Chem. Thermodyn. (doi 10.1006/jcht.2002.0928; abstract read).",
     },
     N90 = {
       short = "Nordstrom et al. 1990",

@@ -372,6 +372,60 @@ static int combo_reaction(px_thermo_ws *ws, const px_db *db, const char *who,
     return PX_OK;
 }
 
+/* The species a model reaction's dG(T) rests on, with net coefficients: each
+ * logk species with measured data (dH or log K(T)) is replaced by the other
+ * species of its formation reaction, recursively, since its G(T) is theirs
+ * plus a measured log K.  What is left must cancel or be measured itself:
+ * in Sr^2+ + SO4^2- = SrSO4(aq) the ion cancels, so the model's dG(T) is the
+ * measured log K(T) of the ion pair whatever the ion's own basis. */
+#define MODEL_TERMS 48          /* distinct species after expansion */
+#define MODEL_DEPTH 8           /* nesting of expanded logk species */
+#define MODEL_CANCEL_TOL 1e-9   /* |net coefficient| below this cancels (rounding of 1/nu) */
+typedef struct model_term {
+    const px_species *sp;
+    double c;
+} model_term;
+
+static int model_expand(px_thermo_ws *ws, const px_db *db, const char *who, const px_reaction *r,
+                        double scale, const px_species *skip, model_term *t, int *nt, int depth)
+{
+    for (int i = 0; i < r->n; i++) {
+        if (r->sp[i].state == PX_STATE_E)
+            continue; /* the electron carries no G */
+        const px_species *o = px_db_find(db, r->sp[i].text);
+        if (!o || o == skip)
+            continue; /* a missing species is reported by combo_reaction */
+        double c = scale * r->nu[i];
+        if (o->model == PX_MODEL_LOGK && px_species_tbasis(o, NULL) == PX_TBASIS_MEASURED &&
+            depth < MODEL_DEPTH) {
+            px_reaction fr; /* local: workers of one process share this code */
+            if (px_reaction_parse(o->logk.reaction, &fr, NULL, 0) != PX_OK)
+                return werr(ws, PX_EDATA, "%s: reaction of %s does not parse", who, o->f.text);
+            double self = 0;
+            for (int k = 0; k < fr.n; k++)
+                if (px_db_find(db, fr.sp[k].text) == o)
+                    self = fr.nu[k];
+            if (self != 0) {
+                int st = model_expand(ws, db, who, &fr, -c / self, o, t, nt, depth + 1);
+                if (st)
+                    return st;
+                continue;
+            }
+        }
+        int k = 0;
+        while (k < *nt && t[k].sp != o)
+            k++;
+        if (k == *nt) {
+            if (*nt >= MODEL_TERMS)
+                return werr(ws, PX_ELIMIT, "%s: model reaction rests on more than %d species", who,
+                            MODEL_TERMS);
+            t[(*nt)++] = (model_term){o, 0};
+        }
+        t[k].c += c;
+    }
+    return PX_OK;
+}
+
 /* reaction dG, dH, dS, dCp by the isocoulombic estimate (px_isocoulombic_logK);
  * model (may be NULL): a reaction with measured data subtracted from r first
  * (the model-reaction form of the method, Lindsay 1980; Gu et al. 1994) */
@@ -393,12 +447,17 @@ static int iso_reaction(px_thermo_ws *ws, const px_db *db, const char *who,
             return werr(ws, PX_EDATA, "%s: water ionisation does not parse", who);
         st = combo_reaction(ws, db, who, &water, T, P, full, &w, &wref);
     }
-    for (int i = 0; model && !st && i < model->n; i++) { /* a model carries measured data */
-        const px_species *o = db ? px_db_find(db, model->sp[i].text) : NULL;
-        if (o && px_species_tbasis(o, NULL) != PX_TBASIS_MEASURED)
-            st = werr(ws, PX_EDATA,
-                      "%s: isocoulombic model reaction: %s has no measured temperature data (%s)",
-                      who, o->f.text, px_tbasis_name(px_species_tbasis(o, NULL)));
+    if (!st && model && db) { /* a model carries measured data */
+        model_term terms[MODEL_TERMS];
+        int nt = 0;
+        st = model_expand(ws, db, who, model, 1.0, NULL, terms, &nt, 0);
+        for (int i = 0; !st && i < nt; i++)
+            if (fabs(terms[i].c) > MODEL_CANCEL_TOL &&
+                px_species_tbasis(terms[i].sp, NULL) != PX_TBASIS_MEASURED)
+                st = werr(ws, PX_EDATA,
+                          "%s: isocoulombic model reaction: %s has no measured temperature data (%s)",
+                          who, terms[i].sp->f.text,
+                          px_tbasis_name(px_species_tbasis(terms[i].sp, NULL)));
     }
     if (!st && model)
         st = combo_reaction(ws, db, who, model, T, P, full, &mp, &mref);

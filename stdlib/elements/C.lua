@@ -6,9 +6,11 @@
 -- aqueous carbonate constants, which adopt Plummer and Busenberg 1982 for the
 -- CO2-H2O-CaCO3 system (CO3^2- is defined by that K2 equation; the SH88/SHS89 HKF sets
 -- of CO2(aq) and HCO3^- reproduce K1 and KH). Solids without an evaluated constant
--- (smithsonite, cerussite, rhodochrosite, otavite, malachite) are NBS 1982 solids on
+-- (smithsonite, cerussite, rhodochrosite) are NBS 1982 solids on
 -- the metal file's ion: rhodochrosite and cerussite then miss the measured solubility
--- by +0.51 and +0.33 (known differences, docs/data-checks.md).
+-- by +0.51 and +0.33 (known differences, docs/data-checks.md). Otavite is the measured
+-- solubility constant of Stipp et al. (NBS otavite missed it by 0.9), malachite that of
+-- Preis and Gamsjaeger 2002 (NBS malachite was 9.7 kJ/mol less stable).
 --
 -- Data sets: CO2(aq), HCO3^- and CO3^2- carry the revised-HKF parameters of
 -- Shock and Helgeson 1988 / Shock, Helgeson and Sverjensky 1989 (as recalled in
@@ -176,11 +178,13 @@ return {
       note = "log Ksp with NBS ions -9.93 ([SM] -10.00); Cp held at its 25 C value",
     },
     {
-      formula = "CdCO3(s,otavite)", model = "cp",
-      G = -669.4, H = -750.6, S = 92.5, V = 34.30,
-      estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
-      source = NBS .. "; V " .. RH95, quality = "low",
-      note = "log Ksp with NBS ions -11.21; Stipp et al. 1992 measured about -12.1 (recalled): NBS value probably too positive. Cp not recalled",
+      formula = "CdCO3(s,otavite)", model = "logk",
+      reaction = "CdCO3(s,otavite) = Cd^2+ + CO3^2-",
+      logK = -12.1, dH = -2.44, V = 34.30,
+      uncertainty = { logK = 0.1 },
+      source = "log K: from memory of [STIPP93] (measured solubility of synthetic otavite, +- 0.1; their dfG -674.7 kJ/mol); dH " .. NBS_DERIVED .. " Cd^2+ (-75.90), CO3^2- (-677.14) and CdCO3 (-750.6); V " .. RH95,
+      quality = "medium",
+      note = "issue 13: NBS otavite (dfG -669.4) with the Cd^2+ of Cd.lua gave log Ksp -11.16, 0.9 above the measured value; the measured constant is kept (it is also the value Nordstrom et al. 1990 list, recalled). Temperature: van 't Hoff with the NBS reaction enthalpy",
     },
     {
       formula = "PbCO3(s,cerussite)", model = "cp",
@@ -189,11 +193,13 @@ return {
       note = "log Ksp with NBS ions -12.83; literature about -13.13 (recalled); Cp held at its 25 C value",
     },
     {
-      formula = "Cu2CO3(OH)2(s,malachite)", model = "cp",
-      G = -893.6, H = -1051.4, S = 186.2, V = 54.86,
-      estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
-      source = NBS .. "; V " .. RH95, quality = "medium",
-      note = "Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats); azurite left out (values not recalled consistently)",
+      formula = "Cu2CO3(OH)2(s,malachite)", model = "logk",
+      reaction = "Cu2CO3(OH)2(s,malachite) + 4 H^+ = 2 Cu^2+ + CO2(g) + 3 H2O(l)",
+      logK = 12.68, dH = -54.1,
+      uncertainty = { logK = 0.2 },
+      source = "[PG02] (abstract read): log *Kps0 = 6.34 +- 0.10 for 0.5 malachite + 2 H+ = Cu2+ + 0.5 CO2(g) + 1.5 H2O (I = 0, 25 C; doubled here), dfG -903.3 +- 1.2, dfH -1067.1 +- 3.4 kJ/mol, S 166.3 J/(mol K); dH derived here from that dfH with the CODATA Cu2+ (64.9), CO2(g) (-393.51) and H2O (-285.83) that reproduce the paper's dfG and log K",
+      quality = "medium",
+      note = "issue 13: measured solubility (15-65 C, perchlorate media, extrapolated to I = 0). The NBS 1982 malachite (dfG -893.6, dfH -1051.4, S 186.2, used before) is 9.7 kJ/mol less stable and gave log K 14.22 here; the paper confirms the calorimetric S (166.3) and recommends a new dfH. Azurite (dfG -1434.2 kJ/mol in the same paper) is not yet in the library",
     },
     -- ---------------------------------------------------------------- strontium and barium carbonates (scaling)
     {

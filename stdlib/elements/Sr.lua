@@ -33,7 +33,7 @@ return {
       logK = 98.785, dH = -550.90,
       source = "derived here from " .. CODATA .. ": Sr^2+ dfH -550.90 +- 0.50 kJ/mol, S -31.5 +- 2.0 J/(mol K)",
       quality = "high",
-      note = "E0(Sr^2+/Sr) = -2.922 V; NBS 1982 (dfG -559.48) gives -2.899 V, the value the CRC series prints; CODATA revised dfH by 5 kJ/mol.",
+      note = "E0(Sr^2+/Sr) = -2.922 V; NBS 1982 (dfG -559.48) gives -2.899 V, the value the CRC series prints; CODATA revised dfH by 5 kJ/mol. No heat capacity of its own: van 't Hoff on the formation reaction implies Cp(Sr^2+) = Cp(Sr) - Cp(H2) = -2 J/(mol K) at every T. [SH88] list Cp -10.05 cal/(mol K) (recalled); the HKF record estimated from it (+27 mV in E0 at 300 C) waits for the NiSO4(aq) model of S.lua, which is the SrSO4(aq) pair (docs/data/transition-metals.md).",
     },
     {
       formula = "SrOH^+", model = "logk",

@@ -5,9 +5,10 @@
 -- each other. What the scripts check, and against which numbers, stays in the scripts.
 
 local M = {}
+local SUP = (debug.getinfo(1, "S").source:match("^@(.*)[/\\]") or ".") .. "/../support/"
 
 ---------------------------------------------------------------------------- constants
-local K = dofile((debug.getinfo(1, "S").source:match("^@(.*)[/\\]") or ".") .. "/../support/chem.lua")
+local K = dofile(SUP .. "chem.lua")
 M.R, M.F, M.T0, M.LN10 = K.R, K.F, K.T0, K.LN10 -- CODATA 2018 (tests/support/chem.lua)
 M.CAL = 4.184             -- J per thermochemical calorie
 
@@ -20,33 +21,10 @@ M.STATES = { aq = true, s = true, cr = true, am = true, l = true, g = true }
 M.HKF_KEYS = { "a1", "a2", "a3", "a4", "c1", "c2", "omega" }
 
 ---------------------------------------------------------------------------- reporting
--- A reporter prints one line per result, prefixed by labels[status], and counts them.
--- Statuses are the keys of labels; "FAIL" results are also collected for finish().
-function M.reporter(labels)
-  local r = { count = {}, failures = {} }
-  for status in pairs(labels) do r.count[status] = 0 end
-  function r.emit(status, msg)
-    r.count[status] = r.count[status] + 1
-    if status == "FAIL" then r.failures[#r.failures + 1] = msg end
-    print(labels[status] .. msg)
-  end
-  function r.pass(msg) r.emit("PASS", msg) end
-  function r.fail(msg) r.emit("FAIL", msg) end
-  function r.check(ok, msg) r.emit(ok and "PASS" or "FAIL", msg) end
-  -- Exit 1 when a check failed (listing the failures under header, if one is given),
-  -- else 0.
-  function r.finish(header)
-    if r.count.FAIL > 0 then
-      if header then
-        print(header)
-        for _, m in ipairs(r.failures) do print("  " .. m) end
-      end
-      os.exit(1)
-    end
-    os.exit(0)
-  end
-  return r
-end
+-- A reporter prints one line per result, prefixed by labels[status], and counts them;
+-- near(a, b, tol): |a - b| <= tol for two numbers (tests/support/check.lua).
+local T = dofile(SUP .. "check.lua")
+M.reporter, M.near = T.reporter, T.near
 
 ---------------------------------------------------------------------------- sandbox
 -- Element files are data: they run with the pure helpers docs/element-files.md promises and a
@@ -78,14 +56,11 @@ end
 
 ---------------------------------------------------------------------------- CSV
 -- The shared reader of tests/support/csv.lua (RFC 4180 quoting).
-local CSV = dofile((debug.getinfo(1, "S").source:match("^@(.*)[/\\]") or ".") .. "/../support/csv.lua")
+local CSV = dofile(SUP .. "csv.lua")
 M.csv_split = CSV.split
 
 -- Rows of a CSV file with a header line, each a table keyed by the header names.
-function M.read_csv(path)
-  local _, rows = CSV.read(path)
-  return rows
-end
+M.read_csv = CSV.rows
 
 ---------------------------------------------------------------------------- formulas
 -- Split a trailing state group off a formula: "AlO(OH)(s,boehmite)" -> "AlO(OH)", "s".

@@ -71,9 +71,10 @@ local logks = read_csv(refdir .. "/log_k_25C.csv")
 local hkfrows = read_csv(refdir .. "/hkf/hkf_parameters.csv")
 
 -- gibbs_25C.csv row by species, state and table ("NBS" = Wagman et al. 1982 rows,
--- "CODATA" = Cox, Wagman and Medvedev 1989 rows, "RH" = Robie and Hemingway 1995).
+-- "CODATA" = Cox, Wagman and Medvedev 1989 rows, "RH" = Robie and Hemingway 1995,
+-- "PW92" = Palmer and Wesolowski 1992).
 local function gibbs_row(sp, state, tab)
-  local key = ({ NBS = "Wagman", CODATA = "CODATA", RH = "Robie" })[tab]
+  local key = ({ NBS = "Wagman", CODATA = "CODATA", RH = "Robie", PW92 = "Palmer and Wesolowski" })[tab]
   for _, r in ipairs(gibbs) do
     if r.species == sp and r.state == state and r.source:find(key, 1, true) then return r end
   end
@@ -237,7 +238,7 @@ end
 ---------------------------------------------------------------------------- 4. copies of reference rows
 -- Which reference row each record is said to come from (source field of the file).
 local COPIED_FROM = {
-  { "Al^3+", "Al+3", "aq", "CODATA" }, { "Al2O3(s,corundum)", "Al2O3", "cr", "CODATA" },
+  { "Al^3+", "Al+3", "aq", "PW92" }, { "Al2O3(s,corundum)", "Al2O3", "cr", "CODATA" },
   { "Al(OH)3(s,gibbsite)", "Al(OH)3", "cr", "RH" }, { "Al(s)", "Al", "cr", "NBS", cp_only = true },
   { "Pb(s)", "Pb", "cr", "NBS", cp_only = true }, { "Pb^2+", "Pb+2", "aq", "NBS" },
   { "PbO(s,litharge)", "PbO", "cr", "NBS" }, { "PbO2(s)", "PbO2", "cr", "NBS" },
@@ -287,7 +288,8 @@ end
 
 -- HKF: parameters and G/H/S as in hkf_parameters.csv; Cp and V at 25 C recomputed.
 local HKF_KEYS = C.HKF_KEYS
--- Mg^2+ keeps the SH88 parameters but takes G/H/S from CODATA 1989 (issue 13), as Al^3+ does.
+-- Mg^2+ keeps the SH88 parameters but takes G/H/S from CODATA 1989 (issue 13); Al^3+ keeps
+-- them with G/H/S from Palmer and Wesolowski 1992.
 local HKF_GHS_FROM_TABLE = { ["Na^+"] = true, ["K^+"] = true, ["Ca^2+"] = true }
 for _, f in ipairs(order) do
   local sp = species[f]
@@ -332,10 +334,10 @@ local DOCUMENTED = {
     "CRC -1.05 V follows an old dfG(MoO4^2-) near -915 kJ/mol (Latimer era); NBS 1982 -836.3 (used, and Shock et al. 1997) gives -0.910 V" },
   ["Ca(OH)2(s,portlandite) + 2 H^+ = Ca^2+ + 2 H2O(l)"] = { dev = -0.279, why =
     "SH88 Ca2+ (about CODATA) with NBS portlandite gives 22.52; NBS Ca2+ would give 22.66; R&H/CODATA-consistent portlandite not recalled" },
-  ["Al(OH)3(s,gibbsite) + 3 H^+ = Al^3+ + 3 H2O(l)"] = { dev = 0.298, why =
-    "CODATA Al3+ with R&H 1995 gibbsite gives 8.41; Nordstrom et al. 8.11, Palmer and Wesolowski 1992 7.74 (recalled): dfG(Al3+) and dfG(gibbsite) are each uncertain by several kJ/mol" },
-  ["Al^3+ --> Al(s) (CRC)"] = { dev = -0.036, why =
-    "CRC -1.662 V corresponds to dfG(Al3+) = -481 kJ/mol; CODATA key value -491.5 (used) gives -1.698, NBS -485.0 gives -1.676" },
+  ["Al(OH)3(s,gibbsite) + 3 H^+ = Al^3+ + 3 H2O(l)"] = { dev = -0.369, why =
+    "Al3+ of Palmer and Wesolowski 1992 with R&H 1995 gibbsite gives their measured 7.74 (Brown and Ekberg 2016 select 7.75 +- 0.08, read); Nordstrom et al. 1990 8.11 (recalled) predates that measurement" },
+  ["Al^3+ --> Al(s) (CRC)"] = { dev = -0.023, why =
+    "CRC -1.662 V corresponds to dfG(Al3+) = -481 kJ/mol; Palmer and Wesolowski 1992 -487.7 (used) gives -1.685, CODATA -491.5 -1.698, NBS -485.0 -1.676" },
 }
 
 local function reaction_value(text, kind)

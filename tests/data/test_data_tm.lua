@@ -90,7 +90,7 @@ local function report(status, what, detail)
   rep.emit(status, what .. (detail and ("  [" .. detail .. "]") or ""))
 end
 local function check(what, got, want, tol, src)
-  local ok = got ~= nil and want ~= nil and math.abs(got - want) <= tol
+  local ok = C.near(got, want, tol)
   report(ok and "PASS" or "FAIL", what,
     string.format("got %s, ref %s, diff %s, tol %g; %s",
       got and string.format("%.4f", got) or "nil", want and string.format("%.4f", want) or "nil",

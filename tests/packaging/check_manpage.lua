@@ -5,15 +5,12 @@
 -- PHLOX_SOURCE_DIR come from the environment.
 local bin = assert(os.getenv("PHLOX_BIN"), "PHLOX_BIN not set")
 local src = assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR not set")
-local failures = 0
-local function check(ok, msg)
-  if not ok then failures = failures + 1; io.stderr:write("FAIL: ", msg, "\n") end
-end
+local S = dofile(src .. "/tests/support/init.lua")
+local soft = S.soft() -- every mismatch is listed, then the test fails
+local check = soft.check
 local function run(cmd)
-  local p = assert(io.popen(cmd .. " 2>&1"))
-  local text = p:read("a")
-  local ok, _, code = p:close()
-  return text, ok and 0 or code
+  local code, text = S.proc.run(cmd, { merge = true })
+  return text, code
 end
 local function sorted_keys(t)
   local out = {}
@@ -149,6 +146,6 @@ check(text_of("CAUTION"):find("what can form, not how fast", 1, true), "the caut
 local warn = run("groff -man -Tutf8 -ww -z " .. src .. "/docs/phlox.1")
 check(warn == "", "groff warns about docs/phlox.1: " .. warn)
 
-if failures > 0 then error(failures .. " mismatch(es) between docs/phlox.1 and the program") end
+soft.finish("mismatch(es) between docs/phlox.1 and the program")
 print(("docs/phlox.1 agrees with phlox --help: %d options, %d commands"):format(
   #sorted_keys(help_opts), #sorted_keys(help_cmds)))

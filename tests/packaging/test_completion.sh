@@ -3,10 +3,10 @@
 # words offered for typical command lines, and its lists against the
 # program: options = those of `phlox --help`, each command's options = those
 # of `phlox COMMAND --help`, element symbols = the library's elements.
-set -eu
-fail() { echo "FAIL: $*" >&2; exit 1; }
-S=$PHLOX_BUILD_DIR/packaging-scratch/completion
-rm -rf "$S" && mkdir -p "$S/work/studies" "$S/user/elements"
+# shellcheck source=tests/packaging/common.sh
+. "$(dirname "$0")/common.sh"
+S=$(scratch completion)
+mkdir -p "$S/work/studies" "$S/user/elements"
 # shellcheck source=/dev/null
 source "$PHLOX_SOURCE_DIR/completion/phlox.bash"
 complete -p phlox | grep -q -- '-F _phlox' || fail "phlox has no completion function"

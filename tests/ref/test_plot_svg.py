@@ -27,19 +27,17 @@ Checks, each with an outside reference:
     14.3.3; text strings in UTF-16BE with a byte order mark, 7.9.2.2).
     stamp = false prints no stamp line, "short" prints no checksums.
 """
-import json
 import os
 import re
 import shutil
 import struct
-import subprocess
 import sys
 import tempfile
 import xml.etree.ElementTree as ET
 import zlib
 
 from pngdecode import decode_png
-from refcheck import check, finish
+from refcheck import check, finish, run_lua
 
 PHLOX = sys.argv[1]
 HERE = os.path.dirname(os.path.abspath(__file__))
@@ -90,15 +88,7 @@ print(json.encode(out))
 
 
 def run_driver(out_dir, work):
-    path = os.path.join(work, "driver.lua")
-    with open(path, "w", encoding="utf-8") as f:
-        f.write(map_block() + DRIVER % {"dpi": DPI})
-    env = dict(os.environ, PLOT_OUT=out_dir)
-    r = subprocess.run([PHLOX, path], capture_output=True, text=True, env=env)
-    if r.returncode != 0:
-        print(r.stdout, r.stderr)
-        raise SystemExit("driver failed")
-    return json.loads(r.stdout.strip().splitlines()[-1])
+    return run_lua(PHLOX, map_block() + DRIVER % {"dpi": DPI}, work, {"PLOT_OUT": out_dir})
 
 
 def pixel(img, x, y):

@@ -18,7 +18,6 @@ Checks, each with an outside reference:
     figure (ISO 32000-1, 7.7.3.3), and its document information carries the
     title and the caution.
 """
-import json
 import os
 import re
 import shutil
@@ -27,7 +26,7 @@ import sys
 import tempfile
 
 from pngdecode import decode_png
-from refcheck import check, finish
+from refcheck import check, finish, run_lua
 
 PHLOX = sys.argv[1]
 WIDTH, HEIGHT = 800, 1600   # screenshot size, CSS pixels at scale 1
@@ -68,15 +67,7 @@ def main():
         sys.exit(77)
     work = tempfile.mkdtemp(prefix="phlox-report-")
     try:
-        driver = os.path.join(work, "driver.lua")
-        with open(driver, "w", encoding="utf-8") as f:
-            f.write(DRIVER)
-        r = subprocess.run([PHLOX, driver], capture_output=True, text=True,
-                           env=dict(os.environ, REPORT_OUT=work))
-        if r.returncode != 0:
-            print(r.stdout, r.stderr)
-            raise SystemExit("driver failed")
-        info = json.loads(r.stdout.strip().splitlines()[-1])
+        info = run_lua(PHLOX, DRIVER, work, {"REPORT_OUT": work})
         check(info["counts"]["figures"] == 2 and info["counts"]["tables"] == 1, "report counts %r" % info["counts"])
         page = os.path.join(work, "study.html")
         url = "file://" + page

@@ -32,21 +32,19 @@ from iapws import IAPWS95
 from iapws import iapws95 as iapws95_mod
 from iapws._iapws import _Dielectric, _Kw
 
+from refcheck import close, fail, finish
+
 M = 18.015268e-3  # kg/mol, IAPWS molar mass (R6-95)
 # CODATA 2018 (Tiesinga et al. 2021), as in src/core/constants.h
 NA, QE, KB, EPS0 = 6.02214076e23, 1.602176634e-19, 1.380649e-23, 8.8541878128e-12
 
-failures = []
 worst = {}
 
 
 def check(name, ours, ref, rel, abs_tol=0.0):
-    d = abs(ours - ref)
-    r = d / abs(ref) if ref != 0 else math.inf
+    """refcheck.close against python3-iapws, keeping the worst difference per quantity."""
     key = name.split("@")[0]
-    worst[key] = max(worst.get(key, 0.0), r if ref != 0 else d)
-    if not (math.isfinite(ours) and math.isfinite(ref)) or (d > abs_tol and d > rel * abs(ref)):
-        failures.append(f"{name}: phlox {ours!r} vs python3-iapws {ref!r} (rel {r:.3g})")
+    worst[key] = max(worst.get(key, 0.0), close(name, ours, ref, rel, abs_tol, "python3-iapws"))
 
 
 def find_probe():
@@ -84,7 +82,7 @@ STATE_FIELDS = ["rho", "drho_dT", "drho_dP", "G", "H", "S", "Cp", "V", "eps", "d
 def state(T, P):
     rc, v = probe([f"state {T!r} {P!r}"])[0]
     if rc != 0:
-        failures.append(f"state {T} {P}: status {rc}")
+        fail(f"state {T} {P}: status {rc}")
         return None
     return dict(zip(STATE_FIELDS, v))
 
@@ -111,12 +109,12 @@ KNOWN_DIFF = {("R_N2", 6): 2e-12}
 
 def compare_table(label, ours, theirs):
     if len(ours) != len(theirs):
-        failures.append(f"{label}: {len(ours)} vs {len(theirs)} entries")
+        fail(f"{label}: {len(ours)} vs {len(theirs)} entries")
         return
     for i, (a, b) in enumerate(zip(ours, theirs)):
         tol = KNOWN_DIFF.get((label, i), 1e-15)
         if abs(a - b) > tol * abs(b):
-            failures.append(f"coefficient {label}[{i}]: {a!r} vs python3-iapws {b!r}")
+            fail(f"coefficient {label}[{i}]: {a!r} vs python3-iapws {b!r}")
 
 
 def test_coefficients():
@@ -191,7 +189,7 @@ def test_helmholtz():
     w = IAPWS95()
     for (T, r), (rc, v) in zip(pts, res):
         if rc != 0:
-            failures.append(f"helm {T} {r}: status {rc}")
+            fail(f"helm {T} {r}: status {rc}")
             continue
         ours = dict(zip(HELM, v))
         tau, delta = 647.096 / T, r / 322.0
@@ -217,7 +215,7 @@ def grid():
     for t, (rc, v) in zip(range(25, 351, 25), sats):
         T = t + 273.15
         if rc != 0:
-            failures.append(f"sat {T}: status {rc}")
+            fail(f"sat {T}: status {rc}")
             continue
         ps = v[0]
         for P in [ps * (1 + 1e-6), 1.0, 10.0, 50.0, 100.0, 250.0, 500.0, 750.0, 1000.0]:
@@ -239,7 +237,7 @@ def test_saturation():
     w = IAPWS95()
     for T, (rc, v) in zip(Ts, res):
         if rc != 0:
-            failures.append(f"sat {T}: status {rc}")
+            fail(f"sat {T}: status {rc}")
             continue
         rl, rv, ps = w._saturation(T)  # python3-iapws: fsolve on the same conditions
         check(f"psat@{T}", v[0], ps / 100, 1e-9)  # python3-iapws gives kPa here
@@ -253,12 +251,12 @@ def test_grid():
     n = 0
     for (T, P), (rc, v) in zip(pts, res):
         if rc != 0:
-            failures.append(f"state {T} {P}: status {rc}")
+            fail(f"state {T} {P}: status {rc}")
             continue
         s = dict(zip(STATE_FIELDS, v))
         w = IAPWS95(T=T, P=P / 10)
         if w.phase != "Liquid" and w.x != 0:
-            failures.append(f"python3-iapws did not return liquid at {T} K {P} bar ({w.phase})")
+            fail(f"python3-iapws did not return liquid at {T} K {P} bar ({w.phase})")
             continue
         tag = f"@{T:.2f}K,{P:.6g}bar"
         check("rho (required 1e-6)" + tag, s["rho"], w.rho, 1e-6)
@@ -345,12 +343,7 @@ def main():
     print(f"water vs python3-iapws: {n} grid points (25-350 C, psat..1000 bar)")
     for k in sorted(worst):
         print(f"  worst relative difference {k:28s} {worst[k]:.2e}")
-    if failures:
-        print(f"{len(failures)} FAILURES:")
-        for f in failures:
-            print("  " + f)
-        sys.exit(1)
-    print("all checks passed")
+    finish("water vs python3-iapws")
 
 
 if __name__ == "__main__":

@@ -74,7 +74,7 @@ local ESK, AM = "Cr2O3(s,eskolaite)", "Cr(OH)3(am)"
 for _, T in ipairs { 25, 100, 200, 300 } do
   local x = lib:reaction(AM .. " = 0.5 " .. ESK .. " + 1.5 H2O(l)", { T_C = T })
   check(x.logK > 0, ("%s must be metastable against eskolaite + water at %d C (log K %.2f)"):format(AM, T, x.logK))
-  local function fields(m) local set = {}; for _, f in ipairs(m.fields) do set[f.species] = true end; return set end
+  local fields = S.chem.fields
   local m = phlox.map { library = lib, element = "Cr", T_C = T, activity = 1e-6 }
   check(fields(m)[ESK] and not fields(m)[AM], ("default map at %d C: eskolaite, not %s"):format(T, AM))
   local mx = phlox.map { library = lib, element = "Cr", T_C = T, activity = 1e-6, exclude = { ESK } }

@@ -6,23 +6,12 @@ local function tmpname(suffix)
   return os.tmpname() .. (suffix or "")
 end
 
+local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
+
 -- Run phlox with a shell-quoted argument string; returns status, stdout, stderr.
 local function run(args, stdin_text)
-  local out, err = tmpname(), tmpname()
-  local cmd = string.format("%q %s >%q 2>%q", bin, args, out, err)
-  if stdin_text then
-    local inp = tmpname()
-    local f = assert(io.open(inp, "w")); f:write(stdin_text); f:close()
-    cmd = cmd .. string.format(" <%q", inp)
-  else
-    cmd = cmd .. " </dev/null"
-  end
-  local ok, how, code = os.execute(cmd)
-  local function slurp(p) local f = io.open(p); local s = f:read("a"); f:close(); os.remove(p); return s end
-  return (how == "exit" and code or 128 + code), slurp(out), slurp(err)
+  return S.proc.run(string.format("%q %s", bin, args), { stdin = stdin_text })
 end
-
-local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
 local check = S.check
 
 -- --version prints the version and exits 0

@@ -7,14 +7,7 @@ local fixtures = assert(os.getenv("PHLOX_TEST_FIXTURES"), "PHLOX_TEST_FIXTURES n
 local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
 local check = S.check
 
-local function run(args)
-  local err = os.tmpname()
-  local p = assert(io.popen(("%q %s 2>%q"):format(bin, args, err)))
-  local out = p:read("a")
-  local _, _, code = p:close()
-  local f = io.open(err); local e = f:read("a"); f:close(); os.remove(err)
-  return code, out, e
-end
+local function run(args) return S.proc.run(("%q %s"):format(bin, args)) end
 
 local JSON = S.json
 -- a number of the one JSON object the command printed (nil if absent or null)

@@ -7,7 +7,7 @@
 --     metadata naming the same fields as the exported table;
 --   * PDF: the "%PDF-" header (ISO 32000-1, 7.5.2) and one page per map;
 --   * CSV (RFC 4180 quoting): the provenance header, with data-file
---     checksums equal to those of the coreutils `sha256sum` program, the
+--     checksums equal to the files' SHA-256 (S.files.sha256), the
 --     caution, the expected columns and rectangular rows;
 --   * the numbers: boundary slopes equal -(RT ln10/F) nH/ne of the reaction
 --     printed beside them (Nernst equation), field areas tile the window,
@@ -30,9 +30,8 @@ local function slope(T_C) return S.chem.nernst_slope(T_C + 273.15) end
 local function run(dir)
   local log = dir .. "/stdout.txt"
   local t0 = os.time()
-  local ok, how, code = os.execute(("%s %s %s > %s 2>&1"):format(quote(BIN), quote(DEMO), quote(dir .. "/out"), quote(log)))
-  local text = read(log) or ""
-  check(ok, ("the demo failed (%s %s):\n%s"):format(tostring(how), tostring(code), text))
+  local code, text = S.proc.run(("%s %s %s"):format(quote(BIN), quote(DEMO), quote(dir .. "/out")), { merge = true, log = log })
+  check(code == 0, ("the demo failed (exit %d):\n%s"):format(code, text))
   print(("test_examples: demo ran in about %d s"):format(os.time() - t0))
   return dir .. "/out", text
 end
@@ -196,6 +195,6 @@ end
 
 -- The folders are removed whether the checks pass or not.
 local ok, err = xpcall(checks, debug.traceback)
-require("phlox.core").remove_tree(dir1); require("phlox.core").remove_tree(dir2)
+S.files.remove(dir1, dir2)
 if not ok then error(err, 0) end
 print("test_examples: all checks passed")

@@ -31,11 +31,7 @@ local PH_MAX = 14     -- the default window; "reaches pH 14" = alkaline field
 local function map(lib, el, T_C)
   return phlox.map { library = lib, element = el, T_C = T_C, activity = ACTIVITY }
 end
-local function field_set(m)
-  local set = {}
-  for _, f in ipairs(m.fields) do set[f.species] = f end
-  return set
-end
+local field_set = S.chem.fields
 
 -- 1. chromium ---------------------------------------------------------------
 local cr = phlox.library { "Cr" }

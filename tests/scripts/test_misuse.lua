@@ -8,11 +8,10 @@ local phlox = require "phlox"
 local core = require "phlox.core"
 local root = assert(os.getenv("PHLOX_SOURCE_DIR") or (arg[0]:match("^(.*)/tests/scripts/[^/]+$")), "PHLOX_SOURCE_DIR")
 local cases = dofile(root .. "/tests/tools/misuse_def.lua")
-local function check(cond, msg) if not cond then error(msg, 2) end end
+local S = dofile(root .. "/tests/support/init.lua")
+local check = S.check
 
-local dir = os.tmpname()
-os.remove(dir)
-assert(core.make_dir(dir))
+local dir = S.files.tmpdir()
 local lib = phlox.library { "Zn", "Cl" }
 local env = {
   phlox = phlox, core = core, lib = lib, dir = dir,
@@ -106,7 +105,6 @@ else
   local have = core.read_file(path)
   check(have == doc, "docs/bad-input.md is stale: run phlox tests/scripts/test_misuse.lua --write-catalogue")
 end
-for _, n in ipairs(core.list_dir(dir) or {}) do core.remove(dir .. "/" .. n) end
-core.remove(dir)
+S.files.remove(dir)
 check(failed == 0, failed .. " misuse case(s) failed")
 print(("test_misuse: %d cases passed"):format(#cases))

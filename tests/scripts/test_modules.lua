@@ -24,18 +24,13 @@ check(core.embedded_source("no/such/file.lua") == nil, "missing embedded file is
 check(package.cpath == "", "package.cpath is empty")
 check(not package.path:find("%./%?%.lua"), "no ./?.lua in package.path: " .. package.path)
 
-local function run(cmd)
-  local p = assert(io.popen(cmd .. " 2>&1"))
-  local out = p:read("a")
-  local ok, how, code = p:close()
-  return code, out
-end
+local function run(cmd) return S.proc.run(cmd, { merge = true }) end
 
 -- a user folder can never replace or add a phlox module: a shared folder
 -- holding phlox/cli.lua must not run with full rights on every command
-local dir = os.tmpname()
-os.remove(dir)
-assert(core.make_dir(dir .. "/phlox", true) and core.make_dir(dir .. "/elements", true))
+local dir = S.files.tmpdir()
+S.files.mkdir(dir .. "/phlox")
+S.files.mkdir(dir .. "/elements")
 local f = assert(io.open(dir .. "/phlox/cli.lua", "w"))
 f:write("io.write('USER CODE RAN'); return { marker = 'user copy' }\n"); f:close()
 f = assert(io.open(dir .. "/phlox/extra.lua", "w")); f:write("return 1\n"); f:close()
@@ -62,10 +57,5 @@ f = assert(io.open(dir .. "/elements/Xx.lua", "w")); f:write("return { element =
 code, out = run(string.format("%q --path %q -e \"local t, w = require('phlox').read_library_file('elements/Xx.lua'); io.write(w)\"", bin, dir))
 check(code == 0 and out == dir .. "/elements/Xx.lua", "user element file found: " .. out)
 
-for _, sub in ipairs { "phlox", "elements" } do
-  for _, n in ipairs(core.list_dir(dir .. "/" .. sub) or {}) do core.remove(dir .. "/" .. sub .. "/" .. n) end
-  core.remove(dir .. "/" .. sub)
-end
-for _, n in ipairs(core.list_dir(dir) or {}) do core.remove(dir .. "/" .. n) end
-core.remove(dir)
+S.files.remove(dir)
 print("test_modules: all checks passed")

@@ -10,10 +10,7 @@ local core = phlox.core
 local failures = 0
 local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
 local check = S.check
-local function has_line(lines, pat)
-  for _, l in ipairs(lines or {}) do if l:find(pat, 1, true) then return true end end
-  return false
-end
+local has_line = S.chem.stamp_line
 local function names_of(list, key)
   local set = {}
   for _, x in ipairs(list or {}) do set[x[key or "species"]] = true end
@@ -176,10 +173,8 @@ local r6 = assert(phlox.speciate { library = nacl, totals = { Na = 0.1, Cl = 0.1
 check(r6.activity.in_range and has_line(r6.stamp, "activity model bdot"), "B-dot at 0.1 mol/kg is in range and stamped")
 -- once on stderr
 local bin = os.getenv("PHLOX_BIN") or "phlox"
-local p = io.popen(bin .. " -e 'local phlox = require \"phlox\"; local l = phlox.library{\"Na\",\"Cl\"}; "
-  .. "for i = 1, 3 do phlox.speciate{library = l, totals = {Na = 4 + i, Cl = 4 + i}, solids = false} end' 2>&1")
-local out = p:read("a")
-p:close()
+local _, out = S.proc.run(bin .. " -e 'local phlox = require \"phlox\"; local l = phlox.library{\"Na\",\"Cl\"}; "
+  .. "for i = 1, 3 do phlox.speciate{library = l, totals = {Na = 4 + i, Cl = 4 + i}, solids = false} end'", { merge = true })
 local _, nwarn = out:gsub("beyond the model's range", "")
 check(nwarn == 1, ("one warning on stderr for three out-of-range solves, got %d"):format(nwarn))
 

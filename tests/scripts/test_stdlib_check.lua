@@ -8,6 +8,7 @@
 local bin = assert(os.getenv("PHLOX_BIN"), "PHLOX_BIN not set")
 local src = assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR not set")
 local dir = src .. "/stdlib/elements"
+local S = dofile(src .. "/tests/support/init.lua")
 
 local LIGANDS = { "Cl", "S", "C", "N", "P", "F" }
 local is_ligand = {}
@@ -44,10 +45,7 @@ assert(#order == n_files, ("ordered %d files of %d"):format(#order, n_files))
 
 local args = {}
 for _, sym in ipairs(order) do args[#args + 1] = string.format("%q", dir .. "/" .. sym .. ".lua") end
-local cmd = string.format("%q check %s 2>&1", bin, table.concat(args, " "))
-local h = assert(io.popen(cmd))
-local out = h:read("a")
-local ok, _, code = h:close()
+local code, out = S.proc.run(string.format("%q check %s", bin, table.concat(args, " ")), { merge = true })
 
 local warnings, errors = {}, {}
 for line in out:gmatch("[^\n]+") do
@@ -62,20 +60,18 @@ print(summary or "(no summary line)")
 if #errors > 0 then
   for _, e in ipairs(errors) do print("ERROR: " .. e) end
 end
-assert(ok and code == 0, "phlox check exited with " .. tostring(code))
+assert(code == 0, "phlox check exited with " .. tostring(code))
 assert(#errors == 0, #errors .. " error line(s)")
 assert(summary and summary:find((" %d file%%(s%%), 0 error%%(s%%)"):format(#order)), "unexpected summary: " .. tostring(summary))
 
 -- the check can fail: a copy of Zn.lua with a sign slip in S of Zn(s) must be rejected
-local text = assert(io.open(dir .. "/Zn.lua", "rb")):read("a")
+local text = S.files.slurp(dir .. "/Zn.lua")
 local bad, n = text:gsub("S = 41%.63", "S = -41.63", 1)
 assert(n == 1, "Zn.lua: S = 41.63 not found (update this mutation)")
 local tmp = os.tmpname() .. "-Zn.lua"
-local f = assert(io.open(tmp, "wb")); f:write(bad); f:close()
-h = assert(io.popen(string.format("%q check %q 2>&1", bin, tmp)))
-local out2 = h:read("a")
-local ok2 = h:close()
+S.files.write(tmp, bad)
+local code2, out2 = S.proc.run(string.format("%q check %q", bin, tmp), { merge = true })
 os.remove(tmp)
-assert(not ok2 and out2:find("Zn(s): S", 1, true), "mutated Zn.lua was not rejected:\n" .. out2)
+assert(code2 ~= 0 and out2:find("Zn(s): S", 1, true), "mutated Zn.lua was not rejected:\n" .. out2)
 print("mutation (Zn(s) S = -41.63) rejected as expected")
 print("test_stdlib_check: all files pass")

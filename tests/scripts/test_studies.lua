@@ -5,7 +5,7 @@
 --     summary prints which values are illustrative and the caution;
 --   * every CSV starts with the provenance of its own results (program,
 --     source revision, script, each data file with a SHA-256 equal to that
---     of coreutils' `sha256sum`) and the caution, then rectangular rows;
+--     of the file in the tree) and the caution, then rectangular rows;
 --   * every SVG carries the caution in its <desc> and writes its coordinates
 --     with at most three decimals (compact; 0.001 pt), PNG files the PNG
 --     signature (ISO/IEC 15948:2004, 5.2);
@@ -86,9 +86,8 @@ local function run(study, dir, extra)
   local args = { q(BIN), q(SRC .. "/examples/" .. study.script), q(dir) }
   for _, a in ipairs(extra or study.args or {}) do args[#args + 1] = q(a) end
   local log = dir .. ".log"
-  local ok = os.execute(table.concat(args, " ") .. " > " .. q(log) .. " 2>&1")
-  local out = read(log) or ""
-  check(ok, study.script .. " failed:\n" .. out)
+  local code, out = S.proc.run(table.concat(args, " "), { merge = true, log = log })
+  check(code == 0, study.script .. " failed:\n" .. out)
   return out
 end
 
@@ -175,6 +174,6 @@ local function checks()
 end
 
 local ok, err = xpcall(checks, debug.traceback)
-for _, d in ipairs(dirs) do os.execute("rm -rf " .. q(d) .. " " .. q(d .. ".log")) end
+for _, d in ipairs(dirs) do S.files.remove(d, d .. ".log") end
 if not ok then error(err, 0) end
 print("test_studies: all checks passed")

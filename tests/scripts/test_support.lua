@@ -1,5 +1,6 @@
--- test_support.lua: the shared test helpers of tests/support (check, CSV,
--- JSON, seeded random numbers, constants and map look-ups) on inputs with known answers, including
+-- test_support.lua: the shared test helpers of tests/support (check, soft
+-- checks, CSV, JSON, seeded random numbers, constants and map look-ups,
+-- files, running programs) on inputs with known answers, including
 -- malformed ones, so a helper that stops failing cannot hide a test's
 -- failure.  Sources: the examples of RFC 4180 (sec. 2, rules 5-7) and of
 -- RFC 8259 (sec. 13), both from memory of the RFCs; the generator's first
@@ -34,6 +35,8 @@ local header, rows = CSV.parse('name,value\r\n"x, y",1\r\n\r\n"multi\nline",2\n'
 check(#header == 2 and #rows == 2, "parse: header and two rows (blank line skipped)")
 check(rows[1].name == "x, y" and rows[1].value == "1" and rows[2].name == "multi\nline", "parse: fields")
 check(not pcall(CSV.read, SUP .. "no-such-file.csv"), "a missing file is an error")
+check(#CSV.rows(SUP .. "../reference/standard_potentials.csv") == #CSV.reference("standard_potentials.csv")
+      and CSV.reference("standard_potentials.csv")[1].couple, "rows and reference read the same rows")
 local v, src = CSV.ref_value("standard_potentials.csv", "couple", "2 H^+ + 2 e- = H2(g)", "E0_V_SHE_25C")
 check(v == 0 and src:find("hydrogen electrode", 1, true), "ref_value reads the SHE row")
 check(not pcall(CSV.ref_value, "standard_potentials.csv", "couple", "no such couple", "E0_V_SHE_25C"),
@@ -74,6 +77,10 @@ local map = { boundaries = { { between = { "A", "B" } }, { between = { "C", "B" 
 check(K.boundary(map, "B", "C") == map.boundaries[2], "boundary in either order")
 check(not pcall(K.boundary, map, "A", "C"), "a missing boundary is an error")
 check(K.area_sum(map) == 4, "area sum")
+local fmap = { fields = { { species = "A", area = 1 }, { species = "B(s)", area = 2 } } }
+check(K.fields(fmap)["B(s)"] == fmap.fields[2] and K.fields(fmap).C == nil, "fields by species")
+check(K.stamp_line({ "a: x", "b: y.z" }, "y.z") == "b: y.z" and K.stamp_line({ "a: xyz" }, "x.z") == nil
+      and K.stamp_line(nil, "a") == nil, "stamp_line finds plain text")
 -- Zn(OH)2(s) + 2 H^+ + 2 e- = Zn(s) + 2 H2O(l): nH = 2, ne = 2, so the
 -- boundary falls by one Nernst slope per pH unit
 check(K.coefficient("Zn(OH)2(s) + 2 H^+ + 2 e- = Zn(s) + 2 H2O(l)", "H^+") == 2
@@ -82,7 +89,7 @@ check(K.coefficient("Zn(OH)2(s) + 2 H^+ + 2 e- = Zn(s) + 2 H2O(l)", "H^+") == 2
 T.close(K.boundary_slope("Zn(OH)2(s) + 2 H^+ + 2 e- = Zn(s) + 2 H2O(l)", 25), -K.nernst_slope(298.15), 1e-15,
         "boundary slope")
 check(K.boundary_slope("Zn^2+ + 2 OH^- = Zn(OH)2(s)", 25) == nil, "no electrons: no E-pH slope")
--- files: read, slurp, quote, tmpdir
+-- files: read, slurp, quote, tmpdir, mkdir, remove, sha256
 local FL = dofile(SUP .. "files.lua")
 check(FL.quote("a'b") == "'a'\\''b'", "shell quoting: " .. FL.quote("a'b"))
 local d = FL.tmpdir()
@@ -91,22 +98,49 @@ check(FL.read(d .. "/x.txt") == "bytes\0\n" and FL.slurp(d .. "/x.txt") == "byte
 check(FL.read(d .. "/missing") == nil and not pcall(FL.slurp, d .. "/missing"), "a missing file")
 FL.write(d .. "/abc.txt", "abc")
 -- SHA-256("abc") of FIPS 180-2, appendix B.1 (from memory of the standard)
-check(FL.sha256sum(d .. "/abc.txt") == "ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad",
-      "sha256sum of 'abc'")
+check(FL.sha256(d .. "/abc.txt") == "ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad",
+      "sha256 of 'abc'")
 local dirs = {}
 local d2 = FL.tmpdir(dirs)
 check(dirs[1] == d2, "tmpdir lists the folder")
-os.execute("rm -rf " .. FL.quote(d2))
+FL.mkdir(d2 .. "/a b/it's")
+FL.write(d2 .. "/a b/it's/f", "x")
+check(FL.read(d2 .. "/a b/it's/f") == "x", "mkdir makes the parents too (names with a space and a quote)")
+FL.remove(d2, d2 .. "/no-such-file")
+check(FL.read(d2 .. "/a b/it's/f") == nil and not io.open(d2), "remove takes the whole folder, skips what is missing")
 -- a stamped CSV: header, columns, rows; a ragged row is refused
 local okst, h, cols, srows, nf = pcall(CSV.stamped, "# program: x\na,b\n1,2\n3,4\n", "t.csv")
 check(okst and h == "# program: x" and #cols == 2 and #srows == 2 and srows[2].b == "4" and nf == 0,
       "stamped CSV: " .. tostring(h))
 check(not pcall(CSV.stamped, "# x\na,b\n1\n", "t.csv"), "a ragged stamped CSV is refused")
 check(not pcall(CSV.cells, 'a,"b'), "cells raises on a malformed line")
-os.execute("rm -rf " .. FL.quote(d))
+FL.remove(d)
+
+-- soft checks go on after a failure and raise at the end
+local sc = T.soft()
+check(sc.check(true, "fine") and not sc.check(false, "first") and #sc.failures == 1
+      and sc.failures[1] == "first", "soft check records the failure")
+check(pcall(T.soft().finish, "problems"), "finish without failures passes")
+local okf, errf = pcall(sc.finish, "problems")
+check(not okf and tostring(errf):find("1 problems", 1, true), "finish raises the count: " .. tostring(errf))
+
+-- proc: exit codes, the two output streams, stdin, merge, a kept log
+local PR = dofile(SUP .. "proc.lua")
+local code, out, err = PR.run("printf out; printf err >&2; exit 3")
+check(code == 3 and out == "out" and err == "err", ("run: %s %q %q"):format(code, out, err))
+code, out = PR.run("cat; printf err >&2", { stdin = "in\0put", merge = true })
+check(code == 0 and out == "in\0puterr", "run with stdin and merged streams: " .. out)
+code, out = PR.run("cat")
+check(code == 0 and out == "", "stdin is empty unless given")
+code = PR.run("kill -9 $$")
+check(code == 128 + 9, "a signal's exit code is 128 + its number: " .. code)
+local logf = os.tmpname()
+code, out = PR.run("printf logged", { log = logf })
+check(code == 0 and out == "logged" and FL.read(logf) == "logged", "run keeps its log")
+os.remove(logf)
 
 -- init.lua gathers them all
 local S = dofile(SUP .. "init.lua")
 check(S.check and S.close and S.rel and S.near and S.csv.split and S.json.decode and S.rng.new
-      and S.chem.nernst_slope and S.files.slurp, "init.lua gathers every helper")
+      and S.chem.nernst_slope and S.files.slurp and S.proc.run and S.soft and S.reporter, "init.lua gathers every helper")
 print("test_support: all checks passed")

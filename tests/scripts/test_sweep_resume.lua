@@ -24,7 +24,7 @@ local STUDY = SRC .. "/tests/fixtures/sweep_study.lua"
 local POINTS = 24
 
 local seed = tonumber(os.getenv("PHLOX_TEST_SEED") or "") or os.time()
-math.randomseed(seed)
+local random = S.rng.new(seed)
 print("test_sweep_resume: seed " .. seed)
 
 local dirs = {}
@@ -33,9 +33,9 @@ local function tmpdir() return S.files.tmpdir(dirs) end
 -- Run the study to the end; returns ok, output.
 local function run(dir, workers, extra, script)
   local log = dir .. ".log"
-  local ok = os.execute(("%s %s %s %s %s %s > %s 2>&1"):format(q(BIN), extra or "", q(script or STUDY), q(dir),
-    tostring(workers or 1), "", q(log)))
-  return ok, read(log) or ""
+  local code, out = S.proc.run(("%s %s %s %s %s"):format(q(BIN), extra or "", q(script or STUDY), q(dir),
+    tostring(workers or 1)), { merge = true, log = log })
+  return code == 0, out
 end
 
 -- Start the study, wait `delay` seconds, send `sig` to the parent (or to
@@ -50,7 +50,7 @@ local function run_killed(dir, workers, delay, sig, target)
   end
   local cmd = ("%s %s %s %d > %s 2>&1 & p=$!; sleep %.3f; %s 2>/dev/null; wait $p; echo $? > %s"):format(
     q(BIN), q(STUDY), q(dir), workers, q(log), delay, kill, q(dir .. ".status"))
-  os.execute(cmd)
+  S.proc.run(cmd)
   return (read(dir .. ".status") or "?"):gsub("%s+$", ""), read(log) or ""
 end
 
@@ -71,7 +71,7 @@ local function no_survivors(dir, what)
   for _ = 1, 50 do   -- up to 5 s for the kernel to reap them
     left = alive_with(dir)
     if #left == 0 then return end
-    os.execute("sleep 0.1")
+    S.proc.run("sleep 0.1")
   end
   error(what .. ": processes still running after their parent died: " .. table.concat(left, " "))
 end
@@ -118,7 +118,7 @@ local function checks()
     local dir = tmpdir()
     local last = 0
     for i, k in ipairs(kills) do
-      local delay = 0.15 + math.random() * 1.2
+      local delay = 0.15 + random() * 1.2
       local status, log = run_killed(dir, workers, delay, k.sig, k.target)
       local n = journal_points(dir)
       print(("test_sweep_resume: %s, %s %s after %.2f s: exit %s, %d/%d points committed"):format(
@@ -157,14 +157,15 @@ local function checks()
   local work = tmpdir()
   local script = work .. "/study.lua"
   write(script, read(STUDY))
-  os.execute("mkdir -p " .. q(work .. "/lib/elements"))
+  S.files.mkdir(work .. "/lib/elements")
   write(work .. "/lib/elements/Ni.lua", read(SRC .. "/stdlib/elements/Ni.lua"))
   local out4 = work .. "/out"
-  os.execute("mkdir -p " .. q(out4))
+  S.files.mkdir(out4)
   local function small(extra)
     local log = work .. "/log"
-    local okr = os.execute(("%s --path %s %s %s 1 Ni > %s 2>&1"):format(q(BIN), q(work .. "/lib"), q(script), q(out4), q(log)))
-    return okr, read(log) or ""
+    local code = S.proc.run(("%s --path %s %s %s 1 Ni"):format(q(BIN), q(work .. "/lib"), q(script), q(out4)),
+                            { merge = true, log = log })
+    return code == 0, read(log) or ""
   end
   local ok5, log5 = small()
   check(ok5, "the small study failed:\n" .. log5)
@@ -183,6 +184,6 @@ local function checks()
 end
 
 local ok, err = xpcall(checks, debug.traceback)
-for _, d in ipairs(dirs) do os.execute("rm -rf " .. q(d) .. " " .. q(d .. ".log") .. " " .. q(d .. ".status")) end
+for _, d in ipairs(dirs) do S.files.remove(d, d .. ".log", d .. ".status") end
 if not ok then error(err, 0) end
 print("test_sweep_resume: all checks passed")

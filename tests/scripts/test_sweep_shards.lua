@@ -20,12 +20,12 @@ local dirs = {}
 local function tmpdir() return S.files.tmpdir(dirs) end
 
 local function sh(cmd, log)
-  local ok = os.execute(cmd .. " > " .. q(log) .. " 2>&1")
-  return ok, read(log) or ""
+  local code, out = S.proc.run(cmd, { merge = true, log = log })
+  return code == 0, out
 end
 
 local function checks()
-  check(os.execute("command -v parallel > /dev/null"), "GNU parallel is missing: run sh .ci/install-deps")
+  check(S.proc.run("command -v parallel") == 0, "GNU parallel is missing: run sh .ci/install-deps")
   local serial, sharded = tmpdir(), tmpdir()
   local ok, log = sh(("%s %s %s 1"):format(q(BIN), q(STUDY), q(serial)), serial .. ".log")
   check(ok, "the serial run failed:\n" .. log)
@@ -64,8 +64,6 @@ local function checks()
 end
 
 local ok, err = xpcall(checks, debug.traceback)
-for _, d in ipairs(dirs) do
-  os.execute("rm -rf " .. q(d) .. " " .. q(d .. ".log") .. " " .. q(d .. ".merge.log"))
-end
+for _, d in ipairs(dirs) do S.files.remove(d, d .. ".log", d .. ".merge.log") end
 if not ok then error(err, 0) end
 print("test_sweep_shards: all checks passed")

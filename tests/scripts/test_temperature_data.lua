@@ -64,9 +64,7 @@ check(phlox.speciate { library = zn, T_C = 25, totals = { Zn = 1e-6 }, pH = 8 },
 -- accepted: drawn, listed and stamped
 local m = phlox.map { library = zn, element = "Zn", T_C = 200, accept_held_logk = true }
 check(m.constant_logk and m.constant_logk[1] == "ZnOH^+", "map.constant_logk lists the held species")
-local function stamped(lines, text)
-  for _, l in ipairs(lines or {}) do if l:find(text, 1, true) then return l end end
-end
+local stamped = S.chem.stamp_line
 check(stamped(m.stamp, "log K held at 25 °C"), "the map's stamp names the held species")
 local g = phlox.grid_map { library = zn, element = "Zn", T_C = 200, n = 11, accept_held_logk = true }
 check(g.constant_logk and #g.constant_logk == 1, "grid_map.constant_logk")

@@ -108,6 +108,30 @@ do
   check(ok, "a library with a user model loads: " .. tostring(l))
   local k, why = l.db:reaction("Ni^2+ + Cl^- = NiCl^+", 473.15)
   check(not k and tostring(why):find("no measured temperature data", 1, true), "estimated model refused: " .. tostring(why))
+  -- an estimated species that cancels once the model's logk species are
+  -- written as their formation reactions does not enter the model's dG(T):
+  -- Zn^2+ (HKF estimate) in Zn^2+ + Cl^- = ZnCl^+ (measured dH) is accepted,
+  -- and the result is the hand formula with the model's van 't Hoff log K
+  ok, l = user([[return { species = { { formula = "NiCl^+", model = "logk", reaction = "Ni^2+ + Cl^- = NiCl^+",
+    logK = 0.40, source = "test", estimate = { method = "isocoulombic", model = "Zn^2+ + Cl^- = ZnCl^+" } } } }]])
+  check(ok, "a library with a cancelling model loads: " .. tostring(l))
+  check(l:species("Zn^2+").basis == "estimated", "Zn^2+ is an HKF estimate (the case tested)")
+  local zm = l:species("ZnCl^+")
+  for _, tc in ipairs { 100, 300 } do
+    local T = tc + 273.15
+    local km = zm.logK25 - zm.dH / R_LN10 * (1 / T - 1 / TR)
+    local hand = (0.40 - zm.logK25) * TR / T + km
+    local got = l:reaction("Ni^2+ + Cl^- = NiCl^+", { T = T }).logK
+    check(math.abs(got - hand) < 1e-9, ("NiCl^+ on the ZnCl^+ model at %d C: phlox %.9f, by hand %.9f"):format(tc, got, hand))
+  end
+  -- ...but where it does not cancel, the model is refused even though every
+  -- species written in it is measured (ZnCl^+ rests on Zn^2+)
+  ok, l = user([[return { species = { { formula = "NiCl^+", model = "logk", reaction = "Ni^2+ + Cl^- = NiCl^+",
+    logK = 0.40, source = "test", estimate = { method = "isocoulombic", model = "Zn(s) + Cl^- + 2 H^+ = ZnCl^+ + H2(g)" } } } }]])
+  check(ok, "a library with a non-cancelling model loads: " .. tostring(l))
+  k, why = l.db:reaction("Ni^2+ + Cl^- = NiCl^+", 473.15)
+  check(not k and tostring(why):find("Zn^2+ has no measured temperature data", 1, true),
+    "model resting on an estimated ion refused: " .. tostring(why))
   ok, l = user([[return { species = { { formula = "NiCl^+", model = "logk", reaction = "Ni^2+ + Cl^- = NiCl^+",
     logK = 0.40, source = "test", estimate = { method = "isocoulombic", model = "Cu^2+ + Cl^- = CuCl2(aq)" } } } }]])
   check(not ok and tostring(l):find("estimate.model", 1, true), "unbalanced model refused: " .. tostring(l))

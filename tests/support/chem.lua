@@ -14,6 +14,9 @@
 --   K.boundary(map, a, b)     the boundary between species a and b (either
 --                             order); an error naming both if there is none
 --   K.area_sum(map)           the summed area of the map's fields
+--   K.fields(map)             the map's fields by species name
+--   K.stamp_line(lines, text) the first line of a stamp (a list of lines)
+--                             holding text (plain), or nil
 local M = {}
 
 M.R = 8.314462618   -- J/(mol K), CODATA 2018
@@ -55,6 +58,19 @@ function M.area_sum(map)
   local t = 0
   for _, f in ipairs(map.fields) do t = t + f.area end
   return t
+end
+
+function M.fields(map)
+  local set = {}
+  for _, f in ipairs(map.fields) do set[f.species] = f end
+  return set
+end
+
+function M.stamp_line(lines, text)
+  for _, l in ipairs(lines or {}) do
+    if l:find(text, 1, true) then return l end
+  end
+  return nil
 end
 
 return M

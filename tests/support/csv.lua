@@ -9,6 +9,7 @@
 --                                  a quoted field may span lines
 --   C.read(path)                   the same from a file; a missing file is an
 --                                  error naming it
+--   C.rows(path)                   the rows of C.read alone
 --   C.reference(name [, dir])      C.read of tests/reference/<name> (dir: the
 --                                  reference folder, default from
 --                                  PHLOX_SOURCE_DIR)
@@ -18,8 +19,9 @@
 --                                  (one string), column names and rows (by
 --                                  column name); raises unless the rows are
 --                                  rectangular and every data file's SHA-256
---                                  in the header equals sha256sum's of the
---                                  file under PHLOX_SOURCE_DIR; also returns
+--                                  in the header equals the SHA-256 of the
+--                                  file under PHLOX_SOURCE_DIR (files.lua,
+--                                  F.sha256: needs phlox); also returns
 --                                  the number of data files stamped
 --   C.ref_value(name, keycol, key, valcol [, dir])
 --                                  tonumber(valcol) of the first row whose
@@ -74,7 +76,7 @@ function M.stamped(text, name)
     nfiles = nfiles + 1
     check(#sum == 64, name .. ": sha256 of " .. file .. " has 64 hex digits")
     -- embedded copies are recorded as stdlib/...: the file in the tree
-    check(F.sha256sum(src .. "/" .. file) == sum, name .. ": checksum of " .. file .. " differs from sha256sum")
+    check(F.sha256(src .. "/" .. file) == sum, name .. ": checksum of " .. file .. " differs from the file's SHA-256")
   end
   check(lines[k], name .. ": no column line after the header")
   local cols, err = M.split(lines[k])
@@ -130,13 +132,17 @@ function M.read(path)
   return M.parse(text)
 end
 
+function M.rows(path)
+  local _, rows = M.read(path)
+  return rows
+end
+
 local function refdir(dir)
   return dir or ((os.getenv("PHLOX_SOURCE_DIR") or ".") .. "/tests/reference")
 end
 
 function M.reference(name, dir)
-  local _, rows = M.read(refdir(dir) .. "/" .. name)
-  return rows
+  return M.rows(refdir(dir) .. "/" .. name)
 end
 
 function M.ref_value(name, keycol, key, valcol, dir)

@@ -10,6 +10,10 @@
  *                                  strtod of valcol in the first row of the
  *                                  reference file whose keycol is key; fails
  *                                  the test naming file and key when none
+ *   px_ref_E0(couple)              E0 (V vs SHE, 25 C) of the couple in
+ *                                  standard_potentials.csv
+ *   px_ref_logk(reaction)          log10 K (25 C) of the reaction in
+ *                                  log_k_25C.csv
  * Needs px_test.h (cmocka and px_ref_open) first. */
 #ifndef PX_TEST_CSV_H
 #define PX_TEST_CSV_H
@@ -96,6 +100,8 @@ static inline double px_ref_value_impl(const char *rel, const char *keycol, cons
 }
 #define px_ref_value(rel, keycol, key, valcol) \
     px_ref_value_impl((rel), (keycol), (key), (valcol), __FILE__, __LINE__)
+#define px_ref_E0(couple) px_ref_value("standard_potentials.csv", "couple", (couple), "E0_V_SHE_25C")
+#define px_ref_logk(reaction) px_ref_value("log_k_25C.csv", "reaction", (reaction), "log10_K_25C")
 #endif
 
 #endif

@@ -51,9 +51,8 @@ end
 -- C signature comments: "core.name(args) -> result" and "obj:name(args) -> result".
 local c_sigs = {}
 do
-  local p = io.popen('ls "' .. src_root .. '"/src/lua/*.c 2>/dev/null')
-  for path in p:lines() do
-    local text = read(path) or ""
+  for _, name in ipairs(core.list_dir(src_root .. "/src/lua") or {}) do
+    local text = name:match("%.c$") and read(src_root .. "/src/lua/" .. name) or ""
     for recv, sep, name, params, rest in text:gmatch("/%*%s*(%a+)([%.:])([%a_][%w_]*)(%b())([^\n]*)") do
       local ret = rest:match("^%s*%->%s*(.-)%s*%*?/?%s*$")
       local key = (recv == "core" and "core." or "method:") .. name
@@ -61,7 +60,6 @@ do
       if key and not c_sigs[key] then c_sigs[key] = { params = params:sub(2, -2), ret = ret } end
     end
   end
-  p:close()
   -- then the manual's signatures (docs/lua-api.md: `fig:axes(panel, ...)`,
   -- `core.ticks(a, b [, n, log])`, `plot.grid(maps, opts) → fig`)
   local manual = read(src_root .. "/docs/lua-api.md") or ""
@@ -310,7 +308,7 @@ for _, modname in ipairs(MODULES) do
 end
 
 if not check then
-  os.execute('mkdir -p "' .. dir .. '/phlox"')
+  assert(core.make_dir(dir .. "/phlox", true))
   for _, rel in ipairs(sorted_keys(files)) do
     assert(core.write_atomic(dir .. "/" .. rel, files[rel]))
   end

@@ -100,7 +100,7 @@ static void test_fraction_curve(void **state)
     assert_int_equal(retried, 0);
     /* Al^3+ = AlOH^2+ where pH = -log *K1: log_k_25C.csv (Baes and Mesmer
      * 1976 as tabulated, high confidence: +-0.02, the reference README) */
-    double k1 = px_ref_value("log_k_25C.csv", "reaction", "Al^3+ + H2O(l) = AlOH^2+ + H^+", "log10_K_25C");
+    double k1 = px_ref_logk("Al^3+ + H2O(l) = AlOH^2+ + H^+");
     double cross = NAN;
     for (int i = 0; i + 1 < NPTS && isnan(cross); i++) {
         assert_int_equal(v.status[i], PX_OK);
@@ -151,8 +151,10 @@ static void test_warm_start(void **state)
     assert_true(warm.iterations < cold.iterations);
 }
 
-/* Every try fails (1 mol/kg of Al with its solids, one iteration allowed:
- * not enough from a cold start): each point is tried 1 + retries times,
+/* Every try fails (1 mol/kg of Al with its solids, one iteration allowed
+ * and balance tolerances that one step from a cold start cannot reach, so
+ * that no try converges whatever the element file's constants): each point
+ * is tried 1 + retries times,
  * the total multiplied by the factor after each failure, as
  * phlox.diagrams.solubility documents. */
 static void test_retry_policy(void **state)
@@ -164,7 +166,13 @@ static void test_retry_policy(void **state)
     o.total[0] = 1;
     o.solids = 1;
     o.solver.max_iter = 1;
-    double x[3] = {4, 5, 6};
+    o.solver.epsabs = 1e-300;
+    o.solver.epsrel = 1e-15;
+    /* pH 6 is left out: there, at 1 mol/kg, the default solver does not
+     * converge from a cold start with the Al data of issue 13 (the Al13
+     * polymer at log K -100.03; solid saturation does not close), a solver
+     * limitation reported with that change, not the retry policy tested here */
+    double x[3] = {4, 5, 7};
     px_curve c = {PX_CURVE_PH, NULL, x, 3, "Al", 3, 0.1, 0};
     seen v = {db, 0, 0, {0}, {0}, {0}, {0}, {0}, 0};
     size_t retried = 0;
@@ -180,7 +188,7 @@ static void test_retry_policy(void **state)
         assert_true(v.total[i] == put);
     }
     /* with enough iterations the first try holds: no retry */
-    o.solver.max_iter = px_equil_options_default().max_iter;
+    o.solver = px_equil_options_default();
     memset(&v, 0, sizeof v);
     v.db = db;
     assert_int_equal(px_curve_run(ws, db, &o, &c, record, &v, &retried, msg, sizeof msg), PX_OK);

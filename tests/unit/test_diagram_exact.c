@@ -13,6 +13,7 @@
 #include "support/px_csv.h"
 #include "support/px_alloc_fail.h"
 #include "support/px_diagram_cases.h"
+#include "support/px_plane.h"
 #include "geom/geom.h"
 #include "core/constants.h"
 #include "core/status.h"
@@ -22,11 +23,6 @@
 #include <string.h>
 
 /* ---------------------------------------------------------------- helpers */
-
-static double ref_potential(const char *couple)
-{
-    return px_ref_value("standard_potentials.csv", "couple", couple, "E0_V_SHE_25C");
-}
 
 static px_rng rng;
 static double urand(void) { return px_rng_uniform(&rng); }
@@ -52,14 +48,6 @@ static int field_of_species(const px_diagram_map *m, int k)
     return -1;
 }
 
-static double seg_dist(double px, double py, double ax, double ay, double bx, double by)
-{
-    double ex = bx - ax, ey = by - ay, L2 = ex * ex + ey * ey;
-    double t = L2 > 0 ? ((px - ax) * ex + (py - ay) * ey) / L2 : 0;
-    t = t < 0 ? 0 : (t > 1 ? 1 : t);
-    return hypot(ax + t * ex - px, ay + t * ey - py);
-}
-
 static int ring_has(const px_diagram_map *m, size_t f, size_t v)
 {
     for (size_t i = 0; i < m->field[f].n; i++)
@@ -73,7 +61,7 @@ static double field_boundary_dist(const px_diagram_map *m, size_t f, double x, d
     double best = INFINITY;
     for (size_t i = 0; i < F->n; i++) {
         size_t u = m->ring[F->first + i], v = m->ring[F->first + (i + 1) % F->n];
-        best = fmin(best, seg_dist(x, y, m->vx[u], m->vy[u], m->vx[v], m->vy[v]));
+        best = fmin(best, px_plane_seg_dist(x, y, m->vx[u], m->vy[u], m->vx[v], m->vy[v]));
     }
     return best;
 }
@@ -305,7 +293,7 @@ static void test_triple_point(void **state)
 static void test_nernst_zinc(void **state)
 {
     (void)state;
-    double E0 = ref_potential("Zn^2+ + 2 e- = Zn(s)");
+    double E0 = px_ref_E0("Zn^2+ + 2 e- = Zn(s)");
     assert_close(E0, -0.7618, 0, 1e-4); /* the row as read */
     double T = PX_TR, RT = PX_R * T, loga = -6;
     px_diagram_species sp[2] = {
@@ -348,7 +336,7 @@ static void test_nernst_slopes(void **state)
     /* at 100 C: 0.07404 V per decade (same formula; common practice value) */
     assert_close(px_diagram_nernst_slope(373.15), 0.07404, 0, 5e-6);
 
-    double Ezno = ref_potential("ZnO(s) + 2 H^+ + 2 e- = Zn(s) + H2O(l)");
+    double Ezno = px_ref_E0("ZnO(s) + 2 H^+ + 2 e- = Zn(s) + H2O(l)");
     static const double temps[] = {298.15, 373.15, 473.15};
     for (size_t t = 0; t < 3; t++) {
         double T = temps[t], s = PX_R * T * PX_LN10;
@@ -366,7 +354,7 @@ static void test_nernst_slopes(void **state)
         px_diagram_map_free(map);
     }
 
-    double Efe = ref_potential("Fe3O4(s) + 8 H^+ + 2 e- = 3 Fe^2+ + 4 H2O(l)");
+    double Efe = px_ref_E0("Fe3O4(s) + 8 H^+ + 2 e- = 3 Fe^2+ + 4 H2O(l)");
     double s = PX_R * PX_TR * PX_LN10, loga = -6;
     px_diagram_species fe[2] = {{s * loga, 0, 0, 2, "Fe^2+"},
                                 {2 * PX_F * Efe / 3, -8 * s / 3, -2 * PX_F / 3, 3, "Fe3O4"}};
@@ -634,9 +622,9 @@ static void test_corrosion_domains(void **state)
 {
     (void)state;
     double s = PX_R * PX_TR * PX_LN10, loga = -6;
-    double Ezn = ref_potential("Zn^2+ + 2 e- = Zn(s)");
-    double Ezno = ref_potential("ZnO(s) + 2 H^+ + 2 e- = Zn(s) + H2O(l)");
-    double Ehz = ref_potential("Zn(OH)4^2- + 2 e- = Zn(s) + 4 OH^-") + 2 * (s / PX_F) * 13.995;
+    double Ezn = px_ref_E0("Zn^2+ + 2 e- = Zn(s)");
+    double Ezno = px_ref_E0("ZnO(s) + 2 H^+ + 2 e- = Zn(s) + H2O(l)");
+    double Ehz = px_ref_E0("Zn(OH)4^2- + 2 e- = Zn(s) + 4 OH^-") + 2 * (s / PX_F) * 13.995;
     px_diagram_species sp[4] = {
         {0, 0, 0, 0, "Zn"},
         {2 * PX_F * Ezn + s * loga, 0, -2 * PX_F, 1, "Zn^2+"},

@@ -9,6 +9,7 @@
  * failing callback, saddles, bad input. */
 #include "px_test.h"
 #include "support/px_diagram_cases.h"
+#include "support/px_plane.h"
 #include "core/constants.h"
 #include "core/status.h"
 #include "diagram/diagram.h"
@@ -42,14 +43,6 @@ static const px_diagram_species *by_id(const px_diagram_species *sp, size_t m, i
     for (size_t j = 0; j < m; j++)
         if (sp[j].id == id) return &sp[j];
     return NULL;
-}
-
-static double seg_dist(double px, double py, double ax, double ay, double bx, double by)
-{
-    double ex = bx - ax, ey = by - ay, L2 = ex * ex + ey * ey;
-    double t = L2 > 0 ? ((px - ax) * ex + (py - ay) * ey) / L2 : 0;
-    t = t < 0 ? 0 : (t > 1 ? 1 : t);
-    return hypot(ax + t * ex - px, ay + t * ey - py);
 }
 
 static void compare(const px_diagram_species *sp, size_t m, const px_diagram_window *w,
@@ -103,7 +96,7 @@ static void compare(const px_diagram_species *sp, size_t m, const px_diagram_win
                 const px_diagram_boundary *B = &ex->boundary[k];
                 if ((B->id_a == P->id_a && B->id_b == P->id_b) ||
                     (B->id_a == P->id_b && B->id_b == P->id_a))
-                    best = fmin(best, seg_dist(x, y, B->x0, B->y0, B->x1, B->y1));
+                    best = fmin(best, px_plane_seg_dist(x, y, B->x0, B->y0, B->x1, B->y1));
             }
             if (!(best <= cell)) {
                 /* a field thinner than a step can fall between the nodes: the
@@ -116,7 +109,7 @@ static void compare(const px_diagram_species *sp, size_t m, const px_diagram_win
                     const px_diagram_boundary *B = &ex->boundary[k];
                     int other = (B->id_a != P->id_a && B->id_a != P->id_b) ||
                                 (B->id_b != P->id_a && B->id_b != P->id_b);
-                    if (other) near = fmin(near, seg_dist(x, y, B->x0, B->y0, B->x1, B->y1));
+                    if (other) near = fmin(near, px_plane_seg_dist(x, y, B->x0, B->y0, B->x1, B->y1));
                 }
                 assert_true(near <= cell);
                 nthin++;

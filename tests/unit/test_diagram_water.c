@@ -16,15 +16,10 @@
 #include <stdlib.h>
 #include <string.h>
 
-static double ref_potential(const char *couple)
-{
-    return px_ref_value("standard_potentials.csv", "couple", couple, "E0_V_SHE_25C");
-}
-
 static void test_water_lines(void **state)
 {
     (void)state;
-    double E0 = ref_potential("O2(g) + 4 H^+ + 4 e- = 2 H2O(l)");
+    double E0 = px_ref_E0("O2(g) + 4 H^+ + 4 e- = 2 H2O(l)");
     assert_close(E0, 1.229, 0, 1e-9);
     double s = px_diagram_nernst_slope(PX_TR);
     for (double pH = 0; pH <= 14; pH += 0.5) {
@@ -78,7 +73,7 @@ static void test_electrodes(void **state)
     }
     /* Nernst for AgCl + e- = Ag + Cl-: more chloride, lower potential, so
      * E(sat. KCl) < E(3.5 M KCl) < E0 (a = 1, 0.22233 V, CRC via csv) */
-    double E0 = ref_potential("AgCl(s) + e- = Ag(s) + Cl^-");
+    double E0 = px_ref_E0("AgCl(s) + e- = Ag(s) + Cl^-");
     assert_true(px_diagram_electrode_get(PX_ELECTRODE_AGCL_SAT)->offset_V <
                 px_diagram_electrode_get(PX_ELECTRODE_AGCL_3_5M)->offset_V);
     assert_true(px_diagram_electrode_get(PX_ELECTRODE_AGCL_3_5M)->offset_V < E0);

@@ -140,11 +140,7 @@ static inline void tb_check(const tb *t)
 
 /* --- reference values (tests/support/px_csv.h) -------------------------- */
 
-/* log10 K of the first row of log_k_25C.csv whose reaction matches. */
-static inline double ref_logk(const char *reaction)
-{
-    return px_ref_value("log_k_25C.csv", "reaction", reaction, "log10_K_25C");
-}
+/* log10 K of a reaction: px_ref_logk (tests/support/px_csv.h). */
 
 /* The first row of a reference file that `pick` accepts, column `valcol`. */
 static inline double ref_pick(const char *file, const char *valcol,

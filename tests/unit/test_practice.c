@@ -4,6 +4,7 @@
  * field (src/diagram/emap.c) and the reference-electrode temperature range
  * (src/diagram/water.c). */
 #include "px_test.h"
+#include "support/px_db_fixture.h"
 #include "core/constants.h"
 #include "core/status.h"
 #include "data/data.h"
@@ -15,16 +16,8 @@
 static px_db *library(void)
 {
     static const int zs[] = {1, 6, 7, 8, 12, 16, 20, 26, 29};
-    static const char *const files[] = {"HO", "Cu", "Fe", "Mg", "Ca", "S", "C", "N"};
-    px_db *db = px_db_new();
-    assert_non_null(db);
-    assert_int_equal(px_db_add_builtins(db), PX_OK);
-    px_data_options o = px_data_options_default();
-    o.elements = zs;
-    o.n_elements = sizeof zs / sizeof zs[0];
-    for (size_t i = 0; i < sizeof files / sizeof files[0]; i++)
-        assert_int_equal(px_data_load_embedded(db, files[i], &o, NULL), PX_OK);
-    return db;
+    static const char *const files[] = {"HO", "Cu", "Fe", "Mg", "Ca", "S", "C", "N", NULL};
+    return px_test_db(files, zs, sizeof zs / sizeof zs[0]);
 }
 
 static int allowed(const px_ligand_states *ls, const px_db *db, const char *formula, int skip)

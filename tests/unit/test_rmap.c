@@ -7,6 +7,7 @@
  * themselves are checked against exact maps in tests/scripts/test_rigorous.lua;
  * here the check is that the work split leaves no trace. */
 #include "px_test.h"
+#include "support/px_db_fixture.h"
 #include "core/status.h"
 #include "data/data.h"
 #include "diagram/rmap.h"
@@ -22,17 +23,9 @@ typedef struct map_run {
 
 static px_db *load(const char *element, const char *ligand)
 {
-    px_db *db = px_db_new();
-    assert_non_null(db);
-    assert_int_equal(px_db_add_builtins(db), PX_OK);
-    px_data_options o = px_data_options_default();
-    int zs[4] = {1, 8, px_element_z(element), ligand ? px_element_z(ligand) : 0};
-    o.elements = zs;
-    o.n_elements = ligand ? 4 : 3;
-    assert_int_equal(px_data_load_embedded(db, "HO", &o, NULL), PX_OK);
-    assert_int_equal(px_data_load_embedded(db, element, &o, NULL), PX_OK);
-    if (ligand) assert_int_equal(px_data_load_embedded(db, ligand, &o, NULL), PX_OK);
-    return db;
+    const int zs[4] = {1, 8, px_element_z(element), ligand ? px_element_z(ligand) : 0};
+    const char *const files[] = {"HO", element, ligand, NULL}; /* no ligand: ends at element */
+    return px_test_db(files, zs, ligand ? 4 : 3);
 }
 
 static map_run run(px_thermo_ws *ws, const px_db *db, const char *element, px_rmap_options o, int threads,
