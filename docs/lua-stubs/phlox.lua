@@ -305,20 +305,36 @@ function phlox.speciate(opts) end
 ---@return any
 function phlox.speciate_curve(opts, curve) end
 
+--- The elements (besides H and O) of the system a speciation with these
+--- options (those of phlox.speciate) contains: those of totals, and of the
+--- species of fugacities and fixed; sorted.  Its stamps name the estimated
+--- and held species made of these (with H and O) only.
+---@param lib phlox.Library
+---@param opts table
+---@return any
+function phlox.system_elements(lib, opts) end
+
 --- Away from 25 C a reader must know which fields rest on 25 C constants or
 --- on estimated temperature functions.  phlox.temperature_notes checks the
 --- species of `elements` at every temperature of `temps` (K): a species held
 --- at its 25 C log K stops the work (before any is done) unless
 --- opts.accept_held_logk is true; it returns the held formulas, the estimated
---- { formula, method } and the stamp lines naming both.
+--- { formula, method } and the stamp lines naming both.  `elements` are the
+--- elements of the result's own system (an entry may be a ligand group, "CN"
+--- for C and N); only species made of them (with H and O) are named, unless
+--- `only` (a set of symbols) says otherwise: a species of another element
+--- that a loaded file defines is not part of the result.  `species` (a set
+--- of formulas, optional): the species the result's system holds, once it
+--- is known (a speciation's r.species); no other is named.
 ---@param lib phlox.Library
 ---@param elements any
 ---@param temps any
 ---@param opts phlox.temperature_notes.opts
 ---@param where any
----@param only string[]
+---@param only? string[]
+---@param species? any
 ---@return any
-function phlox.temperature_notes(lib, elements, temps, opts, where, only) end
+function phlox.temperature_notes(lib, elements, temps, opts, where, only, species) end
 
 ---@param E_measured any
 ---@param electrode any

@@ -4,6 +4,7 @@
  * from the last one of its job; a failed warm start is retried cold before
  * the point is given up. */
 #include "diagram/rmap.h"
+#include "core/alloc.h"
 #include "core/constants.h"
 #include "core/proc.h"
 #include "core/status.h"
@@ -167,6 +168,7 @@ typedef struct shared {
     size_t nranges;
     px_rmap_stats *jstats; /* per job: the row chunks, then the edges */
     int max_iter;
+    const px_allocator *a; /* px_rmap_options.alloc (called from every worker thread) */
 } shared;
 
 typedef struct worker {
@@ -184,7 +186,7 @@ static int keep_probe(worker *w, double x, double y, int id, size_t job)
 {
     if (w->npr == w->cappr) {
         size_t nc = w->cappr ? 2 * w->cappr : 256;
-        probe *p = realloc(w->pr, nc * sizeof *p);
+        probe *p = px_realloc(w->sh->a, w->pr, w->cappr * sizeof *p, nc * sizeof *p);
         if (!p) return PX_ENOMEM;
         w->pr = p;
         w->cappr = nc;
@@ -277,11 +279,11 @@ static int run_phase(worker *ws, int nt)
     return st;
 }
 
-static int push_edge(edge_job **e, size_t *cnt, size_t *cap, edge_job j)
+static int push_edge(const px_allocator *a, edge_job **e, size_t *cnt, size_t *cap, edge_job j)
 {
     if (*cnt == *cap) {
         size_t nc = *cap ? 2 * *cap : 256;
-        edge_job *p = realloc(*e, nc * sizeof *p);
+        edge_job *p = px_realloc(a, *e, *cap * sizeof *p, nc * sizeof *p);
         if (!p) return PX_ENOMEM;
         *e = p;
         *cap = nc;
@@ -309,7 +311,7 @@ static int crossing_edges(const shared *sh, const px_diagram_grid_options *g, ed
                 double x0 = node(w->xmin, w->xmax, i, nx), y0 = node(w->ymin, w->ymax, j, ny);
                 double x1 = dir ? x0 : node(w->xmin, w->xmax, i + 1, nx);
                 double y1 = dir ? node(w->ymin, w->ymax, j + 1, ny) : y0;
-                st = push_edge(&e, &cnt, &cap, (edge_job){x0, y0, x1, y1, dir ? toly : tolx, L[k], L[k2], i, j, dir});
+                st = push_edge(sh->a, &e, &cnt, &cap, (edge_job){x0, y0, x1, y1, dir ? toly : tolx, L[k], L[k2], i, j, dir});
             }
     for (size_t j = 0; j + 1 < ny && st == PX_OK; j++)
         for (size_t i = 0; i + 1 < nx && st == PX_OK; i++) {
@@ -317,10 +319,10 @@ static int crossing_edges(const shared *sh, const px_diagram_grid_options *g, ed
             if (L[k] == L[k + 1] || L[k] != L[k + nx + 1] || L[k + 1] != L[k + nx]) continue;
             double x = 0.5 * (node(w->xmin, w->xmax, i, nx) + node(w->xmin, w->xmax, i + 1, nx));
             double y = 0.5 * (node(w->ymin, w->ymax, j, ny) + node(w->ymin, w->ymax, j + 1, ny));
-            st = push_edge(&e, &cnt, &cap, (edge_job){x, y, x, y, -1, L[k], L[k + 1], i, j, 2});
+            st = push_edge(sh->a, &e, &cnt, &cap, (edge_job){x, y, x, y, -1, L[k], L[k + 1], i, j, 2});
         }
     if (st != PX_OK) {
-        free(e);
+        px_free(sh->a, e);
         return st;
     }
     *out = e;
@@ -353,10 +355,10 @@ static int edge_cmp(const void *pa, const void *pb)
 
 /* Sort the edges and cut them into jobs: up to PX_RMAP_EDGE_CHUNK edges of
  * one pair each, every saddle centre a job of its own. */
-static int edge_jobs(edge_job *e, size_t n, edge_range **out, size_t *nr)
+static int edge_jobs(const px_allocator *a, edge_job *e, size_t n, edge_range **out, size_t *nr)
 {
     qsort(e, n, sizeof *e, edge_cmp);
-    edge_range *r = malloc((n ? n : 1) * sizeof *r);
+    edge_range *r = px_alloc(a, (n ? n : 1) * sizeof *r);
     if (!r) return PX_ENOMEM;
     size_t m = 0;
     for (size_t k = 0; k < n; k++) {
@@ -392,14 +394,14 @@ static size_t probe_hash(double x, double y, size_t cap)
 }
 
 /* A point solved twice (by two jobs) keeps the first job's label. */
-static int table_build(probe_table *t, const worker *ws, int nt)
+static int table_build(const px_allocator *a, probe_table *t, const worker *ws, int nt)
 {
     size_t n = 0;
     for (int k = 0; k < nt; k++) n += ws[k].npr;
     t->cap = 16;
     while (t->cap < 2 * n + 1) t->cap *= 2;
-    t->slot = malloc(t->cap * sizeof *t->slot);
-    t->used = calloc(t->cap, 1);
+    t->slot = px_alloc(a, t->cap * sizeof *t->slot);
+    t->used = px_calloc(a, t->cap, 1);
     if (!t->slot || !t->used) return PX_ENOMEM;
     for (int k = 0; k < nt; k++)
         for (size_t i = 0; i < ws[k].npr; i++) {
@@ -498,6 +500,9 @@ static int build_threads(px_thermo_ws *ws, const px_db *db, const px_spec_option
                          size_t msglen)
 {
     double t0 = px_clock_wall(), t1 = t0, t2 = t0, t3 = t0, t4 = t0, t5 = t0;
+    px_diagram_grid_options gopt = o->grid; /* the grid from the map's allocator unless it names its own */
+    if (!gopt.alloc) gopt.alloc = o->alloc;
+    const px_diagram_grid_options *grid = &gopt;
     worker ws_[PX_RMAP_MAX_THREADS];
     shared sh;
     memset(ws_, 0, sizeof ws_);
@@ -508,10 +513,11 @@ static int build_threads(px_thermo_ws *ws, const px_db *db, const px_spec_option
     sh.ny = ny;
     sh.nchunks = (ny + PX_RMAP_ROW_CHUNK - 1) / PX_RMAP_ROW_CHUNK;
     sh.max_iter = o->grid.max_iter;
+    sh.a = o->alloc;
     atomic_init(&sh.next, 0);
     atomic_init(&sh.stop, 0);
-    sh.labels = malloc(nx * ny * sizeof *sh.labels);
-    sh.jstats = calloc(sh.nchunks, sizeof *sh.jstats);
+    sh.labels = px_alloc(sh.a, nx * ny * sizeof *sh.labels);
+    sh.jstats = px_calloc(sh.a, sh.nchunks, sizeof *sh.jstats);
     int st = sh.labels && sh.jstats ? PX_OK : PX_ENOMEM;
     int built = 0;
     for (int t = 0; t < nt && st == PX_OK; t++, built++) {
@@ -527,9 +533,9 @@ static int build_threads(px_thermo_ws *ws, const px_db *db, const px_spec_option
     edge_range *ranges = NULL;
     size_t nedges = 0;
     if (st == PX_OK) st = crossing_edges(&sh, &o->grid, &edges, &nedges);
-    if (st == PX_OK) st = edge_jobs(edges, nedges, &ranges, &sh.nranges);
+    if (st == PX_OK) st = edge_jobs(sh.a, edges, nedges, &ranges, &sh.nranges);
     if (st == PX_OK) {
-        px_rmap_stats *js = realloc(sh.jstats, (sh.nchunks + sh.nranges) * sizeof *js);
+        px_rmap_stats *js = px_realloc(sh.a, sh.jstats, sh.nchunks * sizeof *js, (sh.nchunks + sh.nranges) * sizeof *js);
         if (js) {
             sh.jstats = js;
             memset(js + sh.nchunks, 0, sh.nranges * sizeof *js);
@@ -544,10 +550,10 @@ static int build_threads(px_thermo_ws *ws, const px_db *db, const px_spec_option
     if (st == PX_OK) st = run_phase(ws_, nt);
     t4 = px_clock_wall();
     probe_table probes = {0};
-    if (st == PX_OK) st = table_build(&probes, ws_, nt);
+    if (st == PX_OK) st = table_build(sh.a, &probes, ws_, nt);
     for (size_t k = 0; st == PX_OK && k < sh.nchunks + sh.nranges; k++) merge_stats(stats, &sh.jstats[k]);
     size_t missed = 0;
-    double *xs = malloc(nx * sizeof *xs), *ys = malloc(ny * sizeof *ys);
+    double *xs = px_alloc(sh.a, nx * sizeof *xs), *ys = px_alloc(sh.a, ny * sizeof *ys);
     if (st == PX_OK && (!xs || !ys)) st = PX_ENOMEM;
     if (st == PX_OK) {
         px_rmap_stats tail;
@@ -558,7 +564,7 @@ static int build_threads(px_thermo_ws *ws, const px_db *db, const px_spec_option
         for (size_t j = 0; j < ny; j++) ys[j] = node(o->window.ymin, o->window.ymax, j, ny);
         lookup l = {&c0, &o->window, nx, ny, xs, ys, sh.labels, &probes, 0, 0, 0, 0};
         t5 = px_clock_wall();
-        st = px_diagram_grid_map(&o->window, lookup_or_solve, &l, &o->grid, out);
+        st = px_diagram_grid_map(&o->window, lookup_or_solve, &l, grid, out);
         merge_stats(stats, &tail);
         missed = l.solved;
     }
@@ -584,15 +590,15 @@ static int build_threads(px_thermo_ws *ws, const px_db *db, const px_spec_option
         }
     }
     for (int t = 1; t < built; t++) px_spec_free(ws_[t].c.s);
-    for (int t = 0; t < nt; t++) free(ws_[t].pr);
-    free(probes.slot);
-    free(probes.used);
-    free(edges);
-    free(ranges);
-    free(xs);
-    free(ys);
-    free(sh.jstats);
-    free(sh.labels);
+    for (int t = 0; t < nt; t++) px_free(sh.a, ws_[t].pr);
+    px_free(sh.a, probes.slot);
+    px_free(sh.a, probes.used);
+    px_free(sh.a, edges);
+    px_free(sh.a, ranges);
+    px_free(sh.a, xs);
+    px_free(sh.a, ys);
+    px_free(sh.a, sh.jstats);
+    px_free(sh.a, sh.labels);
     return st;
 }
 
@@ -626,6 +632,7 @@ int px_rmap_build(px_thermo_ws *ws, const px_db *db, const char *element, const 
     so.model = o->model;
     so.ligands = o->ligands;
     so.allow_inhibited = o->allow_inhibited;
+    so.alloc = o->alloc;
     /* Dissolved O2, H2 and H2O2 have no mass balance (water is the
      * solvent), so outside water's stability field at a fixed E their
      * molalities have no bound; the exact map leaves them out too (they are
@@ -641,10 +648,13 @@ int px_rmap_build(px_thermo_ws *ws, const px_db *db, const char *element, const 
     rctx c = {s, db, px_element_z(element), o->T, 3, px_equil_options_default(), stats};
     c.sopt.warm = 1;
     int nt = o->threads < 1 ? 1 : o->threads > PX_RMAP_MAX_THREADS ? PX_RMAP_MAX_THREADS : o->threads;
-    if (!grid_ok(&o->window, &o->grid)) /* refused there, with its status */
-        st = px_diagram_grid_map(&o->window, label_node, &c, &o->grid, out);
-    else
+    if (!grid_ok(&o->window, &o->grid)) { /* refused there, with its status */
+        px_diagram_grid_options gopt = o->grid;
+        if (!gopt.alloc) gopt.alloc = o->alloc;
+        st = px_diagram_grid_map(&o->window, label_node, &c, &gopt, out);
+    } else {
         st = build_threads(ws, db, &so, &c, o, nt, out, stats, o->profile, msg, msglen);
+    }
     if (st != PX_OK && msg && msglen && !msg[0])
         snprintf(msg, msglen, "grid map of %s: %s", element, px_strerror(st));
     px_spec_free(s);

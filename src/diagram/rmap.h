@@ -46,6 +46,11 @@ typedef struct px_rmap_options {
     px_ligand_states ligands; /* ligand oxidation states kept (practice's default) */
     int allow_inhibited;      /* 1: inhibited solids may precipitate (thermo/practice.h) */
     px_rmap_profile *profile; /* NULL, or filled with the phase timings */
+    /* Every allocation of the build (its work arrays, the speciation
+     * systems, and the grid unless grid.alloc names another); NULL:
+     * malloc/free.  With threads > 1 it is called from several threads at
+     * once, so it must be thread-safe. */
+    const px_allocator *alloc;
 } px_rmap_options;
 
 px_rmap_options px_rmap_options_default(void);

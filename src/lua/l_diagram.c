@@ -20,7 +20,7 @@ int px_lua_check_database(lua_State *L, int arg, px_db **db, px_thermo_ws **ws);
 static const char *const axis_names[] = {"pH", "E", "loga", NULL};
 static const char *const kind_names[] = {"metal", "solid", "aqueous", "gas", "liquid"};
 
-/* Ranges of the options (the Lua layer, lua/phlox.lua, checks the same
+/* Ranges of the options (the Lua layer, stdlib/phlox/maps.lua, checks the same
  * quantities in the user's units). */
 #define MAP_ACT_MIN 1e-300  /* an activity is positive */
 #define MAP_ACT_MAX 10.0    /* common practice, no source: above 10 no activity model holds */

@@ -637,7 +637,7 @@ static int l_check_files(lua_State *L)
     return 2;
 }
 
-/* core.limits: the ranges the entry points accept (lua/phlox.lua reads them) */
+/* core.limits: the ranges the entry points accept (stdlib/phlox/options.lua reads them) */
 static void push_limits(lua_State *L)
 {
     static const struct {

@@ -116,15 +116,30 @@ end
 
 -- Stamp lines naming, for temperatures other than 25 C, the species whose
 -- log K stays at its 25 C value and those whose temperature dependence is
--- estimated (with the method).  A held species stops the work unless
--- opts.accept_held_logk is true (call it before the work is done).
-local function held_stamp(lib, elements, temps, opts, where)
+-- estimated (with the method), of the result's own system: the species made
+-- of `elements` (with H and O), and once the work is done, of those only
+-- that its solves held (`species`, a set of formulas: see system_species).
+-- A held species stops the work unless opts.accept_held_logk is true (call
+-- it before the work is done).
+local function held_stamp(lib, elements, temps, opts, where, species)
   local tk = {}
   for i, tc in ipairs(temps) do tk[i] = tc + T0C end
-  local ok, held, _, lines = pcall(phlox.temperature_notes, lib, elements, tk, opts, where)
+  local ok, held, _, lines = pcall(phlox.temperature_notes, lib, elements, tk, opts, where, nil, species)
   if not ok then error(held, 0) end
   if #lines == 0 then return nil end
   return lines, held
+end
+
+-- The species the systems of a curve's solves held (each r.species), as a
+-- set of formulas: `points` lists lists of phlox.speciate_curve points.
+local function system_species(points)
+  local set = {}
+  for _, list in ipairs(points) do
+    for _, p in ipairs(list) do
+      for _, sp in ipairs(p.r and p.r.species or {}) do set[sp.formula] = true end
+    end
+  end
+  return set
 end
 
 --- Fraction (distribution) curves: the share of `element` among its
@@ -168,7 +183,6 @@ function diagrams.fractions(opts)
   if xkind == "log_a" and type(opts.ligand_species) ~= "string" then
     fail(where, "x = \"log_a\" needs ligand_species = \"Cl^-\" (a basis species)")
   end
-  local held = held_stamp(lib, { el, opts.ligand }, { T_C_of(opts) }, opts, where)
   local lig_el = opts.ligand
   if xkind == "log_a" and not lig_el then
     local rec = lib:species(opts.ligand_species)
@@ -204,9 +218,13 @@ function diagrams.fractions(opts)
       base.basis[lig_el] = opts.ligand_species
     end
   end
+  -- the curve's system is that of its solves
+  local system = phlox.system_elements(lib, base)
+  held_stamp(lib, system, { T_C_of(opts) }, opts, where) -- stops before the work
   local shares, failures, notes = {}, {}, {}
   local t0 = os.clock()
   local points = phlox.speciate_curve(base, curve)
+  local held = held_stamp(lib, system, { T_C_of(opts) }, opts, where, system_species { points })
   for i, x in ipairs(xs) do
     local r, err = points[i].r, points[i].err
     if r then notes[#notes + 1] = { notes = r.notes, activity = r.activity } end
@@ -294,7 +312,12 @@ function diagrams.solubility(opts)
   for _, tc in ipairs(temps) do
     if type(tc) ~= "number" then fail(where, "T_C must list numbers") end
   end
-  local held = held_stamp(lib, { el }, temps, opts, where)
+  local sys_opts = copy(opts)   -- the curves' system is that of their solves
+  sys_opts.totals = copy(opts.totals)
+  sys_opts.totals[el] = 1
+  local system = phlox.system_elements(lib, sys_opts)
+  held_stamp(lib, system, temps, opts, where) -- stops before the work
+  local solved = {}
   local total = opts.total or 1
   if type(total) ~= "number" or not (total > 0) then fail(where, "total must be a positive number (mol/kg)") end
   local xs = range_points(opts, where, { 0, 14 })
@@ -317,6 +340,7 @@ function diagrams.solubility(opts)
     local points, tries = phlox.speciate_curve(s, { var = "pH", x = xs, element = el,
                                                      retries = RETRIES, retry_factor = RETRY_FACTOR })
     retried = retried + tries
+    solved[#solved + 1] = points
     for i, pH in ipairs(xs) do
       local r, err, put = points[i].r, points[i].err, points[i].total
       if r then notes[#notes + 1] = { notes = r.notes, activity = r.activity } end
@@ -341,6 +365,7 @@ function diagrams.solubility(opts)
     end
     series[#series + 1] = { label = ("%g °C"):format(tc), T_C = tc, x = xs, y = y, solids = solids, chem = false }
   end
+  local held = held_stamp(lib, system, temps, opts, where, system_species(solved))
   local result = {
     element = el, x = xs, series = series, failures = failures,
     axes = { x = { name = "pH", min = xs[1], max = xs[#xs] },

@@ -84,7 +84,7 @@ cmp -s "$S/shared.out" "$S/static.out" || fail "static and shared builds of the 
 note "example (static archives): same output"
 
 # phlox-core alone: no Lua, no cairo.
-case $(pkg-config --libs --static phlox-core) in *lua* | *cairo*) fail "phlox-core.pc pulls Lua or cairo" ;; esac
+case " $(pkg-config --libs --static phlox-core) " in *-llua* | *-lcairo*) fail "phlox-core.pc pulls Lua or cairo" ;; esac  # flags, not folder names (a checkout path may hold "lua")
 
 # find_package(phlox) from a CMake project of the user's.
 cmake -S "$PHLOX_SOURCE_DIR/tests/packaging/consumer" -B "$S/consumer" -DCMAKE_PREFIX_PATH="$P" \

@@ -122,7 +122,7 @@ local function option_keys(info, pname, doc)
     for i = info.linedefined, info.lastlinedefined do
       for k in ls[i]:gmatch("%f[%w_]" .. pname .. "%.([%a_][%w_]*)") do keys[k] = true end
       for k in ls[i]:gmatch("%f[%w_]" .. pname .. '%[%"([%a_][%w_]*)%"%]') do keys[k] = true end
-      -- phlox.lua's helpers temperature(opts, ...) and pressure(opts, ...)
+      -- the helpers temperature(opts, ...) and pressure(opts, ...) (stdlib/phlox/options.lua)
       if ls[i]:find("temperature(" .. pname .. ",", 1, true) then keys.T, keys.T_C = true, true end
       if ls[i]:find("pressure(" .. pname .. ",", 1, true) then keys.P = true end
     end

@@ -112,6 +112,8 @@ local cases = {
     "unknown reference electrode 'XYZ'" },
   { "wrong type", "phlox.constant_logk", function(e) return e.phlox.constant_logk(e.lib, "Zn", 350) end,
     "phlox.constant_logk: argument 'elements' must be a list of strings, got string 'Zn'" },
+  { "wrong type", "phlox.system_elements", function(e) return e.phlox.system_elements(e.lib, "Zn") end,
+    "phlox.system_elements: argument 'opts' must be a table, got string 'Zn'" },
   { "wrong type", "sweep.run", function(e) return e.sweep.run({ 1 }, "f") end,
     "sweep.run: argument 'fn' must be a function, got string 'f'" },
   { "wrong type", "export.csv", function(e) return e.export.csv(e.dir .. "/x.csv", {}, { columns = "a" }) end,

@@ -327,6 +327,36 @@ static void test_logk_estimate_basis(void **state)
     assert_true(est && held);
     px_db_free(db);
 
+    /* an isocoulombic estimate with a model reaction: phlox list names the
+     * model reaction beside the method */
+    const char *mod = "return { element = 'Zn', species = {\n"
+                      "{ formula = 'Zn^2+', model = 'logk', reaction = 'Zn(s) + 2 H^+ = Zn^2+ + H2(g)',"
+                      " logK = 25.79, dH = -153.9, source = 's' },\n"
+                      "{ formula = 'ZnOH^+', model = 'logk', reaction = 'Zn^2+ + H2O(l) = ZnOH^+ + H^+',"
+                      " logK = -8.96, dH = 56.07, source = 's' },\n"
+                      "{ formula = 'Zn(OH)2(aq)', model = 'logk', reaction = 'Zn^2+ + 2 H2O(l) = Zn(OH)2(aq) + 2 H^+',"
+                      " logK = -17.8, estimate = { method = 'isocoulombic', model = 'Zn^2+ + H2O(l) = ZnOH^+ + H^+' },"
+                      " source = 's' } } }\n";
+    db = px_db_new();
+    px_data_problems_clear(p);
+    st = px_data_load_buffer(db, mod, strlen(mod), "m.lua", NULL, p);
+    if (st != PX_OK) dump(p);
+    assert_int_equal(st, PX_OK);
+    out = tmpfile();
+    assert_non_null(out);
+    assert_int_equal(px_data_list_write(db, "Zn", out), 3);
+    rewind(out);
+    int model = 0, plain = 0;
+    while (fgets(line, sizeof line, out)) {
+        if (strstr(line, "Zn(OH)2(aq)") &&
+            strstr(line, "[estimated: isocoulombic (Gu et al. 1994); model reaction Zn^2+ + H2O(l) = ZnOH^+ + H^+]"))
+            model = 1;
+        if (strncmp(line, "ZnOH^+ ", 7) == 0 && strstr(line, "model reaction")) plain = 1; /* measured: no model named */
+    }
+    fclose(out);
+    assert_true(model && !plain);
+    px_db_free(db);
+
     /* a measured dH with a constant dCp: measured, or estimated when the dCp
      * is marked as a Criss-Cobble estimate (docs/thermo.md) */
     const char *cp = "return { element = 'Zn', species = {\n"

@@ -11,6 +11,8 @@
 #include "core/status.h"
 #include "data/data.h"
 #include "diagram/rmap.h"
+#include "support/px_alloc_fail.h"
+#include <pthread.h>
 #include <stdlib.h>
 #include <string.h>
 
@@ -177,9 +179,108 @@ static void test_tiny_grids(void **state)
     px_db_free(db);
 }
 
+/* Cu with 0.01 mol/kg chloride on an nx by ny grid. */
+static px_rmap_options cu_cl(size_t nx, size_t ny)
+{
+    px_rmap_options o = px_rmap_options_default();
+    o.ligand = "Cl";
+    o.ligand_total = 1e-2;
+    o.grid.nx = nx;
+    o.grid.ny = ny;
+    return o;
+}
+
+/* Every allocation of a build goes through px_rmap_options.alloc: failing
+ * the Nth one gives PX_ENOMEM with nothing leaked, never a map missing a
+ * part; once none fails, the map is the one built with malloc. */
+static void test_alloc_failure(void **state)
+{
+    (void)state;
+    px_db *db = load("Cu", "Cl");
+    px_thermo_ws *ws = px_thermo_ws_new(PX_DIELECTRIC_R8_97);
+    px_rmap_options o = cu_cl(9, 7);
+    map_run plain = run(ws, db, "Cu", o, 1, NULL);
+    int succeeded = 0;
+    for (long nth = 0; nth < 5000 && !succeeded; nth++) {
+        px_alloc_fail f;
+        px_allocator al = px_alloc_fail_make(&f, nth);
+        o.alloc = &al;
+        o.threads = 1; /* px_alloc_fail is not thread-safe */
+        map_run r = {NULL, {0}};
+        char msg[256] = "";
+        int st = px_rmap_build(ws, db, "Cu", &o, &r.g, &r.st, msg, sizeof msg);
+        assert_true(st == PX_OK || st == PX_ENOMEM);
+        if (st == PX_OK) { /* only when no allocation failed: a failure is never swallowed */
+            assert_true(f.left >= 0);
+            assert_true(f.live > 0); /* the grid came from the allocator */
+            assert_same(&plain, &r, "Cu 9 x 7 with and without the allocator");
+            succeeded = 1;
+        } else {
+            assert_null(r.g);
+        }
+        px_diagram_grid_free(r.g);
+        assert_int_equal(f.live, 0); /* every allocation released */
+    }
+    assert_true(succeeded);
+    px_diagram_grid_free(plain.g);
+    px_thermo_ws_free(ws);
+    px_db_free(db);
+}
+
+/* A thread-safe counting allocator: the workers' allocations (bisection
+ * points) go through it too, and the map stays the same bytes. */
+typedef struct counted {
+    pthread_mutex_t mu;
+    long calls, live;
+} counted;
+
+static void *counted_alloc(void *ud, size_t n)
+{
+    counted *c = ud;
+    void *p = malloc(n);
+    pthread_mutex_lock(&c->mu);
+    c->calls++;
+    if (p) c->live++;
+    pthread_mutex_unlock(&c->mu);
+    return p;
+}
+
+static void counted_release(void *ud, void *p)
+{
+    counted *c = ud;
+    if (!p) return;
+    pthread_mutex_lock(&c->mu);
+    c->live--;
+    pthread_mutex_unlock(&c->mu);
+    free(p);
+}
+
+static void test_alloc_threads(void **state)
+{
+    (void)state;
+    px_db *db = load("Cu", "Cl");
+    px_thermo_ws *ws = px_thermo_ws_new(PX_DIELECTRIC_R8_97);
+    px_rmap_options o = cu_cl(31, 21);
+    map_run plain = run(ws, db, "Cu", o, 1, NULL);
+    counted c = {PTHREAD_MUTEX_INITIALIZER, 0, 0};
+    px_allocator al = {counted_alloc, counted_release, &c};
+    o.alloc = &al;
+    for (int threads = 1; threads <= 3; threads++) {
+        map_run r = run(ws, db, "Cu", o, threads, NULL);
+        assert_same(&plain, &r, "Cu 31 x 21 through a counting allocator");
+        px_diagram_grid_free(r.g);
+        assert_int_equal(c.live, 0);
+    }
+    assert_true(c.calls > 0);
+    px_diagram_grid_free(plain.g);
+    px_thermo_ws_free(ws);
+    px_db_free(db);
+}
+
 int main(void)
 {
     const struct CMUnitTest tests[] = {cmocka_unit_test(test_copper_chloride), cmocka_unit_test(test_zinc_hot),
-                                       cmocka_unit_test(test_tiny_grids)};
+                                       cmocka_unit_test(test_tiny_grids), cmocka_unit_test(test_alloc_failure),
+                                       cmocka_unit_test(test_alloc_threads)};
     return cmocka_run_group_tests(tests, NULL, NULL);
 }
