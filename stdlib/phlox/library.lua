@@ -215,11 +215,13 @@ function phlox.model_elements(lib, loaded)
   local have, want, out = {}, {}, {}
   for _, e in ipairs(loaded) do have[e] = true end
   for _, s in ipairs(lib:list()) do
-    if s.estimate_model then
-      for term in (s.estimate_model:gsub(" = ", " + ") .. " + "):gmatch("(.-) %+ ") do
-        local f = term:match("^[%d/.]+ (.+)$") or term
-        if f ~= "e-" and not lib:species(f) then
-          for sym in f:gsub("%^.*$", ""):gsub("%(.-%)", ""):gmatch("%u%l?") do
+    if s.estimate_model then -- read by the C reaction parser (core.reaction_terms)
+      for _, t in ipairs(core.reaction_terms(s.estimate_model) or {}) do
+        if t.state ~= "e" and not lib:species(t.formula) then
+          local syms = {}
+          for sym in pairs(t.elements) do syms[#syms + 1] = sym end
+          table.sort(syms)
+          for _, sym in ipairs(syms) do
             if not have[sym] and not want[sym] then want[sym] = true; out[#out + 1] = sym end
           end
         end
