@@ -70,7 +70,16 @@ function M.reporter(labels)
   function r.pass(msg) r.emit("PASS", msg) end
   function r.fail(msg) r.emit("FAIL", msg) end
   function r.check(ok, msg) r.emit(ok and "PASS" or "FAIL", msg) end
-  function r.finish(header)
+  -- min_pass: the number of checks the script is known to make; fewer
+  -- passing checks mean some stopped matching their data (a lost check is a
+  -- failure too: once a change of citation text silently dropped 80).
+  function r.finish(header, min_pass)
+    if min_pass and (r.count.PASS or 0) < min_pass then
+      r.count.FAIL = r.count.FAIL + 1
+      r.failures[#r.failures + 1] = ("only %d checks passed, expected at least %d: find which checks stopped "
+        .. "running (or, if checks were removed on purpose, lower the floor with the reason)"):format(r.count.PASS or 0, min_pass)
+      print("FAIL  " .. r.failures[#r.failures])
+    end
     if r.count.FAIL > 0 then
       if header then
         print(header)
