@@ -5,7 +5,8 @@
 local bin = assert(os.getenv("PHLOX_BIN"), "PHLOX_BIN not set")
 local fixtures = assert(os.getenv("PHLOX_TEST_FIXTURES"), "PHLOX_TEST_FIXTURES not set")
 local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
-local check = S.check
+local check, close = S.check, S.close
+local LT = { strict = true } -- the bounds below are strict (|a - b| < tol)
 
 local function run(args) return S.proc.run(("%q %s"):format(bin, args)) end
 
@@ -23,28 +24,28 @@ check(code == 0, "reaction --json exit " .. tostring(code))
 for _, k in ipairs { "T_K", "P_bar", "dG_kJ", "logK", "E0_V" } do
   check(num(out, k), "key " .. k .. " in " .. out)
 end
-check(math.abs(num(out, "E0_V") - (-0.7618)) < 0.005, "E0 Zn2+/Zn: " .. out)
+close(num(out, "E0_V"), -0.7618, 0.005, "E0 Zn2+/Zn (CRC) in " .. out, LT)
 check(num(out, "T_K") == 298.15 and num(out, "P_bar") == 1, "default T and P: " .. out)
 -- dG = -n F E0 (definition)
 local F = S.chem.F
-check(math.abs(num(out, "dG_kJ") + 2 * F * num(out, "E0_V") / 1000) < 1e-6, "dG = -nFE")
+close(num(out, "dG_kJ"), -2 * F * num(out, "E0_V") / 1000, 1e-6, "dG = -nFE (kJ/mol)", LT)
 
 -- no electrons: E0 is null
 code, out = run([[reaction "H2O(l) = H^+ + OH^-" --json]])
 check(code == 0 and JSON.decode(out).E0_V == JSON.null, "E0 null without electrons: " .. out)
-check(math.abs(num(out, "logK") + 13.995) < 0.03, "log Kw at 25 C vs IAPWS R11-07: " .. out)
+close(num(out, "logK"), -13.995, 0.03, "log Kw at 25 C vs IAPWS R11-07 in " .. out, LT)
 
 -- temperature and the saturation pressure above 100 C
 code, out = run([[reaction "Fe^3+ + e- = Fe^2+" --temperature 200 --json]])
 check(code == 0 and num(out, "T_K") == 473.15, "T option: " .. out)
-check(math.abs(num(out, "P_bar") - 15.55) < 0.05, "psat at 200 C (IAPWS-95: 1.5549 MPa): " .. out)
+close(num(out, "P_bar"), 15.55, 0.05, "psat at 200 C, bar (IAPWS-95: 1.5549 MPa) in " .. out, LT)
 code, out = run([[reaction "Fe^3+ + e- = Fe^2+" --temperature 150 --pressure 50 --json]])
 check(code == 0 and num(out, "P_bar") == 50, "pressure option: " .. out)
 
 -- the plain text form names the quantities and units
 code, out = run([[reaction "Fe^3+ + e- = Fe^2+"]])
 check(code == 0 and out:find("log K =") and out:find("V vs SHE"), "text output: " .. out)
-check(math.abs(tonumber(out:match("E = ([-%d.]+) V")) - 0.771) < 0.005, "E0 Fe3+/Fe2+ (CRC): " .. out)
+close(tonumber(out:match("E = ([-%d.]+) V")), 0.771, 0.005, "E0 Fe3+/Fe2+ (CRC) in " .. out, LT)
 
 -- errors: not balanced, unknown species, out of range, usage
 local err

@@ -7,7 +7,7 @@ local plot = require "phlox.plot"
 local palette = require "phlox.palette"
 local core = require "phlox.core"
 local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
-local check, near = S.check, S.near
+local check, close = S.check, S.close
 
 -- BEGIN TEST MAP
 -- Nernst slope ln(10) R T / F at 298.15 K from CODATA 2018 R and F; the
@@ -57,24 +57,27 @@ local slurp = S.files.slurp
 -- palette: CIE L* of sRGB primaries and white (sRGB red L* = 53.24,
 -- green 87.73, blue 32.30: from memory of B. Lindbloom's published sRGB to
 -- Lab tables, D65); the formulas are CIE 15:2004 and IEC 61966-2-1.
-check(near(palette.lightness({ 1, 1, 1 }), 100, 1e-6), "L* of white")
-check(near(palette.lightness({ 0, 0, 0 }), 0, 1e-9), "L* of black")
-check(near(palette.lightness({ 1, 0, 0 }), 53.24, 0.02), "L* of sRGB red " .. palette.lightness({ 1, 0, 0 }))
-check(near(palette.lightness({ 0, 1, 0 }), 87.73, 0.02), "L* of sRGB green")
-check(near(palette.lightness({ 0, 0, 1 }), 32.30, 0.02), "L* of sRGB blue")
+close(palette.lightness({ 1, 1, 1 }), 100, 1e-6, "L* of white")
+close(palette.lightness({ 0, 0, 0 }), 0, 1e-9, "L* of black")
+close(palette.lightness({ 1, 0, 0 }), 53.24, 0.02, "L* of sRGB red")
+close(palette.lightness({ 0, 1, 0 }), 87.73, 0.02, "L* of sRGB green")
+close(palette.lightness({ 0, 0, 1 }), 32.30, 0.02, "L* of sRGB blue")
 -- grey round trip Lab -> sRGB -> L*: the IEC matrix has four decimals, so
 -- a grey comes back within about 2e-3 of its L*
 for _, L in ipairs({ 20, 50, 64, 94 }) do
   local r, g, b = palette.lab_to_srgb(L, 0, 0)
-  check(near(palette.lightness({ r, g, b }), L, 5e-3), "round trip of L* " .. L)
+  close(palette.lightness({ r, g, b }), L, 5e-3, "round trip of L* " .. L)
 end
 -- every field colour is an 8-bit sRGB triple with the tier's lightness
 -- (within the 8-bit rounding: half a step moves L* by < 0.3 here)
 for kind in pairs(palette.kinds) do
   for t, L in ipairs(palette.tiers) do
     local c = palette.field(kind, t)
-    for k = 1, 3 do check(c[k] >= 0 and c[k] <= 1 and near(c[k] * 255, math.floor(c[k] * 255 + 0.5), 1e-9), "8-bit") end
-    check(near(palette.lightness(c), L, 0.3), ("%s tier %d: L* %.2f"):format(kind, t, palette.lightness(c)))
+    for k = 1, 3 do
+      check(c[k] >= 0 and c[k] <= 1, ("%s tier %d: channel %d in [0, 1]"):format(kind, t, k))
+      close(c[k] * 255, math.floor(c[k] * 255 + 0.5), 1e-9, ("%s tier %d: channel %d x 255 is 8-bit"):format(kind, t, k))
+    end
+    close(palette.lightness(c), L, 0.3, ("%s tier %d: L*"):format(kind, t))
   end
 end
 
@@ -259,8 +262,11 @@ for name, p in pairs(plot.presets) do
   local W, H = f:render("svg"):match('width="([%d.]+)p?t?" height="([%d.]+)p?t?"')
   check(tonumber(W) == p.width and tonumber(H) == p.height, name .. " preset size " .. tostring(W) .. " x " .. tostring(H))
   for _, b in ipairs(f:layout()) do
-    if b.kind == "title" then check(math.abs(b.size - 10 * p.text) < 1e-9 or b.size < 10 * p.text, name .. " title size") end
-    if b.kind == "tick" then check(math.abs(b.size - 8.5 * p.text) < 1e-9, name .. " tick label size " .. b.size) end
+    if b.kind == "title" then
+      check(b.size < 10 * p.text or S.near(b.size, 10 * p.text, 1e-9, { strict = true }),
+            ("%s title size %s at most %s (tolerance < 1e-9)"):format(name, b.size, 10 * p.text))
+    end
+    if b.kind == "tick" then close(b.size, 8.5 * p.text, 1e-9, name .. " tick label size", { strict = true }) end
   end
 end
 check(not pcall(plot.map, map, { file = dir .. "/m.jpg" }), "unknown extension")

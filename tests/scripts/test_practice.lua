@@ -9,7 +9,8 @@ local core = phlox.core
 
 local failures = 0
 local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
-local check = S.check
+local check, close = S.check, S.close
+local LT = { strict = true } -- a test's strict bound (|a - b| < tol)
 local has_line = S.chem.stamp_line
 local function names_of(list, key)
   local set = {}
@@ -35,8 +36,8 @@ for i = 0, 1400 do
   local pH = i / 100
   if phlox.locate(m, pH, 0.3) == "Cu(NH3)4^2+" then lo = lo or pH; hi = pH end
 end
-check(lo and math.abs(lo - 8.77) < 0.1 and math.abs(hi - 10.54) < 0.1,
-  ("Cu(NH3)4^2+ spans pH %s-%s at +0.3 V, expected 8.77-10.54"):format(tostring(lo), tostring(hi)))
+close(lo, 8.77, 0.1, "low pH end of the Cu(NH3)4^2+ field at +0.3 V", LT)
+close(hi, 10.54, 0.1, "high pH end of the Cu(NH3)4^2+ field at +0.3 V", LT)
 local lig = names_of(m.ligand_fields)
 check(not lig["N2(g)"] and not lig["NO3^-"], "nitrogen kept as ammonia: no N2 or nitrate field")
 check(has_line(m.stamp, "ligand oxidation states: N as ammonia/ammonium only"), "map stamp names the kept state")
@@ -148,8 +149,8 @@ for _, row in ipairs(rows("mean_activity_25C.csv")) do
   if I <= phlox.activity_ranges.sit.max then
     local tol = (nu == 2 and 1 or 4 / 3) * mol * c[7] + SIT_FORM
     local d = lg - math.log(meas, 10)
-    check(math.abs(d) <= tol, ("SIT gamma+- of %s at %g mol/kg: %.3f, measured %.3f (%s)"):format(
-      row.salt, mol, 10 ^ lg, meas, row.source))
+    close(lg, math.log(meas, 10), tol, ("SIT log10 gamma+- of %s at %g mol/kg (gamma+- %.3f, measured %.3f, %s)"):format(
+      row.salt, mol, 10 ^ lg, meas, row.source), { source = "eps uncertainty x d log gamma+-/d eps + SIT_FORM" })
     check(res.activity.in_range, "in range at I <= 3.5")
     nsit = nsit + 1
   else
@@ -166,8 +167,8 @@ check(r1.sit_pairs > 0, "SIT pairs were set in the solver")
 -- 5. Activity-model range ------------------------------------------------------
 local nacl = phlox.library { "Na", "Cl" }
 local r5 = assert(phlox.speciate { library = nacl, totals = { Na = 5, Cl = 5 }, solids = false })
-check(r5.activity.model == "davies" and not r5.activity.in_range and math.abs(r5.activity.ionic_strength - 5) < 0.1,
-  "Davies at 5 mol/kg is out of range")
+check(r5.activity.model == "davies" and not r5.activity.in_range, "Davies at 5 mol/kg is out of range")
+close(r5.activity.ionic_strength, 5, 0.1, "ionic strength of 5 mol/kg NaCl", LT)
 check(has_line(r5.stamp, "WARNING: davies"), "result stamp warns")
 local r6 = assert(phlox.speciate { library = nacl, totals = { Na = 0.1, Cl = 0.1 }, activity_model = "bdot" })
 check(r6.activity.in_range and has_line(r6.stamp, "activity model bdot"), "B-dot at 0.1 mol/kg is in range and stamped")
@@ -221,10 +222,11 @@ end
 -- 7. Reference electrodes at temperature ----------------------------------------
 for _, row in ipairs(rows("electrodes.csv")) do
   local off25 = phlox.to_she(0, row.electrode)
-  check(math.abs(off25 - tonumber(row.offset_25C_V)) <= 5e-4, row.electrode .. " offset at 25 C (" .. row.source .. ")")
+  close(off25, tonumber(row.offset_25C_V), 5e-4, row.electrode .. " offset at 25 C, V (" .. row.source .. ")")
   local E50, info = phlox.to_she(-0.5, row.electrode, { T_C = 50 })
   local want = -0.5 + off25 + tonumber(row.dEdT_mV_per_K) * 1e-3 * 25
-  check(math.abs(E50 - want) < 1e-6 and info.corrected, row.electrode .. " corrected to 50 C (" .. row.source .. ")")
+  close(E50, want, 1e-6, row.electrode .. " corrected to 50 C, V (" .. row.source .. ")", LT)
+  check(info.corrected, row.electrode .. " flagged as corrected to 50 C")
   check(not pcall(phlox.to_she, -0.5, row.electrode, { T_C = 250 }), row.electrode .. " refused at 250 C")
   local E250, i250 = phlox.to_she(-0.5, row.electrode, { T_C = 250, reference_at_25C = true })
   check(E250 == -0.5 + off25 and not i250.valid, row.electrode .. " kept at 25 C on request, flagged")
@@ -239,6 +241,6 @@ f:close()
 os.remove(tmp)
 check(all:find("# note: potentials vs saturated calomel", 1, true), "reference electrode use reaches the CSV notes")
 local w = phlox.where { map = phlox.map { library = fes, element = "Fe", T_C = 50 }, pH = 7, E = -0.9, reference = "SCE" }
-check(math.abs(w.E_SHE - phlox.to_she(-0.9, "SCE", { T_C = 50 })) < 1e-12, "where uses the same correction")
+close(w.E_SHE, phlox.to_she(-0.9, "SCE", { T_C = 50 }), 1e-12, "where uses the same correction", LT)
 
 print(("test_practice: ok (%d SIT rows in range)"):format(nsit))

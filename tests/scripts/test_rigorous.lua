@@ -109,8 +109,9 @@ end
 for _, b in ipairs(gm.boundaries) do check(#b.x == #b.y and #b.x >= 2, "boundary polyline") end
 local exact = phlox.map { library = cl, element = "Cu", T_C = 25, ligand = "Cl", ligand_activity = 1e-2 }
 -- water lines and neutral pH from the same records as the exact map's
-check(math.abs(gm.water.o2.a - exact.water.o2.a) < 1e-12 and math.abs(gm.water.o2.b - exact.water.o2.b) < 1e-12
-      and math.abs(gm.neutral_pH - exact.neutral_pH) < 1e-12, "rigorous map water lines and neutral pH")
+S.close(gm.water.o2.a, exact.water.o2.a, 1e-12, "rigorous map O2 line intercept", { strict = true })
+S.close(gm.water.o2.b, exact.water.o2.b, 1e-12, "rigorous map O2 line slope", { strict = true })
+S.close(gm.neutral_pH, exact.neutral_pH, 1e-12, "rigorous map neutral pH", { strict = true })
 local svg = require("phlox.plot").overlay({ exact, gm }):render("svg")
 check(svg:find("<svg", 1, true) and svg:find("rigorous", 1, true), "overlay of exact and rigorous maps")
 print("test_rigorous: all checks passed")

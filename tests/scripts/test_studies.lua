@@ -124,8 +124,8 @@ local function checks()
           for i, b in ipairs(rows) do
             local want = S.chem.boundary_slope(b.reaction, tonumber(b.T_C))
             if want then
-              check(math.abs(tonumber(b.slope_V_per_pH) - want) < 1e-9,
-                    ("%s row %d (%s): slope %s, Nernst %.9g"):format(name, i, b.reaction, b.slope_V_per_pH, want))
+              S.close(tonumber(b.slope_V_per_pH), want, 1e-9,
+                      ("%s row %d (%s): slope vs Nernst, V per pH"):format(name, i, b.reaction), { strict = true })
               nernst = nernst + 1
             end
           end
@@ -136,7 +136,8 @@ local function checks()
             window[f.map] = tonumber(f.window_pH_V)
           end
           for m, a in pairs(area) do
-            check(math.abs(a - window[m]) < 1e-9 * window[m], ("%s: fields of %s cover %.12g of %.12g"):format(name, m, a, window[m]))
+            S.close(a, window[m], 1e-9 * window[m], ("%s: summed field area of %s vs its window"):format(name, m),
+                    { strict = true, source = "1e-9 of the window" })
             tiled = tiled + 1
           end
         end

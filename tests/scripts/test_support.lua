@@ -21,7 +21,24 @@ check(not pcall(T.close, 0 / 0, 0, 1, "close"), "close fails on NaN")
 check(not pcall(T.close, nil, 0, 1, "close"), "close fails on nil")
 check(pcall(T.rel, 105, 100, 0.06, "rel") and not pcall(T.rel, 107, 100, 0.06, "rel"), "rel")
 check(T.near(1, 1 + 1e-12, 1e-9) and not T.near(1, 2, 0.5), "near")
-local ok, err = pcall(T.check, false, "the message")
+-- strict bounds: on the bound itself (|1 - 1.5| = 0.5, 0.5 x 100 = 50, all
+-- exact in binary) <= passes and < fails; a misspelt option is refused
+check(pcall(T.close, 1, 1.5, 0.5, "close") and not pcall(T.close, 1, 1.5, 0.5, "close", { strict = true }),
+      "close: strict excludes the bound")
+check(pcall(T.close, 1, 1.25, 0.5, "close", { strict = true }), "close: strict passes inside")
+check(pcall(T.rel, 150, 100, 0.5, "rel") and not pcall(T.rel, 150, 100, 0.5, "rel", { strict = true })
+      and pcall(T.rel, 140, 100, 0.5, "rel", { strict = true }), "rel: strict excludes the bound")
+check(T.near(1, 1.5, 0.5) and not T.near(1, 1.5, 0.5, { strict = true }), "near: strict excludes the bound")
+check(not T.near(0 / 0, 0, 1, { strict = true }) and not pcall(T.close, 0 / 0, 0, 1, "close", { strict = true }),
+      "strict: NaN never passes")
+check(not pcall(T.close, 1, 1, 0.5, "close", { stirct = true }) and not pcall(T.near, 1, 1, 0.5, "strict")
+      and not pcall(T.rel, 1, 1, 0.5, "rel", { strcit = true }), "unknown or misshapen options are refused")
+local ok, err = pcall(T.close, 1, 2, 0.5, "the thing", { strict = true, source = "from the test's note" })
+check(not ok and tostring(err):find("the thing: 1 vs 2 (tolerance < 0.5, from the test's note)", 1, true),
+      "message names what, both values, the strict tolerance and its source: " .. tostring(err))
+ok, err = pcall(T.rel, 1, 2, 0.25, "ratio")
+check(not ok and tostring(err):find("ratio: 1 vs 2 (relative tolerance 0.25)", 1, true), "rel message: " .. tostring(err))
+ok, err = pcall(T.check, false, "the message")
 check(not ok and tostring(err):find("the message", 1, true), "check raises the message")
 
 -- CSV (RFC 4180 sec. 2: rule 6, commas in quotes; rule 7, "" for a quote)

@@ -25,7 +25,8 @@
 --     give Ni(OH)2(s) 6.2 + 2 x 4.0 + 2 x 2.3 = 18.8 cal/(mol K).
 local phlox = require "phlox"
 local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
-local check = S.check
+local check, close = S.check, S.close
+local LT = { strict = true } -- the bounds below are strict (|a - b| < tol)
 local src = S.SRC
 
 local lib = phlox.library { "Zn", "Ag", "Cl" }
@@ -36,7 +37,7 @@ for _, tc in ipairs { 100, 200, 300 } do
   local T = tc + 273.15
   local k, n = lib.db:isocoulombic("Zn^2+ + H2O(l) = ZnOH^+ + H^+", -8.96, T)
   check(n == 0, "ZnOH^+ hydrolysis is isocoulombic as written")
-  check(math.abs(k - (-8.96 * TR / T)) < 1e-9, ("ZnOH^+ at %d C: %.6f"):format(tc, k))
+  close(k, -8.96 * TR / T, 1e-9, ("ZnOH^+ log K at %d C vs log K(25 C) 298.15/T"):format(tc), LT)
 end
 
 -- 1b: pKw of R11-07 along saturation (tests/reference/water.csv)
@@ -51,7 +52,8 @@ for _, tc in ipairs { 100, 200, 300 } do
   local k, n = lib.db:isocoulombic("Ag^+ + Cl^- = AgCl(aq)", 3.27, T)
   check(n == 1, "AgCl(aq) formation takes one water ionisation, got " .. tostring(n))
   local hand = (3.27 - pKw[25]) * TR / T + pKw[tc]
-  check(math.abs(k - hand) < TOL_KW, ("AgCl(aq) at %d C: phlox %.3f, by hand %.3f"):format(tc, k, hand))
+  close(k, hand, TOL_KW, ("AgCl(aq) log K at %d C: phlox vs by hand"):format(tc),
+        { strict = true, source = "TOL_KW: phlox Kw vs R11-07 at T and at 25 C, docs/thermo.md" })
 end
 -- the species evaluated through its record gives the same log K as the function
 local zlib = phlox.library { "Zn" }
@@ -61,13 +63,13 @@ for _, tc in ipairs { 100, 300 } do
   local T = tc + 273.15
   local a = zlib:reaction(rec.reaction, { T = T }).logK
   local b = zlib.db:isocoulombic(rec.reaction, rec.logK25, T)
-  check(math.abs(a - b) < 1e-9, ("Zn(OH)3^- at %d C: record %.6f, function %.6f"):format(tc, a, b))
+  close(a, b, 1e-9, ("Zn(OH)3^- log K at %d C: record vs function"):format(tc), LT)
   -- H, S, Cp of the record are consistent with G: -dG/dT = S (central difference)
   local h, P = 0.01, 100 -- K, bar (fixed, liquid to 300 C: the default pressure jumps at 100 C)
   local g1 = zlib:props("Zn(OH)3^-", { T = T - h, P = P }).G
   local g2 = zlib:props("Zn(OH)3^-", { T = T + h, P = P }).G
   local p = zlib:props("Zn(OH)3^-", { T = T, P = P })
-  check(math.abs(-(g2 - g1) / (2 * h) - p.S) < 0.05, ("Zn(OH)3^- S at %d C: %.3f vs %.3f"):format(tc, -(g2 - g1) / (2 * h), p.S))
+  close(-(g2 - g1) / (2 * h), p.S, 0.05, ("Zn(OH)3^- at %d C: -dG/dT (central difference) vs S, J/(mol K)"):format(tc), LT)
 end
 
 -- 1c
@@ -86,7 +88,7 @@ do
     local km = m.logK25 - m.dH / R_LN10 * (1 / T - 1 / TR)
     local hand = (rec.logK25 - m.logK25) * TR / T + km
     local got = nlib:reaction(rec.reaction, { T = T }).logK
-    check(math.abs(got - hand) < 1e-9, ("NiCl^+ at %d C: phlox %.9f, by hand %.9f"):format(tc, got, hand))
+    close(got, hand, 1e-9, ("NiCl^+ log K at %d C: phlox vs by hand"):format(tc), LT)
   end
   -- S = -dG/dT of the record holds with the model too
   local h, P = 0.01, 100
@@ -94,7 +96,7 @@ do
   local g1 = nlib:props("NiCl^+", { T = T - h, P = P }).G
   local g2 = nlib:props("NiCl^+", { T = T + h, P = P }).G
   local p = nlib:props("NiCl^+", { T = T, P = P })
-  check(math.abs(-(g2 - g1) / (2 * h) - p.S) < 0.05, ("NiCl^+ S at 200 C: %.3f vs %.3f"):format(-(g2 - g1) / (2 * h), p.S))
+  close(-(g2 - g1) / (2 * h), p.S, 0.05, "NiCl^+ at 200 C: -dG/dT (central difference) vs S, J/(mol K)", LT)
   -- refusals: a model with an estimated species; a model that does not balance
   local function user(text)
     local path = os.tmpname()
@@ -122,7 +124,7 @@ do
     local km = zm.logK25 - zm.dH / R_LN10 * (1 / T - 1 / TR)
     local hand = (0.40 - zm.logK25) * TR / T + km
     local got = l:reaction("Ni^2+ + Cl^- = NiCl^+", { T = T }).logK
-    check(math.abs(got - hand) < 1e-9, ("NiCl^+ on the ZnCl^+ model at %d C: phlox %.9f, by hand %.9f"):format(tc, got, hand))
+    close(got, hand, 1e-9, ("NiCl^+ log K on the ZnCl^+ model at %d C: phlox vs by hand"):format(tc), LT)
   end
   -- ...but where it does not cancel, the model is refused even though every
   -- species written in it is measured (ZnCl^+ rests on Zn^2+)
@@ -149,8 +151,9 @@ for m, byT in pairs(defs.DOCUMENTED) do
   for tc, d in pairs(byT) do
     local s = sum[m][tc]
     for _, q in ipairs { "mean", "max" } do
-      if math.abs(s[q] - d[q]) > defs.DOC_MARGIN then
-        bad[#bad + 1] = ("%s at %d C: %s %.2f, documented %.2f"):format(m, tc, q, s[q], d[q])
+      if not S.near(s[q], d[q], defs.DOC_MARGIN) then
+        bad[#bad + 1] = ("%s at %d C: %s %s, documented %s (tolerance %g, estimates_def.DOC_MARGIN)"):format(
+          m, tc, q, tostring(s[q]), tostring(d[q]), defs.DOC_MARGIN)
       end
     end
   end
@@ -172,6 +175,6 @@ local rec = ni:species("Ni(OH)2(s)")
 check(rec.basis == "estimated" and rec.basis_method:find("Kopp", 1, true), "Ni(OH)2(s): Kopp-Neumann estimate")
 for _, T in ipairs { 298.15, 573.15 } do
   local cp = ni:props("Ni(OH)2(s)", { T = T }).Cp
-  check(math.abs(cp - 18.8 * 4.184) < 1e-9, ("Ni(OH)2(s) Cp at %g K: %.6f"):format(T, cp))
+  close(cp, 18.8 * 4.184, 1e-9, ("Ni(OH)2(s) Cp at %g K vs Kopp-Neumann by hand, J/(mol K)"):format(T), LT)
 end
 print(("test_temperature_estimates: all checks passed (%d reactions, %d solids)"):format(#rows, #sum.kopp_rows))

@@ -463,7 +463,7 @@ rk("3 Al^3+ + 4 H2O(l) = Al3(OH)4^5+ + 4 H^+", -13.94, BM76_R, "medium", { note 
 rk("13 Al^3+ + 28 H2O(l) = Al13O4(OH)24^7+ + 32 H^+", -98.73, BM76_R, "medium", { known = { diff = -1.30, margin = 0.02,
   why = "file: Brown and Ekberg 2016 -100.03 +- 0.09 (read), adopted by Hummel and Thoenen 2023 (read). 1.3 log units over 32 protons is 0.04 per proton: the tridecamer constant rests on slow, aged solutions, and the two evaluations chose different data" } })
 rk("2 Al(s) + 1.5 O2(g) = Al2O3(s,corundum)", nbs_logK(-1582.3), NBS_D .. "Al2O3 -1582.3 kJ/mol (gibbs_25C.csv NBS row)", "high",
-   { note = "file: CODATA 1989 corundum (-1582.257 kJ/mol); NBS 1982 and CODATA rest on the same combustion calorimetry, so the row tests the transcription of the key value more than the calorimetry" })
+   { note = "file: CODATA 1989 corundum (-1582.257 kJ/mol); NBS 1982 and CODATA rest on the same combustion calorimetry, so the row tests the copying of the key value more than the calorimetry" })
 rk("CdCO3(s,otavite) = Cd^2+ + CO3^2-", -12.0, "from memory of CRC Handbook of Chemistry and Physics, solubility products (Ksp 1.0e-12)", "medium",
    { note = "file (issue 13): the measured log Ksp -12.1 +- 0.1 of Stipp et al. (recalled); NBS otavite with the file's Cd^2+ gave -11.16" })
 rk("Cu^2+ + CO3^2- = CuCO3(aq)", 6.75, POWELL07 .. ": 6.75 +- 0.03", "medium", { note = "file: Smith and Martell 6.73 (recalled)" })

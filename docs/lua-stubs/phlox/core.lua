@@ -248,10 +248,9 @@ function phlox_core.sha256(text) end
 ---@param opts table
 function phlox_core.speciate(db, opts) end
 
---- (C function; no signature in src/lua or docs/lua-api.md)
----@param ... any
----@return any
-function phlox_core.strerror(...) end
+--- (C) phlox_core.strerror(status)
+---@param status any
+function phlox_core.strerror(status) end
 
 --- (C) phlox_core.text_runs(text [, chem]) -> { {kind = "normal"|"sub"|"sup", text}, ... }
 ---@param text string
