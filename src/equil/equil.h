@@ -161,6 +161,10 @@ int px_equil_work_create(px_equil_work **w, const px_equil_system *sys,
 void px_equil_work_free(px_equil_work *w);
 /* Forget the last solution: the next solve is a cold start. */
 void px_equil_work_reset(px_equil_work *w);
+/* Copy the solution a warm start goes on from (and the sweep predictor's
+ * history, the last statistics) from src to dst, two workspaces of the
+ * same system; PX_EINVAL when their sizes differ. */
+int px_equil_work_copy_state(px_equil_work *dst, const px_equil_work *src);
 
 /* PX_OK, or PX_ENOCONV (the workspace keeps which balance did not close and
  * the last residuals), PX_ESINGULAR, PX_EINVAL (incomplete or invalid

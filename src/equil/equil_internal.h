@@ -80,6 +80,7 @@ struct px_equil_work {
     size_t *perm;          /* nmax */
     size_t *row_kind, *row_index; /* nmax: what row r is (for failure reports) */
     size_t nrow;
+    int xi_apart;          /* log I's step limited apart from the others (fallback) */
     double phi;            /* merit: sum (R/scale)^2 */
     /* backup for the line search */
     double *y_save, *amt_save;

@@ -7,7 +7,13 @@
  * sum (R/scale)^2 falls by the Armijo rule (Dennis and Schnabel 1983,
  * Numerical Methods for Unconstrained Optimization and Nonlinear
  * Equations, ch. 6); after LS_MAX halvings without it, the best step seen
- * is kept.  Unknowns stay inside their bounds (log m within
+ * is kept.  In the solver's last try (w->xi_apart) the step length is set
+ * by the basis unknowns alone and log I's step is clipped to max_step by
+ * itself: I = 1/2 sum z^2 m linearised about a state rich in a polynuclear
+ * ion (Al13O4(OH)24^7+: z^2 = 49, 13 Al) predicts a negative I whenever that
+ * ion must fall by decades, so log I's Newton component is huge, shortens
+ * every step to nothing, and log I runs to its floor where the iteration
+ * stalls.  Unknowns stay inside their bounds (log m within
  * +-PX_EQUIL_LM_MAX, log a_w in [LOG_AW_MIN, 0], log I within its
  * limits).  On failure the worst row is recorded (px_equil_fail_at). */
 #include "equil_solver.h"
@@ -98,10 +104,16 @@ int px_equil_work_newton(const px_equil_system *s, px_equil_work *w, const px_eq
             px_equil_fail_at(w, (int)w->row_kind[worst], w->row_index[worst]);
             return st;
         }
+        /* the largest log step sets the step length; with xi_apart, log I
+         * is left out of it and clipped on its own (a per-unknown bound:
+         * numerical choice, no source) */
+        size_t nlim = w->xi_apart ? w->ncol : w->ncol + 1;
         double mx = 0.0;
-        for (size_t k = 0; k <= w->ncol; k++)
+        for (size_t k = 0; k < nlim; k++)
             if (fabs(w->dx[k]) > mx) mx = fabs(w->dx[k]);
         double lam = mx > max_step ? max_step / mx : 1.0;
+        if (w->xi_apart)
+            w->dx[w->ncol] = px_equil_clamp(w->dx[w->ncol], -max_step / lam, max_step / lam);
         double phi0 = w->phi, best_phi = DBL_MAX, best_lam = lam, last_lam = 0.0;
         int accepted = 0;
         save_state(w);

@@ -228,6 +228,16 @@ int px_equil_solve(const px_equil_system *s, px_equil_work *w, const px_equil_op
             px_equil_work_cold_start(s, w);
             st = px_equil_work_solve_active(s, w, &o2, 0.25 * o.max_step);
         }
+        if (st != PX_OK) {
+            /* then: log I's step limited apart from the others
+             * (equil_newton.c), taken only where both tries above failed
+             * so that every solve they close stays as it was */
+            w->st.restarts++;
+            w->xi_apart = 1;
+            px_equil_work_cold_start(s, w);
+            st = px_equil_work_solve_active(s, w, &o, o.max_step);
+            w->xi_apart = 0;
+        }
     }
     if (st == PX_OK) w->st.fail_kind = 0, w->st.fail_index = 0;
     return finish(s, w, st);

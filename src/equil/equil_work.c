@@ -100,6 +100,31 @@ void px_equil_work_reset(px_equil_work *w)
     }
 }
 
+int px_equil_work_copy_state(px_equil_work *dst, const px_equil_work *src)
+{
+    if (!dst || !src || dst->nb != src->nb || dst->ns != src->ns) return PX_EINVAL;
+    if (dst == src) return PX_OK;
+    size_t nb = src->nb, ns = src->ns;
+    dst->have = src->have;
+    dst->xI = src->xI;
+    memcpy(dst->y, src->y, nb * sizeof(double));
+    memcpy(dst->amt, src->amt, ns * sizeof(double));
+    memcpy(dst->active, src->active, ns);
+    memcpy(dst->lag, src->lag, ns * sizeof(double));
+    memcpy(dst->absent_prev, src->absent_prev, nb);
+    dst->hist = src->hist;
+    memcpy(dst->y_p1, src->y_p1, nb * sizeof(double));
+    memcpy(dst->y_p2, src->y_p2, nb * sizeof(double));
+    memcpy(dst->par_p1, src->par_p1, nb * sizeof(double));
+    memcpy(dst->par_p2, src->par_p2, nb * sizeof(double));
+    dst->xI_p1 = src->xI_p1;
+    dst->xI_p2 = src->xI_p2;
+    dst->sig_p1 = src->sig_p1;
+    dst->sig_p2 = src->sig_p2;
+    dst->st = src->st;
+    return PX_OK;
+}
+
 /* ---------------------------------------------------------------------- */
 /* results                                                                 */
 

@@ -428,11 +428,28 @@ int px_spec_set_fixed(px_spec *s, const px_db *db, const char *species, double l
 /* Continuation in the totals: solve with every element total scaled down
  * (where cold starts are easy), then raise them in steps, each solve warm
  * from the last.  A standard homotopy for stiff equilibrium problems (e.g.
- * Smith and Missen 1982, ch. 6); used only when a plain solve fails. */
-#define PX_SPEC_CONT_STEPS 6
+ * Smith and Missen 1982, ch. 6); used only when a plain solve fails.  The
+ * steps are a decade each; a step that fails is taken again from the last
+ * solution at half the length, and the length doubles back after a success
+ * (step-length adaptation, Allgower and Georg 1990, Numerical Continuation
+ * Methods, ch. 6): a polynuclear species (Al13O4(OH)24^7+, 13 Al) moves as
+ * the 13th power of its basis species, too far for one decade near where a
+ * solid starts to form.  Numerical choices, no source: */
+#define PX_SPEC_CONT_DECADES 5                  /* first totals: 10^-5 of the given */
+#define PX_SPEC_CONT_MIN_STEP (1.0 / 64.0)       /* shortest step tried, decades */
+#define PX_SPEC_CONT_MAX_SOLVES 64               /* solves in one continuation */
+static double cont_scale(double t)
+{
+    /* whole decades as the literals 1e-5 .. 1 (the scales of the plain
+     * decade steps), the steps between by pow */
+    static const double decade[PX_SPEC_CONT_DECADES + 1] = {1e-5, 1e-4, 1e-3, 1e-2, 1e-1, 1.0};
+    double k = t + PX_SPEC_CONT_DECADES;
+    if (k == floor(k) && k >= 0 && k <= PX_SPEC_CONT_DECADES) return decade[(int)k];
+    return pow(10.0, t);
+}
+
 static int solve_by_continuation(px_spec *s, const px_equil_options *opt)
 {
-    static const double scale[PX_SPEC_CONT_STEPS] = {1e-5, 1e-4, 1e-3, 1e-2, 1e-1, 1.0};
     size_t nb = s->n_basis;
     px_equil_component_result c;
     double given[PX_SPEC_MAX_ITEMS];
@@ -444,12 +461,36 @@ static int solve_by_continuation(px_spec *s, const px_equil_options *opt)
     px_equil_options o = opt ? *opt : px_equil_options_default();
     o.warm = 1;
     px_equil_work_reset(s->work);
-    int st = PX_OK;
-    for (int k = 0; k < PX_SPEC_CONT_STEPS && st == PX_OK; k++) {
+    px_equil_work *last = NULL; /* the last solution, for a step taken again */
+    double t = -PX_SPEC_CONT_DECADES, step = 1.0, t_ok = t;
+    int st = PX_OK, have_last = 0, reached = 0;
+    for (int n = 0; n < PX_SPEC_CONT_MAX_SOLVES; n++) {
+        double f = cont_scale(t);
         for (size_t i = 0; i < nb; i++)
-            if (is_total[i]) px_equil_system_set_total(s->sys, i, given[i] * scale[k]);
+            if (is_total[i]) px_equil_system_set_total(s->sys, i, given[i] * f);
         st = px_equil_solve(s->sys, s->work, &o);
+        if (st == PX_OK) {
+            if (t >= 0.0) {
+                reached = 1;
+                break;
+            }
+            if (!last && px_equil_work_create(&last, s->sys, s->alloc) != PX_OK) {
+                st = PX_ENOMEM;
+                break;
+            }
+            have_last = px_equil_work_copy_state(last, s->work) == PX_OK;
+            t_ok = t;
+            step = fmin(2.0 * step, 1.0);
+        } else {
+            /* the first solve (cold) has nothing to go back to */
+            if (!have_last || step <= PX_SPEC_CONT_MIN_STEP) break;
+            step *= 0.5;
+            px_equil_work_copy_state(s->work, last);
+        }
+        t = fmin(t_ok + step, 0.0);
     }
+    if (last) px_equil_work_free(last);
+    if (st == PX_OK && !reached) st = PX_ENOCONV; /* out of solves short of the given totals */
     for (size_t i = 0; i < nb; i++) /* the given totals, whatever happened */
         if (is_total[i]) px_equil_system_set_total(s->sys, i, given[i]);
     return st;
