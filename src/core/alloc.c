@@ -32,6 +32,20 @@ void *px_realloc(const px_allocator *a, void *ptr, size_t old, size_t size)
     return p;
 }
 
+void *px_grow(const px_allocator *a, void *ptr, size_t *cap, size_t need, size_t elem, size_t first)
+{
+    if (need <= *cap) return ptr;
+    size_t nc = *cap ? *cap : (first ? first : 1);
+    while (nc < need) {
+        if (nc > SIZE_MAX / 2) return NULL;
+        nc *= 2;
+    }
+    if (elem && nc > SIZE_MAX / elem) return NULL;
+    void *p = px_realloc(a, ptr, *cap * elem, nc * elem);
+    if (p) *cap = nc;
+    return p;
+}
+
 char *px_strdup(const px_allocator *a, const char *s)
 {
     size_t n = strlen(s) + 1;

@@ -23,6 +23,12 @@ void *px_calloc(const px_allocator *a, size_t n, size_t size);
 /* Resize ptr (of `old` bytes, NULL for none) to `size` bytes, keeping the
  * first min(old, size); NULL on failure, ptr then untouched. */
 void *px_realloc(const px_allocator *a, void *ptr, size_t old, size_t size);
+/* Room for `need` elements of `elem` bytes in the array ptr holding *cap:
+ * ptr itself if *cap >= need, else the array moved to double the capacity
+ * (at least `first`, at least need) with *cap updated; NULL on failure or
+ * overflow, ptr and *cap then untouched (amortised doubling: the usual
+ * growth rule of dynamic arrays, common practice, no source). */
+void *px_grow(const px_allocator *a, void *ptr, size_t *cap, size_t need, size_t elem, size_t first);
 /* A copy of the string s. */
 char *px_strdup(const px_allocator *a, const char *s);
 void px_free(const px_allocator *a, void *ptr);

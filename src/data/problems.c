@@ -119,15 +119,13 @@ static void vreport(pxd_file *f, px_data_severity sev, int line, const char *spe
         if (f->status == PX_OK) f->status = PX_EDATA;
     }
     px_data_problems *p = f->probs;
-    if (p->n == p->cap) {
-        size_t cap = p->cap ? 2 * p->cap : 16;
-        px_data_problem *it = px_realloc(NULL, p->items, p->cap * sizeof *it, cap * sizeof *it);
+    {
+        px_data_problem *it = px_grow(NULL, p->items, &p->cap, p->n + 1, sizeof *it, 16);
         if (!it) {
             f->oom = 1;
             return;
         }
         p->items = it;
-        p->cap = cap;
     }
     va_list ap2;
     va_copy(ap2, ap);

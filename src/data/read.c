@@ -593,13 +593,9 @@ static void read_species(ctx *c, int t, int index)
 {
     lua_State *L = c->L;
     pxd_file *f = c->f;
-    if (f->n == f->cap) {
-        size_t cap = f->cap ? 2 * f->cap : 32;
-        pxd_entry *n = px_realloc(NULL, f->e, f->cap * sizeof *n, cap * sizeof *n);
-        if (!n) oom(c);
-        f->e = n;
-        f->cap = cap;
-    }
+    pxd_entry *grown = px_grow(NULL, f->e, &f->cap, f->n + 1, sizeof *grown, 32);
+    if (!grown) oom(c);
+    f->e = grown;
     pxd_entry *e = &f->e[f->n++];
     memset(e, 0, sizeof *e);
     e->index = index;

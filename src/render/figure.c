@@ -111,13 +111,9 @@ int px_figure_titles(px_figure *f, int panel, const char *xlabel, const char *yl
 
 static px_item *new_item(px_panel *p)
 {
-    if (p->n_items == p->cap) {
-        size_t cap = p->cap ? 2 * p->cap : 16;
-        px_item *it = px_realloc(NULL, p->items, p->cap * sizeof *it, cap * sizeof *it);
-        if (!it) return NULL;
-        p->items = it;
-        p->cap = cap;
-    }
+    px_item *grown = px_grow(NULL, p->items, &p->cap, p->n_items + 1, sizeof *grown, 16);
+    if (!grown) return NULL;
+    p->items = grown;
     px_item *it = &p->items[p->n_items];
     memset(it, 0, sizeof *it);
     return it;

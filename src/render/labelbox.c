@@ -39,15 +39,13 @@ px_label_box px_box_make(px_label_kind kind, int panel, long item, double size, 
 px_label_box *px_lrec_add(px_lrec *r, px_label_box b, const char *text)
 {
     if (!r || r->failed) return NULL;
-    if (r->n == r->cap) {
-        size_t cap = r->cap ? 2 * r->cap : 64;
-        px_label_box *d = px_realloc(NULL, r->b, r->cap * sizeof *d, cap * sizeof *d);
+    {
+        px_label_box *d = px_grow(NULL, r->b, &r->cap, r->n + 1, sizeof *d, 64);
         if (!d) {
             r->failed = 1;
             return NULL;
         }
         r->b = d;
-        r->cap = cap;
     }
     b.text = px_strdup(NULL, text ? text : "");
     if (!b.text) {

@@ -150,15 +150,13 @@ int px_db_add(px_db *db, const px_species *sp)
         species_release(&c);
         return PX_EINVAL;
     }
-    if (db->n == db->cap) {
-        size_t nc = db->cap ? 2 * db->cap : 32;
-        px_species *p = px_realloc(NULL, db->sp, db->cap * sizeof *p, nc * sizeof *p);
+    {
+        px_species *p = px_grow(NULL, db->sp, &db->cap, db->n + 1, sizeof *p, 32);
         if (!p) {
             species_release(&c);
             return PX_ENOMEM;
         }
         db->sp = p;
-        db->cap = nc;
     }
     db->sp[db->n++] = c;
     db->gen++;
@@ -499,13 +497,9 @@ int px_db_ref_add(px_db *db, const char *key, const char *short_text, const char
     if (!db || !key || !cite || !*key || strlen(key) >= PX_REF_KEY_MAX) return PX_EINVAL;
     const px_ref *old = px_db_ref_find(db, key);
     if (old) return strcmp(old->cite, cite) == 0 ? PX_OK : PX_EINVAL;
-    if (db->nref == db->capref) {
-        size_t cap = db->capref ? 2 * db->capref : 32;
-        px_ref *r = px_realloc(NULL, db->ref, db->capref * sizeof *r, cap * sizeof *r);
-        if (!r) return PX_ENOMEM;
-        db->ref = r;
-        db->capref = cap;
-    }
+    px_ref *grown = px_grow(NULL, db->ref, &db->capref, db->nref + 1, sizeof *grown, 32);
+    if (!grown) return PX_ENOMEM;
+    db->ref = grown;
     px_ref *r = &db->ref[db->nref];
     snprintf(r->key, sizeof r->key, "%s", key);
     r->short_text = dupstr(short_text && *short_text ? short_text : key);
