@@ -148,7 +148,10 @@ function library_build(spec, model_elements)
   end
   for i, sym in ipairs(spec) do
     if type(sym) == "string" and LIGAND_GROUPS[sym] then
-      groups[#groups + 1] = sym
+      if not listed[sym] then -- a group named twice loads once, as elements do
+        listed[sym] = true
+        groups[#groups + 1] = sym
+      end
       for _, e in ipairs(LIGAND_GROUPS[sym]) do add_element(e) end
     elseif type(sym) ~= "string" or not sym:match("^%u%l?$") then
       core.user_error(("phlox.library: entry %d is not an element symbol or a ligand group (%s): '%s'"):format(

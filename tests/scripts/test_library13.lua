@@ -8,6 +8,9 @@ local NERNST = S.chem.nernst_slope(298.15)   -- V per decade at 25 C (CODATA 201
 -- 1. The gold-cyanide diagram (Au with the CN group as ligand, cyanate left
 --    out: the metastable-cyanide convention of hydrometallurgy).
 local lib = phlox.library { "Au", "CN" }
+-- a group named twice (or with its elements) loads its file once, as an element named twice does
+local twice = phlox.library { "Au", "CN", "C", "CN" }
+check(#twice:list() == #lib:list(), ("CN named twice: %d species, once: %d"):format(#twice:list(), #lib:list()))
 local a_au, a_cn = 1e-4, 1e-3
 local m = phlox.map { library = lib, element = "Au", ligand = "CN", ligand_activity = a_cn,
                       activity = a_au, exclude = { "OCN^-" } }
