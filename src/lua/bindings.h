@@ -49,6 +49,12 @@ void px_lua_opt_check_value(lua_State *L, int idx, const char *fname, const char
 /* pushes "file:line: " of the first frame of user code (not an embedded module) */
 void px_lua_push_user_where(lua_State *L);
 int px_lua_user_error(lua_State *L, const char *fmt, ...);
+/* t[key] = s for the table on top of the stack (s copied; NULL pushes nil) */
+static inline void px_lua_setstr(lua_State *L, const char *key, const char *s)
+{
+    lua_pushstring(L, s);
+    lua_setfield(L, -2, key);
+}
 void px_lua_open_practice(lua_State *L);
 void px_lua_open_proc(lua_State *L);
 

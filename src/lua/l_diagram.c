@@ -229,8 +229,7 @@ static int l_map(lua_State *L)
     }
     const px_diagram_map *dm = m->map;
     lua_createtable(L, 0, 16);
-    lua_pushstring(L, element);
-    lua_setfield(L, -2, "element");
+    px_lua_setstr(L, "element", element);
     setnum(L, "T", o.T);
     setnum(L, "P", o.P);
     push_axis(L, "x", o.xaxis, o.window.xmin, o.window.xmax, o.ligand);
@@ -242,16 +241,13 @@ static int l_map(lua_State *L)
         const px_emap_outline *ol = &m->outline[i];
         const px_emap_field *info = &m->info[ol->piece];
         lua_createtable(L, 0, 6);
-        lua_pushstring(L, px_db_get(db, (size_t)info->species)->f.text);
-        lua_setfield(L, -2, "species");
-        lua_pushstring(L, kind_names[info->kind]);
-        lua_setfield(L, -2, "kind");
+        px_lua_setstr(L, "species", px_db_get(db, (size_t)info->species)->f.text);
+        px_lua_setstr(L, "kind", kind_names[info->kind]);
         lua_pushstring(L, px_lua_domain_name(px_emap_domain(&px_db_get(db, (size_t)info->species)->f,
                                                             px_element_z(element))));
         lua_setfield(L, -2, "domain");
         if (info->ligand >= 0) {
-            lua_pushstring(L, px_db_get(db, (size_t)info->ligand)->f.text);
-            lua_setfield(L, -2, "ligand");
+            px_lua_setstr(L, "ligand", px_db_get(db, (size_t)info->ligand)->f.text);
         }
         push_xy(L, m->joined->x + ol->first, m->joined->y + ol->first, ol->n, NULL);
         setnum(L, "area", ol->area);
@@ -277,8 +273,7 @@ static int l_map(lua_State *L)
         lua_pushboolean(L, bd->vertical);
         lua_setfield(L, -2, "vertical");
         lua_setfield(L, -2, "line");
-        lua_pushstring(L, m->bnd[b].reaction);
-        lua_setfield(L, -2, "reaction");
+        px_lua_setstr(L, "reaction", m->bnd[b].reaction);
         lua_rawseti(L, -2, (lua_Integer)b + 1);
     }
     lua_setfield(L, -2, "boundaries");
@@ -295,8 +290,7 @@ static int l_map(lua_State *L)
         lua_createtable(L, (int)lm->nfield, 0);
         for (size_t f = 0; f < lm->nfield; f++) {
             lua_createtable(L, 0, 3);
-            lua_pushstring(L, px_db_get(db, (size_t)m->ligand_species[f])->f.text);
-            lua_setfield(L, -2, "species");
+            px_lua_setstr(L, "species", px_db_get(db, (size_t)m->ligand_species[f])->f.text);
             push_xy(L, lm->vx, lm->vy, lm->field[f].n, lm->ring + lm->field[f].first);
             lua_rawseti(L, -2, (lua_Integer)f + 1);
         }
@@ -324,8 +318,7 @@ static int l_map(lua_State *L)
     for (size_t i = 0; i < dom->nloop; i++) {
         const px_diagram_loop *lp = &dom->loop[i];
         lua_createtable(L, 0, 5);
-        lua_pushstring(L, px_lua_domain_name(lp->cls));
-        lua_setfield(L, -2, "domain");
+        px_lua_setstr(L, "domain", px_lua_domain_name(lp->cls));
         push_xy(L, dom->x + lp->first, dom->y + lp->first, lp->n, NULL);
         setnum(L, "area", fabs(lp->area));
         lua_pushboolean(L, lp->area < 0);
@@ -395,8 +388,7 @@ static int l_grid_map(lua_State *L)
         return 2;
     }
     lua_createtable(L, 0, 12);
-    lua_pushstring(L, element);
-    lua_setfield(L, -2, "element");
+    px_lua_setstr(L, "element", element);
     setnum(L, "T", o.T);
     setnum(L, "P", o.P);
     push_axis(L, "x", PX_AXIS_PH, o.window.xmin, o.window.xmax, NULL);
@@ -438,8 +430,7 @@ static int l_grid_map(lua_State *L)
         lua_pushstring(L, name);
         lua_rawseti(L, -3, nf);
         lua_createtable(L, 0, 8);
-        lua_pushstring(L, name);
-        lua_setfield(L, -2, "species");
+        px_lua_setstr(L, "species", name);
         lua_pushinteger(L, (lua_Integer)gf->count);
         lua_setfield(L, -2, "count");
         setnum(L, "area", gf->area);
@@ -511,17 +502,14 @@ static int l_electrodes(lua_State *L)
         const px_diagram_electrode_info *e = px_diagram_electrode_get(i);
         if (!e) continue;
         lua_createtable(L, 0, 4);
-        lua_pushstring(L, e->name);
-        lua_setfield(L, -2, "name");
+        px_lua_setstr(L, "name", e->name);
         lua_pushnumber(L, e->offset_V);
         lua_setfield(L, -2, "offset");
         setnum(L, "dEdT", e->dEdT_V_K);
         setnum(L, "T_min", e->T_min);
         setnum(L, "T_max", e->T_max);
-        lua_pushstring(L, e->source ? e->source : "");
-        lua_setfield(L, -2, "source");
-        lua_pushstring(L, e->dEdT_source ? e->dEdT_source : "");
-        lua_setfield(L, -2, "dEdT_source");
+        px_lua_setstr(L, "source", e->source ? e->source : "");
+        px_lua_setstr(L, "dEdT_source", e->dEdT_source ? e->dEdT_source : "");
         lua_rawseti(L, -2, i + 1);
     }
     return 1;

@@ -202,8 +202,7 @@ static void push_spec_result(lua_State *L, px_db *db, const px_spec_options *o, 
     setnum(L, "log_aw", stats.log_aw);
     setnum(L, "iterations", (double)stats.iterations);
     setnum(L, "residual", stats.residual_norm);
-    lua_pushstring(L, models[o->model]);
-    lua_setfield(L, -2, "activity_model");
+    px_lua_setstr(L, "activity_model", models[o->model]);
     if (o->model == PX_EQUIL_SIT) {
         setnum(L, "sit_pairs", (double)s->sit_pairs);
         setnum(L, "sit_missing", (double)s->sit_missing);
@@ -233,11 +232,9 @@ static void push_spec_result(lua_State *L, px_db *db, const px_spec_options *o, 
         px_equil_work_get_species(s->work, j, &r);
         if (sp->f.state == PX_STATE_E || sp->f.state == PX_STATE_L) continue;
         lua_createtable(L, 0, 8);
-        lua_pushstring(L, sp->f.text);
-        lua_setfield(L, -2, "formula");
+        px_lua_setstr(L, "formula", sp->f.text);
         int ph = sp->f.state == PX_STATE_S ? 1 : sp->f.state == PX_STATE_G ? 2 : 0;
-        lua_pushstring(L, phases[ph]);
-        lua_setfield(L, -2, "phase");
+        px_lua_setstr(L, "phase", phases[ph]);
         if (ph == 0) {
             setnum(L, "molality", r.molality);
             setnum(L, "log_molality", r.log_molality);
@@ -296,8 +293,7 @@ static int l_speciate(lua_State *L)
         luaL_pushfail(L);
         lua_pushfstring(L, "speciate: %s", msg);
         lua_createtable(L, 0, 4);
-        lua_pushstring(L, px_status_name(st));
-        lua_setfield(L, -2, "status");
+        px_lua_setstr(L, "status", px_status_name(st));
         setnum(L, "iterations", (double)stats.iterations);
         setnum(L, "residual", stats.residual_norm);
         lua_pushinteger(L, stats.fail_kind);
@@ -347,8 +343,7 @@ static int curve_push_point(lua_State *L)
     } else {
         lua_pushfstring(L, "speciate: %s", p->message);
         lua_setfield(L, -2, "err");
-        lua_pushstring(L, px_status_name(p->status));
-        lua_setfield(L, -2, "status");
+        px_lua_setstr(L, "status", px_status_name(p->status));
     }
     setnum(L, "total", p->total);
     lua_pushinteger(L, p->retries);

@@ -50,8 +50,7 @@ void px_lua_push_ligand_text(lua_State *L, const px_ligand_states *ls, const int
     char buf[512];
     px_ligand_states_describe(ls, z, nz, skip_z, buf, sizeof buf);
     if (buf[0]) {
-        lua_pushstring(L, buf);
-        lua_setfield(L, -2, "ligand_states");
+        px_lua_setstr(L, "ligand_states", buf);
     }
 }
 
@@ -74,12 +73,10 @@ static int l_inhibited_solids(lua_State *L)
     lua_createtable(L, (int)n, 0);
     for (size_t i = 0; i < n; i++) {
         lua_createtable(L, 0, 3);
-        lua_pushstring(L, v[i].mineral);
-        lua_setfield(L, -2, "mineral");
+        px_lua_setstr(L, "mineral", v[i].mineral);
         lua_pushnumber(L, v[i].T_max);
         lua_setfield(L, -2, "T_max");
-        lua_pushstring(L, v[i].source);
-        lua_setfield(L, -2, "source");
+        px_lua_setstr(L, "source", v[i].source);
         lua_rawseti(L, -2, (lua_Integer)i + 1);
     }
     return 1;

@@ -336,16 +336,14 @@ static int f_layout(lua_State *L)
     lua_createtable(L, (int)n, 0);
     for (size_t i = 0; i < n; i++) {
         lua_createtable(L, 0, 12);
-        lua_pushstring(L, kinds[b[i].kind]);
-        lua_setfield(L, -2, "kind");
+        px_lua_setstr(L, "kind", kinds[b[i].kind]);
         lua_pushinteger(L, b[i].panel + 1);
         lua_setfield(L, -2, "panel");
         if (b[i].item >= 0) {
             lua_pushinteger(L, b[i].item + 1);
             lua_setfield(L, -2, "item");
         }
-        lua_pushstring(L, b[i].text);
-        lua_setfield(L, -2, "text");
+        px_lua_setstr(L, "text", b[i].text);
         lua_pushboolean(L, b[i].placed);
         lua_setfield(L, -2, "placed");
         lua_pushnumber(L, b[i].size);
@@ -411,10 +409,8 @@ static void emit_run(void *user, int kind, const char *s)
     static const char *const kinds[] = {"normal", "sub", "sup"};
     lua_State *L = user;
     lua_createtable(L, 0, 2);
-    lua_pushstring(L, kinds[kind]);
-    lua_setfield(L, -2, "kind");
-    lua_pushstring(L, s);
-    lua_setfield(L, -2, "text");
+    px_lua_setstr(L, "kind", kinds[kind]);
+    px_lua_setstr(L, "text", s);
     lua_rawseti(L, -2, (lua_Integer)luaL_len(L, -2) + 1);
 }
 

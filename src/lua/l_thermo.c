@@ -68,18 +68,13 @@ static void push_problems(lua_State *L, const px_data_problems *p)
         const px_data_problem *pr = px_data_problems_get(p, i);
         px_data_problem_format(pr, line, sizeof line);
         lua_createtable(L, 0, 6);
-        lua_pushstring(L, line);
-        lua_setfield(L, -2, "text");
-        lua_pushstring(L, pr->severity == PX_DATA_ERROR ? "error" : "warning");
-        lua_setfield(L, -2, "severity");
-        lua_pushstring(L, pr->file);
-        lua_setfield(L, -2, "file");
+        px_lua_setstr(L, "text", line);
+        px_lua_setstr(L, "severity", pr->severity == PX_DATA_ERROR ? "error" : "warning");
+        px_lua_setstr(L, "file", pr->file);
         lua_pushinteger(L, pr->line);
         lua_setfield(L, -2, "line");
-        lua_pushstring(L, pr->species);
-        lua_setfield(L, -2, "species");
-        lua_pushstring(L, pr->message);
-        lua_setfield(L, -2, "message");
+        px_lua_setstr(L, "species", pr->species);
+        px_lua_setstr(L, "message", pr->message);
         lua_rawseti(L, -2, (lua_Integer)i + 1);
     }
 }
@@ -162,14 +157,11 @@ static void push_formula(lua_State *L, const px_formula *f)
 {
     static const char *const states[] = {"aq", "s", "l", "g", "e"};
     lua_createtable(L, 0, 8);
-    lua_pushstring(L, f->text);
-    lua_setfield(L, -2, "formula");
+    px_lua_setstr(L, "formula", f->text);
     lua_pushinteger(L, f->charge);
     lua_setfield(L, -2, "charge");
-    lua_pushstring(L, states[f->state]);
-    lua_setfield(L, -2, "state");
-    lua_pushstring(L, f->form);
-    lua_setfield(L, -2, "form");
+    px_lua_setstr(L, "state", states[f->state]);
+    px_lua_setstr(L, "form", f->form);
     lua_createtable(L, 0, f->n_elem);
     for (int i = 0; i < f->n_elem; i++) {
         lua_pushnumber(L, f->elem[i].n);
@@ -197,14 +189,12 @@ static void push_species(lua_State *L, const px_species *sp, long index)
     push_formula(L, &sp->f);
     lua_pushinteger(L, index + 1);
     lua_setfield(L, -2, "index");
-    lua_pushstring(L, models[sp->model]);
-    lua_setfield(L, -2, "model");
+    px_lua_setstr(L, "model", models[sp->model]);
     setnum(L, "dfG", sp->dGf);
     setnum(L, "dfH", sp->dHf);
     setnum(L, "S", sp->S);
     if (sp->model == PX_MODEL_LOGK) {
-        lua_pushstring(L, sp->logk.reaction);
-        lua_setfield(L, -2, "reaction");
+        px_lua_setstr(L, "reaction", sp->logk.reaction);
         setnum(L, "logK25", sp->logk.logK25);
         setnum(L, "dH", sp->logk.dH); /* J/mol, absent if not given */
         if (sp->logk.dCp != 0) setnum(L, "dCp", sp->logk.dCp); /* J/(mol K), constant */
@@ -217,8 +207,7 @@ static void push_species(lua_State *L, const px_species *sp, long index)
             lua_setfield(L, -2, "estimate_model");
         }
     }
-    lua_pushstring(L, sp->source ? sp->source : "");
-    lua_setfield(L, -2, "source");
+    px_lua_setstr(L, "source", sp->source ? sp->source : "");
     lua_newtable(L); /* the keys the source cites, in order, each once */
     {
         char key[PX_REF_KEY_MAX];
@@ -238,21 +227,17 @@ static void push_species(lua_State *L, const px_species *sp, long index)
     }
     lua_setfield(L, -2, "refs");
     if (sp->file) {
-        lua_pushstring(L, sp->file);
-        lua_setfield(L, -2, "file");
+        px_lua_setstr(L, "file", sp->file);
         lua_pushinteger(L, sp->line);
         lua_setfield(L, -2, "line");
     }
-    lua_pushstring(L, sp->quality);
-    lua_setfield(L, -2, "quality");
+    px_lua_setstr(L, "quality", sp->quality);
     lua_pushboolean(L, sp->estimated);
     lua_setfield(L, -2, "estimated");
     /* temperature basis: measured, estimated (by basis_method), held, no Cp */
-    lua_pushstring(L, px_tbasis_name(sp->tbasis));
-    lua_setfield(L, -2, "basis");
+    px_lua_setstr(L, "basis", px_tbasis_name(sp->tbasis));
     if (sp->tmethod[0]) {
-        lua_pushstring(L, sp->tmethod);
-        lua_setfield(L, -2, "basis_method");
+        px_lua_setstr(L, "basis_method", sp->tmethod);
     }
     setnum(L, "Tmin", sp->Tmin);
     setnum(L, "Tmax", sp->Tmax);
@@ -408,8 +393,7 @@ static int db_reaction(lua_State *L)
     lua_setfield(L, -2, "P");
     char canon[PX_MSG];
     if (px_reaction_format(&r, canon, sizeof canon) == PX_OK) {
-        lua_pushstring(L, canon);
-        lua_setfield(L, -2, "text");
+        px_lua_setstr(L, "text", canon);
     }
     return 1;
 }
@@ -482,12 +466,9 @@ static int db_references(lua_State *L)
     for (size_t i = 0; i < n; i++) {
         const px_ref *r = px_db_ref_get(u->db, i);
         lua_createtable(L, 0, 3);
-        lua_pushstring(L, r->key);
-        lua_setfield(L, -2, "key");
-        lua_pushstring(L, r->short_text);
-        lua_setfield(L, -2, "short");
-        lua_pushstring(L, r->cite);
-        lua_setfield(L, -2, "cite");
+        px_lua_setstr(L, "key", r->key);
+        px_lua_setstr(L, "short", r->short_text);
+        px_lua_setstr(L, "cite", r->cite);
         lua_rawseti(L, -2, (lua_Integer)i + 1);
     }
     return 1;

@@ -24,6 +24,14 @@ static void dump(const px_data_problems *p)
     }
 }
 
+/* Loads src into db; on failure prints the problems and fails the test. */
+static void load_ok(px_db *db, px_data_problems *p, const char *src, const char *name)
+{
+    int st = px_data_load_buffer(db, src, strlen(src), name, NULL, p);
+    if (st != PX_OK) dump(p);
+    assert_int_equal(st, PX_OK);
+}
+
 /* true if some rendered problem contains every one of the NULL-ended needles */
 static int has(const px_data_problems *p, ...)
 {
@@ -150,9 +158,7 @@ static void test_species_units_override_kcal(void **state)
                       "    source = 'from memory of Shock and Helgeson 1988' } } }\n";
     px_db *db = px_db_new();
     px_data_problems *p = px_data_problems_new();
-    int st = px_data_load_buffer(db, src, strlen(src), "inline.lua", NULL, p);
-    if (st != PX_OK) dump(p);
-    assert_int_equal(st, PX_OK);
+    load_ok(db, p, src, "inline.lua");
     const px_species *z = px_db_find(db, "Zn^2+");
     assert_close(z->dGf, -35200 * 4.184, 1e-12, 0);
     assert_close(z->dHf, -36660 * 4.184, 1e-12, 0);
@@ -179,9 +185,7 @@ static void test_uncertainty_stored(void **state)
     px_db *db = px_db_new();
     px_data_problems *p = px_data_problems_new();
     assert_int_equal(px_db_add_builtins(db), PX_OK);
-    int st = px_data_load_buffer(db, src, strlen(src), "u.lua", NULL, p);
-    if (st != PX_OK) dump(p);
-    assert_int_equal(st, PX_OK);
+    load_ok(db, p, src, "u.lua");
     const px_species *z = px_db_find(db, "Zn^2+");
     assert_close(z->unc.H, 200.0, 1e-12, 0);
     assert_close(z->unc.S, 0.5, 1e-12, 0);
@@ -223,9 +227,7 @@ static void test_hkf_estimate_fe2(void **state)
                       "source = 'from memory of Shock et al. 1997' } } }\n";
     px_db *db = px_db_new();
     px_data_problems *p = px_data_problems_new();
-    int st = px_data_load_buffer(db, src, strlen(src), "fe.lua", NULL, p);
-    if (st != PX_OK) dump(p);
-    assert_int_equal(st, PX_OK);
+    load_ok(db, p, src, "fe.lua");
     const px_species *fe = px_db_find(db, "Fe^2+");
     assert_non_null(fe);
     assert_true(fe->estimated);
@@ -300,9 +302,7 @@ static void test_logk_estimate_basis(void **state)
                      " logK = -17.8, source = 's' } } }\n";
     px_db *db = px_db_new();
     px_data_problems *p = px_data_problems_new();
-    int st = px_data_load_buffer(db, ok, strlen(ok), "e.lua", NULL, p);
-    if (st != PX_OK) dump(p);
-    assert_int_equal(st, PX_OK);
+    load_ok(db, p, ok, "e.lua");
     const px_species *a = px_db_find(db, "Zn^2+");
     const px_species *b = px_db_find(db, "ZnOH^+");
     const px_species *c = px_db_find(db, "Zn(OH)2(aq)");
@@ -339,9 +339,7 @@ static void test_logk_estimate_basis(void **state)
                       " source = 's' } } }\n";
     db = px_db_new();
     px_data_problems_clear(p);
-    st = px_data_load_buffer(db, mod, strlen(mod), "m.lua", NULL, p);
-    if (st != PX_OK) dump(p);
-    assert_int_equal(st, PX_OK);
+    load_ok(db, p, mod, "m.lua");
     out = tmpfile();
     assert_non_null(out);
     assert_int_equal(px_data_list_write(db, "Zn", out), 3);
@@ -365,9 +363,7 @@ static void test_logk_estimate_basis(void **state)
                      "{ formula = 'ZnOH^+', model = 'logk', reaction = 'Zn^2+ + H2O(l) = ZnOH^+ + H^+',"
                      " logK = -8.96, dH = 56.07, dCp = -60, estimate = { dCp = 'criss-cobble' }, source = 's' } } }\n";
     db = px_db_new();
-    st = px_data_load_buffer(db, cp, strlen(cp), "c.lua", NULL, p);
-    if (st != PX_OK) dump(p);
-    assert_int_equal(st, PX_OK);
+    load_ok(db, p, cp, "c.lua");
     a = px_db_find(db, "Zn^2+");
     b = px_db_find(db, "ZnOH^+");
     assert_close(a->logk.dCp, -40, 0, 0); /* always J/(mol K) */
@@ -417,9 +413,7 @@ static void test_cp_kopp_estimate(void **state)
                      " estimate = { Cp = 'kopp' }, source = 's' } } }\n";
     px_db *db = px_db_new();
     px_data_problems *p = px_data_problems_new();
-    int st = px_data_load_buffer(db, ok, strlen(ok), "k.lua", NULL, p);
-    if (st != PX_OK) dump(p);
-    assert_int_equal(st, PX_OK);
+    load_ok(db, p, ok, "k.lua");
     assert_int_equal(px_data_problems_count(p), 0); /* no "Cp taken as 0" warning */
     const px_species *a = px_db_find(db, "Ni(OH)2(s)");
     assert_close(a->cp.a, 45 + (2 * 2.3 + 4.0) * 4.184, 1e-12, 0);
@@ -682,9 +676,7 @@ static void test_references(void **state)
         "    source = 'from memory of [DOE2020]; S from memory of [NBS82]' } } }\n";
     px_db *db = px_db_new();
     px_data_problems *p = px_data_problems_new();
-    int st = px_data_load_buffer(db, good, strlen(good), "refs.lua", NULL, p);
-    if (st != PX_OK) dump(p);
-    assert_int_equal(st, PX_OK);
+    load_ok(db, p, good, "refs.lua");
     assert_int_equal(px_data_problems_count(p), 0);
     /* both keys now in the database, each once, with their citations */
     assert_int_equal(px_db_ref_count(db), 2);
