@@ -372,6 +372,24 @@ static void test_logk_estimate_basis(void **state)
     assert_string_equal(b->tmethod, PX_METHOD_CRISS_COBBLE);
     px_db_free(db);
 
+    /* a measured dH whose dCp(T) is that of an isocoulombic model reaction:
+     * estimated, the model kept (docs/thermo.md) */
+    const char *iso = "return { element = 'Zn', species = {\n"
+                      "{ formula = 'Zn^2+', model = 'logk', reaction = 'Zn(s) + 2 H^+ = Zn^2+ + H2(g)',"
+                      " logK = 25.79, dH = -153.9,"
+                      " estimate = { dCp = 'isocoulombic', model = 'Mg(s) + 2 H^+ = Mg^2+ + H2(g)' },"
+                      " source = 's' } } }\n";
+    db = px_db_new();
+    load_ok(db, p, iso, "i.lua");
+    a = px_db_find(db, "Zn^2+");
+    assert_int_equal(a->logk.cp_estimate, PX_LOGK_CP_EST_ISOCOULOMBIC);
+    assert_int_equal(a->logk.estimate, PX_LOGK_EST_NONE);
+    assert_string_equal(a->logk.model, "Mg(s) + 2 H^+ = Mg^2+ + H2(g)");
+    assert_close(a->logk.dCp, 0, 0, 0);
+    assert_int_equal(a->tbasis, PX_TBASIS_ESTIMATED);
+    assert_string_equal(a->tmethod, PX_METHOD_ISO_CP);
+    px_db_free(db);
+
     static const char *const bad[][2] = {
         {"estimate = 'vant-hoff'", "estimate: unknown estimation method 'vant-hoff'"},
         {"estimate = 'isocoulombic', dH = 13.4", "estimate: an estimate stands in for missing temperature data: this species has dH"},
@@ -388,6 +406,14 @@ static void test_logk_estimate_basis(void **state)
         {"dH = 13.4, estimate = { dCp = 'criss-cobble' }", "estimate.dCp: estimate = { dCp = \"criss-cobble\" } names how"},
         {"dH = 13.4, dCp = -50, estimate = { dCp = 'criss-cobble', model = 'Cu^2+ + Cl^- = CuCl^+' }",
          "estimate.model: a model reaction belongs to estimate.method"},
+        {"dH = 13.4, dCp = -50, estimate = { dCp = 'isocoulombic', model = 'Cu^2+ + H2O(l) = CuOH^+ + H^+' }",
+         "estimate.dCp: with estimate = { dCp = \"isocoulombic\" } the reaction's dCp is the model"},
+        {"estimate = { dCp = 'isocoulombic', model = 'Cu^2+ + H2O(l) = CuOH^+ + H^+' }",
+         "estimate.dCp: estimate = { dCp = \"isocoulombic\" } extends a measured dH: give 'dH'"},
+        {"dH = 13.4, estimate = { dCp = 'isocoulombic' }",
+         "estimate.model: estimate = { dCp = \"isocoulombic\" } takes the dCp of a model reaction"},
+        {"dH = 13.4, estimate = { dCp = 'isocoulombic', model = 'Zn^2+ + H2O(l) = ZnOH^+ + H^+' }",
+         "estimate.model: the model reaction must not contain the species itself (ZnOH^+)"},
     };
     expect_errors(p,
                   "return { element = 'Zn', species = {\n"
