@@ -34,7 +34,7 @@ return {
       estimate = { dCp = "isocoulombic", model = "Mg(s) + 2 H^+ = Mg^2+ + H2(g)" },
       source = "derived here from " .. NBS .. ": Co2+ dfG -54.4, dfH -58.2 kJ/mol, S -113 J/(mol K)",
       quality = "medium",
-      note = "E0(Co2+/Co) = -0.282 V (CRC -0.28). No Cp recalled; van 't Hoff only above 25 C.",
+      note = "E0(Co2+/Co) = -0.282 V (CRC -0.28). No Cp recalled: the heat capacity is the isocoulombic estimate above.",
     },
     {
       formula = "Co^3+", model = "logk",

@@ -99,7 +99,7 @@ return {
       estimate = { dCp = "isocoulombic", model = "S(s,rhombic) + 4 H2O(l) = SO4^2- + 2 H^+ + 3 H2(g)" },
       source = "derived here from " .. NBS .. ": CrO4^2- dfG -727.75, dfH -881.15 kJ/mol, S 50.21 J/(mol K)",
       quality = "high",
-      note = "No Cp recalled; defined by its formation reaction. Van 't Hoff only above 25 C.",
+      note = "No Cp recalled; defined by its formation reaction, with the isocoulombic heat capacity above (dCp of the SO4^2- formation reaction).",
     },
     {
       formula = "HCrO4^-", model = "logk",

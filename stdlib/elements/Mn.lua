@@ -61,7 +61,7 @@ return {
       estimate = { dCp = "isocoulombic", model = "S(s,rhombic) + 4 H2O(l) = SO4^2- + 2 H^+ + 3 H2(g)" },
       source = "derived here from " .. NBS .. ": MnO4^2- dfG -500.7, dfH -653 kJ/mol, S 59 J/(mol K)",
       quality = "medium",
-      note = "No Cp recalled; defined by its formation reaction. E0(MnO4-/MnO4^2-) = 0.554 V (CRC 0.558).",
+      note = "No Cp recalled; defined by its formation reaction, with the isocoulombic heat capacity above (dCp of the SO4^2- formation reaction). E0(MnO4-/MnO4^2-) = 0.554 V (CRC 0.558).",
     },
     -- Mn(II) hydrolysis ------------------------------------------------------
     {

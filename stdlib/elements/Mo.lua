@@ -48,7 +48,7 @@ return {
       estimate = { dCp = "isocoulombic", model = "S(s,rhombic) + 2 O2(g) + H2(g) = SO4^2- + 2 H^+" },
       source = "derived here from " .. NBS .. ": dfG -836.3, dfH -997.9 kJ/mol, S 27.2 J/(mol K)",
       quality = "medium",
-      note = "conventional formation reaction, log K = 836.3/5.70801. Shock et al. 1997 list about -199.9 kcal/mol (-836.4 kJ/mol) for dfG (recalled). Older tables (Latimer) carry about -915 kJ/mol; the CRC couple MoO4^2-/Mo (-1.05 V) follows those (this file gives -0.910 V). Van 't Hoff with constant dH: rough above about 100 C.",
+      note = "conventional formation reaction, log K = 836.3/5.70801. Shock et al. 1997 list about -199.9 kcal/mol (-836.4 kJ/mol) for dfG (recalled). Older tables (Latimer) carry about -915 kJ/mol; the CRC couple MoO4^2-/Mo (-1.05 V) follows those (this file gives -0.910 V). Heat capacity: the isocoulombic estimate above (dCp of the SO4^2- formation reaction).",
     },
     {
       formula = "HMoO4^-", model = "logk",

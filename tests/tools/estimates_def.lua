@@ -695,6 +695,18 @@ M.DOCUMENTED = {
   ["model: same type"] = { [100] = { mean = 0.325, max = 1.067 }, [200] = { mean = 0.598, max = 1.964 }, [300] = { mean = 0.776, max = 2.547 } },
   ["model: ligand acid"] = { [100] = { mean = 1.053, max = 2.443 }, [200] = { mean = 2.599, max = 6.240 }, [300] = { mean = 4.449, max = 10.952 } },
   ["Cp = 0"] = { [100] = { mean = 0.112, max = 0.464 }, [200] = { mean = 0.441, max = 1.825 }, [300] = { mean = 0.834, max = 3.449 } },
+  -- single-ion heat capacities (run_ions; error in G of the ion, log K units)
+  ["+1 metal cation: Criss-Cobble"] = { [100] = { mean = 0.091, max = 0.097 }, [200] = { mean = 0.390, max = 0.408 }, [300] = { mean = 0.705, max = 0.738 } },
+  ["+1 metal cation: dCp = 0"] = { [100] = { mean = 0.021, max = 0.041 }, [200] = { mean = 0.085, max = 0.165 }, [300] = { mean = 0.161, max = 0.278 } },
+  ["+1 metal cation: model ion"] = { [100] = { mean = 0.042, max = 0.043 }, [200] = { mean = 0.171, max = 0.173 }, [300] = { mean = 0.323, max = 0.325 } },
+  ["+2 metal cation: Criss-Cobble"] = { [100] = { mean = 0.149, max = 0.164 }, [200] = { mean = 0.580, max = 0.650 }, [300] = { mean = 0.908, max = 1.043 } },
+  ["+2 metal cation: dCp = 0"] = { [100] = { mean = 0.017, max = 0.029 }, [200] = { mean = 0.115, max = 0.167 }, [300] = { mean = 0.403, max = 0.501 } },
+  ["+2 metal cation: model ion"] = { [100] = { mean = 0.024, max = 0.024 }, [200] = { mean = 0.105, max = 0.106 }, [300] = { mean = 0.196, max = 0.197 } },
+  ["-1 acid oxyanion: dCp = 0"] = { [100] = { mean = 0.121, max = 0.134 }, [200] = { mean = 0.539, max = 0.581 }, [300] = { mean = 1.322, max = 1.398 } },
+  ["-1 acid oxyanion: model ion"] = { [100] = { mean = 0.025, max = 0.028 }, [200] = { mean = 0.083, max = 0.088 }, [300] = { mean = 0.153, max = 0.159 } },
+  ["-1 oxyanion: dCp = 0"] = { [100] = { mean = 0.152, max = 0.152 }, [200] = { mean = 0.622, max = 0.622 }, [300] = { mean = 1.424, max = 1.424 } },
+  ["-2 oxyanion: dCp = 0"] = { [100] = { mean = 0.446, max = 0.485 }, [200] = { mean = 1.833, max = 1.999 } },
+  ["-2 oxyanion: model ion"] = { [100] = { mean = 0.079, max = 0.081 }, [200] = { mean = 0.332, max = 0.337 } },
 }
 
 local function f2(x) return x and ("%+.2f"):format(x) or "" end
