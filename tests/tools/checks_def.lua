@@ -528,7 +528,7 @@ local PB_POLY_WHY = "file: Baes and Mesmer 1976 (recalled); IUPAC review (recall
 local NEA05 = "from memory of the NEA-TDB nickel review (Gamsjaeger et al. 2005, Chemical Thermodynamics of Nickel; I = 0, 25 C)"
 local CODATA89 = "derived here from the CODATA 1989 key values (Cox, Wagman and Medvedev; recalled): "
 rk("Ba^2+ + H2O(l) = BaOH^+ + H^+", -13.32, BE16_BA, "medium",
-   { note = "0.15: file: Baes and Mesmer 1976 -13.47, which Nordstrom et al. 1990 copy (same table, read); Brown and Ekberg re-evaluated the few measurements of this weak complex. Within the medium class" })
+   { same = true, note = "s5-hyd (issue 13): Ba.lua now takes BaOH^+ from this very evaluation (it had Baes and Mesmer 1976 -13.47, 0.15 off); the independent row is the Baes and Mesmer column (section 4f)" })
 rk("Zn^2+ + H2O(l) = ZnOH^+ + H^+", -8.96, POWELL13 .. ": log *beta1 -8.96 +- 0.05", "medium", { note = "file: Baes and Mesmer 1976 -8.96 (recalled)" })
 rk("Zn^2+ + 2 H2O(l) = Zn(OH)2(aq) + 2 H^+", -17.82, POWELL13 .. ": log *beta2 -17.82 +- 0.08", "medium", { known = { diff = 0.92, margin = 0.02,
   why = "file: Baes and Mesmer 1976 -16.9 (recalled); the IUPAC review (-17.82, recalled) re-evaluated the zincite solubility and potentiometric data with specific ion interaction theory. Zn(OH)2(aq) dominates at most over a narrow pH window near 9-10, so its constant is poorly defined; with the file's value it holds about 8 times more zinc there than with the review's. Both recalled; the file keeps Baes and Mesmer (one compilation for all Zn hydrolysis species) until the review's table can be read" } })
@@ -572,6 +572,35 @@ crc("Co(NH3)6^2+ + 2 e- = Co(s) + 6 NH3(aq)", -0.422, "low", { note = "11 mV: fi
 add({ kind = "logK", reaction = "Sn(s) = Sn(s,gray)", T_C = 13.2, group = "T_other", value = 0, tolclass = "Sn_T",
       source = "from memory of the measured white/gray tin transition temperature, 13.2 C (286.35 K; CRC Handbook of Chemistry and Physics, and Sn.lua's own note): log K = 0 there", confidence = "high",
       note = "file: NBS 1982 gray tin (dfG 0.13, dfH -2.09 kJ/mol, S 44.14) against white tin with the CODATA S (51.18; NBS 51.55)" })
+
+-- 4f. issue 13 coverage, s5-hyd: hydrolysis records of the metals (not Fe).
+-- The Wikipedia article 'Hydrolysis constant' (Baes and Mesmer 1976,
+-- Nordstrom et al. 1990, Brown and Ekberg 2016 side by side) could be read
+-- only as far as its stored copies reach: Al, Am, Ba, Be and B (the copies
+-- end there; the transition-metal tables were not reachable).  So the read
+-- rows are B and Ba; Ba.lua moved BaOH^+ to Brown and Ekberg (read, with its
+-- +-), the row above became same-source and the Baes and Mesmer column is
+-- the independent row here.  The other rows are recalled: Smith and Martell's
+-- first OH- constants (written with OH^-, so phlox's own water ionisation
+-- converts them) and the NEA-TDB nickel review.  Hydrolysis records still
+-- without a second value: docs/data-checks.md ("Coverage").
+local HYD_WIKI_B = "as tabulated in the Wikipedia article 'Hydrolysis constant' (read, 2023-11 copy)"
+rk("Ba^2+ + H2O(l) = BaOH^+ + H^+", -13.47, "Baes and Mesmer 1976, The Hydrolysis of Cations (I = 0, 25 C), " .. HYD_WIKI_B .. ": -13.47; Nordstrom et al. 1990 print the same -13.47 (same table)", "medium",
+   { note = "0.15: file (s5-hyd): Brown and Ekberg 2016 -13.32 +- 0.07 (read in the same table), a re-evaluation of the few measurements of this weak complex; Nordstrom et al. 1990 copy Baes and Mesmer. Within the medium class; BaOH^+ matters only above pH 12" })
+rk("B(OH)3(aq) + H2O(l) = B(OH)4^- + H^+", -9.236, "NIST SRD 46 (Smith and Martell's critically selected constants, I = 0, 25 C), " .. HYD_WIKI_B .. ": -9.236 +- 0.002 (Baes and Mesmer 1976, same table: -9.236)", "high",
+   { note = "file: Mesmer, Baes and Sweeton 1972 log K(T) with phlox's water ionisation; the Baes and Mesmer column is the same group's value, the NIST column Smith and Martell's selection (which includes the same measurements among others)" })
+rk("Sr^2+ + OH^- = SrOH^+", 0.82, SM .. ": log K1(OH) 0.82", "medium",
+   { note = "0.12: file: Baes and Mesmer 1976 -13.29 (recalled) for Sr^2+ + H2O = SrOH^+ + H^+, i.e. 0.70 here with phlox's water ionisation; SrOH^+ is a weak ion pair, measured only above pH 12 where activity corrections dominate; within the medium class" })
+rk("Mn^2+ + OH^- = MnOH^+", 3.4, SM .. ": log K1(OH) 3.4 (two digits)", "medium",
+   { note = "file: Baes and Mesmer 1976 -10.59 (recalled) with phlox's water ionisation" })
+rk("Co^2+ + OH^- = CoOH^+", 4.3, SM .. ": log K1(OH) 4.3 (two digits)", "medium",
+   { note = "file: Baes and Mesmer 1976 -9.65 (recalled; the reference row of log_k_25C.csv is that same value)" })
+rk("Na^+ + OH^- = NaOH(aq)", -0.2, SM .. ": log K1(OH) -0.2 (one digit)", "low",
+   { note = "file: Baes and Mesmer 1976 -14.18 for Na^+ + H2O = NaOH(aq) + H^+ (recalled). The ion pair is so weak that the constant rests on activity models of concentrated NaOH; it matters only above pH 13.5" })
+rk("Ni^2+ + 3 H2O(l) = Ni(OH)3^- + 3 H^+", -29.2, NEA05 .. ": log *beta3 -29.2 +- 1.7", "low", { known = { diff = -0.80, margin = 0.02,
+  why = "file: Baes and Mesmer 1976 -30.0 (recalled); NEA-TDB -29.2 +- 1.7 (recalled): the difference is half the review's own uncertainty. Ni(OH)3^- rests on the solubility of NiO and Ni(OH)2 in strong base, a few tenths of a micromole per kg, so the constants scatter; the file keeps Baes and Mesmer for all Ni hydrolysis species (NiOH^+ and Ni4(OH)4^4+ rows above)" } })
+rk("2 Ni^2+ + H2O(l) = Ni2OH^3+ + H^+", -10.6, NEA05 .. ": log *beta21 -10.6 +- 1.0", "low",
+   { note = "file: Baes and Mesmer 1976 -10.7 (recalled); the dimer forms only in concentrated Ni(II) solutions, hence the review's +-1.0" })
 
 -- 5. temperatures other than 25 C ------------------------------------------
 -- pKw along saturation: phlox's HKF OH^- against IAPWS R11-07 (water.csv,
@@ -948,7 +977,7 @@ end
 -- ---------------------------------------------------------------- document
 -- Short labels for the table's source column (full text in the notes).
 local SHORT = {
-  { "Nordstrom 2022", "Nordstrom 2022 (abstract read)" }, { "Talanta 1971", "Talanta 1971 (abstract read)" },
+  { "NIST SRD 46", "NIST SRD 46 (read)" }, { "Nordstrom 2022", "Nordstrom 2022 (abstract read)" }, { "Talanta 1971", "Talanta 1971 (abstract read)" },
   { "Moreno, Gregory and Brown 1966", "Moreno et al. 1966 (abstract read)" }, { "Bull. Soc. Chim. Belg.", "Bull. Soc. Chim. Belg. 1990 (abstract read)" },
   { "in the quaternary system", "brushite solubility, 25 C (abstract read)" },
   { "Siebert and Hostetler", "Siebert & Hostetler 1977 (abstract read)" }, { "Compilation of Henry's law", "Sander compilation (read)" },
