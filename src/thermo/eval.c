@@ -426,6 +426,22 @@ static int model_expand(px_thermo_ws *ws, const px_db *db, const char *who, cons
     return PX_OK;
 }
 
+/* PX_OK if every species model's dG(T) rests on (after model_expand) has
+ * measured temperature data, else PX_EDATA naming the first that has not */
+static int model_measured(px_thermo_ws *ws, const px_db *db, const char *who,
+                          const px_reaction *model, const char *what)
+{
+    model_term terms[MODEL_TERMS];
+    int nt = 0;
+    int st = model_expand(ws, db, who, model, 1.0, NULL, terms, &nt, 0);
+    for (int i = 0; !st && i < nt; i++)
+        if (fabs(terms[i].c) > MODEL_CANCEL_TOL &&
+            px_species_tbasis(terms[i].sp, NULL) != PX_TBASIS_MEASURED)
+            st = werr(ws, PX_EDATA, "%s: %s: %s has no measured temperature data (%s)", who, what,
+                      terms[i].sp->f.text, px_tbasis_name(px_species_tbasis(terms[i].sp, NULL)));
+    return st;
+}
+
 /* reaction dG, dH, dS, dCp by the isocoulombic estimate (px_isocoulombic_logK);
  * model (may be NULL): a reaction with measured data subtracted from r first
  * (the model-reaction form of the method, Lindsay 1980; Gu et al. 1994) */
@@ -447,18 +463,8 @@ static int iso_reaction(px_thermo_ws *ws, const px_db *db, const char *who,
             return werr(ws, PX_EDATA, "%s: water ionisation does not parse", who);
         st = combo_reaction(ws, db, who, &water, T, P, full, &w, &wref);
     }
-    if (!st && model && db) { /* a model carries measured data */
-        model_term terms[MODEL_TERMS];
-        int nt = 0;
-        st = model_expand(ws, db, who, model, 1.0, NULL, terms, &nt, 0);
-        for (int i = 0; !st && i < nt; i++)
-            if (fabs(terms[i].c) > MODEL_CANCEL_TOL &&
-                px_species_tbasis(terms[i].sp, NULL) != PX_TBASIS_MEASURED)
-                st = werr(ws, PX_EDATA,
-                          "%s: isocoulombic model reaction: %s has no measured temperature data (%s)",
-                          who, terms[i].sp->f.text,
-                          px_tbasis_name(px_species_tbasis(terms[i].sp, NULL)));
-    }
+    if (!st && model && db) /* a model carries measured data */
+        st = model_measured(ws, db, who, model, "isocoulombic model reaction");
     if (!st && model)
         st = combo_reaction(ws, db, who, model, T, P, full, &mp, &mref);
     if (st)
@@ -493,16 +499,7 @@ static int iso_cp_reaction(px_thermo_ws *ws, const px_db *db, const char *who,
                     "%s: the model reaction of an isocoulombic dCp must carry the same ionic charge "
                     "(reaction minus model isocoulombic): %s vs %s",
                     who, lk->reaction, lk->model);
-    model_term terms[MODEL_TERMS];
-    int nt = 0;
-    int st = model_expand(ws, db, who, model, 1.0, NULL, terms, &nt, 0);
-    for (int i = 0; !st && i < nt; i++)
-        if (fabs(terms[i].c) > MODEL_CANCEL_TOL &&
-            px_species_tbasis(terms[i].sp, NULL) != PX_TBASIS_MEASURED)
-            st = werr(ws, PX_EDATA,
-                      "%s: isocoulombic dCp model reaction: %s has no measured temperature data (%s)",
-                      who, terms[i].sp->f.text,
-                      px_tbasis_name(px_species_tbasis(terms[i].sp, NULL)));
+    int st = model_measured(ws, db, who, model, "isocoulombic dCp model reaction");
     px_thermo_props m0, mt;
     double gref;
     if (!st) /* the model at Tr, Pr (full properties: H and S) */
