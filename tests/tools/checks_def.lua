@@ -743,6 +743,17 @@ for _, t in ipairs({ 100, 150, 200, 250 }) do
         source = BDH09C, confidence = "high",
         note = "C.lua defines siderite by this fit; the row guards the chain. The previous record (Nordstrom et al. 1990, van 't Hoff) was 0.67/1.38/2.16/2.96 above it at 100/150/200/250 C" })
 end
+-- A second siderite fit at temperature, independent of the file's: Sun, Nesic
+-- and Woollam 2009 (recalled), a fit to published solubilities 5-250 C.
+local SNW09 = "from memory of Sun, Nesic and Woollam 2009, Corros. Sci. 51, 1273: log Ksp = -59.3498 - 0.041377 T - 2.1963/T + 24.5724 log10 T + 2.518 I^0.5 - 0.657 I (T in K; here I = 0; -10.89 at 25 C), fitted to published siderite solubilities"
+local SNW09_KNOWN = { [100] = -0.331, [200] = -0.523 }
+for _, t in ipairs({ 100, 200 }) do
+  add({ kind = "logK", reaction = "FeCO3(s,siderite) = Fe^2+ + CO3^2-", T_C = t, group = "T_other",
+        value_fn = function(T) return -59.3498 - 0.041377 * T - 2.1963 / T + 24.5724 * log10(T) end,
+        source = SNW09, confidence = "medium",
+        known = { diff = SNW09_KNOWN[t], margin = 0.02,
+          why = "two fits disagree: the file's Benezeth et al. 2009 rests on its own measurements to 250 C (abstract read); the recalled corrosion-literature fit of Sun et al. 2009 combines older data sets (mostly below 100 C) and is less steep. Both fall far below the previous van 't Hoff record (-11.26 at 100 C, -11.56 at 200 C)" } })
+end
 
 M.checks = C
 
