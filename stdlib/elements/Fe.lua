@@ -203,7 +203,12 @@ return {
              "-492.3 kJ/mol with this file's ions. The CRC couples Fe(OH)2/Fe (-0.877 V) and Fe(OH)3/Fe(OH)2 (-0.56 V) were " ..
              "computed from the NBS-era dfG and now differ by -44 and +74 mV (docs/data-checks.md). Temperature: van 't Hoff " ..
              "with the calorimetric NBS dfH (no measured solubility at temperature read). Metastable against magnetite + " ..
-             "H2 (Schikorr reaction, dG -12.8 kJ/mol at 25 C with these data).",
+             "H2 (Schikorr reaction, dG -12.8 kJ/mol at 25 C with these data), yet stable against Fe + magnetite, so at 25 C and " ..
+             "1e-6 it has a field between them below the hydrogen line (tests/scripts/test_published_iron.lua). In flowing " ..
+             "hydrogenated water (234 umol/kg H2) a hydrous Fe(II) oxide, not magnetite, controlled Fe(II) solubility below " ..
+             "83 C (Ziemniak, Jones and Combs, J. Solution Chem., abstract read); with these data magnetite is the stable " ..
+             "phase there at every temperature (log K of 3 Fe(OH)2 = Fe3O4 + H2(aq) + 2 H2O is -0.86 at 25 C against log " ..
+             "m(H2) = -3.63), so the observation is read as slow magnetite formation: a diagram says what can form, not how fast.",
     },
     {
       formula = "Fe(OH)3(s)", model = "cp",
