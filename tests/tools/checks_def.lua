@@ -576,8 +576,8 @@ crc("Co^3+ + e- = Co^2+", 1.92, "medium", { known = { diff = 0.0326, margin = 0.
 -- from; if from Bjerrum's, they check the file's arithmetic more than the
 -- constants (the notes say so).
 crc("Cu(NH3)2^+ + e- = Cu(s) + 2 NH3(aq)", -0.12, "low", { note = "file: Smith and Martell log beta2 10.86 (I = 0, recalled) on the NBS Cu^+; the CRC value has two decimals" })
-crc("Cd(NH3)4^2+ + 2 e- = Cd(s) + 4 NH3(aq)", -0.622, "low", { note = "file: Bjerrum 1941 log beta4 7.12 (2 mol/L NH4NO3, 30 C, via Smith and Martell) on the CODATA Cd^2+; 8 mV is 0.27 in log beta4, about the change of medium from 2 mol/L NH4NO3 to I = 0 that the Cu ammines show. Which constants the CRC used is not known" })
-crc("Co(NH3)6^2+ + 2 e- = Co(s) + 6 NH3(aq)", -0.422, "low", { note = "11 mV: file: Bjerrum 1941 log beta6 5.11 (2 mol/L NH4NO3, 30 C, via Smith and Martell) on the NBS Co^2+ (the CRC value implies 4.74, 0.37 lower); which constants the CRC used is not known" })
+crc("Cd(NH3)4^2+ + 2 e- = Cd(s) + 4 NH3(aq)", -0.622, "low", { note = "20 mV: file (s5-lig): Smith and Martell log beta4 6.74 at I = 0 (read in Harvey's appendix) on the CODATA Cd^2+ (-0.403 V); the CRC value implies log beta4 7.41, above even Bjerrum's 2 mol/L NH4NO3 constant (7.12, which gave -0.630 V here). Which constants the CRC used is not known; within the low class" })
+crc("Co(NH3)6^2+ + 2 e- = Co(s) + 6 NH3(aq)", -0.422, "low", { note = "10 mV: file (s5-lig): Smith and Martell log beta6 4.40 (I = 0, 20 C; read in Harvey's appendix) on the NBS Co^2+; the CRC value implies 4.74, between it and Bjerrum's 2 mol/L NH4NO3 constant (5.11, which gave -0.433 V here). Which constants the CRC used is not known" })
 add({ kind = "logK", reaction = "Sn(s) = Sn(s,gray)", T_C = 13.2, group = "T_other", value = 0, tolclass = "Sn_T",
       source = "from memory of the measured white/gray tin transition temperature, 13.2 C (286.35 K; CRC Handbook of Chemistry and Physics, and Sn.lua's own note): log K = 0 there", confidence = "high",
       note = "file: NBS 1982 gray tin (dfG 0.13, dfH -2.09 kJ/mol, S 44.14) against white tin with the CODATA S (51.18; NBS 51.55)" })
@@ -666,6 +666,15 @@ rk("Pb^2+ + SO4^2- = PbSO4(aq)", 2.82, POWELL09 .. ": log beta 2.82 +- 0.05", "m
 local ZNPB_CO3_WHY = "file: compiled constants (ZnCO3(aq) 5.3, PbCO3(aq) 7.24, recalled), the values of the older aqueous data sets; the IUPAC reviews (recalled) select lower ones from a re-evaluation with specific ion interaction theory, and their abstracts (read) stress that the Zn2+ + H+ + CO3 2- system needs better measurements. Both recalled; the file keeps one compilation for the carbonate set until the reviews' tables can be read. With the review's values ZnCO3(aq) would dominate zinc only above pH 8.4, as the Zn abstract says (read)"
 rk("Zn^2+ + CO3^2- = ZnCO3(aq)", 4.76, POWELL13 .. ": log beta 4.76 +- 0.03", "low", { known = { diff = 0.54, margin = 0.02, why = ZNPB_CO3_WHY } })
 rk("Pb^2+ + CO3^2- = PbCO3(aq)", 6.45, POWELL09 .. ": log beta 6.45 +- 0.05", "low", { known = { diff = 0.79, margin = 0.02, why = ZNPB_CO3_WHY } })
+-- sulfate ion pairs: NBS 1982 dfG of the un-ionized species, read as the
+-- reaction Gibbs energy printed on you-iggy.com's reaction pages (which cite
+-- the NBS tables); independent of Nordstrom et al. 1990 and the compiled set
+local NBS_YI = "NBS 1982 tables (Wagman et al.), reaction Gibbs energy as printed on you-iggy.com (read): "
+rk("Na^+ + SO4^2- = NaSO4^-", nbs_logK(-4.18), NBS_YI .. "Na+ + SO4 2- = NaSO4-, dG -4.18 kJ/mol (K 5.40)", "medium", { note = "file: Nordstrom et al. 1990 0.70 (recalled)" })
+rk("K^+ + SO4^2- = KSO4^-", nbs_logK(-4.27), NBS_YI .. "K+ + SO4 2- = KSO4-, dG -4.27 kJ/mol (K 5.60)", "medium", { note = "0.10: file: Nordstrom et al. 1990 0.85 (recalled); 0.6 kJ/mol in dG, within the medium class" })
+rk("Zn^2+ + SO4^2- = ZnSO4(aq)", nbs_logK(-(904.9 - 891.59)), NBS_YI .. "ZnSO4 dfG -904.9 (un-ionized) and -891.59 kJ/mol (ionized, = Zn2+ + SO4 2-)", "medium", { note = "file: compiled 2.37 (recalled)" })
+rk("Mg^2+ + SO4^2- = MgSO4(aq)", 2.23, SM .. ": 2.23 (conductance)", "medium", { note = "0.14: file: Nordstrom et al. 1990 2.37 (recalled). Published constants of this ion pair spread 2.2-2.4 with the activity model used to reach I = 0 (Buchner et al. 2004, abstract read: three kinds of ion pair coexist); within the medium class" })
+rk("Ca^2+ + SO4^2- = CaSO4(aq)", 2.31, SM .. ": 2.31 (conductance)", "medium", { note = "file: Nordstrom et al. 1990 2.30 (recalled)" })
 -- aluminium sulfate at 50 C (read)
 local RIDLEY99 = "Ridley et al. 1999, Geochim. Cosmochim. Acta 63, 459 (abstract read): potentiometry and gibbsite solubility in NaCl media, 50-125 C; at 50 C and infinite dilution log K(AlSO4+) 3.7 +- 0.4, log beta2(Al(SO4)2-) 5.6 +- 0.7"
 add({ kind = "logK", reaction = "Al^3+ + SO4^2- = AlSO4^+", T_C = 50, group = "T_lig", value = 3.7, source = RIDLEY99, confidence = "low", note = "file: Nordstrom et al. 1990 3.5 with dH 9.6 kJ/mol (recalled), van 't Hoff to 50 C" })
