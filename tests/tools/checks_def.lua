@@ -650,6 +650,7 @@ hsm("Zn^2+ + 4 CN^- = Zn(CN)4^2-", 19.62, "log beta2 11.07, log K3 4.98, log K4 
 rk("Zn^2+ + 4 CN^- = Zn(CN)4^2-", log10(2.1e19), "OpenStax Chemistry 2e, Appendix K 'Formation Constants for Complex Ions' (read in the LibreTexts copy): Kf 2.1e19; conditions not stated", "low",
    { note = "file: Smith and Martell 19.62 (read); 0.30 within the low class" })
 hsm("Ag^+ + 2 CN^- = Ag(CN)2^-", 20.48, "log beta2 20.48", "medium", { same = true, note = "CN.lua: Smith and Martell 20.48, recalled; the reprint confirms it" })
+crc("OCN^- + H2O(l) + 2 e- = CN^- + 2 OH^-", -0.970, "low", { note = "27 mV: file: NBS 1982 OCN^- and CN^- (derived, -0.169 V in acid); CRC -0.97 V (recalled, two decimals). The couple is irreversible (cyanide is oxidised to cyanate only by strong oxidants or catalysts), so the potential rests on thermal data; within the low class" })
 -- carbonate ion pairs: the file's own sources, read (same source)
 rk("Ca^2+ + HCO3^- = CaHCO3^+", 1.11, "Plummer and Busenberg 1982 (abstract read at pubs.er.usgs.gov/publication/70011789): log K 1.11 +- 0.07 at 25 C", "high", { same = true, note = "checks the recalled analytic log K(T) of C.lua" })
 local BPP84_R = "Busenberg, Plummer and Parker 1984 (abstract read at usgs.gov): log K 1.18 (SrHCO3+) and 2.81 (SrCO3 0) at 25 C"
