@@ -14,9 +14,10 @@
 -- cyanide diagrams in hydrometallurgy.
 --
 -- Primary compilation: the NBS tables (Wagman et al. 1982) for CN^-, HCN,
--- OCN^- and the Au, Fe, Ni and Zn cyano complexes (their dfG, dfH and S close
+-- OCN^- and the Au, Fe and Ni cyano complexes (their dfG, dfH and S close
 -- the Gibbs-Helmholtz cycle within 0.6 kJ/mol, a check on the recall), so
--- these carry reaction enthalpies (van 't Hoff).  Ag and Cu complexes: Smith
+-- these carry reaction enthalpies (van 't Hoff).  Zn(CN)4^2-: the log beta4
+-- of Smith and Martell (read) with the NBS enthalpy.  Ag and Cu complexes: Smith
 -- and Martell, Critical Stability Constants (no enthalpy recalled:
 -- isocoulombic estimate); the Cu(I) values are those Penneman and Jones 1956
 -- derived from their infrared measurements (abstract read, checked in

@@ -240,7 +240,7 @@ crc("2 SO3^2- + 3 H2O(l) + 4 e- = S2O3^2- + 6 OH^-", -0.571, "medium", { note = 
 
 -- Bjerrum's ammine constants (2 mol/L NH4NO3, 30 C) against the file's I = 0
 -- constants evaluated at 30 C (s5-lig): the difference is the medium.
-local BJ_WHY = "file: Smith and Martell at I = 0 (Ni, Zn, Cd and Cu at 25 C, Co at 20 C; read in Harvey's Analytical Chemistry 2.1, Appendix 16.12), carried to 30 C by the isocoulombic estimate; the row is Bjerrum's constant in 2 mol/L NH4NO3 at 30 C. The medium constant is higher by 0.1-0.45 per NH3 (Ni 0.09, Cd 0.12, Co 0.13, Zn 0.18, Cu 0.44; about 0.03 per NH3 of it is the isocoulombic temperature correction); a salting-out activity coefficient of NH3 above 1 in 2 mol/L salt would act in that direction (reasoning here, not a published finding). A difference of medium, not between I = 0 values"
+local BJ_WHY = "file: Smith and Martell at I = 0 (Ni, Zn, Cd and Cu at 25 C, Co at 20 C; read in Harvey's Analytical Chemistry 2.1, Appendix 16.12), carried to 30 C by the isocoulombic estimate; the row is Bjerrum's constant in 2 mol/L NH4NO3 at 30 C. The medium constant is higher by 0.09-0.44 per NH3 (Ni 0.09, Cd 0.12, Co 0.13, Zn 0.18, Cu 0.44; about 0.03 per NH3 of it is the isocoulombic temperature correction); a salting-out activity coefficient of NH3 above 1 in 2 mol/L salt would act in that direction (reasoning here, not a published finding). A difference of medium, not between I = 0 values"
 local BJ_DIFF = { Zn = -0.717, Ni = -0.567, Cu = -1.764, Cd = -0.491, Co = -0.783 }
 -- 3. log K at 25 C, log_k_25C.csv ------------------------------------------
 local function lk(reaction, key, extra)
