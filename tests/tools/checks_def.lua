@@ -1087,6 +1087,7 @@ M.short_source = short_source
 -- 5 mV of at least one, `multi` have two or more, and `spread` of those have
 -- published values more than 5 mV apart.
 local TIGHT_E2 = 0.005 -- V, the issue's target
+local function within_e2(d) return math.abs(d) <= TIGHT_E2 + 1e-9 end
 function M.read_metric(results)
   local m = { n = 0, assessed = 0, within = 0, none = 0, multi = 0, spread = 0, rows = {} }
   for _, r in ipairs(results) do
@@ -1106,7 +1107,7 @@ function M.read_metric(results)
         m.assessed = m.assessed + 1
         local lo, hi = math.huge, -math.huge
         for _, v in ipairs(vals) do
-          if math.abs(r.computed - v.value) <= TIGHT_E2 + 1e-9 then e.within = true end
+          if within_e2(r.computed - v.value) then e.within = true end
           lo, hi = math.min(lo, v.value), math.max(hi, v.value)
         end
         e.spread = hi - lo
@@ -1237,8 +1238,8 @@ function M.render(results, summary)
     out_t.n, out_t.known, out_t.noted, out_t.bare, out_t.recalled, out_t.n))
   w("")
   w("The fractions within the target flatter the data in one respect: many CRC couples of oxides and hydroxo anions were themselves computed from the NBS-era tables the element files also use, so close agreement there tests the file's arithmetic and reaction more than the underlying data (the row notes say where). They understate it in another: most rows outside the target compare with recalled handbook values whose own disagreements exceed the target.")
+  local m2 = M.read_metric(results)
   do
-    local m2 = M.read_metric(results)
     local kr = { n = 0, within = 0 }
     for _, r in ipairs(results) do
       if r.kind == "logK" and not r.same and r.T_C == 25 and r.diff and not (r.source or ""):find("from memory", 1, true) then
@@ -1286,7 +1287,6 @@ function M.render(results, summary)
     w("")
   end
   do
-    local m2 = M.read_metric(results)
     w("## Standard potentials against every value read")
     w("")
     w("Issue 13: for each independent couple at 25 C, the published values that count for the second metric (see the Summary): the row's own value when it was read or derived from the NBS or CODATA tables, and the values read in the tables of `tests/reference/standard_potentials_read.csv` (full sources with the page addresses there). Tables read: the CRC electrochemical series (Vanysek) in copies that show only its first rows; OpenStax Chemistry 2e Appendix L (a reprint of the CRC series); the LibreTexts tables P1/P2 used by Harvey's Analytical Chemistry, which name Bard, Parsons and Jordan 1985, Milazzo, Caroli and Sharma 1978 and Swift and Butler 1972 as their sources; Harris, Quantitative Chemical Analysis, Appendix H; the CRC Handbook 54th edition (1973); the data pages of the Societe Chimique de France; the worked example of the Wikipedia data page; Table 4.2 of Corrosion Engineering: Principles and Practice; Table 2.1 of the NCERT Chemistry XII textbook (two decimals). Web tables that name no source, book or publisher were not used. Only the first part of each stored page could be read, so most tables contribute a few rows. `within` marks a value within 5 mV of phlox.")
@@ -1297,7 +1297,7 @@ function M.render(results, summary)
       local parts = {}
       for _, v in ipairs(e.vals) do
         parts[#parts + 1] = ("%s %s (%+.1f%s)"):format(esc(v.table), tostring(v.value), 1000 * (e.r.computed - v.value),
-          math.abs(e.r.computed - v.value) <= TIGHT_E2 + 1e-9 and ", within" or "")
+          within_e2(e.r.computed - v.value) and ", within" or "")
       end
       w(("| `%s` | %.4f | %s | %s | %s |"):format(e.r.reaction, e.r.computed,
         #parts > 0 and table.concat(parts, "; ") or "none read (recalled only)",
@@ -1372,7 +1372,7 @@ function M.render(results, summary)
           for _, v in ipairs(r.read) do
             local d = r.computed and (r.computed - v.value) or nil
             rv[#rv + 1] = ("%s %s V%s%s"):format(v.table, tostring(v.value),
-              d and ((" (phlox %+.1f mV, %s)"):format(1000 * d, math.abs(d) <= 0.005 + 1e-9 and "agrees within 5 mV" or "differs")) or "",
+              d and ((" (phlox %+.1f mV, %s)"):format(1000 * d, within_e2(d) and "agrees within 5 mV" or "differs")) or "",
               v.standard and "" or " [formal potential, not counted]")
           end
           parts[#parts + 1] = "Values read in other tables (standard_potentials_read.csv): " .. table.concat(rv, "; ") .. "."
