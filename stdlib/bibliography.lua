@@ -209,6 +209,23 @@ return {
       short = "Busenberg and Plummer 1986",
       cite = "Busenberg, E. and Plummer, L. N. (1986). The solubility of BaCO3(cr) (witherite) in CO2-H2O solutions between 0 and 90 C, ... Geochim. Cosmochim. Acta 50, 2225.",
     },
+    -- s5-solids (issue 13: independent checks of solids, pyrrhotite, molybdenite, jarosite)
+    BC87 = {
+      short = "Bartovska and Cerny 1987",
+      cite = "Bartovska, L. and Cerny, C. (1987). The influence of the structure of molybdenum disulphide on its reactivity. Collect. Czech. Chem. Commun. 52, 678-685 (abstract read at cccc.uochb.cas.cz).",
+    },
+    BP96 = {
+      short = "Baron and Palmer 1996",
+      cite = "Baron, D. and Palmer, C. D. (1996). Solubility of jarosite at 4-35 C. Geochim. Cosmochim. Acta 60, 185-195 (abstract and introduction read).",
+    },
+    TSIV = {
+      short = "Gurvich et al., IVTANTHERMO tables",
+      cite = "Gurvich, L. V., Veyts, I. V. et al. Thermodynamic Properties of Individual Substances (IVTANTHERMO), iron section as published online by ChemNet, Moscow State University (www.chem.msu.ru/rus/tsiv/Fe/; table Fe.37, 'choice of the enthalpy of formation of Fe0.875S', read; editors and edition not shown there).",
+    },
+    GS92 = {
+      short = "Gronvold and Stolen 1992",
+      cite = "Gronvold, F. and Stolen, S. (1992). Thermodynamics of iron sulfides II. Heat capacity and thermodynamic properties of FeS and of Fe0.875S at temperatures from 298.15 K to 1000 K (title recalled in part). J. Chem. Thermodyn. 24, 913 (recalled).",
+    },
     CONVENTION = {
       short = "standard-state convention",
       cite = "Conventions of the conventional ionic standard state (all properties of H+ zero at every T and P; e- = H+ - 1/2 H2(g)).",
