@@ -226,6 +226,10 @@ return {
       short = "Gronvold and Stolen 1992",
       cite = "Gronvold, F. and Stolen, S. (1992). Thermodynamics of iron sulfides II. Heat capacity and thermodynamic properties of FeS and of Fe0.875S at temperatures from 298.15 K to 1000 K (title recalled in part). J. Chem. Thermodyn. 24, 913 (recalled).",
     },
+    BZ23 = {
+      short = "Bazarkina et al. 2023",
+      cite = "Bazarkina, E. F., Zotov, A. V., Chareev, D. A., Truche, L. and Tarnopolskaya, M. E. (2023). Cadmium behavior in sulfur-bearing aqueous environments: insight from CdS solubility measurements at 25-80 C. Geology of Ore Deposits 65, 28-43 (abstract read).",
+    },
     CONVENTION = {
       short = "standard-state convention",
       cite = "Conventions of the conventional ionic standard state (all properties of H+ zero at every T and P; e- = H+ - 1/2 H2(g)).",

@@ -227,10 +227,12 @@ return {
     },
     {
       formula = "CdS(s,greenockite)", model = "cp",
-      G = -156.5, H = -161.9, S = 64.9, V = 29.93,
+      G = -151.5, H = -156.9, S = 64.9, V = 29.93,
+      uncertainty = { G = 0.3 },
       estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
-      source = NBS .. "; V " .. RH95, quality = "medium",
-      note = "Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats)",
+      source = "dfG: [BZ23] (abstract read), recommended from the greenockite solubility product measured in strongly acid solution, 25-80 C; S: " .. NBS .. "; dfH derived here as dfG + T dfS with that S; V " .. RH95,
+      quality = "medium",
+      note = "Issue 13: was NBS 1982 (dfG -156.5, dfH -161.9 kJ/mol): with the file's CODATA Cd^2+ and SH88 HS^- that made CdS + H+ = Cd2+ + HS- -15.90, 1.1 log units below the crystalline CdS measured by in-situ dialysis, -14.82 +- 0.03 (Wang and Tessier 1999, Environ. Sci. Technol. 33, 4270, abstract read); the recommended dfG here gives -15.02 (docs/data-checks.md). Fresh precipitates are more soluble still (-14.15 and -14.40, same paper). Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats)",
     },
     {
       formula = "MoS2(s,molybdenite)", model = "cp",
@@ -398,9 +400,10 @@ return {
       formula = "KFe3(SO4)2(OH)6(s,jarosite)", model = "logk",
       reaction = "KFe3(SO4)2(OH)6(s,jarosite) + 6 H^+ = K^+ + 3 Fe^3+ + 2 SO4^2- + 6 H2O(l)", logK = -11.0, dH = -45,
       uncertainty = { logK = 0.3 },
+      T_range = { 277.15, 308.15 },
       source = "[BP96] (abstract read): log Ksp -11.0 +- 0.3 at 25 C and dH -45 +- 5 kJ/mol from the solubility of a near-ideal synthetic jarosite measured at 4-35 C",
       quality = "medium",
-      note = "Issue 13: was " .. N90 .. " (log K -9.21, dH -31.28 kcal/mol), 1.8 log units more soluble; published jarosite constants spread over seven orders of magnitude (the paper's introduction, read), and this is a direct measurement at equilibrium (3-4 months). The paper also gives dfG -3309.8 +- 1.7 kJ/mol, dS -350 +- 40 J/(mol K) and dCp -2.1 +- 0.2 kJ/(mol K) over 4-35 C; the dCp is not used (van 't Hoff with the 25 C dH), since carried beyond 35 C it would change dH by 2 kJ/mol per kelvin. Above 35 C the constant is an extrapolation.",
+      note = "Issue 13: was " .. N90 .. " (log K -9.21, dH -31.28 kcal/mol), 1.8 log units more soluble; published jarosite constants spread over seven orders of magnitude (the paper's introduction, read), and this is a direct measurement at equilibrium (3-4 months). The paper also gives dfG -3309.8 +- 1.7 kJ/mol, dS -350 +- 40 J/(mol K) and dCp -2.1 +- 0.2 kJ/(mol K) over 4-35 C; the dCp is not used (van 't Hoff with the 25 C dH), since carried beyond 35 C it would change dH by 2 kJ/mol per kelvin. T_range is the measured 4-35 C: above it the constant is an extrapolation (van 't Hoff), and the estimate validation of docs/data-checks.md does not use it there.",
     },
     {
       formula = "KAl3(SO4)2(OH)6(s,alunite)", model = "logk",

@@ -726,7 +726,7 @@ do
   rk("2 Na(s) + 0.5 O2(g) = Na2O(s)", nbs_logK(-417.982 - T * dS_Na2O),
      JANAF_WB .. ": Na2O dfH -417.982 kJ/mol, S 75.04 J/(mol K); Na 51.46 (12.30 cal, read on the WebBook sodium page), O2 205.147 (recalled); dfG derived here", "high",
      { known = { diff = -0.636, margin = 0.02,
-       why = "file: NBS 1982 Na2O (dfH -414.22, dfG -375.46 kJ/mol, recalled); JANAF (data last reviewed 1968, read) puts dfH 3.8 kJ/mol lower. Na.lua keeps NBS, the table of its other solid (NaOH) and of the Na^+ cross-checks. Na2O does not persist in contact with water (it hydrates to NaOH exothermically), so no aqueous diagram or solubility depends on it" } })
+       why = "file: NBS 1982 Na2O (dfH -414.22, dfG -375.46 kJ/mol, recalled); JANAF (data last reviewed 1968, read) puts dfH 3.8 kJ/mol lower. Na.lua takes both its solids from NBS. Na2O does not persist in contact with water (it hydrates to NaOH exothermically), so no aqueous diagram or solubility depends on it" } })
   local dS_NaOH = (64.46 - 51.46 - 0.5 * 205.147 - 0.5 * 130.680) / 1000
   rk("Na(s) + 0.5 O2(g) + 0.5 H2(g) = NaOH(s)", nbs_logK(-425.93 - T * dS_NaOH),
      "dfH -425.93 kJ/mol and S 64.46 J/(mol K) of solid NaOH as printed in the 'Sodium hydroxide' infobox of encyclopedia.kids.net.au (read; the infobox names no source), with the JANAF element entropies (Na 51.46 read on the NIST WebBook; O2 205.147, H2 130.680 recalled); dfG derived here", "medium",
@@ -772,6 +772,16 @@ do
   rk("KFe3(SO4)2(OH)6(s,jarosite) + 6 H^+ = K^+ + 3 Fe^3+ + 2 SO4^2- + 6 H2O(l)", -9.21, "from memory of Nordstrom et al. 1990 (ACS Symp. Ser. 416)", "low",
      { known = { diff = -1.79, margin = 0.02,
        why = "issue 13: file: Baron and Palmer 1996 (read), log Ksp -11.0 +- 0.3 measured at equilibrium (3-4 months) with a near-ideal synthetic jarosite at 4-35 C; it replaced the Nordstrom et al. 1990 constant (-9.21, recalled), whose origin the paper's introduction places among constants spread over seven orders of magnitude" } })
+  rk("CdS(s,greenockite) + H^+ = Cd^2+ + HS^-", -14.82, "Wang and Tessier 1999, Environ. Sci. Technol. 33, 4270 (abstract read): crystalline CdS by in-situ dialysis in sulfidic solutions, log Ksp -14.82 +- 0.03 at 25 C (precipitates -14.15 and -14.40)", "high",
+     { known = { diff = -0.200, margin = 0.02,
+       why = "issue 13: file: Bazarkina et al. 2023 recommended dfG -151.5 +- 0.3 kJ/mol (read) with the CODATA Cd^2+ and the SH88 HS^- (-15.02); the former NBS greenockite (-156.5) gave -15.90, 1.1 below this measurement. The remaining 0.2 (1.1 kJ/mol) lies between two solubility studies that used different media and auxiliary HS^- data; the recent acid-solution study is kept" } })
+  rk("HgS(s,cinnabar) + H^+ = Hg^2+ + HS^-", -36.8, "Skyllberg and co-workers 2013, Environ. Sci. Technol. 47, 4197 (abstract read): log Ksp -36.8 +- 0.1 (I = 0, 25 C) for a HgS of 83 % metacinnabar and 17 % cinnabar, from solubility at 0.06-84 uM sulfide, 0.7 above previous estimates", "low",
+     { known = { diff = -3.009, margin = 0.02,
+       why = "file: NBS 1982 cinnabar (dfG -50.6 kJ/mol) with CODATA Hg^2+ and SH88 HS^-. The measurement is for mostly metacinnabar, which NBS puts 2.9 kJ/mol (0.5 log units) above cinnabar; the remaining 2.5 log units (14 kJ/mol) cannot be a solid-phase error of the calorimetric cinnabar. The paper never sees free Hg^2+: its Ksp is fitted together with Hg(SH)2, HgS2H^- and HgS2^2- formation constants (log K 39.1, 32.5, 23.2) that dominate the solubility at every pH it covers, so the Ksp is tied to that complex model. The file keeps the thermochemical cinnabar; mercury-sulfide complexes are not in the library, so dissolved Hg(II) over cinnabar in sulfidic water is far underestimated (docs/data/gold-mercury-boron.md)" } })
+  rk("K2SO4(s,arcanite) = 2 K^+ + SO4^2-", nbs_logK(2 * -283.27 - 744.53 + 1321.37), NBS_D .. "arcanite -1321.37, K^+ -283.27, SO4^2- -744.53 kJ/mol (one table throughout)", "medium",
+     { note = "file: a compiled solubility constant (-1.776); the all-NBS value agrees. With the CODATA-like K^+ of K.lua the NBS solid would give -2.10 (S.lua note), which is why the record is a log K" })
+  rk("NiSO4*6H2O(s,retgersite) = Ni^2+ + SO4^2- + 6 H2O(l)", -2.04, N90C .. " (alpha-NiSO4.6H2O)", "medium",
+     { note = "file: NBS 1982 retgersite with the NBS Ni^2+ and SH88 SO4^2- (-2.12)" })
   local dS_SnO = (57.17 - 51.18 - 0.5 * 205.152) / 1000
   rk("Sn(s) + 0.5 O2(g) = SnO(s)", nbs_logK(-280.71 - T * dS_SnO), CODATA89 .. "SnO dfH -280.71 kJ/mol, S 57.17; Sn 51.18, O2 205.152 J/(mol K)", "high",
      { known = { diff = 0.874, margin = 0.02,
