@@ -436,6 +436,7 @@ void px_emap_free(px_emap *m)
     px_free(m->alloc, m->bnd);
     px_free(m->alloc, m->ligand_species);
     px_free(m->alloc, m->absent);
+    px_free(m->alloc, m->ligand_absent);
     px_free(a, m);
 }
 
@@ -632,6 +633,18 @@ int px_emap_build(px_thermo_ws *ws, const px_db *db, const char *element,
         int shown = 0;
         for (size_t f = 0; f < m->map->nfield && !shown; f++) shown = m->info[f].species == cm[i].db;
         if (!shown) m->absent[m->n_absent++] = cm[i].db;
+    }
+    if (zL) { /* the ligand's candidates never shown in its own map */
+        m->ligand_absent = px_calloc(o->alloc, ncl, sizeof *m->ligand_absent);
+        if (!m->ligand_absent) {
+            st = PX_ENOMEM;
+            goto done;
+        }
+        for (size_t i = 0; i < ncl; i++) {
+            int shown = 0;
+            for (size_t f = 0; f < m->ligand_map->nfield && !shown; f++) shown = m->ligand_species[f] == cl[i].db;
+            if (!shown) m->ligand_absent[m->n_ligand_absent++] = cl[i].db;
+        }
     }
     water_lines(ws, db, m, o);
     st = join_and_classify(m, db, zM);

@@ -85,6 +85,8 @@ typedef struct px_emap {
     long *ligand_species;       /* db index per ligand-map field */
     long *absent;               /* db indices of candidates that never predominate */
     size_t n_absent;
+    long *ligand_absent;        /* db indices of ligand candidates absent from the ligand map */
+    size_t n_ligand_absent;
     size_t n_candidates;
     double nernst_slope;        /* RT ln10 / F at T, V */
     double E0_o2;               /* E of O2(g) + 4 H+ + 4 e- = 2 H2O(l) at T, P, V vs SHE */

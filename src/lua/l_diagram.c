@@ -284,6 +284,12 @@ static int l_map(lua_State *L)
         lua_rawseti(L, -2, (lua_Integer)i + 1);
     }
     lua_setfield(L, -2, "absent");
+    lua_createtable(L, (int)m->n_ligand_absent, 0); /* ligand species never predominating */
+    for (size_t i = 0; i < m->n_ligand_absent; i++) {
+        lua_pushstring(L, px_db_get(db, (size_t)m->ligand_absent[i])->f.text);
+        lua_rawseti(L, -2, (lua_Integer)i + 1);
+    }
+    lua_setfield(L, -2, "ligand_absent");
     /* ligand fields */
     if (m->ligand_map) {
         const px_diagram_map *lm = m->ligand_map;

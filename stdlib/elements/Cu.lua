@@ -58,7 +58,7 @@ return {
       logK = -16.23, estimate = "isocoulombic",
       source = "from memory of [POWELL07] (IUPAC Technical Report, Pure Appl. Chem. 79, 895), log *beta2 at I = 0, 25 C",
       quality = "medium",
-      note = "The neutral species that carries CuO's solubility at near-neutral pH at temperature. [BM76] give only a bound. No dH recalled: held at 25 C until a temperature function is added. At 25 C and 1e-6 it has no field (CuO + H2O = Cu(OH)2(aq), log K about -8.6).",
+      note = "The neutral species that carries CuO's solubility at near-neutral pH at temperature. [BM76] give only a bound. No dH recalled: log K(T) is the isocoulombic estimate (estimate field). At 25 C and 1e-6 it has no field (CuO + H2O = Cu(OH)2(aq), log K -8.88 with the NBS CuO).",
     },
     {
       formula = "Cu2(OH)2^2+", model = "logk",

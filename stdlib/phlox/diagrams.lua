@@ -18,6 +18,7 @@ local phlox = require "phlox"
 local sweep = require "phlox.sweep"
 local core = require "phlox.core"
 local provenance = require "phlox.provenance"
+local P = require("phlox.base").P -- user_species, map_species (stdlib/phlox/notes.lua)
 
 local diagrams = {}
 
@@ -220,7 +221,7 @@ function diagrams.fractions(opts)
   end
   -- the curve's system is that of its solves
   local system = phlox.system_elements(lib, base)
-  held_stamp(lib, system, { T_C_of(opts) }, opts, where) -- stops before the work
+  held_stamp(lib, system, { T_C_of(opts) }, opts, where, P.user_species(lib, opts)) -- stops before the work
   local shares, failures, notes = {}, {}, {}
   local t0 = os.clock()
   local points = phlox.speciate_curve(base, curve)
@@ -316,7 +317,7 @@ function diagrams.solubility(opts)
   sys_opts.totals = copy(opts.totals)
   sys_opts.totals[el] = 1
   local system = phlox.system_elements(lib, sys_opts)
-  held_stamp(lib, system, temps, opts, where) -- stops before the work
+  held_stamp(lib, system, temps, opts, where, P.user_species(lib, opts)) -- stops before the work
   local solved = {}
   local total = opts.total or 1
   if type(total) ~= "number" or not (total > 0) then fail(where, "total must be a positive number (mol/kg)") end
@@ -453,7 +454,11 @@ function diagrams.series(opts)
   end
   -- plot.grid and plot.overlay stamp the first map's lines: every map
   -- carries the note for the whole series
-  local stamp = held_stamp(lib, { opts.element, opts.ligand }, temps, opts, where)
+  local weighed = {}   -- the species any of the maps weighed
+  for _, m in ipairs(maps) do
+    for f in pairs(P.map_species(m)) do weighed[f] = true end
+  end
+  local stamp = held_stamp(lib, { opts.element, opts.ligand }, temps, opts, where, weighed)
   if stamp then
     for _, m in ipairs(maps) do
       m.stamp = m.stamp or {}

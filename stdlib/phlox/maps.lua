@@ -14,6 +14,7 @@ local base = require "phlox.base"
 local phlox, P = base.phlox, base.P
 local T0C, options, ACT, I_MAX, COORD, TOTAL_MAX, spec, temperature, pressure, check_library, LIGAND_GROUPS, ligand_elements, held_logk, stamp_held, add_note, note_activity, note_sour, note_list, note_ligands =
   P.T0C, P.options, P.ACT, P.I_MAX, P.COORD, P.TOTAL_MAX, P.spec, P.temperature, P.pressure, P.check_library, P.LIGAND_GROUPS, P.ligand_elements, P.held_logk, P.stamp_held, P.add_note, P.note_activity, P.note_sour, P.note_list, P.note_ligands
+local user_species, map_species = P.user_species, P.map_species
 
 local function window_of(opts, xname, yname)
   local ranges = { pH = opts.pH_range or { 0, 14 }, E = opts.E_range or { -2, 2 },
@@ -71,7 +72,8 @@ function phlox.map(opts)
   -- a species of another element in a ligand's file is not part of it
   local held_of, made_of_set = { opts.element }, { [opts.element] = true }
   for _, e in ipairs(ligand_elements(opts.ligand)) do held_of[#held_of + 1] = e; made_of_set[e] = true end
-  local held = held_logk(lib, held_of, T, opts, "phlox.map", made_of_set)
+  -- a held species the user left out (exclude, only) does not stop the map
+  held_logk(lib, held_of, T, opts, "phlox.map", made_of_set, user_species(lib, opts, opts.element))
   local axes = opts.axes or { "pH", "E" }
   local copt = {
     element = opts.element, T = T, P = P, x = axes[1], y = axes[2],
@@ -102,7 +104,8 @@ function phlox.map(opts)
   local els = { opts.element }
   for _, e in ipairs(LIGAND_GROUPS[opts.ligand] or { opts.ligand }) do els[#els + 1] = e end
   m.provenance = provenance.of_result(lib, els, m.conditions, opts)
-  stamp_held(m, held)
+  -- the stamp names the held and estimated species the map weighed
+  stamp_held(m, held_logk(lib, held_of, T, opts, "phlox.map", made_of_set, map_species(m)))
   m.provenance.notes = m.stamp   -- the caveats travel with the provenance (into sweep results)
   return m
 end
@@ -158,7 +161,8 @@ function phlox.grid_map(opts)
   -- the grid's system: the element, the ligand and a NaCl background
   local held_of = { opts.element, opts.ligand }
   if opts.background_nacl then held_of[#held_of + 1] = "Na"; held_of[#held_of + 1] = "Cl" end
-  local held = held_logk(lib, held_of, T, opts, "phlox.grid_map")
+  -- the solver's system: these elements' species less the user's exclude list
+  local held = held_logk(lib, held_of, T, opts, "phlox.grid_map", nil, user_species(lib, opts))
   local pr, er = opts.pH_range or { 0, 14 }, opts.E_range or { -2, 2 }
   local g, err = core.grid_map(lib.db, {
     element = opts.element, T = T, P = P, window = { pr[1], pr[2], er[1], er[2] },

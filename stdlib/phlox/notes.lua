@@ -105,7 +105,7 @@ end
 
 local STOP_HINT = "pass accept_held_logk = true to use the 25 °C constants anyway (the stamp names them), " ..
   "or give temperature data (dH, logK_T, or estimate = \"isocoulombic\") for them in a user data file " ..
-  "(phlox --path DIR; docs/element-files.md)"
+  "(phlox --path DIR; docs/element-files.md), or leave the species out (exclude)"
 --- Away from 25 C a reader must know which fields rest on 25 C constants or
 -- on estimated temperature functions.  phlox.temperature_notes checks the
 -- species of `elements` at every temperature of `temps` (K): a species held
@@ -180,6 +180,47 @@ local function held_logk(lib, elements, T, opts, where, only, species)
 end
 
 local add_note -- defined below
+
+-- The species a result's system keeps after the user's `exclude` list (and
+-- a map's `only` list of species of `element`), as a lazy set of formulas
+-- for temperature_notes (looked up per formula); nil when neither list is
+-- given.  Names resolve as the core resolves them ("ZnO(s)" is the
+-- library's one ZnO solid); a name that resolves to nothing is left for
+-- the core to report.
+local function user_species(lib, opts, element)
+  local out, keep = {}, nil
+  for _, n in ipairs(opts and opts.exclude or {}) do
+    local s = lib:species(n)
+    if s then out[s.formula] = true end
+  end
+  if opts and opts.only and element then
+    keep = {}
+    for _, n in ipairs(opts.only) do
+      local s = lib:species(n)
+      if s then keep[s.formula] = true end
+    end
+  end
+  if not next(out) and not keep then return nil end
+  return setmetatable({}, { __index = function(_, f)
+    if out[f] then return false end
+    if keep and not keep[f] then
+      local s = lib:species(f)
+      if s and s.elements[element] then return false end
+    end
+    return true
+  end })
+end
+
+-- The set of formulas a predominance map weighed: its fields, the
+-- candidates that never predominate (absent) and the ligand's own species.
+local function map_species(m)
+  local set = {}
+  for _, f in ipairs(m.fields or {}) do set[f.species] = true end
+  for _, f in ipairs(m.ligand_fields or {}) do set[f.species] = true end
+  for _, n in ipairs(m.absent or {}) do set[n] = true end
+  for _, n in ipairs(m.ligand_absent or {}) do set[n] = true end
+  return set
+end
 
 --- The stamp line naming species whose log K is held at 25 C (each formula
 -- typeset) and its short form (printed by short stamps, phlox.plot).
@@ -315,3 +356,4 @@ end
 -- for the other modules of phlox (stdlib/phlox/base.lua)
 P.held_logk, P.stamp_held, P.add_note, P.warn_once, P.note_activity, P.note_sour, P.note_list, P.note_ligands =
   held_logk, stamp_held, add_note, warn_once, note_activity, note_sour, note_list, note_ligands
+P.user_species, P.map_species = user_species, map_species

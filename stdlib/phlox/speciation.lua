@@ -15,6 +15,7 @@ local base = require "phlox.base"
 local phlox, P = base.phlox, base.P
 local T0C, options, TOTAL_MAX, spec, temperature, pressure, check_library, held_logk, stamp_held, add_note, note_activity, note_sour, note_list, note_ligands =
   P.T0C, P.options, P.TOTAL_MAX, P.spec, P.temperature, P.pressure, P.check_library, P.held_logk, P.stamp_held, P.add_note, P.note_activity, P.note_sour, P.note_list, P.note_ligands
+local user_species = P.user_species
 
 -- The elements a speciation involves: those of totals, fugacities and fixed
 -- (each a symbol or a formula); the held-species check looks at species made
@@ -135,7 +136,7 @@ end
 -- info when the solver does not converge.
 function phlox.speciate(opts)
   local lib, copt, T, P, els, only = speciation_setup(opts, "phlox.speciate")
-  held_logk(lib, els, T, opts, "phlox.speciate", only) -- stops before the work
+  held_logk(lib, els, T, opts, "phlox.speciate", only, user_species(lib, opts)) -- stops before the work
   local r, err, info = core.speciate(lib.db, copt)
   if not r then return nil, err, info end
   speciation_notes(r, opts, T, { lib = lib, els = els, only = only, where = "phlox.speciate" })
@@ -172,7 +173,7 @@ local CURVE_VARY = { pH = function(x) return { pH = x } end,
 function phlox.speciate_curve(opts, curve)
   local where = "phlox.speciate"
   local lib, copt, T, _, els, only = speciation_setup(opts, where)
-  held_logk(lib, els, T, opts, where, only) -- stops before the work
+  held_logk(lib, els, T, opts, where, only, user_species(lib, opts)) -- stops before the work
   core.check_value("phlox.speciate_curve", "curve", curve, "table")
   local vary = CURVE_VARY[curve.var]
   if not vary then core.user_error("phlox.speciate_curve: curve.var must be \"pH\", \"log_total\" or \"log_a\"") end

@@ -7,7 +7,9 @@
 --     would use a held log K away from 25 C stops by default, naming the
 --     species and the two ways on; accept_held_logk = true draws it and
 --     stamps the held species.
---  3. Estimated species are named with their method in the stamps.
+--     A held species the user excludes stops nothing and is named nowhere.
+--  3. Estimated species are named with their method in the stamps; one the
+--     user excludes is not named.
 --  4. The standard library holds nothing from 0 to 300 C: every element's
 --     records have a temperature function, and a map of every element at
 --     300 C runs with the default options.
@@ -73,6 +75,27 @@ check(sp and stamped(sp.stamp, "ZnOH^+"), "speciation stamps the held species")
 local fr = phlox.fractions { library = zn, element = "Zn", T_C = 150, range = { 6, 12 }, n = 7, accept_held_logk = true }
 check(stamped(fr.stamp, "ZnOH^+"), "fraction curves name the held species")
 
+-- a held species the user leaves out (exclude, or a map's only list) is not
+-- used, so it stops nothing and is named nowhere
+local function runs(fn, opts, what)
+  local ok, res = pcall(fn, opts)
+  check(ok, what .. " with the held species excluded must run: " .. tostring(res))
+  if ok then
+    local list = res.stamp or (res[1] and res[1].stamp) or {}
+    check(not stamped(list, "log K held at 25"), what .. ": no held species named")
+  end
+end
+local EX = { "ZnOH^+" }
+runs(phlox.map, { library = zn, element = "Zn", T_C = 200, exclude = EX }, "phlox.map")
+runs(phlox.map, { library = zn, element = "Zn", T_C = 200, only = { "Zn(s)", "Zn^2+", "ZnO(s)", "Zn(OH)4^2-" } },
+  "phlox.map (only)")
+runs(phlox.grid_map, { library = zn, element = "Zn", T_C = 200, n = 11, exclude = EX }, "phlox.grid_map")
+runs(phlox.speciate, { library = zn, T_C = 200, totals = { Zn = 1e-6 }, pH = 8, exclude = EX }, "phlox.speciate")
+runs(phlox.fractions, { library = zn, element = "Zn", T_C = 150, range = { 6, 12 }, n = 7, exclude = EX }, "phlox.fractions")
+runs(phlox.series, { library = zn, element = "Zn", T_C = { 25, 200 }, exclude = EX }, "phlox.series")
+-- a name the core resolves ("ZnO(s)" is zincite) is resolved the same way
+stops(phlox.map, { library = zn, element = "Zn", T_C = 200, exclude = { "ZnO(s)" } }, "phlox.map excluding another species")
+
 -- 3. estimated species are named with their method (the stdlib's Zn(OH)3^-)
 local zs = phlox.library { "Zn" }
 local m2 = phlox.map { library = zs, element = "Zn", T_C = 200 }
@@ -81,6 +104,20 @@ check(line and line:find("isocoulombic", 1, true), "the stamp names the isocoulo
 check(m2.estimated_logk and #m2.estimated_logk > 0, "map.estimated_logk")
 check(not stamped(phlox.map { library = zs, element = "Zn", T_C = 25 }.stamp, "estimated"),
   "at 25 C no estimate is used")
+-- a species the user excludes is not named, in maps, series and rigorous maps
+check(line:find("{Zn(OH)3^-}", 1, true), "the default map names Zn(OH)3^-: " .. line)
+for what, res in pairs {
+  map = phlox.map { library = zs, element = "Zn", T_C = 200, exclude = { "Zn(OH)3^-" } },
+  series = phlox.series { library = zs, element = "Zn", T_C = { 200, 250 }, exclude = { "Zn(OH)3^-" } }[2],
+  grid = phlox.grid_map { library = zs, element = "Zn", T_C = 200, n = 11, exclude = { "Zn(OH)3^-" } },
+} do
+  local l = stamped(res.stamp, "temperature dependence estimated, isocoulombic")
+  check(l and not l:find("Zn(OH)3^-", 1, true) and l:find("{Zn(OH)4^2-}", 1, true),
+    what .. ": the excluded species is not named, the others are: " .. tostring(l))
+  for _, e in ipairs(res.estimated_logk or {}) do
+    check(e.formula ~= "Zn(OH)3^-", what .. ": estimated_logk lists the excluded species")
+  end
+end
 
 -- 4. the standard library: nothing held anywhere from 0 to 300 C
 local all = phlox.available_elements() -- the ligand groups' files (CN) too
