@@ -10,6 +10,12 @@
 -- consistent with NBS/CODATA metal ions (see docs/data/ligands.md about Fe^2+).
 -- Complexes: stability constants at I = 0, 25 C. Nearly every number was
 -- recalled, not read ("from memory of").
+-- Solids (issue 13, s5-solids): NBS 1982 remains the primary compilation of
+-- the metal sulfides and sulfates, except where a measurement read for the
+-- independent checks contradicted it: molybdenite (Robie and Hemingway 1995,
+-- fluorine calorimetry), greenockite (dfG from its measured solubility) and
+-- jarosite (measured log Ksp); monoclinic pyrrhotite Fe7S8 is derived from
+-- tabulated third-law enthalpies. docs/data/ligands.md lists each check.
 
 local NBS = "from memory of [NBS82]"
 local NBS_DERIVED = "derived here from dfG and dfH of " .. NBS
