@@ -230,6 +230,10 @@ return {
       short = "Bazarkina et al. 2023",
       cite = "Bazarkina, E. F., Zotov, A. V., Chareev, D. A., Truche, L. and Tarnopolskaya, M. E. (2023). Cadmium behavior in sulfur-bearing aqueous environments: insight from CdS solubility measurements at 25-80 C. Geology of Ore Deposits 65, 28-43 (abstract read).",
     },
+    AT94 = {
+      short = "Al-Borno and Tomson 1994",
+      cite = "Al-Borno, A. and Tomson, M. B. (1994). The temperature dependence of the solubility product constant of vivianite. Geochim. Cosmochim. Acta 58, 5373 (abstract read at discovery.researcher.life, which does not show authors or journal: those are recalled).",
+    },
     CONVENTION = {
       short = "standard-state convention",
       cite = "Conventions of the conventional ionic standard state (all properties of H+ zero at every T and P; e- = H+ - 1/2 H2(g)).",

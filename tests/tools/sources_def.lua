@@ -72,6 +72,7 @@ M.USES = {
   { id = "BC87", use = "the measured MoS2-Mo-H2S-H2 equilibrium at 569-1277 K (dfG equation of MoS2, abstract read), which supports the fluorine-calorimetric molybdenite of Robie and Hemingway 1995." },
   { id = "BP96", use = "log Ksp and dH of K-jarosite, measured at 4-35 C (abstract read)." },
   { id = "TSIV", use = "third-law enthalpies of formation of pyrrhotite Fe0.875S from five equilibrium studies (table Fe.37 read), averaged here for Fe7S8." },
+  { id = "AT94", use = "vivianite solubility product and its temperature function, measured 5-90 C (abstract read)." },
   { id = "BZ23", use = "dfG of greenockite (CdS) recommended from its measured solubility product (abstract read)." },
   { id = "GS92", use = "standard entropy of monoclinic pyrrhotite Fe7S8 (adiabatic calorimetry). Recalled." },
 }
