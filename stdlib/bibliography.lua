@@ -67,7 +67,7 @@ return {
     },
     BE16 = {
       short = "Brown and Ekberg 2016",
-      cite = "Brown, P. L. and Ekberg, C. (2016). Hydrolysis of Metal Ions. Wiley-VCH, Weinheim (the Al constants read in the Wikipedia table 'Hydrolysis constant', which also lists the Baes and Mesmer 1976 and Hummel and Thoenen 2023 values).",
+      cite = "Brown, P. L. and Ekberg, C. (2016). Hydrolysis of Metal Ions. Wiley-VCH, Weinheim (the Al and Ba constants read in the Wikipedia table 'Hydrolysis constant', which also lists the Baes and Mesmer 1976 and Hummel and Thoenen 2023 values).",
     },
     STIPP93 = {
       short = "Stipp et al. 1993",
@@ -233,6 +233,15 @@ return {
     AT94 = {
       short = "Al-Borno and Tomson 1994",
       cite = "Al-Borno, A. and Tomson, M. B. (1994). The temperature dependence of the solubility product constant of vivianite. Geochim. Cosmochim. Acta 58, 5373 (abstract read at discovery.researcher.life, which does not show authors or journal: those are recalled).",
+    },
+    -- s5-lig (issue 13): sources read for the complex and ion-pair records
+    HARVEY21 = {
+      short = "Harvey, Analytical Chemistry 2.1",
+      cite = "Harvey, D. (2021). Analytical Chemistry 2.1, Appendix 16.12: Formation Constants (LibreTexts, chem.libretexts.org). Stepwise and cumulative constants of metal-ligand complexes taken from Martell, A. E. and Smith, R. M., Critical Stability Constants, vols. 1-4 (Plenum, 1976); 25 C and zero ionic strength unless the table says otherwise.",
+    },
+    LM07 = {
+      short = "Luo and Millero 2007",
+      cite = "Luo, Y. and Millero, F. J. (2007). Stability constants for the formation of lead chloride complexes as a function of temperature and ionic strength. Geochim. Cosmochim. Acta 71, 326-334.",
     },
     CONVENTION = {
       short = "standard-state convention",

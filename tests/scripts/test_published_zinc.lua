@@ -5,15 +5,20 @@
 -- passivate at the concentration of 10^-6 M, due to the uncharged zinc(II)
 -- complex, Zn(OH)2(aq)."
 --
--- Asserted here: 25 C, where phlox's Zn(II) hydrolysis constants (Baes and
--- Mesmer 1976) and ZnO (CODATA) are complete: no zinc solid other than the
--- metal has a field at 10^-6, and Zn(OH)2(aq) has one.  Above 25 C the
--- statement is asserted at every temperature where all zinc hydrolysis
--- species have temperature data (none is held at its 25 C log K).  While
--- Zn(OH)2(aq), Zn(OH)3^- or Zn(OH)4^2- carry no temperature function
--- (stdlib/elements/Zn.lua), their log K stays at 25 C while ZnO's solubility
--- falls, ZnO appears from 60 C, and the test prints that status with the
--- held species instead (docs/other-diagrams.md records the open finding).
+-- Asserted here at 25, 60, 100, 150, 200, 250 and 300 C: no zinc solid other
+-- than the metal has a field at 10^-6, Zn(OH)2(aq) has one, and no zinc
+-- species is held at its 25 C log K (issue 12: every Zn hydrolysis record
+-- carries temperature data, ZnOH^+ a recalled dH and the higher complexes the
+-- isocoulombic estimate, stdlib/elements/Zn.lua).  A held species fails the
+-- test (phlox.map stops on one by default; phlox.constant_logk is asked as
+-- well) instead of turning the check into a printed status.  The reason is
+-- checked too: at every temperature the solubility of zincite through
+-- Zn(OH)2(aq) alone (log K of ZnO + H2O = Zn(OH)2(aq)) exceeds 10^-6.
+--
+-- This is a check against a published calculation, not a measurement: no
+-- measured ZnO solubility or Zn(II) hydrolysis constant at 150 C or above
+-- could be read (docs/data/transition-metals.md, "Zinc."), so the zinc rows
+-- of tests/reference/high_temperature.csv are still missing.
 local phlox = require "phlox"
 local S = dofile(assert(os.getenv("PHLOX_SOURCE_DIR"), "PHLOX_SOURCE_DIR is not set (run through ctest)") .. "/tests/support/init.lua")
 local check = S.check
@@ -33,26 +38,20 @@ local function fields(T_C)
   return set, passive, m
 end
 
-local set25, passive25, m25 = fields(25)
-check(passive25 == nil, "at 25 C and 1e-6 m no zinc solid other than Zn(s) may have a field; found " ..
-  tostring(passive25))
-check(set25["Zn(OH)2(aq)"], "at 25 C and 1e-6 m Zn(OH)2(aq) must have a field (the paper's cause)")
+local set25 = fields(25)
 check(set25["Zn(s)"] and set25["Zn^2+"], "the 25 C map must show the metal and the ion")
--- at 25 C every log K is used at its own temperature: nothing is flagged
-check(m25.constant_logk == nil or #m25.constant_logk == 0,
-  "at 25 C no species should be flagged as held at its 25 C log K")
-
-for _, T in ipairs { 60, 100, 150, 200, 250, 300 } do
-  local _, passive, m = fields(T)
-  local held = m.constant_logk or {}
-  if #held == 0 then
-    check(passive == nil, ("at %d C and 1e-6 m no zinc solid other than Zn(s) may have a field " ..
-      "(published); found %s"):format(T, tostring(passive)))
-    io.write(("%3d C: zinc passivates at 1e-6 m: no (asserted)\n"):format(T))
-  else
-    io.write(("%3d C: zinc passivates at 1e-6 m: %s  (not asserted: %d zinc species held at " ..
-      "their 25 C log K: %s; see docs/other-diagrams.md)\n"):format(T,
-      passive and ("yes (" .. passive .. ")") or "no", #held, table.concat(held, ", ")))
-  end
+local ZNO_NEUTRAL = "ZnO(s,zincite) + H2O(l) = Zn(OH)2(aq)"
+for _, T in ipairs { 25, 60, 100, 150, 200, 250, 300 } do
+  local set, passive = fields(T)
+  local held = phlox.constant_logk(lib, { "Zn" }, T + 273.15)
+  check(#held == 0, ("at %d C no zinc species may be held at its 25 C log K; held: %s"):format(T,
+    table.concat(held, ", ")))
+  check(passive == nil, ("at %d C and 1e-6 m no zinc solid other than Zn(s) may have a field " ..
+    "(published); found %s"):format(T, tostring(passive)))
+  check(set["Zn(OH)2(aq)"], ("at %d C and 1e-6 m Zn(OH)2(aq) must have a field (the paper's cause)"):format(T))
+  local k = lib:reaction(ZNO_NEUTRAL, { T_C = T }).logK
+  check(k > math.log(ACTIVITY, 10), ("at %d C log K(%s) = %.2f must exceed log 1e-6: zincite " ..
+    "cannot precipitate at 1e-6 if Zn(OH)2(aq) alone holds more"):format(T, ZNO_NEUTRAL, k))
+  io.write(("%3d C: no zinc solid at 1e-6 m (asserted); log K(ZnO + H2O = Zn(OH)2(aq)) = %.2f\n"):format(T, k))
 end
 print("test_published_zinc: all asserted checks passed")

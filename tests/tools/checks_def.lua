@@ -110,6 +110,9 @@ local function bp49_logK(T) return -(2835.76 / T - 0.6322 + 0.001225 * T) end
 --   same      true when the file's data came from the same source
 --   tolclass  key of M.TOL (default: from kind and confidence, or *_same)
 --   known     { diff, margin, why } for an investigated, kept disagreement
+--   medium    text naming the medium when the published constant is not for
+--             I = 0 (e.g. 2 mol/L NH4NO3): the row documents the medium effect
+--             and counts neither for coverage nor for the 25 C targets
 --   note      free text
 local SP = "standard_potentials.csv"
 local LK = "log_k_25C.csv"
@@ -235,6 +238,10 @@ crc("Fe(OH)3(s) + e- = Fe(OH)2(s) + OH^-", -0.56, "medium", { note = "14 mV: the
 crc("SO4^2- + H2O(l) + 2 e- = SO3^2- + 2 OH^-", -0.93, "medium", { note = "6 mV: NBS 1982 dfG of SO3^2- (-486.5), SO4^2- (-744.53), H2O and OH^- give -0.936 V, as does the file (SH88 SO4^2- and OH^-); the CRC value has two decimals (+-5 mV)" })
 crc("2 SO3^2- + 3 H2O(l) + 4 e- = S2O3^2- + 6 OH^-", -0.571, "medium", { note = "6 mV: NBS 1982 dfG of S2O3^2- (-522.5) and SO3^2- (-486.5 kJ/mol) with NBS OH^- give -0.566 V (file -0.565 V with SH88 OH^-); CRC -0.571 V follows older (Latimer-era) thiosulfate data; 5 mV is 2 kJ/mol over a four-electron couple" })
 
+-- Bjerrum's ammine constants (2 mol/L NH4NO3, 30 C) against the file's I = 0
+-- constants evaluated at 30 C (s5-lig): the difference is the medium.
+local BJ_WHY = "file: Smith and Martell at I = 0 (Ni, Zn, Cd and Cu at 25 C, Co at 20 C; read in Harvey's Analytical Chemistry 2.1, Appendix 16.12), carried to 30 C by the isocoulombic estimate; the row is Bjerrum's constant in 2 mol/L NH4NO3 at 30 C. The medium constant is higher by 0.09-0.44 per NH3 (Ni 0.09, Cd 0.12, Co 0.13, Zn 0.18, Cu 0.44; about 0.03 per NH3 of it is the isocoulombic temperature correction); a salting-out activity coefficient of NH3 above 1 in 2 mol/L salt would act in that direction (reasoning here, not a published finding). A difference of medium, not between I = 0 values"
+local BJ_DIFF = { Zn = -0.717, Ni = -0.567, Cu = -1.764, Cd = -0.491, Co = -0.783 }
 -- 3. log K at 25 C, log_k_25C.csv ------------------------------------------
 local function lk(reaction, key, extra)
   local t = { kind = "logK", reaction = reaction, ref = { file = LK, key = key or reaction }, group = "K25_ref" }
@@ -288,8 +295,10 @@ lk("Zn^2+ + Cl^- = ZnCl^+", nil, { same = true })
 lk("Cu^+ + 2 Cl^- = CuCl2^-", nil, { same = true })
 lk("Cu^+ + 3 Cl^- = CuCl3^2-", nil, { same = true })
 lk("Ag^+ + 2 Cl^- = AgCl2^-", nil, { note = "file: the compiled Smith and Martell value 5.27" })
-lk("Zn^2+ + 4 NH3(aq) = Zn(NH3)4^2+", nil, { same = true, note = "Bjerrum's constants are for 2 mol/L NH4NO3 and 30 C, not I = 0 and 25 C" })
-lk("Ni^2+ + 6 NH3(aq) = Ni(NH3)6^2+", nil, { same = true, note = "Bjerrum 1941 conditions, as above" })
+-- s5-lig: N.lua now takes the I = 0 constants (Smith and Martell); Bjerrum's
+-- 2 mol/L NH4NO3 values are compared at his 30 C as constants of another medium
+lk("Zn^2+ + 4 NH3(aq) = Zn(NH3)4^2+", nil, { T_C = 30, group = "M_other", medium = "2 mol/L NH4NO3", known = { diff = BJ_DIFF.Zn, margin = 0.02, why = BJ_WHY } })
+lk("Ni^2+ + 6 NH3(aq) = Ni(NH3)6^2+", nil, { T_C = 30, group = "M_other", medium = "2 mol/L NH4NO3", known = { diff = BJ_DIFF.Ni, margin = 0.02, why = BJ_WHY } })
 lk("Ag^+ + 2 NH3(aq) = Ag(NH3)2^+", nil, { note = "file: Bjerrum 1941 (2 mol/L NH4NO3, 30 C); row: OpenStax App. K, 2 significant figures" })
 
 -- 4. log K at 25 C, further published values (recalled) -------------------
@@ -358,13 +367,13 @@ rk("HCN(aq) = CN^- + H^+", -9.21, SM, "high", { note = "file: NBS 1982 CN^- and 
 rk("Au^+ + 2 CN^- = Au(CN)2^-", 38.3, SM, "medium", { known = { diff = 0.637, margin = 0.02,
   why = "file: NBS 1982 Au(CN)2^- with the Bard-Parsons-Jordan Au^+ (1.692 V) gives 38.94; Smith and Martell 38.3 (recalled); published values spread 36.6-39.3 because Au^+ cannot be measured directly. The E0 of Au(CN)2^-/Au, which a diagram uses, agrees with CRC within 11 mV (row above)" } })
 rk("Ni^2+ + 4 CN^- = Ni(CN)4^2-", 30.22, SM, "medium", { note = "file: NBS 1982 Ni(CN)4^2- with NBS Ni^2+ (30.12); the 0.10 is 0.6 kJ/mol in dfG of the complex, inside the medium class; the NBS route is kept because it carries the reaction enthalpy (van 't Hoff), the Smith and Martell constant none" })
-rk("Zn^2+ + 4 CN^- = Zn(CN)4^2-", 16.7, "from memory of Lange's Handbook of Chemistry, cumulative formation constants", "low",
-   { note = "file: NBS 1982 (16.76); other texts quote 19.6 (recalled), see CN.lua" })
+rk("Zn^2+ + 4 CN^- = Zn(CN)4^2-", 16.7, "from memory of Lange's Handbook of Chemistry, cumulative formation constants", "low", { known = { diff = 2.92, margin = 0.02,
+   why = "file (s5-lig): Smith and Martell at I = 0, 19.62 (read in Harvey's Analytical Chemistry 2.1, Appendix 16.12), which replaced the NBS 1982 entry (16.76) that this recalled Lange value matches; OpenStax prints 2.1e19 (19.32, read). Two printed values (read) against the NBS dfG of the complex and this recalled value: the file follows Smith and Martell's measured stepwise constants" } })
 rk("Ag^+ + 2 CN^- = Ag(CN)2^-", 21.1, "from memory of Lange's Handbook of Chemistry, cumulative formation constants", "low", { known = { diff = -0.62, margin = 0.02,
   why = "file: Smith and Martell 20.48 (recalled); Lange's Handbook 21.1 (recalled); the spread reflects the medium of the measurements. The recalled NBS 1982 entry for Ag(CN)2^- does not close its own Gibbs-Helmholtz cycle (3 kJ/mol), so it was not used" } })
 rk("Fe^2+ + 6 CN^- = Fe(CN)6^4-", 35.4, "from memory of older compilations of stability constants (log beta6 of ferrocyanide)", "low", { known = { diff = 10.26, margin = 0.02,
   why = "file: NBS 1982 ferrocyanide with NBS Fe^2+ gives 45.66. The older 35.4 (with 43.6 for ferricyanide, recalled) implies a ferri/ferro potential of 0.29 V against the measured 0.358 V; the NBS entries reproduce 0.358 V (row above), so they were kept. Low confidence either way" } })
-rk("Cu^2+ + 4 NH3(aq) = Cu(NH3)4^2+", 13.32, "from memory of J. Bjerrum 1941, Metal Ammine Formation in Aqueous Solution (2 mol/L NH4NO3, 30 C)", "low", { known = { diff = -1.57, margin = 0.02,
+rk("Cu^2+ + 4 NH3(aq) = Cu(NH3)4^2+", 13.32, "from memory of J. Bjerrum 1941, Metal Ammine Formation in Aqueous Solution (2 mol/L NH4NO3, 30 C)", "low", { T_C = 30, group = "M_other", medium = "2 mol/L NH4NO3", known = { diff = BJ_DIFF.Cu, margin = 0.02,
   why = "issue 13: the file now uses the I = 0, 25 C cumulative constants (Smith and Martell, recalled: 4.04, 7.47, 10.27, 11.75); Bjerrum measured in 2 mol/L NH4NO3 at 30 C. The difference is the medium, not an error of either" } })
 crc("Mn(OH)2(s,pyrochroite) + 2 e- = Mn(s) + 2 OH^-", -1.56, "medium", { note = "file: Baes and Mesmer pyrochroite with the file's NBS Mn^2+" })
 crc("Co(OH)3(s) + H^+ + e- = Co(OH)2(s) + H2O(l)", 1.005, "low", { source = "from memory of Pourbaix 1966, Atlas of Electrochemical Equilibria (cobalt chapter)",
@@ -528,7 +537,7 @@ local PB_POLY_WHY = "file: Baes and Mesmer 1976 (recalled); IUPAC review (recall
 local NEA05 = "from memory of the NEA-TDB nickel review (Gamsjaeger et al. 2005, Chemical Thermodynamics of Nickel; I = 0, 25 C)"
 local CODATA89 = "derived here from the CODATA 1989 key values (Cox, Wagman and Medvedev; recalled): "
 rk("Ba^2+ + H2O(l) = BaOH^+ + H^+", -13.32, BE16_BA, "medium",
-   { note = "0.15: file: Baes and Mesmer 1976 -13.47, which Nordstrom et al. 1990 copy (same table, read); Brown and Ekberg re-evaluated the few measurements of this weak complex. Within the medium class" })
+   { same = true, note = "s5-hyd (issue 13): Ba.lua now takes BaOH^+ from this very evaluation (it had Baes and Mesmer 1976 -13.47, 0.15 off); the independent row is the Baes and Mesmer column (section 4f)" })
 rk("Zn^2+ + H2O(l) = ZnOH^+ + H^+", -8.96, POWELL13 .. ": log *beta1 -8.96 +- 0.05", "medium", { note = "file: Baes and Mesmer 1976 -8.96 (recalled)" })
 rk("Zn^2+ + 2 H2O(l) = Zn(OH)2(aq) + 2 H^+", -17.82, POWELL13 .. ": log *beta2 -17.82 +- 0.08", "medium", { known = { diff = 0.92, margin = 0.02,
   why = "file: Baes and Mesmer 1976 -16.9 (recalled); the IUPAC review (-17.82, recalled) re-evaluated the zincite solubility and potentiometric data with specific ion interaction theory. Zn(OH)2(aq) dominates at most over a narrow pH window near 9-10, so its constant is poorly defined; with the file's value it holds about 8 times more zinc there than with the review's. Both recalled; the file keeps Baes and Mesmer (one compilation for all Zn hydrolysis species) until the review's table can be read" } })
@@ -551,8 +560,11 @@ rk("4 Ni^2+ + 4 H2O(l) = Ni4(OH)4^4+ + 4 H^+", -27.52, NEA05 .. ": log *beta44 -
   why = "file: Baes and Mesmer 1976 -27.74 (recalled); NEA-TDB -27.52 +- 0.15 (recalled); 0.22 over four protons, within the NEA uncertainty plus 0.07. The tetramer forms only in concentrated Ni(II) solutions near saturation with Ni(OH)2" } })
 local NEA12 = "from memory of the NEA-TDB tin review (Gamsjaeger et al. 2012, Chemical Thermodynamics of Tin; I = 0, 25 C)"
 local SN_WHY = "file: Baes and Mesmer 1976 (recalled); NEA-TDB 2012 (recalled) with uncertainties of +-0.4 to +-0.6. Sn(II) hydrolysis is hard to measure (Sn^2+ oxidises and Sn(OH)2 precipitates at pH 2-3), so the polymer and the neutral species rest on few potentiometric titrations in perchlorate media; the two evaluations fitted different species sets. Both recalled; the file keeps one compilation for all Sn(II) hydrolysis species"
-rk("Sn^2+ + H2O(l) = SnOH^+ + H^+", -3.53, NEA12 .. ": log *beta1 -3.53 +- 0.40", "low", { note = "0.13: file: Baes and Mesmer 1976 -3.40 (recalled); inside the review's +-0.40" })
-rk("Sn^2+ + 2 H2O(l) = Sn(OH)2(aq) + 2 H^+", -7.68, NEA12 .. ": log *beta2 -7.68 +- 0.40", "low", { known = { diff = 0.62, margin = 0.02, why = SN_WHY } })
+-- s5-hyd: the two rows below are now read (NEA12_R), the values unchanged.
+local NEA12_R = "NEA-TDB tin review (Gamsjaeger et al. 2012, Chemical Thermodynamics of Tin; I = 0, 25 C), read in the scanned volume at yumpu.com: Table III-2 and section VII.1"
+rk("Sn^2+ + H2O(l) = SnOH^+ + H^+", -3.53, NEA12_R .. ": log *beta1 -(3.53 +- 0.40), from the NaNO3 data of Pettine et al. 1981 re-evaluated by SIT", "low", { note = "0.13: file: Baes and Mesmer 1976 -3.40 (recalled); inside the review's +-0.40" })
+rk("Sn^2+ + 2 H2O(l) = Sn(OH)2(aq) + 2 H^+", -7.68, NEA12_R .. ": log *beta2 -(7.68 +- 0.40), from the single reliable study (Pettine et al. 1981, 5.4e-7 M Sn(II)) re-evaluated by SIT", "low", { known = { diff = 0.62, margin = 0.02,
+  why = "file: Baes and Mesmer 1976 -7.06 (recalled); NEA-TDB 2012 -7.68 +- 0.40 (read): the review rests Sn(OH)2(aq) on one study at 5.4e-7 M Sn(II) and calls it the only reliable one. Sn(II) hydrolysis is hard to measure (Sn^2+ oxidises and Sn(OH)2 precipitates at pH 2-3). The file keeps one compilation for all Sn(II) hydrolysis species: the review's Sn3(OH)4^2+ and Sn(OH)3^- could not be read, and it selects no Sn2(OH)2^2+ (recalled), so the set cannot be moved whole" } })
 rk("3 Sn^2+ + 4 H2O(l) = Sn3(OH)4^2+ + 4 H^+", -5.60, NEA12 .. ": log *beta34 -5.60 +- 0.47", "low", { known = { diff = -1.28, margin = 0.02, why = SN_WHY } })
 rk("Mg(s) + 0.5 O2(g) = MgO(s,periclase)", nbs_logK(-569.43), NBS_D .. "MgO (periclase) -569.43 kJ/mol", "high",
    { note = "file: CODATA 1989 periclase (-569.31 kJ/mol); both rest on the same combustion and solution calorimetry, so the row tests the copying of the key value more than the calorimetry" })
@@ -567,11 +579,173 @@ crc("Co^3+ + e- = Co^2+", 1.92, "medium", { known = { diff = 0.0326, margin = 0.
 -- from; if from Bjerrum's, they check the file's arithmetic more than the
 -- constants (the notes say so).
 crc("Cu(NH3)2^+ + e- = Cu(s) + 2 NH3(aq)", -0.12, "low", { note = "file: Smith and Martell log beta2 10.86 (I = 0, recalled) on the NBS Cu^+; the CRC value has two decimals" })
-crc("Cd(NH3)4^2+ + 2 e- = Cd(s) + 4 NH3(aq)", -0.622, "low", { note = "file: Bjerrum 1941 log beta4 7.12 (2 mol/L NH4NO3, 30 C, via Smith and Martell) on the CODATA Cd^2+; 8 mV is 0.27 in log beta4, about the change of medium from 2 mol/L NH4NO3 to I = 0 that the Cu ammines show. Which constants the CRC used is not known" })
-crc("Co(NH3)6^2+ + 2 e- = Co(s) + 6 NH3(aq)", -0.422, "low", { note = "11 mV: file: Bjerrum 1941 log beta6 5.11 (2 mol/L NH4NO3, 30 C, via Smith and Martell) on the NBS Co^2+ (the CRC value implies 4.74, 0.37 lower); which constants the CRC used is not known" })
+crc("Cd(NH3)4^2+ + 2 e- = Cd(s) + 4 NH3(aq)", -0.622, "low", { note = "20 mV: file (s5-lig): Smith and Martell log beta4 6.74 at I = 0 (read in Harvey's appendix) on the CODATA Cd^2+ (-0.403 V); the CRC value implies log beta4 7.41, above even Bjerrum's 2 mol/L NH4NO3 constant (7.12, which gave -0.630 V here). Which constants the CRC used is not known; within the low class" })
+crc("Co(NH3)6^2+ + 2 e- = Co(s) + 6 NH3(aq)", -0.422, "low", { note = "10 mV: file (s5-lig): Smith and Martell log beta6 4.40 (I = 0, 20 C; read in Harvey's appendix) on the NBS Co^2+; the CRC value implies 4.74, between it and Bjerrum's 2 mol/L NH4NO3 constant (5.11, which gave -0.433 V here). Which constants the CRC used is not known" })
 add({ kind = "logK", reaction = "Sn(s) = Sn(s,gray)", T_C = 13.2, group = "T_other", value = 0, tolclass = "Sn_T",
       source = "from memory of the measured white/gray tin transition temperature, 13.2 C (286.35 K; CRC Handbook of Chemistry and Physics, and Sn.lua's own note): log K = 0 there", confidence = "high",
       note = "file: NBS 1982 gray tin (dfG 0.13, dfH -2.09 kJ/mol, S 44.14) against white tin with the CODATA S (51.18; NBS 51.55)" })
+
+-- 4f. issue 13 coverage, s5-hyd: hydrolysis records of the metals (not Fe).
+-- The Wikipedia article 'Hydrolysis constant' (Baes and Mesmer 1976,
+-- Nordstrom et al. 1990, Brown and Ekberg 2016 side by side) could be read
+-- only as far as its stored copies reach: Al, Am, Ba, Be and B (the copies
+-- end there; the transition-metal tables were not reachable).  So the read
+-- rows are B and Ba; Ba.lua moved BaOH^+ to Brown and Ekberg (read, with its
+-- +-), the row above became same-source and the Baes and Mesmer column is
+-- the independent row here.  The other rows are recalled: Smith and Martell's
+-- first OH- constants (written with OH^-, so phlox's own water ionisation
+-- converts them) and the NEA-TDB nickel review.  Hydrolysis records still
+-- without a second value: docs/data-checks.md ("Coverage").
+local HYD_WIKI_B = "as tabulated in the Wikipedia article 'Hydrolysis constant' (read, 2023-11 copy)"
+rk("Ba^2+ + H2O(l) = BaOH^+ + H^+", -13.47, "Baes and Mesmer 1976, The Hydrolysis of Cations (I = 0, 25 C), " .. HYD_WIKI_B .. ": -13.47; Nordstrom et al. 1990 print the same -13.47 (same table)", "medium",
+   { note = "0.15: file (s5-hyd): Brown and Ekberg 2016 -13.32 +- 0.07 (read in the same table), a re-evaluation of the few measurements of this weak complex; Nordstrom et al. 1990 copy Baes and Mesmer. Within the medium class; BaOH^+ matters only above pH 12" })
+rk("B(OH)3(aq) + H2O(l) = B(OH)4^- + H^+", -9.236, "NIST SRD 46 (Smith and Martell's critically selected constants, I = 0, 25 C), " .. HYD_WIKI_B .. ": -9.236 +- 0.002 (Baes and Mesmer 1976, same table: -9.236)", "high",
+   { note = "file: Mesmer, Baes and Sweeton 1972 log K(T) with phlox's water ionisation; the Baes and Mesmer column is the same group's value, the NIST column Smith and Martell's selection (which includes the same measurements among others)" })
+rk("Sr^2+ + OH^- = SrOH^+", 0.82, SM .. ": log K1(OH) 0.82", "medium",
+   { note = "0.12: file: Baes and Mesmer 1976 -13.29 (recalled) for Sr^2+ + H2O = SrOH^+ + H^+, i.e. 0.70 here with phlox's water ionisation; SrOH^+ is a weak ion pair, measured only above pH 12 where activity corrections dominate; within the medium class" })
+rk("Mn^2+ + OH^- = MnOH^+", 3.4, SM .. ": log K1(OH) 3.4 (two digits)", "medium",
+   { note = "file: Baes and Mesmer 1976 -10.59 (recalled) with phlox's water ionisation" })
+rk("Co^2+ + OH^- = CoOH^+", 4.3, SM .. ": log K1(OH) 4.3 (two digits)", "medium",
+   { note = "file: Baes and Mesmer 1976 -9.65 (recalled; the reference row of log_k_25C.csv is that same value)" })
+rk("Na^+ + OH^- = NaOH(aq)", -0.2, SM .. ": log K1(OH) -0.2 (one digit)", "low",
+   { note = "file: Baes and Mesmer 1976 -14.18 for Na^+ + H2O = NaOH(aq) + H^+ (recalled). The ion pair is so weak that the constant rests on activity models of concentrated NaOH; it matters only above pH 13.5" })
+rk("Ni^2+ + 3 H2O(l) = Ni(OH)3^- + 3 H^+", -29.2, NEA05 .. ": log *beta3 -29.2 +- 1.7", "low", { known = { diff = -0.80, margin = 0.02,
+  why = "file: Baes and Mesmer 1976 -30.0 (recalled); NEA-TDB -29.2 +- 1.7 (recalled): the difference is half the review's own uncertainty. Gonzalez-Siso et al. 2017 (Radiochim. Acta, abstract read at degruyter) found no Ni(OH)3^- up to pH 13 in beta-Ni(OH)2 solubility in 0.5 and 3 M NaCl, contrary to the NEA selection; so even its existence below pH 13 is in doubt. Ni(OH)3^- rests on the solubility of NiO and Ni(OH)2 in strong base, a few tenths of a micromole per kg, so the constants scatter; the file keeps Baes and Mesmer for all Ni hydrolysis species (NiOH^+ and Ni4(OH)4^4+ rows above)" } })
+rk("2 Ni^2+ + H2O(l) = Ni2OH^3+ + H^+", -10.6, NEA05 .. ": log *beta21 -10.6 +- 1.0", "low",
+   { note = "file: Baes and Mesmer 1976 -10.7 (recalled); the dimer forms only in concentrated Ni(II) solutions, hence the review's +-1.0" })
+-- Measurements read in abstracts (primary papers, not compilations): they
+-- check the Baes and Mesmer constants of the files but do not replace them
+-- (one compilation per element; docs/data/transition-metals.md).
+local PW97 = "Palmer and Wesolowski 1997, J. Solution Chem. 26, 217 (abstract read): first hydrolysis quotient of Mg2+ measured potentiometrically (hydrogen-electrode concentration cell) at 1-250 C in NaCl media; at infinite dilution and 25 C log K = -11.68 +- 0.05, dH 70.1 +- 1.2 kJ/mol, dS 11 +- 4 J/(mol K), dCp 0 (log K linear in 1/T over 1-250 C)"
+local PW97_WHY = "file: Baes and Mesmer 1976 -11.44 (recalled) with dH 66.74 kJ/mol from Nordstrom et al. 1990 (recalled). The 1997 measurement (read) is 0.24 lower at 25 C and its dH 3.4 kJ/mol higher, so the gap closes with temperature: 0.12 at 100 C, within 0.03 at 200-250 C (rows below; both are van 't Hoff lines, the measured one with the paper's dCp 0). Only the first four per cent of Mg could be hydrolysed before brucite precipitated, so MgOH^+ is a minor species wherever brucite is stable; at pH 10 and 25 C it holds 3.5 % of Mg(II) with the file's constant against 2.0 % with the measured one. The file keeps one compilation for Mg hydrolysis (Mg4(OH)4^4+ has no second source); the measured set (log K, dH, dCp 0 to 250 C) is the documented candidate if Mg hydrolysis is revised"
+rk("Mg^2+ + H2O(l) = MgOH^+ + H^+", -11.68, PW97, "high", { known = { diff = 0.24, margin = 0.02, why = PW97_WHY } })
+for _, t in ipairs({ 100, 200, 250 }) do
+  add({ kind = "logK", reaction = "Mg^2+ + H2O(l) = MgOH^+ + H^+", T_C = t, group = "T_other", source = PW97, confidence = "high",
+        value_fn = function(T) return -11.68 - 70100 / (R_GAS * LN10) * (1 / T - 1 / 298.15) end,
+        known = t == 100 and { diff = 0.122, margin = 0.02, why = PW97_WHY } or nil,
+        note = t ~= 100 and "the file's van 't Hoff line (dH 66.74 kJ/mol) crosses the measured one (dH 70.1) near 225 C" or nil })
+end
+local EA62 = "Electrochim. Acta 7, no. 5 (1962; abstract read at sedici.unlp.edu.ar, authors not shown): first acid ionisation of Co2+ by potentiometric titration in NaClO4 media at 15-40 C; CoOH+ with dG(298) = 13.4 +- 0.2 kcal/mol and dH(298) = 8.2 +- 2.0 kcal/mol, i.e. log K = -13400 x 4.184/(R T ln 10) = -9.82 +- 0.15 (converted here)"
+rk("Co^2+ + H2O(l) = CoOH^+ + H^+", -13400 * 4.184 / (R_GAS * 298.15 * LN10), EA62, "low",
+   { note = "0.17: file: Baes and Mesmer 1976 -9.65 (recalled). The 1962 paper extrapolated from I = 0.33-0.87 and reports a second ionisation stronger than the first (a CoOH^+ disproportionation), so its constant is of low weight; within the low class" })
+add({ kind = "logK", reaction = "Co^2+ + H2O(l) = CoOH^+ + H^+", T_C = 40, group = "T_other", source = EA62, confidence = "low",
+      value_fn = function(T) return -13400 * 4.184 / (R_GAS * 298.15 * LN10) - 8200 * 4.184 / (R_GAS * LN10) * (1 / T - 1 / 298.15) end,
+      known = { diff = 0.347, margin = 0.02,
+        why = "the paper's dG and dH (van 't Hoff over its own 15-40 C range) against the file's isocoulombic estimate from -9.65: the 25 C offset (+0.17) plus the slope. The isocoulombic estimate (log K x 298.15/T here, n = 0) implies dH = 55 kJ/mol, in line with the measured first-hydrolysis enthalpies of the neighbouring ions in this library (MnOH^+ 60.3, ZnOH^+ 56.1, MgOH^+ 66.7 and 70.1 measured, rows above); the 1962 value, 34 +- 8 kJ/mol, is the outlier. Kept" } })
+local BS60 = "Biedermann and Sillen 1960, Acta Chem. Scand. 14, 717, 'A critical survey of the solubility equilibria of Ag2O' (read, scanned copy at scribd): at 25 C, 0.5 Ag2O(s) + 0.5 H2O = Ag+ + OH- log K -7.71 +- 0.03; = AgOH log K -5.75 +- 0.25; + OH- = Ag(OH)2- log K -3.72 +- 0.03"
+rk("Ag^+ + OH^- = AgOH(aq)", -5.75 + 7.71, BS60 .. "; log beta1 = -5.75 + 7.71 = 1.96 +- 0.25 (derived here)", "low",
+   { note = "file: Baes and Mesmer 1976 -12.0 (recalled) for Ag^+ + H2O = AgOH(aq) + H^+, which is this survey's beta1 on the water ionisation: Baes and Mesmer evaluated the same measurements, so the row checks the recalled number more than the chemistry. AgOH(aq) is minor at every pH" })
+rk("Ag^+ + 2 OH^- = Ag(OH)2^-", -3.72 + 7.71, BS60 .. "; log beta2 = -3.72 + 7.71 = 3.99 +- 0.04 (derived here)", "medium",
+   { note = "file: Baes and Mesmer 1976 -24.0 (recalled), as for AgOH(aq) the same measurements; Ag(OH)2^- carries the solubility of Ag2O above pH 12" })
+
+-- 4g. issue 13 coverage, s5-lig: complexes and ion pairs with ligands other
+-- than OH (Cl, F, S, C, N, P, CN files).  Values READ in a page are marked
+-- "(read ...)"; recalled ones say "from memory of".  A value copied from the
+-- very compilation the element file used is a same-source row: where the
+-- file's compiled value equals Smith and Martell's to the printed digits it is
+-- taken to come from there (same = true), otherwise the row is independent.
+local HSM = "Smith and Martell, Critical Stability Constants (I = 0, 25 C unless stated), as reprinted in Harvey, Analytical Chemistry 2.1, Appendix 16.12 'Formation Constants' (LibreTexts, read)"
+local function hsm(reaction, value, steps, confidence, extra)
+  rk(reaction, value, HSM .. ": " .. steps, confidence, extra)
+end
+-- ammines: N.lua now takes these very constants (same source; they check the
+-- reading and the summation).  Cu(II) and Ag(I) were recalled from Smith and
+-- Martell before and agree with the reprint.
+local AMM = {
+  { "Ni", { 2.72, 2.17, 1.66, 1.12, 0.67, -0.03 } },
+  { "Zn", { 2.21, 2.29, 2.36, 2.03 } },
+  { "Co", { 1.99, 1.51, 0.93, 0.64, 0.06, -0.73 } },
+  { "Cd", { 2.55, 2.01, 1.34, 0.84 } },
+  { "Cu", { 4.04, 3.43, 2.80, 1.48 } },
+}
+for _, m in ipairs(AMM) do
+  local lb, steps = 0, {}
+  for n, lk in ipairs(m[2]) do
+    lb = lb + lk
+    steps[#steps + 1] = ("%.2f"):format(lk)
+    local f = n == 1 and (m[1] .. "NH3^2+") or (m[1] .. "(NH3)" .. n .. "^2+")
+    hsm(("%s^2+ + %sNH3(aq) = %s"):format(m[1], n == 1 and "" or (n .. " "), f), math.floor(lb * 100 + 0.5) / 100,
+        "stepwise log K " .. table.concat(steps, ", ") .. (m[1] == "Co" and " (Co(II) at 20 C, as printed)" or "") .. ", summed", "medium",
+        { same = true, note = m[1] == "Co" and "N.lua uses the 20 C constants as 25 C values (the table's only Co(II) set); the row compares at 25 C" or nil })
+  end
+end
+hsm("Ag^+ + NH3(aq) = AgNH3^+", 3.31, "log K1 3.31", "medium", { same = true })
+hsm("Ag^+ + 2 NH3(aq) = Ag(NH3)2^+", 7.22, "log K1 3.31, log K2 3.91", "medium", { same = true, note = "file: Smith and Martell 7.23 (recalled)" })
+-- Bjerrum's medium constants for the other ammines (cf. Cu and the reference rows above)
+rk("Cd^2+ + 4 NH3(aq) = Cd(NH3)4^2+", 7.12, "from memory of J. Bjerrum 1941 (2 mol/L NH4NO3, 30 C) as reproduced in Smith and Martell (N.lua's value before s5-lig)", "low",
+   { T_C = 30, group = "M_other", medium = "2 mol/L NH4NO3", known = { diff = BJ_DIFF.Cd, margin = 0.02, why = BJ_WHY } })
+rk("Co^2+ + 6 NH3(aq) = Co(NH3)6^2+", 5.11, "from memory of J. Bjerrum 1941 (2 mol/L NH4NO3, 30 C) as reproduced in Smith and Martell (N.lua's value before s5-lig)", "low",
+   { T_C = 30, group = "M_other", medium = "2 mol/L NH4NO3", known = { diff = BJ_DIFF.Co, margin = 0.02, why = BJ_WHY } })
+-- chloro complexes (Smith and Martell as reprinted)
+hsm("Cu^2+ + Cl^- = CuCl^+", 0.40, "log K1 0.40", "low", { note = "file: compiled 0.43 (recalled); the IUPAC review's 0.83 (recalled, row above) is the outlier of the three" })
+hsm("Fe^3+ + 2 Cl^- = FeCl2^+", 2.13, "log K1 1.48, log K2 0.65", "low", { same = true, note = "file: Nordstrom et al. 1990 2.13, the same numbers" })
+hsm("Zn^2+ + 2 Cl^- = ZnCl2(aq)", 0.61, "log K1 0.43, log K2 0.18", "low", { note = "0.16: file: compiled 0.45 (recalled); the Zn-Cl constants beyond the first are poorly agreed (the file's note), and Cl.lua keeps one compilation for the set; within the low class" })
+hsm("Zn^2+ + 3 Cl^- = ZnCl3^-", 0.50, "log K1-K3 0.43, 0.18, -0.11", "low", { same = true, note = "file: compiled 0.5, the same value" })
+hsm("Zn^2+ + 4 Cl^- = ZnCl4^2-", 0.20, "log K1-K4 0.43, 0.18, -0.11, -0.3", "low", { same = true, note = "file: compiled 0.2, the same value" })
+hsm("Cd^2+ + Cl^- = CdCl^+", 1.98, "log K1 1.98", "medium", { same = true, note = "file: compiled 1.98, the same value" })
+local CDCL_WHY = "file: compiled 2.6 and 2.4 (recalled; stepwise K2 0.62, K3 -0.2); the reprint prints K2 1.62, which puts CdCl2(aq) one log unit higher while its K3 (-0.2) and K4 (-0.7) match the file's steps. A second step larger than the first's ratio allows for an outer-sphere chloride pair (K2 above K1 - 0.36) is not found in the other read data: Marcus 1959 (anion exchange, high I, abstract read) gives k1 1.95, k2 0.55. Most likely a misprint of 0.62 in the reprint (reasoning here); the file keeps its set"
+hsm("Cd^2+ + 2 Cl^- = CdCl2(aq)", 3.60, "log K1 1.98, log K2 1.62", "low", { known = { diff = -1.00, margin = 0.02, why = CDCL_WHY } })
+hsm("Cd^2+ + 3 Cl^- = CdCl3^-", 3.40, "log K1-K3 1.98, 1.62, -0.2", "low", { known = { diff = -1.00, margin = 0.02, why = CDCL_WHY } })
+-- lead chloride: Cl.lua takes Luo and Millero 2007 (I = 0, 15-300 C); three
+-- other determinations, all read
+local LM07_WHY = "file: Luo and Millero 2007 (spectrophotometry, I = 0-6 m, 15-45 C, fitted with Seward 1984 to 300 C; equations read, 1.58, 2.11, 1.80 at 25 C). Published I = 0 constants of PbCl2(aq) and PbCl3- spread by 0.4-0.9 (Millero and Byrne 1984: 2.03, 1.86; the PbCl2 solubility study: 1.67, 2.62; Smith and Martell: 1.80, 1.70; all read): the second and third complexes form only above 0.1 mol/kg chloride, where the activity model used to reach I = 0 decides their constants. The file follows the one set measured over temperature"
+hsm("Pb^2+ + Cl^- = PbCl^+", 1.59, "log K1 1.59", "medium", { note = "file: Luo and Millero 2007 equation (1.58)" })
+hsm("Pb^2+ + 2 Cl^- = PbCl2(aq)", 1.80, "log K1 1.59, log K2 0.21", "medium", { known = { diff = 0.31, margin = 0.02, why = LM07_WHY } })
+hsm("Pb^2+ + 3 Cl^- = PbCl3^-", 1.70, "log K1-K3 1.59, 0.21, -0.1", "medium", { note = "0.10: " .. LM07_WHY })
+hsm("Pb^2+ + 4 Cl^- = PbCl4^2-", 1.40, "log K1-K4 1.59, 0.21, -0.1, -0.3", "low", { note = "file: compiled 1.38 (recalled)" })
+local MB84 = "Millero and Byrne 1984, Geochim. Cosmochim. Acta 48 (abstract read at pure.lib.usf.edu): cumulative K1 30.0 +- 0.6, K2 106.7 +- 2.1, K3 73.0 +- 1.5 at 25 C (spectrophotometric data in HCl, NaCl, MgCl2 and CaCl2 analysed with Pitzer's equations)"
+rk("Pb^2+ + Cl^- = PbCl^+", log10(30.0), MB84, "medium", { note = "0.10: file: Luo and Millero 2007 (1.58), whose abstract says its 25 C values agree with the literature" })
+rk("Pb^2+ + 2 Cl^- = PbCl2(aq)", log10(106.7), MB84, "medium", { note = "file: Luo and Millero 2007 (2.11)" })
+rk("Pb^2+ + 3 Cl^- = PbCl3^-", log10(73.0), MB84, "medium", { note = "file: Luo and Millero 2007 (1.80)" })
+local PBSOL = "solubility of PbCl2 at 25 C in HClO4-HCl and HClO4-Pb(ClO4)2 solutions to 1 mol/kg, extrapolated to I = 0 (abstract read in the catalogue of the Czech Academy of Sciences library; authors and journal not shown): K1 40.3 +- 0.2, K2 47.2 +- 3, K3 420 +- 10 (cumulative)"
+rk("Pb^2+ + Cl^- = PbCl^+", log10(40.3), PBSOL, "medium", { note = "file: Luo and Millero 2007 (1.58)" })
+rk("Pb^2+ + 2 Cl^- = PbCl2(aq)", log10(47.2), PBSOL, "medium", { known = { diff = 0.44, margin = 0.02, why = LM07_WHY } })
+rk("Pb^2+ + 3 Cl^- = PbCl3^-", log10(420), PBSOL, "low", { known = { diff = -0.82, margin = 0.02, why = LM07_WHY } })
+-- cyanide
+hsm("Zn^2+ + 4 CN^- = Zn(CN)4^2-", 19.62, "log beta2 11.07, log K3 4.98, log K4 3.57", "medium", { same = true, note = "CN.lua takes this value (s5-lig); the NBS 1982 entry gave 16.76" })
+rk("Zn^2+ + 4 CN^- = Zn(CN)4^2-", log10(2.1e19), "OpenStax Chemistry 2e, Appendix K 'Formation Constants for Complex Ions' (read in the LibreTexts copy): Kf 2.1e19; conditions not stated", "low",
+   { note = "file: Smith and Martell 19.62 (read); 0.30 within the low class" })
+hsm("Ag^+ + 2 CN^- = Ag(CN)2^-", 20.48, "log beta2 20.48", "medium", { same = true, note = "CN.lua: Smith and Martell 20.48, recalled; the reprint confirms it" })
+crc("OCN^- + H2O(l) + 2 e- = CN^- + 2 OH^-", -0.970, "low", { note = "27 mV: file: NBS 1982 OCN^- and CN^- (derived, -0.169 V in acid); CRC -0.97 V (recalled, two decimals). The couple is irreversible (cyanide is oxidised to cyanate only by strong oxidants or catalysts), so the potential rests on thermal data; within the low class" })
+-- carbonate ion pairs: the file's own sources, read (same source)
+rk("Ca^2+ + HCO3^- = CaHCO3^+", 1.11, "Plummer and Busenberg 1982 (abstract read at pubs.er.usgs.gov/publication/70011789): log K 1.11 +- 0.07 at 25 C", "high", { same = true, note = "checks the recalled analytic log K(T) of C.lua" })
+local BPP84_R = "Busenberg, Plummer and Parker 1984 (abstract read at usgs.gov): log K 1.18 (SrHCO3+) and 2.81 (SrCO3 0) at 25 C"
+rk("Sr^2+ + HCO3^- = SrHCO3^+", 1.18, BPP84_R, "high", { same = true })
+rk("Sr^2+ + CO3^2- = SrCO3(aq)", 2.81, BPP84_R, "high", { same = true })
+local BP86_R = "Busenberg and Plummer 1986 (abstract read at pubs.usgs.gov): log K 0.982 (BaHCO3+) and 2.71 (BaCO3 0) at 25 C"
+rk("Ba^2+ + HCO3^- = BaHCO3^+", 0.982, BP86_R, "high", { same = true })
+rk("Ba^2+ + CO3^2- = BaCO3(aq)", 2.71, BP86_R, "high", { same = true })
+-- sulfate, carbonate: the IUPAC reviews (recalled: their abstracts, read, print no constants)
+rk("Cu^2+ + SO4^2- = CuSO4(aq)", 2.35, POWELL07 .. ": log beta 2.35 +- 0.05", "medium", { note = "file: compiled 2.31 (recalled)" })
+rk("Zn^2+ + SO4^2- = ZnSO4(aq)", 2.34, POWELL13 .. ": log beta 2.34 +- 0.05", "medium", { note = "file: compiled 2.37 (recalled)" })
+rk("Cd^2+ + SO4^2- = CdSO4(aq)", 2.37, POWELL11 .. ": log beta 2.37 +- 0.05", "medium", { note = "file: compiled 2.46 (recalled); the review's abstract (read) calls the Cd-sulfato system well characterised at low ionic strength" })
+rk("Pb^2+ + SO4^2- = PbSO4(aq)", 2.82, POWELL09 .. ": log beta 2.82 +- 0.05", "medium", { note = "file: compiled 2.75 (recalled)" })
+local ZNPB_CO3_WHY = "file: compiled constants (ZnCO3(aq) 5.3, PbCO3(aq) 7.24, recalled), the values of the older aqueous data sets; the IUPAC reviews (recalled) select lower ones from a re-evaluation with specific ion interaction theory, and their abstracts (read) stress that the Zn2+ + H+ + CO3 2- system needs better measurements. Both recalled; the file keeps one compilation for the carbonate set until the reviews' tables can be read. With the review's values ZnCO3(aq) would dominate zinc only above pH 8.4, as the Zn abstract says (read)"
+rk("Zn^2+ + CO3^2- = ZnCO3(aq)", 4.76, POWELL13 .. ": log beta 4.76 +- 0.03", "low", { known = { diff = 0.54, margin = 0.02, why = ZNPB_CO3_WHY } })
+rk("Pb^2+ + CO3^2- = PbCO3(aq)", 6.45, POWELL09 .. ": log beta 6.45 +- 0.05", "low", { known = { diff = 0.79, margin = 0.02, why = ZNPB_CO3_WHY } })
+-- sulfate ion pairs: NBS 1982 dfG of the un-ionized species, read as the
+-- reaction Gibbs energy printed on you-iggy.com's reaction pages (which cite
+-- the NBS tables); independent of Nordstrom et al. 1990 and the compiled set
+local NBS_YI = "NBS 1982 tables (Wagman et al.), reaction Gibbs energy as printed on you-iggy.com (read): "
+rk("Na^+ + SO4^2- = NaSO4^-", nbs_logK(-4.18), NBS_YI .. "Na+ + SO4 2- = NaSO4-, dG -4.18 kJ/mol (K 5.40)", "medium", { note = "file: Nordstrom et al. 1990 0.70 (recalled)" })
+rk("K^+ + SO4^2- = KSO4^-", nbs_logK(-4.27), NBS_YI .. "K+ + SO4 2- = KSO4-, dG -4.27 kJ/mol (K 5.60)", "medium", { note = "0.10: file: Nordstrom et al. 1990 0.85 (recalled); 0.6 kJ/mol in dG, within the medium class" })
+rk("Zn^2+ + SO4^2- = ZnSO4(aq)", nbs_logK(-(904.9 - 891.59)), NBS_YI .. "ZnSO4 dfG -904.9 (un-ionized) and -891.59 kJ/mol (ionized, = Zn2+ + SO4 2-)", "medium", { note = "file: compiled 2.37 (recalled)" })
+rk("Mg^2+ + SO4^2- = MgSO4(aq)", 2.23, SM .. ": 2.23 (conductance)", "medium", { note = "0.14: file: Nordstrom et al. 1990 2.37 (recalled). Published constants of this ion pair spread 2.2-2.4 with the activity model used to reach I = 0 (Buchner et al. 2004, abstract read: three kinds of ion pair coexist); within the medium class" })
+rk("Ca^2+ + SO4^2- = CaSO4(aq)", 2.31, SM .. ": 2.31 (conductance)", "medium", { note = "file: Nordstrom et al. 1990 2.30 (recalled)" })
+-- aluminium sulfate at 50 C (read)
+local RIDLEY99 = "Ridley et al. 1999, Geochim. Cosmochim. Acta 63, 459 (abstract read): potentiometry and gibbsite solubility in NaCl media, 50-125 C; at 50 C and infinite dilution log K(AlSO4+) 3.7 +- 0.4, log beta2(Al(SO4)2-) 5.6 +- 0.7"
+add({ kind = "logK", reaction = "Al^3+ + SO4^2- = AlSO4^+", T_C = 50, group = "T_lig", value = 3.7, source = RIDLEY99, confidence = "low", note = "file: Nordstrom et al. 1990 3.5 with dH 9.6 kJ/mol (recalled), van 't Hoff to 50 C" })
+add({ kind = "logK", reaction = "Al^3+ + 2 SO4^2- = Al(SO4)2^-", T_C = 50, group = "T_lig", value = 5.6, source = RIDLEY99, confidence = "low",
+      known = { diff = -0.424, margin = 0.02, why = "file: Nordstrom et al. 1990 5.0 with dH 13.0 kJ/mol (recalled), van 't Hoff to 50 C (5.18); the 0.42 lies inside the paper's own +-0.7 for this constant, whose extrapolation from 0.1-1 molal NaCl to infinite dilution carries most of it. The 1:1 complex agrees (row above)" } })
+-- lead chloride at temperature: the file's equations against the Seward-era
+-- values they were fitted to are the same source; the rows keep the chain
+-- from file to result honest at 100-300 C
+local LM07_R = "Luo and Millero 2007, Geochim. Cosmochim. Acta 71, 326 (abstract read): log beta1 = 44.82 + 0.031 T - 21.21 log T, log beta2 = 61.42 + 0.046 T - 29.51 log T, log beta3 = 107.97 + 0.071 T - 51.46 log T, 15-300 C (with Seward 1984)"
+for _, t in ipairs({ 100, 200, 300 }) do
+  local T = t + T0C
+  add({ kind = "logK", reaction = "Pb^2+ + 2 Cl^- = PbCl2(aq)", T_C = t, group = "T_lig", value = 61.42 + 0.046 * T - 29.51 * log10(T),
+        source = LM07_R, confidence = "medium", same = true, tolclass = "HT_fit" })
+end
 
 -- 5. temperatures other than 25 C ------------------------------------------
 -- pKw along saturation: phlox's HKF OH^- against IAPWS R11-07 (water.csv,
@@ -832,10 +1006,12 @@ M.GROUPS = {
   { id = "K25_rec", title = "log K at 25 C: further published constants (recalled)" },
   { id = "T_water", title = "Water ionisation along saturation, 0-300 C (IAPWS R11-07)" },
   { id = "T_carb", title = "Carbonate constants at 100-250 C (Plummer and Busenberg 1982)" },
-  { id = "T_other", title = "Other temperatures: AgCl/Ag electrode and NH4+ (0-50 C), mackinawite (95 C), beta-Ni(OH)2 (100-200 C), aluminate (50-100 C), Ca and Mg phosphates (37 C), white/gray tin (13.2 C)" },
+  { id = "T_other", title = "Other temperatures: AgCl/Ag electrode and NH4+ (0-50 C), mackinawite (95 C), beta-Ni(OH)2 (100-200 C), aluminate (50-100 C), Ca and Mg phosphates (37 C), white/gray tin (13.2 C), MgOH+ (100-250 C), CoOH+ (40 C)" },
   { id = "T_hot", title = "Oxide solubility at 200 C: hematite (high_temperature.csv)" },
   { id = "T_hg", title = "Dissolved elemental mercury at 60 C: Hg(aq) Henry constant (high_temperature.csv)" },
   { id = "T_nico", title = "Nickel at temperature: the Ni/NiO boundary at 309 C (high_temperature.csv)" },
+  { id = "T_lig", title = "Complexes at other temperatures: Al sulfate (50 C), Pb chloride (100-300 C), Co ammines (20 C)" },
+  { id = "M_other", title = "Constants in another medium (not I = 0): Bjerrum's ammines in 2 mol/L NH4NO3 at 30 C; they check no I = 0 record (not counted in the coverage or the 25 C targets)" },
 }
 
 -- ---------------------------------------------------------------- helpers
@@ -902,7 +1078,7 @@ function M.run(phlox, refdir, opts)
     local T_C = c.T_C or 25
     local T = T_C + T0C
     local r = { check = c, reaction = c.reaction, kind = c.kind, T_C = T_C, group = c.group,
-                same = c.same or false, note = c.note, known = c.known }
+                same = c.same or false, note = c.note, known = c.known, medium = c.medium }
     -- the published value
     local published, source, confidence
     if c.ref then
@@ -1031,7 +1207,8 @@ M.species_of = species_of
 function M.coverage(phlox, results, opts)
   local seen = {}
   for _, r in ipairs(results) do
-    if r.diff and (r.kind == "E0" or r.kind == "logK") then
+    -- a constant in another medium (c.medium: not I = 0) does not check an I = 0 record
+    if r.diff and (r.kind == "E0" or r.kind == "logK") and not r.medium then
       for _, f in ipairs(species_of(r.reaction)) do
         local k = seen[f] or {}
         seen[f] = k
@@ -1065,7 +1242,8 @@ end
 -- ---------------------------------------------------------------- document
 -- Short labels for the table's source column (full text in the notes).
 local SHORT = {
-  { "Nordstrom 2022", "Nordstrom 2022 (abstract read)" }, { "Talanta 1971", "Talanta 1971 (abstract read)" },
+  { "NIST SRD 46", "NIST SRD 46 (read)" }, { "Palmer and Wesolowski 1997", "Palmer & Wesolowski 1997 (abstract read)" },
+  { "Electrochim. Acta 7", "Electrochim. Acta 1962 (abstract read)" }, { "Biedermann and Sillen", "Biedermann & Sillen 1960 (read)" }, { "Nordstrom 2022", "Nordstrom 2022 (abstract read)" }, { "Talanta 1971", "Talanta 1971 (abstract read)" },
   { "Moreno, Gregory and Brown 1966", "Moreno et al. 1966 (abstract read)" }, { "Bull. Soc. Chim. Belg.", "Bull. Soc. Chim. Belg. 1990 (abstract read)" },
   { "in the quaternary system", "brushite solubility, 25 C (abstract read)" },
   { "Siebert and Hostetler", "Siebert & Hostetler 1977 (abstract read)" }, { "Compilation of Henry's law", "Sander compilation (read)" },
@@ -1189,7 +1367,7 @@ function M.render(results, summary)
   local indep = { E = { n = 0, tight = 0 }, K = { n = 0, tight = 0 } }
   for _, r in ipairs(results) do
     if r.kind == "E0" or r.kind == "logK" then
-      if not r.same and r.T_C == 25 and r.diff then
+      if not r.same and not r.medium and r.T_C == 25 and r.diff then
         local t = r.kind == "E0" and indep.E or indep.K
         t.n = t.n + 1
         if math.abs(r.diff) <= (r.kind == "E0" and TIGHT_E or TIGHT_K) then t.tight = t.tight + 1 end
@@ -1201,7 +1379,7 @@ function M.render(results, summary)
         if r.verdict == "pass" then e.pass = e.pass + 1
         elseif r.verdict == "known difference" then e.known = e.known + 1
         else e.fail = e.fail + 1 end
-        if not r.same and r.T_C == 25 and r.diff then
+        if not r.same and not r.medium and r.T_C == 25 and r.diff then
           e.indep = e.indep + 1
           if math.abs(r.diff) <= (r.kind == "E0" and TIGHT_E or TIGHT_K) then e.tight = e.tight + 1 end
         end
@@ -1213,7 +1391,7 @@ function M.render(results, summary)
   -- rows outside the target: explained as known differences, noted, or neither
   local out_t = { known = 0, noted = 0, bare = 0, recalled = 0, n = 0 }
   for _, r in ipairs(results) do
-    if (r.kind == "E0" or r.kind == "logK") and not r.same and r.T_C == 25 and r.diff
+    if (r.kind == "E0" or r.kind == "logK") and not r.same and not r.medium and r.T_C == 25 and r.diff
        and math.abs(r.diff) > (r.kind == "E0" and TIGHT_E or TIGHT_K) then
       out_t.n = out_t.n + 1
       if r.known then out_t.known = out_t.known + 1

@@ -30,8 +30,8 @@ M.USES = {
   { id = "SHS89", use = "revised-HKF parameters of neutral aqueous species, recalled from the paper's tables." },
   { id = "SSWS97", use = "Fe2+ (complete HKF set) and the dfG/dfH/S from which Fe3+ is defined. Recalled." },
   { id = "IAPWS95", use = "G(T,P) - G(Tr,Pr) of the built-in H2O(l)." },
-  { id = "BM76", use = "hydrolysis constants at I = 0 and 25 C (mononuclear and polynuclear) of every metal. Recalled; the Al constants also appear in the Wikipedia table 'Hydrolysis constant' (read)." },
-  { id = "BE16", use = "Al hydrolysis constants at I = 0, 25 C (read in the Wikipedia table 'Hydrolysis constant')." },
+  { id = "BM76", use = "hydrolysis constants at I = 0 and 25 C (mononuclear and polynuclear) of every metal but Al and Ba. Recalled; the Al and Ba constants also appear in the Wikipedia table 'Hydrolysis constant' (read)." },
+  { id = "BE16", use = "Al and Ba hydrolysis constants at I = 0, 25 C, with their +- (read in the Wikipedia table 'Hydrolysis constant')." },
   { id = "STIPP93", use = "otavite (CdCO3) solubility product from its measured solubility. Recalled." },
   { id = "PG02", use = "malachite solubility constant and dfH from solubility measured at 15-65 C (abstract read)." },
   { id = "N90", use = "log K and dH of complexes and minerals, and dH of several hydrolysis reactions. Recalled." },
@@ -75,6 +75,9 @@ M.USES = {
   { id = "AT94", use = "vivianite solubility product and its temperature function, measured 5-90 C (abstract read)." },
   { id = "BZ23", use = "dfG of greenockite (CdS) recommended from its measured solubility product (abstract read)." },
   { id = "GS92", use = "standard entropy of monoclinic pyrrhotite Fe7S8 (adiabatic calorimetry). Recalled." },
+  -- s5-lig (issue 13)
+  { id = "HARVEY21", use = "stepwise ammine constants of Ni, Zn, Co(20 C) and Cd at I = 0, 25 C (Smith and Martell, read in its Appendix 16.12), summed to the cumulative log beta of N.lua; log beta4 of Zn(CN)4^2- (CN.lua)." },
+  { id = "LM07", use = "log beta_n(T) of PbCl+, PbCl2(aq) and PbCl3-, 15-300 C, I = 0 (equations read in the abstract)." },
 }
 
 local function file_of(s)
