@@ -209,6 +209,31 @@ return {
       short = "Busenberg and Plummer 1986",
       cite = "Busenberg, E. and Plummer, L. N. (1986). The solubility of BaCO3(cr) (witherite) in CO2-H2O solutions between 0 and 90 C, ... Geochim. Cosmochim. Acta 50, 2225.",
     },
+    -- s5-solids (issue 13: independent checks of solids, pyrrhotite, molybdenite, jarosite)
+    BC87 = {
+      short = "Bartovska and Cerny 1987",
+      cite = "Bartovska, L. and Cerny, C. (1987). The influence of the structure of molybdenum disulphide on its reactivity. Collect. Czech. Chem. Commun. 52, 678-685 (abstract read at cccc.uochb.cas.cz).",
+    },
+    BP96 = {
+      short = "Baron and Palmer 1996",
+      cite = "Baron, D. and Palmer, C. D. (1996). Solubility of jarosite at 4-35 C. Geochim. Cosmochim. Acta 60, 185-195 (abstract and introduction read).",
+    },
+    TSIV = {
+      short = "Gurvich et al., IVTANTHERMO tables",
+      cite = "Gurvich, L. V., Veyts, I. V. et al. Thermodynamic Properties of Individual Substances (IVTANTHERMO), iron section as published online by ChemNet, Moscow State University (www.chem.msu.ru/rus/tsiv/Fe/; table Fe.37, 'choice of the enthalpy of formation of Fe0.875S', read; editors and edition not shown there).",
+    },
+    GS92 = {
+      short = "Gronvold and Stolen 1992",
+      cite = "Gronvold, F. and Stolen, S. (1992). Thermodynamics of iron sulfides II. Heat capacity and thermodynamic properties of FeS and of Fe0.875S at temperatures from 298.15 K to 1000 K (title recalled in part). J. Chem. Thermodyn. 24, 913 (recalled).",
+    },
+    BZ23 = {
+      short = "Bazarkina et al. 2023",
+      cite = "Bazarkina, E. F., Zotov, A. V., Chareev, D. A., Truche, L. and Tarnopolskaya, M. E. (2023). Cadmium behavior in sulfur-bearing aqueous environments: insight from CdS solubility measurements at 25-80 C. Geology of Ore Deposits 65, 28-43 (abstract read).",
+    },
+    AT94 = {
+      short = "Al-Borno and Tomson 1994",
+      cite = "Al-Borno, A. and Tomson, M. B. (1994). The temperature dependence of the solubility product constant of vivianite. Geochim. Cosmochim. Acta 58, 5373 (abstract read at discovery.researcher.life, which does not show authors or journal: those are recalled).",
+    },
     -- s5-fe (issue 13): iron solids by their measured solubility
     BDH09 = {
       short = "Benezeth et al. 2009",

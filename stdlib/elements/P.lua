@@ -2,6 +2,7 @@
 -- calcium and magnesium phosphate complexes, and the common phosphate minerals
 -- (apatite, brushite, strengite, vivianite).
 --
+-- Vivianite (issue 13, s5-solids): the measured solubility product 5-90 C of [AT94].
 -- Primary compilation: Smith and Martell (Critical Stability Constants, I = 0) for the
 -- acid constants, with NBS 1982 enthalpies; H2PO4^- and HPO4^2- carry the SH88 values;
 -- the minerals are defined by their measured solubility products (each record names it).
@@ -86,7 +87,11 @@ return {
       reaction = "FePO4*2H2O(s,strengite) = Fe^3+ + PO4^3- + 2 H2O(l)", logK = -26.4, estimate = "isocoulombic",
       source = NRIAGU, quality = "medium", note = "dH not recalled" },
     { formula = "Fe3(PO4)2*8H2O(s,vivianite)", model = "logk",
-      reaction = "Fe3(PO4)2*8H2O(s,vivianite) = 3 Fe^2+ + 2 PO4^3- + 8 H2O(l)", logK = -36.0, estimate = "isocoulombic",
-      source = NRIAGU, quality = "medium", note = "dH not recalled" },
+      reaction = "Fe3(PO4)2*8H2O(s,vivianite) = 3 Fe^2+ + 2 PO4^3- + 8 H2O(l)", logK = -35.767,
+      logK_T = { 234.205, 0, -12242.6, -92.510 }, T_range = { 278.15, 363.15 },
+      uncertainty = { logK = 0.076 },
+      source = "[AT94] (abstract read): pKsp = -234.205 + 12242.6/T + 92.510 log10 T measured at 5-90 C, log Ksp -35.767 +- 0.076 at 25 C",
+      quality = "medium",
+      note = "Issue 13 (s5-solids): was " .. NRIAGU .. " (log Ksp -36.0, held by the isocoulombic estimate); the measured equation also gives the temperature dependence (dH 5.05 kJ/mol, dCp -769 J/(mol K) at 25 C, from the same abstract). Outside 5-90 C it is an extrapolation." },
   },
 }

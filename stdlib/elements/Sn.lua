@@ -21,11 +21,11 @@ return {
   species = {
     {
       formula = "Sn(s)", model = "cp",
-      G = 0, H = 0, S = 51.18,
+      G = 0, H = 0, S = 51.55,
       cp = { a = 26.99, b = 0, c = 0 },
       V = 16.29,
       T_range = { 273.15, 505.08 },
-      source = "S: " .. CODATA .. " (NBS 51.55); Cp: " .. NBS,
+      source = "S and Cp: " .. NBS .. " ([CODATA89] S 51.18, recalled, not used: issue 13 took NBS, the table of gray tin, Sn^2+ and the oxides, so that the white/gray tin entropy difference comes from one table)",
       quality = "high",
       note = "white (beta) tin, the reference state; below 286.4 K gray tin is stable but the change is slow. cp is NBS Cp at 298.15 K taken as constant. Melts at 505.08 K. V from the density 7.287 g/cm3.",
     },

@@ -39,12 +39,12 @@ return {
     },
     {
       formula = "TiO2(s,anatase)", model = "cp",
-      G = -883.3, H = -938.7, S = 49.92,
+      G = -884.5, H = -939.7, S = 49.90,
       cp = { a = 55.48, b = 0, c = 0 },
       V = 20.52,
       source = NBS .. "; V: " .. RH95,
       quality = "medium",
-      note = "metastable with respect to rutile (5.5 kJ/mol). cp is NBS Cp at 298.15 K taken as constant.",
+      note = "metastable with respect to rutile (4.3 kJ/mol in dfG). Issue 13: the record carried dfG -883.3, dfH -938.7, S 49.92 under an NBS label; those are the [RH95] and JANAF values (recalled), 1.2 kJ/mol less stable. It now takes the NBS 1982 values like rutile, so that the anatase-rutile difference comes from one table: NBS puts anatase 4.3 kJ/mol above rutile in enthalpy, RH95/JANAF 5.3, drop-solution calorimetry 2.61 +- 0.41 (Ranade et al. 2002, Proc. Natl. Acad. Sci. 99, 6476, abstract read), so NBS is the closer. The RH95 values are an independent check (docs/data-checks.md). cp is NBS Cp at 298.15 K taken as constant.",
     },
     {
       formula = "Ti2O3(s)", model = "cp",

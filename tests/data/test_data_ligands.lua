@@ -478,7 +478,9 @@ local LIT = {
   { "CuS(s,covellite) + H^+ = Cu^2+ + HS^-", -23.038, "from memory of compiled mineral constants (USGS compilations after Nordstrom et al. 1990)", 0.3 },
   { "Cu2S(s,chalcocite) + H^+ = 2 Cu^+ + HS^-", -34.619, "from memory of compiled mineral constants (USGS compilations after Nordstrom et al. 1990)", 0.3 },
   { "Ag2S(s,acanthite) + H^+ = 2 Ag^+ + HS^-", -36.05, "from memory of compiled mineral constants (USGS compilations after Nordstrom et al. 1990)", 0.3 },
-  { "CdS(s,greenockite) + H^+ = Cd^2+ + HS^-", -15.93, "from memory of compiled mineral constants (USGS compilations after Nordstrom et al. 1990)", 0.3 },
+  -- s5-solids (issue 13): the compiled -15.93 (recalled) followed the NBS 1982 greenockite, which two read measurements
+  -- contradict (S.lua note); the row now holds the file against the measured crystalline-CdS solubility
+  { "CdS(s,greenockite) + H^+ = Cd^2+ + HS^-", -14.82, "Wang and Tessier 1999, Environ. Sci. Technol. 33, 4270 (abstract read): crystalline CdS, -14.82 +- 0.03", 0.3 },
   { "CuSO4*5H2O(s,chalcanthite) = Cu^2+ + SO4^2- + 5 H2O(l)", -2.64, "from memory of compiled mineral constants (USGS compilations after Nordstrom et al. 1990)", 0.3 },
   { "ZnSO4*7H2O(s,goslarite) = Zn^2+ + SO4^2- + 7 H2O(l)", -1.96, "from memory of compiled mineral constants (USGS compilations after Nordstrom et al. 1990)", 0.3 },
   { "MgSO4*7H2O(s,epsomite) = Mg^2+ + SO4^2- + 7 H2O(l)", -2.14, "from memory of compiled mineral constants (USGS compilations after Nordstrom et al. 1990)", 0.3 },

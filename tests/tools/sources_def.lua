@@ -72,6 +72,13 @@ M.USES = {
   { id = "BPP84", use = "strontianite log Ksp(T) and the SrHCO3+ and SrCO3(aq) constants. Recalled." },
   { id = "BP86", use = "witherite log Ksp(T) and the BaHCO3+ and BaCO3(aq) constants. Recalled." },
   { id = "CONVENTION", use = "H+ and e-." },
+  -- s5-solids (issue 13)
+  { id = "BC87", use = "the measured MoS2-Mo-H2S-H2 equilibrium at 569-1277 K (dfG equation of MoS2, abstract read), which supports the fluorine-calorimetric molybdenite of Robie and Hemingway 1995." },
+  { id = "BP96", use = "log Ksp and dH of K-jarosite, measured at 4-35 C (abstract read)." },
+  { id = "TSIV", use = "third-law enthalpies of formation of pyrrhotite Fe0.875S from five equilibrium studies (table Fe.37 read), averaged here for Fe7S8." },
+  { id = "AT94", use = "vivianite solubility product and its temperature function, measured 5-90 C (abstract read)." },
+  { id = "BZ23", use = "dfG of greenockite (CdS) recommended from its measured solubility product (abstract read)." },
+  { id = "GS92", use = "standard entropy of monoclinic pyrrhotite Fe7S8 (adiabatic calorimetry). Recalled." },
   -- s5-lig (issue 13)
   { id = "HARVEY21", use = "stepwise ammine constants of Ni, Zn, Co(20 C) and Cd at I = 0, 25 C (Smith and Martell, read in its Appendix 16.12), summed to the cumulative log beta of N.lua; log beta4 of Zn(CN)4^2- (CN.lua)." },
   { id = "LM07", use = "log beta_n(T) of PbCl+, PbCl2(aq) and PbCl3-, 15-300 C, I = 0 (equations read in the abstract)." },
