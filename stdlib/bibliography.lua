@@ -67,7 +67,7 @@ return {
     },
     BE16 = {
       short = "Brown and Ekberg 2016",
-      cite = "Brown, P. L. and Ekberg, C. (2016). Hydrolysis of Metal Ions. Wiley-VCH, Weinheim (the Al constants read in the Wikipedia table 'Hydrolysis constant', which also lists the Baes and Mesmer 1976 and Hummel and Thoenen 2023 values).",
+      cite = "Brown, P. L. and Ekberg, C. (2016). Hydrolysis of Metal Ions. Wiley-VCH, Weinheim (the Al and Ba constants read in the Wikipedia table 'Hydrolysis constant', which also lists the Baes and Mesmer 1976 and Hummel and Thoenen 2023 values).",
     },
     STIPP93 = {
       short = "Stipp et al. 1993",

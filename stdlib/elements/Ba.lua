@@ -4,12 +4,14 @@
 --
 -- Primary compilation: the NBS tables (Wagman et al. 1982) for Ba(cr) and
 -- Ba^2+ (CODATA 1989 gives no key value for barium, as recalled); hydrolysis
--- from Baes and Mesmer 1976.  The NBS Ba^2+ with NBS barite and the SH88
--- sulfate reproduces the measured barite Ksp within 0.01.  Every number was
--- recalled, not read ("from memory of").
+-- from Brown and Ekberg 2016 (read in the Wikipedia table "Hydrolysis
+-- constant"; issue 13 moved BaOH^+ there from Baes and Mesmer 1976).  The NBS
+-- Ba^2+ with NBS barite and the SH88 sulfate reproduces the measured barite
+-- Ksp within 0.01.  Every other number was recalled, not read ("from memory
+-- of").
 
 local NBS = "from memory of [NBS82]"
-local BM = "from memory of [BM76] (I = 0, 25 C)"
+local BE16 = "[BE16] (I = 0, 25 C; read)"
 
 return {
   element = "Ba",
@@ -34,9 +36,11 @@ return {
     {
       formula = "BaOH^+", model = "logk",
       reaction = "Ba^2+ + H2O(l) = BaOH^+ + H^+",
-      logK = -13.47, estimate = "isocoulombic",
-      source = BM, quality = "medium",
-      note = "No dH recalled: temperature by the isocoulombic estimate.",
+      logK = -13.32, estimate = "isocoulombic",
+      uncertainty = { logK = 0.07 },
+      source = BE16 .. " (+- 0.07)",
+      quality = "medium",
+      note = "No dH recalled: temperature by the isocoulombic estimate (from this 25 C value). [BM76] -13.47 and [N90] -13.47 (both read in the same table; Nordstrom et al. copy Baes and Mesmer); Brown and Ekberg re-evaluated the few measurements of this weak complex. At I = 0 BaOH^+ holds 1 % of Ba(II) at pH 11.3 (0.7 % with the Baes and Mesmer value) and 32 % at pH 13 (25 %): the ratio BaOH^+/Ba^2+ is 10^(logK + pH).",
     },
   },
 }

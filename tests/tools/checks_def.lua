@@ -528,7 +528,7 @@ local PB_POLY_WHY = "file: Baes and Mesmer 1976 (recalled); IUPAC review (recall
 local NEA05 = "from memory of the NEA-TDB nickel review (Gamsjaeger et al. 2005, Chemical Thermodynamics of Nickel; I = 0, 25 C)"
 local CODATA89 = "derived here from the CODATA 1989 key values (Cox, Wagman and Medvedev; recalled): "
 rk("Ba^2+ + H2O(l) = BaOH^+ + H^+", -13.32, BE16_BA, "medium",
-   { note = "0.15: file: Baes and Mesmer 1976 -13.47, which Nordstrom et al. 1990 copy (same table, read); Brown and Ekberg re-evaluated the few measurements of this weak complex. Within the medium class" })
+   { same = true, note = "s5-hyd (issue 13): Ba.lua now takes BaOH^+ from this very evaluation (it had Baes and Mesmer 1976 -13.47, 0.15 off); the independent row is the Baes and Mesmer column (section 4f)" })
 rk("Zn^2+ + H2O(l) = ZnOH^+ + H^+", -8.96, POWELL13 .. ": log *beta1 -8.96 +- 0.05", "medium", { note = "file: Baes and Mesmer 1976 -8.96 (recalled)" })
 rk("Zn^2+ + 2 H2O(l) = Zn(OH)2(aq) + 2 H^+", -17.82, POWELL13 .. ": log *beta2 -17.82 +- 0.08", "medium", { known = { diff = 0.92, margin = 0.02,
   why = "file: Baes and Mesmer 1976 -16.9 (recalled); the IUPAC review (-17.82, recalled) re-evaluated the zincite solubility and potentiometric data with specific ion interaction theory. Zn(OH)2(aq) dominates at most over a narrow pH window near 9-10, so its constant is poorly defined; with the file's value it holds about 8 times more zinc there than with the review's. Both recalled; the file keeps Baes and Mesmer (one compilation for all Zn hydrolysis species) until the review's table can be read" } })
@@ -551,8 +551,11 @@ rk("4 Ni^2+ + 4 H2O(l) = Ni4(OH)4^4+ + 4 H^+", -27.52, NEA05 .. ": log *beta44 -
   why = "file: Baes and Mesmer 1976 -27.74 (recalled); NEA-TDB -27.52 +- 0.15 (recalled); 0.22 over four protons, within the NEA uncertainty plus 0.07. The tetramer forms only in concentrated Ni(II) solutions near saturation with Ni(OH)2" } })
 local NEA12 = "from memory of the NEA-TDB tin review (Gamsjaeger et al. 2012, Chemical Thermodynamics of Tin; I = 0, 25 C)"
 local SN_WHY = "file: Baes and Mesmer 1976 (recalled); NEA-TDB 2012 (recalled) with uncertainties of +-0.4 to +-0.6. Sn(II) hydrolysis is hard to measure (Sn^2+ oxidises and Sn(OH)2 precipitates at pH 2-3), so the polymer and the neutral species rest on few potentiometric titrations in perchlorate media; the two evaluations fitted different species sets. Both recalled; the file keeps one compilation for all Sn(II) hydrolysis species"
-rk("Sn^2+ + H2O(l) = SnOH^+ + H^+", -3.53, NEA12 .. ": log *beta1 -3.53 +- 0.40", "low", { note = "0.13: file: Baes and Mesmer 1976 -3.40 (recalled); inside the review's +-0.40" })
-rk("Sn^2+ + 2 H2O(l) = Sn(OH)2(aq) + 2 H^+", -7.68, NEA12 .. ": log *beta2 -7.68 +- 0.40", "low", { known = { diff = 0.62, margin = 0.02, why = SN_WHY } })
+-- s5-hyd: the two rows below are now read (NEA12_R), the values unchanged.
+local NEA12_R = "NEA-TDB tin review (Gamsjaeger et al. 2012, Chemical Thermodynamics of Tin; I = 0, 25 C), read in the scanned volume at yumpu.com: Table III-2 and section VII.1"
+rk("Sn^2+ + H2O(l) = SnOH^+ + H^+", -3.53, NEA12_R .. ": log *beta1 -(3.53 +- 0.40), from the NaNO3 data of Pettine et al. 1981 re-evaluated by SIT", "low", { note = "0.13: file: Baes and Mesmer 1976 -3.40 (recalled); inside the review's +-0.40" })
+rk("Sn^2+ + 2 H2O(l) = Sn(OH)2(aq) + 2 H^+", -7.68, NEA12_R .. ": log *beta2 -(7.68 +- 0.40), from the single reliable study (Pettine et al. 1981, 5.4e-7 M Sn(II)) re-evaluated by SIT", "low", { known = { diff = 0.62, margin = 0.02,
+  why = "file: Baes and Mesmer 1976 -7.06 (recalled); NEA-TDB 2012 -7.68 +- 0.40 (read): the review rests Sn(OH)2(aq) on one study at 5.4e-7 M Sn(II) and calls it the only reliable one. Sn(II) hydrolysis is hard to measure (Sn^2+ oxidises and Sn(OH)2 precipitates at pH 2-3). The file keeps one compilation for all Sn(II) hydrolysis species: the review's Sn3(OH)4^2+ and Sn(OH)3^- could not be read, and it selects no Sn2(OH)2^2+ (recalled), so the set cannot be moved whole" } })
 rk("3 Sn^2+ + 4 H2O(l) = Sn3(OH)4^2+ + 4 H^+", -5.60, NEA12 .. ": log *beta34 -5.60 +- 0.47", "low", { known = { diff = -1.28, margin = 0.02, why = SN_WHY } })
 rk("Mg(s) + 0.5 O2(g) = MgO(s,periclase)", nbs_logK(-569.43), NBS_D .. "MgO (periclase) -569.43 kJ/mol", "high",
    { note = "file: CODATA 1989 periclase (-569.31 kJ/mol); both rest on the same combustion and solution calorimetry, so the row tests the copying of the key value more than the calorimetry" })
@@ -572,6 +575,59 @@ crc("Co(NH3)6^2+ + 2 e- = Co(s) + 6 NH3(aq)", -0.422, "low", { note = "11 mV: fi
 add({ kind = "logK", reaction = "Sn(s) = Sn(s,gray)", T_C = 13.2, group = "T_other", value = 0, tolclass = "Sn_T",
       source = "from memory of the measured white/gray tin transition temperature, 13.2 C (286.35 K; CRC Handbook of Chemistry and Physics, and Sn.lua's own note): log K = 0 there", confidence = "high",
       note = "file: NBS 1982 gray tin (dfG 0.13, dfH -2.09 kJ/mol, S 44.14) against white tin with the CODATA S (51.18; NBS 51.55)" })
+
+-- 4f. issue 13 coverage, s5-hyd: hydrolysis records of the metals (not Fe).
+-- The Wikipedia article 'Hydrolysis constant' (Baes and Mesmer 1976,
+-- Nordstrom et al. 1990, Brown and Ekberg 2016 side by side) could be read
+-- only as far as its stored copies reach: Al, Am, Ba, Be and B (the copies
+-- end there; the transition-metal tables were not reachable).  So the read
+-- rows are B and Ba; Ba.lua moved BaOH^+ to Brown and Ekberg (read, with its
+-- +-), the row above became same-source and the Baes and Mesmer column is
+-- the independent row here.  The other rows are recalled: Smith and Martell's
+-- first OH- constants (written with OH^-, so phlox's own water ionisation
+-- converts them) and the NEA-TDB nickel review.  Hydrolysis records still
+-- without a second value: docs/data-checks.md ("Coverage").
+local HYD_WIKI_B = "as tabulated in the Wikipedia article 'Hydrolysis constant' (read, 2023-11 copy)"
+rk("Ba^2+ + H2O(l) = BaOH^+ + H^+", -13.47, "Baes and Mesmer 1976, The Hydrolysis of Cations (I = 0, 25 C), " .. HYD_WIKI_B .. ": -13.47; Nordstrom et al. 1990 print the same -13.47 (same table)", "medium",
+   { note = "0.15: file (s5-hyd): Brown and Ekberg 2016 -13.32 +- 0.07 (read in the same table), a re-evaluation of the few measurements of this weak complex; Nordstrom et al. 1990 copy Baes and Mesmer. Within the medium class; BaOH^+ matters only above pH 12" })
+rk("B(OH)3(aq) + H2O(l) = B(OH)4^- + H^+", -9.236, "NIST SRD 46 (Smith and Martell's critically selected constants, I = 0, 25 C), " .. HYD_WIKI_B .. ": -9.236 +- 0.002 (Baes and Mesmer 1976, same table: -9.236)", "high",
+   { note = "file: Mesmer, Baes and Sweeton 1972 log K(T) with phlox's water ionisation; the Baes and Mesmer column is the same group's value, the NIST column Smith and Martell's selection (which includes the same measurements among others)" })
+rk("Sr^2+ + OH^- = SrOH^+", 0.82, SM .. ": log K1(OH) 0.82", "medium",
+   { note = "0.12: file: Baes and Mesmer 1976 -13.29 (recalled) for Sr^2+ + H2O = SrOH^+ + H^+, i.e. 0.70 here with phlox's water ionisation; SrOH^+ is a weak ion pair, measured only above pH 12 where activity corrections dominate; within the medium class" })
+rk("Mn^2+ + OH^- = MnOH^+", 3.4, SM .. ": log K1(OH) 3.4 (two digits)", "medium",
+   { note = "file: Baes and Mesmer 1976 -10.59 (recalled) with phlox's water ionisation" })
+rk("Co^2+ + OH^- = CoOH^+", 4.3, SM .. ": log K1(OH) 4.3 (two digits)", "medium",
+   { note = "file: Baes and Mesmer 1976 -9.65 (recalled; the reference row of log_k_25C.csv is that same value)" })
+rk("Na^+ + OH^- = NaOH(aq)", -0.2, SM .. ": log K1(OH) -0.2 (one digit)", "low",
+   { note = "file: Baes and Mesmer 1976 -14.18 for Na^+ + H2O = NaOH(aq) + H^+ (recalled). The ion pair is so weak that the constant rests on activity models of concentrated NaOH; it matters only above pH 13.5" })
+rk("Ni^2+ + 3 H2O(l) = Ni(OH)3^- + 3 H^+", -29.2, NEA05 .. ": log *beta3 -29.2 +- 1.7", "low", { known = { diff = -0.80, margin = 0.02,
+  why = "file: Baes and Mesmer 1976 -30.0 (recalled); NEA-TDB -29.2 +- 1.7 (recalled): the difference is half the review's own uncertainty. Gonzalez-Siso et al. 2017 (Radiochim. Acta, abstract read at degruyter) found no Ni(OH)3^- up to pH 13 in beta-Ni(OH)2 solubility in 0.5 and 3 M NaCl, contrary to the NEA selection; so even its existence below pH 13 is in doubt. Ni(OH)3^- rests on the solubility of NiO and Ni(OH)2 in strong base, a few tenths of a micromole per kg, so the constants scatter; the file keeps Baes and Mesmer for all Ni hydrolysis species (NiOH^+ and Ni4(OH)4^4+ rows above)" } })
+rk("2 Ni^2+ + H2O(l) = Ni2OH^3+ + H^+", -10.6, NEA05 .. ": log *beta21 -10.6 +- 1.0", "low",
+   { note = "file: Baes and Mesmer 1976 -10.7 (recalled); the dimer forms only in concentrated Ni(II) solutions, hence the review's +-1.0" })
+-- Measurements read in abstracts (primary papers, not compilations): they
+-- check the Baes and Mesmer constants of the files but do not replace them
+-- (one compilation per element; docs/data/transition-metals.md).
+local PW97 = "Palmer and Wesolowski 1997, J. Solution Chem. 26, 217 (abstract read): first hydrolysis quotient of Mg2+ measured potentiometrically (hydrogen-electrode concentration cell) at 1-250 C in NaCl media; at infinite dilution and 25 C log K = -11.68 +- 0.05, dH 70.1 +- 1.2 kJ/mol, dS 11 +- 4 J/(mol K), dCp 0 (log K linear in 1/T over 1-250 C)"
+local PW97_WHY = "file: Baes and Mesmer 1976 -11.44 (recalled) with dH 66.74 kJ/mol from Nordstrom et al. 1990 (recalled). The 1997 measurement (read) is 0.24 lower at 25 C and its dH 3.4 kJ/mol higher, so the gap closes with temperature: 0.12 at 100 C, within 0.03 at 200-250 C (rows below; both are van 't Hoff lines, the measured one with the paper's dCp 0). Only the first four per cent of Mg could be hydrolysed before brucite precipitated, so MgOH^+ is a minor species wherever brucite is stable; at pH 10 and 25 C it holds 3.5 % of Mg(II) with the file's constant against 2.0 % with the measured one. The file keeps one compilation for Mg hydrolysis (Mg4(OH)4^4+ has no second source); the measured set (log K, dH, dCp 0 to 250 C) is the documented candidate if Mg hydrolysis is revised"
+rk("Mg^2+ + H2O(l) = MgOH^+ + H^+", -11.68, PW97, "high", { known = { diff = 0.24, margin = 0.02, why = PW97_WHY } })
+for _, t in ipairs({ 100, 200, 250 }) do
+  add({ kind = "logK", reaction = "Mg^2+ + H2O(l) = MgOH^+ + H^+", T_C = t, group = "T_other", source = PW97, confidence = "high",
+        value_fn = function(T) return -11.68 - 70100 / (R_GAS * LN10) * (1 / T - 1 / 298.15) end,
+        known = t == 100 and { diff = 0.122, margin = 0.02, why = PW97_WHY } or nil,
+        note = t ~= 100 and "the file's van 't Hoff line (dH 66.74 kJ/mol) crosses the measured one (dH 70.1) near 225 C" or nil })
+end
+local EA62 = "Electrochim. Acta 7, no. 5 (1962; abstract read at sedici.unlp.edu.ar, authors not shown): first acid ionisation of Co2+ by potentiometric titration in NaClO4 media at 15-40 C; CoOH+ with dG(298) = 13.4 +- 0.2 kcal/mol and dH(298) = 8.2 +- 2.0 kcal/mol, i.e. log K = -13400 x 4.184/(R T ln 10) = -9.82 +- 0.15 (converted here)"
+rk("Co^2+ + H2O(l) = CoOH^+ + H^+", -13400 * 4.184 / (R_GAS * 298.15 * LN10), EA62, "low",
+   { note = "0.17: file: Baes and Mesmer 1976 -9.65 (recalled). The 1962 paper extrapolated from I = 0.33-0.87 and reports a second ionisation stronger than the first (a CoOH^+ disproportionation), so its constant is of low weight; within the low class" })
+add({ kind = "logK", reaction = "Co^2+ + H2O(l) = CoOH^+ + H^+", T_C = 40, group = "T_other", source = EA62, confidence = "low",
+      value_fn = function(T) return -13400 * 4.184 / (R_GAS * 298.15 * LN10) - 8200 * 4.184 / (R_GAS * LN10) * (1 / T - 1 / 298.15) end,
+      known = { diff = 0.347, margin = 0.02,
+        why = "the paper's dG and dH (van 't Hoff over its own 15-40 C range) against the file's isocoulombic estimate from -9.65: the 25 C offset (+0.17) plus the slope. The isocoulombic estimate (log K x 298.15/T here, n = 0) implies dH = 55 kJ/mol, in line with the measured first-hydrolysis enthalpies of the neighbouring ions in this library (MnOH^+ 60.3, ZnOH^+ 56.1, MgOH^+ 66.7 and 70.1 measured, rows above); the 1962 value, 34 +- 8 kJ/mol, is the outlier. Kept" } })
+local BS60 = "Biedermann and Sillen 1960, Acta Chem. Scand. 14, 717, 'A critical survey of the solubility equilibria of Ag2O' (read, scanned copy at scribd): at 25 C, 0.5 Ag2O(s) + 0.5 H2O = Ag+ + OH- log K -7.71 +- 0.03; = AgOH log K -5.75 +- 0.25; + OH- = Ag(OH)2- log K -3.72 +- 0.03"
+rk("Ag^+ + OH^- = AgOH(aq)", -5.75 + 7.71, BS60 .. "; log beta1 = -5.75 + 7.71 = 1.96 +- 0.25 (derived here)", "low",
+   { note = "file: Baes and Mesmer 1976 -12.0 (recalled) for Ag^+ + H2O = AgOH(aq) + H^+, which is this survey's beta1 on the water ionisation: Baes and Mesmer evaluated the same measurements, so the row checks the recalled number more than the chemistry. AgOH(aq) is minor at every pH" })
+rk("Ag^+ + 2 OH^- = Ag(OH)2^-", -3.72 + 7.71, BS60 .. "; log beta2 = -3.72 + 7.71 = 3.99 +- 0.04 (derived here)", "medium",
+   { note = "file: Baes and Mesmer 1976 -24.0 (recalled), as for AgOH(aq) the same measurements; Ag(OH)2^- carries the solubility of Ag2O above pH 12" })
 
 -- 5. temperatures other than 25 C ------------------------------------------
 -- pKw along saturation: phlox's HKF OH^- against IAPWS R11-07 (water.csv,
@@ -715,7 +771,7 @@ M.GROUPS = {
   { id = "K25_rec", title = "log K at 25 C: further published constants (recalled)" },
   { id = "T_water", title = "Water ionisation along saturation, 0-300 C (IAPWS R11-07)" },
   { id = "T_carb", title = "Carbonate constants at 100-250 C (Plummer and Busenberg 1982)" },
-  { id = "T_other", title = "Other temperatures: AgCl/Ag electrode and NH4+ (0-50 C), mackinawite (95 C), beta-Ni(OH)2 (100-200 C), aluminate (50-100 C), Ca and Mg phosphates (37 C), white/gray tin (13.2 C)" },
+  { id = "T_other", title = "Other temperatures: AgCl/Ag electrode and NH4+ (0-50 C), mackinawite (95 C), beta-Ni(OH)2 (100-200 C), aluminate (50-100 C), Ca and Mg phosphates (37 C), white/gray tin (13.2 C), MgOH+ (100-250 C), CoOH+ (40 C)" },
   { id = "T_hot", title = "Oxide solubility at 200 C: hematite (high_temperature.csv)" },
   { id = "T_hg", title = "Dissolved elemental mercury at 60 C: Hg(aq) Henry constant (high_temperature.csv)" },
   { id = "T_nico", title = "Nickel at temperature: the Ni/NiO boundary at 309 C (high_temperature.csv)" },
@@ -948,7 +1004,8 @@ end
 -- ---------------------------------------------------------------- document
 -- Short labels for the table's source column (full text in the notes).
 local SHORT = {
-  { "Nordstrom 2022", "Nordstrom 2022 (abstract read)" }, { "Talanta 1971", "Talanta 1971 (abstract read)" },
+  { "NIST SRD 46", "NIST SRD 46 (read)" }, { "Palmer and Wesolowski 1997", "Palmer & Wesolowski 1997 (abstract read)" },
+  { "Electrochim. Acta 7", "Electrochim. Acta 1962 (abstract read)" }, { "Biedermann and Sillen", "Biedermann & Sillen 1960 (read)" }, { "Nordstrom 2022", "Nordstrom 2022 (abstract read)" }, { "Talanta 1971", "Talanta 1971 (abstract read)" },
   { "Moreno, Gregory and Brown 1966", "Moreno et al. 1966 (abstract read)" }, { "Bull. Soc. Chim. Belg.", "Bull. Soc. Chim. Belg. 1990 (abstract read)" },
   { "in the quaternary system", "brushite solubility, 25 C (abstract read)" },
   { "Siebert and Hostetler", "Siebert & Hostetler 1977 (abstract read)" }, { "Compilation of Henry's law", "Sander compilation (read)" },
