@@ -342,6 +342,38 @@ function M.sulfate_step_model(lib, parts)
   return nil
 end
 
+M.SULFATE_AUX = "SO4^2- + H2O(l) = HSO4^- + OH^-"
+M.SULFATE_TEMPS = { 100, 150, 200, 250, 300 }
+-- the evidence for the sulfate rule: M.SULFATE_ANALOG by each method, within
+-- its species' declared range (estimate - measured, log K); and the steps the
+-- library estimates with it (log K, no measured value)
+function M.sulfate_analog(lib)
+  local function K(rx, tc) return assert(lib.db:reaction(rx, tc + T0C)).logK end
+  local a25 = assert(lib.db:reaction(M.SULFATE_AUX, TR, 1.0)).logK
+  local r25 = assert(lib.db:reaction(M.SULFATE_ANALOG, TR, 1.0))
+  local tmax = math.huge
+  for _, f in ipairs { "HCO3^-", "OH^-", "CO3^2-" } do tmax = math.min(tmax, lib:species(f).Tmax or math.huge) end
+  local out = { reaction = M.SULFATE_ANALOG, logK25 = r25.logK, rows = {}, steps = {} }
+  for _, tc in ipairs(M.SULFATE_TEMPS) do
+    local T = tc + T0C
+    if T <= tmax + 1e-6 then
+      local meas = K(M.SULFATE_ANALOG, tc)
+      out.rows[#out.rows + 1] = { T_C = tc, meas = meas, held = r25.logK - meas,
+        water = r25.logK * TR / T - meas,
+        sulfate = (r25.logK + a25) * TR / T - K(M.SULFATE_AUX, tc) - meas,
+        vanthoff = r25.logK - r25.dH / (R_GAS * LN10) * (1 / T - 1 / TR) - meas }
+    end
+  end
+  for _, x in ipairs { { "CuCl3^2-", "CuCl2^- + Cl^- = CuCl3^2-" }, { "AgCl3^2-", "AgCl2^- + Cl^- = AgCl3^2-" } } do
+    if lib:species(x[1]) then
+      local st = { species = x[1], reaction = x[2], logK = {} }
+      for _, tc in ipairs { 25, 100, 200, 300 } do st.logK[tc] = K(x[2], tc) end
+      out.steps[#out.steps + 1] = st
+    end
+  end
+  return out
+end
+
 -- The rule applied to the library: every estimated complex (a logk record
 -- with the isocoulombic estimate whose reaction is "M + nu L = ML") and the
 -- model the "same type" rule picks for it (nil: none qualifies, the water
@@ -515,6 +547,7 @@ function M.run(phlox)
   sum.hkf_rows, sum[M.HKF_SPECIES_METHOD] = run_hkf_species(lib)
   sum.model_rows, sum.model = run_models(phlox, lib, rows)
   sum.library_models = M.library_models(lib, sum.model_rows)
+  sum.sulfate_analog = M.sulfate_analog(lib)
   sum.higher = M.higher_hydrolysis(lib, rows)
   sum.nio = {}
   for _, tc in ipairs({ 150, 200, 250, 300 }) do
@@ -659,6 +692,32 @@ function M.render(rows, sum)
   w("|---|---|---|")
   for _, x in ipairs(sum.library_models) do
     w(("| `%s` | `%s` | %s |"):format(x.species, x.reaction, x.model and ("`" .. x.model .. "`") or "none (water ionisation only)"))
+  end
+  w("")
+  local sa = sum.sulfate_analog
+  w("Where no complex of the same type has measured data and the step joins two")
+  w("monovalent anions into a dianion (CuCl3²⁻, AgCl3²⁻), the model balances the")
+  w("charge types with the sulfate protonation, `" .. M.SULFATE_AUX .. "`")
+  w("(docs/thermo.md). The one reaction of the library of that type with measured")
+  w(("log K(T), `%s` (log K %.2f at 25 °C), within its range, estimate − measured:"):format(sa.reaction, sa.logK25))
+  w("")
+  w("| T (°C) | measured | held | water ionisation only (one-term) | sulfate-balanced | van 't Hoff, measured ΔrH° at 25 °C |")
+  w("|---|---|---|---|---|---|")
+  for _, r in ipairs(sa.rows) do
+    w(("| %d | %.2f | %s | %s | %s | %s |"):format(r.T_C, r.meas, f2(r.held), f2(r.water), f2(r.sulfate), f2(r.vanthoff)))
+  end
+  w("")
+  local all_high = #sa.rows > 0
+  for _, r in ipairs(sa.rows) do
+    for _, k in ipairs { "held", "water", "sulfate", "vanthoff" } do all_high = all_high and r[k] > 0 end
+  end
+  w((all_high and "Every method errs high (too much dianion). " or "") .. "The steps estimated this way, log K")
+  w("at 25/100/200/300 °C:")
+  w("")
+  w("| species | step | log K |")
+  w("|---|---|---|")
+  for _, st in ipairs(sa.steps) do
+    w(("| `%s` | `%s` | %.2f %.2f %.2f %.2f |"):format(st.species, st.reaction, st.logK[25], st.logK[100], st.logK[200], st.logK[300]))
   end
   w("")
   w("### Higher hydrolysis steps")
