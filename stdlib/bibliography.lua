@@ -209,6 +209,15 @@ return {
       short = "Busenberg and Plummer 1986",
       cite = "Busenberg, E. and Plummer, L. N. (1986). The solubility of BaCO3(cr) (witherite) in CO2-H2O solutions between 0 and 90 C, ... Geochim. Cosmochim. Acta 50, 2225.",
     },
+    -- s5-lig (issue 13): sources read for the complex and ion-pair records
+    HARVEY21 = {
+      short = "Harvey, Analytical Chemistry 2.1",
+      cite = "Harvey, D. (2021). Analytical Chemistry 2.1, Appendix 16.12: Formation Constants (LibreTexts, chem.libretexts.org). Stepwise and cumulative constants of metal-ligand complexes taken from Martell, A. E. and Smith, R. M., Critical Stability Constants, vols. 1-4 (Plenum, 1976); 25 C and zero ionic strength unless the table says otherwise.",
+    },
+    LM07 = {
+      short = "Luo and Millero 2007",
+      cite = "Luo, Y. and Millero, F. J. (2007). Stability constants for the formation of lead chloride complexes as a function of temperature and ionic strength. Geochim. Cosmochim. Acta 71, 326-334.",
+    },
     CONVENTION = {
       short = "standard-state convention",
       cite = "Conventions of the conventional ionic standard state (all properties of H+ zero at every T and P; e- = H+ - 1/2 H2(g)).",

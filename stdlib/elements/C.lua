@@ -111,9 +111,11 @@ return {
     -- ---------------------------------------------------------------- carbonate and bicarbonate complexes
     { formula = "CaHCO3^+", model = "logk", reaction = "Ca^2+ + HCO3^- = CaHCO3^+",
       logK = 1.106, logK_T = { 1209.120, 0.31294, -34765.05, -478.782, 0 }, T_range = { 273.15, 363.15 },
+      uncertainty = { logK = 0.07 },  -- +-: read in the abstract of [PB82] (1.11 +- 0.07)
       source = PB82, quality = "high" },
     { formula = "CaCO3(aq)", model = "logk", reaction = "Ca^2+ + CO3^2- = CaCO3(aq)",
       logK = 3.224, logK_T = { -1228.732, -0.299440, 35512.75, 485.818, 0 }, T_range = { 273.15, 363.15 },
+      uncertainty = { logK = 0.14 },  -- +-: read in the abstract of [PB82]
       source = PB82, quality = "high", note = "stated 3.22 +- 0.14" },
     { formula = "MgHCO3^+", model = "logk", reaction = "Mg^2+ + HCO3^- = MgHCO3^+",
       logK = 1.07, logK_T = { -59.215, 0, 2537.455, 20.92298, 0 }, T_range = { 273.15, 363.15 },

@@ -14,9 +14,10 @@
 -- cyanide diagrams in hydrometallurgy.
 --
 -- Primary compilation: the NBS tables (Wagman et al. 1982) for CN^-, HCN,
--- OCN^- and the Au, Fe, Ni and Zn cyano complexes (their dfG, dfH and S close
+-- OCN^- and the Au, Fe and Ni cyano complexes (their dfG, dfH and S close
 -- the Gibbs-Helmholtz cycle within 0.6 kJ/mol, a check on the recall), so
--- these carry reaction enthalpies (van 't Hoff).  Ag and Cu complexes: Smith
+-- these carry reaction enthalpies (van 't Hoff).  Zn(CN)4^2-: the log beta4
+-- of Smith and Martell (read) with the NBS enthalpy.  Ag and Cu complexes: Smith
 -- and Martell, Critical Stability Constants (no enthalpy recalled:
 -- isocoulombic estimate); the Cu(I) values are those Penneman and Jones 1956
 -- derived from their infrared measurements (abstract read, checked in
@@ -91,10 +92,10 @@ local species = {
     {
       formula = "Zn(CN)4^2-", model = "logk",
       reaction = "Zn^2+ + 4 CN^- = Zn(CN)4^2-",
-      logK = 16.76, dH = -106.2,
-      source = NBSD .. ": Zn(CN)4^2- dfG 446.9, dfH 342.3 kJ/mol, S 226 J/(mol K); Zn^2+ dfG -147.06, dfH -153.89",
-      quality = "low",
-      note = "The literature splits: 16.7 (Lange's Handbook) and 19.6 (quoted in gold-processing texts), both recalled; the NBS entry agrees with the lower one.",
+      logK = 19.62, dH = -106.2,
+      source = "log K: [SM] (I = 0, 25 C) read in [HARVEY21], Appendix 16.12: log beta2 11.07, log K3 4.98, log K4 3.57, summed here; dH " .. NBSD .. ": Zn(CN)4^2- dfH 342.3 kJ/mol, Zn^2+ dfH -153.89, CN^- dfH 150.6",
+      quality = "medium",
+      note = "s5-lig (issue 13): the NBS 1982 entry (dfG 446.9 kJ/mol, log beta4 16.76, used before) is 2.9 log units below the measured I = 0 constants; OpenStax Appendix K prints 2.1e19 (19.32, read, conditions not given) and Lange's Handbook 16.7 (recalled). The reaction enthalpy is still the NBS one (van 't Hoff), the only one recalled. The change moves the Zn^2+/Zn(CN)4^2- boundary from log a(CN^-) = -4.19 to -4.91.",
     },
     {
       formula = "Ni(CN)4^2-", model = "logk",

@@ -25,6 +25,7 @@ local COMPILED = "from memory of [COMPILED]"
 local SM = "from memory of [SM] (I = 0, 25 C)"
 local POWELL05 = "[POWELL05], the Hg2+-Cl-, OH- systems (I = 0, 25 C)"
 local POWELL05_READ = POWELL05 .. "; value and +- read in the abstract of its summary (Aust. J. Chem. 2004, doi:10.1071/CH04063)"
+local LM07 = "[LM07], log beta_n(T) = A + B T + D log10 T read in the abstract (fit of 15-45 C measurements with Seward 1984 to 300 C; I = 0)"
 local CAL = { energy = "cal", entropy = "cal" }
 local KCAL = { energy = "kcal" }
 
@@ -155,14 +156,31 @@ return {
     { formula = "CdCl3^-", model = "logk", reaction = "Cd^2+ + 3 Cl^- = CdCl3^-", logK = 2.4, dH = 3.9, units = KCAL,
       source = COMPILED, quality = "low" },
 
-    { formula = "PbCl^+", model = "logk", reaction = "Pb^2+ + Cl^- = PbCl^+", logK = 1.6, dH = 4.38, units = KCAL,
-      source = COMPILED, quality = "medium" },
-    { formula = "PbCl2(aq)", model = "logk", reaction = "Pb^2+ + 2 Cl^- = PbCl2(aq)", logK = 1.8, dH = 1.08, units = KCAL,
-      source = COMPILED, quality = "medium" },
-    { formula = "PbCl3^-", model = "logk", reaction = "Pb^2+ + 3 Cl^- = PbCl3^-", logK = 1.7, dH = 2.17, units = KCAL,
-      source = COMPILED, quality = "low" },
+    -- Pb(II) chloro complexes (s5-lig, issue 13): the thermodynamic (I = 0)
+    -- log beta_n(T) of Luo and Millero 2007, fitted to their spectrophotometric
+    -- measurements (15-45 C, I = 0-6 m) together with Seward 1984 (to 300 C);
+    -- equations read in the abstract, coefficients as printed (rounded: the
+    -- 0.031 T term alone carries +-0.15 at 25 C, so the 25 C values 1.58, 2.11
+    -- and 1.80 are the equations', not the paper's table).  They replace the
+    -- compiled set (1.6, 1.8, 1.7 with recalled dH), whose van 't Hoff
+    -- extrapolation gave log beta2 2.1 at 200 C against 4.2 measured.  The
+    -- spread of published 25 C constants (0.1-0.9, docs/data-checks.md) is
+    -- larger than the difference between the sets at 25 C.
+    { formula = "PbCl^+", model = "logk", reaction = "Pb^2+ + Cl^- = PbCl^+", logK = 1.5799,
+      logK_T = { 44.82, 0.031, 0, -21.21, 0 }, T_range = { 288.15, 573.15 },
+      uncertainty = { logK = 0.05 },  -- +-: the fit's standard error, read in the abstract
+      source = LM07, quality = "medium" },
+    { formula = "PbCl2(aq)", model = "logk", reaction = "Pb^2+ + 2 Cl^- = PbCl2(aq)", logK = 2.1143,
+      logK_T = { 61.42, 0.046, 0, -29.51, 0 }, T_range = { 288.15, 573.15 },
+      uncertainty = { logK = 0.08 },
+      source = LM07, quality = "medium" },
+    { formula = "PbCl3^-", model = "logk", reaction = "Pb^2+ + 3 Cl^- = PbCl3^-", logK = 1.8042,
+      logK_T = { 107.97, 0.071, 0, -51.46, 0 }, T_range = { 288.15, 573.15 },
+      uncertainty = { logK = 0.10 },
+      source = LM07, quality = "medium" },
     { formula = "PbCl4^2-", model = "logk", reaction = "Pb^2+ + 4 Cl^- = PbCl4^2-", logK = 1.38, dH = 3.53, units = KCAL,
-      source = COMPILED, quality = "low" },
+      source = COMPILED, quality = "low",
+      note = "not in the Luo and Millero 2007 set (which has no fourth complex): the compiled constant and dH, so its 25 C value and its temperature dependence are not consistent with PbCl3^- above; minor below about 1 mol/kg chloride" },
 
     { formula = "MnCl^+", model = "logk", reaction = "Mn^2+ + Cl^- = MnCl^+", logK = 0.61, estimate = { method = "isocoulombic", model = "Cu^2+ + Cl^- = CuCl^+" },
       source = COMPILED, quality = "low", note = "dH not recalled" },

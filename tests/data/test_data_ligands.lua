@@ -412,6 +412,9 @@ local DOCUMENTED = {
   ["S(s) + 2 e- = S^2-"] = { -0.1004, "row is low confidence and rests on pK2(H2S) near 14; the file uses pK2 = 17.4 (Migdisov et al. 2002)" },
   ["SO4^2- + 4 H^+ + 2 e- = H2SO3(aq) + H2O(l)"] = { -0.0146, "CRC 0.172 V; NBS-derived sulfite data with SH88 SO4^2- give 0.157 V; the two CRC sulfite couples sum to 0.357 V against 0.352 V for SO4/S (row note)" },
   ["NO3^- + H2O(l) + 2 e- = NO2^- + 2 OH^-"] = { -0.0170, "CRC 0.01 V (medium); SH88 NO3^- with NBS NO2^- gives -0.007 V; NBS alone gives 0.004 V" },
+  -- s5-lig: the rows are Bjerrum's constants in 2 mol/L NH4NO3 at 30 C; N.lua takes Smith and Martell's I = 0 set
+  ["Zn^2+ + 4 NH3(aq) = Zn(NH3)4^2+"] = { -0.570, "row: Bjerrum 1941 in 2 mol/L NH4NO3, 30 C (9.46); file: Smith and Martell at I = 0 (8.89, read in Harvey's appendix): a difference of medium" },
+  ["Ni^2+ + 6 NH3(aq) = Ni(NH3)6^2+"] = { -0.430, "row: Bjerrum 1941 in 2 mol/L NH4NO3, 30 C (8.74); file: Smith and Martell at I = 0 (8.31, read in Harvey's appendix): a difference of medium" },
   ["HClO(aq) + H^+ + 2 e- = Cl^- + H2O(l)"] = { 0.0132, "CRC 1.482 V; NBS dfG of HClO(aq) and Cl^- alone give 1.495 V, as does the file (Morris 1966 pKa with NBS ClO^-); Pourbaix 1966 prints 1.494 (recalled)" },
 }
 

@@ -45,6 +45,25 @@ assert(nE_ind >= 30, "fewer than 30 independent E checks at 25 C: " .. nE_ind)
 assert(nK_ind >= 30, "fewer than 30 independent log K checks at 25 C: " .. nK_ind)
 assert(nhot >= 10, "fewer than 10 checks at 100-300 C: " .. nhot)
 
+-- Second metric (issue 13, s5-pot): standard potentials against the values
+-- read in published tables (tests/reference/standard_potentials_read.csv).
+local m2 = defs.read_metric(results)
+assert(m2.n == nE_ind, ("second metric counts %d couples, the first %d"):format(m2.n, nE_ind))
+assert(m2.assessed + m2.none == m2.n and m2.within <= m2.assessed and m2.spread <= m2.multi and m2.multi <= m2.assessed,
+  "second metric: counts do not add up")
+assert(m2.assessed >= 30, "fewer than 30 couples with a read published value: " .. m2.assessed)
+do -- a value read for Cd^2+/Cd (Harris, -0.402) is attached to its row and counts
+  local found
+  for _, e in ipairs(m2.rows) do
+    if e.r.reaction == "Cd^2+ + 2 e- = Cd(s)" then
+      for _, v in ipairs(e.vals) do if v.table:find("Harris", 1, true) and v.value == -0.402 then found = true end end
+    end
+  end
+  assert(found, "the Harris value of Cd^2+/Cd is not attached to its check")
+end
+print(("second metric: %d of %d couples with a read value within 5 mV of one; %d of %d with two or more values spread over 5 mV"):format(
+  m2.within, m2.assessed, m2.spread, m2.multi))
+
 -- Coverage (issue 13): every record counted once; reference states (elements,
 -- H^+, e-) not counted; a record named in an independent row is checked.
 local function same_list(got, want, what)

@@ -68,6 +68,9 @@ M.USES = {
   { id = "BPP84", use = "strontianite log Ksp(T) and the SrHCO3+ and SrCO3(aq) constants. Recalled." },
   { id = "BP86", use = "witherite log Ksp(T) and the BaHCO3+ and BaCO3(aq) constants. Recalled." },
   { id = "CONVENTION", use = "H+ and e-." },
+  -- s5-lig (issue 13)
+  { id = "HARVEY21", use = "stepwise ammine constants of Ni, Zn, Co(20 C) and Cd at I = 0, 25 C (Smith and Martell, read in its Appendix 16.12), summed to the cumulative log beta of N.lua; log beta4 of Zn(CN)4^2- (CN.lua)." },
+  { id = "LM07", use = "log beta_n(T) of PbCl+, PbCl2(aq) and PbCl3-, 15-300 C, I = 0 (equations read in the abstract)." },
 }
 
 local function file_of(s)
