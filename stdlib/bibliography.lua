@@ -209,6 +209,19 @@ return {
       short = "Busenberg and Plummer 1986",
       cite = "Busenberg, E. and Plummer, L. N. (1986). The solubility of BaCO3(cr) (witherite) in CO2-H2O solutions between 0 and 90 C, ... Geochim. Cosmochim. Acta 50, 2225.",
     },
+    -- s5-fe (issue 13): iron solids by their measured solubility
+    BDH09 = {
+      short = "Benezeth et al. 2009",
+      cite = "Benezeth, P., Dandurand, J. L. and Harrichoury, J. C. (2009). Solubility product of siderite (FeCO3) as a function of temperature (25-250 C). Chemical Geology 265, 3-12.",
+    },
+    L69 = {
+      short = "Langmuir 1969",
+      cite = "Langmuir, D. (1969). The Gibbs free energies of substances in the system Fe-O2-H2O-CO2 at 25 C. U.S. Geological Survey Professional Paper 650-B (pages not recalled).",
+    },
+    BS01 = {
+      short = "Boyd and Scott 2001",
+      cite = "Boyd, T. and Scott, S. D. (2001). Microbial and hydrothermal aspects of ferric oxyhydroxides and ferrosic hydroxides: the example of Franklin Seamount, Western Woodlark Basin, Papua New Guinea. Geochemical Transactions 2, 45 (authors recalled; Table 2 read: Gibbs energies of iron oxyhydroxides after several compilations).",
+    },
     -- s5-lig (issue 13): sources read for the complex and ion-pair records
     HARVEY21 = {
       short = "Harvey, Analytical Chemistry 2.1",

@@ -163,10 +163,21 @@ return {
       source = N90, quality = "medium",
       note = "Issue 13: was [RH95] magnesite with the SH88 Mg^2+ (log Ksp -8.32), which made ordered dolomite metastable against calcite + magnesite above about 70 C; defined now, like dolomite, by the [N90] constant (dolomite = calcite + magnesite: log K -0.58 at 25 C, falling with T)",
     },
+    -- s5-fe (issue 13): siderite by its measured solubility product, 25-250 C
     { formula = "FeCO3(s,siderite)", model = "logk", reaction = "FeCO3(s,siderite) = Fe^2+ + CO3^2-",
-      logK = -10.89, dH = -2.48, units = KCAL, V = 29.378,
-      source = N90 .. " (after [BRUNO92]); V " .. RH95, quality = "medium",
-      note = "[SM] give -10.68 (Harris App. F); precipitated siderite about -10.45. Defined by log K because dfG(Fe^2+) differs between data sets by 12 kJ/mol (docs/data/ligands.md)" },
+      logK = -10.898,
+      -- log K = a + b T + c/T + d log10 T (T in K), the paper's fit to its measurements at 25-250 C
+      logK_T = { 175.568, 0.0139, -6738.483, -67.898 },
+      V = 29.378,
+      source = "[BDH09] (abstract read: log Ksp = 175.568 + 0.0139 T - 6738.483/T - 67.898 log10 T, " ..
+               "natural siderite in 0.1 mol/kg NaCl extrapolated to I = 0, 25-250 C; dfG -680.71 +- 2 kJ/mol); " ..
+               "25 C value as [BRUNO92] (-10.8 +- 0.2, abstract read); V " .. RH95, quality = "high",
+      note = "Gives -10.90 at 25 C, -11.93 at 100 C, -13.72 at 200 C, -14.63 at 250 C (dH -15.7 kJ/mol at 25 C); " ..
+             "above 250 C the fit is extrapolated (-15.50 at 300 C). Other measurements at 25 C: -10.9 (Silva, Liu and " ..
+             "Millero 2002, J. Solution Chem. 31, 97, abstract read), [BRUNO92] -10.8 +- 0.2; [SM] give -10.68 (Harris " ..
+             "App. F); precipitated siderite about -10.45. The previous record (-10.89, van 't Hoff with dH -2.48 kcal/mol, " ..
+             "from memory of [N90]) put log Ksp at -11.56 at 200 C, 2.2 above the measurement. Defined by log K " ..
+             "because dfG(Fe^2+) differs between data sets by 12 kJ/mol (docs/data/transition-metals.md, Iron)" },
     {
       formula = "MnCO3(s,rhodochrosite)", model = "cp",
       G = -816.7, H = -894.1, S = 85.8, cp = { a = 81.5 }, V = 31.075,

@@ -1,10 +1,19 @@
 -- stdlib/elements/Fe.lua: iron, its ions, hydrolysis species, oxides and hydroxides.
 --
--- Data choice (see docs/data/transition-metals.md):
---   * Fe^2+ and Fe^3+ follow Shock et al. 1997 (revised-HKF ion data, Fe^2+ with its
---     full parameter set). The NBS-1982 ion values (dfG Fe^2+ = -78.90 kJ/mol) are
---     about 12.6 kJ/mol less negative and are not used: they put Fe^2+/Fe at -0.409 V.
---   * Solids follow the NBS tables (Wagman et al. 1982).
+-- Primary compilation (issue 13; see docs/data/transition-metals.md, "Iron"):
+--   Shock et al. 1997 [SSWS97] for the ions.  Every iron solid is then tied to those
+--   ions either through data that do not depend on dfG(Fe^2+) (the calorimetric NBS
+--   1982 oxides, which agree with [RH95] within 3 kJ/mol) or through its measured
+--   solubility against Fe^2+ (Fe(OH)2 here, siderite in C.lua, mackinawite in S.lua).
+--   The NBS-1982 ion values are not used anywhere: NBS dfG(Fe^2+) = -78.90 kJ/mol is
+--   12.6 kJ/mol less negative than the magnetite-solubility values (Sweeton and Baes
+--   1970: E0(Fe2+/Fe) = -0.475 +- 0.010 V; Tremaine and LeBlanc 1980: -0.47 +- 0.01 V;
+--   abstracts read), and a solid whose NBS dfG was derived against NBS Fe^2+ breaks
+--   its measured solubility when paired with this Fe^2+ (Fe(OH)2: 1.0 log unit).
+--   Mixed pairings that remain, each with the solubility it touches checked in
+--   docs/data-checks.md: NBS magnetite and hematite (calorimetric) with these ions
+--   (E0 of Fe2+/Fe from magnetite solubility; hematite solubility at 200 C);
+--   NBS troilite and pyrite in S.lua (no measured solubility read; S.lua notes).
 --   * Hydrolysis species are defined by Baes and Mesmer 1976 constants (I = 0, 25 C),
 --     except Fe(OH)4^-, which is defined by the measured hematite solubility reaction
 --     (Diakonov et al. 1999 at 25 C, Sergeeva et al. 1999 at 200 C; abstracts read).
@@ -58,7 +67,7 @@ return {
       estimated = true,
       source = SHOCK97,
       quality = "high",
-      note = "Revised Fe2+ (published Cp 25 C = -7.9 cal/(mol K), V = -22.2 cm3/mol; the set reproduces both). Parameters were estimated by the paper with the [SH88] correlations. Gives E0(Fe2+/Fe) = -0.474 V; CRC lists -0.447 V and NBS-1982 data give -0.409 V (documented spread).",
+      note = "Revised Fe2+ (published Cp 25 C = -7.9 cal/(mol K), V = -22.2 cm3/mol; the set reproduces both). Parameters were estimated by the paper with the [SH88] correlations. Gives E0(Fe2+/Fe) = -0.474 V. Magnetite solubility to 300 C gives -0.475 +- 0.010 V (Sweeton and Baes 1970, J. Chem. Thermodyn. 2, 479) and dfG = -88.92 +- 2.0 kJ/mol, E0 in -0.47 +- 0.01 V (Tremaine and LeBlanc 1980, J. Solution Chem. 9, 415; both abstracts read); CRC lists -0.447 V and NBS-1982 data give -0.409 V (documented spread).",
     },
     {
       formula = "Fe^3+", model = "logk",
@@ -179,12 +188,27 @@ return {
       note = "A dfG of -489.8 kJ/mol also comes to mind (it would fail the dfG/dfH/S cycle by 1.3 kJ/mol). Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats).",
     },
     {
-      formula = "Fe(OH)2(s)", model = "cp",
-      G = -486.5, H = -569.0, S = 88,
-      estimate = { Cp = "kopp" }, -- no published Cp recalled: Kopp-Neumann (docs/thermo.md)
-      source = NBS,
+      -- s5-fe (issue 13): by its measured solubility against this file's Fe^2+
+      formula = "Fe(OH)2(s)", model = "logk",
+      reaction = "Fe(OH)2(s) = Fe^2+ + 2 OH^-",
+      logK = -15.10, dH = 16.70,
+      source = "log Ksp derived here from dfG(Fe(OH)2) = -117.584 kcal/mol with Fe2+ -21.80 and OH- -37.594 " ..
+               "kcal/mol of [L69], as tabulated by [BS01] (Table 2, read); dH derived here from dfH(Fe(OH)2) = " ..
+               "-569.0 kJ/mol " .. NBS .. " with this file's Fe^2+ (dfH -22050 cal/mol) and the [SH88] OH^- " ..
+               "(dfH -54977 cal/mol, recalled)",
       quality = "medium",
-      note = "Cp not recalled: Kopp-Neumann estimate (Kopp's atomic heats).",
+      note = "Pairing the NBS-1982 dfG (-486.5 kJ/mol, derived against NBS Fe^2+) with this file's Fe^2+ gave log Ksp = -14.09, " ..
+             "1.0 above the measured solubility; the record therefore carries the solubility itself (-15.10, Smith and Martell " ..
+             "-15.1; the values of that era rest on few measurements, so the two may share their data). It implies dfG = " ..
+             "-492.3 kJ/mol with this file's ions. The CRC couples Fe(OH)2/Fe (-0.877 V) and Fe(OH)3/Fe(OH)2 (-0.56 V) were " ..
+             "computed from the NBS-era dfG and now differ by -44 and +74 mV (docs/data-checks.md). Temperature: van 't Hoff " ..
+             "with the calorimetric NBS dfH (no measured solubility at temperature read). Metastable against magnetite + " ..
+             "H2 (Schikorr reaction, dG -12.8 kJ/mol at 25 C with these data), yet stable against Fe + magnetite, so at 25 C and " ..
+             "1e-6 it has a field between them below the hydrogen line (tests/scripts/test_published_iron.lua). In flowing " ..
+             "hydrogenated water (234 umol/kg H2) a hydrous Fe(II) oxide, not magnetite, controlled Fe(II) solubility below " ..
+             "83 C (Ziemniak, Jones and Combs, J. Solution Chem., abstract read); with these data magnetite is the stable " ..
+             "phase there at every temperature (log K of 3 Fe(OH)2 = Fe3O4 + H2(aq) + 2 H2O is -0.86 at 25 C against log " ..
+             "m(H2) = -3.63), so the observation is read as slow magnetite formation: a diagram says what can form, not how fast.",
     },
     {
       formula = "Fe(OH)3(s)", model = "cp",

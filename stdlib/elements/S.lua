@@ -134,7 +134,11 @@ return {
       note = "Troilite is the stoichiometric end member of the pyrrhotite group (Fe(1-x)S, x = 0 to 0.125); " ..
              "the library's pyrrhotite, and the iron sulfide of a sour-corrosion map from pH 7.4 at 25 C and " ..
              "1e-6 iron (the edge FeS + H+ = FeHS+ sets). Non-stoichiometric pyrrhotite (Fe7S8) has no record: no data recalled. " ..
-             "Lambda transition at 411 K not modelled; Cp held at its 25 C value (NBS 50.54 J/(mol K))",
+             "Lambda transition at 411 K not modelled; Cp held at its 25 C value (NBS 50.54 J/(mol K)). " ..
+             "Mixed pairing (issue 13): NBS troilite with the Shock et al. 1997 Fe^2+ of Fe.lua gives log K(FeS + 2 H+ = " ..
+             "Fe2+ + H2S(aq)) = 3.33, 0.17 below mackinawite (3.5, [RICKARD06]); with NBS Fe^2+ it would be 1.12. No measured " ..
+             "troilite or pyrrhotite solubility could be read (a 50 C study at I = 1 M, abstract read, prints no constant), so " ..
+             "the pairing is unchecked",
     },
     {
       formula = "FeS(s,mackinawite)", model = "logk",
@@ -160,7 +164,9 @@ return {
       cp = { a = 74.810, b = 5.523e-3, c = -12.761e5 }, V = 23.94,
       source = NBS .. "; " .. HDNB .. " (17.88 + 1.32e-3 T - 3.05e5/T^2 cal); V " .. RH95,
       quality = "medium",
-      note = "[RH95] (after Toulmin) give dfH about -171.5 kJ/mol, dfG about -160.2 (recalled): pyrite's dfG is uncertain by about 6 kJ/mol",
+      note = "[RH95] (after Toulmin) give dfH about -171.5 kJ/mol, dfG about -160.2 (recalled): pyrite's dfG is uncertain by about 6 kJ/mol. " ..
+             "Mixed pairing (issue 13): NBS pyrite with the Shock et al. 1997 Fe^2+ of Fe.lua; pyrite's solubility is not measurable " ..
+             "at 25 C, so no solubility checks the pairing",
     },
     {
       formula = "CuS(s,covellite)", model = "cp",

@@ -52,16 +52,14 @@ local KNOWN = {
     why = "Fe2+ from Shock et al. 1997 gives -0.474 V; CRC -0.447; NBS-1982 -0.409 (known spread)" },
   ["Fe^3+ + 3 e- = Fe(s)"] = { max = 0.025,
     why = "follows the Fe2+ choice (Shock et al. 1997); NBS-1982 gives -0.016" },
-  ["Fe(OH)2(s) + 2 e- = Fe(s) + 2 OH^-"] = { max = 0.016,
-    why = "NBS-1982 Fe(OH)2 gives -0.891 as the reference note says; CRC -0.877" },
+  ["Fe(OH)2(s) + 2 e- = Fe(s) + 2 OH^-"] = { max = 0.046,
+    why = "Fe(OH)2 carries its measured solubility (log Ksp -15.10) against the Shock 1997 Fe2+: -0.921 V; CRC -0.877 rests on NBS-era dfG (NBS Fe(OH)2 gives -0.891)" },
   ["Fe3O4(s) + 8 H^+ + 2 e- = 3 Fe^2+ + 4 H2O(l)"] = { max = 0.100,
     why = "set by dfG(Fe2+): Pourbaix used about -84.9 kJ/mol, NBS -78.90, Shock 1997 -91.50" },
   ["Ni(OH)2(s) + 2 e- = Ni(s) + 2 OH^-"] = { max = 0.035,
     why = "NBS-1982 Ni(OH)2 gives -0.688 as the reference note says; CRC -0.72" },
   ["Cr2O7^2- + 14 H^+ + 6 e- = 2 Cr^3+ + 7 H2O(l)"] = { max = 0.135,
     why = "NBS Cr2O7^2- with the CRC Cr3+ gives 1.364; the reference note records 1.33-1.36 in other tables" },
-  ["Fe(OH)2(s) = Fe^2+ + 2 OH^-"] = { max = 1.05,
-    why = "Shock 1997 Fe2+ with NBS Fe(OH)2 gives -14.10; Harris -15.1; NBS alone -16.31" },
   ["beta-Ni(OH)2(cr) + 2 H^+ = Ni^2+ + 2 H2O(l)"] = { max = 1.10,
     why = "NBS Ni(OH)2 (not crystalline beta) gives 12.73 as the reference note says; ORNL 11.67" },
 }
@@ -335,6 +333,11 @@ local function find_mine(name)
   end
   return hit
 end
+-- records that cite the table for dfH only (their dfG rests on a measured
+-- solubility): the copy check covers dfH, not dfG
+local DFH_ONLY = {
+  ["Fe(OH)2(s)"] = "dfG from the measured solubility (Langmuir 1969, log Ksp -15.10) against the Shock 1997 Fe2+; only dfH is NBS (checked below)",
+}
 -- the table a record cites for dfG/dfH/S: whichever of the two is named first
 local function primary_table(src)
   -- element files cite by bibliography key ([CODATA89], [NBS82]); the plain
@@ -353,7 +356,11 @@ for _, r in ipairs(gibbs) do
     local tab = r.source:find("CODATA", 1, true) and "CODATA" or "Wagman"
     if primary_table(sp.source) == tab then
       local g = dfG(mine)
-      check("dfG " .. mine .. " vs " .. tab .. " row", g, tonumber(r.dGf_kJ_mol), 0.02, "gibbs_25C.csv")
+      if DFH_ONLY[mine] then
+        report("SKIP", "dfG " .. mine .. " vs " .. tab .. " row", DFH_ONLY[mine])
+      else
+        check("dfG " .. mine .. " vs " .. tab .. " row", g, tonumber(r.dGf_kJ_mol), 0.02, "gibbs_25C.csv")
+      end
       if sp.model ~= "logk" then
         local e, s = to_si(rec.file, sp)
         check("dfH " .. mine .. " vs " .. tab .. " row", sp.H * e, tonumber(r.dHf_kJ_mol), 0.02, "gibbs_25C.csv")
@@ -513,4 +520,4 @@ end
 ---------------------------------------------------------------------------------------
 print(string.format("\n== summary: %d passed, %d failed, %d documented disagreements, %d skipped",
   rep.count.PASS, rep.count.FAIL, rep.count.KNOWN, rep.count.SKIP))
-rep.finish(nil, 444) -- the checks this script made on 2026-12-02
+rep.finish(nil, 442) -- the checks this script made on 2026-12-02 (444 before issue 13 made Fe(OH)2(s) a logk record: its dfG and S copy checks gave way to the dfH one)

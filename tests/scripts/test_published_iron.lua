@@ -56,4 +56,21 @@ for _, T in ipairs { 60, 100, 150, 200, 250, 300 } do
       "25 C: %s; see docs/other-diagrams.md)\n"):format(T, ok and "yes" or "no", table.concat(held, ", ")))
   end
 end
+-- Fe(OH)2(s) carries its measured solubility (issue 13: log Ksp -15.10,
+-- Fe.lua), which makes it stable against Fe + magnetite, so at 25 C and 1e-6
+-- it takes a field between them.  It must lie below the hydrogen line: white
+-- rust is metastable against magnetite + H2 at 1 bar (the Schikorr reaction,
+-- 3 Fe(OH)2 = Fe3O4 + H2 + 2 H2O, observed; with the file's data log K =
+-- +2.2 at 25 C for H2(g)).  E(H+/H2) = -(RT ln10/F) pH at 1 bar.
+do
+  local m = phlox.map { library = lib, element = "Fe", T_C = 25, activity = 1e-6 }
+  local f
+  for _, x in ipairs(m.fields) do if x.species == "Fe(OH)2(s)" then f = x end end
+  check(f ~= nil, "25 C, 1e-6: Fe(OH)2(s) has a field between Fe and magnetite (measured solubility)")
+  local slope = 8.314462618 * 298.15 * math.log(10) / 96485.33212
+  local worst = -math.huge
+  for i = 1, #f.x do worst = math.max(worst, f.y[i] + slope * f.x[i]) end
+  check(worst < 0, ("25 C, 1e-6: the Fe(OH)2(s) field lies below the hydrogen line (highest vertex %+.3f V above it)"):format(worst))
+  io.write(("25 C, 1e-6: Fe(OH)2(s) field below the hydrogen line (closest vertex %.3f V under it)\n"):format(-worst))
+end
 print("test_published_iron: all asserted checks passed")

@@ -566,9 +566,9 @@ end
 -- G error of a solid in log K units per formula unit (run_kopp).
 M.DOC_MARGIN = 0.005
 M.DOCUMENTED = {
-  ["held"] = { [100] = { mean = 1.120, max = 12.638 }, [200] = { mean = 2.162, max = 23.256 }, [300] = { mean = 2.919, max = 30.168 } },
-  ["one-term"] = { [100] = { mean = 1.346, max = 7.685 }, [200] = { mean = 2.531, max = 14.141 }, [300] = { mean = 3.357, max = 18.345 } },
-  ["isocoulombic"] = { [100] = { mean = 0.803, max = 5.603 }, [200] = { mean = 1.790, max = 11.312 }, [300] = { mean = 3.193, max = 16.376 } },
+  ["held"] = { [100] = { mean = 1.122, max = 12.638 }, [200] = { mean = 2.173, max = 23.256 }, [300] = { mean = 2.942, max = 30.168 } },
+  ["one-term"] = { [100] = { mean = 1.364, max = 7.685 }, [200] = { mean = 2.574, max = 14.141 }, [300] = { mean = 3.423, max = 18.345 } },
+  ["isocoulombic"] = { [100] = { mean = 0.805, max = 5.603 }, [200] = { mean = 1.794, max = 11.312 }, [300] = { mean = 3.180, max = 16.376 } },
   ["HKF (SH88)"] = { [100] = { mean = 0.004, max = 0.008 }, [200] = { mean = 0.026, max = 0.045 }, [300] = { mean = 0.084, max = 0.182 } },
   ["HKF (SH88), per species"] = { [100] = { mean = 0.005, max = 0.014 }, [200] = { mean = 0.030, max = 0.080 }, [300] = { mean = 0.083, max = 0.182 } },
   ["Kopp atoms"] = { [100] = { mean = 0.006, max = 0.019 }, [200] = { mean = 0.022, max = 0.074 }, [300] = { mean = 0.042, max = 0.140 } },

@@ -50,7 +50,11 @@ M.USES = {
   { id = "CC64", use = "estimated reaction heat capacity of Fe3+ against Fe2+ (correspondence principle, cation parameters for 25-200 C). Recalled." },
   { id = "MIGDISOV02", use = "second dissociation constant of H2S (S^2-). Recalled." },
   { id = "MORRIS66", use = "pKa of HClO. Recalled." },
-  { id = "BRUNO92", use = "siderite log Ksp (as adopted by Nordstrom et al. 1990-era tables). Recalled." },
+  { id = "BRUNO92", use = "siderite log Ksp at 25 C, -10.8 +- 0.2 (abstract read), cited beside the record's own source." },
+  -- s5-fe (issue 13)
+  { id = "BDH09", use = "siderite log Ksp as a function of temperature, 25-250 C (the paper's four-term fit, abstract read)." },
+  { id = "L69", use = "dfG of Fe(OH)2(s) and of the Fe2+ and OH- it was paired with, giving the record's log Ksp (read as tabulated by Boyd and Scott 2001)." },
+  { id = "BS01", use = "the table (read) through which the Langmuir 1969 dfG of Fe(OH)2(s) is cited." },
   { id = "DIAKONOV99", use = "dfG of Fe(OH)4^- at 25 C (-201.97 kcal/mol, extrapolated from hematite solubility to 300 C). Read in the abstract." },
   { id = "SERGEEVA99", use = "log K at 200 C of hematite dissolution to Fe(OH)4^- (and to Fe3+ and FeOH2+, used as checks). Read in the abstract." },
   { id = "RSM87", use = "solubility constant of amorphous Cr(OH)3 (Cr.lua). Abstract read (OSTI 6772597); the constant recalled." },
