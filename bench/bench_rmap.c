@@ -41,12 +41,14 @@ int main(void)
     px_db *db = px_db_new();
     px_thermo_ws *ws = px_thermo_ws_new(PX_DIELECTRIC_R8_97);
     if (!db || !ws || px_db_add_builtins(db) != PX_OK) return 1;
-    static const int zs[] = {1, 8, 29, 17}; /* H O Cu Cl */
+    /* S as phlox.library loads it (lib.model_elements): the isocoulombic
+     * model reaction of CuCl3^2- (Cl.lua) names HSO4^- and SO4^2- */
+    static const int zs[] = {1, 8, 29, 17, 16}; /* H O Cu Cl S */
     px_data_options dopt = px_data_options_default();
     dopt.elements = zs;
-    dopt.n_elements = 4;
-    const char *files[] = {"HO", "Cu", "Cl"};
-    for (int i = 0; i < 3; i++)
+    dopt.n_elements = 5;
+    const char *files[] = {"HO", "Cu", "Cl", "S"};
+    for (int i = 0; i < 4; i++)
         if (px_data_load_embedded(db, files[i], &dopt, NULL) != PX_OK) {
             fprintf(stderr, "bench_rmap: cannot load %s\n", files[i]);
             return 1;

@@ -76,8 +76,12 @@ end
 do
   local R_LN10 = 8.314462618 * math.log(10)
   local nlib = phlox.library { "Ni", "Cl" }
-  check(nlib.model_elements and nlib.model_elements[1] == "Cu" and #nlib.model_elements == 1,
-        "Ni + Cl library loads Cu for the NiCl^+ model")
+  -- Cu for the NiCl^+ model, and then S for the sulfate-balanced model of CuCl3^2- (s5-cucl)
+  -- (S in turn names SrSO4(aq) as the model of NiSO4(aq): Sr)
+  local me = {}
+  for _, e in ipairs(nlib.model_elements or {}) do me[e] = true end
+  check(me.Cu and me.S and me.Sr and #nlib.model_elements == 3,
+        "Ni + Cl library loads Cu for the NiCl^+ model (and S, Sr for CuCl3^2-'s): " .. table.concat(nlib.model_elements or {}, ","))
   check(#nlib.elements == 2, "model elements are not listed as the library's elements")
   local rec = nlib:species("NiCl^+")
   check(rec.estimate_model == "Cu^2+ + Cl^- = CuCl^+", "NiCl^+ model: " .. tostring(rec.estimate_model))

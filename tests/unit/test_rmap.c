@@ -21,11 +21,15 @@ typedef struct map_run {
     px_rmap_stats st;
 } map_run;
 
+/* With chloride the S file is loaded too, as phlox.library does
+ * (lib.model_elements): the isocoulombic model reactions of CuCl3^2- and
+ * AgCl3^2- (Cl.lua) name HSO4^- and SO4^2-. */
 static px_db *load(const char *element, const char *ligand)
 {
-    const int zs[4] = {1, 8, px_element_z(element), ligand ? px_element_z(ligand) : 0};
-    const char *const files[] = {"HO", element, ligand, NULL}; /* no ligand: ends at element */
-    return px_test_db(files, zs, ligand ? 4 : 3);
+    const int with_s = ligand && strcmp(ligand, "Cl") == 0;
+    const int zs[5] = {1, 8, px_element_z(element), ligand ? px_element_z(ligand) : 0, px_element_z("S")};
+    const char *const files[] = {"HO", element, ligand, with_s ? "S" : NULL, NULL}; /* no ligand: ends at element */
+    return px_test_db(files, zs, ligand ? (with_s ? 5 : 4) : 3);
 }
 
 static map_run run(px_thermo_ws *ws, const px_db *db, const char *element, px_rmap_options o, int threads,
