@@ -53,8 +53,10 @@ end
 
 --- The provenance of a result built from `lib` (a phlox.Library) for the
 -- elements named (H and O always count): the files that define a species
--- made only of those elements, with their checksums, plus the conditions
--- and a plain copy of the options.
+-- made only of those elements and the files of the species their
+-- isocoulombic model reactions name (an estimate rests on those records
+-- too: CuCl3^2- on S.lua's sulfate), with their checksums, plus the
+-- conditions and a plain copy of the options.
 function provenance.of_result(lib, elements, conditions, options)
   local allowed, key = { H = true, O = true }, {}
   for _, e in ipairs(elements) do
@@ -73,7 +75,13 @@ function provenance.of_result(lib, elements, conditions, options)
       for e in pairs(s.elements) do
         if not allowed[e] then ok = false; break end
       end
-      if ok and s.file and lib.sources[s.file] then used[s.file] = lib.sources[s.file] end
+      if ok and s.file and lib.sources[s.file] then
+        used[s.file] = lib.sources[s.file]
+        for _, t in ipairs(s.estimate_model and core.reaction_terms(s.estimate_model) or {}) do
+          local m = t.state ~= "e" and lib:species(t.formula)
+          if m and m.file and lib.sources[m.file] then used[m.file] = lib.sources[m.file] end
+        end
+      end
     end
     files = sorted_files(used)
     lib._files_for[key] = files

@@ -31,8 +31,10 @@ function phlox_provenance.notes(from) end
 
 --- The provenance of a result built from `lib` (a phlox.Library) for the
 --- elements named (H and O always count): the files that define a species
---- made only of those elements, with their checksums, plus the conditions
---- and a plain copy of the options.
+--- made only of those elements and the files of the species their
+--- isocoulombic model reactions name (an estimate rests on those records
+--- too: CuCl3^2- on S.lua's sulfate), with their checksums, plus the
+--- conditions and a plain copy of the options.
 ---@param lib phlox.Library
 ---@param elements any
 ---@param conditions any
