@@ -31,9 +31,14 @@ return {
       formula = "Cd^2+", model = "logk",
       reaction = "Cd(s) + 2 H^+ = Cd^2+ + H2(g)",
       logK = 13.618, dH = -75.92,
+      -- Cp: the formation reaction takes the dCp(T) of the same reaction of Ca^2+, whose
+      -- HKF set is published (isocoulombic: the difference reaction keeps dCp = 0; model
+      -- substance, Lindsay 1980); Ca^2+ is the model by the rule of docs/thermo.md:
+      -- S -72.8 J/(mol K) is closer to Ca^2+ (-56.5) than to Mg^2+ (-137.0). Validation: docs/data-checks.md, "Single-ion heat capacities".
+      estimate = { dCp = "isocoulombic", model = "Ca(s) + 2 H^+ = Ca^2+ + H2(g)" },
       source = "derived here from " .. CODATA .. ": dfH -75.92 kJ/mol and S -72.8 J/(mol K) read in a CODATA-table reprint, dfG -77.733 derived (phlox's reference gibbs_25C.csv)",
       quality = "high",
-      note = "conventional formation reaction, log K = 77.733/5.70801. Van 't Hoff with constant dH approximates Cp(Cd2+) by Cp(Cd) - Cp(H2): fair near 25 C only. NBS 1982: dfG -77.612, dfH -75.90, S -73.2.",
+      note = "conventional formation reaction, log K = 77.733/5.70801. Heat capacity: the isocoulombic estimate above (dCp of the Ca^2+ formation reaction; before it, van 't Hoff with constant dH took Cp(Cd2+) = Cp(Cd) - Cp(H2)). NBS 1982: dfG -77.612, dfH -75.90, S -73.2.",
     },
     {
       formula = "CdOH^+", model = "logk",

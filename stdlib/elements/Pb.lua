@@ -31,9 +31,14 @@ return {
       formula = "Pb^2+", model = "logk",
       reaction = "Pb(s) + 2 H^+ = Pb^2+ + H2(g)",
       logK = 4.280, dH = -1.7,
+      -- Cp: the formation reaction takes the dCp(T) of the same reaction of Ca^2+, whose
+      -- HKF set is published (isocoulombic: the difference reaction keeps dCp = 0; model
+      -- substance, Lindsay 1980); Ca^2+ is the model by the rule of docs/thermo.md:
+      -- S 10.5 J/(mol K) is closer to Ca^2+ (-56.5) than to Mg^2+ (-137.0). Validation: docs/data-checks.md, "Single-ion heat capacities".
+      estimate = { dCp = "isocoulombic", model = "Ca(s) + 2 H^+ = Ca^2+ + H2(g)" },
       source = "derived here from " .. NBS .. ": dfG -24.43, dfH -1.7 kJ/mol, S 10.5 J/(mol K)",
       quality = "high",
-      note = "conventional formation reaction, log K = 24.43/5.70801. Van 't Hoff with constant dH approximates Cp(Pb2+) by Cp(Pb) - Cp(H2): fair near 25 C only. CODATA 1989 gives dfG -24.238, dfH 0.92, S 18.5 (0.03 log units in log K).",
+      note = "conventional formation reaction, log K = 24.43/5.70801. Heat capacity: the isocoulombic estimate above (dCp of the Ca^2+ formation reaction; before it, van 't Hoff with constant dH took Cp(Pb2+) = Cp(Pb) - Cp(H2)). CODATA 1989 gives dfG -24.238, dfH 0.92, S 18.5 (0.03 log units in log K).",
     },
     {
       formula = "PbOH^+", model = "logk",

@@ -31,9 +31,14 @@ return {
       formula = "Sr^2+", model = "logk",
       reaction = "Sr(s) + 2 H^+ = Sr^2+ + H2(g)",
       logK = 98.785, dH = -550.90,
+      -- Cp: the formation reaction takes the dCp(T) of the same reaction of Ca^2+, whose
+      -- HKF set is published (isocoulombic: the difference reaction keeps dCp = 0; model
+      -- substance, Lindsay 1980); Ca^2+ is the model by the rule of docs/thermo.md:
+      -- S -31.5 J/(mol K) is closer to Ca^2+ (-56.5) than to Mg^2+ (-137.0). Validation: docs/data-checks.md, "Single-ion heat capacities".
+      estimate = { dCp = "isocoulombic", model = "Ca(s) + 2 H^+ = Ca^2+ + H2(g)" },
       source = "derived here from " .. CODATA .. ": Sr^2+ dfH -550.90 +- 0.50 kJ/mol, S -31.5 +- 2.0 J/(mol K)",
       quality = "high",
-      note = "E0(Sr^2+/Sr) = -2.922 V; NBS 1982 (dfG -559.48) gives -2.899 V, the value the CRC series prints; CODATA revised dfH by 5 kJ/mol. No heat capacity of its own: van 't Hoff on the formation reaction implies Cp(Sr^2+) = Cp(Sr) - Cp(H2) = -2 J/(mol K) at every T. [SH88] list Cp -10.05 cal/(mol K) (recalled); the HKF record estimated from it (+27 mV in E0 at 300 C) waits for the NiSO4(aq) model of S.lua, which is the SrSO4(aq) pair (docs/data/transition-metals.md).",
+      note = "E0(Sr^2+/Sr) = -2.922 V; NBS 1982 (dfG -559.48) gives -2.899 V, the value the CRC series prints; CODATA revised dfH by 5 kJ/mol. Heat capacity: the isocoulombic estimate above (dCp of the Ca^2+ formation reaction; before it, van 't Hoff on the formation reaction implied Cp(Sr^2+) = Cp(Sr) - Cp(H2) = -2 J/(mol K) at every T). [SH88] list Cp -10.05 cal/(mol K) (recalled); an HKF record estimated from that Cp lands within 2 mV of this estimate in E0 at 25-300 C and is the documented alternative (docs/data/transition-metals.md). E0(Sr^2+/Sr) at 100/200/300 C: -2.938/-2.954/-2.955 V (-2.939/-2.962/-2.984 with dCp = 0).",
     },
     {
       formula = "SrOH^+", model = "logk",
