@@ -1052,6 +1052,99 @@ for _, t in ipairs({ 100, 200 }) do
           why = "two fits disagree: the file's Benezeth et al. 2009 rests on its own measurements to 250 C (abstract read); the recalled corrosion-literature fit of Sun et al. 2009 combines older data sets (mostly below 100 C) and is less steep. Both fall far below the previous van 't Hoff record (-11.26 at 100 C, -11.56 at 200 C)" } })
 end
 
+
+-- s5-kl (issue 13): rows read in the Kaye and Laby tables of the UK National
+-- Physical Laboratory (web edition), and in a second table found while
+-- searching them.  Only the first part of each stored page could be read
+-- (the search tool returns a page from its beginning); every row of that
+-- part that matches a reaction of the library is entered, whether or not it
+-- agrees.  The other pages of chapter 3.9 (electrode potentials, acid and
+-- stability constants) were not found in the stored copy.
+-- Confidence "low" for all rows, chosen before comparing: the K&L page says
+-- its pKs0 are a selection from Sillen and Martell 1964 that "can be quite
+-- arbitrary", that "many published data relate to poorly characterised solid
+-- phases", and that "most" (not all) relate to 298 K and zero ionic strength.
+-- None of the element files took its value from Sillen and Martell 1964, so
+-- none of these rows is same-source.
+do
+  local KL398 = "Kaye and Laby (NPL), Tables of Physical and Chemical Constants, table 3.9.8 'Solubility products in aqueous solutions' (pKs0 = -log Ks0, 'most' at 298 K and zero ionic strength, selected from Sillen and Martell 1964) (read: http://www.kayelaby.npl.co.uk/chemistry/3_9/3_9_8.html)"
+  -- pKs0 of M(OH)2 = M^2+ + 2 OH^- to log *Ks of M(OH)2 + 2 H^+ = M^2+ +
+  -- 2 H2O: log *Ks = -pKs0 + 2 pKw, pKw 13.995 at 25 C (IAPWS R11-07,
+  -- tests/reference/water.csv).  phlox's own pKw is 13.986 (NBS water and the
+  -- SH88 OH^-), so the *Ks form carries 0.018 more than the OH^- form.
+  local PKW = 13.995
+  local function kl_hyd(pks0) return -pks0 + 2 * PKW end
+  rk("Sn(OH)2(s) + 2 H^+ = Sn^2+ + 2 H2O(l)", kl_hyd(26.2),
+     KL398 .. ": hydroxide, tin(II), pKs0 26.2; log *Ks = -26.2 + 2 x 13.995 = 1.79", "low",
+     { note = "0.06: file: NBS 1982 Sn(OH)2 and Sn^2+ (1.727; -26.245 in the OH^- form, 0.045 from the table's pKs0). The first check of Sn(OH)2(s) against a value other than its own table" })
+  rk("Ni(OH)2(s) + 2 H^+ = Ni^2+ + 2 H2O(l)", kl_hyd(17.19),
+     KL398 .. ": hydroxide, nickel, pKs0 17.19; log *Ks = -17.19 + 2 x 13.995 = 10.80", "low",
+     { known = { diff = 1.929, margin = 0.02,
+       why = "file: NBS 1982 Ni(OH)2 with the NBS Ni^2+ (12.73), a precipitated solid; Smith and Martell's fresh precipitate (-15.2 in the OH^- form, i.e. 12.79; Harris App. F, read, log_k_25C.csv) agrees with the file. The crystalline values lie far below: the ORNL solubility of beta-Ni(OH)2 11.67 (read, log_k_25C.csv) and this table 10.80; the NEA-TDB selection for the crystalline phase is about 11.0 (recalled, log_k_25C.csv note). The table does not name the solid; 10.80 suggests an aged, crystalline hydroxide. Not changed here: the Ni(OH)2 record is held by the hydrolysis and solids work (docs/data/transition-metals.md), and the choice between the NBS precipitate and the crystalline beta phase moves the Ni(OH)2/NiO and Ni(OH)2/Ni^2+ edges of every nickel map by 1-2 pH units" } })
+  rk("Zn(OH)2(s,epsilon) + 2 H^+ = Zn^2+ + 2 H2O(l)", kl_hyd(17.15),
+     KL398 .. ": hydroxide, zinc, pKs0 17.15 (solid not named); log *Ks = -17.15 + 2 x 13.995 = 10.84", "low",
+     { known = { diff = 0.540, margin = 0.02,
+       why = "file: Baes and Mesmer 1976 epsilon-Zn(OH)2, log *Ks 11.38 (recalled), the most stable zinc hydroxide polymorph. The table's zinc hydroxide (10.84) would be 0.35 more stable than the file's zincite (11.19 with CODATA ZnO and Zn^2+), whereas in Baes and Mesmer (recalled) every zinc hydroxide polymorph is less stable than zincite. Which solid the 1964 selection meant is not stated on the page; kept" } })
+  rk("HgO(s,montroydite) + 2 H^+ = Hg^2+ + H2O(l)", kl_hyd(25.4),
+     KL398 .. ": hydroxide, mercury(II), pKs0 25.4 (Hg(OH)2 = Hg^2+ + 2 OH^-; the solid in equilibrium with water is red HgO); log *Ks = -25.4 + 2 x 13.995 = 2.59", "low",
+     { note = "0.15: file: CODATA 1989 HgO and Hg^2+ (2.443), which agrees with Baes and Mesmer 1976 (2.44, recalled row). The table's one-decimal 1964 value lies 0.15 above both; within the low class" })
+  rk("BaCO3(s,witherite) = Ba^2+ + CO3^2-", -8.29, KL398 .. ": carbonate, barium, pKs0 8.29", "low",
+     { note = "0.27: file: Busenberg and Plummer 1986 (-8.562, measured 5-90 C, recalled), which agrees with the NBS 1982 tables (-8.588, recalled row). The 1964 selection predates both measurements; within the low class" })
+  rk("CdCO3(s,otavite) = Cd^2+ + CO3^2-", -11.28, KL398 .. ": carbonate, cadmium, pKs0 11.28", "low",
+     { known = { diff = -0.820, margin = 0.02,
+       why = "file: Stipp et al. measured solubility of synthetic otavite (-12.1 +- 0.1, recalled), with which the CRC solubility-product table (-12.0, recalled row) agrees. The table's 1964 value is near what the NBS 1982 otavite gives with the file's Cd^2+ (-11.16, C.lua note), so the older tables may rest on the same pre-1964 precipitate data (reasoning here, not a published finding). Kept: the file's value is a measurement on a characterised solid" } })
+  rk("CaCO3(s,calcite) = Ca^2+ + CO3^2-", -8.32, KL398 .. ": carbonate, calcium, pKs0 8.32 (polymorph not named)", "low",
+     { note = "0.16: file: Plummer and Busenberg 1982 calcite (-8.48 +- 0.02, read, log_k_25C.csv); Smith and Martell's older -8.35 (Harris App. F, read, log_k_25C.csv) lies near this table's value. The table does not name the polymorph; its 8.32 matches the file's aragonite (-8.336) within 0.02. Compared with calcite, the stable polymorph" })
+  rk("FeCO3(s,siderite) = Fe^2+ + CO3^2-", -10.68, KL398 .. ": carbonate, iron(II), pKs0 10.68", "low",
+     { note = "0.22: the same number as the older Smith and Martell value in Harris (log_k_25C.csv row). File: Benezeth et al. 2009 (-10.898), which agrees with Bruno et al. 1992 (-10.8 +- 0.2) and Silva et al. 2002 (-10.9), all read (rows above)" })
+  rk("PbCO3(s,cerussite) = Pb^2+ + CO3^2-", -13.14, KL398 .. ": carbonate, lead, pKs0 13.14", "low",
+     { known = { diff = 0.336, margin = 0.02,
+       why = "file: NBS 1982 cerussite with the NBS Pb^2+ (-12.80). No value read agrees with the file: this table gives -13.14, and the Gibbs energy of Taylor and Lopata 1984 (next row, read) is 2.5 kJ/mol lower than NBS (-13.24 with the file's ions); the solubility literature gives about -13.13 (recalled row). Not changed here: the read values are a 1964 non-critical selection and one study with +-3.9 kJ/mol; the change belongs with a critical Pb carbonate review (the IUPAC lead speciation report of Powell et al. 2009 was seen only as an abstract, without its values). The cerussite field is about 0.3 log units too small in phlox's maps" } })
+  rk("Pb(s) + C(s,graphite) + 1.5 O2(g) = PbCO3(s,cerussite)", nbs_logK(-628.0),
+     "Taylor and Lopata 1984, Can. J. Chem. 62, 395 (abstract read at https://www.scribd.com/document/452777348/v84-070): dfG(298.15 K) of cerussite -628.0 +- 3.9 kJ/mol from the PbO-plumbonacrite-hydrocerussite-cerussite equilibria in carbonate solutions near 25 C", "low",
+     { known = { diff = -0.438, margin = 0.02,
+       why = "file: NBS 1982 cerussite dfG -625.5 kJ/mol (recalled); the measurement is 2.5 kJ/mol lower, inside its own +-3.9 kJ/mol (0.68 log units) but outside the low class. Same direction as the Kaye and Laby product (row above)" } })
+
+  -- Table 3 (continued) of the article 'Water chemistry', page 1264 of a
+  -- reference book stored at issuhub.com (the book's title is not in the
+  -- stored excerpt).  Its footnote names its sources: Sillen and Martell
+  -- 1964, Feitknecht and Schindler 1963, Schindler 1967 and Butler 1964.
+  -- Rows at I = 0 only (the table's I column).  Not entered: CaSO4(s) 4.6
+  -- and FeS(s) 17.3 (solid not named), siderite "10.4 (10.24)" (two values),
+  -- MnS(pink) (not in the library), magnesite 4.9 and nesquehonite 5.4
+  -- (magnesite 3 units from every other value read or recalled; the excerpt
+  -- may be garbled), the two copper hydroxide carbonates (their formulas and
+  -- both constants 7.08 are garbled in the excerpt), CdCO3 (1 M NaCl).
+  local WCT = "Table 3 of the article 'Water chemistry', p. 1264 of a reference book (read: https://issuhub.com/view/index?id=3879&pageIndex=1289; title not in the stored excerpt), constants at I = 0 quoted from Sillen and Martell 1964, Feitknecht and Schindler 1963, Schindler 1967 and Butler 1964"
+  rk("MnS(s,alabandite) + H^+ = Mn^2+ + HS^-", -12.6 + 12.96,
+     WCT .. ": MnS(green) = Mn^2+ + S^2-, log Ks0 -12.6, with the same table's HS^- = H^+ + S^2-, log K2 -12.96: log K = -12.6 + 12.96 = 0.36", "low",
+     { known = { diff = -0.757, margin = 0.02,
+       why = "file: NBS 1982 alabandite with the NBS Mn^2+ and the SH88 HS^- (-0.40); no value read agrees with the file or with the table. The table's product is defined with S^2- and its pK2 12.96, while later measurements put pK2 at 17-19 (the file uses 17.4); the HS^- form depends on which pK2 the original 1960s measurement used to convert, which the table does not say (it moves one for one with that pK2). The first independent check of MnS(s,alabandite); green MnS is alabandite" } })
+  rk("MnCO3(s,rhodochrosite) = Mn^2+ + CO3^2-", -10.41, WCT .. ": MnCO3(s), log Ks0 -10.41", "low",
+     { note = "0.21: file: NBS 1982 rhodochrosite and Mn^2+ (-10.62); Nordstrom et al. 1990 list -11.13 (recalled row); the read 1964-era value lies on the other side of the file, within the -10.4 to -11.13 spread the file note gives" })
+  rk("SrCO3(s,strontianite) = Sr^2+ + CO3^2-", -9.03, WCT .. ": SrCO3(s), log Ks0 -9.03", "low",
+     { note = "0.24: file: Busenberg, Plummer and Parker 1984 (-9.271, measured), which the NBS 1982 tables (-9.252, recalled row) agree with" })
+  rk("ZnCO3(s,smithsonite) + 2 H^+ = Zn^2+ + H2O(l) + CO2(g)", 7.95, WCT .. ": ZnCO3(s) + 2 H^+ = Zn^2+ + H2O + CO2(g), log *Kps0 7.95", "low",
+     { known = { diff = 0.317, margin = 0.02,
+       why = "file: NBS 1982 smithsonite with the CODATA Zn^2+ (8.27 in this form; -9.87 as Ks0), which Smith and Martell's -10.00 (log_k_25C.csv row, 0.13) approaches; the table's 7.95 implies a Ks0 near -10.2 with the file's CO2 constants, a more stable solid than either. Which ZnCO3 the 1960s value refers to is not stated; kept" } })
+  rk("CaCO3(s,calcite) = Ca^2+ + CO3^2-", -8.35, WCT .. ": CaCO3(calcite), log Ks0 -8.35", "low",
+     { note = "0.13: file: Plummer and Busenberg 1982 (-8.48), the measured value the later compilations adopt; the 1960s selections (8.32-8.35) lie above it" })
+  rk("CaCO3(s,aragonite) = Ca^2+ + CO3^2-", -8.22, WCT .. ": CaCO3(aragonite), log Ks0 -8.22", "low",
+     { note = "0.12: file: Plummer and Busenberg 1982 (-8.336)" })
+  rk("CaMg(CO3)2(s,dolomite) = Ca^2+ + Mg^2+ + 2 CO3^2-", -16.7, WCT .. ": CaMg(CO3)2(dolomite), log Ks0 -16.7", "low",
+     { known = { diff = -0.390, margin = 0.02,
+       why = "file: Nordstrom et al. 1990 ordered dolomite (-17.09, recalled); Robie and Hemingway 1995 with CODATA ions (recalled row) gives a value on the file's side. Published dolomite constants spread -16.5 to -17.9 with the degree of order (row above); the 1960s value lies toward the soluble, disordered end (reasoning here)" } })
+  rk("H2S(aq) = H^+ + HS^-", -7.0, WCT .. ": H2S = H^+ + HS^-, log K1 -7.0", "low",
+     { note = "file: SH88 H2S(aq) and HS^- (-6.99)" })
+  rk("HS^- = H^+ + S^2-", -12.96, WCT .. ": HS^- = H^+ + S^2-, log K2 -12.96", "low",
+     { known = { diff = -4.440, margin = 0.02,
+       why = "file: pK2 17.4 (from memory of Migdisov et al. 2002); later measurements put pK2 at 17-19 (recalled). The table's 12.96 belongs to the older 13-14 family on which the CRC S/S^2- couple rests (the -0.476 V row above, known difference). S^2- matters in phlox only above pH 17" } })
+  rk("NH4^+ = NH3(aq) + H^+", -9.3, WCT .. ": NH4^+ = NH3(aq) + H^+, log Ka -9.3", "low",
+     { note = "file: SHS89 NH3(aq) and NH4^+ (-9.24); the table gives one decimal" })
+  rk("HClO(aq) = H^+ + ClO^-", -7.53, WCT .. ": HOCl = H^+ + OCl^-, log Ka -7.53", "low",
+     { note = "file: Morris 1966 pKa with NBS ClO^- (-7.54)" })
+end
+
 M.checks = C
 
 M.GROUPS = {
@@ -1351,6 +1444,11 @@ for _, p in ipairs({
   { "Flowers et al. 2019", "OpenStax App. G (read)" }, { "Robie and Hemingway 1995", "Robie & Hemingway 1995" },
   { "Iuliano, Ciavatta", "Iuliano et al. 2007 (abstract read)" }, { "Holmes, O'Neill", "Holmes et al. 1986 (abstract read)" },
   { "Materials 3, 3994", "calcium phosphate review 2010 (read)" }, { "Nriagu 1972", "Nriagu 1972" },
+}) do SHORT[#SHORT + 1] = p end
+-- s5-kl: short labels of the sources of its rows
+for _, p in ipairs({
+  { "Kaye and Laby (NPL)", "Kaye & Laby 3.9.8 (read)" }, { "Table 3 of the article 'Water chemistry'", "'Water chemistry' Table 3 (read)" },
+  { "Taylor and Lopata 1984", "Taylor & Lopata 1984 (abstract read)" },
 }) do SHORT[#SHORT + 1] = p end
 local function short_source(s)
   -- issue 13 (s5-pot): the CRC series as read in a reprint or a copy
