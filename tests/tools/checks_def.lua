@@ -1143,6 +1143,65 @@ do
      { note = "file: SHS89 NH3(aq) and NH4^+ (-9.24); the table gives one decimal" })
   rk("HClO(aq) = H^+ + ClO^-", -7.53, WCT .. ": HOCl = H^+ + OCl^-, log Ka -7.53", "low",
      { note = "file: Morris 1966 pKa with NBS ClO^- (-7.54)" })
+  -- The same table, first page (p. 1263, section I, oxides and hydroxides),
+  -- rows at I = 0 written as printed (OH^- or H^+ form, no conversion).  Not
+  -- entered: the Fe(III) rows (3 M NaClO4), CuOH^+ and Cu2(OH)2^2+ (18 C),
+  -- CdOH^+ (1 M LiClO4), bayerite, active Mg(OH)2 and AgOH(s) (not in the
+  -- library), active and inactive Fe(OH)2 (14.0; "14.5 (15.1)", two values;
+  -- the file's -15.1 is the second), the Sr(OH)2 rows (the SrOH^+ entry
+  -- 0.82 cannot be the Ks1 its label says with Ks0 3.51: the excerpt's
+  -- labels or values are shifted).
+  local WCT1 = "Table 3 of the article 'Water chemistry', p. 1263 of a reference book (read: https://issuhub.com/view/index?id=3879&pageIndex=1288; title not in the stored excerpt), constants at I = 0 quoted from Sillen and Martell 1964, Feitknecht and Schindler 1963, Schindler 1967 and Butler 1964 (footnote on p. 1264)"
+  rk("Al(OH)3(am) + 3 H^+ = Al^3+ + 3 H2O(l)", 10.8, WCT1 .. ": (am)Al(OH)3(s) + 3 H^+ = Al^3+ + 3 H2O, log *Ks0 10.8", "low",
+     { note = "file: Nordstrom et al. 1990 (10.8, recalled). The same number: Nordstrom et al. probably carry the 1960s selection forward, so the agreement tests the copying more than the solid (reasoning here). The first check of Al(OH)3(am) against a second publication" })
+  rk("Al(OH)3(s,gibbsite) + 3 H^+ = Al^3+ + 3 H2O(l)", 8.2, WCT1 .. ": alpha-Al(OH)3(gibbsite), log *Ks0 8.2", "low",
+     { known = { diff = -0.459, margin = 0.02,
+       why = "file: the gibbsite solubility measured by Palmer and Wesolowski 1992 (7.74, read), with which Brown and Ekberg 2016 and Hummel and Thoenen 2023 (7.75 +- 0.08, read, row above) agree; Baes and Mesmer 1976 print 8.5 (read) and Nordstrom et al. 1990 8.11 (recalled row). The older selections scatter 8.1-8.5 above the modern measurement, which used well-characterised gibbsite" } })
+  rk("Al^3+ + 4 OH^- = Al(OH)4^-", 32.5, WCT1 .. ": Al^3+ + 4 OH^- = Al(OH)4^-, log K4 32.5 (-23.48 in the H^+ form with pKw 13.995)", "low",
+     { known = { diff = 0.573, margin = 0.02,
+       why = "file: Wesolowski 1992 gibbsite solubility in base (read) with the Palmer and Wesolowski Al^3+: -22.87 in the H^+ form, which Brown and Ekberg 2016 (-22.91 +- 0.10, read, log_k_25C.csv) and Baes and Mesmer 1976 (-23.0, read) agree with. The 1960s constant rests on the older, more soluble gibbsite constants (row above)" } })
+  rk("CuO(s,tenorite) + 2 H^+ = Cu^2+ + H2O(l)", 7.65, WCT1 .. ": CuO(s) + 2 H^+ = Cu^2+ + H2O, log *Ks0 7.65", "low",
+     { known = { diff = -0.302, margin = 0.02,
+       why = "file: NBS 1982 tenorite and Cu^2+ (7.35; the log_k_25C.csv row derived from the same tables is a same-source row). No other independent value for tenorite was read; the 1960s selection makes the oxide 1.7 kJ/mol less stable. Kept: Cu.lua takes its Cu^2+ and solids from one table (docs/data/transition-metals.md)" } })
+  rk("Cu^2+ + 3 OH^- = Cu(OH)3^-", 15.2, WCT1 .. ": Cu^2+ + 3 OH^- = Cu(OH)3^-, log K3 15.2", "low",
+     { note = "0.14: file: Baes and Mesmer 1976 (-26.9 in the H^+ form, recalled); the table gives -26.79 with pKw 13.995 and the IUPAC review -26.64 (recalled row), both above the file" })
+  rk("Cu^2+ + 4 OH^- = Cu(OH)4^2-", 16.1, WCT1 .. ": Cu^2+ + 4 OH^- = Cu(OH)4^2-, log K4 16.1", "low",
+     { note = "0.24: file: Baes and Mesmer 1976 (-39.6 in the H^+ form, recalled); the table gives -39.88 with pKw 13.995, and the IUPAC review (-39.73 +- 0.17, recalled row) lies between, within 0.17 of both" })
+  rk("ZnO(s,zincite) + 2 H^+ = Zn^2+ + H2O(l)", 11.18, WCT1 .. ": ZnO(s) + 2 H^+ = Zn^2+ + H2O, log *Ks0 11.18", "low",
+     { note = "file: CODATA 1989 zincite and Zn^2+ (11.19)" })
+  rk("Zn^2+ + OH^- = ZnOH^+", 5.04, WCT1 .. ": Zn^2+ + OH^- = ZnOH^+, log K1 5.04", "low",
+     { note = "file: Baes and Mesmer 1976 (-8.96 in the H^+ form, recalled)" })
+  rk("Zn^2+ + 3 OH^- = Zn(OH)3^-", 13.9, WCT1 .. ": Zn^2+ + 3 OH^- = Zn(OH)3^-, log K3 13.9", "low",
+     { known = { diff = -0.342, margin = 0.02,
+       why = "file: Baes and Mesmer 1976 (-28.4 in the H^+ form, recalled); the IUPAC review (-28.05, recalled row) agrees with the table (13.9 is -28.09 with pKw 13.995), not with the file. The hydrolysis owner kept Baes and Mesmer (row above); noted here as a second source against the file" } })
+  rk("Zn^2+ + 4 OH^- = Zn(OH)4^2-", 15.1, WCT1 .. ": Zn^2+ + 4 OH^- = Zn(OH)4^2-, log K4 15.1", "low",
+     { known = { diff = -0.356, margin = 0.02,
+       why = "file: Baes and Mesmer 1976 (-41.2 in the H^+ form, recalled), with which the CRC Zn(OH)4^2-/Zn couple (-1.199 V, read, passes) agrees; the table's 15.1 (-40.88 in the H^+ form) would move that couple by 10 mV" } })
+  rk("Cd(OH)2(s) + 2 H^+ = Cd^2+ + 2 H2O(l)", 13.61, WCT1 .. ": Cd(OH)2(s) + 2 H^+ = Cd^2+ + 2 H2O, log *Ks0 13.61", "low",
+     { note = "0.12: file: NBS 1982 Cd(OH)2 with the CODATA Cd^2+ (13.73); Baes and Mesmer 1976 print 13.65 (recalled row), between the two" })
+  rk("Mn(OH)2(s,pyrochroite) = Mn^2+ + 2 OH^-", -12.8, WCT1 .. ": Mn(OH)2(s) = Mn^2+ + 2 OH^-, log Ks0 -12.8 (compared with the crystalline solid)", "low",
+     { note = "file: Baes and Mesmer 1976 pyrochroite (log *Ks 15.2, recalled; -12.77 here); the file's amorphous Mn(OH)2 (NBS) gives -12.67" })
+  rk("Mn(OH)2(s,pyrochroite) + OH^- = Mn(OH)3^-", -5.0, WCT1 .. ": Mn(OH)2(s) + OH^- = Mn(OH)3^-, log Ks3 -5.0", "low",
+     { known = { diff = -0.614, margin = 0.02,
+       why = "file: Baes and Mesmer 1976 Mn(OH)3^- (-34.8, recalled) with their pyrochroite; the table implies log beta3 7.8 (-34.19 in the H^+ form). Mn(OH)3^- matters only in strong base, where few solubility studies exist. The first independent check of Mn(OH)3^-" } })
+  rk("Fe(OH)2(s) + OH^- = Fe(OH)3^-", -5.5, WCT1 .. ": Fe(OH)2(inactive) + OH^- = Fe(OH)3^-, log Ks3 -5.5", "low",
+     { known = { diff = 1.358, margin = 0.02,
+       why = "file: Baes and Mesmer 1976 Fe(OH)3^- (-31.0, recalled) with the file's Fe(OH)2 (-15.1, Langmuir 1969 as tabulated by Boyd and Scott 2001, read). The table's constant makes Fe(OH)3^- 1.4 log units weaker; with the table's own inactive Fe(OH)2 (14.5 or 15.1) it implies log beta3 9.0-9.6 against the file's 10.96 (reasoning here). Which is right decides the alkaline end of the Fe(II) solubility curve (caustic embrittlement and high-pH iron dissolution); not changed (Fe is held by its own data work). The first independent check of Fe(OH)3^-" } })
+  rk("Mg(OH)2(s,brucite) = Mg^2+ + 2 OH^-", -11.6, WCT1 .. ": Mg(OH)2(brucite), log Ks0 -11.6", "low",
+     { known = { diff = 0.468, margin = 0.02,
+       why = "file: CODATA Mg^2+ with NBS brucite (-11.13), chosen in issue 13 to reproduce the measured brucite solubility; Baes and Mesmer 1976 (16.84 in the H^+ form, -11.15 here, recalled row) agree with the file. The table's -11.6 is a 1960s value for a less soluble brucite" } })
+  rk("Mg^2+ + OH^- = MgOH^+", 2.6, WCT1 .. ": Mg^2+ + OH^- = MgOH^+, log K1 2.6", "low",
+     { note = "file: Baes and Mesmer 1976 (-11.44 in the H^+ form, recalled)" })
+  rk("Ca(OH)2(s,portlandite) = Ca^2+ + 2 OH^-", -5.43, WCT1 .. ": Ca(OH)2(s) = Ca^2+ + 2 OH^-, log Ks0 -5.43", "low",
+     { note = "file: NBS 1982 portlandite with the SH88 Ca^2+ (-5.45)" })
+  rk("Ca(OH)2(s,portlandite) = CaOH^+ + OH^-", -4.03, WCT1 .. ": Ca(OH)2(s) = CaOH^+ + OH^-, log Ks1 -4.03 (with Ks0 -5.43: log K1 1.40 for Ca^2+ + OH^- = CaOH^+)", "low",
+     { note = "0.28: file: Baes and Mesmer 1976 CaOH^+ (-12.85 in the H^+ form, recalled), which Nordstrom et al. 1990 (-12.78, recalled, file note) approach; the table's K1 1.40 is -12.60 with pKw 13.995. Within the low class" })
+  rk("H2O(l) = H^+ + OH^-", -14.00, WCT1 .. ": H2O = H^+ + OH^-, log Kw -14.00", "low",
+     { note = "file: NBS 1982 water with the SH88 OH^- (-13.986); IAPWS R11-07 gives -13.995 (water.csv)" })
+  rk("CO2(g) + H2O(l) = H^+ + HCO3^-", -7.82, WCT1 .. ": CO2(g) + H2O = H^+ + HCO3^-, log Kp1 -7.82", "low",
+     { note = "file: CODATA CO2(g) with the SHS89 CO2(aq) and SH88 HCO3^- (-7.807); the Plummer and Busenberg 1982 K_H and K1 (read, log_k_25C.csv) sum to -7.820, the table's value" })
+  rk("HCO3^- = H^+ + CO3^2-", -10.33, WCT1 .. ": HCO3^- = H^+ + CO3^2-, log K2 -10.33", "low",
+     { note = "file: Plummer and Busenberg 1982 (-10.33)" })
 end
 
 M.checks = C
