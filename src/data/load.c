@@ -450,9 +450,9 @@ size_t px_data_list_write(const px_db *db, const char *element, FILE *out)
         if (sp->file) snprintf(where, sizeof where, "%s:%d", sp->file, sp->line);
         else snprintf(where, sizeof where, "(built in)");
         /* the temperature basis: [held at 25 C], [estimated: method], with
-         * an isocoulombic estimate's model reaction, [no Cp] */
+         * an isocoulombic estimate's model reaction (of log K or of dCp), [no Cp] */
         char basis[96 + sizeof sp->logk.model] = "";
-        if (sp->tbasis == PX_TBASIS_ESTIMATED && sp->logk.estimate == PX_LOGK_EST_ISOCOULOMBIC && sp->logk.model[0])
+        if (sp->tbasis == PX_TBASIS_ESTIMATED && sp->model == PX_MODEL_LOGK && sp->logk.model[0])
             snprintf(basis, sizeof basis, " [estimated: %s; model reaction %s]", sp->tmethod, sp->logk.model);
         else if (sp->tbasis == PX_TBASIS_ESTIMATED)
             snprintf(basis, sizeof basis, " [estimated: %s]", sp->tmethod);

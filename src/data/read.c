@@ -54,6 +54,7 @@ static const char *const hkf_fields[] = {"hkf", "estimated", NULL};
 #define LOGK_METHOD_MAX 32
 /* the estimation method of a logk species' constant dCp (docs/thermo.md) */
 #define LOGK_CP_METHOD_CRISS_COBBLE "criss-cobble"
+#define LOGK_CP_METHOD_ISOCOULOMBIC "isocoulombic" /* dCp(T) of a model reaction */
 #define CP_METHOD_KOPP "kopp" /* Kopp-Neumann additivity of a solid's Cp */
 static const char *const ghs[] = {"G", "H", "S", NULL};
 
@@ -491,18 +492,33 @@ static void read_logk(ctx *c, int t, pxd_entry *e, double eu)
     int rm = 0;
     if (ty == LUA_TTABLE) {
         /* estimate = { method = "isocoulombic", model = "<reaction>" }
-         * or estimate = { dCp = "criss-cobble" } (with dH and dCp) */
+         * or estimate = { dCp = "criss-cobble" } (with dH and dCp)
+         * or estimate = { dCp = "isocoulombic", model = "<reaction>" } (with dH) */
         get_table(c, t, "estimate", "estimate");
         int p = lua_gettop(c->L);
         static const char *const k[] = {"method", "model", "dCp", NULL};
         check_keys(c, p, k, "estimate");
         char cpm[LOGK_METHOD_MAX] = "";
         int rc = get_str(c, p, "dCp", "estimate.dCp", cpm, sizeof cpm);
-        if (rc == 1) {
+        /* estimate = { dCp = "isocoulombic", model = "<reaction>" }: the
+         * reaction's dCp(T) is the model reaction's (docs/thermo.md) */
+        int iso_cp = rc == 1 && !strcmp(cpm, LOGK_CP_METHOD_ISOCOULOMBIC);
+        if (iso_cp) {
+            if (rcp == 1)
+                REPORT(c, PX_DATA_ERROR, "estimate.dCp",
+                       "with estimate = { dCp = \"%s\" } the reaction's dCp is the model reaction's "
+                       "at every T: drop 'dCp'", LOGK_CP_METHOD_ISOCOULOMBIC);
+            else if (rt == 1 || isnan(sp->logk.dH))
+                REPORT(c, PX_DATA_ERROR, "estimate.dCp",
+                       "estimate = { dCp = \"%s\" } extends a measured dH: give 'dH' (not %s)",
+                       LOGK_CP_METHOD_ISOCOULOMBIC, rt == 1 ? "'logK_T'" : "log K alone");
+            else
+                sp->logk.cp_estimate = PX_LOGK_CP_EST_ISOCOULOMBIC;
+        } else if (rc == 1) {
             if (strcmp(cpm, LOGK_CP_METHOD_CRISS_COBBLE) != 0)
                 REPORT(c, PX_DATA_ERROR, "estimate.dCp",
-                       "unknown estimation method '%s' for dCp (model 'logk' knows \"%s\")", cpm,
-                       LOGK_CP_METHOD_CRISS_COBBLE);
+                       "unknown estimation method '%s' for dCp (model 'logk' knows \"%s\" and \"%s\")",
+                       cpm, LOGK_CP_METHOD_CRISS_COBBLE, LOGK_CP_METHOD_ISOCOULOMBIC);
             else if (rcp != 1 || sp->logk.dCp == 0)
                 REPORT(c, PX_DATA_ERROR, "estimate.dCp",
                        "estimate = { dCp = \"%s\" } names how the record's 'dCp' was obtained: "
@@ -519,24 +535,33 @@ static void read_logk(ctx *c, int t, pxd_entry *e, double eu)
                    "(estimate = { Cp = ..., V = ... } is for model 'hkf')",
                    LOGK_METHOD_ISOCOULOMBIC);
         int rmod = get_str(c, p, "model", "estimate.model", model, sizeof model);
-        if (rmod == 1 && rm == 0 && rc == 1) {
+        if (rmod == 1 && rm == 0 && rc == 1 && !iso_cp) {
             REPORT(c, PX_DATA_ERROR, "estimate.model",
-                   "a model reaction belongs to estimate.method = \"%s\", not to a dCp estimate",
-                   LOGK_METHOD_ISOCOULOMBIC);
+                   "a model reaction belongs to estimate.method = \"%s\" or estimate.dCp = \"%s\", "
+                   "not to a \"%s\" dCp", LOGK_METHOD_ISOCOULOMBIC, LOGK_CP_METHOD_ISOCOULOMBIC, cpm);
         } else if (rmod == 1) {
             px_reaction mr;
             char msg[200];
+            int mok = 1;
             if (px_reaction_parse_balanced(model, &mr, msg, sizeof msg) != PX_OK) {
                 REPORT(c, PX_DATA_ERROR, "estimate.model", "model reaction '%s': %s", model, msg);
-                rm = -1;
+                mok = 0;
             } else {
                 for (int i = 0; i < mr.n; i++)
                     if (!strcmp(mr.sp[i].text, sp->f.text)) {
                         REPORT(c, PX_DATA_ERROR, "estimate.model",
                                "the model reaction must not contain the species itself (%s)",
                                sp->f.text);
-                        rm = -1;
+                        mok = 0;
                     }
+            }
+            if (!mok)
+                rm = -1;
+            if (iso_cp && rm == 0) {
+                if (mok && sp->logk.cp_estimate == PX_LOGK_CP_EST_ISOCOULOMBIC)
+                    memcpy(sp->logk.model, model, sizeof model);
+                else
+                    sp->logk.cp_estimate = PX_LOGK_CP_EST_NONE;
             }
         } else if (rmod == 0 && rm == 1) {
             REPORT(c, PX_DATA_ERROR, "estimate.model",
@@ -544,8 +569,14 @@ static void read_logk(ctx *c, int t, pxd_entry *e, double eu)
                    "model = \"<reaction>\" (or write estimate = \"%s\")",
                    LOGK_METHOD_ISOCOULOMBIC);
             rm = -1;
+        } else if (rmod == 0 && iso_cp) {
+            REPORT(c, PX_DATA_ERROR, "estimate.model",
+                   "estimate = { dCp = \"%s\" } takes the dCp of a model reaction with measured data: "
+                   "add model = \"<reaction>\"", LOGK_CP_METHOD_ISOCOULOMBIC);
+            sp->logk.cp_estimate = PX_LOGK_CP_EST_NONE;
         } else if (rmod == -1) {
             rm = -1;
+            sp->logk.cp_estimate = PX_LOGK_CP_EST_NONE;
         }
         lua_pop(c->L, 1);
     } else {

@@ -202,8 +202,8 @@ static void push_species(lua_State *L, const px_species *sp, long index)
             lua_pushboolean(L, 1);
             lua_setfield(L, -2, "logK_T");
         }
-        if (sp->logk.estimate == PX_LOGK_EST_ISOCOULOMBIC && sp->logk.model[0]) {
-            lua_pushstring(L, sp->logk.model); /* the isocoulombic model reaction */
+        if (sp->logk.model[0]) {
+            lua_pushstring(L, sp->logk.model); /* the isocoulombic model reaction (log K or dCp) */
             lua_setfield(L, -2, "estimate_model");
         }
     }

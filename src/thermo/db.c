@@ -244,6 +244,9 @@ px_tbasis px_species_tbasis(const px_species *sp, const char **method)
             if (sp->logk.cp_estimate == PX_LOGK_CP_EST_CRISS_COBBLE) {
                 b = PX_TBASIS_ESTIMATED;
                 m = PX_METHOD_CRISS_COBBLE; /* dH measured, dCp estimated */
+            } else if (sp->logk.cp_estimate == PX_LOGK_CP_EST_ISOCOULOMBIC) {
+                b = PX_TBASIS_ESTIMATED;
+                m = PX_METHOD_ISO_CP; /* dH measured, dCp(T) of the model reaction */
             }
         } else if (sp->logk.estimate == PX_LOGK_EST_ISOCOULOMBIC) {
             b = PX_TBASIS_ESTIMATED;

@@ -426,6 +426,22 @@ static int model_expand(px_thermo_ws *ws, const px_db *db, const char *who, cons
     return PX_OK;
 }
 
+/* PX_OK if every species model's dG(T) rests on (after model_expand) has
+ * measured temperature data, else PX_EDATA naming the first that has not */
+static int model_measured(px_thermo_ws *ws, const px_db *db, const char *who,
+                          const px_reaction *model, const char *what)
+{
+    model_term terms[MODEL_TERMS];
+    int nt = 0;
+    int st = model_expand(ws, db, who, model, 1.0, NULL, terms, &nt, 0);
+    for (int i = 0; !st && i < nt; i++)
+        if (fabs(terms[i].c) > MODEL_CANCEL_TOL &&
+            px_species_tbasis(terms[i].sp, NULL) != PX_TBASIS_MEASURED)
+            st = werr(ws, PX_EDATA, "%s: %s: %s has no measured temperature data (%s)", who, what,
+                      terms[i].sp->f.text, px_tbasis_name(px_species_tbasis(terms[i].sp, NULL)));
+    return st;
+}
+
 /* reaction dG, dH, dS, dCp by the isocoulombic estimate (px_isocoulombic_logK);
  * model (may be NULL): a reaction with measured data subtracted from r first
  * (the model-reaction form of the method, Lindsay 1980; Gu et al. 1994) */
@@ -447,18 +463,8 @@ static int iso_reaction(px_thermo_ws *ws, const px_db *db, const char *who,
             return werr(ws, PX_EDATA, "%s: water ionisation does not parse", who);
         st = combo_reaction(ws, db, who, &water, T, P, full, &w, &wref);
     }
-    if (!st && model && db) { /* a model carries measured data */
-        model_term terms[MODEL_TERMS];
-        int nt = 0;
-        st = model_expand(ws, db, who, model, 1.0, NULL, terms, &nt, 0);
-        for (int i = 0; !st && i < nt; i++)
-            if (fabs(terms[i].c) > MODEL_CANCEL_TOL &&
-                px_species_tbasis(terms[i].sp, NULL) != PX_TBASIS_MEASURED)
-                st = werr(ws, PX_EDATA,
-                          "%s: isocoulombic model reaction: %s has no measured temperature data (%s)",
-                          who, terms[i].sp->f.text,
-                          px_tbasis_name(px_species_tbasis(terms[i].sp, NULL)));
-    }
+    if (!st && model && db) /* a model carries measured data */
+        st = model_measured(ws, db, who, model, "isocoulombic model reaction");
     if (!st && model)
         st = combo_reaction(ws, db, who, model, T, P, full, &mp, &mref);
     if (st)
@@ -471,6 +477,56 @@ static int iso_reaction(px_thermo_ws *ws, const px_db *db, const char *who,
     *dCp = mp.Cp - n * w.Cp;
     *dV = mp.V - n * w.V; /* dG(R') is taken independent of P too */
     return PX_OK;
+}
+
+/* A reaction with a measured dH at Tr whose dCp(T) is that of a model
+ * reaction M with measured data: R - M is isocoulombic and its dCp is taken
+ * as 0 at every T (the model-substance form of the isocoulombic method,
+ * Lindsay 1980), while R keeps its own dH and dS at Tr (docs/thermo.md):
+ *   dH(T) = dH_R(Tr) + [dH_M(T) - dH_M(Tr)],  dS(T) = dS_R(Tr) + [dS_M(T) - dS_M(Tr)]
+ *   dG(T) = dG_R(Tr) - dS_R(Tr)(T - Tr) + [dG_M(T) - dG_M(Tr) + dS_M(Tr)(T - Tr)]
+ * Without full only dG is set (the others 0). */
+static int iso_cp_reaction(px_thermo_ws *ws, const px_db *db, const char *who,
+                           const px_logk_params *lk, const px_reaction *r,
+                           const px_reaction *model, double T, double P, int full, double *dG,
+                           double *dH, double *dS, double *dCp, double *dV)
+{
+    if (!db || !model || model->n == 0)
+        return werr(ws, PX_EDATA, "%s: an isocoulombic dCp needs its model reaction and a database",
+                    who);
+    if (positive_charge(r) != positive_charge(model))
+        return werr(ws, PX_EDATA,
+                    "%s: the model reaction of an isocoulombic dCp must carry the same ionic charge "
+                    "(reaction minus model isocoulombic): %s vs %s",
+                    who, lk->reaction, lk->model);
+    int st = model_measured(ws, db, who, model, "isocoulombic dCp model reaction");
+    px_thermo_props m0, mt;
+    double gref;
+    if (!st) /* the model at Tr, Pr (full properties: H and S) */
+        st = combo_reaction(ws, db, who, model, PX_TR, PX_PR, 1, &m0, &gref);
+    if (!st)
+        st = combo_reaction(ws, db, who, model, T, P, full, &mt, &gref);
+    if (st)
+        return st;
+    double g0, h0, s0, cp0;
+    logk_reaction(lk, PX_TR, &g0, &h0, &s0, &cp0); /* R at Tr (its dCp is 0) */
+    if (full) {
+        *dH = h0 + (mt.H - m0.H);
+        *dS = s0 + (mt.S - m0.S);
+        *dG = *dH - T * *dS;
+        *dCp = mt.Cp;
+        *dV = mt.V;
+    } else {
+        *dG = g0 - s0 * (T - PX_TR) + (mt.G - m0.G + m0.S * (T - PX_TR));
+        *dH = *dS = *dCp = *dV = 0.0;
+    }
+    return PX_OK;
+}
+
+static int is_iso_cp(const px_species *sp)
+{
+    return sp->logk.cp_estimate == PX_LOGK_CP_EST_ISOCOULOMBIC && !sp->logk.analytic &&
+           isfinite(sp->logk.dH);
 }
 
 int px_isocoulombic_logK(px_thermo_ws *ws, const px_db *db, const px_reaction *r, double logK25,
@@ -518,7 +574,7 @@ static int logk_find_self(px_thermo_ws *ws, const px_species *sp, px_reaction *r
 static int model_parse(px_thermo_ws *ws, const px_species *sp, px_reaction *m)
 {
     m->n = 0;
-    if (!is_iso(sp) || !sp->logk.model[0])
+    if ((!is_iso(sp) && !is_iso_cp(sp)) || !sp->logk.model[0])
         return PX_OK;
     char msg[256];
     int st = px_reaction_parse_balanced(sp->logk.model, m, msg, sizeof msg);
@@ -640,6 +696,9 @@ static int logk_G(px_thermo_ws *ws, const px_db *db, const px_species *sp, doubl
     if (is_iso(sp))
         st = iso_reaction(ws, db, sp->f.text, &lc->r, lc->model.n ? &lc->model : NULL,
                           sp->logk.logK25, T, P, 0, &dG, &dH, &dS, &dCp, &dV);
+    else if (is_iso_cp(sp))
+        st = iso_cp_reaction(ws, db, sp->f.text, &sp->logk, &lc->r, &lc->model, T, P, 0, &dG, &dH,
+                             &dS, &dCp, &dV);
     else
         logk_reaction(&sp->logk, T, &dG, &dH, &dS, &dCp);
     ws->depth--;
@@ -801,6 +860,11 @@ static int logk_props(px_thermo_ws *ws, const px_db *db, const px_species *sp, d
         if (!st)
             st = iso_reaction(ws, db, sp->f.text, &r, model.n ? &model : NULL, sp->logk.logK25, T,
                               P, 1, &dG, &dH, &dS, &dCp, &dV);
+    } else if (is_iso_cp(sp)) {
+        st = model_parse(ws, sp, &model);
+        if (!st)
+            st = iso_cp_reaction(ws, db, sp->f.text, &sp->logk, &r, &model, T, P, 1, &dG, &dH, &dS,
+                                 &dCp, &dV);
     } else
         logk_reaction(&sp->logk, T, &dG, &dH, &dS, &dCp);
     ws->depth--;

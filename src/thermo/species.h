@@ -79,8 +79,11 @@ typedef enum px_logk_estimate {
 /* Where a constant reaction heat capacity px_logk_params.dCp comes from. */
 typedef enum px_logk_cp_estimate {
     PX_LOGK_CP_EST_NONE = 0,     /* published (or no dCp: 0) */
-    PX_LOGK_CP_EST_CRISS_COBBLE  /* ionic heat capacities by the correspondence principle
+    PX_LOGK_CP_EST_CRISS_COBBLE, /* ionic heat capacities by the correspondence principle
                                     (Criss and Cobble 1964) */
+    PX_LOGK_CP_EST_ISOCOULOMBIC  /* no constant dCp: dCp(T) of the model reaction
+                                    px_logk_params.model, R - M isocoulombic with
+                                    dCp(R - M) = 0 (model substance, Lindsay 1980) */
 } px_logk_cp_estimate;
 
 /* log K of the formation reaction (the species is the reaction's product):
@@ -88,7 +91,9 @@ typedef enum px_logk_cp_estimate {
  *   otherwise: van 't Hoff from logK25 and dH (J/mol), constant dH, or with
  *   dCp != 0 Kirchhoff with constant dCp (J/(mol K)) from logK25, dH at Tr;
  *   estimate = ISOCOULOMBIC (no dH, not analytic): px_isocoulombic_logK, on
- *   the reaction minus the model reaction when model is not empty. */
+ *   the reaction minus the model reaction when model is not empty;
+ *   cp_estimate = ISOCOULOMBIC (with dH, dCp 0): logK25 and dH at Tr, and
+ *   the reaction's dCp(T) that of the model reaction (docs/thermo.md). */
 typedef struct px_logk_params {
     char reaction[256]; /* e.g. "Zn^2+ + Cl^- = ZnCl^+" */
     double logK25;
@@ -98,7 +103,8 @@ typedef struct px_logk_params {
     int analytic;
     double k[5];
     px_logk_estimate estimate;
-    char model[256]; /* isocoulombic model reaction with measured data, "" if none */
+    char model[256]; /* isocoulombic model reaction with measured data, "" if none
+                        (estimate = ISOCOULOMBIC or cp_estimate = ISOCOULOMBIC) */
 } px_logk_params;
 
 /* Where a species' temperature dependence comes from (px_species_tbasis). */

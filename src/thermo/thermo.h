@@ -137,7 +137,7 @@ int px_ref_next(const char *text, size_t *pos, char key[PX_REF_KEY_MAX]);
 
 /* Where sp's temperature dependence comes from, derived from its fields:
  * LOGK with dH or logK_T: measured, unless its dCp is a Criss-Cobble
- * estimate (estimated); LOGK with an isocoulombic estimate:
+ * estimate or taken from an isocoulombic model reaction (estimated); LOGK with an isocoulombic estimate:
  * estimated (with or without a model reaction, logk.model); other
  * LOGK: held at 25 C; HKF with estimated = 1: estimated (SH88
  * correlations); CP with every Cp coefficient 0: no Cp; else measured.
@@ -147,6 +147,7 @@ int px_ref_next(const char *text, size_t *pos, char key[PX_REF_KEY_MAX]);
 #define PX_METHOD_HKF_SH88 "HKF correlations (Shock and Helgeson 1988)"
 #define PX_METHOD_KOPP "Kopp-Neumann additivity (Kopp 1865)"
 #define PX_METHOD_CRISS_COBBLE "Criss-Cobble correspondence (Criss and Cobble 1964)"
+#define PX_METHOD_ISO_CP "isocoulombic heat capacity, model substance (Lindsay 1980)"
 px_tbasis px_species_tbasis(const px_species *sp, const char **method);
 /* "measured", "estimated", "held", "no Cp". */
 const char *px_tbasis_name(px_tbasis b);

@@ -29,6 +29,11 @@ return {
       formula = "Ba^2+", model = "logk",
       reaction = "Ba(s) + 2 H^+ = Ba^2+ + H2(g)",
       logK = 98.243, dH = -537.64,
+      -- Cp: the formation reaction takes the dCp(T) of the same reaction of Ca^2+, whose
+      -- HKF set is published (isocoulombic: the difference reaction keeps dCp = 0; model
+      -- substance, Lindsay 1980); Ca^2+ is the model by the rule of docs/thermo.md:
+      -- S 9.6 J/(mol K) is closer to Ca^2+ (-56.5) than to Mg^2+ (-137.0). Validation: docs/data-checks.md, "Single-ion heat capacities".
+      estimate = { dCp = "isocoulombic", model = "Ca(s) + 2 H^+ = Ca^2+ + H2(g)" },
       source = "derived here from " .. NBS .. ": Ba^2+ dfG -560.77, dfH -537.64 kJ/mol, S 9.6 J/(mol K)",
       quality = "high",
       note = "E0(Ba^2+/Ba) = -2.906 V (CRC -2.912).",

@@ -27,9 +27,14 @@ return {
       formula = "Co^2+", model = "logk",
       reaction = "Co(s) + 2 H^+ = Co^2+ + H2(g)",
       logK = 9.530, dH = -58.2,
+      -- Cp: the formation reaction takes the dCp(T) of the same reaction of Mg^2+, whose
+      -- HKF set is published (isocoulombic: the difference reaction keeps dCp = 0; model
+      -- substance, Lindsay 1980); Mg^2+ is the model by the rule of docs/thermo.md:
+      -- S -113 J/(mol K) is closer to Mg^2+ (-137.0) than to Ca^2+ (-56.5). Validation: docs/data-checks.md, "Single-ion heat capacities".
+      estimate = { dCp = "isocoulombic", model = "Mg(s) + 2 H^+ = Mg^2+ + H2(g)" },
       source = "derived here from " .. NBS .. ": Co2+ dfG -54.4, dfH -58.2 kJ/mol, S -113 J/(mol K)",
       quality = "medium",
-      note = "E0(Co2+/Co) = -0.282 V (CRC -0.28). No Cp recalled; van 't Hoff only above 25 C.",
+      note = "E0(Co2+/Co) = -0.282 V (CRC -0.28). No Cp recalled: the heat capacity is the isocoulombic estimate above.",
     },
     {
       formula = "Co^3+", model = "logk",

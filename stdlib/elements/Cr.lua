@@ -92,9 +92,14 @@ return {
       formula = "CrO4^2-", model = "logk",
       reaction = "Cr(s) + 4 H2O(l) = CrO4^2- + 2 H^+ + 3 H2(g)",
       logK = -38.677, dH = 262.17,
+      -- Cp: the formation reaction takes the dCp(T) of the same reaction of SO4^2-, whose
+      -- HKF set is published (isocoulombic: the difference reaction keeps dCp = 0; model
+      -- substance, Lindsay 1980); SO4^2- is the model by the rule of docs/thermo.md:
+      -- S 50.21 J/(mol K) is closer to SO4^2- (18.8) than to CO3^2- (-49.3). Validation: docs/data-checks.md, "Single-ion heat capacities".
+      estimate = { dCp = "isocoulombic", model = "S(s,rhombic) + 4 H2O(l) = SO4^2- + 2 H^+ + 3 H2(g)" },
       source = "derived here from " .. NBS .. ": CrO4^2- dfG -727.75, dfH -881.15 kJ/mol, S 50.21 J/(mol K)",
       quality = "high",
-      note = "No Cp recalled; defined by its formation reaction. Van 't Hoff only above 25 C.",
+      note = "No Cp recalled; defined by its formation reaction, with the isocoulombic heat capacity above (dCp of the SO4^2- formation reaction).",
     },
     {
       formula = "HCrO4^-", model = "logk",

@@ -63,6 +63,11 @@ return {
       formula = "Hg^2+", model = "logk",
       reaction = "Hg(l) + 2 H^+ = Hg^2+ + H2(g)",
       logK = -28.848, dH = 170.21,
+      -- Cp: the formation reaction takes the dCp(T) of the same reaction of Ca^2+, whose
+      -- HKF set is published (isocoulombic: the difference reaction keeps dCp = 0; model
+      -- substance, Lindsay 1980); Ca^2+ is the model by the rule of docs/thermo.md:
+      -- S -36.19 J/(mol K) is closer to Ca^2+ (-56.5) than to Mg^2+ (-137.0). Validation: docs/data-checks.md, "Single-ion heat capacities".
+      estimate = { dCp = "isocoulombic", model = "Ca(s) + 2 H^+ = Ca^2+ + H2(g)" },
       source = "derived here from " .. CODATA .. ": Hg^2+ dfH 170.21 +- 0.20 kJ/mol, S -36.19 +- 0.80 J/(mol K)",
       quality = "high",
       note = "E0(Hg^2+/Hg) = 0.8533 V (CRC 0.851).",
@@ -71,6 +76,11 @@ return {
       formula = "Hg2^2+", model = "logk",
       reaction = "2 Hg(l) + 2 H^+ = Hg2^2+ + H2(g)",
       logK = -26.904, dH = 166.87,
+      -- Cp: the formation reaction takes the dCp(T) of the same reaction of Ca^2+, whose
+      -- HKF set is published (isocoulombic: the difference reaction keeps dCp = 0; model
+      -- substance, Lindsay 1980); Ca^2+ is the model by the rule of docs/thermo.md:
+      -- S 65.74 J/(mol K) is closer to Ca^2+ (-56.5) than to Mg^2+ (-137.0). Validation: docs/data-checks.md, "Single-ion heat capacities".
+      estimate = { dCp = "isocoulombic", model = "Ca(s) + 2 H^+ = Ca^2+ + H2(g)" },
       source = "derived here from " .. CODATA .. ": Hg2^2+ dfH 166.87 +- 0.50 kJ/mol, S 65.74 +- 0.80 J/(mol K)",
       quality = "high",
       note = "E0(Hg2^2+/Hg) = 0.7958 V (CRC 0.7973).",

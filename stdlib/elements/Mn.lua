@@ -54,9 +54,14 @@ return {
       formula = "MnO4^2-", model = "logk",
       reaction = "Mn(s) + 4 H2O(l) = MnO4^2- + 2 H^+ + 3 H2(g)",
       logK = -78.454, dH = 490.32,
+      -- Cp: the formation reaction takes the dCp(T) of the same reaction of SO4^2-, whose
+      -- HKF set is published (isocoulombic: the difference reaction keeps dCp = 0; model
+      -- substance, Lindsay 1980); SO4^2- is the model by the rule of docs/thermo.md:
+      -- S 59 J/(mol K) is closer to SO4^2- (18.8) than to CO3^2- (-49.3). Validation: docs/data-checks.md, "Single-ion heat capacities".
+      estimate = { dCp = "isocoulombic", model = "S(s,rhombic) + 4 H2O(l) = SO4^2- + 2 H^+ + 3 H2(g)" },
       source = "derived here from " .. NBS .. ": MnO4^2- dfG -500.7, dfH -653 kJ/mol, S 59 J/(mol K)",
       quality = "medium",
-      note = "No Cp recalled; defined by its formation reaction. E0(MnO4-/MnO4^2-) = 0.554 V (CRC 0.558).",
+      note = "No Cp recalled; defined by its formation reaction, with the isocoulombic heat capacity above (dCp of the SO4^2- formation reaction). E0(MnO4-/MnO4^2-) = 0.554 V (CRC 0.558).",
     },
     -- Mn(II) hydrolysis ------------------------------------------------------
     {

@@ -41,9 +41,14 @@ return {
       formula = "MoO4^2-", model = "logk",
       reaction = "Mo(s) + 2 O2(g) + H2(g) = MoO4^2- + 2 H^+",
       logK = 146.513, dH = -997.9,
+      -- Cp: the formation reaction takes the dCp(T) of the same reaction of SO4^2-, whose
+      -- HKF set is published (isocoulombic: the difference reaction keeps dCp = 0; model
+      -- substance, Lindsay 1980); SO4^2- is the model by the rule of docs/thermo.md:
+      -- S 27.2 J/(mol K) is closer to SO4^2- (18.8) than to CO3^2- (-49.3). Validation: docs/data-checks.md, "Single-ion heat capacities".
+      estimate = { dCp = "isocoulombic", model = "S(s,rhombic) + 2 O2(g) + H2(g) = SO4^2- + 2 H^+" },
       source = "derived here from " .. NBS .. ": dfG -836.3, dfH -997.9 kJ/mol, S 27.2 J/(mol K)",
       quality = "medium",
-      note = "conventional formation reaction, log K = 836.3/5.70801. Shock et al. 1997 list about -199.9 kcal/mol (-836.4 kJ/mol) for dfG (recalled). Older tables (Latimer) carry about -915 kJ/mol; the CRC couple MoO4^2-/Mo (-1.05 V) follows those (this file gives -0.910 V). Van 't Hoff with constant dH: rough above about 100 C.",
+      note = "conventional formation reaction, log K = 836.3/5.70801. Shock et al. 1997 list about -199.9 kcal/mol (-836.4 kJ/mol) for dfG (recalled). Older tables (Latimer) carry about -915 kJ/mol; the CRC couple MoO4^2-/Mo (-1.05 V) follows those (this file gives -0.910 V). Heat capacity: the isocoulombic estimate above (dCp of the SO4^2- formation reaction).",
     },
     {
       formula = "HMoO4^-", model = "logk",

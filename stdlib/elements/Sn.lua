@@ -40,9 +40,14 @@ return {
       formula = "Sn^2+", model = "logk",
       reaction = "Sn(s) + 2 H^+ = Sn^2+ + H2(g)",
       logK = 4.765, dH = -8.8,
+      -- Cp: the formation reaction takes the dCp(T) of the same reaction of Ca^2+, whose
+      -- HKF set is published (isocoulombic: the difference reaction keeps dCp = 0; model
+      -- substance, Lindsay 1980); Ca^2+ is the model by the rule of docs/thermo.md:
+      -- S -17 J/(mol K) is closer to Ca^2+ (-56.5) than to Mg^2+ (-137.0). Validation: docs/data-checks.md, "Single-ion heat capacities".
+      estimate = { dCp = "isocoulombic", model = "Ca(s) + 2 H^+ = Ca^2+ + H2(g)" },
       source = "derived here from " .. NBS .. ": dfG -27.2, dfH -8.8 kJ/mol, S -17 J/(mol K)",
       quality = "medium",
-      note = "conventional formation reaction, log K = 27.2/5.70801. Gives E(Sn2+/Sn) = -0.141 V; CRC lists -0.1375. CODATA 1989 gives dfH -8.9, S -16.7 (recalled). Van 't Hoff with constant dH: fair near 25 C only.",
+      note = "conventional formation reaction, log K = 27.2/5.70801. Gives E(Sn2+/Sn) = -0.141 V; CRC lists -0.1375. CODATA 1989 gives dfH -8.9, S -16.7 (recalled). Heat capacity: the isocoulombic estimate above (dCp of the Ca^2+ formation reaction).",
     },
     {
       formula = "Sn^4+", model = "logk",

@@ -224,6 +224,185 @@ local function run_hkf_species(lib)
   return rows, sum
 end
 
+-- Single-ion heat capacities (issue 12): an ion with a measured dfH but no
+-- heat capacity of its own, defined by its formation reaction from the
+-- elements (Co(s) + 2 H^+ = Co^2+ + H2(g)).  Every ion of the library whose
+-- heat capacity is measured and whose formation reaction phlox can write is
+-- redefined that way from its own 25 C log K and dH (a validation copy, a
+-- user file) and evaluated by
+--   dCp = 0          van 't Hoff on the formation reaction (what the ions
+--                    without Cp had before)
+--   model ion        estimate = { dCp = "isocoulombic", model = <the same
+--                    reaction of another measured ion> }: the C code's
+--                    isocoulombic dCp (model substance, Lindsay 1980); the
+--                    model by the rule below, never the ion itself
+--   Criss-Cobble     (cations only) Kirchhoff with the constant dCp of the
+--                    Criss and Cobble 1964 mean ionic heat capacity, cation
+--                    class, as tests/scripts/test_divalent_ion_methods.lua
+-- The error is (G(estimate) - G(record))/(RT ln10) of the ion, in log K of
+-- any reaction forming one of it; a row is compared only where the ion's
+-- record and the model's data are valid.
+-- The rule: the model is a measured ion of the same charge and kind (metal
+-- cation; oxyanion without H; oxyanion with H) whose S at 25 C is closest
+-- (the Born coefficient omega, which dominates the heat capacity of an ion
+-- at high temperature, is linear in S in the Shock and Helgeson 1988
+-- correlation, docs/thermo.md).  A measured ion: an HKF record with a
+-- published set, or a logk record with a fitted log K(T) from such ions.
+M.ION_METHODS = { "dCp = 0", "model ion", "Criss-Cobble" }
+M.ION_TARGETS = {
+  { ion = "Ca^2+", rx = "Ca(s) + 2 H^+ = Ca^2+ + H2(g)", kind = "metal cation" },
+  { ion = "Mg^2+", rx = "Mg(s) + 2 H^+ = Mg^2+ + H2(g)", kind = "metal cation" },
+  { ion = "Na^+", rx = "Na(s) + H^+ = Na^+ + 0.5 H2(g)", kind = "metal cation" },
+  { ion = "K^+", rx = "K(s) + H^+ = K^+ + 0.5 H2(g)", kind = "metal cation" },
+  { ion = "SO4^2-", rx = "S(s,rhombic) + 2 O2(g) + H2(g) = SO4^2- + 2 H^+", kind = "oxyanion" },
+  { ion = "CO3^2-", rx = "C(s,graphite) + 1.5 O2(g) + H2(g) = CO3^2- + 2 H^+", kind = "oxyanion" },
+  { ion = "NO3^-", rx = "0.5 N2(g) + 1.5 O2(g) + 0.5 H2(g) = NO3^- + H^+", kind = "oxyanion" },
+  { ion = "HSO4^-", rx = "S(s,rhombic) + 2 O2(g) + H2(g) = HSO4^- + H^+", kind = "acid oxyanion" },
+  { ion = "HCO3^-", rx = "C(s,graphite) + 1.5 O2(g) + H2(g) = HCO3^- + H^+", kind = "acid oxyanion" },
+  -- the HKF estimates from a published Cp at 25 C (Shock et al. 1997 and
+  -- reviews): a reference of lower rank, targets only, never models
+  { ion = "Fe^2+", rx = "Fe(s) + 2 H^+ = Fe^2+ + H2(g)", kind = "metal cation", secondary = true },
+  { ion = "Ni^2+", rx = "Ni(s) + 2 H^+ = Ni^2+ + H2(g)", kind = "metal cation", secondary = true },
+  { ion = "Zn^2+", rx = "Zn(s) + 2 H^+ = Zn^2+ + H2(g)", kind = "metal cation", secondary = true },
+  { ion = "Mn^2+", rx = "Mn(s) + 2 H^+ = Mn^2+ + H2(g)", kind = "metal cation", secondary = true },
+}
+local CAL = 4.184
+-- Criss and Cobble 1964, cation class (alpha, beta in cal/(mol K)), from
+-- memory: 25-100 C and 25-200 C means, the latter held above 200 C (as
+-- tests/scripts/test_divalent_ion_methods.lua and Fe.lua)
+M.CC_CATION = { [100] = { 46, -0.55 }, [200] = { 50, -0.63 }, [300] = { 50, -0.63 } }
+
+-- the kind of an ion for the rule: "metal cation", "oxyanion", "acid oxyanion"
+function M.ion_kind(formula, charge)
+  if charge > 0 then return "metal cation" end
+  local body = formula:gsub("%^.*$", "")
+  if body:find("O", 1, true) then return body:find("H", 1, true) and "acid oxyanion" or "oxyanion" end
+  return "anion"
+end
+
+-- the measured ion of the same charge and kind whose S at 25 C is closest
+-- to S25 (nil if none); candidates: M.ION_TARGETS without secondary ones
+function M.ion_model(lib, charge, kind, S25, skip)
+  local best, d
+  for _, t in ipairs(M.ION_TARGETS) do
+    local sp = lib:species(t.ion)
+    if not t.secondary and t.ion ~= skip and sp and sp.charge == charge and t.kind == kind
+       and sp.basis == "measured" and (sp.model == "hkf" or sp.logK_T) then
+      local dd = math.abs(lib:props(t.ion, { T = TR, P = 1 }).S - S25)
+      if not d or dd < d then best, d = t, dd end
+    end
+  end
+  return best
+end
+
+-- the model reaction for ion with formation reaction rx: the model ion's
+-- formation reaction as the target tables write it
+local function ion_copy_lib(phlox, ion, rx, k25, dH, model)
+  local path = os.tmpname()
+  local fh = assert(io.open(path, "wb"))
+  local est = model and ("estimate = { dCp = \"isocoulombic\", model = %s }, "):format(lua_str(model)) or ""
+  fh:write(("return { units = { energy = \"J\" }, species = { { formula = %s, model = \"logk\", reaction = %s, "
+    .. "logK = %.17g, dH = %.17g, %ssource = \"validation copy\" } } }\n"):format(lua_str(ion), lua_str(rx), k25, dH, est))
+  fh:close()
+  local ok, l = pcall(phlox.library, { user = { path }, table.unpack(phlox.available_elements()) })
+  os.remove(path)
+  if not ok then error("estimates: ion copy of " .. ion .. ": " .. tostring(l)) end
+  return l
+end
+
+local function run_ions(phlox, lib)
+  local rows, sum = {}, {}
+  for _, t in ipairs(M.ION_TARGETS) do
+    local sp = lib:species(t.ion)
+    local r25 = assert(lib:reaction(t.rx, { T = TR, P = 1 }))
+    local S25 = lib:props(t.ion, { T = TR, P = 1 }).S
+    local m = M.ion_model(lib, sp.charge, t.kind, S25, t.ion)
+    local row = { ion = t.ion, kind = t.kind, charge = sp.charge, secondary = t.secondary, rx = t.rx,
+                  model = m and m.ion, model_rx = m and m.rx, err = {} }
+    local libs = { ["dCp = 0"] = ion_copy_lib(phlox, t.ion, t.rx, r25.logK, r25.dH) }
+    if m then libs["model ion"] = ion_copy_lib(phlox, t.ion, t.rx, r25.logK, r25.dH, m.rx) end
+    local Tmax = math.min(sp.Tmax or math.huge, m and lib:species(m.ion).Tmax or math.huge)
+    for _, meth in ipairs(M.ION_METHODS) do row.err[meth] = {} end
+    for _, tc in ipairs(M.TEMPS) do
+      local T = tc + T0C
+      if T <= Tmax + 1e-6 then
+        local g_ref = lib:props(t.ion, { T = T }).G
+        local k = R_GAS * T * LN10
+        for meth, l in pairs(libs) do
+          local cp = l:species(t.ion)
+          if cp.basis ~= (meth == "dCp = 0" and "measured" or "estimated") then
+            error("estimates: " .. t.ion .. " copy (" .. meth .. ") has basis " .. tostring(cp.basis))
+          end
+          row.err[meth][tc] = (l:props(t.ion, { T = T }).G - g_ref) / k
+        end
+        if sp.charge > 0 then
+          -- Criss-Cobble: conventional mean Cp = alpha (1 - z) + beta S (cal), constant dCp
+          local a, b = M.CC_CATION[tc][1], M.CC_CATION[tc][2]
+          local z = sp.charge
+          local rest = 0 -- Cp at 25 C of the other species of the formation reaction
+          for term in (t.rx:gsub(" = ", " + ") .. " + "):gmatch("(.-) %+ ") do
+            local nu, f = term:match("^([%d.]+) (.+)$")
+            nu, f = tonumber(nu) or 1, f or term
+            if f ~= t.ion and f ~= "H^+" then
+              local side = t.rx:match("^(.-) = "):find(f, 1, true) and -1 or 1
+              rest = rest + side * nu * lib:props(f, { T = TR, P = 1 }).Cp
+            end
+          end
+          local dcp = (a * (1 - z) + b * S25 / CAL) * CAL + rest
+          local g_vant = libs["dCp = 0"]:props(t.ion, { T = T }).G
+          local dG = dcp * ((T - TR) - T * math.log(T / TR))
+          row.err["Criss-Cobble"][tc] = (g_vant + dG - g_ref) / k
+        end
+      end
+    end
+    rows[#rows + 1] = row
+  end
+  -- mean and max |error| by (charge, kind) and method, primary references only
+  for _, row in ipairs(rows) do
+    if not row.secondary then
+      local key = ("%+d %s"):format(row.charge, row.kind)
+      for _, meth in ipairs(M.ION_METHODS) do
+        for _, tc in ipairs(M.TEMPS) do
+          local e = row.err[meth][tc]
+          if e then
+            local name = key .. ": " .. meth
+            sum[name] = sum[name] or {}
+            for _, tt in ipairs(M.TEMPS) do sum[name][tt] = sum[name][tt] or { n = 0, abs = 0, max = 0 } end
+            local s = sum[name][tc]
+            s.n, s.abs, s.max = s.n + 1, s.abs + math.abs(e), math.max(s.max, math.abs(e))
+          end
+        end
+      end
+    end
+  end
+  for _, byT in pairs(sum) do
+    for _, s in pairs(byT) do s.mean = s.n > 0 and s.abs / s.n or 0 end
+  end
+  return rows, sum
+end
+
+-- The library's ions with an isocoulombic dCp and the model ion the rule
+-- picks for each (tests/scripts/test_ion_heat_capacity.lua checks that the
+-- element files name it).
+function M.library_ion_models(lib)
+  local out = {}
+  for _, s in ipairs(lib:list()) do
+    if s.basis_method and s.basis_method:find("model substance", 1, true) then
+      local S25 = lib:props(s.formula, { T = TR, P = 1 }).S
+      local m = M.ion_model(lib, s.charge, M.ion_kind(s.formula, s.charge), S25)
+      local named
+      for term in (s.estimate_model:gsub(" = ", " + ") .. " + "):gmatch("(.-) %+ ") do
+        local f = term:match("^[%d.]+ (.+)$") or term
+        local sp = lib:species(f)
+        if f ~= "H^+" and sp and sp.charge ~= 0 then named = f end
+      end
+      out[#out + 1] = { species = s.formula, S = S25, model = s.estimate_model, named = named,
+                        rule = m and m.ion, file = s.file }
+    end
+  end
+  return out
+end
+
 -- Isocoulombic estimates with a MODEL REACTION (docs/thermo.md, "Model
 -- reactions"): the complex's reaction R minus a reaction M of the same charge
 -- type with measured data, R - M + n W made isocoulombic.  Two rules choose M:
@@ -549,6 +728,9 @@ function M.run(phlox)
   sum.library_models = M.library_models(lib, sum.model_rows)
   sum.sulfate_analog = M.sulfate_analog(lib)
   sum.higher = M.higher_hydrolysis(lib, rows)
+  sum.ion_rows, sum.ion = run_ions(phlox, lib)
+  for k, v in pairs(sum.ion) do sum[k] = v end
+  sum.ion_library = M.library_ion_models(lib)
   sum.nio = {}
   for _, tc in ipairs({ 150, 200, 250, 300 }) do
     sum.nio[#sum.nio + 1] = { tc = tc, logK = assert(lib:reaction(M.NIO_REACTION, { T_C = tc })).logK }
@@ -576,6 +758,18 @@ M.DOCUMENTED = {
   ["model: same type"] = { [100] = { mean = 0.307, max = 0.900 }, [200] = { mean = 0.537, max = 1.655 }, [300] = { mean = 1.065, max = 3.605 } },
   ["model: ligand acid"] = { [100] = { mean = 1.053, max = 2.443 }, [200] = { mean = 2.599, max = 6.240 }, [300] = { mean = 4.449, max = 10.952 } },
   ["Cp = 0"] = { [100] = { mean = 0.112, max = 0.464 }, [200] = { mean = 0.441, max = 1.825 }, [300] = { mean = 0.834, max = 3.449 } },
+  -- single-ion heat capacities (run_ions; error in G of the ion, log K units)
+  ["+1 metal cation: Criss-Cobble"] = { [100] = { mean = 0.091, max = 0.097 }, [200] = { mean = 0.390, max = 0.408 }, [300] = { mean = 0.705, max = 0.738 } },
+  ["+1 metal cation: dCp = 0"] = { [100] = { mean = 0.021, max = 0.041 }, [200] = { mean = 0.085, max = 0.165 }, [300] = { mean = 0.161, max = 0.278 } },
+  ["+1 metal cation: model ion"] = { [100] = { mean = 0.042, max = 0.043 }, [200] = { mean = 0.171, max = 0.173 }, [300] = { mean = 0.323, max = 0.325 } },
+  ["+2 metal cation: Criss-Cobble"] = { [100] = { mean = 0.149, max = 0.164 }, [200] = { mean = 0.580, max = 0.650 }, [300] = { mean = 0.908, max = 1.043 } },
+  ["+2 metal cation: dCp = 0"] = { [100] = { mean = 0.017, max = 0.029 }, [200] = { mean = 0.115, max = 0.167 }, [300] = { mean = 0.403, max = 0.501 } },
+  ["+2 metal cation: model ion"] = { [100] = { mean = 0.024, max = 0.024 }, [200] = { mean = 0.105, max = 0.106 }, [300] = { mean = 0.196, max = 0.197 } },
+  ["-1 acid oxyanion: dCp = 0"] = { [100] = { mean = 0.121, max = 0.134 }, [200] = { mean = 0.539, max = 0.581 }, [300] = { mean = 1.322, max = 1.398 } },
+  ["-1 acid oxyanion: model ion"] = { [100] = { mean = 0.025, max = 0.028 }, [200] = { mean = 0.083, max = 0.088 }, [300] = { mean = 0.153, max = 0.159 } },
+  ["-1 oxyanion: dCp = 0"] = { [100] = { mean = 0.152, max = 0.152 }, [200] = { mean = 0.622, max = 0.622 }, [300] = { mean = 1.424, max = 1.424 } },
+  ["-2 oxyanion: dCp = 0"] = { [100] = { mean = 0.446, max = 0.485 }, [200] = { mean = 1.833, max = 1.999 } },
+  ["-2 oxyanion: model ion"] = { [100] = { mean = 0.079, max = 0.081 }, [200] = { mean = 0.332, max = 0.337 } },
 }
 
 local function f2(x) return x and ("%+.2f"):format(x) or "" end
@@ -768,6 +962,61 @@ function M.render(rows, sum)
   w("nickel check that could be read. The higher-hydrolysis rows above show the")
   w("estimate is not reliable for these steps either way: it falls short of the")
   w("measured rise of aluminate and Fe(OH)2⁺.")
+  w("")
+  w("### Single-ion heat capacities (ions defined by a formation reaction)")
+  w("")
+  w("An ion with a measured ΔfH° but no heat capacity of its own is defined by its")
+  w("formation reaction from the elements (Co(s) + 2 H⁺ = Co²⁺ + H₂(g)). Every ion")
+  w("below whose heat capacity is measured is redefined that way from its own 25 °C")
+  w("log K and ΔrH° and evaluated again: *dCp = 0*: van 't Hoff on the formation")
+  w("reaction (what the ions without Cp had before); *model ion*: the reaction takes")
+  w("the ΔrCp°(T) of the same reaction of another measured ion, the reaction minus")
+  w("the model being isocoulombic with ΔrCp° = 0 (`estimate = { dCp = \"isocoulombic\",")
+  w("model = ... }`, docs/thermo.md); the model is the measured ion of the same")
+  w("charge and kind whose S° is closest (never the ion itself); *Criss-Cobble*:")
+  w("constant ΔrCp° from the mean ionic heat capacity of the cation class (Criss and")
+  w("Cobble 1964, recalled parameters). Entries are (G(estimate) − G(record))/(RT ln 10)")
+  w("of the ion at 100/200/300 °C, the error in log K of any reaction forming one of")
+  w("it (for a divalent cation 0.1 is 3.7, 4.7 and 5.7 mV in E°(M²⁺/M)); \"–\" where")
+  w("the ion's record or the model's data end (CO₃²⁻: 250 °C). Rows marked ² compare")
+  w("with HKF estimates from a published Cp° at 25 °C, a reference of lower rank, and")
+  w("are left out of the summary.")
+  w("")
+  local names = {}
+  for k in pairs(sum.ion) do names[#names + 1] = k end
+  table.sort(names)
+  w("| class: method | T (°C) | ions | mean abs. error | max abs. error |")
+  w("|---|---|---|---|---|")
+  for _, k in ipairs(names) do
+    for _, tc in ipairs(M.TEMPS) do
+      local s = sum.ion[k][tc]
+      if s.n > 0 then w(("| %s | %d | %d | %.3f | %.3f |"):format(k, tc, s.n, s.mean, s.max)) end
+    end
+  end
+  w("")
+  w("| ion | kind | model ion | dCp = 0 100/200/300 | model ion 100/200/300 | Criss-Cobble 100/200/300 |")
+  w("|---|---|---|---|---|---|")
+  for _, r in ipairs(sum.ion_rows) do
+    local function three(m)
+      local e = r.err[m]
+      if not e[100] then return "" end
+      return ("%+.3f %s %s"):format(e[100], e[200] and ("%+.3f"):format(e[200]) or "–",
+        e[300] and ("%+.3f"):format(e[300]) or "–")
+    end
+    w(("| `%s`%s | %s | %s | %s | %s | %s |"):format(r.ion, r.secondary and "²" or "", r.kind,
+      r.model and ("`" .. r.model .. "`") or "none", three("dCp = 0"), three("model ion"), three("Criss-Cobble")))
+  end
+  w("")
+  w("The library applies *model ion* where the table shows it beats *dCp = 0*")
+  w("(divalent metal cations and oxyanions; not to monovalent cations, where it")
+  w("loses), with the rule's model (tests/scripts/test_ion_heat_capacity.lua checks")
+  w("the element files against the rule):")
+  w("")
+  w("| ion | S° 25 °C, J/(mol K) | model reaction | rule picks |")
+  w("|---|---|---|---|")
+  for _, x in ipairs(sum.ion_library) do
+    w(("| `%s` | %.1f | `%s` | `%s` |"):format(x.species, x.S, x.model, tostring(x.rule)))
+  end
   w("")
   w("### HKF correlations, species by species")
   w("")

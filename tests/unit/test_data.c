@@ -356,12 +356,17 @@ static void test_logk_estimate_basis(void **state)
     px_db_free(db);
 
     /* a measured dH with a constant dCp: measured, or estimated when the dCp
-     * is marked as a Criss-Cobble estimate (docs/thermo.md) */
+     * is marked as a Criss-Cobble estimate, or when the reaction's dCp(T) is
+     * that of an isocoulombic model reaction (the model kept; docs/thermo.md) */
     const char *cp = "return { element = 'Zn', species = {\n"
                      "{ formula = 'Zn^2+', model = 'logk', reaction = 'Zn(s) + 2 H^+ = Zn^2+ + H2(g)',"
                      " logK = 25.79, dH = -153.9, dCp = -40, source = 's' },\n"
                      "{ formula = 'ZnOH^+', model = 'logk', reaction = 'Zn^2+ + H2O(l) = ZnOH^+ + H^+',"
-                     " logK = -8.96, dH = 56.07, dCp = -60, estimate = { dCp = 'criss-cobble' }, source = 's' } } }\n";
+                     " logK = -8.96, dH = 56.07, dCp = -60, estimate = { dCp = 'criss-cobble' }, source = 's' },\n"
+                     "{ formula = 'Zn(OH)2(aq)', model = 'logk', reaction = 'Zn^2+ + 2 H2O(l) = Zn(OH)2(aq) + 2 H^+',"
+                     " logK = -17.3, dH = 100,"
+                     " estimate = { dCp = 'isocoulombic', model = 'Mg^2+ + 2 H2O(l) = Mg(OH)2(aq) + 2 H^+' },"
+                     " source = 's' } } }\n";
     db = px_db_new();
     load_ok(db, p, cp, "c.lua");
     a = px_db_find(db, "Zn^2+");
@@ -370,6 +375,13 @@ static void test_logk_estimate_basis(void **state)
     assert_int_equal(a->tbasis, PX_TBASIS_MEASURED);
     assert_int_equal(b->tbasis, PX_TBASIS_ESTIMATED);
     assert_string_equal(b->tmethod, PX_METHOD_CRISS_COBBLE);
+    const px_species *iso = px_db_find(db, "Zn(OH)2(aq)");
+    assert_int_equal(iso->logk.cp_estimate, PX_LOGK_CP_EST_ISOCOULOMBIC);
+    assert_int_equal(iso->logk.estimate, PX_LOGK_EST_NONE);
+    assert_string_equal(iso->logk.model, "Mg^2+ + 2 H2O(l) = Mg(OH)2(aq) + 2 H^+");
+    assert_close(iso->logk.dCp, 0, 0, 0);
+    assert_int_equal(iso->tbasis, PX_TBASIS_ESTIMATED);
+    assert_string_equal(iso->tmethod, PX_METHOD_ISO_CP);
     px_db_free(db);
 
     static const char *const bad[][2] = {
@@ -388,6 +400,14 @@ static void test_logk_estimate_basis(void **state)
         {"dH = 13.4, estimate = { dCp = 'criss-cobble' }", "estimate.dCp: estimate = { dCp = \"criss-cobble\" } names how"},
         {"dH = 13.4, dCp = -50, estimate = { dCp = 'criss-cobble', model = 'Cu^2+ + Cl^- = CuCl^+' }",
          "estimate.model: a model reaction belongs to estimate.method"},
+        {"dH = 13.4, dCp = -50, estimate = { dCp = 'isocoulombic', model = 'Cu^2+ + H2O(l) = CuOH^+ + H^+' }",
+         "estimate.dCp: with estimate = { dCp = \"isocoulombic\" } the reaction's dCp is the model"},
+        {"estimate = { dCp = 'isocoulombic', model = 'Cu^2+ + H2O(l) = CuOH^+ + H^+' }",
+         "estimate.dCp: estimate = { dCp = \"isocoulombic\" } extends a measured dH: give 'dH'"},
+        {"dH = 13.4, estimate = { dCp = 'isocoulombic' }",
+         "estimate.model: estimate = { dCp = \"isocoulombic\" } takes the dCp of a model reaction"},
+        {"dH = 13.4, estimate = { dCp = 'isocoulombic', model = 'Zn^2+ + H2O(l) = ZnOH^+ + H^+' }",
+         "estimate.model: the model reaction must not contain the species itself (ZnOH^+)"},
     };
     expect_errors(p,
                   "return { element = 'Zn', species = {\n"
