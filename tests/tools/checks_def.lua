@@ -1105,9 +1105,9 @@ do
      { known = { diff = -0.438, margin = 0.02,
        why = "file: NBS 1982 cerussite dfG -625.5 kJ/mol (recalled); the measurement is 2.5 kJ/mol lower, inside its own +-3.9 kJ/mol (0.68 log units) but outside the low class. Same direction as the Kaye and Laby product (row above)" } })
 
-  -- Table 3 (continued) of the article 'Water chemistry', page 1264 of a
-  -- reference book stored at issuhub.com (the book's title is not in the
-  -- stored excerpt).  Its footnote names its sources: Sillen and Martell
+  -- Table 3 (continued) of the article 'Water chemistry', page 1264 of the
+  -- Encyclopedia of Environmental Science and Engineering (a copy at
+  -- issuhub.com; the title shows on other pages of the same copy).  Its footnote names its sources: Sillen and Martell
   -- 1964, Feitknecht and Schindler 1963, Schindler 1967 and Butler 1964.
   -- Rows at I = 0 only (the table's I column).  Not entered: CaSO4(s) 4.6
   -- and FeS(s) 17.3 (solid not named), siderite "10.4 (10.24)" (two values),
@@ -1115,7 +1115,7 @@ do
   -- (magnesite 3 units from every other value read or recalled; the excerpt
   -- may be garbled), the two copper hydroxide carbonates (their formulas and
   -- both constants 7.08 are garbled in the excerpt), CdCO3 (1 M NaCl).
-  local WCT = "Table 3 of the article 'Water chemistry', p. 1264 of a reference book (read: https://issuhub.com/view/index?id=3879&pageIndex=1289; title not in the stored excerpt), constants at I = 0 quoted from Sillen and Martell 1964, Feitknecht and Schindler 1963, Schindler 1967 and Butler 1964"
+  local WCT = "Table 3 of the article 'Water chemistry', p. 1264 of the Encyclopedia of Environmental Science and Engineering (read: https://issuhub.com/view/index?id=3879&pageIndex=1289), constants at I = 0 quoted from Sillen and Martell 1964, Feitknecht and Schindler 1963, Schindler 1967 and Butler 1964"
   rk("MnS(s,alabandite) + H^+ = Mn^2+ + HS^-", -12.6 + 12.96,
      WCT .. ": MnS(green) = Mn^2+ + S^2-, log Ks0 -12.6, with the same table's HS^- = H^+ + S^2-, log K2 -12.96: log K = -12.6 + 12.96 = 0.36", "low",
      { known = { diff = -0.757, margin = 0.02,
@@ -1151,7 +1151,7 @@ do
   -- the file's -15.1 is the second), the Sr(OH)2 rows (the SrOH^+ entry
   -- 0.82 cannot be the Ks1 its label says with Ks0 3.51: the excerpt's
   -- labels or values are shifted).
-  local WCT1 = "Table 3 of the article 'Water chemistry', p. 1263 of a reference book (read: https://issuhub.com/view/index?id=3879&pageIndex=1288; title not in the stored excerpt), constants at I = 0 quoted from Sillen and Martell 1964, Feitknecht and Schindler 1963, Schindler 1967 and Butler 1964 (footnote on p. 1264)"
+  local WCT1 = "Table 3 of the article 'Water chemistry', p. 1263 of the Encyclopedia of Environmental Science and Engineering (read: https://issuhub.com/view/index?id=3879&pageIndex=1288), constants at I = 0 quoted from Sillen and Martell 1964, Feitknecht and Schindler 1963, Schindler 1967 and Butler 1964 (footnote on p. 1264)"
   rk("Al(OH)3(am) + 3 H^+ = Al^3+ + 3 H2O(l)", 10.8, WCT1 .. ": (am)Al(OH)3(s) + 3 H^+ = Al^3+ + 3 H2O, log *Ks0 10.8", "low",
      { note = "file: Nordstrom et al. 1990 (10.8, recalled). The same number: Nordstrom et al. probably carry the 1960s selection forward, so the agreement tests the copying more than the solid (reasoning here). The first check of Al(OH)3(am) against a second publication" })
   rk("Al(OH)3(s,gibbsite) + 3 H^+ = Al^3+ + 3 H2O(l)", 8.2, WCT1 .. ": alpha-Al(OH)3(gibbsite), log *Ks0 8.2", "low",
@@ -1202,6 +1202,62 @@ do
      { note = "file: CODATA CO2(g) with the SHS89 CO2(aq) and SH88 HCO3^- (-7.807); the Plummer and Busenberg 1982 K_H and K1 (read, log_k_25C.csv) sum to -7.820, the table's value" })
   rk("HCO3^- = H^+ + CO3^2-", -10.33, WCT1 .. ": HCO3^- = H^+ + CO3^2-, log K2 -10.33", "low",
      { note = "file: Plummer and Busenberg 1982 (-10.33)" })
+
+  -- Redox couples: Table 4 'Equilibrium constants of redox processes
+  -- pertinent in aquatic conditions (25 C)', p. 1271 of the same article, as
+  -- pe0 = log K per electron; E0 = pe0 x RT ln10 / F (0.059160 V at 298.15 K,
+  -- CODATA 2018 constants).  Confidence "medium" for all rows: a textbook
+  -- compilation of 1960s constants, pe0 to 0.01 (+-0.3 mV of rounding).
+  -- Not entered: couples with CH2O, CH3OH, HCOO^-, glucose, NADP, ferredoxin
+  -- (not in the library), the MnO2/MnCO3 and FeOOH/FeCO3 rows (given for
+  -- HCO3^- = 1e-3 M, footnote b), H^+/H2 (zero by definition).
+  local PE_V = R_GAS * 298.15 * LN10 / 96485.33212 -- V per pe unit (CODATA 2018 R and F)
+  local EES4 = "Table 4 of the article 'Water chemistry', p. 1271 of the Encyclopedia of Environmental Science and Engineering (read: https://issuhub.com/view/index?id=3879&pageIndex=1296), pe0 (log K per electron) at 25 C, converted here to E0 = pe0 x 0.059160 V"
+  local function ees(reaction, pe0, printed, extra)
+    local t = { source = EES4 .. ": " .. printed .. ", pe0 " .. pe0 }
+    for k, v in pairs(extra or {}) do t[k] = v end
+    crc(reaction, tonumber(("%.4f"):format(pe0 * PE_V)), "medium", t)
+  end
+  ees("O2(g) + 4 H^+ + 4 e- = 2 H2O(l)", 20.75, "(1) 1/4 O2(g) + H^+ + e- = 1/2 H2O")
+  ees("2 NO3^- + 12 H^+ + 10 e- = N2(g) + 6 H2O(l)", 21.05, "(2) 1/5 NO3^- + 6/5 H^+ + e- = 1/10 N2(g) + 3/5 H2O")
+  ees("MnO2(s,pyrolusite) + 4 H^+ + 2 e- = Mn^2+ + 2 H2O(l)", 20.42, "(3a) 1/2 MnO2(s) + 2 H^+ + e- = 1/2 Mn^2+ + H2O", { known = { diff = 0.0213, margin = 0.003,
+    why = "file: NBS 1982 pyrolusite and Mn^2+ (1.2293 V), with which the NCERT table (1.23 V, read) and the CRC series (1.224 V, recalled row) agree within 5.3 mV. The table's 1.208 V (MnO2(s), solid not named) makes the oxide 4.1 kJ/mol less stable, as a less crystalline MnO2 would be (reasoning here)" } })
+  ees("NO3^- + 2 H^+ + 2 e- = NO2^- + H2O(l)", 14.15, "(4) 1/2 NO3^- + H^+ + e- = 1/2 NO2^- + 1/2 H2O", { note = "16 mV: the file pairs the SH88 NO3^- (-110.905 kJ/mol) with the NBS 1982 NO2^- (-32.2); with the NBS NO3^- (-108.74, recalled) the couple is 0.832 V, 5 mV from the table. The same 3 kJ/mol shows, with the opposite sign, in NO2^-/NH4^+ (next rows); within the medium class" })
+  ees("NO3^- + 10 H^+ + 8 e- = NH4^+ + 3 H2O(l)", 14.90, "(5) printed '1/8 NO2 + 5/4 H+ + e- = 1/8 NH4+ + 3/8 H2O' in the excerpt; the coefficients balance only for NO3^-, and the other table below prints the same 14.90 for nitrate")
+  ees("NO2^- + 8 H^+ + 6 e- = NH4^+ + 2 H2O(l)", 15.14, "(6) 1/6 NO2^- + 4/3 H^+ + e- = 1/6 NH4^+ + 1/3 H2O", { note = "5.1 mV: the NBS 1982 NO2^- of the file with the SH88 NH4^+; see the NO3^-/NO2^- row" })
+  ees("Fe^3+ + e- = Fe^2+", 12.53, "(9a) Fe^3+ + e- = Fe^2+", { known = { diff = 0.0284, margin = 0.003,
+    why = "file: SSWS97 Fe^2+ and Fe^3+ (0.7697 V), with which every standard value read agrees within 1.3 mV (CRC 54th ed. 0.770, Societe Chimique de France 0.771, NCERT 0.77; CRC series 0.771 recalled). The table's 0.741 V is near the formal potentials of the couple in 1 M acid media (reasoning here; the table names no medium); the same value is used in the article's text (p. 1268, read)" } })
+  ees("SO4^2- + 8 H^+ + 6 e- = S(s,rhombic) + 4 H2O(l)", 6.03, "(11) 1/6 SO4^2- + 4/3 H^+ + e- = 1/6 S(s) + 2/3 H2O")
+  ees("SO4^2- + 10 H^+ + 8 e- = H2S(g) + 4 H2O(l)", 5.75, "(12) 1/8 SO4^2- + 5/4 H^+ + e- = 1/8 H2S(g) + 1/2 H2O", { known = { diff = -0.0325, margin = 0.003,
+    why = "a misprint in the table: its own rows (11) and (14) combine to (6 x 6.03 + 2 x 2.89)/8 = 5.25, which the second table below prints (0.3106 V, 2.9 mV from phlox). The file (SH88 SO4^2-, CODATA H2S(g)) gives 0.3077 V" } })
+  ees("SO4^2- + 9 H^+ + 8 e- = HS^- + 4 H2O(l)", 4.13, "(13) 1/8 SO4^2- + 9/8 H^+ + e- = 1/8 HS^- + 1/2 H2O")
+  ees("S(s,rhombic) + 2 H^+ + 2 e- = H2S(g)", 2.89, "(14) 1/2 S(s) + H^+ + e- = 1/2 H2S(g)")
+  ees("CO2(g) + 8 H^+ + 8 e- = CH4(g) + 2 H2O(l)", 2.87, "(15) 1/8 CO2(g) + H^+ + e- = 1/8 CH4(g) + 1/4 H2O")
+  ees("N2(g) + 8 H^+ + 6 e- = 2 NH4^+", 4.68, "(16) 1/6 N2(g) + 4/3 H^+ + e- = 1/3 NH4^+")
+  ees("Cl2(aq) + 2 e- = 2 Cl^-", 23.6, "(24) 1/2 Cl2(aq) + e- = Cl^-")
+  ees("2 HClO(aq) + 2 H^+ + 2 e- = Cl2(aq) + 2 H2O(l)", 26.9, "(25) HOCl + H^+ + e- = 1/2 Cl2(aq) + H2O")
+
+  -- Table 4.2 'Equilibrium constants of reduction half-reactions at pH 7 and
+  -- 25 C' of The Biogeochemistry of Submerged Soils (author and year
+  -- recalled: G. Kirk, 2004), read in a copy of its p. 109; pe0 column.  Same
+  -- values as the table above except SO4^2-/H2S(g), SO4^2-/HS^- and N2/NH4^+.
+  -- Not entered: the Mn and Fe oxide rows (footnote a: computed for 0.2 mM
+  -- Mn^2+ and 1 mM Fe^2+, not unit activity), N2O, CH2O, glucose, the first
+  -- row (printed 'O2(aq)' in the excerpt), H^+/H2.
+  local KIRK = "Table 4.2 of The Biogeochemistry of Submerged Soils (read: http://what-when-how.com/Tutorial/topic-1277fh0raat/The-Biogeochemistry-of-Submerged-Soils-109.html; author and year recalled: G. Kirk, 2004), pe0 at 25 C, converted here to E0 = pe0 x 0.059160 V"
+  local function kirk(reaction, pe0, printed, extra)
+    local t = { source = KIRK .. ": " .. printed .. ", pe0 " .. pe0 }
+    for k, v in pairs(extra or {}) do t[k] = v end
+    crc(reaction, tonumber(("%.4f"):format(pe0 * PE_V)), "medium", t)
+  end
+  kirk("2 NO3^- + 12 H^+ + 10 e- = N2(g) + 6 H2O(l)", 21.05, "1/5 NO3^- + 6/5 H^+ + e- = 1/10 N2(g) + 3/5 H2O")
+  kirk("NO3^- + 2 H^+ + 2 e- = NO2^- + H2O(l)", 14.15, "1/2 NO3^- + H^+ + e- = 1/2 NO2^- + 1/2 H2O", { note = "16 mV: as the Encyclopedia row (same value): the file's SH88 NO3^- with the NBS NO2^-" })
+  kirk("NO3^- + 10 H^+ + 8 e- = NH4^+ + 3 H2O(l)", 14.90, "1/8 NO3^- + 5/4 H^+ + e- = 1/8 NH4^+ + 3/8 H2O")
+  kirk("NO2^- + 8 H^+ + 6 e- = NH4^+ + 2 H2O(l)", 15.14, "1/6 NO2^- + 4/3 H^+ + e- = 1/6 NH4^+ + 1/3 H2O", { note = "5.1 mV: as the Encyclopedia row (same value)" })
+  kirk("SO4^2- + 10 H^+ + 8 e- = H2S(g) + 4 H2O(l)", 5.25, "1/8 SO4^2- + 5/4 H^+ + e- = 1/8 H2S(g) + 1/2 H2O")
+  kirk("SO4^2- + 9 H^+ + 8 e- = HS^- + 4 H2O(l)", 4.25, "1/8 SO4^2- + 9/8 H^+ + e- = 1/8 HS^- + 1/2 H2O")
+  kirk("CO2(g) + 8 H^+ + 8 e- = CH4(g) + 2 H2O(l)", 2.87, "1/8 CO2(g) + H^+ + e- = 1/8 CH4(g) + 1/4 H2O")
+  kirk("N2(g) + 8 H^+ + 6 e- = 2 NH4^+", 4.63, "1/6 N2 + 4/3 H^+ + e- = 1/3 NH4^+")
 end
 
 M.checks = C
@@ -1508,6 +1564,7 @@ for _, p in ipairs({
 for _, p in ipairs({
   { "Kaye and Laby (NPL)", "Kaye & Laby 3.9.8 (read)" }, { "Table 3 of the article 'Water chemistry'", "'Water chemistry' Table 3 (read)" },
   { "Taylor and Lopata 1984", "Taylor & Lopata 1984 (abstract read)" },
+  { "Table 4 of the article 'Water chemistry'", "'Water chemistry' Table 4 (read)" }, { "Table 4.2 of The Biogeochemistry", "Submerged Soils Table 4.2 (read)" },
 }) do SHORT[#SHORT + 1] = p end
 local function short_source(s)
   -- issue 13 (s5-pot): the CRC series as read in a reprint or a copy
