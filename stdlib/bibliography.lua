@@ -256,6 +256,11 @@ return {
       short = "Luo and Millero 2007",
       cite = "Luo, Y. and Millero, F. J. (2007). Stability constants for the formation of lead chloride complexes as a function of temperature and ionic strength. Geochim. Cosmochim. Acta 71, 326-334.",
     },
+    -- s5-fes2 (issue 13): the iron sulfides on one calorimetric basis
+    CK88 = {
+      short = "Cemic and Kleppa 1988",
+      cite = "Cemic, L. and Kleppa, O. J. (1988). High temperature calorimetry of sulfide systems III. Standard enthalpies of formation of phases in the systems Fe-Cu-S and Co-S. Phys. Chem. Minerals 16, 172-179 (abstract read at rd.springer.com: troilite -102.59 +- 0.20, pyrite -171.64 +- 0.93 kJ/mol, direct reaction calorimetry at 700-1021 K).",
+    },
     CONVENTION = {
       short = "standard-state convention",
       cite = "Conventions of the conventional ionic standard state (all properties of H+ zero at every T and P; e- = H+ - 1/2 H2(g)).",

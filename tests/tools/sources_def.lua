@@ -82,6 +82,8 @@ M.USES = {
   -- s5-lig (issue 13)
   { id = "HARVEY21", use = "stepwise ammine constants of Ni, Zn, Co(20 C) and Cd at I = 0, 25 C (Smith and Martell, read in its Appendix 16.12), summed to the cumulative log beta of N.lua; log beta4 of Zn(CN)4^2- (CN.lua)." },
   { id = "LM07", use = "log beta_n(T) of PbCl+, PbCl2(aq) and PbCl3-, 15-300 C, I = 0 (equations read in the abstract)." },
+  -- s5-fes2 (issue 13)
+  { id = "CK88", use = "dfH of troilite (FeS) and pyrite (FeS2) by high-temperature direct reaction calorimetry (abstract read); with the adiabatic entropies, the dfG of both." },
 }
 
 local function file_of(s)
