@@ -16,6 +16,11 @@
 -- fluorine calorimetry), greenockite (dfG from its measured solubility) and
 -- jarosite (measured log Ksp); monoclinic pyrrhotite Fe7S8 is derived from
 -- tabulated third-law enthalpies. docs/data/ligands.md lists each check.
+-- Iron sulfides (issue 13, s5-fes2): troilite and pyrite take their dfH from
+-- one calorimetric study (Cemic and Kleppa 1988, direct reaction calorimetry)
+-- and their entropies from adiabatic calorimetry; mackinawite keeps its
+-- measured solubility constant. tests/scripts/test_iron_sulfides.lua asserts
+-- their physical order with the Fe^2+ of Fe.lua.
 
 local NBS = "from memory of [NBS82]"
 local NBS_DERIVED = "derived here from dfG and dfH of " .. NBS
@@ -162,7 +167,7 @@ return {
              "(pyrrhotite) and pyrite. Second source, read: [BWB00] (abstract) fit " ..
              "log K = 2848.779/T - 6.347 to measured solubility at 25-95 C (3.21 at 25 C, 1.39 at 95 C). Its " ..
              "slope (dH = -54.5 kJ/mol) is not used: it is 25 kJ/mol more exothermic than troilite's " ..
-             "calorimetric dissolution enthalpy (-29.9 kJ/mol with these files), which would make the metastable " ..
+             "calorimetric dissolution enthalpy (-27.3 kJ/mol with these files and the [CK88] troilite), which would make the metastable " ..
              "phase the stable one above about 40 C and the only FeS of every map at 100-300 C, contrary to its " ..
              "observed transformation to pyrrhotite and pyrite on heating. The isocoulombic estimate keeps " ..
              "mackinawite above troilite's solubility at every temperature (known differences against the fit, " ..
@@ -182,11 +187,13 @@ return {
       quality = "low",
       note = "Issue 13: monoclinic pyrrhotite (Fe7S8 = Fe0.875S, 4C), the pyrrhotite of low-temperature ores and of sour service above about 100 C; " ..
              "it turns hexagonal near 527 K (the T_range). The same table lists calorimetric values -93.1 and -92.1 (+-3.0); the equilibrium values " ..
-             "carry +-1.5 to +-3.1 each, i.e. +-12 to +-25 kJ/mol for Fe7S8. Its 25 C field lies between troilite and pyrite: with the file's NBS " ..
-             "troilite and pyrite, 7 FeS + S = Fe7S8 at log a(S) = -12.0 and Fe7S8 + 6 S = 7 FeS2 at -11.6; the field widens with temperature " ..
-             "(dS of the first step +32, of the second -308 J/(mol K)), as in the Fe-S phase diagram. A few kJ/mol in troilite (Cemic and Kleppa 1988 " ..
-             "measure its dfH 2.6 kJ/mol below NBS, docs/data-checks.md) moves that edge: the 25 C field is real but its width is not known to better " ..
-             "than a factor of 10 in H2S activity. Measured Cp of Fe0.9S (6.171 R at 298.15 K per Fe0.9S: Gronvold, Stolen, Labban and Westrum 1991, J. Chem. Thermodyn. 23, 261, abstract read) is 8 % above " ..
+             "carry +-1.5 to +-3.1 each, i.e. +-12 to +-25 kJ/mol for Fe7S8. Issue 13 (s5-fes2): with troilite and pyrite on the calorimetry of [CK88], " ..
+             "7 FeS + S = Fe7S8 lies at log a(S) = -8.99 and Fe7S8 + 6 S = 7 FeS2 at -10.21 at 25 C, so troilite turns to pyrite directly (at -10.04) " ..
+             "and Fe7S8 has no 25 C field; it needs 6.0 kJ/mol more stability (dfG -777.4 or below), half its smallest uncertainty, and the most precise " ..
+             "equilibrium value (-96.0 +- 1.5 per Fe0.875S) would give it. On heating the field opens near 107 C and widens (dS of the first step +32, " ..
+             "of the second -308 J/(mol K)), as in the Fe-S phase diagram, where monoclinic pyrrhotite + pyrite is a common assemblage. With the former NBS " ..
+             "troilite and pyrite the 25 C field was 0.44 log units wide. Whether Fe7S8 has a 25 C field is therefore not resolved by the data (its edges are " ..
+             "uncertain by more than a factor of 10 in H2S activity). Measured Cp of Fe0.9S (6.171 R at 298.15 K per Fe0.9S: Gronvold, Stolen, Labban and Westrum 1991, J. Chem. Thermodyn. 23, 261, abstract read) is 8 % above " ..
              "the Kopp-Neumann value per mole of S.",
     },
     {

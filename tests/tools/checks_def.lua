@@ -794,7 +794,7 @@ end
 add({ kind = "logK", reaction = "FeS(s,mackinawite) + 2 H^+ = Fe^2+ + H2S(aq)", T_C = 95, group = "T_other",
       value_fn = function(T) return 2848.779 / T - 6.347 end, source = BWB00, confidence = "medium",
       known = { diff = 1.44, margin = 0.02,
-        why = "the file's isocoulombic estimate (3.5 x 298.15/T, n = 0) against the fit of Benning et al. 2000: the 25 C offset (+0.29, row above) plus a measured slope twice as steep (dH -54.5 against -29.9 kJ/mol for troilite with these files' data). Used as measured, that slope makes mackinawite more stable than troilite above about 40 C and the only iron sulfide of every map from 100 to 300 C, contrary to its observed transformation to pyrrhotite and pyrite on heating; the metastable order is kept until the troilite/Fe2+ pair (docs/data/ligands.md) is resolved" } })
+        why = "the file's isocoulombic estimate (3.5 x 298.15/T, n = 0) against the fit of Benning et al. 2000: the 25 C offset (+0.29, row above) plus a measured slope twice as steep (dH -54.5 against -27.3 kJ/mol for troilite with these files' data). Used as measured, that slope makes mackinawite more stable than troilite above about 40 C and the only iron sulfide of every map from 100 to 300 C, contrary to its observed transformation to pyrrhotite and pyrite on heating; the metastable order is kept. s5-fes2: with the calorimetric troilite (Cemic and Kleppa 1988) its dissolution enthalpy is -27.3 kJ/mol with these files, so the measured mackinawite slope is twice troilite's either way; troilite (log K 2.90 at 25 C) is less soluble than both measured mackinawite constants, as metastability requires" } })
 -- Silver chloride electrode and ammonium ion away from 25 C.
 add({ kind = "E0", reaction = "AgCl(s,chlorargyrite) + e- = Ag(s) + Cl^-", T_C = 0, group = "T_other", tolclass = "BB54_T",
       value = 0.23655, source = "from memory of Bates and Bower 1954 (J. Res. NBS 53, 283)", confidence = "high" })
@@ -927,14 +927,15 @@ do
      { note = "file: NBS 1982 covellite (dfH -53.1); the row tests dfH only" })
   rk("2 Cu(s) + S(s,rhombic) = Cu2S(s,chalcocite)", ck(-80.21, -79.5, -86.2), CK88 .. ": chalcocite -80.21 +- 1.51 kJ/mol; combined here with the file's T dfS (NBS)", "medium",
      { note = "0.12: file: NBS 1982 chalcocite (dfH -79.5); 0.7 kJ/mol, inside the calorimetric +-1.51; the row tests dfH only" })
-  rk("Fe(s) + S(s,rhombic) = FeS(s,troilite)", ck(-102.59, -100.0, -100.4), CK88 .. ": troilite -102.59 +- 0.20 kJ/mol; combined here with the file's T dfS (NBS)", "medium",
-     { known = { diff = -0.454, margin = 0.02,
-       why = "file (Fe solid, S.lua; not changed here): NBS 1982 troilite dfH -100.0 kJ/mol; the direct-reaction calorimetry of Cemic and Kleppa 1988 (read) gives -102.59 +- 0.20, so the file's troilite may be 2.6 kJ/mol too unstable. The Knunyants Chemical Encyclopedia (read, next row) prints dfH -100.5 and dfG -100.9. Reported to the Fe data owner; a change would move the troilite/pyrrhotite/pyrite edges of sour-corrosion maps" } })
+  rk("Fe(s) + S(s,rhombic) = FeS(s,troilite)", ck(-102.59, -102.59, -102.875), CK88 .. ": troilite -102.59 +- 0.20 kJ/mol; combined here with the file's T dfS", "medium",
+     { same = true,
+       note = "s5-fes2 (issue 13): S.lua now takes this dfH (it had NBS 1982, -100.0 kJ/mol, a known difference of -0.454 here); the row checks the copying only" })
   rk("Fe(s) + S(s,rhombic) = FeS(s,troilite)", nbs_logK(-100.9), "Knunyants (ed.), Chemical Encyclopedia (Khimicheskaya Entsiklopediya), article 'iron sulfides' (read at xumuk.ru): alpha-FeS dfH -100.5, dfG -100.9 kJ/mol, S 60.33, Cp 50.58 J/(mol K)", "medium",
-     { note = "file: NBS 1982 troilite (dfG -100.4); 0.5 kJ/mol" })
-  rk("Fe(s) + 2 S(s,rhombic) = FeS2(s,pyrite)", ck(-171.64, -178.2, -166.9), CK88 .. ": pyrite -171.64 +- 0.93 kJ/mol; combined here with the file's T dfS (NBS)", "medium",
-     { known = { diff = 1.149, margin = 0.02,
-       why = "file (Fe solid, S.lua; not changed here): NBS 1982 pyrite dfH -178.2 kJ/mol; calorimetry gives -171.64 +- 0.93 (Cemic and Kleppa 1988, read), and Robie and Hemingway 1995 adopt about -171.5 (recalled; S.lua's own note): the file's pyrite is about 6.6 kJ/mol (1.15 log units) too stable, which widens the pyrite field of Fe-S maps. Reported to the Fe data owner" } })
+     { known = { diff = 0.346, margin = 0.02,
+       why = "s5-fes2 (issue 13): file: dfH of Cemic and Kleppa 1988 (-102.59 +- 0.20 kJ/mol, direct reaction calorimetry, read) with the adiabatic entropy (dfG -102.875). The encyclopedia's dfH -100.5 (no source printed) lies with NBS 1982 (-100.0) and the older combustion and equilibrium work the 1988 study re-measured; its entropy 60.33 agrees with the file's 60.29, so the 2.0 kJ/mol is the enthalpy. The calorimetric value is kept: with the library's Fe^2+ (Shock et al. 1997) the NBS-like troilite would be more soluble than the measured mackinawite of Benning et al. 2000 (log K 3.33 against 3.21), contrary to mackinawite's metastability; the calorimetric one gives 2.90 (tests/scripts/test_iron_sulfides.lua)" } })
+  rk("Fe(s) + 2 S(s,rhombic) = FeS2(s,pyrite)", ck(-171.64, -171.64, -160.174), CK88 .. ": pyrite -171.64 +- 0.93 kJ/mol; combined here with the file's T dfS", "medium",
+     { same = true,
+       note = "s5-fes2 (issue 13): S.lua now takes this dfH (it had NBS 1982, -178.2 kJ/mol, a known difference of +1.149 here); the row checks the copying only" })
   local dG_S2 = 128.60 - T * (228.167 - 2 * 32.054) / 1000
   rk("Mo(s) + 2 S(s,rhombic) = MoS2(s,molybdenite)", nbs_logK(-390.100 + 0.1767 * T + dG_S2),
      "Bartovska and Cerny 1987, Collect. Czech. Chem. Commun. 52, 678 (abstract read): dG = -390100 + 176.7 T J/mol for Mo + S2(g) = MoS2 (well crystalline), from the Mo-MoS2-H2S-H2 equilibrium at 569-1277 K, extrapolated here to 298.15 K; S2(g) dfH 128.60 kJ/mol, S 228.167 J/(mol K) from memory of CODATA 1989", "low",
@@ -1260,6 +1261,30 @@ do
   kirk("N2(g) + 8 H^+ + 6 e- = 2 NH4^+", 4.63, "1/6 N2 + 4/3 H^+ + e- = 1/3 NH4^+")
 end
 
+-- s5-fes2 (issue 13): the iron sulfides on one calorimetric basis.  Troilite
+-- and pyrite now take their dfH from Cemic and Kleppa 1988 (the s5-solids rows
+-- above became same-source); these rows check them against the other
+-- published tables.  The physical order of the iron sulfides (mackinawite
+-- metastable, pyrite stable at 25 C, pyrrhotite appearing on heating) is
+-- asserted in tests/scripts/test_iron_sulfides.lua and test_solids13.lua.
+do
+  rk("Fe(s) + 2 S(s,rhombic) = FeS2(s,pyrite)", nbs_logK(-160.2),
+     "from memory of Robie and Hemingway 1995 (USGS Bull. 2131): pyrite dfG about -160.2, dfH about -171.5 kJ/mol (after the sulfidation equilibria of Toulmin and Barton)", "medium",
+     { note = "file: Cemic and Kleppa 1988 dfH -171.64 +- 0.93 (read) with the NBS (adiabatic) entropy 52.93: dfG -160.174; the evaluation and the calorimetry agree within 0.1 kJ/mol" })
+  rk("Fe(s) + 2 S(s,rhombic) = FeS2(s,pyrite)", nbs_logK(-166.9), "from memory of the NBS 1982 tables (Wagman et al.): pyrite dfG -166.9, dfH -178.2 kJ/mol, S 52.93", "medium",
+     { known = { diff = -1.178, margin = 0.02,
+       why = "file: Cemic and Kleppa 1988 (dfH -171.64 +- 0.93, direct reaction calorimetry at 700-1021 K, read), which Robie and Hemingway 1995 (about -171.5, recalled; row above) support. NBS 1982 put pyrite 6.6 kJ/mol lower in enthalpy with the same entropy; the NBS value made the pyrite field of Fe-S maps too wide by 1.15 log units in sulfur activity. NBS was the file's source until issue 13 (s5-fes2)" } })
+  -- Fe7S8: the record averages the five third-law (equilibrium) values of
+  -- IVTANTHERMO table Fe.37; the same table lists two calorimetric values,
+  -- independent measurements, of which the direct sulfidation of FeS is used
+  -- here with the file's own T dfS (the row tests dfH).
+  local function ck(dfH, H_file, G_file) return nbs_logK(dfH - (H_file - G_file)) end
+  rk("7 Fe(s) + 8 S(s,rhombic) = Fe7S8(s,pyrrhotite)", ck(8 * -93.1, -760.0, -771.45),
+     "IVTANTHERMO table Fe.37 (Gurvich et al., read at chem.msu.ru): calorimetric dfH of Fe0.875S -93.1 +- 3.0 kJ/mol from the sulfidation FeS + y S = FeS(1+y) (14 runs, dH(433 K) = -60.2 (y - 0.025) kJ/mol), times 8; combined here with the file's T dfS", "low",
+     { known = { diff = 2.663, margin = 0.02,
+       why = "s5-fes2 (issue 13): file: the mean of the five third-law values of the same table (-95.0 per Fe0.875S; -96.0 +- 1.5 to -94.1 +- 2.5), i.e. 1.9 kJ/mol per Fe0.875S (15 kJ/mol per Fe7S8) below this calorimetric value, inside the +-3.0 per Fe0.875S (+-24 per Fe7S8) of the calorimetry. The calorimetric value rests on the table's own troilite (not shown on the page read) and on a reaction measured at 433 K, above troilite's 411 K transition; the second calorimetric value (-92.1 +- 3.0, from SO2 + FeS) lies further still. Either way Fe7S8 is no more stable than the record makes it, and on the calorimetric basis of troilite and pyrite its 25 C field is closed (docs/data/ligands.md)" } })
+end
+
 M.checks = C
 
 M.GROUPS = {
@@ -1565,6 +1590,10 @@ for _, p in ipairs({
   { "Kaye and Laby (NPL)", "Kaye & Laby 3.9.8 (read)" }, { "Table 3 of the article 'Water chemistry'", "'Water chemistry' Table 3 (read)" },
   { "Taylor and Lopata 1984", "Taylor & Lopata 1984 (abstract read)" },
   { "Table 4 of the article 'Water chemistry'", "'Water chemistry' Table 4 (read)" }, { "Table 4.2 of The Biogeochemistry", "Submerged Soils Table 4.2 (read)" },
+}) do SHORT[#SHORT + 1] = p end
+-- s5-fes2: short labels of the sources of its rows
+for _, p in ipairs({
+  { "IVTANTHERMO table Fe.37", "IVTANTHERMO Fe.37 (read)" },
 }) do SHORT[#SHORT + 1] = p end
 local function short_source(s)
   -- issue 13 (s5-pot): the CRC series as read in a reprint or a copy
