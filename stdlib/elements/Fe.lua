@@ -13,7 +13,10 @@
 --   Mixed pairings that remain, each with the solubility it touches checked in
 --   docs/data-checks.md: NBS magnetite and hematite (calorimetric) with these ions
 --   (E0 of Fe2+/Fe from magnetite solubility; hematite solubility at 200 C);
---   NBS troilite and pyrite in S.lua (no measured solubility read; S.lua notes).
+--   troilite and pyrite in S.lua, on the direct reaction calorimetry of Cemic and
+--   Kleppa 1988 since issue 13 (no measured solubility read; troilite is less
+--   soluble than both measured mackinawite constants with this Fe^2+, as
+--   tests/scripts/test_iron_sulfides.lua asserts; S.lua notes).
 --   * Hydrolysis species are defined by Baes and Mesmer 1976 constants (I = 0, 25 C),
 --     except Fe(OH)4^-, which is defined by the measured hematite solubility reaction
 --     (Diakonov et al. 1999 at 25 C, Sergeeva et al. 1999 at 200 C; abstracts read).

@@ -160,6 +160,7 @@ return {
     {
       formula = "FeS(s,mackinawite)", model = "logk",
       reaction = "FeS(s,mackinawite) + 2 H^+ = Fe^2+ + H2S(aq)", logK = 3.5, estimate = "isocoulombic",
+      uncertainty = { logK = 0.25 },  -- +-: from memory of Rickard 2006
       source = "from memory of [RICKARD06], log K*sp = 3.5 +- 0.25 " ..
                "for FeS(m) + 2 H+ = Fe2+ + H2S(aq)",
       quality = "medium",
@@ -178,6 +179,7 @@ return {
     {
       formula = "Fe7S8(s,pyrrhotite)", model = "cp",
       G = -771.45, H = -760.0, S = 485.8,
+      uncertainty = { H = 12 },  -- +-: the smallest of the five third-law values' +- (1.5 per Fe0.875S, TSIV table Fe.37, read) times 8
       estimate = { Cp = "kopp", from = { ["FeS(s,troilite)"] = 7 } },
       T_range = { 273.15, 527 },
       source = "dfH: derived here from the third-law dfH of Fe0.875S, -96.0, -94.1, -94.9, -94.8 and -95.2 kJ/mol from five equilibrium studies " ..
@@ -199,7 +201,7 @@ return {
     {
       formula = "FeS2(s,pyrite)", model = "cp",
       G = -160.174, H = -171.64, S = 52.93,
-      uncertainty = { H = 0.93 },  -- +-: [CK88] (read)
+      uncertainty = { H = 0.93, S = 0.2 },  -- +-: H [CK88] (read); S the IVTANTHERMO pyrite page (read)
       cp = { a = 74.810, b = 5.523e-3, c = -12.761e5 }, V = 23.94,
       source = "dfH: [CK88] (read: -171.64 +- 0.93 kJ/mol, high-temperature direct reaction calorimetry); S: " .. NBS ..
                " (52.93, the adiabatic calorimetry of Gronvold and Westrum 1962, +-0.2 J/(mol K), as [TSIV] states on its pyrite page, read); " ..
