@@ -256,6 +256,11 @@ return {
       short = "Luo and Millero 2007",
       cite = "Luo, Y. and Millero, F. J. (2007). Stability constants for the formation of lead chloride complexes as a function of temperature and ionic strength. Geochim. Cosmochim. Acta 71, 326-334.",
     },
+    -- s5-mg (issues 12, 13): Mg hydrolysis by measurement; cerussite evidence
+    PW97 = {
+      short = "Palmer and Wesolowski 1997",
+      cite = "Palmer, D. A. and Wesolowski, D. J. (1997). Potentiometric measurements of the first hydrolysis quotient of magnesium(II) to 250 C and 5 molal ionic strength (NaCl). J. Solution Chem. 26(2), 217-232 (abstract read: acnpsearch.tweb-dev.unibo.it, ISI record).",
+    },
     CONVENTION = {
       short = "standard-state convention",
       cite = "Conventions of the conventional ionic standard state (all properties of H+ zero at every T and P; e- = H+ - 1/2 H2(g)).",
