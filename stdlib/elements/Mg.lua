@@ -47,7 +47,7 @@ return {
       uncertainty = { logK = 0.05 },  -- +-: [PW97] (abstract read); dH +- 1.2 kJ/mol
       source = "[PW97] (abstract read): measured potentiometrically at 1-250 C, extrapolated to I = 0; log K -11.68 +- 0.05, dH 70.1 +- 1.2 kJ/mol, dS 11 +- 4 J/(mol K), dCp 0 at 25 C (log K linear in 1/T over 1-250 C), exactly as printed",
       quality = "high",
-      note = "s5-mg (issues 12, 13): measured temperature function replaces [BM76] -11.44 (recalled) with the dH of [N90] 66.74 kJ/mol (recalled): -0.24 at 25 C, -0.12 at 100 C, within 0.03 at 200-250 C. 250-300 C is the paper's own linear fit carried 50 K beyond its range (its density model to 550 C is not in the abstract). Only 4 % of the Mg could be hydrolysed before brucite precipitated: MgOH^+ is minor wherever brucite is stable; at pH 10 and 25 C it holds 2.0 % of Mg(II) (3.5 % with the former constant).",
+      note = "s5-mg (issues 12, 13): measured temperature function replaces [BM76] -11.44 (recalled) with the dH of [N90] 66.74 kJ/mol (recalled): -0.24 at 25 C, -0.12 at 100 C, within 0.03 at 200-250 C. 250-300 C is the paper's own linear fit carried 50 K beyond its range (its density model to 550 C is not in the abstract). Only 4 % of the Mg could be hydrolysed before brucite precipitated: MgOH^+ is minor wherever brucite is stable; at pH 10 and 25 C it holds 2.0 % of 1 umol/kg Mg(II) (3.4 % with the former constant; Davies, phlox).",
     },
     {
       formula = "Mg4(OH)4^4+", model = "logk",
