@@ -257,6 +257,10 @@ return {
       cite = "Luo, Y. and Millero, F. J. (2007). Stability constants for the formation of lead chloride complexes as a function of temperature and ionic strength. Geochim. Cosmochim. Acta 71, 326-334.",
     },
     -- s5-mg (issues 12, 13): Mg hydrolysis by measurement; cerussite evidence
+    BS82 = {
+      short = "Bilinski and Schindler 1982",
+      cite = "Bilinski, H. and Schindler, P. (1982). Solubility and equilibrium constants of lead in carbonate solutions (25 C, I = 0.3 mol dm-3). Geochim. Cosmochim. Acta 46, 921-928 (abstract read: td.alljournals.com.cn).",
+    },
     PW97 = {
       short = "Palmer and Wesolowski 1997",
       cite = "Palmer, D. A. and Wesolowski, D. J. (1997). Potentiometric measurements of the first hydrolysis quotient of magnesium(II) to 250 C and 5 molal ionic strength (NaCl). J. Solution Chem. 26(2), 217-232 (abstract read: acnpsearch.tweb-dev.unibo.it, ISI record).",

@@ -729,9 +729,9 @@ rk("Cu^2+ + SO4^2- = CuSO4(aq)", 2.35, POWELL07 .. ": log beta 2.35 +- 0.05", "m
 rk("Zn^2+ + SO4^2- = ZnSO4(aq)", 2.34, POWELL13 .. ": log beta 2.34 +- 0.05", "medium", { note = "file: compiled 2.37 (recalled)" })
 rk("Cd^2+ + SO4^2- = CdSO4(aq)", 2.37, POWELL11 .. ": log beta 2.37 +- 0.05", "medium", { note = "file: compiled 2.46 (recalled); the review's abstract (read) calls the Cd-sulfato system well characterised at low ionic strength" })
 rk("Pb^2+ + SO4^2- = PbSO4(aq)", 2.82, POWELL09 .. ": log beta 2.82 +- 0.05", "medium", { note = "file: compiled 2.75 (recalled)" })
-local ZNPB_CO3_WHY = "file: compiled constants (ZnCO3(aq) 5.3, PbCO3(aq) 7.24, recalled), the values of the older aqueous data sets; the IUPAC reviews (recalled) select lower ones from a re-evaluation with specific ion interaction theory, and their abstracts (read) stress that the Zn2+ + H+ + CO3 2- system needs better measurements. Both recalled; the file keeps one compilation for the carbonate set until the reviews' tables can be read. With the review's values ZnCO3(aq) would dominate zinc only above pH 8.4, as the Zn abstract says (read)"
+local ZNPB_CO3_WHY = "file: compiled constant (ZnCO3(aq) 5.3, recalled; PbCO3(aq) had 7.24 until issue 13 moved it to a measurement), the values of the older aqueous data sets; the IUPAC reviews (recalled) select lower ones from a re-evaluation with specific ion interaction theory, and their abstracts (read) stress that the Zn2+ + H+ + CO3 2- system needs better measurements. The review is recalled; the file keeps the compiled ZnCO3(aq) until its table can be read (no zinc carbonate measurement was read). With the review's values ZnCO3(aq) would dominate zinc only above pH 8.4, as the Zn abstract says (read)"
 rk("Zn^2+ + CO3^2- = ZnCO3(aq)", 4.76, POWELL13 .. ": log beta 4.76 +- 0.03", "low", { known = { diff = 0.54, margin = 0.02, why = ZNPB_CO3_WHY } })
-rk("Pb^2+ + CO3^2- = PbCO3(aq)", 6.45, POWELL09 .. ": log beta 6.45 +- 0.05", "low", { known = { diff = 0.79, margin = 0.02, why = ZNPB_CO3_WHY } })
+rk("Pb^2+ + CO3^2- = PbCO3(aq)", 6.45, POWELL09 .. ": log beta 6.45 +- 0.05", "low", { note = "file (issue 13): Bilinski and Schindler 1982 (read, I = 0.3) taken to I = 0 with the Davies equation, 6.47; was the compiled 7.24 (0.79 above this review)" })
 -- sulfate ion pairs: NBS 1982 dfG of the un-ionized species, read as the
 -- reaction Gibbs energy printed on you-iggy.com's reaction pages (which cite
 -- the NBS tables); independent of Nordstrom et al. 1990 and the compiled set
@@ -1286,12 +1286,11 @@ do
   rk("PbCO3(s,cerussite) + 2 H^+ = Pb^2+ + CO2(g) + H2O(l)", 5.20 + lg(2) - 2 * lg(1), BS82 .. ": log [Pb2+] pCO2 [H+]^-2 = 5.20 at I = 0.3; + log g(Pb2+) - 2 log g(H+) = 4.93 at I = 0", "low",
      { known = { diff = 0.394, margin = 0.02,
        why = "file: NBS 1982 cerussite on the NBS Pb^2+ (log Ksp -12.80). The acid-side solubility measured here, where Pb^2+ carries the dissolved lead, implies log Ksp near -13.2 with the file's carbonate constants (derived here), as Kaye and Laby print (-13.14) and as the Taylor and Lopata 1984 Gibbs energy gives (-13.24; rows in the Kaye and Laby block). Every value read lies on the less soluble side, by 0.34 to 0.96. Kept: no critical source could be read, and the two direct solubility studies read (this one and Xiong 2015, next row) differ by 0.5 between themselves (docs/data/ligands.md)" } })
+  -- the file took both carbonato constants from this paper (issue 13): same-source rows
   rk("Pb^2+ + CO3^2- = PbCO3(aq)", 5.40 - lg(2) - lg(2), BS82 .. ": log beta1 = 5.40 at I = 0.3; - log g(Pb2+) - log g(CO3 2-) = 6.47 at I = 0", "low",
-     { known = { diff = 0.766, margin = 0.02,
-       why = "file: compiled 7.24 (recalled). Taken to I = 0 this measurement agrees with the IUPAC selection of Powell et al. 2009 (6.45 +- 0.05, recalled row in section 4g); both say the file's PbCO3(aq) is 0.8 too strong, which raises the dissolved lead over cerussite near pH 8 (the larger effect in examples/lead_water_main.lua, reported by s5-mg, not changed: a complex record outside this task)" } })
+     { same = true, note = "C.lua's PbCO3(aq) (was the compiled 7.24, recalled, 0.8 above this measurement and the IUPAC selection of Powell et al. 2009, 6.45, recalled row in section 4g)" })
   rk("Pb^2+ + 2 CO3^2- = Pb(CO3)2^2-", 8.86 + lg(2) - lg(2) - 2 * lg(2), BS82 .. ": log beta2 = 8.86 at I = 0.3; + log g(Pb(CO3)2 2-) - log g(Pb2+) - 2 log g(CO3 2-) = 9.93 at I = 0", "low",
-     { known = { diff = 0.709, margin = 0.02,
-       why = "file: compiled 10.64 (recalled); the measurement at I = 0.3 with the Davies correction gives 9.93. Like PbCO3(aq), the file's bis-carbonato constant is stronger than this measurement; not changed here (complex records)" } })
+     { same = true, note = "C.lua's Pb(CO3)2^2- (was the compiled 10.64, recalled)" })
   rk("PbCO3(s,cerussite) = Pb^2+ + CO3^2-", math.log(7.4e-14, 10), "Brown, LeMay et al., Chemistry: The Central Science, 14th ed. in SI units, chapter 17, exercise 98 (read at vaia-test.com): 'the Ksp for PbCO3 is 7.4 x 10^-14' (25 C); log Ksp -13.13 (derived here)", "low",
      { known = { diff = 0.327, margin = 0.02,
        why = "file: NBS 1982 cerussite with the NBS Pb^2+ (-12.80). A textbook value (source not given on the page), the same number as the recalled 'solubility literature' row and within 0.01 of Kaye and Laby (-13.14, read). Kept (see the Bilinski and Schindler row above and docs/data/ligands.md)" } })
