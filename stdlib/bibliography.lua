@@ -261,6 +261,15 @@ return {
       short = "Cemic and Kleppa 1988",
       cite = "Cemic, L. and Kleppa, O. J. (1988). High temperature calorimetry of sulfide systems III. Standard enthalpies of formation of phases in the systems Fe-Cu-S and Co-S. Phys. Chem. Minerals 16, 172-179 (abstract read at rd.springer.com: troilite -102.59 +- 0.20, pyrite -171.64 +- 0.93 kJ/mol, direct reaction calorimetry at 700-1021 K).",
     },
+    -- s5-mg (issues 12, 13): Mg hydrolysis by measurement; cerussite evidence
+    BS82 = {
+      short = "Bilinski and Schindler 1982",
+      cite = "Bilinski, H. and Schindler, P. (1982). Solubility and equilibrium constants of lead in carbonate solutions (25 C, I = 0.3 mol dm-3). Geochim. Cosmochim. Acta 46, 921-928 (abstract read: td.alljournals.com.cn).",
+    },
+    PW97 = {
+      short = "Palmer and Wesolowski 1997",
+      cite = "Palmer, D. A. and Wesolowski, D. J. (1997). Potentiometric measurements of the first hydrolysis quotient of magnesium(II) to 250 C and 5 molal ionic strength (NaCl). J. Solution Chem. 26(2), 217-232 (abstract read: acnpsearch.tweb-dev.unibo.it, ISI record).",
+    },
     CONVENTION = {
       short = "standard-state convention",
       cite = "Conventions of the conventional ionic standard state (all properties of H+ zero at every T and P; e- = H+ - 1/2 H2(g)).",

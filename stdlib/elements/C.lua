@@ -33,6 +33,8 @@ local N90 = "from memory of [N90]"
 local SIEBERT = "from memory of [SH77] as adopted by [N90]"
 local COMPILED = "from memory of [COMPILED]"
 local SM = "from memory of [SM] (I = 0, 25 C)"
+-- the lead carbonato complexes as one set from one measurement (issue 13)
+local PBCO3 = "[BS82] (abstract read: constants at I = 0.3, NaClO4, 25 C), taken to I = 0 with the Davies equation (derived here)"
 local CAL = { energy = "cal", entropy = "cal" }
 local KCAL = { energy = "kcal" }
 
@@ -139,10 +141,12 @@ return {
       source = SM, quality = "medium", note = "dH not recalled" },
     { formula = "Cu(CO3)2^2-", model = "logk", reaction = "Cu^2+ + 2 CO3^2- = Cu(CO3)2^2-", logK = 9.83, estimate = "isocoulombic",
       source = SM, quality = "medium", note = "dH not recalled" },
-    { formula = "PbCO3(aq)", model = "logk", reaction = "Pb^2+ + CO3^2- = PbCO3(aq)", logK = 7.24, estimate = "isocoulombic",
-      source = COMPILED, quality = "low", note = "dH not recalled" },
-    { formula = "Pb(CO3)2^2-", model = "logk", reaction = "Pb^2+ + 2 CO3^2- = Pb(CO3)2^2-", logK = 10.64, estimate = "isocoulombic",
-      source = COMPILED, quality = "low", note = "dH not recalled" },
+    { formula = "PbCO3(aq)", model = "logk", reaction = "Pb^2+ + CO3^2- = PbCO3(aq)", logK = 6.47, estimate = "isocoulombic",
+      source = PBCO3, quality = "low",
+      note = "log beta1 5.40 at I = 0.3; Davies log g(Pb2+) = log g(CO3 2-) = -0.537 (A 0.509), so 5.40 + 2 x 0.537 = 6.47 at I = 0 (derived here). Agrees with the IUPAC selection (Powell et al. 2009, 6.45 +- 0.05, recalled). Was 7.24 (compiled I = 0 constant of the older data sets, recalled), 0.8 stronger than both. dH not known" },
+    { formula = "Pb(CO3)2^2-", model = "logk", reaction = "Pb^2+ + 2 CO3^2- = Pb(CO3)2^2-", logK = 9.93, estimate = "isocoulombic",
+      source = PBCO3, quality = "low",
+      note = "log beta2 8.86 at I = 0.3; + log g(Pb(CO3)2 2-) - log g(Pb2+) - 2 log g(CO3 2-) = 2 x 0.537 (Davies, A 0.509): 9.93 at I = 0 (derived here). Was 10.64 (compiled, recalled). dH not known" },
 
     -- ---------------------------------------------------------------- carbonate minerals
     { formula = "CaCO3(s,calcite)", model = "logk", reaction = "CaCO3(s,calcite) = Ca^2+ + CO3^2-",

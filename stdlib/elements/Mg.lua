@@ -6,12 +6,14 @@
 -- SH88 row, whose dfG is 1.4 kJ/mol less negative than CODATA; brucite solubility and
 -- epsomite were 0.16-0.24 log units off the measured values). CODATA Mg2+ with NBS brucite
 -- reproduces the measured brucite solubility (log Ksp -11.15); see docs/data/other-metals.md.
+-- Hydrolysis: MgOH^+ from the measurement of Palmer and Wesolowski 1997 (log K, dH and
+-- dCp 0 to 250 C, abstract read); Mg4(OH)4^4+ from Baes and Mesmer 1976 (no other source),
+-- isocoulombic in temperature.
 local NBS = "from memory of [NBS82]"
 local CODATA = "from memory of [CODATA89]"
 local RH95 = "from memory of [RH95]"
 local SH88 = "from memory of [SH88] (ion tables, table no. not recalled), as in phlox's reference hkf/hkf_parameters.csv (high confidence, passes the Cp/V check)"
 local BM76 = "from memory of [BM76] (I = 0, 25 C)"
-local N90 = "from memory of [N90]"
 
 return {
   element = "Mg",
@@ -41,16 +43,18 @@ return {
     {
       formula = "MgOH^+", model = "logk",
       reaction = "Mg^2+ + H2O(l) = MgOH^+ + H^+",
-      logK = -11.44, dH = 66.74,
-      source = "logK: " .. BM76 .. "; dH: " .. N90 .. " (15.952 kcal/mol, with the same log K)",
-      quality = "medium",
+      logK = -11.68, dH = 70.1, dCp = 0,
+      uncertainty = { logK = 0.05 },  -- +-: [PW97] (abstract read); dH +- 1.2 kJ/mol
+      source = "[PW97] (abstract read): measured potentiometrically at 1-250 C, extrapolated to I = 0; log K -11.68 +- 0.05, dH 70.1 +- 1.2 kJ/mol, dS 11 +- 4 J/(mol K), dCp 0 at 25 C (log K linear in 1/T over 1-250 C), exactly as printed",
+      quality = "high",
+      note = "s5-mg (issues 12, 13): measured temperature function replaces [BM76] -11.44 (recalled) with the dH of [N90] 66.74 kJ/mol (recalled): -0.24 at 25 C, -0.12 at 100 C, within 0.03 at 200-250 C. 250-300 C is the paper's own linear fit carried 50 K beyond its range (its density model to 550 C is not in the abstract). Only 4 % of the Mg could be hydrolysed before brucite precipitated: MgOH^+ is minor wherever brucite is stable; at pH 10 and 25 C it holds 2.0 % of 1 umol/kg Mg(II) (3.4 % with the former constant; Davies, phlox).",
     },
     {
       formula = "Mg4(OH)4^4+", model = "logk",
       reaction = "4 Mg^2+ + 4 H2O(l) = Mg4(OH)4^4+ + 4 H^+",
       logK = -39.71, estimate = "isocoulombic",
       source = BM76, quality = "low",
-      note = "significant only in concentrated Mg solutions close to brucite saturation.",
+      note = "significant only in concentrated Mg solutions close to brucite saturation. The only Mg species kept from [BM76]: no second source and no measured temperature data; its temperature basis is the isocoulombic estimate (one term, docs/thermo.md). [PW97] measured MgOH^+ alone (the first 4 % of hydrolysis, dilute Mg), so the tetramer constant, which rests on concentrated Mg solutions, is not tied to the MgOH^+ constant it now sits beside (reasoning here).",
     },
     {
       formula = "MgO(s,periclase)", model = "cp",

@@ -82,6 +82,8 @@ M.USES = {
   -- s5-lig (issue 13)
   { id = "HARVEY21", use = "stepwise ammine constants of Ni, Zn, Co(20 C) and Cd at I = 0, 25 C (Smith and Martell, read in its Appendix 16.12), summed to the cumulative log beta of N.lua; log beta4 of Zn(CN)4^2- (CN.lua)." },
   { id = "LM07", use = "log beta_n(T) of PbCl+, PbCl2(aq) and PbCl3-, 15-300 C, I = 0 (equations read in the abstract)." },
+  { id = "BS82", use = "log beta1 and log beta2 of the lead carbonato complexes PbCO3(aq) and Pb(CO3)2^2- at 25 C and I = 0.3 (NaClO4), taken to I = 0 with the Davies equation (abstract read)." },
+  { id = "PW97", use = "log K, dH and dCp (0) of Mg^2+ + H2O = MgOH^+ + H^+ at I = 0, measured 1-250 C (abstract read)." },
   -- s5-fes2 (issue 13)
   { id = "CK88", use = "dfH of troilite (FeS) and pyrite (FeS2) by high-temperature direct reaction calorimetry (abstract read); with the adiabatic entropies, the dfG of both." },
 }
