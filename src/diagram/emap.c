@@ -382,6 +382,22 @@ int px_emap_domain(const px_formula *f, int z)
     return PX_DIAGRAM_PASSIVATION;
 }
 
+/* The db indices of the candidates c[0..n) that no field of map shows: a
+ * field's id is the candidate's db index, or (by_index) its index in c. */
+static int never_shown(const px_allocator *a, const cand *c, size_t n, const px_diagram_map *map, int by_index,
+                       long **out, size_t *nout)
+{
+    *out = px_calloc(a, n ? n : 1, sizeof **out);
+    if (!*out) return PX_ENOMEM;
+    for (size_t i = 0; i < n; i++) {
+        long want = by_index ? (long)i : c[i].db;
+        int shown = 0;
+        for (size_t f = 0; f < map->nfield && !shown; f++) shown = map->field[f].id == want;
+        if (!shown) (*out)[(*nout)++] = c[i].db;
+    }
+    return PX_OK;
+}
+
 /* Join the pieces of each species (same group) into outlines, and classify
  * the fields into corrosion domains (px_emap_domain). */
 static int join_and_classify(px_emap *m, const px_db *db, int zM)
@@ -623,29 +639,11 @@ int px_emap_build(px_thermo_ws *ws, const px_db *db, const char *element,
         reaction_text(&c, px_db_get(db, (size_t)db_->id_a), px_db_get(db, (size_t)db_->id_b), zM,
                       refM->sp, lig ? lig->sp : NULL, m->bnd[b].reaction, sizeof m->bnd[b].reaction);
     }
-    /* candidates never shown */
-    m->absent = px_calloc(o->alloc, ncm, sizeof *m->absent);
-    if (!m->absent) {
-        st = PX_ENOMEM;
-        goto done;
-    }
-    for (size_t i = 0; i < ncm; i++) {
-        int shown = 0;
-        for (size_t f = 0; f < m->map->nfield && !shown; f++) shown = m->info[f].species == cm[i].db;
-        if (!shown) m->absent[m->n_absent++] = cm[i].db;
-    }
-    if (zL) { /* the ligand's candidates never shown in its own map */
-        m->ligand_absent = px_calloc(o->alloc, ncl, sizeof *m->ligand_absent);
-        if (!m->ligand_absent) {
-            st = PX_ENOMEM;
-            goto done;
-        }
-        for (size_t i = 0; i < ncl; i++) {
-            int shown = 0;
-            for (size_t f = 0; f < m->ligand_map->nfield && !shown; f++) shown = m->ligand_species[f] == cl[i].db;
-            if (!shown) m->ligand_absent[m->n_ligand_absent++] = cl[i].db;
-        }
-    }
+    /* candidates never shown: the element's (its fields carry db indices)
+     * and the ligand's in its own map (its fields carry indices into cl) */
+    st = never_shown(o->alloc, cm, ncm, m->map, 0, &m->absent, &m->n_absent);
+    if (st == PX_OK && zL) st = never_shown(o->alloc, cl, ncl, m->ligand_map, 1, &m->ligand_absent, &m->n_ligand_absent);
+    if (st != PX_OK) goto done;
     water_lines(ws, db, m, o);
     st = join_and_classify(m, db, zM);
     if (st != PX_OK) px_fail(msg, msglen, st, "map of %s: joining fields: %s", element, px_strerror(st));
